@@ -1,0 +1,4 @@
+export * from './users';
+export * from './restorations';
+export * from './memberships';
+export * from './dev-mails';

@@ -1,0 +1,19 @@
+import { sql } from 'drizzle-orm';
+import { Router } from 'express';
+import type { Health } from '../../../shared/schemas/health';
+import type { AppDeps } from '../../app-deps';
+
+/** GET /api/health probes each service for real; 503 when any is down, so a load balancer can tell. */
+export function healthRoutes(deps: AppDeps): Router {
+  const router = Router();
+  router.get('/health', async (_req, res) => {
+    const [database, storage, mail] = await Promise.all([
+      deps.db.execute(sql`select 1`).then(() => true, () => false),
+      deps.storage.probe(),
+      deps.mailer.probe(),
+    ]);
+    const body: Health = { ok: database && storage && mail, database, storage, mail };
+    res.status(body.ok ? 200 : 503).json(body);
+  });
+  return router;
+}

@@ -1,0 +1,89 @@
+import http from 'node:http';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { pino } from 'pino';
+import { createApp } from './app';
+import { buildClientIfStale } from './client-serving/build-if-stale';
+import { serveBuiltClient, serveViteDev } from './client-serving/serve-client';
+import { connectDatabase } from './db/client';
+import { applyMigrations } from './db/migrate';
+import { demoPeople, DEMO_PASSWORD } from './db/seed/demo-scenario';
+import { seedDemo } from './db/seed/seed-demo';
+import { EnvError, isDemo, parseEnv, publicOrigin } from './env';
+import { LocalServiceError } from './local-services/run-command';
+import { createMailer } from './mail';
+import { resolveDatabase, resolveMail, resolveStorage, type Stop } from './start/services';
+import { createStorage } from './storage';
+
+process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const dev = process.argv.includes('--dev');
+const stops: Stop[] = [];
+
+async function main() {
+  const env = parseEnv();
+  const logger = pino({ level: env.LOG_LEVEL });
+  const onSignal = () => void shutdown(0);
+  process.once('SIGINT', onSignal);
+  process.once('SIGTERM', onSignal);
+
+  const databaseUrl = await resolveDatabase(env, root, stops);
+  await applyMigrations(databaseUrl);
+  const handle = connectDatabase(databaseUrl);
+  stops.push({ name: 'database pool', stop: () => handle.pool.end() });
+  const demo = isDemo(env);
+  if (demo) await seedDemo(handle.db);
+  const storage = createStorage(await resolveStorage(env, root, stops));
+  const mailer = createMailer(await resolveMail(env, handle, stops), env.MAIL_FROM);
+
+  const server = http.createServer();
+  const origin = publicOrigin(env, env.PORT);
+  const app = createApp(
+    { db: handle.db, storage, mailer, logger, config: { publicOrigin: origin, demo, devMail: env.NODE_ENV !== 'production' } },
+    { trustProxy: env.TRUST_PROXY, relaxedCsp: dev },
+  );
+  if (dev) stops.unshift({ name: 'Vite', stop: await serveViteDev(app, server, root) });
+  else serveBuiltClient(app, await buildClientIfStale(root));
+  server.on('request', app);
+  await new Promise<void>((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(env.PORT, resolve);
+  });
+  stops.unshift({ name: 'web server', stop: () => new Promise((r) => server.close(() => r())) });
+  server.closeIdleConnections?.();
+  printWelcome(origin, demo);
+}
+
+function printWelcome(origin: string, demo: boolean) {
+  console.log(`\nGridleak is running at ${origin}${dev ? ' (development, hot reload)' : ''}`);
+  if (demo) {
+    console.log(`Demo accounts (password "${DEMO_PASSWORD}"):`);
+    for (const [role, p] of Object.entries(demoPeople)) console.log(`  ${role.padEnd(10)} ${p.name.padEnd(18)} ${p.email}`);
+  }
+  console.log('Press Ctrl-C to stop everything.\n');
+}
+
+let stopping = false;
+async function shutdown(code: number) {
+  if (stopping) return;
+  stopping = true;
+  for (const { name, stop } of stops) {
+    try {
+      await stop();
+    } catch (err) {
+      console.error(`Stopping ${name}: ${(err as Error).message}`);
+    }
+  }
+  process.exit(code);
+}
+
+main().catch(async (err: unknown) => {
+  if (err instanceof EnvError) {
+    console.error('Gridleak cannot start; fix these settings:');
+    for (const line of err.problems) console.error(`  ${line}`);
+  } else if (err instanceof LocalServiceError) console.error(`Gridleak cannot start: ${err.message}`);
+  else if ((err as NodeJS.ErrnoException).code === 'EADDRINUSE')
+    console.error(`Gridleak cannot start: port ${(err as { port?: number }).port ?? ''} is already in use (set PORT to another).`);
+  else console.error('Gridleak cannot start:', err);
+  await shutdown(1);
+});

@@ -1,0 +1,12 @@
+import { z } from 'zod';
+
+/** A message held by the local SMTP capture (development and test only). */
+export const capturedMailSchema = z.object({
+  to: z.string(),
+  from: z.string(),
+  subject: z.string(),
+  text: z.string(),
+  html: z.string().nullable(),
+  date: z.string(),
+});
+export type CapturedMail = z.infer<typeof capturedMailSchema>;

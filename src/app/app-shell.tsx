@@ -1,0 +1,52 @@
+import { Link, NavLink, Outlet } from 'react-router';
+import { useMeta } from '../features/meta/api/get-meta';
+import { Logo } from '../components/logo';
+import { ThemeToggle } from '../components/theme-toggle';
+
+const navClass = ({ isActive }: { isActive: boolean }) =>
+  `min-h-11 inline-flex items-center rounded-lg px-3 font-semibold ${isActive ? 'bg-glow-soft text-glow-strong' : 'text-ink-soft hover:bg-sunken'}`;
+
+export function AppShell() {
+  const meta = useMeta();
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-panel focus:p-2">
+        Skip to content
+      </a>
+      <header className="border-b border-rule bg-panel/90 backdrop-blur">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-2 px-4 py-2">
+          <NavLink to="/" className="mr-3 flex items-center gap-2" aria-label="Gridleak, the bench">
+            <Logo />
+            <span className="text-xl font-bold tracking-tight">Gridleak</span>
+          </NavLink>
+          <nav aria-label="Main" className="flex flex-1 flex-wrap items-center gap-1">
+            <NavLink to="/" end className={navClass}>
+              Bench
+            </NavLink>
+            <NavLink to="/restorations/new" className={navClass}>
+              Take in a set
+            </NavLink>
+          </nav>
+          <ThemeToggle />
+          <div className="flex min-h-11 items-center rounded-lg border border-rule px-3 text-sm text-ink-soft" data-testid="user-slot">
+            Not signed in
+          </div>
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">
+        <Outlet />
+      </main>
+      <footer className="border-t border-rule px-4 py-4 text-center text-xs text-ink-soft">
+        <p>
+          Valve sets carry lethal voltages. Gridleak's figures are aids, not certification; follow local electrical codes and
+          licensed practice.
+        </p>
+        {meta.data?.devMail && (
+          <Link to="/dev/mail" className="mt-1 inline-block underline">
+            Captured e-mail (development)
+          </Link>
+        )}
+      </footer>
+    </div>
+  );
+}

@@ -1,0 +1,54 @@
+import { useDeferredValue, useState } from 'react';
+import { Link } from 'react-router';
+import { buttonClass } from '../../components/button';
+import { inputClass } from '../../components/field';
+import { EmptyState, ErrorState, Loading } from '../../components/states';
+import { useRestorations } from '../../features/restorations/api/get-restorations';
+import { StageColumns } from '../../features/restorations/components/stage-columns';
+
+export function BenchRoute() {
+  const [search, setSearch] = useState('');
+  const q = useDeferredValue(search.trim());
+  const list = useRestorations(q ? { q } : {});
+  return (
+    <div className="space-y-6">
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <div>
+          <h1 className="text-2xl font-bold">The bench</h1>
+          <p className="text-ink-soft">Every set in the workshop, by where its work stands.</p>
+        </div>
+        <Link to="/restorations/new" className={buttonClass('primary')}>
+          + Take in a set
+        </Link>
+      </div>
+      <div className="max-w-md">
+        <label htmlFor="bench-search" className="sr-only">
+          Search by make, model or serial
+        </label>
+        <input
+          id="bench-search"
+          type="search"
+          value={search}
+          onChange={(e) => setSearch(e.target.value)}
+          placeholder="Search make, model or serial"
+          className={inputClass}
+        />
+      </div>
+      {list.isPending ? (
+        <Loading label="Fetching the bench…" />
+      ) : list.isError ? (
+        <ErrorState error={list.error} onRetry={() => list.refetch()} />
+      ) : list.data.length === 0 ? (
+        q ? (
+          <EmptyState title={`Nothing matches “${q}”`}>Try part of the maker's name, the model or the serial number.</EmptyState>
+        ) : (
+          <EmptyState title="The bench is clear">
+            Take in the first set: its make, model and the owner's account of the fault are enough to start.
+          </EmptyState>
+        )
+      ) : (
+        <StageColumns restorations={list.data} />
+      )}
+    </div>
+  );
+}

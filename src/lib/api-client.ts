@@ -1,0 +1,37 @@
+import { apiErrorSchema } from '../../shared/schemas/errors';
+
+/** An error answer from the API, carrying its status and code for the caller to branch on. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+  ) {
+    super(message);
+  }
+}
+
+/** JSON requests to /api with the session cookie; throws ApiError with the server's message. */
+export async function api<T>(path: string, init: RequestInit & { json?: unknown } = {}): Promise<T> {
+  const { json, headers, ...rest } = init;
+  let response: Response;
+  try {
+    response = await fetch(`/api${path}`, {
+      credentials: 'same-origin',
+      ...rest,
+      headers: { Accept: 'application/json', ...(json !== undefined ? { 'Content-Type': 'application/json' } : {}), ...headers },
+      body: json !== undefined ? JSON.stringify(json) : rest.body,
+    });
+  } catch {
+    throw new ApiError(0, 'network', 'Gridleak could not be reached. Check the connection and try again.');
+  }
+  if (response.status === 204) return undefined as T;
+  const body: unknown = await response.json().catch(() => undefined);
+  if (!response.ok) {
+    const parsed = apiErrorSchema.safeParse(body);
+    if (parsed.success) throw new ApiError(response.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.details);
+    throw new ApiError(response.status, 'unknown', `The server answered ${response.status}.`);
+  }
+  return body as T;
+}

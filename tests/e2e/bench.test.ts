@@ -1,0 +1,54 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { artifactPath } from '../support/artifacts';
+import { launchBrowser, newPage } from '../support/browser';
+import { startProduct } from '../support/start-product';
+
+let product: Awaited<ReturnType<typeof startProduct>>;
+let browser: Browser;
+beforeAll(async () => {
+  [product, browser] = await Promise.all([startProduct(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await product?.stop();
+});
+
+describe('the bench', () => {
+  it('when a technician takes in a set through the form, then it appears on the bench at intake', async () => {
+    const page = await newPage(browser);
+    await page.goto(product.origin);
+    await expect.poll(() => page.getByRole('heading', { name: 'The bench' }).isVisible()).toBe(true);
+    // The demo restorations are on the bench, grouped by stage.
+    await page.getByText('Meridian 54').waitFor();
+    expect(await page.getByRole('heading', { name: /Repair/ }).count()).toBe(1);
+
+    await page.getByRole('link', { name: '+ Take in a set' }).click();
+    await page.getByLabel('Maker').fill('Fenwick & Daughters');
+    await page.getByLabel('Model').fill('Nightjar 6');
+    await page.getByLabel('Year').fill('1958');
+    await page.getByLabel('Serial number').fill('FD-6-1142');
+    await page.getByLabel(/Symptoms/).fill('Crackles, then fades after ten minutes.');
+    await page.getByRole('button', { name: 'Put it on the bench' }).click();
+
+    const card = page.getByRole('link', { name: /Fenwick & Daughters Nightjar 6/ });
+    await card.waitFor();
+    const intake = page.locator('section', { has: page.getByRole('heading', { name: /Intake/ }) });
+    expect(await intake.getByText('Nightjar 6').isVisible()).toBe(true);
+    await page.screenshot({ path: artifactPath('bench.png'), fullPage: true });
+
+    await page.getByLabel('Search by make, model or serial').fill('FD-6');
+    await expect.poll(() => page.getByRole('link', { name: /Meridian 54/ }).count()).toBe(0);
+    await expect.poll(() => card.isVisible()).toBe(true);
+  });
+
+  it('when the form is sent without a maker, then the field says what is missing and nothing is created', async () => {
+    const page = await newPage(browser, { width: 390, height: 844 });
+    await page.goto(`${product.origin}/restorations/new`);
+    await page.getByLabel('Model').fill('Orphan');
+    await page.getByRole('button', { name: 'Put it on the bench' }).click();
+    await page.getByText('Enter the maker, as printed on the set').waitFor();
+    expect(page.url()).toContain('/restorations/new');
+    await page.screenshot({ path: artifactPath('intake-form-phone.png'), fullPage: true });
+  });
+});

@@ -1,0 +1,41 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { pino } from 'pino';
+import supertest from 'supertest';
+import { createApp, type AppDeps } from '../../server/app';
+import { startMailCapture } from '../../server/local-services/mail-capture';
+import { startS3StandIn } from '../../server/local-services/s3-stand-in';
+import { createMailer } from '../../server/mail';
+import { createStorage } from '../../server/storage';
+import { createTestDatabase } from './test-database';
+
+export const TEST_ORIGIN = 'http://gridleak.test';
+
+/** The real app on a fresh database, a real local S3 and a real SMTP capture, for one test file. */
+export async function startTestApp(config: Partial<AppDeps['config']> = {}) {
+  const database = await createTestDatabase();
+  const dir = mkdtempSync(path.join(os.tmpdir(), 'gridleak-s3-'));
+  const s3 = await startS3StandIn(dir, 0, 'test-bucket');
+  const capture = await startMailCapture(database.db, 0);
+  const deps: AppDeps = {
+    db: database.db,
+    storage: createStorage({ ...s3, region: 'us-east-1' }),
+    mailer: createMailer(capture.url, 'Gridleak <no-reply@gridleak.test>'),
+    logger: pino({ level: 'silent' }),
+    config: { publicOrigin: TEST_ORIGIN, demo: false, devMail: true, ...config },
+  };
+  const app = createApp(deps);
+  return {
+    app,
+    deps,
+    db: database.db,
+    request: () => supertest(app),
+    async stop() {
+      await capture.close();
+      await s3.close();
+      await database.drop();
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
