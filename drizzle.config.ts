@@ -5,7 +5,5 @@ export default defineConfig({
   schema: './server/db/schema/index.ts',
   out: './server/db/migrations',
   casing: 'snake_case',
-  // connect-pg-simple owns the session table; keep drizzle-kit from proposing to drop it.
-  tablesFilter: ['!session'],
   dbCredentials: { url: process.env.DATABASE_URL ?? 'postgresql://gridleak@127.0.0.1:54329/gridleak' },
 });

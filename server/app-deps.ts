@@ -1,20 +1,26 @@
+import type pg from 'pg';
 import type { Logger } from 'pino';
 import type { Database } from './db/client';
+import type { ThrottleConfig } from './features/auth/throttle';
 import type { Mailer } from './mail';
 import type { Storage } from './storage';
 
 /** Everything the app needs from outside; tests build the app with real services of their own. */
 export interface AppDeps {
   db: Database;
+  /** The same pool as `db`, for the session store and the throttles. */
+  pool: pg.Pool;
   storage: Storage;
   mailer: Mailer;
   logger: Logger;
   config: {
-    /** e.g. https://gridleak.example.org; writes from other origins are refused. */
+    /** e.g. https://gridleak.example.org; writes from other origins are refused, links in e-mail point here. */
     publicOrigin: string;
-    /** Demo mode lists demo accounts and allows the dev mail page. */
+    sessionSecret: string;
+    /** Demo mode lists the demo accounts on the sign-in page. */
     demo: boolean;
     /** GET /api/dev/mail is mounted (development and test only). */
     devMail: boolean;
+    throttle: ThrottleConfig;
   };
 }

@@ -2,8 +2,13 @@ import express, { Router } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { AppDeps } from './app-deps';
+import { authRoutes } from './features/auth/auth.routes';
+import { createPassport } from './features/auth/passport';
+import { sessionMiddleware } from './features/auth/session';
 import { devMailRoutes } from './features/dev-mail/dev-mail.routes';
 import { healthRoutes } from './features/health/health.routes';
+import { invitationsRoutes } from './features/invitations/invitations.routes';
+import { membersRoutes } from './features/members/members.routes';
 import { metaRoutes } from './features/meta/meta.routes';
 import { restorationsRoutes } from './features/restorations/restorations.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
@@ -15,7 +20,7 @@ export type { AppDeps };
 export function createApp(deps: AppDeps, options: { trustProxy?: string | boolean; relaxedCsp?: boolean } = {}) {
   const app = express();
   app.disable('x-powered-by');
-  if (options.trustProxy !== undefined) app.set('trust proxy', options.trustProxy);
+  if (options.trustProxy !== undefined) app.set('trust proxy', parseTrustProxy(options.trustProxy));
   app.use(
     helmet({
       // Vite's dev server injects an inline React refresh preamble; the production build needs none.
@@ -33,15 +38,28 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
     }),
   );
 
+  const passport = createPassport(deps.db);
   const api = Router();
   api.use(express.json({ limit: '1mb' }));
   api.use(requireSameOrigin(deps.config.publicOrigin));
   api.use(healthRoutes(deps));
   api.use(metaRoutes(deps));
+  api.use(sessionMiddleware(deps.pool, deps.config.sessionSecret));
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use(authRoutes(deps, passport));
   api.use(restorationsRoutes(deps));
+  api.use(membersRoutes(deps));
+  api.use(invitationsRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);
   app.use('/api', api);
   return app;
+}
+
+function parseTrustProxy(value: string | boolean): string | boolean | number {
+  if (typeof value === 'boolean') return value;
+  if (value === 'true' || value === 'false') return value === 'true';
+  return /^\d+$/.test(value) ? Number(value) : value;
 }

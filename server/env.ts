@@ -68,3 +68,9 @@ export function publicOrigin(env: Env, port: number): string {
 }
 
 export const isDemo = (env: Env) => (env.DEMO ? env.DEMO === 'true' : env.NODE_ENV !== 'production');
+
+/**
+ * Outside production a fixed development secret is used when none is set (production refuses to start
+ * without one), so local sessions survive restarts and every local instance agrees.
+ */
+export const sessionSecret = (env: Env) => env.SESSION_SECRET ?? 'gridleak-local-development-secret-not-for-production';

@@ -9,7 +9,8 @@ import { connectDatabase } from './db/client';
 import { applyMigrations } from './db/migrate';
 import { demoPeople, DEMO_PASSWORD } from './db/seed/demo-scenario';
 import { seedDemo } from './db/seed/seed-demo';
-import { EnvError, isDemo, parseEnv, publicOrigin } from './env';
+import { EnvError, isDemo, parseEnv, publicOrigin, sessionSecret } from './env';
+import { defaultThrottle } from './features/auth/throttle';
 import { LocalServiceError } from './local-services/run-command';
 import { createMailer } from './mail';
 import { resolveDatabase, resolveMail, resolveStorage, type Stop } from './start/services';
@@ -39,7 +40,14 @@ async function main() {
   const server = http.createServer();
   const origin = publicOrigin(env, env.PORT);
   const app = createApp(
-    { db: handle.db, storage, mailer, logger, config: { publicOrigin: origin, demo, devMail: env.NODE_ENV !== 'production' } },
+    {
+      db: handle.db,
+      pool: handle.pool,
+      storage,
+      mailer,
+      logger,
+      config: { publicOrigin: origin, sessionSecret: sessionSecret(env), demo, devMail: env.NODE_ENV !== 'production', throttle: defaultThrottle },
+    },
     { trustProxy: env.TRUST_PROXY, relaxedCsp: dev },
   );
   if (dev) stops.unshift({ name: 'Vite', stop: await serveViteDev(app, server, root) });

@@ -7,7 +7,9 @@ import { spawnSync } from 'node:child_process';
 import { ensureChromium } from './support/chromium';
 import { startTestCluster } from './support/test-cluster';
 
+// `tsx tests/run.ts [unit|api|e2e] [vitest filters…]` runs one level (and files matching the filters).
 const only = process.argv[2];
+const filters = process.argv.slice(3);
 const step = (name: string, cmd: string, args: string[], env: NodeJS.ProcessEnv = {}) => {
   const started = Date.now();
   console.log(`\n▶ ${name}`);
@@ -22,13 +24,13 @@ if (!only) {
   ok = step('typecheck', 'npx', ['tsc', '-b']) && ok;
   ok = step('lint', 'npx', ['eslint', '.', '--max-warnings=0']) && ok;
 }
-ensureChromium();
+if (!only || only === 'e2e') ensureChromium();
 const cluster = await startTestCluster();
 const stop = () => cluster.stop();
 process.once('SIGINT', () => (stop(), process.exit(130)));
 try {
-  const projects = only === 'e2e' ? ['--project', 'e2e'] : ['--project', 'unit', '--project', 'api', '--project', 'e2e'];
-  ok = step('vitest', 'npx', ['vitest', 'run', ...projects], { GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl }) && ok;
+  const projects = only ? ['--project', only] : ['--project', 'unit', '--project', 'api', '--project', 'e2e'];
+  ok = step('vitest', 'npx', ['vitest', 'run', ...projects, ...filters], { GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl }) && ok;
 } finally {
   stop();
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { roles } from '../permissions';
 
 export const stages = ['intake', 'assessment', 'repair', 'testing', 'returned', 'on-hold'] as const;
 export const stageSchema = z.enum(stages);
@@ -92,6 +93,8 @@ export const restorationSchema = z.object({
   story: z.string().nullable(),
   receivedOn: z.string().nullable(),
   stage: stageSchema,
+  /** The caller's role on this restoration. */
+  role: z.enum(roles),
   createdAt: z.string(),
   updatedAt: z.string(),
 });

@@ -6,6 +6,7 @@ import supertest from 'supertest';
 import { createApp, type AppDeps } from '../../server/app';
 import { startMailCapture } from '../../server/local-services/mail-capture';
 import { startS3StandIn } from '../../server/local-services/s3-stand-in';
+import { defaultThrottle } from '../../server/features/auth/throttle';
 import { createMailer } from '../../server/mail';
 import { createStorage } from '../../server/storage';
 import { createTestDatabase } from './test-database';
@@ -13,19 +14,27 @@ import { createTestDatabase } from './test-database';
 export const TEST_ORIGIN = 'http://gridleak.test';
 
 /** The real app on a fresh database, a real local S3 and a real SMTP capture, for one test file. */
-export async function startTestApp(config: Partial<AppDeps['config']> = {}) {
+export async function startTestApp(config: Partial<AppDeps['config']> = {}, appOptions: Parameters<typeof createApp>[1] = {}) {
   const database = await createTestDatabase();
   const dir = mkdtempSync(path.join(os.tmpdir(), 'gridleak-s3-'));
   const s3 = await startS3StandIn(dir, 0, 'test-bucket');
   const capture = await startMailCapture(database.db, 0);
   const deps: AppDeps = {
     db: database.db,
+    pool: database.pool,
     storage: createStorage({ ...s3, region: 'us-east-1' }),
     mailer: createMailer(capture.url, 'Gridleak <no-reply@gridleak.test>'),
     logger: pino({ level: 'silent' }),
-    config: { publicOrigin: TEST_ORIGIN, demo: false, devMail: true, ...config },
+    config: {
+      publicOrigin: TEST_ORIGIN,
+      sessionSecret: 'test-secret-test-secret-test-secret-0123',
+      demo: false,
+      devMail: true,
+      throttle: { ...defaultThrottle, signInPerAccount: 3, signInPerIp: 50, resetPerAccount: 2, resetPerIp: 50 },
+      ...config,
+    },
   };
-  const app = createApp(deps);
+  const app = createApp(deps, appOptions);
   return {
     app,
     deps,

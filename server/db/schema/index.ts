@@ -2,3 +2,5 @@ export * from './users';
 export * from './restorations';
 export * from './memberships';
 export * from './dev-mails';
+export * from './auth';
+export * from './invitations';

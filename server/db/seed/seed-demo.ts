@@ -1,5 +1,5 @@
-import argon2 from 'argon2';
-import { and, eq, sql } from 'drizzle-orm';
+import { and, eq, isNull, sql } from 'drizzle-orm';
+import { hashPassword } from '../../features/auth/password';
 import { restorationInputSchema } from '../../../shared/schemas/restorations';
 import type { Database } from '../client';
 import { memberships, restorations, users } from '../schema';
@@ -12,6 +12,10 @@ export async function seedDemo(db: Database): Promise<void> {
     const [existing] = await db.select({ id: users.id }).from(users).where(sql`lower(${users.email}) = ${person.email}`);
     ids[key] = existing?.id ?? (await insertUser(db, person));
   }
+  // Demo addresses are invented, so no confirmation link could ever reach them.
+  await db.update(users).set({ emailConfirmedAt: new Date() }).where(
+    and(isNull(users.emailConfirmedAt), sql`lower(${users.email}) in (${sql.join(Object.values(demoPeople).map((p) => sql`${p.email}`), sql`, `)})`),
+  );
   for (const demo of demoRestorations) {
     const { members, ...fields } = demo;
     const [found] = await db
@@ -29,7 +33,7 @@ export async function seedDemo(db: Database): Promise<void> {
 }
 
 async function insertUser(db: Database, person: { name: string; email: string }): Promise<number> {
-  const passwordHash = await argon2.hash(DEMO_PASSWORD, { type: argon2.argon2id });
-  const [row] = await db.insert(users).values({ ...person, passwordHash }).returning({ id: users.id });
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  const [row] = await db.insert(users).values({ ...person, passwordHash, emailConfirmedAt: new Date() }).returning({ id: users.id });
   return row!.id;
 }

@@ -1,29 +1,41 @@
 import { and, desc, eq, ilike, or, type SQL } from 'drizzle-orm';
-import type { RestorationInput, Stage } from '../../../shared/schemas/restorations';
+import type { Role } from '../../../shared/permissions';
+import type { Stage } from '../../../shared/schemas/restorations';
 import type { Database } from '../../db/client';
-import { restorations } from '../../db/schema';
+import { memberships, restorations } from '../../db/schema';
 
 export type RestorationRow = typeof restorations.$inferSelect;
 type Values = Omit<typeof restorations.$inferInsert, 'id' | 'createdAt' | 'updatedAt'>;
 
 export function restorationsRepo(db: Database) {
   return {
-    async list(filter: { q?: string; stage?: Stage }): Promise<RestorationRow[]> {
-      const where: SQL[] = [];
+    /** The restorations a person is a member of, with their role, most recently changed first. */
+    async listFor(userId: number, filter: { q?: string; stage?: Stage }): Promise<(RestorationRow & { role: Role })[]> {
+      const where: SQL[] = [eq(memberships.userId, userId)];
       if (filter.stage) where.push(eq(restorations.stage, filter.stage));
       if (filter.q) {
         const like = `%${filter.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
         where.push(or(ilike(restorations.make, like), ilike(restorations.model, like), ilike(restorations.serial, like))!);
       }
-      return db.select().from(restorations).where(and(...where)).orderBy(desc(restorations.updatedAt));
+      const rows = await db
+        .select({ restoration: restorations, role: memberships.role })
+        .from(restorations)
+        .innerJoin(memberships, eq(memberships.restorationId, restorations.id))
+        .where(and(...where))
+        .orderBy(desc(restorations.updatedAt));
+      return rows.map((r) => ({ ...r.restoration, role: r.role }));
     },
     async find(id: number): Promise<RestorationRow | undefined> {
       const [row] = await db.select().from(restorations).where(eq(restorations.id, id));
       return row;
     },
-    async insert(values: Values): Promise<RestorationRow> {
-      const [row] = await db.insert(restorations).values(values).returning();
-      return row!;
+    /** Creates the restoration and makes its creator the technician, together or not at all. */
+    async insertWithTechnician(values: Values, userId: number): Promise<RestorationRow> {
+      return db.transaction(async (tx) => {
+        const [row] = await tx.insert(restorations).values(values).returning();
+        await tx.insert(memberships).values({ restorationId: row!.id, userId, role: 'technician' });
+        return row!;
+      });
     },
     async update(id: number, values: Partial<Values>): Promise<RestorationRow | undefined> {
       const [row] = await db.update(restorations).set(values).where(eq(restorations.id, id)).returning();
@@ -35,5 +47,3 @@ export function restorationsRepo(db: Database) {
     },
   };
 }
-
-export type { RestorationInput };

@@ -6,6 +6,7 @@ import {
   restorationPatchSchema,
 } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
+import { guard, requireUser, roleOf } from '../../http/guard';
 import { input, validate } from '../../http/validate';
 import { restorationsService } from './restorations.service';
 
@@ -14,23 +15,23 @@ const create = { body: restorationInputSchema };
 const one = { params: idParamsSchema };
 const patch = { params: idParamsSchema, body: restorationPatchSchema };
 
-export function restorationsRoutes(deps: AppDeps): Router {
-  const service = restorationsService(deps.db);
+export function restorationsRoutes({ db }: AppDeps): Router {
+  const service = restorationsService(db);
   const router = Router();
-  router.get('/restorations', validate(list), async (_req, res) => {
-    res.json(await service.list(input(res, list).query));
+  router.get('/restorations', requireUser, validate(list), async (req, res) => {
+    res.json(await service.listFor(req.user!.id, input(res, list).query));
   });
-  router.post('/restorations', validate(create), async (_req, res) => {
-    res.status(201).json(await service.create(input(res, create).body));
+  router.post('/restorations', requireUser, validate(create), async (req, res) => {
+    res.status(201).json(await service.create(input(res, create).body, req.user!.id));
   });
-  router.get('/restorations/:id', validate(one), async (_req, res) => {
-    res.json(await service.get(input(res, one).params.id));
+  router.get('/restorations/:id', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
+    res.json(await service.get(input(res, one).params.id, roleOf(res)));
   });
-  router.patch('/restorations/:id', validate(patch), async (_req, res) => {
+  router.patch('/restorations/:id', requireUser, validate(patch), guard(db, 'restoration.edit'), async (_req, res) => {
     const { params, body } = input(res, patch);
-    res.json(await service.update(params.id, body));
+    res.json(await service.update(params.id, body, roleOf(res)));
   });
-  router.delete('/restorations/:id', validate(one), async (_req, res) => {
+  router.delete('/restorations/:id', requireUser, validate(one), guard(db, 'restoration.delete'), async (_req, res) => {
     await service.remove(input(res, one).params.id);
     res.status(204).end();
   });

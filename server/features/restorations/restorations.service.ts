@@ -1,38 +1,39 @@
-import type { Restoration } from '../../../shared/schemas/restorations';
-import type { restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
 import type { z } from 'zod';
-import { NotFoundError } from '../../http/errors';
+import type { Role } from '../../../shared/permissions';
+import type { Restoration, restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
 import type { Database } from '../../db/client';
+import { NotFoundError } from '../../http/errors';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
 
 type CreateInput = z.output<typeof restorationInputSchema>;
 type PatchInput = z.output<typeof restorationPatchSchema>;
 
-export function toRestoration(row: RestorationRow): Restoration {
-  return { ...row, createdAt: row.createdAt.toISOString(), updatedAt: row.updatedAt.toISOString() };
+export function toRestoration(row: RestorationRow, role: Role): Restoration {
+  return { ...row, role, createdAt: row.createdAt.toISOString(), updatedAt: row.updatedAt.toISOString() };
 }
 
+/** Membership and permission are checked by the route guard before these run. */
 export function restorationsService(db: Database) {
   const repo = restorationsRepo(db);
   return {
-    async list(filter: Parameters<typeof repo.list>[0]) {
-      return (await repo.list(filter)).map(toRestoration);
+    async listFor(userId: number, filter: Parameters<typeof repo.listFor>[1]) {
+      return (await repo.listFor(userId, filter)).map((r) => toRestoration(r, r.role));
     },
-    async get(id: number) {
+    async get(id: number, role: Role) {
       const row = await repo.find(id);
-      if (!row) throw new NotFoundError('No such restoration.');
-      return toRestoration(row);
+      if (!row) throw new NotFoundError();
+      return toRestoration(row, role);
     },
-    async create(input: CreateInput) {
-      return toRestoration(await repo.insert(input));
+    async create(input: CreateInput, userId: number) {
+      return toRestoration(await repo.insertWithTechnician(input, userId), 'technician');
     },
-    async update(id: number, patch: PatchInput) {
+    async update(id: number, patch: PatchInput, role: Role) {
       const row = await repo.update(id, patch);
-      if (!row) throw new NotFoundError('No such restoration.');
-      return toRestoration(row);
+      if (!row) throw new NotFoundError();
+      return toRestoration(row, role);
     },
     async remove(id: number) {
-      if (!(await repo.remove(id))) throw new NotFoundError('No such restoration.');
+      if (!(await repo.remove(id))) throw new NotFoundError();
     },
   };
 }

@@ -1,0 +1,57 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { invitationInputSchema, memberParamsSchema, memberPatchSchema } from '../../../shared/schemas/members';
+import { idParamsSchema } from '../../../shared/schemas/restorations';
+import type { AppDeps } from '../../app-deps';
+import { guard, requireUser } from '../../http/guard';
+import { input, validate } from '../../http/validate';
+import { invitationsService } from '../invitations/invitations.service';
+import { membersService } from './members.service';
+
+const one = { params: idParamsSchema };
+const member = { params: memberParamsSchema };
+const rolePatch = { params: memberParamsSchema, body: memberPatchSchema };
+const invite = { params: idParamsSchema, body: invitationInputSchema };
+const invitation = { params: z.object({ id: z.coerce.number().int().positive(), invitationId: z.coerce.number().int().positive() }) };
+
+/** People on a restoration: members, roles and pending invitations. */
+export function membersRoutes(deps: AppDeps): Router {
+  const { db } = deps;
+  const members = membersService(db);
+  const invitations = invitationsService(deps);
+  const router = Router();
+  const base = '/restorations/:id';
+
+  router.get(`${base}/members`, requireUser, validate(one), guard(db, 'members.view'), async (_req, res) => {
+    res.json(await members.list(input(res, one).params.id));
+  });
+  router.patch(`${base}/members/:userId`, requireUser, validate(rolePatch), guard(db, 'members.manage'), async (_req, res) => {
+    const { params, body } = input(res, rolePatch);
+    await members.changeRole(params.id, params.userId, body.role);
+    res.json(await members.list(params.id));
+  });
+  router.delete(`${base}/members/:userId`, requireUser, validate(member), guard(db, 'members.manage'), async (_req, res) => {
+    const { params } = input(res, member);
+    await members.remove(params.id, params.userId);
+    res.status(204).end();
+  });
+  router.get(`${base}/invitations`, requireUser, validate(one), guard(db, 'members.manage'), async (_req, res) => {
+    res.json(await invitations.listPending(input(res, one).params.id));
+  });
+  router.post(`${base}/invitations`, requireUser, validate(invite), guard(db, 'members.manage'), async (req, res) => {
+    const { params, body } = input(res, invite);
+    const created = await invitations.invite(params.id, body.email, body.role, req.user!.id);
+    res.status(201).json({ id: created.id, email: created.email, role: created.role, expiresAt: created.expiresAt.toISOString() });
+  });
+  router.post(`${base}/invitations/:invitationId/resend`, requireUser, validate(invitation), guard(db, 'members.manage'), async (req, res) => {
+    const { params } = input(res, invitation);
+    await invitations.resend(params.id, params.invitationId, req.user!.id);
+    res.status(204).end();
+  });
+  router.delete(`${base}/invitations/:invitationId`, requireUser, validate(invitation), guard(db, 'members.manage'), async (_req, res) => {
+    const { params } = input(res, invitation);
+    await invitations.revoke(params.id, params.invitationId);
+    res.status(204).end();
+  });
+  return router;
+}

@@ -1,0 +1,96 @@
+import { randomBytes } from 'node:crypto';
+import type { Agent } from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { invitationsRepo } from '../../server/features/invitations/invitations.repo';
+import { createRestoration } from '../factories/restorations';
+import { anonymous, createUser, signedIn } from '../factories/users';
+import { listApiRoutes } from '../support/list-routes';
+import { startTestApp } from '../support/test-app';
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
+type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
+type Fixture = { id: number; userId: number; invitationId: number; token: string };
+type Row = [Method, string, Expect, ((f: Fixture) => object)?];
+
+const unique = () => `m-${randomBytes(4).toString('hex')}@example.test`;
+
+/**
+ * Every API route × every kind of caller → the exact status. A route the app registers but this table
+ * lacks fails the last test, so adding a route means adding one line here.
+ */
+const matrix: Row[] = [
+  ['GET', '/api/health', [200, 200, 200, 200, 200]],
+  ['GET', '/api/meta', [200, 200, 200, 200, 200]],
+  ['GET', '/api/dev/mail', [200, 200, 200, 200, 200]],
+  ['POST', '/api/auth/sign-up', [202, 202, 202, 202, 202], () => ({ name: 'New', email: unique(), password: 'a quiet chassis hum' })],
+  ['POST', '/api/auth/sign-in', [401, 401, 401, 401, 401], () => ({ email: unique(), password: 'not the password' })],
+  ['POST', '/api/auth/sign-out', [204, 204, 204, 204, 204]],
+  ['GET', '/api/auth/me', [200, 200, 200, 200, 401]],
+  ['POST', '/api/auth/confirm-email', [410, 410, 410, 410, 410], () => ({ token: 'x'.repeat(43) })],
+  ['POST', '/api/auth/password-reset', [202, 202, 202, 202, 202], () => ({ email: unique() })],
+  ['POST', '/api/auth/password-reset/confirm', [410, 410, 410, 410, 410], () => ({ token: 'x'.repeat(43), password: 'a quiet chassis hum' })],
+  ['GET', '/api/restorations', [200, 200, 200, 200, 401]],
+  ['POST', '/api/restorations', [201, 201, 201, 201, 401], () => ({ make: 'Fenwick', model: 'Lark' })],
+  ['GET', '/api/restorations/:id', [200, 200, 200, 404, 401]],
+  ['PATCH', '/api/restorations/:id', [200, 403, 403, 404, 401], () => ({ stage: 'repair' })],
+  ['DELETE', '/api/restorations/:id', [204, 403, 403, 404, 401]],
+  ['GET', '/api/restorations/:id/members', [200, 200, 200, 404, 401]],
+  ['PATCH', '/api/restorations/:id/members/:userId', [200, 403, 403, 404, 401], () => ({ role: 'mentor' })],
+  ['DELETE', '/api/restorations/:id/members/:userId', [204, 403, 403, 404, 401]],
+  ['GET', '/api/restorations/:id/invitations', [200, 403, 403, 404, 401]],
+  ['POST', '/api/restorations/:id/invitations', [201, 403, 403, 404, 401], () => ({ email: unique(), role: 'mentor' })],
+  ['POST', '/api/restorations/:id/invitations/:invitationId/resend', [204, 403, 403, 404, 401]],
+  ['DELETE', '/api/restorations/:id/invitations/:invitationId', [204, 403, 403, 404, 401]],
+  ['GET', '/api/invitations/:token', [200, 200, 200, 200, 200]],
+  // The invitation is addressed to nobody here, so every signed-in caller is the wrong account.
+  ['POST', '/api/invitations/:token/accept', [403, 403, 403, 403, 401]],
+];
+
+const callers = ['technician', 'mentor', 'owner', 'nonMember', 'signedOut'] as const;
+let t: Awaited<ReturnType<typeof startTestApp>>;
+const people = {} as Record<(typeof callers)[number], { id: number; email: string; password: string } | undefined>;
+
+beforeAll(async () => {
+  const lax = { signInPerAccount: 1000, signInPerIp: 1000, resetPerAccount: 1000, resetPerIp: 1000, windowSeconds: 60 };
+  t = await startTestApp({ throttle: lax });
+  for (const c of callers) people[c] = c === 'signedOut' ? undefined : await createUser(t.db);
+});
+afterAll(() => t.stop());
+
+/** A fresh restoration per request, so deleting or demoting in one row cannot affect another. */
+async function fixture(): Promise<Fixture> {
+  const extra = await createUser(t.db);
+  const r = await createRestoration(t.db, [
+    { userId: people.technician!.id, role: 'technician' },
+    { userId: people.mentor!.id, role: 'mentor' },
+    { userId: people.owner!.id, role: 'owner' },
+    { userId: extra.id, role: 'technician' },
+  ]);
+  const { invitation, token } = await invitationsRepo(t.db).issue(r.id, unique(), 'mentor', people.technician!.id);
+  return { id: r.id, userId: extra.id, invitationId: invitation.id, token };
+}
+
+async function callerAgent(c: (typeof callers)[number]): Promise<Agent> {
+  const person = people[c];
+  return person ? signedIn(t.app, person) : anonymous(t.app);
+}
+
+describe('authorisation matrix', () => {
+  for (const [method, template, expected, body] of matrix)
+    it(`${method} ${template} answers ${expected.join('/')} to ${callers.join('/')}`, async () => {
+      const got: number[] = [];
+      for (const c of callers) {
+        const f = await fixture();
+        const path = template.replace(/:(\w+)/g, (_, k: keyof Fixture) => String(f[k]));
+        const agent = await callerAgent(c);
+        const req = agent[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](path);
+        got.push((await (body ? req.send(body(f)) : req)).status);
+      }
+      expect(got).toEqual(expected);
+    });
+
+  it('lists every route the app registers', () => {
+    const inTable = matrix.map(([m, p]) => `${m} ${p}`).sort();
+    expect(listApiRoutes(t.app)).toEqual(inTable);
+  });
+});
