@@ -2,12 +2,15 @@ import { Link, NavLink, Outlet } from 'react-router';
 import { useMeta } from '../features/meta/api/get-meta';
 import { Logo } from '../components/logo';
 import { ThemeToggle } from '../components/theme-toggle';
+import { useMe } from '../features/auth/api/get-me';
+import { UserMenu } from '../features/auth/components/user-menu';
 
 const navClass = ({ isActive }: { isActive: boolean }) =>
   `min-h-11 inline-flex items-center rounded-lg px-3 font-semibold ${isActive ? 'bg-glow-soft text-glow-strong' : 'text-ink-soft hover:bg-sunken'}`;
 
 export function AppShell() {
   const meta = useMeta();
+  const signedIn = Boolean(useMe().data);
   return (
     <div className="flex min-h-dvh flex-col">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-panel focus:p-2">
@@ -20,17 +23,24 @@ export function AppShell() {
             <span className="text-xl font-bold tracking-tight">Gridleak</span>
           </NavLink>
           <nav aria-label="Main" className="flex flex-1 flex-wrap items-center gap-1">
-            <NavLink to="/" end className={navClass}>
-              Bench
-            </NavLink>
-            <NavLink to="/restorations/new" className={navClass}>
-              Take in a set
-            </NavLink>
+            {signedIn && (
+              <NavLink to="/" end className={navClass}>
+                Bench
+              </NavLink>
+            )}
+            {signedIn && (
+              <>
+                <NavLink to="/restorations/new" className={navClass}>
+                  Take in a set
+                </NavLink>
+                <NavLink to="/calculators" className={navClass}>
+                  Calculators
+                </NavLink>
+              </>
+            )}
           </nav>
           <ThemeToggle />
-          <div className="flex min-h-11 items-center rounded-lg border border-rule px-3 text-sm text-ink-soft" data-testid="user-slot">
-            Not signed in
-          </div>
+          <UserMenu />
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">

@@ -1,17 +1,41 @@
 import { createBrowserRouter } from 'react-router';
 import { AppShell } from './app-shell';
+import { RequireSignIn } from './require-sign-in';
 import { RouteError } from './routes/route-error';
+
+/** A lazily loaded route module's named component (keeps each page out of the main chunk). */
+const page =
+  <M, K extends keyof M>(load: () => Promise<M>, name: K) =>
+  async () => ({ Component: (await load())[name] as React.ComponentType });
 
 export const router = createBrowserRouter([
   {
     Component: AppShell,
     ErrorBoundary: RouteError,
     children: [
-      { index: true, lazy: async () => ({ Component: (await import('./routes/bench')).BenchRoute }) },
-      { path: 'restorations/new', lazy: async () => ({ Component: (await import('./routes/new-restoration')).NewRestorationRoute }) },
-      { path: 'restorations/:id', lazy: async () => ({ Component: (await import('./routes/restoration')).RestorationRoute }) },
-      { path: 'dev/mail', lazy: async () => ({ Component: (await import('./routes/dev-mail')).DevMailRoute }) },
-      { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }) },
+      { path: 'sign-in', lazy: page(() => import('./routes/sign-in'), 'SignInRoute') },
+      { path: 'sign-up', lazy: page(() => import('./routes/sign-up'), 'SignUpRoute') },
+      { path: 'reset-password/:token?', lazy: page(() => import('./routes/reset-password'), 'ResetPasswordRoute') },
+      { path: 'confirm-email/:token', lazy: page(() => import('./routes/confirm-email'), 'ConfirmEmailRoute') },
+      { path: 'invitations/:token', lazy: page(() => import('./routes/invitation'), 'InvitationRoute') },
+      { path: 'dev/mail', lazy: page(() => import('./routes/dev-mail'), 'DevMailRoute') },
+      {
+        Component: RequireSignIn,
+        children: [
+          { index: true, lazy: page(() => import('./routes/bench'), 'BenchRoute') },
+          { path: 'restorations/new', lazy: page(() => import('./routes/new-restoration'), 'NewRestorationRoute') },
+          {
+            path: 'restorations/:id',
+            lazy: page(() => import('./routes/restoration-layout'), 'RestorationLayout'),
+            children: [
+              { index: true, lazy: page(() => import('./routes/restoration'), 'RestorationRoute') },
+              { path: 'people', lazy: page(() => import('./routes/people'), 'PeopleRoute') },
+            ],
+          },
+          { path: 'calculators', lazy: page(() => import('./routes/calculators'), 'CalculatorsRoute') },
+        ],
+      },
+      { path: '*', lazy: page(() => import('./routes/not-found'), 'NotFoundRoute') },
     ],
   },
 ]);

@@ -1,7 +1,15 @@
-import { QueryClient } from '@tanstack/react-query';
+import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
 import { ApiError } from './api-client';
+import { ME_KEY } from './session-key';
+
+/** A 401 anywhere means the session ended: forget who was signed in, and the sign-in gate takes over. */
+function onError(error: unknown) {
+  if (error instanceof ApiError && error.status === 401) queryClient.setQueryData(ME_KEY, null);
+}
 
 export const queryClient = new QueryClient({
+  queryCache: new QueryCache({ onError }),
+  mutationCache: new MutationCache({ onError }),
   defaultOptions: {
     queries: {
       staleTime: 15_000,

@@ -2,6 +2,7 @@ import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
 import { launchBrowser, newPage } from '../support/browser';
+import { signInAs } from '../support/journey';
 import { startProduct } from '../support/start-product';
 
 let product: Awaited<ReturnType<typeof startProduct>>;
@@ -17,6 +18,7 @@ afterAll(async () => {
 describe('the bench', () => {
   it('when a technician takes in a set through the form, then it appears on the bench at intake', async () => {
     const page = await newPage(browser);
+    await signInAs(page, product.origin, 'mara@cobbold-lane.test');
     await page.goto(product.origin);
     await expect.poll(() => page.getByRole('heading', { name: 'The bench' }).isVisible()).toBe(true);
     // The demo restorations are on the bench, grouped by stage.
@@ -45,6 +47,12 @@ describe('the bench', () => {
   it('when the form is sent without a maker, then the field says what is missing and nothing is created', async () => {
     const page = await newPage(browser, { width: 390, height: 844 });
     await page.goto(`${product.origin}/restorations/new`);
+    // Signed out, the form sends the visitor to sign-in and brings them back.
+    await page.getByRole('heading', { name: 'Sign in to Gridleak' }).waitFor();
+    await page.screenshot({ path: artifactPath('sign-in-phone.png'), fullPage: true });
+    await page.getByRole('button', { name: /Mara Ellingsworth/ }).click();
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Take in a set' }).waitFor();
     await page.getByLabel('Model').fill('Orphan');
     await page.getByRole('button', { name: 'Put it on the bench' }).click();
     await page.getByText('Enter the maker, as printed on the set').waitFor();

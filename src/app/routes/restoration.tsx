@@ -1,15 +1,8 @@
-import { useParams } from 'react-router';
 import { equipmentKindLabels, workLevelLabels } from '../../../shared/schemas/restorations';
-import { ErrorState, Loading } from '../../components/states';
-import { useRestoration } from '../../features/restorations/api/get-restoration';
-import { StageBadge } from '../../features/restorations/components/stage-badge';
+import { useRestorationContext } from '../restoration-context';
 
 export function RestorationRoute() {
-  const id = Number(useParams().id);
-  const query = useRestoration(id);
-  if (query.isPending) return <Loading label="Opening the notebook…" />;
-  if (query.isError) return <ErrorState error={query.error} />;
-  const r = query.data;
+  const r = useRestorationContext();
   const rows: [string, string | null][] = [
     ['Kind', equipmentKindLabels[r.equipmentKind]],
     ['Serial', r.serial],
@@ -21,17 +14,11 @@ export function RestorationRoute() {
     ['Story', r.story],
   ];
   return (
-    <article className="space-y-4">
-      <header className="flex flex-wrap items-center gap-3">
-        <h1 className="text-2xl font-bold">
-          {r.make} {r.model} {r.year && <span className="font-mono text-lg text-ink-soft">{r.year}</span>}
-        </h1>
-        <StageBadge stage={r.stage} />
-      </header>
+    <div className="space-y-4">
       {r.liveChassis && (
         <p role="note" className="rounded-lg border-l-4 border-danger bg-danger-soft px-4 py-3">
           <strong>Live chassis.</strong> The chassis may sit at mains potential: work through an isolation transformer, keep one hand
-          away, and refit insulating knobs and covers before hand-back.
+          away, and refit insulating knobs and covers before hand-back. Follow local electrical codes and licensed practice.
         </p>
       )}
       <dl className="grid gap-x-6 gap-y-3 rounded-xl border border-rule bg-panel p-5 sm:grid-cols-[12rem_1fr]">
@@ -44,6 +31,6 @@ export function RestorationRoute() {
             </div>
           ))}
       </dl>
-    </article>
+    </div>
   );
 }

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { SignInInput, User } from '../../../../shared/schemas/auth';
+import { api } from '../../../lib/api-client';
+import { ME_KEY } from './get-me';
+
+export const signIn = (input: SignInInput) => api<User>('/auth/sign-in', { method: 'POST', json: input });
+
+export function useSignIn() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: signIn,
+    onSuccess: (user) => {
+      // Another person may have used this browser: nothing cached may outlive the sign-in.
+      client.clear();
+      client.setQueryData(ME_KEY, user);
+    },
+  });
+}

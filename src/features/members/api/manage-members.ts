@@ -1,0 +1,30 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { Role } from '../../../../shared/permissions';
+import type { InvitationInput } from '../../../../shared/schemas/members';
+import { api } from '../../../lib/api-client';
+
+/** Every change to the people on a restoration refreshes its members and invitations. */
+function usePeopleMutation<T>(restorationId: number, fn: (input: T) => Promise<unknown>) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: fn,
+    onSuccess: () => client.invalidateQueries({ queryKey: ['restorations', restorationId] }),
+  });
+}
+
+export const useChangeRole = (restorationId: number) =>
+  usePeopleMutation(restorationId, ({ userId, role }: { userId: number; role: Role }) =>
+    api(`/restorations/${restorationId}/members/${userId}`, { method: 'PATCH', json: { role } }));
+
+export const useRemoveMember = (restorationId: number) =>
+  usePeopleMutation(restorationId, (userId: number) => api(`/restorations/${restorationId}/members/${userId}`, { method: 'DELETE' }));
+
+export const useInvite = (restorationId: number) =>
+  usePeopleMutation(restorationId, (input: InvitationInput) =>
+    api(`/restorations/${restorationId}/invitations`, { method: 'POST', json: input }));
+
+export const useResendInvitation = (restorationId: number) =>
+  usePeopleMutation(restorationId, (id: number) => api(`/restorations/${restorationId}/invitations/${id}/resend`, { method: 'POST' }));
+
+export const useRevokeInvitation = (restorationId: number) =>
+  usePeopleMutation(restorationId, (id: number) => api(`/restorations/${restorationId}/invitations/${id}`, { method: 'DELETE' }));
