@@ -97,6 +97,18 @@ describe('sign-in, sessions and throttling', () => {
     }
   });
 
+  it('when someone signs in on a browser that already had a session, then the session id changes', async () => {
+    const first = await createUser(t.db);
+    const second = await createUser(t.db);
+    const agent = await signedIn(t.app, first);
+    const before = (await agent.get('/api/auth/me')).request.cookies;
+    const res = await agent.post('/api/auth/sign-in').send({ email: second.email, password: second.password });
+    const after = res.headers['set-cookie']![0]!.split(';')[0]!;
+    expect(after).not.toBe(before);
+    expect((await t.request().get('/api/auth/me').set('Cookie', before)).status).toBe(401);
+    expect((await agent.get('/api/auth/me')).body.email).toBe(second.email);
+  });
+
   it('when a session signs out, then its cookie no longer works', async () => {
     const user = await createUser(t.db);
     const agent = await signedIn(t.app, user);

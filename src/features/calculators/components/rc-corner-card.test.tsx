@@ -1,0 +1,50 @@
+// @vitest-environment happy-dom
+import '@testing-library/jest-dom/vitest';
+import { cleanup, render, screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it } from 'vitest';
+import { RcCornerCard } from './rc-corner-card';
+
+afterEach(cleanup);
+
+async function typeInto(label: string, text: string) {
+  const user = userEvent.setup();
+  const input = screen.getByLabelText(label);
+  await user.clear(input);
+  await user.type(input, text);
+  return input;
+}
+
+describe('RC corner calculator', () => {
+  it('when 15k and 3.3n are typed, then it shows about 3.2 kHz as the person types', async () => {
+    render(<RcCornerCard />);
+    await typeInto('Resistance (Ω)', '15k');
+    await typeInto('Capacitance (F)', '3.3n');
+    // A fact of the trade: f = 1/(2πRC) = 1/(2π · 15 kΩ · 3.3 nF) ≈ 3.2 kHz.
+    expect(screen.getByText(/^3\.2\d* kHz$/)).toBeInTheDocument();
+    expect(screen.getByText('reads as 15 kΩ')).toBeInTheDocument();
+    expect(screen.getByText('reads as 3.3 nF')).toBeInTheDocument();
+  });
+
+  it('when a value cannot be read, then the field says why in words and the card does not crash', async () => {
+    render(<RcCornerCard />);
+    const input = await typeInto('Resistance (Ω)', 'lots');
+    expect(input).toHaveAttribute('aria-invalid', 'true');
+    expect(input).toHaveAccessibleDescription(/'lots' is not a value Gridleak can read/);
+    expect(screen.getByText(/Write it like 4\.7k, 4k7, 3n3/)).toBeInTheDocument();
+    expect(screen.getByText('Correct the value marked above to see the result.')).toBeInTheDocument();
+    expect(screen.queryByText(/Hz$/)).not.toBeInTheDocument();
+  });
+
+  it('when a value in the wrong unit is typed, then the library’s reason is shown beside the field', async () => {
+    render(<RcCornerCard />);
+    const input = await typeInto('Capacitance (F)', '250 V');
+    expect(input).toHaveAccessibleDescription(/it is in V but F was expected here/);
+  });
+
+  it('when the library refuses the numbers, then its reason is shown instead of a result', async () => {
+    render(<RcCornerCard />);
+    await typeInto('Resistance (Ω)', '-15k');
+    expect(screen.getByText(/resistance \(Ω\) must be a number above zero/)).toBeInTheDocument();
+  });
+});

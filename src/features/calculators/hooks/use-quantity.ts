@@ -1,0 +1,14 @@
+import { useMemo, useState } from 'react';
+import { readQuantity } from '../lib/read-quantity';
+import type { ExpectedUnit, QuantityReading } from '../lib/read-quantity';
+
+/** A calculator field's text and what it reads as ({ value, error }), re-read on every keystroke. */
+export interface QuantityField extends QuantityReading {
+  setText: (text: string) => void;
+}
+
+export function useQuantity(initial: string, expectUnit?: ExpectedUnit): QuantityField {
+  const [text, setText] = useState(initial);
+  const reading = useMemo(() => readQuantity(text, expectUnit), [text, expectUnit]);
+  return { ...reading, setText };
+}
