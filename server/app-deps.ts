@@ -22,5 +22,6 @@ export interface AppDeps {
     /** GET /api/dev/mail is mounted (development and test only). */
     devMail: boolean;
     throttle: ThrottleConfig;
+    uploads: { maxBytes: number; maxPixels: number };
   };
 }

@@ -10,6 +10,7 @@ import { healthRoutes } from './features/health/health.routes';
 import { invitationsRoutes } from './features/invitations/invitations.routes';
 import { membersRoutes } from './features/members/members.routes';
 import { metaRoutes } from './features/meta/meta.routes';
+import { photosRoutes } from './features/photos/photos.routes';
 import { restorationsRoutes } from './features/restorations/restorations.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { requireSameOrigin } from './http/same-origin';
@@ -51,6 +52,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(restorationsRoutes(deps));
   api.use(membersRoutes(deps));
   api.use(invitationsRoutes(deps));
+  api.use(photosRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

@@ -25,6 +25,8 @@ const envSchema = z
     DEMO: z.enum(['true', 'false']).optional(),
     GRIDLEAK_DATA_DIR: z.string().optional(),
     GRIDLEAK_PORT_BASE: z.coerce.number().int().min(1024).max(65000).default(54329),
+    UPLOAD_MAX_MB: z.coerce.number().positive().max(2048).default(40),
+    UPLOAD_MAX_MEGAPIXELS: z.coerce.number().positive().max(1000).default(100),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   })
   .superRefine((env, ctx) => {
@@ -74,3 +76,8 @@ export const isDemo = (env: Env) => (env.DEMO ? env.DEMO === 'true' : env.NODE_E
  * without one), so local sessions survive restarts and every local instance agrees.
  */
 export const sessionSecret = (env: Env) => env.SESSION_SECRET ?? 'gridleak-local-development-secret-not-for-production';
+
+export const uploadLimits = (env: Env) => ({
+  maxBytes: Math.round(env.UPLOAD_MAX_MB * 1024 * 1024),
+  maxPixels: Math.round(env.UPLOAD_MAX_MEGAPIXELS * 1e6),
+});

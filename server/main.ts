@@ -9,7 +9,7 @@ import { connectDatabase } from './db/client';
 import { applyMigrations } from './db/migrate';
 import { demoPeople, DEMO_PASSWORD } from './db/seed/demo-scenario';
 import { seedDemo } from './db/seed/seed-demo';
-import { EnvError, isDemo, parseEnv, publicOrigin, sessionSecret } from './env';
+import { EnvError, isDemo, parseEnv, publicOrigin, sessionSecret, uploadLimits } from './env';
 import { defaultThrottle } from './features/auth/throttle';
 import { LocalServiceError } from './local-services/run-command';
 import { createMailer } from './mail';
@@ -46,7 +46,8 @@ async function main() {
       storage,
       mailer,
       logger,
-      config: { publicOrigin: origin, sessionSecret: sessionSecret(env), demo, devMail: env.NODE_ENV !== 'production', throttle: defaultThrottle },
+      config: { publicOrigin: origin, sessionSecret: sessionSecret(env), demo, devMail: env.NODE_ENV !== 'production', throttle: defaultThrottle,
+        uploads: uploadLimits(env) },
     },
     { trustProxy: env.TRUST_PROXY, relaxedCsp: dev },
   );

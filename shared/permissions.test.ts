@@ -8,6 +8,12 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'restoration.delete': { technician: true, mentor: false, owner: false },
   'members.view': { technician: true, mentor: true, owner: true },
   'members.manage': { technician: true, mentor: false, owner: false },
+  // Without context a photo counts as not shared, so owners may not see it.
+  'photos.view': { technician: true, mentor: true, owner: false },
+  'photos.upload': { technician: true, mentor: false, owner: false },
+  'photos.edit': { technician: true, mentor: false, owner: false },
+  'photos.delete': { technician: true, mentor: false, owner: false },
+  'photos.original': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {
@@ -16,6 +22,11 @@ describe('can()', () => {
       it(`when a ${role} asks for ${action}, then the answer is ${table[action][role]}`, () => {
         expect(can(role, action)).toBe(table[action][role]);
       });
+
+  it('when a photo is shared with the owner, then the owner may see it', () => {
+    expect(can('owner', 'photos.view', { ownerVisible: true })).toBe(true);
+    expect(can('owner', 'photos.view', { ownerVisible: false })).toBe(false);
+  });
 
   it('when the person holds no role, then nothing is allowed', () => {
     for (const action of actions) expect(can(null, action)).toBe(false);

@@ -13,12 +13,19 @@ export const actions = [
   'restoration.delete',
   'members.view',
   'members.manage',
+  'photos.view',
+  'photos.upload',
+  'photos.edit',
+  'photos.delete',
+  'photos.original',
 ] as const;
 export type Action = (typeof actions)[number];
 
 /** Facts about the thing acted on that some rules need (e.g. who created a finding). */
 export interface PolicyContext {
   isAuthor?: boolean;
+  /** The thing is marked as shared with the owner. */
+  ownerVisible?: boolean;
 }
 
 const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
@@ -28,6 +35,13 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   // Everyone on a restoration may see who else works on it; only technicians invite and change roles.
   'members.view': () => true,
   'members.manage': (role) => role === 'technician',
+  // Owners see only what is shared with them; everyone else on the restoration sees every photo.
+  'photos.view': (role, { ownerVisible }) => role !== 'owner' || ownerVisible === true,
+  'photos.upload': (role) => role === 'technician',
+  'photos.edit': (role) => role === 'technician',
+  'photos.delete': (role) => role === 'technician',
+  // Untouched originals may carry GPS and camera data: technicians only.
+  'photos.original': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {

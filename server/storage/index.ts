@@ -2,6 +2,7 @@ import {
   DeleteObjectCommand,
   GetObjectCommand,
   HeadBucketCommand,
+  ListObjectsV2Command,
   PutObjectCommand,
   S3Client,
 } from '@aws-sdk/client-s3';
@@ -19,8 +20,11 @@ export interface StorageConfig {
 /** The one module that talks to object storage. The database keeps keys, never bytes or URLs. */
 export interface Storage {
   putObject(key: string, body: Buffer | Readable, contentType: string, contentLength?: number): Promise<void>;
-  getSignedUrl(key: string, expiresInSeconds?: number): Promise<string>;
+  /** A short-lived GET URL; `downloadName` makes the browser save it under that name. */
+  getSignedUrl(key: string, options?: { expiresInSeconds?: number; downloadName?: string }): Promise<string>;
+  getObject(key: string): Promise<Buffer>;
   deleteObject(key: string): Promise<void>;
+  listObjects(prefix: string): AsyncGenerator<{ key: string; lastModified: Date }>;
   probe(): Promise<boolean>;
 }
 
@@ -39,9 +43,30 @@ export function createStorage(config: StorageConfig): Storage {
     async putObject(key, body, contentType, contentLength) {
       await client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: contentLength }));
     },
-    getSignedUrl: (key, expiresIn = 300) => presign(client, new GetObjectCommand({ Bucket, Key: key }), { expiresIn }),
+    getSignedUrl: (key, { expiresInSeconds = 300, downloadName } = {}) =>
+      presign(
+        client,
+        new GetObjectCommand({
+          Bucket,
+          Key: key,
+          ResponseContentDisposition: downloadName ? `attachment; filename="${downloadName.replace(/[^\w.-]/g, '_')}"` : undefined,
+        }),
+        { expiresIn: expiresInSeconds },
+      ),
+    async getObject(key) {
+      const res = await client.send(new GetObjectCommand({ Bucket, Key: key }));
+      return Buffer.from(await res.Body!.transformToByteArray());
+    },
     async deleteObject(key) {
       await client.send(new DeleteObjectCommand({ Bucket, Key: key }));
+    },
+    async *listObjects(prefix) {
+      let ContinuationToken: string | undefined;
+      do {
+        const page = await client.send(new ListObjectsV2Command({ Bucket, Prefix: prefix, ContinuationToken }));
+        for (const o of page.Contents ?? []) if (o.Key) yield { key: o.Key, lastModified: o.LastModified ?? new Date(0) };
+        ContinuationToken = page.IsTruncated ? page.NextContinuationToken : undefined;
+      } while (ContinuationToken);
     },
     async probe() {
       try {

@@ -4,3 +4,4 @@ export * from './memberships';
 export * from './dev-mails';
 export * from './auth';
 export * from './invitations';
+export * from './photos';

@@ -1,0 +1,135 @@
+import { BAND_PAINT, resistorBands } from './colour-code';
+import type { Tolerance } from './colour-code';
+import { turnedRectD } from './chassis-parts';
+import type { Drawn } from './chassis-parts';
+import { angleOf, distance, f, midpoint, place, shade, text } from './svg-kit';
+import type { Pt } from './svg-kit';
+
+/** Where an axial part's body sits: between its lead ends, lifted sideways by `lift` px. */
+export function bodyCentre(a: Pt, b: Pt, lift = 0): Pt {
+  const len = distance(a, b) || 1;
+  const m = midpoint(a, b);
+  return [m[0] - ((b[1] - a[1]) / len) * lift, m[1] + ((b[0] - a[0]) / len) * lift];
+}
+
+function lead(from: Pt, to: Pt): string {
+  const d = `M${f(from[0])} ${f(from[1])} L${f(to[0])} ${f(to[1])}`;
+  return `<path d="${d}" stroke="#55574f" stroke-width="4.6" stroke-linecap="round"/><path d="${d}" stroke="#c9cbc4" stroke-width="2.8" stroke-linecap="round"/>`;
+}
+
+/**
+ * An axial part: leads from a and b to the ends of a body of length `len` drawn by
+ * `drawBody` along the local x axis, centred on the origin, never upside down.
+ */
+function axial(a: Pt, b: Pt, lift: number, len: number, dia: number, drawBody: (len: number) => string): Drawn {
+  const c = bodyCentre(a, b, lift);
+  let turn = angleOf(a, b);
+  if (turn > 95 || turn < -85) turn += 180;
+  const rad = (turn * Math.PI) / 180;
+  const endL: Pt = [c[0] - (Math.cos(rad) * len) / 2, c[1] - (Math.sin(rad) * len) / 2];
+  const endR: Pt = [c[0] + (Math.cos(rad) * len) / 2, c[1] + (Math.sin(rad) * len) / 2];
+  const [nearA, nearB] = distance(a, endL) < distance(a, endR) ? [endL, endR] : [endR, endL];
+  const body = lead(a, nearA) + lead(b, nearB) + `<g transform="${place(c[0], c[1], turn)}">${drawBody(len)}</g>`;
+  return { body, shadow: [{ d: turnedRectD(c, turn, len, dia) }] };
+}
+
+function tube(len: number, dia: number, fill: string, rx = dia / 2): string {
+  return `<rect x="${f(-len / 2)}" y="${f(-dia / 2)}" width="${f(len)}" height="${f(dia)}" rx="${f(rx)}" fill="${fill}"/>`;
+}
+
+const CYL = (len: number, dia: number, rx = dia / 2): string =>
+  `<rect x="${f(-len / 2)}" y="${f(-dia / 2)}" width="${f(len)}" height="${f(dia)}" rx="${f(rx)}" fill="url(#cyl)" stroke="#000" stroke-opacity="0.45" stroke-width="1.2"/>`;
+
+export interface ResistorSpec { a: Pt; b: Pt; lift?: number; ohms: number; tolerance?: Tolerance; watts?: 0.5 | 1; charred?: boolean; }
+
+/** A carbon resistor whose bands are worked out from its value. */
+export function resistor(r: ResistorSpec): Drawn {
+  const big = r.watts === 1;
+  const len = big ? 104 : 84;
+  const dia = big ? 30 : 25;
+  const bands = resistorBands(r.ohms, r.tolerance ?? 5);
+  const bodyColour = r.charred ? '#7a5a3a' : '#d6bd8c';
+  const bw = len * 0.085;
+  const at = [0.17, 0.31, 0.45, 0.8];
+  const draw = (l: number): string => {
+    let s = tube(l, dia, bodyColour, dia * 0.42);
+    bands.forEach((band, i) => {
+      const paint = r.charred ? shade(BAND_PAINT[band], 0.85) : BAND_PAINT[band];
+      s += `<rect x="${f(-l / 2 + l * (at[i] ?? 0) - bw / 2)}" y="${f(-dia / 2 + 0.5)}" width="${f(bw)}" height="${f(dia - 1)}" fill="${paint}"/>`;
+    });
+    if (r.charred) {
+      // Blackened between the multiplier and tolerance bands, where it ran hottest.
+      s += `<ellipse cx="${f(l * 0.11)}" cy="${f(dia * 0.05)}" rx="${f(l * 0.13)}" ry="${f(dia * 0.56)}" fill="#0d0906" fill-opacity="0.85"/>` +
+        `<rect x="${f(-l / 2)}" y="${f(-dia / 2)}" width="${f(l)}" height="${f(dia)}" rx="${f(dia * 0.42)}" fill="#1a0f08" fill-opacity="0.22"/>` +
+        `<path d="M${f(-l * 0.1)} ${f(-dia / 2)} l6 9 l-5 7 l7 9" stroke="#0c0806" stroke-width="2" fill="none"/>` +
+        `<path d="M${f(l * 0.22)} ${f(dia / 2)} l-4 -8 l6 -6" stroke="#0c0806" stroke-width="2" fill="none"/>`;
+    }
+    return s + CYL(l, dia, dia * 0.42);
+  };
+  return axial(r.a, r.b, r.lift ?? 0, len, dia, draw);
+}
+
+export interface WaxCapSpec { a: Pt; b: Pt; lift?: number; print: string; colour?: string; len?: number; }
+
+/** A wax-dipped paper tubular, its outer-foil end marked with a black ring. */
+export function waxCap(c: WaxCapSpec): Drawn {
+  const len = c.len ?? 150;
+  const dia = 34;
+  const wax = c.colour ?? '#d6b86a';
+  const draw = (l: number): string =>
+    tube(l, dia, wax) +
+    `<ellipse cx="${f(-l / 2 + 8)}" cy="0" rx="12" ry="${f(dia / 2 + 2)}" fill="${shade(wax, 0.8)}"/>` +
+    `<ellipse cx="${f(l / 2 - 8)}" cy="0" rx="12" ry="${f(dia / 2 + 2)}" fill="${shade(wax, 0.8)}"/>` +
+    `<rect x="${f(-l / 2 + 24)}" y="${f(-dia / 2)}" width="7" height="${dia}" fill="#1d1a16"/>` +
+    text(6, 5, c.print, { size: 15, fill: '#2a2218', family: 'condensed', weight: 'bold' }) + CYL(l, dia);
+  return axial(c.a, c.b, c.lift ?? 0, len, dia, draw);
+}
+
+export interface ElectrolyticSpec { a: Pt; b: Pt; lift?: number; lines: readonly [string, string]; len: number; dia: number; bulging?: boolean; sleeve?: string; clip?: boolean; }
+
+/** A tubular electrolytic in a printed sleeve; a failing one has a domed, weeping end. */
+export function tubularElectrolytic(e: ElectrolyticSpec): Drawn {
+  const sleeve = e.sleeve ?? '#264a78';
+  const draw = (l: number): string => {
+    const d = e.dia;
+    let s = '';
+    if (e.bulging) {
+      // The end has domed out past the can's diameter and electrolyte has crusted on it.
+      s += `<ellipse cx="${f(l / 2 - 4)}" cy="0" rx="${f(d * 0.5)}" ry="${f(d * 0.66)}" fill="url(#aluTop)" stroke="#4a4e51" stroke-width="1.5"/>` +
+        `<ellipse cx="${f(l / 2 + d * 0.18)}" cy="${f(d * 0.22)}" rx="${f(d * 0.3)}" ry="${f(d * 0.26)}" fill="#8a5a22" fill-opacity="0.85"/>` +
+        `<ellipse cx="${f(l / 2 + d * 0.05)}" cy="${f(d * 0.62)}" rx="${f(d * 0.5)}" ry="${f(d * 0.16)}" fill="#6e4516" fill-opacity="0.5"/>`;
+    }
+    s += tube(l, d, '#bfc3c5', 8) + `<rect x="${f(-l / 2 + 10)}" y="${f(-d / 2)}" width="${f(l - 20)}" height="${f(d)}" fill="${sleeve}"/>` +
+      text(-l * 0.08, -2, e.lines[0], { size: d * 0.3, fill: '#f3efe2', weight: 'bold', family: 'condensed' }) +
+      text(-l * 0.08, d * 0.3, e.lines[1], { size: d * 0.22, fill: '#f3efe2', family: 'condensed' }) +
+      text(l / 2 - 26, 6, '+', { size: d * 0.4, fill: '#f3efe2', weight: 'bold' }) + CYL(l, d, 8);
+    if (e.bulging) {
+      s += `<path d="M${f(l / 2 - 14)} ${f(-d / 2)} q-10 ${f(d * 0.4)} 2 ${f(d * 0.55)} q-8 ${f(d * 0.2)} -2 ${f(d * 0.45)}" stroke="#16120c" stroke-width="2.2" fill="none"/>` +
+        `<ellipse cx="${f(l / 2 + d * 0.12)}" cy="${f(-d * 0.28)}" rx="${f(d * 0.12)}" ry="${f(d * 0.18)}" fill="#fff" fill-opacity="0.6"/>`;
+    }
+    if (e.clip) {
+      s += `<rect x="${f(-l * 0.42)}" y="${f(-d / 2 - 14)}" width="22" height="${f(d + 28)}" rx="3" fill="url(#steel)" stroke="#3d3f41" stroke-width="1.2"/>` +
+        `<circle cx="${f(-l * 0.42 + 11)}" cy="${f(-d / 2 - 7)}" r="5" fill="#55585a"/><circle cx="${f(-l * 0.42 + 11)}" cy="${f(d / 2 + 7)}" r="5" fill="#55585a"/>`;
+    }
+    return s;
+  };
+  return axial(e.a, e.b, e.lift ?? 0, e.len, e.dia, draw);
+}
+
+/** A small moulded mica, flat and reddish brown, value printed in pF. */
+export function micaCap(a: Pt, b: Pt, print: string, lift = 0): Drawn {
+  const draw = (l: number): string =>
+    `<rect x="${f(-l / 2)}" y="-15" width="${f(l)}" height="30" rx="4" fill="#7e3526" stroke="#3a150e" stroke-width="1.5"/>` +
+    `<rect x="${f(-l / 2 + 3)}" y="-12" width="${f(l - 6)}" height="8" rx="3" fill="#fff" fill-opacity="0.18"/>` +
+    text(0, 6, print, { size: 13, fill: '#f1dcc8', family: 'condensed', weight: 'bold' });
+  return axial(a, b, lift, 50, 30, draw);
+}
+
+/** A ceramic disc, standing on its leads. */
+export function ceramicDisc(a: Pt, b: Pt, print: string, lift = 0): Drawn {
+  const draw = (): string =>
+    `<ellipse rx="22" ry="20" fill="#c4773b" stroke="#5a2f12" stroke-width="1.5"/>` +
+    `<ellipse cx="-6" cy="-7" rx="9" ry="5" fill="#fff" fill-opacity="0.3"/>` +
+    text(0, 5, print, { size: 13, fill: '#2a160a', family: 'condensed', weight: 'bold' });
+  return axial(a, b, lift, 44, 40, draw);
+}

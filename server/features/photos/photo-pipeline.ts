@@ -1,0 +1,79 @@
+import exifReader from 'exif-reader';
+import pLimit from 'p-limit';
+import sharp, { type Metadata } from 'sharp';
+import { HttpError } from '../../http/errors';
+
+/** Formats accepted, decided from the content (sharp's own sniffing), never from the file name. */
+const ACCEPTED: Record<string, string> = { jpeg: 'image/jpeg', png: 'image/png', webp: 'image/webp', heif: 'image/heif' };
+export const DISPLAY_PX = 2560;
+export const THUMB_PX = 400;
+
+export interface PipelineLimits {
+  /** Decoded pixels allowed (width × height), against decompression bombs. */
+  maxPixels: number;
+}
+
+export interface ProcessedPhoto {
+  contentType: string;
+  width: number;
+  height: number;
+  takenAt: Date | null;
+  display: Buffer;
+  thumb: Buffer;
+}
+
+// libvips' operation cache only helps repeated work on the same image; uploads never repeat.
+sharp.cache(false);
+/** At most two decodes at a time per instance: a burst of uploads queues instead of exhausting memory. */
+const decodeSlots = pLimit(2);
+
+const unsupported = () =>
+  new HttpError(415, 'unsupported_type', 'That file is not a photo Gridleak can read: send JPEG, PNG, WebP or AVIF (HEIC may need exporting as JPEG).');
+
+/** Checks, orients and resizes one uploaded image; served variants carry no metadata (GPS above all). */
+export function processPhoto(path: string, limits: PipelineLimits): Promise<ProcessedPhoto> {
+  return decodeSlots(async () => {
+    const open = () => sharp(path, { limitInputPixels: limits.maxPixels, failOn: 'error', sequentialRead: true });
+    let meta: Metadata;
+    try {
+      meta = await sharp(path, { limitInputPixels: false }).metadata();
+    } catch {
+      throw unsupported();
+    }
+    const contentType = ACCEPTED[meta.format ?? ''];
+    if (!contentType || !meta.width || !meta.height) throw unsupported();
+    if (meta.width * meta.height > limits.maxPixels)
+      throw new HttpError(413, 'too_large', `The image is ${meta.width}×${meta.height} pixels; the limit is ${Math.round(limits.maxPixels / 1e6)} megapixels.`);
+    const rotated = (meta.orientation ?? 1) >= 5;
+    try {
+      const display = await open()
+        .autoOrient()
+        .resize({ width: DISPLAY_PX, height: DISPLAY_PX, fit: 'inside', withoutEnlargement: true })
+        .webp({ quality: 82 })
+        .toBuffer();
+      // The thumbnail comes from the display image: far less to decode than the original.
+      const thumb = await sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer();
+      return {
+        contentType: meta.format === 'heif' && meta.compression === 'av1' ? 'image/avif' : contentType,
+        width: rotated ? meta.height : meta.width,
+        height: rotated ? meta.width : meta.height,
+        takenAt: captureTime(meta.exif),
+        display,
+        thumb,
+      };
+    } catch {
+      throw new HttpError(400, 'damaged_image', 'The image is damaged or incomplete; try sending it again, or export it afresh.');
+    }
+  });
+}
+
+function captureTime(exif: Buffer | undefined): Date | null {
+  if (!exif) return null;
+  try {
+    const tags = exifReader(exif) as { Photo?: { DateTimeOriginal?: Date }; Image?: { DateTime?: Date } };
+    const when = tags.Photo?.DateTimeOriginal ?? tags.Image?.DateTime;
+    return when instanceof Date && !Number.isNaN(when.getTime()) ? when : null;
+  } catch {
+    return null;
+  }
+}

@@ -1,0 +1,43 @@
+import { asc, eq, inArray } from 'drizzle-orm';
+import type { Database } from '../../db/client';
+import { photos, users } from '../../db/schema';
+
+export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null };
+type NewPhoto = typeof photos.$inferInsert;
+
+const columns = { photo: photos, uploadedBy: users.name };
+
+export function photosRepo(db: Database) {
+  const select = () => db.select(columns).from(photos).leftJoin(users, eq(users.id, photos.uploadedById));
+  const flat = (r: { photo: typeof photos.$inferSelect; uploadedBy: string | null }): PhotoRow => ({ ...r.photo, uploadedBy: r.uploadedBy });
+  return {
+    async list(restorationId: number): Promise<PhotoRow[]> {
+      return (await select().where(eq(photos.restorationId, restorationId)).orderBy(asc(photos.createdAt), asc(photos.id))).map(flat);
+    },
+    async find(id: number): Promise<PhotoRow | undefined> {
+      const [row] = await select().where(eq(photos.id, id));
+      return row && flat(row);
+    },
+    async restorationOf(id: number): Promise<number | undefined> {
+      const [row] = await db.select({ restorationId: photos.restorationId }).from(photos).where(eq(photos.id, id));
+      return row?.restorationId;
+    },
+    async insert(values: NewPhoto) {
+      const [row] = await db.insert(photos).values(values).returning({ id: photos.id });
+      return row!.id;
+    },
+    async update(id: number, values: Partial<NewPhoto>) {
+      await db.update(photos).set(values).where(eq(photos.id, id));
+    },
+    async remove(id: number) {
+      const [row] = await db.delete(photos).where(eq(photos.id, id)).returning({ storageKey: photos.storageKey });
+      return row?.storageKey;
+    },
+    /** Which of these storage keys still have a row. */
+    async existingKeys(keys: string[]): Promise<Set<string>> {
+      if (!keys.length) return new Set();
+      const rows = await db.select({ key: photos.storageKey }).from(photos).where(inArray(photos.storageKey, keys));
+      return new Set(rows.map((r) => r.key));
+    },
+  };
+}

@@ -1,0 +1,88 @@
+import { randomUUID } from 'node:crypto';
+import { createReadStream } from 'node:fs';
+import { can, type Action, type Role } from '../../../shared/permissions';
+import type { Photo, PhotoPatch } from '../../../shared/schemas/photos';
+import { photoUploadFieldsSchema } from '../../../shared/schemas/photos';
+import type { AppDeps } from '../../app-deps';
+import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import { deletePhotoObjects, photoKeys } from './photo-objects';
+import { processPhoto } from './photo-pipeline';
+import { photosRepo, type PhotoRow } from './photos.repo';
+
+const extension: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'image/heif': 'heic', 'image/avif': 'avif' };
+
+export function photosService({ db, storage, config }: AppDeps) {
+  const repo = photosRepo(db);
+
+  async function toPhoto(row: PhotoRow, role: Role): Promise<Photo> {
+    const keys = photoKeys(row.storageKey);
+    const [thumb, display, original] = await Promise.all([
+      storage.getSignedUrl(keys.thumb),
+      storage.getSignedUrl(keys.display),
+      can(role, 'photos.original') ? storage.getSignedUrl(keys.original, { downloadName: `photo-${row.id}.${extension[row.contentType] ?? 'img'}` }) : undefined,
+    ]);
+    return {
+      id: row.id, restorationId: row.restorationId, view: row.view, phase: row.phase, caption: row.caption,
+      ownerVisible: row.ownerVisible, width: row.width, height: row.height, takenAt: row.takenAt?.toISOString() ?? null,
+      uploadedAt: row.createdAt.toISOString(), uploadedBy: row.uploadedBy, contentType: row.contentType, sizeBytes: row.sizeBytes,
+      urls: original ? { thumb, display, original } : { thumb, display },
+    };
+  }
+
+  /**
+   * A photo the caller may see and act on: 404 when they may not see it (an owner is never told that an
+   * unshared photo exists), 403 when they see it but the action is not theirs.
+   */
+  async function visible(id: number, role: Role, action?: Action): Promise<PhotoRow> {
+    const row = await repo.find(id);
+    if (!row || !can(role, 'photos.view', { ownerVisible: row.ownerVisible })) throw new NotFoundError();
+    if (action && !can(role, action)) throw new ForbiddenError();
+    return row;
+  }
+
+  return {
+    async list(restorationId: number, role: Role): Promise<Photo[]> {
+      const rows = (await repo.list(restorationId)).filter((r) => can(role, 'photos.view', { ownerVisible: r.ownerVisible }));
+      return Promise.all(rows.map((r) => toPhoto(r, role)));
+    },
+    async get(id: number, role: Role) {
+      return toPhoto(await visible(id, role), role);
+    },
+    /**
+     * Checks and stores one uploaded file. Objects go up first, the row last; on any failure the
+     * objects already stored are deleted, so a failed upload leaves neither.
+     */
+    async ingest(restorationId: number, file: { path: string; size: number }, rawFields: Record<string, unknown>, uploadedById: number | null) {
+      const fields = photoUploadFieldsSchema.safeParse(rawFields);
+      if (!fields.success) throw new BadRequestError(fields.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
+      const processed = await processPhoto(file.path, { maxPixels: config.uploads.maxPixels });
+      const storageKey = `${restorationId}/${randomUUID()}`;
+      const keys = photoKeys(storageKey);
+      try {
+        await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size);
+        await storage.putObject(keys.display, processed.display, 'image/webp');
+        await storage.putObject(keys.thumb, processed.thumb, 'image/webp');
+        const id = await repo.insert({
+          restorationId, storageKey, ...fields.data, width: processed.width, height: processed.height,
+          takenAt: processed.takenAt, contentType: processed.contentType, sizeBytes: file.size, uploadedById,
+        });
+        return id;
+      } catch (err) {
+        await deletePhotoObjects(storage, storageKey).catch(() => {});
+        throw err;
+      }
+    },
+    async update(id: number, patch: PhotoPatch, role: Role) {
+      await visible(id, role, 'photos.edit');
+      await repo.update(id, patch);
+      return toPhoto((await repo.find(id))!, role);
+    },
+    /** Deletes the row, then its objects; an object left by a failure here is caught by the sweep. */
+    async remove(id: number, role: Role) {
+      await visible(id, role, 'photos.delete');
+      const storageKey = await repo.remove(id);
+      if (storageKey) await deletePhotoObjects(storage, storageKey).catch(() => {});
+    },
+    restorationOf: (id: number) => repo.restorationOf(id),
+  };
+}
