@@ -9,6 +9,8 @@ import { connectDatabase } from './db/client';
 import { applyMigrations } from './db/migrate';
 import { demoPeople, DEMO_PASSWORD } from './db/seed/demo-scenario';
 import { seedDemo } from './db/seed/seed-demo';
+import { seedDemoPhotos } from './features/demo/seed-demo-photos';
+import { scheduleSweep } from './features/photos/schedule-sweep';
 import { EnvError, isDemo, parseEnv, publicOrigin, sessionSecret, uploadLimits } from './env';
 import { defaultThrottle } from './features/auth/throttle';
 import { LocalServiceError } from './local-services/run-command';
@@ -33,9 +35,14 @@ async function main() {
   const handle = connectDatabase(databaseUrl);
   stops.push({ name: 'database pool', stop: () => handle.pool.end() });
   const demo = isDemo(env);
-  if (demo) await seedDemo(handle.db);
   const storage = createStorage(await resolveStorage(env, root, stops));
   const mailer = createMailer(await resolveMail(env, handle, stops), env.MAIL_FROM);
+  const uploads = uploadLimits(env);
+  if (demo) {
+    await seedDemo(handle.db);
+    await seedDemoPhotos({ db: handle.db, storage, config: { uploads } });
+  }
+  scheduleSweep(handle.db, storage, logger);
 
   const server = http.createServer();
   const origin = publicOrigin(env, env.PORT);
@@ -47,7 +54,7 @@ async function main() {
       mailer,
       logger,
       config: { publicOrigin: origin, sessionSecret: sessionSecret(env), demo, devMail: env.NODE_ENV !== 'production', throttle: defaultThrottle,
-        uploads: uploadLimits(env) },
+        uploads },
     },
     { trustProxy: env.TRUST_PROXY, relaxedCsp: dev },
   );

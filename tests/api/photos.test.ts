@@ -4,6 +4,7 @@ import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { photos } from '../../server/db/schema';
 import { photoKeys } from '../../server/features/photos/photo-objects';
+import { sweepOrphanedObjects } from '../../server/features/photos/sweep-orphans';
 import { jpegWithGpsAndOrientation6, pngClaiming, twoToneJpeg } from '../factories/images';
 import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
@@ -87,6 +88,20 @@ describe('uploading photos', () => {
     const badView = await upload(tech, restorationId, await twoToneJpeg(), 'x.jpg', { view: 'sideways' });
     expect(badView.status).toBe(400);
     expect([await rowCount(), await objectCount()]).toEqual([rows, objects]);
+  });
+});
+
+describe('the orphan sweep', () => {
+  it('when objects have no row, then the sweep removes them and leaves every photo that has one', async () => {
+    const kept = (await upload(tech, restorationId, await twoToneJpeg(), 'kept.jpg')).body;
+    await t.deps.storage.putObject('photos/999/orphan-uuid/original', Buffer.from('left behind by a crash'), 'image/jpeg');
+    const before = await objectCount();
+    // Everything counts as "older than a day" here, so only the row check protects the objects.
+    expect(await sweepOrphanedObjects(t.db, t.deps.storage, -1000)).toBe(1);
+    expect(await objectCount()).toBe(before - 1);
+    const image = await fetch((await tech.get(`/api/photos/${kept.id}`)).body.urls.thumb);
+    expect(image.status).toBe(200);
+    await image.arrayBuffer();
   });
 });
 

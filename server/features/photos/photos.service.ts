@@ -11,7 +11,9 @@ import { photosRepo, type PhotoRow } from './photos.repo';
 
 const extension: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'image/heif': 'heic', 'image/avif': 'avif' };
 
-export function photosService({ db, storage, config }: AppDeps) {
+export type PhotosDeps = Pick<AppDeps, 'db' | 'storage'> & { config: Pick<AppDeps['config'], 'uploads'> };
+
+export function photosService({ db, storage, config }: PhotosDeps) {
   const repo = photosRepo(db);
 
   async function toPhoto(row: PhotoRow, role: Role): Promise<Photo> {

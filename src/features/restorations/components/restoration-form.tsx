@@ -20,15 +20,18 @@ export function RestorationForm({
   submitting,
   submitLabel,
   serverError,
+  initial,
 }: {
   onSubmit: (values: FormOutput) => void;
   submitting: boolean;
   submitLabel: string;
   serverError?: string;
+  /** Values to edit; a new intake starts from today's date. */
+  initial?: Partial<FormInput>;
 }) {
   const { register, handleSubmit, formState } = useForm<FormInput, unknown, FormOutput>({
     resolver: zodResolver(restorationInputSchema),
-    defaultValues: { equipmentKind: 'radio', workLevel: 'repair', receivedOn: new Date().toISOString().slice(0, 10) },
+    defaultValues: initial ?? { equipmentKind: 'radio', workLevel: 'repair', receivedOn: new Date().toISOString().slice(0, 10) },
   });
   const e = formState.errors;
   return (
