@@ -19,7 +19,7 @@ const peakRssMb = (pid: number) => Number(/VmHWM:\s+(\d+)/.exec(readFileSync(`/p
 
 async function photoLikeJpeg(file: string) {
   // Smooth gradients with fine grain: compresses like a real photo (a few MB), not like noise or flat colour.
-  const noise = await sharp({ create: { width: 6000, height: 4000, channels: 3, noise: { type: 'gaussian', mean: 128, sigma: 40 } } })
+  const noise = await sharp({ create: { width: 6000, height: 4000, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 40 } } })
     .blur(1.2).jpeg().toBuffer();
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="6000" height="4000"><defs><linearGradient id="g"><stop offset="0" stop-color="#6d6a63"/><stop offset="1" stop-color="#c9c2b3"/></linearGradient></defs><rect width="6000" height="4000" fill="url(#g)"/><circle cx="3000" cy="2000" r="900" fill="#3a2a1a"/></svg>`;
   const out = await sharp(Buffer.from(svg)).composite([{ input: noise, blend: 'soft-light' }]).jpeg({ quality: 88 }).toBuffer();
