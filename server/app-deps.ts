@@ -23,5 +23,7 @@ export interface AppDeps {
     devMail: boolean;
     throttle: ThrottleConfig;
     uploads: { maxBytes: number; maxPixels: number };
+    /** A person gets at most one notification e-mail per this many seconds. */
+    notificationWindowSeconds: number;
   };
 }

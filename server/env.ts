@@ -27,6 +27,7 @@ const envSchema = z
     GRIDLEAK_PORT_BASE: z.coerce.number().int().min(1024).max(65000).default(54329),
     UPLOAD_MAX_MB: z.coerce.number().positive().max(2048).default(40),
     UPLOAD_MAX_MEGAPIXELS: z.coerce.number().positive().max(1000).default(100),
+    NOTIFICATION_WINDOW_SECONDS: z.coerce.number().int().min(0).max(86400).default(180),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   })
   .superRefine((env, ctx) => {

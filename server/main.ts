@@ -2,7 +2,8 @@ import http from 'node:http';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { pino } from 'pino';
-import { createApp } from './app';
+import { createApp, type AppDeps } from './app';
+import { scheduleNotificationMail } from './features/notifications/schedule-mail';
 import { buildClientIfStale } from './client-serving/build-if-stale';
 import { serveBuiltClient, serveViteDev } from './client-serving/serve-client';
 import { connectDatabase } from './db/client';
@@ -46,18 +47,18 @@ async function main() {
 
   const server = http.createServer();
   const origin = publicOrigin(env, env.PORT);
-  const app = createApp(
-    {
+  const deps: AppDeps = {
       db: handle.db,
       pool: handle.pool,
       storage,
       mailer,
       logger,
       config: { publicOrigin: origin, sessionSecret: sessionSecret(env), demo, devMail: env.NODE_ENV !== 'production', throttle: defaultThrottle,
-        uploads },
-    },
-    { trustProxy: env.TRUST_PROXY, relaxedCsp: dev },
-  );
+        uploads,
+        notificationWindowSeconds: env.NOTIFICATION_WINDOW_SECONDS },
+  };
+  const app = createApp(deps, { trustProxy: env.TRUST_PROXY, relaxedCsp: dev });
+  scheduleNotificationMail(deps);
   if (dev) stops.unshift({ name: 'Vite', stop: await serveViteDev(app, server, root) });
   else serveBuiltClient(app, await buildClientIfStale(root));
   server.on('request', app);

@@ -14,6 +14,17 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'photos.edit': { technician: true, mentor: false, owner: false },
   'photos.delete': { technician: true, mentor: false, owner: false },
   'photos.original': { technician: true, mentor: false, owner: false },
+  'findings.view': { technician: true, mentor: true, owner: false },
+  'findings.create': { technician: true, mentor: true, owner: false },
+  'findings.edit': { technician: true, mentor: false, owner: false },
+  'findings.delete': { technician: true, mentor: false, owner: false },
+  'findings.share': { technician: true, mentor: false, owner: false },
+  'findings.ask': { technician: true, mentor: false, owner: false },
+  'findings.resolve': { technician: true, mentor: true, owner: false },
+  'comments.create': { technician: true, mentor: true, owner: false },
+  'comments.internal': { technician: true, mentor: true, owner: false },
+  'comments.edit': { technician: false, mentor: false, owner: false },
+  'comments.delete': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {
@@ -26,6 +37,18 @@ describe('can()', () => {
   it('when a photo is shared with the owner, then the owner may see it', () => {
     expect(can('owner', 'photos.view', { ownerVisible: true })).toBe(true);
     expect(can('owner', 'photos.view', { ownerVisible: false })).toBe(false);
+  });
+
+  it('when a mentor placed a finding, then they may change it; others\' they may not', () => {
+    expect(can('mentor', 'findings.edit', { isAuthor: true })).toBe(true);
+    expect(can('mentor', 'findings.delete', { isAuthor: false })).toBe(false);
+    expect(can('owner', 'findings.edit', { isAuthor: true })).toBe(false);
+  });
+
+  it('when a comment is someone\'s own, then they may edit it; technicians may also delete others\'', () => {
+    expect(can('owner', 'comments.edit', { isAuthor: true })).toBe(true);
+    expect(can('technician', 'comments.edit', { isAuthor: false })).toBe(false);
+    expect(can('technician', 'comments.delete', { isAuthor: false })).toBe(true);
   });
 
   it('when the person holds no role, then nothing is allowed', () => {

@@ -18,6 +18,17 @@ export const actions = [
   'photos.edit',
   'photos.delete',
   'photos.original',
+  'findings.view',
+  'findings.create',
+  'findings.edit',
+  'findings.delete',
+  'findings.share',
+  'findings.ask',
+  'findings.resolve',
+  'comments.create',
+  'comments.internal',
+  'comments.edit',
+  'comments.delete',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -42,6 +53,19 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'photos.delete': (role) => role === 'technician',
   // Untouched originals may carry GPS and camera data: technicians only.
   'photos.original': (role) => role === 'technician',
+  'findings.view': (role, { ownerVisible }) => role !== 'owner' || ownerVisible === true,
+  // Mentors may mark a spot ("check this joint"); only technicians change what others placed.
+  'findings.create': (role) => role !== 'owner',
+  'findings.edit': (role, { isAuthor }) => role === 'technician' || (role === 'mentor' && isAuthor === true),
+  'findings.delete': (role, { isAuthor }) => role === 'technician' || (role === 'mentor' && isAuthor === true),
+  'findings.share': (role) => role === 'technician',
+  'findings.ask': (role) => role === 'technician',
+  'findings.resolve': (role) => role !== 'owner',
+  // Owners comment only on what is shared with them, and only in the shared thread.
+  'comments.create': (role, { ownerVisible }) => role !== 'owner' || ownerVisible === true,
+  'comments.internal': (role) => role !== 'owner',
+  'comments.edit': (_role, { isAuthor }) => isAuthor === true,
+  'comments.delete': (role, { isAuthor }) => isAuthor === true || role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {

@@ -3,6 +3,8 @@ import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { invitationsRepo } from '../../server/features/invitations/invitations.repo';
 import { photosRepo } from '../../server/features/photos/photos.repo';
+import { commentsRepo } from '../../server/features/comments/comments.repo';
+import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { twoToneJpeg } from '../factories/images';
 import { createRestoration } from '../factories/restorations';
 import { anonymous, createUser, signedIn } from '../factories/users';
@@ -11,7 +13,7 @@ import { startTestApp } from '../support/test-app';
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
-type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number };
+type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?];
 
@@ -53,6 +55,21 @@ const matrix: Row[] = [
   ['GET', '/api/photos/:photoId', [200, 200, 404, 404, 401]],
   ['PATCH', '/api/photos/:photoId', [200, 403, 404, 404, 401], () => ({ caption: 'R23 area' })],
   ['DELETE', '/api/photos/:photoId', [204, 403, 404, 404, 401]],
+  // The fixture's finding is the technician's, on the unshared photo, with one internal comment by the technician.
+  ['GET', '/api/photos/:photoId/findings', [200, 200, 404, 404, 401]],
+  ['POST', '/api/photos/:photoId/findings', [201, 201, 404, 404, 401], () => ({ shape: 'pin', points: [{ x: 0.5, y: 0.5 }], title: 'Dry joint?' })],
+  ['GET', '/api/restorations/:id/findings', [200, 200, 200, 404, 401]],
+  ['GET', '/api/findings/:findingId', [200, 200, 404, 404, 401]],
+  ['PATCH', '/api/findings/:findingId', [200, 403, 404, 404, 401], () => ({ status: 'suspected' })],
+  ['DELETE', '/api/findings/:findingId', [204, 403, 404, 404, 401]],
+  ['GET', '/api/findings/:findingId/history', [200, 200, 404, 404, 401]],
+  ['GET', '/api/findings/:findingId/comments', [200, 200, 404, 404, 401]],
+  ['POST', '/api/findings/:findingId/comments', [201, 201, 404, 404, 401], () => ({ body: 'Measured 1.2 kΩ' })],
+  ['PATCH', '/api/comments/:commentId', [200, 403, 404, 404, 401], () => ({ body: 'Measured 1.3 kΩ' })],
+  ['DELETE', '/api/comments/:commentId', [204, 403, 404, 404, 401]],
+  ['GET', '/api/notifications', [200, 200, 200, 200, 401]],
+  ['POST', '/api/notifications/read', [204, 204, 204, 204, 401], () => ({})],
+  ['GET', '/api/questions', [200, 200, 200, 200, 401]],
 ];
 
 let jpeg: Buffer;
@@ -80,7 +97,10 @@ async function fixture(): Promise<Fixture> {
   const { invitation, token } = await invitationsRepo(t.db).issue(r.id, unique(), 'mentor', people.technician!.id);
   const photoId = await photosRepo(t.db).insert({ restorationId: r.id, storageKey: `${r.id}/${randomBytes(8).toString('hex')}`,
     view: 'underside', phase: 'before', width: 600, height: 400, contentType: 'image/jpeg', sizeBytes: 1000 });
-  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId };
+  const findingId = await findingsRepo(t.db).insert({ restorationId: r.id, photoId, shape: 'pin', points: [{ x: 0.5, y: 0.4 }],
+    title: 'Charred R23', kind: 'overheated', severity: 'fault', authorId: people.technician!.id });
+  const commentId = await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true });
+  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId };
 }
 
 async function callerAgent(c: (typeof callers)[number]): Promise<Agent> {

@@ -32,6 +32,7 @@ export async function startTestApp(config: Partial<AppDeps['config']> = {}, appO
       devMail: true,
       throttle: { ...defaultThrottle, signInPerAccount: 3, signInPerIp: 50, resetPerAccount: 2, resetPerIp: 50 },
       uploads: { maxBytes: 40 * 1024 * 1024, maxPixels: 100e6 },
+      notificationWindowSeconds: 180,
       ...config,
     },
   };

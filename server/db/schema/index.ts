@@ -5,3 +5,4 @@ export * from './dev-mails';
 export * from './auth';
 export * from './invitations';
 export * from './photos';
+export * from './findings';

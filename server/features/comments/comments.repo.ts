@@ -1,0 +1,29 @@
+import { asc, eq, isNull, and } from 'drizzle-orm';
+import type { Database } from '../../db/client';
+import { comments, users } from '../../db/schema';
+
+export type CommentRow = typeof comments.$inferSelect & { authorName: string | null };
+
+export function commentsRepo(db: Database) {
+  const select = () => db.select({ c: comments, authorName: users.name }).from(comments).leftJoin(users, eq(users.id, comments.authorId));
+  return {
+    async list(findingId: number): Promise<CommentRow[]> {
+      return (await select().where(eq(comments.findingId, findingId)).orderBy(asc(comments.createdAt), asc(comments.id))).map((r) => ({ ...r.c, authorName: r.authorName }));
+    },
+    async find(id: number): Promise<CommentRow | undefined> {
+      const [r] = await select().where(eq(comments.id, id));
+      return r && { ...r.c, authorName: r.authorName };
+    },
+    async insert(values: typeof comments.$inferInsert) {
+      const [row] = await db.insert(comments).values(values).returning({ id: comments.id });
+      return row!.id;
+    },
+    async update(id: number, values: Partial<typeof comments.$inferInsert>) {
+      await db.update(comments).set(values).where(and(eq(comments.id, id), isNull(comments.deletedAt)));
+    },
+    async participants(findingId: number): Promise<number[]> {
+      const rows = await db.selectDistinct({ id: comments.authorId }).from(comments).where(and(eq(comments.findingId, findingId), isNull(comments.deletedAt)));
+      return rows.map((r) => r.id).filter((id): id is number => id !== null);
+    },
+  };
+}

@@ -1,0 +1,39 @@
+import { Router, type Request, type Response } from 'express';
+import { commentInputSchema, commentPatchSchema } from '../../../shared/schemas/findings';
+import { idParamsSchema } from '../../../shared/schemas/restorations';
+import type { AppDeps } from '../../app-deps';
+import { guard, requireUser, roleOf } from '../../http/guard';
+import { input, validate } from '../../http/validate';
+import { actorOf } from '../findings/findings.routes';
+import { findingsService } from '../findings/findings.service';
+import { commentsService } from './comments.service';
+
+const one = { params: idParamsSchema };
+const create = { params: idParamsSchema, body: commentInputSchema };
+const edit = { params: idParamsSchema, body: commentPatchSchema };
+
+export function commentsRoutes(deps: AppDeps): Router {
+  const { db } = deps;
+  const service = commentsService(deps);
+  const findings = findingsService(deps);
+  const ofFinding = (_req: Request, res: Response) => findings.restorationOf(input(res, one).params.id);
+  const ofComment = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
+  const router = Router();
+
+  router.get('/findings/:id/comments', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (_req, res) => {
+    res.json(await service.list(input(res, one).params.id, roleOf(res)));
+  });
+  router.post('/findings/:id/comments', requireUser, validate(create), guard(db, 'restoration.view', ofFinding), async (req, res) => {
+    const { params, body } = input(res, create);
+    res.status(201).json(await service.create(params.id, body, actorOf(req, res)));
+  });
+  router.patch('/comments/:id', requireUser, validate(edit), guard(db, 'restoration.view', ofComment), async (req, res) => {
+    const { params, body } = input(res, edit);
+    res.json(await service.edit(params.id, body.body, actorOf(req, res)));
+  });
+  router.delete('/comments/:id', requireUser, validate(one), guard(db, 'restoration.view', ofComment), async (req, res) => {
+    await service.remove(input(res, one).params.id, actorOf(req, res));
+    res.status(204).end();
+  });
+  return router;
+}

@@ -1,0 +1,70 @@
+import { can, type Role } from '../../../shared/permissions';
+import type { Comment } from '../../../shared/schemas/findings';
+import type { AppDeps } from '../../app-deps';
+import { ForbiddenError, NotFoundError } from '../../http/errors';
+import { findingsService, ownerMaySee } from '../findings/findings.service';
+import { membersRepo } from '../members/members.repo';
+import { notificationsService } from '../notifications/notifications.service';
+import { commentsRepo, type CommentRow } from './comments.repo';
+import { findMentions } from './mentions';
+
+type Actor = { id: number; name: string; role: Role };
+
+const toComment = (c: CommentRow): Comment => ({
+  id: c.id, findingId: c.findingId, body: c.deletedAt ? '' : c.body, internal: c.internal, authorId: c.authorId,
+  authorName: c.authorName, mentions: c.deletedAt ? [] : c.mentions, createdAt: c.createdAt.toISOString(),
+  editedAt: c.editedAt?.toISOString() ?? null, deletedAt: c.deletedAt?.toISOString() ?? null,
+});
+
+/** Threads. An owner reads and writes only the shared part of a shared finding's thread. */
+export function commentsService(deps: AppDeps) {
+  const repo = commentsRepo(deps.db);
+  const findings = findingsService(deps);
+  const members = membersRepo(deps.db);
+  const notifications = notificationsService(deps);
+  const readable = (role: Role) => (c: CommentRow) => role !== 'owner' || !c.internal;
+
+  async function own(id: number, actor: Actor) {
+    const c = await repo.find(id);
+    if (!c || c.deletedAt) throw new NotFoundError();
+    await findings.visible(c.findingId, actor.role);
+    if (!readable(actor.role)(c)) throw new NotFoundError();
+    return c;
+  }
+
+  return {
+    async restorationOf(commentId: number) {
+      const c = await repo.find(commentId);
+      return c ? findings.restorationOf(c.findingId) : undefined;
+    },
+    async list(findingId: number, role: Role) {
+      await findings.visible(findingId, role);
+      return (await repo.list(findingId)).filter(readable(role)).map(toComment);
+    },
+    async create(findingId: number, input: { body: string; internal: boolean }, actor: Actor) {
+      const f = await findings.visible(findingId, actor.role);
+      if (!can(actor.role, 'comments.create', { ownerVisible: ownerMaySee(f) })) throw new ForbiddenError();
+      // An owner's comment is always in the shared thread.
+      const internal = input.internal && can(actor.role, 'comments.internal');
+      const people = await members.list(f.restorationId);
+      const mentions = findMentions(input.body, people.map((p) => ({ userId: p.userId, name: p.name })));
+      const participants = await repo.participants(findingId);
+      const id = await repo.insert({ findingId, authorId: actor.id, body: input.body, internal, mentions });
+      const created = (await repo.find(id))!;
+      await notifications.commentWritten(f, created, actor, mentions, participants);
+      return toComment(created);
+    },
+    async edit(id: number, body: string, actor: Actor) {
+      const c = await own(id, actor);
+      if (!can(actor.role, 'comments.edit', { isAuthor: c.authorId === actor.id })) throw new ForbiddenError('Only the author edits a comment.');
+      await repo.update(id, { body, editedAt: new Date() });
+      return toComment((await repo.find(id))!);
+    },
+    /** Deleted comments keep their place in the thread, marked deleted, with the text gone. */
+    async remove(id: number, actor: Actor) {
+      const c = await own(id, actor);
+      if (!can(actor.role, 'comments.delete', { isAuthor: c.authorId === actor.id })) throw new ForbiddenError('Only the author or a technician deletes a comment.');
+      await repo.update(id, { deletedAt: new Date(), body: '' });
+    },
+  };
+}

@@ -1,0 +1,63 @@
+import { asc, desc, eq, max, sql } from 'drizzle-orm';
+import type { Database } from '../../db/client';
+import { comments, findingChanges, findings, photos, restorations, users } from '../../db/schema';
+
+export type FindingRow = typeof findings.$inferSelect;
+export type FindingWithContext = FindingRow & { authorName: string | null; photoOwnerVisible: boolean; commentCount: number };
+type NewFinding = Omit<typeof findings.$inferInsert, 'number' | 'id'>;
+
+export function findingsRepo(db: Database) {
+  const commentCount = sql<number>`(select count(*)::int from ${comments} where ${comments.findingId} = ${findings.id} and ${comments.deletedAt} is null)`;
+  const select = () =>
+    db
+      .select({ finding: findings, authorName: users.name, photoOwnerVisible: photos.ownerVisible, commentCount })
+      .from(findings)
+      .innerJoin(photos, eq(photos.id, findings.photoId))
+      .leftJoin(users, eq(users.id, findings.authorId));
+  type Joined = { finding: FindingRow; authorName: string | null; photoOwnerVisible: boolean; commentCount: number };
+  const flat = (r: Joined): FindingWithContext => ({ ...r.finding, authorName: r.authorName, photoOwnerVisible: r.photoOwnerVisible, commentCount: r.commentCount });
+
+  return {
+    async listByPhoto(photoId: number) {
+      return (await select().where(eq(findings.photoId, photoId)).orderBy(asc(findings.number))).map(flat);
+    },
+    async listByRestoration(restorationId: number) {
+      return (await select().where(eq(findings.restorationId, restorationId)).orderBy(asc(findings.number))).map(flat);
+    },
+    async find(id: number) {
+      const [row] = await select().where(eq(findings.id, id));
+      return row && flat(row);
+    },
+    async restorationOf(id: number) {
+      const [row] = await db.select({ id: findings.restorationId }).from(findings).where(eq(findings.id, id));
+      return row?.id;
+    },
+    /** Numbers count up per restoration; the restoration row is locked so two creations never share one. */
+    async insert(values: NewFinding): Promise<number> {
+      return db.transaction(async (tx) => {
+        await tx.execute(sql`select 1 from ${restorations} where ${restorations.id} = ${values.restorationId} for update`);
+        const [top] = await tx.select({ n: max(findings.number) }).from(findings).where(eq(findings.restorationId, values.restorationId));
+        const [row] = await tx.insert(findings).values({ ...values, number: (top?.n ?? 0) + 1 }).returning({ id: findings.id });
+        return row!.id;
+      });
+    },
+    /** Applies the change and records it with who made it, together. */
+    async update(id: number, values: Partial<FindingRow>, actorId: number, changes: Record<string, [unknown, unknown]>) {
+      await db.transaction(async (tx) => {
+        await tx.update(findings).set(values).where(eq(findings.id, id));
+        await tx.insert(findingChanges).values({ findingId: id, actorId, changes });
+      });
+    },
+    async remove(id: number) {
+      await db.delete(findings).where(eq(findings.id, id));
+    },
+    history(id: number) {
+      return db
+        .select({ id: findingChanges.id, actorName: users.name, changes: findingChanges.changes, createdAt: findingChanges.createdAt })
+        .from(findingChanges)
+        .leftJoin(users, eq(users.id, findingChanges.actorId))
+        .where(eq(findingChanges.findingId, id))
+        .orderBy(desc(findingChanges.createdAt), desc(findingChanges.id));
+    },
+  };
+}

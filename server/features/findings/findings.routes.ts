@@ -1,0 +1,51 @@
+import { Router, type Request, type Response } from 'express';
+import { findingInputSchema, findingPatchSchema } from '../../../shared/schemas/findings';
+import { idParamsSchema } from '../../../shared/schemas/restorations';
+import type { AppDeps } from '../../app-deps';
+import { guard, requireUser, roleOf } from '../../http/guard';
+import { input, validate } from '../../http/validate';
+import { photosRepo } from '../photos/photos.repo';
+import { findingsService } from './findings.service';
+
+const one = { params: idParamsSchema };
+const create = { params: idParamsSchema, body: findingInputSchema };
+const patch = { params: idParamsSchema, body: findingPatchSchema };
+
+export const actorOf = (req: Request, res: Response) => ({ id: req.user!.id, name: req.user!.name, role: roleOf(res) });
+
+/** Findings: marks on a photo. The guard admits members; the service settles visibility (404) and rights (403). */
+export function findingsRoutes(deps: AppDeps): Router {
+  const { db } = deps;
+  const service = findingsService(deps);
+  const photos = photosRepo(db);
+  const ofPhoto = (_req: Request, res: Response) => photos.restorationOf(input(res, one).params.id);
+  const ofFinding = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
+  const router = Router();
+
+  router.get('/photos/:id/findings', requireUser, validate(one), guard(db, 'restoration.view', ofPhoto), async (_req, res) => {
+    res.json(await service.listByPhoto(input(res, one).params.id, roleOf(res)));
+  });
+  router.post('/photos/:id/findings', requireUser, validate(create), guard(db, 'restoration.view', ofPhoto), async (req, res) => {
+    const { params, body } = input(res, create);
+    res.status(201).json(await service.create(params.id, body as typeof body & { ownerVisible: boolean }, actorOf(req, res)));
+  });
+  router.get('/restorations/:id/findings', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
+    res.json(await service.listByRestoration(input(res, one).params.id, roleOf(res)));
+  });
+  router.get('/findings/:id', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (_req, res) => {
+    res.json(await service.get(input(res, one).params.id, roleOf(res)));
+  });
+  router.patch('/findings/:id', requireUser, validate(patch), guard(db, 'restoration.view', ofFinding), async (req, res) => {
+    const { params, body } = input(res, patch);
+    res.json(await service.update(params.id, body, actorOf(req, res)));
+  });
+  router.delete('/findings/:id', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (req, res) => {
+    await service.remove(input(res, one).params.id, actorOf(req, res));
+    res.status(204).end();
+  });
+  router.get('/findings/:id/history', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (_req, res) => {
+    res.json(await service.history(input(res, one).params.id, roleOf(res)));
+  });
+  return router;
+}
+

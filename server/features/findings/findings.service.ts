@@ -1,0 +1,97 @@
+import { can, type Role } from '../../../shared/permissions';
+import { geometrySchema, type Finding, type FindingChange, type FindingInput, type FindingPatch } from '../../../shared/schemas/findings';
+import type { AppDeps } from '../../app-deps';
+import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import { notificationsService } from '../notifications/notifications.service';
+import { photosRepo } from '../photos/photos.repo';
+import { findingsRepo, type FindingWithContext } from './findings.repo';
+
+type Actor = { id: number; name: string; role: Role };
+
+export const toFinding = (f: FindingWithContext): Finding => ({
+  id: f.id, photoId: f.photoId, restorationId: f.restorationId, number: f.number, shape: f.shape, points: f.points,
+  title: f.title, componentRef: f.componentRef, kind: f.kind, severity: f.severity, status: f.status,
+  dismissReason: f.dismissReason, ownerVisible: f.ownerVisible, authorId: f.authorId, authorName: f.authorName,
+  questionOpen: f.questionOpen, commentCount: f.commentCount, createdAt: f.createdAt.toISOString(), updatedAt: f.updatedAt.toISOString(),
+});
+
+/** Owners see a finding only when it and its photo are both shared with them. */
+export const ownerMaySee = (f: { ownerVisible: boolean; photoOwnerVisible: boolean }) => f.ownerVisible && f.photoOwnerVisible;
+
+export function findingsService(deps: AppDeps) {
+  const repo = findingsRepo(deps.db);
+  const photos = photosRepo(deps.db);
+  const notifications = notificationsService(deps);
+
+  async function visible(id: number, role: Role) {
+    const f = await repo.find(id);
+    if (!f || !can(role, 'findings.view', { ownerVisible: ownerMaySee(f) })) throw new NotFoundError();
+    return f;
+  }
+
+  return {
+    visible,
+    restorationOf: (id: number) => repo.restorationOf(id),
+    async listByPhoto(photoId: number, role: Role) {
+      const photo = await photos.find(photoId);
+      if (!photo || !can(role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
+      return (await repo.listByPhoto(photoId)).filter((f) => can(role, 'findings.view', { ownerVisible: ownerMaySee(f) })).map(toFinding);
+    },
+    async listByRestoration(restorationId: number, role: Role) {
+      return (await repo.listByRestoration(restorationId)).filter((f) => can(role, 'findings.view', { ownerVisible: ownerMaySee(f) })).map(toFinding);
+    },
+    async get(id: number, role: Role) {
+      return toFinding(await visible(id, role));
+    },
+    async create(photoId: number, input: FindingInput & { ownerVisible: boolean }, actor: Actor) {
+      const photo = await photos.find(photoId);
+      if (!photo || !can(actor.role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
+      if (!can(actor.role, 'findings.create')) throw new ForbiddenError('Owners follow findings; technicians and mentors place them.');
+      if (input.ownerVisible && !can(actor.role, 'findings.share')) throw new ForbiddenError('Only a technician shares findings with the owner.');
+      const id = await repo.insert({
+        restorationId: photo.restorationId, photoId, shape: input.shape, points: input.points, title: input.title,
+        componentRef: input.componentRef ?? '', kind: input.kind ?? 'note', severity: input.severity ?? 'info',
+        ownerVisible: input.ownerVisible, authorId: actor.id,
+      });
+      return toFinding((await repo.find(id))!);
+    },
+    /** Each field asks the policy; the change is recorded with who made it. */
+    async update(id: number, patch: FindingPatch, actor: Actor) {
+      const f = await visible(id, actor.role);
+      const isAuthor = f.authorId === actor.id;
+      const { ownerVisible, questionOpen, ...rest } = patch;
+      if (Object.keys(rest).length && !can(actor.role, 'findings.edit', { isAuthor })) throw new ForbiddenError('Only a technician changes a finding someone else placed.');
+      if (ownerVisible !== undefined && !can(actor.role, 'findings.share')) throw new ForbiddenError('Only a technician shares findings with the owner.');
+      if (questionOpen === true && !can(actor.role, 'findings.ask')) throw new ForbiddenError('Only a technician asks the mentors.');
+      if (questionOpen === false && !can(actor.role, 'findings.resolve')) throw new ForbiddenError();
+      if (rest.status === 'dismissed' && !(rest.dismissReason ?? f.dismissReason)) throw new BadRequestError('Say why the finding is dismissed.');
+      if (rest.shape || rest.points) {
+        const geometry = geometrySchema.safeParse({ shape: rest.shape ?? f.shape, points: rest.points ?? f.points });
+        if (!geometry.success) throw new BadRequestError(`points: ${geometry.error.issues[0]!.message}`);
+      }
+      const next: Record<string, unknown> = { ...rest };
+      if (ownerVisible !== undefined) next.ownerVisible = ownerVisible;
+      if (questionOpen !== undefined) Object.assign(next, { questionOpen, questionAskedAt: questionOpen ? new Date() : null });
+      if (rest.status && rest.status !== 'dismissed') next.dismissReason = null;
+      const changes = Object.fromEntries(
+        Object.entries(next)
+          .filter(([k, v]) => k !== 'questionAskedAt' && JSON.stringify((f as Record<string, unknown>)[k]) !== JSON.stringify(v))
+          .map(([k, v]) => [k, [(f as Record<string, unknown>)[k] ?? null, v] as [unknown, unknown]]),
+      );
+      if (!Object.keys(changes).length) return toFinding(f);
+      await repo.update(id, next, actor.id, changes);
+      const updated = (await repo.find(id))!;
+      if (questionOpen === true && !f.questionOpen) await notifications.questionAsked(updated, actor);
+      return toFinding(updated);
+    },
+    async remove(id: number, actor: Actor) {
+      const f = await visible(id, actor.role);
+      if (!can(actor.role, 'findings.delete', { isAuthor: f.authorId === actor.id })) throw new ForbiddenError('Only a technician deletes a finding someone else placed.');
+      await repo.remove(id);
+    },
+    async history(id: number, role: Role): Promise<FindingChange[]> {
+      await visible(id, role);
+      return (await repo.history(id)).map((h) => ({ ...h, createdAt: h.createdAt.toISOString() }));
+    },
+  };
+}

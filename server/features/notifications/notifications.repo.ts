@@ -1,0 +1,36 @@
+import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
+import type { Database } from '../../db/client';
+import { findings, memberships, notifications } from '../../db/schema';
+
+export type NewNotification = typeof notifications.$inferInsert;
+
+export function notificationsRepo(db: Database) {
+  return {
+    async insert(rows: NewNotification[]) {
+      if (rows.length) await db.insert(notifications).values(rows);
+    },
+    /** Members of a restoration with the given roles. */
+    async membersWithRole(restorationId: number, roles: string[]) {
+      const rows = await db
+        .select({ userId: memberships.userId, role: memberships.role })
+        .from(memberships)
+        .where(and(eq(memberships.restorationId, restorationId), inArray(memberships.role, roles as never[])));
+      return rows;
+    },
+    listFor(userId: number, limit = 50) {
+      return db
+        .select({ n: notifications, photoId: findings.photoId })
+        .from(notifications)
+        .innerJoin(findings, eq(findings.id, notifications.findingId))
+        .where(eq(notifications.userId, userId))
+        .orderBy(desc(notifications.createdAt), desc(notifications.id))
+        .limit(limit);
+    },
+    async markRead(userId: number, ids?: number[]) {
+      await db
+        .update(notifications)
+        .set({ readAt: sql`now()` })
+        .where(and(eq(notifications.userId, userId), isNull(notifications.readAt), ids ? inArray(notifications.id, ids) : undefined));
+    },
+  };
+}
