@@ -10,6 +10,7 @@ import { connectDatabase } from './db/client';
 import { applyMigrations } from './db/migrate';
 import { demoPeople, DEMO_PASSWORD } from './db/seed/demo-scenario';
 import { seedDemo } from './db/seed/seed-demo';
+import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
 import { scheduleSweep } from './features/photos/schedule-sweep';
 import { EnvError, isDemo, parseEnv, publicOrigin, sessionSecret, uploadLimits } from './env';
@@ -42,6 +43,7 @@ async function main() {
   if (demo) {
     await seedDemo(handle.db);
     await seedDemoPhotos({ db: handle.db, storage, config: { uploads } });
+    await seedDemoFindings(handle.db);
   }
   scheduleSweep(handle.db, storage, logger);
 

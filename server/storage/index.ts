@@ -28,6 +28,8 @@ export interface Storage {
   probe(): Promise<boolean>;
 }
 
+const SLOT_MS = 120_000;
+
 export function createStorage(config: StorageConfig): Storage {
   const client = new S3Client({
     endpoint: config.endpoint,
@@ -43,7 +45,9 @@ export function createStorage(config: StorageConfig): Storage {
     async putObject(key, body, contentType, contentLength) {
       await client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: contentLength }));
     },
-    getSignedUrl: (key, { expiresInSeconds = 300, downloadName } = {}) =>
+    // Signed from the start of the current two-minute slot, so repeated lists hand out the same URL
+    // and browsers reuse the images they already have; each URL still expires within minutes.
+    getSignedUrl: (key, { expiresInSeconds = 420, downloadName } = {}) =>
       presign(
         client,
         new GetObjectCommand({
@@ -51,7 +55,7 @@ export function createStorage(config: StorageConfig): Storage {
           Key: key,
           ResponseContentDisposition: downloadName ? `attachment; filename="${downloadName.replace(/[^\w.-]/g, '_')}"` : undefined,
         }),
-        { expiresIn: expiresInSeconds },
+        { expiresIn: expiresInSeconds, signingDate: new Date(Math.floor(Date.now() / SLOT_MS) * SLOT_MS) },
       ),
     async getObject(key) {
       const res = await client.send(new GetObjectCommand({ Bucket, Key: key }));

@@ -29,6 +29,7 @@ export const router = createBrowserRouter([
             lazy: page(() => import('./routes/restoration-layout'), 'RestorationLayout'),
             children: [
               { index: true, lazy: page(() => import('./routes/restoration'), 'RestorationRoute') },
+              { path: 'photos', lazy: page(() => import('./routes/photos'), 'PhotosRoute') },
               { path: 'people', lazy: page(() => import('./routes/people'), 'PeopleRoute') },
             ],
           },

@@ -33,6 +33,9 @@ export function RestorationLayout() {
         <NavLink to="." end className={tabClass}>
           Overview
         </NavLink>
+        <NavLink to="photos" className={tabClass}>
+          Photos
+        </NavLink>
         <NavLink to="people" className={tabClass}>
           People
         </NavLink>

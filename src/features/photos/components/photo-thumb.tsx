@@ -1,0 +1,45 @@
+import type { Photo } from '../../../../shared/schemas/photos';
+import { photoLabel, thumbSize } from '../lib/photo-format';
+import { SharedBadge } from './shared-badge';
+
+export function PhotoThumb({
+  photo,
+  showShared,
+  onOpen,
+  onImageError,
+}: {
+  photo: Photo;
+  /** Only worth marking for people who also see unshared photos. */
+  showShared: boolean;
+  onOpen: (id: number) => void;
+  onImageError?: () => void;
+}) {
+  const { width, height } = thumbSize(photo);
+  const shared = showShared && photo.ownerVisible;
+  return (
+    <button
+      type="button"
+      data-photo-id={photo.id}
+      aria-label={shared ? `${photoLabel(photo)} (shared with owner)` : photoLabel(photo)}
+      onClick={() => onOpen(photo.id)}
+      className="group relative block w-full overflow-hidden rounded-lg border border-rule bg-sunken text-left hover:border-glow"
+    >
+      <img
+        src={photo.urls.thumb}
+        alt=""
+        width={width}
+        height={height}
+        loading="lazy"
+        decoding="async"
+        onError={onImageError}
+        className="aspect-[4/3] h-auto w-full object-cover transition-transform group-hover:scale-[1.02] motion-reduce:transition-none"
+      />
+      {shared && <SharedBadge className="absolute top-1.5 left-1.5" />}
+      {photo.caption && (
+        <span aria-hidden="true" className="block truncate bg-panel px-2 py-1 text-xs text-ink-soft">
+          {photo.caption}
+        </span>
+      )}
+    </button>
+  );
+}
