@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { Finding, FindingInput } from '../../../../shared/schemas/findings';
+import { api } from '../../../lib/api-client';
+import { findingKeys } from './keys';
+
+export const createFinding = (photoId: number, input: FindingInput) =>
+  api<Finding>(`/photos/${photoId}/findings`, { method: 'POST', json: input });
+
+export function useCreateFinding(photoId: number, restorationId: number) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: FindingInput) => createFinding(photoId, input),
+    onSuccess: (created) => {
+      client.setQueryData<Finding[]>(findingKeys.photo(photoId), (list) => [...(list ?? []), created]);
+      void client.invalidateQueries({ queryKey: findingKeys.restoration(restorationId) });
+    },
+  });
+}

@@ -1,0 +1,11 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { Finding } from '../../../../shared/schemas/findings';
+import { api } from '../../../lib/api-client';
+import { findingKeys } from './keys';
+
+export const getRestorationFindings = (restorationId: number) => api<Finding[]>(`/restorations/${restorationId}/findings`);
+
+export const restorationFindingsQueryOptions = (restorationId: number) =>
+  queryOptions({ queryKey: findingKeys.restoration(restorationId), queryFn: () => getRestorationFindings(restorationId) });
+
+export const useRestorationFindings = (restorationId: number) => useQuery(restorationFindingsQueryOptions(restorationId));

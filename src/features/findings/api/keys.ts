@@ -1,0 +1,10 @@
+/** Query keys follow the resource paths, so a mutation can invalidate exactly what it touched. */
+export const findingKeys = {
+  photo: (photoId: number) => ['photos', photoId, 'findings'] as const,
+  restoration: (restorationId: number) => ['restorations', restorationId, 'findings'] as const,
+  one: (findingId: number) => ['findings', findingId] as const,
+  comments: (findingId: number) => ['findings', findingId, 'comments'] as const,
+  history: (findingId: number) => ['findings', findingId, 'history'] as const,
+  notifications: ['notifications'] as const,
+  questions: ['questions'] as const,
+};

@@ -1,0 +1,36 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { Finding, FindingPatch } from '../../../../shared/schemas/findings';
+import { api } from '../../../lib/api-client';
+import { findingKeys } from './keys';
+
+export const updateFinding = (id: number, patch: FindingPatch) => api<Finding>(`/findings/${id}`, { method: 'PATCH', json: patch });
+
+/**
+ * Moving a pin or changing a status shows at once (optimistic), and rolls back if the server refuses;
+ * the caller shows `error.message`.
+ */
+export function useUpdateFinding(photoId: number, restorationId: number) {
+  const client = useQueryClient();
+  const key = findingKeys.photo(photoId);
+  return useMutation({
+    mutationFn: ({ id, patch }: { id: number; patch: FindingPatch }) => updateFinding(id, patch),
+    onMutate: async ({ id, patch }) => {
+      await client.cancelQueries({ queryKey: key });
+      const previous = client.getQueryData<Finding[]>(key);
+      client.setQueryData<Finding[]>(key, (list) => list?.map((f) => (f.id === id ? ({ ...f, ...patch } as Finding) : f)));
+      return { previous };
+    },
+    onError: (_err, _vars, context) => {
+      if (context?.previous) client.setQueryData(key, context.previous);
+    },
+    onSuccess: (updated) => {
+      client.setQueryData<Finding[]>(key, (list) => list?.map((f) => (f.id === updated.id ? updated : f)));
+      client.setQueryData(findingKeys.one(updated.id), updated);
+    },
+    onSettled: (_d, _e, { id }) => {
+      void client.invalidateQueries({ queryKey: findingKeys.history(id) });
+      void client.invalidateQueries({ queryKey: findingKeys.restoration(restorationId) });
+      void client.invalidateQueries({ queryKey: findingKeys.questions });
+    },
+  });
+}
