@@ -11,6 +11,7 @@ import { findingsRoutes } from './features/findings/findings.routes';
 import { healthRoutes } from './features/health/health.routes';
 import { invitationsRoutes } from './features/invitations/invitations.routes';
 import { membersRoutes } from './features/members/members.routes';
+import { measurementsRoutes } from './features/measurements/measurements.routes';
 import { metaRoutes } from './features/meta/meta.routes';
 import { notificationsRoutes } from './features/notifications/notifications.routes';
 import { photosRoutes } from './features/photos/photos.routes';
@@ -59,6 +60,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(findingsRoutes(deps));
   api.use(commentsRoutes(deps));
   api.use(notificationsRoutes(deps));
+  api.use(measurementsRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

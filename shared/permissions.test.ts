@@ -25,6 +25,8 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'comments.internal': { technician: true, mentor: true, owner: false },
   'comments.edit': { technician: false, mentor: false, owner: false },
   'comments.delete': { technician: true, mentor: false, owner: false },
+  'measurements.view': { technician: true, mentor: true, owner: false },
+  'measurements.record': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

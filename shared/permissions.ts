@@ -29,6 +29,8 @@ export const actions = [
   'comments.internal',
   'comments.edit',
   'comments.delete',
+  'measurements.view',
+  'measurements.record',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -66,6 +68,8 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'comments.internal': (role) => role !== 'owner',
   'comments.edit': (_role, { isAuthor }) => isAuthor === true,
   'comments.delete': (role, { isAuthor }) => isAuthor === true || role === 'technician',
+  'measurements.view': (role, { ownerVisible }) => role !== 'owner' || ownerVisible === true,
+  'measurements.record': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {

@@ -26,3 +26,6 @@ export { liveChassisLikely } from './live-chassis';
 export type { LiveChassisAssessment } from './live-chassis';
 export { readingVerdict } from './reading-verdict';
 export type { ReadingVerdict, Tolerance } from './reading-verdict';
+export { parseTolerance } from './tolerance-text';
+export { DEFAULT_INSULATION_MIN, DEFAULT_TOLERANCE, measuredQuantities, measurementVerdict, quantityUnits } from './measurement-verdict';
+export type { MeasuredQuantity, MeasurementInput, MeasurementVerdict } from './measurement-verdict';

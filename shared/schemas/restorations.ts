@@ -45,8 +45,7 @@ const optionalText = (max: number) =>
 
 const thisYear = new Date().getFullYear();
 
-/** Body of POST /api/restorations: make and model are required, the rest can follow at intake. */
-export const restorationInputSchema = z.object({
+const restorationFields = {
   make: z.string().trim().min(1, 'Enter the maker, as printed on the set').max(120),
   model: z.string().trim().min(1, 'Enter the model name or number').max(120),
   year: z.preprocess(
@@ -59,23 +58,34 @@ export const restorationInputSchema = z.object({
       .nullable(),
   ).optional(),
   serial: optionalText(80),
-  equipmentKind: z.enum(equipmentKinds).default('radio'),
+  equipmentKind: z.enum(equipmentKinds),
   mainsSetting: optionalText(120),
-  liveChassis: z.boolean().default(false),
+  liveChassis: z.boolean(),
   symptoms: optionalText(4000),
   conditionNotes: optionalText(4000),
-  workLevel: z.enum(workLevels).default('repair'),
-  hiddenPartsOriginal: z.boolean().default(false),
+  workLevel: z.enum(workLevels),
+  hiddenPartsOriginal: z.boolean(),
   story: optionalText(8000),
   receivedOn: z.preprocess(
     (v) => (v === '' ? null : v),
     z.iso.date('Enter a date as YYYY-MM-DD').nullable(),
   ).optional(),
-  stage: stageSchema.default('intake'),
+  stage: stageSchema,
+};
+
+/** Body of POST /api/restorations: make and model are required, the rest can follow at intake. */
+export const restorationInputSchema = z.object({
+  ...restorationFields,
+  equipmentKind: restorationFields.equipmentKind.default('radio'),
+  liveChassis: restorationFields.liveChassis.default(false),
+  workLevel: restorationFields.workLevel.default('repair'),
+  hiddenPartsOriginal: restorationFields.hiddenPartsOriginal.default(false),
+  stage: restorationFields.stage.default('intake'),
 });
 export type RestorationInput = z.input<typeof restorationInputSchema>;
 
-export const restorationPatchSchema = restorationInputSchema.partial();
+/** Only what is sent changes: no defaults here, or a stage change would reset the other fields. */
+export const restorationPatchSchema = z.object(restorationFields).partial();
 
 export const restorationSchema = z.object({
   id: z.number().int(),

@@ -3,6 +3,7 @@ import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { invitationsRepo } from '../../server/features/invitations/invitations.repo';
 import { photosRepo } from '../../server/features/photos/photos.repo';
+import { measurementsService } from '../../server/features/measurements/measurements.service';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { twoToneJpeg } from '../factories/images';
@@ -11,9 +12,9 @@ import { anonymous, createUser, signedIn } from '../factories/users';
 import { listApiRoutes } from '../support/list-routes';
 import { startTestApp } from '../support/test-app';
 
-type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
+type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
-type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number };
+type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?];
 
@@ -70,6 +71,13 @@ const matrix: Row[] = [
   ['GET', '/api/notifications', [200, 200, 200, 200, 401]],
   ['POST', '/api/notifications/read', [204, 204, 204, 204, 401], () => ({})],
   ['GET', '/api/questions', [200, 200, 200, 200, 401]],
+  // The fixture's measurement is not shared with the owner.
+  ['GET', '/api/restorations/:id/measurements', [200, 200, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/measurements', [201, 403, 403, 404, 401], () => ({ location: 'R23', quantity: 'resistance', expected: '150', reading: '212' })],
+  ['PATCH', '/api/measurements/:measurementId', [200, 403, 404, 404, 401], () => ({ reading: '151' })],
+  ['DELETE', '/api/measurements/:measurementId', [204, 403, 404, 404, 401]],
+  ['GET', '/api/restorations/:id/valves', [200, 200, 200, 404, 401]],
+  ['PUT', '/api/restorations/:id/valves', [200, 403, 403, 404, 401], () => ({ valves: [{ position: 'V1', type: 'EL84' }] })],
 ];
 
 let jpeg: Buffer;
@@ -100,7 +108,8 @@ async function fixture(): Promise<Fixture> {
   const findingId = await findingsRepo(t.db).insert({ restorationId: r.id, photoId, shape: 'pin', points: [{ x: 0.5, y: 0.4 }],
     title: 'Charred R23', kind: 'overheated', severity: 'fault', authorId: people.technician!.id });
   const commentId = await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true });
-  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId };
+  const measurementId = (await measurementsService(t.db).create(r.id, { location: 'R23', quantity: 'resistance', expected: '150', reading: '212' }, people.technician!.id)).id;
+  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId };
 }
 
 async function callerAgent(c: (typeof callers)[number]): Promise<Agent> {
@@ -116,7 +125,7 @@ describe('authorisation matrix', () => {
         const f = await fixture();
         const path = template.replace(/:(\w+)/g, (_, k: keyof Fixture) => String(f[k]));
         const agent = await callerAgent(c);
-        const req = agent[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](path);
+        const req = agent[method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete'](path);
         const payload = body?.(f);
         got.push((await (Buffer.isBuffer(payload) ? req.attach('file', payload, 'chassis.jpg') : payload ? req.send(payload) : req)).status);
       }

@@ -53,11 +53,11 @@ describe('restorations', () => {
     expect(none.body).toEqual([]);
   });
 
-  it('when a restoration moves to a new stage, then the change is kept; an unknown stage is refused', async () => {
-    const { body } = await tech.post('/api/restorations').send({ make: 'Fenwick', model: 'Wren' });
+  it('when a restoration moves to a new stage, then the change is kept, nothing else changes; an unknown stage is refused', async () => {
+    const { body } = await tech.post('/api/restorations').send({ make: 'Fenwick', model: 'Wren', liveChassis: true, workLevel: 'refurbish' });
     const res = await tech.patch(`/api/restorations/${body.id}`).send({ stage: 'assessment' });
     expect(res.status).toBe(200);
-    expect((await tech.get(`/api/restorations/${body.id}`)).body.stage).toBe('assessment');
+    expect((await tech.get(`/api/restorations/${body.id}`)).body).toMatchObject({ stage: 'assessment', liveChassis: true, workLevel: 'refurbish' });
     const bad = await tech.patch(`/api/restorations/${body.id}`).send({ stage: 'finished' });
     expect(bad.status).toBe(400);
   });

@@ -6,3 +6,4 @@ export * from './auth';
 export * from './invitations';
 export * from './photos';
 export * from './findings';
+export * from './measurements';

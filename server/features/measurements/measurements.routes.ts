@@ -1,0 +1,46 @@
+import { Router, type Request, type Response } from 'express';
+import { lineUpSchema, measurementInputSchema, measurementListQuerySchema, measurementPatchSchema } from '../../../shared/schemas/measurements';
+import { idParamsSchema } from '../../../shared/schemas/restorations';
+import type { AppDeps } from '../../app-deps';
+import { guard, requireUser, roleOf } from '../../http/guard';
+import { input, validate } from '../../http/validate';
+import { measurementsService } from './measurements.service';
+
+const list = { params: idParamsSchema, query: measurementListQuerySchema };
+const create = { params: idParamsSchema, body: measurementInputSchema };
+const one = { params: idParamsSchema };
+const patch = { params: idParamsSchema, body: measurementPatchSchema };
+const lineUp = { params: idParamsSchema, body: lineUpSchema };
+
+/** Readings with verdicts, and the valve line-up. Recording is the technician's; owners see shared readings. */
+export function measurementsRoutes({ db }: AppDeps): Router {
+  const service = measurementsService(db);
+  const ofMeasurement = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
+  const router = Router();
+  router.get('/restorations/:id/measurements', requireUser, validate(list), guard(db, 'restoration.view'), async (_req, res) => {
+    const { params, query } = input(res, list);
+    res.json(await service.list(params.id, roleOf(res), query.findingId));
+  });
+  router.post('/restorations/:id/measurements', requireUser, validate(create), guard(db, 'measurements.record'), async (req, res) => {
+    const { params, body } = input(res, create);
+    res.status(201).json(await service.create(params.id, body, req.user!.id));
+  });
+  router.patch('/measurements/:id', requireUser, validate(patch), guard(db, 'restoration.view', ofMeasurement), async (_req, res) => {
+    const { params, body } = input(res, patch);
+    await service.assertMayRecord(params.id, roleOf(res));
+    res.json(await service.update(params.id, body));
+  });
+  router.delete('/measurements/:id', requireUser, validate(one), guard(db, 'restoration.view', ofMeasurement), async (_req, res) => {
+    await service.assertMayRecord(input(res, one).params.id, roleOf(res));
+    await service.remove(input(res, one).params.id);
+    res.status(204).end();
+  });
+  router.get('/restorations/:id/valves', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
+    res.json(await service.lineUp(input(res, one).params.id));
+  });
+  router.put('/restorations/:id/valves', requireUser, validate(lineUp), guard(db, 'measurements.record'), async (_req, res) => {
+    const { params, body } = input(res, lineUp);
+    res.json(await service.setLineUp(params.id, body.valves));
+  });
+  return router;
+}

@@ -1,0 +1,78 @@
+import { z } from 'zod';
+import { measuredQuantities, type MeasuredQuantity } from '../bench/measurement-verdict';
+
+export const quantityLabels: Record<MeasuredQuantity, string> = {
+  esr: 'ESR', capacitance: 'Capacitance', leakage: 'Leakage current', resistance: 'Resistance', 'dc-voltage': 'DC voltage',
+  'ac-voltage': 'AC voltage', current: 'Current', insulation: 'Insulation resistance', frequency: 'Frequency',
+};
+
+const text = (max: number) => z.string().trim().max(max);
+
+const fields = {
+  location: z.string().trim().min(1, 'Say where: a component reference or test point, e.g. R23 or V5 pin 7').max(60),
+  quantity: z.enum(measuredQuantities),
+  expected: text(40),
+  tolerance: text(20),
+  rating: text(40),
+  reading: z.string().trim().min(1, 'Enter the reading as the meter showed it').max(40),
+  conditions: text(300),
+  method: text(300),
+  findingId: z.number().int().positive().nullable(),
+  ownerVisible: z.boolean(),
+};
+
+/** A reading as a person types it; the server computes the SI values and the verdict. */
+export const measurementInputSchema = z.object({
+  ...fields,
+  expected: fields.expected.default(''),
+  tolerance: fields.tolerance.default(''),
+  rating: fields.rating.default(''),
+  conditions: fields.conditions.default(''),
+  method: fields.method.default(''),
+  findingId: fields.findingId.optional(),
+  ownerVisible: fields.ownerVisible.default(false),
+});
+export type MeasurementInput = z.input<typeof measurementInputSchema>;
+/** Only what is sent changes (no defaults here, or a patch would blank the other fields). */
+export const measurementPatchSchema = z.object(fields).partial();
+
+export const measurementSchema = z.object({
+  id: z.number().int(),
+  restorationId: z.number().int(),
+  findingId: z.number().int().nullable(),
+  location: z.string(),
+  quantity: z.enum(measuredQuantities),
+  expectedText: z.string(),
+  toleranceText: z.string(),
+  ratingText: z.string(),
+  readingText: z.string(),
+  conditions: z.string(),
+  method: z.string(),
+  expected: z.number().nullable(),
+  reading: z.number(),
+  rating: z.number().nullable(),
+  reference: z.number().nullable(),
+  deviation: z.number().nullable(),
+  verdict: z.enum(['within', 'marginal', 'out', 'unknown']),
+  verdictReason: z.string(),
+  ownerVisible: z.boolean(),
+  measuredBy: z.string().nullable(),
+  measuredAt: z.string(),
+});
+export type Measurement = z.infer<typeof measurementSchema>;
+
+export const measurementListQuerySchema = z.object({ findingId: z.coerce.number().int().positive().optional() });
+
+export const valveSchema = z.object({
+  position: z.string().trim().regex(/^V\d{1,2}$/, 'Positions are V1, V2, …'),
+  type: z.string().trim().min(1, 'Enter the type printed on the valve').max(20),
+  notes: z.string().trim().max(200).default(''),
+});
+export const lineUpSchema = z.object({ valves: z.array(valveSchema).max(40) });
+export type LineUpInput = z.input<typeof lineUpSchema>;
+export type Valve = z.infer<typeof valveSchema>;
+export const lineUpResultSchema = z.object({
+  valves: z.array(valveSchema),
+  liveChassis: z.object({ likely: z.boolean(), reasons: z.array(z.string()) }),
+});
+export type LineUp = z.infer<typeof lineUpResultSchema>;

@@ -1,0 +1,76 @@
+import type { Agent } from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { measurementVerdict } from '../../shared/bench';
+import { createRestoration } from '../factories/restorations';
+import { createUser, signedIn } from '../factories/users';
+import { startTestApp } from '../support/test-app';
+
+let t: Awaited<ReturnType<typeof startTestApp>>;
+let tech: Agent, owner: Agent, mentor: Agent;
+let restorationId: number;
+beforeAll(async () => {
+  t = await startTestApp();
+  const [a, b, c] = await Promise.all([createUser(t.db), createUser(t.db), createUser(t.db)]);
+  restorationId = (await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: b.id, role: 'owner' }, { userId: c.id, role: 'mentor' }])).id;
+  [tech, owner, mentor] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b), signedIn(t.app, c)]);
+});
+afterAll(() => t.stop());
+
+const post = (body: object) => tech.post(`/api/restorations/${restorationId}/measurements`).send(body);
+
+describe('measurements', () => {
+  it('when a reading is recorded, then the stored verdict and reason equal the bench library’s', async () => {
+    const body = { location: 'C30', quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω', method: 'ESR meter, 100 kHz, in circuit' };
+    const res = await post(body);
+    expect(res.status).toBe(201);
+    const library = measurementVerdict({ quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω' });
+    expect(res.body).toMatchObject({ verdict: library.verdict, verdictReason: library.reason, reading: 0.5, expected: 50e-6, rating: 400, expectedText: '50µ' });
+  });
+
+  it('when the inputs change, then the verdict is recomputed', async () => {
+    const created = (await post({ location: 'V5 pin 7', quantity: 'dc-voltage', expected: '250', tolerance: '10', reading: '248 V' })).body;
+    expect(created.verdict).toBe('within');
+    const patched = (await tech.patch(`/api/measurements/${created.id}`).send({ reading: '310 V' })).body;
+    expect(patched).toMatchObject({ verdict: 'out', readingText: '310 V', reading: 310 });
+  });
+
+  const bad: [string, object, RegExp][] = [
+    ['an unparseable value', { location: 'R23', quantity: 'resistance', expected: 'about four k', reading: '4k7' }, /Expected value/],
+    ['an unknown unit', { location: 'R23', quantity: 'resistance', expected: '4k7', reading: '4.7 furlongs' }, /Reading/],
+    ['a unit that does not fit the quantity', { location: 'R23', quantity: 'resistance', expected: '4k7', reading: '250 V' }, /Reading/],
+    ['a negative capacitance', { location: 'C12', quantity: 'capacitance', expected: '47n', reading: '-47n' }, /negative/],
+    ['no location', { location: '', quantity: 'current', reading: '60 mA' }, /where/],
+  ];
+  for (const [what, body, message] of bad)
+    it(`when the reading has ${what}, then 400 explains it and nothing is stored`, async () => {
+      const before = (await tech.get(`/api/restorations/${restorationId}/measurements`)).body.length;
+      const res = await post(body);
+      expect(res.status).toBe(400);
+      expect(res.body.error.message).toMatch(message);
+      expect((await tech.get(`/api/restorations/${restorationId}/measurements`)).body.length).toBe(before);
+    });
+
+  it('when a reading is not shared, then the owner neither lists it nor learns it exists; mentors cannot record', async () => {
+    const hidden = (await post({ location: 'HT', quantity: 'dc-voltage', expected: '250', reading: '262' })).body;
+    const shared = (await post({ location: 'Mains current', quantity: 'current', reading: '0.31 A', ownerVisible: true })).body;
+    const seen = (await owner.get(`/api/restorations/${restorationId}/measurements`)).body.map((m: { id: number }) => m.id);
+    expect(seen).toContain(shared.id);
+    expect(seen).not.toContain(hidden.id);
+    expect((await owner.patch(`/api/measurements/${hidden.id}`).send({ reading: '1' })).status).toBe(404);
+    expect((await owner.patch(`/api/measurements/${shared.id}`).send({ reading: '1' })).status).toBe(403);
+    expect((await mentor.post(`/api/restorations/${restorationId}/measurements`).send({ location: 'X', quantity: 'current', reading: '1 A' })).status).toBe(403);
+  });
+});
+
+describe('valve line-up', () => {
+  it('when the line-up has series heaters, then the restoration is marked live-chassis', async () => {
+    const r = await createRestoration(t.db, [{ userId: (await tech.get('/api/auth/me')).body.id, role: 'technician' }]);
+    const lineUp = ['UCH42', 'UAF42', 'UBC41', 'UL41', 'UY41'].map((type, i) => ({ position: `V${i + 1}`, type }));
+    const res = await tech.put(`/api/restorations/${r.id}/valves`).send({ valves: lineUp });
+    expect(res.status).toBe(200);
+    expect(res.body.liveChassis.likely).toBe(true);
+    expect((await tech.get(`/api/restorations/${r.id}`)).body.liveChassis).toBe(true);
+    const dup = await tech.put(`/api/restorations/${r.id}/valves`).send({ valves: [{ position: 'V1', type: 'EL84' }, { position: 'V1', type: 'EZ80' }] });
+    expect(dup.status).toBe(400);
+  });
+});
