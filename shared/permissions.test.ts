@@ -27,6 +27,10 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'comments.delete': { technician: true, mentor: false, owner: false },
   'measurements.view': { technician: true, mentor: true, owner: false },
   'measurements.record': { technician: true, mentor: false, owner: false },
+  'parts.view': { technician: true, mentor: true, owner: true },
+  'parts.edit': { technician: true, mentor: false, owner: false },
+  'report.download': { technician: true, mentor: true, owner: true },
+  'report.send': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

@@ -31,6 +31,10 @@ export const actions = [
   'comments.delete',
   'measurements.view',
   'measurements.record',
+  'parts.view',
+  'parts.edit',
+  'report.download',
+  'report.send',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -70,6 +74,11 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'comments.delete': (role, { isAuthor }) => isAuthor === true || role === 'technician',
   'measurements.view': (role, { ownerVisible }) => role !== 'owner' || ownerVisible === true,
   'measurements.record': (role) => role === 'technician',
+  // Owners see the ledger without costs, sources and notes; technicians keep it.
+  'parts.view': () => true,
+  'parts.edit': (role) => role === 'technician',
+  'report.download': () => true,
+  'report.send': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {

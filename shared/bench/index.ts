@@ -29,3 +29,5 @@ export type { ReadingVerdict, Tolerance } from './reading-verdict';
 export { parseTolerance } from './tolerance-text';
 export { DEFAULT_INSULATION_MIN, DEFAULT_TOLERANCE, measuredQuantities, measurementVerdict, quantityUnits } from './measurement-verdict';
 export type { MeasuredQuantity, MeasurementInput, MeasurementVerdict } from './measurement-verdict';
+export { partWarnings, readRating } from './part-rules';
+export type { MainsPosition, PartWarning } from './part-rules';

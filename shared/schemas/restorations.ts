@@ -66,6 +66,7 @@ const restorationFields = {
   workLevel: z.enum(workLevels),
   hiddenPartsOriginal: z.boolean(),
   story: optionalText(8000),
+  careNotes: optionalText(4000),
   receivedOn: z.preprocess(
     (v) => (v === '' ? null : v),
     z.iso.date('Enter a date as YYYY-MM-DD').nullable(),
@@ -101,6 +102,7 @@ export const restorationSchema = z.object({
   workLevel: z.enum(workLevels),
   hiddenPartsOriginal: z.boolean(),
   story: z.string().nullable(),
+  careNotes: z.string().nullable(),
   receivedOn: z.string().nullable(),
   stage: stageSchema,
   /** The caller's role on this restoration. */

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { invitationsRepo } from '../../server/features/invitations/invitations.repo';
 import { photosRepo } from '../../server/features/photos/photos.repo';
 import { measurementsService } from '../../server/features/measurements/measurements.service';
+import { partsService } from '../../server/features/parts/parts.service';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { twoToneJpeg } from '../factories/images';
@@ -14,7 +15,7 @@ import { startTestApp } from '../support/test-app';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
-type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number };
+type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?];
 
@@ -78,6 +79,12 @@ const matrix: Row[] = [
   ['DELETE', '/api/measurements/:measurementId', [204, 403, 404, 404, 401]],
   ['GET', '/api/restorations/:id/valves', [200, 200, 200, 404, 401]],
   ['PUT', '/api/restorations/:id/valves', [200, 403, 403, 404, 401], () => ({ valves: [{ position: 'V1', type: 'EL84' }] })],
+  ['GET', '/api/restorations/:id/parts', [200, 200, 200, 404, 401]],
+  ['GET', '/api/restorations/:id/parts.csv', [200, 200, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/parts', [201, 403, 403, 404, 401], () => ({ componentRef: 'C30', replacementRating: '47µF 450V' })],
+  ['PATCH', '/api/parts/:partId', [200, 403, 403, 404, 401], () => ({ state: 'ordered' })],
+  ['DELETE', '/api/parts/:partId', [204, 403, 403, 404, 401]],
+  ['GET', '/api/restorations/:id/events', [200, 200, 200, 404, 401]],
 ];
 
 let jpeg: Buffer;
@@ -109,7 +116,8 @@ async function fixture(): Promise<Fixture> {
     title: 'Charred R23', kind: 'overheated', severity: 'fault', authorId: people.technician!.id });
   const commentId = await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true });
   const measurementId = (await measurementsService(t.db).create(r.id, { location: 'R23', quantity: 'resistance', expected: '150', reading: '212' }, people.technician!.id)).id;
-  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId };
+  const partId = (await partsService(t.db).create(r.id, { componentRef: 'R23', action: 'replaced' }, people.technician!.id)).id;
+  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId };
 }
 
 async function callerAgent(c: (typeof callers)[number]): Promise<Agent> {

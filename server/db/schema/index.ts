@@ -7,3 +7,4 @@ export * from './invitations';
 export * from './photos';
 export * from './findings';
 export * from './measurements';
+export * from './parts';

@@ -26,6 +26,8 @@ export const restorations = pgTable(
     /** The owner asked for hidden replacement parts to look original too. */
     hiddenPartsOriginal: boolean().notNull().default(false),
     story: text(),
+    /** For the hand-back report: how to live with the set (ventilation, play time, aerial). */
+    careNotes: text(),
     receivedOn: date({ mode: 'string' }),
     stage: stageEnum().notNull().default('intake'),
     ...timestamps,

@@ -2,6 +2,7 @@ import { can, type Role } from '../../../shared/permissions';
 import { geometrySchema, type Finding, type FindingChange, type FindingInput, type FindingPatch } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
 import { notificationsService } from '../notifications/notifications.service';
 import { photosRepo } from '../photos/photos.repo';
 import { findingsRepo, type FindingWithContext } from './findings.repo';
@@ -53,6 +54,7 @@ export function findingsService(deps: AppDeps) {
         componentRef: input.componentRef ?? '', kind: input.kind ?? 'note', severity: input.severity ?? 'info',
         ownerVisible: input.ownerVisible, authorId: actor.id,
       });
+      await recordEvent(deps.db, { restorationId: photo.restorationId, kind: 'finding-opened', actorId: actor.id, findingId: id, photoId });
       return toFinding((await repo.find(id))!);
     },
     /** Each field asks the policy; the change is recorded with who made it. */
@@ -81,6 +83,9 @@ export function findingsService(deps: AppDeps) {
       if (!Object.keys(changes).length) return toFinding(f);
       await repo.update(id, next, actor.id, changes);
       const updated = (await repo.find(id))!;
+      const event = { restorationId: f.restorationId, actorId: actor.id, findingId: id, photoId: f.photoId };
+      if (changes.status) await recordEvent(deps.db, { ...event, kind: 'finding-status', data: { from: f.status, to: updated.status } });
+      if (changes.questionOpen) await recordEvent(deps.db, { ...event, kind: questionOpen ? 'question-asked' : 'question-resolved' });
       if (questionOpen === true && !f.questionOpen) await notifications.questionAsked(updated, actor);
       return toFinding(updated);
     },

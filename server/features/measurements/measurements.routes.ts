@@ -25,10 +25,10 @@ export function measurementsRoutes({ db }: AppDeps): Router {
     const { params, body } = input(res, create);
     res.status(201).json(await service.create(params.id, body, req.user!.id));
   });
-  router.patch('/measurements/:id', requireUser, validate(patch), guard(db, 'restoration.view', ofMeasurement), async (_req, res) => {
+  router.patch('/measurements/:id', requireUser, validate(patch), guard(db, 'restoration.view', ofMeasurement), async (req, res) => {
     const { params, body } = input(res, patch);
     await service.assertMayRecord(params.id, roleOf(res));
-    res.json(await service.update(params.id, body));
+    res.json(await service.update(params.id, body, req.user!.id));
   });
   router.delete('/measurements/:id', requireUser, validate(one), guard(db, 'restoration.view', ofMeasurement), async (_req, res) => {
     await service.assertMayRecord(input(res, one).params.id, roleOf(res));

@@ -5,6 +5,7 @@ import type { LineUp, Measurement, MeasurementInput, Valve } from '../../../shar
 import type { Database } from '../../db/client';
 import { findings, measurements, restorations, users, valves } from '../../db/schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
 
 type Row = typeof measurements.$inferSelect & { measuredBy: string | null };
 type Fields = Required<Pick<MeasurementInput, 'location' | 'quantity' | 'reading'>> & Partial<MeasurementInput>;
@@ -57,11 +58,13 @@ export function measurementsService(db: Database) {
     },
     async create(restorationId: number, input: Fields, userId: number) {
       await assertFinding(restorationId, input.findingId);
-      const [row] = await db.insert(measurements).values({ restorationId, ...columns(input), ...judge(input), measuredById: userId }).returning({ id: measurements.id });
+      const verdict = judge(input);
+      const [row] = await db.insert(measurements).values({ restorationId, ...columns(input), ...verdict, measuredById: userId }).returning({ id: measurements.id });
+      if (verdict.verdict === 'out') await recordEvent(db, { restorationId, kind: 'measurement-out', actorId: userId, measurementId: row!.id, findingId: input.findingId ?? null });
       return toMeasurement((await find(row!.id))!);
     },
     /** Recomputes the verdict from the merged texts whenever anything changes. */
-    async update(id: number, patch: Partial<MeasurementInput>) {
+    async update(id: number, patch: Partial<MeasurementInput>, userId: number) {
       const current = await find(id);
       if (!current) throw new NotFoundError();
       const merged: Fields = {
@@ -71,7 +74,10 @@ export function measurementsService(db: Database) {
         findingId: patch.findingId === undefined ? current.findingId : patch.findingId, ownerVisible: patch.ownerVisible ?? current.ownerVisible,
       };
       await assertFinding(current.restorationId, merged.findingId);
-      await db.update(measurements).set({ ...columns(merged), ...judge(merged) }).where(eq(measurements.id, id));
+      const verdict = judge(merged);
+      await db.update(measurements).set({ ...columns(merged), ...verdict }).where(eq(measurements.id, id));
+      if (verdict.verdict === 'out' && current.verdict !== 'out')
+        await recordEvent(db, { restorationId: current.restorationId, kind: 'measurement-out', actorId: userId, measurementId: id, findingId: merged.findingId ?? null });
       return toMeasurement((await find(id))!);
     },
     /** 404 when the caller may not see the reading (owners and unshared readings), 403 when they may not record. */

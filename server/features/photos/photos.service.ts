@@ -5,6 +5,7 @@ import type { Photo, PhotoPatch } from '../../../shared/schemas/photos';
 import { photoUploadFieldsSchema } from '../../../shared/schemas/photos';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
 import { deletePhotoObjects, photoKeys } from './photo-objects';
 import { processPhoto } from './photo-pipeline';
 import { photosRepo, type PhotoRow } from './photos.repo';
@@ -68,6 +69,7 @@ export function photosService({ db, storage, config }: PhotosDeps) {
           restorationId, storageKey, ...fields.data, width: processed.width, height: processed.height,
           takenAt: processed.takenAt, contentType: processed.contentType, sizeBytes: file.size, uploadedById,
         });
+        await recordEvent(db, { restorationId, kind: 'photo-added', actorId: uploadedById, photoId: id, data: { view: fields.data.view, phase: fields.data.phase } });
         return id;
       } catch (err) {
         await deletePhotoObjects(storage, storageKey).catch(() => {});

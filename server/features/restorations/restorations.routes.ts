@@ -27,9 +27,9 @@ export function restorationsRoutes({ db }: AppDeps): Router {
   router.get('/restorations/:id', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
     res.json(await service.get(input(res, one).params.id, roleOf(res)));
   });
-  router.patch('/restorations/:id', requireUser, validate(patch), guard(db, 'restoration.edit'), async (_req, res) => {
+  router.patch('/restorations/:id', requireUser, validate(patch), guard(db, 'restoration.edit'), async (req, res) => {
     const { params, body } = input(res, patch);
-    res.json(await service.update(params.id, body, roleOf(res)));
+    res.json(await service.update(params.id, body, roleOf(res), req.user!.id));
   });
   router.delete('/restorations/:id', requireUser, validate(one), guard(db, 'restoration.delete'), async (_req, res) => {
     await service.remove(input(res, one).params.id);

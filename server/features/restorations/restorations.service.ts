@@ -3,6 +3,7 @@ import type { Role } from '../../../shared/permissions';
 import type { Restoration, restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
 import type { Database } from '../../db/client';
 import { NotFoundError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
 
 type CreateInput = z.output<typeof restorationInputSchema>;
@@ -27,9 +28,12 @@ export function restorationsService(db: Database) {
     async create(input: CreateInput, userId: number) {
       return toRestoration(await repo.insertWithTechnician(input, userId), 'technician');
     },
-    async update(id: number, patch: PatchInput, role: Role) {
+    async update(id: number, patch: PatchInput, role: Role, actorId: number) {
+      const before = await repo.find(id);
       const row = await repo.update(id, patch);
-      if (!row) throw new NotFoundError();
+      if (!row || !before) throw new NotFoundError();
+      if (patch.stage && patch.stage !== before.stage)
+        await recordEvent(db, { restorationId: id, kind: 'stage-changed', actorId, data: { from: before.stage, to: patch.stage } });
       return toRestoration(row, role);
     },
     async remove(id: number) {

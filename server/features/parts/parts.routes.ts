@@ -1,0 +1,40 @@
+import { Router, type Request, type Response } from 'express';
+import { partInputSchema, partPatchSchema } from '../../../shared/schemas/parts';
+import { idParamsSchema } from '../../../shared/schemas/restorations';
+import type { AppDeps } from '../../app-deps';
+import { guard, requireUser, roleOf } from '../../http/guard';
+import { input, validate } from '../../http/validate';
+import { partsCsv } from './parts-csv';
+import { partsService, toPart } from './parts.service';
+
+const one = { params: idParamsSchema };
+const create = { params: idParamsSchema, body: partInputSchema };
+const patch = { params: idParamsSchema, body: partPatchSchema };
+
+/** The parts ledger: everyone on the restoration reads it (owners without costs); technicians keep it. */
+export function partsRoutes({ db }: AppDeps): Router {
+  const service = partsService(db);
+  const ofPart = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
+  const router = Router();
+  router.get('/restorations/:id/parts', requireUser, validate(one), guard(db, 'parts.view'), async (_req, res) => {
+    res.json((await service.list(input(res, one).params.id)).map((p) => toPart(p, roleOf(res))));
+  });
+  router.get('/restorations/:id/parts.csv', requireUser, validate(one), guard(db, 'parts.view'), async (_req, res) => {
+    const id = input(res, one).params.id;
+    const csv = partsCsv((await service.list(id)).map((p) => toPart(p, roleOf(res))));
+    res.type('text/csv; charset=utf-8').attachment(`restoration-${id}-parts.csv`).send(csv);
+  });
+  router.post('/restorations/:id/parts', requireUser, validate(create), guard(db, 'parts.edit'), async (req, res) => {
+    const { params, body } = input(res, create);
+    res.status(201).json(toPart(await service.create(params.id, body, req.user!.id), roleOf(res)));
+  });
+  router.patch('/parts/:id', requireUser, validate(patch), guard(db, 'parts.edit', ofPart), async (req, res) => {
+    const { params, body } = input(res, patch);
+    res.json(toPart(await service.update(params.id, body, req.user!.id), roleOf(res)));
+  });
+  router.delete('/parts/:id', requireUser, validate(one), guard(db, 'parts.edit', ofPart), async (_req, res) => {
+    await service.remove(input(res, one).params.id);
+    res.status(204).end();
+  });
+  return router;
+}
