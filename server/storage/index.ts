@@ -2,6 +2,7 @@ import {
   DeleteObjectCommand,
   GetObjectCommand,
   HeadBucketCommand,
+  HeadObjectCommand,
   ListObjectsV2Command,
   PutObjectCommand,
   S3Client,
@@ -23,6 +24,7 @@ export interface Storage {
   /** A short-lived GET URL; `downloadName` makes the browser save it under that name. */
   getSignedUrl(key: string, options?: { expiresInSeconds?: number; downloadName?: string }): Promise<string>;
   getObject(key: string): Promise<Buffer>;
+  exists(key: string): Promise<boolean>;
   deleteObject(key: string): Promise<void>;
   listObjects(prefix: string): AsyncGenerator<{ key: string; lastModified: Date }>;
   probe(): Promise<boolean>;
@@ -60,6 +62,15 @@ export function createStorage(config: StorageConfig): Storage {
     async getObject(key) {
       const res = await client.send(new GetObjectCommand({ Bucket, Key: key }));
       return Buffer.from(await res.Body!.transformToByteArray());
+    },
+    async exists(key) {
+      try {
+        await client.send(new HeadObjectCommand({ Bucket, Key: key }));
+        return true;
+      } catch (err) {
+        if ((err as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404) return false;
+        throw err;
+      }
     },
     async deleteObject(key) {
       await client.send(new DeleteObjectCommand({ Bucket, Key: key }));

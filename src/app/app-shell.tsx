@@ -4,6 +4,7 @@ import { Logo } from '../components/logo';
 import { ThemeToggle } from '../components/theme-toggle';
 import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
+import { NotificationsMenu } from '../features/findings/components/notifications-menu';
 
 const navClass = ({ isActive }: { isActive: boolean }) =>
   `min-h-11 inline-flex items-center rounded-lg px-3 font-semibold ${isActive ? 'bg-glow-soft text-glow-strong' : 'text-ink-soft hover:bg-sunken'}`;
@@ -39,6 +40,7 @@ export function AppShell() {
               </>
             )}
           </nav>
+          {signedIn && <NotificationsMenu />}
           <ThemeToggle />
           <UserMenu />
         </div>

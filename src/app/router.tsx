@@ -30,6 +30,9 @@ export const router = createBrowserRouter([
             children: [
               { index: true, lazy: page(() => import('./routes/restoration'), 'RestorationRoute') },
               { path: 'photos', lazy: page(() => import('./routes/photos'), 'PhotosRoute') },
+              { path: 'photos/:photoId', lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
+              { path: 'photos/:photoId/findings/:findingId', lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
+              { path: 'findings', lazy: page(() => import('./routes/findings'), 'FindingsRoute') },
               { path: 'people', lazy: page(() => import('./routes/people'), 'PeopleRoute') },
             ],
           },

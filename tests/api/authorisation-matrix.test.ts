@@ -3,6 +3,7 @@ import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { invitationsRepo } from '../../server/features/invitations/invitations.repo';
 import { photosRepo } from '../../server/features/photos/photos.repo';
+import { photoKeys } from '../../server/features/photos/photo-objects';
 import { measurementsService } from '../../server/features/measurements/measurements.service';
 import { partsService } from '../../server/features/parts/parts.service';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
@@ -65,6 +66,7 @@ const matrix: Row[] = [
   ['PATCH', '/api/findings/:findingId', [200, 403, 404, 404, 401], () => ({ status: 'suspected' })],
   ['DELETE', '/api/findings/:findingId', [204, 403, 404, 404, 401]],
   ['GET', '/api/findings/:findingId/history', [200, 200, 404, 404, 401]],
+  ['GET', '/api/findings/:findingId/closeup', [302, 302, 404, 404, 401]],
   ['GET', '/api/findings/:findingId/comments', [200, 200, 404, 404, 401]],
   ['POST', '/api/findings/:findingId/comments', [201, 201, 404, 404, 401], () => ({ body: 'Measured 1.2 kΩ' })],
   ['PATCH', '/api/comments/:commentId', [200, 403, 404, 404, 401], () => ({ body: 'Measured 1.3 kΩ' })],
@@ -110,8 +112,10 @@ async function fixture(): Promise<Fixture> {
     { userId: extra.id, role: 'technician' },
   ]);
   const { invitation, token } = await invitationsRepo(t.db).issue(r.id, unique(), 'mentor', people.technician!.id);
-  const photoId = await photosRepo(t.db).insert({ restorationId: r.id, storageKey: `${r.id}/${randomBytes(8).toString('hex')}`,
-    view: 'underside', phase: 'before', width: 600, height: 400, contentType: 'image/jpeg', sizeBytes: 1000 });
+  const storageKey = `${r.id}/${randomBytes(8).toString('hex')}`;
+  await t.deps.storage.putObject(photoKeys(storageKey).original, jpeg, 'image/jpeg');
+  const photoId = await photosRepo(t.db).insert({ restorationId: r.id, storageKey,
+    view: 'underside', phase: 'before', width: 600, height: 400, contentType: 'image/jpeg', sizeBytes: jpeg.length });
   const findingId = await findingsRepo(t.db).insert({ restorationId: r.id, photoId, shape: 'pin', points: [{ x: 0.5, y: 0.4 }],
     title: 'Charred R23', kind: 'overheated', severity: 'fault', authorId: people.technician!.id });
   const commentId = await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true });

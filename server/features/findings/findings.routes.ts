@@ -46,6 +46,10 @@ export function findingsRoutes(deps: AppDeps): Router {
   router.get('/findings/:id/history', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (_req, res) => {
     res.json(await service.history(input(res, one).params.id, roleOf(res)));
   });
+  // A crop of the marked spot; redirects to a short-lived URL so it can be used as an image source.
+  router.get('/findings/:id/closeup', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (_req, res) => {
+    res.redirect(302, await service.closeupUrl(input(res, one).params.id, roleOf(res)));
+  });
   return router;
 }
 

@@ -3,6 +3,7 @@ import { geometrySchema, type Finding, type FindingChange, type FindingInput, ty
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
+import { ensureCloseup } from '../closeups/closeups';
 import { notificationsService } from '../notifications/notifications.service';
 import { photosRepo } from '../photos/photos.repo';
 import { findingsRepo, type FindingWithContext } from './findings.repo';
@@ -93,6 +94,11 @@ export function findingsService(deps: AppDeps) {
       const f = await visible(id, actor.role);
       if (!can(actor.role, 'findings.delete', { isAuthor: f.authorId === actor.id })) throw new ForbiddenError('Only a technician deletes a finding someone else placed.');
       await repo.remove(id);
+    },
+    async closeupUrl(id: number, role: Role) {
+      const f = await visible(id, role);
+      const photo = (await photos.find(f.photoId))!;
+      return deps.storage.getSignedUrl(await ensureCloseup(deps.storage, photo, f));
     },
     async history(id: number, role: Role): Promise<FindingChange[]> {
       await visible(id, role);

@@ -10,6 +10,9 @@ export const photoKeys = (storageKey: string) => ({
 /** The storage key a photo object belongs to (`photos/<restorationId>/<uuid>/…`). */
 export const storageKeyOf = (objectKey: string) => objectKey.split('/').slice(1, 3).join('/');
 
+/** Deletes every object of a photo: its variants and any close-ups cut from it. */
 export async function deletePhotoObjects(storage: Storage, storageKey: string): Promise<void> {
-  await Promise.all(Object.values(photoKeys(storageKey)).map((k) => storage.deleteObject(k)));
+  const keys = new Set(Object.values(photoKeys(storageKey)));
+  for await (const o of storage.listObjects(`photos/${storageKey}/`)) keys.add(o.key);
+  await Promise.all([...keys].map((k) => storage.deleteObject(k)));
 }

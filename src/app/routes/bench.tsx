@@ -3,6 +3,7 @@ import { Link } from 'react-router';
 import { buttonClass } from '../../components/button';
 import { inputClass } from '../../components/field';
 import { EmptyState, ErrorState, Loading } from '../../components/states';
+import { OpenQuestions } from '../../features/findings/components/open-questions';
 import { useRestorations } from '../../features/restorations/api/get-restorations';
 import { StageColumns } from '../../features/restorations/components/stage-columns';
 
@@ -21,6 +22,7 @@ export function BenchRoute() {
           + Take in a set
         </Link>
       </div>
+      <OpenQuestions />
       <div className="max-w-md">
         <label htmlFor="bench-search" className="sr-only">
           Search by make, model or serial

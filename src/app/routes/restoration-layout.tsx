@@ -36,6 +36,9 @@ export function RestorationLayout() {
         <NavLink to="photos" className={tabClass}>
           Photos
         </NavLink>
+        <NavLink to="findings" className={tabClass}>
+          Findings
+        </NavLink>
         <NavLink to="people" className={tabClass}>
           People
         </NavLink>

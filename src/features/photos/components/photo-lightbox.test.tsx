@@ -101,6 +101,12 @@ describe('photo lightbox', () => {
     expect(screen.getByRole('button', { name: 'Underside, before: wax capacitors' })).toHaveFocus();
   });
 
+  it('when a photo is open, then a link leads to its markup page', async () => {
+    const { user } = await openLibrary('mentor');
+    await user.click(screen.getByRole('button', { name: 'Underside, before: wax capacitors' }));
+    expect(within(screen.getByRole('dialog')).getByRole('link', { name: 'Mark up this photo' })).toHaveAttribute('href', '/restorations/7/photos/2');
+  });
+
   it('when a mentor opens a photo, then it can be viewed but not edited', async () => {
     const { user } = await openLibrary('mentor');
     await user.click(screen.getByRole('button', { name: 'Top, before: as received' }));

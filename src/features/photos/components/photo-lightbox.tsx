@@ -1,5 +1,6 @@
 import { useRef, type KeyboardEvent } from 'react';
 import { createPortal } from 'react-dom';
+import { Link } from 'react-router';
 import { can, type Role } from '../../../../shared/permissions';
 import type { Photo } from '../../../../shared/schemas/photos';
 import { buttonClass } from '../../../components/button';
@@ -82,6 +83,9 @@ export function PhotoLightbox({
             Close
           </button>
         </div>
+        <Link to={`/restorations/${photo.restorationId}/photos/${photo.id}`} className={buttonClass('primary', 'w-full')}>
+          {can(role, 'findings.create') ? 'Mark up this photo' : 'See the findings on this photo'}
+        </Link>
         {can(role, 'photos.edit') && (
           <PhotoEditPanel
             key={photo.id}

@@ -1,6 +1,7 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
+import { MemoryRouter } from 'react-router';
 import { vi } from 'vitest';
 import type { Photo } from '../../../../shared/schemas/photos';
 
@@ -42,7 +43,15 @@ export function fakePhotoApi(initial: Photo[], { failList = false } = {}) {
   return { calls, fetchMock };
 }
 
+/** Renders inside a fresh QueryClient and a memory router (the lightbox links to the markup page). */
 export function renderWithQueries(ui: ReactNode) {
   const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  return { client, ...render(<QueryClientProvider client={client}>{ui}</QueryClientProvider>) };
+  return {
+    client,
+    ...render(
+      <QueryClientProvider client={client}>
+        <MemoryRouter>{ui}</MemoryRouter>
+      </QueryClientProvider>,
+    ),
+  };
 }

@@ -1,0 +1,74 @@
+import type { ReactNode } from 'react';
+import { kindLabels, kinds, severities, severityLabels, type Finding, type FindingPatch } from '../../../../shared/schemas/findings';
+import { Field, inputClass } from '../../../components/field';
+import { checkComponentRef, checkTitle } from './finding-edit';
+import { InlineTextField } from './inline-text-field';
+import { SeverityMark, StatusMark } from './status-mark';
+import { StatusButtons } from './status-buttons';
+
+/** What a person who may change the finding edits: each field saves on its own. */
+export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (patch: FindingPatch) => void }) {
+  return (
+    <div className="space-y-3">
+      <InlineTextField label="Title" value={finding.title} check={checkTitle} onSave={(title) => onSave({ title })} />
+      <div className="grid gap-3 sm:grid-cols-[9rem_1fr]">
+        <InlineTextField
+          label="Component"
+          hint="As on the schematic"
+          mono
+          value={finding.componentRef}
+          check={checkComponentRef}
+          onSave={(componentRef) => onSave({ componentRef })}
+        />
+        <Field label="Kind" hint="What was seen">
+          {(a) => (
+            <select {...a} value={finding.kind} onChange={(e) => onSave({ kind: e.target.value as Finding['kind'] })} className={inputClass}>
+              {kinds.map((k) => (
+                <option key={k} value={k}>
+                  {kindLabels[k]}
+                </option>
+              ))}
+            </select>
+          )}
+        </Field>
+      </div>
+      <Field label="Severity">
+        {(a) => (
+          <select {...a} value={finding.severity} onChange={(e) => onSave({ severity: e.target.value as Finding['severity'] })} className={inputClass}>
+            {severities.map((s) => (
+              <option key={s} value={s}>
+                {severityLabels[s]}
+              </option>
+            ))}
+          </select>
+        )}
+      </Field>
+      <StatusButtons status={finding.status} onChange={onSave} />
+    </div>
+  );
+}
+
+function Row({ term, children }: { term: string; children: ReactNode }) {
+  return (
+    <div className="flex flex-wrap gap-x-3 py-1.5">
+      <dt className="w-28 shrink-0 text-ink-soft">{term}</dt>
+      <dd className="min-w-0 flex-1">{children}</dd>
+    </div>
+  );
+}
+
+/** The same facts for someone who reads them only. */
+export function FindingSummary({ finding }: { finding: Finding }) {
+  return (
+    <dl className="divide-y divide-rule">
+      <Row term="Component">{finding.componentRef ? <span className="font-mono">{finding.componentRef}</span> : <span className="text-ink-soft">none</span>}</Row>
+      <Row term="Kind">{kindLabels[finding.kind]}</Row>
+      <Row term="Severity">
+        <SeverityMark severity={finding.severity} />
+      </Row>
+      <Row term="Status">
+        <StatusMark status={finding.status} />
+      </Row>
+    </dl>
+  );
+}

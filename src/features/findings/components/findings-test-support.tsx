@@ -1,0 +1,85 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render } from '@testing-library/react';
+import type { ReactNode } from 'react';
+import { MemoryRouter, Route, Routes, useLocation } from 'react-router';
+import { vi } from 'vitest';
+import type { Comment, Finding } from '../../../../shared/schemas/findings';
+import type { FindingMember } from './finding-format';
+
+/** A finding as the API answers it; tests override what they care about. */
+export function makeFinding(id: number, overrides: Partial<Finding> = {}): Finding {
+  return {
+    id, photoId: 3, restorationId: 7, number: id, shape: 'pin', points: [{ x: 0.4, y: 0.6 }], title: `Finding ${id}`,
+    componentRef: '', kind: 'note', severity: 'info', status: 'observed', dismissReason: null, ownerVisible: false,
+    authorId: 1, authorName: 'Tessa Bench', questionOpen: false, commentCount: 0,
+    createdAt: '2026-11-20T09:00:00.000Z', updatedAt: '2026-11-20T09:00:00.000Z', ...overrides,
+  };
+}
+
+export function makeComment(id: number, overrides: Partial<Comment> = {}): Comment {
+  return {
+    id, findingId: 1, body: `Comment ${id}`, internal: true, authorId: 1, authorName: 'Tessa Bench', mentions: [],
+    createdAt: `2026-11-20T1${id % 10}:00:00.000Z`, editedAt: null, deletedAt: null, ...overrides,
+  };
+}
+
+/** An invented workshop: one technician, one mentor, one owner. */
+export const members: FindingMember[] = [
+  { userId: 1, name: 'Tessa Bench', role: 'technician' },
+  { userId: 2, name: 'Teodor Brask', role: 'mentor' },
+  { userId: 3, name: 'Mara Lind', role: 'owner' },
+];
+
+export interface Call {
+  method: string;
+  path: string;
+  body: unknown;
+}
+export type Reply = { status: number; body?: unknown };
+
+/**
+ * Stands in for the API behind `fetch`: `answer` gets each call (path without /api) and returns the reply, or
+ * nothing for a 404. Every call is recorded so tests can check what was sent.
+ */
+export function fakeApi(answer: (call: Call) => Reply | undefined | Promise<Reply | undefined>) {
+  const calls: Call[] = [];
+  const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
+    const call = { method: init.method ?? 'GET', path: String(input).replace(/^\/api/, ''), body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined };
+    calls.push(call);
+    const reply = (await answer(call)) ?? { status: 404, body: { error: { code: 'not-found', message: 'Not found.' } } };
+    if (reply.status === 204) return new Response(null, { status: 204 });
+    return new Response(JSON.stringify(reply.body), { status: reply.status, headers: { 'Content-Type': 'application/json' } });
+  });
+  vi.stubGlobal('fetch', fetchMock);
+  return { calls, fetchMock };
+}
+
+export const ok = (body: unknown): Reply => ({ status: 200, body });
+export const refuse = (status: number, message: string): Reply => ({ status, body: { error: { code: 'refused', message } } });
+
+function Location() {
+  return <div data-testid="location">{useLocation().pathname}</div>;
+}
+
+/** Renders with a fresh query cache (no retries) inside a memory router that shows where it has navigated to. */
+export function renderWithApp(ui: ReactNode, path = '/restorations/7/findings') {
+  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  const result = render(
+    <QueryClientProvider client={client}>
+      <MemoryRouter initialEntries={[path]}>
+        <Routes>
+          <Route
+            path="*"
+            element={
+              <>
+                {ui}
+                <Location />
+              </>
+            }
+          />
+        </Routes>
+      </MemoryRouter>
+    </QueryClientProvider>,
+  );
+  return { client, ...result };
+}

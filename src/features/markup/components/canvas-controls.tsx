@@ -1,0 +1,53 @@
+import { controlClass } from '../lib/control-styles';
+import type { Tool } from '../model/tools';
+import { MarkupToolbar } from './markup-toolbar';
+import { ZoomControls } from './zoom-controls';
+
+type Panel = 'legend' | 'help';
+
+/** The strip above the stage: tools, undo, zoom, and the legend and keys panels. */
+export function CanvasControls({
+  tool,
+  canCreate,
+  onTool,
+  canUndo,
+  onUndo,
+  scale,
+  onZoomIn,
+  onZoomOut,
+  onFit,
+  onActualSize,
+  panel,
+  onPanel,
+}: {
+  tool: Tool;
+  canCreate: boolean;
+  onTool: (tool: Tool) => void;
+  canUndo: boolean;
+  onUndo: () => void;
+  scale: number | undefined;
+  onZoomIn: () => void;
+  onZoomOut: () => void;
+  onFit: () => void;
+  onActualSize: () => void;
+  panel: Panel | undefined;
+  onPanel: (panel: Panel) => void;
+}) {
+  return (
+    <div className="flex flex-wrap items-center gap-x-3 gap-y-1 border-b border-rule px-2 py-1">
+      <MarkupToolbar tool={tool} canCreate={canCreate} onChange={onTool} />
+      <button type="button" onClick={onUndo} disabled={!canUndo} aria-keyshortcuts="Control+Z Meta+Z" title="Undo (Ctrl+Z)" className={controlClass}>
+        Undo
+      </button>
+      <ZoomControls scale={scale} onZoomIn={onZoomIn} onZoomOut={onZoomOut} onFit={onFit} onActualSize={onActualSize} />
+      <div className="ml-auto flex items-center gap-1">
+        <button type="button" aria-expanded={panel === 'legend'} onClick={() => onPanel('legend')} className={controlClass}>
+          Legend
+        </button>
+        <button type="button" aria-expanded={panel === 'help'} aria-keyshortcuts="?" title="Keys and gestures (?)" onClick={() => onPanel('help')} className={controlClass}>
+          Keys <kbd aria-hidden="true" className="rounded border border-rule px-1 font-mono text-xs text-ink-soft">?</kbd>
+        </button>
+      </div>
+    </div>
+  );
+}

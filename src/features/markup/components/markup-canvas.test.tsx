@@ -1,0 +1,173 @@
+// @vitest-environment happy-dom
+import 'vitest-canvas-mock';
+import '@testing-library/jest-dom/vitest';
+import { cleanup, fireEvent, render, screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { makeFinding } from '../testing/finding-fixtures';
+import { MarkupCanvas, type MarkupCanvasProps } from './markup-canvas';
+
+// The stage measures 800×600 at the viewport's top-left; the photo is 4000×3000, so "Fit" (16 px clear all round) is 568/3000 = 19 %.
+beforeEach(() => {
+  vi.spyOn(HTMLElement.prototype, 'getBoundingClientRect').mockReturnValue(DOMRect.fromRect({ x: 0, y: 0, width: 800, height: 600 }));
+});
+afterEach(() => {
+  cleanup();
+  vi.restoreAllMocks();
+});
+
+const items = [makeFinding(1, { points: [{ x: 0.5, y: 0.5 }] }), makeFinding(2, { shape: 'rect', points: [{ x: 0.1, y: 0.1 }, { x: 0.2, y: 0.2 }] })];
+
+function renderCanvas(overrides: Partial<MarkupCanvasProps> = {}) {
+  const props: MarkupCanvasProps = {
+    imageUrl: '/d/11.webp',
+    imageSize: { width: 4000, height: 3000 },
+    items,
+    canCreate: true,
+    canEdit: () => true,
+    onSelect: vi.fn(),
+    onCreate: vi.fn(),
+    onMove: vi.fn(),
+    onDelete: vi.fn(),
+    ...overrides,
+  };
+  const utils = render(<MarkupCanvas {...props} />);
+  return { ...utils, props, user: userEvent.setup(), stage: screen.getByTestId('markup-stage'), zoom: () => screen.getByRole('status', { name: 'Zoom level' }) };
+}
+
+describe('MarkupCanvas toolbar', () => {
+  it('when a tool letter is pressed on the canvas, then that tool is pressed and the others are not', async () => {
+    const { user, stage } = renderCanvas();
+    expect(screen.getByRole('button', { name: 'Select' })).toHaveAttribute('aria-pressed', 'true');
+    stage.focus();
+    await user.keyboard('p');
+    expect(screen.getByRole('button', { name: 'Pin' })).toHaveAttribute('aria-pressed', 'true');
+    expect(screen.getByRole('button', { name: 'Select' })).toHaveAttribute('aria-pressed', 'false');
+    await user.keyboard('r');
+    expect(screen.getByRole('button', { name: 'Rectangle' })).toHaveAttribute('aria-pressed', 'true');
+    expect(screen.getByRole('button', { name: 'Rectangle' })).toHaveAttribute('aria-keyshortcuts', 'R');
+  });
+
+  it('when the toolbar has focus, then it is one Tab stop, arrows move along it and Enter picks a tool', async () => {
+    const { user } = renderCanvas();
+    await user.tab();
+    expect(screen.getByRole('button', { name: 'Select' })).toHaveFocus();
+    await user.keyboard('{ArrowRight}{ArrowRight}');
+    expect(screen.getByRole('button', { name: 'Circle' })).toHaveFocus();
+    await user.keyboard('{Enter}');
+    expect(screen.getByRole('button', { name: 'Circle' })).toHaveAttribute('aria-pressed', 'true');
+    await user.keyboard('{End}');
+    expect(screen.getByRole('button', { name: 'Freehand' })).toHaveFocus();
+    await user.tab();
+    expect(screen.getByRole('button', { name: 'Circle' })).not.toHaveFocus();
+    expect(screen.getByRole('toolbar', { name: 'Markup tools' })).not.toContainElement(document.activeElement as HTMLElement);
+  });
+
+  it('when the person may not create findings, then only Select is offered and drawing keys do nothing', async () => {
+    const { user, stage } = renderCanvas({ canCreate: false });
+    expect(screen.getAllByRole('button', { pressed: true }).map((b) => b.textContent)).toEqual(['SelectV']);
+    expect(screen.queryByRole('button', { name: 'Pin' })).not.toBeInTheDocument();
+    stage.focus();
+    await user.keyboard('p');
+    expect(screen.getByRole('button', { name: 'Select' })).toHaveAttribute('aria-pressed', 'true');
+  });
+});
+
+describe('MarkupCanvas help and zoom', () => {
+  it('when ? is pressed, then the keys panel opens from the key map, and Escape closes it back to the canvas', async () => {
+    const { user, stage } = renderCanvas();
+    stage.focus();
+    await user.keyboard('?');
+    const help = screen.getByRole('dialog', { name: 'Keys and gestures' });
+    expect(help).toHaveTextContent('Place a pin');
+    expect(help).toHaveTextContent('Nudge by ten photo pixels');
+    await user.keyboard('{Escape}');
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
+    expect(stage).toHaveFocus();
+  });
+
+  it('when zoomed with the buttons and the keys, then the readout follows, and Fit and 100 % set it', async () => {
+    const { user, stage, zoom } = renderCanvas();
+    expect(zoom()).toHaveTextContent('19 %');
+    await user.click(screen.getByRole('button', { name: 'Zoom in' }));
+    expect(zoom()).toHaveTextContent('24 %');
+    stage.focus();
+    await user.keyboard('-');
+    expect(zoom()).toHaveTextContent('19 %');
+    await user.keyboard('-');
+    expect(zoom()).toHaveTextContent('15 %');
+    await user.click(screen.getByRole('button', { name: '100 %' }));
+    expect(zoom()).toHaveTextContent('100 %');
+    stage.focus();
+    await user.keyboard('0');
+    expect(zoom()).toHaveTextContent('19 %');
+    expect(window.__gridleakMarkup?.view.scale).toBeCloseTo(568 / 3000, 6);
+    expect(window.__gridleakMarkup?.imageToClient(0.5, 0.5)).toEqual({ x: 400, y: 300 });
+  });
+
+  it('when the wheel turns over the stage, then it zooms in around the pointer', () => {
+    const { stage, zoom } = renderCanvas();
+    fireEvent.wheel(stage, { deltaY: -100, clientX: 100, clientY: 100 });
+    expect(zoom()).not.toHaveTextContent('19 %');
+    expect(window.__gridleakMarkup?.view.scale).toBeGreaterThan(568 / 3000);
+  });
+});
+
+describe('MarkupCanvas editing', () => {
+  const press = (el: HTMLElement, x: number, y: number) => {
+    fireEvent.pointerDown(el, { pointerId: 1, button: 0, pointerType: 'mouse', clientX: x, clientY: y });
+    fireEvent.pointerUp(el, { pointerId: 1, button: 0, pointerType: 'mouse', clientX: x, clientY: y });
+  };
+
+  it('when the pin tool clicks the photo, then a pin is offered to the page where it was clicked', async () => {
+    const { user, stage, props } = renderCanvas();
+    await user.click(screen.getByRole('button', { name: 'Pin' }));
+    press(stage, 400, 300);
+    expect(props.onCreate).toHaveBeenCalledTimes(1);
+    const [mark] = vi.mocked(props.onCreate).mock.calls[0] ?? [];
+    expect(mark?.shape).toBe('pin');
+    expect(mark?.points[0]?.x).toBeCloseTo(0.5, 9);
+    expect(mark?.points[0]?.y).toBeCloseTo(0.5, 9);
+  });
+
+  it('when a pin is clicked with Select, then it is selected; a click on empty photo clears the selection', () => {
+    const { stage, props } = renderCanvas({ selectedId: 1 });
+    press(stage, 405, 298);
+    expect(props.onSelect).toHaveBeenLastCalledWith(1);
+    press(stage, 700, 500);
+    expect(props.onSelect).toHaveBeenLastCalledWith(undefined);
+  });
+
+  it('when the selected pin is nudged and the nudge undone, then the page is sent the moved and then the original points', async () => {
+    const { user, stage, props } = renderCanvas({ selectedId: 1 });
+    stage.focus();
+    await user.keyboard('{Shift>}{ArrowRight}{/Shift}');
+    expect(props.onMove).toHaveBeenLastCalledWith(1, [{ x: 0.5 + 10 / 4000, y: 0.5 }]);
+    await user.keyboard('{Control>}z{/Control}');
+    expect(props.onMove).toHaveBeenLastCalledWith(1, [{ x: 0.5, y: 0.5 }]);
+  });
+
+  it('when Delete is pressed on the selected finding, then it asks first and deletes only when confirmed', async () => {
+    const confirm = vi.fn().mockReturnValueOnce(false).mockReturnValueOnce(true);
+    window.confirm = confirm;
+    const { user, stage, props } = renderCanvas({ selectedId: 1 });
+    stage.focus();
+    await user.keyboard('{Delete}');
+    expect(props.onDelete).not.toHaveBeenCalled();
+    await user.keyboard('{Backspace}');
+    expect(confirm).toHaveBeenCalledTimes(2);
+    expect(props.onDelete).toHaveBeenCalledWith(1);
+  });
+
+  it('when the finding may not be edited, then Delete and the arrows leave it alone, and Escape deselects', async () => {
+    const { user, stage, props } = renderCanvas({ selectedId: 1, canEdit: () => false });
+    const confirm = vi.fn();
+    window.confirm = confirm;
+    stage.focus();
+    await user.keyboard('{Delete}{ArrowLeft}');
+    expect(confirm).not.toHaveBeenCalled();
+    expect(props.onMove).not.toHaveBeenCalled();
+    await user.keyboard('{Escape}');
+    expect(props.onSelect).toHaveBeenCalledWith(undefined);
+  });
+});

@@ -1,0 +1,170 @@
+import { useEffect, useMemo, useRef, useState } from 'react';
+import type { Finding } from '../../../../shared/schemas/findings';
+import { useCanvasPointer } from '../hooks/use-canvas-pointer';
+import { useContainerSize } from '../hooks/use-container-size';
+import { useMarkupCommands, type CommandCallbacks } from '../hooks/use-markup-commands';
+import { useMarkupKeys } from '../hooks/use-markup-keys';
+import { useMarkupProbe } from '../hooks/use-markup-probe';
+import { usePhotoImage } from '../hooks/use-photo-image';
+import { usePixelRatio } from '../hooks/use-pixel-ratio';
+import { useView } from '../hooks/use-view';
+import type { NewMark } from '../lib/marks';
+import { ZOOM_STEP } from '../lib/zoom';
+import { imagePoint } from '../model/coordinates';
+import { bounds, toGeometry } from '../model/geometry';
+import type { Draft, Tool, ToolResult } from '../model/tools';
+import { CanvasControls } from './canvas-controls';
+import { MarkupLegend } from './markup-legend';
+import { MarkupStage } from './markup-stage';
+import { ShortcutHelp } from './shortcut-help';
+
+export interface MarkupCanvasProps extends CommandCallbacks {
+  imageUrl: string;
+  /** The upright photo's size in px: image space. */
+  imageSize: { width: number; height: number };
+  items: readonly Finding[];
+  selectedId?: number;
+  /** Zoom onto this finding when it is set (opening a finding's URL, picking it from a list). */
+  focusId?: number;
+  canCreate: boolean;
+  canEdit: (finding: Finding) => boolean;
+  onSelect: (id: number | undefined) => void;
+  /** A new mark waiting for its title, drawn dashed until the page creates or drops it. */
+  pendingMark?: NewMark;
+  /** The display image failed to load (its presigned URL may have expired). */
+  onImageError?: () => void;
+  /** Names the photo for screen readers. */
+  label?: string;
+}
+
+/**
+ * The photo markup canvas: the photo on a Konva stage that fills its container, the findings drawn over it, the
+ * tools, zoom and pan by mouse, keys and touch. Props in, callbacks out; it fetches nothing.
+ */
+export function MarkupCanvas(props: MarkupCanvasProps) {
+  const { items, selectedId, focusId, canCreate, canEdit, onSelect, pendingMark } = props;
+  const { ref, size } = useContainerSize<HTMLDivElement>();
+  const imageSize = useMemo(() => ({ width: props.imageSize.width, height: props.imageSize.height }), [props.imageSize.width, props.imageSize.height]);
+  const photo = usePhotoImage(props.imageUrl, props.onImageError);
+  const pixelRatio = usePixelRatio();
+  const view = useView(imageSize, size);
+  const commands = useMarkupCommands(props);
+  const [tool, setTool] = useState<Tool>('select');
+  const [draft, setDraft] = useState<Draft>();
+  const [panel, setPanel] = useState<'legend' | 'help'>();
+  const [spaceHeld, setSpaceHeld] = useState(false);
+
+  const editable = useMemo(() => new Set(items.filter(canEdit).map((f) => f.id)), [items, canEdit]);
+  const selected = commands.marks.find((m) => m.id === selectedId);
+  const onResult = (result: ToolResult) => {
+    if (result.command) commands.run(result.command);
+    if (result.selection !== undefined) onSelect(result.selection ?? undefined);
+  };
+  const pointer = useCanvasPointer(ref, {
+    image: imageSize,
+    tool,
+    marks: commands.marks,
+    selectedId,
+    canCreate,
+    canEdit: (id) => editable.has(id),
+    spaceHeld,
+    view,
+    onDraft: setDraft,
+    onResult,
+    onClick: (id) => onSelect(id ?? undefined),
+  });
+  const closePanel = () => {
+    setPanel(undefined);
+    ref.current?.focus();
+  };
+  const keys = useMarkupKeys({
+    tool,
+    canCreate,
+    selectedId: selected?.id,
+    canEditSelected: selected ? editable.has(selected.id) : false,
+    image: imageSize,
+    view,
+    stage: ref,
+    setTool,
+    cancelGesture: pointer.cancel,
+    toggleHelp: () => setPanel((p) => (p === 'help' ? undefined : 'help')),
+    setSpaceHeld,
+    onSelect,
+    run: commands.run,
+    remove: commands.remove,
+    undo: commands.undo,
+  });
+
+  // Zoom onto `focusId` once the stage has a size and the finding is here; again only when it changes.
+  const focused = useRef<number | undefined>(undefined);
+  const ready = view.view !== undefined;
+  useEffect(() => {
+    if (focusId === undefined) focused.current = undefined;
+    const mark = commands.marks.find((m) => m.id === focusId);
+    if (!ready || !mark || focused.current === focusId) return;
+    focused.current = focusId;
+    view.focus(mark.shape === 'pin' ? (mark.points[0] ?? imagePoint(0.5, 0.5)) : bounds(mark, imageSize));
+  }, [focusId, ready, commands.marks, view, imageSize]);
+
+  useMarkupProbe(ref, view.view, imageSize, size);
+  const scene = useMemo(
+    () => ({
+      draft,
+      dragging: draft?.id === undefined ? undefined : commands.marks.find((m) => m.id === draft.id),
+      pending: pendingMark ? toGeometry(pendingMark) : undefined,
+      selected,
+      editable: selected ? editable.has(selected.id) : false,
+    }),
+    [draft, commands.marks, pendingMark, selected, editable],
+  );
+
+  return (
+    <div className="flex h-full min-h-0 flex-col overflow-hidden rounded-xl border border-rule bg-panel" onKeyDown={keys.onKeyDown} onKeyUp={keys.onKeyUp}>
+      <CanvasControls
+        tool={tool}
+        canCreate={canCreate}
+        onTool={(t) => {
+          pointer.cancel();
+          setTool(t);
+        }}
+        canUndo={commands.canUndo}
+        onUndo={commands.undo}
+        scale={view.view?.scale}
+        onZoomIn={() => view.zoomBy(ZOOM_STEP)}
+        onZoomOut={() => view.zoomBy(1 / ZOOM_STEP)}
+        onFit={view.fit}
+        onActualSize={view.actualSize}
+        panel={panel}
+        onPanel={(p) => setPanel((open) => (open === p ? undefined : p))}
+      />
+      <div className="relative min-h-0 flex-1">
+        <div
+          ref={ref}
+          data-testid="markup-stage"
+          tabIndex={0}
+          role="application"
+          aria-roledescription="photo markup"
+          aria-label={`${props.label ? `${props.label}. ` : ''}${items.length} ${items.length === 1 ? 'finding' : 'findings'}. Press ? for keys.`}
+          className="absolute inset-0 touch-none overflow-hidden bg-bakelite select-none focus-visible:outline-offset-[-3px]"
+          onBlur={() => setSpaceHeld(false)}
+          onContextMenu={(e) => e.preventDefault()}
+          {...pointer.handlers}
+        >
+          {size && view.view && (
+            <MarkupStage size={size} pixelRatio={pixelRatio} image={photo.image} imageSize={imageSize} view={view.view} marks={commands.marks} scene={scene} />
+          )}
+        </div>
+        {photo.status !== 'loaded' && (
+          <p role="status" className="pointer-events-none absolute bottom-3 left-1/2 -translate-x-1/2 rounded-full bg-panel/90 px-3 py-1 text-sm">
+            {photo.status === 'error' ? 'The photo did not load. Reload the page to try again.' : 'Loading the photo…'}
+          </p>
+        )}
+        {panel === 'legend' && <MarkupLegend onClose={closePanel} />}
+        {panel === 'help' && <ShortcutHelp onClose={closePanel} />}
+      </div>
+      <p role="status" className="sr-only">
+        {commands.message}
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,84 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { kindLabels, kinds, severities, severityLabels, type Shape } from '../../../../shared/schemas/findings';
+import { buttonClass } from '../../../components/button';
+import { Field, inputClass } from '../../../components/field';
+import { newFindingDefaults, newFindingSchema, type NewFindingValues } from '../lib/new-finding';
+import { toolLabels } from '../lib/tool-labels';
+
+/** Asks for the words of a mark just drawn; the mark waits on the photo, dashed, until it is saved or cancelled. */
+export function NewFindingForm({
+  shape,
+  busy,
+  error,
+  onSubmit,
+  onCancel,
+}: {
+  shape: Shape;
+  busy: boolean;
+  error?: string;
+  onSubmit: (values: NewFindingValues) => void;
+  onCancel: () => void;
+}) {
+  const { register, handleSubmit, formState } = useForm<NewFindingValues>({ resolver: zodResolver(newFindingSchema), defaultValues: newFindingDefaults });
+  const errors = formState.errors;
+  return (
+    <form
+      noValidate
+      aria-label="New finding"
+      className="space-y-3"
+      onSubmit={handleSubmit(onSubmit)}
+      onKeyDown={(e) => {
+        if (e.key === 'Escape') {
+          e.preventDefault();
+          onCancel();
+        }
+      }}
+    >
+      <h2 className="text-lg font-bold">New finding ({toolLabels[shape].toLowerCase()})</h2>
+      <Field label="Title" hint="What is wrong, or what to check" error={errors.title?.message}>
+        {(a) => <input {...a} {...register('title')} autoFocus maxLength={140} className={inputClass} />}
+      </Field>
+      <Field label="Component reference" hint="As the schematic prints it, e.g. R23 or C15b" error={errors.componentRef?.message}>
+        {(a) => <input {...a} {...register('componentRef')} maxLength={20} autoComplete="off" className={`${inputClass} font-mono`} />}
+      </Field>
+      <div className="grid grid-cols-2 gap-3">
+        <Field label="Kind">
+          {(a) => (
+            <select {...a} {...register('kind')} className={inputClass}>
+              {kinds.map((k) => (
+                <option key={k} value={k}>
+                  {kindLabels[k]}
+                </option>
+              ))}
+            </select>
+          )}
+        </Field>
+        <Field label="Severity">
+          {(a) => (
+            <select {...a} {...register('severity')} className={inputClass}>
+              {severities.map((s) => (
+                <option key={s} value={s}>
+                  {severityLabels[s]}
+                </option>
+              ))}
+            </select>
+          )}
+        </Field>
+      </div>
+      {error && (
+        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 font-semibold text-danger">
+          {error}
+        </p>
+      )}
+      <div className="flex flex-wrap gap-2">
+        <button type="submit" className={buttonClass('primary')} disabled={busy}>
+          {busy ? 'Saving…' : 'Save finding'}
+        </button>
+        <button type="button" className={buttonClass('quiet')} onClick={onCancel}>
+          Cancel
+        </button>
+      </div>
+    </form>
+  );
+}

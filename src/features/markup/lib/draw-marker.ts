@@ -1,0 +1,64 @@
+import type { Severity, Status } from '../../../../shared/schemas/findings';
+import { severityMarker, statusStyle, type MarkerShape } from '../model/legend';
+import { labelDrop, markerOutline, RING_HOLE } from './marker-outline';
+import { HALO_DARK, HALO_LIGHT, LABEL_FONT_FAMILY, PAPER, traceOutline, type Pen } from './pen';
+
+/** What one marker shows: its outline, fill and the text on it, with an optional glyph badge. */
+export interface MarkerLook {
+  readonly shape: MarkerShape;
+  readonly fill: string;
+  readonly ink: string;
+  readonly text: string;
+  readonly glyph?: string;
+}
+
+/** A finding's marker: the severity gives the shape, the status the fill and the badge glyph. */
+export function findingLook(number: number, status: Status, severity: Severity): MarkerLook {
+  const style = statusStyle(status);
+  return { shape: severityMarker(severity).shape, fill: style.colour, ink: style.ink, text: String(number), glyph: style.glyph };
+}
+
+/** Font size for the number: three digits need a smaller size to stay inside the marker. */
+const labelPx = (r: number, text: string): number => Math.round(r * (text.length >= 3 ? 0.72 : 0.88));
+
+/** Draw a marker centred on `x`, `y` with radius `r` stage px: its size does not change with the zoom. */
+export function drawMarker(pen: Pen, x: number, y: number, r: number, look: MarkerLook): void {
+  traceOutline(pen, markerOutline(look.shape, r), x, y);
+  pen.lineJoin = 'round';
+  pen.strokeStyle = HALO_DARK;
+  pen.lineWidth = 7;
+  pen.stroke();
+  pen.strokeStyle = HALO_LIGHT;
+  pen.lineWidth = 4;
+  pen.stroke();
+  pen.fillStyle = look.fill;
+  pen.fill();
+  let ink = look.ink;
+  if (look.shape === 'ring') {
+    traceOutline(pen, { kind: 'circle', r: r * RING_HOLE }, x, y);
+    pen.fillStyle = PAPER;
+    pen.fill();
+    ink = '#000000';
+  }
+  pen.fillStyle = ink;
+  pen.font = `bold ${labelPx(r, look.text)}px ${LABEL_FONT_FAMILY}`;
+  pen.textAlign = 'center';
+  pen.textBaseline = 'middle';
+  pen.fillText(look.text, x, y + labelDrop(look.shape, r));
+  if (look.glyph) drawBadge(pen, x + r * 0.95, y - r * 0.95, look.glyph);
+}
+
+/** The status glyph on a small white disc at the marker's upper right: it reads without any colour. */
+function drawBadge(pen: Pen, x: number, y: number, glyph: string): void {
+  traceOutline(pen, { kind: 'circle', r: 7.5 }, x, y);
+  pen.fillStyle = HALO_LIGHT;
+  pen.fill();
+  pen.strokeStyle = HALO_DARK;
+  pen.lineWidth = 1.5;
+  pen.stroke();
+  pen.fillStyle = '#000000';
+  pen.font = `bold 10px ${LABEL_FONT_FAMILY}`;
+  pen.textAlign = 'center';
+  pen.textBaseline = 'middle';
+  pen.fillText(glyph, x, y + 0.5);
+}

@@ -1,0 +1,101 @@
+// @vitest-environment happy-dom
+import '@testing-library/jest-dom/vitest';
+import { cleanup, screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { fakeReadingsApi, renderWithQueries } from '../testing/measurement-test-support';
+import { MeasurementForm } from './measurement-form';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const preview = () => screen.getByRole('region', { name: 'Verdict preview' });
+
+async function typeEsr(user: ReturnType<typeof userEvent.setup>) {
+  await user.selectOptions(screen.getByLabelText('Quantity'), 'esr');
+  await user.type(screen.getByLabelText('Location'), 'C15');
+  await user.type(screen.getByLabelText('Nominal capacitance'), '50µ');
+  await user.type(screen.getByLabelText('Rated voltage'), '400 V');
+  await user.type(screen.getByLabelText(/^Reading/), '0.5 Ω');
+}
+
+describe('measurement form', () => {
+  it('when an ESR of 0.5 Ω is typed for a 50 µF 400 V capacitor, then the preview says within, with its reason', async () => {
+    fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await typeEsr(user);
+    expect(within(preview()).getByText('within')).toBeInTheDocument();
+    expect(preview()).toHaveTextContent(/Reads 500 mΩ against an expected maximum of 800 mΩ for 50 µF 400 V .*: within\./);
+  });
+
+  it('when the quantity changes, then the labels follow: nominal capacitance and rating for ESR, a minimum for insulation', async () => {
+    fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'esr');
+    expect(screen.getByLabelText('Nominal capacitance')).toBeInTheDocument();
+    expect(screen.queryByLabelText(/Tolerance/)).not.toBeInTheDocument();
+    expect(screen.getByText('Test frequency, e.g. 100 kHz')).toBeInTheDocument();
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'insulation');
+    expect(screen.getByLabelText('Minimum')).toBeInTheDocument();
+    expect(screen.queryByLabelText('Rated voltage')).not.toBeInTheDocument();
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'dc-voltage');
+    expect(screen.getByLabelText(/Tolerance/)).toBeInTheDocument();
+    expect(screen.getByText('Meter and its Ω/V, e.g. DMM 10 MΩ or 20 kΩ/V')).toBeInTheDocument();
+  });
+
+  it('when a voltage is to be measured, then the live-readings caution shows; for ESR it does not', async () => {
+    fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'esr');
+    expect(screen.queryByText(/HT can kill/)).not.toBeInTheDocument();
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'dc-voltage');
+    expect(screen.getByRole('note')).toHaveTextContent(/Live readings: HT can kill\..*isolation transformer\. Follow local codes and licensed practice\./);
+  });
+
+  it('when the reading is in the wrong unit, then the library’s message shows beside the reading and nothing is sent', async () => {
+    const { calls } = fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'dc-voltage');
+    await user.type(screen.getByLabelText('Location'), 'V5 pin 7');
+    await user.type(screen.getByLabelText(/^Reading/), '250 Ω');
+    const reading = screen.getByLabelText(/^Reading/);
+    expect(reading).toHaveAttribute('aria-invalid', 'true');
+    expect(reading).toHaveAccessibleDescription(/Reading: '250 Ω' is not a value Gridleak can read: it is in Ω but V was expected here/);
+    await user.click(screen.getByRole('button', { name: 'Save reading' }));
+    expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+  });
+
+  it('when saved, then the reading is sent as typed with the finding chosen, and the point is cleared for the next', async () => {
+    const { calls } = fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} findings={[{ id: 12, number: 3, title: 'Bulging reservoir cap' }]} />);
+    await typeEsr(user);
+    await user.selectOptions(screen.getByLabelText('Finding (optional)'), '12');
+    await user.click(screen.getByLabelText('Share with the owner'));
+    await user.click(screen.getByRole('button', { name: 'Save reading' }));
+    await waitFor(() => expect(calls.find((c) => c.method === 'POST')).toBeDefined());
+    expect(calls.find((c) => c.method === 'POST')).toMatchObject({
+      url: '/api/restorations/7/measurements',
+      body: { location: 'C15', quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω', tolerance: '', findingId: 12, ownerVisible: true },
+    });
+    expect(await screen.findByRole('status')).toHaveTextContent('Saved.');
+    expect(screen.getByLabelText('Location')).toHaveValue('');
+    expect(screen.getByLabelText('Quantity')).toHaveValue('esr');
+  });
+
+  it('when the server refuses, then its words are shown', async () => {
+    fakeReadingsApi([], { refuseLocations: ['C15'] });
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await typeEsr(user);
+    await user.click(screen.getByRole('button', { name: 'Save reading' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent('Not saved: Reading: the server would not take this one.');
+    expect(screen.getByLabelText(/^Reading/)).toHaveAttribute('aria-invalid', 'true');
+  });
+});

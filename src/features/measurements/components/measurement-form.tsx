@@ -1,0 +1,110 @@
+import { measuredQuantities } from '../../../../shared/bench';
+import { quantityLabels, type Measurement } from '../../../../shared/schemas/measurements';
+import { buttonClass } from '../../../components/button';
+import { Field, inputClass } from '../../../components/field';
+import { useReadingForm } from '../hooks/use-reading-form';
+import { LiveReadingsNote } from './live-readings-note';
+import { VerdictPreviewPanel } from './verdict-preview-panel';
+
+export interface FindingChoice {
+  id: number;
+  number: number;
+  title: string;
+}
+
+const valueInput = `${inputClass} font-mono`;
+const typed = { autoComplete: 'off', autoCorrect: 'off', spellCheck: false } as const;
+
+/**
+ * Records a reading (or, with `measurement`, changes one) as the restorer writes it: "4k7", "250 V", "50µ".
+ * The verdict is previewed while typing; the server's stored verdict counts once saved. Technicians only.
+ */
+export function MeasurementForm({ restorationId, findings, measurement, findingId, onDone, onCancel }: {
+  restorationId: number;
+  findings?: FindingChoice[];
+  measurement?: Measurement;
+  /** Links a new reading to this finding from the start. */
+  findingId?: number;
+  onDone?: () => void;
+  onCancel?: () => void;
+}) {
+  const { form, fields, preview, errorOf, onSubmit, saving, saved, serverMessage } = useReadingForm({ restorationId, measurement, findingId, onDone });
+  const { register } = form;
+  const editing = measurement !== undefined;
+  return (
+    <form noValidate onSubmit={onSubmit} aria-label={editing ? `Change the reading at ${measurement.location}` : 'Record a reading'}
+      className="space-y-4 rounded-xl border border-rule bg-panel p-4">
+      {!editing && <h3 className="text-lg font-bold">Record a reading</h3>}
+      <div className="grid gap-3 sm:grid-cols-2">
+        <Field label="Location" hint="Component or test point, e.g. C15, V5 pin 7" error={errorOf('location')}>
+          {(a) => <input {...a} {...register('location')} {...typed} className={inputClass} placeholder="e.g. V5 pin 7" />}
+        </Field>
+        <Field label="Quantity" error={errorOf('quantity')}>
+          {(a) => (
+            <select {...a} {...register('quantity')} className={inputClass}>
+              {measuredQuantities.map((q) => (
+                <option key={q} value={q}>{quantityLabels[q]}</option>
+              ))}
+            </select>
+          )}
+        </Field>
+        <Field label={fields.expectedLabel} error={errorOf('expected')}>
+          {(a) => <input {...a} {...register('expected')} {...typed} className={valueInput} placeholder={fields.expectedPlaceholder} />}
+        </Field>
+        {fields.showTolerance && (
+          <Field label="Tolerance (%)" hint="Blank for the usual ±20 %; -20/+50 for uneven" error={errorOf('tolerance')}>
+            {(a) => <input {...a} {...register('tolerance')} {...typed} className={valueInput} placeholder="e.g. 10" inputMode="text" />}
+          </Field>
+        )}
+        {fields.showRating && (
+          <Field label="Rated voltage" error={errorOf('rating')}>
+            {(a) => <input {...a} {...register('rating')} {...typed} className={valueInput} placeholder="e.g. 400 V" />}
+          </Field>
+        )}
+        <Field label="Reading" hint="As the meter showed it" error={errorOf('reading')}>
+          {(a) => <input {...a} {...register('reading')} {...typed} className={valueInput} placeholder={fields.readingPlaceholder} />}
+        </Field>
+      </div>
+      <VerdictPreviewPanel preview={preview} />
+      <div className="grid gap-3 sm:grid-cols-2">
+        <Field label="Conditions" hint="e.g. 230 V mains, no signal, volume minimum" error={errorOf('conditions')}>
+          {(a) => <input {...a} {...register('conditions')} className={inputClass} />}
+        </Field>
+        <Field label="Method" hint={fields.methodHint} error={errorOf('method')}>
+          {(a) => <input {...a} {...register('method')} className={inputClass} />}
+        </Field>
+        {findings && findings.length > 0 && (
+          <Field label="Finding (optional)" error={errorOf('findingId')}>
+            {(a) => (
+              <select {...a} {...register('findingId')} className={inputClass}>
+                <option value="">Not tied to a finding</option>
+                {findings.map((f) => (
+                  <option key={f.id} value={String(f.id)}>#{f.number} {f.title}</option>
+                ))}
+              </select>
+            )}
+          </Field>
+        )}
+        <label className="flex min-h-11 items-center gap-2 self-end">
+          <input type="checkbox" {...register('ownerVisible')} className="h-5 w-5 accent-glow" />
+          Share with the owner
+        </label>
+      </div>
+      {fields.live && <LiveReadingsNote />}
+      {serverMessage && (
+        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
+          Not saved: {serverMessage}
+        </p>
+      )}
+      {saved && <p role="status" className="text-sm">Saved. The verdict shown in the list is the one stored.</p>}
+      <div className="flex flex-wrap gap-2">
+        <button type="submit" className={buttonClass('primary')} disabled={saving}>
+          {saving ? 'Saving…' : editing ? 'Save changes' : 'Save reading'}
+        </button>
+        {onCancel && (
+          <button type="button" className={buttonClass('quiet')} onClick={onCancel}>Cancel</button>
+        )}
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,36 @@
+import type { VoltagePoint } from './voltage-points';
+
+/** One row of the voltage plot, in per cent of the expected value. */
+export interface PlotRow {
+  label: string;
+  /** The marginal zone (1.5 × the band), which the bar spans; the band is drawn inside it. */
+  zone: [number, number] | null;
+  band: [number, number] | null;
+  /** Where the reading's mark goes, held inside the axis; at the left edge when there is nothing to compare with. */
+  x: number;
+  offScale: 'low' | 'high' | null;
+  point: VoltagePoint;
+}
+
+/** The marginal zone reaches half the band again beyond it (the bench library's rule). */
+const MARGINAL_FACTOR = 1.5;
+
+export function plotRows(points: readonly VoltagePoint[], limit: number): PlotRow[] {
+  return points.map((point) => {
+    const d = point.deviationPct;
+    const offScale = d === null ? null : d > limit ? 'high' : d < -limit ? 'low' : null;
+    return {
+      label: point.label,
+      band: point.bandPct,
+      zone: point.bandPct ? [point.bandPct[0] * MARGINAL_FACTOR, point.bandPct[1] * MARGINAL_FACTOR] : null,
+      x: d === null ? -limit : Math.max(-limit, Math.min(limit, d)),
+      offScale,
+      point,
+    };
+  });
+}
+
+/** Axis ticks: the edges, halfway and the expected value. */
+export const plotTicks = (limit: number) => [-limit, -limit / 2, 0, limit / 2, limit];
+
+export const formatTick = (v: number) => (v === 0 ? '0' : `${v > 0 ? '+' : '\u2212'}${Math.abs(v)} %`);

@@ -1,0 +1,52 @@
+import { BenchInputError, measurementVerdict } from '../../../../shared/bench';
+import type { MeasuredQuantity, MeasurementVerdict } from '../../../../shared/bench';
+import { quantityFields } from './quantity-fields';
+
+/** The form's fields a message can be about. */
+export type ReadingField = 'location' | 'quantity' | 'expected' | 'tolerance' | 'rating' | 'reading' | 'conditions' | 'method' | 'findingId';
+
+export interface ReadingTexts {
+  quantity: MeasuredQuantity;
+  expected: string;
+  tolerance: string;
+  rating: string;
+  reading: string;
+}
+
+export type Preview =
+  | { status: 'waiting' }
+  | { status: 'ready'; verdict: MeasurementVerdict }
+  | { status: 'refused'; field?: ReadingField; message: string };
+
+// Bench-library messages start with the field's name in words; the API's validation messages with its key.
+const PREFIXES: Record<string, ReadingField> = {
+  reading: 'reading', 'expected value': 'expected', expected: 'expected', rating: 'rating', tolerance: 'tolerance',
+  location: 'location', quantity: 'quantity', conditions: 'conditions', method: 'method', findingid: 'findingId',
+};
+
+/** Which field a message from the bench library or the API is about, if it says. */
+export function fieldOfMessage(message: string): ReadingField | undefined {
+  const prefix = /^([A-Za-z ]+):/.exec(message)?.[1]?.trim().toLowerCase();
+  if (prefix !== undefined && prefix in PREFIXES) return PREFIXES[prefix];
+  if (/tolerance/i.test(message)) return 'tolerance';
+  if (/expected value/i.test(message)) return 'expected';
+  return undefined;
+}
+
+/** Drops what a kind of reading does not use, so a value left over from another kind does not count. */
+export function relevantTexts(texts: ReadingTexts): ReadingTexts {
+  const fields = quantityFields[texts.quantity];
+  return { ...texts, tolerance: fields.showTolerance ? texts.tolerance : '', rating: fields.showRating ? texts.rating : '' };
+}
+
+/** The verdict the server will store, worked out as the person types; waits for a reading. */
+export function previewVerdict(texts: ReadingTexts): Preview {
+  const t = relevantTexts(texts);
+  if (t.reading.trim() === '') return { status: 'waiting' };
+  try {
+    return { status: 'ready', verdict: measurementVerdict(t) };
+  } catch (error) {
+    if (!(error instanceof BenchInputError)) throw error;
+    return { status: 'refused', field: fieldOfMessage(error.message), message: error.message };
+  }
+}
