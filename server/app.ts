@@ -17,6 +17,7 @@ import { metaRoutes } from './features/meta/meta.routes';
 import { notificationsRoutes } from './features/notifications/notifications.routes';
 import { partsRoutes } from './features/parts/parts.routes';
 import { photosRoutes } from './features/photos/photos.routes';
+import { reportRoutes } from './features/report/report.routes';
 import { restorationsRoutes } from './features/restorations/restorations.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { requireSameOrigin } from './http/same-origin';
@@ -65,6 +66,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(measurementsRoutes(deps));
   api.use(partsRoutes(deps));
   api.use(eventsRoutes(deps));
+  api.use(reportRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

@@ -100,7 +100,7 @@ function PhotoMarkup({
       )}
       <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0 space-y-3">
-          <div className="h-[65dvh] min-h-72 lg:h-[calc(100dvh-15rem)] lg:min-h-[28rem]">
+          <div className="h-[65dvh] min-h-72 lg:h-[calc(100dvh-19rem)] lg:min-h-[28rem]">
             <MarkupCanvas
               imageUrl={photo.urls.display}
               imageSize={{ width: photo.width, height: photo.height }}

@@ -40,7 +40,7 @@ export function MarkerGlyph({
       )}
       {shape === 'ring' && !fill && <circle r={R} fill="none" stroke="currentColor" strokeWidth={5} />}
       {text && (
-        <text y={labelDrop(shape, R)} fill={textFill} fontSize={text.length >= 3 ? 8 : 10} fontWeight={700} textAnchor="middle" dominantBaseline="central">
+        <text y={labelDrop(shape, R)} fill={textFill} fontSize={text.length === 1 ? 13 : text.length === 2 ? 10 : 8} fontWeight={700} textAnchor="middle" dominantBaseline="central">
           {text}
         </text>
       )}

@@ -13,7 +13,7 @@ export function MarkupLegend({ onClose }: { onClose: () => void }) {
           const style = statusStyle(s);
           return (
             <li key={s} className="flex items-center gap-2">
-              <MarkerGlyph shape="circle" fill={style.colour} ink={style.ink} text={style.glyph} />
+              <MarkerGlyph shape="circle" fill={style.colour} ink={style.ink} text={style.glyph} size={30} />
               <span>{style.label}</span>
             </li>
           );
@@ -25,15 +25,15 @@ export function MarkupLegend({ onClose }: { onClose: () => void }) {
           const marker = severityMarker(s);
           return (
             <li key={s} className="flex items-center gap-2">
-              <MarkerGlyph shape={marker.shape} />
+              <MarkerGlyph shape={marker.shape} size={30} />
               <span>{marker.label}</span>
             </li>
           );
         })}
       </ul>
       <p className="mt-3 text-sm text-ink-soft">
-        Each finding&apos;s number is on its marker: a pin is the marker itself; a circle, rectangle, arrow or freehand line is drawn in
-        its status colour with the marker at its start. Markers keep their size at every zoom.
+        Each finding&apos;s number is on its marker, with the status glyph beside it. A pin is the marker itself; a circle, rectangle,
+        arrow or freehand line is drawn in its status colour and carries the marker. Markers keep their size at every zoom.
       </p>
     </FloatingPanel>
   );

@@ -13,10 +13,10 @@ const gestures: readonly { keys: readonly string[]; description: string }[] = [
 export function ShortcutHelp({ onClose }: { onClose: () => void }) {
   return (
     <FloatingPanel title="Keys and gestures" closeKeys={['?']} onClose={onClose}>
-      <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1.5 text-sm">
+      <dl className="space-y-1.5 text-sm">
         {[...shortcutHelp, ...gestures].map(({ keys, description }) => (
-          <div key={description} className="contents">
-            <dt className="flex flex-wrap items-start gap-1">
+          <div key={description} className="flex gap-3">
+            <dt className="flex w-32 shrink-0 flex-wrap items-start gap-1">
               {keys.map((k, i) => (
                 <span key={k} className="inline-flex items-center gap-1">
                   {i > 0 && <span className="text-ink-soft">or</span>}
@@ -24,7 +24,7 @@ export function ShortcutHelp({ onClose }: { onClose: () => void }) {
                 </span>
               ))}
             </dt>
-            <dd>{description}</dd>
+            <dd className="min-w-0">{description}</dd>
           </div>
         ))}
       </dl>

@@ -4,6 +4,20 @@ import { rowPreview, type EntryRow, type EntryShared } from '../lib/chart-entry'
 import { verdictMarks } from '../lib/verdict-marks';
 
 const cellInput = `${inputClass} font-mono`;
+const ENTRY_COLUMNS = 'sm:grid-cols-[1.4fr_1fr_0.7fr_1fr_8rem_2.75rem]';
+
+/** Column names over the rows, for sighted users on wider screens (each box carries its own label). */
+export function ChartEntryHeader() {
+  return (
+    <div aria-hidden="true" className={`hidden gap-2 text-sm font-semibold text-ink-soft sm:grid ${ENTRY_COLUMNS}`}>
+      <span>Location</span>
+      <span>Expected</span>
+      <span>Tolerance %</span>
+      <span>Reading</span>
+      <span>Verdict</span>
+    </div>
+  );
+}
 const typed = { autoComplete: 'off', autoCorrect: 'off', spellCheck: false } as const;
 
 /** One point of a voltage chart being entered: where, expected, tolerance, reading, and the verdict so far. */
@@ -32,7 +46,7 @@ export function ChartEntryRow({ row, number, quantity, onChange, onRemove, onEnt
   );
   return (
     <li className="space-y-1 border-t border-rule pt-2" aria-label={`Row ${number}`}>
-      <div className="grid grid-cols-2 gap-2 sm:grid-cols-[1.4fr_1fr_0.7fr_1fr_8rem_auto] sm:items-center">
+      <div className={`grid grid-cols-2 gap-2 sm:items-center ${ENTRY_COLUMNS}`}>
         {input('location', 'Location', 'V5 pin 7')}
         {input('expected', 'Expected', '250 V')}
         {input('tolerance', 'Tolerance (%)', '20')}

@@ -25,7 +25,7 @@ export function MeasurementRow({ restorationId, m, canRecord, onEdit }: {
       </th>
       <td className={cell}>{quantityLabels[m.quantity]}</td>
       <td className={`${cell} font-mono`}>{expectedSummary(m)}</td>
-      <td className={`${cell} font-mono`}>{m.readingText}</td>
+      <td className={`${cell} whitespace-nowrap font-mono`}>{m.readingText}</td>
       <td className={`${cell} font-mono whitespace-nowrap`}>
         {formatDeviation(m.deviation)}
         {judgedByLimit(m.quantity) && m.deviation !== null && <span className="block font-sans text-xs text-ink-soft">against the limit</span>}

@@ -1,7 +1,7 @@
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useChartEntry } from '../hooks/use-chart-entry';
-import { ChartEntryRow } from './chart-entry-row';
+import { ChartEntryHeader, ChartEntryRow } from './chart-entry-row';
 import { LiveReadingsNote } from './live-readings-note';
 
 /** Enter the manual's voltage chart point by point and save it all at once (one reading per row). */
@@ -35,6 +35,7 @@ export function VoltageChartEntry({ restorationId, onClose }: { restorationId: n
       <p className="text-sm text-ink-soft">
         Tolerance in per cent; blank for the usual ±20 %. Enter in any box starts a new row.
       </p>
+      <ChartEntryHeader />
       <ol className="space-y-2">
         {entry.rows.map((row, i) => (
           <ChartEntryRow key={row.key} row={row} number={i + 1} quantity={shared.quantity}

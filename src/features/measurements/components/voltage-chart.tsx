@@ -47,7 +47,7 @@ export function VoltageChart({ restorationId, role, measurements, plotWidth }: {
           {canRecord ? 'Enter the points of the manual’s voltage chart below, or record DC and AC voltages one at a time.' : 'Voltage readings will be plotted here.'}
         </EmptyState>
       ) : (
-        <div className="grid gap-4 xl:grid-cols-2">
+        <div className="space-y-3">
           <figure className="space-y-2 rounded-xl border border-rule bg-panel p-3">
             <VoltagePlot points={points} width={plotWidth} />
             <figcaption>

@@ -1,7 +1,7 @@
 import type { BarShapeProps, ScatterShapeProps } from 'recharts';
-import { formatQuantity } from '../../../../shared/bench';
 import type { PlotRow } from '../lib/plot-rows';
 import { verdictMarks } from '../lib/verdict-marks';
+import { voltsText } from '../lib/voltage-points';
 
 /** The tolerance band as a shaded range inside its lighter marginal zone, with the expected value as a tick. */
 export function BandShape({ x, y, width, height, payload }: BarShapeProps) {
@@ -42,15 +42,17 @@ export function ReadingShape({ cx, cy, payload }: ScatterShapeProps) {
   if (!row || cx === undefined || cy === undefined) return <g />;
   const { point } = row;
   const mark = verdictMarks[point.verdict];
-  const value = formatQuantity(point.reading, 'V');
+  const value = voltsText(point.reading);
   const text =
     point.verdict === 'unknown'
       ? `? ${value}, no expected value`
       : `${mark.glyph} ${value}${row.offScale === 'high' ? ' ▸ off scale' : row.offScale === 'low' ? ' ◂ off scale' : ''}`;
+  // Held inside the plot: a label at an edge grows inwards.
+  const anchor = point.verdict === 'unknown' || row.offScale === 'low' ? 'start' : row.offScale === 'high' ? 'end' : 'middle';
   return (
     <g>
       <Mark verdict={point.verdict} cx={cx} cy={cy} />
-      <text x={cx} y={cy - 12} textAnchor={point.verdict === 'unknown' ? 'start' : 'middle'} fontSize={13} fontWeight={700}
+      <text x={cx} y={cy - 12} textAnchor={anchor} fontSize={13} fontWeight={700}
         className={mark.svg.split(' ')[0]}>
         {text}
       </text>

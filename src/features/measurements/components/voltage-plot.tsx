@@ -18,7 +18,7 @@ export function VoltagePlot({ points, width }: { points: VoltagePoint[]; width?:
   return (
     <div role="img" aria-label={plotSummary(points)} className="text-ink">
       <ComposedChart {...size} data={rows} layout="vertical" margin={{ top: 20, right: 48, bottom: 24, left: 8 }} accessibilityLayer={false}>
-        <XAxis type="number" domain={[-limit, limit]} ticks={plotTicks(limit)} tickFormatter={formatTick} allowDataOverflow
+        <XAxis type="number" domain={[-limit, limit]} ticks={plotTicks(limit)} tickFormatter={formatTick}
           stroke="currentColor" tick={{ fill: 'currentColor', fontSize: 13 }}
           label={{ value: 'Reading against the manual’s value', position: 'insideBottom', offset: -16, fill: 'currentColor', fontSize: 13 }} />
         <YAxis type="category" dataKey="label" width={120} stroke="currentColor" tick={{ fill: 'currentColor', fontSize: 13 }} />

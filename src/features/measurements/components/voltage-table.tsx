@@ -1,7 +1,6 @@
 import { Fragment } from 'react';
-import { formatQuantity } from '../../../../shared/bench';
 import { formatDeviation } from '../lib/measurement-format';
-import { groupPoints, type VoltagePoint } from '../lib/voltage-points';
+import { groupPoints, voltsText, type VoltagePoint } from '../lib/voltage-points';
 import { VerdictBadge } from './verdict-badge';
 
 const cell = 'px-3 py-1.5 align-top';
@@ -27,10 +26,10 @@ export function VoltageTable({ points }: { points: VoltagePoint[] }) {
               </tr>
               {list.map((p) => (
                 <tr key={p.id} className="border-t border-rule" data-verdict={p.verdict}>
-                  <th scope="row" className={`${cell} font-semibold`}>{p.label}</th>
-                  <td className={`${cell} font-mono`}>{p.expected === null ? '—' : formatQuantity(p.expected, 'V')}</td>
+                  <th scope="row" className={`${cell} whitespace-nowrap font-semibold`}>{p.label}</th>
+                  <td className={`${cell} font-mono`}>{p.expected === null ? '—' : voltsText(p.expected)}</td>
                   <td className={`${cell} font-mono`}>{p.band || '—'}</td>
-                  <td className={`${cell} font-mono`}>{formatQuantity(p.reading, 'V')}</td>
+                  <td className={`${cell} font-mono`}>{voltsText(p.reading)}</td>
                   <td className={`${cell} font-mono whitespace-nowrap`}>{formatDeviation(p.deviationPct === null ? null : p.deviationPct / 100)}</td>
                   <td className={cell}>
                     <VerdictBadge verdict={p.verdict} reason={p.reason} />

@@ -28,8 +28,8 @@ const PREFIXES: Record<string, ReadingField> = {
 export function fieldOfMessage(message: string): ReadingField | undefined {
   const prefix = /^([A-Za-z ]+):/.exec(message)?.[1]?.trim().toLowerCase();
   if (prefix !== undefined && prefix in PREFIXES) return PREFIXES[prefix];
-  if (/tolerance/i.test(message)) return 'tolerance';
   if (/expected value/i.test(message)) return 'expected';
+  if (/tolerance|below what is expected/i.test(message)) return 'tolerance';
   return undefined;
 }
 

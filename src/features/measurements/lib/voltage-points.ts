@@ -87,12 +87,13 @@ export function plotLimit(points: readonly VoltagePoint[]): number {
   return Math.min(100, Math.ceil(widest / 10) * 10);
 }
 
-const volts = (v: number | null) => (v === null ? '—' : formatQuantity(v, 'V'));
+/** Volts with an SI prefix and a true minus sign: −2.1 V, 1.2 kV; "—" for none. */
+export const voltsText = (v: number | null) => (v === null ? '—' : formatQuantity(v, 'V').replace('-', '\u2212'));
 
 /** One point in words, e.g. "V5 pin 7 reads 320 V against 250 V ±10 %". */
 export function describePoint(p: VoltagePoint): string {
-  if (p.expected === null) return `${p.label} reads ${volts(p.reading)}, no expected value`;
-  return `${p.label} reads ${volts(p.reading)} against ${volts(p.expected)} ${p.band}`;
+  if (p.expected === null) return `${p.label} reads ${voltsText(p.reading)}, no expected value`;
+  return `${p.label} reads ${voltsText(p.reading)} against ${voltsText(p.expected)} ${p.band}`;
 }
 
 /** The plot in words, for those who cannot see it: counts by verdict, then each point that is not within. */

@@ -1,0 +1,62 @@
+import { and, asc, eq } from 'drizzle-orm';
+import type { AppDeps } from '../../app-deps';
+import { findings, measurements, memberships, parts, photos, restorations, users } from '../../db/schema';
+import { ensureCloseup } from '../closeups/closeups';
+import { photoKeys } from '../photos/photo-objects';
+
+type PhotoRow = typeof photos.$inferSelect;
+
+/**
+ * Everything the hand-back report shows, read as the owner would see it: only photos, findings and
+ * readings shared with them. The report is the owner's document, whoever downloads it.
+ */
+export async function reportData({ db, storage }: Pick<AppDeps, 'db' | 'storage'>, restorationId: number) {
+  const [set] = await db.select().from(restorations).where(eq(restorations.id, restorationId));
+  if (!set) return undefined;
+  const sharedPhotos = await db.select().from(photos).where(and(eq(photos.restorationId, restorationId), eq(photos.ownerVisible, true))).orderBy(asc(photos.createdAt));
+  const sharedPhotoIds = new Set(sharedPhotos.map((p) => p.id));
+  const allFindings = await db.select().from(findings).where(and(eq(findings.restorationId, restorationId), eq(findings.ownerVisible, true))).orderBy(asc(findings.number));
+  const visibleFindings = allFindings.filter((f) => sharedPhotoIds.has(f.photoId));
+  const ledger = await db.select().from(parts).where(eq(parts.restorationId, restorationId)).orderBy(asc(parts.componentRef));
+  const readings = await db
+    .select()
+    .from(measurements)
+    .where(and(eq(measurements.restorationId, restorationId), eq(measurements.ownerVisible, true)))
+    .orderBy(asc(measurements.measuredAt));
+  const technicians = await db
+    .select({ name: users.name })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.restorationId, restorationId), eq(memberships.role, 'technician')));
+
+  const image = async (key: string) => storage.getObject(key);
+  // Before and after of the same view: the latest shared photo of each phase.
+  const pairs: { view: PhotoRow['view']; before: Buffer; after: Buffer; beforeCaption: string; afterCaption: string }[] = [];
+  for (const view of new Set(sharedPhotos.map((p) => p.view))) {
+    const of = (phase: PhotoRow['phase']) => sharedPhotos.filter((p) => p.view === view && p.phase === phase).at(-1);
+    const before = of('before');
+    const after = of('after');
+    if (before && after)
+      pairs.push({ view, before: await image(photoKeys(before.storageKey).display), after: await image(photoKeys(after.storageKey).display),
+        beforeCaption: before.caption, afterCaption: after.caption });
+  }
+  const repaired = await Promise.all(
+    visibleFindings
+      .filter((f) => f.status === 'repaired' || f.status === 'verified')
+      .map(async (f) => ({ finding: f, closeup: await image(await ensureCloseup(storage, sharedPhotos.find((p) => p.id === f.photoId)!, f)) })),
+  );
+  const cover = sharedPhotos.find((p) => p.phase === 'after') ?? sharedPhotos[0];
+  return {
+    set,
+    technicians,
+    cover: cover ? await image(photoKeys(cover.storageKey).display) : undefined,
+    findings: visibleFindings,
+    pairs,
+    repaired,
+    replaced: ledger.filter((p) => p.action !== 'kept-original' && p.state === 'fitted'),
+    kept: ledger.filter((p) => p.action === 'kept-original'),
+    readings: readings.filter((m) => m.quantity !== 'insulation' && m.quantity !== 'leakage'),
+    safetyChecks: readings.filter((m) => m.quantity === 'insulation' || m.quantity === 'leakage'),
+  };
+}
+export type ReportData = NonNullable<Awaited<ReturnType<typeof reportData>>>;

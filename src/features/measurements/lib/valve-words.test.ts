@@ -1,0 +1,22 @@
+import { describe, expect, it } from 'vitest';
+import { nextPosition, valveWords } from './valve-words';
+
+describe('valveWords', () => {
+  it('decodes heater, systems and base in words', () => {
+    expect(valveWords('EL84')).toMatchObject({ ok: true, heater: '6.3 V parallel', base: expect.stringMatching(/noval/) });
+    expect(valveWords('UCH42')).toMatchObject({ ok: true, heater: '100 mA series (14 V)', systems: 'small-signal triode; hexode or heptode (hexode type)' });
+    expect(valveWords('DK92')).toMatchObject({ ok: true, heater: expect.stringMatching(/V battery$/) });
+  });
+
+  it('passes on the library’s words for a type it cannot read', () => {
+    expect(valveWords('6V6')).toEqual({ ok: false, message: expect.stringMatching(/American type number/) });
+    expect(valveWords(' ')).toEqual({ ok: false, message: 'Enter the type printed on the valve.' });
+  });
+});
+
+describe('nextPosition', () => {
+  it('follows the highest position used', () => {
+    expect(nextPosition([])).toBe('V1');
+    expect(nextPosition([{ position: 'V1' }, { position: 'V5' }, { position: 'V3' }])).toBe('V6');
+  });
+});
