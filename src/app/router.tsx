@@ -33,6 +33,7 @@ export const router = createBrowserRouter([
               { path: 'photos/:photoId', lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
               { path: 'photos/:photoId/findings/:findingId', lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
               { path: 'findings', lazy: page(() => import('./routes/findings'), 'FindingsRoute') },
+              { path: 'readings', lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },
               { path: 'people', lazy: page(() => import('./routes/people'), 'PeopleRoute') },
             ],
           },

@@ -29,7 +29,7 @@ export function RestorationLayout() {
         <StageBadge stage={r.stage} />
         <span className="text-sm text-ink-soft">You: {roleLabels[r.role]}</span>
       </header>
-      <nav aria-label="Restoration" className="flex gap-1 border-b border-rule">
+      <nav aria-label="Restoration" className="-mx-4 flex gap-1 overflow-x-auto whitespace-nowrap border-b border-rule px-4">
         <NavLink to="." end className={tabClass}>
           Overview
         </NavLink>
@@ -38,6 +38,9 @@ export function RestorationLayout() {
         </NavLink>
         <NavLink to="findings" className={tabClass}>
           Findings
+        </NavLink>
+        <NavLink to="readings" className={tabClass}>
+          Readings
         </NavLink>
         <NavLink to="people" className={tabClass}>
           People

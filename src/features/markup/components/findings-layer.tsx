@@ -1,14 +1,15 @@
 import type Konva from 'konva';
-import { useCallback } from 'react';
+import { useCallback, useMemo } from 'react';
 import { Layer, Shape } from 'react-konva';
 import { drawMarks } from '../lib/draw-marks';
+import { createSpritePainter } from '../lib/marker-sprites';
 import type { Mark } from '../lib/marks';
 import type { ImageSize, StageSize, ViewTransform } from '../model/coordinates';
 
 /**
  * Every finding, drawn by one custom shape straight onto the layer's canvas: a thousand marks are one node
- * for React and Konva, not thousands, and a pan or zoom is one redraw. Nothing here listens; hit-testing is the
- * model's (`grabAt`) on the stage's element.
+ * for React and Konva, not thousands, and a pan or zoom is one redraw, with markers stamped from cached bitmaps.
+ * Nothing here listens; hit-testing is the model's (`grabAt`) on the stage's element.
  */
 export function FindingsLayer({
   marks,
@@ -16,6 +17,7 @@ export function FindingsLayer({
   imageSize,
   stage,
   hiddenId,
+  pixelRatio,
 }: {
   marks: readonly Mark[];
   view: ViewTransform;
@@ -23,12 +25,14 @@ export function FindingsLayer({
   stage: StageSize;
   /** The finding being dragged, which the overlay draws instead. */
   hiddenId?: number;
+  pixelRatio: number;
 }) {
+  const paintMarker = useMemo(() => createSpritePainter(pixelRatio), [pixelRatio]);
   const sceneFunc = useCallback(
     (context: Konva.Context) => {
-      drawMarks(context._context, marks, view, imageSize, stage, hiddenId);
+      drawMarks(context._context, marks, view, imageSize, stage, hiddenId, paintMarker);
     },
-    [marks, view, imageSize, stage, hiddenId],
+    [marks, view, imageSize, stage, hiddenId, paintMarker],
   );
   return (
     <Layer listening={false}>

@@ -1,5 +1,5 @@
-import type { Severity, Status } from '../../../../shared/schemas/findings';
-import { severityMarker, statusStyle, type MarkerShape } from '../model/legend';
+import { statuses, type Severity, type Status } from '../../../../shared/schemas/findings';
+import { severityMarker, statusStyle, type MarkerShape, type StatusStyle } from '../model/legend';
 import { labelDrop, markerOutline, RING_HOLE } from './marker-outline';
 import { HALO_DARK, HALO_LIGHT, LABEL_FONT_FAMILY, PAPER, traceOutline, type Pen } from './pen';
 
@@ -12,9 +12,13 @@ export interface MarkerLook {
   readonly glyph?: string;
 }
 
+/** Worked out once: a redraw of a thousand markers should not compute contrast ratios a thousand times. */
+const styles = Object.fromEntries(statuses.map((s) => [s, statusStyle(s)])) as Record<Status, StatusStyle>;
+export const styleOf = (status: Status): StatusStyle => styles[status];
+
 /** A finding's marker: the severity gives the shape, the status the fill and the badge glyph. */
 export function findingLook(number: number, status: Status, severity: Severity): MarkerLook {
-  const style = statusStyle(status);
+  const style = styles[status];
   return { shape: severityMarker(severity).shape, fill: style.colour, ink: style.ink, text: String(number), glyph: style.glyph };
 }
 

@@ -2,8 +2,7 @@ import type { Shape } from '../../../../shared/schemas/findings';
 import { imagePoint, imageToStage, type ImageSize, type StagePoint, type StageSize, type ViewTransform } from '../model/coordinates';
 import { anchor, bounds, circleRadius, type Geometry } from '../model/geometry';
 import { PIN_MARKER_RADIUS_PX } from '../model/hit-test';
-import { statusStyle } from '../model/legend';
-import { drawMarker, findingLook, type MarkerLook } from './draw-marker';
+import { drawMarker, findingLook, styleOf, type MarkerLook } from './draw-marker';
 import type { Mark } from './marks';
 import { haloStroke, type Pen } from './pen';
 
@@ -16,12 +15,12 @@ const ARROW_HEAD_ANGLE = (28 * Math.PI) / 180;
 /** Marks this far off the stage are still drawn, so a marker half over the edge is not cut off. */
 const CULL_MARGIN_PX = 40;
 
-/** Trace the stroke of a circle, rect, arrow or freehand mark (a pin has none) from its stage points. */
-export function traceStroke(pen: Pen, shape: Shape, pts: readonly StagePoint[], radiusPx: number): void {
+/** Add the stroke of a circle, rect, arrow or freehand mark (a pin has none) to the current path, from its stage points. */
+export function addStroke(pen: Pen, shape: Shape, pts: readonly StagePoint[], radiusPx: number): void {
   const [a, b] = pts;
   if (!a) return;
-  pen.beginPath();
   if (shape === 'circle') {
+    pen.moveTo(a.x + radiusPx, a.y);
     pen.arc(a.x, a.y, radiusPx, 0, Math.PI * 2);
   } else if (shape === 'rect' && b) {
     pen.rect(a.x, a.y, b.x - a.x, b.y - a.y);
@@ -38,7 +37,19 @@ export function traceStroke(pen: Pen, shape: Shape, pts: readonly StagePoint[], 
   }
 }
 
-/** Draw a mark: a pin as its marker, any other shape as its stroke with a marker at `anchor()` as the label. */
+const stagePoints = (g: Geometry, view: ViewTransform, image: ImageSize) => g.points.map((p) => imageToStage(p, view, image));
+const radiusOf = (g: Geometry, view: ViewTransform, image: ImageSize) => (g.shape === 'circle' ? circleRadius(g, image) * view.scale : 0);
+
+/** Paints a marker; the findings layer passes one that stamps cached bitmaps (`marker-sprites.ts`). */
+export type MarkerPainter = (pen: Pen, x: number, y: number, r: number, look: MarkerLook) => void;
+
+/** Where a mark's marker goes, and how big: a pin is its marker; other shapes carry a label marker at `anchor()`. */
+const markerSpot = (g: Geometry, view: ViewTransform, image: ImageSize): { at: StagePoint; r: number } => ({
+  at: imageToStage(anchor(g), view, image),
+  r: g.shape === 'pin' ? PIN_MARKER_RADIUS_PX : LABEL_RADIUS_PX,
+});
+
+/** Draw one mark: a pin as its marker, any other shape as its stroke with a marker at `anchor()` as the label. */
 export function drawGeometry(
   pen: Pen,
   g: Geometry,
@@ -47,21 +58,18 @@ export function drawGeometry(
   look: MarkerLook,
   options: { strokeColour: string; dashed?: boolean },
 ): void {
-  const pts = g.points.map((p) => imageToStage(p, view, image));
-  if (g.shape === 'pin') {
-    const [p] = pts;
-    if (p) drawMarker(pen, p.x, p.y, PIN_MARKER_RADIUS_PX, look);
-    return;
+  if (g.shape !== 'pin') {
+    pen.beginPath();
+    addStroke(pen, g.shape, stagePoints(g, view, image), radiusOf(g, view, image));
+    haloStroke(pen, options.strokeColour, STROKE_PX, options.dashed);
   }
-  traceStroke(pen, g.shape, pts, g.shape === 'circle' ? circleRadius(g, image) * view.scale : 0);
-  haloStroke(pen, options.strokeColour, STROKE_PX, options.dashed);
-  const at = imageToStage(anchor(g), view, image);
-  drawMarker(pen, at.x, at.y, LABEL_RADIUS_PX, look);
+  const { at, r } = markerSpot(g, view, image);
+  drawMarker(pen, at.x, at.y, r, look);
 }
 
 /** A finding in its status colour, numbered, with its severity marker. */
 export function drawMark(pen: Pen, mark: Mark, view: ViewTransform, image: ImageSize, dashed = false): void {
-  drawGeometry(pen, mark, view, image, findingLook(mark.number, mark.status, mark.severity), { strokeColour: statusStyle(mark.status).colour, dashed });
+  drawGeometry(pen, mark, view, image, findingLook(mark.number, mark.status, mark.severity), { strokeColour: styleOf(mark.status).colour, dashed });
 }
 
 /** Whether any part of the mark (or its marker) can show on a stage of this size. */
@@ -73,8 +81,9 @@ export function onStage(g: Geometry, view: ViewTransform, image: ImageSize, stag
 }
 
 /**
- * Every finding, in list order (later ones on top, as hit-testing expects), skipping those off the stage and the
- * one being dragged (`hiddenId`), which the overlay draws instead. Returns how many were drawn.
+ * Every finding, skipping those off the stage and the one being dragged (`hiddenId`, which the overlay draws).
+ * Strokes go first, one path per status colour (a few stroke calls rather than three per mark), then every
+ * marker on top in list order, so no line ever hides a number. Returns how many marks were drawn.
  */
 export function drawMarks(
   pen: Pen,
@@ -83,12 +92,26 @@ export function drawMarks(
   image: ImageSize,
   stage: StageSize,
   hiddenId?: number,
+  paintMarker: MarkerPainter = drawMarker,
 ): number {
-  let drawn = 0;
-  for (const mark of marks) {
-    if (mark.id === hiddenId || !onStage(mark, view, image, stage)) continue;
-    drawMark(pen, mark, view, image);
-    drawn++;
+  const shown = marks.filter((m) => m.id !== hiddenId && onStage(m, view, image, stage));
+  const byColour = new Map<string, Mark[]>();
+  for (const mark of shown) {
+    if (mark.shape === 'pin') continue;
+    const colour = styleOf(mark.status).colour;
+    const group = byColour.get(colour);
+    if (group) group.push(mark);
+    else byColour.set(colour, [mark]);
   }
-  return drawn;
+  const dbg = (globalThis as unknown as { __dbg?: string }).__dbg ?? '';
+  for (const [colour, group] of dbg.includes('nostroke') ? [] : byColour) {
+    pen.beginPath();
+    for (const mark of group) addStroke(pen, mark.shape, stagePoints(mark, view, image), radiusOf(mark, view, image));
+    haloStroke(pen, colour, STROKE_PX);
+  }
+  for (const mark of dbg.includes('nomarker') ? [] : shown) {
+    const { at, r } = markerSpot(mark, view, image);
+    paintMarker(pen, at.x, at.y, r, findingLook(mark.number, mark.status, mark.severity));
+  }
+  return shown.length;
 }

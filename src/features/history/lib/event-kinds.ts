@@ -1,0 +1,27 @@
+import { timelineKinds, type TimelineEvent } from '../../../../shared/schemas/parts';
+
+type Kind = TimelineEvent['kind'];
+
+/** The chip's words for each kind of event, in the order the chips are shown. */
+export const eventKindLabels: Record<Kind, string> = {
+  'photo-added': 'Photos',
+  'finding-opened': 'Findings',
+  'finding-status': 'Status changes',
+  'question-asked': 'Questions',
+  'question-resolved': 'Answers',
+  'part-fitted': 'Parts fitted',
+  'stage-changed': 'Stages',
+  'measurement-out': 'Readings out of tolerance',
+};
+
+export const eventKinds = timelineKinds;
+
+/** Events about one finding: they show its close-up and link to it. */
+export const findingKinds: ReadonlySet<Kind> = new Set<Kind>(['finding-opened', 'finding-status', 'question-asked', 'question-resolved']);
+
+/** How many events of each kind, for the chips' counts. */
+export function countByKind(events: Pick<TimelineEvent, 'kind'>[]): Record<Kind, number> {
+  const counts = Object.fromEntries(timelineKinds.map((k) => [k, 0])) as Record<Kind, number>;
+  for (const e of events) counts[e.kind] += 1;
+  return counts;
+}
