@@ -1,5 +1,6 @@
 import type { Agent } from 'supertest';
 import type { CapturedMail } from '../../shared/schemas/dev-mail';
+import { findingSchema } from '../../shared/schemas/findings';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { flushNotificationMail } from '../../server/features/notifications/mail-batch';
 import { createPhotoRow } from '../factories/photos';
@@ -43,6 +44,9 @@ describe('findings', () => {
     expect(b.body.number).toBe(2);
     const list = (await mentor.get(`/api/photos/${sharedPhoto}/findings`)).body;
     expect(list.map((f: { number: number }) => f.number)).toEqual([1, 2]);
+    // The list is assembled in SQL; it must carry exactly the contract's shape and the same values as one finding.
+    expect(findingSchema.array().parse(list)).toEqual(list);
+    expect(list[0]).toEqual((await mentor.get(`/api/findings/${a.body.id}`)).body);
   });
 
   it('when geometry or a reference is malformed, then 400 says what is wrong', async () => {

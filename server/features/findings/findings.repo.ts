@@ -18,9 +18,6 @@ export function findingsRepo(db: Database) {
   const flat = (r: Joined): FindingWithContext => ({ ...r.finding, authorName: r.authorName, photoOwnerVisible: r.photoOwnerVisible, commentCount: r.commentCount });
 
   return {
-    async listByPhoto(photoId: number) {
-      return (await select().where(eq(findings.photoId, photoId)).orderBy(asc(findings.number))).map(flat);
-    },
     async listByRestoration(restorationId: number) {
       return (await select().where(eq(findings.restorationId, restorationId)).orderBy(asc(findings.number))).map(flat);
     },

@@ -23,7 +23,7 @@ export function findingsRoutes(deps: AppDeps): Router {
   const router = Router();
 
   router.get('/photos/:id/findings', requireUser, validate(one), guard(db, 'restoration.view', ofPhoto), async (_req, res) => {
-    res.json(await service.listByPhoto(input(res, one).params.id, roleOf(res)));
+    res.type('application/json').send(await service.listByPhotoJson(input(res, one).params.id, roleOf(res)));
   });
   router.post('/photos/:id/findings', requireUser, validate(create), guard(db, 'restoration.view', ofPhoto), async (req, res) => {
     const { params, body } = input(res, create);

@@ -6,6 +6,7 @@ import { recordEvent } from '../events/record-event';
 import { ensureCloseup } from '../closeups/closeups';
 import { notificationsService } from '../notifications/notifications.service';
 import { photosRepo } from '../photos/photos.repo';
+import { photoFindingsJson } from './findings-json';
 import { findingsRepo, type FindingWithContext } from './findings.repo';
 
 type Actor = { id: number; name: string; role: Role };
@@ -34,10 +35,11 @@ export function findingsService(deps: AppDeps) {
   return {
     visible,
     restorationOf: (id: number) => repo.restorationOf(id),
-    async listByPhoto(photoId: number, role: Role) {
+    /** The photo's findings as ready JSON text (see findings-json.ts); owners get only what is shared. */
+    async listByPhotoJson(photoId: number, role: Role): Promise<string> {
       const photo = await photos.find(photoId);
       if (!photo || !can(role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
-      return (await repo.listByPhoto(photoId)).filter((f) => can(role, 'findings.view', { ownerVisible: ownerMaySee(f) })).map(toFinding);
+      return photoFindingsJson(deps.db, photoId, !can(role, 'findings.view'));
     },
     async listByRestoration(restorationId: number, role: Role) {
       return (await repo.listByRestoration(restorationId)).filter((f) => can(role, 'findings.view', { ownerVisible: ownerMaySee(f) })).map(toFinding);

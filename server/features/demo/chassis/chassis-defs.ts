@@ -54,6 +54,7 @@ export function sharedDefs(): string {
     linear('coil', stop(0, '#c8a46a') + stop(0.5, '#a57e45') + stop(1, '#6f522a'), 1, 0),
     linear('phenolic', stop(0, '#b07a45') + stop(0.5, '#8c5a2e') + stop(1, '#5e3a1b')),
     linear('tinned', stop(0, '#f0f0ea') + stop(0.5, '#b7b9b4') + stop(1, '#7d807c')),
+    radial('freshSolder', stop(0, '#ffffff') + stop(0.45, '#e8ecee') + stop(0.85, '#b4babe') + stop(1, '#8c9296'), 0.35, 0.3),
     linear('copper', stop(0, '#ffd1a1') + stop(0.45, '#d07a3c') + stop(1, '#7a3a14')),
     linear('brass', stop(0, '#f1dc97') + stop(0.5, '#c6a24e') + stop(1, '#7d6222')),
     // Cylinder shading laid over any tubular body drawn along x.
@@ -94,18 +95,26 @@ export function steelSurface(pathD: string, id: string, base = 'url(#steel)'): s
   );
 }
 
-/** Seventy years of workshop: dust specks and a few rust freckles, scattered over a box. */
-export function grime(seed: number, x: number, y: number, w: number, h: number): string {
+/**
+ * Seventy years of workshop: dust specks and a few rust freckles, scattered over a
+ * box. A `cleaned` chassis keeps one speck in four and only the faintest trace of
+ * two freckles; the random sequence is drawn in full either way, so what is left
+ * sits exactly where it was.
+ */
+export function grime(seed: number, x: number, y: number, w: number, h: number, cleaned = false): string {
   const rnd = seededRandom(seed);
   let s = '';
   for (let i = 0; i < 360; i++) {
     const light = rnd() < 0.4;
-    s += `<circle cx="${f(x + rnd() * w)}" cy="${f(y + rnd() * h)}" r="${f(0.8 + rnd() * 2.2)}" fill="${light ? '#f4efe4' : '#2a2218'}" fill-opacity="${f(0.15 + rnd() * 0.35)}"/>`;
+    const speck = `<circle cx="${f(x + rnd() * w)}" cy="${f(y + rnd() * h)}" r="${f(0.8 + rnd() * 2.2)}" fill="${light ? '#f4efe4' : '#2a2218'}" fill-opacity="${f(0.15 + rnd() * 0.35)}"/>`;
+    if (!cleaned || i % 4 === 0) s += speck;
   }
   for (let i = 0; i < 9; i++) {
     const edge = rnd() < 0.5;
     const rx = 14 + rnd() * 40;
-    s += `<ellipse cx="${f(edge ? x + 20 + rnd() * 60 : x + rnd() * w)}" cy="${f(edge ? y + rnd() * h : y + h - 20 - rnd() * 60)}" rx="${f(rx)}" ry="${f(rx * (0.5 + rnd() * 0.5))}" fill="url(#rust)"/>`;
+    const freckle = `<ellipse cx="${f(edge ? x + 20 + rnd() * 60 : x + rnd() * w)}" cy="${f(edge ? y + rnd() * h : y + h - 20 - rnd() * 60)}" rx="${f(rx)}" ry="${f(rx * (0.5 + rnd() * 0.5))}" fill="url(#rust)"`;
+    if (!cleaned) s += `${freckle}/>`;
+    else if (i < 2) s += `${freckle} fill-opacity="0.3"/>`;
   }
   return s;
 }

@@ -12,16 +12,18 @@ export function bodyCentre(a: Pt, b: Pt, lift = 0): Pt {
   return [m[0] - ((b[1] - a[1]) / len) * lift, m[1] + ((b[0] - a[0]) / len) * lift];
 }
 
-function lead(from: Pt, to: Pt): string {
+/** A tinned lead; a new part's leads are still bright. */
+function lead(from: Pt, to: Pt, fresh: boolean): string {
   const d = `M${f(from[0])} ${f(from[1])} L${f(to[0])} ${f(to[1])}`;
-  return `<path d="${d}" stroke="#55574f" stroke-width="4.6" stroke-linecap="round"/><path d="${d}" stroke="#c9cbc4" stroke-width="2.8" stroke-linecap="round"/>`;
+  const [edge, core] = fresh ? ['#5f625e', '#eceeec'] : ['#55574f', '#c9cbc4'];
+  return `<path d="${d}" stroke="${edge}" stroke-width="4.6" stroke-linecap="round"/><path d="${d}" stroke="${core}" stroke-width="2.8" stroke-linecap="round"/>`;
 }
 
 /**
  * An axial part: leads from a and b to the ends of a body of length `len` drawn by
  * `drawBody` along the local x axis, centred on the origin, never upside down.
  */
-function axial(a: Pt, b: Pt, lift: number, len: number, dia: number, drawBody: (len: number) => string): Drawn {
+export function axial(a: Pt, b: Pt, lift: number, len: number, dia: number, drawBody: (len: number) => string, fresh = false): Drawn {
   const c = bodyCentre(a, b, lift);
   let turn = angleOf(a, b);
   if (turn > 95 || turn < -85) turn += 180;
@@ -29,30 +31,39 @@ function axial(a: Pt, b: Pt, lift: number, len: number, dia: number, drawBody: (
   const endL: Pt = [c[0] - (Math.cos(rad) * len) / 2, c[1] - (Math.sin(rad) * len) / 2];
   const endR: Pt = [c[0] + (Math.cos(rad) * len) / 2, c[1] + (Math.sin(rad) * len) / 2];
   const [nearA, nearB] = distance(a, endL) < distance(a, endR) ? [endL, endR] : [endR, endL];
-  const body = lead(a, nearA) + lead(b, nearB) + `<g transform="${place(c[0], c[1], turn)}">${drawBody(len)}</g>`;
+  const body = lead(a, nearA, fresh) + lead(b, nearB, fresh) + `<g transform="${place(c[0], c[1], turn)}">${drawBody(len)}</g>`;
   return { body, shadow: [{ d: turnedRectD(c, turn, len, dia) }] };
 }
 
-function tube(len: number, dia: number, fill: string, rx = dia / 2): string {
+export function tube(len: number, dia: number, fill: string, rx = dia / 2): string {
   return `<rect x="${f(-len / 2)}" y="${f(-dia / 2)}" width="${f(len)}" height="${f(dia)}" rx="${f(rx)}" fill="${fill}"/>`;
 }
 
-const CYL = (len: number, dia: number, rx = dia / 2): string =>
+export const CYL = (len: number, dia: number, rx = dia / 2): string =>
   `<rect x="${f(-len / 2)}" y="${f(-dia / 2)}" width="${f(len)}" height="${f(dia)}" rx="${f(rx)}" fill="url(#cyl)" stroke="#000" stroke-opacity="0.45" stroke-width="1.2"/>`;
 
-export interface ResistorSpec { a: Pt; b: Pt; lift?: number; ohms: number; tolerance?: Tolerance; watts?: 0.5 | 1; charred?: boolean; }
+export interface ResistorSpec {
+  a: Pt; b: Pt; lift?: number; ohms: number; tolerance?: Tolerance; watts?: 0.5 | 1 | 2; charred?: boolean;
+  /** A newly fitted resistor: clean lacquer in `body` colour, bright leads, bands set towards one end. */
+  fresh?: boolean; body?: string;
+}
+
+/** Body length and diameter (px) by rating: a 2 W part is visibly stouter. */
+const RESISTOR_SIZE = { 0.5: [84, 25], 1: [104, 30], 2: [124, 36] } as const;
 
 /** A carbon resistor whose bands are worked out from its value. */
 export function resistor(r: ResistorSpec): Drawn {
-  const big = r.watts === 1;
-  const len = big ? 104 : 84;
-  const dia = big ? 30 : 25;
+  const [len, dia] = RESISTOR_SIZE[r.watts ?? 0.5];
   const bands = resistorBands(r.ohms, r.tolerance ?? 5);
-  const bodyColour = r.charred ? '#7a5a3a' : '#d6bd8c';
-  const bw = len * 0.085;
-  const at = [0.17, 0.31, 0.45, 0.8];
+  const bodyColour = r.body ?? (r.charred ? '#7a5a3a' : '#d6bd8c');
+  const bw = len * (r.fresh ? 0.075 : 0.085);
+  const at = r.fresh ? [0.2, 0.31, 0.42, 0.78] : [0.17, 0.31, 0.45, 0.8];
   const draw = (l: number): string => {
     let s = tube(l, dia, bodyColour, dia * 0.42);
+    if (r.fresh) {
+      // Moulded end caps swell slightly past the body, as on a modern film resistor.
+      s += [-1, 1].map((k) => `<rect x="${f(k < 0 ? -l / 2 - 2 : l / 2 - l * 0.16 + 2)}" y="${f(-dia / 2 - 2)}" width="${f(l * 0.16)}" height="${f(dia + 4)}" rx="${f(dia * 0.45)}" fill="${bodyColour}"/>`).join('');
+    }
     bands.forEach((band, i) => {
       const paint = r.charred ? shade(BAND_PAINT[band], 0.85) : BAND_PAINT[band];
       s += `<rect x="${f(-l / 2 + l * (at[i] ?? 0) - bw / 2)}" y="${f(-dia / 2 + 0.5)}" width="${f(bw)}" height="${f(dia - 1)}" fill="${paint}"/>`;
@@ -64,28 +75,39 @@ export function resistor(r: ResistorSpec): Drawn {
         `<path d="M${f(-l * 0.1)} ${f(-dia / 2)} l6 9 l-5 7 l7 9" stroke="#0c0806" stroke-width="2" fill="none"/>` +
         `<path d="M${f(l * 0.22)} ${f(dia / 2)} l-4 -8 l6 -6" stroke="#0c0806" stroke-width="2" fill="none"/>`;
     }
+    if (r.fresh) s += `<rect x="${f(-l * 0.4)}" y="${f(-dia * 0.36)}" width="${f(l * 0.8)}" height="${f(dia * 0.12)}" rx="2" fill="#fff" fill-opacity="0.55"/>`;
     return s + CYL(l, dia, dia * 0.42);
   };
-  return axial(r.a, r.b, r.lift ?? 0, len, dia, draw);
+  return axial(r.a, r.b, r.lift ?? 0, len, dia, draw, r.fresh);
 }
 
-export interface WaxCapSpec { a: Pt; b: Pt; lift?: number; print: string; colour?: string; len?: number; }
+export interface WaxCapSpec {
+  a: Pt; b: Pt; lift?: number; print: string; colour?: string; len?: number;
+  /** Restuffed: a film capacitor inside, the ends sealed again with fresh wax of matching colour. */
+  resealed?: boolean;
+}
 
 /** A wax-dipped paper tubular, its outer-foil end marked with a black ring. */
 export function waxCap(c: WaxCapSpec): Drawn {
   const len = c.len ?? 150;
   const dia = 34;
   const wax = c.colour ?? '#d6b86a';
+  const end = (x: number): string => c.resealed
+    ? `<ellipse cx="${f(x)}" cy="0" rx="11" ry="${f(dia / 2 + 1)}" fill="${shade(wax, 1.12)}" stroke="${shade(wax, 0.75)}" stroke-width="1"/>` +
+      `<ellipse cx="${f(x - 2)}" cy="${f(-dia * 0.2)}" rx="5" ry="${f(dia * 0.16)}" fill="#fff" fill-opacity="0.6"/>`
+    : `<ellipse cx="${f(x)}" cy="0" rx="12" ry="${f(dia / 2 + 2)}" fill="${shade(wax, 0.8)}"/>`;
   const draw = (l: number): string =>
-    tube(l, dia, wax) +
-    `<ellipse cx="${f(-l / 2 + 8)}" cy="0" rx="12" ry="${f(dia / 2 + 2)}" fill="${shade(wax, 0.8)}"/>` +
-    `<ellipse cx="${f(l / 2 - 8)}" cy="0" rx="12" ry="${f(dia / 2 + 2)}" fill="${shade(wax, 0.8)}"/>` +
+    tube(l, dia, wax) + end(-l / 2 + 8) + end(l / 2 - 8) +
     `<rect x="${f(-l / 2 + 24)}" y="${f(-dia / 2)}" width="7" height="${dia}" fill="#1d1a16"/>` +
     text(6, 5, c.print, { size: 15, fill: '#2a2218', family: 'condensed', weight: 'bold' }) + CYL(l, dia);
-  return axial(c.a, c.b, c.lift ?? 0, len, dia, draw);
+  return axial(c.a, c.b, c.lift ?? 0, len, dia, draw, c.resealed);
 }
 
-export interface ElectrolyticSpec { a: Pt; b: Pt; lift?: number; lines: readonly [string, string]; len: number; dia: number; bulging?: boolean; sleeve?: string; clip?: boolean; }
+export interface ElectrolyticSpec {
+  a: Pt; b: Pt; lift?: number; lines: readonly [string, string]; len: number; dia: number; bulging?: boolean; sleeve?: string; clip?: boolean;
+  /** Emptied and refilled with a modern part: the old sleeve kept, both ends neatly resealed. */
+  restuffed?: boolean;
+}
 
 /** A tubular electrolytic in a printed sleeve; a failing one has a domed, weeping end. */
 export function tubularElectrolytic(e: ElectrolyticSpec): Drawn {
@@ -98,6 +120,11 @@ export function tubularElectrolytic(e: ElectrolyticSpec): Drawn {
       s += `<ellipse cx="${f(l / 2 - 4)}" cy="0" rx="${f(d * 0.5)}" ry="${f(d * 0.66)}" fill="url(#aluTop)" stroke="#4a4e51" stroke-width="1.5"/>` +
         `<ellipse cx="${f(l / 2 + d * 0.18)}" cy="${f(d * 0.22)}" rx="${f(d * 0.3)}" ry="${f(d * 0.26)}" fill="#8a5a22" fill-opacity="0.85"/>` +
         `<ellipse cx="${f(l / 2 + d * 0.05)}" cy="${f(d * 0.62)}" rx="${f(d * 0.5)}" ry="${f(d * 0.16)}" fill="#6e4516" fill-opacity="0.5"/>`;
+    }
+    if (e.restuffed) {
+      // A neat bead of sealing compound closes each cut end round the new lead.
+      s += [-1, 1].map((k) => `<ellipse cx="${f(k * (l / 2 - 1))}" cy="0" rx="7" ry="${f(d * 0.3)}" fill="#4b4236" stroke="#2a241c" stroke-width="1"/>` +
+        `<ellipse cx="${f(k * (l / 2 - 1) - 1)}" cy="${f(-d * 0.1)}" rx="3" ry="${f(d * 0.1)}" fill="#fff" fill-opacity="0.45"/>`).join('');
     }
     s += tube(l, d, '#bfc3c5', 8) + `<rect x="${f(-l / 2 + 10)}" y="${f(-d / 2)}" width="${f(l - 20)}" height="${f(d)}" fill="${sleeve}"/>` +
       text(-l * 0.08, -2, e.lines[0], { size: d * 0.3, fill: '#f3efe2', weight: 'bold', family: 'condensed' }) +
@@ -113,7 +140,7 @@ export function tubularElectrolytic(e: ElectrolyticSpec): Drawn {
     }
     return s;
   };
-  return axial(e.a, e.b, e.lift ?? 0, e.len, e.dia, draw);
+  return axial(e.a, e.b, e.lift ?? 0, e.len, e.dia, draw, e.restuffed);
 }
 
 /** A small moulded mica, flat and reddish brown, value printed in pF. */

@@ -84,8 +84,16 @@ export function hole(x: number, y: number, r: number): string {
   );
 }
 
-/** A blob of solder on a tag or pin. */
-export function solder(x: number, y: number, r = 7): string {
+/** A blob of solder on a tag or pin; a fresh joint is bright and ringed with a little flux. */
+export function solder(x: number, y: number, r = 7, fresh = false): string {
+  if (fresh) {
+    return (
+      `<ellipse cx="${f(x + 1)}" cy="${f(y + 1)}" rx="${f(r * 1.9)}" ry="${f(r * 1.65)}" fill="#d39a3a" fill-opacity="0.45" stroke="#9a6418" stroke-opacity="0.35" stroke-width="1"/>` +
+      `<ellipse cx="${f(x)}" cy="${f(y)}" rx="${f(r * 1.15)}" ry="${f(r)}" fill="url(#freshSolder)" stroke="#7d8387" stroke-width="0.9"/>` +
+      `<ellipse cx="${f(x - r * 0.3)}" cy="${f(y - r * 0.35)}" rx="${f(r * 0.5)}" ry="${f(r * 0.34)}" fill="#fff"/>` +
+      `<circle cx="${f(x + r * 0.4)}" cy="${f(y + r * 0.35)}" r="${f(r * 0.14)}" fill="#fff" fill-opacity="0.8"/>`
+    );
+  }
   return (
     `<ellipse cx="${f(x)}" cy="${f(y)}" rx="${f(r)}" ry="${f(r * 0.85)}" fill="url(#tinned)" stroke="#6d706b" stroke-width="0.8"/>` +
     `<circle cx="${f(x - r * 0.3)}" cy="${f(y - r * 0.35)}" r="${f(r * 0.3)}" fill="#fff" fill-opacity="0.75"/>`

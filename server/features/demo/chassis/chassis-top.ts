@@ -5,13 +5,17 @@ import type { Drawn } from './chassis-parts';
 import { cord, cordPulley, dialDrum, ferriteRod, voltageSelector } from './chassis-parts-controls';
 import { TALL_OFFSET, canTop, gangTop, ifCanTop, transformerTop, valveTop } from './chassis-parts-top';
 import { benchBackground, grime, photoFinish, shadowLayer, sharedDefs, steelSurface } from './chassis-defs';
+import type { ChassisState } from './chassis-restoration';
 import { svgDocument, text } from './svg-kit';
 
-/** The Meridian 54 chassis from above, as a restorer photographs it before any work. */
+/**
+ * The Meridian 54 chassis from above, as a restorer photographs it before any work
+ * and again after it. The can keeps its print (it was restuffed); the steel is cleaned.
+ */
 
 const { x: cx, y: cy, w: cw, h: ch } = CHASSIS;
 
-function plate(): string {
+function plate(state: ChassisState): string {
   const d = `M${cx + 10} ${cy} H${cx + cw - 10} Q${cx + cw} ${cy} ${cx + cw} ${cy + 10} V${cy + ch - 10} Q${cx + cw} ${cy + ch} ${cx + cw - 10} ${cy + ch} H${cx + 10} Q${cx} ${cy + ch} ${cx} ${cy + ch - 10} V${cy + 10} Q${cx} ${cy} ${cx + 10} ${cy} Z`;
   const edges =
     `<path d="M${cx + 4} ${cy + ch - 6} V${cy + 4} H${cx + cw - 6}" stroke="#f4f4ee" stroke-width="5" fill="none" stroke-opacity="0.8"/>` +
@@ -23,7 +27,7 @@ function plate(): string {
     text(1920, 1244, 'MERIDIAN 54', { size: 18, fill: '#2b2b35', weight: 'bold', rotate: -3 }) +
     text(1921, 1268, 'No 10417', { size: 16, fill: '#2b2b35', family: 'mono', rotate: -3 });
   const valveMarks = VALVES.map((v) => stamp(v.at[0] - VALVE_R * 1.55, v.at[1] + VALVE_R * 1.5, v.ref, 20)).join('');
-  return steelSurface(d, 'top') + grime(21, cx, cy, cw, ch) + edges + holes + marks + valveMarks;
+  return steelSurface(d, 'top') + grime(21, cx, cy, cw, ch, state === 'after') + edges + holes + marks + valveMarks;
 }
 
 function benchShadow(): string {
@@ -68,7 +72,7 @@ function dialCord(): Drawn[] {
   ];
 }
 
-export function topSvg(): string {
+export function topSvg(state: ChassisState = 'before'): string {
   const { mainsTransformer: mt, outputTransformer: ot, canCapacitor: can, gang, drum } = TOP;
   const parts: Drawn[] = [
     ...wiring(),
@@ -87,7 +91,7 @@ export function topSvg(): string {
   const layers = combine(parts);
   const grommets = [grommet(mt.cx - 195, mt.cy + 240, 19), grommet(ot.cx + 100, ot.cy + 138, 19), grommet(2130, 700, 19), grommet(1760, 380, 19), grommet(640, 306, 16), grommet(212, 568, 16)].join('');
   const body =
-    benchBackground() + benchShadow() + plate() + grommets +
+    benchBackground() + benchShadow() + plate(state) + grommets +
     shadowLayer(layers.low, [5, 7], 0.5) + shadowLayer(layers.tall, TALL_OFFSET, 0.55) +
     layers.body + photoFinish();
   return svgDocument(sharedDefs(), body);

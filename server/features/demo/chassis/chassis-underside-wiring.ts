@@ -2,6 +2,8 @@ import { CRACKED_LEAD, ELECTROLYTICS, GANG_TAGS, LUGS } from './chassis-layout-c
 import { UNDER, canTag, ifTag, pin, tag } from './chassis-layout-underside';
 import type { Drawn } from './chassis-parts';
 import { bareWire, crackedWire, twistedPair, wire } from './chassis-parts-wires';
+import { HT_LEAD_ROUTE } from './chassis-restoration';
+import type { ChassisState } from './chassis-restoration';
 import type { Pt } from './svg-kit';
 
 /** The hook-up wiring under the chassis, in the colours the factory used. */
@@ -15,6 +17,8 @@ const WHITE = '#e6e1d2';
 const BLACK = '#262626';
 const BROWN = '#6a4125';
 const VIOLET = '#6c4a9c';
+/** The replacement HT lead: glossy orange PVC, a colour the period's hook-up wire came in. */
+const NEW_PVC_ORANGE = '#d0621c';
 
 const c30Plus: Pt = ELECTROLYTICS.find((e) => e.ref === 'C30')?.b ?? [990, 1250];
 
@@ -43,7 +47,14 @@ function coilPin(i: 0 | 1, deg: number): Pt {
   return [x + Math.cos(a) * 26 * 1.3, y + Math.sin(a) * 26 * 1.3];
 }
 
-export function undersideWiring(): Drawn[] {
+/** The HT lead from the transformer to V7: split rubber as found, new PVC after the work. */
+function htLead(state: ChassisState): Drawn {
+  return state === 'before'
+    ? crackedWire(CRACKED_LEAD.before, CRACKED_LEAD.gap, CRACKED_LEAD.after, { colour: PERISHED_RED, width: 12, matte: true })
+    : wire(HT_LEAD_ROUTE, { colour: NEW_PVC_ORANGE, width: 11 });
+}
+
+export function undersideWiring(state: ChassisState = 'before'): Drawn[] {
   const g = UNDER.grommets;
   const [sw1, sw2] = switchTags();
   return [
@@ -88,6 +99,6 @@ export function undersideWiring(): Drawn[] {
     // The earth bus along the front wall.
     bareWire([LUGS.E4, [720, 1335], [1400, 1342], LUGS.E2]),
     bareWire([tag('TS1', 0), [1090, 770], canTag('common')]),
-    crackedWire(CRACKED_LEAD.before, CRACKED_LEAD.gap, CRACKED_LEAD.after, { colour: PERISHED_RED, width: 12, matte: true }),
+    htLead(state),
   ];
 }

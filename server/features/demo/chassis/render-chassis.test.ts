@@ -2,19 +2,27 @@ import sharp from 'sharp';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { chassisLandmarks, plainChassisSpot } from './chassis-landmarks';
 import type { ChassisView } from './chassis-landmarks';
-import { resistorBands } from './colour-code';
+import { bodyCentre } from './chassis-parts-underside';
+import { HT_LEAD_ROUTE, undersideParts } from './chassis-restoration';
+import type { ChassisState } from './chassis-restoration';
+import { BAND_PAINT, resistorBands } from './colour-code';
 import { chassisSvg, renderChassisJpeg } from './render-chassis';
+import { HEIGHT, WIDTH } from './svg-kit';
 
 const VIEWS: readonly ChassisView[] = ['top', 'underside'];
-const jpegs = new Map<ChassisView, Buffer>();
+const STATES: readonly ChassisState[] = ['before', 'after'];
+const jpegs = new Map<string, Buffer>();
 
 beforeAll(async () => {
-  for (const view of VIEWS) jpegs.set(view, await renderChassisJpeg(view));
-}, 60_000);
+  for (const view of VIEWS) {
+    jpegs.set(view, await renderChassisJpeg(view));
+    jpegs.set(`${view}/after`, await renderChassisJpeg(view, 'after'));
+  }
+}, 120_000);
 
-function jpeg(view: ChassisView): Buffer {
-  const buf = jpegs.get(view);
-  if (!buf) throw new Error(`${view} was not rendered`);
+function jpeg(view: ChassisView, state: ChassisState = 'before'): Buffer {
+  const buf = jpegs.get(state === 'before' ? view : `${view}/${state}`);
+  if (!buf) throw new Error(`${view} (${state}) was not rendered`);
   return buf;
 }
 
@@ -36,15 +44,35 @@ async function luminanceAt(buf: Buffer, x: number, y: number): Promise<number> {
 }
 
 describe('demo chassis pictures', () => {
-  it.each(VIEWS)('when the %s view is rendered, then it is a 2400 × 1600 JPEG', async (view) => {
-    const meta = await sharp(jpeg(view)).metadata();
+  const BOTH = VIEWS.flatMap((view) => STATES.map((state) => [view, state] as const));
+
+  it.each(BOTH)('when the %s view (%s) is rendered, then it is a 2400 × 1600 JPEG', async (view, state) => {
+    const meta = await sharp(jpeg(view, state)).metadata();
     expect(meta.format).toBe('jpeg');
     expect(meta.width).toBe(2400);
     expect(meta.height).toBe(1600);
   });
 
-  it.each(VIEWS)('when the %s view is drawn twice, then both drawings are identical', (view) => {
-    expect(chassisSvg(view)).toBe(chassisSvg(view));
+  it.each(BOTH)('when the %s view (%s) is drawn twice, then both drawings are identical', (view, state) => {
+    expect(chassisSvg(view, state)).toBe(chassisSvg(view, state));
+  });
+
+  it.each(VIEWS)('when the %s view is drawn after the work, then the picture has changed', (view) => {
+    expect(chassisSvg(view, 'after')).not.toBe(chassisSvg(view, 'before'));
+  });
+
+  it.each(STATES)('when the underside is drawn %s the work, then every part sits on its landmark', (state) => {
+    const marks = chassisLandmarks('underside');
+    const p = undersideParts(state);
+    const parts = [...p.resistors, ...p.waxCaps, ...p.films, ...p.electrolytics, ...p.newElectrolytics];
+    expect(parts.map((x) => x.ref).sort()).toEqual(['C12', 'C14', 'C23', 'C30', 'C31', 'R1', 'R12', 'R13', 'R15', 'R16', 'R18', 'R19', 'R23', 'R24', 'R6', 'R8']);
+    for (const part of parts) {
+      const [x, y] = bodyCentre(part.a, part.b, part.lift);
+      expect.soft(x / WIDTH, `${part.ref}.x`).toBeCloseTo(marks[part.ref]?.x ?? NaN, 9);
+      expect.soft(y / HEIGHT, `${part.ref}.y`).toBeCloseTo(marks[part.ref]?.y ?? NaN, 9);
+    }
+    const lead = marks.crackedLead;
+    expect(HT_LEAD_ROUTE.some(([x, y]) => x / WIDTH === lead?.x && y / HEIGHT === lead.y)).toBe(true);
   });
 
   it.each(VIEWS)('every %s landmark lies inside the picture', (view) => {
@@ -77,9 +105,29 @@ describe('demo chassis pictures', () => {
     expect(charred).toBeLessThan(bare - 40);
   });
 
-  it('when sampled at the bare-chassis spot of the top view, then it is mid-grey steel', async () => {
+  it('when sampled at R23 after the work, then the new resistor is not darker than bare chassis', async () => {
+    const r23 = chassisLandmarks('underside').R23;
+    if (!r23) throw new Error('no R23 landmark');
+    const plain = plainChassisSpot('underside');
+    const fitted = await luminanceAt(jpeg('underside', 'after'), r23.x, r23.y);
+    const bare = await luminanceAt(jpeg('underside', 'after'), plain.x, plain.y);
+    expect(fitted).toBeGreaterThanOrEqual(bare);
+  });
+
+  it('when the new R23 is drawn, then its bands read brown green brown gold', () => {
+    // IEC 60062 colour code: 1 (brown), 5 (green), ×10 (brown), ±5 % (gold) is 150 Ω.
+    const svg = chassisSvg('underside', 'after');
+    const start = svg.indexOf('<g id="part-R23">');
+    const drawn = svg.slice(start, svg.indexOf('<g id="part-', start + 1));
+    const byPaint = new Map(Object.entries(BAND_PAINT).map(([band, paint]) => [paint, band]));
+    const bands = [...drawn.matchAll(/fill="(#[0-9a-f]{6})"/g)].flatMap((m) => byPaint.get(m[1] ?? '') ?? []);
+    expect(start).toBeGreaterThan(0);
+    expect(bands).toEqual(['brown', 'green', 'brown', 'gold']);
+  });
+
+  it.each(STATES)('when sampled at the bare-chassis spot of the top view (%s), then it is mid-grey steel', async (state) => {
     const plain = plainChassisSpot('top');
-    const lum = await luminanceAt(jpeg('top'), plain.x, plain.y);
+    const lum = await luminanceAt(jpeg('top', state), plain.x, plain.y);
     expect(lum).toBeGreaterThan(100);
     expect(lum).toBeLessThan(230);
   });
