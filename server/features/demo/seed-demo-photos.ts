@@ -15,17 +15,19 @@ export async function seedDemoPhotos(deps: PhotosDeps): Promise<void> {
   const { db } = deps;
   const [set] = await db.select().from(restorations).where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
   if (!set) return;
-  const [existing] = await db.select({ id: photos.id }).from(photos).where(eq(photos.restorationId, set.id)).limit(1);
-  if (existing) return;
+  const have = new Set((await db.select({ caption: photos.caption }).from(photos).where(eq(photos.restorationId, set.id))).map((p) => p.caption));
   const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
   const service = photosService(deps);
-  const [top, underside] = await Promise.all([renderChassisJpeg('top'), renderChassisJpeg('underside')]);
-  const shots: [Buffer, PhotoUploadFields][] = [
-    [top, { view: 'top', phase: 'before', caption: 'Top of the chassis as received, valves in place', ownerVisible: true }],
-    [underside, { view: 'underside', phase: 'before', caption: 'Underside before any work: note the scorching around R23', ownerVisible: true }],
-    [await closeUp(underside, 'R23'), { view: 'detail', phase: 'before', caption: 'R23 and C31, the cathode resistor and its bypass capacitor', ownerVisible: false }],
+  const shots: [() => Promise<Buffer>, PhotoUploadFields & { caption: string }][] = [
+    [() => renderChassisJpeg('top'), { view: 'top', phase: 'before', caption: 'Top of the chassis as received, valves in place', ownerVisible: true }],
+    [() => renderChassisJpeg('underside'), { view: 'underside', phase: 'before', caption: 'Underside before any work: note the scorching around R23', ownerVisible: true }],
+    [async () => closeUp(await renderChassisJpeg('underside'), 'R23'), { view: 'detail', phase: 'before', caption: 'R23 and C31, the cathode resistor and its bypass capacitor', ownerVisible: false }],
+    [() => renderChassisJpeg('top', 'after'), { view: 'top', phase: 'after', caption: 'Top after cleaning; the can capacitor restuffed', ownerVisible: true }],
+    [() => renderChassisJpeg('underside', 'after'), { view: 'underside', phase: 'after', caption: 'Underside after the work: new R23 and C31, C30 restuffed, new HT lead', ownerVisible: true }],
   ];
-  for (const [bytes, fields] of shots) {
+  for (const [render, fields] of shots) {
+    if (have.has(fields.caption)) continue;
+    const bytes = await render();
     const file = path.join(os.tmpdir(), `gridleak-demo-${randomUUID()}.jpg`);
     await writeFile(file, bytes);
     try {

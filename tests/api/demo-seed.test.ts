@@ -1,0 +1,40 @@
+import { count } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { findings, measurements, parts, photos, restorations, users, valves } from '../../server/db/schema';
+import { seedDemo } from '../../server/db/seed/seed-demo';
+import { chassisLandmarks } from '../../server/features/demo/chassis';
+import { seedDemoFindings } from '../../server/features/demo/seed-demo-findings';
+import { seedDemoPhotos } from '../../server/features/demo/seed-demo-photos';
+import { seedDemoWorkshop } from '../../server/features/demo/seed-demo-workshop';
+import { startTestApp } from '../support/test-app';
+
+let t: Awaited<ReturnType<typeof startTestApp>>;
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(() => t.stop());
+
+const seedAll = async () => {
+  await seedDemo(t.db);
+  await seedDemoPhotos(t.deps);
+  await seedDemoFindings(t.db);
+  await seedDemoWorkshop(t.db);
+};
+const counts = async () =>
+  Promise.all([users, restorations, photos, findings, measurements, parts, valves].map(async (table) => (await t.db.select({ n: count() }).from(table))[0]!.n));
+
+describe('demo seed', () => {
+  it('when seeded twice, then the second run changes nothing', async () => {
+    await seedAll();
+    const first = await counts();
+    expect(first).toEqual([3, 3, 5, 3, expect.any(Number), 6, 7]);
+    await seedAll();
+    expect(await counts()).toEqual(first);
+  }, 120_000);
+
+  it('when the demo findings are pinned, then they sit on the drawn parts of the underside picture', async () => {
+    const r23 = (await t.db.select().from(findings)).find((f) => f.componentRef === 'R23')!;
+    const mark = chassisLandmarks('underside').R23!;
+    expect(r23.points[0]).toEqual({ x: mark.x, y: mark.y });
+  });
+});
