@@ -17,13 +17,14 @@ export function AppShell() {
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-panel focus:p-2">
         Skip to content
       </a>
-      <header className="border-b border-rule bg-panel/90 backdrop-blur">
+      <header className="border-b border-rule bg-panel/90 backdrop-blur print:hidden">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-2 px-4 py-2">
           <NavLink to="/" className="mr-3 flex items-center gap-2" aria-label="Gridleak, the bench">
             <Logo />
             <span className="text-xl font-bold tracking-tight">Gridleak</span>
           </NavLink>
-          <nav aria-label="Main" className="flex flex-1 flex-wrap items-center gap-1">
+          {/* On a phone the links take a scrolling row of their own under the logo and the account controls. */}
+          <nav aria-label="Main" className="order-last flex w-full items-center gap-1 overflow-x-auto whitespace-nowrap sm:order-none sm:w-auto sm:flex-1">
             {signedIn && (
               <NavLink to="/" end className={navClass}>
                 Bench
@@ -40,6 +41,7 @@ export function AppShell() {
               </>
             )}
           </nav>
+          <span className="flex-1 sm:hidden" />
           {signedIn && <NotificationsMenu />}
           <ThemeToggle />
           <UserMenu />
@@ -48,7 +50,7 @@ export function AppShell() {
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">
         <Outlet />
       </main>
-      <footer className="border-t border-rule px-4 py-4 text-center text-xs text-ink-soft">
+      <footer className="border-t border-rule px-4 py-4 text-center text-xs text-ink-soft print:hidden">
         <p>
           Valve sets carry lethal voltages. Gridleak's figures are aids, not certification; follow local electrical codes and
           licensed practice.

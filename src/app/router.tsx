@@ -23,6 +23,7 @@ export const router = createBrowserRouter([
         Component: RequireSignIn,
         children: [
           { index: true, lazy: page(() => import('./routes/bench'), 'BenchRoute') },
+          { path: 'home', lazy: page(() => import('./routes/owner-home'), 'OwnerHomeRoute') },
           { path: 'restorations/new', lazy: page(() => import('./routes/new-restoration'), 'NewRestorationRoute') },
           {
             path: 'restorations/:id',
@@ -34,6 +35,8 @@ export const router = createBrowserRouter([
               { path: 'photos/:photoId/findings/:findingId', lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
               { path: 'findings', lazy: page(() => import('./routes/findings'), 'FindingsRoute') },
               { path: 'readings', lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },
+              { path: 'parts', lazy: page(() => import('./routes/parts'), 'PartsRoute') },
+              { path: 'history', lazy: page(() => import('./routes/history'), 'HistoryRoute') },
               { path: 'people', lazy: page(() => import('./routes/people'), 'PeopleRoute') },
             ],
           },

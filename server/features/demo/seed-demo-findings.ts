@@ -12,7 +12,7 @@ type Line = [Person, string, 'internal' | 'shared'];
 const scenario = [
   {
     landmark: 'R23', shape: 'circle' as const, title: 'Charred cathode resistor', componentRef: 'R23', kind: 'overheated' as const,
-    severity: 'fault' as const, status: 'confirmed' as const, ownerVisible: true, question: false,
+    severity: 'fault' as const, status: 'repaired' as const, ownerVisible: true, question: false,
     thread: [
       ['technician', 'R23 (150 Ω, EL84 cathode) is blackened and reads 212 Ω cold. The bypass C31 beside it is scorched too.', 'internal'],
       ['mentor', 'Classic: C31 went short, the full cathode current ran through R23. Check the EL84 for a heater-cathode short before fitting new parts, and measure C31 out of circuit.', 'internal'],
@@ -22,16 +22,20 @@ const scenario = [
   },
   {
     landmark: 'C30', shape: 'rect' as const, title: 'Bulging filter capacitor', componentRef: 'C30', kind: 'leaking' as const,
-    severity: 'hazard' as const, status: 'suspected' as const, ownerVisible: true, question: true,
+    severity: 'hazard' as const, status: 'repaired' as const, ownerVisible: true, question: false,
     thread: [
       ['technician', '@Teodor C30 (32 µF 350 V) has a domed end and a trace of electrolyte. Restuff the original can or fit a modern 47 µF 450 V beside it?', 'internal'],
       ['mentor', 'Restuff it: the owner asked for hidden parts to look original. 47 µF 450 V fits inside that can size.', 'internal'],
+      ['technician', 'Restuffed with 47 µF 450 V; HT now 262 V and the hum has gone.', 'shared'],
     ] as Line[],
   },
   {
     landmark: 'crackedLead', shape: 'arrow' as const, title: 'Cracked rubber HT lead', componentRef: '', kind: 'cracked' as const,
-    severity: 'hazard' as const, status: 'observed' as const, ownerVisible: false, question: false,
-    thread: [['mentor', 'That perished rubber lead carries HT to the EZ80: replace it before any power-up.', 'internal']] as Line[],
+    severity: 'hazard' as const, status: 'confirmed' as const, ownerVisible: false, question: true,
+    thread: [
+      ['mentor', 'That perished rubber lead carries HT to the EZ80: replace it before any power-up.', 'internal'],
+      ['technician', '@Teodor new PVC lead of the same gauge, or re-sleeve the original to keep the look? The owner asked for hidden parts to look original.', 'internal'],
+    ] as Line[],
   },
 ];
 

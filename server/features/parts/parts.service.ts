@@ -39,8 +39,10 @@ export function partsService(db: Database) {
     async create(restorationId: number, input: PartInput & { action: Row['action'] }, actorId: number) {
       await assertFinding(restorationId, input.findingId);
       const fittedAt = input.state === 'fitted' ? new Date() : null;
+      // Keeping an original is recorded in the ledger, but nothing was fitted.
+      const fitted = fittedAt && input.action !== 'kept-original';
       const [row] = await db.insert(parts).values({ ...input, restorationId, findingId: input.findingId ?? null, fittedAt }).returning();
-      if (fittedAt) await recordEvent(db, { restorationId, kind: 'part-fitted', actorId, partId: row!.id, findingId: row!.findingId });
+      if (fitted) await recordEvent(db, { restorationId, kind: 'part-fitted', actorId, partId: row!.id, findingId: row!.findingId });
       return row!;
     },
     async update(id: number, patch: Partial<Row>, actorId: number) {
@@ -50,7 +52,7 @@ export function partsService(db: Database) {
       const becameFitted = patch.state === 'fitted' && before.state !== 'fitted';
       const values = { ...patch, ...(becameFitted ? { fittedAt: new Date() } : patch.state && patch.state !== 'fitted' ? { fittedAt: null } : {}) };
       const [row] = await db.update(parts).set(values).where(eq(parts.id, id)).returning();
-      if (becameFitted) await recordEvent(db, { restorationId: before.restorationId, kind: 'part-fitted', actorId, partId: id, findingId: row!.findingId });
+      if (becameFitted && row!.action !== 'kept-original') await recordEvent(db, { restorationId: before.restorationId, kind: 'part-fitted', actorId, partId: id, findingId: row!.findingId });
       return row!;
     },
     async remove(id: number) {

@@ -1,5 +1,5 @@
 import { useDeferredValue, useState } from 'react';
-import { Link } from 'react-router';
+import { Link, Navigate } from 'react-router';
 import { buttonClass } from '../../components/button';
 import { inputClass } from '../../components/field';
 import { EmptyState, ErrorState, Loading } from '../../components/states';
@@ -11,6 +11,8 @@ export function BenchRoute() {
   const [search, setSearch] = useState('');
   const q = useDeferredValue(search.trim());
   const list = useRestorations(q ? { q } : {});
+  // Owners follow their sets from a calmer page of their own.
+  if (!q && list.data?.length && list.data.every((r) => r.role === 'owner')) return <Navigate to="/home" replace />;
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-end justify-between gap-4">

@@ -7,6 +7,8 @@ import { EmptyState, ErrorState, Loading } from '../../components/states';
 import { useMe } from '../../features/auth/api/get-me';
 import { usePhotoFindings } from '../../features/findings/api/get-photo-findings';
 import { FindingPanel } from '../../features/findings/components/finding-panel';
+import { Thread } from '../../features/findings/components/thread';
+import { MeasurementsForFinding } from '../../features/measurements/components/measurements-for-finding';
 import { FindingsList } from '../../features/markup/components/findings-list';
 import { MarkupCanvas } from '../../features/markup/components/markup-canvas';
 import { NewFindingForm } from '../../features/markup/components/new-finding-form';
@@ -58,6 +60,7 @@ function PhotoMarkup({
   const params = useParams();
   const navigate = useNavigate();
   const members = useMembers(r.id);
+  const people = (members.data ?? []).map((m) => ({ userId: m.userId, name: m.name, role: m.role }));
   const findingId = params.findingId === undefined ? undefined : Number(params.findingId);
   const photoPath = `/restorations/${r.id}/photos/${photo.id}`;
 
@@ -152,15 +155,19 @@ function PhotoMarkup({
               />
             </div>
           ) : selected ? (
-            <FindingPanel
-              key={selected.id}
-              finding={selected}
-              role={r.role}
-              meId={meId}
-              restorationId={r.id}
-              members={(members.data ?? []).map((m) => ({ userId: m.userId, name: m.name, role: m.role }))}
-              onDeleted={() => select(undefined)}
-            />
+            <div className="space-y-4 rounded-xl border border-rule bg-panel p-4">
+              <FindingPanel
+                key={selected.id}
+                finding={selected}
+                role={r.role}
+                meId={meId}
+                restorationId={r.id}
+                members={people}
+                onDeleted={() => select(undefined)}
+              />
+              <MeasurementsForFinding restorationId={r.id} findingId={selected.id} role={r.role} />
+              <Thread key={`thread-${selected.id}`} finding={selected} role={r.role} meId={meId} members={people} />
+            </div>
           ) : (
             <p className="rounded-xl border border-dashed border-rule bg-panel p-4 text-ink-soft">
               {findingId !== undefined

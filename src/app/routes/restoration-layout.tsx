@@ -29,7 +29,7 @@ export function RestorationLayout() {
         <StageBadge stage={r.stage} />
         <span className="text-sm text-ink-soft">You: {roleLabels[r.role]}</span>
       </header>
-      <nav aria-label="Restoration" className="-mx-4 flex gap-1 overflow-x-auto whitespace-nowrap border-b border-rule px-4">
+      <nav aria-label="Restoration" className="-mx-4 flex print:hidden gap-1 overflow-x-auto whitespace-nowrap border-b border-rule px-4">
         <NavLink to="." end className={tabClass}>
           Overview
         </NavLink>
@@ -41,6 +41,12 @@ export function RestorationLayout() {
         </NavLink>
         <NavLink to="readings" className={tabClass}>
           Readings
+        </NavLink>
+        <NavLink to="parts" className={tabClass}>
+          Parts
+        </NavLink>
+        <NavLink to="history" className={tabClass}>
+          History
         </NavLink>
         <NavLink to="people" className={tabClass}>
           People

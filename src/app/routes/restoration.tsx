@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { can } from '../../../shared/permissions';
 import { equipmentKindLabels, workLevelLabels } from '../../../shared/schemas/restorations';
 import { Button } from '../../components/button';
+import { ReportPanel } from '../../features/report/components/report-panel';
 import { useUpdateRestoration } from '../../features/restorations/api/update-restoration';
 import { RestorationForm } from '../../features/restorations/components/restoration-form';
 import { StagePicker } from '../../features/restorations/components/stage-picker';
@@ -30,6 +31,7 @@ export function RestorationRoute() {
           away, and refit insulating knobs and covers before hand-back. Follow local electrical codes and licensed practice.
         </p>
       )}
+      <ReportPanel restorationId={r.id} role={r.role} />
       {canEdit && <StagePicker stage={r.stage} disabled={update.isPending} onChange={(stage) => update.mutate({ stage })} />}
       {editing ? (
         <div className="rounded-xl border border-rule bg-panel p-5">

@@ -11,17 +11,18 @@ function dayKey(date: Date, timeZone?: string): string {
   return new Intl.DateTimeFormat('en-CA', { year: 'numeric', month: '2-digit', day: '2-digit', timeZone }).format(date);
 }
 
-/** "Tuesday 24 November", with the year added when it is not the current one. */
+/** "Tuesday 24 November", with the year added when it is not the current one ("Tuesday 4 March 2025"). */
 export function dayLabel(date: Date, { timeZone, now = new Date() }: { timeZone?: string; now?: Date } = {}): string {
-  const year = (d: Date) => new Intl.DateTimeFormat('en-GB', { year: 'numeric', timeZone }).format(d);
-  const sameYear = year(date) === year(now);
-  return new Intl.DateTimeFormat('en-GB', {
-    weekday: 'long',
-    day: 'numeric',
-    month: 'long',
-    ...(sameYear ? {} : { year: 'numeric' }),
-    timeZone,
-  }).format(date);
+  // Built from parts: ICU versions differ on the comma they put after the weekday once a year is present.
+  const parts = (d: Date) =>
+    Object.fromEntries(
+      new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', timeZone })
+        .formatToParts(d)
+        .map((p) => [p.type, p.value]),
+    );
+  const p = parts(date);
+  const label = `${p.weekday} ${p.day} ${p.month}`;
+  return p.year === parts(now).year ? label : `${label} ${p.year}`;
 }
 
 /** The clock time of an event, 24-hour: "14:05". */

@@ -34,7 +34,13 @@ export function useMarkupCommands(env: Env) {
   const [pending, setPending] = useState<{ items: readonly Finding[]; points: ReadonlyMap<number, readonly ImagePoint[]> }>();
   const shown = pending && pending.items === env.items ? pending.points : undefined;
   const base = useMemo(() => env.items.map(toMark), [env.items]);
-  const marks = useMemo(() => (shown ? base.map((m) => { const p = shown.get(m.id); return p ? withPoints(m, p) : m; }) : base), [base, shown]);
+  const marks = useMemo(() => {
+    if (!shown) return base;
+    return base.map((m) => {
+      const points = shown.get(m.id);
+      return points ? withPoints(m, points) : m;
+    });
+  }, [base, shown]);
   const latest = useRef({ ...env, marks });
   useEffect(() => {
     latest.current = { ...env, marks };

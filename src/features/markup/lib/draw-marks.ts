@@ -56,12 +56,12 @@ export function drawGeometry(
   view: ViewTransform,
   image: ImageSize,
   look: MarkerLook,
-  options: { strokeColour: string; dashed?: boolean },
+  options: { strokeColour: string; halo: string; dashed?: boolean },
 ): void {
   if (g.shape !== 'pin') {
     pen.beginPath();
     addStroke(pen, g.shape, stagePoints(g, view, image), radiusOf(g, view, image));
-    haloStroke(pen, options.strokeColour, STROKE_PX, options.dashed);
+    haloStroke(pen, options.strokeColour, STROKE_PX, options.halo, options.dashed);
   }
   const { at, r } = markerSpot(g, view, image);
   drawMarker(pen, at.x, at.y, r, look);
@@ -69,7 +69,8 @@ export function drawGeometry(
 
 /** A finding in its status colour, numbered, with its severity marker. */
 export function drawMark(pen: Pen, mark: Mark, view: ViewTransform, image: ImageSize, dashed = false): void {
-  drawGeometry(pen, mark, view, image, findingLook(mark.number, mark.status, mark.severity), { strokeColour: styleOf(mark.status).colour, dashed });
+  const style = styleOf(mark.status);
+  drawGeometry(pen, mark, view, image, findingLook(mark.number, mark.status, mark.severity), { strokeColour: style.colour, halo: style.ink, dashed });
 }
 
 /** Whether any part of the mark (or its marker) can show on a stage of this size. */
@@ -82,8 +83,9 @@ export function onStage(g: Geometry, view: ViewTransform, image: ImageSize, stag
 
 /**
  * Every finding, skipping those off the stage and the one being dragged (`hiddenId`, which the overlay draws).
- * Strokes go first, one path per status colour (a few stroke calls rather than three per mark), then every
- * marker on top in list order, so no line ever hides a number. Returns how many marks were drawn.
+ * Strokes go first, each its own small path (a canvas strokes many small paths faster than one path of many
+ * overlapping parts), then every marker on top in list order, so no line ever hides a number. Returns how many
+ * marks were drawn.
  */
 export function drawMarks(
   pen: Pen,
@@ -95,21 +97,14 @@ export function drawMarks(
   paintMarker: MarkerPainter = drawMarker,
 ): number {
   const shown = marks.filter((m) => m.id !== hiddenId && onStage(m, view, image, stage));
-  const byColour = new Map<string, Mark[]>();
   for (const mark of shown) {
     if (mark.shape === 'pin') continue;
-    const colour = styleOf(mark.status).colour;
-    const group = byColour.get(colour);
-    if (group) group.push(mark);
-    else byColour.set(colour, [mark]);
-  }
-  const dbg = (globalThis as unknown as { __dbg?: string }).__dbg ?? '';
-  for (const [colour, group] of dbg.includes('nostroke') ? [] : byColour) {
+    const style = styleOf(mark.status);
     pen.beginPath();
-    for (const mark of group) addStroke(pen, mark.shape, stagePoints(mark, view, image), radiusOf(mark, view, image));
-    haloStroke(pen, colour, STROKE_PX);
+    addStroke(pen, mark.shape, stagePoints(mark, view, image), radiusOf(mark, view, image));
+    haloStroke(pen, style.colour, STROKE_PX, style.ink);
   }
-  for (const mark of dbg.includes('nomarker') ? [] : shown) {
+  for (const mark of shown) {
     const { at, r } = markerSpot(mark, view, image);
     paintMarker(pen, at.x, at.y, r, findingLook(mark.number, mark.status, mark.severity));
   }

@@ -15,10 +15,10 @@ describe('drawOverlay', () => {
     const editable = recordingPen();
     drawOverlay(editable, { selected: rect, editable: true }, view, image);
     expect(handleRects(editable.calls).map((c) => c.args.slice(0, 2))).toEqual([
-      [94, 94],
-      [294, 94],
-      [94, 194],
-      [294, 194],
+      [92, 92],
+      [292, 92],
+      [92, 192],
+      [292, 192],
     ]);
     const readOnly = recordingPen();
     drawOverlay(readOnly, { selected: rect, editable: false }, view, image);
@@ -31,7 +31,7 @@ describe('drawOverlay', () => {
     const draft = { id: 4, shape: 'rect' as const, points: [imagePoint(0.5, 0.5), imagePoint(0.7, 0.6)] };
     drawOverlay(pen, { draft, dragging: rect, selected: rect, editable: true }, view, image);
     expect(pen.calls.find((c) => c.op === 'rect')?.args).toEqual([500, 500, 200, 100]);
-    expect(handleRects(pen.calls)[0]?.args.slice(0, 2)).toEqual([494, 494]);
+    expect(handleRects(pen.calls)[0]?.args.slice(0, 2)).toEqual([492, 492]);
   });
 
   it('when a new mark is being drawn or awaits its title, then it is dashed in the accent colour', () => {

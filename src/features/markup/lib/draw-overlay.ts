@@ -6,8 +6,11 @@ import { drawGeometry, drawMark } from './draw-marks';
 import { withPoints, type Mark } from './marks';
 import { DRAFT_COLOUR, HALO_DARK, HALO_LIGHT, haloStroke, traceOutline, type Pen } from './pen';
 
-/** Side of a resize handle, stage px. */
-export const HANDLE_PX = 12;
+/**
+ * Side of a resize handle, stage px. Handles are hollow: the start of an arrow and the corner of a rect are also
+ * where the finding's numbered marker sits, and a hollow handle frames the number instead of hiding it.
+ */
+export const HANDLE_PX = 16;
 /** Gap between a selected mark and its selection outline, stage px. */
 const SELECTION_GAP_PX = 7;
 
@@ -26,7 +29,7 @@ export interface OverlayScene {
 
 /** A mark that is not a finding yet: dashed amber, its marker a "+". */
 export function drawNewMark(pen: Pen, g: Geometry, view: ViewTransform, image: ImageSize): void {
-  drawGeometry(pen, g, view, image, { shape: 'circle', fill: DRAFT_COLOUR, ink: '#000000', text: '+' }, { strokeColour: DRAFT_COLOUR, dashed: true });
+  drawGeometry(pen, g, view, image, { shape: 'circle', fill: DRAFT_COLOUR, ink: '#000000', text: '+' }, { strokeColour: DRAFT_COLOUR, halo: '#000000', dashed: true });
 }
 
 function drawSelection(pen: Pen, g: Geometry, view: ViewTransform, image: ImageSize, editable: boolean): void {
@@ -42,16 +45,18 @@ function drawSelection(pen: Pen, g: Geometry, view: ViewTransform, image: ImageS
     pen.beginPath();
     pen.rect(min.x - SELECTION_GAP_PX, min.y - SELECTION_GAP_PX, max.x - min.x + 2 * SELECTION_GAP_PX, max.y - min.y + 2 * SELECTION_GAP_PX);
   }
-  haloStroke(pen, DRAFT_COLOUR, 2, true);
+  haloStroke(pen, DRAFT_COLOUR, 2, '#000000', true);
   if (!editable) return;
   for (const { point } of handles(g)) {
     const at = imageToStage(point, view, image);
     pen.beginPath();
     pen.rect(at.x - HANDLE_PX / 2, at.y - HANDLE_PX / 2, HANDLE_PX, HANDLE_PX);
-    pen.fillStyle = HALO_LIGHT;
-    pen.fill();
+    pen.lineJoin = 'miter';
     pen.strokeStyle = HALO_DARK;
-    pen.lineWidth = 1.5;
+    pen.lineWidth = 4.5;
+    pen.stroke();
+    pen.strokeStyle = HALO_LIGHT;
+    pen.lineWidth = 2;
     pen.stroke();
   }
 }

@@ -44,16 +44,17 @@ export function traceOutline(pen: Pen, outline: Outline, cx: number, cy: number)
   pen.closePath();
 }
 
-/** Stroke the current path three times: dark rim, light rim, then the colour (dashed when asked). */
-export function haloStroke(pen: Pen, colour: string, width: number, dashed = false): void {
+/**
+ * Stroke the current path twice: a rim in `halo`, then the colour (dashed when asked). Pass the colour's own
+ * ink (the one of black or white that contrasts with it): a light line gets a dark rim and a dark line a light
+ * one, so every line stands off dark chassis and pale paper alike, at the cost of two strokes rather than three.
+ */
+export function haloStroke(pen: Pen, colour: string, width: number, halo: string, dashed = false): void {
   pen.lineJoin = 'round';
   pen.lineCap = 'round';
   pen.setLineDash([]);
-  pen.strokeStyle = HALO_DARK;
-  pen.lineWidth = width + 4;
-  pen.stroke();
-  pen.strokeStyle = HALO_LIGHT;
-  pen.lineWidth = width + 2;
+  pen.strokeStyle = halo === '#000000' ? HALO_DARK : HALO_LIGHT;
+  pen.lineWidth = width + 3;
   pen.stroke();
   if (dashed) pen.setLineDash([8, 6]);
   pen.strokeStyle = colour;

@@ -97,6 +97,9 @@ export function RestorationForm({
       <Field label="The set's story" hint="For the owner's hand-back report" error={e.story?.message}>
         {(a) => <textarea {...a} {...register('story')} rows={3} className={inputClass} />}
       </Field>
+      <Field label="Care notes for the owner" hint="For the hand-back report: warm-up, ventilation, aerial, play time" error={e.careNotes?.message}>
+        {(a) => <textarea {...a} {...register('careNotes')} rows={3} className={inputClass} />}
+      </Field>
       {serverError && (
         <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 font-semibold text-danger">
           {serverError}

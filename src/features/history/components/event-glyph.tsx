@@ -1,0 +1,66 @@
+import type { ReactNode } from 'react';
+import type { TimelineEvent } from '../../../../shared/schemas/parts';
+
+type Kind = TimelineEvent['kind'];
+
+/** Gridleak's own line glyphs, one per kind of event, drawn on a 20-unit grid in the text colour. */
+const drawings: Record<Kind, ReactNode> = {
+  // A camera body with its lens.
+  'photo-added': (
+    <>
+      <path d="M3 6.5h3l1.5-2h5l1.5 2h3v9H3Z" />
+      <circle cx="10" cy="11" r="2.8" />
+    </>
+  ),
+  // A marker pin on the chassis.
+  'finding-opened': (
+    <>
+      <path d="M10 18s-5.5-5.2-5.5-9a5.5 5.5 0 0 1 11 0c0 3.8-5.5 9-5.5 9Z" />
+      <circle cx="10" cy="9" r="1.8" />
+    </>
+  ),
+  // A dial turned part way: the finding moved on a step.
+  'finding-status': (
+    <>
+      <circle cx="10" cy="10" r="7" />
+      <path d="M10 3v7l5 5" />
+    </>
+  ),
+  'question-asked': (
+    <>
+      <path d="M3.5 4h13v9h-7l-4 3v-3h-2Z" />
+      <path d="M8.3 7.2a1.8 1.8 0 1 1 2.4 1.7c-.5.2-.7.5-.7 1v.4M10 11.6v.1" />
+    </>
+  ),
+  'question-resolved': (
+    <>
+      <path d="M3.5 4h13v9h-7l-4 3v-3h-2Z" />
+      <path d="m7.2 8.6 2 2 3.8-3.9" />
+    </>
+  ),
+  // A resistor's zigzag between two leads.
+  'part-fitted': <path d="M1.5 10h4l1.2-3 2 6 2-6 2 6 1.2-3h4.6" />,
+  // A flag on its pole: the work reached a new stage.
+  'stage-changed': <path d="M5 18V3M5 4h10l-2.5 3.5L15 11H5" />,
+  // A meter's scale with the needle past the mark.
+  'measurement-out': (
+    <>
+      <path d="M3 14a7 7 0 0 1 14 0" />
+      <path d="m10 14 5-5.5M13.5 5.5l1 1.6" />
+    </>
+  ),
+};
+
+export function EventGlyph({ kind, className = '' }: { kind: Kind; className?: string }) {
+  const attention = kind === 'measurement-out';
+  return (
+    <span
+      aria-hidden="true"
+      className={`inline-flex h-9 w-9 shrink-0 items-center justify-center rounded-full border ${attention ? 'border-danger/50 bg-danger-soft text-danger' : 'border-rule bg-sunken text-ink-soft'} ${className}`}
+    >
+      <svg viewBox="0 0 20 20" className="h-5 w-5" fill="none" stroke="currentColor" strokeWidth={1.6} strokeLinecap="round" strokeLinejoin="round">
+        {drawings[kind]}
+      </svg>
+    </span>
+  );
+}

@@ -1,0 +1,22 @@
+import { phaseLabels, viewLabels, type Photo } from '../../../../shared/schemas/photos';
+
+const day = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+
+/** The day a photo was taken (or, failing the camera's word, uploaded): "24 Nov 2026". */
+export function photoDay(photo: Pick<Photo, 'takenAt' | 'uploadedAt'>): string {
+  const date = new Date(photo.takenAt ?? photo.uploadedAt);
+  return Number.isNaN(date.getTime()) ? '' : day.format(date);
+}
+
+/** Words for an image's alt text: "Top, before: as received". */
+export function photoWords(photo: Pick<Photo, 'view' | 'phase' | 'caption'>): string {
+  const base = `${viewLabels[photo.view]}, ${phaseLabels[photo.phase].toLowerCase()}`;
+  return photo.caption ? `${base}: ${photo.caption}` : base;
+}
+
+/** One line in a photo picker: "After · 30 Nov 2026 · cabinet polished". */
+export function photoChoiceLabel(photo: Photo): string {
+  const caption = photo.caption.trim();
+  const short = caption.length > 40 ? `${caption.slice(0, 39)}…` : caption;
+  return [phaseLabels[photo.phase], photoDay(photo), short].filter(Boolean).join(' · ');
+}

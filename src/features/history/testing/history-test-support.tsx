@@ -1,0 +1,42 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render } from '@testing-library/react';
+import type { ReactNode } from 'react';
+import { MemoryRouter } from 'react-router';
+import { vi } from 'vitest';
+import type { TimelineEvent } from '../../../../shared/schemas/parts';
+
+/** An event as the API answers it; tests override what they care about. */
+export function makeEvent(id: number, overrides: Partial<TimelineEvent> = {}): TimelineEvent {
+  return {
+    id, kind: 'stage-changed', at: '2026-11-24T12:00:00.000Z', actorName: 'Tessa Bench', summary: `Event ${id}`,
+    photoId: null, findingId: null, thumbUrl: null, ...overrides,
+  };
+}
+
+/**
+ * Stands in for the API behind `fetch`: `routes` maps a path (without /api) to the JSON it answers; anything else
+ * is a 404. Returns the paths asked for.
+ */
+export function fakeJsonApi(routes: Record<string, unknown>) {
+  const asked: string[] = [];
+  const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (input: RequestInfo | URL) => {
+      const path = String(input).replace(/^\/api/, '');
+      asked.push(path);
+      return path in routes ? json(200, routes[path]) : json(404, { error: { code: 'not-found', message: 'Not found.' } });
+    }),
+  );
+  return { asked };
+}
+
+/** Renders with a fresh query cache (no retries) inside a memory router, since the timeline links to photos. */
+export function renderWithQueries(ui: ReactNode) {
+  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  return render(
+    <QueryClientProvider client={client}>
+      <MemoryRouter>{ui}</MemoryRouter>
+    </QueryClientProvider>,
+  );
+}

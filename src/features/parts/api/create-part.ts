@@ -1,0 +1,20 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { Part, PartInput } from '../../../../shared/schemas/parts';
+import { api } from '../../../lib/api-client';
+import { partKeys } from './keys';
+
+/** Adds a line to the ledger; the answer carries the server's warnings for it. */
+export const createPart = (restorationId: number, input: PartInput) =>
+  api<Part>(`/restorations/${restorationId}/parts`, { method: 'POST', json: input });
+
+export function useCreatePart(restorationId: number) {
+  const client = useQueryClient();
+  const key = partKeys.restoration(restorationId);
+  return useMutation({
+    mutationFn: (input: PartInput) => createPart(restorationId, input),
+    onSuccess: (made) => {
+      client.setQueryData<Part[]>(key, (list) => (list ? [...list, made] : list));
+      return client.invalidateQueries({ queryKey: key });
+    },
+  });
+}

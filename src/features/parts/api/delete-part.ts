@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { Part } from '../../../../shared/schemas/parts';
+import { api } from '../../../lib/api-client';
+import { partKeys } from './keys';
+
+export const deletePart = (id: number) => api<void>(`/parts/${id}`, { method: 'DELETE' });
+
+export function useDeletePart(restorationId: number) {
+  const client = useQueryClient();
+  const key = partKeys.restoration(restorationId);
+  return useMutation({
+    mutationFn: (id: number) => deletePart(id),
+    onSuccess: (_nothing, id) => {
+      client.setQueryData<Part[]>(key, (list) => list?.filter((p) => p.id !== id));
+      return client.invalidateQueries({ queryKey: key });
+    },
+  });
+}

@@ -1,0 +1,12 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { Part } from '../../../../shared/schemas/parts';
+import { api } from '../../../lib/api-client';
+import { partKeys } from './keys';
+
+/** The restoration's parts ledger; owners get it without costs, sources and notes. */
+export const getParts = (restorationId: number) => api<Part[]>(`/restorations/${restorationId}/parts`);
+
+export const partsQueryOptions = (restorationId: number) =>
+  queryOptions({ queryKey: partKeys.restoration(restorationId), queryFn: () => getParts(restorationId) });
+
+export const useParts = (restorationId: number) => useQuery(partsQueryOptions(restorationId));

@@ -1,0 +1,34 @@
+/** Currencies offered for showing costs; the ledger stores minor units and no currency, so this is a display choice. */
+export const currencies = ['GBP', 'EUR', 'USD', 'CAD', 'AUD', 'NZD', 'CHF', 'SEK', 'NOK', 'DKK', 'JPY'] as const;
+export type Currency = (typeof currencies)[number];
+
+export const isCurrency = (value: unknown): value is Currency => currencies.includes(value as Currency);
+
+/** How many minor units make one major unit, as a power of ten: 2 for pence and cents, 0 for yen. */
+export const minorDigits = (currency: Currency): number =>
+  new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
+
+/** A cost in minor units (185) as money in the reader's locale (£1.85). */
+export function formatMinor(minor: number, currency: Currency, locale?: string): string {
+  return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(minor / 10 ** minorDigits(currency));
+}
+
+/** Minor units back to the figure a person types: 185 → "1.85". */
+export const minorToText = (minor: number | null, currency: Currency): string =>
+  minor === null ? '' : (minor / 10 ** minorDigits(currency)).toFixed(minorDigits(currency));
+
+/**
+ * A typed cost ("1.85", "£1.85", "1,85", "12") in minor units; '' is no cost (null). A decimal comma is read as a
+ * point; more decimals than the currency has is refused rather than rounded away.
+ */
+export function parseCost(text: string, currency: Currency): { ok: true; minor: number | null } | { ok: false; message: string } {
+  const bare = text.replace(/[^\d.,-]/g, '');
+  if (text.trim() === '') return { ok: true, minor: null };
+  const digits = minorDigits(currency);
+  const match = /^(\d+)(?:[.,](\d*))?$/.exec(bare);
+  if (!match) return { ok: false, message: 'Write the cost as a number, e.g. 1.85' };
+  const fraction = match[2] ?? '';
+  if (fraction.length > digits)
+    return { ok: false, message: digits === 0 ? `${currency} has no smaller unit: give a whole number` : `At most ${digits} decimal places` };
+  return { ok: true, minor: Number(match[1]) * 10 ** digits + Number(fraction.padEnd(digits, '0') || 0) };
+}

@@ -1,0 +1,66 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render } from '@testing-library/react';
+import type { ReactNode } from 'react';
+import { vi } from 'vitest';
+import type { Part, PartInput } from '../../../../shared/schemas/parts';
+import { makePart } from './part-fixtures';
+
+export interface Call {
+  method: string;
+  url: string;
+  body: unknown;
+}
+
+const json = (status: number, body: unknown) =>
+  new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+
+/**
+ * Stands in for the parts API behind `fetch`. `refuseChanges` answers every PATCH with that status and message;
+ * `holdChanges` keeps PATCH answers back until the promise settles, to watch what shows meanwhile. Every call is recorded.
+ */
+export function fakePartsApi(
+  initial: Part[],
+  { refuseChanges, holdChanges }: { refuseChanges?: { status: number; message: string }; holdChanges?: Promise<void> } = {},
+) {
+  let list = [...initial];
+  let nextId = 100;
+  const calls: Call[] = [];
+  const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
+    const url = String(input);
+    const method = init.method ?? 'GET';
+    const body: unknown = typeof init.body === 'string' ? JSON.parse(init.body) : undefined;
+    calls.push({ method, url, body });
+    if (url.endsWith('/parts') && method === 'GET') return json(200, list);
+    if (url.endsWith('/parts') && method === 'POST') {
+      const made = makePart(nextId++, body as PartInput & { componentRef: string });
+      list = [...list, made];
+      return json(201, made);
+    }
+    const id = Number(/\/api\/parts\/(\d+)$/.exec(url)?.[1]);
+    if (method === 'PATCH') {
+      await holdChanges;
+      if (refuseChanges) return json(refuseChanges.status, { error: { code: 'refused', message: refuseChanges.message } });
+      list = list.map((p) => (p.id === id ? makePart(id, { ...p, ...(body as Partial<PartInput>) }) : p));
+      return json(200, list.find((p) => p.id === id));
+    }
+    if (method === 'DELETE') {
+      list = list.filter((p) => p.id !== id);
+      return new Response(null, { status: 204 });
+    }
+    return json(404, { error: { code: 'not-found', message: 'Not found.' } });
+  });
+  vi.stubGlobal('fetch', fetchMock);
+  return { calls, fetchMock };
+}
+
+export function renderWithQueries(ui: ReactNode) {
+  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  return { client, ...render(<QueryClientProvider client={client}>{ui}</QueryClientProvider>) };
+}
+
+/** A promise and the function that settles it. */
+export function gate() {
+  let open = () => {};
+  const promise = new Promise<void>((resolve) => (open = resolve));
+  return { promise, open };
+}

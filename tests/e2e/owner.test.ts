@@ -1,0 +1,52 @@
+import { readFileSync } from 'node:fs';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { artifactPath } from '../support/artifacts';
+import { launchBrowser, newPage } from '../support/browser';
+import { signInAs } from '../support/journey';
+import { pdfText } from '../support/pdf-text';
+import { startProduct } from '../support/start-product';
+
+let product: Awaited<ReturnType<typeof startProduct>>;
+let browser: Browser;
+beforeAll(async () => {
+  [product, browser] = await Promise.all([startProduct(), launchBrowser()]);
+});
+afterAll(async () => {
+  await browser?.close();
+  await product?.stop();
+});
+
+describe('the owner at home, on a phone', () => {
+  it('when the owner opens their set, then they compare before and after with the slider and download the report', async () => {
+    const page = await newPage(browser, { width: 390, height: 844 });
+    await signInAs(page, product.origin, 'philippa@example.test');
+    await page.goto(product.origin);
+    await page.waitForURL(/\/home/);
+    await page.getByText('Meridian 54').first().waitFor();
+
+    const slider = page.getByRole('slider', { name: 'Before and after comparison' }).first();
+    await slider.scrollIntoViewIfNeeded();
+    const start = Number(await slider.getAttribute('aria-valuenow'));
+    await slider.focus();
+    await page.keyboard.press('ArrowRight');
+    await page.keyboard.press('ArrowRight');
+    await expect.poll(async () => Number(await slider.getAttribute('aria-valuenow'))).toBeGreaterThan(start);
+    await page.screenshot({ path: artifactPath('owner-home-phone.png'), fullPage: true });
+
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Download the hand-back report (PDF)' }).first().click(),
+    ]);
+    const file = artifactPath('hand-back-report.pdf');
+    await download.saveAs(file);
+    const pdf = readFileSync(file);
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    const text = (await pdfText(pdf)).replace(/\s+/g, ' ');
+    expect(text).toContain('Ostrander & Vale Meridian 54');
+    expect(text).toContain('Charred cathode resistor');
+    // The cracked-lead finding and the internal thread are not shared with the owner.
+    expect(text).not.toContain('Cracked rubber HT lead');
+    expect(text).not.toContain('quote');
+  });
+});
