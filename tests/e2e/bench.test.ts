@@ -22,7 +22,7 @@ describe('the bench', () => {
     await page.goto(product.origin);
     await expect.poll(() => page.getByRole('heading', { name: 'The bench' }).isVisible()).toBe(true);
     // The demo restorations are on the bench, grouped by stage.
-    await page.getByText('Meridian 54').waitFor();
+    await page.getByRole('link', { name: /OV-54-20417/ }).waitFor();
     expect(await page.getByRole('heading', { name: /Repair/ }).count()).toBe(1);
 
     await page.getByRole('link', { name: '+ Take in a set' }).click();
@@ -40,7 +40,7 @@ describe('the bench', () => {
     await page.screenshot({ path: artifactPath('bench.png'), fullPage: true });
 
     await page.getByLabel('Search by make, model or serial').fill('FD-6');
-    await expect.poll(() => page.getByRole('link', { name: /Meridian 54/ }).count()).toBe(0);
+    await expect.poll(() => page.getByRole('link', { name: /OV-54-20417/ }).count()).toBe(0);
     await expect.poll(() => card.isVisible()).toBe(true);
   });
 

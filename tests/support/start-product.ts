@@ -35,6 +35,7 @@ export async function startProduct() {
   });
   return {
     origin,
+    databaseUrl: database.url,
     output: () => output,
     async stop() {
       const exited = new Promise((r) => child.once('exit', r));

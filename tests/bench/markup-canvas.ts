@@ -1,0 +1,72 @@
+/// <reference lib="dom" />
+/**
+ * Benchmark (prints figures measured in one run; no assertions): the markup page with 1,000 findings on
+ * one photo in headless Chromium — time from navigation to the first drawn frame with the marks, and
+ * frame times while panning and zooming (goal: median under 16 ms).
+ * Run: npx tsx tests/bench/markup-canvas.ts
+ */
+import { findings } from '../../server/db/schema';
+import { launchBrowser, newPage } from '../support/browser';
+import { signInAs } from '../support/journey';
+import { startProduct } from '../support/start-product';
+import { startTestCluster } from '../support/test-cluster';
+import { connectDatabase } from '../../server/db/client';
+import { sql } from 'drizzle-orm';
+
+const cluster = await startTestCluster();
+process.env.GRIDLEAK_TEST_TEMPLATE_URL = cluster.templateUrl;
+const product = await startProduct();
+const browser = await launchBrowser();
+try {
+  const db = connectDatabase(product.databaseUrl);
+  const [photo] = (await db.db.execute<{ id: number; restoration_id: number }>(sql`select id, restoration_id from photos where view = 'underside' and phase = 'before' limit 1`)).rows;
+  const shapes = ['pin', 'circle', 'rect', 'arrow', 'freehand'] as const;
+  await db.db.insert(findings).values(Array.from({ length: 997 }, (_, i) => {
+    const shape = shapes[i % 5]!;
+    const x = 0.02 + (i % 40) / 41;
+    const y = 0.02 + Math.floor(i / 40) / 26;
+    const points = shape === 'pin' ? [{ x, y }] : shape === 'freehand' ? Array.from({ length: 12 }, (_, k) => ({ x: x + k * 0.001, y: y + Math.sin(k) * 0.005 })) : [{ x, y }, { x: x + 0.01, y: y + 0.015 }];
+    return { restorationId: photo!.restoration_id, photoId: photo!.id, number: 100 + i, shape, points, title: `Bench mark ${i}`, kind: 'note' as const, severity: 'info' as const };
+  }));
+  await db.pool.end();
+
+  const page = await newPage(browser, { width: 1280, height: 900 });
+  await signInAs(page, product.origin, 'mara@cobbold-lane.test');
+  const url = `${product.origin}/restorations/${photo!.restoration_id}/photos/${photo!.id}`;
+  const started = Date.now();
+  await page.goto(url);
+  await page.waitForFunction(() => (window as unknown as { __gridleakMarkup?: { view: { scale: number } } }).__gridleakMarkup?.view.scale, null, { timeout: 60_000 });
+  // Two animation frames after the probe appears, the marks have been drawn.
+  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+  const firstDraw = Date.now() - started;
+
+  const stage = page.getByTestId('markup-stage');
+  const box = (await stage.boundingBox())!;
+  await page.evaluate(() => {
+    const w = window as unknown as { __frames: number[] };
+    w.__frames = [];
+    let last = performance.now();
+    const tick = (t: number) => { w.__frames.push(t - last); last = t; if (w.__frames.length < 100000) requestAnimationFrame(tick); };
+    requestAnimationFrame(tick);
+  });
+  const cx = box.x + box.width / 2;
+  const cy = box.y + box.height / 2;
+  for (let round = 0; round < 3; round++) {
+    await page.mouse.move(cx, cy);
+    for (let i = 0; i < 6; i++) await page.mouse.wheel(0, -120);
+    await page.mouse.down({ button: 'middle' });
+    for (let i = 0; i < 30; i++) await page.mouse.move(cx + i * 8, cy + i * 4);
+    await page.mouse.up({ button: 'middle' });
+    for (let i = 0; i < 6; i++) await page.mouse.wheel(0, 120);
+  }
+  const frames = await page.evaluate(() => (window as unknown as { __frames: number[] }).__frames.slice(2));
+  const sorted = [...frames].sort((a, b) => a - b);
+  const at = (q: number) => sorted[Math.floor(sorted.length * q)] ?? NaN;
+  console.log(`\nmarkup canvas, 1,000 findings on one photo, headless Chromium (software rendering) on this machine:`);
+  console.log(`  navigation to first drawn frame: ${firstDraw} ms`);
+  console.log(`  frame times while zooming and panning (${frames.length} frames): median ${at(0.5).toFixed(1)} ms, p95 ${at(0.95).toFixed(1)} ms (goal: median < 16 ms)`);
+} finally {
+  await browser.close();
+  await product.stop();
+  cluster.stop();
+}
