@@ -10,17 +10,21 @@ import type { Database } from '../../db/client';
 export async function photoFindingsJson(db: Database, photoId: number, ownerView: boolean): Promise<string> {
   const iso = (column: string) => sql.raw(`to_char(f.${column} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`);
   const result = await db.execute<{ json: string }>(sql`
-    select coalesce(jsonb_agg(jsonb_build_object(
-      'id', f.id, 'photoId', f.photo_id, 'restorationId', f.restoration_id, 'number', f.number, 'shape', f.shape,
-      'points', f.points, 'title', f.title, 'componentRef', f.component_ref, 'kind', f.kind, 'severity', f.severity,
-      'status', f.status, 'dismissReason', f.dismiss_reason, 'ownerVisible', f.owner_visible, 'authorId', f.author_id,
-      'authorName', u.name, 'questionOpen', f.question_open,
-      'commentCount', (select count(*)::int from comments c where c.finding_id = f.id and c.deleted_at is null),
-      'createdAt', ${iso('created_at')}, 'updatedAt', ${iso('updated_at')}
-    ) order by f.number), '[]'::jsonb)::text as json
-    from findings f
-    join photos p on p.id = f.photo_id
-    left join users u on u.id = f.author_id
-    where f.photo_id = ${photoId} and (${!ownerView} or (f.owner_visible and p.owner_visible))`);
+    select coalesce(json_agg(row_to_json(x) order by x.number), '[]')::text as json from (
+      select f.id, f.photo_id as "photoId", f.restoration_id as "restorationId", f.number, f.shape, f.points, f.title,
+        f.component_ref as "componentRef", f.kind, f.severity, f.status, f.dismiss_reason as "dismissReason",
+        f.owner_visible as "ownerVisible", f.author_id as "authorId", u.name as "authorName",
+        f.question_open as "questionOpen", coalesce(c.n, 0) as "commentCount",
+        ${iso('created_at')} as "createdAt", ${iso('updated_at')} as "updatedAt"
+      from findings f
+      join photos p on p.id = f.photo_id
+      left join users u on u.id = f.author_id
+      left join (
+        select finding_id, count(*)::int as n from comments
+        where deleted_at is null and finding_id in (select id from findings where photo_id = ${photoId})
+        group by finding_id
+      ) c on c.finding_id = f.id
+      where f.photo_id = ${photoId} and (${!ownerView} or (f.owner_visible and p.owner_visible))
+    ) x`);
   return result.rows[0]!.json;
 }
