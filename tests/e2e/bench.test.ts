@@ -1,25 +1,17 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
-import { launchBrowser, newPage } from '../support/browser';
+import { newPage } from '../support/browser';
+import { twoToneJpeg } from '../factories/images';
 import { signInAs } from '../support/journey';
-import { startProduct } from '../support/start-product';
+import { useProductAndBrowser } from '../support/journey-setup';
 
-let product: Awaited<ReturnType<typeof startProduct>>;
-let browser: Browser;
-beforeAll(async () => {
-  [product, browser] = await Promise.all([startProduct(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await product?.stop();
-});
+const ctx = useProductAndBrowser();
 
 describe('the bench', () => {
   it('when a technician takes in a set through the form, then it appears on the bench at intake', async () => {
-    const page = await newPage(browser);
-    await signInAs(page, product.origin, 'mara@cobbold-lane.test');
-    await page.goto(product.origin);
+    const page = await newPage(ctx.browser);
+    await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
+    await page.goto(ctx.product.origin);
     await expect.poll(() => page.getByRole('heading', { name: 'The bench' }).isVisible()).toBe(true);
     // The demo restorations are on the bench, grouped by stage.
     await page.getByRole('link', { name: /OV-54-20417/ }).waitFor();
@@ -45,8 +37,8 @@ describe('the bench', () => {
   });
 
   it('when the form is sent without a maker, then the field says what is missing and nothing is created', async () => {
-    const page = await newPage(browser, { width: 390, height: 844 });
-    await page.goto(`${product.origin}/restorations/new`);
+    const page = await newPage(ctx.browser, { width: 390, height: 844 });
+    await page.goto(`${ctx.product.origin}/restorations/new`);
     // Signed out, the form sends the visitor to sign-in and brings them back.
     await page.getByRole('heading', { name: 'Sign in to Gridleak' }).waitFor();
     await page.screenshot({ path: artifactPath('sign-in-phone.png'), fullPage: true });
@@ -58,5 +50,22 @@ describe('the bench', () => {
     await page.getByText('Enter the maker, as printed on the set').waitFor();
     expect(page.url()).toContain('/restorations/new');
     await page.screenshot({ path: artifactPath('intake-form-phone.png'), fullPage: true });
+  });
+
+  it('when the technician adds photos from the picker, then each shows its progress, lands in the gallery, and a text file is refused', async () => {
+    const page = await newPage(ctx.browser);
+    await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
+    await page.getByRole('link', { name: /HT12-0988/ }).click();
+    await page.getByRole('link', { name: 'Photos' }).click();
+    await page.getByLabel('View').first().selectOption('rear');
+    const jpeg = await twoToneJpeg(1600, 1200);
+    await page.locator('input[type=file][multiple]').setInputFiles([
+      { name: 'rear-1.jpg', mimeType: 'image/jpeg', buffer: jpeg },
+      { name: 'notes.jpg', mimeType: 'image/jpeg', buffer: Buffer.from('not a photo at all') },
+    ]);
+    await page.getByText(/not a photo Gridleak can read/).waitFor();
+    await page.getByRole('button', { name: /Rear, before/ }).first().waitFor({ timeout: 30_000 });
+    expect(await page.getByRole('button', { name: /Rear, before/ }).count()).toBe(1);
+    await page.screenshot({ path: artifactPath('photos-upload.png'), fullPage: true });
   });
 });

@@ -1,26 +1,17 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
-import { launchBrowser, newPage } from '../support/browser';
+import { newPage } from '../support/browser';
 import { firstLink, mailTo, signInAs } from '../support/journey';
-import { startProduct } from '../support/start-product';
+import { useProductAndBrowser } from '../support/journey-setup';
 
-let product: Awaited<ReturnType<typeof startProduct>>;
-let browser: Browser;
-beforeAll(async () => {
-  [product, browser] = await Promise.all([startProduct(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await product?.stop();
-});
+const ctx = useProductAndBrowser();
 
 const password = 'a long evening with the dial cord';
 
 describe('inviting people to a restoration', () => {
   it('when the technician invites a mentor and an owner, then each joins from the e-mail link; a third account gets "not found"', async () => {
-    const tech = await newPage(browser);
-    await signInAs(tech, product.origin, 'mara@cobbold-lane.test');
+    const tech = await newPage(ctx.browser);
+    await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     await tech.getByRole('link', { name: /Kestrel Wireless Co\. Wren/ }).click();
     await tech.getByRole('link', { name: 'People' }).click();
     const restorationUrl = tech.url().replace(/\/people$/, '');
@@ -35,9 +26,9 @@ describe('inviting people to a restoration', () => {
     await tech.screenshot({ path: artifactPath('people-tab.png'), fullPage: true });
 
     for (const [email, name] of [['orla.mentor@example.test', 'Orla Finch'], ['bram.owner@example.test', 'Bram Holt']]) {
-      const link = firstLink(await mailTo(product.origin, email!, /invited you/));
+      const link = firstLink(await mailTo(ctx.product.origin, email!, /invited you/));
       expect(link).toMatch(/\/invitations\/[A-Za-z0-9_-]+$/);
-      const page = await newPage(browser, { width: 390, height: 844 });
+      const page = await newPage(ctx.browser, { width: 390, height: 844 });
       await page.goto(link);
       await page.getByText('invited').first().waitFor();
       await page.getByLabel('Your name').fill(name!);
@@ -47,14 +38,14 @@ describe('inviting people to a restoration', () => {
       expect(page.url()).toBe(restorationUrl);
     }
 
-    const third = await newPage(browser);
-    await third.goto(`${product.origin}/sign-up`);
+    const third = await newPage(ctx.browser);
+    await third.goto(`${ctx.product.origin}/sign-up`);
     await third.getByLabel('Your name').fill('Cass Nobody');
     await third.getByLabel('E-mail').fill('cass@example.test');
     await third.getByLabel('Password').fill(password);
     await third.getByRole('button', { name: 'Create account' }).click();
     await third.getByText('Check your e-mail').waitFor();
-    await third.goto(firstLink(await mailTo(product.origin, 'cass@example.test', /Confirm/)));
+    await third.goto(firstLink(await mailTo(ctx.product.origin, 'cass@example.test', /Confirm/)));
     await third.getByRole('heading', { name: 'The bench' }).waitFor();
     await third.goto(restorationUrl);
     await third.getByText('Restoration not found').waitFor();

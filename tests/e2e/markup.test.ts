@@ -1,9 +1,9 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
-import { launchBrowser, newPage } from '../support/browser';
+import { newPage } from '../support/browser';
 import { mailTo, signInAs } from '../support/journey';
-import { startProduct } from '../support/start-product';
+import { useProductAndBrowser } from '../support/journey-setup';
 
 /** The canvas's read-only probe (see DEVELOPERS.md, "The markup canvas in journeys"). */
 type Probe = { view: { scale: number }; image: { width: number; height: number }; imageToClient(x: number, y: number): { x: number; y: number } };
@@ -11,23 +11,15 @@ const probe = (page: Page) => page.evaluate(() => (window as unknown as { __grid
 const toClient = (page: Page, x: number, y: number) =>
   page.evaluate(([px, py]) => (window as unknown as { __gridleakMarkup: Probe }).__gridleakMarkup.imageToClient(px!, py!), [x, y]);
 
-let product: Awaited<ReturnType<typeof startProduct>>;
-let browser: Browser;
-beforeAll(async () => {
-  [product, browser] = await Promise.all([startProduct(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await product?.stop();
-});
+const ctx = useProductAndBrowser();
 
 // A spot on the demo underside picture: the V4 tag strip, away from the seeded findings.
 const TARGET = { x: 0.3, y: 0.62 };
 
 describe('marking a spot and talking about it', () => {
   it('when the technician pins a spot, then the mentor sees it at the same place and replies, and the owner sees it only once shared', async () => {
-    const tech = await newPage(browser, { width: 1400, height: 950 });
-    await signInAs(tech, product.origin, 'mara@cobbold-lane.test');
+    const tech = await newPage(ctx.browser, { width: 1400, height: 950 });
+    await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     await tech.getByRole('link', { name: /OV-54-20417/ }).click();
     await tech.getByRole('link', { name: 'Photos' }).click();
     await tech.getByRole('button', { name: /Underside, before/ }).first().click();
@@ -52,8 +44,8 @@ describe('marking a spot and talking about it', () => {
     expect(Math.abs(stored.points[0]!.x - TARGET.x) * image.width * fitScale).toBeLessThan(1);
     expect(Math.abs(stored.points[0]!.y - TARGET.y) * image.height * fitScale).toBeLessThan(1);
 
-    const mentor = await newPage(browser, { width: 1100, height: 800 });
-    await signInAs(mentor, product.origin, 'teodor@cobbold-lane.test');
+    const mentor = await newPage(ctx.browser, { width: 1100, height: 800 });
+    await signInAs(mentor, ctx.product.origin, 'teodor@cobbold-lane.test');
     await mentor.goto(findingUrl);
     await mentor.getByText('Dry joint on the V4 tag strip?').first().waitFor();
     await mentor.getByTestId('markup-stage').click({ position: { x: 5, y: 5 } });
@@ -61,7 +53,7 @@ describe('marking a spot and talking about it', () => {
     await mentor.keyboard.press('0');
     await expect.poll(() => probe(mentor)).toBeGreaterThan(0);
     // At fit zoom on another screen size, the pin is where the technician put it: clicking there selects it.
-    await mentor.goto(`${product.origin}${new URL(findingUrl).pathname.replace(/\/findings\/\d+$/, '')}`);
+    await mentor.goto(`${ctx.product.origin}${new URL(findingUrl).pathname.replace(/\/findings\/\d+$/, '')}`);
     await mentor.getByTestId('markup-stage').waitFor();
     await expect.poll(() => probe(mentor)).toBeGreaterThan(0);
     const there = await toClient(mentor, stored.points[0]!.x, stored.points[0]!.y);
@@ -73,15 +65,15 @@ describe('marking a spot and talking about it', () => {
     await mentor.getByRole('button', { name: 'Send comment' }).click();
     await mentor.getByText('reflow it and measure across R14').waitFor();
 
-    const mail = await mailTo(product.origin, 'mara@cobbold-lane.test', /Gridleak/);
+    const mail = await mailTo(ctx.product.origin, 'mara@cobbold-lane.test', /Gridleak/);
     expect(mail.text).toContain(`/findings/${findingId}`);
 
     await tech.reload();
     await tech.getByRole('group', { name: 'Status' }).getByRole('button', { name: /Confirmed/ }).click();
     await expect.poll(() => tech.evaluate(async (id) => ((await (await fetch(`/api/findings/${id}`)).json()) as { status: string }).status, findingId)).toBe('confirmed');
 
-    const owner = await newPage(browser, { width: 390, height: 844 });
-    await signInAs(owner, product.origin, 'philippa@example.test');
+    const owner = await newPage(ctx.browser, { width: 390, height: 844 });
+    await signInAs(owner, ctx.product.origin, 'philippa@example.test');
     await owner.goto(findingUrl);
     await owner.getByText('not shared with you').waitFor();
     await tech.getByRole('switch', { name: /Share with owner/ }).click();

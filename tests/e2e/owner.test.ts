@@ -1,27 +1,18 @@
 import { readFileSync } from 'node:fs';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
-import { launchBrowser, newPage } from '../support/browser';
+import { newPage } from '../support/browser';
 import { signInAs } from '../support/journey';
 import { pdfText } from '../support/pdf-text';
-import { startProduct } from '../support/start-product';
+import { useProductAndBrowser } from '../support/journey-setup';
 
-let product: Awaited<ReturnType<typeof startProduct>>;
-let browser: Browser;
-beforeAll(async () => {
-  [product, browser] = await Promise.all([startProduct(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await product?.stop();
-});
+const ctx = useProductAndBrowser();
 
 describe('the owner at home, on a phone', () => {
   it('when the owner opens their set, then they compare before and after with the slider and download the report', async () => {
-    const page = await newPage(browser, { width: 390, height: 844 });
-    await signInAs(page, product.origin, 'philippa@example.test');
-    await page.goto(product.origin);
+    const page = await newPage(ctx.browser, { width: 390, height: 844 });
+    await signInAs(page, ctx.product.origin, 'philippa@example.test');
+    await page.goto(ctx.product.origin);
     await page.waitForURL(/\/home/);
     await page.getByText('Meridian 54').first().waitFor();
 

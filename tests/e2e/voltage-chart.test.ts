@@ -1,19 +1,10 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
-import { launchBrowser, newPage } from '../support/browser';
+import { newPage } from '../support/browser';
 import { signInAs } from '../support/journey';
-import { startProduct } from '../support/start-product';
+import { useProductAndBrowser } from '../support/journey-setup';
 
-let product: Awaited<ReturnType<typeof startProduct>>;
-let browser: Browser;
-beforeAll(async () => {
-  [product, browser] = await Promise.all([startProduct(), launchBrowser()]);
-});
-afterAll(async () => {
-  await browser?.close();
-  await product?.stop();
-});
+const ctx = useProductAndBrowser();
 
 // Five points of an invented voltage chart; ±10 % each. Only V5 pin 7 (310 V against 250 V, +24 %) is beyond 1.5 × the band.
 const points = [
@@ -26,8 +17,8 @@ const points = [
 
 describe('voltage chart', () => {
   it('when five points are entered and one is out of tolerance, then the table and the plot flag exactly that one', async () => {
-    const page = await newPage(browser, { width: 1280, height: 1000 });
-    await signInAs(page, product.origin, 'mara@cobbold-lane.test');
+    const page = await newPage(ctx.browser, { width: 1280, height: 1000 });
+    await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
     await page.getByRole('link', { name: /Halverson Tonecraft 12/ }).click();
     await page.getByRole('link', { name: 'Readings' }).click();
     await page.getByRole('button', { name: 'Enter a voltage chart' }).click();

@@ -11,6 +11,8 @@ export async function signInAs(page: Page, origin: string, email: string, passwo
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByRole('button', { name: 'Sign out' }).waitFor();
+  // The header follows the new session without a reload.
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Calculators' }).waitFor();
 }
 
 /** Reads the product's mail capture for a message to `to`. */

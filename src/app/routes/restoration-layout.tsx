@@ -8,6 +8,16 @@ import { StageBadge } from '../../features/restorations/components/stage-badge';
 const tabClass = ({ isActive }: { isActive: boolean }) =>
   `min-h-11 inline-flex items-center border-b-3 px-3 font-semibold ${isActive ? 'border-glow text-ink' : 'border-transparent text-ink-soft hover:text-ink'}`;
 
+const tabs = [
+  ['.', 'Overview'],
+  ['photos', 'Photos'],
+  ['findings', 'Findings'],
+  ['readings', 'Readings'],
+  ['parts', 'Parts'],
+  ['history', 'History'],
+  ['people', 'People'],
+] as const;
+
 /** One restoration's notebook: its header and tabs; each tab is a child route. */
 export function RestorationLayout() {
   const id = Number(useParams().id);
@@ -29,28 +39,12 @@ export function RestorationLayout() {
         <StageBadge stage={r.stage} />
         <span className="text-sm text-ink-soft">You: {roleLabels[r.role]}</span>
       </header>
-      <nav aria-label="Restoration" className="-mx-4 flex print:hidden gap-1 overflow-x-auto whitespace-nowrap border-b border-rule px-4">
-        <NavLink to="." end className={tabClass}>
-          Overview
-        </NavLink>
-        <NavLink to="photos" className={tabClass}>
-          Photos
-        </NavLink>
-        <NavLink to="findings" className={tabClass}>
-          Findings
-        </NavLink>
-        <NavLink to="readings" className={tabClass}>
-          Readings
-        </NavLink>
-        <NavLink to="parts" className={tabClass}>
-          Parts
-        </NavLink>
-        <NavLink to="history" className={tabClass}>
-          History
-        </NavLink>
-        <NavLink to="people" className={tabClass}>
-          People
-        </NavLink>
+      <nav aria-label="Restoration" className="-mx-4 flex print:hidden overflow-x-auto whitespace-nowrap border-b border-rule px-4">
+        {tabs.map(([to, label]) => (
+          <NavLink key={to} to={to} end={to === '.'} className={tabClass}>
+            {label}
+          </NavLink>
+        ))}
       </nav>
       <Outlet context={r} />
     </article>

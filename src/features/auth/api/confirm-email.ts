@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { User } from '../../../../shared/schemas/auth';
 import { api } from '../../../lib/api-client';
-import { ME_KEY } from './get-me';
+import { switchPerson } from './session-cache';
 
 export const confirmEmail = (token: string) => api<User>('/auth/confirm-email', { method: 'POST', json: { token } });
 
@@ -10,8 +10,7 @@ export function useConfirmEmail() {
   return useMutation({
     mutationFn: confirmEmail,
     onSuccess: (user) => {
-      client.clear();
-      client.setQueryData(ME_KEY, user);
+      switchPerson(client, user);
     },
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { User } from '../../../../shared/schemas/auth';
 import { api } from '../../../lib/api-client';
-import { ME_KEY } from './get-me';
+import { switchPerson } from './session-cache';
 
 export const requestPasswordReset = (email: string) =>
   api<{ message: string }>('/auth/password-reset', { method: 'POST', json: { email } });
@@ -16,8 +16,7 @@ export function useConfirmPasswordReset() {
   return useMutation({
     mutationFn: confirmPasswordReset,
     onSuccess: (user) => {
-      client.clear();
-      client.setQueryData(ME_KEY, user);
+      switchPerson(client, user);
     },
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { SignInInput, User } from '../../../../shared/schemas/auth';
 import { api } from '../../../lib/api-client';
-import { ME_KEY } from './get-me';
+import { switchPerson } from './session-cache';
 
 export const signIn = (input: SignInInput) => api<User>('/auth/sign-in', { method: 'POST', json: input });
 
@@ -11,8 +11,7 @@ export function useSignIn() {
     mutationFn: signIn,
     onSuccess: (user) => {
       // Another person may have used this browser: nothing cached may outlive the sign-in.
-      client.clear();
-      client.setQueryData(ME_KEY, user);
+      switchPerson(client, user);
     },
   });
 }

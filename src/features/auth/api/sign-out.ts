@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { ME_KEY } from './get-me';
+import { switchPerson } from './session-cache';
 
 export const signOut = () => api<void>('/auth/sign-out', { method: 'POST' });
 
@@ -9,8 +9,7 @@ export function useSignOut() {
   return useMutation({
     mutationFn: signOut,
     onSuccess: () => {
-      client.clear();
-      client.setQueryData(ME_KEY, null);
+      switchPerson(client, null);
     },
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { SignUpInput, SignUpResult } from '../../../../shared/schemas/auth';
 import { api } from '../../../lib/api-client';
-import { ME_KEY } from './get-me';
+import { switchPerson } from './session-cache';
 
 export const signUp = (input: SignUpInput) => api<SignUpResult>('/auth/sign-up', { method: 'POST', json: input });
 
@@ -10,9 +10,7 @@ export function useSignUp() {
   return useMutation({
     mutationFn: signUp,
     onSuccess: (result) => {
-      if (result.status !== 'signed-in') return;
-      client.clear();
-      client.setQueryData(ME_KEY, result.user);
+      if (result.status === 'signed-in') switchPerson(client, result.user);
     },
   });
 }

@@ -78,5 +78,14 @@ export function findingColumns(photoLabel: (photoId: number) => string) {
       ),
       sortingFn: byText((f) => f.updatedAt),
     }),
+    // A crop of the marked spot, cut from the original and cached in storage by the server.
+    helper.display({
+      id: 'closeup',
+      header: () => <span className="sr-only">Close-up</span>,
+      cell: (c) => (
+        <img src={`/api/findings/${c.row.original.id}/closeup`} alt="" loading="lazy" width={48} height={48}
+          className="h-12 w-12 rounded-md border border-rule bg-sunken object-cover" />
+      ),
+    }),
   ];
 }

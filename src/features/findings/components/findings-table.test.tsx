@@ -38,7 +38,7 @@ describe('findings table', () => {
     renderTable();
     await screen.findByRole('table');
     expect(within(table()).getAllByRole('columnheader').map((h) => h.textContent?.replace(/[▲▼↕]/g, ''))).toEqual([
-      '#', 'Status', 'Severity', 'Kind', 'Component', 'Title', 'Photo', 'Comments', 'Updated',
+      '#', 'Status', 'Severity', 'Kind', 'Component', 'Title', 'Photo', 'Comments', 'Updated', 'Close-up',
     ]);
     const row = within(table()).getByRole('row', { name: /Wax capacitor weeping/ });
     expect(row).toHaveTextContent(/#2•Observed\s*Hazard\s*Leaking or bulging\s*C15b\s*Wax capacitor weeping\s*Top · before\s*0/);
