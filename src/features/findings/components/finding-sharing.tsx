@@ -1,41 +1,16 @@
-import { useId } from 'react';
 import type { FindingPatch } from '../../../../shared/schemas/findings';
 import { buttonClass } from '../../../components/button';
+import { LabelledSwitch } from '../../../components/labelled-switch';
 
-/** Share with the owner (technicians): an on/off switch that says its state in words as well. */
+/** Share with the owner (technicians); the owner also needs the photo shared. */
 export function ShareWithOwner({ checked, onSave }: { checked: boolean; onSave: (patch: FindingPatch) => void }) {
-  const labelId = useId();
-  const hintId = useId();
   return (
-    <div className="flex min-h-11 items-center justify-between gap-3">
-      <div>
-        <p id={labelId} className="font-semibold">
-          Share with owner
-        </p>
-        <p id={hintId} className="text-sm text-ink-soft">
-          {checked ? 'Shared. ' : 'Only the team sees this finding. '}
-          The owner sees it only when its photo is shared too.
-        </p>
-      </div>
-      <button
-        type="button"
-        role="switch"
-        aria-checked={checked}
-        aria-labelledby={labelId}
-        aria-describedby={hintId}
-        onClick={() => onSave({ ownerVisible: !checked })}
-        className={`relative inline-flex h-8 w-14 shrink-0 items-center rounded-full border transition-colors ${checked ? 'border-glow bg-glow' : 'border-rule bg-sunken'}`}
-      >
-        <span
-          aria-hidden="true"
-          className={`inline-flex h-6 w-6 items-center justify-center rounded-full text-xs font-bold shadow transition-transform motion-reduce:transition-none ${
-            checked ? 'translate-x-7 bg-panel text-glow-strong' : 'translate-x-1 bg-ink-soft'
-          }`}
-        >
-          {checked ? '✓' : ''}
-        </span>
-      </button>
-    </div>
+    <LabelledSwitch
+      label="Share with owner"
+      hint={`${checked ? 'Shared. ' : 'Only the team sees this finding. '}The owner sees it only when its photo is shared too.`}
+      checked={checked}
+      onChange={(ownerVisible) => onSave({ ownerVisible })}
+    />
   );
 }
 

@@ -1,40 +1,14 @@
-import { useId } from 'react';
+import { LabelledSwitch } from '../../../components/labelled-switch';
 
-/** An on/off switch that says its state in words as well as by position and colour. */
+/** Whether the owner sees this photo. */
 export function ShareSwitch({ checked, onChange, disabled }: { checked: boolean; onChange: (next: boolean) => void; disabled?: boolean }) {
-  const labelId = useId();
-  const hintId = useId();
   return (
-    <div className="flex min-h-11 items-center justify-between gap-3">
-      <div>
-        <p id={labelId} className="font-semibold">
-          Share with owner
-        </p>
-        <p id={hintId} className="text-sm text-ink-soft">
-          {checked ? 'The owner can see this photo.' : 'Only the team can see this photo.'}
-        </p>
-      </div>
-      <button
-        type="button"
-        role="switch"
-        aria-checked={checked}
-        aria-labelledby={labelId}
-        aria-describedby={hintId}
-        disabled={disabled}
-        onClick={() => onChange(!checked)}
-        className={`relative inline-flex h-8 w-14 shrink-0 items-center rounded-full border transition-colors disabled:opacity-60 ${
-          checked ? 'border-glow bg-glow' : 'border-rule bg-sunken'
-        }`}
-      >
-        <span
-          aria-hidden="true"
-          className={`inline-flex h-6 w-6 items-center justify-center rounded-full text-xs font-bold shadow transition-transform motion-reduce:transition-none ${
-            checked ? 'translate-x-7 bg-panel text-glow-strong' : 'translate-x-1 bg-ink-soft'
-          }`}
-        >
-          {checked ? '✓' : ''}
-        </span>
-      </button>
-    </div>
+    <LabelledSwitch
+      label="Share with owner"
+      hint={checked ? 'The owner can see this photo.' : 'Only the team can see this photo.'}
+      checked={checked}
+      onChange={onChange}
+      disabled={disabled}
+    />
   );
 }
