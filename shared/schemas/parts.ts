@@ -86,3 +86,7 @@ export const timelineEventSchema = z.object({
   thumbUrl: z.string().nullable(),
 });
 export type TimelineEvent = z.infer<typeof timelineEventSchema>;
+
+/** A timeline line on the bench, with the set it belongs to. */
+export const activityItemSchema = timelineEventSchema.extend({ restorationId: z.number().int(), set: z.string() });
+export type ActivityItem = z.infer<typeof activityItemSchema>;

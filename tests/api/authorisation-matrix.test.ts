@@ -87,6 +87,7 @@ const matrix: Row[] = [
   ['PATCH', '/api/parts/:partId', [200, 403, 403, 404, 401], () => ({ state: 'ordered' })],
   ['DELETE', '/api/parts/:partId', [204, 403, 403, 404, 401]],
   ['GET', '/api/restorations/:id/events', [200, 200, 200, 404, 401]],
+  ['GET', '/api/activity', [200, 200, 200, 200, 401]],
   ['GET', '/api/restorations/:id/report.pdf', [200, 200, 200, 404, 401]],
   // The fixture restoration has an owner, so the technician's send succeeds.
   ['POST', '/api/restorations/:id/report/send', [200, 403, 403, 404, 401]],

@@ -75,6 +75,9 @@ describe('history', () => {
     expect(ownerView).not.toContain('SECRET-FINDING');
     expect(ownerView).not.toContain('question');
     expect(ownerView).not.toContain('Out of tolerance');
+    const benchActivity = JSON.stringify((await owner.get('/api/activity')).body);
+    expect(benchActivity).toContain('Charred R23');
+    expect(benchActivity).not.toContain('SECRET-FINDING');
     const onlyParts = (await tech.get(`/api/restorations/${restorationId}/events`).query({ kind: 'part-fitted' })).body;
     expect(onlyParts.map((e: { kind: string }) => e.kind)).toEqual(['part-fitted']);
   });

@@ -15,6 +15,9 @@ describe('the bench', () => {
     await expect.poll(() => page.getByRole('heading', { name: 'The bench' }).isVisible()).toBe(true);
     // The demo restorations are on the bench, grouped by stage.
     await page.getByRole('link', { name: /OV-54-20417/ }).waitFor();
+    // What happened lately across the workshop's sets, from the demo's history.
+    await page.getByRole('heading', { name: 'Recent activity' }).waitFor();
+    expect(await page.getByRole('region', { name: 'Recent activity' }).getByRole('link').count()).toBeGreaterThan(0);
     expect(await page.getByRole('heading', { name: /Repair/ }).count()).toBe(1);
 
     await page.getByRole('link', { name: '+ Take in a set' }).click();

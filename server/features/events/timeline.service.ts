@@ -15,7 +15,7 @@ const findingPhotos = aliasedTable(photos, 'finding_photos');
 /** The restoration's history in words, newest first; owners see only what is shared with them. */
 export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>) {
   return {
-    async list(restorationId: number, role: Role, kind?: Kind): Promise<TimelineEvent[]> {
+    async list(restorationId: number, role: Role, kind?: Kind, limit = 500): Promise<TimelineEvent[]> {
       const rows = await db
         .select({ e: events, actorName: users.name, photo: photos, finding: findings, findingPhotoShared: findingPhotos.ownerVisible, part: parts, m: measurements })
         .from(events)
@@ -27,7 +27,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
         .leftJoin(measurements, eq(measurements.id, events.measurementId))
         .where(and(eq(events.restorationId, restorationId), kind ? eq(events.kind, kind) : undefined))
         .orderBy(desc(events.createdAt), desc(events.id))
-        .limit(500);
+        .limit(limit);
       const owner = role === 'owner';
       const visible = rows.filter(({ e, photo, finding, findingPhotoShared, m }) => {
         if (!owner) return true;

@@ -4,6 +4,7 @@ import { buttonClass } from '../../components/button';
 import { inputClass } from '../../components/field';
 import { EmptyState, ErrorState, Loading } from '../../components/states';
 import { OpenQuestions } from '../../features/findings/components/open-questions';
+import { RecentActivity } from '../../features/history/components/recent-activity';
 import { useRestorations } from '../../features/restorations/api/get-restorations';
 import { StageColumns } from '../../features/restorations/components/stage-columns';
 
@@ -53,6 +54,7 @@ export function BenchRoute() {
       ) : (
         <StageColumns restorations={list.data} />
       )}
+      {!q && <RecentActivity />}
     </div>
   );
 }
