@@ -12,7 +12,7 @@ export function parseTolerance(text: string): Tolerance {
   const pair = ASYMMETRIC.exec(compact);
   const single = pair === null ? SYMMETRIC.exec(compact) : null;
   if (!pair && !single)
-    throw new BenchInputError(`'${text}' is not a tolerance: write it in per cent, like 10 for ±10 %, or -20/+50 for an electrolytic.`);
+    throw new BenchInputError(`'${text}' is not a tolerance Gridleak can read: write it in per cent, like 10 for ±10 %, or -20/+50 for an electrolytic.`);
   const below = Number(pair?.[1] ?? single?.[1]);
   const above = Number(pair?.[2] ?? single?.[1]);
   if (below > 100) throw new BenchInputError(`'${text}': a value cannot fall more than 100 % below what is expected.`);

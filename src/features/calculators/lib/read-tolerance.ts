@@ -1,4 +1,4 @@
-import type { Tolerance } from '../../../../shared/bench';
+import { parseTolerance, type Tolerance } from '../../../../shared/bench';
 import { formatNumber } from './format';
 
 /** A tolerance field read: the fraction(s) for readingVerdict and how it was understood, or why not. */
@@ -8,33 +8,15 @@ export interface ToleranceReading {
   error?: string;
 }
 
-const NUMBER = String.raw`(\d+(?:\.\d*)?|\.\d+)`;
-const SYMMETRIC = new RegExp(`^\\+?${NUMBER}$`);
-// Electrolytics are marked like −20 %/+50 %: below first, then above.
-const ASYMMETRIC = new RegExp(`^-${NUMBER}/\\+?${NUMBER}$`);
-
-function fail(text: string, why: string): ToleranceReading {
-  return {
-    error:
-      `'${text}' is not a tolerance Gridleak can read: ${why}. ` +
-      'Write it in per cent, like 10 for ±10 %, or -20/+50 for an electrolytic.',
-  };
-}
-
-/** Reads a tolerance typed in per cent: "10", "±10 %", "5%", "-20/+50", "−20 % / +50 %". */
+/** Reads a tolerance typed in per cent ("10", "±10 %", "-20/+50") with the bench library, for display in a form. */
 export function readTolerance(text: string): ToleranceReading {
-  const trimmed = text.trim();
-  if (trimmed === '') return {};
-  const compact = trimmed.replace(/[\s%±]/g, '').replace(/[\u2212\u2013]/g, '-');
-  const pair = ASYMMETRIC.exec(compact);
-  const single = pair === null ? SYMMETRIC.exec(compact) : null;
-  const below = Number(pair?.[1] ?? single?.[1]);
-  const above = Number(pair?.[2] ?? single?.[1]);
-  if (pair === null && single === null) return fail(trimmed, 'it is not a number of per cent');
-  if (below > 100) return fail(trimmed, 'a value cannot fall more than 100 % below what is expected');
-  if (single !== null) return { tolerance: below / 100, display: `±${formatNumber(below, 4)} %` };
-  return {
-    tolerance: { minus: below / 100, plus: above / 100 },
-    display: `\u2212${formatNumber(below, 4)} % / +${formatNumber(above, 4)} %`,
-  };
+  if (text.trim() === '') return {};
+  try {
+    const tolerance = parseTolerance(text);
+    const pct = (f: number) => formatNumber(f * 100, 4);
+    const display = typeof tolerance === 'number' ? `±${pct(tolerance)} %` : `\u2212${pct(tolerance.minus)} % / +${pct(tolerance.plus)} %`;
+    return { tolerance, display };
+  } catch (err) {
+    return { error: (err as Error).message };
+  }
 }
