@@ -2,6 +2,8 @@
  * The one policy (PRODUCT.md, "Who uses it"). Server routes ask it through one guard; the client asks it
  * only to hide what a person cannot do. Roles are held per restoration.
  */
+import { holds, type Condition, type VisibilityFacts } from './visibility-rule';
+
 export const roles = ['technician', 'mentor', 'owner'] as const;
 export type Role = (typeof roles)[number];
 
@@ -83,4 +85,64 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
   return role ? rules[action](role, context) : false;
+}
+
+/**
+ * What each role may see, as data (the language is in visibility-rule.ts). The server turns each rule into
+ * the SQL condition of every query that lists or counts (server/features/visibility/), and checks single
+ * rows with `mayView`, so lists, counts, notifications, mail, history, the report and the CSV all follow
+ * one rule. Technicians and mentors see everything on their restorations; owners see what is shared.
+ *
+ * Fields are the rows' columns, plus `finding.sharedAt`: when the finding was last shared with the owner
+ * (its creation when it was created shared), so an owner never reads what changed while it was internal.
+ */
+const sharedPhoto: Condition = { field: 'photo.ownerVisible', is: true };
+/** A finding and the photo it is on are both shared. */
+const sharedFinding: Condition = { all: [{ field: 'finding.ownerVisible', is: true }, sharedPhoto] };
+const sharedComment: Condition = { all: [{ field: 'comment.internal', is: false }, sharedFinding] };
+const sharedReading: Condition = { field: 'reading.ownerVisible', is: true };
+/** Planned and ordered lines are the workshop's business; the owner sees what was fitted or kept. */
+const ownerPart: Condition = { any: [{ field: 'part.state', is: 'fitted' }, { field: 'part.action', is: 'kept-original' }] };
+const sinceShared = (entity: 'event' | 'change'): Condition => ({ field: `${entity}.createdAt`, after: 'finding.sharedAt' });
+const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all: [{ field: 'event.kind', is: kind }, ...conditions] });
+
+export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification'] as const;
+export type VisibilitySubject = (typeof visibilitySubjects)[number];
+
+const everything: Record<VisibilitySubject, Condition> = Object.fromEntries(visibilitySubjects.map((s) => [s, { always: true }])) as never;
+
+export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
+  technician: everything,
+  mentor: everything,
+  owner: {
+    photo: sharedPhoto,
+    finding: sharedFinding,
+    /** A shared comment on a finding the owner may see. */
+    comment: sharedComment,
+    reading: sharedReading,
+    part: ownerPart,
+    /** A line of the history: each kind follows its subject; questions to the mentors never reach the owner. */
+    event: {
+      any: [
+        eventOf('photo-added', sharedPhoto),
+        eventOf('finding-opened', sharedFinding),
+        eventOf('finding-status', sharedFinding, sinceShared('event')),
+        eventOf('measurement-out', sharedReading),
+        eventOf('part-fitted', ownerPart),
+        eventOf('stage-changed'),
+      ],
+    },
+    /** A finding's change record, only from after it was shared. */
+    change: { all: [sharedFinding, sinceShared('change')] },
+    /** An in-app notification or its e-mail, judged when read or sent, not when written. */
+    notification: { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
+  },
+};
+
+/** Fields of a finding's change record never shown to owners (questions to the mentors are internal). */
+export const ownerHiddenChangeFields: readonly string[] = ['questionOpen', 'ownerVisible'];
+
+/** The in-memory twin of the SQL condition: may this role see the row these facts describe? */
+export function mayView(role: Role | null | undefined, subject: VisibilitySubject, facts: VisibilityFacts): boolean {
+  return role ? holds(visibility[role][subject], facts) : false;
 }
