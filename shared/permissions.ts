@@ -55,7 +55,7 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'members.view': () => true,
   'members.manage': (role) => role === 'technician',
   // Owners see only what is shared with them; everyone else on the restoration sees every photo.
-  'photos.view': (role, { ownerVisible }) => role !== 'owner' || ownerVisible === true,
+  'photos.view': (role, { ownerVisible }) => mayView(role, 'photo', { photo: { ownerVisible: ownerVisible ?? false } }),
   'photos.upload': (role) => role === 'technician',
   'photos.edit': (role) => role === 'technician',
   'photos.delete': (role) => role === 'technician',
@@ -74,7 +74,7 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'comments.internal': (role) => role !== 'owner',
   'comments.edit': (_role, { isAuthor }) => isAuthor === true,
   'comments.delete': (role, { isAuthor }) => isAuthor === true || role === 'technician',
-  'measurements.view': (role, { ownerVisible }) => role !== 'owner' || ownerVisible === true,
+  'measurements.view': (role, { ownerVisible }) => mayView(role, 'reading', { reading: { ownerVisible: ownerVisible ?? false } }),
   'measurements.record': (role) => role === 'technician',
   // Owners see the ledger without costs, sources and notes; technicians keep it.
   'parts.view': () => true,
@@ -139,8 +139,8 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   },
 };
 
-/** Fields of a finding's change record never shown to owners (questions to the mentors are internal). */
-export const ownerHiddenChangeFields: readonly string[] = ['questionOpen', 'ownerVisible'];
+/** Fields of a finding's change record a role never reads (questions to the mentors and sharing are internal). */
+export const hiddenChangeFields: Record<Role, readonly string[]> = { technician: [], mentor: [], owner: ['questionOpen', 'ownerVisible'] };
 
 /** The in-memory twin of the SQL condition: may this role see the row these facts describe? */
 export function mayView(role: Role | null | undefined, subject: VisibilitySubject, facts: VisibilityFacts): boolean {

@@ -1,14 +1,23 @@
 import { asc, eq, isNull, and } from 'drizzle-orm';
+import type { Role } from '../../../shared/permissions';
 import type { Database } from '../../db/client';
-import { comments, users } from '../../db/schema';
+import { comments, findings, photos, users } from '../../db/schema';
+import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 export type CommentRow = typeof comments.$inferSelect & { authorName: string | null };
 
 export function commentsRepo(db: Database) {
   const select = () => db.select({ c: comments, authorName: users.name }).from(comments).leftJoin(users, eq(users.id, comments.authorId));
   return {
-    async list(findingId: number): Promise<CommentRow[]> {
-      return (await select().where(eq(comments.findingId, findingId)).orderBy(asc(comments.createdAt), asc(comments.id))).map((r) => ({ ...r.c, authorName: r.authorName }));
+    /** The thread as this role may read it (owners: the shared comments of a finding they may see). */
+    async list(findingId: number, role: Role): Promise<CommentRow[]> {
+      const visible = visibleSql(role, 'comment', { comment: columnsOf(comments), finding: columnsOf(findings), photo: columnsOf(photos) });
+      const rows = await select()
+        .innerJoin(findings, eq(findings.id, comments.findingId))
+        .innerJoin(photos, eq(photos.id, findings.photoId))
+        .where(and(eq(comments.findingId, findingId), visible))
+        .orderBy(asc(comments.createdAt), asc(comments.id));
+      return rows.map((r) => ({ ...r.c, authorName: r.authorName }));
     },
     async find(id: number): Promise<CommentRow | undefined> {
       const [r] = await select().where(eq(comments.id, id));

@@ -1,4 +1,4 @@
-import { can, type Role } from '../../../shared/permissions';
+import { can, mayView, type Role } from '../../../shared/permissions';
 import type { Comment } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
 import { ForbiddenError, NotFoundError } from '../../http/errors';
@@ -22,13 +22,12 @@ export function commentsService(deps: AppDeps) {
   const findings = findingsService(deps);
   const members = membersRepo(deps.db);
   const notifications = notificationsService(deps);
-  const readable = (role: Role) => (c: CommentRow) => role !== 'owner' || !c.internal;
 
   async function own(id: number, actor: Actor) {
     const c = await repo.find(id);
     if (!c || c.deletedAt) throw new NotFoundError();
-    await findings.visible(c.findingId, actor.role);
-    if (!readable(actor.role)(c)) throw new NotFoundError();
+    const f = await findings.visible(c.findingId, actor.role);
+    if (!mayView(actor.role, 'comment', { comment: c, finding: f, photo: { ownerVisible: f.photoOwnerVisible } })) throw new NotFoundError();
     return c;
   }
 
@@ -39,7 +38,7 @@ export function commentsService(deps: AppDeps) {
     },
     async list(findingId: number, role: Role) {
       await findings.visible(findingId, role);
-      return (await repo.list(findingId)).filter(readable(role)).map(toComment);
+      return (await repo.list(findingId, role)).map(toComment);
     },
     async create(findingId: number, input: { body: string; internal: boolean }, actor: Actor) {
       const f = await findings.visible(findingId, actor.role);

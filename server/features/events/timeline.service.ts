@@ -1,4 +1,4 @@
-import { aliasedTable, and, desc, eq } from 'drizzle-orm';
+import { aliasedTable, and, desc, eq, sql } from 'drizzle-orm';
 import { stageLabels, type Stage } from '../../../shared/schemas/restorations';
 import { phaseLabels, viewLabels } from '../../../shared/schemas/photos';
 import { statusLabels, type Status } from '../../../shared/schemas/findings';
@@ -8,6 +8,7 @@ import type { TimelineEvent } from '../../../shared/schemas/parts';
 import type { AppDeps } from '../../app-deps';
 import { events, findings, measurements, parts, photos, users } from '../../db/schema';
 import { photoKeys } from '../photos/photo-objects';
+import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 
 type Kind = (typeof events.$inferSelect)['kind'];
 const findingPhotos = aliasedTable(photos, 'finding_photos');
@@ -16,8 +17,15 @@ const findingPhotos = aliasedTable(photos, 'finding_photos');
 export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>) {
   return {
     async list(restorationId: number, role: Role, kind?: Kind, limit = 500): Promise<TimelineEvent[]> {
-      const rows = await db
-        .select({ e: events, actorName: users.name, photo: photos, finding: findings, findingPhotoShared: findingPhotos.ownerVisible, part: parts, m: measurements })
+      const findingVisible = visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(findingPhotos) });
+      const photoVisible = visibleSql(role, 'photo', { photo: columnsOf(photos) });
+      // An event about a finding is judged with the finding's photo; a photo's own event with that photo.
+      const eventVisible = visibleSql(role, 'event', {
+        event: columnsOf(events), finding: findingFields(), part: columnsOf(parts), reading: columnsOf(measurements),
+        photo: { ownerVisible: sql`coalesce(${findingPhotos.ownerVisible}, ${photos.ownerVisible})` },
+      });
+      const visible = await db
+        .select({ e: events, actorName: users.name, photo: photos, finding: findings, part: parts, m: measurements, findingVisible, photoVisible })
         .from(events)
         .leftJoin(users, eq(users.id, events.actorId))
         .leftJoin(photos, eq(photos.id, events.photoId))
@@ -25,24 +33,14 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
         .leftJoin(findingPhotos, eq(findingPhotos.id, findings.photoId))
         .leftJoin(parts, eq(parts.id, events.partId))
         .leftJoin(measurements, eq(measurements.id, events.measurementId))
-        .where(and(eq(events.restorationId, restorationId), kind ? eq(events.kind, kind) : undefined))
+        .where(and(eq(events.restorationId, restorationId), kind ? eq(events.kind, kind) : undefined, eventVisible))
         .orderBy(desc(events.createdAt), desc(events.id))
         .limit(limit);
-      const owner = role === 'owner';
-      const visible = rows.filter(({ e, photo, finding, findingPhotoShared, m }) => {
-        if (!owner) return true;
-        switch (e.kind) {
-          case 'photo-added': return photo?.ownerVisible === true;
-          case 'finding-opened':
-          case 'finding-status': return finding?.ownerVisible === true && findingPhotoShared === true;
-          case 'measurement-out': return m?.ownerVisible === true;
-          case 'question-asked':
-          case 'question-resolved': return false;
-          default: return true;
-        }
-      });
       return Promise.all(
-        visible.map(async ({ e, actorName, photo, finding, part, m }) => {
+        visible.map(async ({ e, actorName, photo: eventPhoto, finding: eventFinding, part, m, findingVisible: seesFinding, photoVisible: seesPhoto }) => {
+          // Ids and pictures of what the reader may not see are left out (a part fitted for an internal finding).
+          const finding = seesFinding ? eventFinding : null;
+          const photo = seesPhoto ? eventPhoto : null;
           const label = finding ? `#${finding.number}${finding.componentRef ? ` ${finding.componentRef}` : ''} ${finding.title}` : '';
           const data = e.data as { from?: string; to?: string; view?: string; phase?: string };
           const summary =
@@ -56,7 +54,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
             : `Out of tolerance: ${m ? `${quantityLabels[m.quantity]} at ${m.location}, ${m.verdictReason}` : ''}`;
           return {
             id: e.id, kind: e.kind, at: e.createdAt.toISOString(), actorName, summary,
-            photoId: e.photoId ?? finding?.photoId ?? null, findingId: e.findingId,
+            photoId: photo?.id ?? finding?.photoId ?? null, findingId: finding?.id ?? null,
             thumbUrl: photo ? await storage.getSignedUrl(photoKeys(photo.storageKey).thumb) : null,
           };
         }),

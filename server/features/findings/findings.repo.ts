@@ -1,16 +1,23 @@
-import { asc, desc, eq, max, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, max, sql } from 'drizzle-orm';
+import type { Role } from '../../../shared/permissions';
 import type { Database } from '../../db/client';
 import { comments, findingChanges, findings, photos, restorations, users } from '../../db/schema';
+import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 
 export type FindingRow = typeof findings.$inferSelect;
 export type FindingWithContext = FindingRow & { authorName: string | null; photoOwnerVisible: boolean; commentCount: number };
 type NewFinding = Omit<typeof findings.$inferInsert, 'number' | 'id'>;
 
+const findingSources = { finding: columnsOf(findings), photo: columnsOf(photos) };
+
 export function findingsRepo(db: Database) {
-  const commentCount = sql<number>`(select count(*)::int from ${comments} where ${comments.findingId} = ${findings.id} and ${comments.deletedAt} is null)`;
-  const select = () =>
+  /** The comments this role may read in each finding's thread (owners count only the shared ones). */
+  const commentCount = (role: Role) =>
+    sql<number>`(select count(*)::int from ${comments} where ${comments.findingId} = ${findings.id} and ${comments.deletedAt} is null
+      and ${visibleSql(role, 'comment', { ...findingSources, comment: columnsOf(comments) })})`;
+  const select = (role: Role) =>
     db
-      .select({ finding: findings, authorName: users.name, photoOwnerVisible: photos.ownerVisible, commentCount })
+      .select({ finding: findings, authorName: users.name, photoOwnerVisible: photos.ownerVisible, commentCount: commentCount(role) })
       .from(findings)
       .innerJoin(photos, eq(photos.id, findings.photoId))
       .leftJoin(users, eq(users.id, findings.authorId));
@@ -18,11 +25,13 @@ export function findingsRepo(db: Database) {
   const flat = (r: Joined): FindingWithContext => ({ ...r.finding, authorName: r.authorName, photoOwnerVisible: r.photoOwnerVisible, commentCount: r.commentCount });
 
   return {
-    async listByRestoration(restorationId: number) {
-      return (await select().where(eq(findings.restorationId, restorationId)).orderBy(asc(findings.number))).map(flat);
+    /** The restoration's findings this role may see. */
+    async listByRestoration(restorationId: number, role: Role) {
+      return (await select(role).where(and(eq(findings.restorationId, restorationId), visibleSql(role, 'finding', findingSources))).orderBy(asc(findings.number))).map(flat);
     },
-    async find(id: number) {
-      const [row] = await select().where(eq(findings.id, id));
+    /** One finding, with the comment count as this role reads it; whether they may see it is the caller's check. */
+    async find(id: number, role: Role) {
+      const [row] = await select(role).where(eq(findings.id, id));
       return row && flat(row);
     },
     async restorationOf(id: number) {
@@ -48,12 +57,16 @@ export function findingsRepo(db: Database) {
     async remove(id: number) {
       await db.delete(findings).where(eq(findings.id, id));
     },
-    history(id: number) {
+    /** The finding's change records this role may read (owners: only those made after it was shared). */
+    history(id: number, role: Role) {
       return db
         .select({ id: findingChanges.id, actorName: users.name, changes: findingChanges.changes, createdAt: findingChanges.createdAt })
         .from(findingChanges)
+        .innerJoin(findings, eq(findings.id, findingChanges.findingId))
+        .innerJoin(photos, eq(photos.id, findings.photoId))
         .leftJoin(users, eq(users.id, findingChanges.actorId))
-        .where(eq(findingChanges.findingId, id))
+        .where(and(eq(findingChanges.findingId, id),
+          visibleSql(role, 'change', { change: columnsOf(findingChanges), finding: findingFields(), photo: columnsOf(photos) })))
         .orderBy(desc(findingChanges.createdAt), desc(findingChanges.id));
     },
   };

@@ -1,4 +1,4 @@
-import { can, type Role } from '../../../shared/permissions';
+import { can, hiddenChangeFields, mayView, type Role } from '../../../shared/permissions';
 import { geometrySchema, type Finding, type FindingChange, type FindingInput, type FindingPatch } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
@@ -18,8 +18,9 @@ export const toFinding = (f: FindingWithContext): Finding => ({
   questionOpen: f.questionOpen, commentCount: f.commentCount, createdAt: f.createdAt.toISOString(), updatedAt: f.updatedAt.toISOString(),
 });
 
-/** Owners see a finding only when it and its photo are both shared with them. */
-export const ownerMaySee = (f: { ownerVisible: boolean; photoOwnerVisible: boolean }) => f.ownerVisible && f.photoOwnerVisible;
+/** Whether an owner may see the finding (it and its photo are shared), by the one rule in shared/permissions.ts. */
+export const ownerMaySee = (f: { ownerVisible: boolean; photoOwnerVisible: boolean }) =>
+  mayView('owner', 'finding', { finding: f, photo: { ownerVisible: f.photoOwnerVisible } });
 
 export function findingsService(deps: AppDeps) {
   const repo = findingsRepo(deps.db);
@@ -27,8 +28,8 @@ export function findingsService(deps: AppDeps) {
   const notifications = notificationsService(deps);
 
   async function visible(id: number, role: Role) {
-    const f = await repo.find(id);
-    if (!f || !can(role, 'findings.view', { ownerVisible: ownerMaySee(f) })) throw new NotFoundError();
+    const f = await repo.find(id, role);
+    if (!f || !mayView(role, 'finding', { finding: f, photo: { ownerVisible: f.photoOwnerVisible } })) throw new NotFoundError();
     return f;
   }
 
@@ -39,10 +40,10 @@ export function findingsService(deps: AppDeps) {
     async listByPhotoJson(photoId: number, role: Role): Promise<string> {
       const photo = await photos.find(photoId);
       if (!photo || !can(role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
-      return photoFindingsJson(deps.db, photoId, !can(role, 'findings.view'));
+      return photoFindingsJson(deps.db, photoId, role);
     },
     async listByRestoration(restorationId: number, role: Role) {
-      return (await repo.listByRestoration(restorationId)).filter((f) => can(role, 'findings.view', { ownerVisible: ownerMaySee(f) })).map(toFinding);
+      return (await repo.listByRestoration(restorationId, role)).map(toFinding);
     },
     async get(id: number, role: Role) {
       return toFinding(await visible(id, role));
@@ -58,7 +59,7 @@ export function findingsService(deps: AppDeps) {
         ownerVisible: input.ownerVisible, authorId: actor.id,
       });
       await recordEvent(deps.db, { restorationId: photo.restorationId, kind: 'finding-opened', actorId: actor.id, findingId: id, photoId });
-      return toFinding((await repo.find(id))!);
+      return toFinding((await repo.find(id, actor.role))!);
     },
     /** Each field asks the policy; the change is recorded with who made it. */
     async update(id: number, patch: FindingPatch, actor: Actor) {
@@ -85,7 +86,7 @@ export function findingsService(deps: AppDeps) {
       );
       if (!Object.keys(changes).length) return toFinding(f);
       await repo.update(id, next, actor.id, changes);
-      const updated = (await repo.find(id))!;
+      const updated = (await repo.find(id, actor.role))!;
       const event = { restorationId: f.restorationId, actorId: actor.id, findingId: id, photoId: f.photoId };
       if (changes.status) await recordEvent(deps.db, { ...event, kind: 'finding-status', data: { from: f.status, to: updated.status } });
       if (changes.questionOpen) await recordEvent(deps.db, { ...event, kind: questionOpen ? 'question-asked' : 'question-resolved' });
@@ -104,7 +105,10 @@ export function findingsService(deps: AppDeps) {
     },
     async history(id: number, role: Role): Promise<FindingChange[]> {
       await visible(id, role);
-      return (await repo.history(id)).map((h) => ({ ...h, createdAt: h.createdAt.toISOString() }));
+      const hidden = hiddenChangeFields[role];
+      return (await repo.history(id, role))
+        .map((h) => ({ ...h, changes: Object.fromEntries(Object.entries(h.changes).filter(([field]) => !hidden.includes(field))), createdAt: h.createdAt.toISOString() }))
+        .filter((h) => Object.keys(h.changes).length > 0);
     },
   };
 }

@@ -3,9 +3,10 @@ import { BenchInputError, liveChassisLikely, measurementVerdict } from '../../..
 import { can, type Role } from '../../../shared/permissions';
 import type { LineUp, Measurement, MeasurementInput, Valve } from '../../../shared/schemas/measurements';
 import type { Database } from '../../db/client';
-import { findings, measurements, restorations, users, valves } from '../../db/schema';
+import { findings, measurements, photos, restorations, users, valves } from '../../db/schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
+import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 type Row = typeof measurements.$inferSelect & { measuredBy: string | null };
 type Fields = Required<Pick<MeasurementInput, 'location' | 'quantity' | 'reading'>> & Partial<MeasurementInput>;
@@ -50,11 +51,19 @@ export function measurementsService(db: Database) {
       const [r] = await db.select({ id: measurements.restorationId }).from(measurements).where(eq(measurements.id, id));
       return r?.id;
     },
+    /** The readings this role may see; a reading's finding is named only when the reader may see it. */
     async list(restorationId: number, role: Role, findingId?: number) {
-      const rows = await select()
-        .where(and(eq(measurements.restorationId, restorationId), findingId ? eq(measurements.findingId, findingId) : undefined))
+      const findingVisible = visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) });
+      const rows = await db
+        .select({ m: measurements, measuredBy: users.name, findingVisible })
+        .from(measurements)
+        .leftJoin(users, eq(users.id, measurements.measuredById))
+        .leftJoin(findings, eq(findings.id, measurements.findingId))
+        .leftJoin(photos, eq(photos.id, findings.photoId))
+        .where(and(eq(measurements.restorationId, restorationId), findingId ? and(eq(measurements.findingId, findingId), findingVisible) : undefined,
+          visibleSql(role, 'reading', { reading: columnsOf(measurements) })))
         .orderBy(asc(measurements.measuredAt), asc(measurements.id));
-      return rows.map((r) => ({ ...r.m, measuredBy: r.measuredBy })).filter((m) => can(role, 'measurements.view', { ownerVisible: m.ownerVisible })).map(toMeasurement);
+      return rows.map((r) => toMeasurement({ ...r.m, measuredBy: r.measuredBy, findingId: r.findingVisible ? r.m.findingId : null }));
     },
     async create(restorationId: number, input: Fields, userId: number) {
       await assertFinding(restorationId, input.findingId);

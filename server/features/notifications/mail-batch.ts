@@ -1,7 +1,8 @@
 import { and, eq, inArray, isNull, max, sql } from 'drizzle-orm';
 import { findingPath } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
-import { findings, notifications, users } from '../../db/schema';
+import { comments, findings, memberships, notifications, photos, users } from '../../db/schema';
+import { notificationJoins, notificationVisible } from '../visibility/notification-visibility';
 
 const MAIL_LOCK = 5180002;
 
@@ -17,8 +18,12 @@ export async function flushNotificationMail(deps: Pick<AppDeps, 'db' | 'mailer' 
       .select({ id: notifications.id, userId: notifications.userId, summary: notifications.summary, findingId: notifications.findingId,
         restorationId: notifications.restorationId, photoId: findings.photoId })
       .from(notifications)
-      .innerJoin(findings, eq(findings.id, notifications.findingId))
-      .where(and(isNull(notifications.emailedAt), isNull(notifications.readAt)))
+      .innerJoin(findings, notificationJoins.finding)
+      .innerJoin(photos, notificationJoins.photo)
+      .innerJoin(memberships, notificationJoins.membership)
+      .leftJoin(comments, notificationJoins.comment)
+      // Judged at send time: an item its reader may no longer see (unshared since) is not mailed.
+      .where(and(isNull(notifications.emailedAt), isNull(notifications.readAt), notificationVisible))
       .orderBy(notifications.id)
       .for('update', { of: notifications, skipLocked: true });
     if (!pending.length) return 0;

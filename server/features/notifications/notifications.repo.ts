@@ -1,6 +1,7 @@
 import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import type { Database } from '../../db/client';
-import { findings, memberships, notifications } from '../../db/schema';
+import { comments, findings, memberships, notifications, photos } from '../../db/schema';
+import { notificationJoins, notificationVisible } from '../visibility/notification-visibility';
 
 export type NewNotification = typeof notifications.$inferInsert;
 
@@ -17,12 +18,16 @@ export function notificationsRepo(db: Database) {
         .where(and(eq(memberships.restorationId, restorationId), inArray(memberships.role, roles as never[])));
       return rows;
     },
+    /** The person's notifications that they may still see (the rule is applied as they are read). */
     listFor(userId: number, limit = 50) {
       return db
         .select({ n: notifications, photoId: findings.photoId })
         .from(notifications)
-        .innerJoin(findings, eq(findings.id, notifications.findingId))
-        .where(eq(notifications.userId, userId))
+        .innerJoin(findings, notificationJoins.finding)
+        .innerJoin(photos, notificationJoins.photo)
+        .innerJoin(memberships, notificationJoins.membership)
+        .leftJoin(comments, notificationJoins.comment)
+        .where(and(eq(notifications.userId, userId), notificationVisible))
         .orderBy(desc(notifications.createdAt), desc(notifications.id))
         .limit(limit);
     },

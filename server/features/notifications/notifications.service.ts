@@ -1,10 +1,10 @@
-import type { Role } from '../../../shared/permissions';
+import { mayView, type Role } from '../../../shared/permissions';
 import type { Notification } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
 import { flushNotificationMail } from './mail-batch';
 import { notificationsRepo, type NewNotification } from './notifications.repo';
 
-type FindingLike = { id: number; restorationId: number; number: number; title: string; componentRef: string; authorId: number | null };
+type FindingLike = { id: number; restorationId: number; number: number; title: string; componentRef: string; authorId: number | null; ownerVisible: boolean; photoOwnerVisible: boolean };
 type CommentLike = { id: number; body: string; internal: boolean };
 
 const label = (f: FindingLike) => `#${f.number}${f.componentRef ? ` ${f.componentRef}` : ''} “${f.title}”`;
@@ -28,13 +28,14 @@ export function notificationsService(deps: AppDeps) {
       kick();
     },
     /**
-     * A comment notifies the people it @mentions and the others already in the thread. Owners are left out
-     * of anything internal, so no internal text reaches them by any route.
+     * A comment notifies the people it @mentions and the others already in the thread, each only if the rule
+     * lets them see it; listing and mailing judge it again, so a finding unshared later stops it there too.
      */
     async commentWritten(f: FindingLike, c: CommentLike, actor: { id: number; name: string }, mentioned: number[], participants: number[]) {
       const members = await repo.membersWithRole(f.restorationId, ['technician', 'mentor', 'owner']);
       const roleOf = new Map<number, Role>(members.map((m) => [m.userId, m.role]));
-      const mayRead = (userId: number) => roleOf.has(userId) && (!c.internal || roleOf.get(userId) !== 'owner');
+      const facts = { notification: { commentId: c.id }, comment: c, finding: f, photo: { ownerVisible: f.photoOwnerVisible } };
+      const mayRead = (userId: number) => mayView(roleOf.get(userId), 'notification', facts);
       const rows = new Map<number, NewNotification>();
       for (const userId of [...participants, ...(f.authorId ? [f.authorId] : [])])
         if (userId !== actor.id && mayRead(userId))

@@ -17,11 +17,11 @@ export function partsRoutes({ db }: AppDeps): Router {
   const ofPart = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
   const router = Router();
   router.get('/restorations/:id/parts', requireUser, validate(one), guard(db, 'parts.view'), async (_req, res) => {
-    res.json((await service.list(input(res, one).params.id)).map((p) => toPart(p, roleOf(res))));
+    res.json((await service.list(input(res, one).params.id, roleOf(res))).map((p) => toPart(p, roleOf(res))));
   });
   router.get('/restorations/:id/parts.csv', requireUser, validate(one), guard(db, 'parts.view'), async (_req, res) => {
     const id = input(res, one).params.id;
-    const csv = partsCsv((await service.list(id)).map((p) => toPart(p, roleOf(res))));
+    const csv = partsCsv((await service.list(id, roleOf(res))).map((p) => toPart(p, roleOf(res))));
     res.type('text/csv; charset=utf-8').attachment(`restoration-${id}-parts.csv`).send(csv);
   });
   router.post('/restorations/:id/parts', requireUser, validate(create), guard(db, 'parts.edit'), async (req, res) => {

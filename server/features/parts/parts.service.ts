@@ -3,9 +3,10 @@ import { partWarnings } from '../../../shared/bench';
 import type { Role } from '../../../shared/permissions';
 import type { Part, PartInput } from '../../../shared/schemas/parts';
 import type { Database } from '../../db/client';
-import { findings, parts } from '../../db/schema';
+import { findings, parts, photos } from '../../db/schema';
 import { BadRequestError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
+import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 type Row = typeof parts.$inferSelect;
 
@@ -18,7 +19,9 @@ export function toPart(row: Row, role: Role): Part {
     originalPart: row.originalPart, originalRating: row.originalRating, replacementPart: row.replacementPart,
     replacementRating: row.replacementRating, action: row.action, state: row.state, mainsPosition: row.mainsPosition,
     quantity: row.quantity, costMinor: owner ? null : row.costMinor, source: owner ? '' : row.source, testedAfter: row.testedAfter,
-    notes: owner ? '' : row.notes, fittedAt: row.fittedAt?.toISOString() ?? null, warnings: row.action === 'replaced' || row.action === 'restuffed' ? warnings : [],
+    notes: owner ? '' : row.notes, fittedAt: row.fittedAt?.toISOString() ?? null,
+    // The bench checks on a replacement are the technician's working notes, not the owner's.
+    warnings: !owner && (row.action === 'replaced' || row.action === 'restuffed') ? warnings : [],
   };
 }
 
@@ -33,8 +36,16 @@ export function partsService(db: Database) {
     async restorationOf(id: number) {
       return (await find(id))?.restorationId;
     },
-    async list(restorationId: number) {
-      return db.select().from(parts).where(eq(parts.restorationId, restorationId)).orderBy(asc(parts.componentRef), asc(parts.id));
+    /** The ledger lines this role may see; a line's finding is named only when the reader may see it. */
+    async list(restorationId: number, role: Role): Promise<Row[]> {
+      const rows = await db
+        .select({ part: parts, findingVisible: visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) }) })
+        .from(parts)
+        .leftJoin(findings, eq(findings.id, parts.findingId))
+        .leftJoin(photos, eq(photos.id, findings.photoId))
+        .where(and(eq(parts.restorationId, restorationId), visibleSql(role, 'part', { part: columnsOf(parts) })))
+        .orderBy(asc(parts.componentRef), asc(parts.id));
+      return rows.map(({ part, findingVisible }) => ({ ...part, findingId: findingVisible ? part.findingId : null }));
     },
     async create(restorationId: number, input: PartInput & { action: Row['action'] }, actorId: number) {
       await assertFinding(restorationId, input.findingId);

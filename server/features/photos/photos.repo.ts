@@ -1,6 +1,8 @@
-import { asc, eq, inArray } from 'drizzle-orm';
+import { and, asc, eq, inArray } from 'drizzle-orm';
+import type { Role } from '../../../shared/permissions';
 import type { Database } from '../../db/client';
 import { photos, users } from '../../db/schema';
+import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null };
 type NewPhoto = typeof photos.$inferInsert;
@@ -11,8 +13,9 @@ export function photosRepo(db: Database) {
   const select = () => db.select(columns).from(photos).leftJoin(users, eq(users.id, photos.uploadedById));
   const flat = (r: { photo: typeof photos.$inferSelect; uploadedBy: string | null }): PhotoRow => ({ ...r.photo, uploadedBy: r.uploadedBy });
   return {
-    async list(restorationId: number): Promise<PhotoRow[]> {
-      return (await select().where(eq(photos.restorationId, restorationId)).orderBy(asc(photos.createdAt), asc(photos.id))).map(flat);
+    /** The restoration's photos this role may see. */
+    async list(restorationId: number, role: Role): Promise<PhotoRow[]> {
+      return (await select().where(and(eq(photos.restorationId, restorationId), visibleSql(role, 'photo', { photo: columnsOf(photos) }))).orderBy(asc(photos.createdAt), asc(photos.id))).map(flat);
     },
     async find(id: number): Promise<PhotoRow | undefined> {
       const [row] = await select().where(eq(photos.id, id));

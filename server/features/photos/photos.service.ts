@@ -45,7 +45,7 @@ export function photosService({ db, storage, config }: PhotosDeps) {
 
   return {
     async list(restorationId: number, role: Role): Promise<Photo[]> {
-      const rows = (await repo.list(restorationId)).filter((r) => can(role, 'photos.view', { ownerVisible: r.ownerVisible }));
+      const rows = await repo.list(restorationId, role);
       return Promise.all(rows.map((r) => toPhoto(r, role)));
     },
     async get(id: number, role: Role) {

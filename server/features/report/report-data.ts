@@ -2,6 +2,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import type { AppDeps } from '../../app-deps';
 import { findings, measurements, memberships, parts, photos, restorations, users } from '../../db/schema';
 import { ensureCloseup } from '../closeups/closeups';
+import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 import { photoKeys } from '../photos/photo-objects';
 
 type PhotoRow = typeof photos.$inferSelect;
@@ -13,16 +14,16 @@ type PhotoRow = typeof photos.$inferSelect;
 export async function reportData({ db, storage }: Pick<AppDeps, 'db' | 'storage'>, restorationId: number) {
   const [set] = await db.select().from(restorations).where(eq(restorations.id, restorationId));
   if (!set) return undefined;
-  const sharedPhotos = await db.select().from(photos).where(and(eq(photos.restorationId, restorationId), eq(photos.ownerVisible, true))).orderBy(asc(photos.createdAt));
-  const sharedPhotoIds = new Set(sharedPhotos.map((p) => p.id));
-  const allFindings = await db.select().from(findings).where(and(eq(findings.restorationId, restorationId), eq(findings.ownerVisible, true))).orderBy(asc(findings.number));
-  const visibleFindings = allFindings.filter((f) => sharedPhotoIds.has(f.photoId));
-  const ledger = await db.select().from(parts).where(eq(parts.restorationId, restorationId)).orderBy(asc(parts.componentRef));
-  const readings = await db
-    .select()
-    .from(measurements)
-    .where(and(eq(measurements.restorationId, restorationId), eq(measurements.ownerVisible, true)))
-    .orderBy(asc(measurements.measuredAt));
+  // The owner's view, by the one rule in shared/permissions.ts.
+  const owner = (subject: 'photo' | 'finding' | 'part' | 'reading') =>
+    visibleSql('owner', subject, { photo: columnsOf(photos), finding: columnsOf(findings), part: columnsOf(parts), reading: columnsOf(measurements) });
+  const sharedPhotos = await db.select().from(photos).where(and(eq(photos.restorationId, restorationId), owner('photo'))).orderBy(asc(photos.createdAt));
+  const visibleFindings = (
+    await db.select({ f: findings }).from(findings).innerJoin(photos, eq(photos.id, findings.photoId))
+      .where(and(eq(findings.restorationId, restorationId), owner('finding'))).orderBy(asc(findings.number))
+  ).map((r) => r.f);
+  const ledger = await db.select().from(parts).where(and(eq(parts.restorationId, restorationId), owner('part'))).orderBy(asc(parts.componentRef));
+  const readings = await db.select().from(measurements).where(and(eq(measurements.restorationId, restorationId), owner('reading'))).orderBy(asc(measurements.measuredAt));
   const technicians = await db
     .select({ name: users.name })
     .from(memberships)
