@@ -40,10 +40,17 @@ describe('parts ledger', () => {
     expect(row.Cost).toBe('1.85');
   });
 
-  it('when the owner reads the ledger, then costs, sources and notes are withheld; they cannot change it', async () => {
-    const list = (await owner.get(`/api/restorations/${restorationId}/parts`)).body;
-    expect(list.length).toBeGreaterThan(0);
+  it('when the owner reads the ledger, then only fitted or kept lines show, without costs, sources or notes; they cannot change it', async () => {
+    // An original kept records no event, so the timeline test below still sees only its own fitted part.
+    await addPart({ componentRef: 'C40', action: 'kept-original', originalPart: 'Mica 100pF', costMinor: 420, source: 'OWNER-NEVER-SOURCE', notes: 'OWNER-NEVER-NOTE' });
+    await addPart({ componentRef: 'C41', replacementRating: '47µF 450V', state: 'planned' });
+    const list = (await owner.get(`/api/restorations/${restorationId}/parts`)).body as { componentRef: string }[];
+    expect(list.map((p) => p.componentRef)).toContain('C40');
+    expect(list.map((p) => p.componentRef)).not.toContain('C41');
     for (const p of list) expect(p).toMatchObject({ costMinor: null, source: '', notes: '' });
+    const csv = (await owner.get(`/api/restorations/${restorationId}/parts.csv`)).text;
+    expect(csv).toContain('C40');
+    expect(csv).not.toMatch(/C41|OWNER-NEVER|4\.20/);
     expect((await owner.post(`/api/restorations/${restorationId}/parts`).send({ componentRef: 'R1' })).status).toBe(403);
   });
 
