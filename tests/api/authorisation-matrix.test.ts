@@ -1,4 +1,5 @@
 import { randomBytes } from 'node:crypto';
+import { eq } from 'drizzle-orm';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { invitationsRepo } from '../../server/features/invitations/invitations.repo';
@@ -8,10 +9,12 @@ import { measurementsService } from '../../server/features/measurements/measurem
 import { partsService } from '../../server/features/parts/parts.service';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
+import { comments, events, findings, measurements, memberships, notifications, parts, photos } from '../../server/db/schema';
 import { twoToneJpeg } from '../factories/images';
 import { createRestoration } from '../factories/restorations';
 import { anonymous, createUser, signedIn } from '../factories/users';
 import { listApiRoutes } from '../support/list-routes';
+import { pdfText } from '../support/pdf-text';
 import { startTestApp } from '../support/test-app';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -152,5 +155,137 @@ describe('authorisation matrix', () => {
     const shape = (route: string) => route.replace(/:\w+/g, ':param');
     const inTable = matrix.map(([m, p]) => shape(`${m} ${p}`)).sort();
     expect(listApiRoutes(t.app).map(shape).sort()).toEqual(inTable);
+  });
+});
+
+/*
+ * Shared fixtures: the same routes seen by an owner on shared items, by a mentor on their own items and by a
+ * second technician. Every internal text carries WORKSHOP-ONLY, and no owner response may contain it.
+ */
+const INTERNAL = 'WORKSHOP-ONLY';
+type SharedFixture = Fixture & { internalFindingId: number; mentorFindingId: number; mentorCommentId: number; sharedCommentId: number };
+type Caller = 'owner' | 'mentor' | 'secondTechnician';
+type SharedRow = [Caller, Method, string, number, ((f: SharedFixture) => object)?];
+
+const sharedMatrix: SharedRow[] = [
+  ['owner', 'GET', '/api/restorations', 200],
+  ['owner', 'GET', '/api/restorations/:id', 200],
+  ['owner', 'GET', '/api/restorations/:id/members', 200],
+  ['owner', 'GET', '/api/restorations/:id/photos', 200],
+  ['owner', 'GET', '/api/photos/:photoId', 200],
+  ['owner', 'PATCH', '/api/photos/:photoId', 403, () => ({ caption: 'Mine now' })],
+  ['owner', 'DELETE', '/api/photos/:photoId', 403],
+  ['owner', 'GET', '/api/photos/:photoId/findings', 200],
+  ['owner', 'POST', '/api/photos/:photoId/findings', 403, () => ({ shape: 'pin', points: [{ x: 0.5, y: 0.5 }], title: 'Here?' })],
+  ['owner', 'GET', '/api/restorations/:id/findings', 200],
+  ['owner', 'GET', '/api/findings/:findingId', 200],
+  ['owner', 'PATCH', '/api/findings/:findingId', 403, () => ({ status: 'repaired' })],
+  ['owner', 'DELETE', '/api/findings/:findingId', 403],
+  ['owner', 'GET', '/api/findings/:findingId/history', 200],
+  ['owner', 'GET', '/api/findings/:findingId/closeup', 302],
+  ['owner', 'GET', '/api/findings/:findingId/comments', 200],
+  ['owner', 'POST', '/api/findings/:findingId/comments', 201, () => ({ body: 'Thank you' })],
+  ['owner', 'PATCH', '/api/comments/:sharedCommentId', 403, () => ({ body: 'Changed' })],
+  ['owner', 'DELETE', '/api/comments/:sharedCommentId', 403],
+  ['owner', 'GET', '/api/findings/:internalFindingId', 404],
+  ['owner', 'GET', '/api/findings/:internalFindingId/comments', 404],
+  ['owner', 'GET', '/api/notifications', 200],
+  ['owner', 'GET', '/api/questions', 200],
+  ['owner', 'GET', '/api/restorations/:id/measurements', 200],
+  ['owner', 'PATCH', '/api/measurements/:measurementId', 403, () => ({ reading: '151' })],
+  ['owner', 'DELETE', '/api/measurements/:measurementId', 403],
+  ['owner', 'GET', '/api/restorations/:id/valves', 200],
+  ['owner', 'GET', '/api/restorations/:id/parts', 200],
+  ['owner', 'GET', '/api/restorations/:id/parts.csv', 200],
+  ['owner', 'PATCH', '/api/parts/:partId', 403, () => ({ state: 'ordered' })],
+  ['owner', 'GET', '/api/restorations/:id/events', 200],
+  ['owner', 'GET', '/api/activity', 200],
+  ['owner', 'GET', '/api/restorations/:id/report.pdf', 200],
+  ['mentor', 'PATCH', '/api/findings/:mentorFindingId', 200, () => ({ title: 'Check this joint again' })],
+  ['mentor', 'PATCH', '/api/findings/:mentorFindingId', 403, () => ({ ownerVisible: true })],
+  ['mentor', 'DELETE', '/api/findings/:mentorFindingId', 204],
+  ['mentor', 'PATCH', '/api/comments/:mentorCommentId', 200, () => ({ body: 'Reflow it' })],
+  ['mentor', 'DELETE', '/api/comments/:mentorCommentId', 204],
+  ['mentor', 'DELETE', '/api/comments/:commentId', 403],
+  ['mentor', 'PATCH', '/api/findings/:findingId', 403, () => ({ title: 'Not mine' })],
+  ['secondTechnician', 'PATCH', '/api/findings/:findingId', 200, () => ({ status: 'suspected' })],
+  ['secondTechnician', 'PATCH', '/api/findings/:mentorFindingId', 200, () => ({ ownerVisible: true })],
+  ['secondTechnician', 'PATCH', '/api/comments/:commentId', 403, () => ({ body: 'Not my words' })],
+  ['secondTechnician', 'DELETE', '/api/comments/:commentId', 204],
+  ['secondTechnician', 'PATCH', '/api/parts/:partId', 200, () => ({ state: 'ordered' })],
+  ['secondTechnician', 'PATCH', '/api/restorations/:id', 200, () => ({ stage: 'repair' })],
+];
+
+const binary = (res: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+};
+
+let secondTechnician: Awaited<ReturnType<typeof createUser>>;
+const sharedAgents = {} as Record<Caller, Agent>;
+
+/** The fixture with its photo, finding, a comment and a reading shared, beside internal work marked WORKSHOP-ONLY. */
+async function sharedFixture(): Promise<SharedFixture> {
+  const f = await fixture();
+  const { db } = t;
+  await db.insert(memberships).values({ restorationId: f.id, userId: secondTechnician.id, role: 'technician' });
+  const [photo] = await db.update(photos).set({ ownerVisible: true }).where(eq(photos.id, f.photoId)).returning();
+  // The report draws the shared photo, so its served variant must exist.
+  await t.deps.storage.putObject(photoKeys(photo!.storageKey).display, jpeg, 'image/jpeg');
+  await db.update(findings).set({ ownerVisible: true }).where(eq(findings.id, f.findingId));
+  await db.update(comments).set({ body: `${INTERNAL}: quote was too low` }).where(eq(comments.id, f.commentId));
+  await db.update(measurements).set({ ownerVisible: true }).where(eq(measurements.id, f.measurementId));
+  await db.update(parts).set({ state: 'fitted', notes: `${INTERNAL} note`, source: `${INTERNAL} supplier` }).where(eq(parts.id, f.partId));
+  const sharedCommentId = await commentsRepo(db).insert({ findingId: f.findingId, authorId: people.technician!.id, body: 'Replaced R23 with a 2 W part.', internal: false });
+  const repo = findingsRepo(db);
+  const internalFindingId = await repo.insert({ restorationId: f.id, photoId: f.photoId, shape: 'pin', points: [{ x: 0.2, y: 0.2 }],
+    title: `${INTERNAL} cracked HT lead`, kind: 'cracked', severity: 'fault', authorId: people.technician!.id });
+  await commentsRepo(db).insert({ findingId: internalFindingId, authorId: people.technician!.id, body: `${INTERNAL} shared words on an internal finding`, internal: false });
+  const mentorFindingId = await repo.insert({ restorationId: f.id, photoId: f.photoId, shape: 'pin', points: [{ x: 0.7, y: 0.7 }],
+    title: `${INTERNAL} check this joint`, kind: 'note', severity: 'info', authorId: people.mentor!.id });
+  const mentorCommentId = await commentsRepo(db).insert({ findingId: f.findingId, authorId: people.mentor!.id, body: `${INTERNAL} mentor aside`, internal: true });
+  // Written while the finding was shared, before it was taken back: it must no longer reach the owner.
+  await db.insert(notifications).values({ userId: people.owner!.id, restorationId: f.id, findingId: internalFindingId, kind: 'reply', summary: `${INTERNAL} reply` });
+  await db.insert(events).values({ restorationId: f.id, kind: 'question-asked', findingId: f.findingId, actorId: people.technician!.id });
+  await db.insert(events).values({ restorationId: f.id, kind: 'finding-opened', findingId: internalFindingId, photoId: f.photoId, actorId: people.technician!.id });
+  return { ...f, internalFindingId, mentorFindingId, mentorCommentId, sharedCommentId };
+}
+
+describe('authorisation on shared work, own items and a second technician', () => {
+  beforeAll(async () => {
+    secondTechnician = await createUser(t.db);
+    sharedAgents.owner = await signedIn(t.app, people.owner!);
+    sharedAgents.mentor = await signedIn(t.app, people.mentor!);
+    sharedAgents.secondTechnician = await signedIn(t.app, secondTechnician);
+  });
+
+  for (const [caller, method, template, expected, body] of sharedMatrix)
+    it(`${caller} ${method} ${template} answers ${expected}${caller === 'owner' && expected === 200 ? ' with nothing internal' : ''}`, async () => {
+      const f = await sharedFixture();
+      const path = template.replace(/:(\w+)/g, (_, k: keyof SharedFixture) => String(f[k]));
+      const req = sharedAgents[caller][method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete'](path);
+      const payload = body?.(f);
+      const pdf = template.endsWith('.pdf');
+      const sent = (payload ? req.send(payload) : req).buffer(true);
+      const res = await (pdf ? sent.parse(binary as never) : sent);
+      expect(res.status).toBe(expected);
+      if (caller === 'owner' && res.status === 200) {
+        const text = pdf ? await pdfText(res.body as Buffer) : res.text;
+        expect(text.length).toBeGreaterThan(0);
+        expect(text).not.toContain(INTERNAL);
+        expect(text).not.toContain(`"findingId":${f.internalFindingId}`);
+      }
+    });
+
+  it('when the owner lists the shared work, then the shared items are there (so the absence checks above are not vacuous)', async () => {
+    const f = await sharedFixture();
+    const owner = sharedAgents.owner;
+    expect((await owner.get(`/api/restorations/${f.id}/photos`)).body.map((p: { id: number }) => p.id)).toEqual([f.photoId]);
+    expect((await owner.get(`/api/restorations/${f.id}/findings`)).body.map((x: { id: number }) => x.id)).toEqual([f.findingId]);
+    expect((await owner.get(`/api/findings/${f.findingId}/comments`)).body.map((c: { id: number }) => c.id)).toEqual([f.sharedCommentId]);
+    expect((await owner.get(`/api/restorations/${f.id}/measurements`)).body.map((m: { id: number }) => m.id)).toEqual([f.measurementId]);
+    expect((await owner.get(`/api/restorations/${f.id}/parts`)).body.map((p: { id: number }) => p.id)).toEqual([f.partId]);
+    expect((await owner.get(`/api/findings/${f.findingId}`)).body.commentCount).toBe(1);
   });
 });
