@@ -31,6 +31,7 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'parts.edit': { technician: true, mentor: false, owner: false },
   'report.download': { technician: true, mentor: true, owner: true },
   'report.send': { technician: true, mentor: false, owner: false },
+  'workshop.view': { technician: true, mentor: true, owner: false },
 };
 
 describe('can()', () => {

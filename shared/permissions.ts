@@ -37,6 +37,7 @@ export const actions = [
   'parts.edit',
   'report.download',
   'report.send',
+  'workshop.view',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -81,6 +82,9 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'parts.edit': (role) => role === 'technician',
   'report.download': () => true,
   'report.send': (role) => role === 'technician',
+  // The workshop's own working views: planned parts, the shopping list, CSV export, bench warnings, the
+  // technician's cautions, the markup tools and questions to the mentors. Owners get their own pages instead.
+  'workshop.view': (role) => role !== 'owner',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {

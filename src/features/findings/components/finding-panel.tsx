@@ -40,6 +40,7 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
   const isAuthor = shown.authorId !== null && shown.authorId === meId;
   const canEdit = can(role, 'findings.edit', { isAuthor });
   const canDelete = can(role, 'findings.delete', { isAuthor });
+  const workshop = can(role, 'workshop.view');
   const author = members.find((m) => m.userId === shown.authorId);
   const error = update.error ?? remove.error;
 
@@ -57,7 +58,7 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
           <StatusMark status={shown.status} />
           <SeverityMark severity={shown.severity} />
           {shown.componentRef && <span className="font-mono font-semibold">{shown.componentRef}</span>}
-          {shown.questionOpen && <OpenQuestionBadge />}
+          {workshop && shown.questionOpen && <OpenQuestionBadge />}
         </div>
         <h2 id={headingId} className="text-xl font-bold break-words">
           {shown.title}
@@ -80,7 +81,7 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
         </p>
       )}
 
-      {needsCaution(shown) && <FindingCaution />}
+      {needsCaution(shown) && <FindingCaution audience={workshop ? 'workshop' : 'owner'} />}
 
       {error && (
         <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
@@ -90,14 +91,16 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
 
       {can(role, 'findings.share') && <ShareWithOwner checked={shown.ownerVisible} onSave={save} />}
 
-      <div className="flex flex-wrap gap-2">
-        <QuestionToggle open={shown.questionOpen} canAsk={can(role, 'findings.ask')} canResolve={can(role, 'findings.resolve')} onSave={save} />
-        {canDelete && (
-          <button type="button" className={buttonClass('quiet', 'text-danger')} disabled={remove.isPending} onClick={confirmDelete}>
-            Delete finding
-          </button>
-        )}
-      </div>
+      {workshop && (
+        <div className="flex flex-wrap gap-2">
+          <QuestionToggle open={shown.questionOpen} canAsk={can(role, 'findings.ask')} canResolve={can(role, 'findings.resolve')} onSave={save} />
+          {canDelete && (
+            <button type="button" className={buttonClass('quiet', 'text-danger')} disabled={remove.isPending} onClick={confirmDelete}>
+              Delete finding
+            </button>
+          )}
+        </div>
+      )}
 
       <FindingHistory findingId={finding.id} />
     </section>

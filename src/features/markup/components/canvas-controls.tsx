@@ -5,8 +5,9 @@ import { ZoomControls } from './zoom-controls';
 
 type Panel = 'legend' | 'help';
 
-/** The strip above the stage: tools, undo, zoom, and the legend and keys panels. */
+/** The strip above the stage: tools, undo, zoom, and the legend and keys panels; only zoom and legend when read-only. */
 export function CanvasControls({
+  readOnly = false,
   tool,
   canCreate,
   onTool,
@@ -20,6 +21,7 @@ export function CanvasControls({
   panel,
   onPanel,
 }: {
+  readOnly?: boolean;
   tool: Tool;
   canCreate: boolean;
   onTool: (tool: Tool) => void;
@@ -35,18 +37,24 @@ export function CanvasControls({
 }) {
   return (
     <div className="flex flex-wrap items-center gap-x-3 gap-y-1 border-b border-rule px-2 py-1">
-      <MarkupToolbar tool={tool} canCreate={canCreate} onChange={onTool} />
-      <button type="button" onClick={onUndo} disabled={!canUndo} aria-keyshortcuts="Control+Z Meta+Z" title="Undo (Ctrl+Z)" className={controlClass}>
-        Undo
-      </button>
+      {!readOnly && (
+        <>
+          <MarkupToolbar tool={tool} canCreate={canCreate} onChange={onTool} />
+          <button type="button" onClick={onUndo} disabled={!canUndo} aria-keyshortcuts="Control+Z Meta+Z" title="Undo (Ctrl+Z)" className={controlClass}>
+            Undo
+          </button>
+        </>
+      )}
       <ZoomControls scale={scale} onZoomIn={onZoomIn} onZoomOut={onZoomOut} onFit={onFit} onActualSize={onActualSize} />
       <div className="ml-auto flex items-center gap-1">
         <button type="button" aria-expanded={panel === 'legend'} onClick={() => onPanel('legend')} className={controlClass}>
           Legend
         </button>
-        <button type="button" aria-expanded={panel === 'help'} aria-keyshortcuts="?" title="Keys and gestures (?)" onClick={() => onPanel('help')} className={controlClass}>
-          Keys <kbd aria-hidden="true" className="rounded border border-rule px-1 font-mono text-xs text-ink-soft">?</kbd>
-        </button>
+        {!readOnly && (
+          <button type="button" aria-expanded={panel === 'help'} aria-keyshortcuts="?" title="Keys and gestures (?)" onClick={() => onPanel('help')} className={controlClass}>
+            Keys <kbd aria-hidden="true" className="rounded border border-rule px-1 font-mono text-xs text-ink-soft">?</kbd>
+          </button>
+        )}
       </div>
     </div>
   );

@@ -55,6 +55,8 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   const [spaceHeld, setSpaceHeld] = useState(false);
 
   const editable = useMemo(() => new Set(items.filter(canEdit).map((f) => f.id)), [items, canEdit]);
+  // Someone who may neither place nor change a mark reads the photo: no tools, no undo, and it stays at Fit.
+  const readOnly = !canCreate && editable.size === 0;
   const selected = commands.marks.find((m) => m.id === selectedId);
   const onResult = (result: ToolResult) => {
     if (result.command) commands.run(result.command);
@@ -101,10 +103,10 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   useEffect(() => {
     if (focusId === undefined) focused.current = undefined;
     const mark = commands.marks.find((m) => m.id === focusId);
-    if (!ready || !mark || focused.current === focusId) return;
+    if (readOnly || !ready || !mark || focused.current === focusId) return;
     focused.current = focusId;
     view.focus(mark.shape === 'pin' ? (mark.points[0] ?? imagePoint(0.5, 0.5)) : bounds(mark, imageSize));
-  }, [focusId, ready, commands.marks, view, imageSize]);
+  }, [focusId, readOnly, ready, commands.marks, view, imageSize]);
 
   useMarkupProbe(ref, view.view, imageSize, size);
   const scene = useMemo(
@@ -121,6 +123,7 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   return (
     <div className="flex h-full min-h-0 flex-col overflow-hidden rounded-xl border border-rule bg-panel" onKeyDown={keys.onKeyDown} onKeyUp={keys.onKeyUp}>
       <CanvasControls
+        readOnly={readOnly}
         tool={tool}
         canCreate={canCreate}
         onTool={(t) => {
@@ -144,7 +147,7 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
           tabIndex={0}
           role="application"
           aria-roledescription="photo markup"
-          aria-label={`${props.label ? `${props.label}. ` : ''}${items.length} ${items.length === 1 ? 'finding' : 'findings'}. Press ? for keys.`}
+          aria-label={`${props.label ? `${props.label}. ` : ''}${items.length} ${items.length === 1 ? 'finding' : 'findings'}.${readOnly ? '' : ' Press ? for keys.'}`}
           className="absolute inset-0 touch-none overflow-hidden bg-bakelite select-none focus-visible:outline-offset-[-3px]"
           onBlur={() => setSpaceHeld(false)}
           onContextMenu={(e) => e.preventDefault()}
@@ -160,7 +163,7 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
           </p>
         )}
         {panel === 'legend' && <MarkupLegend onClose={closePanel} />}
-        {panel === 'help' && <ShortcutHelp onClose={closePanel} />}
+        {panel === 'help' && !readOnly && <ShortcutHelp onClose={closePanel} />}
       </div>
       <p role="status" className="sr-only">
         {commands.message}

@@ -21,7 +21,7 @@ export function ValveLineUp({ restorationId, role, liveChassis = false }: { rest
   const live = assessed.likely || liveChassis;
   return (
     <div className="space-y-3">
-      {live && <LiveChassisCaution reasons={assessed.reasons} />}
+      {live && (can(role, 'workshop.view') ? <LiveChassisCaution reasons={assessed.reasons} /> : <LiveChassisCaution audience="owner" />)}
       {editing ? (
         <ValveLineUpEditor restorationId={restorationId} valves={valves} cautioned={live} onClose={() => setEditing(false)} />
       ) : valves.length === 0 ? (

@@ -30,31 +30,36 @@ const viewButton = (active: boolean) =>
 
 /**
  * A restoration's parts: the ledger (technicians record and change lines), or the shopping list to print;
- * the ledger as CSV for everyone. Owners see neither costs nor the form.
+ * the ledger as CSV for the workshop. Owners read only the ledger of what was fitted or kept, without costs.
  */
-export function PartsTab({ restorationId, role, setName, findings, view, onViewChange }: PartsTabProps) {
+export function PartsTab({ restorationId, role, setName, findings, view: asked, onViewChange }: PartsTabProps) {
   const canEdit = can(role, 'parts.edit');
+  // The shopping list and the CSV are the workshop's; an owner reads the ledger of what was done.
+  const workshop = can(role, 'workshop.view');
+  const view = workshop ? asked : 'ledger';
   const parts = useParts(restorationId);
   const [form, setForm] = useState<FormState>({ open: false });
   const close = () => setForm({ open: false });
   return (
     <div className="space-y-4">
-      <div className="flex flex-wrap items-center justify-between gap-3 print:hidden">
-        <div role="group" aria-label="Show" className="inline-flex gap-1 rounded-lg border border-rule bg-panel p-1">
-          <button type="button" aria-pressed={view === 'ledger'} className={viewButton(view === 'ledger')} onClick={() => onViewChange('ledger')}>
-            Ledger
-          </button>
-          <button type="button" aria-pressed={view === 'shopping'} className={viewButton(view === 'shopping')} onClick={() => onViewChange('shopping')}>
-            Shopping list
-          </button>
+      {workshop && (
+        <div className="flex flex-wrap items-center justify-between gap-3 print:hidden">
+          <div role="group" aria-label="Show" className="inline-flex gap-1 rounded-lg border border-rule bg-panel p-1">
+            <button type="button" aria-pressed={view === 'ledger'} className={viewButton(view === 'ledger')} onClick={() => onViewChange('ledger')}>
+              Ledger
+            </button>
+            <button type="button" aria-pressed={view === 'shopping'} className={viewButton(view === 'shopping')} onClick={() => onViewChange('shopping')}>
+              Shopping list
+            </button>
+          </div>
+          <div className="flex flex-wrap items-center gap-3">
+            {canEdit && <CurrencySetting />}
+            <a href={partsCsvHref(restorationId)} download className={buttonClass('quiet')}>
+              Export CSV
+            </a>
+          </div>
         </div>
-        <div className="flex flex-wrap items-center gap-3">
-          {canEdit && <CurrencySetting />}
-          <a href={partsCsvHref(restorationId)} download className={buttonClass('quiet')}>
-            Export CSV
-          </a>
-        </div>
-      </div>
+      )}
       {view === 'shopping' ? (
         parts.isPending ? (
           <Loading label="Fetching the parts ledger…" />
