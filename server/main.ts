@@ -14,6 +14,7 @@ import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
 import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
 import { scheduleSweep } from './features/photos/schedule-sweep';
+import { sweepUploadTemp } from './features/photos/upload-temp';
 import { EnvError, isDemo, listenHost, parseEnv, publicOrigin, sessionSecret, startupWarnings, uploadLimits } from './env';
 import { defaultThrottle } from './features/auth/throttle';
 import { LocalServiceError } from './local-services/run-command';
@@ -50,6 +51,8 @@ async function main() {
     await seedDemoWorkshop(handle.db);
   }
   scheduleSweep(handle.db, storage, logger);
+  const leftovers = sweepUploadTemp();
+  if (leftovers > 0) logger.info(`removed ${leftovers} temporary upload files left by a stopped instance`);
 
   const server = http.createServer();
   const origin = publicOrigin(env, env.PORT);
