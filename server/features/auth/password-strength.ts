@@ -18,8 +18,14 @@ export function isCommonPassword(password: string): boolean {
   return common.has(password.toLowerCase());
 }
 
-/** zxcvbn-ts's estimate (0–4) with the common-password list, keyboard layouts and dictionaries. */
-export const passwordScore = (password: string, userInputs: string[] = []) => estimator.check(password, userInputs).score;
+/**
+ * zxcvbn-ts's estimate (0–4) with the common-password list, keyboard layouts and dictionaries. The
+ * person's own name and address count as known words, whole and in parts ("mara", "quillfeather").
+ */
+export function passwordScore(password: string, userInputs: string[] = []): number {
+  const words = userInputs.flatMap((input) => [input, ...input.split(/[\s@._+-]+/)]).filter((w) => w.length >= 3);
+  return estimator.check(password, words).score;
+}
 
 /** Refuses the common-password list and anything the estimate finds easy (repeats, sequences, walks). */
 export function assertStrongPassword(password: string, userInputs: string[] = []) {
