@@ -72,7 +72,8 @@ describe('error logs', () => {
       const log = logLines.join('\n');
       expect(log).toMatch(/unhandled error/);
       expect(log).toMatch(/users are closed/);
-      expect(log).toMatch(/insert into "users"/);
+      expect(log).toContain('insert into \\"users\\"'); // as JSON writes it
+      expect(log).toContain('DrizzleQueryError');
       expect(log).not.toMatch(/\$argon2id/);
       expect(log).not.toMatch(/log-probe@example\.test/);
     } finally {
@@ -85,6 +86,8 @@ describe('error logs', () => {
 describe('CSV export', () => {
   it('when a cell starts with =, +, -, @, a tab or a carriage return, then it is exported as text behind a quote', async () => {
     // OWASP, "CSV Injection": prefix such cells with a single quote so spreadsheets do not evaluate them.
+    // (The API trims text, so a leading tab or carriage return arrives as the formula after it; the unit test
+    // of neutraliseFormula covers those two characters.)
     const risky = { notes: '=HYPERLINK("http://evil.test","open")', source: '+1 555 0100', originalPart: '@SUM(A1:A9)', replacementPart: '-2+3', testedAfter: '\t=1+1', originalRating: '\r=2' };
     expect((await tech.post(`/api/restorations/${restorationId}/parts`).send({ componentRef: 'CSV1', ...risky })).status).toBe(201);
     const res = await tech.get(`/api/restorations/${restorationId}/parts.csv`);
@@ -93,8 +96,8 @@ describe('CSV export', () => {
     expect(row.Source).toBe(`'${risky.source}`);
     expect(row['Original part']).toBe(`'${risky.originalPart}`);
     expect(row['Replacement part']).toBe(`'${risky.replacementPart}`);
-    expect(row['Tested after']).toBe(`'${risky.testedAfter}`);
-    expect(row['Original rating']).toBe(`'${risky.originalRating}`);
+    expect(row['Tested after']).toBe("'=1+1");
+    expect(row['Original rating']).toBe("'=2");
     expect(row.Quantity).toBe('1');
   });
 });
