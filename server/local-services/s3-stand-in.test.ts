@@ -50,12 +50,45 @@ describe('the local S3 stand-in', () => {
     const read = await fetch(url);
     expect(read.status).toBe(200);
     expect(await read.text()).toBe('an original with GPS');
+    const download = await fetch(await storage.getSignedUrl('photos/1/abc/original', { downloadName: 'photo 7 (bench).jpg' }));
+    expect(download.status).toBe(200);
+    expect(download.headers.get('content-disposition')).toMatch(/attachment/);
+    await download.body?.cancel();
     const listUrl = new URL(url);
     listUrl.pathname = '/gate-bucket';
     listUrl.searchParams.set('list-type', '2');
     const list = await fetch(listUrl);
     expect(list.status).toBe(403);
     await list.body?.cancel();
+  });
+});
+
+describe('signatures at the stand-in', () => {
+  it('when someone who saw a presigned URL (and so the key id) forges a signature, then access is denied', async () => {
+    const url = new URL(await storage.getSignedUrl('photos/1/abc/original'));
+    const zeroed = new URL(url);
+    zeroed.searchParams.set('X-Amz-Signature', '0'.repeat(64));
+    const forgedUrl = await fetch(zeroed);
+    expect(forgedUrl.status).toBe(403);
+    await forgedUrl.body?.cancel();
+    const scope = url.searchParams.get('X-Amz-Credential')!;
+    const forgedHeader = await fetch(`${s3.endpoint}/gate-bucket?list-type=2`, {
+      headers: {
+        authorization: `AWS4-HMAC-SHA256 Credential=${scope}, SignedHeaders=host;x-amz-date, Signature=${'ab'.repeat(32)}`,
+        'x-amz-date': url.searchParams.get('X-Amz-Date')!,
+      },
+    });
+    expect(forgedHeader.status).toBe(403);
+    expect(await forgedHeader.text()).not.toContain('original');
+  });
+
+  it('when a presigned URL is for another object than the one it names, then access is denied', async () => {
+    await storage.putObject('photos/1/abc/display.webp', Buffer.from('shared display'), 'image/webp');
+    const url = new URL(await storage.getSignedUrl('photos/1/abc/display.webp'));
+    url.pathname = url.pathname.replace('display.webp', 'original');
+    const res = await fetch(url);
+    expect(res.status).toBe(403);
+    await res.body?.cancel();
   });
 });
 

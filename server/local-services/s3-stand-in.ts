@@ -1,7 +1,8 @@
 import { randomBytes } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
-import S3rver, { type S3rverContext } from 's3rver';
+import S3rver from 's3rver';
 import AWSAccount from 's3rver/lib/models/account.js';
+import { isPresigned, verifySignature } from './s3-signature';
 
 export interface S3StandIn {
   endpoint: string;
@@ -11,19 +12,12 @@ export interface S3StandIn {
   close(): Promise<void>;
 }
 
-/** The key id a request names, from its Authorization header or a presigned URL's X-Amz-Credential. */
-function keyIdOf(ctx: S3rverContext): { keyId?: string; presigned: boolean } {
-  const header = /Credential=([^/,\s]+)\//.exec(ctx.get('authorization'))?.[1];
-  if (header) return { keyId: header, presigned: false };
-  const credential = ctx.query['X-Amz-Credential'];
-  return { keyId: typeof credential === 'string' ? credential.split('/')[0] : undefined, presigned: true };
-}
-
 /**
  * A local S3-compatible server (s3rver) keeping its objects in a project folder. It does not use s3rver's
  * well-known credentials (S3RVER/S3RVER, which anyone on the machine could use to list every original
  * with its GPS): each start makes a key pair of its own, known only to this process, and a gate in front
- * refuses anonymous requests, other keys, and presigned URLs for anything but reading one object.
+ * verifies every signature (s3rver itself does not) and refuses anonymous requests, other keys, and
+ * presigned URLs for anything but reading one object.
  */
 export async function startS3StandIn(directory: string, port: number, bucket = 'gridleak'): Promise<S3StandIn> {
   mkdirSync(directory, { recursive: true });
@@ -35,9 +29,11 @@ export async function startS3StandIn(directory: string, port: number, bucket = '
 
   const server = new S3rver({ address: '127.0.0.1', port, silent: true, directory, configureBuckets: [{ name: bucket }] });
   server.middleware.unshift(async (ctx, next) => {
-    const { keyId, presigned } = keyIdOf(ctx);
+    const request = { method: ctx.method, url: ctx.url, headers: ctx.headers };
     const readsOneObject = (ctx.method === 'GET' || ctx.method === 'HEAD') && ctx.path.split('/').filter(Boolean).length >= 2;
-    if (keyId !== accessKeyId || (presigned && !readsOneObject)) {
+    // s3rver checks only the key id of a version-4 signature, and presigned URLs show the key id to browsers.
+    const allowed = ctx.method === 'OPTIONS' || (verifySignature(request, accessKeyId, secretAccessKey) && (!isPresigned(request) || readsOneObject));
+    if (!allowed) {
       ctx.status = 403;
       ctx.type = 'application/xml';
       ctx.body = '<?xml version="1.0" encoding="UTF-8"?>\n<Error><Code>AccessDenied</Code><Message>Access Denied</Message></Error>';

@@ -9,7 +9,10 @@ declare module 's3rver' {
   /** The Koa context fields the stand-in's gate reads. */
   export interface S3rverContext {
     method: string;
+    /** The raw request target (path and query as sent). */
+    url: string;
     path: string;
+    headers: Record<string, string | string[] | undefined>;
     query: Record<string, string | string[] | undefined>;
     get(header: string): string;
     status: number;
