@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CapturedMail } from '../../shared/schemas/dev-mail';
-import { anonymous, createUser } from '../factories/users';
+import { createRestoration } from '../factories/restorations';
+import { anonymous, createUser, signedIn } from '../factories/users';
 import { tokenFrom } from '../support/mail';
 import { startTestApp } from '../support/test-app';
 
@@ -60,6 +61,27 @@ describe('when someone signs up with another person’s address first', () => {
     expect((await signIn(email, later)).status).toBe(401);
     expect((await signIn(email, attacker)).status).toBe(401);
     expect((await anonymous(t.app).post('/api/auth/confirm-email').send({ token: tokenFrom(latest!, 'confirm-email') })).status).toBe(410);
+  });
+});
+
+describe('when someone signed up first with an address that is then invited', () => {
+  it('then signing up from the invitation takes the account over with the invited person’s password', async () => {
+    const techUser = await createUser(t.db);
+    const restorationId = (await createRestoration(t.db, [{ userId: techUser.id, role: 'technician' }])).id;
+    const email = 'invited-after-squat@example.test';
+    await signUp(email, attacker, 'Not the owner');
+    const [squatterLink] = await mailsTo(email, /Confirm/, 1);
+    const tech = await signedIn(t.app, techUser);
+    expect((await tech.post(`/api/restorations/${restorationId}/invitations`).send({ email, role: 'owner' })).status).toBe(201);
+    const [invitation] = await mailsTo(email, /invited you/, 1);
+    const joined = await anonymous(t.app)
+      .post('/api/auth/sign-up')
+      .send({ name: 'Invited Owner', email, password: owner, invitationToken: tokenFrom(invitation!, 'invitations') });
+    expect(joined.status).toBe(201);
+    expect(joined.body).toMatchObject({ status: 'signed-in', user: { name: 'Invited Owner' }, restorationId });
+    expect((await signIn(email, attacker)).status).toBe(401);
+    expect((await signIn(email, owner)).status).toBe(200);
+    expect((await anonymous(t.app).post('/api/auth/confirm-email').send({ token: tokenFrom(squatterLink!, 'confirm-email') })).status).toBe(410);
   });
 });
 
