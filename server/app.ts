@@ -20,6 +20,7 @@ import { photosRoutes } from './features/photos/photos.routes';
 import { reportRoutes } from './features/report/report.routes';
 import { restorationsRoutes } from './features/restorations/restorations.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
+import { redactedError } from './http/redact-error';
 import { requireSameOrigin } from './http/same-origin';
 
 export type { AppDeps };
@@ -42,7 +43,8 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
       logger: deps.logger,
       autoLogging: { ignore: (req) => req.url === '/api/health' || !req.url?.startsWith('/api') },
       // One short line per request; bodies and cookies never reach the log.
-      serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ status: res.statusCode }) },
+      // Errors go through redactedError: query parameters (a password hash in a failed insert) never reach the log.
+      serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ status: res.statusCode }), err: redactedError },
     }),
   );
 

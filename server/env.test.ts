@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { EnvError, parseEnv } from './env';
+import { EnvError, listenHost, parseEnv, startupWarnings } from './env';
 
 function problems(env: Record<string, string>): string[] {
   try {
@@ -36,5 +36,25 @@ describe('environment', () => {
   it('when PORT is not a number, then it is reported with the others', () => {
     const lines = problems({ PORT: 'eighty', PUBLIC_URL: 'not a url' });
     expect(lines).toHaveLength(2);
+  });
+
+  it('when HOST is not set, then the server listens on loopback only', () => {
+    expect(listenHost(parseEnv({}))).toBe('127.0.0.1');
+    expect(listenHost(parseEnv({ HOST: '0.0.0.0', SESSION_SECRET: 'x'.repeat(32) }))).toBe('0.0.0.0');
+  });
+
+  it('when HOST lets other machines in without SESSION_SECRET, then start-up is refused; loopback keeps the local secret', () => {
+    expect(problems({ HOST: '0.0.0.0' })).toEqual([expect.stringMatching(/^SESSION_SECRET is required when HOST=0\.0\.0\.0/)]);
+    expect(problems({ HOST: '192.0.2.10' })).toHaveLength(1);
+    expect(problems({ HOST: '127.0.0.1' })).toEqual([]);
+    expect(problems({ HOST: '::1' })).toEqual([]);
+  });
+
+  it('when production serves an https address without TRUST_PROXY, then start-up warns that cookies will not be Secure', () => {
+    const base = { NODE_ENV: 'production', SESSION_SECRET: 'x'.repeat(32), PUBLIC_URL: 'https://gridleak.example.org' };
+    expect(startupWarnings(parseEnv(base))).toEqual([expect.stringMatching(/TRUST_PROXY.*not be Secure/)]);
+    expect(startupWarnings(parseEnv({ ...base, TRUST_PROXY: '1' }))).toEqual([]);
+    expect(startupWarnings(parseEnv({ ...base, PUBLIC_URL: 'http://gridleak.example.org' }))).toEqual([]);
+    expect(startupWarnings(parseEnv({ ...base, NODE_ENV: 'development' }))).toEqual([]);
   });
 });

@@ -5,6 +5,8 @@ const envSchema = z
   .object({
     NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
     PORT: z.coerce.number().int().min(0).max(65535).default(5180),
+    /** Address to listen on; unset means loopback only (127.0.0.1), e.g. 0.0.0.0 to accept other machines. */
+    HOST: z.string().min(1).optional(),
     PUBLIC_URL: z.url({ message: 'must be a URL such as https://gridleak.example.org' }).optional(),
     DATABASE_URL: z
       .string()
@@ -33,6 +35,8 @@ const envSchema = z
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && !env.SESSION_SECRET)
       ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'is required when NODE_ENV=production' });
+    else if (env.HOST && !isLoopbackHost(env.HOST) && !env.SESSION_SECRET)
+      ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: `is required when HOST=${env.HOST} lets other machines connect` });
     const s3 = ['S3_ENDPOINT', 'S3_BUCKET', 'S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY'] as const;
     const set = s3.filter((k) => env[k]);
     if (set.length > 0 && set.length < s3.length)
@@ -49,6 +53,24 @@ function isPostgresUrl(value: string): boolean {
   } catch {
     return false;
   }
+}
+
+/** 127.0.0.0/8, ::1 and localhost reach only this machine. */
+export function isLoopbackHost(host: string): boolean {
+  return host === 'localhost' || host === '::1' || /^127(\.\d{1,3}){3}$/.test(host);
+}
+
+/** Where the server listens: loopback unless HOST says otherwise (development must not be reachable by accident). */
+export const listenHost = (env: Env) => env.HOST ?? '127.0.0.1';
+
+/** Settings that start but probably not as meant; printed at start-up. */
+export function startupWarnings(env: Env): string[] {
+  const warnings: string[] = [];
+  if (env.NODE_ENV === 'production' && env.PUBLIC_URL?.startsWith('https:') && !env.TRUST_PROXY)
+    warnings.push(
+      'PUBLIC_URL is https but TRUST_PROXY is not set: the app sees plain HTTP from the load balancer, so session cookies will not be Secure. Set TRUST_PROXY (e.g. 1).',
+    );
+  return warnings;
 }
 
 export class EnvError extends Error {
@@ -73,8 +95,8 @@ export function publicOrigin(env: Env, port: number): string {
 export const isDemo = (env: Env) => (env.DEMO ? env.DEMO === 'true' : env.NODE_ENV !== 'production');
 
 /**
- * Outside production a fixed development secret is used when none is set (production refuses to start
- * without one), so local sessions survive restarts and every local instance agrees.
+ * On loopback outside production a fixed development secret is used when none is set (production, and any
+ * HOST other machines can reach, refuse to start without one), so local sessions survive restarts.
  */
 export const sessionSecret = (env: Env) => env.SESSION_SECRET ?? 'gridleak-local-development-secret-not-for-production';
 

@@ -14,9 +14,11 @@ import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
 import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
 import { scheduleSweep } from './features/photos/schedule-sweep';
-import { EnvError, isDemo, parseEnv, publicOrigin, sessionSecret, uploadLimits } from './env';
+import { sweepUploadTemp } from './features/photos/upload-temp';
+import { EnvError, isDemo, listenHost, parseEnv, publicOrigin, sessionSecret, startupWarnings, uploadLimits } from './env';
 import { defaultThrottle } from './features/auth/throttle';
 import { LocalServiceError } from './local-services/run-command';
+import { redactedError } from './http/redact-error';
 import { createMailer } from './mail';
 import { resolveDatabase, resolveMail, resolveStorage, type Stop } from './start/services';
 import { createStorage } from './storage';
@@ -28,7 +30,8 @@ const stops: Stop[] = [];
 
 async function main() {
   const env = parseEnv();
-  const logger = pino({ level: env.LOG_LEVEL });
+  const logger = pino({ level: env.LOG_LEVEL, serializers: { err: redactedError } });
+  for (const warning of startupWarnings(env)) logger.warn(warning);
   const onSignal = () => void shutdown(0);
   process.once('SIGINT', onSignal);
   process.once('SIGTERM', onSignal);
@@ -48,6 +51,8 @@ async function main() {
     await seedDemoWorkshop(handle.db);
   }
   scheduleSweep(handle.db, storage, logger);
+  const leftovers = sweepUploadTemp();
+  if (leftovers > 0) logger.info(`removed ${leftovers} temporary upload files left by a stopped instance`);
 
   const server = http.createServer();
   const origin = publicOrigin(env, env.PORT);
@@ -68,7 +73,7 @@ async function main() {
   server.on('request', app);
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
-    server.listen(env.PORT, resolve);
+    server.listen(env.PORT, listenHost(env), resolve);
   });
   stops.unshift({ name: 'web server', stop: () => new Promise((r) => server.close(() => r())) });
   server.closeIdleConnections?.();

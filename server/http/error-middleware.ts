@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { HttpError, NotFoundError } from './errors';
+import { redactedError } from './redact-error';
 
 /** Body-parser and multer style errors carry a status of their own. */
 function statusFromLibrary(err: unknown): HttpError | undefined {
@@ -11,10 +12,20 @@ function statusFromLibrary(err: unknown): HttpError | undefined {
   return undefined;
 }
 
+/** PostgreSQL error classes a client's input can cause: conflicts (23) and unusable values (22). */
+const PG_BAD_INPUT: Record<string, string> = {
+  '22021': 'The request contains characters that cannot be stored (such as NUL).',
+  '22P05': 'The request contains characters that cannot be stored.',
+  '22003': 'A number in the request is out of range.',
+  '22P02': 'A value in the request is not in the expected form.',
+  '22001': 'A value in the request is too long.',
+};
+
 function pgConflict(err: unknown): HttpError | undefined {
   const code = (err as { cause?: { code?: string }; code?: string })?.cause?.code ?? (err as { code?: string })?.code;
   if (code === '23505') return new HttpError(409, 'conflict', 'That already exists.');
   if (code === '23503') return new HttpError(409, 'conflict', 'That refers to something that no longer exists.');
+  if (code && PG_BAD_INPUT[code]) return new HttpError(400, 'bad_request', PG_BAD_INPUT[code]);
   return undefined;
 }
 
@@ -22,7 +33,7 @@ function pgConflict(err: unknown): HttpError | undefined {
 export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
   const known = err instanceof HttpError ? err : (statusFromLibrary(err) ?? pgConflict(err));
   if (!known) {
-    req.log?.error({ err }, 'unhandled error');
+    req.log?.error({ err: redactedError(err) }, 'unhandled error');
     res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again in a moment.' } });
     return;
   }

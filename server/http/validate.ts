@@ -21,8 +21,10 @@ export function validate<S extends Schemas>(schemas: S): RequestHandler {
     const input: Record<string, unknown> = {};
     const problems: { location: string; path: string; message: string }[] = [];
     for (const location of ['params', 'query', 'body'] as const) {
+      const nul = findNul(req[location]);
+      if (nul !== undefined) problems.push({ location, path: nul, message: 'contains a NUL character, which is never valid text' });
       const schema = schemas[location];
-      if (!schema) continue;
+      if (!schema || nul !== undefined) continue;
       const result = schema.safeParse(req[location] ?? {});
       if (result.success) input[location] = result.data;
       else
@@ -36,6 +38,19 @@ export function validate<S extends Schemas>(schemas: S): RequestHandler {
     res.locals.input = input;
     next();
   };
+}
+
+/** The path of the first string (or key) holding U+0000 in a parsed request part, if any. */
+export function findNul(value: unknown, path = '', depth = 0): string | undefined {
+  if (typeof value === 'string') return value.includes('\u0000') ? path : undefined;
+  if (typeof value !== 'object' || value === null || depth > 32) return undefined;
+  for (const [key, item] of Object.entries(value)) {
+    const at = path ? `${path}.${key}` : key;
+    if (key.includes('\u0000')) return at;
+    const found = findNul(item, at, depth + 1);
+    if (found !== undefined) return found;
+  }
+  return undefined;
 }
 
 /** Reads what validate() parsed, typed by the same schemas. */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { measuredQuantities, type MeasuredQuantity } from '../bench/measurement-verdict';
+import { idSchema, bodyIdSchema } from './ids';
 
 export const quantityLabels: Record<MeasuredQuantity, string> = {
   esr: 'ESR', capacitance: 'Capacitance', leakage: 'Leakage current', resistance: 'Resistance', 'dc-voltage': 'DC voltage',
@@ -17,7 +18,7 @@ const fields = {
   reading: z.string().trim().min(1, 'Enter the reading as the meter showed it').max(40),
   conditions: text(300),
   method: text(300),
-  findingId: z.number().int().positive().nullable(),
+  findingId: bodyIdSchema.nullable(),
   ownerVisible: z.boolean(),
 };
 
@@ -61,7 +62,7 @@ export const measurementSchema = z.object({
 });
 export type Measurement = z.infer<typeof measurementSchema>;
 
-export const measurementListQuerySchema = z.object({ findingId: z.coerce.number().int().positive().optional() });
+export const measurementListQuerySchema = z.object({ findingId: idSchema.optional() });
 
 export const valveSchema = z.object({
   position: z.string().trim().regex(/^V\d{1,2}$/, 'Positions are V1, V2, …'),

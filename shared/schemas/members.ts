@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { roles } from '../permissions';
+import { idSchema } from './ids';
 
 export const roleSchema = z.enum(roles);
 
@@ -38,8 +39,8 @@ export const invitationPreviewSchema = z.object({
 export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
 
 export const memberParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  userId: z.coerce.number().int().positive(),
+  id: idSchema,
+  userId: idSchema,
 });
 export const memberPatchSchema = z.object({ role: roleSchema });
 export const tokenParamsSchema = z.object({ token: z.string().min(20).max(200) });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { bodyIdSchema } from './ids';
 
 export const partActions = ['replaced', 'restuffed', 'kept-original', 'removed'] as const;
 export const partStates = ['planned', 'ordered', 'fitted'] as const;
@@ -13,7 +14,7 @@ export const mainsPositionLabels: Record<(typeof mainsPositions)[number], string
 
 const fields = {
   componentRef: z.string().trim().min(1, 'Give the reference as the schematic prints it, e.g. C30').max(20),
-  findingId: z.number().int().positive().nullable(),
+  findingId: bodyIdSchema.nullable(),
   originalPart: z.string().trim().max(200),
   originalRating: z.string().trim().max(100),
   replacementPart: z.string().trim().max(200),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { idSchema } from './ids';
 
 export const views = ['top', 'underside', 'rear', 'front', 'detail', 'schematic', 'other'] as const;
 export const phases = ['before', 'during', 'after'] as const;
@@ -55,4 +56,4 @@ export const photoSchema = z.object({
 });
 export type Photo = z.infer<typeof photoSchema>;
 
-export const photoParamsSchema = z.object({ id: z.coerce.number().int().positive('must be a positive whole number') });
+export const photoParamsSchema = z.object({ id: idSchema });

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { roles } from '../permissions';
+import { idSchema } from './ids';
 
 export const stages = ['intake', 'assessment', 'repair', 'testing', 'returned', 'on-hold'] as const;
 export const stageSchema = z.enum(stages);
@@ -117,4 +118,4 @@ export const restorationListQuerySchema = z.object({
   stage: stageSchema.optional(),
 });
 
-export const idParamsSchema = z.object({ id: z.coerce.number().int().positive('must be a positive whole number') });
+export const idParamsSchema = z.object({ id: idSchema });

@@ -27,6 +27,34 @@ describe('GET /api/health', () => {
   });
 });
 
+describe('GET /api/health when mail is down', () => {
+  it('when the mail server does not answer, then health says so but stays ready (200)', async () => {
+    const original = t.deps.mailer.probe;
+    t.deps.mailer.probe = async () => false;
+    try {
+      const res = await t.request().get('/api/health');
+      expect(res.status).toBe(200);
+      expect(res.body).toEqual({ ok: true, database: true, storage: true, mail: false });
+    } finally {
+      t.deps.mailer.probe = original;
+    }
+  });
+
+  it('when the database does not answer, then 503 whatever mail says', async () => {
+    const original = t.deps.db.execute;
+    t.deps.db.execute = (async () => {
+      throw new Error('connection refused');
+    }) as unknown as typeof original;
+    try {
+      const res = await t.request().get('/api/health');
+      expect(res.status).toBe(503);
+      expect(res.body).toMatchObject({ ok: false, database: false });
+    } finally {
+      t.deps.db.execute = original;
+    }
+  });
+});
+
 describe('unknown API routes', () => {
   it('when a route does not exist, then the answer is a 404 in the error shape', async () => {
     const res = await t.request().get('/api/no-such-thing');

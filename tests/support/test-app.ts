@@ -14,7 +14,11 @@ import { createTestDatabase } from './test-database';
 export const TEST_ORIGIN = 'http://gridleak.test';
 
 /** The real app on a fresh database, a real local S3 and a real SMTP capture, for one test file. */
-export async function startTestApp(config: Partial<AppDeps['config']> = {}, appOptions: Parameters<typeof createApp>[1] = {}) {
+export async function startTestApp(
+  config: Partial<AppDeps['config']> = {},
+  appOptions: Parameters<typeof createApp>[1] = {},
+  services: { logger?: AppDeps['logger'] } = {},
+) {
   const database = await createTestDatabase();
   const dir = mkdtempSync(path.join(os.tmpdir(), 'gridleak-s3-'));
   const s3 = await startS3StandIn(dir, 0, 'test-bucket');
@@ -24,13 +28,13 @@ export async function startTestApp(config: Partial<AppDeps['config']> = {}, appO
     pool: database.pool,
     storage: createStorage({ ...s3, region: 'us-east-1' }),
     mailer: createMailer(capture.url, 'Gridleak <no-reply@gridleak.test>'),
-    logger: pino({ level: 'silent' }),
+    logger: services.logger ?? pino({ level: 'silent' }),
     config: {
       publicOrigin: TEST_ORIGIN,
       sessionSecret: 'test-secret-test-secret-test-secret-0123',
       demo: false,
       devMail: true,
-      throttle: { ...defaultThrottle, signInPerAccount: 3, signInPerIp: 50, resetPerAccount: 2, resetPerIp: 50 },
+      throttle: { ...defaultThrottle, signInPerAccount: 3, signInPerIp: 50, resetPerAccount: 2, resetPerIp: 50, signUpPerIp: 500 },
       uploads: { maxBytes: 40 * 1024 * 1024, maxPixels: 100e6 },
       notificationWindowSeconds: 180,
       ...config,

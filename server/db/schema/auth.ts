@@ -34,6 +34,12 @@ export const accountTokens = pgTable(
     tokenHash: text().notNull().unique(),
     expiresAt: timestamp({ withTimezone: true, mode: 'date' }).notNull(),
     usedAt: timestamp({ withTimezone: true, mode: 'date' }),
+    /**
+     * For e-mail confirmation: the password hash and name chosen in the sign-up that sent this link.
+     * Confirming sets them, so a link signs in only the person who chose that password.
+     */
+    passwordHash: text(),
+    name: text(),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
   (t) => [index('account_tokens_user_id_idx').on(t.userId)],

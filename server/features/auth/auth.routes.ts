@@ -42,6 +42,7 @@ export function authRoutes(deps: AppDeps, passport: ReturnType<typeof createPass
 
   router.post('/auth/sign-up', validate(signUp), async (req, res) => {
     const { invitationToken, ...fields } = input(res, signUp).body;
+    await throttles.signUpAttempt(req.ip ?? 'unknown', fields.email.toLowerCase());
     if (invitationToken) await invitations.assertInvitedAddress(invitationToken, fields.email);
     const user = await auth.signUp(fields, Boolean(invitationToken));
     if (!user) return void res.status(202).json({ status: 'check-email' } satisfies SignUpResult);
@@ -60,17 +61,14 @@ export function authRoutes(deps: AppDeps, passport: ReturnType<typeof createPass
     const { email, remember } = input(res, signIn).body;
     const ip = req.ip ?? 'unknown';
     const account = email.toLowerCase();
-    await throttles.assertSignInAllowed(ip, account);
+    await throttles.signInAttempt(ip, account);
     const user = await new Promise<User | false>((resolve, reject) =>
       passport.authenticate('local', { session: false }, (err: unknown, u: User | false) => (err ? reject(err) : resolve(u)))(req, res, next),
     );
-    if (!user) {
-      await throttles.signInFailed(ip, account);
-      throw new UnauthorizedError('That e-mail and password do not match an account.');
-    }
+    if (!user) throw new UnauthorizedError('That e-mail and password do not match an account.');
+    await throttles.signInSucceeded(ip, account);
     if (!(await auth.isConfirmed(user.id)))
       throw new HttpError(403, 'email_unconfirmed', 'Confirm your e-mail address first: follow the link we sent you. Sign up again with the same address to get a new link.');
-    await throttles.signInSucceeded(account);
     await login(req, user, remember);
     res.json(user);
   });

@@ -1,56 +1,68 @@
 import { and, eq, isNull, sql } from 'drizzle-orm';
-import { PASSWORD_MIN } from '../../../shared/schemas/auth';
 import type { AppDeps } from '../../app-deps';
 import { sessions, users } from '../../db/schema';
-import { BadRequestError, HttpError } from '../../http/errors';
+import { HttpError } from '../../http/errors';
 import { accountTokensRepo } from './account-tokens';
 import { alreadyRegisteredMail, confirmEmailMail, passwordResetMail } from './auth.mail';
-import { hashPassword, isCommonPassword } from './password';
+import { assertStrongPassword } from './password-strength';
+import { hashPassword } from './password';
 import { publicUser, usersRepo } from './users.repo';
 
-export function assertStrongPassword(password: string) {
-  if (isCommonPassword(password))
-    throw new BadRequestError('That password is among the most common ones; choose another.', [
-      { location: 'body', path: 'password', message: `That password is among the most common ones; use ${PASSWORD_MIN}+ characters of your own.` },
-    ]);
-}
+export { assertStrongPassword };
 
 export function authService({ db, mailer, config }: AppDeps) {
   const repo = usersRepo(db);
-  const tokens = accountTokensRepo(db);
   const link = (path: string) => `${config.publicOrigin}${path}`;
-  const sendConfirmation = async (user: { id: number; email: string; name: string }) => {
-    const token = await tokens.issue(user.id, 'email-confirm');
-    await mailer.send(confirmEmailMail(user.email, user.name, link(`/confirm-email/${token}`)));
-  };
 
   return {
     /**
      * Creates an account. The answer does not say whether the address was taken: a new account gets a
      * confirmation link, an existing one a reminder. `confirmed` accounts (invitations) skip the link.
+     * Every branch hashes the password and sends one message, so the time taken does not tell either.
+     * An unconfirmed account takes the latest sign-up's name and password (anyone may have started it),
+     * and its link is bound to them: confirming signs in only the person who chose that password.
      */
     async signUp(input: { name: string; email: string; password: string }, confirmed: boolean) {
-      assertStrongPassword(input.password);
+      assertStrongPassword(input.password, [input.email, input.name]);
+      const passwordHash = await hashPassword(input.password);
       const existing = await repo.byEmail(input.email);
-      if (existing) {
+      if (existing?.emailConfirmedAt) {
         if (confirmed) throw new HttpError(409, 'conflict', 'This address already has an account: sign in to accept the invitation.');
-        if (existing.emailConfirmedAt) await mailer.send(alreadyRegisteredMail(existing.email, link('/sign-in'), link('/reset-password')));
-        else await sendConfirmation(existing);
+        await mailer.send(alreadyRegisteredMail(existing.email, link('/sign-in'), link('/reset-password')));
         return undefined;
       }
-      const user = await repo.insert({ ...input, passwordHash: await hashPassword(input.password) });
-      if (confirmed) {
-        await db.update(users).set({ emailConfirmedAt: new Date() }).where(eq(users.id, user.id));
-        return publicUser(user);
-      }
-      await sendConfirmation(user);
+      const choice = { passwordHash, name: input.name };
+      const emailConfirmedAt = confirmed ? new Date() : null;
+      const { user, token } = await db.transaction(async (tx) => {
+        const tokens = accountTokensRepo(tx);
+        const row = existing
+          ? (await tx.update(users).set({ ...choice, emailConfirmedAt }).where(eq(users.id, existing.id)).returning())[0]!
+          : await usersRepo(tx).insert({ ...input, passwordHash, emailConfirmedAt });
+        // An invitation proves the address: links sent to earlier, unconfirmed sign-ups die with them.
+        if (confirmed) await tokens.spendAll(row.id);
+        return { user: row, token: confirmed ? undefined : await tokens.issue(row.id, 'email-confirm', choice) };
+      });
+      if (!token) return publicUser(user);
+      await mailer.send(confirmEmailMail(user.email, input.name, link(`/confirm-email/${token}`)));
       return undefined;
     },
 
+    /** Confirms the address with the password and name of the sign-up that sent the link; every other link goes. */
     async confirmEmail(token: string) {
-      const userId = await tokens.spend(token, 'email-confirm');
+      const userId = await db.transaction(async (tx) => {
+        const tokens = accountTokensRepo(tx);
+        const spent = await tokens.spend(token, 'email-confirm');
+        if (!spent) return undefined;
+        const [row] = await tx
+          .update(users)
+          .set({ emailConfirmedAt: new Date(), ...(spent.choice ?? {}) })
+          .where(and(eq(users.id, spent.userId), isNull(users.emailConfirmedAt)))
+          .returning({ id: users.id });
+        if (!row) return undefined; // already confirmed another way: this link no longer speaks for the account
+        await tokens.spendAll(spent.userId);
+        return spent.userId;
+      });
       if (!userId) throw new HttpError(410, 'gone', 'This confirmation link has expired or was already used.');
-      await db.update(users).set({ emailConfirmedAt: new Date() }).where(and(eq(users.id, userId), isNull(users.emailConfirmedAt)));
       return publicUser((await repo.byId(userId))!);
     },
 
@@ -62,19 +74,28 @@ export function authService({ db, mailer, config }: AppDeps) {
     async requestReset(email: string) {
       const user = await repo.byEmail(email);
       if (!user) return;
-      const token = await tokens.issue(user.id, 'password-reset');
+      const token = await accountTokensRepo(db).issue(user.id, 'password-reset');
       await mailer.send(passwordResetMail(user.email, link(`/reset-password/${token}`)));
     },
 
-    /** Sets the new password and ends every other session of the account. */
+    /** Sets the new password, spends every other link and ends every session of the account, together. */
     async confirmReset(token: string, password: string) {
       assertStrongPassword(password);
-      const userId = await tokens.spend(token, 'password-reset');
+      const passwordHash = await hashPassword(password);
+      const userId = await db.transaction(async (tx) => {
+        const tokens = accountTokensRepo(tx);
+        const spent = await tokens.spend(token, 'password-reset');
+        if (!spent) return undefined;
+        // A reset link proves the address too.
+        await tx
+          .update(users)
+          .set({ passwordHash, emailConfirmedAt: sql`coalesce(${users.emailConfirmedAt}, now())` })
+          .where(eq(users.id, spent.userId));
+        await tokens.spendAll(spent.userId);
+        await tx.delete(sessions).where(sql`(${sessions.sess}->'passport'->>'user')::int = ${spent.userId}`);
+        return spent.userId;
+      });
       if (!userId) throw new HttpError(410, 'gone', 'This reset link has expired or was already used; ask for a new one.');
-      await repo.setPassword(userId, await hashPassword(password));
-      // A reset link proves the address too.
-      await db.update(users).set({ emailConfirmedAt: new Date() }).where(and(eq(users.id, userId), isNull(users.emailConfirmedAt)));
-      await db.delete(sessions).where(sql`(${sessions.sess}->'passport'->>'user')::int = ${userId}`);
       return publicUser((await repo.byId(userId))!);
     },
   };

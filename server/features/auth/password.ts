@@ -1,5 +1,4 @@
 import argon2 from 'argon2';
-import { dictionary } from '@zxcvbn-ts/language-common';
 
 /**
  * argon2id with OWASP's recommended floor (m = 19 MiB, t = 2, p = 1): about 30–60 ms here,
@@ -21,10 +20,3 @@ export async function verifyPassword(hash: string | null, password: string): Pro
 }
 
 const dummyHash = argon2.hash('no account has this password', ARGON2_OPTIONS);
-
-const common = new Set((dictionary['passwords-common'] as string[]).map((p) => p.toLowerCase()));
-
-/** True for the most common passwords (the zxcvbn-ts common list, about 49,000 entries). */
-export function isCommonPassword(password: string): boolean {
-  return common.has(password.toLowerCase());
-}

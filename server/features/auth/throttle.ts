@@ -9,6 +9,9 @@ export interface ThrottleConfig {
   /** Reset e-mails allowed per account, and per IP, in `windowSeconds`. */
   resetPerAccount: number;
   resetPerIp: number;
+  /** Sign-ups allowed per address, and per IP, in `windowSeconds` (default 5 and 30, like sign-in). */
+  signUpPerAccount?: number;
+  signUpPerIp?: number;
   windowSeconds: number;
 }
 
@@ -17,6 +20,8 @@ export const defaultThrottle: ThrottleConfig = {
   signInPerIp: 30,
   resetPerAccount: 3,
   resetPerIp: 10,
+  signUpPerAccount: 5,
+  signUpPerIp: 30,
   windowSeconds: 15 * 60,
 };
 
@@ -37,34 +42,34 @@ export function createThrottles(pool: pg.Pool, config: ThrottleConfig) {
   const signInIp = limiter('sign-in-ip', config.signInPerIp);
   const resetAccount = limiter('reset-account', config.resetPerAccount);
   const resetIp = limiter('reset-ip', config.resetPerIp);
+  const signUpAccount = limiter('sign-up-account', config.signUpPerAccount ?? defaultThrottle.signUpPerAccount!);
+  const signUpIp = limiter('sign-up-ip', config.signUpPerIp ?? defaultThrottle.signUpPerIp!);
 
-  const blocked = async (l: RateLimiterPostgres, key: string) => {
-    const res = await l.get(key);
-    return res !== null && res.consumedPoints >= l.points;
-  };
-  const consume = async (l: RateLimiterPostgres, key: string) => {
-    try {
-      await l.consume(key);
-    } catch (err) {
-      if (!(err instanceof RateLimiterRes)) throw err;
-    }
+  /** Takes a point from each counter (one atomic upsert each); 429 when any is spent. */
+  const take = async (...counters: [RateLimiterPostgres, string][]) => {
+    const results = await Promise.allSettled(counters.map(([l, key]) => l.consume(key)));
+    for (const r of results) if (r.status === 'rejected' && !(r.reason instanceof RateLimiterRes)) throw r.reason;
+    if (results.some((r) => r.status === 'rejected')) throw new TooManyRequestsError();
   };
 
   return {
-    /** Refuses before checking the password when either counter is spent. */
-    async assertSignInAllowed(ip: string, email: string) {
-      if ((await blocked(signInIp, ip)) || (await blocked(signInAccount, email))) throw new TooManyRequestsError();
+    /**
+     * Counts the attempt before the password is checked, so parallel guesses cannot all slip under the
+     * limit while their hashes are being verified; a right password gives the points back.
+     */
+    async signInAttempt(ip: string, email: string) {
+      await take([signInIp, ip], [signInAccount, email]);
     },
-    async signInFailed(ip: string, email: string) {
-      await Promise.all([consume(signInIp, ip), consume(signInAccount, email)]);
+    async signInSucceeded(ip: string, email: string) {
+      await Promise.all([signInAccount.delete(email), signInIp.reward(ip, 1)]);
     },
-    async signInSucceeded(email: string) {
-      await signInAccount.delete(email);
+    /** Every sign-up counts, whether or not the address has an account. */
+    async signUpAttempt(ip: string, email: string) {
+      await take([signUpIp, ip], [signUpAccount, email]);
     },
     /** Counts every reset request; the answer stays the same whether or not the account exists. */
     async resetRequested(ip: string, email: string) {
-      if ((await blocked(resetIp, ip)) || (await blocked(resetAccount, email))) throw new TooManyRequestsError();
-      await Promise.all([consume(resetIp, ip), consume(resetAccount, email)]);
+      await take([resetIp, ip], [resetAccount, email]);
     },
   };
 }

@@ -4,7 +4,8 @@ import { users } from '../../db/schema';
 
 export type UserRow = typeof users.$inferSelect;
 
-export function usersRepo(db: Database) {
+/** Works on the database or inside a transaction. */
+export function usersRepo(db: Pick<Database, 'select' | 'insert' | 'update'>) {
   return {
     async byEmail(email: string): Promise<UserRow | undefined> {
       const [row] = await db.select().from(users).where(sql`lower(${users.email}) = lower(${email})`);
@@ -14,7 +15,7 @@ export function usersRepo(db: Database) {
       const [row] = await db.select().from(users).where(eq(users.id, id));
       return row;
     },
-    async insert(values: { name: string; email: string; passwordHash: string }): Promise<UserRow> {
+    async insert(values: { name: string; email: string; passwordHash: string; emailConfirmedAt?: Date | null }): Promise<UserRow> {
       const [row] = await db.insert(users).values(values).returning();
       return row!;
     },

@@ -3,7 +3,7 @@ import { geometrySchema, type Finding, type FindingChange, type FindingInput, ty
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
-import { ensureCloseup } from '../closeups/closeups';
+import { ensureCloseup, scheduleCloseup } from '../closeups/closeups';
 import { notificationsService } from '../notifications/notifications.service';
 import { photosRepo } from '../photos/photos.repo';
 import { photoFindingsJson } from './findings-json';
@@ -59,7 +59,9 @@ export function findingsService(deps: AppDeps) {
         ownerVisible: input.ownerVisible, authorId: actor.id,
       });
       await recordEvent(deps.db, { restorationId: photo.restorationId, kind: 'finding-opened', actorId: actor.id, findingId: id, photoId });
-      return toFinding((await repo.find(id, actor.role))!);
+      const created = (await repo.find(id, actor.role))!;
+      scheduleCloseup(deps, photo, created);
+      return toFinding(created);
     },
     /** Each field asks the policy; the change is recorded with who made it. */
     async update(id: number, patch: FindingPatch, actor: Actor) {
@@ -91,6 +93,7 @@ export function findingsService(deps: AppDeps) {
       if (changes.status) await recordEvent(deps.db, { ...event, kind: 'finding-status', data: { from: f.status, to: updated.status } });
       if (changes.questionOpen) await recordEvent(deps.db, { ...event, kind: questionOpen ? 'question-asked' : 'question-resolved' });
       if (questionOpen === true && !f.questionOpen) await notifications.questionAsked(updated, actor);
+      if (changes.shape || changes.points) scheduleCloseup(deps, (await photos.find(f.photoId))!, updated);
       return toFinding(updated);
     },
     async remove(id: number, actor: Actor) {
@@ -101,7 +104,7 @@ export function findingsService(deps: AppDeps) {
     async closeupUrl(id: number, role: Role) {
       const f = await visible(id, role);
       const photo = (await photos.find(f.photoId))!;
-      return deps.storage.getSignedUrl(await ensureCloseup(deps.storage, photo, f));
+      return deps.storage.getSignedUrl(await ensureCloseup(deps, photo, f));
     },
     async history(id: number, role: Role): Promise<FindingChange[]> {
       await visible(id, role);

@@ -7,12 +7,13 @@ import { guard, requireUser } from '../../http/guard';
 import { input, validate } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
 import { membersService } from './members.service';
+import { idSchema } from '../../../shared/schemas/ids';
 
 const one = { params: idParamsSchema };
 const member = { params: memberParamsSchema };
 const rolePatch = { params: memberParamsSchema, body: memberPatchSchema };
 const invite = { params: idParamsSchema, body: invitationInputSchema };
-const invitation = { params: z.object({ id: z.coerce.number().int().positive(), invitationId: z.coerce.number().int().positive() }) };
+const invitation = { params: z.object({ id: idSchema, invitationId: idSchema }) };
 
 /** People on a restoration: members, roles and pending invitations. */
 export function membersRoutes(deps: AppDeps): Router {

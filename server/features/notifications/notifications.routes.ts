@@ -7,8 +7,9 @@ import { findings, memberships, restorations } from '../../db/schema';
 import { requireUser } from '../../http/guard';
 import { input, validate } from '../../http/validate';
 import { notificationsService } from './notifications.service';
+import { bodyIdSchema } from '../../../shared/schemas/ids';
 
-const read = { body: z.object({ ids: z.array(z.number().int().positive()).max(500).optional() }) };
+const read = { body: z.object({ ids: z.array(bodyIdSchema).max(500).optional() }) };
 
 /** The signed-in person's unread items and the open questions waiting on their bench. */
 export function notificationsRoutes(deps: AppDeps): Router {

@@ -19,7 +19,16 @@ const columns = [
   ['Warnings', (p: Part) => p.warnings.map((w) => w.message).join(' | ')],
 ] as const;
 
+/**
+ * A cell a spreadsheet would run as a formula (=, +, -, @, tab or carriage return first) gets a leading
+ * single quote, which spreadsheets show as text, and every text cell is quoted: OWASP's CSV injection guidance.
+ */
+export function neutraliseFormula(cell: string): string {
+  return /^[=+\-@\t\r]/.test(cell) ? `'${cell}` : cell;
+}
+
 /** The ledger as CSV (RFC 4180 quoting by csv-stringify), with a byte-order mark so spreadsheets read UTF-8. */
 export function partsCsv(list: Part[]): string {
-  return stringify([columns.map(([h]) => h), ...list.map((p) => columns.map(([, get]) => get(p)))], { bom: true, record_delimiter: 'windows' });
+  const rows = [columns.map(([h]) => h), ...list.map((p) => columns.map(([, get]) => get(p)))];
+  return stringify(rows.map((row) => row.map(neutraliseFormula)), { bom: true, record_delimiter: 'windows', quoted_string: true });
 }

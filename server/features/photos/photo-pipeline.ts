@@ -26,6 +26,8 @@ export interface ProcessedPhoto {
 sharp.cache(false);
 /** At most two decodes at a time per instance: a burst of uploads queues instead of exhausting memory. */
 const decodeSlots = pLimit(2);
+/** Runs image work in one of the same two decode slots uploads use (close-ups share them). */
+export const withDecodeSlot = <T>(work: () => Promise<T>) => decodeSlots(work);
 
 const unsupported = () =>
   new HttpError(415, 'unsupported_type', 'That file is not a photo Gridleak can read: send JPEG, PNG, WebP or AVIF (HEIC may need exporting as JPEG).');

@@ -23,9 +23,12 @@ export function photosRoutes(deps: AppDeps): Router {
   // Permission is settled before a byte of the body is read.
   router.post('/restorations/:id/photos', requireUser, validate(one), guard(db, 'photos.upload'), async (req, res) => {
     const restorationId = input(res, one).params.id;
+    // The client hanging up before the answer cancels the work: an abandoned upload is not stored.
+    const abandoned = new AbortController();
+    res.once('close', () => !res.writableFinished && abandoned.abort());
     const upload = await receiveUpload(req, deps.config.uploads.maxBytes);
     try {
-      const id = await service.ingest(restorationId, upload, upload.fields, req.user!.id);
+      const id = await service.ingest(restorationId, upload, upload.fields, req.user!.id, abandoned.signal);
       res.status(201).json(await service.get(id, roleOf(res)));
     } finally {
       await upload.discard();

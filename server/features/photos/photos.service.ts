@@ -55,16 +55,19 @@ export function photosService({ db, storage, config }: PhotosDeps) {
      * Checks and stores one uploaded file. Objects go up first, the row last; on any failure the
      * objects already stored are deleted, so a failed upload leaves neither.
      */
-    async ingest(restorationId: number, file: { path: string; size: number }, rawFields: Record<string, unknown>, uploadedById: number | null) {
+    async ingest(restorationId: number, file: { path: string; size: number }, rawFields: Record<string, unknown>, uploadedById: number | null, signal?: AbortSignal) {
       const fields = photoUploadFieldsSchema.safeParse(rawFields);
       if (!fields.success) throw new BadRequestError(fields.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
       const processed = await processPhoto(file.path, { maxPixels: config.uploads.maxPixels });
       const storageKey = `${restorationId}/${randomUUID()}`;
       const keys = photoKeys(storageKey);
       try {
-        await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size);
-        await storage.putObject(keys.display, processed.display, 'image/webp');
-        await storage.putObject(keys.thumb, processed.thumb, 'image/webp');
+        // A client that gave up (closed the connection) gets nothing stored: the signal aborts the puts.
+        signal?.throwIfAborted();
+        await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size, { signal });
+        await storage.putObject(keys.display, processed.display, 'image/webp', undefined, { signal });
+        await storage.putObject(keys.thumb, processed.thumb, 'image/webp', undefined, { signal });
+        signal?.throwIfAborted();
         const id = await repo.insert({
           restorationId, storageKey, ...fields.data, width: processed.width, height: processed.height,
           takenAt: processed.takenAt, contentType: processed.contentType, sizeBytes: file.size, uploadedById,
@@ -73,6 +76,7 @@ export function photosService({ db, storage, config }: PhotosDeps) {
         return id;
       } catch (err) {
         await deletePhotoObjects(storage, storageKey).catch(() => {});
+        if (signal?.aborted) throw new BadRequestError('The upload was cancelled before it was stored.');
         throw err;
       }
     },

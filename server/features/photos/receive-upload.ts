@@ -1,12 +1,10 @@
-import { randomUUID } from 'node:crypto';
 import { createWriteStream } from 'node:fs';
 import { rm } from 'node:fs/promises';
-import os from 'node:os';
-import path from 'node:path';
 import { pipeline } from 'node:stream/promises';
 import busboy from 'busboy';
 import type { Request } from 'express';
 import { BadRequestError, HttpError } from '../../http/errors';
+import { uploadTempPath } from './upload-temp';
 
 export interface ReceivedUpload {
   /** Temporary file holding the bytes; call `discard()` when done with it. */
@@ -22,8 +20,9 @@ export interface ReceivedUpload {
  */
 export function receiveUpload(req: Request, maxBytes: number): Promise<ReceivedUpload> {
   if (!req.is('multipart/form-data')) return Promise.reject(new BadRequestError('Send the photo as multipart/form-data with the image in the field "file".'));
-  const tmp = path.join(os.tmpdir(), `gridleak-upload-${randomUUID()}`);
-  const discard = () => rm(tmp, { force: true });
+  const temp = uploadTempPath();
+  const tmp = temp.path;
+  const discard = () => rm(tmp, { force: true }).then(temp.release);
   return new Promise<ReceivedUpload>((resolve, reject) => {
     const fields: Record<string, string> = {};
     let file: Promise<number> | undefined;

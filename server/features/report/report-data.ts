@@ -11,7 +11,8 @@ type PhotoRow = typeof photos.$inferSelect;
  * Everything the hand-back report shows, read as the owner would see it: only photos, findings and
  * readings shared with them. The report is the owner's document, whoever downloads it.
  */
-export async function reportData({ db, storage }: Pick<AppDeps, 'db' | 'storage'>, restorationId: number) {
+export async function reportData(deps: Pick<AppDeps, 'db' | 'storage' | 'config'>, restorationId: number) {
+  const { db, storage } = deps;
   const [set] = await db.select().from(restorations).where(eq(restorations.id, restorationId));
   if (!set) return undefined;
   // The owner's view, by the one rule in shared/permissions.ts.
@@ -44,7 +45,7 @@ export async function reportData({ db, storage }: Pick<AppDeps, 'db' | 'storage'
   const repaired = await Promise.all(
     visibleFindings
       .filter((f) => f.status === 'repaired' || f.status === 'verified')
-      .map(async (f) => ({ finding: f, closeup: await image(await ensureCloseup(storage, sharedPhotos.find((p) => p.id === f.photoId)!, f)) })),
+      .map(async (f) => ({ finding: f, closeup: await image(await ensureCloseup(deps, sharedPhotos.find((p) => p.id === f.photoId)!, f)) })),
   );
   const cover = sharedPhotos.find((p) => p.phase === 'after') ?? sharedPhotos[0];
   return {

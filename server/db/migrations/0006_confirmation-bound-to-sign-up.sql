@@ -1,0 +1,2 @@
+ALTER TABLE "account_tokens" ADD COLUMN "password_hash" text;--> statement-breakpoint
+ALTER TABLE "account_tokens" ADD COLUMN "name" text;

@@ -1,0 +1,30 @@
+import { parse } from 'csv-parse/sync';
+import { describe, expect, it } from 'vitest';
+import type { Part } from '../../../shared/schemas/parts';
+import { neutraliseFormula, partsCsv } from './parts-csv';
+
+describe('CSV formula neutralising', () => {
+  // OWASP, "CSV Injection": cells beginning with =, +, -, @, tab (0x09) or carriage return (0x0D) are
+  // prefixed with a single quote so a spreadsheet shows them as text instead of evaluating them.
+  it.each(['=1+1', '+1 555 0100', '-2+3', '@SUM(A1:A2)', '\t=1+1', '\r=1+1', '=HYPERLINK("http://x.test","y")'])(
+    'when a cell is %j, then it gets a leading quote',
+    (cell) => expect(neutraliseFormula(cell)).toBe(`'${cell}`),
+  );
+
+  it.each(['C30', '47µF 450V', 'Film 0.047µF 630V', '', ' =not first', "'already quoted", '1.85'])(
+    'when a cell is %j, then it is left alone',
+    (cell) => expect(neutraliseFormula(cell)).toBe(cell),
+  );
+
+  it('when the ledger is exported, then every cell goes through it and the file still parses', () => {
+    const part = {
+      id: 1, restorationId: 1, findingId: null, componentRef: 'R1', action: 'replaced', state: 'fitted', originalPart: '=cmd|calc',
+      originalRating: '', replacementPart: '', replacementRating: '', mainsPosition: 'none', quantity: 1, costMinor: null,
+      source: '@evil', testedAfter: '', notes: '\tnote', fittedAt: null, warnings: [],
+    } as unknown as Part;
+    const [row] = parse(partsCsv([part]), { bom: true, columns: true }) as Record<string, string>[];
+    expect(row!['Original part']).toBe("'=cmd|calc");
+    expect(row!.Source).toBe("'@evil");
+    expect(row!.Notes).toBe("'\tnote");
+  });
+});
