@@ -1,5 +1,5 @@
 import { and, eq, gt, isNull } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { accountTokens } from '../../db/schema';
 import { hashToken, newToken } from './tokens';
 
@@ -10,7 +10,7 @@ const LIFETIME_MS: Record<Purpose, number> = {
   'email-confirm': 3 * 24 * 60 * 60 * 1000,
 };
 
-export function accountTokensRepo(db: Database) {
+export function accountTokensRepo(db: Executor) {
   return {
     async issue(userId: number, purpose: Purpose): Promise<string> {
       const { token, hash } = newToken();

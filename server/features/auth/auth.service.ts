@@ -1,6 +1,8 @@
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import { PASSWORD_MIN } from '../../../shared/schemas/auth';
 import type { AppDeps } from '../../app-deps';
+import type { Executor, Tx } from '../../db/client';
+import { sendOrRollBack } from '../../mail';
 import { sessions, users } from '../../db/schema';
 import { BadRequestError, HttpError } from '../../http/errors';
 import { accountTokensRepo } from './account-tokens';
@@ -19,39 +21,49 @@ export function authService({ db, mailer, config }: AppDeps) {
   const repo = usersRepo(db);
   const tokens = accountTokensRepo(db);
   const link = (path: string) => `${config.publicOrigin}${path}`;
-  const sendConfirmation = async (user: { id: number; email: string; name: string }) => {
-    const token = await tokens.issue(user.id, 'email-confirm');
-    await mailer.send(confirmEmailMail(user.email, user.name, link(`/confirm-email/${token}`)));
+  const sendConfirmation = async (tx: Executor, user: { id: number; email: string; name: string }) => {
+    const token = await accountTokensRepo(tx).issue(user.id, 'email-confirm');
+    await sendOrRollBack(mailer, confirmEmailMail(user.email, user.name, link(`/confirm-email/${token}`)));
   };
 
   return {
     /**
      * Creates an account. The answer does not say whether the address was taken: a new account gets a
-     * confirmation link, an existing one a reminder. `confirmed` accounts (invitations) skip the link.
+     * confirmation link, an existing one a reminder. An invitation sign-up (`join`) skips the link and joins
+     * the restoration in the same transaction: if joining fails, no account stays and the link still works.
+     * All in one transaction with the e-mail as its last step: when the mail server is down, nothing is
+     * created and the answer is 503.
      */
-    async signUp(input: { name: string; email: string; password: string }, confirmed: boolean) {
+    async signUp<J>(input: { name: string; email: string; password: string }, join?: (tx: Tx, user: ReturnType<typeof publicUser>) => Promise<J>) {
       assertStrongPassword(input.password);
-      const existing = await repo.byEmail(input.email);
-      if (existing) {
-        if (confirmed) throw new HttpError(409, 'conflict', 'This address already has an account: sign in to accept the invitation.');
-        if (existing.emailConfirmedAt) await mailer.send(alreadyRegisteredMail(existing.email, link('/sign-in'), link('/reset-password')));
-        else await sendConfirmation(existing);
+      const passwordHash = await hashPassword(input.password);
+      return db.transaction(async (tx) => {
+        const inTx = usersRepo(tx);
+        const existing = await inTx.byEmail(input.email);
+        if (existing) {
+          if (join) throw new HttpError(409, 'conflict', 'This address already has an account: sign in to accept the invitation.');
+          if (existing.emailConfirmedAt) await sendOrRollBack(mailer, alreadyRegisteredMail(existing.email, link('/sign-in'), link('/reset-password')));
+          else await sendConfirmation(tx, existing);
+          return undefined;
+        }
+        const user = await inTx.insert({ ...input, passwordHash });
+        if (join) {
+          await tx.update(users).set({ emailConfirmedAt: new Date() }).where(eq(users.id, user.id));
+          const joined = await join(tx, publicUser(user));
+          return { user: publicUser(user), joined };
+        }
+        await sendConfirmation(tx, user);
         return undefined;
-      }
-      const user = await repo.insert({ ...input, passwordHash: await hashPassword(input.password) });
-      if (confirmed) {
-        await db.update(users).set({ emailConfirmedAt: new Date() }).where(eq(users.id, user.id));
-        return publicUser(user);
-      }
-      await sendConfirmation(user);
-      return undefined;
+      });
     },
 
     async confirmEmail(token: string) {
-      const userId = await tokens.spend(token, 'email-confirm');
-      if (!userId) throw new HttpError(410, 'gone', 'This confirmation link has expired or was already used.');
-      await db.update(users).set({ emailConfirmedAt: new Date() }).where(and(eq(users.id, userId), isNull(users.emailConfirmedAt)));
-      return publicUser((await repo.byId(userId))!);
+      return db.transaction(async (tx) => {
+        const userId = await accountTokensRepo(tx).spend(token, 'email-confirm');
+        if (!userId) throw new HttpError(410, 'gone', 'This confirmation link has expired or was already used.');
+        await tx.update(users).set({ emailConfirmedAt: new Date() }).where(and(eq(users.id, userId), isNull(users.emailConfirmedAt)));
+        return publicUser((await usersRepo(tx).byId(userId))!);
+      });
     },
 
     async isConfirmed(userId: number) {
@@ -66,16 +78,19 @@ export function authService({ db, mailer, config }: AppDeps) {
       await mailer.send(passwordResetMail(user.email, link(`/reset-password/${token}`)));
     },
 
-    /** Sets the new password and ends every other session of the account. */
+    /** Sets the new password and ends every other session of the account, together or not at all. */
     async confirmReset(token: string, password: string) {
       assertStrongPassword(password);
-      const userId = await tokens.spend(token, 'password-reset');
-      if (!userId) throw new HttpError(410, 'gone', 'This reset link has expired or was already used; ask for a new one.');
-      await repo.setPassword(userId, await hashPassword(password));
-      // A reset link proves the address too.
-      await db.update(users).set({ emailConfirmedAt: new Date() }).where(and(eq(users.id, userId), isNull(users.emailConfirmedAt)));
-      await db.delete(sessions).where(sql`(${sessions.sess}->'passport'->>'user')::int = ${userId}`);
-      return publicUser((await repo.byId(userId))!);
+      const passwordHash = await hashPassword(password);
+      return db.transaction(async (tx) => {
+        const userId = await accountTokensRepo(tx).spend(token, 'password-reset');
+        if (!userId) throw new HttpError(410, 'gone', 'This reset link has expired or was already used; ask for a new one.');
+        await usersRepo(tx).setPassword(userId, passwordHash);
+        // A reset link proves the address too.
+        await tx.update(users).set({ emailConfirmedAt: new Date() }).where(and(eq(users.id, userId), isNull(users.emailConfirmedAt)));
+        await tx.delete(sessions).where(sql`(${sessions.sess}->'passport'->>'user')::int = ${userId}`);
+        return publicUser((await usersRepo(tx).byId(userId))!);
+      });
     },
   };
 }

@@ -1,10 +1,10 @@
 import { eq, sql } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { users } from '../../db/schema';
 
 export type UserRow = typeof users.$inferSelect;
 
-export function usersRepo(db: Database) {
+export function usersRepo(db: Executor) {
   return {
     async byEmail(email: string): Promise<UserRow | undefined> {
       const [row] = await db.select().from(users).where(sql`lower(${users.email}) = lower(${email})`);

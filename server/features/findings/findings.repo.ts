@@ -1,12 +1,12 @@
 import { asc, desc, eq, max, sql } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { comments, findingChanges, findings, photos, restorations, users } from '../../db/schema';
 
 export type FindingRow = typeof findings.$inferSelect;
 export type FindingWithContext = FindingRow & { authorName: string | null; photoOwnerVisible: boolean; commentCount: number };
 type NewFinding = Omit<typeof findings.$inferInsert, 'number' | 'id'>;
 
-export function findingsRepo(db: Database) {
+export function findingsRepo(db: Executor) {
   const commentCount = sql<number>`(select count(*)::int from ${comments} where ${comments.findingId} = ${findings.id} and ${comments.deletedAt} is null)`;
   const select = () =>
     db

@@ -1,10 +1,10 @@
 import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { findings, memberships, notifications } from '../../db/schema';
 
 export type NewNotification = typeof notifications.$inferInsert;
 
-export function notificationsRepo(db: Database) {
+export function notificationsRepo(db: Executor) {
   return {
     async insert(rows: NewNotification[]) {
       if (rows.length) await db.insert(notifications).values(rows);

@@ -1,5 +1,5 @@
 import { asc, eq, inArray } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { photos, users } from '../../db/schema';
 
 export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null };
@@ -7,7 +7,7 @@ type NewPhoto = typeof photos.$inferInsert;
 
 const columns = { photo: photos, uploadedBy: users.name };
 
-export function photosRepo(db: Database) {
+export function photosRepo(db: Executor) {
   const select = () => db.select(columns).from(photos).leftJoin(users, eq(users.id, photos.uploadedById));
   const flat = (r: { photo: typeof photos.$inferSelect; uploadedBy: string | null }): PhotoRow => ({ ...r.photo, uploadedBy: r.uploadedBy });
   return {

@@ -65,12 +65,15 @@ export function photosService({ db, storage, config }: PhotosDeps) {
         await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size);
         await storage.putObject(keys.display, processed.display, 'image/webp');
         await storage.putObject(keys.thumb, processed.thumb, 'image/webp');
-        const id = await repo.insert({
-          restorationId, storageKey, ...fields.data, width: processed.width, height: processed.height,
-          takenAt: processed.takenAt, contentType: processed.contentType, sizeBytes: file.size, uploadedById,
+        // The row and its history line together: if either fails, neither stays and the objects go below.
+        return await db.transaction(async (tx) => {
+          const id = await photosRepo(tx).insert({
+            restorationId, storageKey, ...fields.data, width: processed.width, height: processed.height,
+            takenAt: processed.takenAt, contentType: processed.contentType, sizeBytes: file.size, uploadedById,
+          });
+          await recordEvent(tx, { restorationId, kind: 'photo-added', actorId: uploadedById, photoId: id, data: { view: fields.data.view, phase: fields.data.phase } });
+          return id;
         });
-        await recordEvent(db, { restorationId, kind: 'photo-added', actorId: uploadedById, photoId: id, data: { view: fields.data.view, phase: fields.data.phase } });
-        return id;
       } catch (err) {
         await deletePhotoObjects(storage, storageKey).catch(() => {});
         throw err;
