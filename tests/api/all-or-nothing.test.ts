@@ -51,12 +51,13 @@ describe('when the history line of a change cannot be written, the change is not
 
   it('then asking the mentors leaves no open question when their notifications cannot be written', async () => {
     const { id } = (await newFinding('Hum at full volume')).body as { id: number };
+    const asked = await eventsOf('question-asked');
     const res = await whileFailing(t.db, 'notifications', 'insert', () => tech.patch(`/api/findings/${id}`).send({ questionOpen: true }));
     expect(res.status).toBe(500);
     const [row] = await t.db.select().from(findings).where(eq(findings.id, id));
     expect(row!.questionOpen).toBe(false);
     expect(await rows(findingChanges, eq(findingChanges.findingId, id))).toBe(0);
-    expect(await eventsOf('question-asked')).toBe(0);
+    expect(await eventsOf('question-asked')).toBe(asked);
   });
 
   it('then a comment whose notifications cannot be written is not stored', async () => {
@@ -106,10 +107,11 @@ describe('when the history line of a change cannot be written, the change is not
   });
 
   it('then a stage change leaves the restoration at its stage', async () => {
-    const res = await whileFailing(t.db, 'events', 'insert', () => tech.patch(`/api/restorations/${restorationId}`).send({ stage: 'repair' }));
+    const stageNow = async () => (await t.db.select().from(restorations).where(eq(restorations.id, restorationId)))[0]!.stage;
+    const [stage, changes] = [await stageNow(), await eventsOf('stage-changed')];
+    const res = await whileFailing(t.db, 'events', 'insert', () => tech.patch(`/api/restorations/${restorationId}`).send({ stage: stage === 'repair' ? 'testing' : 'repair' }));
     expect(res.status).toBe(500);
-    const [row] = await t.db.select().from(restorations).where(eq(restorations.id, restorationId));
-    expect(row!.stage).toBe('intake');
-    expect(await eventsOf('stage-changed')).toBe(0);
+    expect(await stageNow()).toBe(stage);
+    expect(await eventsOf('stage-changed')).toBe(changes);
   });
 });
