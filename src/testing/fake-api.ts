@@ -33,15 +33,18 @@ export function toResponse(reply: Reply): Response {
 
 /**
  * Stands in for the API behind `fetch`: `answer` gets each call (path without /api) and returns the reply, or
- * nothing for the server's 404. Every call is recorded so tests can check what was sent.
+ * nothing for the server's 404. Every call and its headers are recorded so tests can check what was sent.
  */
 export function fakeApi(answer: (call: Call) => Reply | undefined | Promise<Reply | undefined>) {
   const calls: Call[] = [];
+  /** The request headers of each call, in the same order as `calls`. */
+  const headers: Record<string, string>[] = [];
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
     const call = { method: init.method ?? 'GET', path: String(input).replace(/^\/api/, ''), body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined };
     calls.push(call);
+    headers.push(Object.fromEntries([...new Headers(init.headers).entries()].map(([k, v]) => [k.toLowerCase(), v])));
     return toResponse((await answer(call)) ?? notFound());
   });
   vi.stubGlobal('fetch', fetchMock);
-  return { calls, fetchMock };
+  return { calls, headers, fetchMock };
 }
