@@ -3,6 +3,10 @@ import pg from 'pg';
 import * as schema from './schema';
 
 export type Database = NodePgDatabase<typeof schema>;
+/** An open transaction: what `db.transaction(async (tx) => …)` hands to its callback. */
+export type Tx = Parameters<Parameters<Database['transaction']>[0]>[0];
+/** What repositories run their statements on: the pool, or the transaction of the action in progress. */
+export type Executor = Database | Tx;
 
 export interface DatabaseHandle {
   db: Database;

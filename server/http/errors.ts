@@ -40,3 +40,9 @@ export class TooManyRequestsError extends HttpError {
     super(429, 'too_many_requests', message);
   }
 }
+/** The mail server did not take a message that is the point of the action; nothing of the action was kept. */
+export class MailUnavailableError extends HttpError {
+  constructor(message = 'We could not send the e-mail just now, so nothing was saved. Try again in a few minutes.') {
+    super(503, 'mail_unavailable', message);
+  }
+}

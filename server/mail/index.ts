@@ -1,4 +1,5 @@
 import nodemailer from 'nodemailer';
+import { MailUnavailableError } from '../http/errors';
 
 export interface OutgoingMail {
   to: string;
@@ -32,4 +33,17 @@ export function createMailer(smtpUrl: string, from: string): Mailer {
       }
     },
   };
+}
+
+/**
+ * Sends a message the action depends on (an invitation or a confirmation link), as the last step inside the
+ * action's transaction: if the mail server refuses or cannot be reached, the caller's transaction rolls back
+ * and the person is told (503) instead of being left waiting for a message that never comes.
+ */
+export async function sendOrRollBack(mailer: Mailer, mail: OutgoingMail): Promise<void> {
+  try {
+    await mailer.send(mail);
+  } catch (err) {
+    throw Object.assign(new MailUnavailableError(), { cause: err });
+  }
 }

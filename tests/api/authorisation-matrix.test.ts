@@ -125,7 +125,7 @@ async function fixture(): Promise<Fixture> {
     view: 'underside', phase: 'before', width: 600, height: 400, contentType: 'image/jpeg', sizeBytes: jpeg.length });
   const findingId = await findingsRepo(t.db).insert({ restorationId: r.id, photoId, shape: 'pin', points: [{ x: 0.5, y: 0.4 }],
     title: 'Charred R23', kind: 'overheated', severity: 'fault', authorId: people.technician!.id });
-  const commentId = await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true });
+  const commentId = (await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true }))!;
   const measurementId = (await measurementsService(t.db).create(r.id, { location: 'R23', quantity: 'resistance', expected: '150', reading: '212' }, people.technician!.id)).id;
   const partId = (await partsService(t.db).create(r.id, { componentRef: 'R23', action: 'replaced' }, people.technician!.id)).id;
   return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId };
@@ -237,14 +237,14 @@ async function sharedFixture(): Promise<SharedFixture> {
   await db.update(comments).set({ body: `${INTERNAL}: quote was too low` }).where(eq(comments.id, f.commentId));
   await db.update(measurements).set({ ownerVisible: true }).where(eq(measurements.id, f.measurementId));
   await db.update(parts).set({ state: 'fitted', notes: `${INTERNAL} note`, source: `${INTERNAL} supplier` }).where(eq(parts.id, f.partId));
-  const sharedCommentId = await commentsRepo(db).insert({ findingId: f.findingId, authorId: people.technician!.id, body: 'Replaced R23 with a 2 W part.', internal: false });
+  const sharedCommentId = (await commentsRepo(db).insert({ findingId: f.findingId, authorId: people.technician!.id, body: 'Replaced R23 with a 2 W part.', internal: false }))!;
   const repo = findingsRepo(db);
   const internalFindingId = await repo.insert({ restorationId: f.id, photoId: f.photoId, shape: 'pin', points: [{ x: 0.2, y: 0.2 }],
     title: `${INTERNAL} cracked HT lead`, kind: 'cracked', severity: 'fault', authorId: people.technician!.id });
   await commentsRepo(db).insert({ findingId: internalFindingId, authorId: people.technician!.id, body: `${INTERNAL} shared words on an internal finding`, internal: false });
   const mentorFindingId = await repo.insert({ restorationId: f.id, photoId: f.photoId, shape: 'pin', points: [{ x: 0.7, y: 0.7 }],
     title: `${INTERNAL} check this joint`, kind: 'note', severity: 'info', authorId: people.mentor!.id });
-  const mentorCommentId = await commentsRepo(db).insert({ findingId: f.findingId, authorId: people.mentor!.id, body: `${INTERNAL} mentor aside`, internal: true });
+  const mentorCommentId = (await commentsRepo(db).insert({ findingId: f.findingId, authorId: people.mentor!.id, body: `${INTERNAL} mentor aside`, internal: true }))!;
   // Written while the finding was shared, before it was taken back: it must no longer reach the owner.
   await db.insert(notifications).values({ userId: people.owner!.id, restorationId: f.id, findingId: internalFindingId, kind: 'reply', summary: `${INTERNAL} reply` });
   await db.insert(events).values({ restorationId: f.id, kind: 'question-asked', findingId: f.findingId, actorId: people.technician!.id });

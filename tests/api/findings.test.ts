@@ -37,6 +37,9 @@ const mails = async () => (await t.request().get('/api/dev/mail')).body as Captu
 
 describe('findings', () => {
   it('when a technician pins a finding, then it is numbered, kept in image coordinates and listed on its photo', async () => {
+    // A restoration of its own, so the numbers do not depend on what other tests placed.
+    const own = await createRestoration(t.db, [{ userId: people.tech.id, role: 'technician' }, { userId: people.mentor.id, role: 'mentor' }]);
+    const sharedPhoto = await createPhotoRow(t.db, own.id, true);
     const a = await tech.post(`/api/photos/${sharedPhoto}/findings`).send(pin('Charred cathode resistor'));
     expect(a.status).toBe(201);
     expect(a.body).toMatchObject({ number: 1, shape: 'pin', points: [{ x: 0.5096, y: 0.4238 }], status: 'observed', componentRef: 'R23', ownerVisible: false });

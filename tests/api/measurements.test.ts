@@ -1,6 +1,5 @@
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { measurementVerdict } from '../../shared/bench';
 import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
 import { startTestApp } from '../support/test-app';
@@ -23,8 +22,11 @@ describe('measurements', () => {
     const body = { location: 'C30', quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω', method: 'ESR meter, 100 kHz, in circuit' };
     const res = await post(body);
     expect(res.status).toBe(201);
-    const library = measurementVerdict({ quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω' });
-    expect(res.body).toMatchObject({ verdict: library.verdict, verdictReason: library.reason, reading: 0.5, expected: 50e-6, rating: 400, expectedText: '50µ' });
+    // BENCH-REFERENCE §4, Table A: 47 µF and 100 µF both read 0.8 Ω in the 250 V column (the highest), so a
+    // 50 µF 400 V part is held to 0.8 Ω at most; 0.5 Ω is below it (0.5 / 0.8 − 1 = −37.5 %).
+    expect(res.body).toMatchObject({ verdict: 'within', reference: 0.8, reading: 0.5, expected: 50e-6, rating: 400, expectedText: '50µ' });
+    expect(res.body.deviation).toBeCloseTo(-0.375, 6);
+    expect(res.body.verdictReason).toMatch(/500 mΩ against an expected maximum of 800 mΩ for 50 µF 400 V \(Table A/);
   });
 
   it('when the inputs change, then the verdict is recomputed', async () => {

@@ -1,4 +1,4 @@
-import { count } from 'drizzle-orm';
+import { count, eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -44,7 +44,7 @@ describe('uploading photos', () => {
     expect(res.body).toMatchObject({ view: 'underside', phase: 'before', caption: 'As found', width: 400, height: 600, ownerVisible: false });
     expect(res.body.takenAt).toMatch(/^2026-11-20T14:05:09/);
     expect(res.body.urls.original).toBeDefined();
-    const [row] = await t.db.select().from(photos);
+    const [row] = await t.db.select().from(photos).where(eq(photos.id, res.body.id));
     const keys = photoKeys(row!.storageKey);
     for (const key of [keys.display, keys.thumb]) {
       const stored = await t.deps.storage.getObject(key);

@@ -1,4 +1,4 @@
-import { count } from 'drizzle-orm';
+import { count, eq } from 'drizzle-orm';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { memberships, restorations } from '../../server/db/schema';
@@ -69,10 +69,11 @@ describe('restorations', () => {
 
   it('when a restoration is deleted, then its memberships go with it', async () => {
     const { body } = await tech.post('/api/restorations').send({ make: 'Fenwick', model: 'Gone' });
+    const membershipsOf = async () => (await t.db.select({ n: count() }).from(memberships).where(eq(memberships.restorationId, body.id)))[0]!.n;
+    expect(await membershipsOf()).toBe(1);
     expect((await tech.delete(`/api/restorations/${body.id}`)).status).toBe(204);
-    const left = await t.db.select({ n: count() }).from(memberships);
     expect((await tech.get(`/api/restorations/${body.id}`)).status).toBe(404);
-    expect(left[0]!.n).toBeGreaterThan(0);
+    expect(await membershipsOf()).toBe(0);
   });
 
   it('when a cookie-carrying write comes from another origin, then it is refused and nothing changes', async () => {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
+import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
 import { twoToneJpeg } from '../factories/images';
 import { signInAs } from '../support/journey';
@@ -19,8 +20,11 @@ describe('the bench', () => {
     await page.getByRole('heading', { name: 'Recent activity' }).waitFor();
     expect(await page.getByRole('region', { name: 'Recent activity' }).getByRole('link').count()).toBeGreaterThan(0);
     expect(await page.getByRole('heading', { name: /Repair/ }).count()).toBe(1);
+    await expectAccessible(page, 'the bench');
 
     await page.getByRole('link', { name: '+ Take in a set' }).click();
+    await page.getByRole('heading', { name: 'Take in a set' }).waitFor();
+    await expectAccessible(page, 'the intake form');
     await page.getByLabel('Maker').fill('Fenwick & Daughters');
     await page.getByLabel('Model').fill('Nightjar 6');
     await page.getByLabel('Year').fill('1958');
@@ -44,6 +48,7 @@ describe('the bench', () => {
     await page.goto(`${ctx.product.origin}/restorations/new`);
     // Signed out, the form sends the visitor to sign-in and brings them back.
     await page.getByRole('heading', { name: 'Sign in to Gridleak' }).waitFor();
+    await expectAccessible(page, 'sign-in on a phone');
     await page.screenshot({ path: artifactPath('sign-in-phone.png'), fullPage: true });
     await page.getByRole('button', { name: /Mara Ellingsworth/ }).click();
     await page.getByRole('button', { name: 'Sign in' }).click();
@@ -52,6 +57,10 @@ describe('the bench', () => {
     await page.getByRole('button', { name: 'Put it on the bench' }).click();
     await page.getByText('Enter the maker, as printed on the set').waitFor();
     expect(page.url()).toContain('/restorations/new');
+    await expectAccessible(page, 'the intake form showing an error');
+    // Nothing reached the server: no restoration named "Orphan" exists for this technician.
+    const found = await page.evaluate(async () => (await (await fetch('/api/restorations?q=Orphan')).json()) as unknown[]);
+    expect(found).toEqual([]);
     await page.screenshot({ path: artifactPath('intake-form-phone.png'), fullPage: true });
   });
 
@@ -61,11 +70,18 @@ describe('the bench', () => {
     await page.getByRole('link', { name: /HT12-0988/ }).click();
     await page.getByRole('link', { name: 'Photos' }).click();
     await page.getByLabel('View').first().selectOption('rear');
+    await expectAccessible(page, 'the photo library');
+    // Each upload is held at the server's door for a moment, so its progress bar can be seen.
+    await page.route('**/api/restorations/*/photos', async (route) => {
+      if (route.request().method() === 'POST') await new Promise((r) => setTimeout(r, 1500));
+      await route.continue();
+    });
     const jpeg = await twoToneJpeg(1600, 1200);
     await page.locator('input[type=file][multiple]').setInputFiles([
       { name: 'rear-1.jpg', mimeType: 'image/jpeg', buffer: jpeg },
       { name: 'notes.jpg', mimeType: 'image/jpeg', buffer: Buffer.from('not a photo at all') },
     ]);
+    for (const name of ['rear-1.jpg', 'notes.jpg']) await page.getByRole('progressbar', { name: `Upload of ${name}` }).waitFor();
     await page.getByText(/not a photo Gridleak can read/).waitFor();
     await page.getByRole('button', { name: /Rear, before/ }).first().waitFor({ timeout: 30_000 });
     expect(await page.getByRole('button', { name: /Rear, before/ }).count()).toBe(1);

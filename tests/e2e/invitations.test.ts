@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
+import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
 import { firstLink, mailTo, signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
@@ -24,6 +25,7 @@ describe('inviting people to a restoration', () => {
       await tech.getByRole('listitem').filter({ hasText: email }).waitFor();
     }
     await tech.screenshot({ path: artifactPath('people-tab.png'), fullPage: true });
+    await expectAccessible(tech, 'the People tab');
 
     for (const [email, name] of [['orla.mentor@example.test', 'Orla Finch'], ['bram.owner@example.test', 'Bram Holt']]) {
       const link = firstLink(await mailTo(ctx.product.origin, email!, /invited you/));
@@ -31,15 +33,18 @@ describe('inviting people to a restoration', () => {
       const page = await newPage(ctx.browser, { width: 390, height: 844 });
       await page.goto(link);
       await page.getByText('invited').first().waitFor();
+      await expectAccessible(page, 'the invitation page');
       await page.getByLabel('Your name').fill(name!);
       await page.getByLabel('Password').fill(password);
       await page.getByRole('button', { name: 'Create account and join' }).click();
       await page.getByRole('heading', { name: /Kestrel Wireless Co\. Wren AC\/DC/ }).waitFor();
       expect(page.url()).toBe(restorationUrl);
+      await expectAccessible(page, `the restoration as a new ${name === 'Orla Finch' ? 'mentor' : 'owner'}`);
     }
 
     const third = await newPage(ctx.browser);
     await third.goto(`${ctx.product.origin}/sign-up`);
+    await expectAccessible(third, 'the sign-up page');
     await third.getByLabel('Your name').fill('Cass Nobody');
     await third.getByLabel('E-mail').fill('cass@example.test');
     await third.getByLabel('Password').fill(password);
@@ -49,6 +54,7 @@ describe('inviting people to a restoration', () => {
     await third.getByRole('heading', { name: 'The bench' }).waitFor();
     await third.goto(restorationUrl);
     await third.getByText('Restoration not found').waitFor();
+    await expectAccessible(third, 'a restoration that is not theirs');
     await third.screenshot({ path: artifactPath('not-a-member.png') });
   });
 });

@@ -1,6 +1,7 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
+import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
 import { mailTo, signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
@@ -27,6 +28,7 @@ describe('marking a spot and talking about it', () => {
     await tech.getByTestId('markup-stage').waitFor();
     await expect.poll(() => probe(tech)).toBeGreaterThan(0);
 
+    await expectAccessible(tech, 'the markup page');
     await tech.getByRole('button', { name: /^Pin/ }).click();
     const at = await toClient(tech, TARGET.x, TARGET.y);
     await tech.mouse.click(at.x, at.y);
@@ -64,6 +66,7 @@ describe('marking a spot and talking about it', () => {
     await mentor.getByLabel('Add a comment').fill('@Mara reflow it and measure across R14 again. Looks like a dry joint from here.');
     await mentor.getByRole('button', { name: 'Send comment' }).click();
     await mentor.getByText('reflow it and measure across R14').waitFor();
+    await expectAccessible(mentor, 'a finding with its thread');
 
     const mail = await mailTo(ctx.product.origin, 'mara@cobbold-lane.test', /Gridleak/);
     expect(mail.text).toContain(`/findings/${findingId}`);
@@ -80,7 +83,10 @@ describe('marking a spot and talking about it', () => {
     await expect.poll(() => tech.evaluate(async (id) => ((await (await fetch(`/api/findings/${id}`)).json()) as { ownerVisible: boolean }).ownerVisible, findingId)).toBe(true);
     await owner.reload();
     await owner.getByText('Dry joint on the V4 tag strip?').first().waitFor();
+    // Only once the thread has loaded (its heading shows the count) does an absent reply mean it was withheld.
+    await owner.getByRole('heading', { name: 'Thread (0)' }).waitFor();
     expect(await owner.getByText('reflow it and measure across R14').count()).toBe(0);
+    await expectAccessible(owner, 'a shared finding on the owner’s phone');
     await owner.screenshot({ path: artifactPath('markup-owner-phone.png'), fullPage: true });
     await tech.screenshot({ path: artifactPath('markup-technician.png') });
   });

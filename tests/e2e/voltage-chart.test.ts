@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
+import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
 import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
@@ -21,8 +22,12 @@ describe('voltage chart', () => {
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
     await page.getByRole('link', { name: /Halverson Tonecraft 12/ }).click();
     await page.getByRole('link', { name: 'Readings' }).click();
+    await page.getByRole('button', { name: 'Enter a voltage chart' }).waitFor();
+    await expectAccessible(page, 'the readings tab');
     await page.getByRole('button', { name: 'Enter a voltage chart' }).click();
     const form = page.getByRole('form', { name: 'Enter a voltage chart' });
+    await form.getByLabel('Location, row 1').waitFor();
+    await expectAccessible(page, 'the voltage chart form');
     for (let i = 0; i < points.length; i++) {
       if (i > 0 && (await form.getByLabel(`Location, row ${i + 1}`).count()) === 0) await form.getByRole('button', { name: 'Add row' }).click();
       const [location, expected, reading] = points[i]!;
@@ -43,6 +48,7 @@ describe('voltage chart', () => {
     expect(summary).toMatch(/1 out/);
     expect(summary).toMatch(/Out of tolerance: [^.;]*pin 7/);
     expect(summary).not.toMatch(/Out of tolerance:[^.]*(pin 6|pin 9|pin 3)/);
+    await expectAccessible(page, 'the voltage chart and its plot');
     await page.screenshot({ path: artifactPath('voltage-chart.png'), fullPage: true });
   });
 });

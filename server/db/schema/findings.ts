@@ -74,9 +74,14 @@ export const comments = pgTable(
     mentions: integer().array().notNull().default([]),
     editedAt: timestamp({ withTimezone: true, mode: 'date' }),
     deletedAt: timestamp({ withTimezone: true, mode: 'date' }),
+    /** The client's Idempotency-Key: a retried post from the same author is stored once. */
+    idempotencyKey: text(),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('comments_finding_id_idx').on(t.findingId)],
+  (t) => [
+    index('comments_finding_id_idx').on(t.findingId),
+    uniqueIndex('comments_author_id_idempotency_key_idx').on(t.authorId, t.idempotencyKey),
+  ],
 );
 
 export const notificationKindEnum = pgEnum('notification_kind', ['mention', 'question', 'reply']);
@@ -100,6 +105,8 @@ export const notifications = pgTable(
     /** One line for the list and the e-mail, written for this recipient (no internal text for owners). */
     summary: text().notNull(),
     readAt: timestamp({ withTimezone: true, mode: 'date' }),
+    /** Taken for an e-mail by a flush (committed before sending); never taken twice, so never mailed twice. */
+    mailClaimedAt: timestamp({ withTimezone: true, mode: 'date' }),
     emailedAt: timestamp({ withTimezone: true, mode: 'date' }),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },

@@ -1,11 +1,9 @@
 import { and, eq, gt, isNull } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { accountTokens } from '../../db/schema';
 import { hashToken, newToken } from './tokens';
 
 type Purpose = (typeof accountTokens.$inferInsert)['purpose'];
-/** A database handle or an open transaction: the token writes join the caller's unit of work. */
-type Executor = Pick<Database, 'insert' | 'update'>;
 
 const LIFETIME_MS: Record<Purpose, number> = {
   'password-reset': 60 * 60 * 1000,

@@ -44,11 +44,11 @@ export function authRoutes(deps: AppDeps, passport: ReturnType<typeof createPass
     const { invitationToken, ...fields } = input(res, signUp).body;
     await throttles.signUpAttempt(req.ip ?? 'unknown', fields.email.toLowerCase());
     if (invitationToken) await invitations.assertInvitedAddress(invitationToken, fields.email);
-    const user = await auth.signUp(fields, Boolean(invitationToken));
-    if (!user) return void res.status(202).json({ status: 'check-email' } satisfies SignUpResult);
-    await login(req, user);
-    const joined = invitationToken ? await invitations.accept(invitationToken, user) : undefined;
-    res.status(201).json({ status: 'signed-in', user, restorationId: joined?.restorationId } satisfies SignUpResult);
+    // From an invitation, the account and the membership are created together (or neither); sign-in follows the commit.
+    const created = await auth.signUp(fields, invitationToken ? (tx, user) => invitations.acceptIn(tx, invitationToken, user) : undefined);
+    if (!created) return void res.status(202).json({ status: 'check-email' } satisfies SignUpResult);
+    await login(req, created.user);
+    res.status(201).json({ status: 'signed-in', user: created.user, restorationId: created.joined?.restorationId } satisfies SignUpResult);
   });
 
   router.post('/auth/confirm-email', validate(confirm), async (req, res) => {

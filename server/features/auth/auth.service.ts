@@ -1,5 +1,7 @@
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { AppDeps } from '../../app-deps';
+import type { Tx } from '../../db/client';
+import { sendOrRollBack } from '../../mail';
 import { sessions, users } from '../../db/schema';
 import { HttpError } from '../../http/errors';
 import { accountTokensRepo } from './account-tokens';
@@ -17,34 +19,39 @@ export function authService({ db, mailer, config }: AppDeps) {
   return {
     /**
      * Creates an account. The answer does not say whether the address was taken: a new account gets a
-     * confirmation link, an existing one a reminder. `confirmed` accounts (invitations) skip the link.
-     * Every branch hashes the password and sends one message, so the time taken does not tell either.
-     * An unconfirmed account takes the latest sign-up's name and password (anyone may have started it),
-     * and its link is bound to them: confirming signs in only the person who chose that password.
+     * confirmation link, an existing one a reminder. Every branch hashes the password and sends one message,
+     * so the time taken does not tell either. An unconfirmed account takes the latest sign-up's name and
+     * password (anyone may have started it), and its link is bound to them: confirming signs in only the person
+     * who chose that password. An invitation sign-up (`join`) proves the address, skips the link and joins the
+     * restoration in the same transaction: if joining fails, no account stays and the link still works.
+     * The e-mail is the transaction's last step: when the mail server is down, nothing is created (503).
      */
-    async signUp(input: { name: string; email: string; password: string }, confirmed: boolean) {
+    async signUp<J>(input: { name: string; email: string; password: string }, join?: (tx: Tx, user: ReturnType<typeof publicUser>) => Promise<J>) {
       assertStrongPassword(input.password, [input.email, input.name]);
       const passwordHash = await hashPassword(input.password);
-      const existing = await repo.byEmail(input.email);
-      if (existing?.emailConfirmedAt) {
-        if (confirmed) throw new HttpError(409, 'conflict', 'This address already has an account: sign in to accept the invitation.');
-        await mailer.send(alreadyRegisteredMail(existing.email, link('/sign-in'), link('/reset-password')));
-        return undefined;
-      }
-      const choice = { passwordHash, name: input.name };
-      const emailConfirmedAt = confirmed ? new Date() : null;
-      const { user, token } = await db.transaction(async (tx) => {
+      return db.transaction(async (tx) => {
         const tokens = accountTokensRepo(tx);
+        const existing = await usersRepo(tx).byEmail(input.email);
+        if (existing?.emailConfirmedAt) {
+          if (join) throw new HttpError(409, 'conflict', 'This address already has an account: sign in to accept the invitation.');
+          await sendOrRollBack(mailer, alreadyRegisteredMail(existing.email, link('/sign-in'), link('/reset-password')));
+          return undefined;
+        }
+        const choice = { passwordHash, name: input.name };
+        const emailConfirmedAt = join ? new Date() : null;
         const row = existing
           ? (await tx.update(users).set({ ...choice, emailConfirmedAt }).where(eq(users.id, existing.id)).returning())[0]!
           : await usersRepo(tx).insert({ ...input, passwordHash, emailConfirmedAt });
-        // An invitation proves the address: links sent to earlier, unconfirmed sign-ups die with them.
-        if (confirmed) await tokens.spendAll(row.id);
-        return { user: row, token: confirmed ? undefined : await tokens.issue(row.id, 'email-confirm', choice) };
+        if (join) {
+          // Links sent to earlier, unconfirmed sign-ups with this address die with the invitation's proof.
+          await tokens.spendAll(row.id);
+          const joined = await join(tx, publicUser(row));
+          return { user: publicUser(row), joined };
+        }
+        const token = await tokens.issue(row.id, 'email-confirm', choice);
+        await sendOrRollBack(mailer, confirmEmailMail(row.email, input.name, link(`/confirm-email/${token}`)));
+        return undefined;
       });
-      if (!token) return publicUser(user);
-      await mailer.send(confirmEmailMail(user.email, input.name, link(`/confirm-email/${token}`)));
-      return undefined;
     },
 
     /** Confirms the address with the password and name of the sign-up that sent the link; every other link goes. */

@@ -1,11 +1,11 @@
 import { eq, sql } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { users } from '../../db/schema';
 
 export type UserRow = typeof users.$inferSelect;
 
 /** Works on the database or inside a transaction. */
-export function usersRepo(db: Pick<Database, 'select' | 'insert' | 'update'>) {
+export function usersRepo(db: Executor) {
   return {
     async byEmail(email: string): Promise<UserRow | undefined> {
       const [row] = await db.select().from(users).where(sql`lower(${users.email}) = lower(${email})`);

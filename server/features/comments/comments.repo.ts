@@ -1,12 +1,12 @@
 import { asc, eq, isNull, and } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { comments, findings, photos, users } from '../../db/schema';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 export type CommentRow = typeof comments.$inferSelect & { authorName: string | null };
 
-export function commentsRepo(db: Database) {
+export function commentsRepo(db: Executor) {
   const select = () => db.select({ c: comments, authorName: users.name }).from(comments).leftJoin(users, eq(users.id, comments.authorId));
   return {
     /** The thread as this role may read it (owners: the shared comments of a finding they may see). */
@@ -23,9 +23,15 @@ export function commentsRepo(db: Database) {
       const [r] = await select().where(eq(comments.id, id));
       return r && { ...r.c, authorName: r.authorName };
     },
-    async insert(values: typeof comments.$inferInsert) {
-      const [row] = await db.insert(comments).values(values).returning({ id: comments.id });
-      return row!.id;
+    /** Stores a comment; undefined when its author already stored one under the same idempotency key. */
+    async insert(values: typeof comments.$inferInsert): Promise<number | undefined> {
+      const [row] = await db.insert(comments).values(values).onConflictDoNothing().returning({ id: comments.id });
+      return row?.id;
+    },
+    /** The comment an author stored under an idempotency key (a concurrent twin is seen once it commits). */
+    async findByKey(authorId: number, key: string): Promise<CommentRow | undefined> {
+      const [r] = await select().where(and(eq(comments.authorId, authorId), eq(comments.idempotencyKey, key)));
+      return r && { ...r.c, authorName: r.authorName };
     },
     async update(id: number, values: Partial<typeof comments.$inferInsert>) {
       await db.update(comments).set(values).where(and(eq(comments.id, id), isNull(comments.deletedAt)));

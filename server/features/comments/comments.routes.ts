@@ -2,6 +2,7 @@ import { Router, type Request, type Response } from 'express';
 import { commentInputSchema, commentPatchSchema } from '../../../shared/schemas/findings';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
+import { BadRequestError } from '../../http/errors';
 import { guard, requireUser, roleOf } from '../../http/guard';
 import { input, validate } from '../../http/validate';
 import { actorOf } from '../findings/findings.routes';
@@ -10,6 +11,13 @@ import { commentsService } from './comments.service';
 
 const one = { params: idParamsSchema };
 const create = { params: idParamsSchema, body: commentInputSchema };
+/** A client retrying a post sends the same `Idempotency-Key` (printable ASCII, up to 128 characters). */
+function idempotencyKey(req: Request): string | undefined {
+  const key = req.get('Idempotency-Key');
+  if (key === undefined) return undefined;
+  if (!/^[\x21-\x7e]{1,128}$/.test(key)) throw new BadRequestError('Idempotency-Key: use 1 to 128 printable characters, such as a UUID.');
+  return key;
+}
 const edit = { params: idParamsSchema, body: commentPatchSchema };
 
 export function commentsRoutes(deps: AppDeps): Router {
@@ -25,7 +33,7 @@ export function commentsRoutes(deps: AppDeps): Router {
   });
   router.post('/findings/:id/comments', requireUser, validate(create), guard(db, 'restoration.view', ofFinding), async (req, res) => {
     const { params, body } = input(res, create);
-    res.status(201).json(await service.create(params.id, body, actorOf(req, res)));
+    res.status(201).json(await service.create(params.id, body, actorOf(req, res), idempotencyKey(req)));
   });
   router.patch('/comments/:id', requireUser, validate(edit), guard(db, 'restoration.view', ofComment), async (req, res) => {
     const { params, body } = input(res, edit);

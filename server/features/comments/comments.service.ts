@@ -1,7 +1,8 @@
 import { can, mayView, type Role } from '../../../shared/permissions';
 import type { Comment } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
-import { ForbiddenError, NotFoundError } from '../../http/errors';
+import { unitOfWork } from '../../db/unit-of-work';
+import { ConflictError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { findingsService, ownerMaySee } from '../findings/findings.service';
 import { membersRepo } from '../members/members.repo';
 import { notificationsService } from '../notifications/notifications.service';
@@ -15,6 +16,13 @@ const toComment = (c: CommentRow): Comment => ({
   authorName: c.authorName, mentions: c.deletedAt ? [] : c.mentions, createdAt: c.createdAt.toISOString(),
   editedAt: c.editedAt?.toISOString() ?? null, deletedAt: c.deletedAt?.toISOString() ?? null,
 });
+
+/** The comment stored under a reused idempotency key must be the one this request would have written. */
+function sameRequest(stored: CommentRow | undefined | '', findingId: number): CommentRow {
+  if (!stored || stored.findingId !== findingId || stored.deletedAt)
+    throw new ConflictError('This Idempotency-Key was already used for another comment; send a new key for a new comment.');
+  return stored;
+}
 
 /** Threads. An owner reads and writes only the shared part of a shared finding's thread. */
 export function commentsService(deps: AppDeps) {
@@ -40,17 +48,25 @@ export function commentsService(deps: AppDeps) {
       await findings.visible(findingId, role);
       return (await repo.list(findingId, role)).map(toComment);
     },
-    async create(findingId: number, input: { body: string; internal: boolean }, actor: Actor) {
+    /** `key` is the client's Idempotency-Key: the same key from the same author stores one comment. */
+    async create(findingId: number, input: { body: string; internal: boolean }, actor: Actor, key?: string) {
       const f = await findings.visible(findingId, actor.role);
       if (!can(actor.role, 'comments.create', { ownerVisible: ownerMaySee(f) })) throw new ForbiddenError();
       // An owner's comment is always in the shared thread.
       const internal = input.internal && can(actor.role, 'comments.internal');
       const people = await members.list(f.restorationId);
       const mentions = findMentions(input.body, people.map((p) => ({ userId: p.userId, name: p.name })));
-      const participants = await repo.participants(findingId);
-      const id = await repo.insert({ findingId, authorId: actor.id, body: input.body, internal, mentions });
-      const created = (await repo.find(id))!;
-      await notifications.commentWritten(f, created, actor, mentions, participants);
+      const created = await unitOfWork(deps.db, async (tx, afterCommit) => {
+        const inTx = commentsRepo(tx);
+        const participants = await inTx.participants(findingId);
+        const id = await inTx.insert({ findingId, authorId: actor.id, body: input.body, internal, mentions, idempotencyKey: key ?? null });
+        // A retry of a post already stored: answer as the first time, notify nobody again.
+        if (id === undefined) return sameRequest(key && (await inTx.findByKey(actor.id, key)), findingId);
+        const row = (await inTx.find(id))!;
+        await notifications.commentWritten(tx, f, row, actor, mentions, participants);
+        afterCommit(notifications.kick);
+        return row;
+      });
       return toComment(created);
     },
     async edit(id: number, body: string, actor: Actor) {

@@ -1,13 +1,12 @@
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { events } from '../../db/schema';
 
 export type NewEvent = typeof events.$inferInsert;
 
-/** Adds a line to a restoration's history. History must never block the work it records, so failures are logged only. */
-export async function recordEvent(db: Database, event: NewEvent): Promise<void> {
-  try {
-    await db.insert(events).values(event);
-  } catch (err) {
-    console.error(`event not recorded: ${(err as Error).message}`);
-  }
+/**
+ * Adds a line to a restoration's history, on the transaction of the change it records: a change and its
+ * history line are saved together or not at all (a failure here undoes the change).
+ */
+export async function recordEvent(db: Executor, event: NewEvent): Promise<void> {
+  await db.insert(events).values(event);
 }

@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, max, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { comments, findingChanges, findings, photos, restorations, users } from '../../db/schema';
 import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 
@@ -10,7 +10,7 @@ type NewFinding = Omit<typeof findings.$inferInsert, 'number' | 'id'>;
 
 const findingSources = { finding: columnsOf(findings), photo: columnsOf(photos) };
 
-export function findingsRepo(db: Database) {
+export function findingsRepo(db: Executor) {
   /** The comments this role may read in each finding's thread (owners count only the shared ones). */
   const commentCount = (role: Role) =>
     sql<number>`(select count(*)::int from ${comments} where ${comments.findingId} = ${findings.id} and ${comments.deletedAt} is null

@@ -1,6 +1,7 @@
 import { can, hiddenChangeFields, mayView, type Role } from '../../../shared/permissions';
 import { geometrySchema, type Finding, type FindingChange, type FindingInput, type FindingPatch } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
+import { unitOfWork } from '../../db/unit-of-work';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
 import { ensureCloseup, scheduleCloseup } from '../closeups/closeups';
@@ -53,12 +54,15 @@ export function findingsService(deps: AppDeps) {
       if (!photo || !can(actor.role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
       if (!can(actor.role, 'findings.create')) throw new ForbiddenError('Owners follow findings; technicians and mentors place them.');
       if (input.ownerVisible && !can(actor.role, 'findings.share')) throw new ForbiddenError('Only a technician shares findings with the owner.');
-      const id = await repo.insert({
-        restorationId: photo.restorationId, photoId, shape: input.shape, points: input.points, title: input.title,
-        componentRef: input.componentRef ?? '', kind: input.kind ?? 'note', severity: input.severity ?? 'info',
-        ownerVisible: input.ownerVisible, authorId: actor.id,
+      const id = await deps.db.transaction(async (tx) => {
+        const created = await findingsRepo(tx).insert({
+          restorationId: photo.restorationId, photoId, shape: input.shape, points: input.points, title: input.title,
+          componentRef: input.componentRef ?? '', kind: input.kind ?? 'note', severity: input.severity ?? 'info',
+          ownerVisible: input.ownerVisible, authorId: actor.id,
+        });
+        await recordEvent(tx, { restorationId: photo.restorationId, kind: 'finding-opened', actorId: actor.id, findingId: created, photoId });
+        return created;
       });
-      await recordEvent(deps.db, { restorationId: photo.restorationId, kind: 'finding-opened', actorId: actor.id, findingId: id, photoId });
       const created = (await repo.find(id, actor.role))!;
       scheduleCloseup(deps, photo, created);
       return toFinding(created);
@@ -87,12 +91,20 @@ export function findingsService(deps: AppDeps) {
           .map(([k, v]) => [k, [(f as Record<string, unknown>)[k] ?? null, v] as [unknown, unknown]]),
       );
       if (!Object.keys(changes).length) return toFinding(f);
-      await repo.update(id, next, actor.id, changes);
-      const updated = (await repo.find(id, actor.role))!;
-      const event = { restorationId: f.restorationId, actorId: actor.id, findingId: id, photoId: f.photoId };
-      if (changes.status) await recordEvent(deps.db, { ...event, kind: 'finding-status', data: { from: f.status, to: updated.status } });
-      if (changes.questionOpen) await recordEvent(deps.db, { ...event, kind: questionOpen ? 'question-asked' : 'question-resolved' });
-      if (questionOpen === true && !f.questionOpen) await notifications.questionAsked(updated, actor);
+      // The change, its history line, its events and the mentors' notifications commit together.
+      const updated = await unitOfWork(deps.db, async (tx, afterCommit) => {
+        const inTx = findingsRepo(tx);
+        await inTx.update(id, next, actor.id, changes);
+        const row = (await inTx.find(id, actor.role))!;
+        const event = { restorationId: f.restorationId, actorId: actor.id, findingId: id, photoId: f.photoId };
+        if (changes.status) await recordEvent(tx, { ...event, kind: 'finding-status', data: { from: f.status, to: row.status } });
+        if (changes.questionOpen) await recordEvent(tx, { ...event, kind: questionOpen ? 'question-asked' : 'question-resolved' });
+        if (questionOpen === true && !f.questionOpen) {
+          await notifications.questionAsked(tx, row, actor);
+          afterCommit(notifications.kick);
+        }
+        return row;
+      });
       if (changes.shape || changes.points) scheduleCloseup(deps, (await photos.find(f.photoId))!, updated);
       return toFinding(updated);
     },

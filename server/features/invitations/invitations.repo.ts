@@ -1,6 +1,6 @@
 import { and, desc, eq, gt, isNull, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { invitations, restorations, users } from '../../db/schema';
 import { hashToken, newToken } from '../auth/tokens';
 
@@ -8,7 +8,7 @@ export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
 const pending = () => and(isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date()));
 
-export function invitationsRepo(db: Database) {
+export function invitationsRepo(db: Executor) {
   return {
     listPending(restorationId: number) {
       return db

@@ -2,7 +2,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import { BenchInputError, liveChassisLikely, measurementVerdict } from '../../../shared/bench';
 import { can, type Role } from '../../../shared/permissions';
 import type { LineUp, Measurement, MeasurementInput, Valve } from '../../../shared/schemas/measurements';
-import type { Database } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import { findings, measurements, photos, restorations, users, valves } from '../../db/schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
@@ -31,14 +31,14 @@ function judge(f: Fields) {
 }
 
 export function measurementsService(db: Database) {
-  const select = () => db.select({ m: measurements, measuredBy: users.name }).from(measurements).leftJoin(users, eq(users.id, measurements.measuredById));
-  const find = async (id: number) => {
-    const [r] = await select().where(eq(measurements.id, id));
+  const select = (on: Executor = db) => on.select({ m: measurements, measuredBy: users.name }).from(measurements).leftJoin(users, eq(users.id, measurements.measuredById));
+  const find = async (id: number, on: Executor = db) => {
+    const [r] = await select(on).where(eq(measurements.id, id));
     return r && { ...r.m, measuredBy: r.measuredBy };
   };
-  async function assertFinding(restorationId: number, findingId: number | null | undefined) {
+  async function assertFinding(tx: Executor, restorationId: number, findingId: number | null | undefined) {
     if (!findingId) return;
-    const [f] = await db.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
+    const [f] = await tx.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
     if (!f) throw new BadRequestError('findingId: no such finding on this restoration.');
   }
   const columns = (f: Fields) => ({
@@ -66,15 +66,24 @@ export function measurementsService(db: Database) {
       return rows.map((r) => toMeasurement({ ...r.m, measuredBy: r.measuredBy, findingId: r.findingVisible ? r.m.findingId : null }));
     },
     async create(restorationId: number, input: Fields, userId: number) {
-      await assertFinding(restorationId, input.findingId);
       const verdict = judge(input);
-      const [row] = await db.insert(measurements).values({ restorationId, ...columns(input), ...verdict, measuredById: userId }).returning({ id: measurements.id });
-      if (verdict.verdict === 'out') await recordEvent(db, { restorationId, kind: 'measurement-out', actorId: userId, measurementId: row!.id, findingId: input.findingId ?? null });
-      return toMeasurement((await find(row!.id))!);
+      const id = await db.transaction(async (tx) => {
+        await assertFinding(tx, restorationId, input.findingId);
+        const [row] = await tx.insert(measurements).values({ restorationId, ...columns(input), ...verdict, measuredById: userId }).returning({ id: measurements.id });
+        if (verdict.verdict === 'out') await recordEvent(tx, { restorationId, kind: 'measurement-out', actorId: userId, measurementId: row!.id, findingId: input.findingId ?? null });
+        return row!.id;
+      });
+      return toMeasurement((await find(id))!);
     },
     /** Recomputes the verdict from the merged texts whenever anything changes. */
     async update(id: number, patch: Partial<MeasurementInput>, userId: number) {
-      const current = await find(id);
+      await db.transaction((tx) => this.updateIn(tx, id, patch, userId));
+      return toMeasurement((await find(id))!);
+    },
+    /** The update on one transaction; the row is locked so two edits cannot both record "went out of range". */
+    async updateIn(tx: Executor, id: number, patch: Partial<MeasurementInput>, userId: number) {
+      await tx.select({ id: measurements.id }).from(measurements).where(eq(measurements.id, id)).for('update');
+      const current = await find(id, tx);
       if (!current) throw new NotFoundError();
       const merged: Fields = {
         location: patch.location ?? current.location, quantity: patch.quantity ?? current.quantity, reading: patch.reading ?? current.readingText,
@@ -82,12 +91,11 @@ export function measurementsService(db: Database) {
         conditions: patch.conditions ?? current.conditions, method: patch.method ?? current.method,
         findingId: patch.findingId === undefined ? current.findingId : patch.findingId, ownerVisible: patch.ownerVisible ?? current.ownerVisible,
       };
-      await assertFinding(current.restorationId, merged.findingId);
+      await assertFinding(tx, current.restorationId, merged.findingId);
       const verdict = judge(merged);
-      await db.update(measurements).set({ ...columns(merged), ...verdict }).where(eq(measurements.id, id));
+      await tx.update(measurements).set({ ...columns(merged), ...verdict }).where(eq(measurements.id, id));
       if (verdict.verdict === 'out' && current.verdict !== 'out')
-        await recordEvent(db, { restorationId: current.restorationId, kind: 'measurement-out', actorId: userId, measurementId: id, findingId: merged.findingId ?? null });
-      return toMeasurement((await find(id))!);
+        await recordEvent(tx, { restorationId: current.restorationId, kind: 'measurement-out', actorId: userId, measurementId: id, findingId: merged.findingId ?? null });
     },
     /** 404 when the caller may not see the reading (owners and unshared readings), 403 when they may not record. */
     async assertMayRecord(id: number, role: Role) {

@@ -1,9 +1,9 @@
-import { and, asc, count, eq } from 'drizzle-orm';
+import { and, asc, eq } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { memberships, users } from '../../db/schema';
 
-export function membersRepo(db: Database) {
+export function membersRepo(db: Executor) {
   return {
     async roleOf(userId: number, restorationId: number): Promise<Role | undefined> {
       const [row] = await db
@@ -20,12 +20,13 @@ export function membersRepo(db: Database) {
         .where(eq(memberships.restorationId, restorationId))
         .orderBy(asc(memberships.createdAt), asc(users.name));
     },
-    async technicianCount(restorationId: number): Promise<number> {
-      const [row] = await db
-        .select({ n: count() })
+    /** Every membership of the restoration, locked FOR UPDATE until the calling transaction ends. */
+    lockAll(restorationId: number) {
+      return db
+        .select({ userId: memberships.userId, role: memberships.role })
         .from(memberships)
-        .where(and(eq(memberships.restorationId, restorationId), eq(memberships.role, 'technician')));
-      return row?.n ?? 0;
+        .where(eq(memberships.restorationId, restorationId))
+        .for('update');
     },
     async add(restorationId: number, userId: number, role: Role) {
       await db.insert(memberships).values({ restorationId, userId, role }).onConflictDoNothing();

@@ -1,6 +1,6 @@
 import type { Role } from '../../../shared/permissions';
 import type { Member } from '../../../shared/schemas/members';
-import type { Database } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import { ConflictError, NotFoundError } from '../../http/errors';
 import { membersRepo } from './members.repo';
 
@@ -10,10 +10,15 @@ const lastTechnician = () =>
 export function membersService(db: Database) {
   const repo = membersRepo(db);
 
-  /** Refuses a change that would leave the restoration without a technician. */
-  async function assertNotLastTechnician(restorationId: number, userId: number) {
-    if ((await repo.roleOf(userId, restorationId)) === 'technician' && (await repo.technicianCount(restorationId)) <= 1)
-      throw lastTechnician();
+  /**
+   * Refuses a change that would leave the restoration without a technician. Runs inside the change's
+   * transaction and locks the restoration's memberships first, so two demotions at once are decided one
+   * after the other and the second sees the first.
+   */
+  async function assertNotLastTechnician(tx: Executor, restorationId: number, userId: number) {
+    const rows = await membersRepo(tx).lockAll(restorationId);
+    const technicians = rows.filter((m) => m.role === 'technician');
+    if (technicians.some((m) => m.userId === userId) && technicians.length <= 1) throw lastTechnician();
   }
 
   return {
@@ -21,12 +26,16 @@ export function membersService(db: Database) {
       return (await repo.list(restorationId)).map((m) => ({ ...m, since: m.since.toISOString() }));
     },
     async changeRole(restorationId: number, userId: number, role: Role) {
-      if (role !== 'technician') await assertNotLastTechnician(restorationId, userId);
-      if (!(await repo.setRole(restorationId, userId, role))) throw new NotFoundError('That person is not a member.');
+      await db.transaction(async (tx) => {
+        if (role !== 'technician') await assertNotLastTechnician(tx, restorationId, userId);
+        if (!(await membersRepo(tx).setRole(restorationId, userId, role))) throw new NotFoundError('That person is not a member.');
+      });
     },
     async remove(restorationId: number, userId: number) {
-      await assertNotLastTechnician(restorationId, userId);
-      if (!(await repo.remove(restorationId, userId))) throw new NotFoundError('That person is not a member.');
+      await db.transaction(async (tx) => {
+        await assertNotLastTechnician(tx, restorationId, userId);
+        if (!(await membersRepo(tx).remove(restorationId, userId))) throw new NotFoundError('That person is not a member.');
+      });
     },
   };
 }

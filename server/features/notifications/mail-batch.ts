@@ -1,4 +1,4 @@
-import { and, eq, inArray, isNull, max, sql } from 'drizzle-orm';
+import { and, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { findingPath } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
 import { comments, findings, memberships, notifications, photos, users } from '../../db/schema';
@@ -6,12 +6,14 @@ import { notificationJoins, notificationVisible } from '../visibility/notificati
 
 const MAIL_LOCK = 5180002;
 
+type Claimed = { person: { id: number; email: string; name: string }; items: { id: number; summary: string; findingId: number; restorationId: number; photoId: number }[] };
+
 /**
- * Sends each person one e-mail with everything new for them, at most once per batch window: the first
- * item goes at once, a burst after it waits for the window. Rows are claimed with SKIP LOCKED inside a
- * transaction, so several instances flushing together never send the same item twice.
+ * Claims what is due, per person, and commits the claim before anything is sent. Rows are taken with SKIP
+ * LOCKED and a per-person advisory lock, and the window is measured from the person's last claim, so several
+ * instances flushing together never take the same item nor mail one person twice within the window.
  */
-export async function flushNotificationMail(deps: Pick<AppDeps, 'db' | 'mailer' | 'config'>, now = new Date()): Promise<number> {
+async function claimDue(deps: Pick<AppDeps, 'db' | 'config'>, now: Date): Promise<Claimed[]> {
   const windowMs = deps.config.notificationWindowSeconds * 1000;
   return deps.db.transaction(async (tx) => {
     const pending = await tx
@@ -23,29 +25,56 @@ export async function flushNotificationMail(deps: Pick<AppDeps, 'db' | 'mailer' 
       .innerJoin(memberships, notificationJoins.membership)
       .leftJoin(comments, notificationJoins.comment)
       // Judged at send time: an item its reader may no longer see (unshared since) is not mailed.
-      .where(and(isNull(notifications.emailedAt), isNull(notifications.readAt), notificationVisible))
+      .where(and(isNull(notifications.mailClaimedAt), isNull(notifications.emailedAt), isNull(notifications.readAt), notificationVisible))
       .orderBy(notifications.id)
       .for('update', { of: notifications, skipLocked: true });
-    if (!pending.length) return 0;
+    if (!pending.length) return [];
     const userIds = [...new Set(pending.map((p) => p.userId))];
     const people = await tx.select({ id: users.id, email: users.email, name: users.name }).from(users).where(inArray(users.id, userIds));
-    let sent = 0;
+    const claimed: Claimed[] = [];
     for (const person of people) {
-      // One flush at a time per person, so the window check sees the other's last e-mail.
       const [lock] = await tx.execute<{ ok: boolean }>(sql`select pg_try_advisory_xact_lock(${MAIL_LOCK}, ${person.id}) as ok`).then((r) => r.rows);
       if (!lock?.ok) continue;
-      const [last] = await tx.select({ at: max(notifications.emailedAt) }).from(notifications).where(eq(notifications.userId, person.id));
+      const [last] = await tx
+        .select({ at: sql<Date | null>`greatest(max(${notifications.mailClaimedAt}), max(${notifications.emailedAt}))`.mapWith(notifications.emailedAt) })
+        .from(notifications)
+        .where(eq(notifications.userId, person.id));
       if (last?.at && now.getTime() - last.at.getTime() < windowMs) continue;
       const items = pending.filter((p) => p.userId === person.id);
-      const lines = items.map((i) => `• ${i.summary}\n  ${deps.config.publicOrigin}${findingPath({ restorationId: i.restorationId, photoId: i.photoId, id: i.findingId })}`);
+      await tx.update(notifications).set({ mailClaimedAt: now }).where(inArray(notifications.id, items.map((i) => i.id)));
+      claimed.push({ person, items });
+    }
+    return claimed;
+  });
+}
+
+/**
+ * Sends each person one e-mail with everything new for them, at most once per batch window: the first
+ * item goes at once, a burst after it waits for the window. Claim, commit, send, mark sent: a failure for
+ * one person releases only that person's claim (tried again next tick) and never re-sends to the others.
+ * A crash between sending and marking leaves the rows claimed and unsent: at most once, never twice.
+ */
+export async function flushNotificationMail(deps: Pick<AppDeps, 'db' | 'mailer' | 'config'>, now = new Date()): Promise<number> {
+  const claimed = await claimDue(deps, now);
+  let sent = 0;
+  const failures: Error[] = [];
+  for (const { person, items } of claimed) {
+    const ids = items.map((i) => i.id);
+    const lines = items.map((i) => `• ${i.summary}\n  ${deps.config.publicOrigin}${findingPath({ restorationId: i.restorationId, photoId: i.photoId, id: i.findingId })}`);
+    try {
       await deps.mailer.send({
         to: person.email,
         subject: items.length === 1 ? `Gridleak: ${items[0]!.summary.slice(0, 90)}` : `Gridleak: ${items.length} new items on your restorations`,
         text: `Hello ${person.name},\n\n${lines.join('\n\n')}\n\n— Gridleak, the restoration notebook`,
       });
-      await tx.update(notifications).set({ emailedAt: sql`now()` }).where(inArray(notifications.id, items.map((i) => i.id)));
-      sent++;
+    } catch (err) {
+      await deps.db.update(notifications).set({ mailClaimedAt: null }).where(and(inArray(notifications.id, ids), isNull(notifications.emailedAt)));
+      failures.push(err as Error);
+      continue;
     }
-    return sent;
-  });
+    await deps.db.update(notifications).set({ emailedAt: sql`now()` }).where(inArray(notifications.id, ids));
+    sent++;
+  }
+  if (failures.length) throw new Error(`${failures.length} of ${claimed.length} notification e-mails failed: ${failures[0]!.message}`);
+  return sent;
 }

@@ -1,11 +1,11 @@
 import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { comments, findings, memberships, notifications, photos } from '../../db/schema';
 import { notificationJoins, notificationVisible } from '../visibility/notification-visibility';
 
 export type NewNotification = typeof notifications.$inferInsert;
 
-export function notificationsRepo(db: Database) {
+export function notificationsRepo(db: Executor) {
   return {
     async insert(rows: NewNotification[]) {
       if (rows.length) await db.insert(notifications).values(rows);

@@ -1,6 +1,7 @@
 import { mayView, type Role } from '../../../shared/permissions';
 import type { Notification } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
+import type { Executor } from '../../db/client';
 import { flushNotificationMail } from './mail-batch';
 import { notificationsRepo, type NewNotification } from './notifications.repo';
 
@@ -10,29 +11,32 @@ type CommentLike = { id: number; body: string; internal: boolean };
 const label = (f: FindingLike) => `#${f.number}${f.componentRef ? ` ${f.componentRef}` : ''} “${f.title}”`;
 const excerpt = (text: string) => (text.length > 160 ? `${text.slice(0, 157)}…` : text).replace(/\s+/g, ' ');
 
-/** In-app notifications; e-mail goes out in batches from the same rows (see mail-batch.ts). */
+/**
+ * In-app notifications; e-mail goes out in batches from the same rows (see mail-batch.ts). The writers take
+ * the transaction of the action they report, so a notification exists only if its action was saved; call
+ * `kick` after the commit to mail what is due.
+ */
 export function notificationsService(deps: AppDeps) {
   const repo = notificationsRepo(deps.db);
-  // Sends what is due now (the first item for a person goes at once); failures wait for the next tick.
-  const kick = () => void flushNotificationMail(deps).catch((err: Error) => deps.logger.warn(`notification mail: ${err.message}`));
 
   return {
-    async questionAsked(f: FindingLike, actor: { id: number; name: string }) {
-      const mentors = await repo.membersWithRole(f.restorationId, ['mentor']);
-      await repo.insert(
+    /** Sends what is due now (the first item for a person goes at once); failures wait for the next tick. */
+    kick: () => void flushNotificationMail(deps).catch((err: Error) => deps.logger.warn(`notification mail: ${err.message}`)),
+    async questionAsked(tx: Executor, f: FindingLike, actor: { id: number; name: string }) {
+      const mentors = await notificationsRepo(tx).membersWithRole(f.restorationId, ['mentor']);
+      await notificationsRepo(tx).insert(
         mentors.filter((m) => m.userId !== actor.id).map((m): NewNotification => ({
           userId: m.userId, restorationId: f.restorationId, findingId: f.id, kind: 'question',
           summary: `${actor.name} asks the mentors about ${label(f)}`,
         })),
       );
-      kick();
     },
     /**
      * A comment notifies the people it @mentions and the others already in the thread, each only if the rule
      * lets them see it; listing and mailing judge it again, so a finding unshared later stops it there too.
      */
-    async commentWritten(f: FindingLike, c: CommentLike, actor: { id: number; name: string }, mentioned: number[], participants: number[]) {
-      const members = await repo.membersWithRole(f.restorationId, ['technician', 'mentor', 'owner']);
+    async commentWritten(tx: Executor, f: FindingLike, c: CommentLike, actor: { id: number; name: string }, mentioned: number[], participants: number[]) {
+      const members = await notificationsRepo(tx).membersWithRole(f.restorationId, ['technician', 'mentor', 'owner']);
       const roleOf = new Map<number, Role>(members.map((m) => [m.userId, m.role]));
       const facts = { notification: { commentId: c.id }, comment: c, finding: f, photo: { ownerVisible: f.photoOwnerVisible } };
       const mayRead = (userId: number) => mayView(roleOf.get(userId), 'notification', facts);
@@ -45,8 +49,7 @@ export function notificationsService(deps: AppDeps) {
         if (userId !== actor.id && mayRead(userId))
           rows.set(userId, { userId, restorationId: f.restorationId, findingId: f.id, commentId: c.id, kind: 'mention',
             summary: `${actor.name} mentioned you on ${label(f)}: ${excerpt(c.body)}` });
-      await repo.insert([...rows.values()]);
-      kick();
+      await notificationsRepo(tx).insert([...rows.values()]);
     },
     async listFor(userId: number): Promise<Notification[]> {
       return (await repo.listFor(userId)).map(({ n, photoId }) => ({

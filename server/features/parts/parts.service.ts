@@ -2,7 +2,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import { partWarnings } from '../../../shared/bench';
 import type { Role } from '../../../shared/permissions';
 import type { Part, PartInput } from '../../../shared/schemas/parts';
-import type { Database } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import { findings, parts, photos } from '../../db/schema';
 import { BadRequestError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
@@ -26,9 +26,9 @@ export function toPart(row: Row, role: Role): Part {
 }
 
 export function partsService(db: Database) {
-  async function assertFinding(restorationId: number, findingId: number | null | undefined) {
+  async function assertFinding(tx: Executor, restorationId: number, findingId: number | null | undefined) {
     if (!findingId) return;
-    const [f] = await db.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
+    const [f] = await tx.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
     if (!f) throw new BadRequestError('findingId: no such finding on this restoration.');
   }
   const find = async (id: number) => (await db.select().from(parts).where(eq(parts.id, id)))[0];
@@ -48,23 +48,28 @@ export function partsService(db: Database) {
       return rows.map(({ part, findingVisible }) => ({ ...part, findingId: findingVisible ? part.findingId : null }));
     },
     async create(restorationId: number, input: PartInput & { action: Row['action'] }, actorId: number) {
-      await assertFinding(restorationId, input.findingId);
       const fittedAt = input.state === 'fitted' ? new Date() : null;
       // Keeping an original is recorded in the ledger, but nothing was fitted.
       const fitted = fittedAt && input.action !== 'kept-original';
-      const [row] = await db.insert(parts).values({ ...input, restorationId, findingId: input.findingId ?? null, fittedAt }).returning();
-      if (fitted) await recordEvent(db, { restorationId, kind: 'part-fitted', actorId, partId: row!.id, findingId: row!.findingId });
-      return row!;
+      return db.transaction(async (tx) => {
+        await assertFinding(tx, restorationId, input.findingId);
+        const [row] = await tx.insert(parts).values({ ...input, restorationId, findingId: input.findingId ?? null, fittedAt }).returning();
+        if (fitted) await recordEvent(tx, { restorationId, kind: 'part-fitted', actorId, partId: row!.id, findingId: row!.findingId });
+        return row!;
+      });
     },
     async update(id: number, patch: Partial<Row>, actorId: number) {
-      const before = await find(id);
-      if (!before) throw new NotFoundError();
-      if (patch.findingId !== undefined) await assertFinding(before.restorationId, patch.findingId);
-      const becameFitted = patch.state === 'fitted' && before.state !== 'fitted';
-      const values = { ...patch, ...(becameFitted ? { fittedAt: new Date() } : patch.state && patch.state !== 'fitted' ? { fittedAt: null } : {}) };
-      const [row] = await db.update(parts).set(values).where(eq(parts.id, id)).returning();
-      if (becameFitted && row!.action !== 'kept-original') await recordEvent(db, { restorationId: before.restorationId, kind: 'part-fitted', actorId, partId: id, findingId: row!.findingId });
-      return row!;
+      return db.transaction(async (tx) => {
+        // Locked, so two edits of one line cannot both see it unfitted and record two fittings.
+        const [before] = await tx.select().from(parts).where(eq(parts.id, id)).for('update');
+        if (!before) throw new NotFoundError();
+        if (patch.findingId !== undefined) await assertFinding(tx, before.restorationId, patch.findingId);
+        const becameFitted = patch.state === 'fitted' && before.state !== 'fitted';
+        const values = { ...patch, ...(becameFitted ? { fittedAt: new Date() } : patch.state && patch.state !== 'fitted' ? { fittedAt: null } : {}) };
+        const [row] = await tx.update(parts).set(values).where(eq(parts.id, id)).returning();
+        if (becameFitted && row!.action !== 'kept-original') await recordEvent(tx, { restorationId: before.restorationId, kind: 'part-fitted', actorId, partId: id, findingId: row!.findingId });
+        return row!;
+      });
     },
     async remove(id: number) {
       await db.delete(parts).where(eq(parts.id, id));

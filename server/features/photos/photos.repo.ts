@@ -1,6 +1,6 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { photos, users } from '../../db/schema';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
@@ -9,7 +9,7 @@ type NewPhoto = typeof photos.$inferInsert;
 
 const columns = { photo: photos, uploadedBy: users.name };
 
-export function photosRepo(db: Database) {
+export function photosRepo(db: Executor) {
   const select = () => db.select(columns).from(photos).leftJoin(users, eq(users.id, photos.uploadedById));
   const flat = (r: { photo: typeof photos.$inferSelect; uploadedBy: string | null }): PhotoRow => ({ ...r.photo, uploadedBy: r.uploadedBy });
   return {

@@ -68,12 +68,15 @@ export function photosService({ db, storage, config }: PhotosDeps) {
         await storage.putObject(keys.display, processed.display, 'image/webp', undefined, { signal });
         await storage.putObject(keys.thumb, processed.thumb, 'image/webp', undefined, { signal });
         signal?.throwIfAborted();
-        const id = await repo.insert({
-          restorationId, storageKey, ...fields.data, width: processed.width, height: processed.height,
-          takenAt: processed.takenAt, contentType: processed.contentType, sizeBytes: file.size, uploadedById,
+        // The row and its history line together: if either fails, neither stays and the objects go below.
+        return await db.transaction(async (tx) => {
+          const id = await photosRepo(tx).insert({
+            restorationId, storageKey, ...fields.data, width: processed.width, height: processed.height,
+            takenAt: processed.takenAt, contentType: processed.contentType, sizeBytes: file.size, uploadedById,
+          });
+          await recordEvent(tx, { restorationId, kind: 'photo-added', actorId: uploadedById, photoId: id, data: { view: fields.data.view, phase: fields.data.phase } });
+          return id;
         });
-        await recordEvent(db, { restorationId, kind: 'photo-added', actorId: uploadedById, photoId: id, data: { view: fields.data.view, phase: fields.data.phase } });
-        return id;
       } catch (err) {
         await deletePhotoObjects(storage, storageKey).catch(() => {});
         if (signal?.aborted) throw new BadRequestError('The upload was cancelled before it was stored.');

@@ -1,13 +1,13 @@
 import { and, desc, eq, ilike, or, type SQL } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Stage } from '../../../shared/schemas/restorations';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { memberships, restorations } from '../../db/schema';
 
 export type RestorationRow = typeof restorations.$inferSelect;
 type Values = Omit<typeof restorations.$inferInsert, 'id' | 'createdAt' | 'updatedAt'>;
 
-export function restorationsRepo(db: Database) {
+export function restorationsRepo(db: Executor) {
   return {
     /** The restorations a person is a member of, with their role, most recently changed first. */
     async listFor(userId: number, filter: { q?: string; stage?: Stage }): Promise<(RestorationRow & { role: Role })[]> {
@@ -25,8 +25,10 @@ export function restorationsRepo(db: Database) {
         .orderBy(desc(restorations.updatedAt));
       return rows.map((r) => ({ ...r.restoration, role: r.role }));
     },
-    async find(id: number): Promise<RestorationRow | undefined> {
-      const [row] = await db.select().from(restorations).where(eq(restorations.id, id));
+    /** `lock` takes the row FOR UPDATE (inside a transaction) until the change commits. */
+    async find(id: number, options: { lock?: boolean } = {}): Promise<RestorationRow | undefined> {
+      const query = db.select().from(restorations).where(eq(restorations.id, id));
+      const [row] = options.lock ? await query.for('update') : await query;
       return row;
     },
     /** Creates the restoration and makes its creator the technician, together or not at all. */

@@ -29,11 +29,16 @@ export function restorationsService(db: Database) {
       return toRestoration(await repo.insertWithTechnician(input, userId), 'technician');
     },
     async update(id: number, patch: PatchInput, role: Role, actorId: number) {
-      const before = await repo.find(id);
-      const row = await repo.update(id, patch);
-      if (!row || !before) throw new NotFoundError();
-      if (patch.stage && patch.stage !== before.stage)
-        await recordEvent(db, { restorationId: id, kind: 'stage-changed', actorId, data: { from: before.stage, to: patch.stage } });
+      // The restoration row is locked first, so the recorded "from" stage is the one this change replaced.
+      const row = await db.transaction(async (tx) => {
+        const inTx = restorationsRepo(tx);
+        const before = await inTx.find(id, { lock: true });
+        if (!before) throw new NotFoundError();
+        const updated = (await inTx.update(id, patch))!;
+        if (patch.stage && patch.stage !== before.stage)
+          await recordEvent(tx, { restorationId: id, kind: 'stage-changed', actorId, data: { from: before.stage, to: patch.stage } });
+        return updated;
+      });
       return toRestoration(row, role);
     },
     async remove(id: number) {

@@ -2,8 +2,8 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { MemoryRouter, Route, Routes, useLocation } from 'react-router';
-import { vi } from 'vitest';
 import type { Comment, Finding } from '../../../../shared/schemas/findings';
+import { apiError } from '../../../testing/fake-api';
 import type { FindingMember } from './finding-format';
 
 /** A finding as the API answers it; tests override what they care about. */
@@ -30,32 +30,9 @@ export const members: FindingMember[] = [
   { userId: 3, name: 'Mara Lind', role: 'owner' },
 ];
 
-export interface Call {
-  method: string;
-  path: string;
-  body: unknown;
-}
-export type Reply = { status: number; body?: unknown };
-
-/**
- * Stands in for the API behind `fetch`: `answer` gets each call (path without /api) and returns the reply, or
- * nothing for a 404. Every call is recorded so tests can check what was sent.
- */
-export function fakeApi(answer: (call: Call) => Reply | undefined | Promise<Reply | undefined>) {
-  const calls: Call[] = [];
-  const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
-    const call = { method: init.method ?? 'GET', path: String(input).replace(/^\/api/, ''), body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined };
-    calls.push(call);
-    const reply = (await answer(call)) ?? { status: 404, body: { error: { code: 'not-found', message: 'Not found.' } } };
-    if (reply.status === 204) return new Response(null, { status: 204 });
-    return new Response(JSON.stringify(reply.body), { status: reply.status, headers: { 'Content-Type': 'application/json' } });
-  });
-  vi.stubGlobal('fetch', fetchMock);
-  return { calls, fetchMock };
-}
-
-export const ok = (body: unknown): Reply => ({ status: 200, body });
-export const refuse = (status: number, message: string): Reply => ({ status, body: { error: { code: 'refused', message } } });
+export { fakeApi, ok, type Call, type Reply } from '../../../testing/fake-api';
+/** A refusal as the server words it, with the code the server sends for that status. */
+export const refuse = (status: number, message: string) => apiError(status, message);
 
 function Location() {
   return <div data-testid="location">{useLocation().pathname}</div>;

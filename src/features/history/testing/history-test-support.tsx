@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { MemoryRouter } from 'react-router';
 import { vi } from 'vitest';
 import type { TimelineEvent } from '../../../../shared/schemas/parts';
+import { notFound, toResponse } from '../../../testing/fake-api';
 
 /** An event as the API answers it; tests override what they care about. */
 export function makeEvent(id: number, overrides: Partial<TimelineEvent> = {}): TimelineEvent {
@@ -25,7 +26,7 @@ export function fakeJsonApi(routes: Record<string, unknown>) {
     vi.fn(async (input: RequestInfo | URL) => {
       const path = String(input).replace(/^\/api/, '');
       asked.push(path);
-      return path in routes ? json(200, routes[path]) : json(404, { error: { code: 'not-found', message: 'Not found.' } });
+      return path in routes ? json(200, routes[path]) : toResponse(notFound());
     }),
   );
   return { asked };

@@ -5,6 +5,7 @@ import { vi } from 'vitest';
 import { BenchInputError } from '../../../../shared/bench';
 import type { LineUp, Measurement, MeasurementInput } from '../../../../shared/schemas/measurements';
 import { makeMeasurement } from './measurement-fixtures';
+import { apiError, notFound, toResponse } from '../../../testing/fake-api';
 
 export interface Call {
   method: string;
@@ -14,7 +15,7 @@ export interface Call {
 
 const json = (status: number, body: unknown) =>
   new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
-const refuse = (message: string) => json(400, { error: { code: 'bad-request', message } });
+const refuse = (message: string) => toResponse(apiError(400, message));
 
 /**
  * Stands in for the API behind `fetch`: readings are judged by the bench library as the server does (a value it
@@ -67,7 +68,7 @@ export function fakeReadingsApi(initial: Measurement[], { lineUp, refuseLocation
       valves = { valves: (body as LineUp).valves, liveChassis: { likely: series.length > 0, reasons: series.map((v) => `${v.type}: series heater`) } };
       return json(200, valves);
     }
-    return json(404, { error: { code: 'not-found', message: 'Not found.' } });
+    return toResponse(notFound());
   });
   vi.stubGlobal('fetch', fetchMock);
   return { calls, fetchMock };

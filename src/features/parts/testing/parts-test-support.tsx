@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { vi } from 'vitest';
 import type { Part, PartInput } from '../../../../shared/schemas/parts';
 import { makePart } from './part-fixtures';
+import { apiError, notFound, toResponse } from '../../../testing/fake-api';
 
 export interface Call {
   method: string;
@@ -39,7 +40,7 @@ export function fakePartsApi(
     const id = Number(/\/api\/parts\/(\d+)$/.exec(url)?.[1]);
     if (method === 'PATCH') {
       await holdChanges;
-      if (refuseChanges) return json(refuseChanges.status, { error: { code: 'refused', message: refuseChanges.message } });
+      if (refuseChanges) return toResponse(apiError(refuseChanges.status, refuseChanges.message));
       list = list.map((p) => (p.id === id ? makePart(id, { ...p, ...(body as Partial<PartInput>) }) : p));
       return json(200, list.find((p) => p.id === id));
     }
@@ -47,7 +48,7 @@ export function fakePartsApi(
       list = list.filter((p) => p.id !== id);
       return new Response(null, { status: 204 });
     }
-    return json(404, { error: { code: 'not-found', message: 'Not found.' } });
+    return toResponse(notFound());
   });
   vi.stubGlobal('fetch', fetchMock);
   return { calls, fetchMock };

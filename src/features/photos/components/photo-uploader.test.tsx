@@ -6,6 +6,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { makePhoto } from '../testing/photo-fixtures';
 import { fakePhotoApi, renderWithQueries } from '../testing/photo-test-support';
 import { PhotoLibrary } from './photo-library';
+import { apiError } from '../../../testing/fake-api';
 
 /** Stands in for the browser's XMLHttpRequest so a test can report progress and answer when it likes. */
 class FakeXhr {
@@ -107,7 +108,7 @@ describe('photo uploader', () => {
 
   it('when the server refuses, then its words are shown and Retry sends the file again', async () => {
     await startWith([jpeg('a.jpg')]);
-    await FakeXhr.sent[0]?.respond(500, { error: { code: 'storage', message: 'The photo store is not answering.' } });
+    await FakeXhr.sent[0]?.respond(500, apiError(500, 'The photo store is not answering.').body);
 
     expect(within(row('a.jpg')).getByRole('alert')).toHaveTextContent('The photo store is not answering.');
     await userEvent.setup().click(screen.getByRole('button', { name: 'Retry a.jpg' }));
@@ -117,7 +118,7 @@ describe('photo uploader', () => {
 
   it('when a photo is too large, then the server’s message is shown and no pointless Retry is offered', async () => {
     await startWith([jpeg('huge.jpg')]);
-    await FakeXhr.sent[0]?.respond(413, { error: { code: 'too-large', message: 'Photos can be at most 40 MB.' } });
+    await FakeXhr.sent[0]?.respond(413, apiError(413, 'Photos can be at most 40 MB.').body);
     expect(within(row('huge.jpg')).getByRole('alert')).toHaveTextContent('Photos can be at most 40 MB.');
     expect(screen.queryByRole('button', { name: 'Retry huge.jpg' })).not.toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Remove huge.jpg from the list' })).toBeInTheDocument();

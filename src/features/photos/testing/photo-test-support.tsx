@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { MemoryRouter } from 'react-router';
 import { vi } from 'vitest';
 import type { Photo } from '../../../../shared/schemas/photos';
+import { apiError, notFound, toResponse } from '../../../testing/fake-api';
 
 export interface Call {
   method: string;
@@ -26,7 +27,7 @@ export function fakePhotoApi(initial: Photo[], { failList = false } = {}) {
     const body = typeof init.body === 'string' ? JSON.parse(init.body) : undefined;
     calls.push({ method, url, body });
     if (url.endsWith('/photos') && method === 'GET') {
-      return failList ? json(500, { error: { code: 'internal', message: 'The photo store is not answering.' } }) : json(200, photos);
+      return failList ? toResponse(apiError(500, 'The photo store is not answering.')) : json(200, photos);
     }
     const id = Number(url.match(/\/api\/photos\/(\d+)$/)?.[1]);
     if (method === 'PATCH') {
@@ -37,7 +38,7 @@ export function fakePhotoApi(initial: Photo[], { failList = false } = {}) {
       photos = photos.filter((p) => p.id !== id);
       return new Response(null, { status: 204 });
     }
-    return json(404, { error: { code: 'not-found', message: 'Not found.' } });
+    return toResponse(notFound());
   });
   vi.stubGlobal('fetch', fetchMock);
   return { calls, fetchMock };

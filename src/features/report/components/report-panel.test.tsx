@@ -6,6 +6,7 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../shared/permissions';
 import { ReportPanel } from './report-panel';
+import { apiError, notFound, toResponse } from '../../../testing/fake-api';
 
 afterEach(() => {
   cleanup();
@@ -20,7 +21,7 @@ function fakeSend(answer: () => Response) {
   const held = new Promise<void>((resolve) => (release = resolve));
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
     await held;
-    return String(input) === '/api/restorations/7/report/send' && init.method === 'POST' ? answer() : json(404, { error: { code: 'not-found', message: 'Not found.' } });
+    return String(input) === '/api/restorations/7/report/send' && init.method === 'POST' ? answer() : toResponse(notFound());
   });
   vi.stubGlobal('fetch', fetchMock);
   return { fetchMock, release };
@@ -46,7 +47,7 @@ describe('report panel', () => {
   });
 
   it('when there is no owner to send to (409), then the server’s message shows', async () => {
-    const { release } = fakeSend(() => json(409, { error: { code: 'conflict', message: 'No owner is on this restoration yet: invite them from the People tab first.' } }));
+    const { release } = fakeSend(() => toResponse(apiError(409, 'No owner is on this restoration yet: invite them from the People tab first.')));
     release();
     const user = userEvent.setup();
     renderPanel('technician');

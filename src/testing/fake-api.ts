@@ -1,0 +1,50 @@
+import { vi } from 'vitest';
+import { knownApiErrorSchema, type ApiErrorCode } from '../../shared/schemas/errors';
+
+/**
+ * The one way component tests stand in for the API. Error answers are built by `apiError` and checked against
+ * the shared error schema, so a fake can only answer with a code the server really sends.
+ */
+export interface Call {
+  method: string;
+  path: string;
+  body: unknown;
+}
+export type Reply = { status: number; body?: unknown };
+
+/** The code the server sends with each status when nothing more specific applies (see server/http/errors.ts). */
+const usualCode: Record<number, ApiErrorCode> = {
+  400: 'bad_request', 401: 'unauthorized', 403: 'forbidden', 404: 'not_found', 409: 'conflict', 410: 'gone',
+  413: 'too_large', 415: 'unsupported_type', 429: 'too_many_requests', 500: 'internal', 503: 'mail_unavailable',
+};
+
+/** An error answer as the server writes it; throws when the code is not one the server sends. */
+export function apiError(status: number, message: string, code: ApiErrorCode | undefined = usualCode[status]): Reply {
+  return { status, body: knownApiErrorSchema.parse({ error: { code, message } }) };
+}
+export const ok = (body: unknown): Reply => ({ status: 200, body });
+export const notFound = (): Reply => apiError(404, 'Not found.');
+
+/** A fetch Response for a reply (204 carries no body). */
+export function toResponse(reply: Reply): Response {
+  if (reply.status === 204 || reply.body === undefined) return new Response(null, { status: reply.status });
+  return new Response(JSON.stringify(reply.body), { status: reply.status, headers: { 'Content-Type': 'application/json' } });
+}
+
+/**
+ * Stands in for the API behind `fetch`: `answer` gets each call (path without /api) and returns the reply, or
+ * nothing for the server's 404. Every call and its headers are recorded so tests can check what was sent.
+ */
+export function fakeApi(answer: (call: Call) => Reply | undefined | Promise<Reply | undefined>) {
+  const calls: Call[] = [];
+  /** The request headers of each call, in the same order as `calls`. */
+  const headers: Record<string, string>[] = [];
+  const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
+    const call = { method: init.method ?? 'GET', path: String(input).replace(/^\/api/, ''), body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined };
+    calls.push(call);
+    headers.push(Object.fromEntries([...new Headers(init.headers).entries()].map(([k, v]) => [k.toLowerCase(), v])));
+    return toResponse((await answer(call)) ?? notFound());
+  });
+  vi.stubGlobal('fetch', fetchMock);
+  return { calls, headers, fetchMock };
+}
