@@ -85,6 +85,8 @@ export interface WaxCapSpec {
   a: Pt; b: Pt; lift?: number; print: string; colour?: string; len?: number;
   /** Restuffed: a film capacitor inside, the ends sealed again with fresh wax of matching colour. */
   resealed?: boolean;
+  /** Leaky and run warm: wax has softened, run from both ends and dripped, the paper split by the print. */
+  weeping?: boolean;
 }
 
 /** A wax-dipped paper tubular, its outer-foil end marked with a black ring. */
@@ -99,8 +101,22 @@ export function waxCap(c: WaxCapSpec): Drawn {
   const draw = (l: number): string =>
     tube(l, dia, wax) + end(-l / 2 + 8) + end(l / 2 - 8) +
     `<rect x="${f(-l / 2 + 24)}" y="${f(-dia / 2)}" width="7" height="${dia}" fill="#1d1a16"/>` +
-    text(6, 5, c.print, { size: 15, fill: '#2a2218', family: 'condensed', weight: 'bold' }) + CYL(l, dia);
+    text(6, 5, c.print, { size: 15, fill: '#2a2218', family: 'condensed', weight: 'bold' }) + CYL(l, dia) + (c.weeping ? weep(l, dia, wax) : '');
   return axial(c.a, c.b, c.lift ?? 0, len, dia, draw, c.resealed);
+}
+
+/** Softened wax run out of both ends and hanging in drips, a dark stain and a split in the paper. */
+function weep(l: number, dia: number, wax: string): string {
+  const drip = (x: number, drop: number): string =>
+    `<path d="M${f(x - 9)} ${f(dia / 2 - 3)} Q${f(x - 6)} ${f(dia / 2 + drop)} ${f(x)} ${f(dia / 2 + drop + 6)} Q${f(x + 7)} ${f(dia / 2 + drop)} ${f(x + 9)} ${f(dia / 2 - 3)} Z" fill="${shade(wax, 0.72)}" stroke="${shade(wax, 0.5)}" stroke-width="1"/>` +
+    `<ellipse cx="${f(x - 2)}" cy="${f(dia / 2 + drop)}" rx="2.5" ry="4" fill="#fff" fill-opacity="0.5"/>`;
+  return (
+    `<ellipse cx="${f(-l / 2 + 2)}" cy="2" rx="17" ry="${f(dia / 2 + 6)}" fill="${shade(wax, 0.66)}" fill-opacity="0.9"/>` +
+    `<ellipse cx="${f(l / 2 - 2)}" cy="2" rx="17" ry="${f(dia / 2 + 6)}" fill="${shade(wax, 0.66)}" fill-opacity="0.9"/>` +
+    drip(-l / 2 + 10, 14) + drip(l / 2 - 14, 22) + drip(l * 0.18, 9) +
+    `<rect x="${f(-l / 2 + 32)}" y="${f(-dia / 2)}" width="${f(l * 0.34)}" height="${f(dia)}" fill="#3a2410" fill-opacity="0.35"/>` +
+    `<path d="M${f(l * 0.4)} ${f(-dia / 2)} l5 8 l-6 9 l6 8 l-3 ${f(dia / 2 - 12)}" stroke="#2a1a0c" stroke-width="2" fill="none"/>`
+  );
 }
 
 export interface ElectrolyticSpec {
