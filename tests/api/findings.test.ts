@@ -21,7 +21,7 @@ beforeAll(async () => {
   people = {
     tech: await createUser(t.db, { name: 'Mara Bench' }),
     mentor: await createUser(t.db, { name: 'Teodor Afar' }),
-    owner: await createUser(t.db, { name: 'Philippa Home' }),
+    owner: await createUser(t.db, { name: 'Imogen Home' }),
   };
   restorationId = (await createRestoration(t.db, [
     { userId: people.tech.id, role: 'technician' }, { userId: people.mentor.id, role: 'mentor' }, { userId: people.owner.id, role: 'owner' },
@@ -86,9 +86,9 @@ describe('threads and what the owner sees', () => {
     await tech.patch(`/api/findings/${f.id}`).send({ ownerVisible: true });
     expect((await owner.get(`/api/findings/${f.id}`)).status).toBe(200);
 
-    const secret = 'INTERNAL-ONLY: quote was too low, do not mention @Philippa';
+    const secret = 'INTERNAL-ONLY: quote was too low, do not mention @Imogen';
     expect((await mentor.post(`/api/findings/${f.id}/comments`).send({ body: secret, internal: true })).status).toBe(201);
-    const shared = await tech.post(`/api/findings/${f.id}/comments`).send({ body: 'We will replace C30 with a modern part of the same rating, @Philippa.', internal: false });
+    const shared = await tech.post(`/api/findings/${f.id}/comments`).send({ body: 'We will replace C30 with a modern part of the same rating, @Imogen.', internal: false });
     expect(shared.status).toBe(201);
 
     const thread = (await owner.get(`/api/findings/${f.id}/comments`)).body;

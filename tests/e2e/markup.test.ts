@@ -73,7 +73,7 @@ describe('marking a spot and talking about it', () => {
     await expect.poll(() => tech.evaluate(async (id) => ((await (await fetch(`/api/findings/${id}`)).json()) as { status: string }).status, findingId)).toBe('confirmed');
 
     const owner = await newPage(ctx.browser, { width: 390, height: 844 });
-    await signInAs(owner, ctx.product.origin, 'philippa@example.test');
+    await signInAs(owner, ctx.product.origin, 'imogen@example.test');
     await owner.goto(findingUrl);
     await owner.getByText('not shared with you').waitFor();
     await tech.getByRole('switch', { name: /Share with owner/ }).click();
