@@ -36,7 +36,7 @@ export const RESISTORS: readonly (ResistorSpec & Ref)[] = [
 
 export const WAX_CAPS: readonly (WaxCapSpec & Ref)[] = [
   { ref: 'C27', note: 'EABC80 anode to EL84 grid coupling, 0,022 µF 350 V, leaky', print: '0,022µ 350V', a: tag('TS1', 4), b: pin('V5', 2), len: 140, weeping: true },
-  { ref: 'C14', print: '0,047µF 500V', a: tag('TS1', 7), b: pin('V2', 1) },
+  { ref: 'C14', print: '0,05µF 500V', a: tag('TS1', 7), b: pin('V2', 1) },
   { ref: 'C12', print: '0,01µF 750V', a: LUGS.E1, b: tag('TS3', 0), colour: '#c9a15a' },
   { ref: 'C23', print: '0,1µF 350V', a: tag('TS4', 4), b: GANG_TAGS[3] ?? [0, 0], colour: '#b98e4e', len: 140 },
 ];
