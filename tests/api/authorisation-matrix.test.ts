@@ -83,7 +83,7 @@ const matrix: Row[] = [
   ['PUT', '/api/restorations/:id/valves', [200, 403, 403, 404, 401], () => ({ valves: [{ position: 'V1', type: 'EL84' }] })],
   ['GET', '/api/restorations/:id/parts', [200, 200, 200, 404, 401]],
   ['GET', '/api/restorations/:id/parts.csv', [200, 200, 200, 404, 401]],
-  ['POST', '/api/restorations/:id/parts', [201, 403, 403, 404, 401], () => ({ componentRef: 'C30', replacementRating: '47µF 450V' })],
+  ['POST', '/api/restorations/:id/parts', [201, 403, 403, 404, 401], () => ({ componentRef: 'C27', replacementRating: '22nF 630V' })],
   ['PATCH', '/api/parts/:partId', [200, 403, 403, 404, 401], () => ({ state: 'ordered' })],
   ['DELETE', '/api/parts/:partId', [204, 403, 403, 404, 401]],
   ['GET', '/api/restorations/:id/events', [200, 200, 200, 404, 401]],

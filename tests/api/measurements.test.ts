@@ -20,11 +20,11 @@ const post = (body: object) => tech.post(`/api/restorations/${restorationId}/mea
 
 describe('measurements', () => {
   it('when a reading is recorded, then the stored verdict and reason equal the bench library’s', async () => {
-    const body = { location: 'C30', quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω', method: 'ESR meter, 100 kHz, in circuit' };
+    const body = { location: 'C26', quantity: 'esr', expected: '22µ', rating: '25 V', reading: '1.1 Ω', method: 'ESR meter, 100 kHz, in circuit' };
     const res = await post(body);
     expect(res.status).toBe(201);
-    const library = measurementVerdict({ quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω' });
-    expect(res.body).toMatchObject({ verdict: library.verdict, verdictReason: library.reason, reading: 0.5, expected: 50e-6, rating: 400, expectedText: '50µ' });
+    const library = measurementVerdict({ quantity: 'esr', expected: '22µ', rating: '25 V', reading: '1.1 Ω' });
+    expect(res.body).toMatchObject({ verdict: library.verdict, verdictReason: library.reason, reading: 1.1, expected: 22e-6, rating: 25, expectedText: '22µ' });
   });
 
   it('when the inputs change, then the verdict is recomputed', async () => {

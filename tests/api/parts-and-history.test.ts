@@ -20,10 +20,10 @@ afterAll(() => t.stop());
 const addPart = (body: object) => tech.post(`/api/restorations/${restorationId}/parts`).send(body);
 
 describe('parts ledger', () => {
-  it('when a 350 V capacitor replaces a 450 V one, then the ledger flags it; 47 µF 450 V for 50 µF 350 V passes', async () => {
+  it('when a 350 V capacitor replaces a 450 V one, then the ledger flags it; 33 µF 500 V for 32 µF 350 V passes', async () => {
     const bad = (await addPart({ componentRef: 'C30', originalPart: 'Can electrolytic', originalRating: '32µF 450V', replacementPart: 'Radial', replacementRating: '33µF 350V' })).body;
     expect(bad.warnings).toEqual([expect.objectContaining({ level: 'danger' })]);
-    const good = (await addPart({ componentRef: 'C31', originalRating: '50µF 350V', replacementRating: '47µF 450V', action: 'restuffed' })).body;
+    const good = (await addPart({ componentRef: 'C31', originalRating: '32µF 350V', replacementRating: '33µF 500V', action: 'restuffed' })).body;
     expect(good.warnings).toEqual([]);
   });
 

@@ -38,11 +38,11 @@ describe('part form', () => {
     expect(preview()).toHaveTextContent("⚠ Danger: Rated 350 V, below the original's 450 V: never lower the voltage rating.");
   });
 
-  it('when 47µF 450V replaces 50µF 350V, then the preview has no warning', async () => {
+  it('when 33µF 500V replaces 32µF 350V, then the preview has no warning', async () => {
     fakePartsApi([]);
     const user = userEvent.setup();
     renderWithQueries(<PartForm restorationId={7} />);
-    await typeChange(user, 'C16', '50µF 350V', '47µF 450V');
+    await typeChange(user, 'C16', '32µF 350V', '33µF 500V');
     expect(preview()).not.toHaveTextContent(/Danger|Caution/);
     expect(preview()).toHaveTextContent('No warnings from the ratings given.');
   });
