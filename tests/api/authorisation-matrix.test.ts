@@ -121,7 +121,7 @@ async function fixture(): Promise<Fixture> {
   const photoId = await photosRepo(t.db).insert({ restorationId: r.id, storageKey,
     view: 'underside', phase: 'before', width: 600, height: 400, contentType: 'image/jpeg', sizeBytes: jpeg.length });
   const findingId = await findingsRepo(t.db).insert({ restorationId: r.id, photoId, shape: 'pin', points: [{ x: 0.5, y: 0.4 }],
-    title: 'Charred R23', kind: 'overheated', severity: 'fault', authorId: people.technician!.id });
+    title: 'Leaky C27', kind: 'leaking', severity: 'fault', authorId: people.technician!.id });
   const commentId = await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true });
   const measurementId = (await measurementsService(t.db).create(r.id, { location: 'R23', quantity: 'resistance', expected: '150', reading: '212' }, people.technician!.id)).id;
   const partId = (await partsService(t.db).create(r.id, { componentRef: 'R23', action: 'replaced' }, people.technician!.id)).id;

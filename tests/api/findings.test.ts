@@ -37,7 +37,7 @@ const mails = async () => (await t.request().get('/api/dev/mail')).body as Captu
 
 describe('findings', () => {
   it('when a technician pins a finding, then it is numbered, kept in image coordinates and listed on its photo', async () => {
-    const a = await tech.post(`/api/photos/${sharedPhoto}/findings`).send(pin('Charred cathode resistor'));
+    const a = await tech.post(`/api/photos/${sharedPhoto}/findings`).send(pin('Leaky coupling capacitor'));
     expect(a.status).toBe(201);
     expect(a.body).toMatchObject({ number: 1, shape: 'pin', points: [{ x: 0.5096, y: 0.4238 }], status: 'observed', componentRef: 'R23', ownerVisible: false });
     const b = await mentor.post(`/api/photos/${sharedPhoto}/findings`).send({ shape: 'circle', points: [{ x: 0.3, y: 0.7 }, { x: 0.35, y: 0.7 }], title: 'Check this joint' });
