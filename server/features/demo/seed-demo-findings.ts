@@ -14,7 +14,7 @@ const scenario = [
     landmark: 'C27', shape: 'circle' as const, title: 'Leaky coupling capacitor to the output valve', componentRef: 'C27', kind: 'leaking' as const,
     severity: 'fault' as const, status: 'repaired' as const, ownerVisible: true, question: false,
     thread: [
-      ['technician', 'Ran it on the variac with the back off: after about four minutes the EL84 anode glows dull red. V5 grid (pin 2) sits at +4.6 V to chassis where it should be a fraction of a volt, and the cathode climbs to 12.8 V.', 'internal'],
+      ['technician', 'Brought it up slowly on the variable autotransformer with the back off: after about four minutes the EL84 anode glows dull red. V5 grid (pin 2) sits at +4.6 V to chassis where it should be a fraction of a volt, and the cathode climbs to 12.8 V.', 'internal'],
       ['mentor', 'Positive grid with a red anode: the coupling cap from the EABC80 is passing DC. Lift one end of C27 and test it at working voltage before you condemn the valve, and measure the grid leak R28 while you are there.', 'internal'],
       ['technician', 'C27 out of circuit: 3.3 MΩ at 350 V, it should be well over 100 MΩ. R28 reads 1.3 MΩ against 470 kΩ, which let the grid float up further.', 'internal'],
       ['technician', 'The capacitor that passes the signal to the output valve was leaking and pushed that valve too hard, which is why it glowed red and the sound faded. It and the resistor beside it have been replaced; the valve tests good and stays cool now.', 'shared'],

@@ -27,7 +27,7 @@ export async function seedDemoWorkshop(db: Database): Promise<void> {
   const c27 = await ref('C27');
   await reading({ location: 'C27 (out of circuit)', quantity: 'insulation', expected: '100M', reading: '3.3M', method: 'Insulation tester, 350 V DC, one end lifted', findingId: c27 });
   await reading({ location: 'R28', quantity: 'resistance', expected: '470k', tolerance: '20', reading: '1.3M', method: 'Out of circuit, cold', findingId: c27 });
-  await reading({ ...voltage, location: 'V5 pin 3 (cathode), as found', expected: '8.5', reading: '12.8', conditions: 'After four minutes on the variac at full mains, before any repair', findingId: c27 });
+  await reading({ ...voltage, location: 'V5 pin 3 (cathode), as found', expected: '8.5', reading: '12.8', conditions: 'After four minutes at full mains on the variable autotransformer, before any repair', findingId: c27 });
   await reading({ ...voltage, location: 'HT at can section A', expected: '265', reading: '271', ownerVisible: true });
   await reading({ ...voltage, location: 'V5 pin 7 (anode)', expected: '255', reading: '263' });
   await reading({ ...voltage, location: 'V5 pin 9 (screen)', expected: '235', reading: '244' });

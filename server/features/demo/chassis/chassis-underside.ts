@@ -95,10 +95,10 @@ function pencilMarks(p: UndersideParts, state: ChassisState): string {
   const crack = CRACKED_LEAD.gap[0];
   const [vx, vy] = UNDER.volume.at;
   if (!done) {
-    return mark('C27', -150, -95, -3) + mark('R28', 100, 60, -6) + mark('C14', 52, 30, -8) +
+    return mark('C27', -185, -95, -3) + mark('R28', 178, 30, -6) + mark('C14', 52, 30, -8) +
       pencil(crack[0] - 170, crack[1] - 66, 'perished', -8, 26) + pencil(vx + 150, vy + 14, 'crackles', -4, 24);
   }
-  return mark('C27', -150, -95, -3) + mark('R28', 100, 60, -6) + mark('C14', 52, 30, -8) +
+  return mark('C27', -185, -95, -3) + mark('R28', 178, 30, -6) + mark('C14', 52, 30, -8) +
     pencil(crack[0] - 160, crack[1] - 66, `${TICK} new lead`, -8, 26) + pencil(vx + 160, vy + 14, `${TICK} cleaned`, -4, 24);
 }
 
