@@ -4,15 +4,18 @@ import { findings, parts, restorations, users } from '../../db/schema';
 import { demoPeople } from '../../db/seed/demo-scenario';
 import { measurementsService } from '../measurements/measurements.service';
 import { partsService } from '../parts/parts.service';
+import { seedDemoSideSets } from './seed-demo-side-sets';
 
-/** The Meridian 54 radiogram's bench record: valve line-up, readings, parts ledger and care notes. Runs once. */
+/** The Meridian 54 radiogram's bench record: valve line-up, readings, parts ledger and care notes; then the other sets'. Runs once. */
 export async function seedDemoWorkshop(db: Database): Promise<void> {
+  const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
+  if (!tech) return;
+  const techId = tech.id;
+  await seedDemoSideSets(db, techId);
   const [set] = await db.select().from(restorations).where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
   if (!set) return;
   const [existing] = await db.select({ id: parts.id }).from(parts).where(eq(parts.restorationId, set.id)).limit(1);
   if (existing) return;
-  const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
-  const techId = tech!.id;
   const ref = async (componentRef: string) =>
     (await db.select({ id: findings.id }).from(findings).where(and(eq(findings.restorationId, set.id), eq(findings.componentRef, componentRef))))[0]?.id ?? null;
   await db.update(restorations).set({
