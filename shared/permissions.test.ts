@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { actions, can, roles } from './permissions';
 
-// Expected answers are PRODUCT.md's role table ("Who uses it"), a product rule rather than a computation.
+// Expected answers are the product's own role rules (who may do what): a product decision, no outside source.
 const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boolean>> = {
   'restoration.view': { technician: true, mentor: true, owner: true },
   'restoration.edit': { technician: true, mentor: false, owner: false },

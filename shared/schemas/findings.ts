@@ -33,12 +33,12 @@ export const geometrySchema = z
       ctx.addIssue({ code: 'custom', path: ['points'], message: `a ${g.shape} takes ${min === max ? min : `${min} to ${max}`} points, not ${g.points.length}` });
   });
 
-/** Component reference as the schematic prints it: R23, C15b, V3, T1, VR2, S1a… */
+/** Component reference as the schematic prints it: C27, R20, V5, T1, VR2, S1a… */
 export const componentRefSchema = z
   .string()
   .trim()
   .max(20)
-  .regex(/^$|^[A-Za-z]{1,4}\d{1,5}[a-z]?$/, 'Write the reference as the schematic prints it, e.g. R23, C15b or V3');
+  .regex(/^$|^[A-Za-z]{1,4}\d{1,5}[a-z]?$/, 'Write the reference as the schematic prints it, e.g. C27, R20 or V5');
 
 export const findingInputSchema = z
   .object({

@@ -10,7 +10,7 @@ export const quantityLabels: Record<MeasuredQuantity, string> = {
 const text = (max: number) => z.string().trim().max(max);
 
 const fields = {
-  location: z.string().trim().min(1, 'Say where: a component reference or test point, e.g. R23 or V5 pin 7').max(60),
+  location: z.string().trim().min(1, 'Say where: a component reference or test point, e.g. C27 or V5 pin 3').max(60),
   quantity: z.enum(measuredQuantities),
   expected: text(40),
   tolerance: text(20),

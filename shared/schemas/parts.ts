@@ -13,7 +13,7 @@ export const mainsPositionLabels: Record<(typeof mainsPositions)[number], string
 };
 
 const fields = {
-  componentRef: z.string().trim().min(1, 'Give the reference as the schematic prints it, e.g. C30').max(20),
+  componentRef: z.string().trim().min(1, 'Give the reference as the schematic prints it, e.g. C27').max(20),
   findingId: bodyIdSchema.nullable(),
   originalPart: z.string().trim().max(200),
   originalRating: z.string().trim().max(100),

@@ -86,7 +86,7 @@ const matrix: Row[] = [
   ['PUT', '/api/restorations/:id/valves', [200, 403, 403, 404, 401], () => ({ valves: [{ position: 'V1', type: 'EL84' }] })],
   ['GET', '/api/restorations/:id/parts', [200, 200, 200, 404, 401]],
   ['GET', '/api/restorations/:id/parts.csv', [200, 200, 200, 404, 401]],
-  ['POST', '/api/restorations/:id/parts', [201, 403, 403, 404, 401], () => ({ componentRef: 'C30', replacementRating: '47µF 450V' })],
+  ['POST', '/api/restorations/:id/parts', [201, 403, 403, 404, 401], () => ({ componentRef: 'C27', replacementRating: '22nF 630V' })],
   ['PATCH', '/api/parts/:partId', [200, 403, 403, 404, 401], () => ({ state: 'ordered' })],
   ['DELETE', '/api/parts/:partId', [204, 403, 403, 404, 401]],
   ['GET', '/api/restorations/:id/events', [200, 200, 200, 404, 401]],
@@ -124,7 +124,7 @@ async function fixture(): Promise<Fixture> {
   const photoId = await photosRepo(t.db).insert({ restorationId: r.id, storageKey,
     view: 'underside', phase: 'before', width: 600, height: 400, contentType: 'image/jpeg', sizeBytes: jpeg.length });
   const findingId = await findingsRepo(t.db).insert({ restorationId: r.id, photoId, shape: 'pin', points: [{ x: 0.5, y: 0.4 }],
-    title: 'Charred R23', kind: 'overheated', severity: 'fault', authorId: people.technician!.id });
+    title: 'Leaky C27', kind: 'leaking', severity: 'fault', authorId: people.technician!.id });
   const commentId = (await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true }))!;
   const measurementId = (await measurementsService(t.db).create(r.id, { location: 'R23', quantity: 'resistance', expected: '150', reading: '212' }, people.technician!.id)).id;
   const partId = (await partsService(t.db).create(r.id, { componentRef: 'R23', action: 'replaced' }, people.technician!.id)).id;

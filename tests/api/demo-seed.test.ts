@@ -27,14 +27,20 @@ describe('demo seed', () => {
   it('when seeded twice, then the second run changes nothing', async () => {
     await seedAll();
     const first = await counts();
-    expect(first).toEqual([3, 3, 5, 3, expect.any(Number), 6, 7]);
+    expect(first).toEqual([3, 3, 5, 3, expect.any(Number), 10, 17]);
     await seedAll();
     expect(await counts()).toEqual(first);
   }, 120_000);
 
   it('when the demo findings are pinned, then they sit on the drawn parts of the underside picture', async () => {
-    const r23 = (await t.db.select().from(findings)).find((f) => f.componentRef === 'R23')!;
-    const mark = chassisLandmarks('underside').R23!;
-    expect(r23.points[0]).toEqual({ x: mark.x, y: mark.y });
+    const all = await t.db.select().from(findings);
+    const marks = chassisLandmarks('underside');
+    const c27 = all.find((f) => f.componentRef === 'C27')!;
+    expect(c27.points[0]).toEqual({ x: marks.C27!.x, y: marks.C27!.y });
+    // The volume control's box is centred on the drawn control.
+    const pot = all.find((f) => f.componentRef === 'R20')!;
+    const [a, b] = pot.points as [{ x: number; y: number }, { x: number; y: number }];
+    expect((a.x + b.x) / 2).toBeCloseTo(marks.volumeControl!.x, 9);
+    expect((a.y + b.y) / 2).toBeCloseTo(marks.volumeControl!.y, 9);
   });
 });

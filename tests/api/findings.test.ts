@@ -21,7 +21,7 @@ beforeAll(async () => {
   people = {
     tech: await createUser(t.db, { name: 'Mara Bench' }),
     mentor: await createUser(t.db, { name: 'Teodor Afar' }),
-    owner: await createUser(t.db, { name: 'Philippa Home' }),
+    owner: await createUser(t.db, { name: 'Imogen Home' }),
   };
   restorationId = (await createRestoration(t.db, [
     { userId: people.tech.id, role: 'technician' }, { userId: people.mentor.id, role: 'mentor' }, { userId: people.owner.id, role: 'owner' },
@@ -40,7 +40,7 @@ describe('findings', () => {
     // A restoration of its own, so the numbers do not depend on what other tests placed.
     const own = await createRestoration(t.db, [{ userId: people.tech.id, role: 'technician' }, { userId: people.mentor.id, role: 'mentor' }]);
     const sharedPhoto = await createPhotoRow(t.db, own.id, true);
-    const a = await tech.post(`/api/photos/${sharedPhoto}/findings`).send(pin('Charred cathode resistor'));
+    const a = await tech.post(`/api/photos/${sharedPhoto}/findings`).send(pin('Leaky coupling capacitor'));
     expect(a.status).toBe(201);
     expect(a.body).toMatchObject({ number: 1, shape: 'pin', points: [{ x: 0.5096, y: 0.4238 }], status: 'observed', componentRef: 'R23', ownerVisible: false });
     const b = await mentor.post(`/api/photos/${sharedPhoto}/findings`).send({ shape: 'circle', points: [{ x: 0.3, y: 0.7 }, { x: 0.35, y: 0.7 }], title: 'Check this joint' });
@@ -89,9 +89,9 @@ describe('threads and what the owner sees', () => {
     await tech.patch(`/api/findings/${f.id}`).send({ ownerVisible: true });
     expect((await owner.get(`/api/findings/${f.id}`)).status).toBe(200);
 
-    const secret = 'INTERNAL-ONLY: quote was too low, do not mention @Philippa';
+    const secret = 'INTERNAL-ONLY: quote was too low, do not mention @Imogen';
     expect((await mentor.post(`/api/findings/${f.id}/comments`).send({ body: secret, internal: true })).status).toBe(201);
-    const shared = await tech.post(`/api/findings/${f.id}/comments`).send({ body: 'We will replace C30 with a modern part of the same rating, @Philippa.', internal: false });
+    const shared = await tech.post(`/api/findings/${f.id}/comments`).send({ body: 'We will replace C30 with a modern part of the same rating, @Imogen.', internal: false });
     expect(shared.status).toBe(201);
 
     const thread = (await owner.get(`/api/findings/${f.id}/comments`)).body;

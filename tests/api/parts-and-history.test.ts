@@ -20,10 +20,10 @@ afterAll(() => t.stop());
 const addPart = (body: object) => tech.post(`/api/restorations/${restorationId}/parts`).send(body);
 
 describe('parts ledger', () => {
-  it('when a 350 V capacitor replaces a 450 V one, then the ledger flags it; 47 µF 450 V for 50 µF 350 V passes', async () => {
+  it('when a 350 V capacitor replaces a 450 V one, then the ledger flags it; 33 µF 500 V for 32 µF 350 V passes', async () => {
     const bad = (await addPart({ componentRef: 'C30', originalPart: 'Can electrolytic', originalRating: '32µF 450V', replacementPart: 'Radial', replacementRating: '33µF 350V' })).body;
     expect(bad.warnings).toEqual([expect.objectContaining({ level: 'danger' })]);
-    const good = (await addPart({ componentRef: 'C31', originalRating: '50µF 350V', replacementRating: '47µF 450V', action: 'restuffed' })).body;
+    const good = (await addPart({ componentRef: 'C31', originalRating: '32µF 350V', replacementRating: '33µF 500V', action: 'restuffed' })).body;
     expect(good.warnings).toEqual([]);
   });
 
@@ -65,11 +65,11 @@ describe('history', () => {
     const privatePhoto = await createPhotoRow(t.db, restorationId, false);
     const sharedPhoto = await createPhotoRow(t.db, restorationId, true);
     const hidden = (await tech.post(`/api/photos/${privatePhoto}/findings`).send({ shape: 'pin', points: [{ x: 0.1, y: 0.1 }], title: 'SECRET-FINDING' })).body;
-    const shown = (await tech.post(`/api/photos/${sharedPhoto}/findings`).send({ shape: 'pin', points: [{ x: 0.2, y: 0.2 }], title: 'Charred R23', ownerVisible: true })).body;
+    const shown = (await tech.post(`/api/photos/${sharedPhoto}/findings`).send({ shape: 'pin', points: [{ x: 0.2, y: 0.2 }], title: 'Leaky C27', ownerVisible: true })).body;
     await tech.patch(`/api/findings/${shown.id}`).send({ status: 'repaired' });
     await tech.patch(`/api/findings/${hidden.id}`).send({ questionOpen: true });
     await tech.patch(`/api/restorations/${restorationId}`).send({ stage: 'repair' });
-    const part = (await addPart({ componentRef: 'R23', replacementPart: 'Metal film 150 Ω 2 W' })).body;
+    const part = (await addPart({ componentRef: 'R28', replacementPart: 'Metal film 470 kΩ 0.6 W' })).body;
     await tech.patch(`/api/parts/${part.id}`).send({ state: 'fitted' });
     await tech.post(`/api/restorations/${restorationId}/measurements`).send({ location: 'HT', quantity: 'dc-voltage', expected: '250', reading: '330', ownerVisible: false });
 
@@ -77,13 +77,13 @@ describe('history', () => {
     expect(techView.map((e) => e.kind)).toEqual(expect.arrayContaining(['finding-opened', 'finding-status', 'question-asked', 'stage-changed', 'part-fitted', 'measurement-out']));
     expect(techView.find((e) => e.kind === 'finding-status')!.summary).toMatch(/Observed → Repaired/);
     const ownerView = JSON.stringify((await owner.get(`/api/restorations/${restorationId}/events`)).body);
-    expect(ownerView).toContain('Charred R23');
+    expect(ownerView).toContain('Leaky C27');
     expect(ownerView).toContain('Stage: Intake → Repair');
     expect(ownerView).not.toContain('SECRET-FINDING');
     expect(ownerView).not.toContain('question');
     expect(ownerView).not.toContain('Out of tolerance');
     const benchActivity = JSON.stringify((await owner.get('/api/activity')).body);
-    expect(benchActivity).toContain('Charred R23');
+    expect(benchActivity).toContain('Leaky C27');
     expect(benchActivity).not.toContain('SECRET-FINDING');
     const onlyParts = (await tech.get(`/api/restorations/${restorationId}/events`).query({ kind: 'part-fitted' })).body;
     expect(onlyParts.map((e: { kind: string }) => e.kind)).toEqual(['part-fitted']);

@@ -32,15 +32,15 @@ beforeAll(async () => {
   const before = await up({ view: 'underside', phase: 'before', ownerVisible: 'true', caption: 'As received' });
   await up({ view: 'underside', phase: 'after', ownerVisible: 'true', caption: 'Recapped' });
   const secretPhoto = await up({ view: 'detail', phase: 'during', caption: 'PRIVATE-PHOTO-CAPTION' });
-  const shared = (await tech.post(`/api/photos/${before}/findings`).send({ shape: 'circle', points: [{ x: 0.5, y: 0.5 }, { x: 0.55, y: 0.5 }], title: 'Charred cathode resistor', componentRef: 'R23', kind: 'overheated', severity: 'fault', ownerVisible: true })).body;
+  const shared = (await tech.post(`/api/photos/${before}/findings`).send({ shape: 'circle', points: [{ x: 0.5, y: 0.5 }, { x: 0.55, y: 0.5 }], title: 'Leaky coupling capacitor to the output valve', componentRef: 'C27', kind: 'leaking', severity: 'fault', ownerVisible: true })).body;
   await tech.patch(`/api/findings/${shared.id}`).send({ status: 'repaired' });
   await tech.post(`/api/findings/${shared.id}/comments`).send({ body: 'INTERNAL-COMMENT-TEXT', internal: true });
   await tech.post(`/api/photos/${before}/findings`).send({ shape: 'pin', points: [{ x: 0.2, y: 0.2 }], title: 'INTERNAL-FINDING-TITLE' });
   await tech.post(`/api/photos/${secretPhoto}/findings`).send({ shape: 'pin', points: [{ x: 0.2, y: 0.2 }], title: 'ON-PRIVATE-PHOTO', ownerVisible: true });
-  await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'INTERNAL-READING', quantity: 'dc-voltage', expected: '250', reading: '251' });
-  await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'HT line', quantity: 'dc-voltage', expected: '250', reading: '248', ownerVisible: true });
+  await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'INTERNAL-READING', quantity: 'dc-voltage', expected: '265', reading: '268' });
+  await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'HT line', quantity: 'dc-voltage', expected: '265', reading: '271', ownerVisible: true });
   await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'Mains pins to chassis', quantity: 'insulation', reading: '50M', ownerVisible: true });
-  const part = (await tech.post(`/api/restorations/${id}/parts`).send({ componentRef: 'R23', originalRating: '150 Ω 1 W', replacementPart: 'Metal film', replacementRating: '150 Ω 2 W', testedAfter: 'Cathode 7.4 V' })).body;
+  const part = (await tech.post(`/api/restorations/${id}/parts`).send({ componentRef: 'C27', originalRating: '0.022µF 350V', replacementPart: 'Polyester film', replacementRating: '22nF 630V', testedAfter: 'Output cathode 8.3 V' })).body;
   await tech.patch(`/api/parts/${part.id}`).send({ state: 'fitted' });
 });
 afterAll(() => t.stop());
@@ -51,7 +51,7 @@ describe('hand-back report', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = await pdfText(res.body as Buffer);
-    for (const expected of ['Hand-back report', 'Fenwick Nightjar 6', 'Charred cathode resistor', 'Before and after', 'Metal film', '150 Ω 2 W', 'HT line', 'Mains pins to chassis', 'not a certificate of electrical safety'])
+    for (const expected of ['Hand-back report', 'Fenwick Nightjar 6', 'Leaky coupling capacitor to the output valve', 'Before and after', 'Polyester film', '22nF 630V', 'HT line', 'Mains pins to chassis', 'not a certificate of electrical safety'])
       expect(text.replace(/\s+/g, ' ')).toContain(expected);
     for (const secret of ['INTERNAL-COMMENT-TEXT', 'INTERNAL-FINDING-TITLE', 'INTERNAL-READING', 'PRIVATE-PHOTO-CAPTION', 'ON-PRIVATE-PHOTO'])
       expect(text).not.toContain(secret);

@@ -1,5 +1,6 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
+import { chassisLandmarks } from '../../server/features/demo/chassis';
 import { artifactPath } from '../support/artifacts';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
@@ -68,6 +69,18 @@ describe('marking a spot and talking about it', () => {
     await mentor.getByText('reflow it and measure across R14').waitFor();
     await expectAccessible(mentor, 'a finding with its thread');
 
+    // The demo's own finding on C27 is pinned on the drawn capacitor: clicking the part selects it.
+    await mentor.goto(`${ctx.product.origin}${new URL(findingUrl).pathname.replace(/\/findings\/\d+$/, '')}`);
+    await mentor.getByTestId('markup-stage').waitFor();
+    await expect.poll(() => probe(mentor)).toBeGreaterThan(0);
+    const c27 = chassisLandmarks('underside').C27!;
+    const onPart = await toClient(mentor, c27.x, c27.y);
+    await mentor.mouse.click(onPart.x, onPart.y);
+    await mentor.waitForURL(/\/findings\/\d+$/);
+    const picked = await mentor.evaluate(async () => ((await (await fetch(`/api/findings/${location.pathname.split('/').pop()}`)).json()) as { componentRef: string }).componentRef);
+    expect(picked).toBe('C27');
+    await mentor.screenshot({ path: artifactPath('markup-demo-finding.png') });
+
     const mail = await mailTo(ctx.product.origin, 'mara@cobbold-lane.test', /Gridleak/);
     expect(mail.text).toContain(`/findings/${findingId}`);
 
@@ -76,7 +89,7 @@ describe('marking a spot and talking about it', () => {
     await expect.poll(() => tech.evaluate(async (id) => ((await (await fetch(`/api/findings/${id}`)).json()) as { status: string }).status, findingId)).toBe('confirmed');
 
     const owner = await newPage(ctx.browser, { width: 390, height: 844 });
-    await signInAs(owner, ctx.product.origin, 'philippa@example.test');
+    await signInAs(owner, ctx.product.origin, 'imogen@example.test');
     await owner.goto(findingUrl);
     await owner.getByText('not shared with you').waitFor();
     await tech.getByRole('switch', { name: /Share with owner/ }).click();

@@ -11,7 +11,7 @@ const ctx = useProductAndBrowser();
 describe('the owner at home, on a phone', () => {
   it('when the owner opens their set, then they compare before and after with the slider and download the report', async () => {
     const page = await newPage(ctx.browser, { width: 390, height: 844 });
-    await signInAs(page, ctx.product.origin, 'philippa@example.test');
+    await signInAs(page, ctx.product.origin, 'imogen@example.test');
     await page.goto(ctx.product.origin);
     await page.waitForURL(/\/home/);
     await page.getByText('Meridian 54').first().waitFor();
@@ -35,9 +35,10 @@ describe('the owner at home, on a phone', () => {
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
     const text = (await pdfText(pdf)).replace(/\s+/g, ' ');
     expect(text).toContain('Ostrander & Vale Meridian 54');
-    expect(text).toContain('Charred cathode resistor');
-    // The cracked-lead finding and the internal thread are not shared with the owner.
-    expect(text).not.toContain('Cracked rubber HT lead');
-    expect(text).not.toContain('quote');
+    expect(text).toContain('Leaky coupling capacitor to the output valve');
+    expect(text).toContain('Volume control crackles');
+    // The perished-wiring finding and the internal thread are not shared with the owner.
+    expect(text).not.toContain('Perished rubber wiring');
+    expect(text).not.toContain('Positive grid with a red anode');
   });
 });

@@ -20,7 +20,7 @@ export const measurements = pgTable(
       .notNull()
       .references(() => restorations.id, { onDelete: 'cascade' }),
     findingId: integer().references(() => findings.id, { onDelete: 'set null' }),
-    /** Component reference or test point as the manual names it: "R23", "V5 pin 7", "TP3". */
+    /** Component reference or test point as the manual names it: "C27", "V5 pin 3", "TP3". */
     location: text().notNull(),
     quantity: quantityEnum().notNull(),
     expectedText: text().notNull().default(''),

@@ -16,7 +16,7 @@ export const restorations = pgTable(
     year: integer(),
     serial: text(),
     equipmentKind: equipmentKindEnum().notNull().default('radio'),
-    /** Voltage setting or taps as found, e.g. "220 V tap" or "AC/DC, dropper 1.03 kΩ". */
+    /** Voltage setting or taps as found, e.g. "245 V tap" or "AC/DC, dropper clip on the 230–250 V section". */
     mainsSetting: text(),
     /** AC/DC or otherwise live chassis: shows the isolation-transformer caution. */
     liveChassis: boolean().notNull().default(false),

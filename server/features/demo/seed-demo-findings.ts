@@ -11,30 +11,32 @@ type Line = [Person, string, 'internal' | 'shared'];
 /** The demo's findings on the Meridian 54's underside photo, pinned on the drawn parts, with their threads. */
 const scenario = [
   {
-    landmark: 'R23', shape: 'circle' as const, title: 'Charred cathode resistor', componentRef: 'R23', kind: 'overheated' as const,
+    landmark: 'C27', shape: 'circle' as const, title: 'Leaky coupling capacitor to the output valve', componentRef: 'C27', kind: 'leaking' as const,
     severity: 'fault' as const, status: 'repaired' as const, ownerVisible: true, question: false,
     thread: [
-      ['technician', 'R23 (150 Ω, EL84 cathode) is blackened and reads 212 Ω cold. The bypass C31 beside it is scorched too.', 'internal'],
-      ['mentor', 'Classic: C31 went short, the full cathode current ran through R23. Check the EL84 for a heater-cathode short before fitting new parts, and measure C31 out of circuit.', 'internal'],
-      ['technician', 'C31 measures 3 Ω across it: shorted. EL84 tests fine on heater-cathode.', 'internal'],
-      ['technician', 'The burnt resistor on the output stage will be replaced, with its capacitor, which had failed and caused it.', 'shared'],
+      ['technician', 'Brought it up slowly on the variable autotransformer with the back off: after about four minutes the EL84 anode glows dull red. V5 grid (pin 2) sits at +4.6 V to chassis where it should be a fraction of a volt, and the cathode climbs to 12.8 V.', 'internal'],
+      ['mentor', 'Positive grid with a red anode: the coupling cap from the EABC80 is passing DC. Lift one end of C27 and test it at working voltage before you condemn the valve, and measure the grid leak R28 while you are there.', 'internal'],
+      ['technician', 'C27 out of circuit: 3.3 MΩ at 350 V, it should be well over 100 MΩ. R28 reads 1.3 MΩ against 470 kΩ, which let the grid float up further.', 'internal'],
+      ['technician', 'The capacitor that passes the signal to the output valve was leaking and pushed that valve too hard, which is why it glowed red and the sound faded. It and the resistor beside it have been replaced; the valve tests good and stays cool now.', 'shared'],
     ] as Line[],
   },
   {
-    landmark: 'C30', shape: 'rect' as const, title: 'Bulging filter capacitor', componentRef: 'C30', kind: 'leaking' as const,
-    severity: 'hazard' as const, status: 'repaired' as const, ownerVisible: true, question: false,
+    landmark: 'volumeControl', shape: 'rect' as const, title: 'Volume control crackles', componentRef: 'R20', kind: 'noisy-control' as const,
+    severity: 'wear' as const, status: 'repaired' as const, ownerVisible: true, question: false,
     thread: [
-      ['technician', '@Teodor C30 (32 µF 350 V) has a domed end and a trace of electrolyte. Restuff the original can or fit a modern 47 µF 450 V beside it?', 'internal'],
-      ['mentor', 'Restuff it: the owner asked for hidden parts to look original. 47 µF 450 V fits inside that can size.', 'internal'],
-      ['technician', 'Restuffed with 47 µF 450 V; HT now 262 V and the hum has gone.', 'shared'],
+      ['technician', '@Teodor the volume control crackles over the whole track, worst near the top. Clean it, or look for a replacement 1 MΩ log with a double-pole switch?', 'internal'],
+      ['mentor', 'Check for DC across the track first: a leaky capacitor feeding it makes any pot crackle and cleaning will not cure that.', 'internal'],
+      ['technician', 'No DC across it, so it is the track. Cleaned through the gap by the tags and worked end to end thirty times; quiet now.', 'internal'],
+      ['technician', 'The volume control was cleaned and now turns without crackling.', 'shared'],
     ] as Line[],
   },
   {
-    landmark: 'crackedLead', shape: 'arrow' as const, title: 'Cracked rubber HT lead', componentRef: '', kind: 'cracked' as const,
+    landmark: 'crackedLead', shape: 'arrow' as const, title: 'Perished rubber wiring', componentRef: '', kind: 'cracked' as const,
     severity: 'hazard' as const, status: 'confirmed' as const, ownerVisible: false, question: true,
     thread: [
-      ['mentor', 'That perished rubber lead carries HT to the EZ80: replace it before any power-up.', 'internal'],
-      ['technician', '@Teodor new PVC lead of the same gauge, or re-sleeve the original to keep the look? The owner asked for hidden parts to look original.', 'internal'],
+      ['mentor', 'The rubber on the lead from the transformer to the rectifier anode has split to the copper, and it carries several hundred volts AC. Nothing goes back on the mains until it is replaced.', 'internal'],
+      ['technician', 'Replaced in PVC along the same route.', 'internal'],
+      ['technician', '@Teodor the leads from the chassis to the speaker and the deck motor are the same rubber and crumble where they bend. They are outside the chassis: replace them now, or ask the owner first?', 'internal'],
     ] as Line[],
   },
 ];

@@ -19,11 +19,11 @@ export async function seedDemoPhotos(deps: PhotosDeps): Promise<void> {
   const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
   const service = photosService(deps);
   const shots: [() => Promise<Buffer>, PhotoUploadFields & { caption: string }][] = [
-    [() => renderChassisJpeg('top'), { view: 'top', phase: 'before', caption: 'Top of the chassis as received, valves in place', ownerVisible: true }],
-    [() => renderChassisJpeg('underside'), { view: 'underside', phase: 'before', caption: 'Underside before any work: note the scorching around R23', ownerVisible: true }],
-    [async () => closeUp(await renderChassisJpeg('underside'), 'R23'), { view: 'detail', phase: 'before', caption: 'R23 and C31, the cathode resistor and its bypass capacitor', ownerVisible: false }],
-    [() => renderChassisJpeg('top', 'after'), { view: 'top', phase: 'after', caption: 'Top after cleaning; the can capacitor restuffed', ownerVisible: true }],
-    [() => renderChassisJpeg('underside', 'after'), { view: 'underside', phase: 'after', caption: 'Underside after the work: new R23 and C31, C30 restuffed, new HT lead', ownerVisible: true }],
+    [() => renderChassisJpeg('top'), { view: 'top', phase: 'before', caption: 'Top of the chassis out of the cabinet, valves in place', ownerVisible: true }],
+    [() => renderChassisJpeg('underside'), { view: 'underside', phase: 'before', caption: 'Underside before any work: wax run out of C27 by the output valve', ownerVisible: true }],
+    [async () => closeUp(await renderChassisJpeg('underside'), 'C27'), { view: 'detail', phase: 'before', caption: 'C27, the coupling capacitor to the EL84 grid, with the grid leak R28 beside it', ownerVisible: false }],
+    [() => renderChassisJpeg('top', 'after'), { view: 'top', phase: 'after', caption: 'Top after cleaning; every valve tested and back in its own socket', ownerVisible: true }],
+    [() => renderChassisJpeg('underside', 'after'), { view: 'underside', phase: 'after', caption: 'Underside after the work: new C27 and R28, wax tubulars replaced with film, new lead to the rectifier', ownerVisible: true }],
   ];
   for (const [render, fields] of shots) {
     if (have.has(fields.caption)) continue;

@@ -60,7 +60,6 @@ export function sharedDefs(): string {
     // Cylinder shading laid over any tubular body drawn along x.
     linear('cyl', stop(0, '#000', 0.35) + stop(0.18, '#fff', 0.45) + stop(0.32, '#fff', 0.1) + stop(0.75, '#000', 0.15) + stop(1, '#000', 0.55)),
     radial('rust', stop(0, '#7a3b12', 0.55) + stop(0.6, '#8f4a1a', 0.25) + stop(1, '#8f4a1a', 0)),
-    radial('soot', stop(0, '#0b0805', 0.97) + stop(0.45, '#1a120b', 0.85) + stop(0.75, '#2b1c10', 0.45) + stop(1, '#3a2a18', 0)),
     noiseTextures(),
     `<radialGradient id="light" gradientUnits="userSpaceOnUse" cx="${WIDTH / 2}" cy="${HEIGHT / 2}" r="${WIDTH * 0.62}" fx="${WIDTH * 0.36}" fy="${HEIGHT * 0.3}">` +
       stop(0, '#fff3dc', 0.2) + stop(0.3, '#fff3dc', 0.06) + stop(0.55, '#000', 0) + stop(0.8, '#000', 0.3) + stop(1, '#000', 0.62) + '</radialGradient>',

@@ -28,13 +28,13 @@ export interface ValvePlace {
 export const VALVE_R = 57;
 
 export const VALVES: readonly ValvePlace[] = [
-  { ref: 'V1', type: 'ECC85', role: 'FM RF amplifier and mixer', at: [470, 620], turn: -12 },
-  { ref: 'V2', type: 'ECH81', role: 'frequency changer', at: [900, 1050], turn: 8 },
-  { ref: 'V3', type: 'EF89', role: 'IF amplifier', at: [1340, 1050], turn: -25 },
+  { ref: 'V1', type: 'ECC81', role: 'FM RF amplifier and mixer', at: [470, 620], turn: -12 },
+  { ref: 'V2', type: 'ECF80', role: 'frequency changer (triode oscillator, pentode mixer)', at: [900, 1050], turn: 8 },
+  { ref: 'V3', type: 'EBF89', role: 'IF amplifier and AVC diodes', at: [1340, 1050], turn: -25 },
   { ref: 'V4', type: 'EABC80', role: 'detectors and AF amplifier', at: [1790, 1080], turn: 15 },
   { ref: 'V5', type: 'EL84', role: 'output pentode', at: [1130, 460], turn: -6 },
-  { ref: 'V6', type: 'EM80', role: 'tuning indicator', at: [1300, 1290], turn: 20, plate: 0 },
-  { ref: 'V7', type: 'EZ80', role: 'HT rectifier', at: [1470, 400], turn: 4 },
+  { ref: 'V6', type: 'EM84', role: 'tuning indicator', at: [1300, 1290], turn: 20, plate: 0 },
+  { ref: 'V7', type: 'EZ81', role: 'HT rectifier', at: [1470, 400], turn: 4 },
 ];
 
 export function valve(ref: ValveRef): ValvePlace {

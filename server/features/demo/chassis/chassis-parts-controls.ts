@@ -70,7 +70,7 @@ export function switchPot(at: Pt, r: number, tags: readonly Pt[], switchTags: re
     switchTags.map((p) => `<line x1="${f(cx)}" y1="${f(cy)}" x2="${f(p[0])}" y2="${f(p[1])}" stroke="#c6a24e" stroke-width="8"/>` + solder(p[0], p[1], 7)).join('') +
     `<rect x="${f(cx - r * 0.7)}" y="${f(cy - r * 0.55)}" width="${f(r * 1.4)}" height="${f(r * 1.1)}" rx="8" fill="url(#bakelite)" stroke="#120b06" stroke-width="2"/>` +
     text(cx, cy + 4, '250 V~ 2 A', { size: 13, fill: '#cbbfa8', family: 'condensed' }) +
-    text(cx, cy + 22, '0,5 MΩ log', { size: 13, fill: '#cbbfa8', family: 'condensed' });
+    text(cx, cy + 22, '1 MΩ log', { size: 13, fill: '#cbbfa8', family: 'condensed' });
   return { body, shadow: [{ d: circleD(cx, cy, r) }], tall: true };
 }
 

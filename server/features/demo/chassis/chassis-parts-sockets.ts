@@ -77,10 +77,11 @@ export function tagStrip(s: TagStripSpec): Drawn {
   return { body, shadow: [{ d: turnedRectD(mid, turn, len, 34) }] };
 }
 
-/** Soot and heat discolouration round an overheated part. */
-export function scorch(at: Pt, rx: number, ry: number, turn = 0): string {
+/** A glossy smear of wax that has run off a warm capacitor and set on the steel below it. */
+export function waxStain(at: Pt, rx: number, ry: number, turn = 0): string {
   return (
-    `<g transform="${place(at[0], at[1], turn)}"><ellipse rx="${f(rx * 1.3)}" ry="${f(ry * 1.4)}" fill="url(#soot)" fill-opacity="0.6"/>` +
-    `<ellipse rx="${f(rx)}" ry="${f(ry)}" fill="url(#soot)"/></g>`
+    `<g transform="${place(at[0], at[1], turn)}"><ellipse rx="${f(rx * 1.2)}" ry="${f(ry * 1.3)}" fill="#6b4a1c" fill-opacity="0.18"/>` +
+    `<ellipse cx="${f(rx * 0.15)}" cy="${f(ry * 0.2)}" rx="${f(rx * 0.7)}" ry="${f(ry * 0.6)}" fill="#b68a3e" fill-opacity="0.45"/>` +
+    `<ellipse cx="${f(-rx * 0.1)}" cy="${f(-ry * 0.1)}" rx="${f(rx * 0.25)}" ry="${f(ry * 0.15)}" fill="#fff" fill-opacity="0.3"/></g>`
   );
 }

@@ -43,7 +43,7 @@ export const CYL = (len: number, dia: number, rx = dia / 2): string =>
   `<rect x="${f(-len / 2)}" y="${f(-dia / 2)}" width="${f(len)}" height="${f(dia)}" rx="${f(rx)}" fill="url(#cyl)" stroke="#000" stroke-opacity="0.45" stroke-width="1.2"/>`;
 
 export interface ResistorSpec {
-  a: Pt; b: Pt; lift?: number; ohms: number; tolerance?: Tolerance; watts?: 0.5 | 1 | 2; charred?: boolean;
+  a: Pt; b: Pt; lift?: number; ohms: number; tolerance?: Tolerance; watts?: 0.5 | 1 | 2;
   /** A newly fitted resistor: clean lacquer in `body` colour, bright leads, bands set towards one end. */
   fresh?: boolean; body?: string;
 }
@@ -55,7 +55,7 @@ const RESISTOR_SIZE = { 0.5: [84, 25], 1: [104, 30], 2: [124, 36] } as const;
 export function resistor(r: ResistorSpec): Drawn {
   const [len, dia] = RESISTOR_SIZE[r.watts ?? 0.5];
   const bands = resistorBands(r.ohms, r.tolerance ?? 5);
-  const bodyColour = r.body ?? (r.charred ? '#7a5a3a' : '#d6bd8c');
+  const bodyColour = r.body ?? '#d6bd8c';
   const bw = len * (r.fresh ? 0.075 : 0.085);
   const at = r.fresh ? [0.2, 0.31, 0.42, 0.78] : [0.17, 0.31, 0.45, 0.8];
   const draw = (l: number): string => {
@@ -65,16 +65,8 @@ export function resistor(r: ResistorSpec): Drawn {
       s += [-1, 1].map((k) => `<rect x="${f(k < 0 ? -l / 2 - 2 : l / 2 - l * 0.16 + 2)}" y="${f(-dia / 2 - 2)}" width="${f(l * 0.16)}" height="${f(dia + 4)}" rx="${f(dia * 0.45)}" fill="${bodyColour}"/>`).join('');
     }
     bands.forEach((band, i) => {
-      const paint = r.charred ? shade(BAND_PAINT[band], 0.85) : BAND_PAINT[band];
-      s += `<rect x="${f(-l / 2 + l * (at[i] ?? 0) - bw / 2)}" y="${f(-dia / 2 + 0.5)}" width="${f(bw)}" height="${f(dia - 1)}" fill="${paint}"/>`;
+      s += `<rect x="${f(-l / 2 + l * (at[i] ?? 0) - bw / 2)}" y="${f(-dia / 2 + 0.5)}" width="${f(bw)}" height="${f(dia - 1)}" fill="${BAND_PAINT[band]}"/>`;
     });
-    if (r.charred) {
-      // Blackened between the multiplier and tolerance bands, where it ran hottest.
-      s += `<ellipse cx="${f(l * 0.11)}" cy="${f(dia * 0.05)}" rx="${f(l * 0.13)}" ry="${f(dia * 0.56)}" fill="#0d0906" fill-opacity="0.85"/>` +
-        `<rect x="${f(-l / 2)}" y="${f(-dia / 2)}" width="${f(l)}" height="${f(dia)}" rx="${f(dia * 0.42)}" fill="#1a0f08" fill-opacity="0.22"/>` +
-        `<path d="M${f(-l * 0.1)} ${f(-dia / 2)} l6 9 l-5 7 l7 9" stroke="#0c0806" stroke-width="2" fill="none"/>` +
-        `<path d="M${f(l * 0.22)} ${f(dia / 2)} l-4 -8 l6 -6" stroke="#0c0806" stroke-width="2" fill="none"/>`;
-    }
     if (r.fresh) s += `<rect x="${f(-l * 0.4)}" y="${f(-dia * 0.36)}" width="${f(l * 0.8)}" height="${f(dia * 0.12)}" rx="2" fill="#fff" fill-opacity="0.55"/>`;
     return s + CYL(l, dia, dia * 0.42);
   };
@@ -85,6 +77,8 @@ export interface WaxCapSpec {
   a: Pt; b: Pt; lift?: number; print: string; colour?: string; len?: number;
   /** Restuffed: a film capacitor inside, the ends sealed again with fresh wax of matching colour. */
   resealed?: boolean;
+  /** Leaky and run warm: wax has softened, run from both ends and dripped, the paper split by the print. */
+  weeping?: boolean;
 }
 
 /** A wax-dipped paper tubular, its outer-foil end marked with a black ring. */
@@ -99,28 +93,36 @@ export function waxCap(c: WaxCapSpec): Drawn {
   const draw = (l: number): string =>
     tube(l, dia, wax) + end(-l / 2 + 8) + end(l / 2 - 8) +
     `<rect x="${f(-l / 2 + 24)}" y="${f(-dia / 2)}" width="7" height="${dia}" fill="#1d1a16"/>` +
-    text(6, 5, c.print, { size: 15, fill: '#2a2218', family: 'condensed', weight: 'bold' }) + CYL(l, dia);
+    text(6, 5, c.print, { size: 15, fill: '#2a2218', family: 'condensed', weight: 'bold' }) + CYL(l, dia) + (c.weeping ? weep(l, dia, wax) : '');
   return axial(c.a, c.b, c.lift ?? 0, len, dia, draw, c.resealed);
 }
 
+/** Softened wax run out of both ends and hanging in drips, a dark stain and a split in the paper. */
+function weep(l: number, dia: number, wax: string): string {
+  const drip = (x: number, drop: number): string =>
+    `<path d="M${f(x - 9)} ${f(dia / 2 - 3)} Q${f(x - 6)} ${f(dia / 2 + drop)} ${f(x)} ${f(dia / 2 + drop + 6)} Q${f(x + 7)} ${f(dia / 2 + drop)} ${f(x + 9)} ${f(dia / 2 - 3)} Z" fill="${shade(wax, 0.72)}" stroke="${shade(wax, 0.5)}" stroke-width="1"/>` +
+    `<ellipse cx="${f(x - 2)}" cy="${f(dia / 2 + drop)}" rx="2.5" ry="4" fill="#fff" fill-opacity="0.5"/>`;
+  return (
+    `<ellipse cx="${f(-l / 2 + 2)}" cy="2" rx="17" ry="${f(dia / 2 + 6)}" fill="${shade(wax, 0.66)}" fill-opacity="0.9"/>` +
+    `<ellipse cx="${f(l / 2 - 2)}" cy="2" rx="17" ry="${f(dia / 2 + 6)}" fill="${shade(wax, 0.66)}" fill-opacity="0.9"/>` +
+    drip(-l / 2 + 10, 14) + drip(l / 2 - 14, 22) + drip(l * 0.18, 9) +
+    `<rect x="${f(-l / 2 + 32)}" y="${f(-dia / 2)}" width="${f(l * 0.34)}" height="${f(dia)}" fill="#3a2410" fill-opacity="0.35"/>` +
+    `<path d="M${f(l * 0.4)} ${f(-dia / 2)} l5 8 l-6 9 l6 8 l-3 ${f(dia / 2 - 12)}" stroke="#2a1a0c" stroke-width="2" fill="none"/>`
+  );
+}
+
 export interface ElectrolyticSpec {
-  a: Pt; b: Pt; lift?: number; lines: readonly [string, string]; len: number; dia: number; bulging?: boolean; sleeve?: string; clip?: boolean;
+  a: Pt; b: Pt; lift?: number; lines: readonly [string, string]; len: number; dia: number; sleeve?: string; clip?: boolean;
   /** Emptied and refilled with a modern part: the old sleeve kept, both ends neatly resealed. */
   restuffed?: boolean;
 }
 
-/** A tubular electrolytic in a printed sleeve; a failing one has a domed, weeping end. */
+/** A tubular electrolytic in a printed sleeve, optionally held by a clip. */
 export function tubularElectrolytic(e: ElectrolyticSpec): Drawn {
   const sleeve = e.sleeve ?? '#264a78';
   const draw = (l: number): string => {
     const d = e.dia;
     let s = '';
-    if (e.bulging) {
-      // The end has domed out past the can's diameter and electrolyte has crusted on it.
-      s += `<ellipse cx="${f(l / 2 - 4)}" cy="0" rx="${f(d * 0.5)}" ry="${f(d * 0.66)}" fill="url(#aluTop)" stroke="#4a4e51" stroke-width="1.5"/>` +
-        `<ellipse cx="${f(l / 2 + d * 0.18)}" cy="${f(d * 0.22)}" rx="${f(d * 0.3)}" ry="${f(d * 0.26)}" fill="#8a5a22" fill-opacity="0.85"/>` +
-        `<ellipse cx="${f(l / 2 + d * 0.05)}" cy="${f(d * 0.62)}" rx="${f(d * 0.5)}" ry="${f(d * 0.16)}" fill="#6e4516" fill-opacity="0.5"/>`;
-    }
     if (e.restuffed) {
       // A neat bead of sealing compound closes each cut end round the new lead.
       s += [-1, 1].map((k) => `<ellipse cx="${f(k * (l / 2 - 1))}" cy="0" rx="7" ry="${f(d * 0.3)}" fill="#4b4236" stroke="#2a241c" stroke-width="1"/>` +
@@ -130,10 +132,6 @@ export function tubularElectrolytic(e: ElectrolyticSpec): Drawn {
       text(-l * 0.08, -2, e.lines[0], { size: d * 0.3, fill: '#f3efe2', weight: 'bold', family: 'condensed' }) +
       text(-l * 0.08, d * 0.3, e.lines[1], { size: d * 0.22, fill: '#f3efe2', family: 'condensed' }) +
       text(l / 2 - 26, 6, '+', { size: d * 0.4, fill: '#f3efe2', weight: 'bold' }) + CYL(l, d, 8);
-    if (e.bulging) {
-      s += `<path d="M${f(l / 2 - 14)} ${f(-d / 2)} q-10 ${f(d * 0.4)} 2 ${f(d * 0.55)} q-8 ${f(d * 0.2)} -2 ${f(d * 0.45)}" stroke="#16120c" stroke-width="2.2" fill="none"/>` +
-        `<ellipse cx="${f(l / 2 + d * 0.12)}" cy="${f(-d * 0.28)}" rx="${f(d * 0.12)}" ry="${f(d * 0.18)}" fill="#fff" fill-opacity="0.6"/>`;
-    }
     if (e.clip) {
       s += `<rect x="${f(-l * 0.42)}" y="${f(-d / 2 - 14)}" width="22" height="${f(d + 28)}" rx="3" fill="url(#steel)" stroke="#3d3f41" stroke-width="1.2"/>` +
         `<circle cx="${f(-l * 0.42 + 11)}" cy="${f(-d / 2 - 7)}" r="5" fill="#55585a"/><circle cx="${f(-l * 0.42 + 11)}" cy="${f(d / 2 + 7)}" r="5" fill="#55585a"/>`;

@@ -6,7 +6,7 @@ import { midpoint } from './svg-kit';
 import type { Pt } from './svg-kit';
 
 /**
- * The Meridian 54 as found ('before') and after the recap ('after'). Every part of
+ * The Meridian 54 radiogram as found ('before') and after the work ('after'). Every part of
  * the after state is soldered to the same points as the one it replaces: a refit
  * may change only how a part looks, so the landmarks hold for both pictures.
  */
@@ -16,24 +16,21 @@ export type ChassisState = 'before' | 'after';
 /** What a refit may change: anything but where the part is soldered. */
 type Refit<T> = Partial<Omit<T, 'a' | 'b' | 'lift'>>;
 
-/** R23 gets a new 150 Ω in a 2 W metal-oxide body, a rating to spare over the 1 W it replaces. */
+/** R28, the output grid leak that had drifted high, gets a new 470 kΩ metal-film part. */
 const RESISTOR_REFITS: Readonly<Record<string, Refit<ResistorSpec>>> = {
-  R23: { watts: 2, charred: false, fresh: true, body: '#a9c4d6' },
+  R28: { fresh: true, body: '#a9c4d6' },
 };
 
 /** Wax tubulars swapped for film at no lower a voltage; the rest are restuffed and resealed. */
 const FILM_REFITS: Readonly<Record<string, Omit<FilmCapSpec, 'a' | 'b' | 'lift'>>> = {
+  C27: { print: ['22nJ', '630V'], len: 100, dia: 26, colour: '#d94a2a' },
   C14: { print: ['47nJ', '630V'] },
   C12: { print: ['10nJ', '1000V'], len: 100, dia: 28, colour: '#e9c21a' },
 };
 
-/** C30 keeps its sleeve with a modern part hidden inside; C31 is simply new. */
-const ELECTROLYTIC_REFITS: Readonly<Record<string, Refit<ElectrolyticSpec>>> = {
-  C30: { bulging: false, restuffed: true },
-};
-const NEW_ELECTROLYTICS: Readonly<Record<string, Omit<ModernElectrolyticSpec, 'a' | 'b' | 'lift' | 'len' | 'dia'>>> = {
-  C31: { lines: ['47µF 63V', '105°C'] },
-};
+/** The electrolytics tested sound and stay as they are. */
+const ELECTROLYTIC_REFITS: Readonly<Record<string, Refit<ElectrolyticSpec>>> = {};
+const NEW_ELECTROLYTICS: Readonly<Record<string, Omit<ModernElectrolyticSpec, 'a' | 'b' | 'lift' | 'len' | 'dia'>>> = {};
 
 export interface UndersideParts {
   resistors: readonly (ResistorSpec & Ref)[];
@@ -73,15 +70,15 @@ export function undersideParts(state: ChassisState): UndersideParts {
 }
 
 /**
- * The new HT lead along the old one's route, grommet to V7, dressed in one easy
- * curve: through the middle of the old crack (the landmark) and on to the same tag.
+ * The new PVC lead along the perished one's route, grommet to V7, dressed in one easy
+ * curve: through the middle of the old split (the landmark) and on to the same tag.
  */
 export const HT_LEAD_ROUTE: readonly Pt[] = [
   CRACKED_LEAD.before[0] ?? [605, 740], CRACKED_LEAD.before[2] ?? [672, 630], midpoint(...CRACKED_LEAD.gap),
   CRACKED_LEAD.after[1] ?? [800, 466], CRACKED_LEAD.after[2] ?? [888, 440],
 ];
 
-/** Where the restorer's iron has been: every solder point of a refitted part, and the new HT lead's end. */
+/** Where the restorer's iron has been: every solder point of a refitted part, and the new lead's end. */
 export function freshJoints(state: ChassisState): Pt[] {
   if (state === 'before') return [];
   const p = undersideParts('after');

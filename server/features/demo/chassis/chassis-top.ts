@@ -9,8 +9,8 @@ import type { ChassisState } from './chassis-restoration';
 import { svgDocument, text } from './svg-kit';
 
 /**
- * The Meridian 54 chassis from above, as a restorer photographs it before any work
- * and again after it. The can keeps its print (it was restuffed); the steel is cleaned.
+ * The Meridian 54 radiogram's chassis from above, as a restorer photographs it before
+ * any work and again after it, once the steel is cleaned.
  */
 
 const { x: cx, y: cy, w: cw, h: ch } = CHASSIS;
@@ -77,14 +77,14 @@ export function topSvg(state: ChassisState = 'before'): string {
   const parts: Drawn[] = [
     ...wiring(),
     ...dialCord(),
-    transformerTop({ ...mt, plate: ['OSTRANDER & VALE', 'MAINS TRANSFORMER 54-T1', 'Prim. 110–245 V ~ 50 c/s', 'Sec. 2×250 V 70 mA', '6,3 V 2,5 A'] }),
-    transformerTop({ ...ot, plate: ['O&V 54-T3', 'OUTPUT 5k2 : 5 Ω', '4 W'] }),
-    canTop(can.at, can.r, ['50+50µF', '350V', 'O&V · 54 · +60°C']),
-    ...TOP.ifCans.map((c, i) => ifCanTop(c.at, c.size, [c.ref, i === 0 ? '10,7 Mc · 468 kc' : '10,7 / 468 kc'])),
+    transformerTop({ ...mt, plate: ['OSTRANDER & VALE', 'MAINS TRANSFORMER 54-T1', 'Prim. 110–245 V ~ 50 c/s', 'Sec. 2×280 V 85 mA', '6,3 V 2,5 A'] }),
+    transformerTop({ ...ot, plate: ['O&V 54-T3', 'OUTPUT 5k5 : 3 Ω', '5 W'] }),
+    canTop(can.at, can.r, ['32+32µF', '350V', 'O&V · 54 · +60°C']),
+    ...TOP.ifCans.map((c, i) => ifCanTop(c.at, c.size, [c.ref, i === 0 ? '10,7 Mc · 472 kc' : '10,7 / 472 kc'])),
     gangTop(gang.x, gang.y, gang.w, gang.h),
     dialDrum(drum.x, drum.y, drum.w, drum.h),
     cordPulley(TOP.dialPulley.at, TOP.dialPulley.r),
-    voltageSelector(TOP.voltageSelector.at, TOP.voltageSelector.r, '220'),
+    voltageSelector(TOP.voltageSelector.at, TOP.voltageSelector.r, '245'),
     ...VALVES.map((v) => valveTop({ at: v.at, r: VALVE_R, type: v.type, turn: v.turn, plate: v.plate })),
     ferriteRod(TOP.ferriteRod.x1, TOP.ferriteRod.x2, TOP.ferriteRod.y),
   ];

@@ -17,7 +17,7 @@ const WHITE = '#e6e1d2';
 const BLACK = '#262626';
 const BROWN = '#6a4125';
 const VIOLET = '#6c4a9c';
-/** The replacement HT lead: glossy orange PVC, a colour the period's hook-up wire came in. */
+/** The replacement lead: glossy orange PVC, a colour the period's hook-up wire came in. */
 const NEW_PVC_ORANGE = '#d0621c';
 
 const c30Plus: Pt = ELECTROLYTICS.find((e) => e.ref === 'C30')?.b ?? [990, 1250];
@@ -47,7 +47,7 @@ function coilPin(i: 0 | 1, deg: number): Pt {
   return [x + Math.cos(a) * 26 * 1.3, y + Math.sin(a) * 26 * 1.3];
 }
 
-/** The HT lead from the transformer to V7: split rubber as found, new PVC after the work. */
+/** The lead from the transformer to V7's anode: perished, split rubber as found, new PVC after the work. */
 function htLead(state: ChassisState): Drawn {
   return state === 'before'
     ? crackedWire(CRACKED_LEAD.before, CRACKED_LEAD.gap, CRACKED_LEAD.after, { colour: PERISHED_RED, width: 12, matte: true })
@@ -72,9 +72,10 @@ export function undersideWiring(state: ChassisState = 'before'): Drawn[] {
     wire([g.output, [1520, 680], tag('TS1', 7)], { colour: RED, width: 8 }),
     wire([pin('V5', 9), [1400, 470], [1455, 560], tag('TS1', 5)], { colour: RED, width: 8 }),
     wire([c30Plus, [1030, 1165], [1180, 1150], tag('TS2', 0)], { colour: RED, width: 8 }),
-    // Output stage.
+    // Output stage: the AF anode's lead over to the coupling capacitor on the output strip.
+    wire([pin('V4', 6), [700, 990], [900, 905], [1180, 830], [1330, 790], tag('TS1', 4)], { colour: WHITE, width: 7 }),
     wire([g.output, [1430, 520], [1330, 420], pin('V5', 7)], { colour: BLUE, width: 8 }),
-    wire([pin('V5', 3), [1300, 560], [1335, 650], tag('TS1', 3)], { colour: YELLOW, width: 8 }),
+    wire([pin('V5', 3), [1275, 590], [1296, 680], tag('TS1', 3)], { colour: YELLOW, width: 8 }),
     // Signal wiring round the IF cans and the front end.
     wire([ifTag(0, 1), [1380, 1020], pin('V2', 8)], { colour: YELLOW, width: 7 }),
     wire([ifTag(0, 0), [1180, 990], pin('V3', 7)], { colour: BLUE, width: 7 }),

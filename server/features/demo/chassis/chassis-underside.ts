@@ -4,7 +4,7 @@ import { combine, grommet, nut, pencil, rectD, solder, stamp } from './chassis-p
 import type { Drawn } from './chassis-parts';
 import { canBase, coilFormer, earthLug, gangUnder, ifBase, rearPanel, selectorBack } from './chassis-parts-bases';
 import { cordGrip, switchPot } from './chassis-parts-controls';
-import { novalSocket, scorch, tagStrip } from './chassis-parts-sockets';
+import { novalSocket, tagStrip, waxStain } from './chassis-parts-sockets';
 import { filmCap, modernElectrolytic } from './chassis-parts-replacements';
 import { bodyCentre, ceramicDisc, micaCap, resistor, tubularElectrolytic, waxCap } from './chassis-parts-underside';
 import { freshJoints, undersideParts } from './chassis-restoration';
@@ -14,7 +14,7 @@ import { benchBackground, grime, photoFinish, shadowLayer, sharedDefs, steelSurf
 import { angleOf, svgDocument } from './svg-kit';
 import type { Pt } from './svg-kit';
 
-/** The Meridian 54 turned over: sockets, tag strips, the small parts, and the faults or the work done on them. */
+/** The Meridian 54 radiogram's chassis turned over: sockets, tag strips, the small parts, and the faults or the work done on them. */
 
 const { x: cx, y: cy, w: cw, h: ch } = UNDER_CHASSIS;
 
@@ -93,21 +93,20 @@ function pencilMarks(p: UndersideParts, state: ChassisState): string {
     return pencil(x, y, done ? `${TICK} ${ref}` : ref, turn);
   };
   const crack = CRACKED_LEAD.gap[0];
+  const [vx, vy] = UNDER.volume.at;
   if (!done) {
-    return mark('R23', -190, 25, -3) + mark('C30', -40, -56, 2) + mark('C31', -95, -62) + mark('C14', 52, 30, -8) +
-      pencil(crack[0] - 170, crack[1] - 66, 'perished', -8, 26);
+    return mark('C27', -185, -95, -3) + mark('R28', 178, 30, -6) + mark('C14', 52, 30, -8) +
+      pencil(crack[0] - 170, crack[1] - 66, 'perished', -8, 26) + pencil(vx + 150, vy + 14, 'crackles', -4, 24);
   }
-  const [c30x, c30y] = at('C30', 52, -54);
-  return mark('R23', -190, 25, -3) + pencil(c30x, c30y, `${TICK} C30 restuffed`, 2, 26) + mark('C31', -95, -62) + mark('C14', 52, 30, -8) +
-    pencil(crack[0] - 160, crack[1] - 66, `${TICK} new HT lead`, -8, 26);
+  return mark('C27', -185, -95, -3) + mark('R28', 178, 30, -6) + mark('C14', 52, 30, -8) +
+    pencil(crack[0] - 160, crack[1] - 66, `${TICK} new lead`, -8, 26) + pencil(vx + 160, vy + 14, `${TICK} cleaned`, -4, 24);
 }
 
 export function undersideSvg(state: ChassisState = 'before'): string {
   const p = undersideParts(state);
-  const r23 = p.resistors.find((r) => r.ref === 'R23');
-  const c31 = p.electrolytics.find((e) => e.ref === 'C31');
-  // Only the parts as found are scorched; after the work the soot has been cleaned off.
-  const scorchMarks = state === 'after' ? '' : [r23, c31].map((x) => (x ? scorch(bodyCentre(x.a, x.b, x.lift), x === r23 ? 140 : 95, x === r23 ? 72 : 48, angleOf(x.a, x.b)) : '')).join('');
+  const c27 = p.waxCaps.find((c) => c.ref === 'C27');
+  // Only the leaky capacitor as found has shed wax onto the steel; after the work it has been cleaned off.
+  const stains = c27 ? waxStain(bodyCentre(c27.a, c27.b, c27.lift), 95, 40, angleOf(c27.a, c27.b)) : '';
   const parts: Drawn[] = [
     canBase(UNDER.canCapacitor.at, UNDER.canCapacitor.r, [canTag('A'), canTag('B'), canTag('common')]),
     ...UNDER.ifCans.map((c, i) => ifBase(c.at, [0, 1, 2, 3].map((n) => ifTag(i as 0 | 1, n as 0 | 1 | 2 | 3)))),
@@ -125,7 +124,7 @@ export function undersideSvg(state: ChassisState = 'before'): string {
   const small = combine(components(p));
   const body =
     benchBackground() + shadowLayer([{ d: rectD(cx, cy, cw, ch) }], [22, 28], 0.75, 1.2) + tray(state) + fixings() +
-    scorchMarks + pencilMarks(p, state) +
+    stains + pencilMarks(p, state) +
     shadowLayer([...fixed.low, ...fixed.tall], [5, 7], 0.45) + fixed.body +
     shadowLayer([...small.low, ...small.tall], [9, 12], 0.5, 0.6) + small.body + joints(p, state) + photoFinish();
   return svgDocument(sharedDefs(), body);

@@ -65,7 +65,7 @@ describe('demo chassis pictures', () => {
     const marks = chassisLandmarks('underside');
     const p = undersideParts(state);
     const parts = [...p.resistors, ...p.waxCaps, ...p.films, ...p.electrolytics, ...p.newElectrolytics];
-    expect(parts.map((x) => x.ref).sort()).toEqual(['C12', 'C14', 'C23', 'C30', 'C31', 'R1', 'R12', 'R13', 'R15', 'R16', 'R18', 'R19', 'R23', 'R24', 'R6', 'R8']);
+    expect(parts.map((x) => x.ref).sort()).toEqual(['C12', 'C14', 'C23', 'C26', 'C27', 'C30', 'R1', 'R12', 'R13', 'R15', 'R16', 'R18', 'R19', 'R28', 'R29', 'R6', 'R8']);
     for (const part of parts) {
       const [x, y] = bodyCentre(part.a, part.b, part.lift);
       expect.soft(x / WIDTH, `${part.ref}.x`).toBeCloseTo(marks[part.ref]?.x ?? NaN, 9);
@@ -92,37 +92,36 @@ describe('demo chassis pictures', () => {
       expect.arrayContaining(['canCapacitor', 'V5', 'V7', 'mainsTransformer']),
     );
     expect(Object.keys(chassisLandmarks('underside'))).toEqual(
-      expect.arrayContaining(['R23', 'C30', 'crackedLead', 'V5socket']),
+      expect.arrayContaining(['C27', 'R28', 'crackedLead', 'volumeControl', 'V5socket']),
     );
   });
 
-  it('when sampled at R23, then the charred resistor is darker than bare chassis', async () => {
-    const r23 = chassisLandmarks('underside').R23;
-    if (!r23) throw new Error('no R23 landmark');
-    const plain = plainChassisSpot('underside');
-    const charred = await luminanceAt(jpeg('underside'), r23.x, r23.y);
-    const bare = await luminanceAt(jpeg('underside'), plain.x, plain.y);
-    expect(charred).toBeLessThan(bare - 40);
+  /** The drawing of one referenced part, as grouped under `part-<ref>`. */
+  const partSvg = (svg: string, ref: string): string => {
+    const start = svg.indexOf(`<g id="part-${ref}">`);
+    expect(start, `part-${ref} is drawn`).toBeGreaterThan(0);
+    const next = svg.indexOf('<g id="part-', start + 1);
+    return svg.slice(start, next < 0 ? undefined : next);
+  };
+
+  it('when the underside is drawn as found, then C27 is the old wax tubular, its print readable', () => {
+    const drawn = partSvg(chassisSvg('underside'), 'C27');
+    expect(drawn).toContain('0,022µ 350V');
   });
 
-  it('when sampled at R23 after the work, then the new resistor is not darker than bare chassis', async () => {
-    const r23 = chassisLandmarks('underside').R23;
-    if (!r23) throw new Error('no R23 landmark');
-    const plain = plainChassisSpot('underside');
-    const fitted = await luminanceAt(jpeg('underside', 'after'), r23.x, r23.y);
-    const bare = await luminanceAt(jpeg('underside', 'after'), plain.x, plain.y);
-    expect(fitted).toBeGreaterThanOrEqual(bare);
+  it('when the underside is drawn after the work, then C27 is a film capacitor of at least the old voltage', () => {
+    const drawn = partSvg(chassisSvg('underside', 'after'), 'C27');
+    expect(drawn).not.toContain('0,022µ 350V');
+    expect(drawn).toContain('22nJ');
+    expect(drawn).toContain('630V');
   });
 
-  it('when the new R23 is drawn, then its bands read brown green brown gold', () => {
-    // IEC 60062 colour code: 1 (brown), 5 (green), ×10 (brown), ±5 % (gold) is 150 Ω.
-    const svg = chassisSvg('underside', 'after');
-    const start = svg.indexOf('<g id="part-R23">');
-    const drawn = svg.slice(start, svg.indexOf('<g id="part-', start + 1));
+  it('when the new R28 is drawn, then its bands read yellow violet yellow gold', () => {
+    // IEC 60062 colour code: 4 (yellow), 7 (violet), ×10 000 (yellow), ±5 % (gold) is 470 kΩ.
+    const drawn = partSvg(chassisSvg('underside', 'after'), 'R28');
     const byPaint = new Map(Object.entries(BAND_PAINT).map(([band, paint]) => [paint, band]));
     const bands = [...drawn.matchAll(/fill="(#[0-9a-f]{6})"/g)].flatMap((m) => byPaint.get(m[1] ?? '') ?? []);
-    expect(start).toBeGreaterThan(0);
-    expect(bands).toEqual(['brown', 'green', 'brown', 'gold']);
+    expect(bands).toEqual(['yellow', 'violet', 'yellow', 'gold']);
   });
 
   it.each(STATES)('when sampled at the bare-chassis spot of the top view (%s), then it is mid-grey steel', async (state) => {

@@ -57,7 +57,8 @@ describe('band options', () => {
 
 describe('bench advice', () => {
   it('when an ESR reading passes the table figure, then it is marginal up to double and out beyond', () => {
-    // Table A's accompanying rule: be wary of a part reading more than double the figure.
+    // The rule printed with the worst-case ESR table for new electrolytics (widely circulated technicians' table,
+    // reproduced at glodark.com/design/esrchart.htm): be wary of a part reading more than double the figure.
     expect(esrVerdict(0.8, 0.8)).toBe('within');
     expect(esrVerdict(1.3, 0.8)).toBe('marginal');
     expect(esrVerdict(1.7, 0.8)).toBe('out');

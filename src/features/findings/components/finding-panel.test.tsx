@@ -91,9 +91,9 @@ describe('finding panel', () => {
     expect(screen.getByLabelText('Why is this finding dismissed?')).toHaveAccessibleDescription(/Say why the finding is dismissed/);
     expect(api.calls.some((c) => c.method === 'PATCH')).toBe(false);
 
-    await user.type(screen.getByLabelText('Why is this finding dismissed?'), 'Measured 0.8 Ω ESR: fine');
+    await user.type(screen.getByLabelText('Why is this finding dismissed?'), 'Tested 180 MΩ at 500 V: fine');
     await user.click(screen.getByRole('button', { name: 'Dismiss finding' }));
-    expect(api.calls.find((c) => c.method === 'PATCH')?.body).toEqual({ status: 'dismissed', dismissReason: 'Measured 0.8 Ω ESR: fine' });
+    expect(api.calls.find((c) => c.method === 'PATCH')?.body).toEqual({ status: 'dismissed', dismissReason: 'Tested 180 MΩ at 500 V: fine' });
   });
 
   it('when a component reference is not written as the schematic prints it, then it is not sent and the field says why', async () => {
@@ -107,7 +107,7 @@ describe('finding panel', () => {
     await user.clear(ref);
     await user.type(ref, 'resistor 23{Enter}');
     expect(ref).toHaveAttribute('aria-invalid', 'true');
-    expect(ref).toHaveAccessibleDescription(/e\.g\. R23, C15b or V3/);
+    expect(ref).toHaveAccessibleDescription(/e\.g\. C27, R20 or V5/);
     expect(api.calls.some((c) => c.method === 'PATCH')).toBe(false);
 
     await user.clear(ref);

@@ -60,7 +60,7 @@ export function FindingsFilters({ table, photos }: { table: Table<Finding>; phot
         <input
           id={refId}
           type="search"
-          placeholder="e.g. C15"
+          placeholder="e.g. C27"
           autoComplete="off"
           value={(ref?.getFilterValue() as string | undefined) ?? ''}
           onChange={(e) => ref?.setFilterValue(e.target.value)}

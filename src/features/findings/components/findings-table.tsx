@@ -57,7 +57,7 @@ export function FindingsTable({ restorationId, photos }: FindingsTableProps) {
   if (query.data.length === 0)
     return (
       <EmptyState title="No findings yet">
-        Open a photo and mark the spot: a charred resistor, a bulging can, a dry joint. Each mark becomes a finding here.
+        Open a photo and mark the spot: a leaky wax capacitor, a perished lead, a dry joint. Each mark becomes a finding here.
       </EmptyState>
     );
 

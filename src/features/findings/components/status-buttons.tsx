@@ -67,7 +67,7 @@ export function StatusButtons({ status, onChange }: { status: Status; onChange: 
             dismiss();
           }}
         >
-          <Field label="Why is this finding dismissed?" hint="e.g. measured fine: 0.8 Ω ESR, within limits" error={error}>
+          <Field label="Why is this finding dismissed?" hint="e.g. tested fine: 180 MΩ at 500 V, no leakage" error={error}>
             {(a) => <textarea {...a} rows={2} value={reason} onChange={(e) => setReason(e.target.value)} className={inputClass} autoFocus />}
           </Field>
           <div className="flex flex-wrap gap-2">

@@ -13,10 +13,10 @@ afterEach(() => {
 
 // Midday UTC, so each event stays on its calendar day in any reader's time zone but the farthest east.
 const events = [
-  makeEvent(5, { kind: 'finding-status', at: '2026-11-25T12:30:00.000Z', summary: '#2 C30 Bulging filter can: Confirmed → Repaired', findingId: 12, photoId: 3 }),
-  makeEvent(4, { kind: 'part-fitted', at: '2026-11-25T11:00:00.000Z', summary: 'Part fitted: C30 47 µF 450 V' }),
+  makeEvent(5, { kind: 'finding-status', at: '2026-11-25T12:30:00.000Z', summary: '#2 C27 Leaky coupling capacitor: Confirmed → Repaired', findingId: 12, photoId: 3 }),
+  makeEvent(4, { kind: 'part-fitted', at: '2026-11-25T11:00:00.000Z', summary: 'Part fitted: C27 22 nF 630 V' }),
   makeEvent(3, { kind: 'photo-added', at: '2026-11-24T14:00:00.000Z', summary: 'Photo added: Underside, before', photoId: 3, thumbUrl: '/t/3.webp' }),
-  makeEvent(2, { kind: 'finding-opened', at: '2026-11-24T12:10:00.000Z', summary: 'Finding opened: #2 C30 Bulging filter can', findingId: 12, photoId: 3 }),
+  makeEvent(2, { kind: 'finding-opened', at: '2026-11-24T12:10:00.000Z', summary: 'Finding opened: #2 C27 Leaky coupling capacitor', findingId: 12, photoId: 3 }),
   makeEvent(1, { kind: 'photo-added', at: '2026-11-24T11:00:00.000Z', summary: 'Photo added: Top, before', photoId: 1, thumbUrl: '/t/1.webp' }),
 ];
 
@@ -34,7 +34,7 @@ describe('timeline', () => {
     await showTimeline();
     const headings = screen.getAllByRole('heading', { level: 3 }).map((h) => h.textContent);
     expect(headings).toEqual([expect.stringMatching(/^Wednesday 25 November/), expect.stringMatching(/^Tuesday 24 November/)]);
-    expect(within(dayOf(/^Wednesday/)).getByText('Part fitted: C30 47 µF 450 V')).toBeInTheDocument();
+    expect(within(dayOf(/^Wednesday/)).getByText('Part fitted: C27 22 nF 630 V')).toBeInTheDocument();
     expect(within(dayOf(/^Tuesday/)).getAllByText(/^Photo added/)).toHaveLength(2);
     expect(within(dayOf(/^Tuesday/)).getAllByText(/Tessa Bench/)).toHaveLength(3);
   });
@@ -65,7 +65,7 @@ describe('timeline', () => {
     expect(screen.getByText('Showing 2 of 5 events')).toBeInTheDocument();
 
     await user.click(within(chips).getByRole('button', { name: 'Parts fitted 1' }));
-    expect(screen.getByText('Part fitted: C30 47 µF 450 V')).toBeInTheDocument();
+    expect(screen.getByText('Part fitted: C27 22 nF 630 V')).toBeInTheDocument();
     expect(screen.queryByText(/^Finding opened/)).not.toBeInTheDocument();
 
     await user.click(within(chips).getByRole('button', { name: 'Everything 5' }));

@@ -39,7 +39,7 @@ export function NewFindingForm({
       <Field label="Title" hint="What is wrong, or what to check" error={errors.title?.message}>
         {(a) => <input {...a} {...register('title')} autoFocus maxLength={140} className={inputClass} />}
       </Field>
-      <Field label="Component reference" hint="As the schematic prints it, e.g. R23 or C15b" error={errors.componentRef?.message}>
+      <Field label="Component reference" hint="As the schematic prints it, e.g. C27, R20 or V5" error={errors.componentRef?.message}>
         {(a) => <input {...a} {...register('componentRef')} maxLength={20} autoComplete="off" className={`${inputClass} font-mono`} />}
       </Field>
       <div className="grid grid-cols-2 gap-3">

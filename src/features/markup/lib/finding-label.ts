@@ -2,7 +2,7 @@ import { severityLabels, statusLabels, type Finding } from '../../../../shared/s
 
 type Labelled = Pick<Finding, 'number' | 'title' | 'componentRef' | 'status' | 'severity'>;
 
-/** "3. Charred anode resistor (R23)": how a finding is named in lists and questions. */
+/** "3. Leaky coupling capacitor (C27)": how a finding is named in lists and questions. */
 export const findingName = (f: Pick<Finding, 'number' | 'title' | 'componentRef'>): string =>
   `${f.number}. ${f.title}${f.componentRef ? ` (${f.componentRef})` : ''}`;
 

@@ -50,7 +50,7 @@ export function ChartEntryRow({ row, number, quantity, onChange, onRemove, onEnt
         {input('location', 'Location', 'V5 pin 7')}
         {input('expected', 'Expected', '250 V')}
         {input('tolerance', 'Tolerance (%)', '20')}
-        {input('reading', 'Reading', '262 V')}
+        {input('reading', 'Reading', '263 V')}
         <span className="text-sm font-semibold">
           {preview.status === 'ready' && (
             <span className={verdictMarks[preview.verdict.verdict].tone} title={preview.verdict.reason}>

@@ -16,7 +16,7 @@ const valueInput = `${inputClass} font-mono`;
 const typed = { autoComplete: 'off', autoCorrect: 'off', spellCheck: false } as const;
 
 /**
- * Records a reading (or, with `measurement`, changes one) as the restorer writes it: "4k7", "250 V", "50µ".
+ * Records a reading (or, with `measurement`, changes one) as the restorer writes it: "470k", "255 V", "32µ".
  * The verdict is previewed while typing; the server's stored verdict counts once saved. Technicians only.
  */
 export function MeasurementForm({ restorationId, findings, measurement, findingId, onDone, onCancel }: {
@@ -36,8 +36,8 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
       className="space-y-4 rounded-xl border border-rule bg-panel p-4">
       {!editing && <h3 className="text-lg font-bold">Record a reading</h3>}
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="Location" hint="Component or test point, e.g. C15, V5 pin 7" error={errorOf('location')}>
-          {(a) => <input {...a} {...register('location')} {...typed} className={inputClass} placeholder="e.g. V5 pin 7" />}
+        <Field label="Location" hint="Component or test point, e.g. C27, V5 pin 3" error={errorOf('location')}>
+          {(a) => <input {...a} {...register('location')} {...typed} className={inputClass} placeholder="e.g. V5 pin 3" />}
         </Field>
         <Field label="Quantity" error={errorOf('quantity')}>
           {(a) => (
@@ -58,7 +58,7 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
         )}
         {fields.showRating && (
           <Field label="Rated voltage" error={errorOf('rating')}>
-            {(a) => <input {...a} {...register('rating')} {...typed} className={valueInput} placeholder="e.g. 400 V" />}
+            {(a) => <input {...a} {...register('rating')} {...typed} className={valueInput} placeholder="e.g. 350 V" />}
           </Field>
         )}
         <Field label="Reading" hint="As the meter showed it" error={errorOf('reading')}>
@@ -67,7 +67,7 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
       </div>
       <VerdictPreviewPanel preview={preview} />
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="Conditions" hint="e.g. 230 V mains, no signal, volume minimum" error={errorOf('conditions')}>
+        <Field label="Conditions" hint="e.g. 236 V mains on the 245 V tap, no signal, volume minimum" error={errorOf('conditions')}>
           {(a) => <input {...a} {...register('conditions')} className={inputClass} />}
         </Field>
         <Field label="Method" hint={fields.methodHint} error={errorOf('method')}>

@@ -32,10 +32,10 @@ export function ValveLineUpEditor({ restorationId, valves, cautioned, onClose }:
             <li key={row.key} className="grid gap-2 border-t border-rule pt-3 sm:grid-cols-[5rem_9rem_1fr_auto] sm:items-start" aria-label={`Valve ${row.position}`}>
               <input {...typed} aria-label={`Position of ${row.position || 'new valve'}`} value={row.position}
                 onChange={(e) => editor.change(row.key, { position: e.target.value.toUpperCase() })} className={`${inputClass} font-mono`} />
-              <input {...typed} aria-label={`Type of ${row.position}`} value={row.type} placeholder="e.g. UCH42" autoCapitalize="characters"
+              <input {...typed} aria-label={`Type of ${row.position}`} value={row.type} placeholder="e.g. EBF89" autoCapitalize="characters"
                 onChange={(e) => editor.change(row.key, { type: e.target.value.toUpperCase() })} className={`${inputClass} font-mono`} />
               <div className="space-y-1">
-                <input aria-label={`Notes on ${row.position}`} value={row.notes} placeholder="Notes, e.g. tests weak, original"
+                <input aria-label={`Notes on ${row.position}`} value={row.notes} placeholder="Notes, e.g. dim but usable"
                   onChange={(e) => editor.change(row.key, { notes: e.target.value })} className={inputClass} />
                 {row.type.trim() && <ValveDecoded type={row.type} />}
                 {error && <p role="alert" className="text-sm font-semibold text-danger">{error}</p>}

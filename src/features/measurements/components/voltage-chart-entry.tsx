@@ -25,7 +25,7 @@ export function VoltageChartEntry({ restorationId, onClose }: { restorationId: n
             </select>
           )}
         </Field>
-        <Field label="Conditions" hint="e.g. 230 V mains, no signal">
+        <Field label="Conditions" hint="e.g. 236 V mains on the 245 V tap, no signal">
           {(a) => <input {...a} className={inputClass} value={shared.conditions} onChange={(e) => setShared({ ...shared, conditions: e.target.value })} />}
         </Field>
         <Field label="Method" hint="Meter and its Ω/V, e.g. DMM 10 MΩ or 20 kΩ/V">

@@ -30,7 +30,7 @@ export const rowPreview = (row: EntryRow, quantity: EntryShared['quantity']): Pr
 
 /** What is missing before a row can be sent, in words; undefined when it can go. */
 export function rowProblem(row: EntryRow): string | undefined {
-  if (row.location.trim() === '') return 'Say where: e.g. V5 pin 7.';
+  if (row.location.trim() === '') return 'Say where: e.g. V5 pin 3.';
   if (row.reading.trim() === '') return 'Enter the reading.';
   return undefined;
 }

@@ -22,7 +22,7 @@ describe('formatTolerance', () => {
 describe('expectedSummary', () => {
   const m = { expectedText: '', toleranceText: '', ratingText: '' };
   it('gives capacitance and rating for ESR and leakage, a minimum for insulation, and the band otherwise', () => {
-    expect(expectedSummary({ ...m, quantity: 'esr', expectedText: '50µ', ratingText: '400 V' })).toBe('50µ 400 V');
+    expect(expectedSummary({ ...m, quantity: 'esr', expectedText: '22µ', ratingText: '25 V' })).toBe('22µ 25 V');
     expect(expectedSummary({ ...m, quantity: 'insulation' })).toBe('min 1 MΩ');
     expect(expectedSummary({ ...m, quantity: 'insulation', expectedText: '2M' })).toBe('min 2M');
     expect(expectedSummary({ ...m, quantity: 'dc-voltage', expectedText: '250 V', toleranceText: '10' })).toBe('250 V ±10 %');

@@ -5,7 +5,7 @@ import { groupOf, groupPoints, plotLimit, plotSummary, voltagePoints } from './v
 
 describe('voltagePoints', () => {
   it('keeps only voltages, the latest at each location, in valve then pin order', () => {
-    const esr = makeMeasurement(9, { location: 'C15', quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5' });
+    const esr = makeMeasurement(9, { location: 'C26', quantity: 'esr', expected: '22µ', rating: '25 V', reading: '1.1' });
     const older = { ...volts(10, 'V5 pin 7', '250 V', '100 V'), measuredAt: '2026-01-01T09:00:00.000Z' };
     const points = voltagePoints([older, ...fivePoints(), esr]);
     expect(points.map((p) => p.label)).toEqual(['V1 pin 6', 'V4 pin 1', 'V5 pin 3', 'V5 pin 7', 'V5 pin 9']);

@@ -90,7 +90,7 @@ export function plotLimit(points: readonly VoltagePoint[]): number {
 /** Volts with an SI prefix and a true minus sign: −2.1 V, 1.2 kV; "—" for none. */
 export const voltsText = (v: number | null) => (v === null ? '—' : formatQuantity(v, 'V').replace('-', '\u2212'));
 
-/** One point in words, e.g. "V5 pin 7 reads 320 V against 250 V ±10 %". */
+/** One point in words, e.g. "V5 pin 7 reads 310 V against 255 V ±10 %". */
 export function describePoint(p: VoltagePoint): string {
   if (p.expected === null) return `${p.label} reads ${voltsText(p.reading)}, no expected value`;
   return `${p.label} reads ${voltsText(p.reading)} against ${voltsText(p.expected)} ${p.band}`;

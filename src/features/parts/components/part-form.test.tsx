@@ -38,11 +38,11 @@ describe('part form', () => {
     expect(preview()).toHaveTextContent("⚠ Danger: Rated 350 V, below the original's 450 V: never lower the voltage rating.");
   });
 
-  it('when 47µF 450V replaces 50µF 350V, then the preview has no warning', async () => {
+  it('when 33µF 500V replaces 32µF 350V, then the preview has no warning', async () => {
     fakePartsApi([]);
     const user = userEvent.setup();
     renderWithQueries(<PartForm restorationId={7} />);
-    await typeChange(user, 'C16', '50µF 350V', '47µF 450V');
+    await typeChange(user, 'C16', '32µF 350V', '33µF 500V');
     expect(preview()).not.toHaveTextContent(/Danger|Caution/);
     expect(preview()).toHaveTextContent('No warnings from the ratings given.');
   });
@@ -98,7 +98,7 @@ describe('part form', () => {
     await user.type(screen.getByLabelText('Cost of the line (GBP)'), '1.855');
     await user.click(screen.getByRole('button', { name: 'Add to the ledger' }));
     expect(await screen.findByText('At most 2 decimal places')).toBeInTheDocument();
-    expect(screen.getByLabelText('Component reference')).toHaveAccessibleDescription(/Give the reference as the schematic prints it, e.g. C30/);
+    expect(screen.getByLabelText('Component reference')).toHaveAccessibleDescription(/Give the reference as the schematic prints it, e.g. C27/);
     expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   });
 
@@ -110,11 +110,11 @@ describe('part form', () => {
     renderWithQueries(<PartForm restorationId={7} part={part} onDone={onDone} />);
     expect(screen.getByLabelText('Cost of the line (GBP)')).toHaveValue('1.85');
     await user.selectOptions(screen.getByLabelText('State'), 'fitted');
-    await user.type(screen.getByLabelText('Tested after'), 'ESR 0.3 Ω, HT steady');
+    await user.type(screen.getByLabelText('Tested after'), 'Cathode 8.3 V, no red glow');
     await user.click(screen.getByRole('button', { name: 'Save changes' }));
     await waitFor(() => expect(onDone).toHaveBeenCalled());
     const patch = calls.find((c) => c.method === 'PATCH');
     expect(patch?.url).toBe('/api/parts/5');
-    expect(patch?.body).toMatchObject({ state: 'fitted', testedAfter: 'ESR 0.3 Ω, HT steady', costMinor: 185, findingId: null });
+    expect(patch?.body).toMatchObject({ state: 'fitted', testedAfter: 'Cathode 8.3 V, no red glow', costMinor: 185, findingId: null });
   });
 });

@@ -31,7 +31,7 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
       className="space-y-4 rounded-xl border border-rule bg-panel p-4 print:hidden">
       <h3 className="text-lg font-bold">{editing ? `Change ${part.componentRef}` : 'Record a part'}</h3>
       <div className="grid gap-3 sm:grid-cols-3">
-        <Field label="Component reference" hint="As the schematic prints it, e.g. C30" error={errors.componentRef?.message}>
+        <Field label="Component reference" hint="As the schematic prints it, e.g. C27" error={errors.componentRef?.message}>
           {(a) => <input {...a} {...register('componentRef')} {...typed} className={mono} />}
         </Field>
         <Field label="Action" error={errors.action?.message}>
@@ -54,13 +54,13 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
         <Field label="Original part" hint="What came out, e.g. wax paper tubular" error={errors.originalPart?.message}>
           {(a) => <input {...a} {...register('originalPart')} className={inputClass} />}
         </Field>
-        <Field label="Original rating" hint="Value and voltage, e.g. 32µF 450V" error={errors.originalRating?.message}>
+        <Field label="Original rating" hint="Value and voltage, e.g. 0.022µF 350V" error={errors.originalRating?.message}>
           {(a) => <input {...a} {...register('originalRating')} {...typed} className={mono} />}
         </Field>
-        <Field label="Replacement part" hint="What goes in, e.g. polypropylene film" error={errors.replacementPart?.message}>
+        <Field label="Replacement part" hint="What goes in, e.g. polyester film" error={errors.replacementPart?.message}>
           {(a) => <input {...a} {...register('replacementPart')} className={inputClass} />}
         </Field>
-        <Field label="Replacement rating" hint="Never a lower voltage, e.g. 33µF 500V" error={errors.replacementRating?.message}>
+        <Field label="Replacement rating" hint="Never a lower voltage, e.g. 22nF 630V" error={errors.replacementRating?.message}>
           {(a) => <input {...a} {...register('replacementRating')} {...typed} className={mono} />}
         </Field>
       </fieldset>
@@ -79,7 +79,7 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
           {(a) => <input {...a} {...register('quantity')} {...typed} inputMode="numeric" className={mono} />}
         </Field>
         <Field label={`Cost of the line (${currency})`} hint="Blank if not known" error={errors.cost?.message}>
-          {(a) => <input {...a} {...register('cost')} {...typed} inputMode="decimal" className={mono} placeholder="e.g. 1.85" />}
+          {(a) => <input {...a} {...register('cost')} {...typed} inputMode="decimal" className={mono} placeholder="e.g. 0.55" />}
         </Field>
         <Field label="Source" hint="e.g. “new, supplier” or “new-old-stock”" error={errors.source?.message}>
           {(a) => <input {...a} {...register('source')} list={sourcesId} className={inputClass} />}
@@ -90,7 +90,7 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
           <option value="original, restuffed" />
         </datalist>
       </div>
-      <Field label="Tested after" hint="How it tested once fitted, e.g. ESR 0.3 Ω, HT 250 V steady, hum gone" error={errors.testedAfter?.message}>
+      <Field label="Tested after" hint="How it tested once fitted, e.g. output cathode 8.3 V after an hour, no red glow" error={errors.testedAfter?.message}>
         {(a) => <input {...a} {...register('testedAfter')} className={inputClass} />}
       </Field>
       <Field label="Notes" hint="Not shown to the owner" error={errors.notes?.message}>

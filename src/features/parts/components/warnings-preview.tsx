@@ -12,7 +12,7 @@ export function WarningsPreview({ warnings, compared }: { warnings: PartWarning[
         <p className="text-sm text-ink-soft">
           {compared
             ? 'No warnings from the ratings given. The ledger shows the checks stored once saved.'
-            : 'Give what came out and what goes in, with their ratings (e.g. 32µF 450V), and the checks appear here.'}
+            : 'Give what came out and what goes in, with their ratings (e.g. 0.022µF 350V), and the checks appear here.'}
         </p>
       )}
     </section>

@@ -26,7 +26,7 @@ export function parseCost(text: string, currency: Currency): { ok: true; minor: 
   if (text.trim() === '') return { ok: true, minor: null };
   const digits = minorDigits(currency);
   const match = /^(\d+)(?:[.,](\d*))?$/.exec(bare);
-  if (!match) return { ok: false, message: 'Write the cost as a number, e.g. 1.85' };
+  if (!match) return { ok: false, message: 'Write the cost as a number, e.g. 0.55' };
   const fraction = match[2] ?? '';
   if (fraction.length > digits)
     return { ok: false, message: digits === 0 ? `${currency} has no smaller unit: give a whole number` : `At most ${digits} decimal places` };

@@ -64,7 +64,7 @@ export function RestorationForm({
           {(a) => <input {...a} {...register('receivedOn')} type="date" className={inputClass} />}
         </Field>
         <Field label="Mains setting as found" hint="Voltage tap, dropper setting, AC only or AC/DC" error={e.mainsSetting?.message}>
-          {(a) => <input {...a} {...register('mainsSetting')} className={inputClass} placeholder="e.g. 220 V tap" />}
+          {(a) => <input {...a} {...register('mainsSetting')} className={inputClass} placeholder="e.g. 245 V tap" />}
         </Field>
         <Field label="Agreed level of work" error={e.workLevel?.message}>
           {(a) => (
@@ -89,7 +89,7 @@ export function RestorationForm({
         <span>Hidden parts must look original too (restuff cans and tubulars)</span>
       </label>
       <Field label="Symptoms, in the owner's words" error={e.symptoms?.message}>
-        {(a) => <textarea {...a} {...register('symptoms')} rows={3} className={inputClass} placeholder="“It hums and nothing plays”" />}
+        {(a) => <textarea {...a} {...register('symptoms')} rows={3} className={inputClass} placeholder="“Plays for a few minutes, then fades away”" />}
       </Field>
       <Field label="Condition at intake" hint="Cabinet, knobs, back, mains lead, anything missing" error={e.conditionNotes?.message}>
         {(a) => <textarea {...a} {...register('conditionNotes')} rows={3} className={inputClass} />}
