@@ -18,7 +18,7 @@ afterAll(() => t.stop());
 const post = (body: object) => tech.post(`/api/restorations/${restorationId}/measurements`).send(body);
 
 describe('measurements', () => {
-  it('when a reading is recorded, then the stored verdict and reason equal the bench library’s', async () => {
+  it('when a reading is recorded, then its verdict, the table limit and the reason are stored with it', async () => {
     const body = { location: 'C26', quantity: 'esr', expected: '22µ', rating: '25 V', reading: '1.1 Ω', method: 'ESR meter, 100 kHz, in circuit' };
     const res = await post(body);
     expect(res.status).toBe(201);
