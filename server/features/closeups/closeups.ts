@@ -3,6 +3,7 @@ import { sql } from 'drizzle-orm';
 import sharp from 'sharp';
 import type { NormalisedPoint, Shape } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
+import { redactedError } from '../../http/redact-error';
 import { photoKeys } from '../photos/photo-objects';
 import { withDecodeSlot } from '../photos/photo-pipeline';
 import { closeupRegion } from './closeup-region';
@@ -65,6 +66,6 @@ async function generate({ db, storage, config }: CloseupDeps, key: string, photo
 /** Cuts the close-up in the background once a finding is placed or moved, so the first view does not wait. */
 export function scheduleCloseup(deps: CloseupDeps & Pick<AppDeps, 'logger'>, photo: PhotoLike, finding: FindingLike): void {
   setImmediate(() => {
-    ensureCloseup(deps, photo, finding).catch((err: Error) => deps.logger.warn(`close-up for finding ${finding.id} failed: ${err.message}`));
+    ensureCloseup(deps, photo, finding).catch((err: unknown) => deps.logger.warn({ err: redactedError(err) }, `close-up for finding ${finding.id} failed`));
   });
 }
