@@ -45,22 +45,24 @@ export function ensureCloseup(deps: CloseupDeps, photo: PhotoLike, finding: Find
 
 async function generate({ db, storage, config }: CloseupDeps, key: string, photo: PhotoLike, finding: FindingLike): Promise<string> {
   if (await storage.exists(key)) return key;
-  return db.transaction(async (tx) => {
-    await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${key}, 0))`);
-    if (await storage.exists(key)) return key; // another instance made it while we waited
-    const original = await storage.getObject(photoKeys(photo.storageKey).original);
-    const region = closeupRegion(finding.shape, finding.points, photo);
-    const crop = await withDecodeSlot(() =>
-      sharp(original, { limitInputPixels: config.uploads.maxPixels, failOn: 'error' })
+  // The decode slot first, then the lock: at most two transactions per instance wait on storage and sharp,
+  // so a report with many close-ups cannot hold the whole connection pool.
+  return withDecodeSlot(() =>
+    db.transaction(async (tx) => {
+      await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${key}, 0))`);
+      if (await storage.exists(key)) return key; // another instance made it while we waited
+      const original = await storage.getObject(photoKeys(photo.storageKey).original);
+      const region = closeupRegion(finding.shape, finding.points, photo);
+      const crop = await sharp(original, { limitInputPixels: config.uploads.maxPixels, failOn: 'error' })
         .autoOrient()
         .extract(region)
         .resize({ width: 800, height: 800, fit: 'inside', withoutEnlargement: true })
         .webp({ quality: 85 })
-        .toBuffer(),
-    );
-    await storage.putObject(key, crop, 'image/webp');
-    return key;
-  });
+        .toBuffer();
+      await storage.putObject(key, crop, 'image/webp');
+      return key;
+    }),
+  );
 }
 
 /** Cuts the close-up in the background once a finding is placed or moved, so the first view does not wait. */
