@@ -3,6 +3,7 @@ import { sql } from 'drizzle-orm';
 import sharp from 'sharp';
 import type { NormalisedPoint, Shape } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
+import { redactedError } from '../../http/redact-error';
 import { photoKeys } from '../photos/photo-objects';
 import { withDecodeSlot } from '../photos/photo-pipeline';
 import { closeupRegion } from './closeup-region';
@@ -44,27 +45,29 @@ export function ensureCloseup(deps: CloseupDeps, photo: PhotoLike, finding: Find
 
 async function generate({ db, storage, config }: CloseupDeps, key: string, photo: PhotoLike, finding: FindingLike): Promise<string> {
   if (await storage.exists(key)) return key;
-  return db.transaction(async (tx) => {
-    await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${key}, 0))`);
-    if (await storage.exists(key)) return key; // another instance made it while we waited
-    const original = await storage.getObject(photoKeys(photo.storageKey).original);
-    const region = closeupRegion(finding.shape, finding.points, photo);
-    const crop = await withDecodeSlot(() =>
-      sharp(original, { limitInputPixels: config.uploads.maxPixels, failOn: 'error' })
+  // The decode slot first, then the lock: at most two transactions per instance wait on storage and sharp,
+  // so a report with many close-ups cannot hold the whole connection pool.
+  return withDecodeSlot(() =>
+    db.transaction(async (tx) => {
+      await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${key}, 0))`);
+      if (await storage.exists(key)) return key; // another instance made it while we waited
+      const original = await storage.getObject(photoKeys(photo.storageKey).original);
+      const region = closeupRegion(finding.shape, finding.points, photo);
+      const crop = await sharp(original, { limitInputPixels: config.uploads.maxPixels, failOn: 'error' })
         .autoOrient()
         .extract(region)
         .resize({ width: 800, height: 800, fit: 'inside', withoutEnlargement: true })
         .webp({ quality: 85 })
-        .toBuffer(),
-    );
-    await storage.putObject(key, crop, 'image/webp');
-    return key;
-  });
+        .toBuffer();
+      await storage.putObject(key, crop, 'image/webp');
+      return key;
+    }),
+  );
 }
 
 /** Cuts the close-up in the background once a finding is placed or moved, so the first view does not wait. */
 export function scheduleCloseup(deps: CloseupDeps & Pick<AppDeps, 'logger'>, photo: PhotoLike, finding: FindingLike): void {
   setImmediate(() => {
-    ensureCloseup(deps, photo, finding).catch((err: Error) => deps.logger.warn(`close-up for finding ${finding.id} failed: ${err.message}`));
+    ensureCloseup(deps, photo, finding).catch((err: unknown) => deps.logger.warn({ err: redactedError(err) }, `close-up for finding ${finding.id} failed`));
   });
 }

@@ -1,5 +1,6 @@
 import type { Logger } from 'pino';
 import type { Database } from '../../db/client';
+import { redactedError } from '../../http/redact-error';
 import type { Storage } from '../../storage';
 import { sweepOrphanedObjects } from './sweep-orphans';
 
@@ -10,7 +11,7 @@ export function scheduleSweep(db: Database, storage: Storage, logger: Logger): v
   const run = () =>
     sweepOrphanedObjects(db, storage)
       .then((n) => n > 0 && logger.info(`removed ${n} orphaned photo objects`))
-      .catch((err: Error) => logger.warn(`orphan sweep failed: ${err.message}`));
+      .catch((err: unknown) => logger.warn({ err: redactedError(err) }, 'orphan sweep failed'));
   setTimeout(run, 30_000).unref();
   setInterval(run, EVERY_MS).unref();
 }
