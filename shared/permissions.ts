@@ -35,6 +35,9 @@ export const actions = [
   'parts.edit',
   'report.download',
   'report.send',
+  'safety.view',
+  'safety.record',
+  'safety.override',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -79,6 +82,11 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'parts.edit': (role) => role === 'technician',
   'report.download': () => true,
   'report.send': (role) => role === 'technician',
+  // The final safety test, its override and the soak log: owners read them, mentors comment on findings but never
+  // sign off; only a technician records a test, starts or stops a soak, or returns a set on an override.
+  'safety.view': () => true,
+  'safety.record': (role) => role === 'technician',
+  'safety.override': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {

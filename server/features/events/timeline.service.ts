@@ -8,6 +8,7 @@ import type { TimelineEvent } from '../../../shared/schemas/parts';
 import type { AppDeps } from '../../app-deps';
 import { events, findings, measurements, parts, photos, users } from '../../db/schema';
 import { photoKeys } from '../photos/photo-objects';
+import { safetyEventLine } from '../safety/safety-events';
 
 type Kind = (typeof events.$inferSelect)['kind'];
 const findingPhotos = aliasedTable(photos, 'finding_photos');
@@ -45,8 +46,9 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
         visible.map(async ({ e, actorName, photo, finding, part, m }) => {
           const label = finding ? `#${finding.number}${finding.componentRef ? ` ${finding.componentRef}` : ''} ${finding.title}` : '';
           const data = e.data as { from?: string; to?: string; view?: string; phase?: string };
-          const summary =
-            e.kind === 'photo-added' ? `Photo added: ${viewLabels[photo!.view]}, ${phaseLabels[photo!.phase].toLowerCase()}${photo!.caption ? ` — ${photo!.caption}` : ''}`
+          const safety = safetyEventLine(e.kind, e.data);
+          const summary = safety ? safety.summary
+            : e.kind === 'photo-added' ? `Photo added: ${viewLabels[photo!.view]}, ${phaseLabels[photo!.phase].toLowerCase()}${photo!.caption ? ` — ${photo!.caption}` : ''}`
             : e.kind === 'finding-opened' ? `Finding opened: ${label}`
             : e.kind === 'finding-status' ? `${label}: ${statusLabels[data.from as Status] ?? data.from} → ${statusLabels[data.to as Status] ?? data.to}`
             : e.kind === 'question-asked' ? `Question for the mentors on ${label}`
@@ -58,6 +60,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
             id: e.id, kind: e.kind, at: e.createdAt.toISOString(), actorName, summary,
             photoId: e.photoId ?? finding?.photoId ?? null, findingId: e.findingId,
             thumbUrl: photo ? await storage.getSignedUrl(photoKeys(photo.storageKey).thumb) : null,
+            ...(safety ? { alert: safety.alert } : {}),
           };
         }),
       );

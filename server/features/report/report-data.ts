@@ -3,6 +3,7 @@ import type { AppDeps } from '../../app-deps';
 import { findings, measurements, memberships, parts, photos, restorations, users } from '../../db/schema';
 import { ensureCloseup } from '../closeups/closeups';
 import { photoKeys } from '../photos/photo-objects';
+import { safetyReportData } from '../safety/safety-report-data';
 
 type PhotoRow = typeof photos.$inferSelect;
 
@@ -57,6 +58,7 @@ export async function reportData({ db, storage }: Pick<AppDeps, 'db' | 'storage'
     kept: ledger.filter((p) => p.action === 'kept-original'),
     readings: readings.filter((m) => m.quantity !== 'insulation' && m.quantity !== 'leakage'),
     safetyChecks: readings.filter((m) => m.quantity === 'insulation' || m.quantity === 'leakage'),
+    safety: await safetyReportData(db, restorationId),
   };
 }
 export type ReportData = NonNullable<Awaited<ReturnType<typeof reportData>>>;

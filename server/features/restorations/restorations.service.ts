@@ -2,8 +2,9 @@ import type { z } from 'zod';
 import type { Role } from '../../../shared/permissions';
 import type { Restoration, restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
 import type { Database } from '../../db/client';
-import { NotFoundError } from '../../http/errors';
+import { ConflictError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
+import { assertReturnedGate } from '../safety/returned-gate';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
 
 type CreateInput = z.output<typeof restorationInputSchema>;
@@ -26,10 +27,12 @@ export function restorationsService(db: Database) {
       return toRestoration(row, role);
     },
     async create(input: CreateInput, userId: number) {
+      if (input.stage === 'returned') throw new ConflictError('A new restoration cannot start at Returned: create it at an earlier stage and record its final safety test.');
       return toRestoration(await repo.insertWithTechnician(input, userId), 'technician');
     },
     async update(id: number, patch: PatchInput, role: Role, actorId: number) {
       const before = await repo.find(id);
+      if (before && patch.stage === 'returned' && before.stage !== 'returned') await assertReturnedGate(db, id);
       const row = await repo.update(id, patch);
       if (!row || !before) throw new NotFoundError();
       if (patch.stage && patch.stage !== before.stage)
