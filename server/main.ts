@@ -12,6 +12,7 @@ import { demoPeople, DEMO_PASSWORD } from './db/seed/demo-scenario';
 import { seedDemo } from './db/seed/seed-demo';
 import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
+import { seedDemoSafety } from './features/demo/seed-demo-safety';
 import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
 import { scheduleSweep } from './features/photos/schedule-sweep';
 import { EnvError, isDemo, parseEnv, publicOrigin, sessionSecret, uploadLimits } from './env';
@@ -46,6 +47,7 @@ async function main() {
     await seedDemoPhotos({ db: handle.db, storage, config: { uploads } });
     await seedDemoFindings(handle.db);
     await seedDemoWorkshop(handle.db);
+    await seedDemoSafety(handle.db);
   }
   scheduleSweep(handle.db, storage, logger);
 
