@@ -148,7 +148,7 @@ describe('sending the hand-back report', () => {
     const all = pages.join('\n').replace(/\s+/g, ' ');
     expect(all).toContain('Final safety test');
     expect(all).toMatch(/Protective earth continuity, chassis to plug earth pin: \S+ ?mΩ — PASS/);
-    expect(all).toContain('Insulation, live and neutral joined to exposed metal, at 500 V DC');
+    expect(all).toContain('Insulation, live and neutral joined to exposed metal, at 500 V DC: 50 MΩ — PASS (limit at least 1 MΩ at 500 V DC; IET Code of Practice');
     expect(all).toContain('not a certificate of electrical safety');
     expect(all).not.toContain('NOT PASSED'); // only the latest test is reported, and it passed
   });

@@ -15,9 +15,12 @@ const when = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { day: '
  */
 export function writeBringUpSection(_w: Writer, _d: ReportData): void {}
 
+// The report's fonts have no ≤ or ≥, and words read better to an owner anyway.
+const limitWords = (text: string) => text.replace(/^≤ /, 'at most ').replace(/^≥ /, 'at least ');
+
 function lineText(l: SafetyLineView): string {
   const value = l.value === null ? '' : `: ${formatQuantity(l.value, l.unit || 'A')}`;
-  return `${l.label}${l.sense === 'check' ? '' : value} — ${verdictWords[l.verdict]} (limit ${l.limitText}; ${l.source})`;
+  return `${l.label}${l.sense === 'check' ? '' : value} — ${verdictWords[l.verdict]} (limit ${limitWords(l.limitText)}; ${l.source})`;
 }
 
 /** The final safety test as judged when it was recorded, line by line with its limit and source; never called a certificate. */
