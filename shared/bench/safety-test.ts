@@ -140,7 +140,7 @@ export function safetyTest(input: SafetyTestInput): SafetyTestResult {
     limitText: recommended ? `≤ ${recommended} A recommended` : 'Recommended rating not given', source: SAFETY_SOURCES.practice,
     verdict: fitted == null || recommended == null ? 'not-measured' : judge(fitted, recommended, 'max') });
   const yesNo = (key: SafetyLine['key'], label: string, ok: boolean) =>
-    lines.push({ key, label, value: null, unit: '', limit: null, sense: 'check', limitText: 'Must be so', source: SAFETY_SOURCES.practice, verdict: check(ok) });
+    lines.push({ key, label, value: null, unit: '', limit: null, sense: 'check', limitText: 'Required', source: SAFETY_SOURCES.practice, verdict: check(ok) });
   yesNo('lead', 'Mains lead sound, strain relief fitted', input.leadAndStrainRelief);
   yesNo('covers', 'Knobs, back cover and insulators refitted', input.coversRefitted);
   yesNo('capacitor-class', 'Mains-side capacitors of X/Y safety class', input.safetyClassCapacitors);

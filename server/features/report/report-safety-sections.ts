@@ -20,7 +20,8 @@ const limitWords = (text: string) => text.replace(/^≤ /, 'at most ').replace(/
 
 function lineText(l: SafetyLineView): string {
   const value = l.value === null ? '' : `: ${formatQuantity(l.value, l.unit || 'A')}`;
-  return `${l.label}${l.sense === 'check' ? '' : value} — ${verdictWords[l.verdict]} (limit ${limitWords(l.limitText)}; ${l.source})`;
+  if (l.sense === 'check') return `${l.label} — ${verdictWords[l.verdict] === 'PASS' ? 'yes' : 'NO'} (${l.source})`;
+  return `${l.label}${value} — ${verdictWords[l.verdict]} (limit ${limitWords(l.limitText)}; ${l.source})`;
 }
 
 /** The final safety test as judged when it was recorded, line by line with its limit and source; never called a certificate. */

@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import { and, desc, eq } from 'drizzle-orm';
 import type { HandBackWarning, ReportPreview, ReportSend } from '../../../shared/schemas/safety';
-import { stages, type Stage } from '../../../shared/schemas/restorations';
+import { stageLabels, stages, type Stage } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { events, findings, memberships, reportSends, restorations, users } from '../../db/schema';
 import { ConflictError, NotFoundError } from '../../http/errors';
@@ -17,7 +17,7 @@ export async function handBackWarnings(db: Deps['db'], restorationId: number): P
   const [set] = await db.select({ stage: restorations.stage }).from(restorations).where(eq(restorations.id, restorationId));
   if (!set) throw new NotFoundError();
   const warnings: HandBackWarning[] = [];
-  if (beforeTesting.has(set.stage)) warnings.push({ code: 'stage-before-testing', message: `The set is still at ${set.stage}: the report is meant for the end of Testing or later.` });
+  if (beforeTesting.has(set.stage)) warnings.push({ code: 'stage-before-testing', message: `The set is still at ${stageLabels[set.stage]}: the report is meant for the end of Testing or later.` });
   const open = await db.select({ number: findings.number }).from(findings).where(and(eq(findings.restorationId, restorationId), eq(findings.questionOpen, true)));
   if (open.length) warnings.push({ code: 'open-questions', message: `${open.length} question${open.length === 1 ? ' is' : 's are'} still open for the mentors (${open.map((f) => `#${f.number}`).join(', ')}).` });
   const safety = await safetyTestsService(db).status(restorationId);
