@@ -12,6 +12,7 @@ export function safetyEventLine(kind: string, data: Record<string, unknown>): { 
     case 'safety-override':
       return { summary: `Returned without a passing safety test, on override: ${String(data.reason ?? '')}`, alert: true };
     case 'soak-session': {
+      if (data.started === true) return { summary: 'Soak run started', alert: false };
       const hours = typeof data.hours === 'number' ? `${data.hours.toFixed(1)} h` : '';
       return { summary: `Soak run ${hours}${data.fault ? ': a fault was seen and a finding opened' : ', no fault seen'}`.replace('  ', ' '), alert: data.fault === true };
     }

@@ -42,7 +42,10 @@ export function soakService(db: Database) {
       const [running] = await db.select({ id: soakSessions.id }).from(soakSessions).where(and(eq(soakSessions.restorationId, restorationId), isNull(soakSessions.endedAt)));
       if (running) throw new ConflictError('A soak session is already running: stop it before starting another.');
       try {
-        await db.insert(soakSessions).values({ restorationId, startedById: actorId });
+        await db.transaction(async (tx) => {
+          const [s] = await tx.insert(soakSessions).values({ restorationId, startedById: actorId }).returning({ id: soakSessions.id });
+          await tx.insert(events).values({ restorationId, kind: 'soak-session', actorId, data: { soakSessionId: s!.id, started: true } });
+        });
       } catch (err) {
         if ((err as { cause?: { code?: string }; code?: string }).cause?.code === '23505' || (err as { code?: string }).code === '23505')
           throw new ConflictError('A soak session is already running: stop it before starting another.');
