@@ -6,6 +6,7 @@ import { safetyTestInputSchema, specificationLabels, specifications } from '../.
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useRecordSafetyTest } from '../api/record-safety-test';
+import { LeadResistanceHelper } from './lead-resistance-helper';
 
 type Values = z.input<typeof safetyTestInputSchema>;
 type Output = z.output<typeof safetyTestInputSchema>;
@@ -60,6 +61,7 @@ export function SafetyTestForm({ restorationId, liveChassis, onDone }: { restora
           </Field>
         ))}
       </div>
+      {equipmentClass === 'class-1' && <LeadResistanceHelper onUse={(ohms) => form.setValue('lead', ohms, { shouldDirty: true })} />}
       <fieldset className="space-y-2">
         <legend className="font-semibold">Checked by eye and hand</legend>
         {([['leadAndStrainRelief', 'Mains lead sound, strain relief fitted'], ['coversRefitted', 'Knobs, back cover and insulators refitted'],
