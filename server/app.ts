@@ -19,6 +19,7 @@ import { partsRoutes } from './features/parts/parts.routes';
 import { photosRoutes } from './features/photos/photos.routes';
 import { reportRoutes } from './features/report/report.routes';
 import { restorationsRoutes } from './features/restorations/restorations.routes';
+import { safetyRoutes } from './features/safety/safety.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { redactedError } from './http/redact-error';
 import { requireSameOrigin } from './http/same-origin';
@@ -69,6 +70,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(partsRoutes(deps));
   api.use(eventsRoutes(deps));
   api.use(reportRoutes(deps));
+  api.use(safetyRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

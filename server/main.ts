@@ -12,6 +12,7 @@ import { demoPeople, DEMO_PASSWORD } from './db/seed/demo-scenario';
 import { seedDemo } from './db/seed/seed-demo';
 import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
+import { seedDemoSafety } from './features/demo/seed-demo-safety';
 import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
 import { scheduleSweep } from './features/photos/schedule-sweep';
 import { sweepUploadTemp } from './features/photos/upload-temp';
@@ -49,6 +50,7 @@ async function main() {
     await seedDemoPhotos({ db: handle.db, storage, config: { uploads } });
     await seedDemoFindings(handle.db);
     await seedDemoWorkshop(handle.db);
+    await seedDemoSafety(handle.db);
   }
   scheduleSweep(handle.db, storage, logger);
   const leftovers = sweepUploadTemp();

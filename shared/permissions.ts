@@ -38,6 +38,9 @@ export const actions = [
   'report.download',
   'report.send',
   'workshop.view',
+  'safety.view',
+  'safety.record',
+  'safety.override',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -85,6 +88,11 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   // The workshop's own working views: planned parts, the shopping list, CSV export, bench warnings, the
   // technician's cautions, the markup tools and questions to the mentors. Owners get their own pages instead.
   'workshop.view': (role) => role !== 'owner',
+  // The final safety test, its override and the soak log: owners read them, mentors comment on findings but never
+  // sign off; only a technician records a test, starts or stops a soak, or returns a set on an override.
+  'safety.view': () => true,
+  'safety.record': (role) => role === 'technician',
+  'safety.override': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
@@ -134,6 +142,11 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
         eventOf('measurement-out', sharedReading),
         eventOf('part-fitted', ownerPart),
         eventOf('stage-changed'),
+        // The safety record is the owner's business too: the test as judged, an override in red, soak runs, sends.
+        eventOf('safety-test'),
+        eventOf('safety-override'),
+        eventOf('soak-session'),
+        eventOf('report-sent'),
       ],
     },
     /** A finding's change record, only from after it was shared. */

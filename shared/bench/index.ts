@@ -31,3 +31,8 @@ export { DEFAULT_INSULATION_MIN, DEFAULT_TOLERANCE, measuredQuantities, measurem
 export type { MeasuredQuantity, MeasurementInput, MeasurementVerdict } from './measurement-verdict';
 export { partWarnings, readRating } from './part-rules';
 export type { MainsPosition, PartWarning } from './part-rules';
+export {
+  EARTH_CONTINUITY_BASE_OHMS, INSULATION_TEST_VOLTS, SAFETY_SOURCES, capacitorCurrent, earthContinuityLimit, equipmentClassLabels, equipmentClasses,
+  flexSizes, insulationMinimum, leadResistance, safetyTest, touchCurrentLimit,
+} from './safety-test';
+export type { EquipmentClass, LineVerdict, SafetyLine, SafetyTestInput, SafetyTestResult } from './safety-test';

@@ -72,7 +72,8 @@ export const partSchema = z.object({
 });
 export type Part = z.infer<typeof partSchema>;
 
-export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out'] as const;
+export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
+  'safety-test', 'safety-override', 'soak-session', 'report-sent'] as const;
 export const timelineQuerySchema = z.object({ kind: z.enum(timelineKinds).optional() });
 
 export const timelineEventSchema = z.object({
@@ -85,6 +86,8 @@ export const timelineEventSchema = z.object({
   photoId: z.number().int().nullable(),
   findingId: z.number().int().nullable(),
   thumbUrl: z.string().nullable(),
+  /** A safety step failed, skipped or overridden: shown in red. */
+  alert: z.boolean().optional(),
 });
 export type TimelineEvent = z.infer<typeof timelineEventSchema>;
 

@@ -36,6 +36,7 @@ export const router = createBrowserRouter([
               { path: 'findings', lazy: page(() => import('./routes/findings'), 'FindingsRoute') },
               { path: 'readings', lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },
               { path: 'parts', lazy: page(() => import('./routes/parts'), 'PartsRoute') },
+              { path: 'safety', lazy: page(() => import('./routes/safety'), 'SafetyRoute') },
               { path: 'history', lazy: page(() => import('./routes/history'), 'HistoryRoute') },
               { path: 'people', lazy: page(() => import('./routes/people'), 'PeopleRoute') },
             ],

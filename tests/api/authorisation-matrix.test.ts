@@ -94,6 +94,14 @@ const matrix: Row[] = [
   ['GET', '/api/restorations/:id/report.pdf', [200, 200, 200, 404, 401]],
   // The fixture restoration has an owner, so the technician's send succeeds.
   ['POST', '/api/restorations/:id/report/send', [200, 403, 403, 404, 401]],
+  ['GET', '/api/restorations/:id/report/preview', [200, 403, 403, 404, 401]],
+  ['GET', '/api/restorations/:id/safety-tests', [200, 200, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/safety-tests', [201, 403, 403, 404, 401], () => ({ equipmentClass: 'class-1', earth: '0.08', insulation: '50M', fuseFitted: '1', fuseRecommended: '1', leadAndStrainRelief: true, coversRefitted: true, safetyClassCapacitors: true, specification: 'original' })],
+  ['POST', '/api/restorations/:id/safety-override', [201, 403, 403, 404, 401], () => ({ reason: 'Owner collects it for display only, not for use.' })],
+  ['GET', '/api/restorations/:id/soak-sessions', [200, 200, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/soak-sessions', [201, 403, 403, 404, 401]],
+  // No soak session is running on the fixture, so the technician is told to start one.
+  ['PATCH', '/api/restorations/:id/soak-sessions/running', [409, 403, 403, 404, 401], () => ({ mainsCurrent: '0.25' })],
 ];
 
 let jpeg: Buffer;

@@ -42,6 +42,7 @@ export const parts = pgTable(
 
 export const eventKindEnum = pgEnum('event_kind', [
   'photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
+  'safety-test', 'safety-override', 'soak-session', 'report-sent',
 ]);
 
 /**

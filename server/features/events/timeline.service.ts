@@ -9,6 +9,7 @@ import type { AppDeps } from '../../app-deps';
 import { events, findings, measurements, parts, photos, users } from '../../db/schema';
 import { photoKeys } from '../photos/photo-objects';
 import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
+import { safetyEventLine } from '../safety/safety-events';
 
 type Kind = (typeof events.$inferSelect)['kind'];
 const findingPhotos = aliasedTable(photos, 'finding_photos');
@@ -43,8 +44,9 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           const photo = seesPhoto ? eventPhoto : null;
           const label = finding ? `#${finding.number}${finding.componentRef ? ` ${finding.componentRef}` : ''} ${finding.title}` : '';
           const data = e.data as { from?: string; to?: string; view?: string; phase?: string };
-          const summary =
-            e.kind === 'photo-added' ? `Photo added: ${viewLabels[photo!.view]}, ${phaseLabels[photo!.phase].toLowerCase()}${photo!.caption ? ` — ${photo!.caption}` : ''}`
+          const safety = safetyEventLine(e.kind, e.data);
+          const summary = safety ? safety.summary
+            : e.kind === 'photo-added' ? `Photo added: ${viewLabels[photo!.view]}, ${phaseLabels[photo!.phase].toLowerCase()}${photo!.caption ? ` — ${photo!.caption}` : ''}`
             : e.kind === 'finding-opened' ? `Finding opened: ${label}`
             : e.kind === 'finding-status' ? `${label}: ${statusLabels[data.from as Status] ?? data.from} → ${statusLabels[data.to as Status] ?? data.to}`
             : e.kind === 'question-asked' ? `Question for the mentors on ${label}`
@@ -56,6 +58,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
             id: e.id, kind: e.kind, at: e.createdAt.toISOString(), actorName, summary,
             photoId: photo?.id ?? finding?.photoId ?? null, findingId: finding?.id ?? null,
             thumbUrl: photo ? await storage.getSignedUrl(photoKeys(photo.storageKey).thumb) : null,
+            ...(safety ? { alert: safety.alert } : {}),
           };
         }),
       );

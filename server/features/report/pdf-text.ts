@@ -25,7 +25,7 @@ const load = (name: FontName) => {
 };
 
 // Signs none of the fonts carry, written the way a person would.
-const SUBSTITUTES: Record<string, string> = { '→': '->', '✓': '', '✕': 'x', '◐': '~', '≈': '~' };
+const SUBSTITUTES: Record<string, string> = { '→': '->', '✓': '', '✕': 'x', '◐': '~', '≈': '~', '≤': '<=', '≥': '>=' };
 
 /** Splits text into runs, each with the first font (primary, then fallbacks) that can draw it. */
 export function fontRuns(text: string, primary: 'body' | 'bold' = 'body'): { font: FontName; text: string }[] {

@@ -46,14 +46,21 @@ export function createWriter() {
       doc.image(jpeg, x, y, { width: w * scale, height: h * scale });
       return { width: w * scale, height: h * scale };
     },
-    /** Footer on every page: the set and page numbers. */
-    footer(line: string) {
+    /**
+     * Footer on every page: the set and page numbers; returns the page count. The footer sits below the bottom
+     * margin, where pdfkit would start a new page for it, so the margin is lifted while it is written.
+     */
+    footer(line: string): number {
       const range = doc.bufferedPageRange();
       for (let i = range.start; i < range.start + range.count; i++) {
         doc.switchToPage(i);
+        const bottom = doc.page.margins.bottom;
+        doc.page.margins.bottom = 0;
         const y = doc.page.height - 40;
         doc.font('body').fontSize(8).fillColor(SOFT).text(`${line} · page ${i + 1} of ${range.count}`, 56, y, { width, align: 'center', lineBreak: false });
+        doc.page.margins.bottom = bottom;
       }
+      return doc.bufferedPageRange().count;
     },
     finish(): Promise<Buffer> {
       return new Promise((resolve, reject) => {

@@ -4,6 +4,7 @@ import { findings, measurements, memberships, parts, photos, restorations, users
 import { ensureCloseup } from '../closeups/closeups';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 import { photoKeys } from '../photos/photo-objects';
+import { safetyReportData } from '../safety/safety-report-data';
 
 type PhotoRow = typeof photos.$inferSelect;
 
@@ -59,6 +60,7 @@ export async function reportData(deps: Pick<AppDeps, 'db' | 'storage' | 'config'
     kept: ledger.filter((p) => p.action === 'kept-original'),
     readings: readings.filter((m) => m.quantity !== 'insulation' && m.quantity !== 'leakage'),
     safetyChecks: readings.filter((m) => m.quantity === 'insulation' || m.quantity === 'leakage'),
+    safety: await safetyReportData(db, restorationId),
   };
 }
 export type ReportData = NonNullable<Awaited<ReturnType<typeof reportData>>>;

@@ -6,12 +6,13 @@ import { viewLabels } from '../../../shared/schemas/photos';
 import { equipmentKindLabels, workLevelLabels } from '../../../shared/schemas/restorations';
 import type { ReportData } from './report-data';
 import { createWriter, type Writer } from './pdf-writer';
+import { writeBringUpSection, writeSafetyTestSection, writeSoakSection } from './report-safety-sections';
 
 export const SAFETY_TEXT = [
   'Valve equipment works at lethal voltages: the HT supply is typically 200–300 V DC, and filter capacitors can stay charged after the set is switched off.',
   'Do not open the set or remove the back while it is plugged in. Only a competent person should work inside it: discharge the filter capacitors and verify with a meter first.',
   'Keep the ventilation holes clear; never cover the set while it is on.',
-  'This report records the work done and the readings taken; it is not a certificate of electrical safety. Follow your local electrical codes, and have the set checked by a licensed professional where the law requires it.',
+  'This report records the work done, the readings taken and the workshop\u2019s final safety test; it is not a certificate of electrical safety. Follow your local electrical codes, and have the set checked by a licensed professional where the law requires it.',
 ];
 
 const WORK = (d: ReportData) => `${workLevelLabels[d.set.workLevel]}${d.set.hiddenPartsOriginal ? ', with hidden parts kept original-looking' : ''}.`;
@@ -19,7 +20,7 @@ const reading = (m: ReportData['readings'][number]) =>
   `${quantityLabels[m.quantity]} at ${m.location}: ${formatQuantity(m.reading, quantityUnits[m.quantity])} — ${m.verdictReason}`;
 
 /** The owner's hand-back report as a PDF, made on the server without a browser. */
-export async function renderReport(d: ReportData): Promise<Buffer> {
+export async function renderReport(d: ReportData): Promise<{ pdf: Buffer; pageCount: number }> {
   const w = createWriter();
   const title = `${d.set.make} ${d.set.model}${d.set.year ? ` (${d.set.year})` : ''}`;
   w.text('Hand-back report', { size: 12, colour: '#b4530b', bold: true, gap: 0.2 });
@@ -66,6 +67,9 @@ export async function renderReport(d: ReportData): Promise<Buffer> {
   w.heading('Key measurements');
   if (!d.readings.length) w.text('No readings have been shared in this report.');
   for (const m of d.readings) w.text(reading(m), { size: 10, gap: 0.15 });
+  writeBringUpSection(w, d);
+  writeSafetyTestSection(w, d);
+  writeSoakSection(w, d);
   w.heading('Final safety checks');
   if (!d.safetyChecks.length) w.text('No final insulation or leakage check is recorded in this notebook yet.');
   for (const m of d.safetyChecks) w.text(reading(m), { size: 10, gap: 0.15 });
@@ -74,8 +78,8 @@ export async function renderReport(d: ReportData): Promise<Buffer> {
   if (d.set.liveChassis) w.text('This set has a live chassis (AC/DC): keep the back and all knobs fitted, never touch metal parts while it is plugged in, and unplug it before moving it.', { bold: true });
   w.heading('Safety');
   for (const line of SAFETY_TEXT) w.text(line, { size: 10 });
-  w.footer(`${title} · Gridleak hand-back report`);
-  return w.finish();
+  const pageCount = w.footer(`${title} · Gridleak hand-back report`);
+  return { pdf: await w.finish(), pageCount };
 }
 
 async function pair(w: Writer, p: ReportData['pairs'][number]) {

@@ -2,8 +2,9 @@ import type { z } from 'zod';
 import type { Role } from '../../../shared/permissions';
 import type { Restoration, restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
 import type { Database } from '../../db/client';
-import { NotFoundError } from '../../http/errors';
+import { ConflictError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
+import { assertReturnedGate } from '../safety/returned-gate';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
 
 type CreateInput = z.output<typeof restorationInputSchema>;
@@ -26,14 +27,17 @@ export function restorationsService(db: Database) {
       return toRestoration(row, role);
     },
     async create(input: CreateInput, userId: number) {
+      if (input.stage === 'returned') throw new ConflictError('A new restoration cannot start at Returned: create it at an earlier stage and record its final safety test.');
       return toRestoration(await repo.insertWithTechnician(input, userId), 'technician');
     },
     async update(id: number, patch: PatchInput, role: Role, actorId: number) {
-      // The restoration row is locked first, so the recorded "from" stage is the one this change replaced.
+      // The restoration row is locked first, so the recorded "from" stage is the one this change replaced,
+      // and a stage gate judges the state this change commits on.
       const row = await db.transaction(async (tx) => {
         const inTx = restorationsRepo(tx);
         const before = await inTx.find(id, { lock: true });
         if (!before) throw new NotFoundError();
+        if (patch.stage === 'returned' && before.stage !== 'returned') await assertReturnedGate(tx, id);
         const updated = (await inTx.update(id, patch))!;
         if (patch.stage && patch.stage !== before.stage)
           await recordEvent(tx, { restorationId: id, kind: 'stage-changed', actorId, data: { from: before.stage, to: patch.stage } });

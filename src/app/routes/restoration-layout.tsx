@@ -14,6 +14,7 @@ const tabs = [
   ['findings', 'Findings'],
   ['readings', 'Readings'],
   ['parts', 'Parts'],
+  ['safety', 'Safety'],
   ['history', 'History'],
   ['people', 'People'],
 ] as const;

@@ -33,6 +33,7 @@ export function RestorationRoute() {
       )}
       <ReportPanel restorationId={r.id} role={r.role} />
       {canEdit && <StagePicker stage={r.stage} disabled={update.isPending} onChange={(stage) => update.mutate({ stage })} />}
+      {update.error && !editing && <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 font-semibold text-danger">{update.error.message}</p>}
       {editing ? (
         <div className="rounded-xl border border-rule bg-panel p-5">
           <RestorationForm
@@ -63,7 +64,6 @@ export function RestorationRoute() {
               Edit details
             </Button>
           )}
-          {update.error && !editing && <p role="alert" className="text-danger">{update.error.message}</p>}
         </>
       )}
     </div>

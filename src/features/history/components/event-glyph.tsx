@@ -49,10 +49,33 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="m10 14 5-5.5M13.5 5.5l1 1.6" />
     </>
   ),
+  // A shield: the final safety test.
+  'safety-test': <path d="M10 2.5 16 5v4.5c0 4-2.7 6.7-6 8-3.3-1.3-6-4-6-8V5Z" />,
+  // The shield crossed: returned without a pass.
+  'safety-override': (
+    <>
+      <path d="M10 2.5 16 5v4.5c0 4-2.7 6.7-6 8-3.3-1.3-6-4-6-8V5Z" />
+      <path d="m7.5 7.5 5 5m0-5-5 5" />
+    </>
+  ),
+  // A clock face: hours of running.
+  'soak-session': (
+    <>
+      <circle cx="10" cy="10" r="7" />
+      <path d="M10 6v4h3" />
+    </>
+  ),
+  // An envelope.
+  'report-sent': (
+    <>
+      <path d="M3 5.5h14v9H3Z" />
+      <path d="m3 5.5 7 5.5 7-5.5" />
+    </>
+  ),
 };
 
-export function EventGlyph({ kind, className = '' }: { kind: Kind; className?: string }) {
-  const attention = kind === 'measurement-out';
+export function EventGlyph({ kind, alert = false, className = '' }: { kind: Kind; alert?: boolean; className?: string }) {
+  const attention = alert || kind === 'measurement-out';
   return (
     <span
       aria-hidden="true"

@@ -12,6 +12,10 @@ export const eventKindLabels: Record<Kind, string> = {
   'part-fitted': 'Parts fitted',
   'stage-changed': 'Stages',
   'measurement-out': 'Readings out of tolerance',
+  'safety-test': 'Safety tests',
+  'safety-override': 'Safety overrides',
+  'soak-session': 'Soak runs',
+  'report-sent': 'Reports sent',
 };
 
 export const eventKinds = timelineKinds;

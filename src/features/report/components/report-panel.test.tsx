@@ -15,11 +15,17 @@ afterEach(() => {
 
 const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
-/** The send endpoint behind `fetch`, answering with `answer`, held back until `release` is called. */
-function fakeSend(answer: () => Response) {
+const preview = (warnings: { code: string; message: string }[] = []) => ({
+  recipients: [{ name: 'Oona Owner', email: 'owner@example.org' }], subject: 'Your Fenwick Lark 3: the hand-back report',
+  body: 'Hello Oona Owner,\n\nThe report is attached.', attachmentName: 'fenwick-lark-3-hand-back-report.pdf', pageCount: 4, warnings, sends: [],
+});
+
+/** The preview and send endpoints behind `fetch`; the send answers with `answer`, held back until `release` is called. */
+function fakeSend(answer: () => Response, warnings: { code: string; message: string }[] = []) {
   let release = () => {};
   const held = new Promise<void>((resolve) => (release = resolve));
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
+    if (String(input) === '/api/restorations/7/report/preview' && !init.method) return json(200, preview(warnings));
     await held;
     return String(input) === '/api/restorations/7/report/send' && init.method === 'POST' ? answer() : toResponse(notFound());
   });
@@ -40,10 +46,13 @@ describe('report panel', () => {
     const user = userEvent.setup();
     renderPanel('technician');
     await user.click(screen.getByRole('button', { name: 'E-mail it to the owner' }));
+    expect(await screen.findByText('Oona Owner <owner@example.org>')).toBeInTheDocument();
+    expect(screen.getByText('fenwick-lark-3-hand-back-report.pdf (4 pages)')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Send to the owner' }));
     expect(screen.getByRole('button', { name: 'Sending…' })).toBeDisabled();
     release();
     expect(await screen.findByText('Sent to owner@example.org.')).toBeInTheDocument();
-    expect(fetchMock).toHaveBeenCalledOnce();
+    expect(fetchMock.mock.calls.filter(([, init]) => (init as RequestInit | undefined)?.method === 'POST')).toHaveLength(1);
   });
 
   it('when there is no owner to send to (409), then the server’s message shows', async () => {
@@ -52,7 +61,22 @@ describe('report panel', () => {
     const user = userEvent.setup();
     renderPanel('technician');
     await user.click(screen.getByRole('button', { name: 'E-mail it to the owner' }));
+    await user.click(await screen.findByRole('button', { name: 'Send to the owner' }));
     expect(await screen.findByRole('alert')).toHaveTextContent('Not sent: No owner is on this restoration yet: invite them from the People tab first.');
+  });
+
+  it('when sending would be premature, then the preview lists the warnings and nothing is sent until "Send anyway"', async () => {
+    const { fetchMock } = fakeSend(() => json(200, { sentTo: ['owner@example.org'] }), [
+      { code: 'no-passing-safety-test', message: 'No final safety test is recorded; the report says so.' },
+      { code: 'no-soak', message: 'No soak run is recorded.' },
+    ]);
+    const user = userEvent.setup();
+    renderPanel('technician');
+    await user.click(screen.getByRole('button', { name: 'E-mail it to the owner' }));
+    expect(await screen.findByText('No final safety test is recorded; the report says so.')).toBeInTheDocument();
+    expect(screen.getByText('No soak run is recorded.')).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Send anyway' })).toBeEnabled();
+    expect(fetchMock.mock.calls.some(([, init]) => (init as RequestInit | undefined)?.method === 'POST')).toBe(false);
   });
 
   it('when an owner or a mentor opens it, then they may download the report but not send it', () => {
