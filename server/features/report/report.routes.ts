@@ -11,7 +11,7 @@ const one = { params: idParamsSchema };
 const fileName = (make: string, model: string) => `${`${make}-${model}`.replace(/[^\w]+/g, '-').toLowerCase()}-hand-back-report.pdf`;
 
 /** The owner's report as a PDF with its file name and page count. */
-export async function buildReport(deps: Pick<AppDeps, 'db' | 'storage'>, id: number) {
+export async function buildReport(deps: Pick<AppDeps, 'db' | 'storage' | 'config'>, id: number) {
   const data = await reportData(deps, id);
   if (!data) throw new NotFoundError();
   const { pdf, pageCount } = await renderReport(data);
