@@ -31,6 +31,9 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'parts.edit': { technician: true, mentor: false, owner: false },
   'report.download': { technician: true, mentor: true, owner: true },
   'report.send': { technician: true, mentor: false, owner: false },
+  'bringup.view': { technician: true, mentor: true, owner: true },
+  'bringup.record': { technician: true, mentor: false, owner: false },
+  'bringup.signoff': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

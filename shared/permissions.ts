@@ -35,6 +35,9 @@ export const actions = [
   'parts.edit',
   'report.download',
   'report.send',
+  'bringup.view',
+  'bringup.record',
+  'bringup.signoff',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -79,6 +82,11 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'parts.edit': (role) => role === 'technician',
   'report.download': () => true,
   'report.send': (role) => role === 'technician',
+  // Everyone on the restoration reads the checklists and the power-up log (owners in their own words);
+  // only a technician, who is at the bench, records them or signs the pre-power checklist off.
+  'bringup.view': () => true,
+  'bringup.record': (role) => role === 'technician',
+  'bringup.signoff': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {

@@ -8,3 +8,4 @@ export * from './photos';
 export * from './findings';
 export * from './measurements';
 export * from './parts';
+export * from './bringup';

@@ -42,6 +42,7 @@ export const parts = pgTable(
 
 export const eventKindEnum = pgEnum('event_kind', [
   'photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
+  'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
 ]);
 
 /**

@@ -7,6 +7,7 @@ import type { Role } from '../../../shared/permissions';
 import type { TimelineEvent } from '../../../shared/schemas/parts';
 import type { AppDeps } from '../../app-deps';
 import { events, findings, measurements, parts, photos, users } from '../../db/schema';
+import { bringupEventWords, isBringupEvent } from '../bringup/bringup-events';
 import { photoKeys } from '../photos/photo-objects';
 
 type Kind = (typeof events.$inferSelect)['kind'];
@@ -45,8 +46,9 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
         visible.map(async ({ e, actorName, photo, finding, part, m }) => {
           const label = finding ? `#${finding.number}${finding.componentRef ? ` ${finding.componentRef}` : ''} ${finding.title}` : '';
           const data = e.data as { from?: string; to?: string; view?: string; phase?: string };
-          const summary =
-            e.kind === 'photo-added' ? `Photo added: ${viewLabels[photo!.view]}, ${phaseLabels[photo!.phase].toLowerCase()}${photo!.caption ? ` — ${photo!.caption}` : ''}`
+          const words = isBringupEvent(e.kind) ? bringupEventWords(e.kind, e.data) : null;
+          const summary = words ? words.summary
+            : e.kind === 'photo-added' ? `Photo added: ${viewLabels[photo!.view]}, ${phaseLabels[photo!.phase].toLowerCase()}${photo!.caption ? ` — ${photo!.caption}` : ''}`
             : e.kind === 'finding-opened' ? `Finding opened: ${label}`
             : e.kind === 'finding-status' ? `${label}: ${statusLabels[data.from as Status] ?? data.from} → ${statusLabels[data.to as Status] ?? data.to}`
             : e.kind === 'question-asked' ? `Question for the mentors on ${label}`
@@ -58,6 +60,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
             id: e.id, kind: e.kind, at: e.createdAt.toISOString(), actorName, summary,
             photoId: e.photoId ?? finding?.photoId ?? null, findingId: e.findingId,
             thumbUrl: photo ? await storage.getSignedUrl(photoKeys(photo.storageKey).thumb) : null,
+            caution: words?.caution ?? false,
           };
         }),
       );

@@ -5,6 +5,7 @@ import type { Database } from '../../db/client';
 import { NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
+import { stageGates } from './stage-gates';
 
 type CreateInput = z.output<typeof restorationInputSchema>;
 type PatchInput = z.output<typeof restorationPatchSchema>;
@@ -30,8 +31,10 @@ export function restorationsService(db: Database) {
     },
     async update(id: number, patch: PatchInput, role: Role, actorId: number) {
       const before = await repo.find(id);
+      if (!before) throw new NotFoundError();
+      if (patch.stage) await stageGates(db, id, before.stage, patch.stage);
       const row = await repo.update(id, patch);
-      if (!row || !before) throw new NotFoundError();
+      if (!row) throw new NotFoundError();
       if (patch.stage && patch.stage !== before.stage)
         await recordEvent(db, { restorationId: id, kind: 'stage-changed', actorId, data: { from: before.stage, to: patch.stage } });
       return toRestoration(row, role);

@@ -12,6 +12,11 @@ export const eventKindLabels: Record<Kind, string> = {
   'part-fitted': 'Parts fitted',
   'stage-changed': 'Stages',
   'measurement-out': 'Readings out of tolerance',
+  'intake-checked': 'Intake checks',
+  'pre-power-set': 'Pre-power checks',
+  'pre-power-signed': 'Pre-power sign-offs',
+  'pre-power-voided': 'Sign-offs withdrawn',
+  'bringup-step': 'Power-up steps',
 };
 
 export const eventKinds = timelineKinds;
