@@ -91,6 +91,13 @@ const matrix: Row[] = [
   ['GET', '/api/restorations/:id/report.pdf', [200, 200, 200, 404, 401]],
   // The fixture restoration has an owner, so the technician's send succeeds.
   ['POST', '/api/restorations/:id/report/send', [200, 403, 403, 404, 401]],
+  ['GET', '/api/restorations/:id/bringup', [200, 200, 200, 404, 401]],
+  ['PUT', '/api/restorations/:id/bringup/intake', [200, 403, 403, 404, 401], () => ({ item: 'mains-lead', done: true })],
+  ['PUT', '/api/restorations/:id/bringup/pre-power', [200, 403, 403, 404, 401], () => ({ item: 'mains-tap', status: 'done' })],
+  // The fixture's pre-power checklist is empty, so the technician is told what is missing; mentors never sign off.
+  ['POST', '/api/restorations/:id/bringup/pre-power/sign-off', [409, 403, 403, 404, 401]],
+  // Not signed off either, so the technician's step meets the first-power gate.
+  ['POST', '/api/restorations/:id/bringup/steps', [409, 403, 403, 404, 401], () => ({ supply: 'variable-transformer', appliedVolts: 60, lampBehaviour: 'no-lamp', decision: 'go-on' })],
 ];
 
 let jpeg: Buffer;
