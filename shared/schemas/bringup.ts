@@ -43,6 +43,7 @@ export const intakeCheckInputSchema = z.object({
   photoId: id.default(null),
 });
 export type IntakeCheckInput = z.input<typeof intakeCheckInputSchema>;
+export type IntakeCheck = z.output<typeof intakeCheckInputSchema>;
 
 /** "Not applicable" and "waived" need a reason a later reader (or inspector) can follow. */
 export const prePowerCheckInputSchema = z
@@ -52,6 +53,7 @@ export const prePowerCheckInputSchema = z
     message: 'Give the reason: not applicable and waived items must say why',
   });
 export type PrePowerCheckInput = z.input<typeof prePowerCheckInputSchema>;
+export type PrePowerCheck = z.output<typeof prePowerCheckInputSchema>;
 
 export const supplies = ['series-lamp', 'variable-transformer', 'lamp-and-variable-transformer', 'full-mains'] as const;
 export const supplyLabels: Record<(typeof supplies)[number], string> = {
@@ -95,6 +97,7 @@ export const bringupStepInputSchema = z.object({
   readings: z.array(stepReadingInputSchema).max(12).default([]),
 });
 export type BringupStepInput = z.input<typeof bringupStepInputSchema>;
+export type BringupStepValues = z.output<typeof bringupStepInputSchema>;
 
 const stepReadingSchema = z.object({
   measurementId: z.number().int(), location: z.string(), quantity: z.enum(stepQuantities), readingText: z.string(),

@@ -1,7 +1,5 @@
 import { and, eq, max } from 'drizzle-orm';
-import { prePowerMissing, type BringupStepInput, type IntakeCheckInput, type PrePowerCheckInput, supplyLabels } from '../../../shared/schemas/bringup';
-import type { z } from 'zod';
-import type { bringupStepInputSchema, intakeCheckInputSchema, prePowerCheckInputSchema } from '../../../shared/schemas/bringup';
+import { prePowerMissing, supplyLabels, type BringupStepValues, type IntakeCheck, type PrePowerCheck } from '../../../shared/schemas/bringup';
 import type { Role } from '../../../shared/permissions';
 import type { Database } from '../../db/client';
 import {
@@ -12,9 +10,6 @@ import { judge } from '../measurements/measurements.service';
 import { readBringup } from './bringup.repo';
 import { assertPrePowerSignedOff, type Db } from './power-gate';
 
-type IntakeInput = z.output<typeof intakeCheckInputSchema> & IntakeCheckInput;
-type CheckInput = z.output<typeof prePowerCheckInputSchema> & PrePowerCheckInput;
-type StepInput = z.output<typeof bringupStepInputSchema> & BringupStepInput;
 
 /** Serialises bring-up writes on one restoration, so a sign-off never races an item change. */
 async function lock(tx: Db, restorationId: number) {
@@ -41,7 +36,7 @@ export function bringupService(db: Database) {
   return {
     get: (restorationId: number, role: Role) => readBringup(db, restorationId, role),
 
-    async setIntake(restorationId: number, input: IntakeInput, userId: number, role: Role) {
+    async setIntake(restorationId: number, input: IntakeCheck, userId: number, role: Role) {
       await db.transaction(async (tx) => {
         await lock(tx, restorationId);
         await assertOwn(tx, restorationId, input.findingId, input.photoId);
@@ -56,7 +51,7 @@ export function bringupService(db: Database) {
     },
 
     /** Changing an item after the sign-off withdraws the sign-off: the checklist must be signed again. */
-    async setPrePower(restorationId: number, input: CheckInput, userId: number, role: Role) {
+    async setPrePower(restorationId: number, input: PrePowerCheck, userId: number, role: Role) {
       await db.transaction(async (tx) => {
         await lock(tx, restorationId);
         const [before] = await tx.select().from(prePowerChecks).where(and(eq(prePowerChecks.restorationId, restorationId), eq(prePowerChecks.item, input.item)));
@@ -89,7 +84,7 @@ export function bringupService(db: Database) {
     },
 
     /** One staged power-up step; its readings become ordinary powered readings with verdicts. */
-    async addStep(restorationId: number, input: StepInput, userId: number, role: Role) {
+    async addStep(restorationId: number, input: BringupStepValues, userId: number, role: Role) {
       const usesLamp = input.supply === 'series-lamp' || input.supply === 'lamp-and-variable-transformer';
       if (usesLamp && (input.lampWatts === null || input.lampVolts === null))
         throw new BadRequestError('lampWatts: give the series lamp\u2019s rating in watts and volts.');
