@@ -4,6 +4,7 @@ import { prePowerItems } from '../../shared/schemas/bringup';
 import type { TimelineEvent } from '../../shared/schemas/parts';
 import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
+import { pdfText } from '../support/pdf-text';
 import { startTestApp } from '../support/test-app';
 
 let t: Awaited<ReturnType<typeof startTestApp>>;
@@ -156,5 +157,28 @@ describe('who may do what', () => {
       expect((await agent.put(`/api/restorations/${id}/bringup/intake`).send({ item: 'mains-lead', done: false })).status).toBe(403);
       expect((await agent.post(`/api/restorations/${id}/bringup/pre-power/sign-off`)).status).toBe(403);
     }
+  });
+});
+
+describe('on the report', () => {
+  const binary = (res: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void) => {
+    const chunks: Buffer[] = [];
+    res.on('data', (c: Buffer) => chunks.push(c));
+    res.on('end', () => cb(null, Buffer.concat(chunks)));
+  };
+
+  it('when the owner downloads the report, then it shows the sign-off, the waiver with its reason and the steps, without bench notes', async () => {
+    const id = await newSet();
+    await completeChecklist(id);
+    await tech.post(`/api/restorations/${id}/bringup/pre-power/sign-off`);
+    await tech.post(`/api/restorations/${id}/bringup/steps`).send({ supply: 'variable-transformer', appliedVolts: 120, lampBehaviour: 'no-lamp', decision: 'stop', notes: 'BENCH-ONLY-NOTE' });
+    const res = await owner.get(`/api/restorations/${id}/report.pdf`).buffer(true).parse(binary as never);
+    expect(res.status).toBe(200);
+    const text = (await pdfText(res.body as Buffer)).replace(/\s+/g, ' ');
+    expect(text).toMatch(/Before the first switch-on/);
+    expect(text).toMatch(/The pre-power checklist was signed off by/);
+    expect(text).toMatch(/Waived: The first switch-on was made through a current limiter — Lamp holder broken/);
+    expect(text).toMatch(/Step 1: Variable transformer, 120 V — stop and find the fault/);
+    expect(text).not.toMatch(/BENCH-ONLY-NOTE/);
   });
 });

@@ -1,6 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { AppDeps } from '../../app-deps';
 import { findings, measurements, memberships, parts, photos, restorations, users } from '../../db/schema';
+import { bringupForReport } from '../bringup/bringup-report';
 import { ensureCloseup } from '../closeups/closeups';
 import { photoKeys } from '../photos/photo-objects';
 
@@ -57,6 +58,7 @@ export async function reportData({ db, storage }: Pick<AppDeps, 'db' | 'storage'
     kept: ledger.filter((p) => p.action === 'kept-original'),
     readings: readings.filter((m) => m.quantity !== 'insulation' && m.quantity !== 'leakage'),
     safetyChecks: readings.filter((m) => m.quantity === 'insulation' || m.quantity === 'leakage'),
+    bringup: await bringupForReport(db, restorationId),
   };
 }
 export type ReportData = NonNullable<Awaited<ReturnType<typeof reportData>>>;
