@@ -45,7 +45,7 @@ export function bringupService(db: Database) {
         await tx.insert(intakeChecks).values({ restorationId, item: input.item, ...values })
           .onConflictDoUpdate({ target: [intakeChecks.restorationId, intakeChecks.item], set: values });
         if ((before?.done ?? false) !== input.done)
-          await tx.insert(events).values({ restorationId, kind: 'intake-checked', actorId: userId, findingId: input.findingId, data: { item: input.item, done: input.done } });
+          await tx.insert(events).values({ restorationId, kind: 'intake-checked', actorId: userId, data: { item: input.item, done: input.done } });
       });
       return readBringup(db, restorationId, role);
     },
@@ -109,7 +109,7 @@ export function bringupService(db: Database) {
           if (verdict.verdict === 'out') await tx.insert(events).values({ restorationId, kind: 'measurement-out', actorId: userId, measurementId: m!.id, findingId: input.findingId });
         }
         await tx.insert(events).values({
-          restorationId, kind: 'bringup-step', actorId: userId, findingId: input.findingId,
+          restorationId, kind: 'bringup-step', actorId: userId,
           data: { number, supply: input.supply, lampWatts: input.lampWatts, lampBehaviour: input.lampBehaviour, decision: input.decision },
         });
       });

@@ -34,7 +34,7 @@ export function BringupTab({ restorationId, role, liveChassis, findings = [], ph
         <PowerUpLog steps={steps} />
         {canRecord &&
           (prePower.signedOff ? (
-            <StepForm restorationId={restorationId} nextNumber={steps.length + 1} />
+            <StepForm restorationId={restorationId} nextNumber={steps.length + 1} findings={findings} />
           ) : (
             <p className="rounded-lg bg-sunken px-3 py-2">Sign the pre-power checklist off to log power-up steps.</p>
           ))}

@@ -5,12 +5,13 @@ import { inputClass } from '../../../components/field';
 import { useAddBringupStep } from '../api/add-bringup-step';
 import { lampLimitWords } from '../lib/inline-limits';
 import { emptyDraft, readDraft, usesLamp, type StepDraft } from '../lib/step-draft';
+import type { FindingChoice } from '../lib/choices';
 import { StepReadings } from './step-readings';
 
 const toNumber = (text: string) => (text.trim() === '' ? null : Number(text.replace(',', '.')));
 
 /** Logs the step just taken; the draft stays on the page if the save fails. */
-export function StepForm({ restorationId, nextNumber }: { restorationId: number; nextNumber: number }) {
+export function StepForm({ restorationId, nextNumber, findings }: { restorationId: number; nextNumber: number; findings: FindingChoice[] }) {
   const add = useAddBringupStep(restorationId);
   const [draft, setDraft] = useState<StepDraft>(emptyDraft());
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -66,6 +67,15 @@ export function StepForm({ restorationId, nextNumber }: { restorationId: number;
         <label htmlFor="step-notes" className="text-sm font-semibold">Smell, smoke, hum, heater glow</label>
         <textarea id="step-notes" rows={2} value={draft.notes} maxLength={1000} onChange={(e) => set({ notes: e.target.value })} className={inputClass} />
       </div>
+      {findings.length > 0 && (
+        <div>
+          <label htmlFor="step-finding" className="text-sm font-semibold">Finding (optional)</label>
+          <select id="step-finding" value={draft.findingId} onChange={(e) => set({ findingId: e.target.value })} className={inputClass}>
+            <option value="">Not tied to a finding</option>
+            {findings.map((f) => <option key={f.id} value={String(f.id)}>#{f.number} {f.title}</option>)}
+          </select>
+        </div>
+      )}
       <fieldset>
         <legend className="text-sm font-semibold">Decision</legend>
         <div className="flex flex-wrap gap-x-5">

@@ -9,13 +9,15 @@ export interface StepDraft {
   lampBehaviour: (typeof lampBehaviours)[number];
   notes: string;
   decision: (typeof decisions)[number] | '';
+  /** The finding this step turned up or was about ('' for none). */
+  findingId: string;
   readings: { location: string; quantity: (typeof stepQuantities)[number]; expected: string; tolerance: string; reading: string }[];
 }
 
 /** The three readings a bring-up step usually takes; rows left without a reading are not sent. */
 export const emptyDraft = (previous?: Pick<StepDraft, 'lampWatts' | 'lampVolts' | 'appliedVolts'>): StepDraft => ({
   supply: 'series-lamp', lampWatts: previous?.lampWatts ?? '', lampVolts: previous?.lampVolts ?? '', appliedVolts: previous?.appliedVolts ?? '',
-  lampBehaviour: 'flash-then-dim', notes: '', decision: '',
+  lampBehaviour: 'flash-then-dim', notes: '', decision: '', findingId: '',
   readings: [
     { location: 'HT', quantity: 'dc-voltage', expected: '', tolerance: '', reading: '' },
     { location: 'Heater chain', quantity: 'ac-voltage', expected: '', tolerance: '', reading: '' },
@@ -38,6 +40,7 @@ export function readDraft(d: StepDraft): { ok: true; input: BringupStepInput } |
   if (!d.decision) errors.decision = 'Choose: go on, or stop and find the fault';
   const input = {
     supply: d.supply, ...values, lampBehaviour: lamp ? d.lampBehaviour : 'no-lamp', notes: d.notes, decision: d.decision || 'stop',
+    findingId: d.findingId ? Number(d.findingId) : null,
     readings: d.readings.filter((r) => r.reading.trim() !== ''),
   } satisfies BringupStepInput;
   const parsed = bringupStepInputSchema.safeParse(input);
