@@ -13,6 +13,7 @@ import { healthRoutes } from './features/health/health.routes';
 import { invitationsRoutes } from './features/invitations/invitations.routes';
 import { membersRoutes } from './features/members/members.routes';
 import { measurementsRoutes } from './features/measurements/measurements.routes';
+import { bringupRoutes } from './features/bringup/bringup.routes';
 import { metaRoutes } from './features/meta/meta.routes';
 import { notificationsRoutes } from './features/notifications/notifications.routes';
 import { partsRoutes } from './features/parts/parts.routes';
@@ -71,6 +72,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(eventsRoutes(deps));
   api.use(reportRoutes(deps));
   api.use(safetyRoutes(deps));
+  api.use(bringupRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

@@ -10,6 +10,7 @@ import { connectDatabase } from './db/client';
 import { applyMigrations } from './db/migrate';
 import { demoPeople, DEMO_PASSWORD } from './db/seed/demo-scenario';
 import { seedDemo } from './db/seed/seed-demo';
+import { seedDemoBringup } from './db/seed/seed-demo-bringup';
 import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
 import { seedDemoSafety } from './features/demo/seed-demo-safety';
@@ -51,6 +52,7 @@ async function main() {
     await seedDemoFindings(handle.db);
     await seedDemoWorkshop(handle.db);
     await seedDemoSafety(handle.db);
+    await seedDemoBringup(handle.db);
   }
   scheduleSweep(handle.db, storage, logger);
   const leftovers = sweepUploadTemp();

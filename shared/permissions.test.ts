@@ -35,6 +35,9 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'safety.view': { technician: true, mentor: true, owner: true },
   'safety.record': { technician: true, mentor: false, owner: false },
   'safety.override': { technician: true, mentor: false, owner: false },
+  'bringup.view': { technician: true, mentor: true, owner: true },
+  'bringup.record': { technician: true, mentor: false, owner: false },
+  'bringup.signoff': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

@@ -41,6 +41,9 @@ export const actions = [
   'safety.view',
   'safety.record',
   'safety.override',
+  'bringup.view',
+  'bringup.record',
+  'bringup.signoff',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -93,6 +96,11 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'safety.view': () => true,
   'safety.record': (role) => role === 'technician',
   'safety.override': (role) => role === 'technician',
+  // Everyone on the restoration reads the checklists and the power-up log (owners in their own words);
+  // only a technician, who is at the bench, records them or signs the pre-power checklist off.
+  'bringup.view': () => true,
+  'bringup.record': (role) => role === 'technician',
+  'bringup.signoff': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
@@ -147,6 +155,12 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
         eventOf('safety-override'),
         eventOf('soak-session'),
         eventOf('report-sent'),
+        // The checks before first power and the power-up steps, in the owner's words (a waiver or a stop in red).
+        eventOf('intake-checked'),
+        eventOf('pre-power-set'),
+        eventOf('pre-power-signed'),
+        eventOf('pre-power-voided'),
+        eventOf('bringup-step'),
       ],
     },
     /** A finding's change record, only from after it was shared. */

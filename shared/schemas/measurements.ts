@@ -20,6 +20,8 @@ const fields = {
   method: text(300),
   findingId: bodyIdSchema.nullable(),
   ownerVisible: z.boolean(),
+  /** Taken with the set powered: refused until the pre-power checklist is signed off. */
+  powerOn: z.boolean(),
 };
 
 /** A reading as a person types it; the server computes the SI values and the verdict. */
@@ -32,6 +34,7 @@ export const measurementInputSchema = z.object({
   method: fields.method.default(''),
   findingId: fields.findingId.optional(),
   ownerVisible: fields.ownerVisible.default(false),
+  powerOn: fields.powerOn.default(false),
 });
 export type MeasurementInput = z.input<typeof measurementInputSchema>;
 /** Only what is sent changes (no defaults here, or a patch would blank the other fields). */
@@ -57,6 +60,7 @@ export const measurementSchema = z.object({
   verdict: z.enum(['within', 'marginal', 'out', 'unknown']),
   verdictReason: z.string(),
   ownerVisible: z.boolean(),
+  powerOn: z.boolean(),
   measuredBy: z.string().nullable(),
   measuredAt: z.string(),
 });

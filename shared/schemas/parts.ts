@@ -73,7 +73,8 @@ export const partSchema = z.object({
 export type Part = z.infer<typeof partSchema>;
 
 export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
-  'safety-test', 'safety-override', 'soak-session', 'report-sent'] as const;
+  'safety-test', 'safety-override', 'soak-session', 'report-sent',
+  'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step'] as const;
 export const timelineQuerySchema = z.object({ kind: z.enum(timelineKinds).optional() });
 
 export const timelineEventSchema = z.object({
@@ -86,8 +87,8 @@ export const timelineEventSchema = z.object({
   photoId: z.number().int().nullable(),
   findingId: z.number().int().nullable(),
   thumbUrl: z.string().nullable(),
-  /** A safety step failed, skipped or overridden: shown in red. */
-  alert: z.boolean().optional(),
+  /** A safety departure (a waived pre-power item, a stop at power-up): shown in red. */
+  caution: z.boolean(),
 });
 export type TimelineEvent = z.infer<typeof timelineEventSchema>;
 

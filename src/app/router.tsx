@@ -34,6 +34,7 @@ export const router = createBrowserRouter([
               { path: 'photos/:photoId', lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
               { path: 'photos/:photoId/findings/:findingId', lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
               { path: 'findings', lazy: page(() => import('./routes/findings'), 'FindingsRoute') },
+              { path: 'bring-up', lazy: page(() => import('./routes/bringup'), 'BringupRoute') },
               { path: 'readings', lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },
               { path: 'parts', lazy: page(() => import('./routes/parts'), 'PartsRoute') },
               { path: 'safety', lazy: page(() => import('./routes/safety'), 'SafetyRoute') },

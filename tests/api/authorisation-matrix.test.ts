@@ -102,6 +102,13 @@ const matrix: Row[] = [
   ['POST', '/api/restorations/:id/soak-sessions', [201, 403, 403, 404, 401]],
   // No soak session is running on the fixture, so the technician is told to start one.
   ['PATCH', '/api/restorations/:id/soak-sessions/running', [409, 403, 403, 404, 401], () => ({ mainsCurrent: '0.25' })],
+  ['GET', '/api/restorations/:id/bringup', [200, 200, 200, 404, 401]],
+  ['PUT', '/api/restorations/:id/bringup/intake', [200, 403, 403, 404, 401], () => ({ item: 'mains-lead', done: true })],
+  ['PUT', '/api/restorations/:id/bringup/pre-power', [200, 403, 403, 404, 401], () => ({ item: 'mains-tap', status: 'done' })],
+  // The fixture's pre-power checklist is empty, so the technician is told what is missing; mentors never sign off.
+  ['POST', '/api/restorations/:id/bringup/pre-power/sign-off', [409, 403, 403, 404, 401]],
+  // Not signed off either, so the technician's step meets the first-power gate.
+  ['POST', '/api/restorations/:id/bringup/steps', [409, 403, 403, 404, 401], () => ({ supply: 'variable-transformer', appliedVolts: 60, lampBehaviour: 'no-lamp', decision: 'go-on' })],
 ];
 
 let jpeg: Buffer;

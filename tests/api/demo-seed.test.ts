@@ -1,7 +1,8 @@
 import { count } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { findings, measurements, parts, photos, restorations, users, valves } from '../../server/db/schema';
+import { bringupSteps, findings, measurements, parts, photos, prePowerSignoffs, restorations, users, valves } from '../../server/db/schema';
 import { seedDemo } from '../../server/db/seed/seed-demo';
+import { seedDemoBringup } from '../../server/db/seed/seed-demo-bringup';
 import { chassisLandmarks } from '../../server/features/demo/chassis';
 import { seedDemoFindings } from '../../server/features/demo/seed-demo-findings';
 import { seedDemoPhotos } from '../../server/features/demo/seed-demo-photos';
@@ -19,18 +20,27 @@ const seedAll = async () => {
   await seedDemoPhotos(t.deps);
   await seedDemoFindings(t.db);
   await seedDemoWorkshop(t.db);
+  await seedDemoBringup(t.db);
 };
 const counts = async () =>
-  Promise.all([users, restorations, photos, findings, measurements, parts, valves].map(async (table) => (await t.db.select({ n: count() }).from(table))[0]!.n));
+  Promise.all([users, restorations, photos, findings, measurements, parts, valves, prePowerSignoffs, bringupSteps].map(async (table) => (await t.db.select({ n: count() }).from(table))[0]!.n));
 
 describe('demo seed', () => {
   it('when seeded twice, then the second run changes nothing', async () => {
     await seedAll();
     const first = await counts();
-    expect(first).toEqual([3, 3, 5, 3, expect.any(Number), 10, 17]);
+    expect(first).toEqual([3, 3, 5, 3, expect.any(Number), 10, 17, 2, 3]);
     await seedAll();
     expect(await counts()).toEqual(first);
   }, 120_000);
+
+  it('when seeded, then every demo set in Testing or later has a signed pre-power checklist (the first-power gate holds)', async () => {
+    const sets = await t.db.select().from(restorations);
+    const signed = new Set((await t.db.select().from(prePowerSignoffs)).map((s) => s.restorationId));
+    const powered = sets.filter((s) => s.stage === 'testing' || s.stage === 'returned');
+    expect(powered.length).toBeGreaterThan(0);
+    expect(powered.filter((s) => !signed.has(s.id))).toEqual([]);
+  });
 
   it('when the demo findings are pinned, then they sit on the drawn parts of the underside picture', async () => {
     const all = await t.db.select().from(findings);

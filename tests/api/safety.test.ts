@@ -63,9 +63,9 @@ describe('the Returned gate', () => {
     const o = await tech.post(`/api/restorations/${id}/safety-override`).send({ reason: 'Display piece: owner will not plug it in.' });
     expect(o.status).toBe(201);
     expect((await tech.patch(`/api/restorations/${id}`).send({ stage: 'returned' })).status).toBe(200);
-    const history = (await owner.get(`/api/restorations/${id}/events`)).body as { kind: string; summary: string; alert?: boolean }[];
-    expect(history.find((e) => e.kind === 'safety-override')).toMatchObject({ alert: true, summary: expect.stringContaining('Display piece') });
-    expect(history.find((e) => e.kind === 'safety-test')).toMatchObject({ alert: true, summary: expect.stringContaining('not passed') });
+    const history = (await owner.get(`/api/restorations/${id}/events`)).body as { kind: string; summary: string; caution: boolean }[];
+    expect(history.find((e) => e.kind === 'safety-override')).toMatchObject({ caution: true, summary: expect.stringContaining('Display piece') });
+    expect(history.find((e) => e.kind === 'safety-test')).toMatchObject({ caution: true, summary: expect.stringContaining('not passed') });
     const status = (await owner.get(`/api/restorations/${id}/safety-tests`)).body;
     expect(status.latest.verdict).toBe('fail'); // the owner sees the fail, never a pass that did not happen
     expect(status.override.reason).toMatch(/Display piece/);

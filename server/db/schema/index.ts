@@ -9,3 +9,4 @@ export * from './findings';
 export * from './measurements';
 export * from './parts';
 export * from './safety';
+export * from './bringup';

@@ -40,6 +40,8 @@ export const measurements = pgTable(
     verdict: verdictEnum().notNull(),
     verdictReason: text().notNull(),
     ownerVisible: boolean().notNull().default(false),
+    /** Taken with the set powered from the mains: allowed only after the pre-power checklist is signed off. */
+    powerOn: boolean().notNull().default(false),
     measuredById: integer().references(() => users.id, { onDelete: 'set null' }),
     measuredAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
     ...timestamps,

@@ -7,6 +7,7 @@ import type { Role } from '../../../shared/permissions';
 import type { TimelineEvent } from '../../../shared/schemas/parts';
 import type { AppDeps } from '../../app-deps';
 import { events, findings, measurements, parts, photos, users } from '../../db/schema';
+import { bringupEventWords, isBringupEvent } from '../bringup/bringup-events';
 import { photoKeys } from '../photos/photo-objects';
 import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 import { safetyEventLine } from '../safety/safety-events';
@@ -45,7 +46,8 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           const label = finding ? `#${finding.number}${finding.componentRef ? ` ${finding.componentRef}` : ''} ${finding.title}` : '';
           const data = e.data as { from?: string; to?: string; view?: string; phase?: string };
           const safety = safetyEventLine(e.kind, e.data);
-          const summary = safety ? safety.summary
+          const words = safety ? { summary: safety.summary, caution: safety.alert } : isBringupEvent(e.kind) ? bringupEventWords(e.kind, e.data) : null;
+          const summary = words ? words.summary
             : e.kind === 'photo-added' ? `Photo added: ${viewLabels[photo!.view]}, ${phaseLabels[photo!.phase].toLowerCase()}${photo!.caption ? ` — ${photo!.caption}` : ''}`
             : e.kind === 'finding-opened' ? `Finding opened: ${label}`
             : e.kind === 'finding-status' ? `${label}: ${statusLabels[data.from as Status] ?? data.from} → ${statusLabels[data.to as Status] ?? data.to}`
@@ -58,7 +60,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
             id: e.id, kind: e.kind, at: e.createdAt.toISOString(), actorName, summary,
             photoId: photo?.id ?? finding?.photoId ?? null, findingId: finding?.id ?? null,
             thumbUrl: photo ? await storage.getSignedUrl(photoKeys(photo.storageKey).thumb) : null,
-            ...(safety ? { alert: safety.alert } : {}),
+            caution: words?.caution ?? false,
           };
         }),
       );

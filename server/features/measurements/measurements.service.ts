@@ -5,6 +5,7 @@ import type { LineUp, Measurement, MeasurementInput, Valve } from '../../../shar
 import type { Database, Executor } from '../../db/client';
 import { findings, measurements, photos, restorations, users, valves } from '../../db/schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import { assertPrePowerSignedOff } from '../bringup/power-gate';
 import { recordEvent } from '../events/record-event';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
@@ -16,11 +17,11 @@ const toMeasurement = (m: Row): Measurement => ({
   expectedText: m.expectedText, toleranceText: m.toleranceText, ratingText: m.ratingText, readingText: m.readingText,
   conditions: m.conditions, method: m.method, expected: m.expected, reading: m.reading, rating: m.rating,
   reference: m.reference, deviation: m.deviation, verdict: m.verdict, verdictReason: m.verdictReason,
-  ownerVisible: m.ownerVisible, measuredBy: m.measuredBy, measuredAt: m.measuredAt.toISOString(),
+  ownerVisible: m.ownerVisible, powerOn: m.powerOn, measuredBy: m.measuredBy, measuredAt: m.measuredAt.toISOString(),
 });
 
 /** The bench library judges every reading; a value it cannot read is a 400 naming the field. */
-function judge(f: Fields) {
+export function judge(f: Fields) {
   try {
     const v = measurementVerdict({ quantity: f.quantity, expected: f.expected, tolerance: f.tolerance, rating: f.rating, reading: f.reading });
     return { expected: v.expected, reading: v.reading, rating: v.rating, reference: v.reference, deviation: v.deviation, verdict: v.verdict, verdictReason: v.reason };
@@ -44,6 +45,7 @@ export function measurementsService(db: Database) {
   const columns = (f: Fields) => ({
     location: f.location, quantity: f.quantity, expectedText: f.expected ?? '', toleranceText: f.tolerance ?? '', ratingText: f.rating ?? '',
     readingText: f.reading, conditions: f.conditions ?? '', method: f.method ?? '', findingId: f.findingId ?? null, ownerVisible: f.ownerVisible ?? false,
+    powerOn: f.powerOn ?? false,
   });
 
   return {
@@ -69,6 +71,7 @@ export function measurementsService(db: Database) {
       const verdict = judge(input);
       const id = await db.transaction(async (tx) => {
         await assertFinding(tx, restorationId, input.findingId);
+        if (input.powerOn) await assertPrePowerSignedOff(tx, restorationId, 'recording a reading taken with the set powered');
         const [row] = await tx.insert(measurements).values({ restorationId, ...columns(input), ...verdict, measuredById: userId }).returning({ id: measurements.id });
         if (verdict.verdict === 'out') await recordEvent(tx, { restorationId, kind: 'measurement-out', actorId: userId, measurementId: row!.id, findingId: input.findingId ?? null });
         return row!.id;
@@ -90,8 +93,11 @@ export function measurementsService(db: Database) {
         expected: patch.expected ?? current.expectedText, tolerance: patch.tolerance ?? current.toleranceText, rating: patch.rating ?? current.ratingText,
         conditions: patch.conditions ?? current.conditions, method: patch.method ?? current.method,
         findingId: patch.findingId === undefined ? current.findingId : patch.findingId, ownerVisible: patch.ownerVisible ?? current.ownerVisible,
+        powerOn: patch.powerOn ?? current.powerOn,
       };
       await assertFinding(tx, current.restorationId, merged.findingId);
+      if (merged.powerOn && !current.powerOn)
+        await assertPrePowerSignedOff(tx, current.restorationId, 'recording a reading taken with the set powered');
       const verdict = judge(merged);
       await tx.update(measurements).set({ ...columns(merged), ...verdict }).where(eq(measurements.id, id));
       if (verdict.verdict === 'out' && current.verdict !== 'out')

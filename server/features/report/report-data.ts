@@ -1,6 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { AppDeps } from '../../app-deps';
 import { findings, measurements, memberships, parts, photos, restorations, users } from '../../db/schema';
+import { bringupForReport } from '../bringup/bringup-report';
 import { ensureCloseup } from '../closeups/closeups';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 import { photoKeys } from '../photos/photo-objects';
@@ -61,6 +62,7 @@ export async function reportData(deps: Pick<AppDeps, 'db' | 'storage' | 'config'
     readings: readings.filter((m) => m.quantity !== 'insulation' && m.quantity !== 'leakage'),
     safetyChecks: readings.filter((m) => m.quantity === 'insulation' || m.quantity === 'leakage'),
     safety: await safetyReportData(db, restorationId),
+    bringup: await bringupForReport(db, restorationId),
   };
 }
 export type ReportData = NonNullable<Awaited<ReturnType<typeof reportData>>>;

@@ -4,6 +4,7 @@ import { quantityLabels } from '../../../shared/schemas/measurements';
 import { partActionLabels } from '../../../shared/schemas/parts';
 import { viewLabels } from '../../../shared/schemas/photos';
 import { equipmentKindLabels, workLevelLabels } from '../../../shared/schemas/restorations';
+import { writeBringupSection } from '../bringup/bringup-report';
 import type { ReportData } from './report-data';
 import { createWriter, type Writer } from './pdf-writer';
 import { writeBringUpSection, writeSafetyTestSection, writeSoakSection } from './report-safety-sections';
@@ -64,6 +65,7 @@ export async function renderReport(d: ReportData): Promise<{ pdf: Buffer; pageCo
     w.text(`${p.componentRef}: ${[p.originalPart, p.originalRating].filter(Boolean).join(' ') || 'original'} → ${[p.replacementPart, p.replacementRating].filter(Boolean).join(' ')} (${partActionLabels[p.action].toLowerCase()})${p.testedAfter ? `; tested after: ${p.testedAfter}` : ''}`, { size: 10, gap: 0.15 });
   w.heading('Original parts kept');
   w.text(d.kept.length ? d.kept.map((p) => `${p.componentRef} ${p.originalPart} ${p.originalRating}`.trim()).join('; ') : 'None recorded separately.');
+  writeBringupSection(w, d.bringup);
   w.heading('Key measurements');
   if (!d.readings.length) w.text('No readings have been shared in this report.');
   for (const m of d.readings) w.text(reading(m), { size: 10, gap: 0.15 });

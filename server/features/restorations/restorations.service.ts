@@ -4,8 +4,8 @@ import type { Restoration, restorationInputSchema, restorationPatchSchema } from
 import type { Database } from '../../db/client';
 import { ConflictError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
-import { assertReturnedGate } from '../safety/returned-gate';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
+import { stageGates } from './stage-gates';
 
 type CreateInput = z.output<typeof restorationInputSchema>;
 type PatchInput = z.output<typeof restorationPatchSchema>;
@@ -32,12 +32,12 @@ export function restorationsService(db: Database) {
     },
     async update(id: number, patch: PatchInput, role: Role, actorId: number) {
       // The restoration row is locked first, so the recorded "from" stage is the one this change replaced,
-      // and a stage gate judges the state this change commits on.
+      // and the stage gates judge the state this change commits on.
       const row = await db.transaction(async (tx) => {
         const inTx = restorationsRepo(tx);
         const before = await inTx.find(id, { lock: true });
         if (!before) throw new NotFoundError();
-        if (patch.stage === 'returned' && before.stage !== 'returned') await assertReturnedGate(tx, id);
+        if (patch.stage) await stageGates(tx, id, before.stage, patch.stage);
         const updated = (await inTx.update(id, patch))!;
         if (patch.stage && patch.stage !== before.stage)
           await recordEvent(tx, { restorationId: id, kind: 'stage-changed', actorId, data: { from: before.stage, to: patch.stage } });

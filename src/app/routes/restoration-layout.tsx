@@ -12,6 +12,7 @@ const tabs = [
   ['.', 'Overview'],
   ['photos', 'Photos'],
   ['findings', 'Findings'],
+  ['bring-up', 'Bring-up'],
   ['readings', 'Readings'],
   ['parts', 'Parts'],
   ['safety', 'Safety'],

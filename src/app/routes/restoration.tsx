@@ -1,7 +1,9 @@
 import { useState } from 'react';
+import { Link } from 'react-router';
 import { can } from '../../../shared/permissions';
 import { equipmentKindLabels, workLevelLabels } from '../../../shared/schemas/restorations';
 import { Button } from '../../components/button';
+import { ApiError } from '../../lib/api-client';
 import { ReportPanel } from '../../features/report/components/report-panel';
 import { useUpdateRestoration } from '../../features/restorations/api/update-restoration';
 import { RestorationForm } from '../../features/restorations/components/restoration-form';
@@ -63,6 +65,17 @@ export function RestorationRoute() {
             <Button variant="quiet" onClick={() => setEditing(true)}>
               Edit details
             </Button>
+          )}
+          {update.error && !editing && (
+            <p role="alert" className="text-danger">
+              {update.error.message}
+              {update.error instanceof ApiError && update.error.status === 409 && (
+                <>
+                  {' '}
+                  <Link to="bring-up" className="font-semibold underline">Open the Bring-up tab</Link>
+                </>
+              )}
+            </p>
           )}
         </>
       )}

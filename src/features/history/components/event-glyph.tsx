@@ -72,10 +72,35 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="m3 5.5 7 5.5 7-5.5" />
     </>
   ),
+  // A clipboard with a tick: an item looked at on the bench.
+  'intake-checked': (
+    <>
+      <path d="M5 4h10v14H5Z" />
+      <path d="m7.5 11 2 2 3.5-4" />
+    </>
+  ),
+  // A clipboard with a line: a pre-power item set.
+  'pre-power-set': (
+    <>
+      <path d="M5 4h10v14H5Z" />
+      <path d="M7.5 9h5M7.5 12.5h5" />
+    </>
+  ),
+  // A pen's stroke under a line: the checklist signed off.
+  'pre-power-signed': <path d="M3 15c2-3 3-3 4 0s2 3 4-1 3-3 6-1M3 18h14" />,
+  // A struck-through line: the sign-off withdrawn.
+  'pre-power-voided': <path d="M3 15c2-3 3-3 4 0s2 3 4-1 3-3 6-1M4 5l12 12" />,
+  // A lamp bulb: one step of the first power-up.
+  'bringup-step': (
+    <>
+      <path d="M7 13.5a5 5 0 1 1 6 0V15H7Z" />
+      <path d="M7.5 17.5h5" />
+    </>
+  ),
 };
 
-export function EventGlyph({ kind, alert = false, className = '' }: { kind: Kind; alert?: boolean; className?: string }) {
-  const attention = alert || kind === 'measurement-out';
+export function EventGlyph({ kind, caution = false, className = '' }: { kind: Kind; caution?: boolean; className?: string }) {
+  const attention = kind === 'measurement-out' || caution;
   return (
     <span
       aria-hidden="true"

@@ -20,10 +20,17 @@ export function TimelineItem({ event, restorationId }: { event: TimelineEvent; r
   const aboutFinding = findingKinds.has(kind) && findingId !== null;
   return (
     <li className="flex gap-3 py-3" data-event-id={event.id}>
-      <EventGlyph kind={kind} alert={event.alert} />
+      <EventGlyph kind={kind} caution={event.caution} />
       <div className="min-w-0 flex-1 space-y-2">
         <div>
-          <p className={`break-words ${event.alert ? 'font-semibold text-danger' : ''}`}>{event.summary}</p>
+          {event.caution ? (
+            <p className="break-words font-semibold text-danger">
+              <span className="sr-only">Safety departure: </span>
+              {event.summary}
+            </p>
+          ) : (
+            <p className="break-words">{event.summary}</p>
+          )}
           <p className="text-sm text-ink-soft">
             <time dateTime={event.at}>{timeOfDay(event.at)}</time>
             {event.actorName && <> · {event.actorName}</>}

@@ -16,6 +16,11 @@ export const eventKindLabels: Record<Kind, string> = {
   'safety-override': 'Safety overrides',
   'soak-session': 'Soak runs',
   'report-sent': 'Reports sent',
+  'intake-checked': 'Intake checks',
+  'pre-power-set': 'Pre-power checks',
+  'pre-power-signed': 'Pre-power sign-offs',
+  'pre-power-voided': 'Sign-offs withdrawn',
+  'bringup-step': 'Power-up steps',
 };
 
 export const eventKinds = timelineKinds;

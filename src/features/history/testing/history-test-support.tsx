@@ -10,7 +10,7 @@ import { notFound, toResponse } from '../../../testing/fake-api';
 export function makeEvent(id: number, overrides: Partial<TimelineEvent> = {}): TimelineEvent {
   return {
     id, kind: 'stage-changed', at: '2026-11-24T12:00:00.000Z', actorName: 'Tessa Bench', summary: `Event ${id}`,
-    photoId: null, findingId: null, thumbUrl: null, ...overrides,
+    photoId: null, findingId: null, thumbUrl: null, caution: false, ...overrides,
   };
 }
 

@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import { measuredQuantities } from '../../../../shared/bench';
 import { quantityLabels, type Measurement } from '../../../../shared/schemas/measurements';
 import { buttonClass } from '../../../components/button';
@@ -30,6 +31,7 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
 }) {
   const { form, fields, preview, errorOf, onSubmit, saving, saved, serverMessage } = useReadingForm({ restorationId, measurement, findingId, onDone });
   const { register } = form;
+  const powerHintId = useId();
   const editing = measurement !== undefined;
   return (
     <form noValidate onSubmit={onSubmit} aria-label={editing ? `Change the reading at ${measurement.location}` : 'Record a reading'}
@@ -89,6 +91,13 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
           <input type="checkbox" {...register('ownerVisible')} className="h-5 w-5 accent-glow" />
           Share with the owner
         </label>
+        <label className="flex min-h-11 items-center gap-2 self-end">
+          <input type="checkbox" {...register('powerOn')} className="h-5 w-5 accent-glow" aria-describedby={powerHintId} />
+          Taken with the set powered from the mains
+        </label>
+        <p id={powerHintId} className="text-sm text-ink-soft sm:col-span-full">
+          Powered readings are recorded only after the pre-power checklist is signed off (Bring-up tab).
+        </p>
       </div>
       {fields.live && <LiveReadingsNote />}
       {serverMessage && (

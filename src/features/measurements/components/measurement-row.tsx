@@ -38,9 +38,10 @@ export function MeasurementRow({ restorationId, m, canRecord, onEdit }: {
         </details>
       </td>
       <td className={`${cell} text-sm`}>
+        {m.powerOn && <p className="font-semibold">Set powered</p>}
         {m.conditions && <p>{m.conditions}</p>}
         {m.method && <p className="text-ink-soft">{m.method}</p>}
-        {!m.conditions && !m.method && <span className="text-ink-soft">—</span>}
+        {!m.conditions && !m.method && !m.powerOn && <span className="text-ink-soft">—</span>}
       </td>
       <td className={`${cell} text-sm whitespace-nowrap`}>
         <p>{m.measuredBy ?? 'Former member'}</p>

@@ -16,13 +16,13 @@ type Output = z.output<typeof formSchema>;
 
 const blank: ReadingFormValues = {
   location: '', quantity: 'esr', expected: '', tolerance: '', rating: '', reading: '',
-  conditions: '', method: '', findingId: '', ownerVisible: false,
+  conditions: '', method: '', findingId: '', ownerVisible: false, powerOn: false,
 };
 
 const valuesOf = (m: Measurement): ReadingFormValues => ({
   location: m.location, quantity: m.quantity, expected: m.expectedText, tolerance: m.toleranceText, rating: m.ratingText,
   reading: m.readingText, conditions: m.conditions, method: m.method, findingId: m.findingId === null ? '' : String(m.findingId),
-  ownerVisible: m.ownerVisible,
+  ownerVisible: m.ownerVisible, powerOn: m.powerOn,
 });
 
 /**

@@ -16,7 +16,7 @@ describe('chart entry rows', () => {
   it('turns a row into the API’s input with what the chart shares', () => {
     expect(rowInput(row, shared)).toEqual({
       location: 'V5 pin 7', quantity: 'dc-voltage', expected: '250 V', tolerance: '10', rating: '', reading: '262 V',
-      conditions: '230 V mains', method: '20 kΩ/V', ownerVisible: true,
+      conditions: '230 V mains', method: '20 kΩ/V', ownerVisible: true, powerOn: true,
     });
   });
 

@@ -45,4 +45,6 @@ export const rowInput = (row: EntryRow, shared: EntryShared): MeasurementInput =
   conditions: shared.conditions.trim(),
   method: shared.method.trim(),
   ownerVisible: shared.ownerVisible,
+  // A voltage chart is read on a powered set: it goes through the first-power gate.
+  powerOn: true,
 });

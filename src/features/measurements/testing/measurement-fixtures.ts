@@ -8,7 +8,7 @@ export function makeMeasurement(id: number, input: MeasurementInput & { findingI
     id, restorationId: 7, findingId: input.findingId ?? null, location: input.location, quantity: input.quantity,
     expectedText: input.expected ?? '', toleranceText: input.tolerance ?? '', ratingText: input.rating ?? '', readingText: input.reading,
     conditions: input.conditions ?? '', method: input.method ?? '', expected: v.expected, reading: v.reading, rating: v.rating,
-    reference: v.reference, deviation: v.deviation, verdict: v.verdict, verdictReason: v.reason, ownerVisible: input.ownerVisible ?? false,
+    reference: v.reference, deviation: v.deviation, verdict: v.verdict, verdictReason: v.reason, ownerVisible: input.ownerVisible ?? false, powerOn: input.powerOn ?? false,
     measuredBy: 'Ada Bench', measuredAt: new Date(Date.UTC(2026, 2, 1, 10, id)).toISOString(), ...extra,
   };
 }

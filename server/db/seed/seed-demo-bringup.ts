@@ -1,0 +1,58 @@
+import { and, eq, inArray } from 'drizzle-orm';
+import { prePowerItems, type PrePowerCheck } from '../../../shared/schemas/bringup';
+import { bringupService } from '../../features/bringup/bringup.service';
+import type { Database } from '../client';
+import { findings, intakeChecks, prePowerChecks, restorations, users } from '../schema';
+import { demoPeople, demoRestorations } from './demo-scenario';
+
+type Set = typeof restorations.$inferSelect;
+
+/**
+ * The demo's bring-up records, through the same service the API uses (so the history has them too). Every demo
+ * set in Testing or later gets a signed pre-power checklist; the Meridian 54 gets its intake checks and the
+ * staged power-up that found its bulging filter capacitor. Runs once per set.
+ */
+export async function seedDemoBringup(db: Database): Promise<void> {
+  const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
+  if (!tech) return;
+  const service = bringupService(db);
+  const sets = await db.select().from(restorations).where(inArray(restorations.serial, demoRestorations.map((r) => r.serial)));
+  for (const set of sets) {
+    const [touched] = await db.select({ id: prePowerChecks.id }).from(prePowerChecks).where(eq(prePowerChecks.restorationId, set.id)).limit(1);
+    const [checked] = await db.select({ id: intakeChecks.id }).from(intakeChecks).where(eq(intakeChecks.restorationId, set.id)).limit(1);
+    if (touched || checked) continue;
+    const isMeridian = set.serial === 'OV-54-20417';
+    if (isMeridian) await meridian(db, service, set, tech.id);
+    else if (set.stage === 'testing' || set.stage === 'returned') await signChecklist(service, set, tech.id);
+  }
+}
+
+/** Every item done, except the isolation transformer on a set with a mains transformer (not applicable). */
+async function signChecklist(service: ReturnType<typeof bringupService>, set: Set, userId: number) {
+  for (const item of prePowerItems) {
+    const input: PrePowerCheck =
+      item === 'isolation-transformer' && !set.liveChassis
+        ? { item, status: 'not-applicable', reason: 'Mains transformer; the chassis is not connected to the mains' }
+        : { item, status: 'done', reason: '' };
+    await service.setPrePower(set.id, input, userId, 'technician');
+  }
+  await service.signOff(set.id, userId, 'technician');
+}
+
+async function meridian(db: Database, service: ReturnType<typeof bringupService>, set: Set, userId: number) {
+  const ref = async (componentRef: string) =>
+    (await db.select({ id: findings.id }).from(findings).where(and(eq(findings.restorationId, set.id), eq(findings.componentRef, componentRef))))[0]?.id ?? null;
+  const intake = async (item: Parameters<typeof service.setIntake>[1]['item'], note: string, findingId: number | null = null) =>
+    service.setIntake(set.id, { item, done: true, note, findingId, photoId: null }, userId, 'technician');
+  await intake('valve-line-up', 'Seven valves, all in their marked sockets.');
+  await intake('mains-lead', 'Rubber perished at the plug end: replaced.');
+  await intake('rubber-wiring', 'HT lead to the output transformer cracked.');
+  await intake('mains-tap', 'Found on the 220 V tap; household mains is 240 V.');
+  await intake('missing-parts', 'R23 charred, C30 bulging.', await ref('R23'));
+  await signChecklist(service, set, userId);
+  const lamp = { supply: 'series-lamp' as const, lampWatts: 60, lampVolts: 240, appliedVolts: 240, readings: [] };
+  const c30 = await ref('C30');
+  await service.addStep(set.id, { ...lamp, lampBehaviour: 'bright-staying', decision: 'stop', notes: 'Lamp stayed bright; C30 warm to the touch. Switched off.', findingId: c30 }, userId, 'technician');
+  await service.addStep(set.id, { ...lamp, lampBehaviour: 'flash-then-dim', decision: 'go-on', notes: 'After restuffing C30: brief flash, then dim; heaters glowing, no smell.', findingId: c30 }, userId, 'technician');
+  await service.addStep(set.id, { supply: 'variable-transformer', lampWatts: null, lampVolts: null, appliedVolts: 240, lampBehaviour: 'no-lamp', decision: 'go-on', notes: 'Raised slowly to 240 V; hum gone.', findingId: null, readings: [] }, userId, 'technician');
+}
