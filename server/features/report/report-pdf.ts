@@ -7,7 +7,7 @@ import { equipmentKindLabels, workLevelLabels } from '../../../shared/schemas/re
 import { writeBringupSection } from '../bringup/bringup-report';
 import type { ReportData } from './report-data';
 import { createWriter, type Writer } from './pdf-writer';
-import { writeBringUpSection, writeSafetyTestSection, writeSoakSection } from './report-safety-sections';
+import { writeSafetyTestSection, writeSoakSection } from './report-safety-sections';
 
 export const SAFETY_TEXT = [
   'Valve equipment works at lethal voltages: the HT supply is typically 200–300 V DC, and filter capacitors can stay charged after the set is switched off.',
@@ -65,11 +65,10 @@ export async function renderReport(d: ReportData): Promise<{ pdf: Buffer; pageCo
     w.text(`${p.componentRef}: ${[p.originalPart, p.originalRating].filter(Boolean).join(' ') || 'original'} → ${[p.replacementPart, p.replacementRating].filter(Boolean).join(' ')} (${partActionLabels[p.action].toLowerCase()})${p.testedAfter ? `; tested after: ${p.testedAfter}` : ''}`, { size: 10, gap: 0.15 });
   w.heading('Original parts kept');
   w.text(d.kept.length ? d.kept.map((p) => `${p.componentRef} ${p.originalPart} ${p.originalRating}`.trim()).join('; ') : 'None recorded separately.');
-  writeBringupSection(w, d.bringup);
   w.heading('Key measurements');
   if (!d.readings.length) w.text('No readings have been shared in this report.');
   for (const m of d.readings) w.text(reading(m), { size: 10, gap: 0.15 });
-  writeBringUpSection(w, d);
+  writeBringupSection(w, d.bringup);
   writeSafetyTestSection(w, d);
   writeSoakSection(w, d);
   w.heading('Final safety checks');

@@ -9,12 +9,6 @@ const SOFT = '#5d5247';
 const verdictWords: Record<SafetyLineView['verdict'], string> = { pass: 'PASS', fail: 'FAIL', 'not-applicable': 'not applicable', 'not-measured': 'not measured' };
 const when = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
-/**
- * Where the pre-power sign-off and the staged bring-up summary go, between the measurements and the final safety
- * test. The bring-up records are kept by their own feature; its report data and lines are added here.
- */
-export function writeBringUpSection(_w: Writer, _d: ReportData): void {}
-
 // The report's fonts have no ≤ or ≥, and words read better to an owner anyway.
 const limitWords = (text: string) => text.replace(/^≤ /, 'at most ').replace(/^≥ /, 'at least ');
 
