@@ -27,7 +27,9 @@ export function restorationsService(db: Database) {
       return toRestoration(row, role);
     },
     async create(input: CreateInput, userId: number) {
+      // The stage gates would otherwise be skipped by a set created past them.
       if (input.stage === 'returned') throw new ConflictError('A new restoration cannot start at Returned: create it at an earlier stage and record its final safety test.');
+      if (input.stage === 'testing') throw new ConflictError('A new restoration cannot start at Testing: create it at an earlier stage and sign off its pre-power checklist on the Bring-up tab first.');
       return toRestoration(await repo.insertWithTechnician(input, userId), 'technician');
     },
     async update(id: number, patch: PatchInput, role: Role, actorId: number) {
