@@ -29,7 +29,10 @@ describe('the last technician, under concurrency', () => {
         agentA.patch(`/api/restorations/${set.id}/members/${b.id}`).send({ role: 'mentor' }),
         round % 2 ? agentB.delete(`/api/restorations/${set.id}/members/${a.id}`) : agentB.patch(`/api/restorations/${set.id}/members/${a.id}`).send({ role: 'mentor' }),
       ]);
-      expect(results.filter((r) => r.status === 409)).toHaveLength(1);
+      // The loser is refused either by the rule (409) or, when the winner committed before its guard ran, because it
+      // is no longer a technician allowed to manage people (403).
+      expect(results.filter((r) => r.status < 300)).toHaveLength(1);
+      expect([403, 409]).toContain(results.find((r) => r.status >= 300)!.status);
       expect(await technicians(set.id)).toBe(1);
     }
   });
