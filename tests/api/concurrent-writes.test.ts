@@ -1,7 +1,7 @@
 import { and, count, eq } from 'drizzle-orm';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { comments, memberships, notifications } from '../../server/db/schema';
+import { comments, events, memberships, notifications } from '../../server/db/schema';
 import type { Mailer, OutgoingMail } from '../../server/mail';
 import { flushNotificationMail } from '../../server/features/notifications/mail-batch';
 import { createPhotoRow } from '../factories/photos';
@@ -35,6 +35,22 @@ describe('the last technician, under concurrency', () => {
       expect([403, 409]).toContain(results.find((r) => r.status >= 300)!.status);
       expect(await technicians(set.id)).toBe(1);
     }
+  });
+});
+
+describe('a finding changed twice at once', () => {
+  it('when two requests ask the mentors together, then the question is recorded once and each mentor notified once', async () => {
+    const [tech, mentor] = await Promise.all([createUser(t.db), createUser(t.db)]);
+    const set = await createRestoration(t.db, [{ userId: tech.id, role: 'technician' }, { userId: mentor.id, role: 'mentor' }]);
+    const photoId = await createPhotoRow(t.db, set.id);
+    const [a, b] = await Promise.all([signedIn(t.app, tech), signedIn(t.app, tech)]);
+    const f = (await a.post(`/api/photos/${photoId}/findings`).send({ shape: 'pin', points: [{ x: 0.6, y: 0.3 }], title: 'HT sags under load' })).body;
+    const results = await Promise.all([a.patch(`/api/findings/${f.id}`).send({ questionOpen: true }), b.patch(`/api/findings/${f.id}`).send({ questionOpen: true })]);
+    expect(results.map((r) => r.status)).toEqual([200, 200]);
+    const asked = await t.db.select({ n: count() }).from(events).where(and(eq(events.findingId, f.id), eq(events.kind, 'question-asked')));
+    expect(asked[0]!.n).toBe(1);
+    const notes = await t.db.select({ n: count() }).from(notifications).where(and(eq(notifications.findingId, f.id), eq(notifications.userId, mentor.id)));
+    expect(notes[0]!.n).toBe(1);
   });
 });
 

@@ -21,8 +21,10 @@ export function findingsRepo(db: Executor) {
     async listByRestoration(restorationId: number) {
       return (await select().where(eq(findings.restorationId, restorationId)).orderBy(asc(findings.number))).map(flat);
     },
-    async find(id: number) {
-      const [row] = await select().where(eq(findings.id, id));
+    /** `lock` takes the finding's row FOR UPDATE (inside a transaction) until the change commits. */
+    async find(id: number, options: { lock?: boolean } = {}) {
+      const query = select().where(eq(findings.id, id));
+      const [row] = options.lock ? await query.for('update', { of: findings }) : await query;
       return row && flat(row);
     },
     async restorationOf(id: number) {
