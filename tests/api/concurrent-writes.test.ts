@@ -131,8 +131,9 @@ describe('a comment posted twice by a retry', () => {
     expect(await stored(findingId)).toBe(before + 1);
   });
 
-  it('when a key is reused for another finding, then 409; without a key, each post is stored', async () => {
+  it('when a key is reused for another finding or other words, then 409; without a key, each post is stored', async () => {
     expect((await post(otherFindingId, 'c0ffee00-0000-4000-8000-000000000001')).status).toBe(409);
+    expect((await post(findingId, 'c0ffee00-0000-4000-8000-000000000001', 'Different words under the same key')).status).toBe(409);
     expect(await stored(otherFindingId)).toBe(0);
     await post(otherFindingId, undefined);
     await post(otherFindingId, undefined);
