@@ -16,7 +16,9 @@ export interface Mailer {
 
 /** E-mail through nodemailer to SMTP_URL (the local capture in development and tests). */
 export function createMailer(smtpUrl: string, from: string): Mailer {
-  const transport = nodemailer.createTransport(smtpUrl);
+  // Bounded waits: invitation and sign-up mail is sent inside the action's transaction (sendOrRollBack below),
+  // so a silent mail server must not hold it open for nodemailer's default two minutes.
+  const transport = nodemailer.createTransport({ url: smtpUrl, connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 30_000 });
   return {
     async send(mail) {
       await transport.sendMail({ from, ...mail });

@@ -18,8 +18,8 @@ const toComment = (c: CommentRow): Comment => ({
 });
 
 /** The comment stored under a reused idempotency key must be the one this request would have written. */
-function sameRequest(stored: CommentRow | undefined | '', findingId: number): CommentRow {
-  if (!stored || stored.findingId !== findingId || stored.deletedAt)
+function sameRequest(stored: CommentRow | undefined | '', findingId: number, body: string): CommentRow {
+  if (!stored || stored.findingId !== findingId || stored.body !== body || stored.deletedAt)
     throw new ConflictError('This Idempotency-Key was already used for another comment; send a new key for a new comment.');
   return stored;
 }
@@ -61,7 +61,7 @@ export function commentsService(deps: AppDeps) {
         const participants = await inTx.participants(findingId);
         const id = await inTx.insert({ findingId, authorId: actor.id, body: input.body, internal, mentions, idempotencyKey: key ?? null });
         // A retry of a post already stored: answer as the first time, notify nobody again.
-        if (id === undefined) return sameRequest(key && (await inTx.findByKey(actor.id, key)), findingId);
+        if (id === undefined) return sameRequest(key && (await inTx.findByKey(actor.id, key)), findingId, input.body);
         const row = (await inTx.find(id))!;
         await notifications.commentWritten(tx, f, row, actor, mentions, participants);
         afterCommit(notifications.kick);

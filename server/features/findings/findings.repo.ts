@@ -29,9 +29,13 @@ export function findingsRepo(db: Executor) {
     async listByRestoration(restorationId: number, role: Role) {
       return (await select(role).where(and(eq(findings.restorationId, restorationId), visibleSql(role, 'finding', findingSources))).orderBy(asc(findings.number))).map(flat);
     },
-    /** One finding, with the comment count as this role reads it; whether they may see it is the caller's check. */
-    async find(id: number, role: Role) {
-      const [row] = await select(role).where(eq(findings.id, id));
+    /**
+     * One finding, with the comment count as this role reads it; whether they may see it is the caller's check.
+     * `lock` takes the finding's row FOR UPDATE (inside a transaction) until the change commits.
+     */
+    async find(id: number, role: Role, options: { lock?: boolean } = {}) {
+      const query = select(role).where(eq(findings.id, id));
+      const [row] = options.lock ? await query.for('update', { of: findings }) : await query;
       return row && flat(row);
     },
     async restorationOf(id: number) {

@@ -85,27 +85,32 @@ export function findingsService(deps: AppDeps) {
       if (ownerVisible !== undefined) next.ownerVisible = ownerVisible;
       if (questionOpen !== undefined) Object.assign(next, { questionOpen, questionAskedAt: questionOpen ? new Date() : null });
       if (rest.status && rest.status !== 'dismissed') next.dismissReason = null;
-      const changes = Object.fromEntries(
-        Object.entries(next)
-          .filter(([k, v]) => k !== 'questionAskedAt' && JSON.stringify((f as Record<string, unknown>)[k]) !== JSON.stringify(v))
-          .map(([k, v]) => [k, [(f as Record<string, unknown>)[k] ?? null, v] as [unknown, unknown]]),
-      );
-      if (!Object.keys(changes).length) return toFinding(f);
-      // The change, its history line, its events and the mentors' notifications commit together.
+      // The change, its history line, its events and the mentors' notifications commit together. The row is locked
+      // and read again inside, so the recorded "before" values and "just asked" are those this change replaced.
       const updated = await unitOfWork(deps.db, async (tx, afterCommit) => {
         const inTx = findingsRepo(tx);
+        const current = await inTx.find(id, actor.role, { lock: true });
+        if (!current) throw new NotFoundError();
+        const before = current as Record<string, unknown>;
+        const changes = Object.fromEntries(
+          Object.entries(next)
+            .filter(([k, v]) => k !== 'questionAskedAt' && JSON.stringify(before[k]) !== JSON.stringify(v))
+            .map(([k, v]) => [k, [before[k] ?? null, v] as [unknown, unknown]]),
+        );
+        if (!Object.keys(changes).length) return current;
         await inTx.update(id, next, actor.id, changes);
         const row = (await inTx.find(id, actor.role))!;
         const event = { restorationId: f.restorationId, actorId: actor.id, findingId: id, photoId: f.photoId };
-        if (changes.status) await recordEvent(tx, { ...event, kind: 'finding-status', data: { from: f.status, to: row.status } });
+        if (changes.status) await recordEvent(tx, { ...event, kind: 'finding-status', data: { from: current.status, to: row.status } });
         if (changes.questionOpen) await recordEvent(tx, { ...event, kind: questionOpen ? 'question-asked' : 'question-resolved' });
-        if (questionOpen === true && !f.questionOpen) {
+        if (questionOpen === true && !current.questionOpen) {
           await notifications.questionAsked(tx, row, actor);
           afterCommit(notifications.kick);
         }
         return row;
       });
-      if (changes.shape || changes.points) scheduleCloseup(deps, (await photos.find(f.photoId))!, updated);
+      // A moved mark gets its close-up cut again (an unchanged one finds it already stored).
+      if (next.shape !== undefined || next.points !== undefined) scheduleCloseup(deps, (await photos.find(f.photoId))!, updated);
       return toFinding(updated);
     },
     async remove(id: number, actor: Actor) {
