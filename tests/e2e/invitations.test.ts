@@ -13,7 +13,8 @@ describe('inviting people to a restoration', () => {
   it('when the technician invites a mentor and an owner, then each joins from the e-mail link; a third account gets "not found"', async () => {
     const tech = await newPage(ctx.browser);
     await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
-    await tech.getByRole('link', { name: /Kestrel Wireless Co\. Wren/ }).click();
+    // The set's card on the bench (its serial), not its lines under Recent activity.
+    await tech.getByRole('link', { name: /KW-3381/ }).click();
     await tech.getByRole('link', { name: 'People' }).click();
     const restorationUrl = tech.url().replace(/\/people$/, '');
 

@@ -20,7 +20,8 @@ describe('voltage chart', () => {
   it('when five points are entered and one is out of tolerance, then the table and the plot flag exactly that one', async () => {
     const page = await newPage(ctx.browser, { width: 1280, height: 1000 });
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
-    await page.getByRole('link', { name: /Halverson Tonecraft 12/ }).click();
+    // The set's card on the bench (its serial), not its lines under Recent activity.
+    await page.getByRole('link', { name: /HT12-0988/ }).click();
     await page.getByRole('link', { name: 'Readings' }).click();
     await page.getByRole('button', { name: 'Enter a voltage chart' }).waitFor();
     await expectAccessible(page, 'the readings tab');

@@ -21,11 +21,11 @@ const RESISTOR_REFITS: Readonly<Record<string, Refit<ResistorSpec>>> = {
   R28: { fresh: true, body: '#a9c4d6' },
 };
 
-/** Wax tubulars swapped for film at no lower a voltage; the rest are restuffed and resealed. */
+/** Wax tubulars swapped for film at no lower a voltage, the one from the mains to chassis for a Y2 safety part; the rest are restuffed and resealed. */
 const FILM_REFITS: Readonly<Record<string, Omit<FilmCapSpec, 'a' | 'b' | 'lift'>>> = {
   C27: { print: ['22nJ', '630V'], len: 100, dia: 26, colour: '#d94a2a' },
   C14: { print: ['47nJ', '630V'] },
-  C12: { print: ['10nJ', '1000V'], len: 100, dia: 28, colour: '#e9c21a' },
+  C12: { print: ['10n Y2', '300V~'], len: 100, dia: 28, colour: '#79a9dc' },
 };
 
 /** The electrolytics tested sound and stay as they are. */
