@@ -17,7 +17,7 @@ let restorationId: number, sharedPhoto: number, privatePhoto: number;
 
 beforeAll(async () => {
   t = await startTestApp({ notificationWindowSeconds: 3600 });
-  people = { tech: await createUser(t.db, { name: 'Teodor Brask' }), owner: await createUser(t.db, { name: 'Philippa Home' }) };
+  people = { tech: await createUser(t.db, { name: 'Teodor Brask' }), owner: await createUser(t.db, { name: 'Orla Home' }) };
   restorationId = (await createRestoration(t.db, [{ userId: people.tech.id, role: 'technician' }, { userId: people.owner.id, role: 'owner' }])).id;
   sharedPhoto = await createPhotoRow(t.db, restorationId, true);
   privatePhoto = await createPhotoRow(t.db, restorationId, false);
@@ -33,7 +33,7 @@ const ownerNotes = async () => JSON.stringify((await owner.get('/api/notificatio
 describe('notifications reach an owner only about what they may see, judged when read and when sent', () => {
   it('when a shared comment mentions the owner on an internal finding, then neither the list nor the e-mail carries it', async () => {
     const f = (await tech.post(`/api/photos/${sharedPhoto}/findings`).send(pin('INTERNAL-FINDING-TITLE'))).body;
-    expect((await tech.post(`/api/findings/${f.id}/comments`).send({ body: 'SHARED-ON-INTERNAL @Philippa', internal: false })).status).toBe(201);
+    expect((await tech.post(`/api/findings/${f.id}/comments`).send({ body: 'SHARED-ON-INTERNAL @Orla', internal: false })).status).toBe(201);
     await flushNotificationMail(t.deps, new Date(Date.now() + 7200_000));
     expect(await ownerNotes()).not.toMatch(/SHARED-ON-INTERNAL|INTERNAL-FINDING-TITLE/);
     expect(await ownerMail()).not.toMatch(/SHARED-ON-INTERNAL|INTERNAL-FINDING-TITLE/);

@@ -59,16 +59,16 @@ describe('the final safety test, the soak and the hand-back', () => {
     await page.goto(`${ctx.product.origin}/restorations/${id}`);
     await page.getByRole('button', { name: 'E-mail it to the owner' }).click();
     const preview = page.getByTestId('report-preview');
-    await preview.getByText('Philippa Quayle <philippa@example.test>').waitFor();
+    await preview.getByText('Imogen Tarrant <imogen@example.test>').waitFor();
     await preview.getByText(/The set is still at/).waitFor(); // the demo set is before Testing
     expect(await preview.getByText('No final safety test is recorded').count()).toBe(0);
     await page.screenshot({ path: artifactPath('report-preview.png'), fullPage: true });
     await page.getByRole('button', { name: 'Send anyway' }).click();
-    await page.getByText('Sent to philippa@example.test.').waitFor();
-    await mailTo(ctx.product.origin, 'philippa@example.test', /Meridian 54: the hand-back report/);
+    await page.getByText('Sent to imogen@example.test.').waitFor();
+    await mailTo(ctx.product.origin, 'imogen@example.test', /Meridian 54: the hand-back report/);
 
     const owner = await newPage(ctx.browser);
-    await signInAs(owner, ctx.product.origin, 'philippa@example.test');
+    await signInAs(owner, ctx.product.origin, 'imogen@example.test');
     const res = await owner.request.get(`${ctx.product.origin}/api/restorations/${id}/report.pdf`);
     expect(res.status()).toBe(200);
     const text = (await pdfText(await res.body())).replace(/\s+/g, ' ');

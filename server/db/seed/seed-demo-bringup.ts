@@ -10,7 +10,7 @@ type Set = typeof restorations.$inferSelect;
 /**
  * The demo's bring-up records, through the same service the API uses (so the history has them too). Every demo
  * set in Testing or later gets a signed pre-power checklist; the Meridian 54 gets its intake checks and the
- * staged power-up that found its bulging filter capacitor. Runs once per set.
+ * staged power-up that showed its output valve glowing red. Runs once per set.
  */
 export async function seedDemoBringup(db: Database): Promise<void> {
   const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
@@ -44,15 +44,15 @@ async function meridian(db: Database, service: ReturnType<typeof bringupService>
     (await db.select({ id: findings.id }).from(findings).where(and(eq(findings.restorationId, set.id), eq(findings.componentRef, componentRef))))[0]?.id ?? null;
   const intake = async (item: Parameters<typeof service.setIntake>[1]['item'], note: string, findingId: number | null = null) =>
     service.setIntake(set.id, { item, done: true, note, findingId, photoId: null }, userId, 'technician');
-  await intake('valve-line-up', 'Seven valves, all in their marked sockets.');
-  await intake('mains-lead', 'Rubber perished at the plug end: replaced.');
-  await intake('rubber-wiring', 'HT lead to the output transformer cracked.');
-  await intake('mains-tap', 'Found on the 220 V tap; household mains is 240 V.');
-  await intake('missing-parts', 'R23 charred, C30 bulging.', await ref('R23'));
+  await intake('valve-line-up', 'Seven valves, all in their marked sockets; the EL84 has a greyed patch on its anode.');
+  await intake('mains-lead', 'Two-core lead, sound; strain relief grommet missing, fitted a new one.');
+  await intake('rubber-wiring', 'Rubber-covered leads to the valve heaters and the output transformer crack when bent.');
+  await intake('mains-tap', 'On the 245 V tap; household mains measured 236 V, so it stays there.');
+  await intake('missing-parts', 'C27 weeping wax at one end; no other damage seen.', await ref('C27'));
   await signChecklist(service, set, userId);
-  const lamp = { supply: 'series-lamp' as const, lampWatts: 60, lampVolts: 240, appliedVolts: 240, readings: [] };
-  const c30 = await ref('C30');
-  await service.addStep(set.id, { ...lamp, lampBehaviour: 'bright-staying', decision: 'stop', notes: 'Lamp stayed bright; C30 warm to the touch. Switched off.', findingId: c30 }, userId, 'technician');
-  await service.addStep(set.id, { ...lamp, lampBehaviour: 'flash-then-dim', decision: 'go-on', notes: 'After restuffing C30: brief flash, then dim; heaters glowing, no smell.', findingId: c30 }, userId, 'technician');
-  await service.addStep(set.id, { supply: 'variable-transformer', lampWatts: null, lampVolts: null, appliedVolts: 240, lampBehaviour: 'no-lamp', decision: 'go-on', notes: 'Raised slowly to 240 V; hum gone.', findingId: null, readings: [] }, userId, 'technician');
+  const lamp = { supply: 'series-lamp' as const, lampWatts: 60, lampVolts: 240, appliedVolts: 236, readings: [] };
+  const c27 = await ref('C27');
+  await service.addStep(set.id, { ...lamp, lampBehaviour: 'flash-then-dim', decision: 'stop', notes: 'Lamp dimmed, but after two minutes the EL84 anode began to glow red. Switched off: grid pulled positive, C27 suspected.', findingId: c27 }, userId, 'technician');
+  await service.addStep(set.id, { ...lamp, lampBehaviour: 'flash-then-dim', decision: 'go-on', notes: 'C27 replaced with a film part and R28 with a new 470 kΩ: lamp dim, EL84 anode dark after ten minutes.', findingId: c27 }, userId, 'technician');
+  await service.addStep(set.id, { supply: 'variable-transformer', lampWatts: null, lampVolts: null, appliedVolts: 236, lampBehaviour: 'no-lamp', decision: 'go-on', notes: 'Raised slowly to full mains; records play cleanly, no red glow.', findingId: null, readings: [] }, userId, 'technician');
 }
