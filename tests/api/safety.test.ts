@@ -5,6 +5,7 @@ import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
 import { waitForMail } from '../support/mail';
 import { pdfPages } from '../support/pdf-text';
+import { signOffPrePower } from '../support/pre-power';
 import { startTestApp } from '../support/test-app';
 
 let t: Awaited<ReturnType<typeof startTestApp>>;
@@ -126,7 +127,8 @@ describe('sending the hand-back report', () => {
 
   it('when the set is tested, soaked and passed, then the preview has no warnings', async () => {
     const id = await newSet('Kestrel 6');
-    await tech.patch(`/api/restorations/${id}`).send({ stage: 'testing' });
+    await signOffPrePower(tech, id);
+    expect((await tech.patch(`/api/restorations/${id}`).send({ stage: 'testing' })).status).toBe(200);
     await tech.post(`/api/restorations/${id}/safety-tests`).send(passing);
     await tech.post(`/api/restorations/${id}/soak-sessions`);
     await tech.patch(`/api/restorations/${id}/soak-sessions/running`).send({ mainsCurrent: '250m' });
