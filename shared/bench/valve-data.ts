@@ -1,6 +1,7 @@
 // Data for common radio valves. Published figures are makers' *typical* values (production
 // spread up to about ±30 %); anything marked 'from memory' is provisional until checked against
-// the type's published data. Sources as recorded in BENCH-REFERENCE §6 and §7e.
+// the type's published data. Each record names its source: a valve data
+// handbook or a maker's data sheet as reproduced on a reference page, or 'from memory'.
 
 /** How far a record can be trusted: 'published' (a maker's data via a reference page), 'from memory', or 'mixed'. */
 export type DataConfidence = 'published' | 'from memory' | 'mixed';
