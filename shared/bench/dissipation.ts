@@ -15,7 +15,8 @@ export interface RatingCheck {
 const judge = (value: number, rating?: number): RatingCheck => {
   if (rating === undefined) return { value, verdict: 'unknown' };
   const fraction = value / rating;
-  return { value, rating, fraction, verdict: fraction <= 1 ? 'within' : fraction <= 1.1 ? 'marginal' : 'out' };
+  // Forgive float noise at exactly the rating (250 V × 48 mA is 12.000000000000002 W).
+  return { value, rating, fraction, verdict: fraction <= 1 + 1e-9 ? 'within' : fraction <= 1.1 + 1e-9 ? 'marginal' : 'out' };
 };
 
 /** A resistor's dissipation in watts from two of volts across it, current through it and its resistance: V²/R, I²R or V·I. */
