@@ -40,7 +40,7 @@ export { readingVerdict } from './reading-verdict';
 export type { ReadingVerdict, Tolerance } from './reading-verdict';
 export { parseTolerance, TOLERANCE_LETTERS } from './tolerance-text';
 export {
-  DEFAULT_ELECTROLYTIC_TOLERANCE, DEFAULT_INSULATION_MIN, DEFAULT_TOLERANCE, limitKinds, measuredQuantities, measurementVerdict, quantityUnits,
+  absoluteTolerance, DEFAULT_ELECTROLYTIC_TOLERANCE, DEFAULT_INSULATION_MIN, DEFAULT_TOLERANCE, limitKinds, limitOf, measuredQuantities, measurementVerdict, quantityUnits,
 } from './measurement-verdict';
 export type { MeasuredQuantity, MeasurementInput, MeasurementVerdict } from './measurement-verdict';
 export { partWarnings, readRating } from './part-rules';

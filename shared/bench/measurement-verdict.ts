@@ -137,7 +137,7 @@ function againstNominal(input: MeasurementInput, c: Context, expected: number): 
     return { verdict: 'out', deviation: null, reference: expected, reading: c.reading ?? expected, reason: `Over range against ${c.show(expected)}: out; an open circuit or a value far above the expected one reads so.` };
   const typed = input.tolerance?.trim() ?? '';
   const reading = c.reading ?? 0;
-  if (input.quantity === 'frequency' && (typed === '' || /[a-z]/i.test(typed.replace(/^±/, '')))) {
+  if (absoluteTolerance(input.quantity, typed)) {
     const tol = typed === '' ? frequencyTolerance(expected) : read(typed.replace(/^±\s*/, ''), 'Hz', 'Tolerance');
     const diff = reading - expected;
     const verdict = Math.abs(diff) <= tol ? 'within' : Math.abs(diff) <= 1.5 * tol ? 'marginal' : 'out';
@@ -158,6 +158,21 @@ function againstNominal(input: MeasurementInput, c: Context, expected: number): 
   return judged;
 }
 
+/** How a reading of this kind, with this tolerance text, is judged: "max"/"min" typed as the tolerance turn the expected value into a limit. */
+export function limitOf(quantity: MeasuredQuantity, tolerance = ''): LimitKind {
+  if (quantity === 'esr' || quantity === 'leakage' || quantity === 'insulation') return limitKinds[quantity];
+  const typed = tolerance.trim().toLowerCase();
+  if (/^(max|maximum|≤|<=)$/.test(typed)) return 'maximum';
+  if (/^(min|minimum|≥|>=)$/.test(typed)) return 'minimum';
+  return limitKinds[quantity];
+}
+
+/** A frequency is judged by an absolute tolerance (kHz off), unless a per cent is typed. */
+export function absoluteTolerance(quantity: MeasuredQuantity, tolerance = ''): boolean {
+  const typed = tolerance.trim().replace(/^±\s*/, '');
+  return quantity === 'frequency' && (typed === '' || /[a-z]/i.test(typed));
+}
+
 /** Judges one bench reading: parses what was typed, applies the rule for its kind, and says why in words that fit the kind of limit. */
 export function measurementVerdict(input: MeasurementInput): MeasurementVerdict {
   const unit = quantityUnits[input.quantity];
@@ -169,20 +184,16 @@ export function measurementVerdict(input: MeasurementInput): MeasurementVerdict 
   if (expected !== null && expected <= 0 && input.quantity !== 'dc-voltage' && input.quantity !== 'current')
     throw new BenchInputError('Expected value: must be above zero.');
   const c: Context = { reading: meter.value, overRange: meter.overRange, expected, rating, show: (v, u = unit) => formatQuantity(v, u) };
-  const typed = input.tolerance?.trim().toLowerCase() ?? '';
-  const stated = /^(max|maximum|≤|<=)$/.test(typed) ? 'maximum' : /^(min|minimum|≥|>=)$/.test(typed) ? 'minimum' : undefined;
-  let limit: LimitKind = limitKinds[input.quantity];
+  const limit = limitOf(input.quantity, input.tolerance);
   let judged: Judged;
   if (input.quantity === 'esr' || input.quantity === 'leakage') judged = againstRule(input, c);
   else if (input.quantity === 'insulation') judged = againstMinimum(expected ?? DEFAULT_INSULATION_MIN, expected === null ? ' (1 MΩ at 500 V DC, Class I)' : '', c);
   else if (expected === null) {
     if (meter.overRange && meter.value === null) throw new BenchInputError("Reading: 'OL' is over range; give an expected value, or the range's top (\"> 20 M\"), so it can be recorded.");
     judged = { verdict: 'unknown', deviation: null, reference: null, reason: meter.overRange ? 'Over range; no expected value to compare with.' : 'No expected value to compare with.' };
-  } else if (stated === 'maximum') {
-    limit = 'maximum';
+  } else if (limit === 'maximum') {
     judged = againstMaximum(expected, c);
-  } else if (stated === 'minimum') {
-    limit = 'minimum';
+  } else if (limit === 'minimum') {
     judged = againstMinimum(expected, '', c);
   } else judged = againstNominal(input, c, expected);
   const { absolute, reading: judgedReading, ...rest } = judged;

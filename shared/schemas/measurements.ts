@@ -73,6 +73,6 @@ export type LineUpInput = z.input<typeof lineUpSchema>;
 export type Valve = z.infer<typeof valveSchema>;
 export const lineUpResultSchema = z.object({
   valves: z.array(valveSchema),
-  liveChassis: z.object({ likely: z.boolean(), reasons: z.array(z.string()) }),
+  liveChassis: z.object({ likely: z.boolean(), reasons: z.array(z.string()), unknown: z.array(z.string()).optional() }),
 });
 export type LineUp = z.infer<typeof lineUpResultSchema>;

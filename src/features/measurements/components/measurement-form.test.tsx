@@ -16,19 +16,41 @@ const preview = () => screen.getByRole('region', { name: 'Verdict preview' });
 async function typeEsr(user: ReturnType<typeof userEvent.setup>) {
   await user.selectOptions(screen.getByLabelText('Quantity'), 'esr');
   await user.type(screen.getByLabelText('Location'), 'C15');
-  await user.type(screen.getByLabelText('Nominal capacitance'), '50µ');
-  await user.type(screen.getByLabelText('Rated voltage'), '400 V');
-  await user.type(screen.getByLabelText(/^Reading/), '0.5 Ω');
+  await user.type(screen.getByLabelText('Nominal capacitance'), '47µ');
+  await user.type(screen.getByLabelText('Rated voltage'), '450 V');
+  await user.type(screen.getByLabelText(/^Reading/), '0.6 Ω');
 }
 
 describe('measurement form', () => {
-  it('when an ESR of 0.5 Ω is typed for a 50 µF 400 V capacitor, then the preview says within, with its reason', async () => {
+  it('when an ESR of 0.6 Ω is typed for a 47 µF 450 V capacitor, then the preview says within, with its reason', async () => {
     fakeReadingsApi([]);
     const user = userEvent.setup();
     renderWithQueries(<MeasurementForm restorationId={7} />);
     await typeEsr(user);
     expect(within(preview()).getByText('within')).toBeInTheDocument();
-    expect(preview()).toHaveTextContent(/Reads 500 mΩ against an expected maximum of 800 mΩ for 50 µF 400 V .*: within\./);
+    expect(preview()).toHaveTextContent(/Reads 600 mΩ against an expected maximum of 800 mΩ for 47 µF 450 V .*: within\./);
+  });
+
+  it('when an insulation tester shows OL, then the preview says over range, above the minimum, and passes', async () => {
+    fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'insulation');
+    await user.type(screen.getByLabelText(/^Reading/), 'OL');
+    // in-service inspection code of practice: Class I minimum 1 MΩ at 500 V DC; over range is above any minimum (common practice)
+    expect(within(preview()).getByText('over range, above the 1 MΩ minimum')).toBeInTheDocument();
+    expect(within(preview()).getByText('within')).toBeInTheDocument();
+  });
+
+  it('when a cathode bias is typed positive against a negative grid bias, then the preview compares sizes and says why', async () => {
+    fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'dc-voltage');
+    await user.type(screen.getByLabelText('Expected (manual)'), '-8.2');
+    await user.type(screen.getByLabelText(/^Reading/), '8.4 V');
+    expect(within(preview()).getByText('+2.4 %')).toBeInTheDocument(); // by hand: 8.4 / 8.2 − 1, not −202 %
+    expect(preview()).toHaveTextContent(/opposite signs/);
   });
 
   it('when the quantity changes, then the labels follow: nominal capacitance and rating for ESR, a minimum for insulation', async () => {
@@ -82,7 +104,7 @@ describe('measurement form', () => {
     await waitFor(() => expect(calls.find((c) => c.method === 'POST')).toBeDefined());
     expect(calls.find((c) => c.method === 'POST')).toMatchObject({
       url: '/api/restorations/7/measurements',
-      body: { location: 'C15', quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω', tolerance: '', findingId: 12, ownerVisible: true },
+      body: { location: 'C15', quantity: 'esr', expected: '47µ', rating: '450 V', reading: '0.6 Ω', tolerance: '', findingId: 12, ownerVisible: true },
     });
     expect(await screen.findByRole('status')).toHaveTextContent('Saved.');
     expect(screen.getByLabelText('Location')).toHaveValue('');

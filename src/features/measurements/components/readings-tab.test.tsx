@@ -12,7 +12,7 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const esr = makeMeasurement(20, { location: 'C15', quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω', ownerVisible: true });
+const esr = makeMeasurement(20, { location: 'C15', quantity: 'esr', expected: '47µ', rating: '450 V', reading: '0.6 Ω', ownerVisible: true });
 const readingsTable = () => screen.getByRole('table', { name: 'All readings, newest first' });
 
 describe('readings tab', () => {
@@ -39,9 +39,10 @@ describe('readings tab', () => {
     renderWithQueries(<ReadingsTab restorationId={7} role="mentor" liveChassis={false} plotWidth={640} />);
     const row = (await within(await screen.findByRole('table', { name: 'All readings, newest first' })).findByRole('rowheader', { name: /C15/ })).closest('tr') as HTMLElement;
     expect(within(row).getByText('ESR')).toBeInTheDocument();
-    expect(within(row).getByText('50µ 400 V')).toHaveClass('font-mono');
-    expect(within(row).getByText('−37.5 %')).toBeInTheDocument();
-    expect(within(row).getByText('within')).toHaveAttribute('title', expect.stringMatching(/^Reads 500 mΩ against an expected maximum of 800 mΩ/));
+    expect(within(row).getByText('47µ 450 V')).toHaveClass('font-mono');
+    // Table A (worst-case ESR chart for new electrolytics): 47 µF in the 250 V column, 0.8 Ω
+    expect(within(row).getByText('600 mΩ, within the 800 mΩ maximum')).toBeInTheDocument();
+    expect(within(row).getByText('within')).toHaveAttribute('title', expect.stringMatching(/^Reads 600 mΩ against an expected maximum of 800 mΩ/));
     expect(within(row).getByText('Ada Bench')).toBeInTheDocument();
     expect(within(row).queryByRole('button', { name: /Change|Delete/ })).not.toBeInTheDocument();
   });

@@ -8,8 +8,8 @@ describe('previewVerdict', () => {
     expect(previewVerdict(texts)).toEqual({ status: 'waiting' });
   });
 
-  it('judges ESR 0.5 Ω on 50 µF 400 V within the limit, ignoring a tolerance left from another kind', () => {
-    const p = previewVerdict({ quantity: 'esr', expected: '50µ', tolerance: 'nonsense', rating: '400 V', reading: '0.5' });
+  it('judges ESR 0.6 Ω on 47 µF 450 V within the limit, ignoring a tolerance left from another kind', () => {
+    const p = previewVerdict({ quantity: 'esr', expected: '47µ', tolerance: 'nonsense', rating: '450 V', reading: '0.6' });
     expect(p).toMatchObject({ status: 'ready', verdict: { verdict: 'within' } });
   });
 
@@ -21,7 +21,7 @@ describe('previewVerdict', () => {
     expect(previewVerdict({ ...texts, reading: '262 A' })).toMatchObject({ status: 'refused', field: 'reading' });
     expect(previewVerdict({ ...texts, expected: '4k7', reading: '262 V' })).toMatchObject({ status: 'refused', field: 'expected' });
     expect(previewVerdict({ ...texts, tolerance: 'ten', reading: '262 V' })).toMatchObject({ status: 'refused', field: 'tolerance' });
-    expect(previewVerdict({ quantity: 'leakage', expected: '50µ', tolerance: '', rating: '400 Ω', reading: '1 mA' })).toMatchObject({
+    expect(previewVerdict({ quantity: 'leakage', expected: '47µ', tolerance: '', rating: '400 Ω', reading: '1 mA' })).toMatchObject({
       status: 'refused',
       field: 'rating',
     });
