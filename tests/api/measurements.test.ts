@@ -20,11 +20,19 @@ const post = (body: object) => tech.post(`/api/restorations/${restorationId}/mea
 
 describe('measurements', () => {
   it('when a reading is recorded, then the stored verdict and reason equal the bench library’s', async () => {
-    const body = { location: 'C30', quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω', method: 'ESR meter, 100 kHz, in circuit' };
+    const body = { location: 'C30', quantity: 'esr', expected: '32µ', rating: '350 WV', reading: '0.9 Ω', method: 'ESR meter, 100 kHz, in circuit' };
     const res = await post(body);
     expect(res.status).toBe(201);
-    const library = measurementVerdict({ quantity: 'esr', expected: '50µ', rating: '400 V', reading: '0.5 Ω' });
-    expect(res.body).toMatchObject({ verdict: library.verdict, verdictReason: library.reason, reading: 0.5, expected: 50e-6, rating: 400, expectedText: '50µ' });
+    const library = measurementVerdict({ quantity: 'esr', expected: '32µ', rating: '350 WV', reading: '0.9 Ω' });
+    expect(res.body).toMatchObject({ verdict: library.verdict, verdictReason: library.reason, reading: 0.9, expected: 32e-6, rating: 350, expectedText: '32µ' });
+  });
+
+  it('when an insulation tester shows over range, then it is stored as typed and passes against the 1 MΩ minimum', async () => {
+    const res = await post({ location: 'Mains pins to chassis', quantity: 'insulation', reading: 'OL', method: '500 V DC' });
+    expect(res.status).toBe(201);
+    // in-service inspection code of practice: Class I minimum 1 MΩ; the stored reading is that bound, the text keeps "OL"
+    expect(res.body).toMatchObject({ verdict: 'within', readingText: 'OL', reading: 1e6, reference: 1e6, deviation: null });
+    expect(res.body.verdictReason).toMatch(/^Over range, above the 1 MΩ minimum/);
   });
 
   it('when the inputs change, then the verdict is recomputed', async () => {
@@ -39,6 +47,7 @@ describe('measurements', () => {
     ['an unknown unit', { location: 'R23', quantity: 'resistance', expected: '4k7', reading: '4.7 furlongs' }, /Reading/],
     ['a unit that does not fit the quantity', { location: 'R23', quantity: 'resistance', expected: '4k7', reading: '250 V' }, /Reading/],
     ['a negative capacitance', { location: 'C12', quantity: 'capacitance', expected: '47n', reading: '-47n' }, /negative/],
+    ['a negative ESR', { location: 'C12', quantity: 'esr', expected: '47µ', rating: '450 V', reading: '\u22120.2' }, /^Reading: an ESR cannot be negative/],
     ['no location', { location: '', quantity: 'current', reading: '60 mA' }, /where/],
   ];
   for (const [what, body, message] of bad)
