@@ -91,6 +91,15 @@ describe('measurementVerdict against a nominal value', () => {
     expect(measurementVerdict({ quantity: 'capacitance', expected: '100n', tolerance: 'K', reading: '112n' }).verdict).toBe('marginal'); // IEC 60062 K = ±10 %
   });
 
+  it('when the part says its tolerance after the value, then that band is used instead of the default', () => {
+    // IEC 60062: K = ±10 %, so 112 nF for "100n K" is marginal; J = ±5 %, so 2.35 kΩ for "2k2 J" (+6.8 %, by hand) is marginal
+    expect(measurementVerdict({ quantity: 'capacitance', expected: '100n K', reading: '112n' }).verdict).toBe('marginal');
+    expect(measurementVerdict({ quantity: 'resistance', expected: '2k2 J', reading: '2.35k' }).verdict).toBe('marginal');
+    expect(measurementVerdict({ quantity: 'resistance', expected: '2k2 ±2 %', reading: '2.35k' }).verdict).toBe('out'); // IEC 60062 G band written in per cent
+    // IEC 60062 letter Z band written out, −20/+80 %: 80 µF for "47µ -20/+80" is within (+70 %, by hand)
+    expect(measurementVerdict({ quantity: 'capacitance', expected: '47µ -20/+80', reading: '80u' }).verdict).toBe('within');
+  });
+
   it('when an IF reads 75 kHz off its 470 kHz, then it is out, although only 16 %', () => {
     // common practice, no source: an AM IF is set to within a couple of kHz, an absolute tolerance
     const v = measurementVerdict({ quantity: 'frequency', expected: '470k', reading: '395k' });

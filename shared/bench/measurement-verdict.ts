@@ -38,7 +38,10 @@ const NAMES: Record<MeasuredQuantity, string> = {
 
 export interface MeasurementInput {
   quantity: MeasuredQuantity;
-  /** As typed: the manual's value; for ESR and leakage, the capacitor's nominal capacitance; for insulation, the minimum. */
+  /**
+   * As typed: the manual's value; for ESR and leakage, the capacitor's nominal capacitance; for insulation, the minimum.
+   * A capacitance or resistance may carry its marked tolerance after a space ("100n K", "47µ -20/+50") when none is typed.
+   */
   expected?: string;
   /**
    * As typed: per cent ("10", "-20/+50", "+50/-20"), an IEC 60062 letter ("K", "Z"), an absolute amount with its unit
@@ -173,8 +176,20 @@ export function absoluteTolerance(quantity: MeasuredQuantity, tolerance = ''): b
   return quantity === 'frequency' && (typed === '' || /[a-z]/i.test(typed));
 }
 
+// A tolerance printed after a part's value, as the part says it: "100n K", "47µ -20/+50", "2k2 ±5 %".
+const MARKED_TOLERANCE = /^(.*\S)\s+(±?\s*\d+(?:\.\d+)?\s*%|[-\u2212]\s*\d+\s*%?\s*\/\s*\+\s*\d+\s*%?|\+\s*\d+\s*%?\s*\/\s*[-\u2212]\s*\d+\s*%?|[BCDFGJKMNSZP])$/;
+
+/** Splits a part's marked tolerance off its value ("100n K" → "100n", "K") for capacitances and resistances. */
+function markedTolerance(input: MeasurementInput): MeasurementInput {
+  if (input.quantity !== 'capacitance' && input.quantity !== 'resistance') return input;
+  if (input.tolerance?.trim() || !input.expected) return input;
+  const match = MARKED_TOLERANCE.exec(input.expected.trim());
+  return match ? { ...input, expected: match[1], tolerance: match[2] } : input;
+}
+
 /** Judges one bench reading: parses what was typed, applies the rule for its kind, and says why in words that fit the kind of limit. */
-export function measurementVerdict(input: MeasurementInput): MeasurementVerdict {
+export function measurementVerdict(typed: MeasurementInput): MeasurementVerdict {
+  const input = markedTolerance(typed);
   const unit = quantityUnits[input.quantity];
   const meter = readMeter(input.reading, unit);
   const expected = input.expected?.trim() ? read(input.expected, input.quantity === 'esr' || input.quantity === 'leakage' ? 'F' : unit, 'Expected value') : null;

@@ -61,7 +61,7 @@ function unitWord(text: string): QuantityUnit | undefined {
 
 function fail(text: string, why: string): never {
   throw new BenchInputError(
-    `'${text}' is not a value Gridleak can read: ${why}. Write it like 4.7k, 4k7, 3n3, 0.05 µF or 250 V.`,
+    `'${text}' is not a value Gridleak can read: ${why}. Write it like 4.7k, 4k7, 330R, 6n8, 0.02 µF or 350 V.`,
   );
 }
 
@@ -124,7 +124,7 @@ function parseDecimal(text: string, match: RegExpExecArray, options: ParseQuanti
  */
 export function parseQuantity(text: string, options: ParseQuantityOptions = {}): Quantity {
   if (typeof text !== 'string' || text.trim() === '') {
-    throw new BenchInputError('Enter a value, for example 4.7k, 4k7, 3n3, 0.05 µF or 250 V.');
+    throw new BenchInputError('Enter a value, for example 4.7k, 4k7, 330R, 6n8, 0.02 µF or 350 V.');
   }
   // The true minus sign (U+2212, as Gridleak prints it) and a dash typed in its place read as a minus.
   const trimmed = text.trim().replace(/^[\u2212\u2013]/, '-');

@@ -31,7 +31,7 @@ describe('RC corner calculator', () => {
     const input = await typeInto('Resistance (Ω)', 'lots');
     expect(input).toHaveAttribute('aria-invalid', 'true');
     expect(input).toHaveAccessibleDescription(/'lots' is not a value Gridleak can read/);
-    expect(screen.getByText(/Write it like 4\.7k, 4k7, 3n3/)).toBeInTheDocument();
+    expect(screen.getByText(/Write it like 4\.7k, 4k7, 330R, 6n8/)).toBeInTheDocument();
     expect(screen.getByText('Correct the value marked above to see the result.')).toBeInTheDocument();
     expect(screen.queryByText(/Hz$/)).not.toBeInTheDocument();
   });
