@@ -3,6 +3,7 @@ import { quantityLabels, type Measurement } from '../../../../shared/schemas/mea
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useReadingForm } from '../hooks/use-reading-form';
+import { toleranceHint } from '../lib/tolerance-hint';
 import { LiveReadingsNote } from './live-readings-note';
 import { VerdictPreviewPanel } from './verdict-preview-panel';
 
@@ -52,7 +53,7 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
           {(a) => <input {...a} {...register('expected')} {...typed} className={valueInput} placeholder={fields.expectedPlaceholder} />}
         </Field>
         {fields.showTolerance && (
-          <Field label="Tolerance (%)" hint="Blank for the usual ±20 %; -20/+50 for uneven" error={errorOf('tolerance')}>
+          <Field label="Tolerance (%)" hint={toleranceHint(form.watch('quantity'))} error={errorOf('tolerance')}>
             {(a) => <input {...a} {...register('tolerance')} {...typed} className={valueInput} placeholder="e.g. 10" inputMode="text" />}
           </Field>
         )}
