@@ -138,6 +138,11 @@ describe('measurementVerdict refuses what cannot be', () => {
     expect(() => measurementVerdict({ quantity: 'resistance', expected: '4k7', reading: '\u22124k7' })).toThrow(/a resistance cannot be negative/);
   });
 
+  it('when a bare OL has nothing to be judged against, then it asks for the range’s top', () => {
+    expect(() => measurementVerdict({ quantity: 'resistance', reading: 'OL' })).toThrow(/^Reading: 'OL' is over range/); // Gridleak's own message
+    expect(measurementVerdict({ quantity: 'resistance', reading: '> 20 M' })).toMatchObject({ verdict: 'unknown', overRange: true, reading: 20e6 });
+  });
+
   it('when values are unparseable or in the wrong unit, then the error says which field', () => {
     expect(() => measurementVerdict({ quantity: 'resistance', expected: 'four k', reading: '4k7' })).toThrow(/^Expected value:/); // Gridleak's own message
     expect(() => measurementVerdict({ quantity: 'resistance', expected: '4k7', reading: '250 V' })).toThrow(/^Reading:/);

@@ -204,7 +204,6 @@ export function measurementVerdict(typed: MeasurementInput): MeasurementVerdict 
   if (input.quantity === 'esr' || input.quantity === 'leakage') judged = againstRule(input, c);
   else if (input.quantity === 'insulation') judged = againstMinimum(expected ?? DEFAULT_INSULATION_MIN, expected === null ? ' (1 MΩ at 500 V DC, Class I)' : '', c);
   else if (expected === null) {
-    if (meter.overRange && meter.value === null) throw new BenchInputError("Reading: 'OL' is over range; give an expected value, or the range's top (\"> 20 M\"), so it can be recorded.");
     judged = { verdict: 'unknown', deviation: null, reference: null, reason: meter.overRange ? 'Over range; no expected value to compare with.' : 'No expected value to compare with.' };
   } else if (limit === 'maximum') {
     judged = againstMaximum(expected, c);
@@ -212,7 +211,8 @@ export function measurementVerdict(typed: MeasurementInput): MeasurementVerdict 
     judged = againstMinimum(expected, '', c);
   } else judged = againstNominal(input, c, expected);
   const { absolute, reading: judgedReading, ...rest } = judged;
-  const reading = judgedReading ?? meter.value ?? 0;
+  const reading = judgedReading ?? meter.value;
+  if (reading === null) throw new BenchInputError("Reading: 'OL' is over range; give what it is judged against, or the range's top (\"> 20 M\"), so it can be recorded.");
   const summary = describeDeviation({ limit, reading: meter.value, reference: rest.reference, deviation: rest.deviation, unit, overRange: meter.overRange, absolute: absolute ?? false });
   return { ...rest, reading, expected, rating, limit, overRange: meter.overRange, summary };
 }

@@ -7,7 +7,7 @@ import { expectRelative } from './bench-test-support';
 // numbering-systems articles (tubedata.info "Tube number systems"; electronics-notes.com "Valve / tube numbering
 // systems"). Valve data and equivalents as noted per check; "code:" marks a check of the letter and digit tables.
 
-describe('valveType decodes the heater letter', () => {
+describe('valveType decodes the heater letter of the European valve type code (heater letter, system letters, base digits)', () => {
   it('reads E as a 6.3 V parallel heater and takes the EL84\u2019s current from its data', () => {
     const el84 = valveType('EL84');
     expect(el84.heater.letter).toBe('E'); // code: first letter
@@ -147,11 +147,11 @@ describe('valveType reads American type numbers', () => {
   });
 });
 
-describe('valveType refuses what is not a European designation', () => {
+describe('valveType refuses what follows neither the European valve type code (heater letter, system letters, base digits) nor an American type number', () => {
   it('explains the expected pattern', () => {
     // Gridleak's own message (not a computation)
     expect(() => valveType('XQ9Z')).toThrow(
-      "'XQ9Z' is not a European valve designation: expected a heater letter, one or more system letters and digits, e.g. EL84",
+      "'XQ9Z' does not follow the European valve type code (heater letter, system letters, base digits), e.g. EL84",
     );
   });
 

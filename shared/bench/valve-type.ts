@@ -42,7 +42,7 @@ const SPECIAL_QUALITY = /^([A-Z])(\d{2,3})([A-Z]+)$/;
 function malformed(text: string): never {
   const hint = /^\d/.test(text) ? ' (a name starting with a digit is an American type number: heater volts, letters, a digit, e.g. 6V6GT)' : '';
   throw new BenchInputError(
-    `'${text}' is not a European valve designation: expected a heater letter, one or more system letters and digits, e.g. EL84${hint}.`,
+    `'${text}' does not follow the European valve type code (heater letter, system letters, base digits), e.g. EL84${hint}.`,
   );
 }
 
@@ -98,14 +98,14 @@ export function valveType(designation: string): ValveType {
   const heaterRule = HEATER_LETTERS[heaterLetter];
   if (heaterRule === undefined) {
     throw new BenchInputError(
-      `'${text}' starts with '${heaterLetter}', which is not a heater letter of the European designation (${Object.keys(HEATER_LETTERS).join(' ')}).`,
+      `'${text}' starts with '${heaterLetter}', which is not a heater letter of the European valve type code (${Object.keys(HEATER_LETTERS).join(' ')}).`,
     );
   }
   const systems = [...systemLetters].map((letter) => {
     const system = SYSTEM_LETTERS[letter];
     if (system === undefined) {
       throw new BenchInputError(
-        `In '${text}', '${letter}' is not a system letter of the European designation (${Object.keys(SYSTEM_LETTERS).join(' ')}).`,
+        `In '${text}', '${letter}' is not a system letter of the European valve type code (${Object.keys(SYSTEM_LETTERS).join(' ')}).`,
       );
     }
     return system;
