@@ -30,6 +30,12 @@ describe('liveChassisLikely', () => {
     ]);
   });
 
+  it('when an American 25 or 117 V type is listed without heater current data, then its number alone says series', () => {
+    // collector's RETMA numbering page: the leading number is the heater voltage; 25 and 117 V heaters run only across the mains
+    expect(liveChassisLikely(['25L6GT']).reasons).toEqual(['25L6GT: 25 V heater, made for series strings']);
+    expect(liveChassisLikely(['117Z3']).likely).toBe(true);
+  });
+
   it('when a 12AX7 stands alone, then it proves nothing', () => {
     expect(liveChassisLikely(['12AX7']).likely).toBe(false); // encyclopedia: 12AX7 runs 6.3 V parallel in AC sets
   });

@@ -29,6 +29,15 @@ function seriesScheme(name: string): boolean {
   }
 }
 
+function americanVolts(name: string): number | undefined {
+  try {
+    const v = valveType(name);
+    return v.scheme === 'american' ? v.heater.volts : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
 /**
  * Whether a line-up (European valve type code, American type numbers, or bare heater letters) points to series
  * heaters across the mains, i.e. an AC/DC set whose chassis is likely live. Judged by the heaters' current and total
@@ -51,8 +60,11 @@ export function liveChassisLikely(items: readonly string[]): LiveChassisAssessme
     const heater = heaterOf(text);
     if (heater === undefined) {
       unknown.push(text);
-      // Decodes, but its heater volts are not in the table: the letter alone says series, so say so and ask for a check.
-      if (seriesScheme(text)) reasons.push(`${text}: heater letter ${text.charAt(0)} reads as a series-string heater, but the type is not in Gridleak’s table: check its data`);
+      // Decodes, but its heater current is not in the table: an American number of 18 V or more still says series;
+      // a European series letter alone says so too, with a request to check.
+      const volts = americanVolts(text);
+      if (volts !== undefined && volts >= SERIES_ONLY_VOLTS) reasons.push(`${text}: ${volts} V heater, made for series strings`);
+      else if (seriesScheme(text)) reasons.push(`${text}: heater letter ${text.charAt(0)} reads as a series-string heater, but the type is not in Gridleak’s table: check its data`);
       continue;
     }
     known.push(heater);
