@@ -9,6 +9,8 @@ export { formatQuantity } from './quantity-format';
 export { capacitorCode } from './capacitor-code';
 export { meterCorrection, meterOhms, loadedReading } from './meter-loading';
 export type { MeterCorrection, MeterSpec } from './meter-loading';
+export { correctedForMeter, parseMeter } from './meter-text';
+export type { MeterTexts } from './meter-text';
 export { heaterChain } from './heater-chain';
 export type { ChainValve, HeaterChain, HeaterChainInput } from './heater-chain';
 export { anodeDissipation, rectifierLoad, resistorDissipation } from './dissipation';

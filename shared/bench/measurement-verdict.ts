@@ -2,6 +2,7 @@ import { frequencyTolerance } from './alignment';
 import { BenchInputError } from './bench-input-error';
 import { esrLimitDetail } from './esr-limit';
 import { leakageLimitDetail } from './leakage-limit';
+import { correctedForMeter, type MeterTexts } from './meter-text';
 import { formatQuantity } from './quantity-format';
 import { parseQuantity, type QuantityUnit } from './quantity-parse';
 import { parseReading } from './reading-text';
@@ -36,7 +37,7 @@ const NAMES: Record<MeasuredQuantity, string> = {
   'ac-voltage': 'an AC voltage', current: 'a current', insulation: 'an insulation resistance', frequency: 'a frequency',
 };
 
-export interface MeasurementInput {
+export interface MeasurementInput extends MeterTexts {
   quantity: MeasuredQuantity;
   /**
    * As typed: the manual's value; for ESR and leakage, the capacitor's nominal capacitance; for insulation, the minimum.
@@ -75,6 +76,8 @@ export interface MeasurementVerdict {
   summary: string;
   /** A note on how the reading may have been taken (a bias typed with the other sign). */
   hint?: string;
+  /** For a voltage with the chart's meter, yours and the source resistance given: the correction in words. */
+  meterWords?: string;
 }
 
 const read = (text: string, unit: Exclude<QuantityUnit, ''>, what: string) => {
@@ -201,6 +204,7 @@ export function measurementVerdict(typed: MeasurementInput): MeasurementVerdict 
   const c: Context = { reading: meter.value, overRange: meter.overRange, expected, rating, show: (v, u = unit) => formatQuantity(v, u) };
   const limit = limitOf(input.quantity, input.tolerance);
   let judged: Judged;
+  let meterWords: string | undefined;
   if (input.quantity === 'esr' || input.quantity === 'leakage') judged = againstRule(input, c);
   else if (input.quantity === 'insulation') judged = againstMinimum(expected ?? DEFAULT_INSULATION_MIN, expected === null ? ' (1 MΩ at 500 V DC, Class I)' : '', c);
   else if (expected === null) {
@@ -209,10 +213,18 @@ export function measurementVerdict(typed: MeasurementInput): MeasurementVerdict 
     judged = againstMaximum(expected, c);
   } else if (limit === 'minimum') {
     judged = againstMinimum(expected, '', c);
-  } else judged = againstNominal(input, c, expected);
+  } else {
+    // A voltage chart taken with another meter: judge against what your meter should read there, not the chart's figure.
+    const corrected = input.quantity === 'dc-voltage' || input.quantity === 'ac-voltage' ? correctedForMeter(expected, input) : undefined;
+    judged = againstNominal(input, c, corrected?.volts ?? expected);
+    if (corrected) {
+      judged.reason = `${judged.reason} Judged against ${c.show(corrected.volts)}, what your meter should read where the chart says ${c.show(expected)}: ${corrected.words}`;
+      meterWords = corrected.words;
+    }
+  }
   const { absolute, reading: judgedReading, ...rest } = judged;
   const reading = judgedReading ?? meter.value;
   if (reading === null) throw new BenchInputError("Reading: 'OL' is over range; give what it is judged against, or the range's top (\"> 20 M\"), so it can be recorded.");
   const summary = describeDeviation({ limit, reading: meter.value, reference: rest.reference, deviation: rest.deviation, unit, overRange: meter.overRange, absolute: absolute ?? false });
-  return { ...rest, reading, expected, rating, limit, overRange: meter.overRange, summary };
+  return { ...rest, reading, expected, rating, limit, overRange: meter.overRange, summary, ...(meterWords ? { meterWords } : {}) };
 }

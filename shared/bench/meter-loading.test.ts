@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { loadedReading, meterCorrection, meterOhms } from './index';
+import { loadedReading, measurementVerdict, meterCorrection, meterOhms, parseMeter } from './index';
 import { expectRelative } from './bench-test-support';
 
 // Textbook worked example ("Meters: loading effect", edudirectory.50webs.com/tutorials/elect99.htm): 30 V across two
@@ -48,5 +48,28 @@ describe('meterCorrection', () => {
 
   it('refuses a meter with no sensitivity', () => {
     expect(() => meterOhms({ ohmsPerVolt: 0, rangeVolts: 250 })).toThrow(/sensitivity \(Ω\/V\) must be a number above zero/); // Gridleak's own message (not a computation)
+  });
+});
+
+describe('parseMeter and a voltage reading judged against the chart’s meter', () => {
+  it('when a meter is written as people write it, then its resistance follows', () => {
+    // Navy electricity and electronics training series: meter resistance = sensitivity × full-scale volts
+    expect(meterOhms(parseMeter('20 kΩ/V, 250 V range'))).toBe(5e6);
+    expect(meterOhms(parseMeter('1000 ohms per volt on 1000 V'))).toBe(1e6);
+    expect(parseMeter('DMM 10 MΩ')).toEqual({ inputOhms: 10e6 }); // textbook DC-meter-effect notes: a DMM is 10 MΩ on all ranges
+  });
+
+  it('when a chart taken with 1 kΩ/V says 100 V behind 100 kΩ and a 20 kΩ/V meter reads 106 V, then it is within, not +6 %', () => {
+    // worked by hand with the divider formula: your meter should read 107.84 V there; 106 V is −1.7 % of that
+    const v = measurementVerdict({ quantity: 'dc-voltage', expected: '100', tolerance: '5', reading: '106', chartMeter: '1k/V 1000 V', meter: '20 kΩ/V 250 V', source: '100k' });
+    expectRelative(v.reference!, 107.843, 1e-5);
+    expect(v.verdict).toBe('within');
+    expect(v.meterWords).toBe("A 20 kΩ/V meter here reads about 8 % higher than the manual's 1 kΩ/V meter.");
+    // without the meters, 106 V against 100 V ±5 % would be marginal
+    expect(measurementVerdict({ quantity: 'dc-voltage', expected: '100', tolerance: '5', reading: '106' }).verdict).toBe('marginal');
+  });
+
+  it('when the chart’s meter cannot be read, then the message names that field', () => {
+    expect(() => measurementVerdict({ quantity: 'dc-voltage', expected: '100', reading: '106', chartMeter: 'old Avo', meter: '10M', source: '100k' })).toThrow(/^Chart's meter:/); // Gridleak's own message
   });
 });
