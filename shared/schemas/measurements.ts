@@ -17,6 +17,10 @@ const fields = {
   reading: z.string().trim().min(1, 'Enter the reading as the meter showed it').max(40),
   conditions: text(300),
   method: text(300),
+  /** Voltages: the meter the service chart was taken with ("1k/V 250 V"), yours ("10 MΩ"), and the point's source resistance ("100k"). */
+  chartMeter: text(60),
+  meter: text(60),
+  source: text(40),
   findingId: z.number().int().positive().nullable(),
   ownerVisible: z.boolean(),
 };
@@ -29,6 +33,9 @@ export const measurementInputSchema = z.object({
   rating: fields.rating.default(''),
   conditions: fields.conditions.default(''),
   method: fields.method.default(''),
+  chartMeter: fields.chartMeter.default(''),
+  meter: fields.meter.default(''),
+  source: fields.source.default(''),
   findingId: fields.findingId.optional(),
   ownerVisible: fields.ownerVisible.default(false),
 });
@@ -48,6 +55,9 @@ export const measurementSchema = z.object({
   readingText: z.string(),
   conditions: z.string(),
   method: z.string(),
+  chartMeterText: z.string(),
+  meterText: z.string(),
+  sourceText: z.string(),
   expected: z.number().nullable(),
   reading: z.number(),
   rating: z.number().nullable(),

@@ -27,6 +27,17 @@ describe('measurements', () => {
     expect(res.body).toMatchObject({ verdict: library.verdict, verdictReason: library.reason, reading: 0.9, expected: 32e-6, rating: 350, expectedText: '32µ' });
   });
 
+  it('when the chart’s meter, yours and the source resistance are given, then the verdict follows what your meter should read', async () => {
+    const body = { location: 'V3 anode', quantity: 'dc-voltage', expected: '100', tolerance: '5', reading: '106', chartMeter: '1k/V 1000 V', meter: '20k/V 250 V', source: '100k' };
+    const res = await post(body);
+    expect(res.status).toBe(201);
+    // worked by hand with the divider formula: 107.84 V on the 20 kΩ/V meter where the 1 kΩ/V chart says 100 V
+    expect(res.body).toMatchObject({ verdict: 'within', chartMeterText: '1k/V 1000 V', meterText: '20k/V 250 V', sourceText: '100k' });
+    expect(res.body.reference).toBeCloseTo(107.843, 2);
+    const patched = (await tech.patch(`/api/measurements/${res.body.id}`).send({ chartMeter: '' })).body;
+    expect(patched).toMatchObject({ verdict: 'marginal', reference: 100 }); // without the chart's meter, the chart's figure stands
+  });
+
   it('when an insulation tester shows over range, then it is stored as typed and passes against the 1 MΩ minimum', async () => {
     const res = await post({ location: 'Mains pins to chassis', quantity: 'insulation', reading: 'OL', method: '500 V DC' });
     expect(res.status).toBe(201);

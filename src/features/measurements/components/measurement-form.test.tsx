@@ -53,6 +53,23 @@ describe('measurement form', () => {
     expect(preview()).toHaveTextContent(/opposite signs/);
   });
 
+  it('when the chart was taken with a 1 kΩ/V meter, then a 20 kΩ/V reading is judged against what it should read there', async () => {
+    fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'dc-voltage');
+    await user.type(screen.getByLabelText('Expected (manual)'), '100');
+    await user.type(screen.getByLabelText(/^Tolerance/), '5');
+    await user.type(screen.getByLabelText(/^Reading/), '106');
+    expect(within(preview()).getByText('marginal')).toBeInTheDocument(); // +6 % against the chart's own figure
+    await user.type(screen.getByLabelText('Chart’s meter'), '1k/V 1000 V');
+    await user.type(screen.getByLabelText('Your meter'), '20k/V 250 V');
+    await user.type(screen.getByLabelText('Source resistance'), '100k');
+    // worked by hand with the divider formula: this meter should read 107.8 V there, so 106 V is within ±5 %
+    expect(within(preview()).getByText('within')).toBeInTheDocument();
+    expect(preview()).toHaveTextContent(/reads about 8 % higher than the manual's 1 kΩ\/V meter/);
+  });
+
   it('when the quantity changes, then the labels follow: nominal capacitance and rating for ESR, a minimum for insulation', async () => {
     fakeReadingsApi([]);
     const user = userEvent.setup();

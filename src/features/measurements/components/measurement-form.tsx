@@ -5,6 +5,7 @@ import { Field, inputClass } from '../../../components/field';
 import { useReadingForm } from '../hooks/use-reading-form';
 import { toleranceHint } from '../lib/tolerance-hint';
 import { LiveReadingsNote } from './live-readings-note';
+import { MeterLoadingFields } from './meter-loading-fields';
 import { VerdictPreviewPanel } from './verdict-preview-panel';
 
 export interface FindingChoice {
@@ -66,6 +67,9 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
           {(a) => <input {...a} {...register('reading')} {...typed} className={valueInput} placeholder={fields.readingPlaceholder} />}
         </Field>
       </div>
+      {(form.watch('quantity') === 'dc-voltage' || form.watch('quantity') === 'ac-voltage') && (
+        <MeterLoadingFields register={register} errorOf={errorOf} open={Boolean(form.getValues('chartMeter'))} />
+      )}
       <VerdictPreviewPanel preview={preview} />
       <div className="grid gap-3 sm:grid-cols-2">
         <Field label="Conditions" hint="e.g. 230 V mains, no signal, volume minimum" error={errorOf('conditions')}>
