@@ -4,7 +4,7 @@ import { BenchInputError, capacitorCode } from './index';
 import { expectRelative } from './bench-test-support';
 
 // Three-digit code: two figures and a multiplier, value in picofarads, multipliers 8 = ×0.01 and
-// 9 = ×0.1 (EIA-style capacitor code tables, BENCH-REFERENCE §1d sources); farads via mathjs.
+// 9 = ×0.1 (EIA-style capacitor code tables: bookofengineering.com capacitor value reading table and two retailers' tables); farads via mathjs.
 
 describe('capacitorCode reads three-digit picofarad codes', () => {
   it('reads 104 as 100 nF', () => {
@@ -45,7 +45,7 @@ describe('capacitorCode accepts a trailing IEC 60062 tolerance letter', () => {
 
 describe('capacitorCode refuses malformed codes with a readable message', () => {
   it('explains what a code looks like', () => {
-    // product rule: the message from the brief, word for word
+    // Gridleak's own message, word for word (not a computation)
     expect(() => capacitorCode('1a3')).toThrow(
       "Capacitor code '1a3' is not three digits and an optional tolerance letter, e.g. 104 or 473K.",
     );

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { colourBands } from './index';
 import { expectRelative } from './bench-test-support';
 
-// Colour meanings per IEC 60062 (colour-code summary pages listed in BENCH-REFERENCE §1a):
+// Colour meanings per IEC 60062 (colour-code summary pages: kodekata.net, instrumentationtools.com, elektropage.com):
 // digits black 0 … white 9; multipliers gold ×0.1, silver ×0.01; tolerances brown ±1 %,
 // red ±2 %, gold ±5 %, silver ±10 %, no band ±20 %.
 

@@ -15,7 +15,7 @@ export interface EsrLimitDetail {
 
 const TABLE_NAME = "Table A: technicians' worst-case ESR of new aluminium electrolytics, 100 kHz, 20 °C";
 
-// Table A as published (BENCH-REFERENCE §4), ohms. null = no figure given ("—").
+// Table A as published (the worst-case ESR chart for new electrolytics at 20 °C), ohms. null = no figure given ("—").
 // "<14"-style entries are stored as 14: the table gives a maximum anyway.
 const VOLT_COLUMNS = [10, 16, 25, 35, 63, 100, 250] as const;
 const ROWS: ReadonlyArray<readonly [microfarads: number, ohms: ReadonlyArray<number | null>]> = [
@@ -29,6 +29,9 @@ const ROWS: ReadonlyArray<readonly [microfarads: number, ohms: ReadonlyArray<num
   [220, [0.6, 0.33, 0.23, 0.17, 0.16, 0.09, 0.5]],
   [470, [0.24, 0.18, 0.12, 0.09, 0.09, 0.05, 0.3]],
   [1000, [0.12, 0.09, 0.08, 0.07, 0.05, 0.06, null]],
+  // The table's large-capacitance rows, as printed: note 4,700 µF 10 V reads higher than 1,000 µF 10 V.
+  [4700, [0.23, 0.2, 0.12, 0.08, 0.04, null, null]],
+  [10000, [0.12, 0.08, 0.06, 0.04, null, null, null]],
 ];
 
 /** Straight-line interpolation of log(y) against log(x) between two points. */

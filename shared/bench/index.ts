@@ -2,9 +2,23 @@
 // Runs in the browser and on the server; imports nothing outside this folder.
 export { BenchInputError } from './bench-input-error';
 export { parseQuantity } from './quantity-parse';
+export { isOverRange, parseReading } from './reading-text';
+export type { MeterReading } from './reading-text';
 export type { ParseQuantityOptions, Quantity, QuantityUnit } from './quantity-parse';
 export { formatQuantity } from './quantity-format';
 export { capacitorCode } from './capacitor-code';
+export { meterCorrection, meterOhms, loadedReading } from './meter-loading';
+export type { MeterCorrection, MeterSpec } from './meter-loading';
+export { correctedForMeter, parseMeter } from './meter-text';
+export type { MeterTexts } from './meter-text';
+export { heaterChain } from './heater-chain';
+export type { ChainValve, HeaterChain, HeaterChainInput } from './heater-chain';
+export { anodeDissipation, rectifierLoad, resistorDissipation } from './dissipation';
+export type { RatingCheck } from './dissipation';
+export { frequencyOf, frequencyTolerance, IF_PRESETS, wavelengthOf } from './alignment';
+export type { IfPreset } from './alignment';
+export { describeDeviation, signedPercent } from './verdict-words';
+export type { DeviationInput, LimitKind } from './verdict-words';
 export { colourBands } from './colour-bands';
 export type { ColourBandReading } from './colour-bands';
 export { preferredValue, seriesValues } from './e-series';
@@ -26,8 +40,10 @@ export { liveChassisLikely } from './live-chassis';
 export type { LiveChassisAssessment } from './live-chassis';
 export { readingVerdict } from './reading-verdict';
 export type { ReadingVerdict, Tolerance } from './reading-verdict';
-export { parseTolerance } from './tolerance-text';
-export { DEFAULT_INSULATION_MIN, DEFAULT_TOLERANCE, measuredQuantities, measurementVerdict, quantityUnits } from './measurement-verdict';
+export { parseTolerance, TOLERANCE_LETTERS } from './tolerance-text';
+export {
+  absoluteTolerance, DEFAULT_ELECTROLYTIC_TOLERANCE, DEFAULT_INSULATION_MIN, DEFAULT_TOLERANCE, limitKinds, limitOf, measuredQuantities, measurementVerdict, quantityUnits,
+} from './measurement-verdict';
 export type { MeasuredQuantity, MeasurementInput, MeasurementVerdict } from './measurement-verdict';
 export { partWarnings, readRating } from './part-rules';
 export type { MainsPosition, PartWarning } from './part-rules';

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { leakageLimit, leakageLimitDetail } from './index';
 import { expectRelative } from './bench-test-support';
 
-// Rule stated by a general-purpose 105 °C radial series datasheet (DS-generic, BENCH-REFERENCE §3),
+// Rule stated by a general-purpose 105 °C radial series datasheet (a maker's data sheet, cited without the brand),
 // C in µF, U in V, I in µA; each expected value evaluated with mathjs and converted to amperes.
 const microamps = (expression: string) => math.unit(math.evaluate(expression) as number, 'uA').toNumber('A');
 
@@ -41,6 +41,6 @@ describe('leakageLimit above 100 V rated', () => {
 
 describe('leakageLimit refuses nonsense', () => {
   it('refuses a negative rated voltage', () => {
-    expect(() => leakageLimit(47e-6, -400)).toThrow(/rated voltage \(V\) must be a number above zero/); // product rule
+    expect(() => leakageLimit(47e-6, -400)).toThrow(/rated voltage \(V\) must be a number above zero/); // Gridleak's own message (not a computation)
   });
 });

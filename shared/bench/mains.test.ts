@@ -6,10 +6,10 @@ import { expectRelative } from './bench-test-support';
 // Ideal transformer V = Vrated·Vmains/Vtap; lamp R_hot = V²/P, I = V/R (mathjs for the arithmetic).
 
 describe('tapScaled', () => {
-  it('gives about 218 V from a 200 V winding on the 220 V tap fed 240 V', () => {
-    const volts = tapScaled({ ratedVolts: 200, tapVolts: 220, mainsVolts: 240 });
-    expectRelative(volts, math.evaluate('200 * 240 / 220') as number); // mathjs
-    expectRelative(volts, 218, 0.005); // common practice, no source: "about 218 V"
+  it('gives 287.5 V from a 250 V winding on the 200 V tap fed 230 V', () => {
+    const volts = tapScaled({ ratedVolts: 250, tapVolts: 200, mainsVolts: 230 });
+    expectRelative(volts, math.evaluate('250 * 230 / 200') as number); // mathjs: ideal transformer ratio
+    expectRelative(volts, 287.5); // by hand
   });
 
   it('lifts a 6.3 V heater to about 6.85 V on 240 V mains at the 220 V tap', () => {
@@ -18,7 +18,7 @@ describe('tapScaled', () => {
   });
 
   it('refuses a zero tap', () => {
-    expect(() => tapScaled({ ratedVolts: 200, tapVolts: 0, mainsVolts: 240 })).toThrow(/tap voltage \(V\) must be a number above zero/); // product rule
+    expect(() => tapScaled({ ratedVolts: 200, tapVolts: 0, mainsVolts: 240 })).toThrow(/tap voltage \(V\) must be a number above zero/); // Gridleak's own message (not a computation)
   });
 });
 

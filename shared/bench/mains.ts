@@ -30,7 +30,7 @@ export interface SeriesLampLimit {
   note: string;
 }
 
-// Tungsten cold resistance is about 1/15 of hot (incandescent-lamp reference, BENCH-REFERENCE §9).
+// Tungsten cold resistance is about 1/15 of hot (encyclopedia article on the incandescent lamp: "about 1/15").
 const COLD_TO_HOT = 1 / 15;
 
 /** Current limit (A), hot and cold resistance (Ω) of a series ("dim-bulb") lamp of `lampWatts` (W) and `lampVolts` (V) on `mainsVolts` (V). */

@@ -8,12 +8,17 @@ export interface PartWarning {
   message: string;
 }
 
-const CAPACITANCE = /(\d+(?:\.\d+)?\s*[pnuµμm]\s*F?|\d+[pnuµμ]\d+|\d+(?:\.\d+)?\s*F)(?![a-z])/i;
-const VOLTAGE = /(\d+(?:\.\d+)?)\s*V\b/i;
+// A capacitance as marked: "50µF", "0.1 mfd", "8 MF" (old American: microfarads), "47UF", "100 mmfd", "4n7", "32u".
+const CAPACITANCE = /(?<![\w.])(\d+[pnuµμ]\d+(?:\s*f)?(?![a-z])|\d+(?:\.\d+)?\s*(?:mmfd|mfd|mmf|mf|[pnuµμ]f?)(?![a-z\d]))/i;
+// A voltage rating as marked: "450 V", "400 VDC", "250 WV", "350 WVDC", "250 VAC", "1 kV", "1.6 kV".
+const VOLTAGE = /(?<![\w.])(\d+(?:\.\d+)?)\s*(k)?\s*(V\s*(?:DC|AC|RMS|W)?|WV(?:DC)?|DCWV)(?![a-z])/i;
 
-/** Capacitance (F) and voltage (V) read from a rating as people write it: "50µF 350V", "0.047 µF 600 V", "32u/450", "4n7". */
-export function readRating(text: string): { farads?: number; volts?: number } {
-  const out: { farads?: number; volts?: number } = {};
+/**
+ * Capacitance (F) and voltage (V) read from a rating as people write it: "50µF 350V", "0.047 µF 600 V", "32u/450",
+ * "4n7", "0.1 mfd 400 VDC", "8 MF 350 WV", "0.01 µF 1 kV"; `ac` is set when the voltage is marked as AC.
+ */
+export function readRating(text: string): { farads?: number; volts?: number; ac?: boolean } {
+  const out: { farads?: number; volts?: number; ac?: boolean } = {};
   const c = CAPACITANCE.exec(text);
   if (c) {
     try {
@@ -22,8 +27,14 @@ export function readRating(text: string): { farads?: number; volts?: number } {
       // Not a value after all ("5 F" in a part name, say): leave it out.
     }
   }
-  const v = VOLTAGE.exec(text) ?? (c ? /\/\s*(\d+(?:\.\d+)?)\b/.exec(text.slice(c.index)) : null);
-  if (v) out.volts = Number(v[1]);
+  const v = VOLTAGE.exec(text);
+  if (v) {
+    out.volts = Number(v[1]) * (v[2] ? 1000 : 1);
+    if (/AC/i.test(v[3] ?? '')) out.ac = true;
+  } else {
+    const slash = c ? /\/\s*(\d+(?:\.\d+)?)\b/.exec(text.slice(c.index)) : null;
+    if (slash) out.volts = Number(slash[1]);
+  }
   return out;
 }
 
@@ -46,7 +57,7 @@ export function partWarnings(part: {
   const cls = safetyClass(part.replacement);
   // A safety class carries an AC mains rating, not comparable with an old part's DC working voltage.
   if (was.volts && now.volts && now.volts < was.volts && !cls)
-    warnings.push({ level: 'danger', message: `Rated ${now.volts} V, below the original's ${was.volts} V: never lower the voltage rating.` });
+    warnings.push({ level: 'danger', message: `Rated ${now.volts} V${now.ac ? ' AC' : ''}, below the original's ${was.volts} V${was.ac ? ' AC' : ''}: never lower the voltage rating.` });
   if (was.farads && now.farads && was.farads >= 1e-6) {
     const ratio = now.farads / was.farads;
     if (ratio < 0.8 || ratio > 1.5)

@@ -20,7 +20,7 @@ export interface ParseQuantityOptions {
 }
 
 const PREFIX_EXPONENTS: Record<string, number> = {
-  p: -12, n: -9, u: -6, µ: -6, μ: -6, m: -3, k: 3, K: 3, M: 6, G: 9,
+  p: -12, n: -9, u: -6, U: -6, µ: -6, μ: -6, m: -3, k: 3, K: 3, M: 6, G: 9,
 };
 
 // IEC 60062 letter-and-digit (RKM) code: the letter stands where the decimal point would.
@@ -33,25 +33,35 @@ const RKM_LETTERS: Record<string, { exponent: number; unit: 'Ω' | 'F' }> = {
   F: { exponent: 0, unit: 'F' },
 };
 
-// Unit words are matched case-insensitively ("47uf", "250v" are how people type).
+// Unit words are matched case-insensitively ("47uf", "250v" are how people type), spaces and dots dropped.
+// Voltage ratings carry the marking's own words: VDC, WV (working volts), WVDC, DCWV, VAC, "V DC".
 const UNIT_WORDS: Record<string, QuantityUnit> = {
   'ω': 'Ω', ohm: 'Ω', ohms: 'Ω', f: 'F', v: 'V', a: 'A', hz: 'Hz', w: 'W', j: 'J',
+  vdc: 'V', vac: 'V', wv: 'V', wvdc: 'V', dcwv: 'V', vdcw: 'V', vw: 'V', vrms: 'V',
 };
 
-// Old American markings carry their own scale: mfd = µF, mmfd = pF.
-const US_CAPACITANCE: Record<string, number> = { mfd: -6, mmfd: -12 };
+// Words that carry their own scale. Old American markings: mfd and MF = µF (never megafarads on a
+// capacitor), mmfd and MMF = pF; "meg" = megohms, as old parts lists write resistors.
+const SCALED_WORDS: Record<string, { exponent: number; unit: QuantityUnit }> = {
+  mfd: { exponent: -6, unit: 'F' }, mf: { exponent: -6, unit: 'F' }, mmfd: { exponent: -12, unit: 'F' }, mmf: { exponent: -12, unit: 'F' },
+  meg: { exponent: 6, unit: 'Ω' }, megs: { exponent: 6, unit: 'Ω' }, megohm: { exponent: 6, unit: 'Ω' }, megohms: { exponent: 6, unit: 'Ω' },
+  r: { exponent: 0, unit: 'Ω' },
+};
+
+/** The suffix as a lookup key: lower case, no spaces or dots ("V DC" → "vdc", "W.V." → "wv"). */
+const compactWord = (text: string) => text.toLowerCase().replace(/[\s.]/g, '');
 
 const RKM_PATTERN = /^([+-]?)(\d*)([LRKkMGpnuµμmF])(\d+)\s*(.*)$/;
 const DECIMAL_PATTERN = /^([+-]?)(\d+(?:\.\d*)?|\.\d+)(?:[eE]([+-]?\d+))?\s*(.*)$/;
 
 function unitWord(text: string): QuantityUnit | undefined {
   if (text === 's') return 's'; // upper-case S would be siemens, so seconds stay exact
-  return UNIT_WORDS[text.toLowerCase()];
+  return UNIT_WORDS[compactWord(text)];
 }
 
 function fail(text: string, why: string): never {
   throw new BenchInputError(
-    `'${text}' is not a value Gridleak can read: ${why}. Write it like 4.7k, 4k7, 3n3, 0.05 µF or 250 V.`,
+    `'${text}' is not a value Gridleak can read: ${why}. Write it like 4.7k, 4k7, 330R, 6n8, 0.02 µF or 350 V.`,
   );
 }
 
@@ -84,10 +94,11 @@ function parseDecimal(text: string, match: RegExpExecArray, options: ParseQuanti
   const [, sign = '', digits = '', ownExponent = '0', suffix = ''] = match;
   let exponent = Number(ownExponent);
   let unit: QuantityUnit | undefined = suffix === '' ? '' : unitWord(suffix);
-  const us = US_CAPACITANCE[suffix.toLowerCase()];
-  if (unit === undefined && us !== undefined) {
-    exponent += us;
-    unit = 'F';
+  // "mF" written exactly so is the SI millifarad; any other spelling of mf is the old American microfarad.
+  const scaled = suffix === 'mF' ? undefined : SCALED_WORDS[compactWord(suffix)];
+  if (unit === undefined && scaled !== undefined) {
+    exponent += scaled.exponent;
+    unit = scaled.unit;
   }
   if (unit === undefined) {
     const prefix = PREFIX_EXPONENTS[suffix.charAt(0)];
@@ -105,16 +116,21 @@ function parseDecimal(text: string, match: RegExpExecArray, options: ParseQuanti
 }
 
 /**
- * Reads a written value: text like "4.7 kΩ", "47k", "4k7", "R47", "3n3", "50µF", "0.05 mfd", "-7.3 V";
+ * Reads a written value: text like "4.7 kΩ", "47k", "4k7", "R47", "47R", "3n3", "50µF", "47UF", "0.05 mfd", "8 MF",
+ * "4.7 meg", "350 WVDC", "1.6 kV", "−7.3 V";
  * returns the value in SI base units (Ω, F, V, A, Hz, W, s, J) and the unit ('' when none written).
  * An RKM code implies its unit: resistance letters give 'Ω', capacitance letters give 'F'.
  * A leading minus is allowed because bias voltages are negative.
  */
 export function parseQuantity(text: string, options: ParseQuantityOptions = {}): Quantity {
   if (typeof text !== 'string' || text.trim() === '') {
-    throw new BenchInputError('Enter a value, for example 4.7k, 4k7, 3n3, 0.05 µF or 250 V.');
+    throw new BenchInputError('Enter a value, for example 4.7k, 4k7, 330R, 6n8, 0.02 µF or 350 V.');
   }
-  const trimmed = text.trim();
+  // The true minus sign (U+2212, as Gridleak prints it) and a dash typed in its place read as a minus.
+  const trimmed = text.trim().replace(/^[\u2212\u2013]/, '-');
+  if (/^(?:OL|O\.L\.?|over\s*range|>)/i.test(trimmed)) {
+    fail(trimmed, 'it is an over-range reading, not a value; record it as a reading, where "OL" or "> 200 M" is kept as over range');
+  }
   if (/\d,\d/.test(trimmed)) {
     fail(trimmed, 'use a point for the decimal separator (4.7k) or the letter code (4k7)');
   }

@@ -4,7 +4,7 @@ import { BenchInputError, formatQuantity, parseQuantity } from './index';
 import { expectRelative } from './bench-test-support';
 
 // SI values are checked against mathjs (math.unit(...).toNumber(...)), an independent unit library.
-// Letter-and-digit codes are checked against IEC 60062 (RKM code, via the summary pages in BENCH-REFERENCE §1c).
+// Letter-and-digit codes are checked against IEC 60062 (RKM code: the encyclopedia article on IEC 60062 and its mirrors).
 
 describe('parseQuantity reads SI prefixes and unit symbols', () => {
   it('reads "4.7 kΩ" as 4700 ohms', () => {
@@ -19,15 +19,15 @@ describe('parseQuantity reads SI prefixes and unit symbols', () => {
     expect(q.unit).toBe('V');
   });
 
-  it('reads a bare prefix "50µ" with no unit', () => {
-    const q = parseQuantity('50µ');
-    expectRelative(q.value, math.unit('50 uF').toNumber('F')); // mathjs: micro = 1e-6
+  it('reads a bare prefix "68µ" with no unit', () => {
+    const q = parseQuantity('68µ');
+    expectRelative(q.value, math.unit('68 uF').toNumber('F')); // mathjs: micro = 1e-6
     expect(q.unit).toBe(''); // no unit written
   });
 
-  it('reads "50uF" with u standing for micro', () => {
-    const q = parseQuantity('50uF');
-    expectRelative(q.value, math.unit('50 uF').toNumber('F')); // mathjs
+  it('reads "68uF" with u standing for micro', () => {
+    const q = parseQuantity('68uF');
+    expectRelative(q.value, math.unit('68 uF').toNumber('F')); // mathjs
     expect(q.unit).toBe('F');
   });
 
@@ -55,7 +55,7 @@ describe('parseQuantity reads SI prefixes and unit symbols', () => {
   });
 
   it('reads the old American marking mfd as microfarads', () => {
-    // common practice, no source: US parts are marked mfd (µF) and mmfd (pF), see TRADE.md §6
+    // common practice, no source: US parts are marked mfd (µF) and mmfd (pF)
     expectRelative(parseQuantity('0.05 mfd').value, math.unit('0.05 uF').toNumber('F'));
     expectRelative(parseQuantity('100 mmfd').value, math.unit('100 pF').toNumber('F'));
   });
@@ -86,7 +86,7 @@ describe('parseQuantity reads the IEC 60062 letter-and-digit code', () => {
 
   it('reads M47 as megohms by the standard but as 0.47 µF where a capacitance is expected', () => {
     expectRelative(parseQuantity('M47').value, math.unit('0.47 Mohm').toNumber('ohm')); // IEC 60062: M = 10^6
-    // European diagrams: "M47 = 0.47 uF" (restorers' page quoted in TRADE.md, W4)
+    // common practice, no source: old European diagrams write M47 for 0.47 µF
     expectRelative(parseQuantity('M47', { expectUnit: 'F' }).value, math.unit('0.47 uF').toNumber('F'));
     expectRelative(parseQuantity('M47 F').value, math.unit('0.47 uF').toNumber('F')); // same, with the unit written
   });
@@ -94,7 +94,7 @@ describe('parseQuantity reads the IEC 60062 letter-and-digit code', () => {
 
 describe('parseQuantity refuses what it cannot read, with a message a person can act on', () => {
   it('refuses words', () => {
-    expect(() => parseQuantity('abc')).toThrow(/'abc' is not a value .* like 4\.7k/); // product rule: readable errors
+    expect(() => parseQuantity('abc')).toThrow(/'abc' is not a value .* like 4\.7k/); // Gridleak's own message (not a computation)
   });
 
   it('refuses an unknown unit and names the SI prefixes', () => {
@@ -106,7 +106,7 @@ describe('parseQuantity refuses what it cannot read, with a message a person can
   });
 
   it('refuses an empty field', () => {
-    expect(() => parseQuantity('  ')).toThrow(BenchInputError); // product rule: BenchInputError for bad input
+    expect(() => parseQuantity('  ')).toThrow(BenchInputError); // Gridleak's own error type (not a computation)
   });
 
   it('refuses a resistance code where a capacitance is expected', () => {
@@ -123,7 +123,8 @@ describe('formatQuantity writes values with SI prefixes', () => {
   });
 
   it('rounds to three figures and carries into the next prefix', () => {
-    expect(formatQuantity(math.evaluate('1/(2*pi*15e3*3.3e-9)') as number, 'Hz')).toBe('3.22 kHz'); // mathjs: 3215.25 Hz
+    expect(formatQuantity(math.evaluate('1/(2*pi*4700*47e-9)') as number, 'Hz')).toBe('720 Hz'); // mathjs: 720.5 Hz, SI Brochure
+    expect(formatQuantity(math.evaluate('1/(2*pi*1e3*100e-9)') as number, 'Hz')).toBe('1.59 kHz'); // mathjs: 1591.5 Hz
     expect(formatQuantity(999.7, 'Ω')).toBe('1 kΩ'); // SI Brochure: 1000 Ω = 1 kΩ
   });
 

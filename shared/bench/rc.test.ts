@@ -6,9 +6,9 @@ import { expectRelative } from './bench-test-support';
 // Formulas f = 1/(2πRC), τ = RC, t = RC·ln(V₀/V), E = ½CV²; reference values from mathjs.
 
 describe('rcCorner', () => {
-  it('puts 15 kΩ with 3.3 nF at about 3.2 kHz', () => {
-    expectRelative(rcCorner(15e3, 3.3e-9), math.evaluate('1/(2*pi*15e3*3.3e-9)') as number); // mathjs
-    expectRelative(rcCorner(15e3, 3.3e-9), 3.2e3, 0.01); // common practice, no source: "about 3.2 kHz"
+  it('puts 4.7 kΩ with 47 nF at about 720 Hz', () => {
+    expectRelative(rcCorner(4.7e3, 47e-9), math.evaluate('1/(2*pi*4.7e3*47e-9)') as number); // mathjs
+    expectRelative(rcCorner(4.7e3, 47e-9), 720, 0.001); // textbook passive low-pass worked example, 4k7 and 47 nF: 720 Hz (from memory)
   });
 
   it('puts 1 kΩ with 1 µF at 159 Hz, the textbook example', () => {
@@ -16,7 +16,7 @@ describe('rcCorner', () => {
   });
 
   it('refuses a negative resistance', () => {
-    expect(() => rcCorner(-15e3, 3.3e-9)).toThrow(/resistance \(Ω\) must be a number above zero/); // product rule
+    expect(() => rcCorner(-15e3, 3.3e-9)).toThrow(/resistance \(Ω\) must be a number above zero/); // Gridleak's own message (not a computation)
   });
 });
 
@@ -25,10 +25,11 @@ describe('timeConstant and dischargeTime', () => {
     expectRelative(timeConstant(10e3, 50e-6), math.evaluate('10e3 * 50e-6') as number); // mathjs
   });
 
-  it('takes about 0.9 s to bring 50 µF from 300 V to 50 V through 10 kΩ', () => {
-    const seconds = dischargeTime(50e-6, 10e3, 300, 50);
-    expectRelative(seconds, math.evaluate('10e3 * 50e-6 * log(300/50)') as number); // mathjs
-    expectRelative(seconds, 0.9, 0.01); // common practice, no source: BENCH-REFERENCE §10 "300 V → 50 V in 0.9 s"
+  it('takes one time constant to fall to 36.8 % and about five to fall below 1 %', () => {
+    // textbook RC discharge: after one τ the voltage is 36.8 % of the start; after 5τ, 0.67 %
+    expectRelative(dischargeTime(47e-6, 10e3, 350, 350 * 0.368), 0.47, 0.001); // τ = 10 kΩ × 47 µF = 0.47 s, by hand
+    expectRelative(dischargeTime(47e-6, 10e3, 350, 350 * 0.0067), 5 * 0.47, 0.002); // 5τ, by hand
+    expectRelative(dischargeTime(47e-6, 10e3, 350, 50), math.evaluate('10e3 * 47e-6 * log(350/50)') as number); // mathjs
   });
 
   it('refuses to discharge to 0 V, which never quite happens', () => {

@@ -38,10 +38,10 @@ describe('readingVerdict', () => {
   });
 
   it('refuses an expected value of zero', () => {
-    expect(() => readingVerdict({ expected: 0, reading: 1, tolerance: 0.1 })).toThrow(/expected value is 0/); // product rule
+    expect(() => readingVerdict({ expected: 0, reading: 1, tolerance: 0.1 })).toThrow(/expected value is 0/); // Gridleak's own message (not a computation)
   });
 
   it('refuses a tolerance written as a percentage', () => {
-    expect(() => readingVerdict({ expected: 100, reading: 100, tolerance: 10 })).toThrow(/±10 % is 0\.1/); // product rule
+    expect(() => readingVerdict({ expected: 100, reading: 100, tolerance: 10 })).toThrow(/±10 % is 0\.1/); // Gridleak's own message (not a computation)
   });
 });

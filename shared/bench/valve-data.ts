@@ -1,6 +1,7 @@
 // Data for common radio valves. Published figures are makers' *typical* values (production
 // spread up to about ±30 %); anything marked 'from memory' is provisional until checked against
-// the type's published data. Sources as recorded in BENCH-REFERENCE §6 and §7e.
+// the type's published data. Each record names its source: a valve data
+// handbook or a maker's data sheet as reproduced on a reference page, or 'from memory'.
 
 /** How far a record can be trusted: 'published' (a maker's data via a reference page), 'from memory', or 'mixed'. */
 export type DataConfidence = 'published' | 'from memory' | 'mixed';
@@ -104,6 +105,7 @@ export const VALVE_DATA: Readonly<Record<string, ValveData>> = {
   EM84: { description: 'tuning indicator (bar)', heaterVolts: 6.3, heaterAmps: 0.21, equivalents: ['6FG6'], confidence: 'from memory', source: MEMORY },
   DK96: { description: 'battery heptode frequency changer', heaterVolts: 1.4, heaterAmps: 0.025, equivalents: ['1AB6'], confidence: 'from memory', source: MEMORY },
   UCH42: { description: 'triode-hexode frequency changer (Rimlock)', heaterVolts: 14, heaterAmps: 0.1, equivalents: [], confidence: 'from memory', source: MEMORY },
+  UF89: { description: 'variable-µ IF pentode, 100 mA version of the EF89', heaterVolts: 12.6, heaterAmps: 0.1, equivalents: ['12DA6'], confidence: 'from memory', source: MEMORY },
   UAF42: { description: 'diode and variable-µ pentode (Rimlock)', heaterVolts: 12.6, heaterAmps: 0.1, equivalents: [], confidence: 'from memory', source: MEMORY },
   UBC41: { description: 'double diode and triode (Rimlock)', heaterVolts: 14, heaterAmps: 0.1, equivalents: [], confidence: 'from memory', source: MEMORY },
   UL41: { description: 'output pentode (Rimlock); operating point not found', heaterVolts: 45, heaterAmps: 0.1, equivalents: [], confidence: 'from memory', source: MEMORY },

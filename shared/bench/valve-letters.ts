@@ -1,4 +1,5 @@
-// Tables of the European (Mullard–Philips) valve designation, BENCH-REFERENCE §7a–7c.
+// Tables of the European valve type code (heater letter, system letters, base digits), as the
+// numbering-systems articles and valve data handbooks list them.
 // Where the reference pages disagree, the note says so rather than choosing silently.
 
 export type HeaterSupply = 'parallel' | 'series' | 'battery' | 'none';

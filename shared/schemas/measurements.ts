@@ -18,6 +18,10 @@ const fields = {
   reading: z.string().trim().min(1, 'Enter the reading as the meter showed it').max(40),
   conditions: text(300),
   method: text(300),
+  /** Voltages: the meter the service chart was taken with ("1k/V 250 V"), yours ("10 MΩ"), and the point's source resistance ("100k"). */
+  chartMeter: text(60),
+  meter: text(60),
+  source: text(40),
   findingId: bodyIdSchema.nullable(),
   ownerVisible: z.boolean(),
   /** Taken with the set powered: refused until the pre-power checklist is signed off. */
@@ -32,6 +36,9 @@ export const measurementInputSchema = z.object({
   rating: fields.rating.default(''),
   conditions: fields.conditions.default(''),
   method: fields.method.default(''),
+  chartMeter: fields.chartMeter.default(''),
+  meter: fields.meter.default(''),
+  source: fields.source.default(''),
   findingId: fields.findingId.optional(),
   ownerVisible: fields.ownerVisible.default(false),
   powerOn: fields.powerOn.default(false),
@@ -52,6 +59,9 @@ export const measurementSchema = z.object({
   readingText: z.string(),
   conditions: z.string(),
   method: z.string(),
+  chartMeterText: z.string(),
+  meterText: z.string(),
+  sourceText: z.string(),
   expected: z.number().nullable(),
   reading: z.number(),
   rating: z.number().nullable(),
@@ -78,6 +88,6 @@ export type LineUpInput = z.input<typeof lineUpSchema>;
 export type Valve = z.infer<typeof valveSchema>;
 export const lineUpResultSchema = z.object({
   valves: z.array(valveSchema),
-  liveChassis: z.object({ likely: z.boolean(), reasons: z.array(z.string()) }),
+  liveChassis: z.object({ likely: z.boolean(), reasons: z.array(z.string()), unknown: z.array(z.string()).optional() }),
 });
 export type LineUp = z.infer<typeof lineUpResultSchema>;

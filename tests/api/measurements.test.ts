@@ -29,6 +29,25 @@ describe('measurements', () => {
     expect(res.body.verdictReason).toMatch(/1\.1 Ω.*2\.1 Ω/);
   });
 
+  it('when the chart’s meter, yours and the source resistance are given, then the verdict follows what your meter should read', async () => {
+    const body = { location: 'V3 anode', quantity: 'dc-voltage', expected: '100', tolerance: '5', reading: '106', chartMeter: '1k/V 1000 V', meter: '20k/V 250 V', source: '100k' };
+    const res = await post(body);
+    expect(res.status).toBe(201);
+    // worked by hand with the divider formula: 107.84 V on the 20 kΩ/V meter where the 1 kΩ/V chart says 100 V
+    expect(res.body).toMatchObject({ verdict: 'within', chartMeterText: '1k/V 1000 V', meterText: '20k/V 250 V', sourceText: '100k' });
+    expect(res.body.reference).toBeCloseTo(107.843, 2);
+    const patched = (await tech.patch(`/api/measurements/${res.body.id}`).send({ chartMeter: '' })).body;
+    expect(patched).toMatchObject({ verdict: 'marginal', reference: 100 }); // without the chart's meter, the chart's figure stands
+  });
+
+  it('when an insulation tester shows over range, then it is stored as typed and passes against the 1 MΩ minimum', async () => {
+    const res = await post({ location: 'Mains pins to chassis', quantity: 'insulation', reading: 'OL', method: '500 V DC' });
+    expect(res.status).toBe(201);
+    // in-service inspection code of practice: Class I minimum 1 MΩ; the stored reading is that bound, the text keeps "OL"
+    expect(res.body).toMatchObject({ verdict: 'within', readingText: 'OL', reading: 1e6, reference: 1e6, deviation: null });
+    expect(res.body.verdictReason).toMatch(/^Over range, above the 1 MΩ minimum/);
+  });
+
   it('when the inputs change, then the verdict is recomputed', async () => {
     const created = (await post({ location: 'V5 pin 7', quantity: 'dc-voltage', expected: '250', tolerance: '10', reading: '248 V' })).body;
     expect(created.verdict).toBe('within');
@@ -41,6 +60,7 @@ describe('measurements', () => {
     ['an unknown unit', { location: 'R23', quantity: 'resistance', expected: '4k7', reading: '4.7 furlongs' }, /Reading/],
     ['a unit that does not fit the quantity', { location: 'R23', quantity: 'resistance', expected: '4k7', reading: '250 V' }, /Reading/],
     ['a negative capacitance', { location: 'C12', quantity: 'capacitance', expected: '47n', reading: '-47n' }, /negative/],
+    ['a negative ESR', { location: 'C12', quantity: 'esr', expected: '47µ', rating: '450 V', reading: '\u22120.2' }, /^Reading: an ESR cannot be negative/],
     ['no location', { location: '', quantity: 'current', reading: '60 mA' }, /where/],
   ];
   for (const [what, body, message] of bad)

@@ -27,6 +27,14 @@ describe('parts ledger', () => {
     expect(good.warnings).toEqual([]);
   });
 
+  it('when ratings are written the old way (mfd, VDC, kV), then a lower voltage rating is still flagged', async () => {
+    // common practice, no source: never lower a capacitor's voltage rating
+    const mfd = (await addPart({ componentRef: 'C8', originalPart: 'Paper', originalRating: '0.1 mfd 400 VDC', replacementPart: 'Film', replacementRating: '0.1 µF 250 V' })).body;
+    expect(mfd.warnings).toEqual([expect.objectContaining({ level: 'danger', message: expect.stringMatching(/250 V, below the original's 400 V/) })]);
+    const kv = (await addPart({ componentRef: 'C9', originalPart: 'Ceramic', originalRating: '0.01 µF 1 kV', replacementPart: 'Film', replacementRating: '0.01 µF 630 V' })).body;
+    expect(kv.warnings).toEqual([expect.objectContaining({ level: 'danger' })]);
+  });
+
   it('when exported, then the CSV round-trips commas, quotes, line breaks and non-ASCII text', async () => {
     const tricky = 'Wax tubular, "Hunts" style,\nstamped 0·05 µF — Ω ängstrom 日本';
     await addPart({ componentRef: 'C12', originalPart: tricky, originalRating: '0.05µF 400V', replacementPart: 'Film 0.047µF 630V', replacementRating: '0.047µF 630V', costMinor: 185, source: 'Supplier, "NOS" box', notes: 'line one\r\nline two' });

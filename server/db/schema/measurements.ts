@@ -31,6 +31,10 @@ export const measurements = pgTable(
     conditions: text().notNull().default(''),
     /** Meter and its ohms-per-volt, ESR test frequency, time at voltage for leakage. */
     method: text().notNull().default(''),
+    /** Voltages only, as typed: the meter the service chart was taken with, the meter used, and the point's source resistance. */
+    chartMeterText: text().notNull().default(''),
+    meterText: text().notNull().default(''),
+    sourceText: text().notNull().default(''),
     /** SI values parsed from the texts (ohms, farads, volts, amperes, hertz). */
     expected: doublePrecision(),
     reading: doublePrecision().notNull(),

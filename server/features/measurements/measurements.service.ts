@@ -15,7 +15,7 @@ type Fields = Required<Pick<MeasurementInput, 'location' | 'quantity' | 'reading
 const toMeasurement = (m: Row): Measurement => ({
   id: m.id, restorationId: m.restorationId, findingId: m.findingId, location: m.location, quantity: m.quantity,
   expectedText: m.expectedText, toleranceText: m.toleranceText, ratingText: m.ratingText, readingText: m.readingText,
-  conditions: m.conditions, method: m.method, expected: m.expected, reading: m.reading, rating: m.rating,
+  conditions: m.conditions, method: m.method, chartMeterText: m.chartMeterText, meterText: m.meterText, sourceText: m.sourceText, expected: m.expected, reading: m.reading, rating: m.rating,
   reference: m.reference, deviation: m.deviation, verdict: m.verdict, verdictReason: m.verdictReason,
   ownerVisible: m.ownerVisible, powerOn: m.powerOn, measuredBy: m.measuredBy, measuredAt: m.measuredAt.toISOString(),
 });
@@ -23,7 +23,9 @@ const toMeasurement = (m: Row): Measurement => ({
 /** The bench library judges every reading; a value it cannot read is a 400 naming the field. */
 export function judge(f: Fields) {
   try {
-    const v = measurementVerdict({ quantity: f.quantity, expected: f.expected, tolerance: f.tolerance, rating: f.rating, reading: f.reading });
+    const v = measurementVerdict({
+      quantity: f.quantity, expected: f.expected, tolerance: f.tolerance, rating: f.rating, reading: f.reading, chartMeter: f.chartMeter, meter: f.meter, source: f.source,
+    });
     return { expected: v.expected, reading: v.reading, rating: v.rating, reference: v.reference, deviation: v.deviation, verdict: v.verdict, verdictReason: v.reason };
   } catch (err) {
     if (err instanceof BenchInputError) throw new BadRequestError(err.message);
@@ -44,7 +46,8 @@ export function measurementsService(db: Database) {
   }
   const columns = (f: Fields) => ({
     location: f.location, quantity: f.quantity, expectedText: f.expected ?? '', toleranceText: f.tolerance ?? '', ratingText: f.rating ?? '',
-    readingText: f.reading, conditions: f.conditions ?? '', method: f.method ?? '', findingId: f.findingId ?? null, ownerVisible: f.ownerVisible ?? false,
+    readingText: f.reading, conditions: f.conditions ?? '', method: f.method ?? '',
+    chartMeterText: f.chartMeter ?? '', meterText: f.meter ?? '', sourceText: f.source ?? '', findingId: f.findingId ?? null, ownerVisible: f.ownerVisible ?? false,
     powerOn: f.powerOn ?? false,
   });
 
@@ -92,6 +95,7 @@ export function measurementsService(db: Database) {
         location: patch.location ?? current.location, quantity: patch.quantity ?? current.quantity, reading: patch.reading ?? current.readingText,
         expected: patch.expected ?? current.expectedText, tolerance: patch.tolerance ?? current.toleranceText, rating: patch.rating ?? current.ratingText,
         conditions: patch.conditions ?? current.conditions, method: patch.method ?? current.method,
+        chartMeter: patch.chartMeter ?? current.chartMeterText, meter: patch.meter ?? current.meterText, source: patch.source ?? current.sourceText,
         findingId: patch.findingId === undefined ? current.findingId : patch.findingId, ownerVisible: patch.ownerVisible ?? current.ownerVisible,
         powerOn: patch.powerOn ?? current.powerOn,
       };

@@ -9,8 +9,8 @@ import { MainResult, ResultNote } from './result-line';
 
 /** bypassCorner: below what frequency a cathode bypass capacitor stops doing its job. */
 export function BypassCornerCard() {
-  const resistor = useQuantity('1k5', 'Ω');
-  const capacitance = useQuantity('25µ', 'F');
+  const resistor = useQuantity('680', 'Ω');
+  const capacitance = useQuantity('100µ', 'F');
   const outcome = calculate([resistor.value, capacitance.value], ([ohms, farads]) =>
     formatQuantity(bypassCorner(ohms, farads), 'Hz'),
   );
@@ -22,8 +22,8 @@ export function BypassCornerCard() {
       source="Circuit physics; the valve’s own cathode resistance in parallel is a textbook refinement"
     >
       <CardFields>
-        <QuantityInput label="Cathode resistor (Ω)" field={resistor} placeholder="e.g. 1k5" />
-        <QuantityInput label="Bypass capacitor (F)" field={capacitance} placeholder="e.g. 25µ" />
+        <QuantityInput label="Cathode resistor (Ω)" field={resistor} placeholder="e.g. 680, 2k2" />
+        <QuantityInput label="Bypass capacitor (F)" field={capacitance} placeholder="e.g. 100µ" />
       </CardFields>
       <ResultPanel
         outcome={outcome}

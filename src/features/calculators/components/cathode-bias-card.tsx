@@ -10,9 +10,9 @@ import { MainResult, ResultLine, ResultList, ResultNote } from './result-line';
 
 /** cathodeBias: the bias a cathode resistor gives at a given anode (and screen) current, and what it dissipates. */
 export function CathodeBiasCard() {
-  const resistor = useQuantity('135', 'Ω');
-  const anode = useQuantity('48m', 'A');
-  const screen = useQuantity('5.5m', 'A');
+  const resistor = useQuantity('180', 'Ω');
+  const anode = useQuantity('40m', 'A');
+  const screen = useQuantity('4.5m', 'A');
   const outcome = calculate([resistor.value, anode.value], ([cathodeOhms, anodeAmps]) => {
     const bias = cathodeBias({ cathodeOhms, anodeAmps, screenAmps: screen.value ?? 0 });
     const rating = suggestedRating(bias.resistorWatts);
@@ -33,8 +33,8 @@ export function CathodeBiasCard() {
       source="Ohm’s law; the screen current returns through the cathode (valve data-sheet practice)"
     >
       <CardFields>
-        <QuantityInput label="Cathode resistor (Ω)" field={resistor} placeholder="e.g. 135, 1k5" />
-        <QuantityInput label="Anode current (A)" field={anode} placeholder="e.g. 48m" />
+        <QuantityInput label="Cathode resistor (Ω)" field={resistor} placeholder="e.g. 180, 2k2" />
+        <QuantityInput label="Anode current (A)" field={anode} placeholder="e.g. 40m" />
         <QuantityInput label="Screen current (A), optional" field={screen} placeholder="0 for a triode" />
       </CardFields>
       <ResultPanel

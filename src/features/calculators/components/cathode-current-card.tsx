@@ -10,8 +10,8 @@ import { SafetyNote } from './safety-note';
 
 /** cathodeCurrent: a valve's current worked out from the voltage measured across its cathode resistor. */
 export function CathodeCurrentCard() {
-  const volts = useQuantity('7.3 V', 'V');
-  const resistor = useQuantity('135', 'Ω');
+  const volts = useQuantity('8.2 V', 'V');
+  const resistor = useQuantity('180', 'Ω');
   const outcome = calculate([volts.value, resistor.value], ([cathodeVolts, cathodeOhms]) =>
     formatQuantity(cathodeCurrent({ cathodeVolts, cathodeOhms }), 'A'),
   );
@@ -23,8 +23,8 @@ export function CathodeCurrentCard() {
       source="Ohm’s law"
     >
       <CardFields>
-        <QuantityInput label="Measured cathode volts (V)" field={volts} placeholder="e.g. 7.3 V" />
-        <QuantityInput label="Cathode resistor (Ω)" field={resistor} placeholder="e.g. 135" />
+        <QuantityInput label="Measured cathode volts (V)" field={volts} placeholder="e.g. 8.2 V" />
+        <QuantityInput label="Cathode resistor (Ω)" field={resistor} placeholder="e.g. 180" />
       </CardFields>
       <ResultPanel outcome={outcome} waiting="Enter the cathode volts and the resistor." invalid={anyInvalid(volts, resistor)}>
         {(current) => (

@@ -10,10 +10,10 @@ import { SafetyNote } from './safety-note';
 
 /** storedEnergy and dischargeTime: what a charged filter capacitor holds, and how long a resistor takes to drain it. */
 export function DischargeCard() {
-  const capacitance = useQuantity('50µ', 'F');
-  const charged = useQuantity('300 V', 'V');
-  const resistor = useQuantity('10k', 'Ω');
-  const safe = useQuantity('50 V', 'V');
+  const capacitance = useQuantity('32µ', 'F');
+  const charged = useQuantity('320 V', 'V');
+  const resistor = useQuantity('22k', 'Ω');
+  const safe = useQuantity('30 V', 'V');
   // Stored energy needs only C and V, so a refused discharge target must not hide it.
   const energy = calculate([capacitance.value, charged.value], ([farads, volts]) => formatQuantity(storedEnergy(farads, volts), 'J'));
   const discharge = calculate([capacitance.value, charged.value, resistor.value, safe.value], ([farads, volts, ohms, target]) => ({
@@ -30,10 +30,10 @@ export function DischargeCard() {
       source="Circuit physics: energy in a capacitor and exponential discharge through a resistor"
     >
       <CardFields>
-        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 50µ" />
-        <QuantityInput label="Charged to (V)" field={charged} placeholder="e.g. 300 V" />
-        <QuantityInput label="Discharge resistor (Ω)" field={resistor} placeholder="e.g. 10k" />
-        <QuantityInput label="Down to (V)" field={safe} placeholder="e.g. 50 V" />
+        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 32µ" />
+        <QuantityInput label="Charged to (V)" field={charged} placeholder="e.g. 320 V" />
+        <QuantityInput label="Discharge resistor (Ω)" field={resistor} placeholder="e.g. 22k" />
+        <QuantityInput label="Down to (V)" field={safe} placeholder="e.g. 30 V" />
       </CardFields>
       <ResultPanel
         outcome={energy}

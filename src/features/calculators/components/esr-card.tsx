@@ -17,8 +17,8 @@ const VERDICT_WORDS = {
 
 /** esrLimitDetail: the highest ESR a healthy new electrolytic should show, and a reading judged against it. */
 export function EsrCard() {
-  const capacitance = useQuantity('47µ', 'F');
-  const rated = useQuantity('450 V', 'V');
+  const capacitance = useQuantity('32µ', 'F');
+  const rated = useQuantity('350 V', 'V');
   const reading = useQuantity('', 'Ω');
   const outcome = calculate([capacitance.value, rated.value], ([farads, volts]) => {
     const detail = esrLimitDetail(farads, volts);
@@ -28,17 +28,17 @@ export function EsrCard() {
     <CalculatorCard
       title="Expected ESR"
       description="The most a healthy new electrolytic should read on an ESR meter."
-      formula="Table A by capacitance and rated voltage, log-log between rows and columns; edge value beyond the table"
+      formula="Table A by capacitance (1 µF to 10,000 µF) and rated voltage, log-log between rows and columns; edge value beyond the table"
       source="Table A, a widely circulated technicians’ table of worst-case ESR for new aluminium electrolytics (100 kHz, 20 °C)"
     >
       <CardFields>
-        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 47µ, 50u" />
-        <QuantityInput label="Rated voltage (V)" field={rated} placeholder="e.g. 450 V" />
+        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 32µ, 8 mfd, 100UF" />
+        <QuantityInput label="Rated voltage (V)" field={rated} placeholder="e.g. 350 WV" />
       </CardFields>
       <QuantityInput
         label="Your reading (Ω), optional"
         field={reading}
-        placeholder="e.g. 0.6"
+        placeholder="e.g. 1.1"
         hint="Measure with the set unplugged and its capacitors discharged."
       />
       <ResultPanel outcome={outcome} waiting="Enter the capacitance and the rated voltage." invalid={anyInvalid(capacitance, rated)}>

@@ -11,8 +11,8 @@ import { SafetyNote } from './safety-note';
 
 /** leakageLimitDetail: the most current a healthy electrolytic may pass at its rated voltage, and the rule behind it. */
 export function LeakageCard() {
-  const capacitance = useQuantity('32µ', 'F');
-  const rated = useQuantity('450 V', 'V');
+  const capacitance = useQuantity('16µ', 'F');
+  const rated = useQuantity('350 V', 'V');
   const outcome = calculate([capacitance.value, rated.value], ([farads, volts]) => {
     const detail = leakageLimitDetail(farads, volts);
     return { ...detail, limit: formatQuantity(detail.amps, 'A'), wait: formatWait(detail.measureAfterSeconds) };
@@ -28,8 +28,8 @@ export function LeakageCard() {
       source="Rule stated in a general-purpose radial aluminium electrolytic series datasheet"
     >
       <CardFields>
-        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 32µ" />
-        <QuantityInput label="Rated voltage (V)" field={rated} placeholder="e.g. 450 V" />
+        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 16µ, 8 MF" />
+        <QuantityInput label="Rated voltage (V)" field={rated} placeholder="e.g. 350 WVDC" />
       </CardFields>
       <ResultPanel outcome={outcome} waiting="Enter the capacitance and the rated voltage." invalid={anyInvalid(capacitance, rated)}>
         {(r) => (

@@ -10,25 +10,25 @@ import { TextInput } from './text-input';
 
 /** liveChassisLikely: whether a set's valve line-up points to series heaters across the mains. */
 export function LiveChassisCard() {
-  const [lineUp, setLineUp] = useState('UCH42 UAF42 UBC41 UL41 UY41');
+  const [lineUp, setLineUp] = useState('UCH81 UF89 UABC80 UL84 UY85');
   const items = lineUpItems(lineUp);
   const outcome = calculate([items.length > 0 ? items : undefined], ([list]) => liveChassisLikely(list));
   return (
     <CalculatorCard
       title="Live chassis check"
       description="Does the valve line-up point to an AC/DC set whose chassis is tied to the mains?"
-      formula="series-heater letters (U, P, C…) or 25, 35, 50, 117 V American types → series string across the mains"
-      source="Mullard–Philips heater letters; American type numbers begin with the heater voltage"
+      formula="heaters of 18 V and more, or a 100/150/300 mA string adding up past half the mains → series string across the mains"
+      source="European valve type code heater letters and American type numbers (heater volts first), per numbering-systems articles; heater ratings from valve data handbooks"
     >
       <TextInput
         label="Valve line-up"
         value={lineUp}
         onChange={setLineUp}
-        placeholder="e.g. UCH42 UAF42 UBC41 UL41 UY41"
+        placeholder="e.g. UCH81 UF89 UABC80 UL84 UY85"
         hint="Every valve in the set, separated by spaces."
         capitals
       />
-      <ResultPanel outcome={outcome} waiting="Type the set’s valves, for example UCH42 UAF42 UBC41 UL41 UY41.">
+      <ResultPanel outcome={outcome} waiting="Type the set’s valves, for example UCH81 UF89 UABC80 UL84 UY85.">
         {(r) =>
           r.likely ? (
             <div className="space-y-1 rounded-md border-2 border-danger bg-danger-soft px-3 py-2">
@@ -40,6 +40,7 @@ export function LiveChassisCard() {
                   <li key={reason}>{reason}</li>
                 ))}
               </ul>
+              {r.unknown.length > 0 && <p className="text-sm">{`Not recognised, check their heater data by hand: ${r.unknown.join(', ')}.`}</p>}
               <p className="text-sm">
                 Treat the chassis, and anything screwed to it, as connected to the mains. Work on it only through an isolation
                 transformer.
@@ -50,6 +51,7 @@ export function LiveChassisCard() {
               <p className="font-semibold">
                 <span aria-hidden="true">○ </span>Nothing here points to series heaters.
               </p>
+              {r.unknown.length > 0 && <ResultNote>{`Not recognised, check their heater data by hand: ${r.unknown.join(', ')}.`}</ResultNote>}
               <ResultNote>
                 That does not make it safe: treat any set with a two-wire mains lead as live until you have checked.
               </ResultNote>

@@ -16,14 +16,14 @@ async function typeInto(label: string, text: string) {
 }
 
 describe('RC corner calculator', () => {
-  it('when 15k and 3.3n are typed, then it shows about 3.2 kHz as the person types', async () => {
+  it('when 4k7 and 47n are typed, then it shows about 720 Hz as the person types', async () => {
     render(<RcCornerCard />);
-    await typeInto('Resistance (Ω)', '15k');
-    await typeInto('Capacitance (F)', '3.3n');
-    // A fact of the trade: f = 1/(2πRC) = 1/(2π · 15 kΩ · 3.3 nF) ≈ 3.2 kHz.
-    expect(screen.getByText(/^3\.2\d* kHz$/)).toBeInTheDocument();
-    expect(screen.getByText('reads as 15 kΩ')).toBeInTheDocument();
-    expect(screen.getByText('reads as 3.3 nF')).toBeInTheDocument();
+    await typeInto('Resistance (Ω)', '4k7');
+    await typeInto('Capacitance (F)', '47n');
+    // Textbook passive low-pass worked example (from memory): 4.7 kΩ with 47 nF gives 720 Hz.
+    expect(screen.getByText(/^720(\.\d+)? Hz$/)).toBeInTheDocument();
+    expect(screen.getByText('reads as 4.7 kΩ')).toBeInTheDocument();
+    expect(screen.getByText('reads as 47 nF')).toBeInTheDocument();
   });
 
   it('when a value cannot be read, then the field says why in words and the card does not crash', async () => {
@@ -31,7 +31,7 @@ describe('RC corner calculator', () => {
     const input = await typeInto('Resistance (Ω)', 'lots');
     expect(input).toHaveAttribute('aria-invalid', 'true');
     expect(input).toHaveAccessibleDescription(/'lots' is not a value Gridleak can read/);
-    expect(screen.getByText(/Write it like 4\.7k, 4k7, 3n3/)).toBeInTheDocument();
+    expect(screen.getByText(/Write it like 4\.7k, 4k7, 330R, 6n8/)).toBeInTheDocument();
     expect(screen.getByText('Correct the value marked above to see the result.')).toBeInTheDocument();
     expect(screen.queryByText(/Hz$/)).not.toBeInTheDocument();
   });

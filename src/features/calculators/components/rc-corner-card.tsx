@@ -9,8 +9,8 @@ import { MainResult, ResultLine, ResultList } from './result-line';
 
 /** rcCorner: the −3 dB point of a coupling capacitor and grid resistor, a tone control, a filter. */
 export function RcCornerCard() {
-  const resistance = useQuantity('470k', 'Ω');
-  const capacitance = useQuantity('22n', 'F');
+  const resistance = useQuantity('220k', 'Ω');
+  const capacitance = useQuantity('10n', 'F');
   const outcome = calculate([resistance.value, capacitance.value], ([ohms, farads]) => ({
     corner: formatQuantity(rcCorner(ohms, farads), 'Hz'),
     tau: formatQuantity(timeConstant(ohms, farads), 's'),
@@ -23,8 +23,8 @@ export function RcCornerCard() {
       source="Circuit physics: first-order RC network"
     >
       <CardFields>
-        <QuantityInput label="Resistance (Ω)" field={resistance} placeholder="e.g. 470k, 15k" />
-        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 22n, 3n3" />
+        <QuantityInput label="Resistance (Ω)" field={resistance} placeholder="e.g. 220k, 68k" />
+        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 10n, 6n8" />
       </CardFields>
       <ResultPanel outcome={outcome} waiting="Enter the resistance and the capacitance." invalid={anyInvalid(resistance, capacitance)}>
         {(r) => (

@@ -14,8 +14,8 @@ import { VerdictMark } from './verdict-mark';
 
 /** readingVerdict: a bench reading against the service manual's value and tolerance. */
 export function ReadingVerdictCard() {
-  const expected = useQuantity('250 V');
-  const reading = useQuantity('265 V');
+  const expected = useQuantity('180 V');
+  const reading = useQuantity('189 V');
   const [toleranceText, setToleranceText] = useState('10');
   const tolerance = readTolerance(toleranceText);
   const outcome = calculate(
@@ -46,15 +46,15 @@ export function ReadingVerdictCard() {
       source="Gridleak’s verdict rule, as stored with every measurement"
     >
       <CardFields>
-        <QuantityInput label="Expected (manual)" field={expected} placeholder="e.g. 250 V, 4k7" />
+        <QuantityInput label="Expected (manual)" field={expected} placeholder="e.g. 180 V, 2k2" />
         <TextInput
           label="Tolerance (%)"
           value={toleranceText}
           onChange={setToleranceText}
-          placeholder="e.g. 10, or -20/+50"
+          placeholder="e.g. 10, −20/+50, K"
           error={tolerance.error}
         />
-        <QuantityInput label="Your reading" field={reading} placeholder="e.g. 265 V" />
+        <QuantityInput label="Your reading" field={reading} placeholder="e.g. 189 V" />
       </CardFields>
       <ResultPanel
         outcome={outcome}
@@ -75,7 +75,7 @@ export function ReadingVerdictCard() {
             )}
             <ResultNote>
               Check which meter the voltage chart was made with: a modern high-resistance meter can read anodes and screens
-              higher than the chart.
+              higher than the chart (see Meter loading).
             </ResultNote>
           </>
         )}

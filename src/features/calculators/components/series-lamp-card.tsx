@@ -10,7 +10,7 @@ import { SafetyNote } from './safety-note';
 
 /** seriesLampLimitDetail: the most current a series ("dim-bulb") lamp lets through on a first power-up. */
 export function SeriesLampCard() {
-  const watts = useQuantity('60 W', 'W');
+  const watts = useQuantity('40 W', 'W');
   const lampVolts = useQuantity('230 V', 'V');
   const mains = useQuantity('230 V', 'V');
   const outcome = calculate([watts.value, lampVolts.value, mains.value], ([lampWatts, lampVolts, mainsVolts]) => {
@@ -30,7 +30,7 @@ export function SeriesLampCard() {
       source="Circuit physics; tungsten cold resistance about 1/15 of hot (incandescent-lamp reference)"
     >
       <CardFields>
-        <QuantityInput label="Lamp power (W)" field={watts} placeholder="e.g. 60 W" />
+        <QuantityInput label="Lamp power (W)" field={watts} placeholder="e.g. 40 W" />
         <QuantityInput label="Lamp voltage (V)" field={lampVolts} placeholder="e.g. 230 V" />
         <QuantityInput label="Mains (V)" field={mains} placeholder="e.g. 230 V" />
       </CardFields>

@@ -12,8 +12,8 @@ import { SafetyNote } from './safety-note';
 /** tapScaled: what a transformer winding gives when the mains differs from the primary tap it is set to. */
 export function TapScalingCard() {
   const rated = useQuantity('6.3 V', 'V');
-  const tap = useQuantity('220 V', 'V');
-  const mains = useQuantity('240 V', 'V');
+  const tap = useQuantity('210 V', 'V');
+  const mains = useQuantity('235 V', 'V');
   const outcome = calculate([rated.value, tap.value, mains.value], ([ratedVolts, tapVolts, mainsVolts]) => {
     const volts = tapScaled({ ratedVolts, tapVolts, mainsVolts });
     return { volts: formatQuantity(volts, 'V'), off: formatPercent(volts / ratedVolts - 1, true) };
@@ -27,8 +27,8 @@ export function TapScalingCard() {
     >
       <CardFields>
         <QuantityInput label="Winding rated (V)" field={rated} placeholder="e.g. 6.3 V" />
-        <QuantityInput label="Primary tap (V)" field={tap} placeholder="e.g. 220 V" />
-        <QuantityInput label="Mains on the bench (V)" field={mains} placeholder="e.g. 240 V" />
+        <QuantityInput label="Primary tap (V)" field={tap} placeholder="e.g. 210 V" />
+        <QuantityInput label="Mains on the bench (V)" field={mains} placeholder="e.g. 235 V" />
       </CardFields>
       <ResultPanel outcome={outcome} waiting="Fill in the winding, the tap and the mains." invalid={anyInvalid(rated, tap, mains)}>
         {(r) => (

@@ -9,8 +9,8 @@ import { MainResult, ResultLine, ResultList, ResultNote } from './result-line';
 
 /** timeConstant: how quickly an RC network charges or settles (AVC lines, decoupling, bleeders). */
 export function TimeConstantCard() {
-  const resistance = useQuantity('1M', 'Ω');
-  const capacitance = useQuantity('100n', 'F');
+  const resistance = useQuantity('2M2', 'Ω');
+  const capacitance = useQuantity('47n', 'F');
   const outcome = calculate([resistance.value, capacitance.value], ([ohms, farads]) => {
     const tau = timeConstant(ohms, farads);
     return { tau: formatQuantity(tau, 's'), settled: formatQuantity(5 * tau, 's') };
@@ -23,8 +23,8 @@ export function TimeConstantCard() {
       source="Circuit physics: v(t) = V·(1 − e^(−t/RC))"
     >
       <CardFields>
-        <QuantityInput label="Resistance (Ω)" field={resistance} placeholder="e.g. 1M" />
-        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 100n" />
+        <QuantityInput label="Resistance (Ω)" field={resistance} placeholder="e.g. 2M2" />
+        <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 47n" />
       </CardFields>
       <ResultPanel outcome={outcome} waiting="Enter the resistance and the capacitance." invalid={anyInvalid(resistance, capacitance)}>
         {(r) => (

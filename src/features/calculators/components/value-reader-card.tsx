@@ -24,17 +24,17 @@ const KINDS: ReadonlyArray<{ unit: ExpectedUnit | ''; label: string; noun: strin
 export function ValueReaderCard() {
   const kindId = useId();
   const [kind, setKind] = useState<ExpectedUnit | ''>('');
-  const field = useQuantity('4k7', kind === '' ? undefined : kind);
+  const field = useQuantity('330R', kind === '' ? undefined : kind);
   const outcome = calculate([field.value, field.unit, field.display], ([value, unit, display]) => ({ value, unit, display }));
   return (
     <CalculatorCard
       title="Value reader"
       description="A value as it is printed on a part or a diagram."
-      formula="4k7 = 4.7 kΩ · 3n3 = 3.3 nF · R47 = 0.47 Ω · M47 read as capacitance = 0.47 µF · 0.05 mfd = 50 nF"
-      source="IEC 60062 letter-and-digit code; SI prefixes; mfd/mmfd as on old American parts"
+      formula="2k2 = 2.2 kΩ · 330R = 330 Ω · 6n8 = 6.8 nF · M22 read as capacitance = 0.22 µF · 0.02 mfd = 20 nF · 8 MF = 8 µF · 1.6 kV"
+      source="IEC 60062 letter-and-digit code; SI prefixes; mfd, MF and mmfd as on old American parts; WV, VDC, VAC as printed on ratings"
     >
       <CardFields>
-        <QuantityInput label="Value as written" field={field} placeholder="e.g. 4k7, 3n3, 250 V" />
+        <QuantityInput label="Value as written" field={field} placeholder="e.g. 330R, 6n8, 8 MF, 350 WVDC" />
         <div className="space-y-1">
           <label htmlFor={kindId} className="block font-semibold">
             Read as
@@ -48,7 +48,7 @@ export function ValueReaderCard() {
           </select>
         </div>
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Type a value, for example 4k7 or 0.05 µF." invalid={field.error !== undefined}>
+      <ResultPanel outcome={outcome} waiting="Type a value, for example 330R or 0.02 µF." invalid={field.error !== undefined}>
         {(r) => (
           <>
             <MainResult label="Value" value={r.display} />

@@ -33,6 +33,45 @@ describe('measurement form', () => {
     expect(preview()).toHaveTextContent(/Reads 1\.1 Ω against an expected maximum of 2\.1 Ω for 22 µF 25 V .*: within\./);
   });
 
+  it('when an insulation tester shows OL, then the preview says over range, above the minimum, and passes', async () => {
+    fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'insulation');
+    await user.type(screen.getByLabelText(/^Reading/), 'OL');
+    // in-service inspection code of practice: Class I minimum 1 MΩ at 500 V DC; over range is above any minimum (common practice)
+    expect(within(preview()).getByText('over range, above the 1 MΩ minimum')).toBeInTheDocument();
+    expect(within(preview()).getByText('within')).toBeInTheDocument();
+  });
+
+  it('when a cathode bias is typed positive against a negative grid bias, then the preview compares sizes and says why', async () => {
+    fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'dc-voltage');
+    await user.type(screen.getByLabelText('Expected (manual)'), '-8.2');
+    await user.type(screen.getByLabelText(/^Reading/), '8.4 V');
+    expect(within(preview()).getByText('+2.4 %')).toBeInTheDocument(); // by hand: 8.4 / 8.2 − 1, not −202 %
+    expect(preview()).toHaveTextContent(/opposite signs/);
+  });
+
+  it('when the chart was taken with a 1 kΩ/V meter, then a 20 kΩ/V reading is judged against what it should read there', async () => {
+    fakeReadingsApi([]);
+    const user = userEvent.setup();
+    renderWithQueries(<MeasurementForm restorationId={7} />);
+    await user.selectOptions(screen.getByLabelText('Quantity'), 'dc-voltage');
+    await user.type(screen.getByLabelText('Expected (manual)'), '100');
+    await user.type(screen.getByLabelText(/^Tolerance/), '5');
+    await user.type(screen.getByLabelText(/^Reading/), '106');
+    expect(within(preview()).getByText('marginal')).toBeInTheDocument(); // +6 % against the chart's own figure
+    await user.type(screen.getByLabelText('Chart’s meter'), '1k/V 1000 V');
+    await user.type(screen.getByLabelText('Your meter'), '20k/V 250 V');
+    await user.type(screen.getByLabelText('Source resistance'), '100k');
+    // worked by hand with the divider formula: this meter should read 107.8 V there, so 106 V is within ±5 %
+    expect(within(preview()).getByText('within')).toBeInTheDocument();
+    expect(preview()).toHaveTextContent(/reads about 8 % higher than the manual's 1 kΩ\/V meter/);
+  });
+
   it('when the quantity changes, then the labels follow: nominal capacitance and rating for ESR, a minimum for insulation', async () => {
     fakeReadingsApi([]);
     const user = userEvent.setup();

@@ -4,7 +4,9 @@ import { quantityLabels, type Measurement } from '../../../../shared/schemas/mea
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useReadingForm } from '../hooks/use-reading-form';
+import { toleranceHint } from '../lib/tolerance-hint';
 import { LiveReadingsNote } from './live-readings-note';
+import { MeterLoadingFields } from './meter-loading-fields';
 import { VerdictPreviewPanel } from './verdict-preview-panel';
 
 export interface FindingChoice {
@@ -54,7 +56,7 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
           {(a) => <input {...a} {...register('expected')} {...typed} className={valueInput} placeholder={fields.expectedPlaceholder} />}
         </Field>
         {fields.showTolerance && (
-          <Field label="Tolerance (%)" hint="Blank for the usual ±20 %; -20/+50 for uneven" error={errorOf('tolerance')}>
+          <Field label="Tolerance (%)" hint={toleranceHint(form.watch('quantity'))} error={errorOf('tolerance')}>
             {(a) => <input {...a} {...register('tolerance')} {...typed} className={valueInput} placeholder="e.g. 10" inputMode="text" />}
           </Field>
         )}
@@ -67,6 +69,9 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
           {(a) => <input {...a} {...register('reading')} {...typed} className={valueInput} placeholder={fields.readingPlaceholder} />}
         </Field>
       </div>
+      {(form.watch('quantity') === 'dc-voltage' || form.watch('quantity') === 'ac-voltage') && (
+        <MeterLoadingFields register={register} errorOf={errorOf} open={Boolean(form.getValues('chartMeter'))} />
+      )}
       <VerdictPreviewPanel preview={preview} />
       <div className="grid gap-3 sm:grid-cols-2">
         <Field label="Conditions" hint="e.g. 236 V mains on the 245 V tap, no signal, volume minimum" error={errorOf('conditions')}>

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { quantityLabels, type Measurement } from '../../../../shared/schemas/measurements';
 import { buttonClass } from '../../../components/button';
 import { useDeleteMeasurement } from '../api/delete-measurement';
-import { expectedSummary, formatDeviation, formatWhen, judgedByLimit } from '../lib/measurement-format';
+import { deviationWords, expectedSummary, formatWhen } from '../lib/measurement-format';
 import { VerdictBadge } from './verdict-badge';
 
 const cell = 'px-3 py-2 align-top';
@@ -26,10 +26,7 @@ export function MeasurementRow({ restorationId, m, canRecord, onEdit }: {
       <td className={cell}>{quantityLabels[m.quantity]}</td>
       <td className={`${cell} font-mono`}>{expectedSummary(m)}</td>
       <td className={`${cell} whitespace-nowrap font-mono`}>{m.readingText}</td>
-      <td className={`${cell} font-mono whitespace-nowrap`}>
-        {formatDeviation(m.deviation)}
-        {judgedByLimit(m.quantity) && m.deviation !== null && <span className="block font-sans text-xs text-ink-soft">against the limit</span>}
-      </td>
+      <td className={`${cell} font-mono`}>{deviationWords(m)}</td>
       <td className={cell}>
         <VerdictBadge verdict={m.verdict} reason={m.verdictReason} />
         <details className="mt-1 text-sm">

@@ -42,7 +42,7 @@ describe('readings tab', () => {
     const row = (await within(await screen.findByRole('table', { name: 'All readings, newest first' })).findByRole('rowheader', { name: /C26/ })).closest('tr') as HTMLElement;
     expect(within(row).getByText('ESR')).toBeInTheDocument();
     expect(within(row).getByText('22µ 25 V')).toHaveClass('font-mono');
-    expect(within(row).getByText('−47.6 %')).toBeInTheDocument();
+    expect(within(row).getByText('1.1 Ω, within the 2.1 Ω maximum')).toBeInTheDocument();
     expect(within(row).getByText('within')).toHaveAttribute('title', expect.stringMatching(/^Reads 1\.1 Ω against an expected maximum of 2\.1 Ω/));
     expect(within(row).getByText('Ada Bench')).toBeInTheDocument();
     expect(within(row).queryByRole('button', { name: /Change|Delete/ })).not.toBeInTheDocument();

@@ -2,6 +2,7 @@ import type { Valve } from '../../../../shared/schemas/measurements';
 import { buttonClass } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import { useLineUpEditor } from '../hooks/use-line-up-editor';
+import { HeaterSummaryLine } from './heater-summary-line';
 import { LiveChassisCaution } from './live-chassis-caution';
 import { ValveDecoded } from './valve-decoded';
 
@@ -48,6 +49,7 @@ export function ValveLineUpEditor({ restorationId, valves, cautioned, onClose }:
           );
         })}
       </ol>
+      <HeaterSummaryLine types={editor.rows.map((r) => r.type)} />
       {editor.serverMessage && (
         <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">Not saved: {editor.serverMessage}</p>
       )}

@@ -35,7 +35,7 @@ describe('valve line-up', () => {
     expect(screen.getByRole('note')).toHaveTextContent(caution);
   });
 
-  it('when a technician lists the valves, then types are decoded as typed, an unknown one gets the library’s words, and all are saved at once', async () => {
+  it('when a technician lists the valves, then types are decoded as typed, an American one is decoded too, and all are saved at once', async () => {
     const { calls } = fakeReadingsApi([]);
     const user = userEvent.setup();
     const { client } = renderWithQueries(<ValveLineUp restorationId={7} role="technician" />);
@@ -45,8 +45,8 @@ describe('valve line-up', () => {
     await user.type(screen.getByLabelText('Type of V1'), 'EL84');
     expect(screen.getByText('6.3 V parallel')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Add valve' }));
-    await user.type(screen.getByLabelText('Type of V2'), '6V6');
-    expect(screen.getByText(/is not a European valve designation.*American type number/)).toBeInTheDocument();
+    await user.type(screen.getByLabelText('Type of V2'), '6V6GT');
+    expect(screen.getByText('glass T-9 bulb (GT)')).toBeInTheDocument(); // RETMA numbering page: GT = glass T-9 bulb
     await user.click(screen.getByRole('button', { name: 'Add valve' }));
     await user.type(screen.getByLabelText('Type of V3'), 'UY41');
     expect(screen.getByRole('alert')).toHaveTextContent(caution);
@@ -55,7 +55,7 @@ describe('valve line-up', () => {
     await waitFor(() => expect(calls.find((c) => c.method === 'PUT')).toBeDefined());
     expect(calls.find((c) => c.method === 'PUT')).toMatchObject({
       url: '/api/restorations/7/valves',
-      body: { valves: [{ position: 'V1', type: 'EL84', notes: '' }, { position: 'V2', type: '6V6', notes: '' }, { position: 'V3', type: 'UY41', notes: '' }] },
+      body: { valves: [{ position: 'V1', type: 'EL84', notes: '' }, { position: 'V2', type: '6V6GT', notes: '' }, { position: 'V3', type: 'UY41', notes: '' }] },
     });
     expect(await screen.findByRole('list', { name: 'Valve line-up' })).toBeInTheDocument();
     expect(screen.getByRole('note')).toHaveTextContent(caution);

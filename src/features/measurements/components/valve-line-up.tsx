@@ -3,6 +3,7 @@ import { can, type Role } from '../../../../shared/permissions';
 import { buttonClass } from '../../../components/button';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
 import { useValves } from '../api/get-valves';
+import { HeaterSummaryLine } from './heater-summary-line';
 import { LiveChassisCaution } from './live-chassis-caution';
 import { ValveDecoded } from './valve-decoded';
 import { ValveLineUpEditor } from './valve-line-up-editor';
@@ -42,6 +43,7 @@ export function ValveLineUp({ restorationId, role, liveChassis = false }: { rest
           ))}
         </ul>
       )}
+      {!editing && valves.length > 0 && <HeaterSummaryLine types={valves.map((v) => v.type)} />}
       {canEdit && !editing && (
         <button type="button" className={buttonClass('quiet')} onClick={() => setEditing(true)}>
           {valves.length ? 'Change the line-up' : 'List the valves'}

@@ -1,5 +1,4 @@
 import type { Preview } from '../lib/verdict-preview';
-import { formatDeviation } from '../lib/measurement-format';
 import { VerdictBadge } from './verdict-badge';
 
 /** The verdict the reading will get, worked out as it is typed; the server's verdict counts once saved. */
@@ -15,8 +14,9 @@ export function VerdictPreviewPanel({ preview }: { preview: Preview }) {
       {preview.status === 'ready' && (
         <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
           <VerdictBadge verdict={preview.verdict.verdict} large />
-          <span className="font-mono">{formatDeviation(preview.verdict.deviation)}</span>
+          <span className="font-mono">{preview.verdict.summary}</span>
           <p className="w-full text-sm">{preview.verdict.reason}</p>
+          {preview.verdict.hint && <p className="w-full text-sm font-semibold">{preview.verdict.hint}</p>}
         </div>
       )}
     </div>

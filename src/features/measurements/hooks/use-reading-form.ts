@@ -16,12 +16,12 @@ type Output = z.output<typeof formSchema>;
 
 const blank: ReadingFormValues = {
   location: '', quantity: 'esr', expected: '', tolerance: '', rating: '', reading: '',
-  conditions: '', method: '', findingId: '', ownerVisible: false, powerOn: false,
+  conditions: '', method: '', chartMeter: '', meter: '', source: '', findingId: '', ownerVisible: false, powerOn: false,
 };
 
 const valuesOf = (m: Measurement): ReadingFormValues => ({
   location: m.location, quantity: m.quantity, expected: m.expectedText, tolerance: m.toleranceText, rating: m.ratingText,
-  reading: m.readingText, conditions: m.conditions, method: m.method, findingId: m.findingId === null ? '' : String(m.findingId),
+  reading: m.readingText, conditions: m.conditions, method: m.method, chartMeter: m.chartMeterText, meter: m.meterText, source: m.sourceText, findingId: m.findingId === null ? '' : String(m.findingId),
   ownerVisible: m.ownerVisible, powerOn: m.powerOn,
 });
 
@@ -39,11 +39,11 @@ export function useReadingForm({ restorationId, measurement, findingId, onDone }
     resolver: zodResolver(formSchema),
     defaultValues: measurement ? valuesOf(measurement) : { ...blank, findingId: findingId ? String(findingId) : '' },
   });
-  const [quantity = 'esr', expected = '', tolerance = '', rating = '', reading = ''] = useWatch({
+  const [quantity = 'esr', expected = '', tolerance = '', rating = '', reading = '', chartMeter = '', meter = '', source = ''] = useWatch({
     control: form.control,
-    name: ['quantity', 'expected', 'tolerance', 'rating', 'reading'],
+    name: ['quantity', 'expected', 'tolerance', 'rating', 'reading', 'chartMeter', 'meter', 'source'],
   });
-  const preview = previewVerdict({ quantity, expected, tolerance, rating, reading });
+  const preview = previewVerdict({ quantity, expected, tolerance, rating, reading, chartMeter, meter, source });
   const create = useCreateMeasurement(restorationId);
   const update = useUpdateMeasurement(restorationId);
   const saving = measurement ? update : create;
@@ -69,7 +69,7 @@ export function useReadingForm({ restorationId, measurement, findingId, onDone }
     create.mutate(input, {
       onSuccess: () => {
         // Readings come in runs of one kind: keep the kind, meter and conditions, clear the point itself.
-        form.reset({ ...form.getValues(), location: '', expected: '', rating: '', reading: '' });
+        form.reset({ ...form.getValues(), location: '', expected: '', rating: '', reading: '', source: '' });
         onDone?.();
       },
     });

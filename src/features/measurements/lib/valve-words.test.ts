@@ -9,7 +9,8 @@ describe('valveWords', () => {
   });
 
   it('passes on the library’s words for a type it cannot read', () => {
-    expect(valveWords('6V6')).toEqual({ ok: false, message: expect.stringMatching(/American type number/) });
+    expect(valveWords('6')).toEqual({ ok: false, message: expect.stringMatching(/American type number/) });
+    expect(valveWords('6V6GT')).toMatchObject({ ok: true, heater: '6.3 V parallel', systems: 'glass T-9 bulb (GT)' }); // RETMA numbering page
     expect(valveWords(' ')).toEqual({ ok: false, message: 'Enter the type printed on the valve.' });
   });
 });

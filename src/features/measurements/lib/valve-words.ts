@@ -28,7 +28,9 @@ export function valveWords(type: string): ValveWords {
   if (type.trim() === '') return { ok: false, message: 'Enter the type printed on the valve.' };
   try {
     const v = valveType(type);
-    const words: ValveWords = { ok: true, heater: heaterWords(v.heater), systems: v.systems.join('; '), base: v.base };
+    // American type numbers name no electrode systems; their suffix (GT, A…) is said instead.
+    const systems = v.systems.join('; ') || v.suffixWords?.join('; ') || 'not said by the name; see the type’s data';
+    const words: ValveWords = { ok: true, heater: heaterWords(v.heater), systems, base: v.base };
     if (v.data) words.description = v.data.description;
     return words;
   } catch (error) {

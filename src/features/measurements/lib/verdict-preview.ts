@@ -3,7 +3,8 @@ import type { MeasuredQuantity, MeasurementVerdict } from '../../../../shared/be
 import { quantityFields } from './quantity-fields';
 
 /** The form's fields a message can be about. */
-export type ReadingField = 'location' | 'quantity' | 'expected' | 'tolerance' | 'rating' | 'reading' | 'conditions' | 'method' | 'findingId';
+export type ReadingField =
+  | 'location' | 'quantity' | 'expected' | 'tolerance' | 'rating' | 'reading' | 'conditions' | 'method' | 'findingId' | 'chartMeter' | 'meter' | 'source';
 
 export interface ReadingTexts {
   quantity: MeasuredQuantity;
@@ -11,6 +12,10 @@ export interface ReadingTexts {
   tolerance: string;
   rating: string;
   reading: string;
+  /** Voltages only: the chart's meter, yours, and the point's source resistance (all three, or the chart's figure stands). */
+  chartMeter?: string;
+  meter?: string;
+  source?: string;
 }
 
 export type Preview =
@@ -22,11 +27,13 @@ export type Preview =
 const PREFIXES: Record<string, ReadingField> = {
   reading: 'reading', 'expected value': 'expected', expected: 'expected', rating: 'rating', tolerance: 'tolerance',
   location: 'location', quantity: 'quantity', conditions: 'conditions', method: 'method', findingid: 'findingId',
+  "chart's meter": 'chartMeter', 'chart’s meter': 'chartMeter', chartmeter: 'chartMeter', 'your meter': 'meter', meter: 'meter',
+  'source resistance': 'source', source: 'source',
 };
 
 /** Which field a message from the bench library or the API is about, if it says. */
 export function fieldOfMessage(message: string): ReadingField | undefined {
-  const prefix = /^([A-Za-z ]+):/.exec(message)?.[1]?.trim().toLowerCase();
+  const prefix = /^([A-Za-z '’]+):/.exec(message)?.[1]?.trim().toLowerCase();
   if (prefix !== undefined && prefix in PREFIXES) return PREFIXES[prefix];
   if (/expected value/i.test(message)) return 'expected';
   if (/tolerance|below what is expected/i.test(message)) return 'tolerance';
@@ -36,7 +43,11 @@ export function fieldOfMessage(message: string): ReadingField | undefined {
 /** Drops what a kind of reading does not use, so a value left over from another kind does not count. */
 export function relevantTexts(texts: ReadingTexts): ReadingTexts {
   const fields = quantityFields[texts.quantity];
-  return { ...texts, tolerance: fields.showTolerance ? texts.tolerance : '', rating: fields.showRating ? texts.rating : '' };
+  const volts = texts.quantity === 'dc-voltage' || texts.quantity === 'ac-voltage';
+  return {
+    ...texts, tolerance: fields.showTolerance ? texts.tolerance : '', rating: fields.showRating ? texts.rating : '',
+    chartMeter: volts ? (texts.chartMeter ?? '') : '', meter: volts ? (texts.meter ?? '') : '', source: volts ? (texts.source ?? '') : '',
+  };
 }
 
 /** The verdict the server will store, worked out as the person types; waits for a reading. */

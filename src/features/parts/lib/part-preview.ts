@@ -22,5 +22,6 @@ export function previewWarnings(d: Draft): PartWarning[] {
 export function isCapacitor(d: Pick<Part, 'componentRef' | 'originalPart' | 'originalRating' | 'replacementPart' | 'replacementRating'>): boolean {
   if (/^C\d/i.test(d.componentRef.trim())) return true;
   const text = joined(d.originalPart, d.originalRating, d.replacementPart, d.replacementRating);
-  return /capacitor|electrolytic|\bcap\b|\d\s*[pnuµμ]F|\d[pnuµμ]\d/i.test(text);
+  // Capacitances as marked: 47µF, 47UF, 0.1 mfd, 8 MF (old American microfarads), 100 mmfd, 4n7.
+  return /capacitor|electrolytic|\bcap\b|\d\s*[pnuµμ]F|\d\s*m{0,2}fd\b|\d\s*MF\b|\d[pnuµμ]\d/i.test(text);
 }
