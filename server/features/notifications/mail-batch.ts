@@ -18,12 +18,8 @@ export async function flushNotificationMail(deps: Pick<AppDeps, 'db' | 'mailer' 
       .select({ id: notifications.id, userId: notifications.userId, summary: notifications.summary, findingId: notifications.findingId,
         restorationId: notifications.restorationId, photoId: findings.photoId })
       .from(notifications)
-      .innerJoin(findings, notificationJoins.finding)
-      .innerJoin(photos, notificationJoins.photo)
-      .innerJoin(memberships, notificationJoins.membership)
-      .leftJoin(comments, notificationJoins.comment)
-      // Judged at send time: an item its reader may no longer see (unshared since) is not mailed.
-      .where(and(isNull(notifications.emailedAt), isNull(notifications.readAt), notificationVisible))
+      .innerJoin(findings, eq(findings.id, notifications.findingId))
+      .where(and(isNull(notifications.emailedAt), isNull(notifications.readAt)))
       .orderBy(notifications.id)
       .for('update', { of: notifications, skipLocked: true });
     if (!pending.length) return 0;
@@ -36,7 +32,19 @@ export async function flushNotificationMail(deps: Pick<AppDeps, 'db' | 'mailer' 
       if (!lock?.ok) continue;
       const [last] = await tx.select({ at: max(notifications.emailedAt) }).from(notifications).where(eq(notifications.userId, person.id));
       if (last?.at && now.getTime() - last.at.getTime() < windowMs) continue;
-      const items = pending.filter((p) => p.userId === person.id);
+      // Judged at send time: an item its reader may no longer see (unshared since) is not mailed, and stays unsent.
+      const mine = pending.filter((p) => p.userId === person.id);
+      const readable = await tx
+        .select({ id: notifications.id })
+        .from(notifications)
+        .innerJoin(findings, notificationJoins.finding)
+        .innerJoin(photos, notificationJoins.photo)
+        .innerJoin(memberships, notificationJoins.membership)
+        .leftJoin(comments, notificationJoins.comment)
+        .where(and(inArray(notifications.id, mine.map((i) => i.id)), notificationVisible));
+      const ids = new Set(readable.map((r) => r.id));
+      const items = mine.filter((i) => ids.has(i.id));
+      if (!items.length) continue;
       const lines = items.map((i) => `• ${i.summary}\n  ${deps.config.publicOrigin}${findingPath({ restorationId: i.restorationId, photoId: i.photoId, id: i.findingId })}`);
       await deps.mailer.send({
         to: person.email,
