@@ -129,7 +129,8 @@ const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all:
 export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification'] as const;
 export type VisibilitySubject = (typeof visibilitySubjects)[number];
 
-const everything: Record<VisibilitySubject, Condition> = Object.fromEntries(visibilitySubjects.map((s) => [s, { always: true }])) as never;
+const all: Condition = { always: true };
+const everything: Record<VisibilitySubject, Condition> = { photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all };
 
 export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   technician: everything,

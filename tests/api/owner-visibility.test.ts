@@ -75,6 +75,11 @@ describe('a finding history from before it was shared stays in the workshop', ()
 
     const events = JSON.stringify((await owner.get(`/api/restorations/${restorationId}/events`)).body);
     expect(events).toContain('Suspected → Repaired');
+    // The open question to the mentors stays the workshop's, wherever the owner reads the finding.
+    expect((await tech.get(`/api/findings/${f.id}`)).body.questionOpen).toBe(true);
+    expect((await owner.get(`/api/findings/${f.id}`)).body.questionOpen).toBe(false);
+    expect((await owner.get(`/api/photos/${sharedPhoto}/findings`)).body.find((x: { id: number }) => x.id === f.id).questionOpen).toBe(false);
+    expect((await owner.get(`/api/restorations/${restorationId}/findings`)).body.find((x: { id: number }) => x.id === f.id).questionOpen).toBe(false);
     expect(events).not.toMatch(/Dismissed|OLD-TITLE-SECRET|question/i);
   });
 });

@@ -41,4 +41,50 @@ describe('the owner at home, on a phone', () => {
     expect(text).not.toContain('Perished rubber wiring');
     expect(text).not.toContain('Positive grid with a red anode');
   });
+
+  it('when the owner opens a shared hazard on the photo and the parts ledger, then they read owner pages: no tools, Fit, owner cautions, no planned parts, shopping list or CSV', async () => {
+    const page = await newPage(ctx.browser, { width: 1280, height: 900 });
+    await signInAs(page, ctx.product.origin, 'philippa@example.test');
+    const target = await page.evaluate(async () => {
+      const sets = (await (await fetch('/api/restorations')).json()) as { id: number; model: string; role: string }[];
+      const set = sets.find((s) => s.model === 'Meridian 54' && s.role === 'owner')!;
+      const list = (await (await fetch(`/api/restorations/${set.id}/findings`)).json()) as { id: number; photoId: number; title: string }[];
+      const f = list.find((x) => x.title === 'Bulging filter capacitor')!;
+      return { restorationId: set.id, photoId: f.photoId, findingId: f.id };
+    });
+
+    await page.goto(`${ctx.product.origin}/restorations/${target.restorationId}/photos/${target.photoId}/findings/${target.findingId}`);
+    await page.getByRole('heading', { name: 'Bulging filter capacitor' }).waitFor();
+    // The thread has loaded (its shared reply is there) before the internal replies are looked for.
+    await page.getByText('Restuffed with 47 µF 450 V; HT now 262 V and the hum has gone.').waitFor();
+    expect(await page.getByText('Restuff it: the owner asked').count()).toBe(0);
+    expect(await page.getByText('trace of electrolyte').count()).toBe(0);
+
+    // A read-only photo: zoom and legend, no markup tools, Undo or Keys.
+    await page.getByTestId('markup-stage').waitFor();
+    for (const name of ['Select', 'Undo', /Keys/]) expect(await page.getByRole('button', { name }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: 'Fit' }).count()).toBe(1);
+    // At Fit the whole photo is on the stage and fills it along one side (the meaning of "fit to window").
+    const probe = await page.evaluate(() => {
+      type Size = { width: number; height: number };
+      const m = (window as unknown as { __gridleakMarkup: { view: { scale: number }; image: Size; stage: Size } }).__gridleakMarkup;
+      return { scale: m.view.scale, image: m.image, stage: m.stage };
+    });
+    const shown = { width: probe.image.width * probe.scale, height: probe.image.height * probe.scale };
+    expect(shown.width).toBeLessThanOrEqual(probe.stage.width);
+    expect(shown.height).toBeLessThanOrEqual(probe.stage.height);
+    expect(Math.max(shown.width / probe.stage.width, shown.height / probe.stage.height)).toBeGreaterThan(0.85);
+
+    // The hazard's caution speaks to the owner, not the bench routine.
+    await page.getByText('let only a competent person open it').first().waitFor();
+    expect(await page.getByText(/switch off, unplug|discharge the filter/).count()).toBe(0);
+
+    await page.goto(`${ctx.product.origin}/restorations/${target.restorationId}/parts`);
+    await page.getByRole('row', { name: 'Part C30' }).waitFor();
+    expect(await page.getByRole('row', { name: 'Part C2' }).count()).toBe(0);
+    expect(await page.getByRole('link', { name: 'Export CSV' }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: 'Shopping list' }).count()).toBe(0);
+    expect(await page.getByText('Order an X2 part instead').count()).toBe(0);
+    await page.screenshot({ path: artifactPath('owner-parts.png'), fullPage: true });
+  });
 });

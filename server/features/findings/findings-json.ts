@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import type { Role } from '../../../shared/permissions';
+import { can, type Role } from '../../../shared/permissions';
 import type { Database } from '../../db/client';
 import { visibleSql } from '../visibility/visibility-sql';
 
@@ -24,7 +24,7 @@ export async function photoFindingsJson(db: Database, photoId: number, role: Rol
       select f.id, f.photo_id as "photoId", f.restoration_id as "restorationId", f.number, f.shape, f.points, f.title,
         f.component_ref as "componentRef", f.kind, f.severity, f.status, f.dismiss_reason as "dismissReason",
         f.owner_visible as "ownerVisible", f.author_id as "authorId", u.name as "authorName",
-        f.question_open as "questionOpen", coalesce(c.n, 0) as "commentCount",
+        (${can(role, 'workshop.view')} and f.question_open) as "questionOpen", coalesce(c.n, 0) as "commentCount",
         ${iso('created_at')} as "createdAt", ${iso('updated_at')} as "updatedAt"
       from findings f
       join photos p on p.id = f.photo_id

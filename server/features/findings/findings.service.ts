@@ -12,11 +12,12 @@ import { findingsRepo, type FindingWithContext } from './findings.repo';
 
 type Actor = { id: number; name: string; role: Role };
 
-export const toFinding = (f: FindingWithContext): Finding => ({
+/** A finding as the API sends it; a question to the mentors is the workshop's business, so others read it as closed. */
+export const toFinding = (f: FindingWithContext, reader?: Role): Finding => ({
   id: f.id, photoId: f.photoId, restorationId: f.restorationId, number: f.number, shape: f.shape, points: f.points,
   title: f.title, componentRef: f.componentRef, kind: f.kind, severity: f.severity, status: f.status,
   dismissReason: f.dismissReason, ownerVisible: f.ownerVisible, authorId: f.authorId, authorName: f.authorName,
-  questionOpen: f.questionOpen, commentCount: f.commentCount, createdAt: f.createdAt.toISOString(), updatedAt: f.updatedAt.toISOString(),
+  questionOpen: f.questionOpen && (reader === undefined || can(reader, 'workshop.view')), commentCount: f.commentCount, createdAt: f.createdAt.toISOString(), updatedAt: f.updatedAt.toISOString(),
 });
 
 /** Whether an owner may see the finding (it and its photo are shared), by the one rule in shared/permissions.ts. */
@@ -44,10 +45,10 @@ export function findingsService(deps: AppDeps) {
       return photoFindingsJson(deps.db, photoId, role);
     },
     async listByRestoration(restorationId: number, role: Role) {
-      return (await repo.listByRestoration(restorationId, role)).map(toFinding);
+      return (await repo.listByRestoration(restorationId, role)).map((f) => toFinding(f, role));
     },
     async get(id: number, role: Role) {
-      return toFinding(await visible(id, role));
+      return toFinding(await visible(id, role), role);
     },
     async create(photoId: number, input: FindingInput & { ownerVisible: boolean }, actor: Actor) {
       const photo = await photos.find(photoId);

@@ -20,12 +20,8 @@ async function claimDue(deps: Pick<AppDeps, 'db' | 'config'>, now: Date): Promis
       .select({ id: notifications.id, userId: notifications.userId, summary: notifications.summary, findingId: notifications.findingId,
         restorationId: notifications.restorationId, photoId: findings.photoId })
       .from(notifications)
-      .innerJoin(findings, notificationJoins.finding)
-      .innerJoin(photos, notificationJoins.photo)
-      .innerJoin(memberships, notificationJoins.membership)
-      .leftJoin(comments, notificationJoins.comment)
-      // Judged at send time: an item its reader may no longer see (unshared since) is not mailed.
-      .where(and(isNull(notifications.mailClaimedAt), isNull(notifications.emailedAt), isNull(notifications.readAt), notificationVisible))
+      .innerJoin(findings, eq(findings.id, notifications.findingId))
+      .where(and(isNull(notifications.mailClaimedAt), isNull(notifications.emailedAt), isNull(notifications.readAt)))
       .orderBy(notifications.id)
       .for('update', { of: notifications, skipLocked: true });
     if (!pending.length) return [];
@@ -40,7 +36,19 @@ async function claimDue(deps: Pick<AppDeps, 'db' | 'config'>, now: Date): Promis
         .from(notifications)
         .where(eq(notifications.userId, person.id));
       if (last?.at && now.getTime() - last.at.getTime() < windowMs) continue;
-      const items = pending.filter((p) => p.userId === person.id);
+      // Judged at send time: an item its reader may no longer see (unshared since) is not mailed, and stays unsent.
+      const mine = pending.filter((p) => p.userId === person.id);
+      const readable = await tx
+        .select({ id: notifications.id })
+        .from(notifications)
+        .innerJoin(findings, notificationJoins.finding)
+        .innerJoin(photos, notificationJoins.photo)
+        .innerJoin(memberships, notificationJoins.membership)
+        .leftJoin(comments, notificationJoins.comment)
+        .where(and(inArray(notifications.id, mine.map((i) => i.id)), notificationVisible));
+      const visibleIds = new Set(readable.map((r) => r.id));
+      const items = mine.filter((i) => visibleIds.has(i.id));
+      if (!items.length) continue;
       await tx.update(notifications).set({ mailClaimedAt: now }).where(inArray(notifications.id, items.map((i) => i.id)));
       claimed.push({ person, items });
     }

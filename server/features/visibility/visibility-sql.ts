@@ -61,5 +61,5 @@ export function visibleSqlByRole(role: SQLWrapper, subject: VisibilitySubject, s
   return or(...roles.map((r) => and(eq(role as never, r), visibleSql(r, subject, sources))))!;
 }
 
-/** The fields the owner's rule for a subject reads, for queries that must select them. */
+/** Every field any role's rule for a subject reads (a query, or a test, must give a source for each). */
 export const fieldsRead = (subject: VisibilitySubject) => [...new Set(roles.flatMap((r) => fieldsOf(visibility[r][subject])))];

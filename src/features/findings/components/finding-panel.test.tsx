@@ -123,6 +123,14 @@ describe('finding panel', () => {
     expect(screen.getByRole('note')).toHaveTextContent(/AC\/DC sets may have a live chassis\. Follow local codes and licensed practice\./);
   });
 
+  it('when an owner opens a hazard, then the caution is in owner words, not the bench routine', async () => {
+    const finding = makeFinding(4, { severity: 'hazard', kind: 'hazard', ownerVisible: true });
+    photoApi(finding, () => ok(finding)).release();
+    await renderPanel(finding, 'owner', 3);
+    expect(screen.getByRole('note')).toHaveTextContent(/let only a competent person open it/);
+    expect(screen.getByRole('note')).not.toHaveTextContent(/switch off|unplug|discharge/);
+  });
+
   it('when an owner opens a shared finding, then there are no edit controls, and the thread offers no internal choice', async () => {
     const finding = makeFinding(4, { ownerVisible: true, componentRef: 'V3', kind: 'overheated', severity: 'fault' });
     const api = photoApi(finding, () => ok(finding));

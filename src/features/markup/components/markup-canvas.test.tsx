@@ -73,6 +73,18 @@ describe('MarkupCanvas toolbar', () => {
   });
 });
 
+describe('MarkupCanvas read-only', () => {
+  it('when the person may neither place nor change marks, then there are no tools, Undo or Keys, and a finding opened by URL leaves the photo at Fit', () => {
+    const { zoom } = renderCanvas({ canCreate: false, canEdit: () => false, focusId: 1, selectedId: 1 });
+    expect(screen.queryByRole('button', { name: 'Select' })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Undo/ })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Keys/ })).not.toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Fit' })).toBeInTheDocument();
+    // Fit, worked by hand above: (600 − 2 × 16) / 3000 = 19 %.
+    expect(zoom()).toHaveTextContent('19 %');
+  });
+});
+
 describe('MarkupCanvas help and zoom', () => {
   it('when ? is pressed, then the keys panel opens from the key map, and Escape closes it back to the canvas', async () => {
     const { user, stage } = renderCanvas();

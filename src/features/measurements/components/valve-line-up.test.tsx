@@ -17,7 +17,7 @@ const caution = /Live chassis likely: series heaters mean the chassis may be con
 describe('valve line-up', () => {
   it('when the line-up has series heaters, then each valve is decoded in words and the live-chassis caution stands out', async () => {
     fakeReadingsApi([], { lineUp: seriesLineUp });
-    renderWithQueries(<ValveLineUp restorationId={7} role="owner" />);
+    renderWithQueries(<ValveLineUp restorationId={7} role="mentor" />);
     const list = await screen.findByRole('list', { name: 'Valve line-up' });
     const v1 = within(list).getAllByRole('listitem')[0]!;
     expect(v1).toHaveTextContent('V1UCH42');
@@ -25,6 +25,15 @@ describe('valve line-up', () => {
     expect(within(v1).getByText(/small-signal triode; hexode or heptode/)).toBeInTheDocument();
     expect(screen.getByRole('note')).toHaveTextContent(caution);
     expect(screen.getByText('UCH42: heater letter U is a series-string heater (100 mA)')).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /line-up|List the valves/ })).not.toBeInTheDocument();
+  });
+
+  it('when an owner reads a series-heater line-up, then the live-chassis caution is in owner words, not the bench routine', async () => {
+    fakeReadingsApi([], { lineUp: seriesLineUp });
+    renderWithQueries(<ValveLineUp restorationId={7} role="owner" />);
+    await screen.findByRole('list', { name: 'Valve line-up' });
+    expect(screen.getByRole('note')).toHaveTextContent(/let only a competent person open it/);
+    expect(screen.getByRole('note')).not.toHaveTextContent(/isolation transformer/);
     expect(screen.queryByRole('button', { name: /line-up|List the valves/ })).not.toBeInTheDocument();
   });
 

@@ -21,15 +21,24 @@ const parts = [
 ];
 
 describe('parts tab', () => {
-  it('when an owner opens it, then there is no cost column and no form, but the CSV export is there', async () => {
+  it('when an owner opens it, even asking for the shopping list, then they read the ledger: no costs, form, shopping list or CSV export', async () => {
     fakePartsApi(parts.map(asOwnerSees));
-    renderWithQueries(<PartsTab restorationId={7} role="owner" setName="Ardent 5" view="ledger" onViewChange={() => {}} />);
+    renderWithQueries(<PartsTab restorationId={7} role="owner" setName="Ardent 5" view="shopping" onViewChange={() => {}} />);
     await screen.findByRole('row', { name: 'Part C15' });
     expect(screen.queryByRole('columnheader', { name: /Cost/ })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Record a part' })).not.toBeInTheDocument();
     expect(screen.queryByRole('form')).not.toBeInTheDocument();
     expect(screen.queryByLabelText('Costs in')).not.toBeInTheDocument();
+    expect(screen.queryByRole('link', { name: 'Export CSV' })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Shopping list' })).not.toBeInTheDocument();
+  });
+
+  it('when a technician opens it, then the shopping list and the CSV export are there', async () => {
+    fakePartsApi(parts);
+    renderWithQueries(<PartsTab restorationId={7} role="technician" setName="Ardent 5" view="ledger" onViewChange={() => {}} />);
+    await screen.findByRole('row', { name: 'Part C15' });
     expect(screen.getByRole('link', { name: 'Export CSV' })).toHaveAttribute('href', '/api/restorations/7/parts.csv');
+    expect(screen.getByRole('button', { name: 'Shopping list' })).toBeInTheDocument();
   });
 
   it('when a technician asks to record a part or edit one, then the form opens, with that part for an edit', async () => {
