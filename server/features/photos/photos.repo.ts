@@ -1,6 +1,6 @@
-import { asc, eq, inArray } from 'drizzle-orm';
+import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { Database } from '../../db/client';
-import { photos, users } from '../../db/schema';
+import { memberships, photos, users } from '../../db/schema';
 
 export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null };
 type NewPhoto = typeof photos.$inferInsert;
@@ -17,6 +17,15 @@ export function photosRepo(db: Database) {
     async find(id: number): Promise<PhotoRow | undefined> {
       const [row] = await select().where(eq(photos.id, id));
       return row && flat(row);
+    },
+    /** The photo's restoration, the reader's role there (if a member) and its findings version, in one query. */
+    async accessOf(id: number, userId: number) {
+      const [row] = await db
+        .select({ restorationId: photos.restorationId, findingsVersion: photos.findingsVersion, role: memberships.role })
+        .from(photos)
+        .leftJoin(memberships, and(eq(memberships.restorationId, photos.restorationId), eq(memberships.userId, userId)))
+        .where(eq(photos.id, id));
+      return row && { restorationId: row.restorationId, findingsVersion: row.findingsVersion, role: row.role ?? undefined };
     },
     async restorationOf(id: number): Promise<number | undefined> {
       const [row] = await db.select({ restorationId: photos.restorationId }).from(photos).where(eq(photos.id, id));

@@ -1,0 +1,1 @@
+ALTER TABLE "photos" ADD COLUMN "findings_version" integer DEFAULT 0 NOT NULL;
