@@ -5,7 +5,7 @@ import type { Request, Response } from 'express';
 const brotli = promisify(brotliCompress);
 const gzipAsync = promisify(gzip);
 
-type Entry = { version: number; json: string; etag: string; bytes: number; br?: Promise<Buffer>; gzip?: Promise<Buffer> };
+type Entry = { version: number; body: Buffer; etag: string; bytes: number; br?: Promise<Buffer>; gzip?: Promise<Buffer> };
 
 /**
  * A thin memo around the list builder of a photo's findings: one entry per photo and visibility variant
@@ -33,8 +33,8 @@ export function findingsListCache(maxBytes = 32 * 1024 * 1024) {
         entries.set(key, held); // most recently used goes last
         return held;
       }
-      const json = await build();
-      const entry: Entry = { version, json, etag: `W/"f${photoId}.${version}.${variant}"`, bytes: Buffer.byteLength(json) };
+      const body = Buffer.from(await build());
+      const entry: Entry = { version, body, etag: `W/"f${photoId}.${version}.${variant}"`, bytes: body.length };
       drop(key);
       entries.set(key, entry);
       total += entry.bytes;
@@ -66,11 +66,11 @@ export async function sendCachedList(req: Request, res: Response, entry: Entry):
   const encoding = entry.bytes >= 1024 ? req.acceptsEncodings('br', 'gzip', 'identity') : 'identity';
   if (encoding === 'br' || encoding === 'gzip') {
     const packed = encoding === 'br'
-      ? (entry.br ??= brotli(entry.json, { params: { [constants.BROTLI_PARAM_QUALITY]: 5 } }))
-      : (entry.gzip ??= gzipAsync(entry.json, { level: 6 }));
+      ? (entry.br ??= brotli(entry.body, { params: { [constants.BROTLI_PARAM_QUALITY]: 5 } }))
+      : (entry.gzip ??= gzipAsync(entry.body, { level: 6 }));
     res.setHeader('Content-Encoding', encoding);
     res.send(await packed);
     return;
   }
-  res.send(entry.json);
+  res.send(entry.body);
 }
