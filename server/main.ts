@@ -13,6 +13,7 @@ import { seedDemo } from './db/seed/seed-demo';
 import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
 import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
+import { backfillPhoneVariants } from './features/photos/backfill-phone-variants';
 import { scheduleSweep } from './features/photos/schedule-sweep';
 import { EnvError, isDemo, parseEnv, publicOrigin, sessionSecret, uploadLimits } from './env';
 import { defaultThrottle } from './features/auth/throttle';
@@ -47,6 +48,7 @@ async function main() {
     await seedDemoFindings(handle.db);
     await seedDemoWorkshop(handle.db);
   }
+  await backfillPhoneVariants(handle.db, storage, logger);
   scheduleSweep(handle.db, storage, logger);
 
   const server = http.createServer();

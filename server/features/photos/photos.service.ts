@@ -19,8 +19,9 @@ export function photosService({ db, storage, config }: PhotosDeps) {
 
   async function toPhoto(row: PhotoRow, role: Role): Promise<Photo> {
     const keys = photoKeys(row.storageKey);
-    const [thumb, display, original] = await Promise.all([
+    const [thumb, phone, display, original] = await Promise.all([
       storage.getSignedUrl(keys.thumb),
+      storage.getSignedUrl(keys.phone),
       storage.getSignedUrl(keys.display),
       can(role, 'photos.original') ? storage.getSignedUrl(keys.original, { downloadName: `photo-${row.id}.${extension[row.contentType] ?? 'img'}` }) : undefined,
     ]);
@@ -28,7 +29,7 @@ export function photosService({ db, storage, config }: PhotosDeps) {
       id: row.id, restorationId: row.restorationId, view: row.view, phase: row.phase, caption: row.caption,
       ownerVisible: row.ownerVisible, width: row.width, height: row.height, takenAt: row.takenAt?.toISOString() ?? null,
       uploadedAt: row.createdAt.toISOString(), uploadedBy: row.uploadedBy, contentType: row.contentType, sizeBytes: row.sizeBytes,
-      urls: original ? { thumb, display, original } : { thumb, display },
+      urls: original ? { thumb, phone, display, original } : { thumb, phone, display },
     };
   }
 
@@ -64,6 +65,7 @@ export function photosService({ db, storage, config }: PhotosDeps) {
       try {
         await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size);
         await storage.putObject(keys.display, processed.display, 'image/webp');
+        await storage.putObject(keys.phone, processed.phone, 'image/webp');
         await storage.putObject(keys.thumb, processed.thumb, 'image/webp');
         const id = await repo.insert({
           restorationId, storageKey, ...fields.data, width: processed.width, height: processed.height,
