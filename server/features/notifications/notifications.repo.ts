@@ -1,4 +1,4 @@
-import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, isNull, lt, sql } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { findings, memberships, notifications } from '../../db/schema';
 
@@ -17,13 +17,14 @@ export function notificationsRepo(db: Database) {
         .where(and(eq(memberships.restorationId, restorationId), inArray(memberships.role, roles as never[])));
       return rows;
     },
-    listFor(userId: number, limit = 50) {
+    /** Newest first (ids grow with time); `beforeId` continues after a page's last item. */
+    listFor(userId: number, limit = 50, beforeId?: number) {
       return db
         .select({ n: notifications, photoId: findings.photoId })
         .from(notifications)
         .innerJoin(findings, eq(findings.id, notifications.findingId))
-        .where(eq(notifications.userId, userId))
-        .orderBy(desc(notifications.createdAt), desc(notifications.id))
+        .where(and(eq(notifications.userId, userId), beforeId ? lt(notifications.id, beforeId) : undefined))
+        .orderBy(desc(notifications.id))
         .limit(limit);
     },
     async markRead(userId: number, ids?: number[]) {

@@ -47,8 +47,8 @@ export function notificationsService(deps: AppDeps) {
       await repo.insert([...rows.values()]);
       kick();
     },
-    async listFor(userId: number): Promise<Notification[]> {
-      return (await repo.listFor(userId)).map(({ n, photoId }) => ({
+    async listFor(userId: number, limit?: number, beforeId?: number): Promise<Notification[]> {
+      return (await repo.listFor(userId, limit, beforeId)).map(({ n, photoId }) => ({
         id: n.id, kind: n.kind, summary: n.summary, restorationId: n.restorationId, findingId: n.findingId, photoId,
         read: n.readAt !== null, createdAt: n.createdAt.toISOString(),
       }));

@@ -1,4 +1,4 @@
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, sql } from 'drizzle-orm';
 import { partWarnings } from '../../../shared/bench';
 import type { Role } from '../../../shared/permissions';
 import type { Part, PartInput } from '../../../shared/schemas/parts';
@@ -35,6 +35,13 @@ export function partsService(db: Database) {
     },
     async list(restorationId: number) {
       return db.select().from(parts).where(eq(parts.restorationId, restorationId)).orderBy(asc(parts.componentRef), asc(parts.id));
+    },
+    /** One page of the ledger in its order (reference, then id), after the part `after` names. */
+    async page(restorationId: number, limit: number, after?: { componentRef: string; id: number }) {
+      return db.select().from(parts)
+        .where(and(eq(parts.restorationId, restorationId), after ? sql`(${parts.componentRef}, ${parts.id}) > (${after.componentRef}, ${after.id})` : undefined))
+        .orderBy(asc(parts.componentRef), asc(parts.id))
+        .limit(limit);
     },
     async create(restorationId: number, input: PartInput & { action: Row['action'] }, actorId: number) {
       await assertFinding(restorationId, input.findingId);
