@@ -64,7 +64,7 @@ try {
     // An upload every tenth round; the other rounds read the photo list again.
     step('upload or photos', (p, c) => {
       c.round = (c.round ?? 0) + 1;
-      if (c.round % 10 !== 3) return { path: `/api/restorations/${p.restorationId}/photos` };
+      if (c.round % 10 !== 2) return { path: `/api/restorations/${p.restorationId}/photos` };
       c.route = 'POST /restorations/:id/photos (upload)';
       return { method: 'POST', path: `/api/restorations/${p.restorationId}/photos`, body: uploadBody, headers: { 'content-type': `multipart/form-data; boundary=${boundary}` } };
     }),
