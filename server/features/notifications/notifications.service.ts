@@ -1,7 +1,7 @@
 import type { Role } from '../../../shared/permissions';
 import type { Notification } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
-import { flushNotificationMail } from './mail-batch';
+import { requestNotificationMail } from './mail-batch';
 import { notificationsRepo, type NewNotification } from './notifications.repo';
 
 type FindingLike = { id: number; restorationId: number; number: number; title: string; componentRef: string; authorId: number | null };
@@ -14,7 +14,7 @@ const excerpt = (text: string) => (text.length > 160 ? `${text.slice(0, 157)}…
 export function notificationsService(deps: AppDeps) {
   const repo = notificationsRepo(deps.db);
   // Sends what is due now (the first item for a person goes at once); failures wait for the next tick.
-  const kick = () => void flushNotificationMail(deps).catch((err: Error) => deps.logger.warn(`notification mail: ${err.message}`));
+  const kick = () => requestNotificationMail(deps, (err) => deps.logger.warn(`notification mail: ${err.message}`));
 
   return {
     async questionAsked(f: FindingLike, actor: { id: number; name: string }) {
