@@ -1,3 +1,4 @@
+import compression from 'compression';
 import express, { Router } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
@@ -52,6 +53,8 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
 
   const passport = createPassport(deps.db);
   const api = Router();
+  // JSON answers above 1 kB are compressed (brotli or gzip, as the client accepts).
+  api.use(compression({ threshold: 1024 }));
   api.use(express.json({ limit: '1mb' }));
   api.use(requireSameOrigin(deps.config.publicOrigin));
   api.use(healthRoutes(deps));

@@ -15,6 +15,7 @@ import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
 import { seedDemoSafety } from './features/demo/seed-demo-safety';
 import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
+import { backfillPhoneVariants } from './features/photos/backfill-phone-variants';
 import { scheduleSweep } from './features/photos/schedule-sweep';
 import { sweepUploadTemp } from './features/photos/upload-temp';
 import { EnvError, isDemo, listenHost, parseEnv, publicOrigin, sessionSecret, startupWarnings, uploadLimits } from './env';
@@ -54,6 +55,7 @@ async function main() {
     await seedDemoSafety(handle.db);
     await seedDemoBringup(handle.db);
   }
+  await backfillPhoneVariants(handle.db, storage, logger);
   scheduleSweep(handle.db, storage, logger);
   const leftovers = sweepUploadTemp();
   if (leftovers > 0) logger.info(`removed ${leftovers} temporary upload files left by a stopped instance`);

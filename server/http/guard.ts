@@ -10,8 +10,11 @@ export const requireUser: RequestHandler = (req, _res, next) => {
   next();
 };
 
+/** A restoration and the reader's role there, when the route can read both in one query. */
+export type RestorationAndRole = { restorationId: number; role: Role | undefined };
 /** Where the restoration id of a request comes from; by default the validated `:id` param. */
-export type RestorationOf = (req: Request, res: Response) => Promise<number | undefined> | number | undefined;
+export type RestorationOf = (req: Request, res: Response) =>
+  Promise<number | RestorationAndRole | undefined> | number | RestorationAndRole | undefined;
 const fromIdParam: RestorationOf = (_req, res) => (res.locals.input as { params?: { id?: number } })?.params?.id;
 
 /**
@@ -22,8 +25,9 @@ export function guard(db: Database, action: Action, restorationOf: RestorationOf
   const members = membersRepo(db);
   return async (req, res, next) => {
     if (!req.user) throw new UnauthorizedError();
-    const restorationId = await restorationOf(req, res);
-    const role = restorationId ? await members.roleOf(req.user.id, restorationId) : undefined;
+    const found = await restorationOf(req, res);
+    const restorationId = typeof found === 'object' ? found.restorationId : found;
+    const role = typeof found === 'object' ? found.role : restorationId ? await members.roleOf(req.user.id, restorationId) : undefined;
     if (!restorationId || !role) throw new NotFoundError();
     if (!can(role, action)) throw new ForbiddenError();
     res.locals.role = role;

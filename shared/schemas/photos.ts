@@ -52,7 +52,8 @@ export const photoSchema = z.object({
   contentType: z.string(),
   sizeBytes: z.number().int(),
   /** Short-lived presigned URLs; `original` only for those allowed to download it. */
-  urls: z.object({ thumb: z.string(), display: z.string(), original: z.string().optional() }),
+  /** Variants: thumb (400 px), phone (1,280 px), display (2,560 px), each at most the original's size. */
+  urls: z.object({ thumb: z.string(), phone: z.string(), display: z.string(), original: z.string().optional() }),
 });
 export type Photo = z.infer<typeof photoSchema>;
 

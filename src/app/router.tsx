@@ -1,6 +1,7 @@
 import { createBrowserRouter } from 'react-router';
 import { AppShell } from './app-shell';
 import { RequireSignIn } from './require-sign-in';
+import { findingsLoader, historyLoader, markupLoader, partsLoader, peopleLoader, photosLoader, readingsLoader, restorationLoader } from './route-loaders';
 import { RouteError } from './routes/route-error';
 
 /** A lazily loaded route module's named component (keeps each page out of the main chunk). */
@@ -27,19 +28,20 @@ export const router = createBrowserRouter([
           { path: 'restorations/new', lazy: page(() => import('./routes/new-restoration'), 'NewRestorationRoute') },
           {
             path: 'restorations/:id',
+            loader: restorationLoader,
             lazy: page(() => import('./routes/restoration-layout'), 'RestorationLayout'),
             children: [
               { index: true, lazy: page(() => import('./routes/restoration'), 'RestorationRoute') },
-              { path: 'photos', lazy: page(() => import('./routes/photos'), 'PhotosRoute') },
-              { path: 'photos/:photoId', lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
-              { path: 'photos/:photoId/findings/:findingId', lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
-              { path: 'findings', lazy: page(() => import('./routes/findings'), 'FindingsRoute') },
+              { path: 'photos', loader: photosLoader, lazy: page(() => import('./routes/photos'), 'PhotosRoute') },
+              { path: 'photos/:photoId', loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
+              { path: 'photos/:photoId/findings/:findingId', loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
+              { path: 'findings', loader: findingsLoader, lazy: page(() => import('./routes/findings'), 'FindingsRoute') },
               { path: 'bring-up', lazy: page(() => import('./routes/bringup'), 'BringupRoute') },
-              { path: 'readings', lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },
-              { path: 'parts', lazy: page(() => import('./routes/parts'), 'PartsRoute') },
+              { path: 'readings', loader: readingsLoader, lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },
+              { path: 'parts', loader: partsLoader, lazy: page(() => import('./routes/parts'), 'PartsRoute') },
               { path: 'safety', lazy: page(() => import('./routes/safety'), 'SafetyRoute') },
-              { path: 'history', lazy: page(() => import('./routes/history'), 'HistoryRoute') },
-              { path: 'people', lazy: page(() => import('./routes/people'), 'PeopleRoute') },
+              { path: 'history', loader: historyLoader, lazy: page(() => import('./routes/history'), 'HistoryRoute') },
+              { path: 'people', loader: peopleLoader, lazy: page(() => import('./routes/people'), 'PeopleRoute') },
             ],
           },
           { path: 'calculators', lazy: page(() => import('./routes/calculators'), 'CalculatorsRoute') },

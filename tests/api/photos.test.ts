@@ -3,6 +3,7 @@ import sharp from 'sharp';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { photos } from '../../server/db/schema';
+import { backfillPhoneVariants } from '../../server/features/photos/backfill-phone-variants';
 import { photoKeys } from '../../server/features/photos/photo-objects';
 import { sweepOrphanedObjects } from '../../server/features/photos/sweep-orphans';
 import { jpegWithGpsAndOrientation6, pngClaiming, twoToneJpeg } from '../factories/images';
@@ -46,7 +47,7 @@ describe('uploading photos', () => {
     expect(res.body.urls.original).toBeDefined();
     const [row] = await t.db.select().from(photos).where(eq(photos.id, res.body.id));
     const keys = photoKeys(row!.storageKey);
-    for (const key of [keys.display, keys.thumb]) {
+    for (const key of [keys.display, keys.phone, keys.thumb]) {
       const stored = await t.deps.storage.getObject(key);
       const meta = await sharp(stored).metadata();
       expect(meta.format).toBe('webp');
@@ -132,7 +133,24 @@ describe('who sees which photo', () => {
     const objects = await objectCount();
     expect((await mentor.delete(`/api/photos/${created.id}`)).status).toBe(403);
     expect((await tech.delete(`/api/photos/${created.id}`)).status).toBe(204);
-    expect(await objectCount()).toBe(objects - 3);
+    // original, display, phone and thumbnail
+    expect(await objectCount()).toBe(objects - 4);
     expect((await tech.get(`/api/photos/${created.id}`)).status).toBe(404);
+  });
+});
+
+describe('the phone-sized variant', () => {
+  it('when a photo stored before the variant existed is backfilled, then it gets one no wider than 1,280 px, and a second run makes none', async () => {
+    const created = (await upload(tech, restorationId, await twoToneJpeg(3000, 2000), 'wide.jpg')).body;
+    const [row] = await t.db.select().from(photos).where(eq(photos.id, created.id));
+    const keys = photoKeys(row!.storageKey);
+    // A 3,000 × 2,000 original: the phone variant is 1,280 px wide (its longest side) at the same proportions.
+    expect((await sharp(await t.deps.storage.getObject(keys.phone)).metadata()).width).toBe(1280);
+    await t.deps.storage.deleteObject(keys.phone);
+    expect(await backfillPhoneVariants(t.db, t.deps.storage)).toBeGreaterThanOrEqual(1);
+    const meta = await sharp(await t.deps.storage.getObject(keys.phone)).metadata();
+    expect([meta.format, meta.width]).toEqual(['webp', 1280]);
+    expect(Math.abs(meta.height! - (1280 * 2000) / 3000)).toBeLessThanOrEqual(1);
+    expect(await backfillPhoneVariants(t.db, t.deps.storage)).toBe(0);
   });
 });

@@ -87,4 +87,44 @@ describe('the owner at home, on a phone', () => {
     expect(await page.getByText('Order an X2 part instead').count()).toBe(0);
     await page.screenshot({ path: artifactPath('owner-parts.png'), fullPage: true });
   });
+
+  it('when the owner scrolls their home on a phone, then no photo is wider than the screen needs and all images stay under 1 MB', async () => {
+    const page = await newPage(ctx.browser, { width: 390, height: 844 });
+    let imageBytes = 0;
+    page.on('response', (res) => {
+      if (res.request().resourceType() === 'image') void res.body().then((b) => (imageBytes += b.length), () => {});
+    });
+    await signInAs(page, ctx.product.origin, 'philippa@example.test');
+    imageBytes = 0; // count the home page only
+    await page.goto(ctx.product.origin);
+    await page.waitForURL(/\/home/);
+    await page.getByText('Meridian 54').first().waitFor();
+    // Scroll to the end so lazy images load too, then let them settle.
+    for (let y = 0; y < 20; y++) {
+      await page.mouse.wheel(0, 800);
+      await page.waitForTimeout(150);
+    }
+    await page.waitForLoadState('networkidle');
+    const photos = await page.evaluate(() =>
+      [...document.querySelectorAll('img[srcset]')].map((img) => {
+        const el = img as HTMLImageElement;
+        const candidates = el.srcset.split(',').map((c) => {
+          const [url, w] = c.trim().split(/\s+/);
+          return { url: url!, width: Number.parseInt(w!, 10) };
+        });
+        return { currentSrc: el.currentSrc, rendered: el.getBoundingClientRect().width * window.devicePixelRatio, complete: el.complete, candidates };
+      }));
+    const loaded = photos.filter((p) => p.currentSrc);
+    expect(loaded.length).toBeGreaterThan(0);
+    for (const p of loaded) {
+      const chosen = p.candidates.find((c) => c.url === p.currentSrc);
+      expect(chosen, `${p.currentSrc} is one of its srcset's candidates`).toBeDefined();
+      // The smallest candidate that covers the rendered width is the widest the browser needed.
+      const needed = p.candidates.filter((c) => c.width >= p.rendered).sort((a, b) => a.width - b.width)[0] ?? p.candidates.at(-1)!;
+      expect(chosen!.width).toBeLessThanOrEqual(needed.width);
+    }
+    await expect.poll(() => imageBytes).toBeGreaterThan(0);
+    expect(imageBytes).toBeLessThanOrEqual(1024 * 1024);
+    console.log(`owner home on a phone: ${loaded.length} photos, ${(imageBytes / 1024).toFixed(0)} KB of images`);
+  });
 });

@@ -40,6 +40,7 @@ export const findings = pgTable(
   },
   (t) => [
     index('findings_photo_id_idx').on(t.photoId),
+    index('findings_author_id_idx').on(t.authorId),
     uniqueIndex('findings_restoration_id_number_idx').on(t.restorationId, t.number),
   ],
 );
@@ -56,7 +57,7 @@ export const findingChanges = pgTable(
     changes: jsonb().$type<Record<string, [unknown, unknown]>>().notNull(),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('finding_changes_finding_id_idx').on(t.findingId)],
+  (t) => [index('finding_changes_finding_id_idx').on(t.findingId), index('finding_changes_actor_id_idx').on(t.actorId)],
 );
 
 /** A comment in a finding's thread; internal ones never reach owners. */
@@ -80,6 +81,7 @@ export const comments = pgTable(
   },
   (t) => [
     index('comments_finding_id_idx').on(t.findingId),
+    index('comments_author_id_idx').on(t.authorId),
     uniqueIndex('comments_author_id_idempotency_key_idx').on(t.authorId, t.idempotencyKey),
   ],
 );
@@ -110,5 +112,11 @@ export const notifications = pgTable(
     emailedAt: timestamp({ withTimezone: true, mode: 'date' }),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('notifications_user_id_idx').on(t.userId), index('notifications_emailed_at_idx').on(t.emailedAt)],
+  (t) => [
+    index('notifications_user_id_idx').on(t.userId),
+    index('notifications_emailed_at_idx').on(t.emailedAt),
+    index('notifications_restoration_id_idx').on(t.restorationId),
+    index('notifications_finding_id_idx').on(t.findingId),
+    index('notifications_comment_id_idx').on(t.commentId),
+  ],
 );

@@ -22,5 +22,9 @@ export const invitations = pgTable(
     revokedAt: timestamp({ withTimezone: true, mode: 'date' }),
     ...timestamps,
   },
-  (t) => [index('invitations_restoration_id_idx').on(t.restorationId)],
+  (t) => [
+    index('invitations_restoration_id_idx').on(t.restorationId),
+    index('invitations_invited_by_id_idx').on(t.invitedById),
+    index('invitations_accepted_by_id_idx').on(t.acceptedById),
+  ],
 );

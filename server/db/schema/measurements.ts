@@ -50,7 +50,11 @@ export const measurements = pgTable(
     measuredAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
     ...timestamps,
   },
-  (t) => [index('measurements_restoration_id_idx').on(t.restorationId), index('measurements_finding_id_idx').on(t.findingId)],
+  (t) => [
+    index('measurements_restoration_id_idx').on(t.restorationId),
+    index('measurements_finding_id_idx').on(t.findingId),
+    index('measurements_measured_by_id_idx').on(t.measuredById),
+  ],
 );
 
 /** The valve line-up by position (V1…Vn), as fitted. */

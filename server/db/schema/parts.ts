@@ -37,7 +37,7 @@ export const parts = pgTable(
     fittedAt: timestamp({ withTimezone: true, mode: 'date' }),
     ...timestamps,
   },
-  (t) => [index('parts_restoration_id_idx').on(t.restorationId)],
+  (t) => [index('parts_restoration_id_idx').on(t.restorationId), index('parts_finding_id_idx').on(t.findingId)],
 );
 
 export const eventKindEnum = pgEnum('event_kind', [
@@ -67,5 +67,12 @@ export const events = pgTable(
     data: jsonb().$type<Record<string, unknown>>().notNull().default({}),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('events_restoration_id_created_at_idx').on(t.restorationId, t.createdAt)],
+  (t) => [
+    index('events_restoration_id_created_at_idx').on(t.restorationId, t.createdAt),
+    index('events_actor_id_idx').on(t.actorId),
+    index('events_photo_id_idx').on(t.photoId),
+    index('events_finding_id_idx').on(t.findingId),
+    index('events_part_id_idx').on(t.partId),
+    index('events_measurement_id_idx').on(t.measurementId),
+  ],
 );

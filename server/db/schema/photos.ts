@@ -29,8 +29,13 @@ export const photos = pgTable(
     /** Of the untouched original, decided from its content. */
     contentType: text().notNull(),
     sizeBytes: integer().notNull(),
+    /**
+     * Bumped by database triggers on every write that changes the photo's findings list (its findings,
+     * their comments, its sharing, an author's name): the list's cache key and ETag.
+     */
+    findingsVersion: integer().notNull().default(0),
     uploadedById: integer().references(() => users.id, { onDelete: 'set null' }),
     ...timestamps,
   },
-  (t) => [index('photos_restoration_id_idx').on(t.restorationId)],
+  (t) => [index('photos_restoration_id_idx').on(t.restorationId), index('photos_uploaded_by_id_idx').on(t.uploadedById)],
 );

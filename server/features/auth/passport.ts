@@ -1,7 +1,9 @@
+import type { IncomingMessage } from 'node:http';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { Database } from '../../db/client';
 import { verifyPassword } from './password';
+import { ACCOUNT_KEY, type SessionAccount } from './session-store';
 import { publicUser, usersRepo } from './users.repo';
 
 declare global {
@@ -31,7 +33,10 @@ export function createPassport(db: Database) {
     }),
   );
   instance.serializeUser((user, done) => done(null, user.id));
-  instance.deserializeUser(async (id: number, done) => {
+  instance.deserializeUser(async (req: IncomingMessage, id: number, done: (err: unknown, user?: Express.User | false) => void) => {
+    // The session store read the account with the session (one query); fall back to a lookup otherwise.
+    const account = ((req as IncomingMessage & { session?: unknown }).session as unknown as Record<string, SessionAccount | undefined> | undefined)?.[ACCOUNT_KEY];
+    if (account !== undefined && (account === null || account.id === id)) return done(null, account ?? false);
     try {
       const user = await repo.byId(id);
       // A deleted account simply ends the session.

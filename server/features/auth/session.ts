@@ -1,17 +1,16 @@
-import connectPgSimple from 'connect-pg-simple';
 import session from 'express-session';
 import type pg from 'pg';
+import { accountSessionStore } from './session-store';
 
 export const SESSION_COOKIE = 'gridleak.sid';
 export const REMEMBER_MS = 30 * 24 * 60 * 60 * 1000;
 
-/** Sessions live in PostgreSQL (table `sessions`), so any instance can serve any request. */
+/** Sessions live in PostgreSQL (table `sessions`), so any instance can serve any request; read with their account in one query. */
 export function sessionMiddleware(pool: pg.Pool, secret: string) {
-  const Store = connectPgSimple(session);
   return session({
     name: SESSION_COOKIE,
     secret,
-    store: new Store({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+    store: accountSessionStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
     resave: false,
     saveUninitialized: false,
     rolling: false,

@@ -1,4 +1,4 @@
-import { aliasedTable, and, desc, eq, sql } from 'drizzle-orm';
+import { aliasedTable, and, desc, eq, sql, type SQL, type SQLWrapper } from 'drizzle-orm';
 import { stageLabels, type Stage } from '../../../shared/schemas/restorations';
 import { phaseLabels, viewLabels } from '../../../shared/schemas/photos';
 import { statusLabels, type Status } from '../../../shared/schemas/findings';
@@ -6,64 +6,94 @@ import { quantityLabels } from '../../../shared/schemas/measurements';
 import type { Role } from '../../../shared/permissions';
 import type { TimelineEvent } from '../../../shared/schemas/parts';
 import type { AppDeps } from '../../app-deps';
-import { events, findings, measurements, parts, photos, users } from '../../db/schema';
+import { events, findings, measurements, memberships, parts, photos, users } from '../../db/schema';
 import { bringupEventWords, isBringupEvent } from '../bringup/bringup-events';
 import { photoKeys } from '../photos/photo-objects';
-import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
+import { columnsOf, findingFields, visibleSql, visibleSqlByRole, type FieldSources } from '../visibility/visibility-sql';
 import { safetyEventLine } from '../safety/safety-events';
 
 type Kind = (typeof events.$inferSelect)['kind'];
 const findingPhotos = aliasedTable(photos, 'finding_photos');
+/** `at` cut to the millisecond, so a page cursor can name it exactly. */
+const atMs = sql<Date>`date_trunc('milliseconds', ${events.createdAt})`;
 
-/** The restoration's history in words, newest first; owners see only what is shared with them. */
+const findingSources: FieldSources = { finding: columnsOf(findings), photo: columnsOf(findingPhotos) };
+const photoSources: FieldSources = { photo: columnsOf(photos) };
+// An event about a finding is judged with the finding's photo; a photo's own event with that photo.
+const eventSources: FieldSources = {
+  event: columnsOf(events), finding: findingFields(), part: columnsOf(parts), reading: columnsOf(measurements),
+  photo: { ownerVisible: sql`coalesce(${findingPhotos.ownerVisible}, ${photos.ownerVisible})` },
+};
+/** The visibility rule for one role, or for the role a column holds (a person's role differs per restoration). */
+const rule = (role: Role | SQLWrapper, subject: 'event' | 'finding' | 'photo', sources: FieldSources) =>
+  typeof role === 'string' ? visibleSql(role, subject, sources) : visibleSqlByRole(role, subject, sources);
+
+/** Who reads: one role on one restoration, or a person across their restorations (their role in each). */
+export type Reader = { role: Role } | { userId: number };
+
+/** The restoration's history in words, newest first; each reader sees what the one visibility rule lets them. */
 export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>) {
+  /** Visible rows in timeline order: `where` picks the events, `before` continues after a page's last row. */
+  function rows(where: SQL | undefined, reader: Reader, limit: number, before?: { at: Date; id: number }) {
+    const role: Role | SQLWrapper = 'role' in reader ? reader.role : memberships.role;
+    const query = db
+      .select({
+        e: events, at: atMs.mapWith((v: string | Date) => new Date(v)), actorName: users.name, photo: photos, finding: findings, part: parts, m: measurements,
+        findingVisible: rule(role, 'finding', findingSources), photoVisible: rule(role, 'photo', photoSources),
+      })
+      .from(events)
+      .leftJoin(users, eq(users.id, events.actorId))
+      .leftJoin(photos, eq(photos.id, events.photoId))
+      .leftJoin(findings, eq(findings.id, events.findingId))
+      .leftJoin(findingPhotos, eq(findingPhotos.id, findings.photoId))
+      .leftJoin(parts, eq(parts.id, events.partId))
+      .leftJoin(measurements, eq(measurements.id, events.measurementId))
+      .leftJoin(memberships, 'userId' in reader ? and(eq(memberships.restorationId, events.restorationId), eq(memberships.userId, reader.userId)) : sql`false`)
+      .where(and(where, rule(role, 'event', eventSources), before ? sql`(${atMs}, ${events.id}) < (${before.at.toISOString()}::timestamptz, ${before.id})` : undefined))
+      .orderBy(desc(atMs), desc(events.id))
+      .limit(limit);
+    return query;
+  }
+
+  /** Rows in words; ids and pictures of what the reader may not see are left out (a part fitted for an internal finding). */
+  function present(list: TimelineRow[]): Promise<TimelineEvent[]> {
+    return Promise.all(
+      list.map(async ({ e, actorName, photo: eventPhoto, finding: eventFinding, part, m, findingVisible: seesFinding, photoVisible: seesPhoto }) => {
+        const finding = seesFinding ? eventFinding : null;
+        const photo = seesPhoto ? eventPhoto : null;
+        const label = finding ? `#${finding.number}${finding.componentRef ? ` ${finding.componentRef}` : ''} ${finding.title}` : '';
+        const data = e.data as { from?: string; to?: string; view?: string; phase?: string };
+        const safety = safetyEventLine(e.kind, e.data);
+        const words = safety ? { summary: safety.summary, caution: safety.alert } : isBringupEvent(e.kind) ? bringupEventWords(e.kind, e.data) : null;
+        const summary = words ? words.summary
+          : e.kind === 'photo-added' ? `Photo added: ${viewLabels[photo!.view]}, ${phaseLabels[photo!.phase].toLowerCase()}${photo!.caption ? ` — ${photo!.caption}` : ''}`
+          : e.kind === 'finding-opened' ? `Finding opened: ${label}`
+          : e.kind === 'finding-status' ? `${label}: ${statusLabels[data.from as Status] ?? data.from} → ${statusLabels[data.to as Status] ?? data.to}`
+          : e.kind === 'question-asked' ? `Question for the mentors on ${label}`
+          : e.kind === 'question-resolved' ? `Question answered on ${label}`
+          : e.kind === 'part-fitted' ? `Part fitted: ${part?.componentRef ?? ''} ${part?.replacementPart ?? ''} ${part?.replacementRating ?? ''}`.trim()
+          : e.kind === 'stage-changed' ? `Stage: ${stageLabels[data.from as Stage] ?? data.from} → ${stageLabels[data.to as Stage] ?? data.to}`
+          : `Out of tolerance: ${m ? `${quantityLabels[m.quantity]} at ${m.location}, ${m.verdictReason}` : ''}`;
+        return {
+          id: e.id, kind: e.kind, at: e.createdAt.toISOString(), actorName, summary,
+          photoId: photo?.id ?? finding?.photoId ?? null, findingId: finding?.id ?? null,
+          thumbUrl: photo ? await storage.getSignedUrl(photoKeys(photo.storageKey).thumb) : null,
+          caution: words?.caution ?? false,
+        };
+      }),
+    );
+  }
+
+  const ofRestoration = (restorationId: number, kind?: Kind) => and(eq(events.restorationId, restorationId), kind ? eq(events.kind, kind) : undefined);
+
   return {
+    rows,
+    present,
+    ofRestoration,
     async list(restorationId: number, role: Role, kind?: Kind, limit = 500): Promise<TimelineEvent[]> {
-      const findingVisible = visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(findingPhotos) });
-      const photoVisible = visibleSql(role, 'photo', { photo: columnsOf(photos) });
-      // An event about a finding is judged with the finding's photo; a photo's own event with that photo.
-      const eventVisible = visibleSql(role, 'event', {
-        event: columnsOf(events), finding: findingFields(), part: columnsOf(parts), reading: columnsOf(measurements),
-        photo: { ownerVisible: sql`coalesce(${findingPhotos.ownerVisible}, ${photos.ownerVisible})` },
-      });
-      const visible = await db
-        .select({ e: events, actorName: users.name, photo: photos, finding: findings, part: parts, m: measurements, findingVisible, photoVisible })
-        .from(events)
-        .leftJoin(users, eq(users.id, events.actorId))
-        .leftJoin(photos, eq(photos.id, events.photoId))
-        .leftJoin(findings, eq(findings.id, events.findingId))
-        .leftJoin(findingPhotos, eq(findingPhotos.id, findings.photoId))
-        .leftJoin(parts, eq(parts.id, events.partId))
-        .leftJoin(measurements, eq(measurements.id, events.measurementId))
-        .where(and(eq(events.restorationId, restorationId), kind ? eq(events.kind, kind) : undefined, eventVisible))
-        .orderBy(desc(events.createdAt), desc(events.id))
-        .limit(limit);
-      return Promise.all(
-        visible.map(async ({ e, actorName, photo: eventPhoto, finding: eventFinding, part, m, findingVisible: seesFinding, photoVisible: seesPhoto }) => {
-          // Ids and pictures of what the reader may not see are left out (a part fitted for an internal finding).
-          const finding = seesFinding ? eventFinding : null;
-          const photo = seesPhoto ? eventPhoto : null;
-          const label = finding ? `#${finding.number}${finding.componentRef ? ` ${finding.componentRef}` : ''} ${finding.title}` : '';
-          const data = e.data as { from?: string; to?: string; view?: string; phase?: string };
-          const safety = safetyEventLine(e.kind, e.data);
-          const words = safety ? { summary: safety.summary, caution: safety.alert } : isBringupEvent(e.kind) ? bringupEventWords(e.kind, e.data) : null;
-          const summary = words ? words.summary
-            : e.kind === 'photo-added' ? `Photo added: ${viewLabels[photo!.view]}, ${phaseLabels[photo!.phase].toLowerCase()}${photo!.caption ? ` — ${photo!.caption}` : ''}`
-            : e.kind === 'finding-opened' ? `Finding opened: ${label}`
-            : e.kind === 'finding-status' ? `${label}: ${statusLabels[data.from as Status] ?? data.from} → ${statusLabels[data.to as Status] ?? data.to}`
-            : e.kind === 'question-asked' ? `Question for the mentors on ${label}`
-            : e.kind === 'question-resolved' ? `Question answered on ${label}`
-            : e.kind === 'part-fitted' ? `Part fitted: ${part?.componentRef ?? ''} ${part?.replacementPart ?? ''} ${part?.replacementRating ?? ''}`.trim()
-            : e.kind === 'stage-changed' ? `Stage: ${stageLabels[data.from as Stage] ?? data.from} → ${stageLabels[data.to as Stage] ?? data.to}`
-            : `Out of tolerance: ${m ? `${quantityLabels[m.quantity]} at ${m.location}, ${m.verdictReason}` : ''}`;
-          return {
-            id: e.id, kind: e.kind, at: e.createdAt.toISOString(), actorName, summary,
-            photoId: photo?.id ?? finding?.photoId ?? null, findingId: finding?.id ?? null,
-            thumbUrl: photo ? await storage.getSignedUrl(photoKeys(photo.storageKey).thumb) : null,
-            caution: words?.caution ?? false,
-          };
-        }),
-      );
+      return present(await rows(ofRestoration(restorationId, kind), { role }, limit));
     },
   };
 }
+
+export type TimelineRow = Awaited<ReturnType<ReturnType<typeof timelineService>['rows']>>[number];

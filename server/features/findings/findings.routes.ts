@@ -5,6 +5,7 @@ import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
 import { input, validate } from '../../http/validate';
 import { photosRepo } from '../photos/photos.repo';
+import { findingsListCache, sendCachedList } from './findings-cache';
 import { findingsService } from './findings.service';
 
 const one = { params: idParamsSchema };
@@ -22,8 +23,19 @@ export function findingsRoutes(deps: AppDeps): Router {
   const ofFinding = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
   const router = Router();
 
-  router.get('/photos/:id/findings', requireUser, validate(one), guard(db, 'restoration.view', ofPhoto), async (_req, res) => {
-    res.type('application/json').send(await service.listByPhotoJson(input(res, one).params.id, roleOf(res)));
+  // The hot read of the markup canvas: the photo, the membership and the list's version in one query,
+  // then the list from the cache (or built once per version and visibility variant), 304 when unchanged.
+  const lists = findingsListCache();
+  const photoAccess = async (req: Request, res: Response) => {
+    const access = await photos.accessOf(input(res, one).params.id, req.user!.id);
+    if (access) res.locals.findingsVersion = access.findingsVersion;
+    return access;
+  };
+  router.get('/photos/:id/findings', requireUser, validate(one), guard(db, 'restoration.view', photoAccess), async (req, res) => {
+    const photoId = input(res, one).params.id;
+    const role = roleOf(res);
+    const entry = await lists.read(photoId, role, res.locals.findingsVersion as number, () => service.listByPhotoJson(photoId, role));
+    await sendCachedList(req, res, entry);
   });
   router.post('/photos/:id/findings', requireUser, validate(create), guard(db, 'restoration.view', ofPhoto), async (req, res) => {
     const { params, body } = input(res, create);

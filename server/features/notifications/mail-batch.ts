@@ -86,3 +86,28 @@ export async function flushNotificationMail(deps: Pick<AppDeps, 'db' | 'mailer' 
   if (failures.length) throw new Error(`${failures.length} of ${claimed.length} notification e-mails failed: ${failures[0]!.message}`);
   return sent;
 }
+
+const flushes = new WeakMap<object, { running: boolean; again: boolean }>();
+
+/**
+ * Asks for a flush without piling them up: at most one runs per app at a time, and a request made while it runs
+ * starts one more afterwards. Many flushes at once would each hold a database connection while sending, and a
+ * local SMTP capture that stores mail in the same database could then wait for a connection for ever.
+ */
+export function requestNotificationMail(deps: Pick<AppDeps, 'db' | 'mailer' | 'config'>, onError: (err: Error) => void): void {
+  let state = flushes.get(deps.db);
+  if (!state) flushes.set(deps.db, (state = { running: false, again: false }));
+  if (state.running) {
+    state.again = true;
+    return;
+  }
+  const s = state;
+  s.running = true;
+  void (async () => {
+    do {
+      s.again = false;
+      await flushNotificationMail(deps).catch(onError);
+    } while (s.again);
+    s.running = false;
+  })();
+}

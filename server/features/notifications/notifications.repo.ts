@@ -1,4 +1,4 @@
-import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, isNull, lt, sql } from 'drizzle-orm';
 import type { Executor } from '../../db/client';
 import { comments, findings, memberships, notifications, photos } from '../../db/schema';
 import { notificationJoins, notificationVisible } from '../visibility/notification-visibility';
@@ -18,8 +18,9 @@ export function notificationsRepo(db: Executor) {
         .where(and(eq(memberships.restorationId, restorationId), inArray(memberships.role, roles as never[])));
       return rows;
     },
-    /** The person's notifications that they may still see (the rule is applied as they are read). */
-    listFor(userId: number, limit = 50) {
+    /** The person's notifications that they may still see (the rule is applied as they are read), newest first
+     * (ids grow with time); `beforeId` continues after a page's last item. */
+    listFor(userId: number, limit = 50, beforeId?: number) {
       return db
         .select({ n: notifications, photoId: findings.photoId })
         .from(notifications)
@@ -27,8 +28,8 @@ export function notificationsRepo(db: Executor) {
         .innerJoin(photos, notificationJoins.photo)
         .innerJoin(memberships, notificationJoins.membership)
         .leftJoin(comments, notificationJoins.comment)
-        .where(and(eq(notifications.userId, userId), notificationVisible))
-        .orderBy(desc(notifications.createdAt), desc(notifications.id))
+        .where(and(eq(notifications.userId, userId), notificationVisible, beforeId ? lt(notifications.id, beforeId) : undefined))
+        .orderBy(desc(notifications.id))
         .limit(limit);
     },
     async markRead(userId: number, ids?: number[]) {

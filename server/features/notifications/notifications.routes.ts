@@ -2,21 +2,28 @@ import { and, asc, eq, inArray } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { OpenQuestion } from '../../../shared/schemas/findings';
+import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import type { AppDeps } from '../../app-deps';
 import { findings, memberships, restorations } from '../../db/schema';
 import { requireUser } from '../../http/guard';
+import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { notificationsService } from './notifications.service';
 import { bodyIdSchema } from '../../../shared/schemas/ids';
 
+const paged = { query: pageQuerySchema };
 const read = { body: z.object({ ids: z.array(bodyIdSchema).max(500).optional() }) };
 
 /** The signed-in person's unread items and the open questions waiting on their bench. */
 export function notificationsRoutes(deps: AppDeps): Router {
   const service = notificationsService(deps);
   const router = Router();
-  router.get('/notifications', requireUser, async (req, res) => {
-    res.json(await service.listFor(req.user!.id));
+  // Newest first, in pages (see shared/schemas/pagination.ts).
+  router.get('/notifications', requireUser, validate(paged), async (req, res) => {
+    const { query } = input(res, paged);
+    const cursor = decodeCursor(query.cursor, ['number']);
+    const items = await service.listFor(req.user!.id, query.limit + 1, cursor?.[0] as number | undefined);
+    await sendPage(req, res, items, query.limit, (n) => [n.id], (page) => page);
   });
   router.post('/notifications/read', requireUser, validate(read), async (req, res) => {
     await service.markRead(req.user!.id, input(res, read).body.ids);

@@ -2,7 +2,7 @@ import { mayView, type Role } from '../../../shared/permissions';
 import type { Notification } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
 import type { Executor } from '../../db/client';
-import { flushNotificationMail } from './mail-batch';
+import { requestNotificationMail } from './mail-batch';
 import { notificationsRepo, type NewNotification } from './notifications.repo';
 
 type FindingLike = { id: number; restorationId: number; number: number; title: string; componentRef: string; authorId: number | null; ownerVisible: boolean; photoOwnerVisible: boolean };
@@ -21,7 +21,8 @@ export function notificationsService(deps: AppDeps) {
 
   return {
     /** Sends what is due now (the first item for a person goes at once); failures wait for the next tick. */
-    kick: () => void flushNotificationMail(deps).catch((err: Error) => deps.logger.warn(`notification mail: ${err.message}`)),
+    // One flush at a time per app, and one more if asked meanwhile; errors are logged redacted (no query parameters).
+    kick: () => requestNotificationMail(deps, (err) => deps.logger.warn({ err }, 'notification mail failed')),
     async questionAsked(tx: Executor, f: FindingLike, actor: { id: number; name: string }) {
       const mentors = await notificationsRepo(tx).membersWithRole(f.restorationId, ['mentor']);
       await notificationsRepo(tx).insert(
@@ -51,8 +52,8 @@ export function notificationsService(deps: AppDeps) {
             summary: `${actor.name} mentioned you on ${label(f)}: ${excerpt(c.body)}` });
       await notificationsRepo(tx).insert([...rows.values()]);
     },
-    async listFor(userId: number): Promise<Notification[]> {
-      return (await repo.listFor(userId)).map(({ n, photoId }) => ({
+    async listFor(userId: number, limit?: number, beforeId?: number): Promise<Notification[]> {
+      return (await repo.listFor(userId, limit, beforeId)).map(({ n, photoId }) => ({
         id: n.id, kind: n.kind, summary: n.summary, restorationId: n.restorationId, findingId: n.findingId, photoId,
         read: n.readAt !== null, createdAt: n.createdAt.toISOString(),
       }));

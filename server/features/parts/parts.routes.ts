@@ -1,13 +1,16 @@
 import { Router, type Request, type Response } from 'express';
+import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { partInputSchema, partPatchSchema } from '../../../shared/schemas/parts';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
+import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { partsCsv } from './parts-csv';
 import { partsService, toPart } from './parts.service';
 
 const one = { params: idParamsSchema };
+const paged = { params: idParamsSchema, query: pageQuerySchema };
 const create = { params: idParamsSchema, body: partInputSchema };
 const patch = { params: idParamsSchema, body: partPatchSchema };
 
@@ -16,8 +19,12 @@ export function partsRoutes({ db }: AppDeps): Router {
   const service = partsService(db);
   const ofPart = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
   const router = Router();
-  router.get('/restorations/:id/parts', requireUser, validate(one), guard(db, 'parts.view'), async (_req, res) => {
-    res.json((await service.list(input(res, one).params.id, roleOf(res))).map((p) => toPart(p, roleOf(res))));
+  // The ledger in pages (see shared/schemas/pagination.ts), as this role may see it; the CSV below stays whole.
+  router.get('/restorations/:id/parts', requireUser, validate(paged), guard(db, 'parts.view'), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const cursor = decodeCursor(query.cursor, ['string', 'number']);
+    const rows = await service.page(params.id, roleOf(res), query.limit + 1, cursor && { componentRef: cursor[0] as string, id: cursor[1] as number });
+    await sendPage(req, res, rows, query.limit, (p) => [p.componentRef, p.id], (page) => page.map((p) => toPart(p, roleOf(res))));
   });
   router.get('/restorations/:id/parts.csv', requireUser, validate(one), guard(db, 'parts.view'), async (_req, res) => {
     const id = input(res, one).params.id;

@@ -1,4 +1,4 @@
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, sql } from 'drizzle-orm';
 import { partWarnings } from '../../../shared/bench';
 import type { Role } from '../../../shared/permissions';
 import type { Part, PartInput } from '../../../shared/schemas/parts';
@@ -32,21 +32,28 @@ export function partsService(db: Database) {
     if (!f) throw new BadRequestError('findingId: no such finding on this restoration.');
   }
   const find = async (id: number) => (await db.select().from(parts).where(eq(parts.id, id)))[0];
+  /** One page of the ledger as this role may see it, in its order (reference, then id), after the part `after` names. */
+  const page = async (restorationId: number, role: Role, limit?: number, after?: { componentRef: string; id: number }): Promise<Row[]> => {
+    const query = db
+      .select({ part: parts, findingVisible: visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) }) })
+      .from(parts)
+      .leftJoin(findings, eq(findings.id, parts.findingId))
+      .leftJoin(photos, eq(photos.id, findings.photoId))
+      .where(and(eq(parts.restorationId, restorationId), visibleSql(role, 'part', { part: columnsOf(parts) }),
+        after ? sql`(${parts.componentRef}, ${parts.id}) > (${after.componentRef}, ${after.id})` : undefined))
+      .orderBy(asc(parts.componentRef), asc(parts.id));
+    const rows = limit ? await query.limit(limit) : await query;
+    return rows.map(({ part, findingVisible }) => ({ ...part, findingId: findingVisible ? part.findingId : null }));
+  };
   return {
     async restorationOf(id: number) {
       return (await find(id))?.restorationId;
     },
     /** The ledger lines this role may see; a line's finding is named only when the reader may see it. */
     async list(restorationId: number, role: Role): Promise<Row[]> {
-      const rows = await db
-        .select({ part: parts, findingVisible: visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) }) })
-        .from(parts)
-        .leftJoin(findings, eq(findings.id, parts.findingId))
-        .leftJoin(photos, eq(photos.id, findings.photoId))
-        .where(and(eq(parts.restorationId, restorationId), visibleSql(role, 'part', { part: columnsOf(parts) })))
-        .orderBy(asc(parts.componentRef), asc(parts.id));
-      return rows.map(({ part, findingVisible }) => ({ ...part, findingId: findingVisible ? part.findingId : null }));
+      return page(restorationId, role);
     },
+    page,
     async create(restorationId: number, input: PartInput & { action: Row['action'] }, actorId: number) {
       const fittedAt = input.state === 'fitted' ? new Date() : null;
       // Keeping an original is recorded in the ledger, but nothing was fitted.

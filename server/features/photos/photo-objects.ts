@@ -4,6 +4,7 @@ import type { Storage } from '../../storage';
 export const photoKeys = (storageKey: string) => ({
   original: `photos/${storageKey}/original`,
   display: `photos/${storageKey}/display.webp`,
+  phone: `photos/${storageKey}/phone.webp`,
   thumb: `photos/${storageKey}/thumb.webp`,
 });
 

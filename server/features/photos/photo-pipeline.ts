@@ -7,6 +7,8 @@ import { HttpError } from '../../http/errors';
 const ACCEPTED: Record<string, string> = { jpeg: 'image/jpeg', png: 'image/png', webp: 'image/webp', heif: 'image/heif' };
 export const DISPLAY_PX = 2560;
 export const THUMB_PX = 400;
+/** The phone variant: sharp on a phone screen (about 400 CSS px at 3×) at a fraction of the display's bytes. */
+export const PHONE_PX = 1280;
 
 export interface PipelineLimits {
   /** Decoded pixels allowed (width × height), against decompression bombs. */
@@ -19,6 +21,7 @@ export interface ProcessedPhoto {
   height: number;
   takenAt: Date | null;
   display: Buffer;
+  phone: Buffer;
   thumb: Buffer;
 }
 
@@ -53,20 +56,26 @@ export function processPhoto(path: string, limits: PipelineLimits): Promise<Proc
         .resize({ width: DISPLAY_PX, height: DISPLAY_PX, fit: 'inside', withoutEnlargement: true })
         .webp({ quality: 82 })
         .toBuffer();
-      // The thumbnail comes from the display image: far less to decode than the original.
-      const thumb = await sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer();
+      // The smaller variants come from the display image: far less to decode than the original.
+      const [phone, thumb] = await Promise.all([phoneVariant(display), sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer()]);
       return {
         contentType: meta.format === 'heif' && meta.compression === 'av1' ? 'image/avif' : contentType,
         width: rotated ? meta.height : meta.width,
         height: rotated ? meta.width : meta.height,
         takenAt: captureTime(meta.exif),
         display,
+        phone,
         thumb,
       };
     } catch {
       throw new HttpError(400, 'damaged_image', 'The image is damaged or incomplete; try sending it again, or export it afresh.');
     }
   });
+}
+
+/** The phone-sized variant from a display image (also used to backfill photos stored before it existed). */
+export function phoneVariant(display: Buffer): Promise<Buffer> {
+  return sharp(display).resize({ width: PHONE_PX, height: PHONE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
 }
 
 function captureTime(exif: Buffer | undefined): Date | null {

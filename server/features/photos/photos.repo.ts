@@ -1,7 +1,7 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
-import { photos, users } from '../../db/schema';
+import { memberships, photos, users } from '../../db/schema';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null };
@@ -20,6 +20,15 @@ export function photosRepo(db: Executor) {
     async find(id: number): Promise<PhotoRow | undefined> {
       const [row] = await select().where(eq(photos.id, id));
       return row && flat(row);
+    },
+    /** The photo's restoration, the reader's role there (if a member) and its findings version, in one query. */
+    async accessOf(id: number, userId: number) {
+      const [row] = await db
+        .select({ restorationId: photos.restorationId, findingsVersion: photos.findingsVersion, role: memberships.role })
+        .from(photos)
+        .leftJoin(memberships, and(eq(memberships.restorationId, photos.restorationId), eq(memberships.userId, userId)))
+        .where(eq(photos.id, id));
+      return row && { restorationId: row.restorationId, findingsVersion: row.findingsVersion, role: row.role ?? undefined };
     },
     async restorationOf(id: number): Promise<number | undefined> {
       const [row] = await db.select({ restorationId: photos.restorationId }).from(photos).where(eq(photos.id, id));

@@ -19,8 +19,9 @@ export function photosService({ db, storage, config }: PhotosDeps) {
 
   async function toPhoto(row: PhotoRow, role: Role): Promise<Photo> {
     const keys = photoKeys(row.storageKey);
-    const [thumb, display, original] = await Promise.all([
+    const [thumb, phone, display, original] = await Promise.all([
       storage.getSignedUrl(keys.thumb),
+      storage.getSignedUrl(keys.phone),
       storage.getSignedUrl(keys.display),
       can(role, 'photos.original') ? storage.getSignedUrl(keys.original, { downloadName: `photo-${row.id}.${extension[row.contentType] ?? 'img'}` }) : undefined,
     ]);
@@ -28,7 +29,7 @@ export function photosService({ db, storage, config }: PhotosDeps) {
       id: row.id, restorationId: row.restorationId, view: row.view, phase: row.phase, caption: row.caption,
       ownerVisible: row.ownerVisible, width: row.width, height: row.height, takenAt: row.takenAt?.toISOString() ?? null,
       uploadedAt: row.createdAt.toISOString(), uploadedBy: row.uploadedBy, contentType: row.contentType, sizeBytes: row.sizeBytes,
-      urls: original ? { thumb, display, original } : { thumb, display },
+      urls: original ? { thumb, phone, display, original } : { thumb, phone, display },
     };
   }
 
@@ -66,6 +67,7 @@ export function photosService({ db, storage, config }: PhotosDeps) {
         signal?.throwIfAborted();
         await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size, { signal });
         await storage.putObject(keys.display, processed.display, 'image/webp', undefined, { signal });
+        await storage.putObject(keys.phone, processed.phone, 'image/webp', undefined, { signal });
         await storage.putObject(keys.thumb, processed.thumb, 'image/webp', undefined, { signal });
         signal?.throwIfAborted();
         // The row and its history line together: if either fails, neither stays and the objects go below.

@@ -15,6 +15,7 @@ import { RepairedFindings } from '../../features/owner/components/repaired-findi
 import { heroPhoto, repairedFindings } from '../../features/owner/lib/owner-words';
 import { usePhotos } from '../../features/photos/api/get-photos';
 import { useRestorations } from '../../features/restorations/api/get-restorations';
+import { OWNER_COLUMN_SIZES } from '../../lib/photo-sources';
 
 /** A query's loading and error states, else what its data draws. */
 function Loaded<T>({ query, label, children }: { query: UseQueryResult<T>; label: string; children: (data: T) => ReactNode }) {
@@ -44,7 +45,7 @@ function SetPage({ set }: { set: Restoration }) {
             {() => (
               <div className="space-y-8">
                 {pairs.map((pair) => (
-                  <BeforeAfter key={`${pair.before.id}-${pair.after.id}`} before={pair.before} after={pair.after} />
+                  <BeforeAfter key={`${pair.before.id}-${pair.after.id}`} before={pair.before} after={pair.after} sizes={OWNER_COLUMN_SIZES} />
                 ))}
               </div>
             )}

@@ -86,6 +86,8 @@ function PhotoMarkup({
   const canCreate = can(r.role, 'findings.create');
   const canEdit = useCallback((f: Finding) => can(r.role, 'findings.edit', { isAuthor: f.authorId === meId }), [r.role, meId]);
   const selected = findings.find((f) => f.id === findingId);
+  // The photo and its marks come first; the finding's thread, readings and close-up are fetched after that frame.
+  const [drawn, setDrawn] = useState(false);
 
   return (
     <div className="space-y-3">
@@ -123,6 +125,7 @@ function PhotoMarkup({
               onUndo={actions.undo}
               pendingMark={actions.pending}
               onImageError={onImageError}
+              onFirstFrame={() => setDrawn(true)}
             />
           </div>
           <section aria-labelledby="photo-findings-heading" className="space-y-2">
@@ -154,6 +157,8 @@ function PhotoMarkup({
                 onCancel={actions.cancelCreate}
               />
             </div>
+          ) : selected && !drawn ? (
+            <Loading label="Opening the finding…" />
           ) : selected ? (
             <div className="space-y-4 rounded-xl border border-rule bg-panel p-4">
               <FindingPanel

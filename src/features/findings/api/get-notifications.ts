@@ -3,7 +3,8 @@ import type { Notification } from '../../../../shared/schemas/findings';
 import { api } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
-export const getNotifications = () => api<Notification[]>('/notifications');
+/** The newest page only: the menu shows the latest items. */
+export const getNotifications = () => api<Notification[]>('/notifications?limit=50');
 export const markNotificationsRead = (ids?: number[]) => api<void>('/notifications/read', { method: 'POST', json: { ids } });
 
 export const notificationsQueryOptions = () =>

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { TimelineEvent } from '../../../../shared/schemas/parts';
-import { api } from '../../../lib/api-client';
+import { apiAllPages } from '../../../lib/api-client';
 
 export type EventKind = TimelineEvent['kind'];
 
 export const getEvents = (restorationId: number, kind?: EventKind) =>
-  api<TimelineEvent[]>(`/restorations/${restorationId}/events${kind ? `?kind=${kind}` : ''}`);
+  apiAllPages<TimelineEvent>(`/restorations/${restorationId}/events${kind ? `?kind=${kind}` : ''}`);
 
 export const eventsQueryKey = (restorationId: number, kind?: EventKind) =>
   kind ? (['restorations', restorationId, 'events', kind] as const) : (['restorations', restorationId, 'events'] as const);

@@ -2,17 +2,18 @@ import { useState } from 'react';
 import { viewLabels, type Photo } from '../../../../shared/schemas/photos';
 import { photoDay, photoWords } from '../lib/photo-words';
 import { CompareSlider } from './compare-slider';
+import { photoSources } from '../../../lib/photo-sources';
 
-function Side({ photo, label }: { photo: Photo; label: string }) {
+function Side({ photo, label, sizes }: { photo: Photo; label: string; sizes: string }) {
   return (
     <figure className="space-y-1">
       <img
-        src={photo.urls.display}
         alt={`${label} — ${photoWords(photo)}`}
         width={photo.width || undefined}
         height={photo.height || undefined}
         loading="lazy"
         decoding="async"
+        {...photoSources(photo, `(min-width: 640px) 50vw, ${sizes}`)}
         className="h-auto w-full rounded-xl bg-sunken object-cover"
       />
       <figcaption className="text-sm text-ink-soft">
@@ -23,8 +24,11 @@ function Side({ photo, label }: { photo: Photo; label: string }) {
   );
 }
 
+/** The page's full width (max-w-6xl with its padding); pass narrower `sizes` where the column is narrower. */
+const WIDE_SIZES = '(min-width: 1184px) 1152px, calc(100vw - 32px)';
+
 /** One view of the set before and after the work: a slider over the two photos, or the two side by side. */
-export function BeforeAfter({ before, after }: { before: Photo; after: Photo }) {
+export function BeforeAfter({ before, after, sizes = WIDE_SIZES }: { before: Photo; after: Photo; sizes?: string }) {
   const [sideBySide, setSideBySide] = useState(false);
   const sameView = before.view === after.view;
   return (
@@ -53,11 +57,11 @@ export function BeforeAfter({ before, after }: { before: Photo; after: Photo }) 
       </figcaption>
       {sideBySide ? (
         <div className="grid gap-3 sm:grid-cols-2">
-          <Side photo={before} label="Before" />
-          <Side photo={after} label="After" />
+          <Side photo={before} label="Before" sizes={sizes} />
+          <Side photo={after} label="After" sizes={sizes} />
         </div>
       ) : (
-        <CompareSlider before={before} after={after} />
+        <CompareSlider before={before} after={after} sizes={sizes} />
       )}
     </figure>
   );

@@ -1,6 +1,7 @@
 import { useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import type { Photo } from '../../../../shared/schemas/photos';
 import { photoWords } from '../lib/photo-words';
+import { photoSources } from '../../../lib/photo-sources';
 
 const clamp = (n: number) => Math.min(100, Math.max(0, Math.round(n)));
 const keySteps: Record<string, (v: number) => number> = {
@@ -20,7 +21,7 @@ const tag = 'pointer-events-none absolute top-2 rounded-full bg-bakelite/75 px-2
  * Drag anywhere on the picture (mouse, pen or finger; vertical swipes still scroll the page) or move the handle
  * with the arrow keys, Page Up/Down, Home and End.
  */
-export function CompareSlider({ before, after }: { before: Photo; after: Photo }) {
+export function CompareSlider({ before, after, sizes }: { before: Photo; after: Photo; sizes: string }) {
   const [position, setPosition] = useState(50);
   const box = useRef<HTMLDivElement>(null);
   const handle = useRef<HTMLDivElement>(null);
@@ -64,9 +65,11 @@ export function CompareSlider({ before, after }: { before: Photo; after: Photo }
       onPointerCancel={stop}
       onLostPointerCapture={stop}
     >
-      <img src={before.urls.display} alt={`Before — ${photoWords(before)}`} draggable={false} className="absolute inset-0 h-full w-full object-cover" />
+      <img loading="lazy" decoding="async" {...photoSources(before, sizes)} alt={`Before — ${photoWords(before)}`} draggable={false} className="absolute inset-0 h-full w-full object-cover" />
       <img
-        src={after.urls.display}
+        loading="lazy"
+        decoding="async"
+        {...photoSources(after, sizes)}
         alt={`After — ${photoWords(after)}`}
         draggable={false}
         className="absolute inset-0 h-full w-full object-cover"

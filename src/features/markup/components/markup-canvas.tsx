@@ -33,6 +33,8 @@ export interface MarkupCanvasProps extends CommandCallbacks {
   pendingMark?: NewMark;
   /** The display image failed to load (its presigned URL may have expired). */
   onImageError?: () => void;
+  /** The photo has loaded (or failed) and the frame with it and the marks is on screen. */
+  onFirstFrame?: () => void;
   /** Names the photo for screen readers. */
   label?: string;
 }
@@ -46,6 +48,14 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   const { ref, size } = useContainerSize<HTMLDivElement>();
   const imageSize = useMemo(() => ({ width: props.imageSize.width, height: props.imageSize.height }), [props.imageSize.width, props.imageSize.height]);
   const photo = usePhotoImage(props.imageUrl, props.onImageError);
+  const firstFrame = useRef(props.onFirstFrame);
+  useEffect(() => {
+    if (photo.status === 'loading' || !firstFrame.current) return;
+    const notify = firstFrame.current;
+    firstFrame.current = undefined;
+    // Two animation frames: the stage has drawn the photo and its marks by then.
+    requestAnimationFrame(() => requestAnimationFrame(() => notify()));
+  }, [photo.status]);
   const pixelRatio = usePixelRatio();
   const view = useView(imageSize, size);
   const commands = useMarkupCommands(props);

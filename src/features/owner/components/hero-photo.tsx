@@ -1,4 +1,5 @@
 import type { Photo } from '../../../../shared/schemas/photos';
+import { OWNER_COLUMN_SIZES, photoSources } from '../../../lib/photo-sources';
 
 /** The set's picture at the top of its page, given the width; a quiet panel until there is one. */
 export function HeroPhoto({ photo, name }: { photo: Photo | undefined; name: string }) {
@@ -10,7 +11,7 @@ export function HeroPhoto({ photo, name }: { photo: Photo | undefined; name: str
     );
   return (
     <img
-      src={photo.urls.display}
+      {...photoSources(photo, OWNER_COLUMN_SIZES)}
       alt={photo.caption ? `${name}: ${photo.caption}` : `${name}, ${photo.phase === 'after' ? 'after the work' : 'in the workshop'}`}
       width={photo.width || undefined}
       height={photo.height || undefined}

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { Photo } from '../../../../shared/schemas/photos';
 import { photoLabel } from '../lib/photo-format';
+import { photoSources } from '../../../lib/photo-sources';
 
 /**
  * The large image, letterboxed in the space it is given. The thumbnail (already in the browser's cache) stands
@@ -11,9 +12,9 @@ export function LightboxImage({ photo, onError }: { photo: Photo; onError?: () =
   const fill = 'absolute inset-0 h-full w-full object-contain p-2 sm:p-6';
   return (
     <>
-      {!loaded && <img src={photo.urls.thumb} alt="" aria-hidden="true" className={`${fill} opacity-70 blur-sm`} />}
+      {!loaded && <img src={photo.urls.thumb} alt="" loading="lazy" aria-hidden="true" className={`${fill} opacity-70 blur-sm`} />}
       <img
-        src={photo.urls.display}
+        {...photoSources(photo, '100vw')}
         alt={photoLabel(photo)}
         width={photo.width || undefined}
         height={photo.height || undefined}

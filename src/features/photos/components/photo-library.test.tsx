@@ -56,7 +56,7 @@ describe('photo gallery', () => {
   });
 
   it('when an owner opens a shared photo, then there is no uploader and no edit, download or delete control', async () => {
-    const { calls } = fakePhotoApi([makePhoto(1, { ownerVisible: true, urls: { thumb: '/t/1', display: '/d/1' } })]);
+    const { calls } = fakePhotoApi([makePhoto(1, { ownerVisible: true, urls: { thumb: '/t/1', phone: '/p/1', display: '/d/1' } })]);
     renderWithQueries(<PhotoLibrary restorationId={7} role="owner" />);
 
     await userEvent.setup().click(await screen.findByRole('button', { name: 'Top, before' }));

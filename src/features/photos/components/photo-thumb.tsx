@@ -1,6 +1,10 @@
 import type { Photo } from '../../../../shared/schemas/photos';
 import { photoLabel, thumbSize } from '../lib/photo-format';
 import { SharedBadge } from './shared-badge';
+import { photoSources } from '../../../lib/photo-sources';
+
+/** The gallery's columns: 2 on a phone up to 6 on a wide screen (photo-gallery.tsx). */
+const GRID_SIZES = '(min-width: 1280px) 190px, (min-width: 1024px) 20vw, (min-width: 768px) 25vw, (min-width: 640px) 33vw, 50vw';
 
 export function PhotoThumb({
   photo,
@@ -25,12 +29,12 @@ export function PhotoThumb({
       className="group relative block w-full overflow-hidden rounded-lg border border-rule bg-sunken text-left hover:border-glow"
     >
       <img
-        src={photo.urls.thumb}
         alt=""
         width={width}
         height={height}
         loading="lazy"
         decoding="async"
+        {...photoSources(photo, GRID_SIZES)}
         onError={onImageError}
         className="aspect-[4/3] h-auto w-full object-cover transition-transform group-hover:scale-[1.02] motion-reduce:transition-none"
       />

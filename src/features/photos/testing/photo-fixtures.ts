@@ -16,7 +16,7 @@ export function makePhoto(id: number, overrides: Partial<Photo> = {}): Photo {
     uploadedBy: 'Tessa Bench',
     contentType: 'image/jpeg',
     sizeBytes: 2_400_000,
-    urls: { thumb: `/t/${id}.webp`, display: `/d/${id}.webp`, original: `/o/${id}.jpg` },
+    urls: { thumb: `/t/${id}.webp`, phone: `/p/${id}.webp`, display: `/d/${id}.webp`, original: `/o/${id}.jpg` },
     ...overrides,
   };
 }

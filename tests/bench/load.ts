@@ -1,0 +1,101 @@
+/**
+ * Load test (prints figures measured in one run; no assertions): 50 virtual users, each signed in as a
+ * technician of one of 10 restorations, for 60 s, each going round a realistic mix: the bench, the
+ * restoration's tabs, a photo's findings, a comment, a reading, and an upload every tenth round.
+ * Prints requests per second, p95 per route, errors (goal: none), and the server's RSS before and after (each
+ * measured after a full garbage collection, so garbage not yet collected is not counted as growth).
+ * Run: npx tsx tests/bench/load.ts [seconds]
+ */
+import { fork } from 'node:child_process';
+import autocannon from 'autocannon';
+import { twoToneJpeg } from '../factories/images';
+import { startTestCluster } from '../support/test-cluster';
+
+type Person = { cookie: string; restorationId: number; photoId: number; findingId: number };
+type Ctx = { person?: Person; route?: string };
+const seconds = Number(process.argv[2] ?? 60);
+const boundary = 'gridleak-load-boundary';
+const jpeg = await twoToneJpeg(1600, 1200);
+const uploadBody = Buffer.concat([
+  Buffer.from(`--${boundary}\r\nContent-Disposition: form-data; name="view"\r\n\r\nunderside\r\n--${boundary}\r\nContent-Disposition: form-data; name="phase"\r\n\r\nbefore\r\n`),
+  Buffer.from(`--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="chassis.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`),
+  jpeg,
+  Buffer.from(`\r\n--${boundary}--\r\n`),
+]);
+
+const p95 = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length * 0.95)] ?? NaN;
+const cluster = await startTestCluster();
+const child = fork('tests/bench/load-server.ts', [], {
+  execArgv: ['--expose-gc', '--import', 'tsx'],
+  env: { ...process.env, GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl, AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' },
+  stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
+});
+const rss = () => new Promise<number>((resolve) => {
+  child.once('message', (m) => resolve((m as { rss: number }).rss));
+  child.send('rss');
+});
+try {
+  const info = await new Promise<{ port: number; people: Person[] }>((resolve) => child.stdout!.once('data', (d) => resolve(JSON.parse(String(d)))));
+  let next = 0;
+  let rounds = 0;
+  // One step of the round: its route name for the figures, and how to make the request for this person.
+  const step = (route: string, make: (p: Person, c: Ctx) => { method?: string; path: string; body?: string | Buffer; headers?: Record<string, string> }) => ({
+    setupRequest: (req: Record<string, unknown>, context: Ctx) => {
+      context.person ??= info.people[next++ % info.people.length];
+      context.route = route;
+      const r = make(context.person!, context);
+      return { ...req, method: r.method ?? 'GET', path: r.path, body: r.body,
+        headers: { cookie: context.person!.cookie, origin: 'http://gridleak.test', 'accept-encoding': 'gzip, br', ...(r.body ? { 'content-type': 'application/json' } : {}), ...r.headers } };
+    },
+  });
+  const requests = [
+    step('GET /restorations (bench)', () => ({ path: '/api/restorations' })),
+    step('GET /activity (bench)', () => ({ path: '/api/activity' })),
+    step('GET /notifications', () => ({ path: '/api/notifications?limit=50' })),
+    step('GET /restorations/:id', (p) => ({ path: `/api/restorations/${p.restorationId}` })),
+    step('GET /restorations/:id/photos', (p) => ({ path: `/api/restorations/${p.restorationId}/photos` })),
+    step('GET /photos/:id/findings', (p) => ({ path: `/api/photos/${p.photoId}/findings` })),
+    step('GET /restorations/:id/findings', (p) => ({ path: `/api/restorations/${p.restorationId}/findings` })),
+    step('GET /restorations/:id/measurements', (p) => ({ path: `/api/restorations/${p.restorationId}/measurements` })),
+    step('GET /restorations/:id/parts', (p) => ({ path: `/api/restorations/${p.restorationId}/parts` })),
+    step('GET /restorations/:id/events', (p) => ({ path: `/api/restorations/${p.restorationId}/events` })),
+    step('POST /findings/:id/comments', (p) => ({ method: 'POST', path: `/api/findings/${p.findingId}/comments`, body: JSON.stringify({ body: 'Re-measured: 248 V at the anode.' }) })),
+    step('POST /restorations/:id/measurements', (p) => ({ method: 'POST', path: `/api/restorations/${p.restorationId}/measurements`,
+      body: JSON.stringify({ location: 'V3 pin 7', quantity: 'dc-voltage', expected: '250 V', tolerance: '±10%', reading: '243 V' }) })),
+    step('GET /photos/:id/findings', (p) => ({ path: `/api/photos/${p.photoId}/findings` })),
+    // An upload every tenth round; the other rounds read the photo list again.
+    step('upload or photos', (p, c) => {
+      // autocannon resets each connection's context after a round, so the rounds are counted here.
+      rounds += 1;
+      if (rounds % 10 !== 5) return { path: `/api/restorations/${p.restorationId}/photos` };
+      c.route = 'POST /restorations/:id/photos (upload)';
+      return { method: 'POST', path: `/api/restorations/${p.restorationId}/photos`, body: uploadBody, headers: { 'content-type': `multipart/form-data; boundary=${boundary}` } };
+    }),
+  ];
+  const rssBefore = await rss();
+  const byRoute = new Map<string, number[]>();
+  const failures = new Map<string, number>();
+  const result = await new Promise<autocannon.Result>((resolve, reject) => {
+    const instance = autocannon({ url: `http://127.0.0.1:${info.port}`, connections: 50, duration: seconds, requests: requests as never, timeout: 30 },
+      (err, res) => (err ? reject(err) : resolve(res)));
+    instance.on('response', (client, status, _bytes, ms) => {
+      const ctx = (client as unknown as { requestIterator: { context: Ctx } }).requestIterator.context;
+      const route = ctx.route === 'upload or photos' ? 'GET /restorations/:id/photos' : ctx.route ?? '?';
+      if (!byRoute.has(route)) byRoute.set(route, []);
+      byRoute.get(route)!.push(ms);
+      if (status >= 400) failures.set(`${route} → ${status}`, (failures.get(`${route} → ${status}`) ?? 0) + 1);
+    });
+  });
+  const rssAfter = await rss();
+  const mb = (n: number) => `${(n / 1024 / 1024).toFixed(0)} MB`;
+  console.log(`\nload: 50 signed-in users, ${seconds} s, a round of ${requests.length} requests each (an upload every tenth round)`);
+  console.log(`  requests: ${result.requests.total} (${(result.requests.total / seconds).toFixed(0)}/s); errors: ${result.errors} connection, ${result.non2xx} non-2xx; timeouts ${result.timeouts}`);
+  for (const [what, n] of failures) console.log(`    ${what}: ${n}`);
+  console.log('  p95 per route:');
+  for (const [route, xs] of [...byRoute].sort((a, b) => p95(b[1]) - p95(a[1]))) console.log(`    ${p95(xs).toFixed(0).padStart(6)} ms  ${route} (${xs.length})`);
+  console.log(`  server RSS: ${mb(rssBefore)} before, ${mb(rssAfter)} after (${(((rssAfter - rssBefore) / rssBefore) * 100).toFixed(0)} %)`);
+} finally {
+  child.kill('SIGTERM');
+  await new Promise((r) => child.once('exit', r));
+  cluster.stop();
+}
