@@ -8,13 +8,13 @@ export interface PartWarning {
   message: string;
 }
 
-// A capacitance as marked: "50µF", "0.1 mfd", "8 MF" (old American: microfarads), "47UF", "100 mmfd", "4n7", "32u".
+// A capacitance as marked: "32µF", "0.1 mfd", "8 MF" (old American: microfarads), "47UF", "100 mmfd", "4n7", "32u".
 const CAPACITANCE = /(?<![\w.])(\d+[pnuµμ]\d+(?:\s*f)?(?![a-z])|\d+(?:\.\d+)?\s*(?:mmfd|mfd|mmf|mf|[pnuµμ]f?)(?![a-z\d]))/i;
 // A voltage rating as marked: "450 V", "400 VDC", "250 WV", "350 WVDC", "250 VAC", "1 kV", "1.6 kV".
 const VOLTAGE = /(?<![\w.])(\d+(?:\.\d+)?)\s*(k)?\s*(V\s*(?:DC|AC|RMS|W)?|WV(?:DC)?|DCWV)(?![a-z])/i;
 
 /**
- * Capacitance (F) and voltage (V) read from a rating as people write it: "50µF 350V", "0.047 µF 600 V", "32u/450",
+ * Capacitance (F) and voltage (V) read from a rating as people write it: "32µF 350V", "0.047 µF 600 V", "32u/450",
  * "4n7", "0.1 mfd 400 VDC", "8 MF 350 WV", "0.01 µF 1 kV"; `ac` is set when the voltage is marked as AC.
  */
 export function readRating(text: string): { farads?: number; volts?: number; ac?: boolean } {

@@ -116,7 +116,7 @@ function parseDecimal(text: string, match: RegExpExecArray, options: ParseQuanti
 }
 
 /**
- * Reads a written value: text like "4.7 kΩ", "47k", "4k7", "R47", "47R", "3n3", "50µF", "47UF", "0.05 mfd", "8 MF",
+ * Reads a written value: text like "4.7 kΩ", "47k", "4k7", "R47", "47R", "3n3", "32µF", "47UF", "0.05 mfd", "8 MF",
  * "4.7 meg", "350 WVDC", "1.6 kV", "−7.3 V";
  * returns the value in SI base units (Ω, F, V, A, Hz, W, s, J) and the unit ('' when none written).
  * An RKM code implies its unit: resistance letters give 'Ω', capacitance letters give 'F'.

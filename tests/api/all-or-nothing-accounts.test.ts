@@ -24,7 +24,7 @@ afterAll(() => t.stop());
 
 const strong = 'grid leak resistor drifted high';
 const mails = async () => (await t.request().get('/api/dev/mail')).body;
-const newSet = () => createRestoration(t.db, [{ userId: techUser.id, role: 'technician' }], { make: 'Fenwick', model: 'Kestrel' });
+const newSet = () => createRestoration(t.db, [{ userId: techUser.id, role: 'technician' }], { make: 'Farrowby', model: 'Kestrel' });
 async function invite(restorationId: number, email: string) {
   expect((await tech.post(`/api/restorations/${restorationId}/invitations`).send({ email, role: 'mentor' })).status).toBe(201);
   return tokenFrom(await waitForMail(mails, email, /invited you/), 'invitations');

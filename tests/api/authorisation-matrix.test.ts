@@ -41,7 +41,7 @@ const matrix: Row[] = [
   ['POST', '/api/auth/password-reset', [202, 202, 202, 202, 202], () => ({ email: unique() })],
   ['POST', '/api/auth/password-reset/confirm', [410, 410, 410, 410, 410], () => ({ token: 'x'.repeat(43), password: 'a quiet chassis hum' })],
   ['GET', '/api/restorations', [200, 200, 200, 200, 401]],
-  ['POST', '/api/restorations', [201, 201, 201, 201, 401], () => ({ make: 'Fenwick', model: 'Lark' })],
+  ['POST', '/api/restorations', [201, 201, 201, 201, 401], () => ({ make: 'Farrowby', model: 'Lark' })],
   ['GET', '/api/restorations/:id', [200, 200, 200, 404, 401]],
   ['PATCH', '/api/restorations/:id', [200, 403, 403, 404, 401], () => ({ stage: 'repair' })],
   ['DELETE', '/api/restorations/:id', [204, 403, 403, 404, 401]],

@@ -18,7 +18,7 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 const mails = async () => (await t.request().get('/api/dev/mail')).body;
-const newSet = () => createRestoration(t.db, [{ userId: techUser.id, role: 'technician' }], { make: 'Fenwick', model: 'Kestrel' });
+const newSet = () => createRestoration(t.db, [{ userId: techUser.id, role: 'technician' }], { make: 'Farrowby', model: 'Kestrel' });
 const strong = 'signal tracer on the detector';
 
 async function invite(restorationId: number, email: string, role: string) {
@@ -34,7 +34,7 @@ describe('invitations', () => {
     const set = await newSet();
     const token = await invite(set.id, 'new.mentor@example.test', 'mentor');
     const preview = await anonymous(t.app).get(`/api/invitations/${token}`);
-    expect(preview.body).toMatchObject({ restoration: { id: set.id, make: 'Fenwick' }, role: 'mentor', invitedBy: 'Mara Test' });
+    expect(preview.body).toMatchObject({ restoration: { id: set.id, make: 'Farrowby' }, role: 'mentor', invitedBy: 'Mara Test' });
     const mentor = anonymous(t.app);
     const res = await mentor.post('/api/auth/sign-up').send({ name: 'New Mentor', email: 'New.Mentor@example.test', password: strong, invitationToken: token });
     expect(res.status).toBe(201);

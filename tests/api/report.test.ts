@@ -21,7 +21,7 @@ beforeAll(async () => {
   t = await startTestApp();
   const [a, b] = await Promise.all([createUser(t.db, { name: 'Mara Report' }), createUser(t.db)]);
   ownerEmail = b.email;
-  id = (await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: b.id, role: 'owner' }], { make: 'Fenwick', model: 'Nightjar 6' })).id;
+  id = (await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: b.id, role: 'owner' }], { make: 'Farrowby', model: 'Nightjar 6' })).id;
   [tech, owner] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b)]);
   const jpeg = await twoToneJpeg();
   const up = (fields: Record<string, string>) => {
@@ -51,7 +51,7 @@ describe('hand-back report', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = await pdfText(res.body as Buffer);
-    for (const expected of ['Hand-back report', 'Fenwick Nightjar 6', 'Leaky coupling capacitor to the output valve', 'Before and after', 'Polyester film', '22nF 630V', 'HT line', 'Mains pins to chassis', 'not a certificate of electrical safety'])
+    for (const expected of ['Hand-back report', 'Farrowby Nightjar 6', 'Leaky coupling capacitor to the output valve', 'Before and after', 'Polyester film', '22nF 630V', 'HT line', 'Mains pins to chassis', 'not a certificate of electrical safety'])
       expect(text.replace(/\s+/g, ' ')).toContain(expected);
     for (const secret of ['INTERNAL-COMMENT-TEXT', 'INTERNAL-FINDING-TITLE', 'INTERNAL-READING', 'PRIVATE-PHOTO-CAPTION', 'ON-PRIVATE-PHOTO'])
       expect(text).not.toContain(secret);

@@ -32,7 +32,7 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 const newSet = async (model = 'Kestrel 4') =>
-  (await createRestoration(t.db, [{ userId: people.tech, role: 'technician' }, { userId: people.mentor, role: 'mentor' }, { userId: people.owner, role: 'owner' }], { make: 'Fenwick', model })).id;
+  (await createRestoration(t.db, [{ userId: people.tech, role: 'technician' }, { userId: people.mentor, role: 'mentor' }, { userId: people.owner, role: 'owner' }], { make: 'Farrowby', model })).id;
 
 describe('the Returned gate', () => {
   it('when no safety test is recorded, then Returned is refused with 409 and a message saying what to do', async () => {
@@ -119,7 +119,7 @@ describe('sending the hand-back report', () => {
     await waitForMail(async () => (await t.request().get('/api/dev/mail')).body, ownerEmail, /Kestrel 5: the hand-back report/);
     const after = (await tech.get(`/api/restorations/${id}/report/preview`)).body;
     expect(after.sends).toHaveLength(1);
-    expect(after.sends[0]).toMatchObject({ sentBy: 'Ilse Bench', recipients: [ownerEmail], attachmentName: 'fenwick-kestrel-5-hand-back-report.pdf' });
+    expect(after.sends[0]).toMatchObject({ sentBy: 'Ilse Bench', recipients: [ownerEmail], attachmentName: 'farrowby-kestrel-5-hand-back-report.pdf' });
     expect(after.sends[0].warnings).toHaveLength(3);
     expect(after.sends[0].sha256).toMatch(/^[0-9a-f]{64}$/);
     expect((await mentor.get(`/api/restorations/${id}/report/preview`)).status).toBe(403);
@@ -144,7 +144,7 @@ describe('sending the hand-back report', () => {
     const res = await owner.get(`/api/restorations/${id}/report.pdf`).buffer(true).parse(binary as never);
     const pages = await pdfPages(res.body as Buffer);
     expect(pages.length).toBeGreaterThan(2);
-    const withContent = pages.filter((p) => p.replace(/Fenwick Kestrel 7 · Gridleak hand-back report · page \d+ of \d+/, '').trim() !== '');
+    const withContent = pages.filter((p) => p.replace(/Farrowby Kestrel 7 · Gridleak hand-back report · page \d+ of \d+/, '').trim() !== '');
     expect(withContent.length).toBe(pages.length);
     pages.forEach((p, i) => expect(p).toContain(`page ${i + 1} of ${pages.length}`));
     const all = pages.join('\n').replace(/\s+/g, ' ');

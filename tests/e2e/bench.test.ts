@@ -25,14 +25,14 @@ describe('the bench', () => {
     await page.getByRole('link', { name: '+ Take in a set' }).click();
     await page.getByRole('heading', { name: 'Take in a set' }).waitFor();
     await expectAccessible(page, 'the intake form');
-    await page.getByLabel('Maker').fill('Fenwick & Daughters');
+    await page.getByLabel('Maker').fill('Farrowby & Daughters');
     await page.getByLabel('Model').fill('Nightjar 6');
     await page.getByLabel('Year').fill('1958');
     await page.getByLabel('Serial number').fill('FD-6-1142');
     await page.getByLabel(/Symptoms/).fill('Crackles, then fades after ten minutes.');
     await page.getByRole('button', { name: 'Put it on the bench' }).click();
 
-    const card = page.getByRole('link', { name: /Fenwick & Daughters Nightjar 6/ });
+    const card = page.getByRole('link', { name: /Farrowby & Daughters Nightjar 6/ });
     await card.waitFor();
     const intake = page.locator('section', { has: page.getByRole('heading', { name: /Intake/ }) });
     expect(await intake.getByText('Nightjar 6').isVisible()).toBe(true);

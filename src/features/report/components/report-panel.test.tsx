@@ -16,8 +16,8 @@ afterEach(() => {
 const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
 const preview = (warnings: { code: string; message: string }[] = []) => ({
-  recipients: [{ name: 'Oona Owner', email: 'owner@example.org' }], subject: 'Your Fenwick Lark 3: the hand-back report',
-  body: 'Hello Oona Owner,\n\nThe report is attached.', attachmentName: 'fenwick-lark-3-hand-back-report.pdf', pageCount: 4, warnings, sends: [],
+  recipients: [{ name: 'Oona Owner', email: 'owner@example.org' }], subject: 'Your Farrowby Lark 3: the hand-back report',
+  body: 'Hello Oona Owner,\n\nThe report is attached.', attachmentName: 'farrowby-lark-3-hand-back-report.pdf', pageCount: 4, warnings, sends: [],
 });
 
 /** The preview and send endpoints behind `fetch`; the send answers with `answer`, held back until `release` is called. */
@@ -47,7 +47,7 @@ describe('report panel', () => {
     renderPanel('technician');
     await user.click(screen.getByRole('button', { name: 'E-mail it to the owner' }));
     expect(await screen.findByText('Oona Owner <owner@example.org>')).toBeInTheDocument();
-    expect(screen.getByText('fenwick-lark-3-hand-back-report.pdf (4 pages)')).toBeInTheDocument();
+    expect(screen.getByText('farrowby-lark-3-hand-back-report.pdf (4 pages)')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Send to the owner' }));
     expect(screen.getByRole('button', { name: 'Sending…' })).toBeDisabled();
     release();
