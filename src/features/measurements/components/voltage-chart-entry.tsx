@@ -32,13 +32,24 @@ export function VoltageChartEntry({ restorationId, onClose }: { restorationId: n
           {(a) => <input {...a} className={inputClass} value={shared.method} onChange={(e) => setShared({ ...shared, method: e.target.value })} />}
         </Field>
       </div>
+      <div className="grid gap-3 sm:grid-cols-2">
+        <Field label="Chart’s meter (optional)" hint="Service charts name their meter: Ω/V and range, e.g. 1k/V 300 V">
+          {(a) => <input {...a} className={`${inputClass} font-mono`} value={shared.chartMeter} autoComplete="off" spellCheck={false}
+            onChange={(e) => setShared({ ...shared, chartMeter: e.target.value })} />}
+        </Field>
+        <Field label="Your meter (optional)" hint="e.g. 10 MΩ, or 20k/V 300 V">
+          {(a) => <input {...a} className={`${inputClass} font-mono`} value={shared.meter} autoComplete="off" spellCheck={false}
+            onChange={(e) => setShared({ ...shared, meter: e.target.value })} />}
+        </Field>
+      </div>
       <p className="text-sm text-ink-soft">
-        Tolerance in per cent; blank for the usual ±20 %. Enter in any box starts a new row.
+        Tolerance in per cent; blank for the usual ±20 %. With both meters and a row’s source resistance (the anode load
+        feeding the point), that row is judged against what your meter should read there. Enter in any box starts a new row.
       </p>
       <ChartEntryHeader />
       <ol className="space-y-2">
         {entry.rows.map((row, i) => (
-          <ChartEntryRow key={row.key} row={row} number={i + 1} quantity={shared.quantity}
+          <ChartEntryRow key={row.key} row={row} number={i + 1} quantity={shared.quantity} meters={shared}
             onChange={(patch) => entry.change(row.key, patch)} onRemove={() => entry.removeRow(row.key)}
             onEnter={() => (i === entry.rows.length - 1 ? entry.addRow() : document.getElementById(`chart-entry-location-${entry.rows[i + 1]!.key}`)?.focus())} />
         ))}

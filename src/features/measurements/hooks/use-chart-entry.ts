@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import { useCreateMeasurements } from '../api/create-measurement';
-import { blankRow, isBlankRow, rowInput, rowProblem, type EntryRow, type EntryShared } from '../lib/chart-entry';
+import { blankRow, blankShared, isBlankRow, rowInput, rowProblem, type EntryRow, type EntryShared } from '../lib/chart-entry';
 
 const START_ROWS = 3;
 
@@ -11,7 +11,7 @@ const START_ROWS = 3;
 export function useChartEntry(restorationId: number) {
   const nextKey = useRef(START_ROWS);
   const [rows, setRows] = useState<EntryRow[]>(() => Array.from({ length: START_ROWS }, (_, i) => blankRow(i)));
-  const [shared, setShared] = useState<EntryShared>({ quantity: 'dc-voltage', conditions: '', method: '', ownerVisible: false });
+  const [shared, setShared] = useState<EntryShared>(blankShared);
   const [focusKey, setFocusKey] = useState<number | null>(null);
   const [savedCount, setSavedCount] = useState<number | null>(null);
   const save = useCreateMeasurements(restorationId);

@@ -8,6 +8,8 @@ export interface EntryRow {
   expected: string;
   tolerance: string;
   reading: string;
+  /** The resistance feeding the point (an anode load), for judging against the chart's meter; optional. */
+  source: string;
   /** The server's refusal, in its words. */
   error?: string;
 }
@@ -17,16 +19,24 @@ export interface EntryShared {
   quantity: 'dc-voltage' | 'ac-voltage';
   conditions: string;
   method: string;
+  /** The meter the service chart was taken with ("1k/V 250 V") and the one used now ("10 MΩ"); both optional. */
+  chartMeter: string;
+  meter: string;
   ownerVisible: boolean;
 }
 
-export const blankRow = (key: number): EntryRow => ({ key, location: '', expected: '', tolerance: '', reading: '' });
+export const blankShared: EntryShared = { quantity: 'dc-voltage', conditions: '', method: '', chartMeter: '', meter: '', ownerVisible: false };
 
-export const isBlankRow = (row: EntryRow) => [row.location, row.expected, row.tolerance, row.reading].every((t) => t.trim() === '');
+export const blankRow = (key: number): EntryRow => ({ key, location: '', expected: '', tolerance: '', reading: '', source: '' });
 
-/** The live verdict for a row, as the form shows it. */
-export const rowPreview = (row: EntryRow, quantity: EntryShared['quantity']): Preview =>
-  previewVerdict({ quantity, expected: row.expected, tolerance: row.tolerance, rating: '', reading: row.reading });
+export const isBlankRow = (row: EntryRow) => [row.location, row.expected, row.tolerance, row.reading, row.source].every((t) => t.trim() === '');
+
+/**
+ * The live verdict for a row, as the form shows it. With the chart's meter, yours and the row's source resistance,
+ * the reading is judged against what your meter should read there (the bench library's meter loading).
+ */
+export const rowPreview = (row: EntryRow, quantity: EntryShared['quantity'], meters: Pick<EntryShared, 'chartMeter' | 'meter'> = { chartMeter: '', meter: '' }): Preview =>
+  previewVerdict({ quantity, expected: row.expected, tolerance: row.tolerance, rating: '', reading: row.reading, chartMeter: meters.chartMeter, meter: meters.meter, source: row.source });
 
 /** What is missing before a row can be sent, in words; undefined when it can go. */
 export function rowProblem(row: EntryRow): string | undefined {
@@ -44,6 +54,9 @@ export const rowInput = (row: EntryRow, shared: EntryShared): MeasurementInput =
   reading: row.reading.trim(),
   conditions: shared.conditions.trim(),
   method: shared.method.trim(),
+  chartMeter: shared.chartMeter.trim(),
+  meter: shared.meter.trim(),
+  source: row.source.trim(),
   ownerVisible: shared.ownerVisible,
   // A voltage chart is read on a powered set: it goes through the first-power gate.
   powerOn: true,
