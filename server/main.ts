@@ -13,6 +13,7 @@ import { seedDemo } from './db/seed/seed-demo';
 import { seedDemoBringup } from './db/seed/seed-demo-bringup';
 import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
+import { seedDemoSheet } from './features/demo/seed-demo-sheet';
 import { seedDemoSafety } from './features/demo/seed-demo-safety';
 import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
 import { backfillPhoneVariants } from './features/photos/backfill-phone-variants';
@@ -51,6 +52,7 @@ async function main() {
     await seedDemo(handle.db);
     await seedDemoPhotos({ db: handle.db, storage, config: { uploads } });
     await seedDemoFindings(handle.db);
+    await seedDemoSheet({ db: handle.db, storage, config: { uploads } });
     await seedDemoWorkshop(handle.db);
     await seedDemoSafety(handle.db);
     await seedDemoBringup(handle.db);

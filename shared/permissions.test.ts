@@ -38,6 +38,11 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'bringup.view': { technician: true, mentor: true, owner: true },
   'bringup.record': { technician: true, mentor: false, owner: false },
   'bringup.signoff': { technician: true, mentor: false, owner: false },
+  // Without context a sheet page counts as not shared, so owners may not see it.
+  'sheets.view': { technician: true, mentor: true, owner: false },
+  'sheets.upload': { technician: true, mentor: false, owner: false },
+  'sheets.edit': { technician: true, mentor: false, owner: false },
+  'references.mark': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

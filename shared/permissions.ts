@@ -44,6 +44,10 @@ export const actions = [
   'bringup.view',
   'bringup.record',
   'bringup.signoff',
+  'sheets.view',
+  'sheets.upload',
+  'sheets.edit',
+  'references.mark',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -101,6 +105,12 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'bringup.view': () => true,
   'bringup.record': (role) => role === 'technician',
   'bringup.signoff': (role) => role === 'technician',
+  // Service sheet pages are workshop material: owners see a page only when it is shared with them.
+  'sheets.view': (role, { ownerVisible }) => mayView(role, 'sheetPage', { sheetPage: { ownerVisible: ownerVisible ?? false } }),
+  'sheets.upload': (role) => role === 'technician',
+  'sheets.edit': (role) => role === 'technician',
+  // Placing a reference (R23) on a diagram page or a chassis photo: the technician at the bench.
+  'references.mark': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
@@ -120,17 +130,20 @@ const sharedPhoto: Condition = { field: 'photo.ownerVisible', is: true };
 /** A finding and the photo it is on are both shared. */
 const sharedFinding: Condition = { all: [{ field: 'finding.ownerVisible', is: true }, sharedPhoto] };
 const sharedComment: Condition = { all: [{ field: 'comment.internal', is: false }, sharedFinding] };
+const sharedSheetPage: Condition = { field: 'sheetPage.ownerVisible', is: true };
+/** A reference mark follows what it is placed on: a sheet page or a chassis photo. */
+const sharedReferenceMark: Condition = { any: [sharedSheetPage, sharedPhoto] };
 const sharedReading: Condition = { field: 'reading.ownerVisible', is: true };
 /** Planned and ordered lines are the workshop's business; the owner sees what was fitted or kept. */
 const ownerPart: Condition = { any: [{ field: 'part.state', is: 'fitted' }, { field: 'part.action', is: 'kept-original' }] };
 const sinceShared = (entity: 'event' | 'change'): Condition => ({ field: `${entity}.createdAt`, after: 'finding.sharedAt' });
 const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all: [{ field: 'event.kind', is: kind }, ...conditions] });
 
-export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification'] as const;
+export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark'] as const;
 export type VisibilitySubject = (typeof visibilitySubjects)[number];
 
 const all: Condition = { always: true };
-const everything: Record<VisibilitySubject, Condition> = { photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all };
+const everything: Record<VisibilitySubject, Condition> = { photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, sheetPage: all, referenceMark: all };
 
 export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   technician: everything,
@@ -166,6 +179,8 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
     },
     /** A finding's change record, only from after it was shared. */
     change: { all: [sharedFinding, sinceShared('change')] },
+    sheetPage: sharedSheetPage,
+    referenceMark: sharedReferenceMark,
     /** An in-app notification or its e-mail, judged when read or sent, not when written. */
     notification: { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
   },

@@ -7,6 +7,8 @@ import { photosRepo } from '../../server/features/photos/photos.repo';
 import { photoKeys } from '../../server/features/photos/photo-objects';
 import { measurementsService } from '../../server/features/measurements/measurements.service';
 import { partsService } from '../../server/features/parts/parts.service';
+import { referencesRepo } from '../../server/features/references/references.repo';
+import { sheetsRepo } from '../../server/features/sheets/sheets.repo';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { comments, events, findings, measurements, memberships, notifications, parts, photos } from '../../server/db/schema';
@@ -19,7 +21,7 @@ import { startTestApp } from '../support/test-app';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
-type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number };
+type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; pageId: number; markId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?];
 
@@ -109,6 +111,16 @@ const matrix: Row[] = [
   ['POST', '/api/restorations/:id/bringup/pre-power/sign-off', [409, 403, 403, 404, 401]],
   // Not signed off either, so the technician's step meets the first-power gate.
   ['POST', '/api/restorations/:id/bringup/steps', [409, 403, 403, 404, 401], () => ({ supply: 'variable-transformer', appliedVolts: 60, lampBehaviour: 'no-lamp', decision: 'go-on' })],
+  // The fixture's sheet page is not shared with the owner, and its R23 mark is on that page.
+  ['GET', '/api/restorations/:id/sheets', [200, 200, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/sheets', [201, 403, 403, 404, 401], () => jpeg],
+  ['GET', '/api/sheet-pages/:pageId', [200, 200, 404, 404, 401]],
+  ['PATCH', '/api/sheet-pages/:pageId', [200, 403, 404, 404, 401], () => ({ title: 'Main chassis' })],
+  ['DELETE', '/api/sheet-pages/:pageId', [204, 403, 404, 404, 401]],
+  ['GET', '/api/restorations/:id/references', [200, 200, 200, 404, 401]],
+  ['GET', '/api/restorations/:id/reference-marks', [200, 200, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/reference-marks', [201, 403, 403, 404, 401], (f) => ({ sheetPageId: f.pageId, ref: 'C14', shape: 'pin', points: [{ x: 0.3, y: 0.6 }] })],
+  ['DELETE', '/api/reference-marks/:markId', [204, 403, 404, 404, 401]],
 ];
 
 let jpeg: Buffer;
@@ -143,7 +155,10 @@ async function fixture(): Promise<Fixture> {
   const commentId = (await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true }))!;
   const measurementId = (await measurementsService(t.db).create(r.id, { location: 'R23', quantity: 'resistance', expected: '150', reading: '212' }, people.technician!.id)).id;
   const partId = (await partsService(t.db).create(r.id, { componentRef: 'R23', action: 'replaced' }, people.technician!.id)).id;
-  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId };
+  const sheetId = await sheetsRepo(t.db).insertSheet({ restorationId: r.id, storageKey: `${r.id}/${randomBytes(8).toString('hex')}`, contentType: 'image/png', sizeBytes: 1 });
+  const pageId = await sheetsRepo(t.db).insertPage({ sheetId, restorationId: r.id, pageNumber: 1, kind: 'circuit-diagram', width: 600, height: 400 });
+  const markId = (await referencesRepo(t.db).insertMark({ restorationId: r.id, sheetPageId: pageId, ref: 'R23', shape: 'pin', points: [{ x: 0.5, y: 0.5 }] })).id;
+  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, pageId, markId };
 }
 
 async function callerAgent(c: (typeof callers)[number]): Promise<Agent> {

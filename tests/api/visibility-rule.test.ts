@@ -74,6 +74,12 @@ const table: [string, Role, VisibilitySubject, VisibilityFacts, boolean][] = [
   ['a shared reply on a shared finding', 'owner', 'notification', { notification: { commentId: 7 }, comment: { internal: false }, finding: shared, photo: shared }, true],
   ['an internal reply', 'owner', 'notification', { notification: { commentId: 7 }, comment: { internal: true }, finding: shared, photo: shared }, false],
   ['a question notification, for a mentor', 'mentor', 'notification', { notification: { commentId: null }, finding: internal, photo: internal }, true],
+  ['an unshared sheet page', 'owner', 'sheetPage', { sheetPage: internal }, false],
+  ['a shared sheet page', 'owner', 'sheetPage', { sheetPage: shared }, true],
+  ['an unshared sheet page, for a mentor', 'mentor', 'sheetPage', { sheetPage: internal }, true],
+  ['a reference mark on an unshared page', 'owner', 'referenceMark', { sheetPage: internal }, false],
+  ['a reference mark on a shared page', 'owner', 'referenceMark', { sheetPage: shared }, true],
+  ['a reference mark on a shared chassis photo', 'owner', 'referenceMark', { photo: shared }, true],
 ];
 
 describe('the visibility rule, in memory and in SQL', () => {

@@ -15,6 +15,16 @@ export interface PipelineLimits {
   maxPixels: number;
 }
 
+/** What a caller other than chassis photos may ask of the pipeline (service sheet pages). */
+export interface PipelineOptions {
+  /** Further formats accepted, as sharp names them → content type (e.g. `{ tiff: 'image/tiff' }`). */
+  formats?: Record<string, string>;
+  /** Also keep a large variant up to this many px on the long side (thin lines, small print). */
+  largePx?: number;
+  /** What a refused file is told (415). */
+  unsupportedMessage?: string;
+}
+
 export interface ProcessedPhoto {
   contentType: string;
   width: number;
@@ -23,6 +33,8 @@ export interface ProcessedPhoto {
   display: Buffer;
   phone: Buffer;
   thumb: Buffer;
+  /** Only when `largePx` was asked for. */
+  large?: Buffer;
 }
 
 // libvips' operation cache only helps repeated work on the same image; uploads never repeat.
@@ -32,27 +44,30 @@ const decodeSlots = pLimit(2);
 /** Runs image work in one of the same two decode slots uploads use (close-ups share them). */
 export const withDecodeSlot = <T>(work: () => Promise<T>) => decodeSlots(work);
 
-const unsupported = () =>
-  new HttpError(415, 'unsupported_type', 'That file is not a photo Gridleak can read: send JPEG, PNG, WebP or AVIF (HEIC may need exporting as JPEG).');
+const unsupported = (message?: string) =>
+  new HttpError(415, 'unsupported_type', message ?? 'That file is not a photo Gridleak can read: send JPEG, PNG, WebP or AVIF (HEIC may need exporting as JPEG).');
 
 /** Checks, orients and resizes one uploaded image; served variants carry no metadata (GPS above all). */
-export function processPhoto(path: string, limits: PipelineLimits): Promise<ProcessedPhoto> {
+export function processPhoto(path: string, limits: PipelineLimits, options: PipelineOptions = {}): Promise<ProcessedPhoto> {
   return decodeSlots(async () => {
     const open = () => sharp(path, { limitInputPixels: limits.maxPixels, failOn: 'error', sequentialRead: true });
     let meta: Metadata;
     try {
       meta = await sharp(path, { limitInputPixels: false }).metadata();
     } catch {
-      throw unsupported();
+      throw unsupported(options.unsupportedMessage);
     }
-    const contentType = ACCEPTED[meta.format ?? ''];
-    if (!contentType || !meta.width || !meta.height) throw unsupported();
+    const contentType = { ...ACCEPTED, ...options.formats }[meta.format ?? ''];
+    if (!contentType || !meta.width || !meta.height) throw unsupported(options.unsupportedMessage);
     if (meta.width * meta.height > limits.maxPixels)
       throw new HttpError(413, 'too_large', `The image is ${meta.width}×${meta.height} pixels; the limit is ${Math.round(limits.maxPixels / 1e6)} megapixels.`);
     const rotated = (meta.orientation ?? 1) >= 5;
     try {
-      const display = await open()
-        .autoOrient()
+      // A large variant is read once from the original; the display image then comes from it.
+      const large = options.largePx
+        ? await open().autoOrient().resize({ width: options.largePx, height: options.largePx, fit: 'inside', withoutEnlargement: true }).webp({ quality: 90 }).toBuffer()
+        : undefined;
+      const display = await (large ? sharp(large) : open().autoOrient())
         .resize({ width: DISPLAY_PX, height: DISPLAY_PX, fit: 'inside', withoutEnlargement: true })
         .webp({ quality: 82 })
         .toBuffer();
@@ -66,6 +81,7 @@ export function processPhoto(path: string, limits: PipelineLimits): Promise<Proc
         display,
         phone,
         thumb,
+        ...(large ? { large } : {}),
       };
     } catch {
       throw new HttpError(400, 'damaged_image', 'The image is damaged or incomplete; try sending it again, or export it afresh.');

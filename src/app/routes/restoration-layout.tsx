@@ -11,6 +11,7 @@ const tabClass = ({ isActive }: { isActive: boolean }) =>
 const tabs = [
   ['.', 'Overview'],
   ['photos', 'Photos'],
+  ['sheets', 'Service sheet'],
   ['findings', 'Findings'],
   ['bring-up', 'Bring-up'],
   ['readings', 'Readings'],

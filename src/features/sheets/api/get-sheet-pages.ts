@@ -1,0 +1,16 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { SheetPage } from '../../../../shared/schemas/sheets';
+import { api } from '../../../lib/api-client';
+
+export const sheetPagesQueryKey = (restorationId: number) => ['restorations', restorationId, 'sheets'] as const;
+
+/** Pages carry presigned URLs that expire after about five minutes, like photos. */
+export const sheetPagesQueryOptions = (restorationId: number) =>
+  queryOptions({
+    queryKey: sheetPagesQueryKey(restorationId),
+    queryFn: () => api<SheetPage[]>(`/restorations/${restorationId}/sheets`),
+    staleTime: 2 * 60_000,
+    refetchOnWindowFocus: true,
+  });
+
+export const useSheetPages = (restorationId: number) => useQuery(sheetPagesQueryOptions(restorationId));
