@@ -38,6 +38,8 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'bringup.view': { technician: true, mentor: true, owner: true },
   'bringup.record': { technician: true, mentor: false, owner: false },
   'bringup.signoff': { technician: true, mentor: false, owner: false },
+  'help.view': { technician: true, mentor: true, owner: false },
+  'help.ask': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

@@ -44,6 +44,8 @@ export const actions = [
   'bringup.view',
   'bringup.record',
   'bringup.signoff',
+  'help.view',
+  'help.ask',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -101,6 +103,10 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'bringup.view': () => true,
   'bringup.record': (role) => role === 'technician',
   'bringup.signoff': (role) => role === 'technician',
+  // Help requests are the workshop's questions: mentors read them on their bench; only a technician builds one,
+  // shares it through a link, revokes the link and approves the replies left through it.
+  'help.view': (role) => role !== 'owner',
+  'help.ask': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
