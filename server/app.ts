@@ -12,7 +12,7 @@ import { eventsRoutes } from './features/events/events.routes';
 import { findingsRoutes } from './features/findings/findings.routes';
 import { healthRoutes } from './features/health/health.routes';
 import { helpRoutes } from './features/help/help.routes';
-import { sharedHelpRoutes } from './features/help/shared-help.routes';
+import { privateSharedPage, sharedHelpRoutes } from './features/help/shared-help.routes';
 import { invitationsRoutes } from './features/invitations/invitations.routes';
 import { membersRoutes } from './features/members/members.routes';
 import { measurementsRoutes } from './features/measurements/measurements.routes';
@@ -52,6 +52,8 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
       serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ status: res.statusCode }), err: redactedError },
     }),
   );
+
+  app.use('/shared/help', privateSharedPage);
 
   const passport = createPassport(deps.db);
   const api = Router();

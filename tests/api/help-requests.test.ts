@@ -113,6 +113,8 @@ describe('the read-only link', () => {
       expect(res.text).not.toContain(secret);
     expect(res.text).not.toContain(`"id":${ids.internalFinding}`);
     expect(res.text).not.toContain(`"id":${ids.privatePhoto}`);
+    // The page the link opens carries the same header, whichever way the client is served.
+    expect((await visitor().get(`/shared/help/${link.token}`)).headers['x-robots-tag']).toMatch(/noindex/);
   });
 
   it('when the technician removes a photo and the valves, then the link no longer shows them', async () => {

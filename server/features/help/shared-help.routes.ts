@@ -1,4 +1,4 @@
-import { Router, type Response } from 'express';
+import { Router, type RequestHandler, type Response } from 'express';
 import { helpReplyInputSchema, helpTokenParamsSchema } from '../../../shared/schemas/help';
 import type { AppDeps } from '../../app-deps';
 import { input, validate } from '../../http/validate';
@@ -7,12 +7,18 @@ import { sharedHelpService } from './shared-help.service';
 const read = { params: helpTokenParamsSchema };
 const reply = { params: helpTokenParamsSchema, body: helpReplyInputSchema };
 
-/** Every answer about a link is kept out of search engines, caches and referrers. */
+/** Every answer about a link (the API and the page itself) is kept out of search engines, caches and referrers. */
 function private_(res: Response) {
   res.set('X-Robots-Tag', 'noindex, nofollow, noarchive');
   res.set('Cache-Control', 'no-store');
   res.set('Referrer-Policy', 'no-referrer');
 }
+
+/** For the page at /shared/help/:token, whichever way the client is served. */
+export const privateSharedPage: RequestHandler = (_req, res, next) => {
+  private_(res);
+  next();
+};
 
 /** The read-only link to a help request: no session, the token is the only key. */
 export function sharedHelpRoutes(deps: AppDeps): Router {
