@@ -68,3 +68,5 @@ export interface HelpRequest extends HelpContent {
 }
 export interface HelpRequestSummary { id: number; symptom: string; createdAt: string; pendingReplies: number }
 export interface HelpLinkCreated { url: string; token: string; expiresAt: string }
+/** A request on the bench of a technician or mentor of its restoration. */
+export interface BenchHelpRequest { id: number; restorationId: number; set: string; symptom: string; createdAt: string }

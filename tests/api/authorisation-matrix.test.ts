@@ -114,6 +114,7 @@ const matrix: Row[] = [
   // Help requests are the workshop's questions: mentors read them, owners never see them.
   ['POST', '/api/restorations/:id/help-requests', [201, 403, 403, 404, 401], () => ({ symptom: 'Hum with the volume at zero' })],
   ['GET', '/api/restorations/:id/help-requests', [200, 200, 403, 404, 401]],
+  ['GET', '/api/help-requests', [200, 200, 200, 200, 401]],
   ['GET', '/api/help-requests/:helpRequestId', [200, 200, 403, 404, 401]],
   ['PATCH', '/api/help-requests/:helpRequestId', [200, 403, 403, 404, 401], () => ({ includeValves: false })],
   ['POST', '/api/help-requests/:helpRequestId/links', [201, 403, 403, 404, 401], () => ({})],
@@ -237,6 +238,7 @@ const sharedMatrix: SharedRow[] = [
   ['owner', 'GET', '/api/restorations/:id/report.pdf', 200],
   // The help link's reader is judged like an owner: the same shared work, nothing internal.
   ['owner', 'GET', '/api/shared/help/:helpToken', 200],
+  ['owner', 'GET', '/api/help-requests', 200],
   ['mentor', 'PATCH', '/api/findings/:mentorFindingId', 200, () => ({ title: 'Check this joint again' })],
   ['mentor', 'PATCH', '/api/findings/:mentorFindingId', 403, () => ({ ownerVisible: true })],
   ['mentor', 'DELETE', '/api/findings/:mentorFindingId', 204],

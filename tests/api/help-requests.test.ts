@@ -17,7 +17,7 @@ import { startTestApp } from '../support/test-app';
 // (PRODUCT.md "Who uses it", decision 25); no outside source. SHA-256 is checked with Node's own crypto.
 const INTERNAL = 'WORKSHOP-ONLY';
 let t: Awaited<ReturnType<typeof startTestApp>>;
-let tech: Agent, mentor: Agent;
+let tech: Agent, mentor: Agent, owner: Agent;
 let ids: { restoration: number; sharedPhoto: number; privatePhoto: number; sharedFinding: number; internalFinding: number; sharedReading: number; privateReading: number; fittedPart: number };
 
 beforeAll(async () => {
@@ -49,7 +49,7 @@ beforeAll(async () => {
     replacementPart: 'film', replacementRating: '22nF 630V', state: 'fitted', costMinor: 4321, notes: `${INTERNAL} note`, source: `${INTERNAL} supplier` }, people.tech.id)).id;
   await ledger.create(r.id, { componentRef: 'R23', action: 'replaced', state: 'planned' }, people.tech.id);
   ids = { restoration: r.id, sharedPhoto, privatePhoto, sharedFinding, internalFinding, sharedReading, privateReading, fittedPart };
-  [tech, mentor] = await Promise.all([signedIn(t.app, people.tech), signedIn(t.app, people.mentor)]);
+  [tech, mentor, owner] = await Promise.all([signedIn(t.app, people.tech), signedIn(t.app, people.mentor), signedIn(t.app, people.owner)]);
 });
 afterAll(() => t.stop());
 
@@ -79,6 +79,14 @@ describe('a help request', () => {
     const res = await mentor.get(`/api/help-requests/${req.id}`);
     expect(res.status).toBe(200);
     expect(res.body.readings.map((m: { id: number }) => m.id)).toContain(ids.privateReading);
+  });
+
+  it('when a request is made, then it waits on the mentor\'s bench and never reaches the owner', async () => {
+    const req = await newRequest();
+    const bench = (await mentor.get('/api/help-requests')).body as { id: number; set: string }[];
+    expect(bench).toContainEqual(expect.objectContaining({ id: req.id, set: 'Fenwick Lark 3' }));
+    expect((await owner.get('/api/help-requests')).body).toEqual([]);
+    expect((await owner.get(`/api/help-requests/${req.id}`)).status).toBe(403);
   });
 
   it('when a link is made, then it lasts 7 days and only the SHA-256 of its 256-bit token is stored', async () => {

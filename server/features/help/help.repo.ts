@@ -1,6 +1,6 @@
-import { and, desc, eq, gt, isNull, sql } from 'drizzle-orm';
+import { and, desc, eq, gt, inArray, isNull, sql } from 'drizzle-orm';
 import type { Executor } from '../../db/client';
-import { helpLinks, helpReplies, helpRequests } from '../../db/schema';
+import { helpLinks, helpReplies, helpRequests, memberships, restorations } from '../../db/schema';
 
 /** Help requests, their links and the replies left through them. */
 export function helpRepo(db: Executor) {
@@ -29,6 +29,18 @@ export function helpRepo(db: Executor) {
           pendingReplies: sql<number>`(select count(*)::int from ${helpReplies} where ${helpReplies.helpRequestId} = ${helpRequests.id} and ${helpReplies.approvedAt} is null)`,
         })
         .from(helpRequests).where(eq(helpRequests.restorationId, restorationId)).orderBy(desc(helpRequests.createdAt), desc(helpRequests.id));
+    },
+    /** The latest requests on every restoration where the person may read them (technician or mentor), for the bench. */
+    async forPerson(userId: number, limit: number) {
+      return db
+        .select({ id: helpRequests.id, restorationId: helpRequests.restorationId, symptom: helpRequests.symptom, createdAt: helpRequests.createdAt,
+          make: restorations.make, model: restorations.model })
+        .from(helpRequests)
+        .innerJoin(restorations, eq(restorations.id, helpRequests.restorationId))
+        .innerJoin(memberships, and(eq(memberships.restorationId, helpRequests.restorationId), eq(memberships.userId, userId)))
+        .where(inArray(memberships.role, ['technician', 'mentor']))
+        .orderBy(desc(helpRequests.createdAt), desc(helpRequests.id))
+        .limit(limit);
     },
     async insertLink(values: typeof helpLinks.$inferInsert) {
       const [row] = await db.insert(helpLinks).values(values).returning();

@@ -27,6 +27,10 @@ export function helpRoutes(deps: AppDeps): Router {
   router.get('/restorations/:id/help-requests', requireUser, validate(list), guard(db, 'help.view'), async (_req, res) => {
     res.json(await help.list(input(res, list).params.id));
   });
+  // The bench: requests on every set where the person is a technician or mentor (roles owners never hold there).
+  router.get('/help-requests', requireUser, async (req, res) => {
+    res.json(await help.bench(req.user!.id));
+  });
   router.get('/help-requests/:helpRequestId', requireUser, validate(one), guard(db, 'help.view', ofRequest), async (_req, res) => {
     res.json(await help.get(input(res, one).params.helpRequestId, roleOf(res)));
   });

@@ -1,6 +1,6 @@
 import { and, eq, inArray, isNotNull, ne } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
-import { HELP_LINK_DAYS, type HelpLinkCreated, type HelpRequest, type HelpRequestPatch, type HelpRequestSummary } from '../../../shared/schemas/help';
+import { HELP_LINK_DAYS, type BenchHelpRequest, type HelpLinkCreated, type HelpRequest, type HelpRequestPatch, type HelpRequestSummary } from '../../../shared/schemas/help';
 import type { AppDeps } from '../../app-deps';
 import type { Executor } from '../../db/client';
 import { findings, measurements, parts, photos } from '../../db/schema';
@@ -56,6 +56,9 @@ export function helpService(deps: HelpDeps) {
     },
     async list(restorationId: number): Promise<HelpRequestSummary[]> {
       return (await repo.list(restorationId)).map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
+    },
+    async bench(userId: number): Promise<BenchHelpRequest[]> {
+      return (await repo.forPerson(userId, 20)).map((r) => ({ id: r.id, restorationId: r.restorationId, set: `${r.make} ${r.model}`, symptom: r.symptom, createdAt: r.createdAt.toISOString() }));
     },
     async restorationOf(helpRequestId: number) {
       return (await repo.find(helpRequestId))?.restorationId;
