@@ -2,7 +2,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import { eq } from 'drizzle-orm';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { helpLinks, restorations } from '../../server/db/schema';
+import { helpLinks, helpRequests, restorations } from '../../server/db/schema';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { measurementsService } from '../../server/features/measurements/measurements.service';
@@ -11,6 +11,7 @@ import { helpReplyLimits } from '../../server/features/help/shared-help.service'
 import { createPhotoRow } from '../factories/photos';
 import { createRestoration } from '../factories/restorations';
 import { anonymous, createUser, signedIn } from '../factories/users';
+import { whileFailing } from '../support/fail-writes';
 import { startTestApp } from '../support/test-app';
 
 // What a help link shows is the product's rule that its reader is judged like an owner or stricter
@@ -100,6 +101,35 @@ describe('a help request', () => {
     const stored = await t.db.select().from(helpLinks).where(eq(helpLinks.tokenHash, createHash('sha256').update(link.token).digest('hex')));
     expect(stored).toHaveLength(1);
     expect(JSON.stringify(await t.db.select().from(helpLinks))).not.toContain(link.token);
+  });
+});
+
+describe('the history of a help request', () => {
+  it('when a request is made, shared and withdrawn, then each is a line of the workshop history and none reaches the owner', async () => {
+    const count = async () => {
+      const kinds = ((await tech.get(`/api/restorations/${ids.restoration}/events?limit=500`)).body as { kind: string }[]).map((e) => e.kind);
+      return Object.fromEntries(['help-requested', 'help-link-made', 'help-link-withdrawn'].map((k) => [k, kinds.filter((x) => x === k).length]));
+    };
+    const before = await count();
+    const req = await newRequest();
+    const link = await newLink(req.id);
+    expect((await tech.delete(`/api/help-links/${link.token}`)).status).toBe(204);
+    // Withdrawing it again changes nothing and writes no second line.
+    expect((await tech.delete(`/api/help-links/${link.token}`)).status).toBe(204);
+    expect(await count()).toEqual({ 'help-requested': before['help-requested']! + 1, 'help-link-made': before['help-link-made']! + 1, 'help-link-withdrawn': before['help-link-withdrawn']! + 1 });
+    const ownerKinds = ((await owner.get(`/api/restorations/${ids.restoration}/events?limit=500`)).body as { kind: string }[]).map((e) => e.kind);
+    expect(ownerKinds.filter((k) => k.startsWith('help-'))).toEqual([]);
+  });
+
+  it('when the history line cannot be written, then no request and no link are kept', async () => {
+    const before = (await t.db.select().from(helpRequests)).length;
+    const res = await whileFailing(t.db, 'events', 'insert', () => tech.post(`/api/restorations/${ids.restoration}/help-requests`).send({ symptom: 'Crackles' }));
+    expect(res.status).toBe(500);
+    expect((await t.db.select().from(helpRequests)).length).toBe(before);
+    const req = await newRequest();
+    const links = (await t.db.select().from(helpLinks)).length;
+    expect((await whileFailing(t.db, 'events', 'insert', () => tech.post(`/api/help-requests/${req.id}/links`).send({}))).status).toBe(500);
+    expect((await t.db.select().from(helpLinks)).length).toBe(links);
   });
 });
 

@@ -62,8 +62,10 @@ export function helpRepo(db: Executor) {
         .where(and(eq(helpLinks.tokenHash, tokenHash), isNull(helpLinks.revokedAt), gt(helpLinks.expiresAt, sql`now()`)));
       return row;
     },
+    /** Withdraws a live link; false when it was already withdrawn. */
     async revoke(linkId: number) {
-      await db.update(helpLinks).set({ revokedAt: sql`now()` }).where(and(eq(helpLinks.id, linkId), isNull(helpLinks.revokedAt)));
+      const rows = await db.update(helpLinks).set({ revokedAt: sql`now()` }).where(and(eq(helpLinks.id, linkId), isNull(helpLinks.revokedAt))).returning({ id: helpLinks.id });
+      return rows.length > 0;
     },
     async insertReply(values: typeof helpReplies.$inferInsert) {
       const [row] = await db.insert(helpReplies).values(values).returning();

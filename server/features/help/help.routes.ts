@@ -40,10 +40,10 @@ export function helpRoutes(deps: AppDeps): Router {
   });
   router.post('/help-requests/:helpRequestId/links', requireUser, validate(link), guard(db, 'help.ask', ofRequest), async (req, res) => {
     const { params, body } = input(res, link);
-    res.status(201).json(await help.createLink(params.helpRequestId, body.days, req.user!.id));
+    res.status(201).json(await help.createLink(res.locals.restorationId as number, params.helpRequestId, body.days, req.user!.id));
   });
-  router.delete('/help-links/:token', requireUser, validate(revoke), guard(db, 'help.ask', (_req, res) => help.restorationOfToken(input(res, revoke).params.token)), async (_req, res) => {
-    await help.revoke(input(res, revoke).params.token);
+  router.delete('/help-links/:token', requireUser, validate(revoke), guard(db, 'help.ask', (_req, res) => help.restorationOfToken(input(res, revoke).params.token)), async (req, res) => {
+    await help.revoke(input(res, revoke).params.token, req.user!.id);
     res.status(204).end();
   });
   router.post('/help-replies/:replyId/approve', requireUser, validate(approve), guard(db, 'help.ask', (_req, res) => help.restorationOfReply(input(res, approve).params.replyId)), async (req, res) => {

@@ -6,6 +6,7 @@ import type { Executor } from '../../db/client';
 import { findings, measurements, parts, photos } from '../../db/schema';
 import { BadRequestError, NotFoundError } from '../../http/errors';
 import { hashToken, newToken } from '../auth/tokens';
+import { recordEvent } from '../events/record-event';
 import { helpContent, type HelpRequestRow } from './help-content';
 import { helpRepo } from './help.repo';
 
@@ -51,7 +52,11 @@ export function helpService(deps: HelpDeps) {
 
   return {
     async create(restorationId: number, symptom: string, userId: number, role: Role) {
-      const row = await db.transaction(async (tx) => helpRepo(tx).insert({ restorationId, symptom, authorId: userId, ...(await prefill(tx, restorationId)) }));
+      const row = await db.transaction(async (tx) => {
+        const created = await helpRepo(tx).insert({ restorationId, symptom, authorId: userId, ...(await prefill(tx, restorationId)) });
+        await recordEvent(tx, { restorationId, kind: 'help-requested', actorId: userId, data: { helpRequestId: created.id } });
+        return created;
+      });
       return full(row, role);
     },
     async list(restorationId: number): Promise<HelpRequestSummary[]> {
@@ -79,20 +84,26 @@ export function helpService(deps: HelpDeps) {
       return full(row, role);
     },
     /** A new read-only link; the token is returned once and only its SHA-256 is kept. */
-    async createLink(helpRequestId: number, days: number | undefined, userId: number): Promise<HelpLinkCreated> {
+    async createLink(restorationId: number, helpRequestId: number, days: number | undefined, userId: number): Promise<HelpLinkCreated> {
       const { token, hash } = newToken();
       const expiresAt = new Date(Date.now() + (days ?? HELP_LINK_DAYS) * 24 * 3600 * 1000);
-      await repo.insertLink({ helpRequestId, tokenHash: hash, expiresAt, createdById: userId });
+      await db.transaction(async (tx) => {
+        await helpRepo(tx).insertLink({ helpRequestId, tokenHash: hash, expiresAt, createdById: userId });
+        await recordEvent(tx, { restorationId, kind: 'help-link-made', actorId: userId, data: { helpRequestId, expiresAt: expiresAt.toISOString() } });
+      });
       return { url: `${deps.config.publicOrigin}/shared/help/${token}`, token, expiresAt: expiresAt.toISOString() };
     },
     /** The restoration a link's token belongs to (revoked or expired links too), for the guard. */
     async restorationOfToken(token: string) {
       return (await repo.linkByHash(hashToken(token)))?.restorationId;
     },
-    async revoke(token: string) {
-      const found = await repo.linkByHash(hashToken(token));
-      if (!found) throw new NotFoundError();
-      await repo.revoke(found.link.id);
+    async revoke(token: string, userId: number) {
+      await db.transaction(async (tx) => {
+        const found = await helpRepo(tx).linkByHash(hashToken(token));
+        if (!found) throw new NotFoundError();
+        if (await helpRepo(tx).revoke(found.link.id))
+          await recordEvent(tx, { restorationId: found.restorationId, kind: 'help-link-withdrawn', actorId: userId, data: { helpRequestId: found.link.helpRequestId } });
+      });
     },
     async restorationOfReply(replyId: number) {
       return (await repo.replyWithRestoration(replyId))?.restorationId;
