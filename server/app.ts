@@ -11,6 +11,8 @@ import { devMailRoutes } from './features/dev-mail/dev-mail.routes';
 import { eventsRoutes } from './features/events/events.routes';
 import { findingsRoutes } from './features/findings/findings.routes';
 import { healthRoutes } from './features/health/health.routes';
+import { helpRoutes } from './features/help/help.routes';
+import { privateSharedPage, sharedHelpRoutes } from './features/help/shared-help.routes';
 import { invitationsRoutes } from './features/invitations/invitations.routes';
 import { membersRoutes } from './features/members/members.routes';
 import { measurementsRoutes } from './features/measurements/measurements.routes';
@@ -53,6 +55,8 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
     }),
   );
 
+  app.use('/shared/help', privateSharedPage);
+
   const passport = createPassport(deps.db);
   const api = Router();
   // JSON answers above 1 kB are compressed (brotli or gzip, as the client accepts).
@@ -61,6 +65,8 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(requireSameOrigin(deps.config.publicOrigin));
   api.use(healthRoutes(deps));
   api.use(metaRoutes(deps));
+  // Read-only help links need no session (and set no cookie).
+  api.use(sharedHelpRoutes(deps));
   api.use(sessionMiddleware(deps.pool, deps.config.sessionSecret));
   api.use(passport.initialize());
   api.use(passport.session());
@@ -80,6 +86,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(bringupRoutes(deps));
   api.use(sheetsRoutes(deps));
   api.use(referencesRoutes(deps));
+  api.use(helpRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

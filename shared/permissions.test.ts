@@ -43,6 +43,8 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'sheets.upload': { technician: true, mentor: false, owner: false },
   'sheets.edit': { technician: true, mentor: false, owner: false },
   'references.mark': { technician: true, mentor: false, owner: false },
+  'help.view': { technician: true, mentor: true, owner: false },
+  'help.ask': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

@@ -48,6 +48,8 @@ export const actions = [
   'sheets.upload',
   'sheets.edit',
   'references.mark',
+  'help.view',
+  'help.ask',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -111,6 +113,10 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'sheets.edit': (role) => role === 'technician',
   // Placing a reference (R23) on a diagram page or a chassis photo: the technician at the bench.
   'references.mark': (role) => role === 'technician',
+  // Help requests are the workshop's questions: mentors read them on their bench; only a technician builds one,
+  // shares it through a link, revokes the link and approves the replies left through it.
+  'help.view': (role) => role !== 'owner',
+  'help.ask': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {

@@ -10,6 +10,8 @@ const page =
   async () => ({ Component: (await load())[name] as React.ComponentType });
 
 export const router = createBrowserRouter([
+  // A read-only help link: no app shell, no session.
+  { path: 'shared/help/:token', ErrorBoundary: RouteError, lazy: page(() => import('./routes/shared-help'), 'SharedHelpRoute') },
   {
     Component: AppShell,
     ErrorBoundary: RouteError,
@@ -45,6 +47,7 @@ export const router = createBrowserRouter([
               { path: 'sheets/:pageId', lazy: page(() => import('./routes/sheet-page'), 'SheetPageRoute') },
               { path: 'sheets/chassis/:photoId', lazy: page(() => import('./routes/sheet-page'), 'ChassisReferencesRoute') },
               { path: 'people', loader: peopleLoader, lazy: page(() => import('./routes/people'), 'PeopleRoute') },
+              { path: 'help', lazy: page(() => import('./routes/help'), 'HelpRoute') },
             ],
           },
           { path: 'calculators', lazy: page(() => import('./routes/calculators'), 'CalculatorsRoute') },

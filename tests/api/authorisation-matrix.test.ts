@@ -11,6 +11,8 @@ import { referencesRepo } from '../../server/features/references/references.repo
 import { sheetsRepo } from '../../server/features/sheets/sheets.repo';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
+import { helpRepo } from '../../server/features/help/help.repo';
+import { newToken } from '../../server/features/auth/tokens';
 import { comments, events, findings, measurements, memberships, notifications, parts, photos } from '../../server/db/schema';
 import { twoToneJpeg } from '../factories/images';
 import { createRestoration } from '../factories/restorations';
@@ -21,7 +23,8 @@ import { startTestApp } from '../support/test-app';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
-type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; pageId: number; markId: number };
+type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; pageId: number; markId: number;
+  helpRequestId: number; helpToken: string; replyId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?];
 
@@ -121,6 +124,18 @@ const matrix: Row[] = [
   ['GET', '/api/restorations/:id/reference-marks', [200, 200, 200, 404, 401]],
   ['POST', '/api/restorations/:id/reference-marks', [201, 403, 403, 404, 401], (f) => ({ sheetPageId: f.pageId, ref: 'C14', shape: 'pin', points: [{ x: 0.3, y: 0.6 }] })],
   ['DELETE', '/api/reference-marks/:markId', [204, 403, 404, 404, 401]],
+  // Help requests are the workshop's questions: mentors read them, owners never see them.
+  ['POST', '/api/restorations/:id/help-requests', [201, 403, 403, 404, 401], () => ({ symptom: 'Hum with the volume at zero' })],
+  ['GET', '/api/restorations/:id/help-requests', [200, 200, 403, 404, 401]],
+  ['GET', '/api/help-requests', [200, 200, 200, 200, 401]],
+  ['GET', '/api/help-requests/:helpRequestId', [200, 200, 403, 404, 401]],
+  ['PATCH', '/api/help-requests/:helpRequestId', [200, 403, 403, 404, 401], () => ({ includeValves: false })],
+  ['POST', '/api/help-requests/:helpRequestId/links', [201, 403, 403, 404, 401], () => ({})],
+  ['DELETE', '/api/help-links/:helpToken', [204, 403, 403, 404, 401]],
+  ['POST', '/api/help-replies/:replyId/approve', [200, 403, 403, 404, 401]],
+  // The link is the key: anyone holding it reads the request and may leave a reply, which is held.
+  ['GET', '/api/shared/help/:helpToken', [200, 200, 200, 200, 200]],
+  ['POST', '/api/shared/help/:helpToken/replies', [202, 202, 202, 202, 202], () => ({ name: 'Club member', body: 'Check the smoothing capacitors first.' })],
 ];
 
 let jpeg: Buffer;
@@ -158,7 +173,13 @@ async function fixture(): Promise<Fixture> {
   const sheetId = await sheetsRepo(t.db).insertSheet({ restorationId: r.id, storageKey: `${r.id}/${randomBytes(8).toString('hex')}`, contentType: 'image/png', sizeBytes: 1 });
   const pageId = await sheetsRepo(t.db).insertPage({ sheetId, restorationId: r.id, pageNumber: 1, kind: 'circuit-diagram', width: 600, height: 400 });
   const markId = (await referencesRepo(t.db).insertMark({ restorationId: r.id, sheetPageId: pageId, ref: 'R23', shape: 'pin', points: [{ x: 0.5, y: 0.5 }] })).id;
-  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, pageId, markId };
+  const help = helpRepo(t.db);
+  const helpRequest = await help.insert({ restorationId: r.id, symptom: 'Hum', authorId: people.technician!.id, partIds: [partId], measurementIds: [measurementId], photoIds: [photoId] });
+  const link = newToken();
+  const helpLink = await help.insertLink({ helpRequestId: helpRequest.id, tokenHash: link.hash, expiresAt: new Date(Date.now() + 86_400_000), createdById: people.technician!.id });
+  const replyId = (await help.insertReply({ helpRequestId: helpRequest.id, linkId: helpLink.id, name: 'Visitor', body: 'Try the rectifier' })).id;
+  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, pageId, markId,
+    helpRequestId: helpRequest.id, helpToken: link.token, replyId };
 }
 
 async function callerAgent(c: (typeof callers)[number]): Promise<Agent> {
@@ -231,6 +252,9 @@ const sharedMatrix: SharedRow[] = [
   ['owner', 'GET', '/api/restorations/:id/events', 200],
   ['owner', 'GET', '/api/activity', 200],
   ['owner', 'GET', '/api/restorations/:id/report.pdf', 200],
+  // The help link's reader is judged like an owner: the same shared work, nothing internal.
+  ['owner', 'GET', '/api/shared/help/:helpToken', 200],
+  ['owner', 'GET', '/api/help-requests', 200],
   ['mentor', 'PATCH', '/api/findings/:mentorFindingId', 200, () => ({ title: 'Check this joint again' })],
   ['mentor', 'PATCH', '/api/findings/:mentorFindingId', 403, () => ({ ownerVisible: true })],
   ['mentor', 'DELETE', '/api/findings/:mentorFindingId', 204],

@@ -11,3 +11,4 @@ export * from './parts';
 export * from './safety';
 export * from './bringup';
 export * from './sheets';
+export * from './help';

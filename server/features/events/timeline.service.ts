@@ -72,6 +72,9 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           : e.kind === 'question-asked' ? `Question for the mentors on ${label}`
           : e.kind === 'question-resolved' ? `Question answered on ${label}`
           : e.kind === 'part-fitted' ? `Part fitted: ${part?.componentRef ?? ''} ${part?.replacementPart ?? ''} ${part?.replacementRating ?? ''}`.trim()
+          : e.kind === 'help-requested' ? 'Asked for help'
+          : e.kind === 'help-link-made' ? `Read-only help link made, until ${String((e.data as { expiresAt?: string }).expiresAt ?? '').slice(0, 10)}`
+          : e.kind === 'help-link-withdrawn' ? 'Read-only help link withdrawn'
           : e.kind === 'stage-changed' ? `Stage: ${stageLabels[data.from as Stage] ?? data.from} → ${stageLabels[data.to as Stage] ?? data.to}`
           : `Out of tolerance: ${m ? `${quantityLabels[m.quantity]} at ${m.location}, ${m.verdictReason}` : ''}`;
         return {

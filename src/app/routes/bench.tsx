@@ -4,6 +4,7 @@ import { buttonClass } from '../../components/button';
 import { inputClass } from '../../components/field';
 import { EmptyState, ErrorState, Loading } from '../../components/states';
 import { OpenQuestions } from '../../features/findings/components/open-questions';
+import { HelpOnBench } from '../../features/help/components/help-on-bench';
 import { RecentActivity } from '../../features/history/components/recent-activity';
 import { useRestorations } from '../../features/restorations/api/get-restorations';
 import { StageColumns } from '../../features/restorations/components/stage-columns';
@@ -26,6 +27,7 @@ export function BenchRoute() {
         </Link>
       </div>
       <OpenQuestions />
+      <HelpOnBench />
       <div className="max-w-md">
         <label htmlFor="bench-search" className="sr-only">
           Search by make, model or serial

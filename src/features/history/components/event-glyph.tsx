@@ -97,6 +97,27 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="M7.5 17.5h5" />
     </>
   ),
+  // A speech bubble with a question mark: asking for help.
+  'help-requested': (
+    <>
+      <path d="M3 4h14v9H9l-4 3v-3H3Z" />
+      <path d="M8.5 7a1.5 1.5 0 1 1 2 1.4c-.5.2-.5.6-.5 1.1M10 11.2v.1" />
+    </>
+  ),
+  // Two chain links: a read-only link made.
+  'help-link-made': (
+    <>
+      <path d="M8.5 11.5l3-3" />
+      <path d="M9.5 6.5l1.5-1.5a3 3 0 0 1 4 4L13.5 10.5M10.5 13.5 9 15a3 3 0 0 1-4-4l1.5-1.5" />
+    </>
+  ),
+  // A broken chain: the link withdrawn.
+  'help-link-withdrawn': (
+    <>
+      <path d="M9.5 6.5l1.5-1.5a3 3 0 0 1 4 4L13.5 10.5M10.5 13.5 9 15a3 3 0 0 1-4-4l1.5-1.5" />
+      <path d="M4 4l12 12" />
+    </>
+  ),
 };
 
 export function EventGlyph({ kind, caution = false, className = '' }: { kind: Kind; caution?: boolean; className?: string }) {

@@ -21,6 +21,9 @@ export const eventKindLabels: Record<Kind, string> = {
   'pre-power-signed': 'Pre-power sign-offs',
   'pre-power-voided': 'Sign-offs withdrawn',
   'bringup-step': 'Power-up steps',
+  'help-requested': 'Help requests',
+  'help-link-made': 'Help links made',
+  'help-link-withdrawn': 'Help links withdrawn',
 };
 
 export const eventKinds = timelineKinds;

@@ -1,0 +1,12 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { HelpRequest } from '../../../../shared/schemas/help';
+import { api } from '../../../lib/api-client';
+import { helpKeys } from './keys';
+
+/** One help request as the workshop sees it, with its choices, links and every reply. */
+export const getHelpRequest = (helpRequestId: number) => api<HelpRequest>(`/help-requests/${helpRequestId}`);
+
+export const helpRequestQueryOptions = (helpRequestId: number) =>
+  queryOptions({ queryKey: helpKeys.one(helpRequestId), queryFn: () => getHelpRequest(helpRequestId) });
+
+export const useHelpRequest = (helpRequestId: number) => useQuery(helpRequestQueryOptions(helpRequestId));

@@ -1,0 +1,14 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { helpKeys } from './keys';
+
+/** Withdraws a link: from now on it answers "not found". */
+export const revokeHelpLink = (token: string) => api<void>(`/help-links/${encodeURIComponent(token)}`, { method: 'DELETE' });
+
+export function useRevokeHelpLink(helpRequestId: number) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: revokeHelpLink,
+    onSuccess: () => client.invalidateQueries({ queryKey: helpKeys.one(helpRequestId) }),
+  });
+}
