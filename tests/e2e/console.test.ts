@@ -28,3 +28,24 @@ describe('the console', () => {
     expect(messages).toEqual([]);
   });
 });
+
+describe('the header on a phone', () => {
+  it('when a technician is signed in on a phone, then the header is one compact row and its Menu opens the links', async () => {
+    const page = await newPage(ctx.browser, { width: 390, height: 844 });
+    await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
+    await page.goto(`${ctx.product.origin}/calculators`);
+    await page.getByRole('heading', { name: 'Bench calculators' }).waitFor();
+    const header = page.locator('header').first();
+    // One row of 44 px controls plus padding; it used to wrap to about 300 px.
+    expect((await header.boundingBox())!.height).toBeLessThan(80);
+    const menu = page.getByRole('button', { name: 'Menu' });
+    expect(await menu.getAttribute('aria-expanded')).toBe('false');
+    await menu.click();
+    expect(await menu.getAttribute('aria-expanded')).toBe('true');
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Bench' }).click();
+    await page.getByRole('heading', { name: 'The bench' }).waitFor();
+    // A new page closes the menu.
+    expect(await menu.getAttribute('aria-expanded')).toBe('false');
+    expect(await page.getByRole('button', { name: 'Sign out' }).isVisible()).toBe(false);
+  });
+});
