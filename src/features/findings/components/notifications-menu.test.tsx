@@ -21,7 +21,7 @@ const note = (id: number, overrides: Partial<Notification> = {}): Notification =
 describe('notifications menu', () => {
   it('when there are unread items, then the button says how many, and an item marks itself read and opens its finding', async () => {
     const api = fakeApi(({ method, path }) => {
-      if (method === 'GET' && path === '/notifications') return ok([note(1, { summary: 'Teodor Brask mentioned you on #4 C15b' }), note(2), note(3, { read: true })]);
+      if (method === 'GET' && path === '/notifications?limit=50') return ok([note(1, { summary: 'Teodor Brask mentioned you on #4 C15b' }), note(2), note(3, { read: true })]);
       if (method === 'POST' && path === '/notifications/read') return { status: 204 };
       return undefined;
     });
@@ -44,7 +44,7 @@ describe('notifications menu', () => {
 
   it('when Escape is pressed, then the list closes and focus returns to the button; Mark all read sends no ids', async () => {
     const api = fakeApi(({ method, path }) => {
-      if (method === 'GET' && path === '/notifications') return ok([note(1)]);
+      if (method === 'GET' && path === '/notifications?limit=50') return ok([note(1)]);
       if (method === 'POST') return { status: 204 };
       return undefined;
     });
@@ -62,7 +62,7 @@ describe('notifications menu', () => {
   });
 
   it('when nothing is unread, then the button is simply "Notifications" and the list says nothing is new', async () => {
-    fakeApi(({ path }) => (path === '/notifications' ? ok([]) : undefined));
+    fakeApi(({ path }) => (path === '/notifications?limit=50' ? ok([]) : undefined));
     renderWithApp(<NotificationsMenu />, '/');
     await userEvent.setup().click(await screen.findByRole('button', { name: 'Notifications' }));
     expect(await screen.findByText('Nothing new.')).toBeInTheDocument();
