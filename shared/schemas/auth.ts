@@ -36,3 +36,7 @@ export type SignUpResult = { status: 'signed-in'; user: User; restorationId?: nu
 
 export const userSchema = z.object({ id: z.number().int(), name: z.string(), email: z.string() });
 export type User = z.infer<typeof userSchema>;
+
+/** `GET /api/auth/session`: the signed-in person, or null when nobody is. */
+export const sessionSchema = z.object({ user: userSchema.nullable() });
+export type Session = z.infer<typeof sessionSchema>;

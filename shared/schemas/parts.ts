@@ -72,6 +72,26 @@ export const partSchema = z.object({
 });
 export type Part = z.infer<typeof partSchema>;
 
+const knownTimeZone = (zone: string) => {
+  try {
+    new Intl.DateTimeFormat('en', { timeZone: zone });
+    return true;
+  } catch {
+    return false;
+  }
+};
+
+/**
+ * `GET /api/restorations/:id/parts.csv?currency=GBP&timeZone=Europe/London`: the workshop's currency for the cost
+ * column (ISO 4217) and the reader's time zone for the dates (IANA). Without them, costs have two decimals and
+ * dates are UTC.
+ */
+export const partsCsvQuerySchema = z.object({
+  currency: z.string().regex(/^[A-Z]{3}$/).refine((c) => Intl.supportedValuesOf('currency').includes(c), 'Not a known currency').optional(),
+  timeZone: z.string().max(64).refine(knownTimeZone, 'Not a known time zone').optional(),
+});
+export type PartsCsvQuery = z.infer<typeof partsCsvQuerySchema>;
+
 export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
   'safety-test', 'safety-override', 'soak-session', 'report-sent',
   'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',

@@ -73,6 +73,12 @@ const restorationFields = {
     z.iso.date('Enter a date as YYYY-MM-DD').nullable(),
   ).optional(),
   stage: stageSchema,
+  /** Who owns the set, as recorded at intake (they need no account). */
+  ownerName: optionalText(120),
+  ownerEmail: z.preprocess(
+    (v) => (typeof v === 'string' && v.trim() === '' ? null : typeof v === 'string' ? v.trim() : v),
+    z.email('Enter an e-mail address, e.g. name@example.com').max(254).nullable(),
+  ).optional(),
 };
 
 /** Body of POST /api/restorations: make and model are required, the rest can follow at intake. */
@@ -83,7 +89,9 @@ export const restorationInputSchema = z.object({
   workLevel: restorationFields.workLevel.default('repair'),
   hiddenPartsOriginal: restorationFields.hiddenPartsOriginal.default(false),
   stage: restorationFields.stage.default('intake'),
-});
+  /** Invite the owner (by `ownerEmail`) to follow the set, in the same step as the intake. */
+  inviteOwner: z.boolean().default(false),
+}).refine((v) => !v.inviteOwner || Boolean(v.ownerEmail), { path: ['ownerEmail'], message: "Enter the owner's e-mail to invite them" });
 export type RestorationInput = z.input<typeof restorationInputSchema>;
 
 /** Only what is sent changes: no defaults here, or a stage change would reset the other fields. */
@@ -106,6 +114,8 @@ export const restorationSchema = z.object({
   careNotes: z.string().nullable(),
   receivedOn: z.string().nullable(),
   stage: stageSchema,
+  ownerName: z.string().nullable(),
+  ownerEmail: z.string().nullable(),
   /** The caller's role on this restoration. */
   role: z.enum(roles),
   createdAt: z.string(),

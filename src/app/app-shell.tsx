@@ -1,4 +1,5 @@
-import { Link, NavLink, Outlet } from 'react-router';
+import { useId, useState } from 'react';
+import { Link, NavLink, Outlet, useLocation } from 'react-router';
 import { useMeta } from '../features/meta/api/get-meta';
 import { Logo } from '../components/logo';
 import { ThemeToggle } from '../components/theme-toggle';
@@ -12,39 +13,64 @@ const navClass = ({ isActive }: { isActive: boolean }) =>
 export function AppShell() {
   const meta = useMeta();
   const signedIn = Boolean(useMe().data);
+  const menuId = useId();
+  const [menuOpen, setMenuOpen] = useState(false);
+  const closeMenu = () => setMenuOpen(false);
+  // A new page closes the phone menu.
+  const { pathname } = useLocation();
+  const [shownFor, setShownFor] = useState(pathname);
+  if (shownFor !== pathname) {
+    setShownFor(pathname);
+    setMenuOpen(false);
+  }
   return (
     <div className="flex min-h-dvh flex-col">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-panel focus:p-2">
         Skip to content
       </a>
-      <header className="border-b border-rule bg-panel/90 backdrop-blur print:hidden">
+      <header className="border-b border-rule bg-panel/90 backdrop-blur print:hidden" onKeyDown={(e) => e.key === 'Escape' && closeMenu()}>
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-2 px-4 py-2">
           <NavLink to="/" className="mr-3 flex items-center gap-2" aria-label="Gridleak, the bench">
             <Logo />
             <span className="text-xl font-bold tracking-tight">Gridleak</span>
           </NavLink>
-          {/* On a phone the links take a scrolling row of their own under the logo and the account controls. */}
-          <nav aria-label="Main" className="order-last flex w-full items-center gap-1 overflow-x-auto whitespace-nowrap sm:order-none sm:w-auto sm:flex-1">
-            {signedIn && (
-              <NavLink to="/" end className={navClass}>
-                Bench
-              </NavLink>
-            )}
-            {signedIn && (
-              <>
-                <NavLink to="/restorations/new" className={navClass}>
-                  Take in a set
-                </NavLink>
-                <NavLink to="/calculators" className={navClass}>
-                  Calculators
-                </NavLink>
-              </>
-            )}
-          </nav>
+          {/* On a phone the header is one row: the logo, notifications and a menu that opens the links and account controls. */}
           <span className="flex-1 sm:hidden" />
-          {signedIn && <NotificationsMenu />}
-          <ThemeToggle />
-          <UserMenu />
+          {signedIn && (
+            <div className="sm:order-last">
+              <NotificationsMenu />
+            </div>
+          )}
+          <button
+            type="button"
+            className="inline-flex min-h-11 items-center rounded-lg border border-rule px-3 text-sm font-semibold sm:hidden"
+            aria-expanded={menuOpen}
+            aria-controls={menuId}
+            onClick={() => setMenuOpen((open) => !open)}
+          >
+            Menu
+          </button>
+          <div id={menuId} className={`${menuOpen ? 'flex' : 'hidden'} w-full flex-col gap-2 pb-2 sm:flex sm:w-auto sm:flex-1 sm:flex-row sm:items-center sm:pb-0`}>
+            <nav aria-label="Main" className="flex flex-col gap-1 sm:flex-1 sm:flex-row sm:items-center">
+              {signedIn && (
+                <>
+                  <NavLink to="/" end className={navClass}>
+                    Bench
+                  </NavLink>
+                  <NavLink to="/restorations/new" className={navClass}>
+                    Take in a set
+                  </NavLink>
+                  <NavLink to="/calculators" className={navClass}>
+                    Calculators
+                  </NavLink>
+                </>
+              )}
+            </nav>
+            <div className="flex items-center gap-2">
+              <ThemeToggle />
+              <UserMenu />
+            </div>
+          </div>
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">

@@ -22,9 +22,11 @@ function start<T, K extends QueryKey>(options: EnsureQueryDataOptions<T, Error, 
   void queryClient.ensureQueryData(options).catch(() => {});
 }
 
+/** Starts a page's data once someone is known to be signed in: a signed-out visit asks for nothing it would be refused. */
 const loader = (begin: Start) => ({ params }: LoaderFunctionArgs) => {
   const id = Number(params.id);
-  if (Number.isInteger(id) && id > 0) begin(id, params);
+  if (Number.isInteger(id) && id > 0)
+    void queryClient.ensureQueryData(meQueryOptions()).then((me) => me && begin(id, params), () => {});
   return null;
 };
 

@@ -1,4 +1,5 @@
 import { createBrowserRouter } from 'react-router';
+import { Loading } from '../components/states';
 import { AppShell } from './app-shell';
 import { RequireSignIn } from './require-sign-in';
 import { findingsLoader, historyLoader, markupLoader, partsLoader, peopleLoader, photosLoader, readingsLoader, restorationLoader } from './route-loaders';
@@ -15,6 +16,8 @@ export const router = createBrowserRouter([
   {
     Component: AppShell,
     ErrorBoundary: RouteError,
+    // Drawn while the first route's code and loader arrive, instead of nothing (and a console warning).
+    HydrateFallback: () => <Loading label="Loading Gridleak…" />,
     children: [
       { path: 'sign-in', lazy: page(() => import('./routes/sign-in'), 'SignInRoute') },
       { path: 'sign-up', lazy: page(() => import('./routes/sign-up'), 'SignUpRoute') },

@@ -117,6 +117,18 @@ describe('sign-in, sessions and throttling', () => {
     expect((await t.request().get('/api/auth/me').set('Cookie', cookie)).status).toBe(401);
   });
 
+  it('when the page asks who is signed in, then a signed-out visitor gets 200 with no one, and a signed-in one gets themselves', async () => {
+    const user = await createUser(t.db);
+    const agent = await signedIn(t.app, user);
+    const mine = await agent.get('/api/auth/session');
+    expect(mine.status).toBe(200);
+    expect(mine.body).toEqual({ user: { id: user.id, name: user.name, email: user.email } });
+    expect((await agent.post('/api/auth/sign-out')).status).toBe(204);
+    const after = await agent.get('/api/auth/session');
+    expect(after.status).toBe(200);
+    expect(after.body).toEqual({ user: null });
+  });
+
   it('when an account fails sign-in three times, then even the right password waits (429)', async () => {
     const user = await createUser(t.db);
     for (let i = 0; i < 3; i++)

@@ -42,6 +42,7 @@ const matrix: Row[] = [
   ['POST', '/api/auth/sign-in', [401, 401, 401, 401, 401], () => ({ email: unique(), password: 'not the password' })],
   ['POST', '/api/auth/sign-out', [204, 204, 204, 204, 204]],
   ['GET', '/api/auth/me', [200, 200, 200, 200, 401]],
+  ['GET', '/api/auth/session', [200, 200, 200, 200, 200]],
   ['POST', '/api/auth/confirm-email', [410, 410, 410, 410, 410], () => ({ token: 'x'.repeat(43) })],
   ['POST', '/api/auth/password-reset', [202, 202, 202, 202, 202], () => ({ email: unique() })],
   ['POST', '/api/auth/password-reset/confirm', [410, 410, 410, 410, 410], () => ({ token: 'x'.repeat(43), password: 'a quiet chassis hum' })],

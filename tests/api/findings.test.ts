@@ -137,6 +137,8 @@ describe('questions and e-mail batching', () => {
     expect((await mentor.patch(`/api/findings/${f.id}`).send({ questionOpen: true })).status).toBe(403);
     await tech.patch(`/api/findings/${f.id}`).send({ questionOpen: true });
     expect((await mentor.get('/api/questions')).body.map((q: { findingId: number }) => q.findingId)).toContain(f.id);
+    // The technician who asked is not shown their own question as waiting for them.
+    expect((await tech.get('/api/questions')).body.map((q: { findingId: number }) => q.findingId)).not.toContain(f.id);
     expect((await owner.get('/api/questions')).body).toEqual([]);
     expect((await mentor.get('/api/notifications')).body[0]).toMatchObject({ kind: 'question', findingId: f.id });
     await mentor.patch(`/api/findings/${f.id}`).send({ questionOpen: false });

@@ -30,7 +30,7 @@ beforeAll(async () => {
   };
   const r = await createRestoration(t.db, [
     { userId: people.tech.id, role: 'technician' }, { userId: people.mentor.id, role: 'mentor' }, { userId: people.owner.id, role: 'owner' },
-  ], { make: 'Fenwick', model: 'Lark 3' });
+  ], { make: 'Farrowby', model: 'Lark 3' });
   await t.db.update(restorations).set({ serial: 'SERIAL-7731', mainsSetting: '240 V tap' }).where(eq(restorations.id, r.id));
   const sharedPhoto = await createPhotoRow(t.db, r.id, true);
   const privatePhoto = await createPhotoRow(t.db, r.id, false);
@@ -85,7 +85,7 @@ describe('a help request', () => {
   it('when a request is made, then it waits on the mentor\'s bench and never reaches the owner', async () => {
     const req = await newRequest();
     const bench = (await mentor.get('/api/help-requests')).body as { id: number; set: string }[];
-    expect(bench).toContainEqual(expect.objectContaining({ id: req.id, set: 'Fenwick Lark 3' }));
+    expect(bench).toContainEqual(expect.objectContaining({ id: req.id, set: 'Farrowby Lark 3' }));
     expect((await owner.get('/api/help-requests')).body).toEqual([]);
     expect((await owner.get(`/api/help-requests/${req.id}`)).status).toBe(403);
   });
@@ -141,7 +141,7 @@ describe('the read-only link', () => {
     expect(res.headers['x-robots-tag']).toMatch(/noindex/);
     expect(res.headers['set-cookie']).toBeUndefined();
     const body = res.body;
-    expect(body.set).toMatchObject({ make: 'Fenwick', model: 'Lark 3', mains: '240 V tap', chassis: null });
+    expect(body.set).toMatchObject({ make: 'Farrowby', model: 'Lark 3', mains: '240 V tap', chassis: null });
     expect(body.readings).toEqual([expect.objectContaining({ id: ids.sharedReading, reading: '212', meter: '10 MΩ', chartMeter: '1k/V 250 V' })]);
     expect(body.readings[0].verdict).not.toBe('unknown');
     expect(body.parts).toEqual([expect.objectContaining({ componentRef: 'C27', old: 'wax paper 22nF 350V', new: 'film 22nF 630V' })]);

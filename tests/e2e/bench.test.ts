@@ -3,7 +3,7 @@ import { artifactPath } from '../support/artifacts';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
 import { twoToneJpeg } from '../factories/images';
-import { signInAs } from '../support/journey';
+import { mailTo, signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 
 const ctx = useProductAndBrowser();
@@ -30,8 +30,17 @@ describe('the bench', () => {
     await page.getByLabel('Year').fill('1958');
     await page.getByLabel('Serial number').fill('FD-6-1142');
     await page.getByLabel(/Symptoms/).fill('Crackles, then fades after ten minutes.');
+    await page.getByLabel("Owner's name").fill('Wilhelmina Crane');
+    await page.getByLabel("Owner's e-mail").fill('wilhelmina.crane@example.test');
+    await page.getByLabel(/Invite them as the owner/).check();
     await page.getByRole('button', { name: 'Put it on the bench' }).click();
 
+    // After saving, the new set opens, and its owner has an invitation in the mail.
+    await page.waitForURL(/\/restorations\/\d+$/);
+    await page.getByRole('heading', { name: /Farrowby & Daughters Nightjar 6/ }).first().waitFor();
+    expect((await mailTo(ctx.product.origin, 'wilhelmina.crane@example.test')).text).toContain('/invitations/');
+
+    await page.goto(ctx.product.origin);
     const card = page.getByRole('link', { name: /Farrowby & Daughters Nightjar 6/ });
     await card.waitFor();
     const intake = page.locator('section', { has: page.getByRole('heading', { name: /Intake/ }) });

@@ -10,9 +10,10 @@ export async function signInAs(page: Page, origin: string, email: string, passwo
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('button', { name: 'Sign out' }).waitFor();
-  // The header follows the new session without a reload.
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Calculators' }).waitFor();
+  // The header follows the new session without a reload (on a phone its links and Sign out sit behind Menu).
+  await page.getByRole('button', { name: /^Notifications/ }).waitFor();
+  await page.getByRole('button', { name: 'Sign out', includeHidden: true }).waitFor({ state: 'attached' });
+  await page.getByRole('navigation', { name: 'Main', includeHidden: true }).getByRole('link', { name: 'Calculators', includeHidden: true }).waitFor({ state: 'attached' });
 }
 
 /** Reads the product's mail capture for a message to `to`. */

@@ -36,11 +36,14 @@ export const findings = pgTable(
     /** A technician asked the mentors about this finding; open until resolved. */
     questionOpen: boolean().notNull().default(false),
     questionAskedAt: timestamp({ withTimezone: true, mode: 'date' }),
+    /** Who asked the open question: it waits for the others, not for them. */
+    questionAskedById: integer().references(() => users.id, { onDelete: 'set null' }),
     ...timestamps,
   },
   (t) => [
     index('findings_photo_id_idx').on(t.photoId),
     index('findings_author_id_idx').on(t.authorId),
+    index('findings_question_asked_by_id_idx').on(t.questionAskedById),
     uniqueIndex('findings_restoration_id_number_idx').on(t.restorationId, t.number),
   ],
 );

@@ -30,6 +30,9 @@ export const restorations = pgTable(
     careNotes: text(),
     receivedOn: date({ mode: 'string' }),
     stage: stageEnum().notNull().default('intake'),
+    /** The owner as recorded at intake; they may never have an account. */
+    ownerName: text(),
+    ownerEmail: text(),
     ...timestamps,
   },
   (t) => [index('restorations_stage_idx').on(t.stage)],

@@ -7,6 +7,7 @@ import {
   signInSchema,
   signUpSchema,
   type SignUpResult,
+  type Session,
   type User,
 } from '../../../shared/schemas/auth';
 import type { AppDeps } from '../../app-deps';
@@ -85,6 +86,11 @@ export function authRoutes(deps: AppDeps, passport: ReturnType<typeof createPass
 
   router.get('/auth/me', requireUser, (req, res) => {
     res.json(req.user);
+  });
+
+  // The page's "who is signed in?" check: being signed out is an answer here (200), not an error.
+  router.get('/auth/session', (req, res) => {
+    res.json({ user: req.user ?? null } satisfies Session);
   });
 
   router.post('/auth/password-reset', validate(resetRequest), async (req, res) => {

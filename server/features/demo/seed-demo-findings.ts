@@ -72,7 +72,7 @@ export async function seedDemoFindings(db: Database): Promise<void> {
     const id = await repo.insert({
       restorationId: photo.restorationId, photoId: photo.id, shape: s.shape, points, title: s.title, componentRef: s.componentRef,
       kind: s.kind, severity: s.severity, status: s.status, ownerVisible: s.ownerVisible, authorId: ids.technician,
-      questionOpen: s.question, questionAskedAt: s.question ? new Date() : null,
+      questionOpen: s.question, questionAskedAt: s.question ? new Date() : null, questionAskedById: s.question ? ids.technician : null,
     });
     for (const [who, body, visibility] of s.thread)
       await db.insert(comments).values({

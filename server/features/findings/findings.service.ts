@@ -84,7 +84,7 @@ export function findingsService(deps: AppDeps) {
       }
       const next: Record<string, unknown> = { ...rest };
       if (ownerVisible !== undefined) next.ownerVisible = ownerVisible;
-      if (questionOpen !== undefined) Object.assign(next, { questionOpen, questionAskedAt: questionOpen ? new Date() : null });
+      if (questionOpen !== undefined) Object.assign(next, { questionOpen, questionAskedAt: questionOpen ? new Date() : null, questionAskedById: questionOpen ? actor.id : null });
       if (rest.status && rest.status !== 'dismissed') next.dismissReason = null;
       // The change, its history line, its events and the mentors' notifications commit together. The row is locked
       // and read again inside, so the recorded "before" values and "just asked" are those this change replaced.

@@ -55,6 +55,12 @@ export function invitationsService({ db, mailer, config }: AppDeps) {
         return invitation;
       });
     },
+    /** Invites on the caller's transaction (an intake that records the owner): the e-mail is its last step. */
+    async inviteIn(tx: Executor, restorationId: number, email: string, role: Role, inviterId: number) {
+      const { invitation, token } = await invitationsRepo(tx).issue(restorationId, email, role, inviterId);
+      await send(tx, restorationId, email, role, inviterId, token);
+      return invitation;
+    },
     async resend(restorationId: number, id: number, senderId: number) {
       // If the mail cannot go, the renewal rolls back and the link already sent keeps working.
       await db.transaction(async (tx) => {

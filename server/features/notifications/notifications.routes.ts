@@ -1,4 +1,4 @@
-import { and, asc, eq, inArray } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNull, ne, or } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { OpenQuestion } from '../../../shared/schemas/findings';
@@ -35,7 +35,9 @@ export function notificationsRoutes(deps: AppDeps): Router {
       .from(findings)
       .innerJoin(restorations, eq(restorations.id, findings.restorationId))
       .innerJoin(memberships, and(eq(memberships.restorationId, findings.restorationId), eq(memberships.userId, req.user!.id)))
-      .where(and(eq(findings.questionOpen, true), inArray(memberships.role, ['technician', 'mentor'])))
+      .where(and(eq(findings.questionOpen, true), inArray(memberships.role, ['technician', 'mentor']),
+        // A question waits for the others on the set, not for the person who asked it.
+        or(isNull(findings.questionAskedById), ne(findings.questionAskedById, req.user!.id))))
       .orderBy(asc(findings.questionAskedAt));
     const questions: OpenQuestion[] = rows.map(({ f, make, model }) => ({
       findingId: f.id, photoId: f.photoId, restorationId: f.restorationId, set: `${make} ${model}`, number: f.number,

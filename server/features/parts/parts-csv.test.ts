@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
 import type { Part } from '../../../shared/schemas/parts';
-import { neutraliseFormula, partsCsv } from './parts-csv';
+import { isoDate, neutraliseFormula, partsCsv } from './parts-csv';
 
 describe('CSV formula neutralising', () => {
   // OWASP, "CSV Injection": cells beginning with =, +, -, @, tab (0x09) or carriage return (0x0D) are
@@ -22,9 +22,22 @@ describe('CSV formula neutralising', () => {
       originalRating: '', replacementPart: '', replacementRating: '', mainsPosition: 'none', quantity: 1, costMinor: null,
       source: '@evil', testedAfter: '', notes: '\tnote', fittedAt: null, warnings: [],
     } as unknown as Part;
-    const [row] = parse(partsCsv([part]), { bom: true, columns: true }) as Record<string, string>[];
+    const [row] = parse(partsCsv([{ part, finding: null }]), { bom: true, columns: true }) as Record<string, string>[];
     expect(row!['Original part']).toBe("'=cmd|calc");
     expect(row!.Source).toBe("'@evil");
     expect(row!.Notes).toBe("'\tnote");
+  });
+});
+
+describe('CSV dates', () => {
+  // Offsets from the IANA tz database: Europe/Berlin is UTC+1 in winter, America/New_York UTC-5 (EST) before
+  // 8 March 2026 and UTC-4 from then; Pacific/Auckland UTC+13 in January (NZDT).
+  it.each([
+    ['2026-01-15T12:00:00Z', 'UTC', '2026-01-15'],
+    ['2026-01-15T23:30:00Z', 'Europe/Berlin', '2026-01-16'],
+    ['2026-03-08T03:30:00Z', 'America/New_York', '2026-03-07'],
+    ['2026-01-15T11:30:00Z', 'Pacific/Auckland', '2026-01-16'],
+  ])('when %s is written for a reader in %s, then the ISO 8601 date is %s', (instant, zone, date) => {
+    expect(isoDate(instant, zone)).toBe(date);
   });
 });

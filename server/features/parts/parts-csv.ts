@@ -1,23 +1,43 @@
 import { stringify } from 'csv-stringify/sync';
-import { mainsPositionLabels, partActionLabels, partStateLabels, type Part } from '../../../shared/schemas/parts';
+import { mainsPositionLabels, partActionLabels, partStateLabels, type Part, type PartsCsvQuery } from '../../../shared/schemas/parts';
 
-const columns = [
-  ['Reference', (p: Part) => p.componentRef],
-  ['Action', (p: Part) => partActionLabels[p.action]],
-  ['State', (p: Part) => partStateLabels[p.state]],
-  ['Original part', (p: Part) => p.originalPart],
-  ['Original rating', (p: Part) => p.originalRating],
-  ['Replacement part', (p: Part) => p.replacementPart],
-  ['Replacement rating', (p: Part) => p.replacementRating],
-  ['Mains position', (p: Part) => mainsPositionLabels[p.mainsPosition]],
-  ['Quantity', (p: Part) => String(p.quantity)],
-  ['Cost', (p: Part) => (p.costMinor === null ? '' : (p.costMinor / 100).toFixed(2))],
-  ['Source', (p: Part) => p.source],
-  ['Tested after', (p: Part) => p.testedAfter],
-  ['Notes', (p: Part) => p.notes],
-  ['Fitted', (p: Part) => p.fittedAt ?? ''],
-  ['Warnings', (p: Part) => p.warnings.map((w) => w.message).join(' | ')],
-] as const;
+/** A ledger line for export, with the finding it answers when the reader may see that finding. */
+export interface CsvLine {
+  part: Part;
+  finding: { number: number; title: string } | null;
+}
+
+/** How many minor units make one major unit, as a power of ten (2 for pence and cents, 0 for yen): ISO 4217 via Intl. */
+const minorDigits = (currency: string) => new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
+
+/** An instant as an ISO 8601 calendar date (2026-03-09) on the wall calendar of `timeZone`. */
+export function isoDate(instant: string, timeZone = 'UTC'): string {
+  const parts = new Intl.DateTimeFormat('en', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).formatToParts(new Date(instant));
+  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
+  return `${get('year')}-${get('month')}-${get('day')}`;
+}
+
+function columns({ currency, timeZone }: PartsCsvQuery) {
+  const digits = currency ? minorDigits(currency) : 2;
+  return [
+    ['Reference', ({ part }: CsvLine) => part.componentRef],
+    ['Finding', ({ finding }: CsvLine) => (finding ? `#${finding.number} ${finding.title}` : '')],
+    ['Action', ({ part }: CsvLine) => partActionLabels[part.action]],
+    ['State', ({ part }: CsvLine) => partStateLabels[part.state]],
+    ['Original part', ({ part }: CsvLine) => part.originalPart],
+    ['Original rating', ({ part }: CsvLine) => part.originalRating],
+    ['Replacement part', ({ part }: CsvLine) => part.replacementPart],
+    ['Replacement rating', ({ part }: CsvLine) => part.replacementRating],
+    ['Mains position', ({ part }: CsvLine) => mainsPositionLabels[part.mainsPosition]],
+    ['Quantity', ({ part }: CsvLine) => String(part.quantity)],
+    [currency ? `Cost (${currency})` : 'Cost', ({ part }: CsvLine) => (part.costMinor === null ? '' : (part.costMinor / 10 ** digits).toFixed(digits))],
+    ['Source', ({ part }: CsvLine) => part.source],
+    ['Tested after', ({ part }: CsvLine) => part.testedAfter],
+    ['Notes', ({ part }: CsvLine) => part.notes],
+    ['Fitted', ({ part }: CsvLine) => (part.fittedAt ? isoDate(part.fittedAt, timeZone) : '')],
+    ['Warnings', ({ part }: CsvLine) => part.warnings.map((w) => w.message).join(' | ')],
+  ] as const;
+}
 
 /**
  * A cell a spreadsheet would run as a formula (=, +, -, @, tab or carriage return first) gets a leading
@@ -27,8 +47,12 @@ export function neutraliseFormula(cell: string): string {
   return /^[=+\-@\t\r]/.test(cell) ? `'${cell}` : cell;
 }
 
-/** The ledger as CSV (RFC 4180 quoting by csv-stringify), with a byte-order mark so spreadsheets read UTF-8. */
-export function partsCsv(list: Part[]): string {
-  const rows = [columns.map(([h]) => h), ...list.map((p) => columns.map(([, get]) => get(p)))];
+/**
+ * The ledger as CSV (RFC 4180 quoting by csv-stringify), with a byte-order mark so spreadsheets read UTF-8, in the
+ * order given (the service gives parts-list order), dates as ISO 8601 dates and costs as plain numbers.
+ */
+export function partsCsv(lines: CsvLine[], options: PartsCsvQuery = {}): string {
+  const cols = columns(options);
+  const rows = [cols.map(([h]) => h), ...lines.map((line) => cols.map(([, get]) => get(line)))];
   return stringify(rows.map((row) => row.map(neutraliseFormula)), { bom: true, record_delimiter: 'windows', quoted_string: true });
 }

@@ -1,6 +1,6 @@
 import { Router, type Request, type Response } from 'express';
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
-import { partInputSchema, partPatchSchema } from '../../../shared/schemas/parts';
+import { partInputSchema, partPatchSchema, partsCsvQuerySchema } from '../../../shared/schemas/parts';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
@@ -10,6 +10,7 @@ import { partsCsv } from './parts-csv';
 import { partsService, toPart } from './parts.service';
 
 const one = { params: idParamsSchema };
+const csv = { params: idParamsSchema, query: partsCsvQuerySchema };
 const paged = { params: idParamsSchema, query: pageQuerySchema };
 const create = { params: idParamsSchema, body: partInputSchema };
 const patch = { params: idParamsSchema, body: partPatchSchema };
@@ -26,10 +27,10 @@ export function partsRoutes({ db }: AppDeps): Router {
     const rows = await service.page(params.id, roleOf(res), query.limit + 1, cursor && { componentRef: cursor[0] as string, id: cursor[1] as number });
     await sendPage(req, res, rows, query.limit, (p) => [p.componentRef, p.id], (page) => page.map((p) => toPart(p, roleOf(res))));
   });
-  router.get('/restorations/:id/parts.csv', requireUser, validate(one), guard(db, 'parts.view'), async (_req, res) => {
-    const id = input(res, one).params.id;
-    const csv = partsCsv((await service.list(id, roleOf(res))).map((p) => toPart(p, roleOf(res))));
-    res.type('text/csv; charset=utf-8').attachment(`restoration-${id}-parts.csv`).send(csv);
+  router.get('/restorations/:id/parts.csv', requireUser, validate(csv), guard(db, 'parts.view'), async (_req, res) => {
+    const { params, query } = input(res, csv);
+    const lines = (await service.forExport(params.id, roleOf(res))).map(({ row, finding }) => ({ part: toPart(row, roleOf(res)), finding }));
+    res.type('text/csv; charset=utf-8').attachment(`restoration-${params.id}-parts.csv`).send(partsCsv(lines, query));
   });
   router.post('/restorations/:id/parts', requireUser, validate(create), guard(db, 'parts.edit'), async (req, res) => {
     const { params, body } = input(res, create);

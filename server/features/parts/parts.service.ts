@@ -1,5 +1,6 @@
 import { and, asc, eq, sql } from 'drizzle-orm';
 import { partWarnings } from '../../../shared/bench';
+import { compareComponentRefs } from '../../../shared/natural-order';
 import type { Role } from '../../../shared/permissions';
 import type { Part, PartInput } from '../../../shared/schemas/parts';
 import type { Database, Executor } from '../../db/client';
@@ -32,10 +33,15 @@ export function partsService(db: Database) {
     if (!f) throw new BadRequestError('findingId: no such finding on this restoration.');
   }
   const find = async (id: number) => (await db.select().from(parts).where(eq(parts.id, id)))[0];
-  /** One page of the ledger as this role may see it, in its order (reference, then id), after the part `after` names. */
-  const page = async (restorationId: number, role: Role, limit?: number, after?: { componentRef: string; id: number }): Promise<Row[]> => {
+  /** Ledger lines as this role may see them, each with its finding's number and title when the reader may see it. */
+  const withFindings = async (restorationId: number, role: Role, limit?: number, after?: { componentRef: string; id: number }) => {
     const query = db
-      .select({ part: parts, findingVisible: visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) }) })
+      .select({
+        part: parts,
+        findingVisible: visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) }),
+        findingNumber: findings.number,
+        findingTitle: findings.title,
+      })
       .from(parts)
       .leftJoin(findings, eq(findings.id, parts.findingId))
       .leftJoin(photos, eq(photos.id, findings.photoId))
@@ -43,8 +49,14 @@ export function partsService(db: Database) {
         after ? sql`(${parts.componentRef}, ${parts.id}) > (${after.componentRef}, ${after.id})` : undefined))
       .orderBy(asc(parts.componentRef), asc(parts.id));
     const rows = limit ? await query.limit(limit) : await query;
-    return rows.map(({ part, findingVisible }) => ({ ...part, findingId: findingVisible ? part.findingId : null }));
+    return rows.map(({ part, findingVisible, findingNumber, findingTitle }) => ({
+      row: { ...part, findingId: findingVisible ? part.findingId : null },
+      finding: findingVisible && findingNumber !== null ? { number: findingNumber, title: findingTitle ?? '' } : null,
+    }));
   };
+  /** One page of the ledger as this role may see it, in its order (reference, then id), after the part `after` names. */
+  const page = async (restorationId: number, role: Role, limit?: number, after?: { componentRef: string; id: number }): Promise<Row[]> =>
+    (await withFindings(restorationId, role, limit, after)).map(({ row }) => row);
   return {
     async restorationOf(id: number) {
       return (await find(id))?.restorationId;
@@ -54,6 +66,11 @@ export function partsService(db: Database) {
       return page(restorationId, role);
     },
     page,
+    /** The whole ledger for export, in parts-list order (C2 before C14), each line with the finding it may name. */
+    async forExport(restorationId: number, role: Role) {
+      const lines = await withFindings(restorationId, role);
+      return lines.sort((a, b) => compareComponentRefs(a.row.componentRef, b.row.componentRef) || a.row.id - b.row.id);
+    },
     async create(restorationId: number, input: PartInput & { action: Row['action'] }, actorId: number) {
       const fittedAt = input.state === 'fitted' ? new Date() : null;
       // Keeping an original is recorded in the ledger, but nothing was fitted.

@@ -1,5 +1,6 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { AppDeps } from '../../app-deps';
+import { compareComponentRefs } from '../../../shared/natural-order';
 import { findings, measurements, memberships, parts, photos, restorations, users } from '../../db/schema';
 import { bringupForReport } from '../bringup/bringup-report';
 import { ensureCloseup } from '../closeups/closeups';
@@ -25,7 +26,8 @@ export async function reportData(deps: Pick<AppDeps, 'db' | 'storage' | 'config'
     await db.select({ f: findings }).from(findings).innerJoin(photos, eq(photos.id, findings.photoId))
       .where(and(eq(findings.restorationId, restorationId), owner('finding'))).orderBy(asc(findings.number))
   ).map((r) => r.f);
-  const ledger = await db.select().from(parts).where(and(eq(parts.restorationId, restorationId), owner('part'))).orderBy(asc(parts.componentRef));
+  const ledger = (await db.select().from(parts).where(and(eq(parts.restorationId, restorationId), owner('part'))).orderBy(asc(parts.id)))
+    .sort((a, b) => compareComponentRefs(a.componentRef, b.componentRef));
   const readings = await db.select().from(measurements).where(and(eq(measurements.restorationId, restorationId), owner('reading'))).orderBy(asc(measurements.measuredAt));
   const technicians = await db
     .select({ name: users.name })

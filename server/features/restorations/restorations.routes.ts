@@ -8,6 +8,7 @@ import {
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
 import { input, validate } from '../../http/validate';
+import { invitationsService } from '../invitations/invitations.service';
 import { restorationsService } from './restorations.service';
 
 const list = { query: restorationListQuerySchema };
@@ -15,8 +16,9 @@ const create = { body: restorationInputSchema };
 const one = { params: idParamsSchema };
 const patch = { params: idParamsSchema, body: restorationPatchSchema };
 
-export function restorationsRoutes({ db }: AppDeps): Router {
-  const service = restorationsService(db);
+export function restorationsRoutes(deps: AppDeps): Router {
+  const { db } = deps;
+  const service = restorationsService(db, invitationsService(deps).inviteIn);
   const router = Router();
   router.get('/restorations', requireUser, validate(list), async (req, res) => {
     res.json(await service.listFor(req.user!.id, input(res, list).query));

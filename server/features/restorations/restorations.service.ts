@@ -1,7 +1,7 @@
 import type { z } from 'zod';
 import type { Role } from '../../../shared/permissions';
 import type { Restoration, restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
-import type { Database } from '../../db/client';
+import type { Database, Tx } from '../../db/client';
 import { ConflictError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
@@ -15,7 +15,10 @@ export function toRestoration(row: RestorationRow, role: Role): Restoration {
 }
 
 /** Membership and permission are checked by the route guard before these run. */
-export function restorationsService(db: Database) {
+/** Sends an invitation on the caller's transaction (the invitations service's `inviteIn`). */
+type InviteIn = (tx: Tx, restorationId: number, email: string, role: Role, inviterId: number) => Promise<unknown>;
+
+export function restorationsService(db: Database, invite?: InviteIn) {
   const repo = restorationsRepo(db);
   return {
     async listFor(userId: number, filter: Parameters<typeof repo.listFor>[1]) {
@@ -30,7 +33,17 @@ export function restorationsService(db: Database) {
       // The stage gates would otherwise be skipped by a set created past them.
       if (input.stage === 'returned') throw new ConflictError('A new restoration cannot start at Returned: create it at an earlier stage and record its final safety test.');
       if (input.stage === 'testing') throw new ConflictError('A new restoration cannot start at Testing: create it at an earlier stage and sign off its pre-power checklist on the Bring-up tab first.');
-      return toRestoration(await repo.insertWithTechnician(input, userId), 'technician');
+      const { inviteOwner, ...values } = input;
+      // The set, its technician and the owner's invitation (with its e-mail, sent last) commit together or not at all.
+      const row = await db.transaction(async (tx) => {
+        const created = await restorationsRepo(tx).insertWithTechnician(values, userId);
+        if (inviteOwner && created.ownerEmail) {
+          if (!invite) throw new Error('restorationsService: no invitations service to invite the owner with');
+          await invite(tx, created.id, created.ownerEmail, 'owner', userId);
+        }
+        return created;
+      });
+      return toRestoration(row, 'technician');
     },
     async update(id: number, patch: PatchInput, role: Role, actorId: number) {
       // The restoration row is locked first, so the recorded "from" stage is the one this change replaced,

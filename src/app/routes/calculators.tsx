@@ -1,28 +1,13 @@
-import { AlignmentCard } from '../../features/calculators/components/alignment-card';
-import { BypassCornerCard } from '../../features/calculators/components/bypass-corner-card';
+import { useState } from 'react';
+import { calculatorAnchor, calculatorCatalogue, matchesSearch } from '../../features/calculators/components/calculator-catalogue';
 import { CalculatorGroup } from '../../features/calculators/components/calculator-group';
-import { CapacitorCodeCard } from '../../features/calculators/components/capacitor-code-card';
-import { CathodeBiasCard } from '../../features/calculators/components/cathode-bias-card';
-import { CathodeCurrentCard } from '../../features/calculators/components/cathode-current-card';
-import { ColourBandsCard } from '../../features/calculators/components/colour-bands-card';
-import { DischargeCard } from '../../features/calculators/components/discharge-card';
-import { EsrCard } from '../../features/calculators/components/esr-card';
-import { HeaterChainCard } from '../../features/calculators/components/heater-chain-card';
-import { LeakageCard } from '../../features/calculators/components/leakage-card';
-import { LiveChassisCard } from '../../features/calculators/components/live-chassis-card';
-import { MeterLoadingCard } from '../../features/calculators/components/meter-loading-card';
-import { PreferredValueCard } from '../../features/calculators/components/preferred-value-card';
-import { RcCornerCard } from '../../features/calculators/components/rc-corner-card';
-import { ReadingVerdictCard } from '../../features/calculators/components/reading-verdict-card';
-import { ResistorDissipationCard } from '../../features/calculators/components/resistor-dissipation-card';
-import { SeriesLampCard } from '../../features/calculators/components/series-lamp-card';
-import { TapScalingCard } from '../../features/calculators/components/tap-scaling-card';
-import { TimeConstantCard } from '../../features/calculators/components/time-constant-card';
-import { ValueReaderCard } from '../../features/calculators/components/value-reader-card';
-import { ValveDecoderCard } from '../../features/calculators/components/valve-decoder-card';
-import { ValveRatingsCard } from '../../features/calculators/components/valve-ratings-card';
+import { CalculatorIndex } from '../../features/calculators/components/calculator-index';
 
 export function CalculatorsRoute() {
+  const [search, setSearch] = useState('');
+  // Cards that do not match are hidden, not removed, so values typed into them survive a search.
+  const groups = calculatorCatalogue.map((group) => ({ ...group, entries: group.entries.map((entry) => ({ entry, shown: matchesSearch(entry, search) })) }));
+  const visible = groups.map((g) => ({ title: g.title, entries: g.entries.filter((e) => e.shown).map((e) => e.entry) })).filter((g) => g.entries.length > 0);
   return (
     <div className="space-y-8">
       <div>
@@ -31,40 +16,18 @@ export function CalculatorsRoute() {
           Type values the way they are printed (2k2, 330R, 8 MF, 350 WV, 6n8) and the answer follows as you type.
         </p>
       </div>
-      <CalculatorGroup title="Reading parts">
-        <ValueReaderCard />
-        <CapacitorCodeCard />
-        <ColourBandsCard />
-        <PreferredValueCard />
-      </CalculatorGroup>
-      <CalculatorGroup title="Capacitors">
-        <EsrCard />
-        <LeakageCard />
-        <DischargeCard />
-      </CalculatorGroup>
-      <CalculatorGroup title="RC and time">
-        <RcCornerCard />
-        <TimeConstantCard />
-      </CalculatorGroup>
-      <CalculatorGroup title="Valves and bias">
-        <CathodeBiasCard />
-        <CathodeCurrentCard />
-        <BypassCornerCard />
-        <ValveDecoderCard />
-        <ValveRatingsCard />
-        <ResistorDissipationCard />
-      </CalculatorGroup>
-      <CalculatorGroup title="Mains and power-up">
-        <LiveChassisCard />
-        <HeaterChainCard />
-        <TapScalingCard />
-        <SeriesLampCard />
-      </CalculatorGroup>
-      <CalculatorGroup title="Readings">
-        <ReadingVerdictCard />
-        <MeterLoadingCard />
-        <AlignmentCard />
-      </CalculatorGroup>
+      <CalculatorIndex groups={visible} search={search} onSearch={setSearch} shown={visible.reduce((n, g) => n + g.entries.length, 0)} />
+      {groups.map((group) => (
+        <div key={group.title} hidden={!group.entries.some((e) => e.shown)}>
+          <CalculatorGroup title={group.title}>
+            {group.entries.map(({ entry, shown }) => (
+              <div key={entry.title} id={calculatorAnchor(entry.title)} hidden={!shown} className="scroll-mt-4">
+                {entry.card}
+              </div>
+            ))}
+          </CalculatorGroup>
+        </div>
+      ))}
     </div>
   );
 }

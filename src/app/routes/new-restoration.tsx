@@ -16,7 +16,7 @@ export function NewRestorationRoute() {
         submitLabel="Put it on the bench"
         submitting={create.isPending}
         serverError={create.error?.message}
-        onSubmit={(values) => create.mutate(values, { onSuccess: () => navigate('/') })}
+        onSubmit={(values) => create.mutate(values, { onSuccess: (created) => navigate(`/restorations/${created.id}`) })}
       />
     </div>
   );

@@ -1,18 +1,16 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { User } from '../../../../shared/schemas/auth';
-import { api, ApiError } from '../../../lib/api-client';
+import type { Session, User } from '../../../../shared/schemas/auth';
+import { api } from '../../../lib/api-client';
 import { ME_KEY } from '../../../lib/session-key';
 
 export { ME_KEY };
 
-/** The signed-in person, or null when signed out (a 401 here is an answer, not an error). */
+/**
+ * The signed-in person, or null when signed out. Asked of `/auth/session`, which answers 200 either way, so a
+ * signed-out page logs no failed request.
+ */
 export async function getMe(): Promise<User | null> {
-  try {
-    return await api<User>('/auth/me');
-  } catch (err) {
-    if (err instanceof ApiError && err.status === 401) return null;
-    throw err;
-  }
+  return (await api<Session>('/auth/session')).user;
 }
 
 export const meQueryOptions = () => queryOptions({ queryKey: ME_KEY, queryFn: getMe, staleTime: 60_000 });

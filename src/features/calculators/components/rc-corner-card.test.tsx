@@ -44,7 +44,17 @@ describe('RC corner calculator', () => {
 
   it('when the library refuses the numbers, then its reason is shown instead of a result', async () => {
     render(<RcCornerCard />);
-    await typeInto('Resistance (Ω)', '-15k');
+    await typeInto('Resistance (Ω)', '0');
     expect(screen.getByText(/resistance \(Ω\) must be a number above zero/)).toBeInTheDocument();
+  });
+
+  it('when a negative value is typed where none can exist, then the field is marked invalid and says so', async () => {
+    render(<RcCornerCard />);
+    const input = await typeInto('Resistance (Ω)', '-15k');
+    expect(input).toHaveAttribute('aria-invalid', 'true');
+    expect(input).toHaveAccessibleDescription('A resistance cannot be negative here: enter it without the minus sign.');
+    expect(screen.getByText('Correct the value marked above to see the result.')).toBeInTheDocument();
+    const capacitance = await typeInto('Capacitance (F)', '-47n');
+    expect(capacitance).toHaveAccessibleDescription('A capacitance cannot be negative here: enter it without the minus sign.');
   });
 });

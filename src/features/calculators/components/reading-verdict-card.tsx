@@ -14,8 +14,8 @@ import { VerdictMark } from './verdict-mark';
 
 /** readingVerdict: a bench reading against the service manual's value and tolerance. */
 export function ReadingVerdictCard() {
-  const expected = useQuantity('180 V');
-  const reading = useQuantity('189 V');
+  const expected = useQuantity('180 V', undefined, { allowNegative: true });
+  const reading = useQuantity('189 V', undefined, { allowNegative: true });
   const [toleranceText, setToleranceText] = useState('10');
   const tolerance = readTolerance(toleranceText);
   const outcome = calculate(

@@ -7,8 +7,9 @@ export interface QuantityField extends QuantityReading {
   setText: (text: string) => void;
 }
 
-export function useQuantity(initial: string, expectUnit?: ExpectedUnit): QuantityField {
+/** `allowNegative` for a reading that can lie below zero; every other field refuses a negative value with a message. */
+export function useQuantity(initial: string, expectUnit?: ExpectedUnit, { allowNegative = false } = {}): QuantityField {
   const [text, setText] = useState(initial);
-  const reading = useMemo(() => readQuantity(text, expectUnit), [text, expectUnit]);
+  const reading = useMemo(() => readQuantity(text, expectUnit, { allowNegative }), [text, expectUnit, allowNegative]);
   return { ...reading, setText };
 }

@@ -21,11 +21,21 @@ export function messageOf(error: unknown): string {
   return 'Gridleak could not work this out from the values entered.';
 }
 
-export function readQuantity(text: string, expectUnit?: ExpectedUnit): QuantityReading {
+const quantityNames: Record<QuantityUnit, string> = {
+  'Ω': 'A resistance', F: 'A capacitance', V: 'This voltage', A: 'This current', Hz: 'A frequency', W: 'A power', s: 'A time', J: 'An energy', '': 'This value',
+};
+
+/**
+ * Reads a field's text. A negative value is refused with a message unless `allowNegative` (a reading that can lie
+ * below zero, such as a grid voltage): a resistance, a capacitance or a rating below zero does not exist.
+ */
+export function readQuantity(text: string, expectUnit?: ExpectedUnit, { allowNegative = false } = {}): QuantityReading {
   // An empty field is not yet an error: the result simply waits for it.
   if (text.trim() === '') return { text };
   try {
     const quantity = parseQuantity(text, expectUnit === undefined ? {} : { expectUnit });
+    if (quantity.value < 0 && !allowNegative)
+      return { text, error: `${quantityNames[quantity.unit] ?? 'This value'} cannot be negative here: enter it without the minus sign.` };
     return { text, value: quantity.value, unit: quantity.unit, display: formatQuantity(quantity.value, quantity.unit, 6) };
   } catch (error) {
     return { text, error: messageOf(error) };

@@ -3,6 +3,7 @@ import { can, type Role } from '../../../../shared/permissions';
 import { commentPatchSchema, type Comment } from '../../../../shared/schemas/findings';
 import { buttonClass } from '../../../components/button';
 import { inputClass } from '../../../components/field';
+import { useConfirm } from '../../../components/use-confirm';
 import { CommentText, VisibilityMark } from './comment-text';
 import { fullTime, relativeTime, type FindingMember } from './finding-format';
 
@@ -75,6 +76,7 @@ export function CommentItem({
   onDelete: (id: number) => void;
 }) {
   const [editing, setEditing] = useState(false);
+  const { confirm, dialog } = useConfirm();
   const deleted = Boolean(comment.deletedAt);
   const isAuthor = comment.authorId !== null && comment.authorId === meId;
   const canEdit = !deleted && can(role, 'comments.edit', { isAuthor });
@@ -116,13 +118,21 @@ export function CommentItem({
               className={`${smallButton} text-danger`}
               disabled={busy}
               aria-label={`Delete comment by ${author}`}
-              onClick={() => window.confirm('Delete this comment? Its place in the thread stays, marked deleted.') && onDelete(comment.id)}
+              onClick={() =>
+                void confirm({
+                  title: 'Delete this comment?',
+                  consequence: 'Its words are removed; its place in the thread stays, marked deleted.',
+                  confirmLabel: 'Delete comment',
+                  danger: true,
+                }).then((yes) => yes && onDelete(comment.id))
+              }
             >
               Delete
             </button>
           )}
         </div>
       )}
+      {dialog}
     </li>
   );
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { compareComponentRefs, describeChange, relativeTime } from './finding-format';
+import { describeChange, relativeTime } from './finding-format';
 import { photoLabels } from './photo-labels';
 import type { Photo } from '../../../../shared/schemas/photos';
 
@@ -24,12 +24,6 @@ describe('relativeTime', () => {
     expect(relativeTime('2026-11-20T11:55:00.000Z', now)).toBe('5 minutes ago');
     expect(relativeTime('2026-11-19T12:00:00.000Z', now)).toBe('yesterday');
     expect(relativeTime('not a date', now)).toBe('');
-  });
-});
-
-describe('compareComponentRefs', () => {
-  it('when references are sorted, then numbers sort as numbers', () => {
-    expect(['R23', 'C15b', 'R3', 'C15', 'V3'].sort(compareComponentRefs)).toEqual(['C15', 'C15b', 'R3', 'R23', 'V3']);
   });
 });
 

@@ -39,10 +39,6 @@ export function fullTime(iso: string): string {
   return Number.isNaN(date.getTime()) ? '' : date.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 }
 
-/** Component references in schematic order: R3 before R23, C15 before C15b. */
-export function compareComponentRefs(a: string, b: string): number {
-  return a.localeCompare(b, 'en', { numeric: true, sensitivity: 'base' });
-}
 
 const fieldNames: Record<string, string> = {
   title: 'Title',

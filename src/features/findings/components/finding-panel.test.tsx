@@ -193,13 +193,15 @@ describe('finding panel', () => {
   it('when a technician deletes a finding, then it is confirmed first and the page is told once it is gone', async () => {
     const finding = makeFinding(4);
     const api = photoApi(finding, () => ok(finding));
-    const confirm = vi.fn(() => true);
     const onDeleted = vi.fn();
-    vi.stubGlobal('confirm', confirm);
     const view = renderWithApp(<FindingPanel finding={finding} role="technician" meId={1} restorationId={7} members={members} onDeleted={onDeleted} />);
     await waitFor(() => expect(view.client.getQueryData(findingKeys.photo(3))).toBeDefined());
-    await userEvent.setup().click(screen.getByRole('button', { name: 'Delete finding' }));
-    expect(confirm).toHaveBeenCalledWith(expect.stringMatching(/^Delete finding #4/));
+    const user = userEvent.setup();
+    await user.click(screen.getByRole('button', { name: 'Delete finding' }));
+    const asked = await screen.findByRole('dialog', { name: /^Delete finding #4/ });
+    expect(asked).toHaveAccessibleDescription('Its thread and history are deleted with it.');
+    expect(api.calls.some((c) => c.method === 'DELETE')).toBe(false);
+    await user.click(within(asked).getByRole('button', { name: 'Delete finding' }));
     await waitFor(() => expect(onDeleted).toHaveBeenCalled());
     expect(api.calls).toContainEqual({ method: 'DELETE', path: '/findings/4', body: undefined });
   });

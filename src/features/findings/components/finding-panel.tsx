@@ -2,6 +2,7 @@ import { useId } from 'react';
 import { can, roleLabels, type Role } from '../../../../shared/permissions';
 import type { Finding, FindingPatch } from '../../../../shared/schemas/findings';
 import { buttonClass } from '../../../components/button';
+import { useConfirm } from '../../../components/use-confirm';
 import { useDeleteFinding } from '../api/delete-finding';
 import { usePhotoFindings } from '../api/get-photo-findings';
 import { useUpdateFinding } from '../api/update-finding';
@@ -31,6 +32,7 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
   const list = usePhotoFindings(finding.photoId);
   const update = useUpdateFinding(finding.photoId, restorationId);
   const remove = useDeleteFinding(finding.photoId, restorationId);
+  const { confirm, dialog } = useConfirm();
 
   const cached = list.data?.find((f) => f.id === finding.id);
   const live = cached && cached.updatedAt >= finding.updatedAt ? cached : finding;
@@ -45,9 +47,14 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
   const error = update.error ?? remove.error;
 
   const save = (patch: FindingPatch) => update.mutate({ id: finding.id, patch });
-  const confirmDelete = () => {
-    if (window.confirm(`Delete finding #${shown.number}, “${shown.title}”? Its thread and history go with it.`))
-      remove.mutate(finding.id, { onSuccess: () => onDeleted?.() });
+  const confirmDelete = async () => {
+    const yes = await confirm({
+      title: `Delete finding #${shown.number}, “${shown.title}”?`,
+      consequence: 'Its thread and history are deleted with it.',
+      confirmLabel: 'Delete finding',
+      danger: true,
+    });
+    if (yes) remove.mutate(finding.id, { onSuccess: () => onDeleted?.() });
   };
 
   return (
@@ -95,7 +102,7 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
         <div className="flex flex-wrap gap-2">
           <QuestionToggle open={shown.questionOpen} canAsk={can(role, 'findings.ask')} canResolve={can(role, 'findings.resolve')} onSave={save} />
           {canDelete && (
-            <button type="button" className={buttonClass('quiet', 'text-danger')} disabled={remove.isPending} onClick={confirmDelete}>
+            <button type="button" className={buttonClass('quiet', 'text-danger')} disabled={remove.isPending} onClick={() => void confirmDelete()}>
               Delete finding
             </button>
           )}
@@ -103,6 +110,7 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
       )}
 
       <FindingHistory findingId={finding.id} />
+      {dialog}
     </section>
   );
 }

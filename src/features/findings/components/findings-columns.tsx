@@ -1,7 +1,8 @@
 import { createColumnHelper, type FilterFn, type SortingFn } from '@tanstack/react-table';
 import { Link } from 'react-router';
 import { findingPath, kindLabels, severities, statuses, type Finding } from '../../../../shared/schemas/findings';
-import { compareComponentRefs, fullTime, relativeTime } from './finding-format';
+import { compareComponentRefs } from '../../../../shared/natural-order';
+import { fullTime, relativeTime } from './finding-format';
 import { SeverityMark, StatusMark } from './status-mark';
 
 const helper = createColumnHelper<Finding>();

@@ -80,11 +80,11 @@ describe('thread', () => {
 
   it('when a technician deletes someone else’s comment, then it is confirmed first and sent', async () => {
     const api = threadApi([makeComment(2, { authorId: 2, authorName: 'Teodor Brask' })]);
-    const confirm = vi.fn(() => true);
-    vi.stubGlobal('confirm', confirm);
     renderWithApp(<Thread finding={finding} role="technician" meId={1} members={members} />);
-    await userEvent.setup().click(await screen.findByRole('button', { name: 'Delete comment by Teodor Brask' }));
-    expect(confirm).toHaveBeenCalledWith(expect.stringMatching(/Delete this comment\?/));
+    const user = userEvent.setup();
+    await user.click(await screen.findByRole('button', { name: 'Delete comment by Teodor Brask' }));
+    const asked = await screen.findByRole('dialog', { name: 'Delete this comment?' });
+    await user.click(within(asked).getByRole('button', { name: 'Delete comment' }));
     await waitFor(() => expect(api.calls).toContainEqual({ method: 'DELETE', path: '/comments/2', body: undefined }));
   });
 

@@ -14,7 +14,7 @@ afterEach(() => {
 
 const help: SharedHelp = {
   id: 4, restorationId: 9, symptom: 'Hum rises as the set warms up', createdAt: '2026-12-01T10:00:00.000Z', expiresAt: '2026-12-08T10:00:00.000Z',
-  set: { make: 'Fenwick', model: 'Lark 3', year: 1952, chassis: null, mains: '240 V tap', equipmentKind: 'radio', liveChassis: false },
+  set: { make: 'Farrowby', model: 'Lark 3', year: 1952, chassis: null, mains: '240 V tap', equipmentKind: 'radio', liveChassis: false },
   valves: [{ position: 'V1', type: 'ECH81' }],
   parts: [{ id: 1, componentRef: 'C27', action: 'replaced', old: 'wax paper 22nF', new: 'film 22nF 630V', fittedAt: null }],
   readings: [{ id: 2, location: 'HT after smoothing', quantity: 'dc-voltage', expected: '250', tolerance: '10%', reading: '212', conditions: '', meter: '10 MΩ',
@@ -34,7 +34,7 @@ describe('the shared help page', () => {
   it('when the link works, then it shows the chart with its verdict and meter, and the pin at its spot', async () => {
     fakeApi(() => ok(help));
     show();
-    expect(await screen.findByRole('heading', { name: 'Fenwick Lark 3' })).toBeInTheDocument();
+    expect(await screen.findByRole('heading', { name: 'Farrowby Lark 3' })).toBeInTheDocument();
     expect(screen.getByRole('row', { name: /HT after smoothing/ })).toHaveTextContent(/250.*212.*out.*10 MΩ.*chart taken with 1k\/V/);
     const pin = screen.getByTestId('help-pin');
     expect([pin.getAttribute('data-x'), pin.getAttribute('data-y')]).toEqual(['0.25', '0.75']);

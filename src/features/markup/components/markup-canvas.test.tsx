@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import 'vitest-canvas-mock';
 import '@testing-library/jest-dom/vitest';
-import { cleanup, fireEvent, render, screen } from '@testing-library/react';
+import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { makeFinding } from '../testing/finding-fixtures';
@@ -160,24 +160,24 @@ describe('MarkupCanvas editing', () => {
   });
 
   it('when Delete is pressed on the selected finding, then it asks first and deletes only when confirmed', async () => {
-    const confirm = vi.fn().mockReturnValueOnce(false).mockReturnValueOnce(true);
-    window.confirm = confirm;
     const { user, stage, props } = renderCanvas({ selectedId: 1 });
     stage.focus();
     await user.keyboard('{Delete}');
+    const asked = await screen.findByRole('dialog', { name: /^Delete finding #/ });
+    await user.click(within(asked).getByRole('button', { name: 'Cancel' }));
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
     expect(props.onDelete).not.toHaveBeenCalled();
+    expect(stage).toHaveFocus();
     await user.keyboard('{Backspace}');
-    expect(confirm).toHaveBeenCalledTimes(2);
-    expect(props.onDelete).toHaveBeenCalledWith(1);
+    await user.click(within(await screen.findByRole('dialog')).getByRole('button', { name: 'Delete finding' }));
+    await waitFor(() => expect(props.onDelete).toHaveBeenCalledWith(1));
   });
 
   it('when the finding may not be edited, then Delete and the arrows leave it alone, and Escape deselects', async () => {
     const { user, stage, props } = renderCanvas({ selectedId: 1, canEdit: () => false });
-    const confirm = vi.fn();
-    window.confirm = confirm;
     stage.focus();
     await user.keyboard('{Delete}{ArrowLeft}');
-    expect(confirm).not.toHaveBeenCalled();
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
     expect(props.onMove).not.toHaveBeenCalled();
     await user.keyboard('{Escape}');
     expect(props.onSelect).toHaveBeenCalledWith(undefined);

@@ -178,6 +178,7 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
       <p role="status" className="sr-only">
         {commands.message}
       </p>
+      {commands.confirmDialog}
     </div>
   );
 }

@@ -1,5 +1,6 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import type { Finding } from '../../../../shared/schemas/findings';
+import { useConfirm } from '../../../components/use-confirm';
 import { changeOf, effectOf, type Effect } from '../lib/command-effects';
 import { plainPoints, toMark, withPoints, type NewMark } from '../lib/marks';
 import type { Command } from '../model/commands';
@@ -50,6 +51,7 @@ export function useMarkupCommands(env: Env) {
   const deletedIds = useRef(new WeakMap<Command, number>());
   const [, setVersion] = useState(0);
   const [message, setMessage] = useState('');
+  const { confirm, dialog: confirmDialog } = useConfirm();
 
   const record = (change: Change) => {
     history.current = push(history.current, change);
@@ -92,10 +94,18 @@ export function useMarkupCommands(env: Env) {
   };
 
   /** Delete a finding after asking; undoable only when the page can bring it back (`onUndo`). */
-  const remove = (id: number): boolean => {
+  const remove = async (id: number): Promise<boolean> => {
+    const asked = latest.current.items.find((f) => f.id === id);
+    if (!asked) return false;
+    const yes = await confirm({
+      title: `Delete finding #${asked.number}, “${asked.title}”?`,
+      consequence: 'Its thread and history are deleted with it.',
+      confirmLabel: 'Delete finding',
+      danger: true,
+    });
     const e = latest.current;
     const finding = e.items.find((f) => f.id === id);
-    if (!finding || !window.confirm(`Delete finding #${finding.number}, “${finding.title}”? Its thread and history go with it.`)) return false;
+    if (!yes || !finding) return false;
     e.onDelete(id);
     if (e.onUndo) {
       const { title, componentRef, kind, severity, status, dismissReason, ownerVisible } = finding;
@@ -122,5 +132,5 @@ export function useMarkupCommands(env: Env) {
     });
   };
 
-  return { marks, run, remove, undo: undoLast, canUndo: canUndo(history.current), message };
+  return { marks, run, remove, undo: undoLast, canUndo: canUndo(history.current), message, confirmDialog };
 }

@@ -26,7 +26,8 @@ export interface KeyEnv {
   setSpaceHeld(held: boolean): void;
   onSelect(id: number | undefined): void;
   run(command: Command): void;
-  remove(id: number): void;
+  /** Ask, then delete; resolves true once deleted. */
+  remove(id: number): Promise<boolean>;
   undo(): void;
 }
 
@@ -70,7 +71,7 @@ export function useMarkupKeys(env: KeyEnv) {
         if (!k.cancelGesture() && id !== undefined) k.onSelect(undefined);
         return;
       case 'delete':
-        if (id !== undefined && k.canEditSelected) k.remove(id);
+        if (id !== undefined && k.canEditSelected) void k.remove(id);
         return;
       case 'undo':
         k.undo();

@@ -1,5 +1,6 @@
 import { roleLabels, roles, type Role } from '../../../../shared/permissions';
 import type { Member } from '../../../../shared/schemas/members';
+import { useConfirm } from '../../../components/use-confirm';
 import { FormAlertInline } from './form-alert-inline';
 import { useChangeRole, useRemoveMember } from '../api/manage-members';
 
@@ -7,6 +8,7 @@ export function MembersList({ restorationId, members, canManage, meId }: { resto
   const changeRole = useChangeRole(restorationId);
   const remove = useRemoveMember(restorationId);
   const error = changeRole.error ?? remove.error;
+  const { confirm, dialog } = useConfirm();
   return (
     <div>
       <ul className="divide-y divide-rule rounded-xl border border-rule bg-panel">
@@ -40,7 +42,14 @@ export function MembersList({ restorationId, members, canManage, meId }: { resto
                   type="button"
                   className="min-h-11 rounded-lg px-3 text-sm text-danger hover:bg-danger-soft"
                   disabled={remove.isPending}
-                  onClick={() => window.confirm(`Remove ${m.name} from this restoration?`) && remove.mutate(m.userId)}
+                  onClick={() =>
+                    void confirm({
+                      title: `Remove ${m.name} from this restoration?`,
+                      consequence: `${m.name} can no longer open this restoration or its photos, findings and report. Their findings and comments stay.`,
+                      confirmLabel: 'Remove member',
+                      danger: true,
+                    }).then((yes) => yes && remove.mutate(m.userId))
+                  }
                 >
                   Remove
                 </button>
@@ -52,6 +61,7 @@ export function MembersList({ restorationId, members, canManage, meId }: { resto
         ))}
       </ul>
       <FormAlertInline message={error?.message} />
+      {dialog}
     </div>
   );
 }

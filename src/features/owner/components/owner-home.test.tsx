@@ -26,7 +26,7 @@ afterEach(() => {
 const set = (id: number, overrides: Partial<Restoration> = {}): Restoration => ({
   id, make: 'Aldermoor', model: 'Cantata', year: 1954, serial: null, equipmentKind: 'radio', mainsSetting: null, liveChassis: false,
   symptoms: null, conditionNotes: null, workLevel: 'repair', hiddenPartsOriginal: false, story: 'Bought by Grandad Ivo for the kitchen in 1955.',
-  careNotes: null, receivedOn: null, stage: 'repair', role: 'owner', createdAt: '2026-11-01T09:00:00Z', updatedAt: '2026-11-01T09:00:00Z', ...overrides,
+  careNotes: null, receivedOn: null, stage: 'repair', ownerName: null, ownerEmail: null, role: 'owner', createdAt: '2026-11-01T09:00:00Z', updatedAt: '2026-11-01T09:00:00Z', ...overrides,
 });
 const photos = [
   makePhoto(1, { view: 'front', phase: 'before', ownerVisible: true, caption: 'as it arrived', takenAt: '2026-11-02T10:00:00Z' }),

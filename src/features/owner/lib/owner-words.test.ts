@@ -23,6 +23,16 @@ describe('owner words', () => {
     expect(greeting('Mara Lind', new Date(2026, 10, 24, 15))).toBe('Good afternoon, Mara');
     expect(greeting(undefined, new Date(2026, 10, 24, 21))).toBe('Good evening');
   });
+
+  it('when the reader is in another time zone than the server or the clock of the test, then their own hour is used', () => {
+    // 08:00 UTC on 24 November 2026: 08:00 in London (GMT), 21:00 in Auckland (NZDT, UTC+13), midnight in
+    // Los Angeles (PST, UTC-8); offsets from the IANA tz database.
+    const at = new Date('2026-11-24T08:00:00Z');
+    expect(greeting('Mara Lind', at, 'Europe/London')).toBe('Good morning, Mara');
+    expect(greeting('Mara Lind', at, 'Pacific/Auckland')).toBe('Good evening, Mara');
+    expect(greeting('Mara Lind', new Date('2026-11-24T22:00:00Z'), 'Pacific/Auckland')).toBe('Good morning, Mara');
+    expect(greeting('Mara Lind', new Date('2026-11-24T22:00:00Z'), 'America/Los_Angeles')).toBe('Good afternoon, Mara');
+  });
 });
 
 describe('heroPhoto', () => {

@@ -10,9 +10,15 @@ export function stageInWords(stage: Stage): string {
 /** The set as its owner knows it: "Aldermoor Cantata" (the year is shown beside it). */
 export const setName = (r: Pick<Restoration, 'make' | 'model'>) => `${r.make} ${r.model}`.trim();
 
-/** "Good morning, Mara": the first name, and the part of the day where the reader is. */
-export function greeting(name: string | null | undefined, now = new Date()): string {
-  const hour = now.getHours();
+/** The hour (0–23) on the clock of `timeZone`; the browser's own zone when none is given. */
+function hourIn(now: Date, timeZone?: string): number {
+  const hour = new Intl.DateTimeFormat('en', { hour: 'numeric', hourCycle: 'h23', timeZone }).formatToParts(now).find((p) => p.type === 'hour')?.value;
+  return hour === undefined ? now.getHours() : Number(hour) % 24;
+}
+
+/** "Good morning, Mara": the first name, and the part of the day on the reader's own clock (their time zone). */
+export function greeting(name: string | null | undefined, now = new Date(), timeZone?: string): string {
+  const hour = hourIn(now, timeZone);
   const part = hour < 5 ? 'Good evening' : hour < 12 ? 'Good morning' : hour < 18 ? 'Good afternoon' : 'Good evening';
   const first = name?.trim().split(/\s+/)[0];
   return first ? `${part}, ${first}` : part;

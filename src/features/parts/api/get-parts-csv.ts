@@ -1,5 +1,13 @@
 /**
  * The ledger as a spreadsheet file. A plain link with `download` fetches it: same origin, so the session cookie goes
- * with it, and the server names the file. Owners get it without costs, sources and notes, as in the ledger.
+ * with it, and the server names the file. Owners get it without costs, sources and notes, as in the ledger. Costs
+ * come in the workshop's currency and dates on the reader's calendar (their time zone).
  */
-export const partsCsvHref = (restorationId: number) => `/api/restorations/${restorationId}/parts.csv`;
+export const partsCsvHref = (restorationId: number, currency?: string) => {
+  const query = new URLSearchParams();
+  if (currency) query.set('currency', currency);
+  const zone = Intl.DateTimeFormat().resolvedOptions().timeZone;
+  if (zone) query.set('timeZone', zone);
+  const search = query.toString();
+  return `/api/restorations/${restorationId}/parts.csv${search ? `?${search}` : ''}`;
+};

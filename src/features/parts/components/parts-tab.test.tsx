@@ -37,7 +37,11 @@ describe('parts tab', () => {
     fakePartsApi(parts);
     renderWithQueries(<PartsTab restorationId={7} role="technician" setName="Ardent 5" view="ledger" onViewChange={() => {}} />);
     await screen.findByRole('row', { name: 'Part C15' });
-    expect(screen.getByRole('link', { name: 'Export CSV' })).toHaveAttribute('href', '/api/restorations/7/parts.csv');
+    const href = new URL(screen.getByRole('link', { name: 'Export CSV' }).getAttribute('href')!, 'http://gridleak.test');
+    expect(href.pathname).toBe('/api/restorations/7/parts.csv');
+    // The workshop's currency (GBP until one is chosen) and the reader's time zone go with it.
+    expect(href.searchParams.get('currency')).toBe('GBP');
+    expect(href.searchParams.get('timeZone')).toBe(Intl.DateTimeFormat().resolvedOptions().timeZone);
     expect(screen.getByRole('button', { name: 'Shopping list' })).toBeInTheDocument();
   });
 

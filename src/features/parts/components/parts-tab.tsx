@@ -6,6 +6,7 @@ import { ErrorState, Loading } from '../../../components/states';
 import { partsCsvHref } from '../api/get-parts-csv';
 import { useParts } from '../api/get-parts';
 import type { FindingChoice } from '../lib/finding-choice';
+import { useCurrency } from '../hooks/use-currency';
 import { CurrencySetting } from './currency-setting';
 import { PartForm } from './part-form';
 import { PartsLedger } from './parts-ledger';
@@ -39,6 +40,7 @@ export function PartsTab({ restorationId, role, setName, findings, view: asked, 
   const view = workshop ? asked : 'ledger';
   const parts = useParts(restorationId);
   const [form, setForm] = useState<FormState>({ open: false });
+  const [currency] = useCurrency();
   const close = () => setForm({ open: false });
   return (
     <div className="space-y-4">
@@ -54,7 +56,7 @@ export function PartsTab({ restorationId, role, setName, findings, view: asked, 
           </div>
           <div className="flex flex-wrap items-center gap-3">
             {canEdit && <CurrencySetting />}
-            <a href={partsCsvHref(restorationId)} download className={buttonClass('quiet')}>
+            <a href={partsCsvHref(restorationId, currency)} download className={buttonClass('quiet')}>
               Export CSV
             </a>
           </div>

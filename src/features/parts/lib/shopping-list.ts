@@ -1,5 +1,5 @@
 import type { Part } from '../../../../shared/schemas/parts';
-import { compareRefs } from './ref-order';
+import { compareComponentRefs } from '../../../../shared/natural-order';
 
 export interface ShoppingLine {
   /** The replacement as first written; blank when none is chosen yet. */
@@ -37,6 +37,6 @@ export function shoppingLines(parts: Part[], state: 'planned' | 'ordered'): Shop
     lines.set(key, line);
   }
   const list = [...lines.values()];
-  for (const line of list) line.refs.sort(compareRefs);
-  return list.sort((a, b) => compareRefs(a.refs[0] ?? '', b.refs[0] ?? ''));
+  for (const line of list) line.refs.sort(compareComponentRefs);
+  return list.sort((a, b) => compareComponentRefs(a.refs[0] ?? '', b.refs[0] ?? ''));
 }

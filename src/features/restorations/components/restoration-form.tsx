@@ -78,6 +78,23 @@ export function RestorationForm({
           )}
         </Field>
       </div>
+      <fieldset className="space-y-3 rounded-lg border border-rule bg-panel p-3">
+        <legend className="px-1 font-semibold">The owner</legend>
+        <div className="grid gap-4 sm:grid-cols-2">
+          <Field label="Owner's name" error={e.ownerName?.message}>
+            {(a) => <input {...a} {...register('ownerName')} className={inputClass} autoComplete="off" />}
+          </Field>
+          <Field label="Owner's e-mail" error={e.ownerEmail?.message}>
+            {(a) => <input {...a} {...register('ownerEmail')} type="email" className={inputClass} autoComplete="off" />}
+          </Field>
+        </div>
+        {!initial && (
+          <label className="flex min-h-11 items-center gap-3">
+            <input type="checkbox" {...register('inviteOwner')} className="h-5 w-5 accent-[var(--color-glow)]" />
+            <span>Invite them as the owner: they get an e-mail link to follow the work and read the hand-back report</span>
+          </label>
+        )}
+      </fieldset>
       <label className="flex min-h-11 items-center gap-3 rounded-lg border border-rule bg-panel px-3">
         <input type="checkbox" {...register('liveChassis')} className="h-5 w-5 accent-[var(--color-glow)]" />
         <span>
