@@ -22,6 +22,7 @@ import { photosRoutes } from './features/photos/photos.routes';
 import { reportRoutes } from './features/report/report.routes';
 import { restorationsRoutes } from './features/restorations/restorations.routes';
 import { safetyRoutes } from './features/safety/safety.routes';
+import { estimatesRoutes } from './features/estimates/estimates.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { redactedError } from './http/redact-error';
 import { requireSameOrigin } from './http/same-origin';
@@ -76,6 +77,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(reportRoutes(deps));
   api.use(safetyRoutes(deps));
   api.use(bringupRoutes(deps));
+  api.use(estimatesRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

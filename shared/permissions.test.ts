@@ -38,6 +38,10 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'bringup.view': { technician: true, mentor: true, owner: true },
   'bringup.record': { technician: true, mentor: false, owner: false },
   'bringup.signoff': { technician: true, mentor: false, owner: false },
+  // Mentors see no money; owners read their own sets' estimates and answer them.
+  'money.view': { technician: true, mentor: false, owner: true },
+  'money.edit': { technician: true, mentor: false, owner: false },
+  'estimates.decide': { technician: false, mentor: false, owner: true },
 };
 
 describe('can()', () => {

@@ -44,6 +44,9 @@ export const actions = [
   'bringup.view',
   'bringup.record',
   'bringup.signoff',
+  'money.view',
+  'money.edit',
+  'estimates.decide',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -101,6 +104,11 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'bringup.view': () => true,
   'bringup.record': (role) => role === 'technician',
   'bringup.signoff': (role) => role === 'technician',
+  // Money: mentors see none; owners read their own sets' estimates, invoices and payments and answer an estimate;
+  // only technicians price, send, invoice and refund. What an owner reads of each is the `visibility` rule below.
+  'money.view': (role) => role !== 'mentor',
+  'money.edit': (role) => role === 'technician',
+  'estimates.decide': (role) => role === 'owner',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
@@ -126,15 +134,17 @@ const ownerPart: Condition = { any: [{ field: 'part.state', is: 'fitted' }, { fi
 const sinceShared = (entity: 'event' | 'change'): Condition => ({ field: `${entity}.createdAt`, after: 'finding.sharedAt' });
 const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all: [{ field: 'event.kind', is: kind }, ...conditions] });
 
-export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification'] as const;
+export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'estimate'] as const;
 export type VisibilitySubject = (typeof visibilitySubjects)[number];
 
 const all: Condition = { always: true };
-const everything: Record<VisibilitySubject, Condition> = { photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all };
+const everything: Record<VisibilitySubject, Condition> = { photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, estimate: all };
+/** Mentors help with the work and see none of its money. */
+const noMoney: Condition = { never: true };
 
 export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   technician: everything,
-  mentor: everything,
+  mentor: { ...everything, estimate: noMoney },
   owner: {
     photo: sharedPhoto,
     finding: sharedFinding,
@@ -162,11 +172,16 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
         eventOf('pre-power-signed'),
         eventOf('pre-power-voided'),
         eventOf('bringup-step'),
+        // An estimate sent to the owner and their answer (the history lines carry the version, never amounts).
+        eventOf('estimate-sent'),
+        eventOf('estimate-decided'),
       ],
     },
     /** A finding's change record, only from after it was shared. */
     change: { all: [sharedFinding, sinceShared('change')] },
     /** An in-app notification or its e-mail, judged when read or sent, not when written. */
+    /** An estimate once sent to them; drafts stay in the workshop. */
+    estimate: { field: 'estimate.sent', is: true },
     notification: { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
   },
 };

@@ -8,6 +8,7 @@ import { photoKeys } from '../../server/features/photos/photo-objects';
 import { measurementsService } from '../../server/features/measurements/measurements.service';
 import { partsService } from '../../server/features/parts/parts.service';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
+import { estimatesService } from '../../server/features/estimates/estimates.service';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { comments, events, findings, measurements, memberships, notifications, parts, photos } from '../../server/db/schema';
 import { twoToneJpeg } from '../factories/images';
@@ -19,7 +20,7 @@ import { startTestApp } from '../support/test-app';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
-type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number };
+type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; estimateId: number; draftEstimateId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?];
 
@@ -109,6 +110,11 @@ const matrix: Row[] = [
   ['POST', '/api/restorations/:id/bringup/pre-power/sign-off', [409, 403, 403, 404, 401]],
   // Not signed off either, so the technician's step meets the first-power gate.
   ['POST', '/api/restorations/:id/bringup/steps', [409, 403, 403, 404, 401], () => ({ supply: 'variable-transformer', appliedVolts: 60, lampBehaviour: 'no-lamp', decision: 'go-on' })],
+  // Money: mentors see none; the fixture has a sent version 1 and a draft version 2 of its estimate.
+  ['GET', '/api/restorations/:id/estimates', [200, 403, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/estimates', [201, 403, 403, 404, 401], () => ({ lines: [{ kind: 'labour', description: 'Recap and align', low: 120, high: 240 }] })],
+  ['POST', '/api/estimates/:draftEstimateId/send', [200, 403, 403, 404, 401]],
+  ['POST', '/api/estimates/:estimateId/decision', [403, 403, 200, 404, 401], () => ({ decision: 'approved', name: 'Ada Owner', version: 1 })],
 ];
 
 let jpeg: Buffer;
@@ -143,7 +149,10 @@ async function fixture(): Promise<Fixture> {
   const commentId = (await commentsRepo(t.db).insert({ findingId, authorId: people.technician!.id, body: 'Smells burnt', internal: true }))!;
   const measurementId = (await measurementsService(t.db).create(r.id, { location: 'R23', quantity: 'resistance', expected: '150', reading: '212' }, people.technician!.id)).id;
   const partId = (await partsService(t.db).create(r.id, { componentRef: 'R23', action: 'replaced' }, people.technician!.id)).id;
-  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId };
+  const estimates = estimatesService(t.deps);
+  const estimateId = (await estimates.create(r.id, { note: '', send: true, lines: [{ kind: 'part', description: 'Capacitors', low: 1000, high: 1500 }] }, people.technician!.id, 'technician')).id;
+  const draftEstimateId = (await estimates.create(r.id, { note: '', send: false, lines: [{ kind: 'part', description: 'Capacitors', low: 1200, high: 1500 }] }, people.technician!.id, 'technician')).id;
+  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, estimateId, draftEstimateId };
 }
 
 async function callerAgent(c: (typeof callers)[number]): Promise<Agent> {

@@ -10,3 +10,4 @@ export * from './measurements';
 export * from './parts';
 export * from './safety';
 export * from './bringup';
+export * from './money';

@@ -97,6 +97,20 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="M7.5 17.5h5" />
     </>
   ),
+  // A priced slip with a range bar: an estimate sent to the owner.
+  'estimate-sent': (
+    <>
+      <path d="M5 3h10v14H5Z" />
+      <path d="M7.5 7h5M7.5 13h2M11 13h1.5" />
+    </>
+  ),
+  // A slip with a tick: the owner answered the estimate.
+  'estimate-decided': (
+    <>
+      <path d="M5 3h10v14H5Z" />
+      <path d="m7.5 10.5 2 2 3.5-4" />
+    </>
+  ),
 };
 
 export function EventGlyph({ kind, caution = false, className = '' }: { kind: Kind; caution?: boolean; className?: string }) {

@@ -21,6 +21,8 @@ export const eventKindLabels: Record<Kind, string> = {
   'pre-power-signed': 'Pre-power sign-offs',
   'pre-power-voided': 'Sign-offs withdrawn',
   'bringup-step': 'Power-up steps',
+  'estimate-sent': 'Estimates sent',
+  'estimate-decided': 'Estimate answers',
 };
 
 export const eventKinds = timelineKinds;
