@@ -40,6 +40,7 @@ export const router = createBrowserRouter([
               { path: 'readings', loader: readingsLoader, lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },
               { path: 'parts', loader: partsLoader, lazy: page(() => import('./routes/parts'), 'PartsRoute') },
               { path: 'safety', lazy: page(() => import('./routes/safety'), 'SafetyRoute') },
+              { path: 'money', lazy: page(() => import('./routes/money'), 'MoneyRoute') },
               { path: 'history', loader: historyLoader, lazy: page(() => import('./routes/history'), 'HistoryRoute') },
               { path: 'people', loader: peopleLoader, lazy: page(() => import('./routes/people'), 'PeopleRoute') },
             ],

@@ -111,6 +111,7 @@ const matrix: Row[] = [
   // Not signed off either, so the technician's step meets the first-power gate.
   ['POST', '/api/restorations/:id/bringup/steps', [409, 403, 403, 404, 401], () => ({ supply: 'variable-transformer', appliedVolts: 60, lampBehaviour: 'no-lamp', decision: 'go-on' })],
   // Money: mentors see none; the fixture has a sent version 1 and a draft version 2 of its estimate.
+  ['GET', '/api/restorations/:id/money-settings', [200, 403, 403, 404, 401]],
   ['GET', '/api/restorations/:id/estimates', [200, 403, 200, 404, 401]],
   ['POST', '/api/restorations/:id/estimates', [201, 403, 403, 404, 401], () => ({ lines: [{ kind: 'labour', description: 'Recap and align', low: 120, high: 240 }] })],
   ['POST', '/api/estimates/:draftEstimateId/send', [200, 403, 403, 404, 401]],

@@ -4,6 +4,7 @@ import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
 import { input, validate } from '../../http/validate';
+import { readWorkshopSettings } from '../workshop/workshop-settings';
 import { estimatesService } from './estimates.service';
 
 const one = { params: idParamsSchema };
@@ -17,6 +18,10 @@ export function estimatesRoutes(deps: AppDeps): Router {
   const service = estimatesService(deps);
   const ofEstimate = (_req: Request, res: Response) => service.restorationOf(input(res, byId).params.estimateId);
   const router = Router();
+  // The prices a new estimate on this set will carry (currency, labour rate, markup, tax), for the technician's form.
+  router.get('/restorations/:id/money-settings', requireUser, validate(one), guard(db, 'money.edit'), async (_req, res) => {
+    res.json(await readWorkshopSettings(db));
+  });
   router.get('/restorations/:id/estimates', requireUser, validate(one), guard(db, 'money.view'), async (_req, res) => {
     res.json(await service.list(input(res, one).params.id, roleOf(res)));
   });

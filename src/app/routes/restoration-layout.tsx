@@ -1,5 +1,5 @@
 import { NavLink, Outlet, useParams } from 'react-router';
-import { roleLabels } from '../../../shared/permissions';
+import { can, roleLabels } from '../../../shared/permissions';
 import { EmptyState, ErrorState, Loading } from '../../components/states';
 import { ApiError } from '../../lib/api-client';
 import { useRestoration } from '../../features/restorations/api/get-restoration';
@@ -16,6 +16,7 @@ const tabs = [
   ['readings', 'Readings'],
   ['parts', 'Parts'],
   ['safety', 'Safety'],
+  ['money', 'Money'],
   ['history', 'History'],
   ['people', 'People'],
 ] as const;
@@ -42,7 +43,7 @@ export function RestorationLayout() {
         <span className="text-sm text-ink-soft">You: {roleLabels[r.role]}</span>
       </header>
       <nav aria-label="Restoration" className="-mx-4 flex print:hidden overflow-x-auto whitespace-nowrap border-b border-rule px-4">
-        {tabs.map(([to, label]) => (
+        {tabs.filter(([to]) => to !== 'money' || can(r.role, 'money.view')).map(([to, label]) => (
           <NavLink key={to} to={to} end={to === '.'} className={tabClass}>
             {label}
           </NavLink>
