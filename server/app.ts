@@ -23,6 +23,7 @@ import { reportRoutes } from './features/report/report.routes';
 import { restorationsRoutes } from './features/restorations/restorations.routes';
 import { safetyRoutes } from './features/safety/safety.routes';
 import { estimatesRoutes } from './features/estimates/estimates.routes';
+import { labourRoutes } from './features/labour/labour.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { redactedError } from './http/redact-error';
 import { requireSameOrigin } from './http/same-origin';
@@ -78,6 +79,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(safetyRoutes(deps));
   api.use(bringupRoutes(deps));
   api.use(estimatesRoutes(deps));
+  api.use(labourRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

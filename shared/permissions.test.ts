@@ -42,6 +42,7 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'money.view': { technician: true, mentor: false, owner: true },
   'money.edit': { technician: true, mentor: false, owner: false },
   'estimates.decide': { technician: false, mentor: false, owner: true },
+  'labour.record': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

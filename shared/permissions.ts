@@ -47,6 +47,7 @@ export const actions = [
   'money.view',
   'money.edit',
   'estimates.decide',
+  'labour.record',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -109,6 +110,8 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'money.view': (role) => role !== 'mentor',
   'money.edit': (role) => role === 'technician',
   'estimates.decide': (role) => role === 'owner',
+  // The labour log is the workshop's own record of time; the owner sees it only as invoice lines.
+  'labour.record': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {

@@ -115,6 +115,11 @@ const matrix: Row[] = [
   ['GET', '/api/restorations/:id/estimates', [200, 403, 200, 404, 401]],
   ['POST', '/api/restorations/:id/estimates', [201, 403, 403, 404, 401], () => ({ lines: [{ kind: 'labour', description: 'Recap and align', low: 120, high: 240 }] })],
   ['POST', '/api/estimates/:draftEstimateId/send', [200, 403, 403, 404, 401]],
+  // The labour log is the technicians' own; no timer runs on a fresh fixture, so stopping one is a 409.
+  ['GET', '/api/restorations/:id/labour', [200, 403, 403, 404, 401]],
+  ['POST', '/api/restorations/:id/labour', [201, 403, 403, 404, 401], () => ({ minutes: 45, stage: 'repair' })],
+  ['POST', '/api/restorations/:id/labour/timer', [201, 403, 403, 404, 401], () => ({ stage: 'repair' })],
+  ['POST', '/api/restorations/:id/labour/timer/stop', [409, 403, 403, 404, 401]],
   ['POST', '/api/estimates/:estimateId/decision', [403, 403, 200, 404, 401], () => ({ decision: 'approved', name: 'Ada Owner', version: 1 })],
 ];
 

@@ -3,7 +3,8 @@ import { boolean, check, index, integer, pgEnum, pgTable, serial, text, timestam
 import { estimateDecisions, estimateExtras, estimateLineKinds } from '../../../shared/schemas/estimates';
 import { taxRoundings } from '../../../shared/money/tax';
 import { timestamps } from './columns';
-import { restorations } from './restorations';
+import { findings } from './findings';
+import { restorations, stageEnum } from './restorations';
 import { users } from './users';
 
 export const taxRoundingEnum = pgEnum('tax_rounding', taxRoundings);
@@ -86,4 +87,34 @@ export const estimateLines = pgTable(
     amountHigh: integer(),
   },
   (t) => [index('estimate_lines_estimate_id_idx').on(t.estimateId)],
+);
+
+/**
+ * A technician's time on a set: typed hours (`minutes` set, no timer) or a timer whose start is stored on the
+ * server, so it survives a reload and shows the same on every device; stopping it writes the minutes.
+ * Tied to a finding or a stage.
+ */
+export const labourEntries = pgTable(
+  'labour_entries',
+  {
+    id: serial().primaryKey(),
+    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    technicianId: integer().references(() => users.id, { onDelete: 'set null' }),
+    findingId: integer().references(() => findings.id, { onDelete: 'set null' }),
+    stage: stageEnum(),
+    note: text().notNull().default(''),
+    billable: boolean().notNull().default(true),
+    /** When the work was done (a typed entry) or the timer started. */
+    startedAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
+    /** Null while the timer runs. */
+    stoppedAt: timestamp({ withTimezone: true, mode: 'date' }),
+    minutes: integer(),
+    ...timestamps,
+  },
+  (t) => [
+    index('labour_entries_restoration_id_idx').on(t.restorationId),
+    index('labour_entries_technician_id_started_at_idx').on(t.technicianId, t.startedAt),
+    // One running timer per technician.
+    uniqueIndex('labour_entries_running_idx').on(t.technicianId).where(sql`${t.stoppedAt} is null`),
+  ],
 );

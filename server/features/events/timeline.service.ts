@@ -74,6 +74,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           : e.kind === 'part-fitted' ? `Part fitted: ${part?.componentRef ?? ''} ${part?.replacementPart ?? ''} ${part?.replacementRating ?? ''}`.trim()
           : e.kind === 'estimate-sent' ? `Estimate version ${String(e.data.version)} sent to the owner`
           : e.kind === 'estimate-decided' ? `Estimate version ${String(e.data.version)} ${String(e.data.decision)} by ${String(e.data.name)}`
+          : e.kind === 'labour-logged' ? `Time logged: ${String(e.data.minutes)} min${e.data.billable ? '' : ' (not billable)'}`
           : e.kind === 'stage-changed' ? `Stage: ${stageLabels[data.from as Stage] ?? data.from} → ${stageLabels[data.to as Stage] ?? data.to}`
           : `Out of tolerance: ${m ? `${quantityLabels[m.quantity]} at ${m.location}, ${m.verdictReason}` : ''}`;
         return {

@@ -111,6 +111,13 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="m7.5 10.5 2 2 3.5-4" />
     </>
   ),
+  // A clock face: time logged on the set.
+  'labour-logged': (
+    <>
+      <circle cx="10" cy="10" r="7" />
+      <path d="M10 6v4l3 2" />
+    </>
+  ),
 };
 
 export function EventGlyph({ kind, caution = false, className = '' }: { kind: Kind; caution?: boolean; className?: string }) {

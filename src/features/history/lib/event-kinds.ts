@@ -23,6 +23,7 @@ export const eventKindLabels: Record<Kind, string> = {
   'bringup-step': 'Power-up steps',
   'estimate-sent': 'Estimates sent',
   'estimate-decided': 'Estimate answers',
+  'labour-logged': 'Time logged',
 };
 
 export const eventKinds = timelineKinds;
