@@ -24,6 +24,7 @@ import { restorationsRoutes } from './features/restorations/restorations.routes'
 import { safetyRoutes } from './features/safety/safety.routes';
 import { estimatesRoutes } from './features/estimates/estimates.routes';
 import { labourRoutes } from './features/labour/labour.routes';
+import { invoicesRoutes } from './features/invoices/invoices.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { redactedError } from './http/redact-error';
 import { requireSameOrigin } from './http/same-origin';
@@ -80,6 +81,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(bringupRoutes(deps));
   api.use(estimatesRoutes(deps));
   api.use(labourRoutes(deps));
+  api.use(invoicesRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

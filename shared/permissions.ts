@@ -178,6 +178,8 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
         // An estimate sent to the owner and their answer (the history lines carry the version, never amounts).
         eventOf('estimate-sent'),
         eventOf('estimate-decided'),
+        eventOf('invoice-issued'),
+        eventOf('invoice-voided'),
       ],
     },
     /** A finding's change record, only from after it was shared. */

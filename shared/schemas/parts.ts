@@ -75,7 +75,7 @@ export type Part = z.infer<typeof partSchema>;
 export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
   'safety-test', 'safety-override', 'soak-session', 'report-sent',
   'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
-  'estimate-sent', 'estimate-decided', 'labour-logged'] as const;
+  'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided'] as const;
 export const timelineQuerySchema = z.object({ kind: z.enum(timelineKinds).optional() });
 
 export const timelineEventSchema = z.object({

@@ -9,6 +9,7 @@ import { measurementsService } from '../../server/features/measurements/measurem
 import { partsService } from '../../server/features/parts/parts.service';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
 import { estimatesService } from '../../server/features/estimates/estimates.service';
+import { invoicesService } from '../../server/features/invoices/invoices.service';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { comments, events, findings, measurements, memberships, notifications, parts, photos } from '../../server/db/schema';
 import { twoToneJpeg } from '../factories/images';
@@ -20,7 +21,7 @@ import { startTestApp } from '../support/test-app';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
-type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; estimateId: number; draftEstimateId: number };
+type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; estimateId: number; draftEstimateId: number; invoiceId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?];
 
@@ -120,6 +121,11 @@ const matrix: Row[] = [
   ['POST', '/api/restorations/:id/labour', [201, 403, 403, 404, 401], () => ({ minutes: 45, stage: 'repair' })],
   ['POST', '/api/restorations/:id/labour/timer', [201, 403, 403, 404, 401], () => ({ stage: 'repair' })],
   ['POST', '/api/restorations/:id/labour/timer/stop', [409, 403, 403, 404, 401]],
+  // Invoices: the fixture has a £50 deposit request; nothing is billable yet, so a final invoice is a 409.
+  ['GET', '/api/restorations/:id/invoices', [200, 403, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/deposits', [201, 403, 403, 404, 401], () => ({ amount: 5000 })],
+  ['POST', '/api/restorations/:id/invoices', [409, 403, 403, 404, 401]],
+  ['POST', '/api/invoices/:invoiceId/void', [200, 403, 403, 404, 401], () => ({ reason: 'Issued to the wrong set.' })],
   ['POST', '/api/estimates/:estimateId/decision', [403, 403, 200, 404, 401], () => ({ decision: 'approved', name: 'Ada Owner', version: 1 })],
 ];
 
@@ -158,7 +164,8 @@ async function fixture(): Promise<Fixture> {
   const estimates = estimatesService(t.deps);
   const estimateId = (await estimates.create(r.id, { note: '', send: true, lines: [{ kind: 'part', description: 'Capacitors', low: 1000, high: 1500 }] }, people.technician!.id, 'technician')).id;
   const draftEstimateId = (await estimates.create(r.id, { note: '', send: false, lines: [{ kind: 'part', description: 'Capacitors', low: 1200, high: 1500 }] }, people.technician!.id, 'technician')).id;
-  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, estimateId, draftEstimateId };
+  const invoiceId = (await invoicesService(t.db).deposit(r.id, { amount: 5000 }, people.technician!.id)).id;
+  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, estimateId, draftEstimateId, invoiceId };
 }
 
 async function callerAgent(c: (typeof callers)[number]): Promise<Agent> {

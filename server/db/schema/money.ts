@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import { boolean, check, index, integer, pgEnum, pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
 import { estimateDecisions, estimateExtras, estimateLineKinds } from '../../../shared/schemas/estimates';
 import { taxRoundings } from '../../../shared/money/tax';
+import { invoiceKinds } from '../../../shared/schemas/invoices';
 import { timestamps } from './columns';
 import { findings } from './findings';
 import { restorations, stageEnum } from './restorations';
@@ -11,6 +12,7 @@ export const taxRoundingEnum = pgEnum('tax_rounding', taxRoundings);
 export const estimateLineKindEnum = pgEnum('estimate_line_kind', estimateLineKinds);
 export const estimateExtraEnum = pgEnum('estimate_extra', estimateExtras);
 export const estimateDecisionEnum = pgEnum('estimate_decision', estimateDecisions);
+export const invoiceKindEnum = pgEnum('invoice_kind', invoiceKinds);
 
 /**
  * The workshop's money settings: one row (id 1). Every amount is in minor units of `currency` (ISO 4217);
@@ -117,4 +119,57 @@ export const labourEntries = pgTable(
     // One running timer per technician.
     uniqueIndex('labour_entries_running_idx').on(t.technicianId).where(sql`${t.stoppedAt} is null`),
   ],
+);
+
+/** The last invoice number issued; taken with UPDATE … RETURNING inside the issuing transaction, so numbers have no gaps. */
+export const invoiceCounters = pgTable(
+  'invoice_counters',
+  { id: integer().primaryKey().default(1), last: integer().notNull().default(0) },
+  (t) => [check('invoice_counters_single_row', sql`${t.id} = 1`)],
+);
+
+/**
+ * A deposit request, a final invoice or a credit note, issued with the next number and never edited after;
+ * a void is a credit note for the same lines, negated. Amounts in minor units of `currency`, tax included.
+ */
+export const invoices = pgTable(
+  'invoices',
+  {
+    id: serial().primaryKey(),
+    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    number: integer().notNull(),
+    kind: invoiceKindEnum().notNull(),
+    currency: text().notNull(),
+    taxName: text().notNull(),
+    taxRateBasisPoints: integer(),
+    taxRounding: taxRoundingEnum().notNull(),
+    net: integer().notNull(),
+    tax: integer().notNull(),
+    gross: integer().notNull(),
+    /** Deposits paid, deducted on a final invoice. */
+    deducted: integer().notNull().default(0),
+    due: integer().notNull(),
+    paid: integer().notNull().default(0),
+    /** The invoice a credit note corrects. */
+    creditsInvoiceId: integer(),
+    voidedAt: timestamp({ withTimezone: true, mode: 'date' }),
+    voidReason: text(),
+    issuedById: integer().references(() => users.id, { onDelete: 'set null' }),
+    issuedAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex('invoices_number_idx').on(t.number), index('invoices_restoration_id_idx').on(t.restorationId)],
+);
+
+export const invoiceLines = pgTable(
+  'invoice_lines',
+  {
+    id: serial().primaryKey(),
+    invoiceId: integer().notNull().references(() => invoices.id, { onDelete: 'cascade' }),
+    position: integer().notNull(),
+    description: text().notNull(),
+    net: integer().notNull(),
+    tax: integer().notNull(),
+  },
+  (t) => [index('invoice_lines_invoice_id_idx').on(t.invoiceId)],
 );

@@ -118,6 +118,20 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="M10 6v4l3 2" />
     </>
   ),
+  // A numbered slip: an invoice, deposit request or credit note issued.
+  'invoice-issued': (
+    <>
+      <path d="M5 3h10v14l-2.5-1.5L10 17l-2.5-1.5L5 17Z" />
+      <path d="M7.5 7h5M7.5 10.5h5" />
+    </>
+  ),
+  // The slip struck through: an invoice voided.
+  'invoice-voided': (
+    <>
+      <path d="M5 3h10v14l-2.5-1.5L10 17l-2.5-1.5L5 17Z" />
+      <path d="m4 4 12 12" />
+    </>
+  ),
 };
 
 export function EventGlyph({ kind, caution = false, className = '' }: { kind: Kind; caution?: boolean; className?: string }) {

@@ -24,6 +24,8 @@ export const eventKindLabels: Record<Kind, string> = {
   'estimate-sent': 'Estimates sent',
   'estimate-decided': 'Estimate answers',
   'labour-logged': 'Time logged',
+  'invoice-issued': 'Invoices issued',
+  'invoice-voided': 'Invoices voided',
 };
 
 export const eventKinds = timelineKinds;
