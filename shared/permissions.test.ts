@@ -45,6 +45,11 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'references.mark': { technician: true, mentor: false, owner: false },
   'help.view': { technician: true, mentor: true, owner: false },
   'help.ask': { technician: true, mentor: false, owner: false },
+  // Mentors see no money; owners read their own sets' estimates and answer them.
+  'money.view': { technician: true, mentor: false, owner: true },
+  'money.edit': { technician: true, mentor: false, owner: false },
+  'estimates.decide': { technician: false, mentor: false, owner: true },
+  'labour.record': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

@@ -50,6 +50,10 @@ export const actions = [
   'references.mark',
   'help.view',
   'help.ask',
+  'money.view',
+  'money.edit',
+  'estimates.decide',
+  'labour.record',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -117,6 +121,13 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   // shares it through a link, revokes the link and approves the replies left through it.
   'help.view': (role) => role !== 'owner',
   'help.ask': (role) => role === 'technician',
+  // Money: mentors see none; owners read their own sets' estimates, invoices and payments and answer an estimate;
+  // only technicians price, send, invoice and refund. What an owner reads of each is the `visibility` rule below.
+  'money.view': (role) => role !== 'mentor',
+  'money.edit': (role) => role === 'technician',
+  'estimates.decide': (role) => role === 'owner',
+  // The labour log is the workshop's own record of time; the owner sees it only as invoice lines.
+  'labour.record': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
@@ -145,15 +156,19 @@ const ownerPart: Condition = { any: [{ field: 'part.state', is: 'fitted' }, { fi
 const sinceShared = (entity: 'event' | 'change'): Condition => ({ field: `${entity}.createdAt`, after: 'finding.sharedAt' });
 const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all: [{ field: 'event.kind', is: kind }, ...conditions] });
 
-export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark'] as const;
+export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark', 'estimate'] as const;
 export type VisibilitySubject = (typeof visibilitySubjects)[number];
 
 const all: Condition = { always: true };
-const everything: Record<VisibilitySubject, Condition> = { photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, sheetPage: all, referenceMark: all };
+const everything: Record<VisibilitySubject, Condition> = {
+  photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, sheetPage: all, referenceMark: all, estimate: all,
+};
+/** Mentors help with the work and see none of its money. */
+const noMoney: Condition = { never: true };
 
 export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   technician: everything,
-  mentor: everything,
+  mentor: { ...everything, estimate: noMoney },
   owner: {
     photo: sharedPhoto,
     finding: sharedFinding,
@@ -181,6 +196,11 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
         eventOf('pre-power-signed'),
         eventOf('pre-power-voided'),
         eventOf('bringup-step'),
+        // An estimate sent to the owner and their answer (the history lines carry the version, never amounts).
+        eventOf('estimate-sent'),
+        eventOf('estimate-decided'),
+        eventOf('invoice-issued'),
+        eventOf('invoice-voided'),
       ],
     },
     /** A finding's change record, only from after it was shared. */
@@ -188,6 +208,8 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
     sheetPage: sharedSheetPage,
     referenceMark: sharedReferenceMark,
     /** An in-app notification or its e-mail, judged when read or sent, not when written. */
+    /** An estimate once sent to them; drafts stay in the workshop. */
+    estimate: { field: 'estimate.sent', is: true },
     notification: { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
   },
 };

@@ -45,6 +45,7 @@ export const router = createBrowserRouter([
               { path: 'readings', loader: readingsLoader, lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },
               { path: 'parts', loader: partsLoader, lazy: page(() => import('./routes/parts'), 'PartsRoute') },
               { path: 'safety', lazy: page(() => import('./routes/safety'), 'SafetyRoute') },
+              { path: 'money', lazy: page(() => import('./routes/money'), 'MoneyRoute') },
               { path: 'history', loader: historyLoader, lazy: page(() => import('./routes/history'), 'HistoryRoute') },
               { path: 'sheets', lazy: page(() => import('./routes/sheets'), 'SheetsRoute') },
               { path: 'sheets/:pageId', lazy: page(() => import('./routes/sheet-page'), 'SheetPageRoute') },

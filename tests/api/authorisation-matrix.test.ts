@@ -10,6 +10,8 @@ import { partsService } from '../../server/features/parts/parts.service';
 import { referencesRepo } from '../../server/features/references/references.repo';
 import { sheetsRepo } from '../../server/features/sheets/sheets.repo';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
+import { estimatesService } from '../../server/features/estimates/estimates.service';
+import { invoicesService } from '../../server/features/invoices/invoices.service';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { helpRepo } from '../../server/features/help/help.repo';
 import { newToken } from '../../server/features/auth/tokens';
@@ -24,7 +26,7 @@ import { startTestApp } from '../support/test-app';
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
 type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; pageId: number; markId: number;
-  helpRequestId: number; helpToken: string; replyId: number };
+  helpRequestId: number; helpToken: string; replyId: number; estimateId: number; draftEstimateId: number; invoiceId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?];
 
@@ -137,6 +139,22 @@ const matrix: Row[] = [
   // The link is the key: anyone holding it reads the request and may leave a reply, which is held.
   ['GET', '/api/shared/help/:helpToken', [200, 200, 200, 200, 200]],
   ['POST', '/api/shared/help/:helpToken/replies', [202, 202, 202, 202, 202], () => ({ name: 'Club member', body: 'Check the smoothing capacitors first.' })],
+  // Money: mentors see none; the fixture has a sent version 1 and a draft version 2 of its estimate.
+  ['GET', '/api/restorations/:id/money-settings', [200, 403, 403, 404, 401]],
+  ['GET', '/api/restorations/:id/estimates', [200, 403, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/estimates', [201, 403, 403, 404, 401], () => ({ lines: [{ kind: 'labour', description: 'Recap and align', low: 120, high: 240 }] })],
+  ['POST', '/api/estimates/:draftEstimateId/send', [200, 403, 403, 404, 401]],
+  // The labour log is the technicians' own; no timer runs on a fresh fixture, so stopping one is a 409.
+  ['GET', '/api/restorations/:id/labour', [200, 403, 403, 404, 401]],
+  ['POST', '/api/restorations/:id/labour', [201, 403, 403, 404, 401], () => ({ minutes: 45, stage: 'repair' })],
+  ['POST', '/api/restorations/:id/labour/timer', [201, 403, 403, 404, 401], () => ({ stage: 'repair' })],
+  ['POST', '/api/restorations/:id/labour/timer/stop', [409, 403, 403, 404, 401]],
+  // Invoices: the fixture has a £50 deposit request; nothing is billable yet, so a final invoice is a 409.
+  ['GET', '/api/restorations/:id/invoices', [200, 403, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/deposits', [201, 403, 403, 404, 401], () => ({ amount: 5000 })],
+  ['POST', '/api/restorations/:id/invoices', [409, 403, 403, 404, 401]],
+  ['POST', '/api/invoices/:invoiceId/void', [200, 403, 403, 404, 401], () => ({ reason: 'Issued to the wrong set.' })],
+  ['POST', '/api/estimates/:estimateId/decision', [403, 403, 200, 404, 401], () => ({ decision: 'approved', name: 'Ada Owner', version: 1 })],
 ];
 
 let jpeg: Buffer;
@@ -179,8 +197,12 @@ async function fixture(): Promise<Fixture> {
   const link = newToken();
   const helpLink = await help.insertLink({ helpRequestId: helpRequest.id, tokenHash: link.hash, expiresAt: new Date(Date.now() + 86_400_000), createdById: people.technician!.id });
   const replyId = (await help.insertReply({ helpRequestId: helpRequest.id, linkId: helpLink.id, name: 'Visitor', body: 'Try the rectifier' })).id;
+  const estimates = estimatesService(t.deps);
+  const estimateId = (await estimates.create(r.id, { note: '', send: true, lines: [{ kind: 'part', description: 'Capacitors', low: 1000, high: 1500 }] }, people.technician!.id, 'technician')).id;
+  const draftEstimateId = (await estimates.create(r.id, { note: '', send: false, lines: [{ kind: 'part', description: 'Capacitors', low: 1200, high: 1500 }] }, people.technician!.id, 'technician')).id;
+  const invoiceId = (await invoicesService(t.db).deposit(r.id, { amount: 5000 }, people.technician!.id)).id;
   return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, pageId, markId,
-    helpRequestId: helpRequest.id, helpToken: link.token, replyId };
+    helpRequestId: helpRequest.id, helpToken: link.token, replyId, estimateId, draftEstimateId, invoiceId };
 }
 
 async function callerAgent(c: (typeof callers)[number]): Promise<Agent> {

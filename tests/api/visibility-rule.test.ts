@@ -18,7 +18,7 @@ afterAll(() => database.drop());
 function literal(ref: FieldRef, value: unknown): SQL {
   const field = ref.split('.')[1]!;
   if (field.endsWith('At')) return sql`${value === null ? null : String(value)}::timestamptz`;
-  if (field === 'ownerVisible' || field === 'internal') return sql`${value}::boolean`;
+  if (field === 'ownerVisible' || field === 'internal' || field === 'sent') return sql`${value}::boolean`;
   if (field.endsWith('Id')) return sql`${value}::integer`;
   return sql`${value}::text`;
 }
@@ -51,6 +51,10 @@ const internal = { ownerVisible: false };
 // Expected answers are the product's rules (PRODUCT.md "Who uses it" and the owner's view): product rules, no outside source.
 const table: [string, Role, VisibilitySubject, VisibilityFacts, boolean][] = [
   ['a shared photo', 'owner', 'photo', { photo: shared }, true],
+  ['an estimate sent to the owner', 'owner', 'estimate', { estimate: { sent: true } }, true],
+  ['a draft estimate', 'owner', 'estimate', { estimate: { sent: false } }, false],
+  ['a sent estimate, for a mentor (mentors see no money)', 'mentor', 'estimate', { estimate: { sent: true } }, false],
+  ['a draft estimate, for the technician', 'technician', 'estimate', { estimate: { sent: false } }, true],
   ['an unshared photo', 'owner', 'photo', { photo: internal }, false],
   ['a shared finding on an unshared photo', 'owner', 'finding', { finding: shared, photo: internal }, false],
   ['a shared finding on a shared photo', 'owner', 'finding', { finding: shared, photo: shared }, true],

@@ -12,3 +12,4 @@ export * from './safety';
 export * from './bringup';
 export * from './sheets';
 export * from './help';
+export * from './money';

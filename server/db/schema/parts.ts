@@ -45,6 +45,7 @@ export const eventKindEnum = pgEnum('event_kind', [
   'safety-test', 'safety-override', 'soak-session', 'report-sent',
   'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
   'help-requested', 'help-link-made', 'help-link-withdrawn',
+  'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided',
 ]);
 
 /**

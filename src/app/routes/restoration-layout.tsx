@@ -17,6 +17,7 @@ const tabs = [
   ['readings', 'Readings'],
   ['parts', 'Parts'],
   ['safety', 'Safety'],
+  ['money', 'Money'],
   ['history', 'History'],
   ['people', 'People'],
   ['help', 'Help'],
@@ -44,7 +45,7 @@ export function RestorationLayout() {
         <span className="text-sm text-ink-soft">You: {roleLabels[r.role]}</span>
       </header>
       <nav aria-label="Restoration" className="-mx-4 flex print:hidden overflow-x-auto whitespace-nowrap border-b border-rule px-4">
-        {tabs.filter(([to]) => to !== 'help' || can(r.role, 'help.view')).map(([to, label]) => (
+        {tabs.filter(([to]) => (to !== 'help' || can(r.role, 'help.view')) && (to !== 'money' || can(r.role, 'money.view'))).map(([to, label]) => (
           <NavLink key={to} to={to} end={to === '.'} className={tabClass}>
             {label}
           </NavLink>

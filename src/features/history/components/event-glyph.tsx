@@ -118,6 +118,41 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="M4 4l12 12" />
     </>
   ),
+  // A priced slip with a range bar: an estimate sent to the owner.
+  'estimate-sent': (
+    <>
+      <path d="M5 3h10v14H5Z" />
+      <path d="M7.5 7h5M7.5 13h2M11 13h1.5" />
+    </>
+  ),
+  // A slip with a tick: the owner answered the estimate.
+  'estimate-decided': (
+    <>
+      <path d="M5 3h10v14H5Z" />
+      <path d="m7.5 10.5 2 2 3.5-4" />
+    </>
+  ),
+  // A clock face: time logged on the set.
+  'labour-logged': (
+    <>
+      <circle cx="10" cy="10" r="7" />
+      <path d="M10 6v4l3 2" />
+    </>
+  ),
+  // A numbered slip: an invoice, deposit request or credit note issued.
+  'invoice-issued': (
+    <>
+      <path d="M5 3h10v14l-2.5-1.5L10 17l-2.5-1.5L5 17Z" />
+      <path d="M7.5 7h5M7.5 10.5h5" />
+    </>
+  ),
+  // The slip struck through: an invoice voided.
+  'invoice-voided': (
+    <>
+      <path d="M5 3h10v14l-2.5-1.5L10 17l-2.5-1.5L5 17Z" />
+      <path d="m4 4 12 12" />
+    </>
+  ),
 };
 
 export function EventGlyph({ kind, caution = false, className = '' }: { kind: Kind; caution?: boolean; className?: string }) {

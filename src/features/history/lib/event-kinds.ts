@@ -24,6 +24,11 @@ export const eventKindLabels: Record<Kind, string> = {
   'help-requested': 'Help requests',
   'help-link-made': 'Help links made',
   'help-link-withdrawn': 'Help links withdrawn',
+  'estimate-sent': 'Estimates sent',
+  'estimate-decided': 'Estimate answers',
+  'labour-logged': 'Time logged',
+  'invoice-issued': 'Invoices issued',
+  'invoice-voided': 'Invoices voided',
 };
 
 export const eventKinds = timelineKinds;

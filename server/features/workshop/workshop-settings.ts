@@ -1,0 +1,23 @@
+import { eq } from 'drizzle-orm';
+import type { WorkshopSettings } from '../../../shared/schemas/estimates';
+import type { TaxRule } from '../../../shared/money/tax';
+import type { Executor } from '../../db/client';
+import { workshopSettings } from '../../db/schema';
+
+/** The workshop's money settings; the row is created with its defaults the first time it is read. */
+export async function readWorkshopSettings(db: Executor): Promise<WorkshopSettings> {
+  await db.insert(workshopSettings).values({ id: 1 }).onConflictDoNothing();
+  const [row] = await db.select().from(workshopSettings).where(eq(workshopSettings.id, 1));
+  const { currency, labourRate, partsMarkupBasisPoints, taxName, taxRateBasisPoints, taxRounding, estimateApprovalRequired } = row!;
+  return { currency, labourRate, partsMarkupBasisPoints, taxName, taxRateBasisPoints, taxRounding, estimateApprovalRequired };
+}
+
+export async function writeWorkshopSettings(db: Executor, values: WorkshopSettings): Promise<WorkshopSettings> {
+  await db.insert(workshopSettings).values({ id: 1, ...values }).onConflictDoUpdate({ target: workshopSettings.id, set: values });
+  return readWorkshopSettings(db);
+}
+
+/** The tax a set of prices carries, or null when none is charged. */
+export function taxRuleOf(s: Pick<WorkshopSettings, 'taxName' | 'taxRateBasisPoints' | 'taxRounding'>): TaxRule | null {
+  return s.taxRateBasisPoints === null ? null : { name: s.taxName, rateBasisPoints: s.taxRateBasisPoints, rounding: s.taxRounding };
+}

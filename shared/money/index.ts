@@ -1,0 +1,5 @@
+export * from './currency';
+export * from './rounding';
+export * from './tax';
+export * from './totals';
+export * from './estimate-range';

@@ -1,0 +1,36 @@
+import { z } from 'zod';
+import { moneySchema } from './estimates';
+import { idSchema } from './ids';
+
+export const invoiceKinds = ['deposit', 'final', 'credit-note'] as const;
+export const invoiceKindLabels: Record<(typeof invoiceKinds)[number], string> = { deposit: 'Deposit request', final: 'Invoice', 'credit-note': 'Credit note' };
+
+/** Body of POST /api/restorations/:id/deposits: an amount in minor units, or a share (basis points) of the latest approved estimate's high figure. */
+export const depositInputSchema = z.union([
+  z.object({ amount: z.number().int().min(1).max(100_000_000) }),
+  z.object({ shareBasisPoints: z.number().int().min(1).max(10_000) }),
+]);
+export type DepositInput = z.infer<typeof depositInputSchema>;
+
+/** Body of POST /api/invoices/:invoiceId/void. */
+export const voidInputSchema = z.object({ reason: z.string().trim().min(1, 'say why it is voided').max(500) });
+export const invoiceParamsSchema = z.object({ invoiceId: idSchema });
+
+export const invoiceSchema = z.object({
+  id: z.number(),
+  number: z.number(),
+  kind: z.enum(invoiceKinds),
+  issuedAt: z.string(),
+  tax: z.object({ name: z.string(), rateBasisPoints: z.number() }).nullable(),
+  net: moneySchema,
+  taxAmount: moneySchema,
+  gross: moneySchema,
+  deducted: moneySchema,
+  due: moneySchema,
+  paid: moneySchema,
+  status: z.enum(['open', 'paid', 'void', 'credit']),
+  creditsInvoiceId: z.number().nullable(),
+  voidReason: z.string().nullable(),
+  lines: z.array(z.object({ description: z.string(), net: moneySchema, tax: moneySchema })),
+});
+export type Invoice = z.infer<typeof invoiceSchema>;
