@@ -2,6 +2,7 @@ import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { prePowerItemWords, prePowerItems } from '../../shared/schemas/bringup';
 import { artifactPath } from '../support/artifacts';
+import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
 import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
@@ -72,6 +73,7 @@ describe('bring-up', () => {
     expect(await steps.nth(1).innerText()).toMatch(/HT: 22.*out/s);
     expect(await steps.nth(2).innerText()).toMatch(/HT: 112.*within/s);
     await page.screenshot({ path: artifactPath('bringup.png'), fullPage: true });
+    await expectAccessible(page, 'the bring-up tab');
 
     // The step readings are ordinary readings with verdicts.
     await page.getByRole('link', { name: 'Readings' }).click();

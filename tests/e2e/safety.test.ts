@@ -1,6 +1,7 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
+import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
 import { mailTo, signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
@@ -55,6 +56,7 @@ describe('the final safety test, the soak and the hand-back', () => {
     await page.getByText(/Run 1, .*room 20 °C, chassis 44 °C, mains 300 mA — no fault seen/).waitFor();
     await page.getByRole('img', { name: /Soak runs: run 1/ }).waitFor();
     await page.screenshot({ path: artifactPath('safety-tab.png'), fullPage: true });
+    await expectAccessible(page, 'the safety tab');
 
     await page.goto(`${ctx.product.origin}/restorations/${id}`);
     await page.getByRole('button', { name: 'E-mail it to the owner' }).click();
@@ -63,6 +65,7 @@ describe('the final safety test, the soak and the hand-back', () => {
     await preview.getByText(/The set is still at/).waitFor(); // the demo set is before Testing
     expect(await preview.getByText('No final safety test is recorded').count()).toBe(0);
     await page.screenshot({ path: artifactPath('report-preview.png'), fullPage: true });
+    await expectAccessible(page, 'the report preview');
     await page.getByRole('button', { name: 'Send anyway' }).click();
     await page.getByText('Sent to imogen@example.test.').waitFor();
     await mailTo(ctx.product.origin, 'imogen@example.test', /Meridian 54: the hand-back report/);
