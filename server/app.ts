@@ -29,6 +29,7 @@ import { sheetsRoutes } from './features/sheets/sheets.routes';
 import { estimatesRoutes } from './features/estimates/estimates.routes';
 import { labourRoutes } from './features/labour/labour.routes';
 import { invoicesRoutes } from './features/invoices/invoices.routes';
+import { workshopRoutes } from './features/workshop/workshop.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { redactedError } from './http/redact-error';
 import { requireSameOrigin } from './http/same-origin';
@@ -93,6 +94,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(estimatesRoutes(deps));
   api.use(labourRoutes(deps));
   api.use(invoicesRoutes(deps));
+  api.use(workshopRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

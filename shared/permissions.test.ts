@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { actions, can, roles } from './permissions';
+import { actions, can, roles, workshopRole } from './permissions';
 
 // Expected answers are the product's own role rules (who may do what): a product decision, no outside source.
 const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boolean>> = {
@@ -50,6 +50,8 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'money.edit': { technician: true, mentor: false, owner: false },
   'estimates.decide': { technician: false, mentor: false, owner: true },
   'labour.record': { technician: true, mentor: false, owner: false },
+  'settings.view': { technician: true, mentor: false, owner: false },
+  'settings.edit': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {
@@ -78,5 +80,12 @@ describe('can()', () => {
 
   it('when the person holds no role, then nothing is allowed', () => {
     for (const action of actions) expect(can(null, action)).toBe(false);
+  });
+
+  it('when a person holds roles on several sets, then their workshop role is the first of technician, mentor, owner they hold', () => {
+    expect(workshopRole(['owner', 'technician'])).toBe('technician');
+    expect(workshopRole(['owner', 'mentor'])).toBe('mentor');
+    expect(workshopRole(['owner'])).toBe('owner');
+    expect(workshopRole([])).toBeNull();
   });
 });

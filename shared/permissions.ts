@@ -54,6 +54,8 @@ export const actions = [
   'money.edit',
   'estimates.decide',
   'labour.record',
+  'settings.view',
+  'settings.edit',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -128,7 +130,19 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'estimates.decide': (role) => role === 'owner',
   // The labour log is the workshop's own record of time; the owner sees it only as invoice lines.
   'labour.record': (role) => role === 'technician',
+  // The workshop's settings (currency, labour rate, markup, tax, invoice prefix) are judged on the person's workshop
+  // role: a technician on any restoration is one of the workshop's technicians (see `workshopRole`).
+  'settings.view': (role) => role === 'technician',
+  'settings.edit': (role) => role === 'technician',
 };
+
+/**
+ * A person's role in the workshop as a whole, from the roles they hold on restorations: a technician anywhere is
+ * the workshop's technician; otherwise a mentor anywhere is a mentor; otherwise an owner. Null with no restoration.
+ */
+export function workshopRole(held: readonly Role[]): Role | null {
+  return roles.find((r) => held.includes(r)) ?? null;
+}
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
   return role ? rules[action](role, context) : false;

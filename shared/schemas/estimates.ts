@@ -6,6 +6,16 @@ import { bodyIdSchema, idSchema } from './ids';
 /** An amount in minor units with its ISO 4217 currency: the shape of every amount the API returns. */
 export const moneySchema = z.object({ amount: z.number().int(), currency: z.string().length(3) });
 
+/** Whether the runtime's Intl knows the name as an IANA time zone. */
+export function isTimeZone(name: string): boolean {
+  try {
+    new Intl.DateTimeFormat('en', { timeZone: name });
+    return name.length > 0;
+  } catch {
+    return false;
+  }
+}
+
 const minor = z.number().int('must be whole minor units (pence, cents)').min(0).max(100_000_000);
 const minutes = z.number().int('must be whole minutes').min(0).max(100 * 60 * 10);
 
@@ -18,6 +28,10 @@ export const workshopSettingsSchema = z.object({
   taxRateBasisPoints: z.number().int().min(0).max(10_000).nullable(),
   taxRounding: z.enum(taxRoundings),
   estimateApprovalRequired: z.boolean(),
+  /** Printed before every invoice number, e.g. "CL-" for CL-42; letters, digits, "-", "/" and "." only. */
+  invoicePrefix: z.string().trim().max(12).regex(/^[A-Za-z0-9./-]*$/, 'use letters, digits, "-", "/" or "." only'),
+  /** IANA time zone for dates on documents the workshop e-mails. */
+  timeZone: z.string().trim().max(64).refine(isTimeZone, 'must be an IANA time zone such as Europe/London'),
 });
 export type WorkshopSettings = z.infer<typeof workshopSettingsSchema>;
 

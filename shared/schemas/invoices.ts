@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { moneySchema } from './estimates';
+import { isTimeZone, moneySchema } from './estimates';
 import { idSchema } from './ids';
 
 export const invoiceKinds = ['deposit', 'final', 'credit-note'] as const;
@@ -16,9 +16,16 @@ export type DepositInput = z.infer<typeof depositInputSchema>;
 export const voidInputSchema = z.object({ reason: z.string().trim().min(1, 'say why it is voided').max(500) });
 export const invoiceParamsSchema = z.object({ invoiceId: idSchema });
 
+/** `?timeZone=Europe/London` on an invoice or receipt PDF: the reader's zone for its dates (the workshop's when left out). */
+export const documentQuerySchema = z.object({
+  timeZone: z.string().max(64).refine(isTimeZone, 'Not a known time zone').optional(),
+});
+
 export const invoiceSchema = z.object({
   id: z.number(),
   number: z.number(),
+  /** The number as printed, with the workshop's prefix of the day ("CL-42"). */
+  reference: z.string(),
   kind: z.enum(invoiceKinds),
   issuedAt: z.string(),
   tax: z.object({ name: z.string(), rateBasisPoints: z.number() }).nullable(),
@@ -34,3 +41,15 @@ export const invoiceSchema = z.object({
   lines: z.array(z.object({ description: z.string(), net: moneySchema, tax: moneySchema })),
 });
 export type Invoice = z.infer<typeof invoiceSchema>;
+
+/** `GET /api/restorations/:id/invoices/preview`: the final invoice as it would be issued now (not numbered, nothing stored). */
+export const invoicePreviewSchema = z.object({
+  tax: z.object({ name: z.string(), rateBasisPoints: z.number() }).nullable(),
+  lines: z.array(z.object({ description: z.string(), net: moneySchema, tax: moneySchema })),
+  net: moneySchema,
+  taxAmount: moneySchema,
+  gross: moneySchema,
+  deducted: moneySchema,
+  due: moneySchema,
+});
+export type InvoicePreview = z.infer<typeof invoicePreviewSchema>;

@@ -200,7 +200,7 @@ async function fixture(): Promise<Fixture> {
   const estimates = estimatesService(t.deps);
   const estimateId = (await estimates.create(r.id, { note: '', send: true, lines: [{ kind: 'part', description: 'Capacitors', low: 1000, high: 1500 }] }, people.technician!.id, 'technician')).id;
   const draftEstimateId = (await estimates.create(r.id, { note: '', send: false, lines: [{ kind: 'part', description: 'Capacitors', low: 1200, high: 1500 }] }, people.technician!.id, 'technician')).id;
-  const invoiceId = (await invoicesService(t.db).deposit(r.id, { amount: 5000 }, people.technician!.id)).id;
+  const invoiceId = (await invoicesService(t.deps).deposit(r.id, { amount: 5000 }, people.technician!.id)).id;
   return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, pageId, markId,
     helpRequestId: helpRequest.id, helpToken: link.token, replyId, estimateId, draftEstimateId, invoiceId };
 }

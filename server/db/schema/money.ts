@@ -32,6 +32,10 @@ export const workshopSettings = pgTable(
     taxRounding: taxRoundingEnum().notNull().default('invoice-down'),
     /** A set moves past Assessment only once its owner has approved the latest estimate. */
     estimateApprovalRequired: boolean().notNull().default(false),
+    /** Printed before the invoice number ("CL-" gives CL-42); copied onto each invoice when issued. */
+    invoicePrefix: text().notNull().default(''),
+    /** IANA zone for dates on documents e-mailed from the workshop (a download uses the reader's zone). */
+    timeZone: text().notNull().default('Europe/London'),
     ...timestamps,
   },
   (t) => [check('workshop_settings_single_row', sql`${t.id} = 1`)],
@@ -136,8 +140,11 @@ export const invoices = pgTable(
   'invoices',
   {
     id: serial().primaryKey(),
-    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    // Issued documents are kept: a restoration with invoices cannot be deleted (the service says why first).
+    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'restrict' }),
     number: integer().notNull(),
+    /** The workshop's prefix in force when it was issued. */
+    numberPrefix: text().notNull().default(''),
     kind: invoiceKindEnum().notNull(),
     currency: text().notNull(),
     taxName: text().notNull(),

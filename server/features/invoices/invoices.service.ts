@@ -1,19 +1,25 @@
-import { and, asc, desc, eq, inArray, isNotNull, isNull, ne } from 'drizzle-orm';
-import type { DepositInput, Invoice } from '../../../shared/schemas/invoices';
+import { and, asc, desc, eq, inArray, isNull, ne } from 'drizzle-orm';
+import type { DepositInput, Invoice, InvoicePreview } from '../../../shared/schemas/invoices';
 import { shareOf } from '../../../shared/money/totals';
-import type { Database, Tx } from '../../db/client';
-import { estimates, events, invoiceLines, invoices, labourEntries, parts, restorations } from '../../db/schema';
+import type { AppDeps } from '../../app-deps';
+import type { Tx } from '../../db/client';
+import { unitOfWork } from '../../db/unit-of-work';
+import { estimates, events, invoiceLines, invoices, restorations } from '../../db/schema';
 import { ConflictError, NotFoundError } from '../../http/errors';
 import { readWorkshopSettings } from '../workshop/workshop-settings';
+import { finalLines, previewOf } from './final-lines';
+import { referenceOf } from './invoice-document';
+import { mailInvoice } from './invoice-mail';
 import { issueInvoice } from './issue-invoice';
 
 type Row = typeof invoices.$inferSelect;
+type Deps = Pick<AppDeps, 'db' | 'mailer' | 'config'>;
 
 function present(i: Row, lines: (typeof invoiceLines.$inferSelect)[]): Invoice {
   const m = (amount: number) => ({ amount, currency: i.currency });
   const status = i.voidedAt ? 'void' : i.kind === 'credit-note' ? 'credit' : i.paid >= i.due ? 'paid' : 'open';
   return {
-    id: i.id, number: i.number, kind: i.kind, issuedAt: i.issuedAt.toISOString(),
+    id: i.id, number: i.number, reference: referenceOf(i), kind: i.kind, issuedAt: i.issuedAt.toISOString(),
     tax: i.taxRateBasisPoints === null ? null : { name: i.taxName, rateBasisPoints: i.taxRateBasisPoints },
     net: m(i.net), taxAmount: m(i.tax), gross: m(i.gross), deducted: m(i.deducted), due: m(i.due), paid: m(i.paid),
     status, creditsInvoiceId: i.creditsInvoiceId, voidReason: i.voidReason,
@@ -26,8 +32,12 @@ async function lock(tx: Tx, restorationId: number) {
   if (!r) throw new NotFoundError();
 }
 
-/** Deposits, final invoices and credit notes. Every issue takes the next number in its own transaction. */
-export function invoicesService(db: Database) {
+/**
+ * Deposits, final invoices and credit notes. Each issue takes the next number and e-mails the owner its PDF in
+ * one transaction (the mail is the last step: a refusal rolls the issue back and gives the number back).
+ */
+export function invoicesService(deps: Deps) {
+  const { db } = deps;
   async function list(restorationId: number): Promise<Invoice[]> {
     const rows = await db.select().from(invoices).where(eq(invoices.restorationId, restorationId)).orderBy(desc(invoices.number));
     if (!rows.length) return [];
@@ -45,7 +55,7 @@ export function invoicesService(db: Database) {
 
     /** A deposit request: an amount, or a share of the latest approved estimate's high figure (tax included, so no tax is added). */
     async deposit(restorationId: number, input: DepositInput, userId: number) {
-      const row = await db.transaction(async (tx) => {
+      const row = await unitOfWork(db, async (tx) => {
         await lock(tx, restorationId);
         const settings = await readWorkshopSettings(tx);
         let amount: number;
@@ -58,42 +68,44 @@ export function invoicesService(db: Database) {
           amount = shareOf(approved.highAmount, input.shareBasisPoints);
           description = `Deposit: ${input.shareBasisPoints / 100}% of estimate version ${approved.version}`;
         }
-        return issueInvoice(tx, { restorationId, kind: 'deposit', lines: [{ description, priced: { kind: 'fixed', quantity: 1, unitAmount: amount } }],
+        const issued = await issueInvoice(tx, { restorationId, kind: 'deposit', lines: [{ description, priced: { kind: 'fixed', quantity: 1, unitAmount: amount } }],
           prices: { ...settings, taxRateBasisPoints: null }, userId });
+        await mailInvoice(tx, deps, issued.id);
+        return issued;
       });
       return one(restorationId, row.id);
     },
 
+    /** The final invoice as it would be issued now, for the technician to read before issuing. */
+    async preview(restorationId: number): Promise<InvoicePreview> {
+      const settings = await readWorkshopSettings(db);
+      return previewOf(await finalLines(db, restorationId, settings), settings);
+    },
+
     /** The final invoice: billable labour at the workshop rate, fitted parts at cost plus markup, less deposits paid. */
     async final(restorationId: number, userId: number) {
-      const row = await db.transaction(async (tx) => {
+      const row = await unitOfWork(db, async (tx) => {
         await lock(tx, restorationId);
-        const [existing] = await tx.select({ number: invoices.number }).from(invoices)
+        const [existing] = await tx.select({ number: invoices.number, numberPrefix: invoices.numberPrefix }).from(invoices)
           .where(and(eq(invoices.restorationId, restorationId), eq(invoices.kind, 'final'), isNull(invoices.voidedAt)));
-        if (existing) throw new ConflictError(`Invoice ${existing.number} is already issued for this set: void it before issuing another.`);
+        if (existing) throw new ConflictError(`Invoice ${referenceOf(existing)} is already issued for this set: void it before issuing another.`);
         const settings = await readWorkshopSettings(tx);
-        const time = await tx.select().from(labourEntries).where(and(eq(labourEntries.restorationId, restorationId), eq(labourEntries.billable, true), isNotNull(labourEntries.minutes)));
-        const fitted = await tx.select().from(parts).where(and(eq(parts.restorationId, restorationId), eq(parts.state, 'fitted'), isNotNull(parts.costMinor)));
-        const minutes = time.reduce((a, e) => a + (e.minutes ?? 0), 0);
-        const lines = [
-          ...(minutes ? [{ description: `Labour, ${Number((minutes / 60).toFixed(2))} h`, priced: { kind: 'labour' as const, minutes, hourlyRate: settings.labourRate } }] : []),
-          ...fitted.map((p) => ({ description: `${p.componentRef} ${p.replacementPart} ${p.replacementRating}`.replace(/\s+/g, ' ').trim(), priced: { kind: 'part' as const, cost: p.costMinor!, markupBasisPoints: settings.partsMarkupBasisPoints } })),
-        ];
+        const { lines, deducted } = await finalLines(tx, restorationId, settings);
         if (!lines.length) throw new ConflictError('Nothing to invoice yet: log billable time or mark parts fitted with their cost.');
-        const deposits = await tx.select({ paid: invoices.paid }).from(invoices)
-          .where(and(eq(invoices.restorationId, restorationId), eq(invoices.kind, 'deposit'), isNull(invoices.voidedAt)));
-        return issueInvoice(tx, { restorationId, kind: 'final', lines, prices: settings, deducted: deposits.reduce((a, d) => a + d.paid, 0), userId });
+        const issued = await issueInvoice(tx, { restorationId, kind: 'final', lines, prices: settings, deducted, userId });
+        await mailInvoice(tx, deps, issued.id);
+        return issued;
       });
       return one(restorationId, row.id);
     },
 
     /** Voids an issued invoice or deposit request: it stays as issued, marked void, and a credit note reverses it. */
     async void(invoiceId: number, reason: string, userId: number) {
-      const { restorationId, creditId } = await db.transaction(async (tx) => {
+      const { restorationId, creditId } = await unitOfWork(db, async (tx) => {
         const [i] = await tx.select().from(invoices).where(and(eq(invoices.id, invoiceId), ne(invoices.kind, 'credit-note'))).for('update');
         if (!i) throw new NotFoundError();
-        if (i.voidedAt) throw new ConflictError(`Invoice ${i.number} is already void.`);
-        if (i.paid > 0) throw new ConflictError(`Invoice ${i.number} has payments: refund them before voiding it.`);
+        if (i.voidedAt) throw new ConflictError(`Invoice ${referenceOf(i)} is already void.`);
+        if (i.paid > 0) throw new ConflictError(`Invoice ${referenceOf(i)} has payments: refund them before voiding it.`);
         const lines = await tx.select().from(invoiceLines).where(eq(invoiceLines.invoiceId, i.id)).orderBy(asc(invoiceLines.position));
         await tx.update(invoices).set({ voidedAt: new Date(), voidReason: reason }).where(eq(invoices.id, i.id));
         await tx.insert(events).values({ restorationId: i.restorationId, kind: 'invoice-voided', actorId: userId, data: { invoiceId: i.id, number: i.number } });
@@ -102,6 +114,7 @@ export function invoicesService(db: Database) {
           lines: lines.map((l) => ({ description: `Reverses: ${l.description}`, priced: { kind: 'fixed', quantity: -1, unitAmount: l.net } })),
           prices: { currency: i.currency, taxName: i.taxName, taxRateBasisPoints: i.taxRateBasisPoints, taxRounding: i.taxRounding },
         });
+        await mailInvoice(tx, deps, credit.id);
         return { restorationId: i.restorationId, creditId: credit.id };
       });
       return one(restorationId, creditId);

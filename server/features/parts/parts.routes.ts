@@ -6,6 +6,7 @@ import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
 import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
+import { readWorkshopSettings } from '../workshop/workshop-settings';
 import { partsCsv } from './parts-csv';
 import { partsService, toPart } from './parts.service';
 
@@ -30,7 +31,9 @@ export function partsRoutes({ db }: AppDeps): Router {
   router.get('/restorations/:id/parts.csv', requireUser, validate(csv), guard(db, 'parts.view'), async (_req, res) => {
     const { params, query } = input(res, csv);
     const lines = (await service.forExport(params.id, roleOf(res))).map(({ row, finding }) => ({ part: toPart(row, roleOf(res)), finding }));
-    res.type('text/csv; charset=utf-8').attachment(`restoration-${params.id}-parts.csv`).send(partsCsv(lines, query));
+    // Costs in the workshop's currency; `?currency=` still overrides it for a reader who asks.
+    const currency = query.currency ?? (await readWorkshopSettings(db)).currency;
+    res.type('text/csv; charset=utf-8').attachment(`restoration-${params.id}-parts.csv`).send(partsCsv(lines, { ...query, currency }));
   });
   router.post('/restorations/:id/parts', requireUser, validate(create), guard(db, 'parts.edit'), async (req, res) => {
     const { params, body } = input(res, create);

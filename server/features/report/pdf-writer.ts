@@ -7,8 +7,8 @@ const SOFT = '#5d5247';
 const GLOW = '#b4530b';
 
 /** A thin layer over pdfkit: text that falls back across fonts, headings, and images from WebP. */
-export function createWriter() {
-  const doc = new PDFDocument({ size: 'A4', margin: 56, info: { Title: 'Hand-back report', Creator: 'Gridleak' }, bufferPages: true });
+export function createWriter(title = 'Hand-back report') {
+  const doc = new PDFDocument({ size: 'A4', margin: 56, info: { Title: title, Creator: 'Gridleak' }, bufferPages: true });
   for (const [name, file] of Object.entries(FONTS)) doc.registerFont(name, file);
   const width = doc.page.width - 112;
 

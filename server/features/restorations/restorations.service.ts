@@ -1,7 +1,9 @@
 import type { z } from 'zod';
 import type { Role } from '../../../shared/permissions';
 import type { Restoration, restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
+import { count, eq } from 'drizzle-orm';
 import type { Database, Tx } from '../../db/client';
+import { invoices, restorations } from '../../db/schema';
 import { ConflictError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
@@ -60,8 +62,19 @@ export function restorationsService(db: Database, invite?: InviteIn) {
       });
       return toRestoration(row, role);
     },
+    /**
+     * Deletes a set and everything on it, except that issued invoices, deposit requests and credit notes are the
+     * workshop's accounting record: a set with any is refused (the lock makes a concurrent issue wait or see it gone).
+     */
     async remove(id: number) {
-      if (!(await repo.remove(id))) throw new NotFoundError();
+      await db.transaction(async (tx) => {
+        const [r] = await tx.select({ id: restorations.id }).from(restorations).where(eq(restorations.id, id)).for('update');
+        if (!r) throw new NotFoundError();
+        const [issued] = await tx.select({ n: count() }).from(invoices).where(eq(invoices.restorationId, id));
+        if (issued!.n > 0)
+          throw new ConflictError(`This set has ${issued!.n === 1 ? 'an issued invoice' : `${issued!.n} issued invoices`} (deposit requests and credit notes count), which are kept for the workshop's accounts, so it cannot be deleted. Set its stage to Returned instead.`, { invoices: issued!.n });
+        await restorationsRepo(tx).remove(id);
+      });
     },
   };
 }

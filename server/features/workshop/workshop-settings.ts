@@ -8,11 +8,14 @@ import { workshopSettings } from '../../db/schema';
 export async function readWorkshopSettings(db: Executor): Promise<WorkshopSettings> {
   await db.insert(workshopSettings).values({ id: 1 }).onConflictDoNothing();
   const [row] = await db.select().from(workshopSettings).where(eq(workshopSettings.id, 1));
-  const { currency, labourRate, partsMarkupBasisPoints, taxName, taxRateBasisPoints, taxRounding, estimateApprovalRequired } = row!;
-  return { currency, labourRate, partsMarkupBasisPoints, taxName, taxRateBasisPoints, taxRounding, estimateApprovalRequired };
+  const { currency, labourRate, partsMarkupBasisPoints, taxName, taxRateBasisPoints, taxRounding, estimateApprovalRequired, invoicePrefix, timeZone } = row!;
+  return { currency, labourRate, partsMarkupBasisPoints, taxName, taxRateBasisPoints, taxRounding, estimateApprovalRequired, invoicePrefix, timeZone };
 }
 
-export async function writeWorkshopSettings(db: Executor, values: WorkshopSettings): Promise<WorkshopSettings> {
+/** The settings a caller may leave out keep what is stored (or the defaults). */
+export type WorkshopSettingsWrite = Omit<WorkshopSettings, 'invoicePrefix' | 'timeZone'> & Partial<Pick<WorkshopSettings, 'invoicePrefix' | 'timeZone'>>;
+
+export async function writeWorkshopSettings(db: Executor, values: WorkshopSettingsWrite): Promise<WorkshopSettings> {
   await db.insert(workshopSettings).values({ id: 1, ...values }).onConflictDoUpdate({ target: workshopSettings.id, set: values });
   return readWorkshopSettings(db);
 }

@@ -22,7 +22,7 @@ const estimate = (over: Partial<Estimate> = {}): Estimate => ({
   lines: [{ id: 1, kind: 'labour', description: 'Recap and align', extra: null, minutesLow: 90, minutesHigh: 180, low: gbp(6000), high: gbp(12000) }],
   ...over,
 });
-const settings: WorkshopSettings = { currency: 'GBP', labourRate: 4000, partsMarkupBasisPoints: 2500, taxName: 'VAT', taxRateBasisPoints: 2000, taxRounding: 'invoice-down', estimateApprovalRequired: false };
+const settings: WorkshopSettings = { currency: 'GBP', labourRate: 4000, partsMarkupBasisPoints: 2500, taxName: 'VAT', taxRateBasisPoints: 2000, taxRounding: 'invoice-down', estimateApprovalRequired: false, invoicePrefix: 'CL-', timeZone: 'Europe/London' };
 
 const renderTab = (role: Role) =>
   render(
