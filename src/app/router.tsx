@@ -55,6 +55,7 @@ export const router = createBrowserRouter([
             ],
           },
           { path: 'calculators', lazy: page(() => import('./routes/calculators'), 'CalculatorsRoute') },
+          { path: 'workshop/settings', lazy: page(() => import('./routes/workshop-settings'), 'WorkshopSettingsRoute') },
         ],
       },
       { path: '*', lazy: page(() => import('./routes/not-found'), 'NotFoundRoute') },

@@ -1,35 +1,29 @@
-import { useState } from 'react';
+import { Link } from 'react-router';
 import { can, type Role } from '../../../../shared/permissions';
-import { Button } from '../../../components/button';
-import { EmptyState, ErrorState, Loading } from '../../../components/states';
-import { useEstimates, useMoneySettings } from '../api/estimates';
-import { EstimateCard } from './estimate-card';
-import { EstimateForm } from './estimate-form';
+import { useMoneySettings } from '../api/estimates';
+import { EstimatesSection } from './estimates-section';
+import { InvoicePanel } from './invoice-panel';
+import { LabourLog } from './labour-log';
+import { moneyText } from './money-text';
 
-/** The Money tab: estimates, newest version first; technicians write them, the owner answers the latest. */
+/**
+ * The Money tab: estimates; for technicians the labour log; deposits and invoices. Every amount is shown in the
+ * workshop's currency, as each amount carries it.
+ */
 export function MoneyTab({ restorationId, role }: { restorationId: number; role: Role }) {
-  const query = useEstimates(restorationId);
   const canEdit = can(role, 'money.edit');
   const settings = useMoneySettings(restorationId, canEdit);
-  const [writing, setWriting] = useState(false);
-  if (query.isPending) return <Loading label="Fetching the estimates…" />;
-  if (query.isError) return <ErrorState error={query.error} onRetry={() => query.refetch()} />;
-  const list = query.data;
-  const latestSent = list.find((e) => e.sent)?.id;
   return (
-    <div className="space-y-4">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h2 className="text-xl font-bold">Estimates</h2>
-        {canEdit && !writing && <Button onClick={() => setWriting(true)} disabled={!settings.data}>{list.length ? 'Revise the estimate' : 'Write an estimate'}</Button>}
-      </div>
-      {canEdit && settings.isError && <ErrorState error={settings.error} onRetry={() => settings.refetch()} />}
-      {writing && settings.data && <EstimateForm restorationId={restorationId} settings={settings.data} onDone={() => setWriting(false)} />}
-      {list.length === 0 ? (
-        <EmptyState title="No estimate yet">{canEdit ? 'Write one before opening the set; revise it after the assessment.' : 'The workshop has not sent an estimate yet.'}</EmptyState>
-      ) : (
-        list.map((e) => (
-          <EstimateCard key={e.id} restorationId={restorationId} estimate={e} latest={e.sent ? e.id === latestSent : true} canEdit={canEdit} canDecide={can(role, 'estimates.decide')} />
-        ))
+    <div className="space-y-8">
+      <EstimatesSection restorationId={restorationId} role={role} settings={settings} />
+      {can(role, 'labour.record') && <LabourLog restorationId={restorationId} />}
+      <InvoicePanel restorationId={restorationId} canEdit={canEdit} currency={settings.data?.currency} />
+      {canEdit && (
+        <p className="text-sm text-ink-soft">
+          Prices, tax and invoice numbers come from the{' '}
+          <Link className="font-semibold underline" to="/workshop/settings">workshop settings</Link>
+          {settings.data && `: ${settings.data.currency}, labour at ${moneyText({ amount: settings.data.labourRate, currency: settings.data.currency })} an hour`}.
+        </p>
       )}
     </div>
   );

@@ -1,0 +1,43 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { LabourLog } from '../../../../shared/schemas/labour';
+import type { Stage } from '../../../../shared/schemas/restorations';
+import { api } from '../../../lib/api-client';
+import { invoiceKeys } from './invoices';
+import { moneyKeys } from './estimates';
+
+export const labourKey = (restorationId: number) => ['restorations', restorationId, 'labour'] as const;
+
+/** The set's time entries, the reader's running timer (on any set) and this week's totals per technician. */
+export const useLabour = (restorationId: number) =>
+  useQuery({ queryKey: labourKey(restorationId), queryFn: () => api<LabourLog>(`/restorations/${restorationId}/labour`) });
+
+export interface LabourTarget {
+  findingId: number | null;
+  stage: Stage | null;
+  note: string;
+  billable: boolean;
+}
+
+function useLabourWrite<T>(restorationId: number, request: (input: T) => Promise<LabourLog>) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: request,
+    onSuccess: (log) => {
+      client.setQueryData(labourKey(restorationId), log);
+      return Promise.all([
+        client.invalidateQueries({ queryKey: invoiceKeys.preview(restorationId) }),
+        client.invalidateQueries({ queryKey: moneyKeys.history(restorationId) }),
+      ]);
+    },
+  });
+}
+
+export const useAddLabour = (restorationId: number) =>
+  useLabourWrite(restorationId, (input: LabourTarget & { minutes: number; workedAt?: string }) =>
+    api<LabourLog>(`/restorations/${restorationId}/labour`, { method: 'POST', json: input }));
+
+export const useStartTimer = (restorationId: number) =>
+  useLabourWrite(restorationId, (input: LabourTarget) => api<LabourLog>(`/restorations/${restorationId}/labour/timer`, { method: 'POST', json: input }));
+
+export const useStopTimer = (restorationId: number) =>
+  useLabourWrite(restorationId, () => api<LabourLog>(`/restorations/${restorationId}/labour/timer/stop`, { method: 'POST' }));
