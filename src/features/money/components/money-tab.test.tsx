@@ -6,7 +6,8 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../shared/permissions';
 import type { Estimate, WorkshopSettings } from '../../../../shared/schemas/estimates';
-import { apiError, fakeApi, ok } from '../../../testing/fake-api';
+import { MemoryRouter } from 'react-router';
+import { apiError, fakeApi, ok, type Call, type Reply } from '../../../testing/fake-api';
 import { MoneyTab } from './money-tab';
 
 afterEach(() => {
@@ -24,17 +25,23 @@ const estimate = (over: Partial<Estimate> = {}): Estimate => ({
 });
 const settings: WorkshopSettings = { currency: 'GBP', labourRate: 4000, partsMarkupBasisPoints: 2500, taxName: 'VAT', taxRateBasisPoints: 2000, taxRounding: 'invoice-down', estimateApprovalRequired: false, invoicePrefix: 'CL-', timeZone: 'Europe/London' };
 
+/** The tab's other sections (labour, invoices) answered as empty, so each test speaks only of estimates. */
+const withEmptySections = (answer: (c: Call) => Reply) => (c: Call): Reply =>
+  c.path.endsWith('/invoices') || c.path.endsWith('/findings') ? ok([])
+  : c.path.endsWith('/labour') ? ok({ entries: [], running: null, week: [] })
+  : answer(c);
+
 const renderTab = (role: Role) =>
   render(
     <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <MoneyTab restorationId={7} role={role} />
+      <MemoryRouter><MoneyTab restorationId={7} role={role} /></MemoryRouter>
     </QueryClientProvider>,
   );
 
 describe('MoneyTab', () => {
   it('when the owner reads the latest estimate, then they approve it with their name and the version they read', async () => {
-    const api = fakeApi((c) => (c.method === 'GET' ? ok([estimate(), estimate({ id: 4, version: 1, decision: 'declined', decidedByName: 'Pat Owner', decidedAt: '2026-11-29T09:00:00.000Z' })])
-      : ok(estimate({ decision: 'approved', decidedByName: 'Pat Owner', decidedAt: '2026-12-01T09:00:00.000Z' }))));
+    const api = fakeApi(withEmptySections((c) => (c.method === 'GET' ? ok([estimate(), estimate({ id: 4, version: 1, decision: 'declined', decidedByName: 'Pat Owner', decidedAt: '2026-11-29T09:00:00.000Z' })])
+      : ok(estimate({ decision: 'approved', decidedByName: 'Pat Owner', decidedAt: '2026-12-01T09:00:00.000Z' })))));
     renderTab('owner');
     expect(await screen.findByRole('heading', { name: 'Estimate, version 1 (earlier)' })).toBeInTheDocument();
     expect(screen.getByText(/Declined by Pat Owner/)).toBeInTheDocument();
@@ -47,7 +54,7 @@ describe('MoneyTab', () => {
   });
 
   it('when the technician writes an estimate, then hours become minutes and pounds become pence', async () => {
-    const api = fakeApi((c) => (c.path.endsWith('/money-settings') ? ok(settings) : c.method === 'GET' ? ok([]) : { status: 201, body: estimate({ version: 1 }) }));
+    const api = fakeApi(withEmptySections((c) => (c.path.endsWith('/money-settings') ? ok(settings) : c.method === 'GET' ? ok([]) : { status: 201, body: estimate({ version: 1 }) })));
     renderTab('technician');
     expect(await screen.findByText('No estimate yet')).toBeInTheDocument();
     await userEvent.click(await screen.findByRole('button', { name: 'Write an estimate' }));
