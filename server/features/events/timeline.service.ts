@@ -78,8 +78,8 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           : e.kind === 'estimate-sent' ? `Estimate version ${String(e.data.version)} sent to the owner`
           : e.kind === 'estimate-decided' ? `Estimate version ${String(e.data.version)} ${String(e.data.decision)} by ${String(e.data.name)}`
           : e.kind === 'labour-logged' ? `Time logged: ${String(e.data.minutes)} min${e.data.billable ? '' : ' (not billable)'}`
-          : e.kind === 'invoice-issued' ? `${String(e.data.kind) === 'credit-note' ? 'Credit note' : String(e.data.kind) === 'deposit' ? 'Deposit request' : 'Invoice'} ${String(e.data.number)} issued`
-          : e.kind === 'invoice-voided' ? `Invoice ${String(e.data.number)} voided`
+          : e.kind === 'invoice-issued' ? `${String(e.data.kind) === 'credit-note' ? 'Credit note' : String(e.data.kind) === 'deposit' ? 'Deposit request' : 'Invoice'} ${String(e.data.reference ?? e.data.number)} issued`
+          : e.kind === 'invoice-voided' ? `Invoice ${String(e.data.reference ?? e.data.number)} voided`
           : e.kind === 'stage-changed' ? `Stage: ${stageLabels[data.from as Stage] ?? data.from} → ${stageLabels[data.to as Stage] ?? data.to}`
           : `Out of tolerance: ${m ? `${quantityLabels[m.quantity]} at ${m.location}, ${m.verdictReason}` : ''}`;
         return {

@@ -108,7 +108,7 @@ export function invoicesService(deps: Deps) {
         if (i.paid > 0) throw new ConflictError(`Invoice ${referenceOf(i)} has payments: refund them before voiding it.`);
         const lines = await tx.select().from(invoiceLines).where(eq(invoiceLines.invoiceId, i.id)).orderBy(asc(invoiceLines.position));
         await tx.update(invoices).set({ voidedAt: new Date(), voidReason: reason }).where(eq(invoices.id, i.id));
-        await tx.insert(events).values({ restorationId: i.restorationId, kind: 'invoice-voided', actorId: userId, data: { invoiceId: i.id, number: i.number } });
+        await tx.insert(events).values({ restorationId: i.restorationId, kind: 'invoice-voided', actorId: userId, data: { invoiceId: i.id, number: i.number, reference: referenceOf(i) } });
         const credit = await issueInvoice(tx, {
           restorationId: i.restorationId, kind: 'credit-note', creditsInvoiceId: i.id, userId, deducted: -i.deducted,
           lines: lines.map((l) => ({ description: `Reverses: ${l.description}`, priced: { kind: 'fixed', quantity: -1, unitAmount: l.net } })),

@@ -40,6 +40,6 @@ export async function issueInvoice(tx: Tx, input: IssueInput) {
   await tx.insert(invoiceLines).values(input.lines.map((l, position) => ({
     invoiceId: row!.id, position, description: l.description, net: t.lines[position]!.net.amount, tax: t.lines[position]!.tax.amount,
   })));
-  await tx.insert(events).values({ restorationId: input.restorationId, kind: 'invoice-issued', actorId: input.userId, data: { invoiceId: row!.id, number, kind: input.kind } });
+  await tx.insert(events).values({ restorationId: input.restorationId, kind: 'invoice-issued', actorId: input.userId, data: { invoiceId: row!.id, number, reference: `${invoicePrefix}${number}`, kind: input.kind } });
   return row!;
 }
