@@ -45,7 +45,7 @@ describe('parts ledger', () => {
     expect(row['Original part']).toBe(tricky);
     expect(row.Source).toBe('Supplier, "NOS" box');
     expect(row.Notes).toBe('line one\r\nline two');
-    expect(row.Cost).toBe('1.85');
+    expect(row['Cost (GBP)']).toBe('1.85'); // the workshop's currency, GBP by default
   });
 
   it('when the owner reads the ledger, then only fitted or kept lines show, without costs, sources or notes; they cannot change it', async () => {

@@ -42,7 +42,7 @@ describe('CSV export, ready for a spreadsheet', () => {
     expect(inUtc.map((r) => r.Fitted)).toEqual(Array(6).fill('2026-03-08'));
     expect(inUtc.find((r) => r.Reference === 'C14')!.Finding).toBe(`#${finding.number} Leaky coupling capacitor`);
     expect(inUtc.find((r) => r.Reference === 'C2')!.Finding).toBe('');
-    expect(inUtc[0]!.Cost).toBe('2.50');
+    expect(inUtc[0]!['Cost (GBP)']).toBe('2.50'); // without ?currency, the workshop's currency (GBP by default)
 
     const berlin = await tech.get(`/api/restorations/${restorationId}/parts.csv?currency=EUR&timeZone=Europe/Berlin`);
     const rows = rowsOf(berlin.text);
@@ -60,6 +60,6 @@ describe('CSV export, ready for a spreadsheet', () => {
   it('when the owner exports, then a finding they may not see is not named', async () => {
     const rows = rowsOf((await owner.get(`/api/restorations/${restorationId}/parts.csv`)).text);
     expect(rows.find((r) => r.Reference === 'C14')?.Finding).toBe('');
-    expect(rows.map((r) => r.Cost).every((c) => c === '')).toBe(true);
+    expect(rows.map((r) => r['Cost (GBP)']).every((c) => c === '')).toBe(true);
   });
 });

@@ -14,7 +14,7 @@ export function useSaveWorkshopSettings() {
     onSuccess: (saved) => {
       client.setQueryData(workshopSettingsKey, saved);
       // Every set's form reads the prices through its own money-settings query.
-      return client.invalidateQueries({ predicate: (q) => q.queryKey[2] === 'money-settings' || q.queryKey[3] === 'preview' });
+      return client.invalidateQueries({ predicate: (q) => q.queryKey[0] === 'meta' || q.queryKey[2] === 'money-settings' || q.queryKey[3] === 'preview' });
     },
   });
 }

@@ -29,13 +29,13 @@ describe('parts ledger', () => {
     expect(item).toHaveTextContent("⚠ Danger: Rated 350 V, below the original's 450 V: never lower the voltage rating.");
   });
 
-  it('when a technician reads it, then costs show from minor units in the chosen currency, £ by default', async () => {
+  it('when a technician reads it, then costs show from minor units in the workshop currency', async () => {
     fakePartsApi([reservoir]);
     renderWithQueries(<PartsLedger restorationId={7} role="technician" />);
     expect(await screen.findByRole('columnheader', { name: /Cost/ })).toBeInTheDocument();
     expect(within(row('C15')).getByText('£1.85')).toBeInTheDocument();
     cleanup();
-    localStorage.setItem('gridleak.parts.currency', 'EUR');
+    fakePartsApi([reservoir], { currency: 'EUR' });
     renderWithQueries(<PartsLedger restorationId={7} role="technician" />);
     expect(within(await screen.findByRole('row', { name: 'Part C15' })).getByText('€1.85')).toBeInTheDocument();
   });

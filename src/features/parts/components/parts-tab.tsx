@@ -7,7 +7,6 @@ import { partsCsvHref } from '../api/get-parts-csv';
 import { useParts } from '../api/get-parts';
 import type { FindingChoice } from '../lib/finding-choice';
 import { useCurrency } from '../hooks/use-currency';
-import { CurrencySetting } from './currency-setting';
 import { PartForm } from './part-form';
 import { PartsLedger } from './parts-ledger';
 import { ShoppingList } from './shopping-list';
@@ -55,7 +54,6 @@ export function PartsTab({ restorationId, role, setName, findings, view: asked, 
             </button>
           </div>
           <div className="flex flex-wrap items-center gap-3">
-            {canEdit && <CurrencySetting />}
             <a href={partsCsvHref(restorationId, currency)} download className={buttonClass('quiet')}>
               Export CSV
             </a>

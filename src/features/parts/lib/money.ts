@@ -1,8 +1,5 @@
-/** Currencies offered for showing costs; the ledger stores minor units and no currency, so this is a display choice. */
-export const currencies = ['GBP', 'EUR', 'USD', 'CAD', 'AUD', 'NZD', 'CHF', 'SEK', 'NOK', 'DKK', 'JPY'] as const;
-export type Currency = (typeof currencies)[number];
-
-export const isCurrency = (value: unknown): value is Currency => currencies.includes(value as Currency);
+/** An ISO 4217 code: the ledger stores minor units, shown in the workshop's currency (its settings). */
+export type Currency = string;
 
 /** How many minor units make one major unit, as a power of ten: 2 for pence and cents, 0 for yen. */
 export const minorDigits = (currency: Currency): number =>

@@ -21,7 +21,7 @@ const json = (status: number, body: unknown) =>
  */
 export function fakePartsApi(
   initial: Part[],
-  { refuseChanges, holdChanges }: { refuseChanges?: { status: number; message: string }; holdChanges?: Promise<void> } = {},
+  { refuseChanges, holdChanges, currency = 'GBP' }: { refuseChanges?: { status: number; message: string }; holdChanges?: Promise<void>; currency?: string } = {},
 ) {
   let list = [...initial];
   let nextId = 100;
@@ -32,6 +32,8 @@ export function fakePartsApi(
     const body: unknown = typeof init.body === 'string' ? JSON.parse(init.body) : undefined;
     calls.push({ method, url, body });
     if (url.endsWith('/parts') && method === 'GET') return json(200, list);
+    // The workshop's currency comes with the deployment's meta.
+    if (url.endsWith('/api/meta')) return json(200, { demo: false, devMail: false, demoAccounts: [], currency });
     if (url.endsWith('/parts') && method === 'POST') {
       const made = makePart(nextId++, body as PartInput & { componentRef: string });
       list = [...list, made];
