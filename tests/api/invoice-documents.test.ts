@@ -1,4 +1,4 @@
-import { eq } from 'drizzle-orm';
+import { desc, eq } from 'drizzle-orm';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { CapturedMail } from '../../shared/schemas/dev-mail';
@@ -133,6 +133,24 @@ describe('invoices at hand-back', () => {
     } finally {
       sent.mockRestore();
     }
+  });
+});
+
+describe('invoice mail that cannot go', () => {
+  it('when the mail server refuses, then nothing is issued, the answer is 503 and the next invoice takes the number', async () => {
+    const id = await newSet();
+    const before = await list(tech, id);
+    const refused = vi.spyOn(t.deps.mailer, 'send').mockRejectedValueOnce(new Error('SMTP 421 try later'));
+    try {
+      const res = await tech.post(`/api/restorations/${id}/deposits`).send({ amount: 5000 });
+      expect(res.status).toBe(503);
+    } finally {
+      refused.mockRestore();
+    }
+    expect(await list(tech, id)).toEqual(before);
+    const [{ last }] = await t.db.select({ last: invoices.number }).from(invoices).orderBy(desc(invoices.number)).limit(1) as [{ last: number }];
+    const next = (await tech.post(`/api/restorations/${id}/deposits`).send({ amount: 5000 })).body as Invoice;
+    expect(next.number).toBe(last + 1);
   });
 });
 
