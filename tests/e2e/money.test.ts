@@ -42,17 +42,19 @@ describe('money at the bench and at hand-back', () => {
     await page.getByRole('button', { name: 'Stop the timer' }).click();
     await page.getByRole('button', { name: 'Start the timer' }).waitFor();
     // Typed hours for the recap done yesterday evening.
-    await page.getByLabel('Hours').fill('2.5');
-    await page.getByLabel('Note').nth(1).fill('Recapped the audio stage');
-    await page.getByRole('button', { name: 'Add the hours' }).click();
+    const typed = page.getByRole('form', { name: 'Add typed hours' });
+    await typed.getByRole('textbox', { name: 'Hours' }).fill('2.5');
+    await typed.getByRole('textbox', { name: 'Note' }).fill('Recapped the audio stage');
+    await typed.getByRole('button', { name: 'Add the hours' }).click();
     await page.getByRole('cell', { name: 'Recapped the audio stage' }).waitFor();
     await expectAccessible(page, 'the Money tab with the labour log');
 
     // A deposit of £40.00, paid by the owner (recorded here straight in the database: payments are their own feature).
     await page.getByRole('button', { name: 'Request a deposit' }).click();
-    await page.getByLabel('A fixed amount').check();
-    await page.getByLabel('Amount (GBP)').fill('40');
-    await page.getByRole('button', { name: 'Issue the deposit request' }).click();
+    const deposit = page.getByRole('form', { name: 'Request a deposit' });
+    await deposit.getByRole('radio', { name: 'A fixed amount' }).check();
+    await deposit.getByRole('textbox', { name: 'Amount (GBP)' }).fill('40');
+    await deposit.getByRole('button', { name: 'Issue the deposit request' }).click();
     await page.getByRole('heading', { name: /^Deposit request CL-\d+$/ }).waitFor();
     await mailTo(ctx.product.origin, 'imogen@example.test', /Deposit request CL-/);
     const db = connectDatabase(ctx.product.databaseUrl);
