@@ -179,10 +179,12 @@ const everything: Record<VisibilitySubject, Condition> = {
 };
 /** Mentors help with the work and see none of its money. */
 const noMoney: Condition = { never: true };
+/** History lines about money (estimates sent and answered, invoices issued and voided); they carry no amounts, but still. */
+const moneyEvent: Condition = { field: 'event.kind', in: ['estimate-sent', 'estimate-decided', 'invoice-issued', 'invoice-voided'] };
 
 export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   technician: everything,
-  mentor: { ...everything, estimate: noMoney },
+  mentor: { ...everything, estimate: noMoney, event: { not: moneyEvent } },
   owner: {
     photo: sharedPhoto,
     finding: sharedFinding,

@@ -16,6 +16,8 @@ export type Condition =
   | { never: true }
   | { all: readonly Condition[] }
   | { any: readonly Condition[] }
+  /** The condition does not hold (a missing row or field makes its leaf false, so `not` of it true). */
+  | { not: Condition }
   /** The field equals the value (a missing row or field counts as null, which equals only null). */
   | { field: FieldRef; is: boolean | string | null }
   | { field: FieldRef; in: readonly string[] }
@@ -40,6 +42,7 @@ export function holds(condition: Condition, facts: VisibilityFacts): boolean {
   if ('never' in condition) return false;
   if ('all' in condition) return condition.all.every((c) => holds(c, facts));
   if ('any' in condition) return condition.any.some((c) => holds(c, facts));
+  if ('not' in condition) return !holds(condition.not, facts);
   const value = read(facts, condition.field);
   if ('is' in condition) return value === condition.is;
   if ('in' in condition) return typeof value === 'string' && condition.in.includes(value);
@@ -53,5 +56,6 @@ export function fieldsOf(condition: Condition): FieldRef[] {
   if ('always' in condition || 'never' in condition) return [];
   if ('all' in condition) return condition.all.flatMap(fieldsOf);
   if ('any' in condition) return condition.any.flatMap(fieldsOf);
+  if ('not' in condition) return fieldsOf(condition.not);
   return 'after' in condition ? [condition.field, condition.after] : [condition.field];
 }

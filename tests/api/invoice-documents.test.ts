@@ -171,12 +171,19 @@ describe('invoice PDFs', () => {
     expect(receipt).toContain('Paid in full');
   });
 
-  it('when a mentor or someone else asks for an invoice PDF, then they get none', async () => {
+  it('when a mentor or someone else asks for an invoice PDF, then they get none, and the mentor reads no invoice in the history', async () => {
     const id = await newSet();
     const dep = (await tech.post(`/api/restorations/${id}/deposits`).send({ amount: 1000 })).body as Invoice;
     const stranger = await signedIn(t.app, await createUser(t.db));
     expect((await mentor.get(`/api/invoices/${dep.id}/invoice.pdf`)).status).toBe(403);
     expect((await stranger.get(`/api/invoices/${dep.id}/invoice.pdf`)).status).toBe(404);
+    // The history says an invoice was issued to the technician and the owner, and nothing of it to the mentor.
+    const kinds = async (agent: Agent) => ((await agent.get(`/api/restorations/${id}/events`)).body as { kind: string }[]).map((e) => e.kind);
+    expect(await kinds(tech)).toContain('invoice-issued');
+    expect(await kinds(owner)).toContain('invoice-issued');
+    const mentorKinds = await kinds(mentor);
+    expect(mentorKinds).not.toContain('invoice-issued');
+    expect(mentorKinds.length).toBe((await kinds(tech)).filter((k) => !['invoice-issued', 'invoice-voided', 'estimate-sent', 'estimate-decided'].includes(k)).length);
   });
 });
 

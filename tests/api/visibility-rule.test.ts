@@ -54,6 +54,8 @@ const table: [string, Role, VisibilitySubject, VisibilityFacts, boolean][] = [
   ['an estimate sent to the owner', 'owner', 'estimate', { estimate: { sent: true } }, true],
   ['a draft estimate', 'owner', 'estimate', { estimate: { sent: false } }, false],
   ['a sent estimate, for a mentor (mentors see no money)', 'mentor', 'estimate', { estimate: { sent: true } }, false],
+  ['an invoice issued, as a history line for a mentor', 'mentor', 'event', { event: { kind: 'invoice-issued', createdAt: t0 } }, false],
+  ['a stage change, as a history line for a mentor', 'mentor', 'event', { event: { kind: 'stage-changed', createdAt: t0 } }, true],
   ['a draft estimate, for the technician', 'technician', 'estimate', { estimate: { sent: false } }, true],
   ['an unshared photo', 'owner', 'photo', { photo: internal }, false],
   ['a shared finding on an unshared photo', 'owner', 'finding', { finding: shared, photo: internal }, false],

@@ -37,6 +37,7 @@ export function conditionSql(condition: Condition, sources: FieldSources): SQL {
   if ('never' in condition) return sql`false`;
   if ('all' in condition) return condition.all.length ? sql`(${sql.join(condition.all.map((c) => conditionSql(c, sources)), sql` and `)})` : sql`true`;
   if ('any' in condition) return condition.any.length ? sql`(${sql.join(condition.any.map((c) => conditionSql(c, sources)), sql` or `)})` : sql`false`;
+  if ('not' in condition) return sql`(not ${conditionSql(condition.not, sources)})`;
   const column = source(sources, condition.field);
   if ('is' in condition) {
     if (condition.is === null) return sql`(${column} is null)`;
