@@ -20,7 +20,8 @@ const help: SharedHelp = {
   readings: [{ id: 2, location: 'HT after smoothing', quantity: 'dc-voltage', expected: '250', tolerance: '10%', reading: '212', conditions: '', meter: '10 MΩ',
     chartMeter: '1k/V', verdict: 'out', verdictReason: 'below the tolerance', measuredAt: '2026-12-01T09:00:00.000Z' }],
   photos: [{ id: 3, caption: 'Underside', view: 'underside', phase: 'before', width: 600, height: 400, url: '/x.jpg', thumbUrl: '/x-t.jpg',
-    pins: [{ id: 5, number: 1, shape: 'pin', points: [{ x: 0.25, y: 0.75 }], title: 'Leaky C27', componentRef: 'C27', kind: 'leaking', severity: 'fault', status: 'observed' }] }],
+    pins: [{ id: 5, number: 1, shape: 'pin', points: [{ x: 0.25, y: 0.75 }], title: 'Leaky C27', componentRef: 'C27', kind: 'leaking', severity: 'fault', status: 'observed', closeupUrl: '/c.webp' }] }],
+  checklist: [],
   replies: [],
 };
 const show = () =>
