@@ -17,7 +17,7 @@ import { startTestApp } from '../support/test-app';
 const INTERNAL = 'WORKSHOP-ONLY';
 let t: Awaited<ReturnType<typeof startTestApp>>;
 let tech: Agent, mentor: Agent, owner: Agent;
-let people: Record<'tech' | 'mentor' | 'owner', { id: number; email: string }>;
+let people: Record<'tech' | 'mentor' | 'owner', Awaited<ReturnType<typeof createUser>>>;
 let r: { id: number }, sharedPhoto: number, privatePhoto: number, sharedFinding: number;
 const mails = async () => (await t.request().get('/api/dev/mail')).body as CapturedMail[];
 const ripple = { location: 'HT after smoothing', quantity: 'ac-voltage', expected: '1', tolerance: 'max', reading: '9' } as const;
