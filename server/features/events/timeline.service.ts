@@ -76,7 +76,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           : e.kind === 'help-link-made' ? `Read-only help link made, until ${String((e.data as { expiresAt?: string }).expiresAt ?? '').slice(0, 10)}`
           : e.kind === 'help-link-withdrawn' ? 'Read-only help link withdrawn'
           : e.kind === 'cause-checked' ? `Checklist: ${String(e.data.cause ?? '')} ${String(e.data.result ?? '')}`.trim()
-          : e.kind === 'reading-requested' ? `A mentor asked: ${String(e.data.body ?? '')}`
+          : e.kind === 'reading-requested' ? `Asked for: ${String(e.data.body ?? '')}`
           : e.kind === 'reading-answered' ? `Answered the request: ${String(e.data.body ?? '')}`
           : e.kind === 'estimate-sent' ? `Estimate version ${String(e.data.version)} sent to the owner`
           : e.kind === 'estimate-decided' ? `Estimate version ${String(e.data.version)} ${String(e.data.decision)} by ${String(e.data.name)}`
