@@ -12,6 +12,8 @@ import { eventsRoutes } from './features/events/events.routes';
 import { findingsRoutes } from './features/findings/findings.routes';
 import { healthRoutes } from './features/health/health.routes';
 import { helpRoutes } from './features/help/help.routes';
+import { readingRequestsRoutes } from './features/reading-requests/reading-requests.routes';
+import { symptomChecksRoutes } from './features/symptom-checks/symptom-checks.routes';
 import { privateSharedPage, sharedHelpRoutes } from './features/help/shared-help.routes';
 import { invitationsRoutes } from './features/invitations/invitations.routes';
 import { membersRoutes } from './features/members/members.routes';
@@ -91,6 +93,8 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(sheetsRoutes(deps));
   api.use(referencesRoutes(deps));
   api.use(helpRoutes(deps));
+  api.use(symptomChecksRoutes(deps));
+  api.use(readingRequestsRoutes(deps));
   api.use(estimatesRoutes(deps));
   api.use(labourRoutes(deps));
   api.use(invoicesRoutes(deps));

@@ -170,12 +170,14 @@ const ownerPart: Condition = { any: [{ field: 'part.state', is: 'fitted' }, { fi
 const sinceShared = (entity: 'event' | 'change'): Condition => ({ field: `${entity}.createdAt`, after: 'finding.sharedAt' });
 const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all: [{ field: 'event.kind', is: kind }, ...conditions] });
 
-export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark', 'estimate'] as const;
+export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark', 'estimate',
+  'readingRequest', 'symptomCheck'] as const;
 export type VisibilitySubject = (typeof visibilitySubjects)[number];
 
 const all: Condition = { always: true };
 const everything: Record<VisibilitySubject, Condition> = {
   photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, sheetPage: all, referenceMark: all, estimate: all,
+  readingRequest: all, symptomCheck: all,
 };
 /** Mentors help with the work and see none of its money. */
 const noMoney: Condition = { never: true };
@@ -226,6 +228,13 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
     /** An in-app notification or its e-mail, judged when read or sent, not when written. */
     /** An estimate once sent to them; drafts stay in the workshop. */
     estimate: { field: 'estimate.sent', is: true },
+    /** A mentor's request for a reading is the workshop's business. */
+    readingRequest: { never: true },
+    /**
+     * A cause of the symptom checklist and how it came out, as a help link's reader reads it (owners have no route
+     * to the checklist itself): its note is never sent, its reading and finding follow their own rules.
+     */
+    symptomCheck: all,
     notification: { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
   },
 };

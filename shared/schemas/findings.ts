@@ -124,11 +124,14 @@ export type FindingChange = z.infer<typeof findingChangeSchema>;
 
 export const notificationSchema = z.object({
   id: z.number().int(),
-  kind: z.enum(['mention', 'question', 'reply']),
+  kind: z.enum(['mention', 'question', 'reply', 'help-request', 'reading-requested', 'reading-answered']),
   summary: z.string(),
   restorationId: z.number().int(),
-  findingId: z.number().int(),
-  photoId: z.number().int(),
+  /** What it is about: a finding on a photo, or (both null) the restoration's help requests. */
+  findingId: z.number().int().nullable(),
+  photoId: z.number().int().nullable(),
+  helpRequestId: z.number().int().nullable(),
+  readingRequestId: z.number().int().nullable(),
   read: z.boolean(),
   createdAt: z.string(),
 });
@@ -149,3 +152,7 @@ export type OpenQuestion = z.infer<typeof openQuestionSchema>;
 /** The link that opens a finding on its photo, zoomed onto it. */
 export const findingPath = (f: { restorationId: number; photoId: number; id: number }) =>
   `/restorations/${f.restorationId}/photos/${f.photoId}/findings/${f.id}`;
+
+/** Where a notification leads: its finding, or the Help tab for help requests and requests for readings. */
+export const notificationPath = (n: { restorationId: number; findingId: number | null; photoId: number | null }) =>
+  n.findingId !== null && n.photoId !== null ? findingPath({ restorationId: n.restorationId, photoId: n.photoId, id: n.findingId }) : `/restorations/${n.restorationId}/help`;

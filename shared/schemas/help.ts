@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import type { Shape, NormalisedPoint } from './findings';
+import { symptomIds } from '../bench/symptoms';
 import { bodyIdSchema, idSchema } from './ids';
+import type { SymptomCheck } from './symptom-checks';
 
 /** A help request: the symptom in the technician's words; everything else is pre-filled from the restoration. */
 export const helpRequestInputSchema = z.object({ symptom: z.string().trim().min(1, 'describe the symptom').max(4000) });
@@ -13,6 +15,8 @@ export const helpRequestPatchSchema = z.object({
   partIds: z.array(bodyIdSchema).max(500).optional(),
   measurementIds: z.array(bodyIdSchema).max(500).optional(),
   photoIds: z.array(bodyIdSchema).max(100).optional(),
+  /** Symptoms of the checklist whose causes and results go with the request. */
+  symptomIds: z.array(z.enum(symptomIds as [string, ...string[]])).max(50).optional(),
 });
 export type HelpRequestPatch = z.infer<typeof helpRequestPatchSchema>;
 
@@ -39,7 +43,13 @@ export interface HelpReading {
   id: number; location: string; quantity: string; expected: string; tolerance: string; reading: string; conditions: string;
   meter: string; chartMeter: string; verdict: 'within' | 'marginal' | 'out' | 'unknown'; verdictReason: string; measuredAt: string;
 }
-export interface HelpPin { id: number; number: number; shape: Shape; points: NormalisedPoint[]; title: string; componentRef: string; kind: string; severity: string; status: string }
+export interface HelpPin {
+  id: number; number: number; shape: Shape; points: NormalisedPoint[]; title: string; componentRef: string; kind: string; severity: string; status: string;
+  /** A signed URL of the close-up of the marked spot; null when it could not be cut. */
+  closeupUrl: string | null;
+}
+/** A symptom of the checklist with the results of its causes (causes, tests and sources come from shared/bench/symptoms). */
+export interface HelpChecklist { symptomId: string; checks: SymptomCheck[] }
 export interface HelpPhoto { id: number; caption: string; view: string; phase: string; width: number; height: number; url: string; thumbUrl: string; pins: HelpPin[] }
 export interface HelpReply { id: number; name: string; body: string; createdAt: string; approved: boolean }
 
@@ -54,6 +64,7 @@ export interface HelpContent {
   parts: HelpPart[];
   readings: HelpReading[];
   photos: HelpPhoto[];
+  checklist: HelpChecklist[];
   replies: HelpReply[];
 }
 
@@ -64,6 +75,7 @@ export interface HelpRequest extends HelpContent {
   partIds: number[];
   measurementIds: number[];
   photoIds: number[];
+  symptomIds: string[];
   links: { id: number; expiresAt: string; revokedAt: string | null; createdAt: string }[];
 }
 export interface HelpRequestSummary { id: number; symptom: string; createdAt: string; pendingReplies: number }

@@ -15,7 +15,7 @@ import { invoicesService } from '../../server/features/invoices/invoices.service
 import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { helpRepo } from '../../server/features/help/help.repo';
 import { newToken } from '../../server/features/auth/tokens';
-import { comments, events, findings, measurements, memberships, notifications, parts, photos } from '../../server/db/schema';
+import { comments, events, findings, measurements, memberships, notifications, parts, photos, readingRequests } from '../../server/db/schema';
 import { twoToneJpeg } from '../factories/images';
 import { createRestoration } from '../factories/restorations';
 import { anonymous, createUser, signedIn } from '../factories/users';
@@ -26,7 +26,8 @@ import { startTestApp } from '../support/test-app';
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
 type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; pageId: number; markId: number;
-  helpRequestId: number; helpToken: string; replyId: number; estimateId: number; draftEstimateId: number; invoiceId: number };
+  helpRequestId: number; helpToken: string; replyId: number; estimateId: number; draftEstimateId: number; invoiceId: number;
+  symptomId: string; causeId: string; readingRequestId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?, 'fresh people'?];
 
@@ -137,6 +138,13 @@ const matrix: Row[] = [
   ['POST', '/api/help-requests/:helpRequestId/links', [201, 403, 403, 404, 401], () => ({})],
   ['DELETE', '/api/help-links/:helpToken', [204, 403, 403, 404, 401]],
   ['POST', '/api/help-replies/:replyId/approve', [200, 403, 403, 404, 401]],
+  // The symptom checklist and requests for readings are the workshop's: mentors ask, the technician answers.
+  ['GET', '/api/restorations/:id/symptom-checks', [200, 200, 403, 404, 401]],
+  ['PUT', '/api/restorations/:id/symptom-checks/:symptomId/:causeId', [200, 403, 403, 404, 401], () => ({ result: 'ruled-out', note: 'Earth tags all below 0.2 Ω' })],
+  ['GET', '/api/restorations/:id/reading-requests', [200, 200, 403, 404, 401]],
+  ['POST', '/api/restorations/:id/reading-requests', [201, 201, 403, 404, 401], () => ({ kind: 'reading', body: 'Measure V3 pin 6 with no signal' })],
+  ['GET', '/api/reading-requests', [200, 200, 200, 200, 401]],
+  ['POST', '/api/reading-requests/:readingRequestId/answer', [200, 403, 403, 404, 401], () => ({ note: 'V3 pin 6 reads 95 V with no signal' })],
   // The link is the key: anyone holding it reads the request and may leave a reply, which is held.
   ['GET', '/api/shared/help/:helpToken', [200, 200, 200, 200, 200]],
   ['POST', '/api/shared/help/:helpToken/replies', [202, 202, 202, 202, 202], () => ({ name: 'Club member', body: 'Check the smoothing capacitors first.' })],
@@ -211,8 +219,10 @@ async function fixture(): Promise<Fixture> {
   const estimateId = (await estimates.create(r.id, { note: '', send: true, lines: [{ kind: 'part', description: 'Capacitors', low: 1000, high: 1500 }] }, people.technician!.id, 'technician')).id;
   const draftEstimateId = (await estimates.create(r.id, { note: '', send: false, lines: [{ kind: 'part', description: 'Capacitors', low: 1200, high: 1500 }] }, people.technician!.id, 'technician')).id;
   const invoiceId = (await invoicesService(t.deps).deposit(r.id, { amount: 5000 }, people.technician!.id)).id;
+  const readingRequestId = (await t.db.insert(readingRequests).values({ restorationId: r.id, helpRequestId: helpRequest.id, kind: 'reading', body: 'Measure V3 pin 6', askedById: people.mentor!.id })
+    .returning({ id: readingRequests.id }))[0]!.id;
   return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, pageId, markId,
-    helpRequestId: helpRequest.id, helpToken: link.token, replyId, estimateId, draftEstimateId, invoiceId };
+    helpRequestId: helpRequest.id, helpToken: link.token, replyId, estimateId, draftEstimateId, invoiceId, symptomId: 'hum', causeId: 'poor-earth', readingRequestId };
 }
 
 /** New people who each hold one role on one new set, and one who holds none. */
@@ -297,6 +307,7 @@ const sharedMatrix: SharedRow[] = [
   // The help link's reader is judged like an owner: the same shared work, nothing internal.
   ['owner', 'GET', '/api/shared/help/:helpToken', 200],
   ['owner', 'GET', '/api/help-requests', 200],
+  ['owner', 'GET', '/api/reading-requests', 200],
   ['mentor', 'PATCH', '/api/findings/:mentorFindingId', 200, () => ({ title: 'Check this joint again' })],
   ['mentor', 'PATCH', '/api/findings/:mentorFindingId', 403, () => ({ ownerVisible: true })],
   ['mentor', 'DELETE', '/api/findings/:mentorFindingId', 204],

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { pdfPages } from '../support/pdf-text';
 import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 
@@ -37,12 +38,23 @@ describe('asking for help outside the workshop', () => {
     await stranger.getByTestId('help-pin').first().waitFor({ state: 'attached' });
     const pins = await stranger.getByTestId('help-pin').evaluateAll((els) => els.map((e) => ({ x: Number(e.getAttribute('data-x')), y: Number(e.getAttribute('data-y')) })));
     expect(pins).toContainEqual(target.c27);
+    // Each pinned spot comes with its close-up, cut from the original and signed for this reader.
+    const closeup = stranger.getByTestId('help-closeup').first();
+    await closeup.waitFor();
+    await expect.poll(async () => closeup.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth > 0)).toBe(true);
     expect(await stranger.locator('meta[name="robots"]').getAttribute('content')).toMatch(/noindex/);
     expect(await stranger.getByText('Positive grid with a red anode').count()).toBe(0);
     expect(await stranger.getByText('Perished rubber wiring').count()).toBe(0);
     expect(await stranger.getByText('Imogen').count()).toBe(0);
     expect(await stranger.getByRole('button', { name: 'Sign out' }).count()).toBe(0);
     await expectAccessible(stranger, 'shared help page');
+    // Printed (A4, print CSS), the request fits one or two pages and leaves out the reply form.
+    await stranger.emulateMedia({ media: 'print' });
+    expect(await stranger.getByRole('button', { name: 'Send reply' }).isVisible()).toBe(false);
+    const printed = await pdfPages(await stranger.pdf({ format: 'A4', preferCSSPageSize: true }));
+    expect(printed.length).toBeLessThanOrEqual(2);
+    expect(printed.join('\n')).toContain('HT at can section A');
+    await stranger.emulateMedia({ media: 'screen' });
 
     await stranger.getByLabel('Your name').fill('Club member');
     await stranger.getByLabel('Your reply').fill('Check the new grid leak is really 470 kΩ and measure V5 pin 2 again warm.');

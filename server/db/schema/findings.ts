@@ -1,6 +1,7 @@
-import { boolean, index, integer, jsonb, pgEnum, pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { boolean, index, integer, jsonb, pgEnum, pgTable, serial, text, timestamp, uniqueIndex, type AnyPgColumn } from 'drizzle-orm/pg-core';
 import { kinds, severities, shapes, statuses, type NormalisedPoint } from '../../../shared/schemas/findings';
 import { timestamps } from './columns';
+import { helpRequests, readingRequests } from './help';
 import { photos } from './photos';
 import { restorations } from './restorations';
 import { users } from './users';
@@ -89,7 +90,7 @@ export const comments = pgTable(
   ],
 );
 
-export const notificationKindEnum = pgEnum('notification_kind', ['mention', 'question', 'reply']);
+export const notificationKindEnum = pgEnum('notification_kind', ['mention', 'question', 'reply', 'help-request', 'reading-requested', 'reading-answered']);
 
 /** An unread item for one person; e-mails are batched from these rows (several instances share them). */
 export const notifications = pgTable(
@@ -102,9 +103,10 @@ export const notifications = pgTable(
     restorationId: integer()
       .notNull()
       .references(() => restorations.id, { onDelete: 'cascade' }),
-    findingId: integer()
-      .notNull()
-      .references(() => findings.id, { onDelete: 'cascade' }),
+    /** What the item is about: a finding (and maybe its comment), a help request, or a request for a reading. */
+    findingId: integer().references(() => findings.id, { onDelete: 'cascade' }),
+    helpRequestId: integer().references((): AnyPgColumn => helpRequests.id, { onDelete: 'cascade' }),
+    readingRequestId: integer().references((): AnyPgColumn => readingRequests.id, { onDelete: 'cascade' }),
     commentId: integer().references(() => comments.id, { onDelete: 'cascade' }),
     kind: notificationKindEnum().notNull(),
     /** One line for the list and the e-mail, written for this recipient (no internal text for owners). */
@@ -121,5 +123,7 @@ export const notifications = pgTable(
     index('notifications_restoration_id_idx').on(t.restorationId),
     index('notifications_finding_id_idx').on(t.findingId),
     index('notifications_comment_id_idx').on(t.commentId),
+    index('notifications_help_request_id_idx').on(t.helpRequestId),
+    index('notifications_reading_request_id_idx').on(t.readingRequestId),
   ],
 );

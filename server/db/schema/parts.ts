@@ -44,7 +44,7 @@ export const eventKindEnum = pgEnum('event_kind', [
   'photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
   'safety-test', 'safety-override', 'soak-session', 'report-sent',
   'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
-  'help-requested', 'help-link-made', 'help-link-withdrawn',
+  'help-requested', 'help-link-made', 'help-link-withdrawn', 'cause-checked', 'reading-requested', 'reading-answered',
   'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided',
 ]);
 

@@ -75,6 +75,9 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           : e.kind === 'help-requested' ? 'Asked for help'
           : e.kind === 'help-link-made' ? `Read-only help link made, until ${String((e.data as { expiresAt?: string }).expiresAt ?? '').slice(0, 10)}`
           : e.kind === 'help-link-withdrawn' ? 'Read-only help link withdrawn'
+          : e.kind === 'cause-checked' ? `Checklist: ${String(e.data.cause ?? '')} ${String(e.data.result ?? '')}`.trim()
+          : e.kind === 'reading-requested' ? `Asked for: ${String(e.data.body ?? '')}`
+          : e.kind === 'reading-answered' ? `Answered the request: ${String(e.data.body ?? '')}`
           : e.kind === 'estimate-sent' ? `Estimate version ${String(e.data.version)} sent to the owner`
           : e.kind === 'estimate-decided' ? `Estimate version ${String(e.data.version)} ${String(e.data.decision)} by ${String(e.data.name)}`
           : e.kind === 'labour-logged' ? `Time logged: ${String(e.data.minutes)} min${e.data.billable ? '' : ' (not billable)'}`

@@ -6,7 +6,7 @@ import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-s
 
 export type FindingRow = typeof findings.$inferSelect;
 export type FindingWithContext = FindingRow & { authorName: string | null; photoOwnerVisible: boolean; commentCount: number };
-type NewFinding = Omit<typeof findings.$inferInsert, 'number' | 'id'>;
+export type NewFinding = Omit<typeof findings.$inferInsert, 'number' | 'id'>;
 
 const findingSources = { finding: columnsOf(findings), photo: columnsOf(photos) };
 

@@ -8,9 +8,20 @@ import { ensureCloseup, scheduleCloseup } from '../closeups/closeups';
 import { notificationsService } from '../notifications/notifications.service';
 import { photosRepo } from '../photos/photos.repo';
 import { photoFindingsJson } from './findings-json';
-import { findingsRepo, type FindingWithContext } from './findings.repo';
+import { findingsRepo, type FindingWithContext, type NewFinding } from './findings.repo';
+import type { Executor } from '../../db/client';
 
 type Actor = { id: number; name: string; role: Role };
+
+/**
+ * Opens a finding with its history line on the caller's transaction (a checklist's confirmed cause opens one
+ * too). The caller cuts its close-up after the commit with `scheduleCloseup`.
+ */
+export async function openFindingIn(tx: Executor, values: NewFinding, actorId: number): Promise<number> {
+  const id = await findingsRepo(tx).insert(values);
+  await recordEvent(tx, { restorationId: values.restorationId, kind: 'finding-opened', actorId, findingId: id, photoId: values.photoId });
+  return id;
+}
 
 /** A finding as the API sends it; a question to the mentors is the workshop's business, so others read it as closed. */
 export const toFinding = (f: FindingWithContext, reader?: Role): Finding => ({
@@ -55,15 +66,11 @@ export function findingsService(deps: AppDeps) {
       if (!photo || !can(actor.role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
       if (!can(actor.role, 'findings.create')) throw new ForbiddenError('Owners follow findings; technicians and mentors place them.');
       if (input.ownerVisible && !can(actor.role, 'findings.share')) throw new ForbiddenError('Only a technician shares findings with the owner.');
-      const id = await deps.db.transaction(async (tx) => {
-        const created = await findingsRepo(tx).insert({
-          restorationId: photo.restorationId, photoId, shape: input.shape, points: input.points, title: input.title,
-          componentRef: input.componentRef ?? '', kind: input.kind ?? 'note', severity: input.severity ?? 'info',
-          ownerVisible: input.ownerVisible, authorId: actor.id,
-        });
-        await recordEvent(tx, { restorationId: photo.restorationId, kind: 'finding-opened', actorId: actor.id, findingId: created, photoId });
-        return created;
-      });
+      const id = await deps.db.transaction((tx) => openFindingIn(tx, {
+        restorationId: photo.restorationId, photoId, shape: input.shape, points: input.points, title: input.title,
+        componentRef: input.componentRef ?? '', kind: input.kind ?? 'note', severity: input.severity ?? 'info',
+        ownerVisible: input.ownerVisible, authorId: actor.id,
+      }, actor.id));
       const created = (await repo.find(id, actor.role))!;
       scheduleCloseup(deps, photo, created);
       return toFinding(created);

@@ -2,10 +2,12 @@ import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { HelpContent, HelpPhoto, HelpReply } from '../../../shared/schemas/help';
 import type { AppDeps } from '../../app-deps';
-import type { Executor } from '../../db/client';
+import { redactedError } from '../../http/redact-error';
 import type { helpRequests } from '../../db/schema';
 import { findings, helpReplies, measurements, parts, photos, restorations, valves } from '../../db/schema';
+import { ensureCloseup } from '../closeups/closeups';
 import { photoKeys } from '../photos/photo-objects';
+import { listSymptomChecks } from '../symptom-checks/symptom-checks.repo';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 export type HelpRequestRow = typeof helpRequests.$inferSelect;
@@ -16,7 +18,7 @@ export type HelpRequestRow = typeof helpRequests.$inferSelect;
  * sources, no comments, no names of the owner or the workshop's people, and no serial number (it identifies
  * the owner's set).
  */
-export async function helpContent(deps: Pick<AppDeps, 'storage'> & { db: Executor }, request: HelpRequestRow, role: Role, replies: 'approved' | 'all'): Promise<HelpContent> {
+export async function helpContent(deps: Pick<AppDeps, 'storage' | 'logger' | 'db' | 'config'>, request: HelpRequestRow, role: Role, replies: 'approved' | 'all'): Promise<HelpContent> {
   const { db, storage } = deps;
   const rule = (subject: 'photo' | 'finding' | 'part' | 'reading') =>
     visibleSql(role, subject, { photo: columnsOf(photos), finding: columnsOf(findings), part: columnsOf(parts), reading: columnsOf(measurements) });
@@ -41,16 +43,27 @@ export async function helpContent(deps: Pick<AppDeps, 'storage'> & { db: Executo
     .where(and(eq(helpReplies.helpRequestId, request.id), replies === 'approved' ? sql`${helpReplies.approvedAt} is not null` : undefined))
     .orderBy(asc(helpReplies.createdAt), asc(helpReplies.id));
 
+  // Close-ups only of the pins this reader may see, on photos they may see; cut now if the background job has not.
+  const closeup = async (p: typeof photoRows[number], f: typeof pinRows[number]) => {
+    try {
+      return await storage.getSignedUrl(await ensureCloseup(deps, p, f));
+    } catch (err) {
+      deps.logger.warn({ err: redactedError(err) }, `close-up for finding ${f.id} failed`);
+      return null;
+    }
+  };
   const photoList: HelpPhoto[] = await Promise.all(photoRows.map(async (p) => {
     const keys = photoKeys(p.storageKey);
     const [url, thumbUrl] = await Promise.all([storage.getSignedUrl(keys.display), storage.getSignedUrl(keys.thumb)]);
     return {
       id: p.id, caption: p.caption, view: p.view, phase: p.phase, width: p.width, height: p.height, url, thumbUrl,
-      pins: pinRows.filter((f) => f.photoId === p.id).map((f) => ({
+      pins: await Promise.all(pinRows.filter((f) => f.photoId === p.id).map(async (f) => ({
         id: f.id, number: f.number, shape: f.shape, points: f.points, title: f.title, componentRef: f.componentRef, kind: f.kind, severity: f.severity, status: f.status,
-      })),
+        closeupUrl: await closeup(p, f),
+      }))),
     };
   }));
+  const checks = await listSymptomChecks(db, request.restorationId, role, request.symptomIds);
   const part = (name: string, rating: string) => [name, rating].filter(Boolean).join(' ');
   return {
     id: request.id,
@@ -65,6 +78,7 @@ export async function helpContent(deps: Pick<AppDeps, 'storage'> & { db: Executo
       meter: m.meterText || m.method, chartMeter: m.chartMeterText, verdict: m.verdict, verdictReason: m.verdictReason, measuredAt: m.measuredAt.toISOString(),
     })),
     photos: photoList,
+    checklist: request.symptomIds.map((symptomId) => ({ symptomId, checks: checks.filter((c) => c.symptomId === symptomId) })),
     replies: replyRows.map((r): HelpReply => ({ id: r.id, name: r.name, body: r.body, createdAt: r.createdAt.toISOString(), approved: r.approvedAt !== null })),
   };
 }

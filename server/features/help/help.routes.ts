@@ -22,7 +22,7 @@ export function helpRoutes(deps: AppDeps): Router {
   const router = Router();
   router.post('/restorations/:id/help-requests', requireUser, validate(create), guard(db, 'help.ask'), async (req, res) => {
     const { params, body } = input(res, create);
-    res.status(201).json(await help.create(params.id, body.symptom, req.user!.id, roleOf(res)));
+    res.status(201).json(await help.create(params.id, body.symptom, { id: req.user!.id, name: req.user!.name }, roleOf(res)));
   });
   router.get('/restorations/:id/help-requests', requireUser, validate(list), guard(db, 'help.view'), async (_req, res) => {
     res.json(await help.list(input(res, list).params.id));

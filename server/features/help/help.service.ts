@@ -3,14 +3,16 @@ import type { Role } from '../../../shared/permissions';
 import { HELP_LINK_DAYS, type BenchHelpRequest, type HelpLinkCreated, type HelpRequest, type HelpRequestPatch, type HelpRequestSummary } from '../../../shared/schemas/help';
 import type { AppDeps } from '../../app-deps';
 import type { Executor } from '../../db/client';
-import { findings, measurements, parts, photos } from '../../db/schema';
+import { findings, measurements, parts, photos, restorations } from '../../db/schema';
+import { unitOfWork } from '../../db/unit-of-work';
+import { notificationsService } from '../notifications/notifications.service';
+import { symptomChecksRepo } from '../symptom-checks/symptom-checks.repo';
 import { BadRequestError, NotFoundError } from '../../http/errors';
 import { hashToken, newToken } from '../auth/tokens';
 import { recordEvent } from '../events/record-event';
 import { helpContent, type HelpRequestRow } from './help-content';
 import { helpRepo } from './help.repo';
 
-type HelpDeps = Pick<AppDeps, 'db' | 'storage' | 'config'>;
 
 /** Everything a restoration offers a help request, pre-filled: fitted parts, every reading, photos with pins. */
 async function prefill(db: Executor, restorationId: number) {
@@ -19,7 +21,8 @@ async function prefill(db: Executor, restorationId: number) {
   const measurementIds = (await db.select({ id: measurements.id }).from(measurements).where(eq(measurements.restorationId, restorationId))).map((r) => r.id);
   const photoIds = (await db.selectDistinct({ id: photos.id }).from(photos).innerJoin(findings, eq(findings.photoId, photos.id))
     .where(and(eq(photos.restorationId, restorationId), isNotNull(findings.id)))).map((r) => r.id);
-  return { partIds, measurementIds, photoIds };
+  const symptomIds = await symptomChecksRepo(db).symptomsChecked(restorationId);
+  return { partIds, measurementIds, photoIds, symptomIds };
 }
 
 /** Ids the technician chose must be on this restoration; anything else is refused, never silently kept. */
@@ -36,25 +39,30 @@ async function assertOwnIds(db: Executor, restorationId: number, patch: HelpRequ
   }
 }
 
-export function helpService(deps: HelpDeps) {
+export function helpService(deps: AppDeps) {
   const { db } = deps;
   const repo = helpRepo(db);
+  const notifications = notificationsService(deps);
 
   async function full(row: HelpRequestRow, role: Role): Promise<HelpRequest> {
     const content = await helpContent(deps, row, role, 'all');
     const links = await repo.links(row.id);
     return {
       ...content,
-      includeSet: row.includeSet, includeValves: row.includeValves, partIds: row.partIds, measurementIds: row.measurementIds, photoIds: row.photoIds,
+      includeSet: row.includeSet, includeValves: row.includeValves, partIds: row.partIds, measurementIds: row.measurementIds, photoIds: row.photoIds, symptomIds: row.symptomIds,
       links: links.map((l) => ({ id: l.id, expiresAt: l.expiresAt.toISOString(), revokedAt: l.revokedAt?.toISOString() ?? null, createdAt: l.createdAt.toISOString() })),
     };
   }
 
   return {
-    async create(restorationId: number, symptom: string, userId: number, role: Role) {
-      const row = await db.transaction(async (tx) => {
-        const created = await helpRepo(tx).insert({ restorationId, symptom, authorId: userId, ...(await prefill(tx, restorationId)) });
-        await recordEvent(tx, { restorationId, kind: 'help-requested', actorId: userId, data: { helpRequestId: created.id } });
+    /** The request, its history line and the mentors' notifications (a question on their bench) commit together. */
+    async create(restorationId: number, symptom: string, actor: { id: number; name: string }, role: Role) {
+      const row = await unitOfWork(db, async (tx, afterCommit) => {
+        const created = await helpRepo(tx).insert({ restorationId, symptom, authorId: actor.id, ...(await prefill(tx, restorationId)) });
+        await recordEvent(tx, { restorationId, kind: 'help-requested', actorId: actor.id, data: { helpRequestId: created.id } });
+        const [set] = await tx.select({ make: restorations.make, model: restorations.model }).from(restorations).where(eq(restorations.id, restorationId));
+        await notifications.helpRequested(tx, { id: created.id, restorationId, symptom, set: `${set!.make} ${set!.model}` }, actor);
+        afterCommit(notifications.kick);
         return created;
       });
       return full(row, role);

@@ -13,7 +13,7 @@ export const helpReplyLimits = { perIp: 20, perLink: 30, windowSeconds: 3600 };
  * What a link's holder may do without an account: read the request as an owner would see it, and leave a
  * reply that waits for a technician. Unknown, expired and revoked links are all the same 404.
  */
-export function sharedHelpService(deps: Pick<AppDeps, 'db' | 'pool' | 'storage'>) {
+export function sharedHelpService(deps: Pick<AppDeps, 'db' | 'pool' | 'storage' | 'logger' | 'config'>) {
   const repo = helpRepo(deps.db);
   const limiter = (keyPrefix: string, points: number) =>
     new RateLimiterPostgres({ storeClient: deps.pool, storeType: 'pool', tableName: 'throttles', tableCreated: true, clearExpiredByTimeout: false,

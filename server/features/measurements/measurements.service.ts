@@ -71,15 +71,17 @@ export function measurementsService(db: Database) {
       return rows.map((r) => toMeasurement({ ...r.m, measuredBy: r.measuredBy, findingId: r.findingVisible ? r.m.findingId : null }));
     },
     async create(restorationId: number, input: Fields, userId: number) {
-      const verdict = judge(input);
-      const id = await db.transaction(async (tx) => {
-        await assertFinding(tx, restorationId, input.findingId);
-        if (input.powerOn) await assertPrePowerSignedOff(tx, restorationId, 'recording a reading taken with the set powered');
-        const [row] = await tx.insert(measurements).values({ restorationId, ...columns(input), ...verdict, measuredById: userId }).returning({ id: measurements.id });
-        if (verdict.verdict === 'out') await recordEvent(tx, { restorationId, kind: 'measurement-out', actorId: userId, measurementId: row!.id, findingId: input.findingId ?? null });
-        return row!.id;
-      });
+      const id = await db.transaction((tx) => this.createIn(tx, restorationId, input, userId));
       return toMeasurement((await find(id))!);
+    },
+    /** Records a reading on the caller's transaction (an answer or a checklist result that files one); returns its id. */
+    async createIn(tx: Executor, restorationId: number, input: Fields, userId: number) {
+      const verdict = judge(input);
+      await assertFinding(tx, restorationId, input.findingId);
+      if (input.powerOn) await assertPrePowerSignedOff(tx, restorationId, 'recording a reading taken with the set powered');
+      const [row] = await tx.insert(measurements).values({ restorationId, ...columns(input), ...verdict, measuredById: userId }).returning({ id: measurements.id });
+      if (verdict.verdict === 'out') await recordEvent(tx, { restorationId, kind: 'measurement-out', actorId: userId, measurementId: row!.id, findingId: input.findingId ?? null });
+      return row!.id;
     },
     /** Recomputes the verdict from the merged texts whenever anything changes. */
     async update(id: number, patch: Partial<MeasurementInput>, userId: number) {

@@ -52,9 +52,34 @@ export function notificationsService(deps: AppDeps) {
             summary: `${actor.name} mentioned you on ${label(f)}: ${excerpt(c.body)}` });
       await notificationsRepo(tx).insert([...rows.values()]);
     },
+    /** A help request waits on each mentor's bench as a question; owners are never told of it. */
+    async helpRequested(tx: Executor, h: { id: number; restorationId: number; symptom: string; set: string }, actor: { id: number; name: string }) {
+      const mentors = await notificationsRepo(tx).membersWithRole(h.restorationId, ['mentor']);
+      await notificationsRepo(tx).insert(mentors.filter((m) => m.userId !== actor.id).map((m): NewNotification => ({
+        userId: m.userId, restorationId: h.restorationId, helpRequestId: h.id, kind: 'help-request',
+        summary: `${actor.name} asks for help with the ${h.set}: ${excerpt(h.symptom)}`,
+      })));
+    },
+    /** A request for a reading is a task for every technician of the set (but the one who asked). */
+    async readingRequested(tx: Executor, r: { id: number; restorationId: number; body: string; helpRequestId: number | null; set: string }, actor: { id: number; name: string }) {
+      const technicians = await notificationsRepo(tx).membersWithRole(r.restorationId, ['technician']);
+      await notificationsRepo(tx).insert(technicians.filter((m) => m.userId !== actor.id).map((m): NewNotification => ({
+        userId: m.userId, restorationId: r.restorationId, readingRequestId: r.id, helpRequestId: r.helpRequestId, kind: 'reading-requested',
+        summary: `${actor.name} asks, on the ${r.set}: ${excerpt(r.body)}`,
+      })));
+    },
+    /** The asker hears that their request was answered (if they are still on the restoration: the list and mail judge it). */
+    async readingAnswered(tx: Executor, r: { id: number; restorationId: number; body: string; helpRequestId: number | null; askedById: number | null; set: string }, answer: string, actor: { id: number; name: string }) {
+      if (!r.askedById || r.askedById === actor.id) return;
+      await notificationsRepo(tx).insert([{
+        userId: r.askedById, restorationId: r.restorationId, readingRequestId: r.id, helpRequestId: r.helpRequestId, kind: 'reading-answered',
+        summary: `${actor.name} answered “${excerpt(r.body)}” on the ${r.set}: ${excerpt(answer)}`,
+      }]);
+    },
     async listFor(userId: number, limit?: number, beforeId?: number): Promise<Notification[]> {
       return (await repo.listFor(userId, limit, beforeId)).map(({ n, photoId }) => ({
         id: n.id, kind: n.kind, summary: n.summary, restorationId: n.restorationId, findingId: n.findingId, photoId,
+        helpRequestId: n.helpRequestId, readingRequestId: n.readingRequestId,
         read: n.readAt !== null, createdAt: n.createdAt.toISOString(),
       }));
     },

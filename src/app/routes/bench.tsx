@@ -5,6 +5,7 @@ import { inputClass } from '../../components/field';
 import { EmptyState, ErrorState, Loading } from '../../components/states';
 import { OpenQuestions } from '../../features/findings/components/open-questions';
 import { HelpOnBench } from '../../features/help/components/help-on-bench';
+import { TasksOnBench } from '../../features/help/components/tasks-on-bench';
 import { RecentActivity } from '../../features/history/components/recent-activity';
 import { useRestorations } from '../../features/restorations/api/get-restorations';
 import { StageColumns } from '../../features/restorations/components/stage-columns';
@@ -28,6 +29,7 @@ export function BenchRoute() {
       </div>
       <OpenQuestions />
       <HelpOnBench />
+      <TasksOnBench />
       <div className="max-w-md">
         <label htmlFor="bench-search" className="sr-only">
           Search by make, model or serial

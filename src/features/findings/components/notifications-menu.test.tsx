@@ -14,7 +14,7 @@ afterEach(() => {
 });
 
 const note = (id: number, overrides: Partial<Notification> = {}): Notification => ({
-  id, kind: 'mention', summary: `Note ${id}`, restorationId: 7, findingId: 40 + id, photoId: 3, read: false,
+  id, kind: 'mention', summary: `Note ${id}`, restorationId: 7, findingId: 40 + id, photoId: 3, helpRequestId: null, readingRequestId: null, read: false,
   createdAt: new Date(Date.now() - 5 * 60_000).toISOString(), ...overrides,
 });
 

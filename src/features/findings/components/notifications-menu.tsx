@@ -1,10 +1,10 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import { useNavigate } from 'react-router';
-import { findingPath, type Notification } from '../../../../shared/schemas/findings';
+import { notificationPath, type Notification } from '../../../../shared/schemas/findings';
 import { useMarkNotificationsRead, useNotifications } from '../api/get-notifications';
 import { fullTime, relativeTime } from './finding-format';
 
-const kindGlyph: Record<Notification['kind'], string> = { mention: '@', question: '?', reply: '↩' };
+const kindGlyph: Record<Notification['kind'], string> = { mention: '@', question: '?', reply: '↩', 'help-request': '?', 'reading-requested': '⌁', 'reading-answered': '✓' };
 
 /** The header's bell: unread count on the button, the list in a popover; Escape or a click outside closes it. */
 export function NotificationsMenu() {
@@ -38,7 +38,7 @@ export function NotificationsMenu() {
   const openItem = (n: Notification) => {
     if (!n.read) markRead.mutate([n.id]);
     close(false);
-    void navigate(findingPath({ restorationId: n.restorationId, photoId: n.photoId, id: n.findingId }));
+    void navigate(notificationPath(n));
   };
 
   return (

@@ -4,6 +4,9 @@ export const helpKeys = {
   list: (restorationId: number) => ['restorations', restorationId, 'help-requests'] as const,
   one: (helpRequestId: number) => ['help-requests', helpRequestId] as const,
   shared: (token: string) => ['shared', 'help', token] as const,
+  checks: (restorationId: number) => ['restorations', restorationId, 'symptom-checks'] as const,
+  readingRequests: (restorationId: number) => ['restorations', restorationId, 'reading-requests'] as const,
+  benchReadingRequests: ['reading-requests'] as const,
 };
 
 /** After a write to a request: the request itself and its restoration's list are stale. */

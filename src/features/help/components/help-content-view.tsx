@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import type { HelpContent } from '../../../../shared/schemas/help';
 import { VerdictBadge } from '../../measurements/components/verdict-badge';
+import { HelpChecklistView } from './help-checklist-view';
 import { HelpPhotoFigure } from './help-photo';
 
 const Section = ({ title, children }: { title: string; children: ReactNode }) => (
@@ -13,7 +14,11 @@ const Section = ({ title, children }: { title: string; children: ReactNode }) =>
 const cell = 'border-b border-rule px-2 py-1 text-left align-top';
 
 /** A help request as its reader may see it: the same view in the workshop, on the link and on paper. */
-export function HelpContentView({ content, extra }: { content: HelpContent; extra?: (section: 'readings' | 'parts' | 'photos', id: number) => ReactNode }) {
+export function HelpContentView({ content, extra, removeSymptom }: {
+  content: HelpContent;
+  extra?: (section: 'readings' | 'parts' | 'photos', id: number) => ReactNode;
+  removeSymptom?: (symptomId: string) => ReactNode;
+}) {
   const { set } = content;
   return (
     <div className="space-y-6">
@@ -34,6 +39,11 @@ export function HelpContentView({ content, extra }: { content: HelpContent; extr
       {content.valves && content.valves.length > 0 && (
         <Section title="Valve line-up">
           <p className="font-mono">{content.valves.map((v) => `${v.position} ${v.type}`).join(' · ')}</p>
+        </Section>
+      )}
+      {content.checklist.length > 0 && (
+        <Section title="What was checked">
+          <HelpChecklistView checklist={content.checklist} remove={removeSymptom} />
         </Section>
       )}
       {content.parts.length > 0 && (

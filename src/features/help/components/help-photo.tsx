@@ -5,7 +5,7 @@ export function HelpPhotoFigure({ photo }: { photo: HelpPhoto }) {
   return (
     <figure className="break-inside-avoid space-y-2">
       <div className="relative inline-block max-w-full">
-        <img src={photo.url} alt={photo.caption || `Photo of the ${photo.view}`} width={photo.width} height={photo.height} className="h-auto max-w-full rounded-lg border border-rule" />
+        <img src={photo.url} alt={photo.caption || `Photo of the ${photo.view}`} width={photo.width} height={photo.height} className="h-auto max-w-full rounded-lg border border-rule print:max-h-[9cm] print:w-auto" />
         <svg className="absolute inset-0 h-full w-full" viewBox="0 0 1 1" preserveAspectRatio="none" aria-hidden="true">
           {photo.pins.map((pin) => {
             const p = pin.points[0]!;
@@ -34,6 +34,10 @@ export function HelpPhotoFigure({ photo }: { photo: HelpPhoto }) {
               <li key={pin.id}>
                 <span className="font-mono font-bold">{pin.number}</span> {pin.title}
                 {pin.componentRef && <span className="font-mono"> ({pin.componentRef})</span>} <span className="text-ink-soft">· {pin.status}</span>
+                {pin.closeupUrl && (
+                  <img src={pin.closeupUrl} alt={`Close-up of spot ${pin.number}: ${pin.title}`} loading="lazy" data-testid="help-closeup"
+                    className="mt-1 block max-h-40 rounded border border-rule print:max-h-32" />
+                )}
               </li>
             ))}
           </ol>

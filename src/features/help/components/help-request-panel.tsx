@@ -1,3 +1,4 @@
+import { findSymptom } from '../../../../shared/bench/symptoms';
 import type { HelpRequest, HelpRequestPatch } from '../../../../shared/schemas/help';
 import { Button } from '../../../components/button';
 import { ErrorState, Loading } from '../../../components/states';
@@ -38,6 +39,12 @@ export function HelpRequestPanel({ restorationId, helpRequestId, canEdit }: { re
         content={r}
         extra={canEdit ? (section, id) => (
           <Button variant="quiet" className="min-h-8 px-2 py-0 text-sm print:hidden" disabled={update.isPending} onClick={() => remove(section, id)} aria-label={`Remove ${section.slice(0, -1)} ${id} from the request`}>
+            Remove
+          </Button>
+        ) : undefined}
+        removeSymptom={canEdit ? (symptomId) => (
+          <Button variant="quiet" className="min-h-8 px-2 py-0 text-sm print:hidden" disabled={update.isPending}
+            onClick={() => update.mutate({ symptomIds: r.symptomIds.filter((x) => x !== symptomId) })} aria-label={`Remove the checklist for ${findSymptom(symptomId)?.title ?? symptomId} from the request`}>
             Remove
           </Button>
         ) : undefined}

@@ -4,6 +4,8 @@ import { EmptyState, ErrorState, Loading } from '../../../components/states';
 import { useHelpRequests } from '../api/get-help-requests';
 import { HelpRequestPanel } from './help-request-panel';
 import { NewHelpRequestForm } from './new-help-request-form';
+import { ReadingRequestsPanel } from './reading-requests-panel';
+import { SymptomChecklist } from './symptom-checklist';
 
 /** The Help tab: the restoration's help requests; technicians start and share them, mentors read them. */
 export function HelpTab({ restorationId, role }: { restorationId: number; role: Role }) {
@@ -15,6 +17,7 @@ export function HelpTab({ restorationId, role }: { restorationId: number; role: 
   const current = chosen ?? list.data[0]?.id ?? null;
   return (
     <div className="space-y-6">
+      <SymptomChecklist restorationId={restorationId} canEdit={canEdit} />
       {canEdit && <NewHelpRequestForm restorationId={restorationId} onCreated={setChosen} />}
       {list.data.length === 0 ? (
         <EmptyState title="No help requests yet">{canEdit ? 'Describe the symptom above to gather everything a helper asks for.' : 'The technician has not asked for help on this set.'}</EmptyState>
@@ -33,6 +36,7 @@ export function HelpTab({ restorationId, role }: { restorationId: number; role: 
           {current && <HelpRequestPanel key={current} restorationId={restorationId} helpRequestId={current} canEdit={canEdit} />}
         </>
       )}
+      <ReadingRequestsPanel restorationId={restorationId} helpRequestId={current ?? undefined} canAnswer={canEdit} />
     </div>
   );
 }

@@ -20,7 +20,9 @@ const help: SharedHelp = {
   readings: [{ id: 2, location: 'HT after smoothing', quantity: 'dc-voltage', expected: '250', tolerance: '10%', reading: '212', conditions: '', meter: '10 MΩ',
     chartMeter: '1k/V', verdict: 'out', verdictReason: 'below the tolerance', measuredAt: '2026-12-01T09:00:00.000Z' }],
   photos: [{ id: 3, caption: 'Underside', view: 'underside', phase: 'before', width: 600, height: 400, url: '/x.jpg', thumbUrl: '/x-t.jpg',
-    pins: [{ id: 5, number: 1, shape: 'pin', points: [{ x: 0.25, y: 0.75 }], title: 'Leaky C27', componentRef: 'C27', kind: 'leaking', severity: 'fault', status: 'observed' }] }],
+    pins: [{ id: 5, number: 1, shape: 'pin', points: [{ x: 0.25, y: 0.75 }], title: 'Leaky C27', componentRef: 'C27', kind: 'leaking', severity: 'fault', status: 'observed', closeupUrl: '/c.webp' }] }],
+  checklist: [{ symptomId: 'hum', checks: [{ symptomId: 'hum', causeId: 'poor-earth', result: 'confirmed', note: '', checkedBy: null, updatedAt: '2026-12-01T09:30:00.000Z',
+    reading: { id: 8, location: 'V2 earth tag', reading: '4.7', expected: '0.5', verdict: 'out', verdictReason: 'above the tolerance' }, finding: null }] }],
   replies: [],
 };
 const show = () =>
@@ -38,6 +40,10 @@ describe('the shared help page', () => {
     expect(screen.getByRole('row', { name: /HT after smoothing/ })).toHaveTextContent(/250.*212.*out.*10 MΩ.*chart taken with 1k\/V/);
     const pin = screen.getByTestId('help-pin');
     expect([pin.getAttribute('data-x'), pin.getAttribute('data-y')]).toEqual(['0.25', '0.75']);
+    expect(screen.getByRole('img', { name: 'Close-up of spot 1: Leaky C27' })).toHaveAttribute('src', '/c.webp');
+    // The checklist: every cause of the symptom in order, the checked one with its result and reading.
+    const checklist = screen.getByRole('heading', { name: 'Checklist: Loud hum' }).closest('div')!.parentElement!;
+    expect(checklist).toHaveTextContent(/1\. Reservoir .*not checked yet.*2\. Poor earth .*Confirmed.*V2 earth tag read 4\.7/);
     expect(document.querySelector('meta[name="robots"]')).toHaveAttribute('content', expect.stringMatching(/noindex/));
   });
 

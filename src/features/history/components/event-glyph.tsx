@@ -104,6 +104,29 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="M8.5 7a1.5 1.5 0 1 1 2 1.4c-.5.2-.5.6-.5 1.1M10 11.2v.1" />
     </>
   ),
+  // A ticked box: a cause on the symptom checklist checked.
+  'cause-checked': (
+    <>
+      <path d="M4 4h12v12H4Z" />
+      <path d="M7 10l2 2 4-4" />
+    </>
+  ),
+  // A meter needle with a question mark: a mentor asks for a reading.
+  'reading-requested': (
+    <>
+      <path d="M3 14a7 7 0 0 1 14 0" />
+      <path d="M10 14l3-5" />
+      <path d="M15 3.5a1.5 1.5 0 1 1 1.5 1.5v1M16.5 8v.1" />
+    </>
+  ),
+  // A meter needle with a tick: the reading asked for was given.
+  'reading-answered': (
+    <>
+      <path d="M3 14a7 7 0 0 1 14 0" />
+      <path d="M10 14l3-5" />
+      <path d="M13 4l1.5 1.5L17.5 2.5" />
+    </>
+  ),
   // Two chain links: a read-only link made.
   'help-link-made': (
     <>

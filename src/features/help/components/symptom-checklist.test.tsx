@@ -1,0 +1,51 @@
+// @vitest-environment happy-dom
+import '@testing-library/jest-dom/vitest';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { fakeApi, ok } from '../../../testing/fake-api';
+import { SymptomChecklist } from './symptom-checklist';
+
+// The causes and their order are the checklist data's (shared/bench/symptoms, from TRADE.md §5).
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const show = (canEdit: boolean) =>
+  render(
+    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
+      <SymptomChecklist restorationId={9} canEdit={canEdit} />
+    </QueryClientProvider>,
+  );
+
+describe('the symptom checklist', () => {
+  it('when a symptom is chosen, then its causes are listed in order with their tests, and a powered test carries the cautions', async () => {
+    fakeApi(() => ok([]));
+    show(false);
+    fireEvent.change(await screen.findByLabelText('Symptom'), { target: { value: 'hum' } });
+    const causes = await screen.findAllByRole('listitem');
+    expect(causes.map((c) => c.getAttribute('aria-label'))).toEqual([
+      'Reservoir or smoothing electrolytics lost their capacitance', 'Poor earth at a rusted valve-socket rivet or tag', 'Heater-to-cathode leakage in an audio valve',
+    ]);
+    expect(causes[0]).toHaveTextContent(/Measured with the set switched on.*local codes and licensed practice/);
+    expect(causes[1]).not.toHaveTextContent(/Measured with the set switched on/);
+    expect(screen.queryByRole('button', { name: 'Save result' })).toBeNull();
+  });
+
+  it('when the technician confirms a cause with a reading, then it is sent as the result, the reading and no finding', async () => {
+    const api = fakeApi((call) => (call.method === 'PUT' ? ok({}) : ok([])));
+    show(true);
+    fireEvent.change(await screen.findByLabelText('Symptom'), { target: { value: 'hum' } });
+    const earth = await screen.findByRole('listitem', { name: 'Poor earth at a rusted valve-socket rivet or tag' });
+    fireEvent.click(within(earth).getByLabelText('Confirmed'));
+    fireEvent.change(within(earth).getByLabelText('Reading'), { target: { value: '4.7' } });
+    fireEvent.change(within(earth).getByLabelText('Expected (chart)'), { target: { value: '0.5' } });
+    fireEvent.click(within(earth).getByRole('button', { name: 'Save result' }));
+    await vi.waitFor(() => expect(api.calls.some((c) => c.method === 'PUT')).toBe(true));
+    expect(api.calls.find((c) => c.method === 'PUT')).toEqual({
+      method: 'PUT', path: '/restorations/9/symptom-checks/hum/poor-earth',
+      body: { result: 'confirmed', note: '', reading: { location: 'Earth tag to chassis', quantity: 'resistance', expected: '0.5', reading: '4.7', powerOn: false } },
+    });
+  });
+});
