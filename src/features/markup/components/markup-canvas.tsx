@@ -2,6 +2,7 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import type { Finding } from '../../../../shared/schemas/findings';
 import { useCanvasPointer } from '../hooks/use-canvas-pointer';
 import { useContainerSize } from '../hooks/use-container-size';
+import { useCrosshair } from '../hooks/use-crosshair';
 import { useMarkupCommands, type CommandCallbacks } from '../hooks/use-markup-commands';
 import { useMarkupKeys } from '../hooks/use-markup-keys';
 import { useMarkupProbe } from '../hooks/use-markup-probe';
@@ -13,7 +14,9 @@ import { ZOOM_STEP } from '../lib/zoom';
 import { imagePoint } from '../model/coordinates';
 import { bounds, toGeometry } from '../model/geometry';
 import type { Draft, Tool, ToolResult } from '../model/tools';
+import { useStoredFlag } from '../../../lib/use-stored-flag';
 import { CanvasControls } from './canvas-controls';
+import { CrosshairMark } from './crosshair-mark';
 import { MarkupLegend } from './markup-legend';
 import { MarkupStage } from './markup-stage';
 import { ShortcutHelp } from './shortcut-help';
@@ -58,8 +61,15 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   }, [photo.status]);
   const pixelRatio = usePixelRatio();
   const view = useView(imageSize, size);
-  const commands = useMarkupCommands(props);
   const [tool, setTool] = useState<Tool>('select');
+  const [keepTool, setKeepTool] = useStoredFlag('gridleak.markup.keep-tool');
+  const fromKeyboard = useRef(false);
+  // Once a mark drawn here is saved as a finding: back to Select unless the person keeps the tool, and a finding
+  // made from the keyboard hands focus back to the photo for the next one.
+  const commands = useMarkupCommands(props, () => {
+    if (!keepTool) setTool('select');
+    if (fromKeyboard.current) ref.current?.focus({ preventScroll: true });
+  });
   const [draft, setDraft] = useState<Draft>();
   const [panel, setPanel] = useState<'legend' | 'help'>();
   const [spaceHeld, setSpaceHeld] = useState(false);
@@ -85,6 +95,8 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     onResult,
     onClick: (id) => onSelect(id ?? undefined),
   });
+  const crosshair = useCrosshair({ tool, image: imageSize, stage: size, view, marks: commands.marks, run: commands.run, onSelect });
+  const pointerFocus = useRef(false);
   const closePanel = () => {
     setPanel(undefined);
     ref.current?.focus();
@@ -98,7 +110,16 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     view,
     stage: ref,
     setTool,
-    cancelGesture: pointer.cancel,
+    cancelGesture: () => pointer.cancel() || crosshair.cancel(),
+    crosshair: {
+      shown: crosshair.shown,
+      show: crosshair.show,
+      move: crosshair.move,
+      enter: () => {
+        fromKeyboard.current = true;
+        crosshair.enter();
+      },
+    },
     toggleHelp: () => setPanel((p) => (p === 'help' ? undefined : 'help')),
     setSpaceHeld,
     onSelect,
@@ -121,13 +142,13 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   useMarkupProbe(ref, view.view, imageSize, size);
   const scene = useMemo(
     () => ({
-      draft,
+      draft: draft ?? crosshair.draft,
       dragging: draft?.id === undefined ? undefined : commands.marks.find((m) => m.id === draft.id),
       pending: pendingMark ? toGeometry(pendingMark) : undefined,
       selected,
       editable: selected ? editable.has(selected.id) : false,
     }),
-    [draft, commands.marks, pendingMark, selected, editable],
+    [draft, crosshair.draft, commands.marks, pendingMark, selected, editable],
   );
 
   return (
@@ -140,6 +161,8 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
           pointer.cancel();
           setTool(t);
         }}
+        keepTool={keepTool}
+        onKeepTool={setKeepTool}
         canUndo={commands.canUndo}
         onUndo={commands.undo}
         scale={view.view?.scale}
@@ -159,12 +182,27 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
           aria-roledescription="photo markup"
           aria-label={`${props.label ? `${props.label}. ` : ''}${items.length} ${items.length === 1 ? 'finding' : 'findings'}.${readOnly ? '' : ' Press ? for keys.'}`}
           className="absolute inset-0 touch-none overflow-hidden bg-bakelite select-none focus-visible:outline-offset-[-3px]"
-          onBlur={() => setSpaceHeld(false)}
+          onFocus={() => {
+            if (!pointerFocus.current) crosshair.show();
+            pointerFocus.current = false;
+          }}
+          onBlur={() => {
+            setSpaceHeld(false);
+            crosshair.hide();
+          }}
+          onPointerDownCapture={() => {
+            pointerFocus.current = true;
+            fromKeyboard.current = false;
+            crosshair.hide();
+          }}
           onContextMenu={(e) => e.preventDefault()}
           {...pointer.handlers}
         >
           {size && view.view && (
             <MarkupStage size={size} pixelRatio={pixelRatio} image={photo.image} imageSize={imageSize} view={view.view} marks={commands.marks} scene={scene} />
+          )}
+          {crosshair.shown && crosshair.state && view.view && (
+            <CrosshairMark at={crosshair.state.at} anchor={crosshair.state.anchor} view={view.view} image={imageSize} />
           )}
         </div>
         {photo.status !== 'loaded' && (
@@ -177,6 +215,9 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
       </div>
       <p role="status" className="sr-only">
         {commands.message}
+      </p>
+      <p aria-live="polite" className="sr-only" data-testid="markup-crosshair-position">
+        {crosshair.description}
       </p>
       {commands.confirmDialog}
     </div>
