@@ -98,7 +98,7 @@ describe('MarkupCanvas help and zoom', () => {
     expect(stage).toHaveFocus();
   });
 
-  it('when zoomed with the buttons and the keys, then the readout follows, and Fit and 100 % set it', async () => {
+  it('when zoomed with the buttons and the keys, then the readout follows, and Fit and Actual size set it', async () => {
     const { user, stage, zoom } = renderCanvas();
     expect(zoom()).toHaveTextContent('19 %');
     await user.click(screen.getByRole('button', { name: 'Zoom in' }));
@@ -108,7 +108,7 @@ describe('MarkupCanvas help and zoom', () => {
     expect(zoom()).toHaveTextContent('19 %');
     await user.keyboard('-');
     expect(zoom()).toHaveTextContent('15 %');
-    await user.click(screen.getByRole('button', { name: '100 %' }));
+    await user.click(screen.getByRole('button', { name: 'Actual size' }));
     expect(zoom()).toHaveTextContent('100 %');
     stage.focus();
     await user.keyboard('0');
@@ -209,8 +209,8 @@ describe('MarkupCanvas from the keyboard alone', () => {
     const [mark] = vi.mocked(props.onCreate).mock.calls[0] ?? [];
     expect(mark?.shape).toBe('rect');
     // 48 stage px at 568/3000 stage px per image px, as a share of the photo's 4000 × 3000 px.
-    expect(mark?.points[1]!.x - mark!.points[0]!.x).toBeCloseTo(48 / (568 / 3000) / 4000, 9);
-    expect(mark?.points[1]!.y - mark!.points[0]!.y).toBeCloseTo(48 / (568 / 3000) / 3000, 9);
+    expect(mark!.points[1]!.x - mark!.points[0]!.x).toBeCloseTo(48 / (568 / 3000) / 4000, 9);
+    expect(mark!.points[1]!.y - mark!.points[0]!.y).toBeCloseTo(48 / (568 / 3000) / 3000, 9);
   });
 
   it('when Keep tool is ticked, then the tool stays after a finding is saved, and the choice is remembered', async () => {

@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState, type RefObject } from 'react';
 import type { Finding } from '../../../../shared/schemas/findings';
 import { useCanvasPointer } from '../hooks/use-canvas-pointer';
 import { useContainerSize } from '../hooks/use-container-size';
@@ -8,6 +8,7 @@ import { useMarkupKeys } from '../hooks/use-markup-keys';
 import { useMarkupProbe } from '../hooks/use-markup-probe';
 import { usePhotoImage } from '../hooks/use-photo-image';
 import { usePixelRatio } from '../hooks/use-pixel-ratio';
+import { useRevealPending } from '../hooks/use-reveal-pending';
 import { useView } from '../hooks/use-view';
 import type { NewMark } from '../lib/marks';
 import { ZOOM_STEP } from '../lib/zoom';
@@ -40,6 +41,8 @@ export interface MarkupCanvasProps extends CommandCallbacks {
   onFirstFrame?: () => void;
   /** Names the photo for screen readers. */
   label?: string;
+  /** What may cover the photo while a new mark waits (the phone's bottom sheet): the mark is panned clear of it. */
+  pendingCover?: RefObject<HTMLElement | null>;
 }
 
 /**
@@ -140,6 +143,7 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   }, [focusId, readOnly, ready, commands.marks, view, imageSize]);
 
   useMarkupProbe(ref, view.view, imageSize, size);
+  useRevealPending(ref, props.pendingCover, pendingMark, view, imageSize);
   const scene = useMemo(
     () => ({
       draft: draft ?? crosshair.draft,
