@@ -40,7 +40,7 @@ export const router = createBrowserRouter([
             lazy: page(() => import('./routes/restoration-layout'), 'RestorationLayout'),
             children: [
               { index: true, lazy: page(() => import('./routes/restoration'), 'RestorationRoute') },
-              { path: 'photos', loader: photosLoader, lazy: page(() => import('./routes/photos'), 'PhotosRoute') },
+              { path: 'photos', handle: wideScreen, loader: photosLoader, lazy: page(() => import('./routes/photos'), 'PhotosRoute') },
               { path: 'photos/:photoId', handle: wideScreen, loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
               { path: 'photos/:photoId/findings/:findingId', handle: wideScreen, loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
               { path: 'findings', loader: findingsLoader, lazy: page(() => import('./routes/findings'), 'FindingsRoute') },

@@ -168,6 +168,7 @@ function PhotoMarkup({
             // On a phone: a sheet over the bottom of the photo, which the canvas pans the new mark clear of.
             <div
               ref={sheet}
+              data-testid="new-finding-sheet"
               className="rounded-xl border border-rule bg-panel p-4 max-lg:fixed max-lg:inset-x-0 max-lg:bottom-0 max-lg:z-30 max-lg:max-h-[45dvh] max-lg:overflow-y-auto max-lg:rounded-b-none max-lg:shadow-[0_-8px_24px_rgb(0_0_0/0.25)]"
             >
               <NewFindingForm

@@ -142,7 +142,7 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     view.focus(mark.shape === 'pin' ? (mark.points[0] ?? imagePoint(0.5, 0.5)) : bounds(mark, imageSize));
   }, [focusId, readOnly, ready, commands.marks, view, imageSize]);
 
-  useMarkupProbe(ref, view.view, imageSize, size);
+  useMarkupProbe(ref, view.view, imageSize, size, pendingMark?.points[0]);
   useRevealPending(ref, props.pendingCover, pendingMark, view, imageSize);
   const scene = useMemo(
     () => ({
