@@ -7,6 +7,7 @@ import { EmptyState, ErrorState, Loading } from '../../components/states';
 import { useMe } from '../../features/auth/api/get-me';
 import { usePhotoFindings } from '../../features/findings/api/get-photo-findings';
 import { FindingPanel } from '../../features/findings/components/finding-panel';
+import { SameReferenceFinding } from '../../features/findings/components/same-reference-finding';
 import { Thread } from '../../features/findings/components/thread';
 import { MeasurementsForFinding } from '../../features/measurements/components/measurements-for-finding';
 import { FindingsList } from '../../features/markup/components/findings-list';
@@ -177,6 +178,7 @@ function PhotoMarkup({
                 error={actions.createError}
                 onSubmit={actions.submitCreate}
                 onCancel={actions.cancelCreate}
+                refNotice={(ref) => <SameReferenceFinding restorationId={r.id} componentRef={ref} />}
               />
             </div>
           ) : selected && !drawn ? (
