@@ -49,7 +49,7 @@ export function CanvasControls({
             Undo
           </button>
           {canCreate && onKeepTool && (
-            <label className="flex min-h-11 items-center gap-1.5 text-sm text-ink-soft" title="After a finding is saved, stay on the tool instead of going back to Select">
+            <label className="hidden min-h-11 items-center gap-1.5 text-sm text-ink-soft md:flex" title="After a finding is saved, stay on the tool instead of going back to Select">
               <input type="checkbox" checked={keepTool} onChange={(e) => onKeepTool(e.target.checked)} className="size-4 accent-glow" />
               Keep tool
             </label>
@@ -62,7 +62,7 @@ export function CanvasControls({
           Legend
         </button>
         {!readOnly && (
-          <button type="button" aria-expanded={panel === 'help'} aria-keyshortcuts="?" title="Keys and gestures (?)" onClick={() => onPanel('help')} className={controlClass}>
+          <button type="button" aria-expanded={panel === 'help'} aria-keyshortcuts="?" title="Keys and gestures (?)" onClick={() => onPanel('help')} className={`${controlClass} max-md:hidden`}>
             Keys <kbd aria-hidden="true" className="rounded border border-rule px-1 font-mono text-xs text-ink-soft">?</kbd>
           </button>
         )}
