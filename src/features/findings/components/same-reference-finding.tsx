@@ -10,16 +10,13 @@ import { useRestorationFindings } from '../api/get-restoration-findings';
 export function SameReferenceFinding({ restorationId, componentRef, exceptId }: { restorationId: number; componentRef: string; exceptId?: number }) {
   const findings = useRestorationFindings(restorationId);
   const first = findings.data ? firstWithComponentRef(findings.data, componentRef, exceptId) : undefined;
+  if (!first) return null;
   return (
-    <p role="status" className={first ? 'rounded-lg bg-glow-soft px-3 py-2 text-sm' : 'sr-only'}>
-      {first && (
-        <>
-          {first.componentRef.toUpperCase()} already has finding #{first.number}, “{first.title}”.{' '}
-          <Link to={findingPath(first)} className="font-semibold text-glow-strong underline">
-            Open #{first.number}
-          </Link>
-        </>
-      )}
+    <p role="status" className="rounded-lg bg-glow-soft px-3 py-2 text-sm">
+      {first.componentRef.toUpperCase()} already has finding #{first.number}, “{first.title}”.{' '}
+      <Link to={findingPath(first)} className="font-semibold text-glow-strong underline">
+        Open #{first.number}
+      </Link>
     </p>
   );
 }

@@ -12,16 +12,13 @@ export const partRowId = (id: number) => `part-${id}`;
 export function SameReferencePart({ restorationId, componentRef, exceptId }: { restorationId: number; componentRef: string; exceptId?: number }) {
   const parts = useParts(restorationId);
   const first = parts.data ? firstWithComponentRef(parts.data, componentRef, exceptId) : undefined;
+  if (!first) return null;
   return (
-    <p role="status" className={first ? 'rounded-lg bg-glow-soft px-3 py-2 text-sm' : 'sr-only'}>
-      {first && (
-        <>
-          The ledger already has a line for {first.componentRef.toUpperCase()} ({partActionLabels[first.action].toLowerCase()}).{' '}
-          <a href={`#${partRowId(first.id)}`} className="font-semibold text-glow-strong underline">
-            Go to that line
-          </a>
-        </>
-      )}
+    <p role="status" className="rounded-lg bg-glow-soft px-3 py-2 text-sm">
+      The ledger already has a line for {first.componentRef.toUpperCase()} ({partActionLabels[first.action].toLowerCase()}).{' '}
+      <a href={`#${partRowId(first.id)}`} className="font-semibold text-glow-strong underline">
+        Go to that line
+      </a>
     </p>
   );
 }
