@@ -66,12 +66,11 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   const view = useView(imageSize, size);
   const [tool, setTool] = useState<Tool>('select');
   const [keepTool, setKeepTool] = useStoredFlag('gridleak.markup.keep-tool');
-  const fromKeyboard = useRef(false);
   // Once a mark drawn here is saved as a finding: back to Select unless the person keeps the tool, and a finding
   // made from the keyboard hands focus back to the photo for the next one.
   const commands = useMarkupCommands(props, () => {
     if (!keepTool) setTool('select');
-    if (fromKeyboard.current) ref.current?.focus({ preventScroll: true });
+    if (crosshair.placedByKeyboard()) ref.current?.focus({ preventScroll: true });
   });
   const [draft, setDraft] = useState<Draft>();
   const [panel, setPanel] = useState<'legend' | 'help'>();
@@ -99,7 +98,6 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     onClick: (id) => onSelect(id ?? undefined),
   });
   const crosshair = useCrosshair({ tool, image: imageSize, stage: size, view, marks: commands.marks, run: commands.run, onSelect });
-  const pointerFocus = useRef(false);
   const closePanel = () => {
     setPanel(undefined);
     ref.current?.focus();
@@ -114,15 +112,7 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     stage: ref,
     setTool,
     cancelGesture: () => pointer.cancel() || crosshair.cancel(),
-    crosshair: {
-      shown: crosshair.shown,
-      show: crosshair.show,
-      move: crosshair.move,
-      enter: () => {
-        fromKeyboard.current = true;
-        crosshair.enter();
-      },
-    },
+    crosshair,
     toggleHelp: () => setPanel((p) => (p === 'help' ? undefined : 'help')),
     setSpaceHeld,
     onSelect,
@@ -184,19 +174,11 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
           tabIndex={0}
           role="application"
           aria-roledescription="photo markup"
-          aria-label={`${props.label ? `${props.label}. ` : ''}${items.length} ${items.length === 1 ? 'finding' : 'findings'}.${readOnly ? '' : ' Press ? for keys.'}`}
+          aria-label={`${props.label ? `${props.label}. ` : ''}${items.length} ${items.length === 1 ? 'finding' : 'findings'}.${readOnly ? ' Arrow keys move a crosshair; Enter picks the finding there.' : ' Arrow keys move a crosshair; Enter marks there. Press ? for keys.'}`}
           className="absolute inset-0 touch-none overflow-hidden bg-bakelite select-none focus-visible:outline-offset-[-3px]"
-          onFocus={() => {
-            if (!pointerFocus.current) crosshair.show();
-            pointerFocus.current = false;
-          }}
+          {...crosshair.stageHandlers}
           onBlur={() => {
             setSpaceHeld(false);
-            crosshair.hide();
-          }}
-          onPointerDownCapture={() => {
-            pointerFocus.current = true;
-            fromKeyboard.current = false;
             crosshair.hide();
           }}
           onContextMenu={(e) => e.preventDefault()}

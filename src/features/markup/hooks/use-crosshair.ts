@@ -29,6 +29,10 @@ export interface CrosshairControls {
   enter(): void;
   /** Drop a shape begun with Enter; true when there was one. */
   cancel(): boolean;
+  /** Whether the last mark was made with Enter (so focus goes back to the photo once it is saved). */
+  placedByKeyboard(): boolean;
+  /** For the stage element: focus that no pointer brought shows the crosshair; a pointer press hides it. */
+  readonly stageHandlers: { onFocus(): void; onPointerDownCapture(): void };
 }
 
 /**
@@ -44,6 +48,8 @@ export function useCrosshair(env: CrosshairEnv): CrosshairControls {
   const [state, setState] = useState<CrosshairState>();
   const [description, setDescription] = useState('');
   const stateRef = useRef<CrosshairState | undefined>(undefined);
+  const pointerFocus = useRef(false);
+  const byKeyboard = useRef(false);
 
   const commit = useCallback((next: CrosshairState | undefined) => {
     stateRef.current = next;
@@ -94,6 +100,7 @@ export function useCrosshair(env: CrosshairEnv): CrosshairControls {
       const from = current();
       if (!view || !from) return;
       setShown(true);
+      byKeyboard.current = true;
       const result = crosshairEnter(e.tool, from, { view, image: e.image }, e.marks);
       commit(result.state);
       if (result.kind === 'create') e.run(result.command);
@@ -105,6 +112,18 @@ export function useCrosshair(env: CrosshairEnv): CrosshairControls {
       if (!at?.anchor) return false;
       commit({ at: at.at });
       return true;
+    },
+    placedByKeyboard: () => byKeyboard.current,
+    stageHandlers: {
+      onFocus: () => {
+        if (!pointerFocus.current) show();
+        pointerFocus.current = false;
+      },
+      onPointerDownCapture: () => {
+        pointerFocus.current = true;
+        byKeyboard.current = false;
+        setShown(false);
+      },
     },
   };
 }
