@@ -31,7 +31,8 @@ export function useRevealPending(stage: RefObject<HTMLElement | null>, cover: Re
     const bottom = Math.min(rect.bottom, covered ? sheet.top : rect.bottom);
     const top = Math.max(rect.top, 0);
     if (covered && bottom - top > 2 * CLEARANCE_PX) view.panBy(0, bottom - CLEARANCE_PX - clientY);
-    else if (clientY < top + CLEARANCE_PX / 2) view.panBy(0, top + CLEARANCE_PX - clientY);
+    // The page scrolled so far that the mark is above the window: bring it down into sight.
+    else if (rect.top < 0 && clientY < CLEARANCE_PX / 2) view.panBy(0, top + CLEARANCE_PX - clientY);
     // Only when a mark starts to wait; the person may pan on from there.
   }, [pending]);
 }
