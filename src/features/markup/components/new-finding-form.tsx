@@ -76,7 +76,8 @@ export function NewFindingForm({
           {error}
         </p>
       )}
-      <div className="flex flex-wrap gap-2">
+      {/* In the phone's bottom sheet the buttons stay in reach while the fields scroll under them. */}
+      <div className="flex flex-wrap gap-2 max-lg:sticky max-lg:-bottom-4 max-lg:-mx-4 max-lg:border-t max-lg:border-rule max-lg:bg-panel max-lg:px-4 max-lg:py-2">
         <button type="submit" className={buttonClass('primary')} disabled={busy}>
           {busy ? 'Saving…' : 'Save finding'}
         </button>
