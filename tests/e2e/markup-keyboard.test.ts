@@ -64,6 +64,16 @@ describe('markup without a pointer', () => {
     // Focus is back on the photo for the next finding.
     await expect.poll(() => focusedTestId(page)).toBe('markup-stage');
     await page.screenshot({ path: artifactPath('markup-keyboard.png') });
+
+    // Room: on a wide screen the photo takes most of the width, and all of it once the finding panel is folded away.
+    const withPanel = (await page.getByTestId('markup-stage').boundingBox())!.width;
+    expect(withPanel).toBeGreaterThan(1400 * 0.6);
+    await page.getByRole('button', { name: 'Hide the finding panel' }).click();
+    await expect.poll(async () => (await page.getByTestId('markup-stage').boundingBox())!.width).toBeGreaterThan(1400 * 0.9);
+    expect(await page.getByRole('complementary', { name: 'Finding' }).isVisible()).toBe(false);
+    await page.reload();
+    await page.getByRole('button', { name: 'Show the finding panel' }).click();
+    await page.getByRole('complementary', { name: 'Finding' }).waitFor();
     expect(messages).toEqual([]);
   });
 });
