@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { compareComponentRefs } from './natural-order';
+import { compareComponentRefs, firstWithComponentRef } from './natural-order';
 
 // Parts lists in service data print references with their numbers in counting order and a lettered
 // sub-part after its parent (common practice, no source).
@@ -15,5 +15,25 @@ describe('component reference order', () => {
 
   it('when a line has no reference, then it goes after every referenced line', () => {
     expect(['', 'R5', ' ', 'C1'].sort(compareComponentRefs)).toEqual(['C1', 'R5', '', ' ']);
+  });
+});
+
+describe('the first row with a reference', () => {
+  const rows = [
+    { id: 7, componentRef: 'C27' },
+    { id: 3, componentRef: 'c27' },
+    { id: 5, componentRef: 'R14' },
+    { id: 9, componentRef: '' },
+  ];
+
+  it('when two rows carry the same reference in any case, then the one recorded first is named', () => {
+    expect(firstWithComponentRef(rows, ' C27')?.id).toBe(3);
+  });
+
+  it('when the row being edited is the only other one, or the reference is blank or new, then none is named', () => {
+    expect(firstWithComponentRef(rows, 'R14', 5)).toBeUndefined();
+    expect(firstWithComponentRef(rows, '')).toBeUndefined();
+    expect(firstWithComponentRef(rows, 'V5')).toBeUndefined();
+    expect(firstWithComponentRef(rows, 'C27', 3)?.id).toBe(7);
   });
 });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { statuses } from './findings';
 import { idSchema } from './ids';
 
 export const views = ['top', 'underside', 'rear', 'front', 'detail', 'schematic', 'other'] as const;
@@ -54,6 +55,11 @@ export const photoSchema = z.object({
   /** Short-lived presigned URLs; `original` only for those allowed to download it. */
   /** Variants: thumb (400 px), phone (1,280 px), display (2,560 px), each at most the original's size. */
   urls: z.object({ thumb: z.string(), phone: z.string(), display: z.string(), original: z.string().optional() }),
+  /**
+   * How many of the photo's findings the reader may see, by status (a status with none is left out). Sent with
+   * the photos list (counted under the visibility rule in the same query); absent on single-photo answers.
+   */
+  findingCounts: z.partialRecord(z.enum(statuses), z.number().int().nonnegative()).optional(),
 });
 export type Photo = z.infer<typeof photoSchema>;
 

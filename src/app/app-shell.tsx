@@ -1,5 +1,5 @@
 import { useId, useState } from 'react';
-import { Link, NavLink, Outlet, useLocation } from 'react-router';
+import { Link, NavLink, Outlet, useLocation, useMatches } from 'react-router';
 import { useMeta } from '../features/meta/api/get-meta';
 import { Logo } from '../components/logo';
 import { ThemeToggle } from '../components/theme-toggle';
@@ -18,6 +18,8 @@ export function AppShell() {
   const closeMenu = () => setMenuOpen(false);
   // A new page closes the phone menu.
   const { pathname } = useLocation();
+  // A route with `handle: { wide: true }` (the markup canvas) takes the whole width of a wide screen.
+  const wide = useMatches().some((m) => (m.handle as { wide?: boolean } | undefined)?.wide === true);
   const [shownFor, setShownFor] = useState(pathname);
   if (shownFor !== pathname) {
     setShownFor(pathname);
@@ -73,7 +75,7 @@ export function AppShell() {
           </div>
         </div>
       </header>
-      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">
+      <main id="main" className={`mx-auto w-full flex-1 px-4 py-6 ${wide ? 'max-w-[120rem]' : 'max-w-6xl'}`}>
         <Outlet />
       </main>
       <footer className="border-t border-rule px-4 py-4 text-center text-xs text-ink-soft print:hidden">

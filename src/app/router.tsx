@@ -10,6 +10,9 @@ const page =
   <M, K extends keyof M>(load: () => Promise<M>, name: K) =>
   async () => ({ Component: (await load())[name] as React.ComponentType });
 
+/** Pages that use the whole width of a wide screen (the app shell reads it). */
+const wideScreen = { wide: true };
+
 export const router = createBrowserRouter([
   // A read-only help link: no app shell, no session.
   { path: 'shared/help/:token', ErrorBoundary: RouteError, lazy: page(() => import('./routes/shared-help'), 'SharedHelpRoute') },
@@ -37,9 +40,9 @@ export const router = createBrowserRouter([
             lazy: page(() => import('./routes/restoration-layout'), 'RestorationLayout'),
             children: [
               { index: true, lazy: page(() => import('./routes/restoration'), 'RestorationRoute') },
-              { path: 'photos', loader: photosLoader, lazy: page(() => import('./routes/photos'), 'PhotosRoute') },
-              { path: 'photos/:photoId', loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
-              { path: 'photos/:photoId/findings/:findingId', loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
+              { path: 'photos', handle: wideScreen, loader: photosLoader, lazy: page(() => import('./routes/photos'), 'PhotosRoute') },
+              { path: 'photos/:photoId', handle: wideScreen, loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
+              { path: 'photos/:photoId/findings/:findingId', handle: wideScreen, loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
               { path: 'findings', loader: findingsLoader, lazy: page(() => import('./routes/findings'), 'FindingsRoute') },
               { path: 'bring-up', lazy: page(() => import('./routes/bringup'), 'BringupRoute') },
               { path: 'readings', loader: readingsLoader, lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },

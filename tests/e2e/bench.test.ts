@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { watchConsole } from '../support/console';
 import { twoToneJpeg } from '../factories/images';
 import { mailTo, signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
@@ -11,6 +12,7 @@ const ctx = useProductAndBrowser();
 describe('the bench', () => {
   it('when a technician takes in a set through the form, then it appears on the bench at intake', async () => {
     const page = await newPage(ctx.browser);
+    const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
     await page.goto(ctx.product.origin);
     await expect.poll(() => page.getByRole('heading', { name: 'The bench' }).isVisible()).toBe(true);
@@ -50,6 +52,7 @@ describe('the bench', () => {
     await page.getByLabel('Search by make, model or serial').fill('FD-6');
     await expect.poll(() => page.getByRole('link', { name: /OV-54-20417/ }).count()).toBe(0);
     await expect.poll(() => card.isVisible()).toBe(true);
+    expect(messages).toEqual([]);
   });
 
   it('when the form is sent without a maker, then the field says what is missing and nothing is created', async () => {

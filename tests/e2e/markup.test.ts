@@ -4,6 +4,7 @@ import { chassisLandmarks } from '../../server/features/demo/chassis';
 import { artifactPath } from '../support/artifacts';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { watchConsole } from '../support/console';
 import { mailTo, signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 
@@ -21,6 +22,7 @@ const TARGET = { x: 0.3, y: 0.62 };
 describe('marking a spot and talking about it', () => {
   it('when the technician pins a spot, then the mentor sees it at the same place and replies, and the owner sees it only once shared', async () => {
     const tech = await newPage(ctx.browser, { width: 1400, height: 950 });
+    const techConsole = watchConsole(tech);
     await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     await tech.getByRole('link', { name: /OV-54-20417/ }).click();
     await tech.getByRole('link', { name: 'Photos' }).click();
@@ -48,6 +50,7 @@ describe('marking a spot and talking about it', () => {
     expect(Math.abs(stored.points[0]!.y - TARGET.y) * image.height * fitScale).toBeLessThan(1);
 
     const mentor = await newPage(ctx.browser, { width: 1100, height: 800 });
+    const mentorConsole = watchConsole(mentor);
     await signInAs(mentor, ctx.product.origin, 'teodor@cobbold-lane.test');
     await mentor.goto(findingUrl);
     await mentor.getByText('Dry joint on the V4 tag strip?').first().waitFor();
@@ -102,5 +105,8 @@ describe('marking a spot and talking about it', () => {
     await expectAccessible(owner, 'a shared finding on the owner’s phone');
     await owner.screenshot({ path: artifactPath('markup-owner-phone.png'), fullPage: true });
     await tech.screenshot({ path: artifactPath('markup-technician.png') });
+    // The technician's and the mentor's pages logged nothing (the owner's met a finding not shared with them: a 404 by design).
+    expect(techConsole).toEqual([]);
+    expect(mentorConsole).toEqual([]);
   });
 });

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { watchConsole } from '../support/console';
 import { signInAs } from '../support/journey';
 import { pdfText } from '../support/pdf-text';
 import { useProductAndBrowser } from '../support/journey-setup';
@@ -12,6 +13,7 @@ const ctx = useProductAndBrowser();
 describe('the owner at home, on a phone', () => {
   it('when the owner opens their set, then they compare before and after with the slider and download the report', async () => {
     const page = await newPage(ctx.browser, { width: 390, height: 844 });
+    const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'imogen@example.test');
     await page.goto(ctx.product.origin);
     await page.waitForURL(/\/home/);
@@ -42,10 +44,12 @@ describe('the owner at home, on a phone', () => {
     // The perished-wiring finding and the internal thread are not shared with the owner.
     expect(text).not.toContain('Perished rubber wiring');
     expect(text).not.toContain('Positive grid with a red anode');
+    expect(messages).toEqual([]);
   });
 
   it('when the owner opens a repaired fault on the photo and the parts ledger, then they read owner pages: no tools, Fit, owner cautions, no planned parts, shopping list or CSV', async () => {
     const page = await newPage(ctx.browser, { width: 1280, height: 900 });
+    const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'imogen@example.test');
     const target = await page.evaluate(async () => {
       const sets = (await (await fetch('/api/restorations')).json()) as { id: number; model: string; role: string }[];
@@ -90,6 +94,7 @@ describe('the owner at home, on a phone', () => {
     expect(await page.getByRole('button', { name: 'Shopping list' }).count()).toBe(0);
     await page.screenshot({ path: artifactPath('owner-parts.png'), fullPage: true });
     await expectAccessible(page, 'the owner parts ledger');
+    expect(messages).toEqual([]);
   });
 
   it('when the owner scrolls their home on a phone, then no photo is wider than the screen needs and all images stay under 1 MB', async () => {

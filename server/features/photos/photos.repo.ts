@@ -1,10 +1,11 @@
-import { and, asc, eq, inArray } from 'drizzle-orm';
+import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
+import type { Status } from '../../../shared/schemas/findings';
 import type { Executor } from '../../db/client';
-import { memberships, photos, users } from '../../db/schema';
-import { columnsOf, visibleSql } from '../visibility/visibility-sql';
+import { findings, memberships, photos, users } from '../../db/schema';
+import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 
-export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null };
+export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null; findingCounts?: Partial<Record<Status, number>> };
 type NewPhoto = typeof photos.$inferInsert;
 
 const columns = { photo: photos, uploadedBy: users.name };
@@ -13,9 +14,23 @@ export function photosRepo(db: Executor) {
   const select = () => db.select(columns).from(photos).leftJoin(users, eq(users.id, photos.uploadedById));
   const flat = (r: { photo: typeof photos.$inferSelect; uploadedBy: string | null }): PhotoRow => ({ ...r.photo, uploadedBy: r.uploadedBy });
   return {
-    /** The restoration's photos this role may see. */
+    /**
+     * The restoration's photos this role may see, each with its findings counted by status under the same rule
+     * (one query: the counts are a correlated aggregate, not a query per photo).
+     */
     async list(restorationId: number, role: Role): Promise<PhotoRow[]> {
-      return (await select().where(and(eq(photos.restorationId, restorationId), visibleSql(role, 'photo', { photo: columnsOf(photos) }))).orderBy(asc(photos.createdAt), asc(photos.id))).map(flat);
+      const findingCounts = sql<Partial<Record<Status, number>>>`(
+        select coalesce(jsonb_object_agg(s.status, s.n), '{}'::jsonb) from (
+          select ${findings.status} as status, count(*)::int as n from ${findings}
+            where ${findings.photoId} = ${photos.id} and ${visibleSql(role, 'finding', { finding: findingFields(), photo: columnsOf(photos) })}
+            group by ${findings.status}) s)`;
+      const rows = await db
+        .select({ ...columns, findingCounts })
+        .from(photos)
+        .leftJoin(users, eq(users.id, photos.uploadedById))
+        .where(and(eq(photos.restorationId, restorationId), visibleSql(role, 'photo', { photo: columnsOf(photos) })))
+        .orderBy(asc(photos.createdAt), asc(photos.id));
+      return rows.map((r) => ({ ...flat(r), findingCounts: r.findingCounts }));
     },
     async find(id: number): Promise<PhotoRow | undefined> {
       const [row] = await select().where(eq(photos.id, id));

@@ -30,6 +30,7 @@ export function photosService({ db, storage, config }: PhotosDeps) {
       ownerVisible: row.ownerVisible, width: row.width, height: row.height, takenAt: row.takenAt?.toISOString() ?? null,
       uploadedAt: row.createdAt.toISOString(), uploadedBy: row.uploadedBy, contentType: row.contentType, sizeBytes: row.sizeBytes,
       urls: original ? { thumb, phone, display, original } : { thumb, phone, display },
+      ...(row.findingCounts ? { findingCounts: row.findingCounts } : {}),
     };
   }
 

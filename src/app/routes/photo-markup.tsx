@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState, type ReactNode } from 'react';
+import { useCallback, useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { Link, useNavigate, useParams } from 'react-router';
 import { can } from '../../../shared/permissions';
 import { findingPath, type Finding } from '../../../shared/schemas/findings';
@@ -7,6 +7,7 @@ import { EmptyState, ErrorState, Loading } from '../../components/states';
 import { useMe } from '../../features/auth/api/get-me';
 import { usePhotoFindings } from '../../features/findings/api/get-photo-findings';
 import { FindingPanel } from '../../features/findings/components/finding-panel';
+import { SameReferenceFinding } from '../../features/findings/components/same-reference-finding';
 import { Thread } from '../../features/findings/components/thread';
 import { MeasurementsForFinding } from '../../features/measurements/components/measurements-for-finding';
 import { FindingsList } from '../../features/markup/components/findings-list';
@@ -17,6 +18,7 @@ import { usePhotos } from '../../features/photos/api/get-photos';
 import { useRefreshExpiredUrls } from '../../features/photos/hooks/use-refresh-expired-urls';
 import { photoLabel } from '../../features/photos/lib/photo-format';
 import { ApiError } from '../../lib/api-client';
+import { useStoredFlag } from '../../lib/use-stored-flag';
 import { useRestorationContext } from '../restoration-context';
 import { usePhotoMarkupActions } from './use-photo-markup-actions';
 
@@ -88,12 +90,27 @@ function PhotoMarkup({
   const selected = findings.find((f) => f.id === findingId);
   // The photo and its marks come first; the finding's thread, readings and close-up are fetched after that frame.
   const [drawn, setDrawn] = useState(false);
+  // On a wide screen the finding panel folds away to give the photo the width; a new finding always opens it.
+  const [panelHidden, setPanelHidden] = useStoredFlag('gridleak.markup.panel-hidden');
+  const panelOpen = !panelHidden || Boolean(actions.pending);
+  const panelId = useId();
+  const sheet = useRef<HTMLDivElement>(null);
 
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-baseline gap-x-4 gap-y-1">
         <h2 className="text-lg font-bold">{photoLabel(photo)}</h2>
         {back}
+        <button
+          type="button"
+          aria-expanded={panelOpen}
+          aria-controls={panelId}
+          disabled={Boolean(actions.pending)}
+          onClick={() => setPanelHidden(panelOpen)}
+          className="ml-auto hidden min-h-11 rounded-lg border border-rule px-3 font-semibold hover:bg-sunken disabled:opacity-50 lg:inline-block"
+        >
+          {panelOpen ? 'Hide the finding panel' : 'Show the finding panel'}
+        </button>
       </div>
       {actions.alert && (
         <div role="alert" className="flex items-start justify-between gap-3 rounded-lg border border-danger/40 bg-danger-soft px-4 py-2">
@@ -103,7 +120,7 @@ function PhotoMarkup({
           </button>
         </div>
       )}
-      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className={`grid gap-4 ${panelOpen ? 'lg:grid-cols-[minmax(0,1fr)_24rem]' : ''}`}>
         <div className="min-w-0 space-y-3">
           <div className="h-[65dvh] min-h-72 lg:h-[calc(100dvh-19rem)] lg:min-h-[28rem]">
             <MarkupCanvas
@@ -126,6 +143,7 @@ function PhotoMarkup({
               pendingMark={actions.pending}
               onImageError={onImageError}
               onFirstFrame={() => setDrawn(true)}
+              pendingCover={sheet}
             />
           </div>
           <section aria-labelledby="photo-findings-heading" className="space-y-2">
@@ -146,15 +164,21 @@ function PhotoMarkup({
             )}
           </section>
         </div>
-        <aside aria-label="Finding" className="lg:self-start">
+        <aside id={panelId} aria-label="Finding" className={`lg:self-start ${panelOpen ? '' : 'lg:hidden'}`}>
           {actions.pending ? (
-            <div className="rounded-xl border border-rule bg-panel p-4">
+            // On a phone: a sheet over the bottom of the photo, which the canvas pans the new mark clear of.
+            <div
+              ref={sheet}
+              data-testid="new-finding-sheet"
+              className="rounded-xl border border-rule bg-panel p-4 max-lg:fixed max-lg:inset-x-0 max-lg:bottom-0 max-lg:z-30 max-lg:max-h-[45dvh] max-lg:overflow-y-auto max-lg:rounded-b-none max-lg:shadow-[0_-8px_24px_rgb(0_0_0/0.25)]"
+            >
               <NewFindingForm
                 shape={actions.pending.shape}
                 busy={actions.creating}
                 error={actions.createError}
                 onSubmit={actions.submitCreate}
                 onCancel={actions.cancelCreate}
+                refNotice={(ref) => <SameReferenceFinding restorationId={r.id} componentRef={ref} />}
               />
             </div>
           ) : selected && !drawn ? (

@@ -13,6 +13,7 @@ export function useCreateFinding(photoId: number, restorationId: number) {
     onSuccess: (created) => {
       client.setQueryData<Finding[]>(findingKeys.photo(photoId), (list) => [...(list ?? []), created]);
       void client.invalidateQueries({ queryKey: findingKeys.restoration(restorationId) });
+      void client.invalidateQueries({ queryKey: findingKeys.photoCounts(restorationId), refetchType: 'none' });
     },
   });
 }

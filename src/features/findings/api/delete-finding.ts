@@ -17,6 +17,9 @@ export function useDeleteFinding(photoId: number, restorationId: number) {
       return { previous };
     },
     onError: (_e, _id, context) => context?.previous && client.setQueryData(key, context.previous),
-    onSettled: () => client.invalidateQueries({ queryKey: findingKeys.restoration(restorationId) }),
+    onSettled: () => {
+      void client.invalidateQueries({ queryKey: findingKeys.photoCounts(restorationId), refetchType: 'none' });
+      return client.invalidateQueries({ queryKey: findingKeys.restoration(restorationId) });
+    },
   });
 }

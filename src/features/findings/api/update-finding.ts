@@ -31,6 +31,7 @@ export function useUpdateFinding(photoId: number, restorationId: number) {
       void client.invalidateQueries({ queryKey: findingKeys.history(id) });
       void client.invalidateQueries({ queryKey: findingKeys.restoration(restorationId) });
       void client.invalidateQueries({ queryKey: findingKeys.questions });
+      void client.invalidateQueries({ queryKey: findingKeys.photoCounts(restorationId), refetchType: 'none' });
     },
   });
 }

@@ -11,6 +11,8 @@ export function CanvasControls({
   tool,
   canCreate,
   onTool,
+  keepTool = false,
+  onKeepTool,
   canUndo,
   onUndo,
   scale,
@@ -25,6 +27,9 @@ export function CanvasControls({
   tool: Tool;
   canCreate: boolean;
   onTool: (tool: Tool) => void;
+  /** Keep the drawing tool after a finding is saved, rather than going back to Select. */
+  keepTool?: boolean;
+  onKeepTool?: (keep: boolean) => void;
   canUndo: boolean;
   onUndo: () => void;
   scale: number | undefined;
@@ -43,6 +48,12 @@ export function CanvasControls({
           <button type="button" onClick={onUndo} disabled={!canUndo} aria-keyshortcuts="Control+Z Meta+Z" title="Undo (Ctrl+Z)" className={controlClass}>
             Undo
           </button>
+          {canCreate && onKeepTool && (
+            <label className="hidden min-h-11 items-center gap-1.5 text-sm text-ink-soft md:flex" title="After a finding is saved, stay on the tool instead of going back to Select">
+              <input type="checkbox" checked={keepTool} onChange={(e) => onKeepTool(e.target.checked)} className="size-4 accent-glow" />
+              Keep tool
+            </label>
+          )}
         </>
       )}
       <ZoomControls scale={scale} onZoomIn={onZoomIn} onZoomOut={onZoomOut} onFit={onFit} onActualSize={onActualSize} />
@@ -51,7 +62,7 @@ export function CanvasControls({
           Legend
         </button>
         {!readOnly && (
-          <button type="button" aria-expanded={panel === 'help'} aria-keyshortcuts="?" title="Keys and gestures (?)" onClick={() => onPanel('help')} className={controlClass}>
+          <button type="button" aria-expanded={panel === 'help'} aria-keyshortcuts="?" title="Keys and gestures (?)" onClick={() => onPanel('help')} className={`${controlClass} max-md:hidden`}>
             Keys <kbd aria-hidden="true" className="rounded border border-rule px-1 font-mono text-xs text-ink-soft">?</kbd>
           </button>
         )}

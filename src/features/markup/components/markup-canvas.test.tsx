@@ -98,7 +98,7 @@ describe('MarkupCanvas help and zoom', () => {
     expect(stage).toHaveFocus();
   });
 
-  it('when zoomed with the buttons and the keys, then the readout follows, and Fit and 100 % set it', async () => {
+  it('when zoomed with the buttons and the keys, then the readout follows, and Fit and Actual size set it', async () => {
     const { user, stage, zoom } = renderCanvas();
     expect(zoom()).toHaveTextContent('19 %');
     await user.click(screen.getByRole('button', { name: 'Zoom in' }));
@@ -108,7 +108,7 @@ describe('MarkupCanvas help and zoom', () => {
     expect(zoom()).toHaveTextContent('19 %');
     await user.keyboard('-');
     expect(zoom()).toHaveTextContent('15 %');
-    await user.click(screen.getByRole('button', { name: '100 %' }));
+    await user.click(screen.getByRole('button', { name: 'Actual size' }));
     expect(zoom()).toHaveTextContent('100 %');
     stage.focus();
     await user.keyboard('0');
@@ -181,5 +181,49 @@ describe('MarkupCanvas editing', () => {
     expect(props.onMove).not.toHaveBeenCalled();
     await user.keyboard('{Escape}');
     expect(props.onSelect).toHaveBeenCalledWith(undefined);
+  });
+});
+
+describe('MarkupCanvas from the keyboard alone', () => {
+  it('when the photo gets focus, P and Enter, then a crosshair shows where it is and a pin is offered there', async () => {
+    const { user, props } = renderCanvas({ onCreate: vi.fn().mockResolvedValue(99) });
+    // Tab past the toolbar, Undo, Keep tool, the zoom controls, Legend and Keys, onto the photo.
+    while (document.activeElement !== screen.getByTestId('markup-stage')) await user.tab();
+    expect(screen.getByTestId('markup-crosshair')).toBeInTheDocument();
+    expect(screen.getByTestId('markup-crosshair-position')).toHaveTextContent('50 % across, 50 % down, near #1');
+    await user.keyboard('p{Enter}');
+    const [pin] = vi.mocked(props.onCreate).mock.calls[0] ?? [];
+    expect(pin?.shape).toBe('pin');
+    expect(pin?.points[0]?.x).toBeCloseTo(0.5, 9);
+    expect(pin?.points[0]?.y).toBeCloseTo(0.5, 9);
+    // Once saved, the tool goes back to Select.
+    await waitFor(() => expect(screen.getByRole('button', { name: 'Select' })).toHaveAttribute('aria-pressed', 'true'));
+  });
+
+  it('when a box is started with Enter, moved with Shift+arrows and finished with Enter, then that box is offered', async () => {
+    const { user, stage, props } = renderCanvas();
+    stage.focus();
+    await user.keyboard('r{Enter}{Shift>}{ArrowRight}{ArrowDown}{/Shift}');
+    expect(screen.getByTestId('markup-crosshair-position')).toHaveTextContent(/Enter finishes it/);
+    await user.keyboard('{Enter}');
+    const [mark] = vi.mocked(props.onCreate).mock.calls[0] ?? [];
+    expect(mark?.shape).toBe('rect');
+    // 48 stage px at 568/3000 stage px per image px, as a share of the photo's 4000 × 3000 px.
+    expect(mark!.points[1]!.x - mark!.points[0]!.x).toBeCloseTo(48 / (568 / 3000) / 4000, 9);
+    expect(mark!.points[1]!.y - mark!.points[0]!.y).toBeCloseTo(48 / (568 / 3000) / 3000, 9);
+  });
+
+  it('when Keep tool is ticked, then the tool stays after a finding is saved, and the choice is remembered', async () => {
+    localStorage.removeItem('gridleak.markup.keep-tool');
+    const { user, stage, unmount } = renderCanvas({ onCreate: vi.fn().mockResolvedValue(99) });
+    await user.click(screen.getByRole('checkbox', { name: 'Keep tool' }));
+    stage.focus();
+    await user.keyboard('p{Enter}');
+    await Promise.resolve();
+    expect(screen.getByRole('button', { name: 'Pin' })).toHaveAttribute('aria-pressed', 'true');
+    unmount();
+    renderCanvas();
+    expect(screen.getByRole('checkbox', { name: 'Keep tool' })).toBeChecked();
+    localStorage.removeItem('gridleak.markup.keep-tool');
   });
 });

@@ -1,19 +1,23 @@
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState, type RefObject } from 'react';
 import type { Finding } from '../../../../shared/schemas/findings';
 import { useCanvasPointer } from '../hooks/use-canvas-pointer';
 import { useContainerSize } from '../hooks/use-container-size';
+import { useCrosshair } from '../hooks/use-crosshair';
 import { useMarkupCommands, type CommandCallbacks } from '../hooks/use-markup-commands';
 import { useMarkupKeys } from '../hooks/use-markup-keys';
 import { useMarkupProbe } from '../hooks/use-markup-probe';
 import { usePhotoImage } from '../hooks/use-photo-image';
 import { usePixelRatio } from '../hooks/use-pixel-ratio';
+import { useRevealPending } from '../hooks/use-reveal-pending';
 import { useView } from '../hooks/use-view';
 import type { NewMark } from '../lib/marks';
 import { ZOOM_STEP } from '../lib/zoom';
 import { imagePoint } from '../model/coordinates';
 import { bounds, toGeometry } from '../model/geometry';
 import type { Draft, Tool, ToolResult } from '../model/tools';
+import { useStoredFlag } from '../../../lib/use-stored-flag';
 import { CanvasControls } from './canvas-controls';
+import { CrosshairMark } from './crosshair-mark';
 import { MarkupLegend } from './markup-legend';
 import { MarkupStage } from './markup-stage';
 import { ShortcutHelp } from './shortcut-help';
@@ -37,6 +41,8 @@ export interface MarkupCanvasProps extends CommandCallbacks {
   onFirstFrame?: () => void;
   /** Names the photo for screen readers. */
   label?: string;
+  /** What may cover the photo while a new mark waits (the phone's bottom sheet): the mark is panned clear of it. */
+  pendingCover?: RefObject<HTMLElement | null>;
 }
 
 /**
@@ -58,8 +64,14 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   }, [photo.status]);
   const pixelRatio = usePixelRatio();
   const view = useView(imageSize, size);
-  const commands = useMarkupCommands(props);
   const [tool, setTool] = useState<Tool>('select');
+  const [keepTool, setKeepTool] = useStoredFlag('gridleak.markup.keep-tool');
+  // Once a mark drawn here is saved as a finding: back to Select unless the person keeps the tool, and a finding
+  // made from the keyboard hands focus back to the photo for the next one.
+  const commands = useMarkupCommands(props, () => {
+    if (!keepTool) setTool('select');
+    if (crosshair.placedByKeyboard()) ref.current?.focus({ preventScroll: true });
+  });
   const [draft, setDraft] = useState<Draft>();
   const [panel, setPanel] = useState<'legend' | 'help'>();
   const [spaceHeld, setSpaceHeld] = useState(false);
@@ -85,6 +97,7 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     onResult,
     onClick: (id) => onSelect(id ?? undefined),
   });
+  const crosshair = useCrosshair({ tool, image: imageSize, stage: size, view, marks: commands.marks, run: commands.run, onSelect });
   const closePanel = () => {
     setPanel(undefined);
     ref.current?.focus();
@@ -98,7 +111,8 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     view,
     stage: ref,
     setTool,
-    cancelGesture: pointer.cancel,
+    cancelGesture: () => pointer.cancel() || crosshair.cancel(),
+    crosshair,
     toggleHelp: () => setPanel((p) => (p === 'help' ? undefined : 'help')),
     setSpaceHeld,
     onSelect,
@@ -118,16 +132,17 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     view.focus(mark.shape === 'pin' ? (mark.points[0] ?? imagePoint(0.5, 0.5)) : bounds(mark, imageSize));
   }, [focusId, readOnly, ready, commands.marks, view, imageSize]);
 
-  useMarkupProbe(ref, view.view, imageSize, size);
+  useMarkupProbe(ref, view.view, imageSize, size, pendingMark?.points[0]);
+  useRevealPending(ref, props.pendingCover, pendingMark, view, imageSize);
   const scene = useMemo(
     () => ({
-      draft,
+      draft: draft ?? crosshair.draft,
       dragging: draft?.id === undefined ? undefined : commands.marks.find((m) => m.id === draft.id),
       pending: pendingMark ? toGeometry(pendingMark) : undefined,
       selected,
       editable: selected ? editable.has(selected.id) : false,
     }),
-    [draft, commands.marks, pendingMark, selected, editable],
+    [draft, crosshair.draft, commands.marks, pendingMark, selected, editable],
   );
 
   return (
@@ -140,6 +155,8 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
           pointer.cancel();
           setTool(t);
         }}
+        keepTool={keepTool}
+        onKeepTool={setKeepTool}
         canUndo={commands.canUndo}
         onUndo={commands.undo}
         scale={view.view?.scale}
@@ -157,14 +174,21 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
           tabIndex={0}
           role="application"
           aria-roledescription="photo markup"
-          aria-label={`${props.label ? `${props.label}. ` : ''}${items.length} ${items.length === 1 ? 'finding' : 'findings'}.${readOnly ? '' : ' Press ? for keys.'}`}
+          aria-label={`${props.label ? `${props.label}. ` : ''}${items.length} ${items.length === 1 ? 'finding' : 'findings'}.${readOnly ? ' Arrow keys move a crosshair; Enter picks the finding there.' : ' Arrow keys move a crosshair; Enter marks there. Press ? for keys.'}`}
           className="absolute inset-0 touch-none overflow-hidden bg-bakelite select-none focus-visible:outline-offset-[-3px]"
-          onBlur={() => setSpaceHeld(false)}
+          {...crosshair.stageHandlers}
+          onBlur={() => {
+            setSpaceHeld(false);
+            crosshair.hide();
+          }}
           onContextMenu={(e) => e.preventDefault()}
           {...pointer.handlers}
         >
           {size && view.view && (
             <MarkupStage size={size} pixelRatio={pixelRatio} image={photo.image} imageSize={imageSize} view={view.view} marks={commands.marks} scene={scene} />
+          )}
+          {crosshair.shown && crosshair.state && view.view && (
+            <CrosshairMark at={crosshair.state.at} anchor={crosshair.state.anchor} view={view.view} image={imageSize} />
           )}
         </div>
         {photo.status !== 'loaded' && (
@@ -177,6 +201,9 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
       </div>
       <p role="status" className="sr-only">
         {commands.message}
+      </p>
+      <p aria-live="polite" className="sr-only" data-testid="markup-crosshair-position">
+        {crosshair.description}
       </p>
       {commands.confirmDialog}
     </div>

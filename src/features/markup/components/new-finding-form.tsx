@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import type { ReactNode } from 'react';
 import { useForm } from 'react-hook-form';
 import { kindLabels, kinds, severities, severityLabels, type Shape } from '../../../../shared/schemas/findings';
 import { buttonClass } from '../../../components/button';
@@ -13,14 +14,17 @@ export function NewFindingForm({
   error,
   onSubmit,
   onCancel,
+  refNotice,
 }: {
   shape: Shape;
+  /** Shown under the reference as it is typed: the page points out another finding for the same part. */
+  refNotice?: (componentRef: string) => ReactNode;
   busy: boolean;
   error?: string;
   onSubmit: (values: NewFindingValues) => void;
   onCancel: () => void;
 }) {
-  const { register, handleSubmit, formState } = useForm<NewFindingValues>({ resolver: zodResolver(newFindingSchema), defaultValues: newFindingDefaults });
+  const { register, handleSubmit, formState, watch } = useForm<NewFindingValues>({ resolver: zodResolver(newFindingSchema), defaultValues: newFindingDefaults });
   const errors = formState.errors;
   return (
     <form
@@ -42,6 +46,7 @@ export function NewFindingForm({
       <Field label="Component reference" hint="As the schematic prints it, e.g. C27, R20 or V5" error={errors.componentRef?.message}>
         {(a) => <input {...a} {...register('componentRef')} maxLength={20} autoComplete="off" className={`${inputClass} font-mono`} />}
       </Field>
+      {refNotice?.(watch('componentRef') ?? '')}
       <div className="grid grid-cols-2 gap-3">
         <Field label="Kind">
           {(a) => (
@@ -71,7 +76,8 @@ export function NewFindingForm({
           {error}
         </p>
       )}
-      <div className="flex flex-wrap gap-2">
+      {/* In the phone's bottom sheet the buttons stay in reach while the fields scroll under them. */}
+      <div className="flex flex-wrap gap-2 max-lg:sticky max-lg:-bottom-4 max-lg:-mx-4 max-lg:border-t max-lg:border-rule max-lg:bg-panel max-lg:px-4 max-lg:py-2">
         <button type="submit" className={buttonClass('primary')} disabled={busy}>
           {busy ? 'Saving…' : 'Save finding'}
         </button>

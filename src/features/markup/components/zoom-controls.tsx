@@ -1,7 +1,10 @@
 import { controlClass } from '../lib/control-styles';
 import { formatZoom } from '../lib/zoom';
 
-/** −, the zoom readout, +, Fit and 100 % (one photo pixel per screen pixel). */
+/**
+ * −, the zoom readout, +, Fit and Actual size (100 %: one photo pixel per screen pixel). The readout is plain
+ * text in a sunken well with its name beside it, so it never passes for the bordered buttons around it.
+ */
 export function ZoomControls({
   scale,
   onZoomIn,
@@ -22,8 +25,11 @@ export function ZoomControls({
           −
         </span>
       </button>
-      <output aria-label="Zoom level" aria-live="off" className="min-w-14 text-center font-mono text-sm tabular-nums">
-        {scale === undefined ? '—' : formatZoom(scale)}
+      <output aria-label="Zoom level" aria-live="off" className="inline-flex items-baseline gap-1 rounded-md bg-sunken px-2 py-1 text-sm">
+        <span aria-hidden="true" className="text-xs text-ink-soft">
+          Zoom
+        </span>
+        <span className="min-w-11 text-right font-mono tabular-nums">{scale === undefined ? '—' : formatZoom(scale)}</span>
       </output>
       <button type="button" aria-label="Zoom in" aria-keyshortcuts="+" title="Zoom in (+)" onClick={onZoomIn} className={controlClass}>
         <span aria-hidden="true" className="text-lg leading-none">
@@ -36,11 +42,11 @@ export function ZoomControls({
       <button
         type="button"
         aria-keyshortcuts="1"
-        title="Actual size: one photo pixel per screen pixel (1)"
+        title="Actual size, 100 %: one photo pixel per screen pixel (1)"
         onClick={onActualSize}
         className={`${controlClass} whitespace-nowrap`}
       >
-        100 %
+        Actual size
       </button>
     </div>
   );

@@ -29,9 +29,9 @@ interface Env extends CommandCallbacks {
  * Runs the commands the tools and keys make through the page's callbacks, and keeps the undo history
  * (`model/history.ts`): each change the canvas sends is recorded with its inverse, and Ctrl+Z sends that inverse.
  * Returns the marks to draw: points just sent are shown at once, until the page's list of findings changes (to
- * the optimistic update, or back after a refusal).
+ * the optimistic update, or back after a refusal). `onSaved` hears when a mark drawn here has become a finding.
  */
-export function useMarkupCommands(env: Env) {
+export function useMarkupCommands(env: Env, onSaved?: (id: number) => void) {
   const [pending, setPending] = useState<{ items: readonly Finding[]; points: ReadonlyMap<number, readonly ImagePoint[]> }>();
   const shown = pending && pending.items === env.items ? pending.points : undefined;
   const base = useMemo(() => env.items.map(toMark), [env.items]);
@@ -42,9 +42,9 @@ export function useMarkupCommands(env: Env) {
       return points ? withPoints(m, points) : m;
     });
   }, [base, shown]);
-  const latest = useRef({ ...env, marks });
+  const latest = useRef({ ...env, marks, onSaved });
   useEffect(() => {
-    latest.current = { ...env, marks };
+    latest.current = { ...env, marks, onSaved };
   });
   const history = useRef(emptyHistory());
   /** The id a re-created finding had before its delete, keyed by the inverse command that re-creates it. */
@@ -90,7 +90,11 @@ export function useMarkupCommands(env: Env) {
     const change = changeOf(command, marks);
     const created = perform(effectOf(command, marks));
     if (change) record(change);
-    void created?.then((id) => id !== undefined && record({ type: 'created', id }));
+    void created?.then((id) => {
+      if (id === undefined) return;
+      record({ type: 'created', id });
+      latest.current.onSaved?.(id);
+    });
   };
 
   /** Delete a finding after asking; undoable only when the page can bring it back (`onUndo`). */

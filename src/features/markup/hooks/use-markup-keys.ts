@@ -4,6 +4,7 @@ import type { ImageSize } from '../model/coordinates';
 import type { Command } from '../model/commands';
 import type { Tool } from '../model/tools';
 import { ZOOM_STEP } from '../lib/zoom';
+import type { CrosshairControls } from './use-crosshair';
 import type { ViewControls } from './use-view';
 
 /** Stage px the view moves per arrow press when no finding is selected (and with Shift). */
@@ -29,6 +30,8 @@ export interface KeyEnv {
   /** Ask, then delete; resolves true once deleted. */
   remove(id: number): Promise<boolean>;
   undo(): void;
+  /** The keyboard crosshair: arrows move it when no editable finding is selected, Enter acts at it. */
+  readonly crosshair: Pick<CrosshairControls, 'shown' | 'show' | 'move' | 'enter'>;
 }
 
 const typing = (target: EventTarget) => target instanceof HTMLElement && target.matches('input, textarea, select, [contenteditable="true"]');
@@ -57,8 +60,10 @@ export function useMarkupKeys(env: KeyEnv) {
       return;
     }
     const action = actionForKey(e);
-    // In the toolbar the arrow keys move between its buttons.
+    const onStage = e.target === k.stage.current;
+    // In the toolbar the arrow keys move between its buttons; Enter elsewhere presses what has focus.
     if (!action || (action.type === 'nudge' && e.target instanceof Element && e.target.closest('[role="toolbar"]'))) return;
+    if (action.type === 'place' && !onStage) return;
     e.preventDefault();
     const id = k.selectedId;
     switch (action.type) {
@@ -86,9 +91,15 @@ export function useMarkupKeys(env: KeyEnv) {
       case 'actual-size':
         k.view.actualSize();
         return;
+      case 'place':
+        if (k.tool !== 'select' && !k.canCreate) return;
+        k.crosshair.enter();
+        return;
       case 'nudge':
         if (id !== undefined && k.canEditSelected) {
           k.run({ type: 'move', id, ...nudgeToNormalised(action.dx, action.dy, k.image) });
+        } else if (onStage && (k.crosshair.shown || k.tool !== 'select')) {
+          k.crosshair.move(action.dx, action.dy, e.shiftKey);
         } else {
           const step = e.shiftKey ? PAN_SHIFT_STEP_PX : PAN_STEP_PX;
           k.view.panBy(-Math.sign(action.dx) * step, -Math.sign(action.dy) * step);

@@ -6,13 +6,15 @@ import { imagePoint, imageToStage, type ImageSize, type StageSize, type ViewTran
  * a canvas. It is present in every build (it holds nothing private) while a markup canvas is mounted:
  * - `view`: `{ scale, x, y }`, stage px per image px and where the image's top-left corner sits on the stage;
  * - `image`: the photo's size in image px; `stage`: the stage's size in CSS px;
- * - `imageToClient(x, y)`: a normalised image point (0..1) as viewport (client) CSS px, ready for `page.mouse`.
+ * - `imageToClient(x, y)`: a normalised image point (0..1) as viewport (client) CSS px, ready for `page.mouse`;
+ * - `pending`: the first point of a new mark waiting for its words, normalised, while there is one.
  * A new object replaces it after every view change, so read it again after zooming or panning.
  */
 export interface MarkupProbe {
   readonly view: ViewTransform;
   readonly image: ImageSize;
   readonly stage: StageSize;
+  readonly pending?: { readonly x: number; readonly y: number };
   imageToClient(x: number, y: number): { x: number; y: number };
 }
 
@@ -22,13 +24,20 @@ declare global {
   }
 }
 
-export function useMarkupProbe(ref: RefObject<HTMLElement | null>, view: ViewTransform | undefined, image: ImageSize, stage: StageSize | undefined) {
+export function useMarkupProbe(
+  ref: RefObject<HTMLElement | null>,
+  view: ViewTransform | undefined,
+  image: ImageSize,
+  stage: StageSize | undefined,
+  pending?: { readonly x: number; readonly y: number },
+) {
   useEffect(() => {
     if (!view || !stage) return;
     const probe: MarkupProbe = Object.freeze({
       view,
       image,
       stage,
+      ...(pending ? { pending: { x: pending.x, y: pending.y } } : {}),
       imageToClient: (x: number, y: number) => {
         const rect = ref.current?.getBoundingClientRect();
         const at = imageToStage(imagePoint(x, y), view, image);
@@ -39,5 +48,5 @@ export function useMarkupProbe(ref: RefObject<HTMLElement | null>, view: ViewTra
     return () => {
       if (window.__gridleakMarkup === probe) delete window.__gridleakMarkup;
     };
-  }, [ref, view, image, stage]);
+  }, [ref, view, image, stage, pending]);
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatZoom, wheelZoomFactor } from './zoom';
+import { formatZoom, MAX_WHEEL_STEP, wheelZoomFactor } from './zoom';
 
 describe('wheelZoomFactor', () => {
   it('when the wheel turns up (negative delta), then it zooms in, and down zooms out by the inverse', () => {
@@ -16,9 +16,19 @@ describe('wheelZoomFactor', () => {
     expect(wheelZoomFactor(-10, 0, true)).toBeGreaterThan(wheelZoomFactor(-10, 0, false));
   });
 
-  it('when one event is huge, then the step is held to ×2 or ÷2', () => {
-    expect(wheelZoomFactor(-100_000, 0, false)).toBe(2);
-    expect(wheelZoomFactor(100_000, 0, false)).toBe(0.5);
+  it('when one event is huge, then the step is held to ×1.2 or ÷1.2', () => {
+    expect(wheelZoomFactor(-100_000, 0, false)).toBe(MAX_WHEEL_STEP);
+    expect(wheelZoomFactor(100_000, 0, false)).toBe(1 / MAX_WHEEL_STEP);
+    expect(MAX_WHEEL_STEP).toBe(1.2);
+  });
+
+  it('when five mouse notches turn up from Fit (19 %), then the zoom stays below 50 %, not 800 %', () => {
+    for (const [delta, mode] of [[-100, 0], [-120, 0], [-3, 1], [-1, 2]] as const) {
+      let scale = 0.19;
+      for (let i = 0; i < 5; i++) scale *= wheelZoomFactor(delta, mode, false);
+      expect(scale).toBeLessThan(0.5);
+      expect(scale).toBeGreaterThan(0.19 * 1.3);
+    }
   });
 });
 

@@ -4,7 +4,7 @@ import type { Tool } from './tools';
 /** What a key asks the markup canvas to do. A nudge is in image px. */
 export type ShortcutAction =
   | { readonly type: 'tool'; readonly tool: Tool }
-  | { readonly type: 'cancel' | 'delete' | 'undo' | 'zoom-in' | 'zoom-out' | 'fit' | 'actual-size' }
+  | { readonly type: 'cancel' | 'delete' | 'undo' | 'zoom-in' | 'zoom-out' | 'fit' | 'actual-size' | 'place' }
   | { readonly type: 'nudge'; readonly dx: number; readonly dy: number };
 
 /** The parts of a KeyboardEvent the map reads. */
@@ -24,6 +24,7 @@ const toolKeys: Record<string, Tool> = { v: 'select', p: 'pin', c: 'circle', r: 
 const arrows: Record<string, readonly [number, number]> = { ArrowLeft: [-1, 0], ArrowRight: [1, 0], ArrowUp: [0, -1], ArrowDown: [0, 1] };
 const plainKeys: Record<string, ShortcutAction> = {
   Escape: { type: 'cancel' },
+  Enter: { type: 'place' },
   Delete: { type: 'delete' },
   Backspace: { type: 'delete' },
   // '=' is '+' without Shift on many layouts, '−' (U+2212) is what the help panel shows.
@@ -67,12 +68,14 @@ export const shortcutHelp: readonly { readonly keys: readonly string[]; readonly
   { keys: ['R'], description: 'Draw a rectangle' },
   { keys: ['A'], description: 'Draw an arrow' },
   { keys: ['F'], description: 'Draw freehand' },
+  { keys: ['Tab'], description: 'Focus the photo: a crosshair appears' },
+  { keys: ['←', '↑', '→', '↓'], description: 'Move the crosshair (with Shift: further); with a finding selected, nudge it by one photo pixel' },
+  { keys: ['Enter'], description: 'At the crosshair: place a pin, or start and then finish a shape; with Select, pick the finding there' },
   { keys: ['Esc'], description: 'Cancel the drawing, or clear the selection' },
   { keys: ['Delete', 'Backspace'], description: 'Delete the selected finding' },
   { keys: ['Ctrl+Z', '⌘Z'], description: 'Undo the last change' },
   { keys: ['+', '−'], description: 'Zoom in, zoom out' },
   { keys: ['0'], description: 'Fit the whole photo' },
   { keys: ['1'], description: 'Actual size (one photo pixel per screen pixel)' },
-  { keys: ['←', '↑', '→', '↓'], description: 'Nudge the selected finding by one photo pixel' },
   { keys: ['Shift+arrow'], description: 'Nudge by ten photo pixels' },
 ];

@@ -118,3 +118,27 @@ describe('part form', () => {
     expect(patch?.body).toMatchObject({ state: 'fitted', testedAfter: 'Cathode 8.3 V, no red glow', costMinor: 185, findingId: null });
   });
 });
+
+describe('a second line for the same reference', () => {
+  it('when the reference typed is already on the ledger, then the form says so and links to the first line; another reference says nothing', async () => {
+    fakePartsApi([makePart(12, { componentRef: 'C27', action: 'replaced' }), makePart(15, { componentRef: 'c27', action: 'replaced' })]);
+    const user = userEvent.setup();
+    renderWithQueries(<PartForm restorationId={7} />);
+    await fill(user, 'Component reference', 'C27');
+    const link = await screen.findByRole('link', { name: 'Go to that line' });
+    expect(link).toHaveAttribute('href', '#part-12');
+    expect(link.closest('p')).toHaveTextContent('The ledger already has a line for C27 (replaced).');
+    await user.clear(screen.getByLabelText('Component reference'));
+    await user.paste('R14');
+    expect(screen.queryByRole('link', { name: 'Go to that line' })).not.toBeInTheDocument();
+  });
+
+  it('when the line being changed is the only one with its reference, then nothing is pointed out', async () => {
+    const part = makePart(12, { componentRef: 'C27' });
+    fakePartsApi([part]);
+    renderWithQueries(<PartForm restorationId={7} part={part} />);
+    await screen.findByLabelText('Component reference');
+    await waitFor(() => expect(screen.getByLabelText('Component reference')).toHaveValue('C27'));
+    expect(screen.queryByRole('link', { name: 'Go to that line' })).not.toBeInTheDocument();
+  });
+});

@@ -6,6 +6,7 @@ import { usePartForm } from '../hooks/use-part-form';
 import type { FindingChoice } from '../lib/finding-choice';
 import { DeletePart } from './delete-part';
 import { RecapCaution } from './recap-caution';
+import { SameReferencePart } from './same-reference-part';
 import { WarningsPreview } from './warnings-preview';
 
 export interface PartFormProps {
@@ -24,6 +25,7 @@ const typed = { autoComplete: 'off', autoCorrect: 'off', spellCheck: false } as 
 export function PartForm({ restorationId, part, findings, onDone, onCancel }: PartFormProps) {
   const { form, currency, warnings, compared, capacitor, onSubmit, saving, saved, serverMessage } = usePartForm({ restorationId, part, onDone });
   const { register, formState: { errors } } = form;
+  const typedRef = form.watch('componentRef');
   const editing = part !== undefined;
   const sourcesId = useId();
   return (
@@ -49,6 +51,7 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
           )}
         </Field>
       </div>
+      <SameReferencePart restorationId={restorationId} componentRef={typeof typedRef === 'string' ? typedRef : ''} exceptId={part?.id} />
       <fieldset className="grid gap-3 sm:grid-cols-2">
         <legend className="sr-only">What came out and what goes in</legend>
         <Field label="Original part" hint="What came out, e.g. wax paper tubular" error={errors.originalPart?.message}>

@@ -20,6 +20,7 @@ import type { FindingChoice } from '../lib/finding-choice';
 import { LedgerFilter } from './ledger-filter';
 import { partColumns } from './parts-columns';
 import { nextState } from './state-mark';
+import { partRowId } from './same-reference-part';
 
 export interface PartsLedgerProps {
   restorationId: number;
@@ -130,7 +131,7 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
             </thead>
             <tbody className="divide-y divide-rule">
               {rows.map((row) => (
-                <tr key={row.id} aria-label={`Part ${row.original.componentRef}`}>
+                <tr key={row.id} id={partRowId(row.original.id)} aria-label={`Part ${row.original.componentRef}`} className="target:bg-glow-soft">
                   {row.getVisibleCells().map((cell) => (
                     <td key={cell.id} className={`px-3 py-2 align-top ${cell.column.id === REF ? `${pinned} bg-panel` : ''}`}>
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}

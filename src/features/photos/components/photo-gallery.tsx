@@ -5,7 +5,7 @@ import { PhotoThumb } from './photo-thumb';
 
 const photos = (n: number) => `${n} ${n === 1 ? 'photo' : 'photos'}`;
 
-/** Photos by view, then by phase, each with its count; two columns on a phone, up to six on a wide screen. */
+/** Photos by view, then by phase, each with its count; two columns on a phone, up to ten on a wide screen. */
 export function PhotoGallery({
   groups,
   showShared,
@@ -32,7 +32,7 @@ export function PhotoGallery({
                 {phaseLabels[phase]}
                 <span className="text-sm font-normal">{photos(list.length)}</span>
               </h4>
-              <ul className="grid grid-cols-2 gap-2 sm:grid-cols-3 md:grid-cols-4 lg:grid-cols-5 xl:grid-cols-6">
+              <ul className="grid grid-cols-2 gap-2 sm:grid-cols-3 md:grid-cols-4 lg:grid-cols-6 xl:grid-cols-8 2xl:grid-cols-10">
                 {list.map((photo) => (
                   <li key={photo.id}>
                     <PhotoThumb photo={photo} showShared={showShared} onOpen={onOpen} onImageError={onImageError} />

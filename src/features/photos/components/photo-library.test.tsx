@@ -55,6 +55,15 @@ describe('photo gallery', () => {
     expect(within(thumb).getByText('Shared')).toBeInTheDocument();
   });
 
+  it('when the list carries finding counts, then each thumbnail shows them by status and says them in words', async () => {
+    fakePhotoApi([makePhoto(1, { caption: 'rectifier', findingCounts: { confirmed: 1, observed: 2 } }), makePhoto(2, { caption: 'dial', findingCounts: {} })]);
+    renderWithQueries(<PhotoLibrary restorationId={7} role="technician" />);
+    const thumb = await screen.findByRole('button', { name: 'Top, before: rectifier; findings: 2 observed, 1 confirmed' });
+    // Counts in the order work moves, each after its status glyph (• observed, ! confirmed).
+    expect([...thumb.querySelectorAll('.tabular-nums')].map((n) => n.textContent)).toEqual(['•2', '!1']);
+    expect(screen.getByRole('button', { name: 'Top, before: dial; findings: no findings' })).toBeInTheDocument();
+  });
+
   it('when an owner opens a shared photo, then there is no uploader and no edit, download or delete control', async () => {
     const { calls } = fakePhotoApi([makePhoto(1, { ownerVisible: true, urls: { thumb: '/t/1', phone: '/p/1', display: '/d/1' } })]);
     renderWithQueries(<PhotoLibrary restorationId={7} role="owner" />);

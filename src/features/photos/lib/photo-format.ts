@@ -1,3 +1,4 @@
+import { statuses, statusLabels, type Status } from '../../../../shared/schemas/findings';
 import { phaseLabels, viewLabels, type Photo } from '../../../../shared/schemas/photos';
 
 /** What the server accepts (never SVG: it can carry script). HEIC/AVIF come from phones. */
@@ -34,4 +35,18 @@ export function thumbSize(photo: Pick<Photo, 'width' | 'height'>, longEdge = 400
   const { width, height } = photo.width > 0 && photo.height > 0 ? photo : { width: 4, height: 3 };
   const scale = longEdge / Math.max(width, height);
   return { width: Math.round(width * scale), height: Math.round(height * scale) };
+}
+
+/** A photo's findings by status, in the order work moves through them, leaving out statuses with none. */
+export function findingCountList(counts: Partial<Record<Status, number>> | undefined): { status: Status; count: number }[] {
+  return statuses.flatMap((status) => {
+    const count = counts?.[status] ?? 0;
+    return count > 0 ? [{ status, count }] : [];
+  });
+}
+
+/** The same in words for screen readers: "2 observed, 1 confirmed", or "no findings". */
+export function findingCountText(counts: Partial<Record<Status, number>> | undefined): string {
+  const list = findingCountList(counts);
+  return list.length ? list.map((c) => `${c.count} ${statusLabels[c.status].toLowerCase()}`).join(', ') : 'no findings';
 }
