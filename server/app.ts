@@ -29,6 +29,7 @@ import { sheetsRoutes } from './features/sheets/sheets.routes';
 import { estimatesRoutes } from './features/estimates/estimates.routes';
 import { labourRoutes } from './features/labour/labour.routes';
 import { invoicesRoutes } from './features/invoices/invoices.routes';
+import { paymentsRoutes, paymentWebhookRoute } from './features/payments/payments.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { redactedError } from './http/redact-error';
 import { requireSameOrigin } from './http/same-origin';
@@ -64,6 +65,8 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   const api = Router();
   // JSON answers above 1 kB are compressed (brotli or gzip, as the client accepts).
   api.use(compression({ threshold: 1024 }));
+  // The payment service's events need their raw bytes for the signature check: before the JSON parser, no session.
+  api.use(paymentWebhookRoute(deps));
   api.use(express.json({ limit: '1mb' }));
   api.use(requireSameOrigin(deps.config.publicOrigin));
   api.use(healthRoutes(deps));
@@ -93,6 +96,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(estimatesRoutes(deps));
   api.use(labourRoutes(deps));
   api.use(invoicesRoutes(deps));
+  api.use(paymentsRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

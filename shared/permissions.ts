@@ -54,6 +54,8 @@ export const actions = [
   'money.edit',
   'estimates.decide',
   'labour.record',
+  'payments.checkout',
+  'payments.record',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -128,6 +130,10 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'estimates.decide': (role) => role === 'owner',
   // The labour log is the workshop's own record of time; the owner sees it only as invoice lines.
   'labour.record': (role) => role === 'technician',
+  // Paying by card through the hosted checkout: the owner, or a technician taking the payment at the counter.
+  'payments.checkout': (role) => role !== 'mentor',
+  // Transfers and cash recorded by hand, and refunds: the workshop's books, technicians only.
+  'payments.record': (role) => role === 'technician',
 };
 
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
@@ -156,19 +162,19 @@ const ownerPart: Condition = { any: [{ field: 'part.state', is: 'fitted' }, { fi
 const sinceShared = (entity: 'event' | 'change'): Condition => ({ field: `${entity}.createdAt`, after: 'finding.sharedAt' });
 const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all: [{ field: 'event.kind', is: kind }, ...conditions] });
 
-export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark', 'estimate'] as const;
+export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark', 'estimate', 'payment'] as const;
 export type VisibilitySubject = (typeof visibilitySubjects)[number];
 
 const all: Condition = { always: true };
 const everything: Record<VisibilitySubject, Condition> = {
-  photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, sheetPage: all, referenceMark: all, estimate: all,
+  photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, sheetPage: all, referenceMark: all, estimate: all, payment: all,
 };
 /** Mentors help with the work and see none of its money. */
 const noMoney: Condition = { never: true };
 
 export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   technician: everything,
-  mentor: { ...everything, estimate: noMoney },
+  mentor: { ...everything, estimate: noMoney, payment: noMoney },
   owner: {
     photo: sharedPhoto,
     finding: sharedFinding,
@@ -201,6 +207,8 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
         eventOf('estimate-decided'),
         eventOf('invoice-issued'),
         eventOf('invoice-voided'),
+        eventOf('payment-received'),
+        eventOf('payment-refunded'),
       ],
     },
     /** A finding's change record, only from after it was shared. */
@@ -210,6 +218,8 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
     /** An in-app notification or its e-mail, judged when read or sent, not when written. */
     /** An estimate once sent to them; drafts stay in the workshop. */
     estimate: { field: 'estimate.sent', is: true },
+    /** Payments and refunds on their own sets' invoices (membership is checked by the guard), card or by hand. */
+    payment: all,
     notification: { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
   },
 };

@@ -1,0 +1,59 @@
+import { and, asc, eq, sql } from 'drizzle-orm';
+import type { Role } from '../../../shared/permissions';
+import type { Payment } from '../../../shared/schemas/payments';
+import type { Executor, Tx } from '../../db/client';
+import { events, invoices, payments } from '../../db/schema';
+import { NotFoundError } from '../../http/errors';
+import { visibleSql } from '../visibility/visibility-sql';
+
+type Row = typeof payments.$inferSelect;
+export type InvoiceRow = typeof invoices.$inferSelect;
+
+/** The invoice, locked for the rest of the transaction, so payments on it are settled one after another. */
+export async function lockInvoice(tx: Tx, invoiceId: number): Promise<InvoiceRow> {
+  const [row] = await tx.select().from(invoices).where(eq(invoices.id, invoiceId)).for('update');
+  if (!row) throw new NotFoundError();
+  return row;
+}
+
+/** What is still to pay on an invoice; nothing on a void one or a credit note. */
+export const outstanding = (i: InvoiceRow) => (i.voidedAt || i.kind === 'credit-note' ? 0 : Math.max(0, i.due - i.paid));
+
+/**
+ * Recomputes the invoice's `paid` from its succeeded payments less their succeeded refunds, so settling twice
+ * gives the same answer. The caller holds the invoice lock.
+ */
+export async function settleInvoice(tx: Tx, invoiceId: number) {
+  const [{ paid } = { paid: 0 }] = await tx
+    .select({ paid: sql<number>`coalesce(sum(case when ${payments.kind} = 'payment' then ${payments.amount} else -${payments.amount} end), 0)::int` })
+    .from(payments).where(and(eq(payments.invoiceId, invoiceId), eq(payments.status, 'succeeded')));
+  await tx.update(invoices).set({ paid }).where(eq(invoices.id, invoiceId));
+}
+
+/** The history line for money that arrived or went back, in the same transaction as the change. */
+export async function recordPaymentEvent(tx: Tx, invoice: InvoiceRow, p: Row, actorId: number | null) {
+  await tx.insert(events).values({
+    restorationId: invoice.restorationId, kind: p.kind === 'refund' ? 'payment-refunded' : 'payment-received', actorId,
+    data: { invoiceId: invoice.id, number: invoice.number, kind: invoice.kind, method: p.method, paymentId: p.id },
+  });
+}
+
+function present(p: Row, number: number, all: Row[]): Payment {
+  const refunded = p.kind === 'payment'
+    ? all.filter((r) => r.refundOfId === p.id && r.status === 'succeeded').reduce((a, r) => a + r.amount, 0) : 0;
+  return {
+    id: p.id, invoiceId: p.invoiceId, invoiceNumber: number, kind: p.kind, method: p.method, status: p.status,
+    amount: { amount: p.amount, currency: p.currency }, refunded: { amount: refunded, currency: p.currency },
+    refundOfId: p.refundOfId, receivedOn: p.receivedOn, createdAt: p.createdAt.toISOString(),
+  };
+}
+
+/** A restoration's payments and refunds, oldest first, as far as the role may see them (mentors: none). */
+export async function listPayments(db: Executor, restorationId: number, role: Role, only?: number): Promise<Payment[]> {
+  const rows = await db.select({ p: payments, number: invoices.number }).from(payments)
+    .innerJoin(invoices, eq(invoices.id, payments.invoiceId))
+    .where(and(eq(payments.restorationId, restorationId), visibleSql(role, 'payment', {})))
+    .orderBy(asc(payments.createdAt), asc(payments.id));
+  const all = rows.map((r) => r.p);
+  return rows.filter((r) => only === undefined || r.p.id === only).map((r) => present(r.p, r.number, all));
+}
