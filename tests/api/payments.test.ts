@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Invoice } from '../../shared/schemas/invoices';
 import type { Payment } from '../../shared/schemas/payments';
 import { events, paymentEvents, payments } from '../../server/db/schema';
+import { signatureHeader } from '../../server/local-services/payments/webhook-signature';
 import { writeWorkshopSettings } from '../../server/features/workshop/workshop-settings';
 import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
@@ -103,6 +104,10 @@ describe('card payments through the hosted checkout (the real SDK against the lo
     expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'open', paid: { amount: 0, currency: 'GBP' } });
     expect((await paymentsOf(id)).map((p) => p.status)).toEqual(['failed']);
     expect(await historyKinds(id)).not.toContain('payment-received');
+    // Delivered late, the earlier "completed, not yet paid" event does not bring the failed payment back to pending.
+    const completed = t.paymentFake.sent.filter((e) => e.type === 'checkout.session.completed').at(-1)!;
+    expect(await t.paymentFake.post(completed.payload, completed.header)).toBe(200);
+    expect((await paymentsOf(id)).map((p) => p.status)).toEqual(['failed']);
     await checkout(deposit.id, 'pay');
     expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'paid', paid: { amount: 4200, currency: 'GBP' } });
   });
@@ -134,8 +139,18 @@ describe('card payments through the hosted checkout (the real SDK against the lo
     expect(lines.map((p) => [p.kind, p.status, p.amount.amount])).toEqual([['payment', 'succeeded', 6000], ['refund', 'succeeded', 2500], ['refund', 'succeeded', 3500]]);
     expect(lines[0]!.refunded).toEqual({ amount: 6000, currency: 'GBP' });
     expect(await invoiceOf(id, deposit.id)).toMatchObject({ paid: { amount: 0, currency: 'GBP' } });
+    // Every refund event again, in reverse order: nothing changes.
+    for (const e of t.paymentFake.sent.filter((x) => x.type.includes('refund')).reverse()) await t.paymentFake.post(e.payload, e.header);
+    expect((await paymentsOf(id)).length).toBe(3);
     expect((await historyKinds(id)).filter((k) => k === 'payment-refunded')).toHaveLength(2);
     expect((await tech.post(`/api/payments/${paid!.id}/refund`).send({})).status).toBe(409);
+  });
+
+  it('when a refund event arrives before its payment is known, then it is answered with an error (to be sent again) and not stored', async () => {
+    const refund = { id: 're_test_early', object: 'refund', amount: 100, currency: 'gbp', payment_intent: 'pi_test_unknown', status: 'succeeded', metadata: {} };
+    const payload = JSON.stringify({ id: 'evt_test_early', object: 'event', type: 'refund.created', created: Math.floor(Date.now() / 1000), data: { object: refund } });
+    expect(await t.paymentFake.post(payload, signatureHeader(payload, t.paymentFake.webhookSecret))).toBe(409);
+    expect((await t.db.select().from(paymentEvents).where(eq(paymentEvents.id, 'evt_test_early'))).length).toBe(0);
   });
 });
 
