@@ -45,6 +45,8 @@ export const paymentSchema = z.object({
   refunded: moneySchema,
   /** The payment a refund returns. */
   refundOfId: z.number().nullable(),
+  /** The checkout session a card payment came from (the way back from the checkout page names it). */
+  checkoutSessionId: z.string().nullable(),
   receivedOn: z.string().nullable(),
   createdAt: z.string(),
 });

@@ -44,7 +44,7 @@ function present(p: Row, number: number, all: Row[]): Payment {
   return {
     id: p.id, invoiceId: p.invoiceId, invoiceNumber: number, kind: p.kind, method: p.method, status: p.status,
     amount: { amount: p.amount, currency: p.currency }, refunded: { amount: refunded, currency: p.currency },
-    refundOfId: p.refundOfId, receivedOn: p.receivedOn, createdAt: p.createdAt.toISOString(),
+    refundOfId: p.refundOfId, checkoutSessionId: p.checkoutSessionId, receivedOn: p.receivedOn, createdAt: p.createdAt.toISOString(),
   };
 }
 

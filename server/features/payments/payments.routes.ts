@@ -46,7 +46,7 @@ export function paymentsRoutes(deps: AppDeps): Router {
     res.json(await service.list(input(res, one).params.id, roleOf(res)));
   });
   router.post('/invoices/:invoiceId/checkout', requireUser, validate(ofInvoiceId), guard(db, 'payments.checkout', ofInvoice), async (_req, res) => {
-    res.json(await service.checkout(input(res, ofInvoiceId).params.invoiceId));
+    res.json(await service.checkout(input(res, ofInvoiceId).params.invoiceId, roleOf(res)));
   });
   router.post('/invoices/:invoiceId/payments', requireUser, validate(manual), guard(db, 'payments.record', ofInvoice), async (req, res) => {
     const { params, body } = input(res, manual);

@@ -37,21 +37,24 @@ export function paymentsService({ db, payments: service, config }: Deps) {
 
     /**
      * A hosted checkout for what is still due. Nothing is written: the payment exists once the service's event
-     * says so. The way back lands on the set's page, which waits for that event.
+     * says so. The way back lands on the set's page, which shows "processing" until that event arrives.
      */
-    async checkout(invoiceId: number): Promise<{ url: string }> {
+    async checkout(invoiceId: number, role: Role): Promise<{ url: string }> {
       const [invoice] = await db.select().from(invoices).where(eq(invoices.id, invoiceId));
       if (!invoice) throw new NotFoundError();
       const amount = outstanding(invoice);
       if (amount <= 0) throw new ConflictError(invoice.voidedAt ? `Invoice ${invoice.number} is void.` : `${invoiceKindLabels[invoice.kind]} ${invoice.number} has nothing left to pay.`);
-      const back = (outcome: string) => `${config.publicOrigin}/restorations/${invoice.restorationId}?payment=${outcome}&invoice=${invoice.id}`;
+      // The owner comes back to their set's page; a technician taking the payment, to the Money tab.
+      const page = role === 'owner' ? `/home?set=${invoice.restorationId}&` : `/restorations/${invoice.restorationId}/money?`;
+      // The service puts the session's id in place of {CHECKOUT_SESSION_ID} on the way back from a completed checkout.
+      const back = (outcome: string) => `${config.publicOrigin}${page}payment=${outcome}&invoice=${invoice.id}`;
       const session = await service.sdk.checkout.sessions.create({
         mode: 'payment',
         line_items: [{ quantity: 1, price_data: { currency: invoice.currency.toLowerCase(), unit_amount: amount,
           product_data: { name: `Gridleak ${invoiceKindLabels[invoice.kind].toLowerCase()} ${invoice.number}` } } }],
         client_reference_id: String(invoice.id),
         metadata: { invoiceId: String(invoice.id), restorationId: String(invoice.restorationId) },
-        success_url: back('processing'),
+        success_url: `${back('processing')}&session={CHECKOUT_SESSION_ID}`,
         cancel_url: back('cancelled'),
       }).catch(serviceError);
       if (!session.url) throw new HttpError(502, 'internal', 'The payment service gave no checkout page.');
