@@ -58,6 +58,8 @@ export async function startPaymentFake(options: PaymentFakeOptions) {
   }));
   app.use('/v1', api);
 
+  // Browsers ask for an icon; an empty answer keeps their console quiet.
+  app.get('/favicon.ico', (_req, res) => void res.status(204).end());
   const page = (s: FakeSession, notice = '') => checkoutPage(s, notice);
   app.get('/checkout/:id', (req, res) => void res.type('html').send(page(state.get(req.params.id))));
   const outcome = (paid: boolean): RequestHandler => (req, res) => {
