@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { moneySchema } from './estimates';
 import { idSchema } from './ids';
+import { invoiceKinds } from './invoices';
 
 export const paymentMethods = ['card', 'transfer', 'cash'] as const;
 export type PaymentMethod = (typeof paymentMethods)[number];
@@ -37,6 +38,7 @@ export const paymentSchema = z.object({
   id: z.number(),
   invoiceId: z.number(),
   invoiceNumber: z.number(),
+  invoiceKind: z.enum(invoiceKinds),
   kind: z.enum(paymentKinds),
   method: z.enum(paymentMethods),
   status: z.enum(paymentStatuses),

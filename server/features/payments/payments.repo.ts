@@ -38,11 +38,11 @@ export async function recordPaymentEvent(tx: Tx, invoice: InvoiceRow, p: Row, ac
   });
 }
 
-function present(p: Row, number: number, all: Row[]): Payment {
+function present(p: Row, invoice: { number: number; kind: InvoiceRow['kind'] }, all: Row[]): Payment {
   const refunded = p.kind === 'payment'
     ? all.filter((r) => r.refundOfId === p.id && r.status === 'succeeded').reduce((a, r) => a + r.amount, 0) : 0;
   return {
-    id: p.id, invoiceId: p.invoiceId, invoiceNumber: number, kind: p.kind, method: p.method, status: p.status,
+    id: p.id, invoiceId: p.invoiceId, invoiceNumber: invoice.number, invoiceKind: invoice.kind, kind: p.kind, method: p.method, status: p.status,
     amount: { amount: p.amount, currency: p.currency }, refunded: { amount: refunded, currency: p.currency },
     refundOfId: p.refundOfId, checkoutSessionId: p.checkoutSessionId, receivedOn: p.receivedOn, createdAt: p.createdAt.toISOString(),
   };
@@ -50,10 +50,10 @@ function present(p: Row, number: number, all: Row[]): Payment {
 
 /** A restoration's payments and refunds, oldest first, as far as the role may see them (mentors: none). */
 export async function listPayments(db: Executor, restorationId: number, role: Role, only?: number): Promise<Payment[]> {
-  const rows = await db.select({ p: payments, number: invoices.number }).from(payments)
+  const rows = await db.select({ p: payments, number: invoices.number, kind: invoices.kind }).from(payments)
     .innerJoin(invoices, eq(invoices.id, payments.invoiceId))
     .where(and(eq(payments.restorationId, restorationId), visibleSql(role, 'payment', {})))
     .orderBy(asc(payments.createdAt), asc(payments.id));
   const all = rows.map((r) => r.p);
-  return rows.filter((r) => only === undefined || r.p.id === only).map((r) => present(r.p, r.number, all));
+  return rows.filter((r) => only === undefined || r.p.id === only).map((r) => present(r.p, r, all));
 }

@@ -1,4 +1,5 @@
 import { can, type Role } from '../../../../shared/permissions';
+import { invoiceKindLabels } from '../../../../shared/schemas/invoices';
 import { paymentMethodLabels, type Payment } from '../../../../shared/schemas/payments';
 import { Button } from '../../../components/button';
 import { useConfirm } from '../../../components/use-confirm';
@@ -33,7 +34,7 @@ export function PaymentLines({ restorationId, role, payments }: { restorationId:
             <div>
               <p className="font-semibold">{describe(p)}</p>
               <p className="text-sm text-ink-soft">
-                {dayText(p)} · {p.kind === 'refund' ? 'against' : 'for'} no. {p.invoiceNumber}
+                {dayText(p)} · {p.kind === 'refund' ? 'against' : 'for'} {invoiceKindLabels[p.invoiceKind].toLowerCase()} no. {p.invoiceNumber}
                 {p.kind === 'payment' && p.refunded.amount > 0 && ` · ${moneyText(p.refunded)} refunded`}
               </p>
             </div>
