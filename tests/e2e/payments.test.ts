@@ -48,5 +48,15 @@ describe('paying a deposit by card', () => {
     const invoices = await page.evaluate(async (id) => (await (await fetch(`/api/restorations/${id}/invoices`)).json()) as { kind: string; status: string; paid: { amount: number } }[], setId);
     expect(invoices.filter((i) => i.kind === 'deposit').map((i) => [i.status, i.paid.amount])).toEqual([['paid', 4250]]);
     expect(consoleMessages).toEqual([]);
+
+    // The workshop sees the same line on the Money tab, with a refund offered.
+    const desk = await newPage(ctx.browser);
+    const deskConsole = watchConsole(desk);
+    await signInAs(desk, ctx.product.origin, 'mara@cobbold-lane.test');
+    await desk.goto(`${ctx.product.origin}/restorations/${setId}/money`);
+    await desk.getByText('Card payment received').waitFor();
+    await desk.getByRole('button', { name: 'Refund the card payment of £42.50' }).waitFor();
+    await expectAccessible(desk, 'the Money tab with a card payment');
+    expect(deskConsole).toEqual([]);
   });
 });
