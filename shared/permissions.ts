@@ -174,7 +174,7 @@ const noMoney: Condition = { never: true };
 
 export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   technician: everything,
-  mentor: { ...everything, estimate: noMoney, payment: noMoney },
+  mentor: { ...everything, estimate: noMoney, payment: noMoney, notification: { field: 'notification.kind', in: ['mention', 'question', 'reply'] } },
   owner: {
     photo: sharedPhoto,
     finding: sharedFinding,
@@ -220,7 +220,13 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
     estimate: { field: 'estimate.sent', is: true },
     /** Payments and refunds on their own sets' invoices (membership is checked by the guard), card or by hand. */
     payment: all,
-    notification: { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
+    notification: {
+      any: [
+        { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
+        // Money received or refunded on their own set.
+        { field: 'notification.kind', is: 'payment' },
+      ],
+    },
   },
 };
 

@@ -124,11 +124,12 @@ export type FindingChange = z.infer<typeof findingChangeSchema>;
 
 export const notificationSchema = z.object({
   id: z.number().int(),
-  kind: z.enum(['mention', 'question', 'reply']),
+  kind: z.enum(['mention', 'question', 'reply', 'payment']),
   summary: z.string(),
   restorationId: z.number().int(),
-  findingId: z.number().int(),
-  photoId: z.number().int(),
+  /** The finding and its photo; null for a payment, which opens the set's Money tab. */
+  findingId: z.number().int().nullable(),
+  photoId: z.number().int().nullable(),
   read: z.boolean(),
   createdAt: z.string(),
 });

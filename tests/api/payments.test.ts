@@ -1,11 +1,11 @@
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Invoice } from '../../shared/schemas/invoices';
 import type { Payment } from '../../shared/schemas/payments';
-import { events, paymentEvents, payments } from '../../server/db/schema';
+import { events, notifications, paymentEvents, payments } from '../../server/db/schema';
 import { signatureHeader } from '../../server/local-services/payments/webhook-signature';
 import { writeWorkshopSettings } from '../../server/features/workshop/workshop-settings';
 import { createRestoration } from '../factories/restorations';
@@ -14,17 +14,17 @@ import { startTestApp } from '../support/test-app';
 
 let t: Awaited<ReturnType<typeof startTestApp>>;
 let server: Server;
-let tech: Agent, owner: Agent;
-let techId: number, ownerId: number;
+let tech: Agent, owner: Agent, mentor: Agent;
+let techId: number, ownerId: number, mentorId: number;
 beforeAll(async () => {
   t = await startTestApp();
   // The fake posts its signed events to the app over loopback, as the real service would over the internet.
   server = t.app.listen(0, '127.0.0.1');
   await new Promise((r) => server.once('listening', r));
   t.paymentFake.setWebhookUrl(`http://127.0.0.1:${(server.address() as AddressInfo).port}/api/payments/webhook`);
-  const [a, b] = await Promise.all([createUser(t.db), createUser(t.db)]);
-  [techId, ownerId] = [a.id, b.id];
-  [tech, owner] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b)]);
+  const [a, b, c] = await Promise.all([createUser(t.db), createUser(t.db), createUser(t.db)]);
+  [techId, ownerId, mentorId] = [a.id, b.id, c.id];
+  [tech, owner, mentor] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b), signedIn(t.app, c)]);
   await writeWorkshopSettings(t.db, { currency: 'GBP', labourRate: 4000, partsMarkupBasisPoints: 2500, taxName: 'VAT', taxRateBasisPoints: null, taxRounding: 'invoice-down', estimateApprovalRequired: false });
 });
 afterAll(async () => {
@@ -34,7 +34,7 @@ afterAll(async () => {
 });
 
 const newDeposit = async (amount = 5000) => {
-  const id = (await createRestoration(t.db, [{ userId: techId, role: 'technician' }, { userId: ownerId, role: 'owner' }])).id;
+  const id = (await createRestoration(t.db, [{ userId: techId, role: 'technician' }, { userId: ownerId, role: 'owner' }, { userId: mentorId, role: 'mentor' }])).id;
   const deposit = (await tech.post(`/api/restorations/${id}/deposits`).send({ amount })).body as Invoice;
   return { id, deposit };
 };
@@ -74,6 +74,13 @@ describe('card payments through the hosted checkout (the real SDK against the lo
     expect(lines).toHaveLength(1);
     expect(lines[0]).toMatchObject({ kind: 'payment', method: 'card', status: 'succeeded', amount: { amount: 5000, currency: 'GBP' }, invoiceNumber: deposit.number });
     expect((await historyKinds(id)).filter((k) => k === 'payment-received')).toHaveLength(1);
+    // One notification each for the technician and the owner (written with the payment), none for the mentor.
+    const notes = await t.db.select().from(notifications).where(and(eq(notifications.restorationId, id), eq(notifications.kind, 'payment')));
+    expect(notes.map((n) => n.userId).sort()).toEqual([techId, ownerId].sort());
+    expect(notes[0]!.summary).toBe(`Payment of £50.00 received for deposit request no. ${deposit.number} (card)`);
+    const ownerList = (await owner.get('/api/notifications')).body as { kind: string; restorationId: number; findingId: number | null }[];
+    expect(ownerList.filter((n) => n.kind === 'payment' && n.restorationId === id)).toEqual([expect.objectContaining({ findingId: null })]);
+    expect(((await mentor.get('/api/notifications')).body as { kind: string }[]).filter((n) => n.kind === 'payment')).toEqual([]);
     const stored = await t.db.select().from(payments).where(eq(payments.restorationId, id));
     expect(stored[0]!.checkoutSessionId).toMatch(/^cs_test_/);
     expect(stored[0]!.paymentIntentId).toMatch(/^pi_test_/);

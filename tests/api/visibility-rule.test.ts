@@ -2,7 +2,7 @@ import { sql, type SQL } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mayView, roles, visibilitySubjects, type Role, type VisibilitySubject } from '../../shared/permissions';
 import type { FieldRef, VisibilityFacts } from '../../shared/visibility-rule';
-import { eventKindEnum, partActionEnum, partStateEnum } from '../../server/db/schema';
+import { eventKindEnum, notificationKindEnum, partActionEnum, partStateEnum } from '../../server/db/schema';
 import { fieldsRead, visibleSql, type FieldSources } from '../../server/features/visibility/visibility-sql';
 import { createTestDatabase } from '../support/test-database';
 
@@ -81,7 +81,9 @@ const table: [string, Role, VisibilitySubject, VisibilityFacts, boolean][] = [
   ['a shared reply on a finding later unshared', 'owner', 'notification', { notification: { commentId: 7 }, comment: { internal: false }, finding: internal, photo: shared }, false],
   ['a shared reply on a shared finding', 'owner', 'notification', { notification: { commentId: 7 }, comment: { internal: false }, finding: shared, photo: shared }, true],
   ['an internal reply', 'owner', 'notification', { notification: { commentId: 7 }, comment: { internal: true }, finding: shared, photo: shared }, false],
-  ['a question notification, for a mentor', 'mentor', 'notification', { notification: { commentId: null }, finding: internal, photo: internal }, true],
+  ['a question notification, for a mentor', 'mentor', 'notification', { notification: { commentId: null, kind: 'question' }, finding: internal, photo: internal }, true],
+  ['a payment notification, for the owner (no finding)', 'owner', 'notification', { notification: { commentId: null, kind: 'payment' } }, true],
+  ['a payment notification, for a mentor (mentors see no money)', 'mentor', 'notification', { notification: { commentId: null, kind: 'payment' } }, false],
   ['an unshared sheet page', 'owner', 'sheetPage', { sheetPage: internal }, false],
   ['a shared sheet page', 'owner', 'sheetPage', { sheetPage: shared }, true],
   ['an unshared sheet page, for a mentor', 'mentor', 'sheetPage', { sheetPage: internal }, true],
@@ -102,6 +104,7 @@ describe('the visibility rule, in memory and in SQL', () => {
     const domain = (ref: FieldRef): unknown[] => {
       const field = ref.split('.')[1]!;
       if (ref === 'event.kind') return [...eventKindEnum.enumValues, null];
+      if (ref === 'notification.kind') return [...notificationKindEnum.enumValues, null];
       if (ref === 'part.state') return [...partStateEnum.enumValues, null];
       if (ref === 'part.action') return [...partActionEnum.enumValues, null];
       if (field.endsWith('At')) return [t0, t1, null];

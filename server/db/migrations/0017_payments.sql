@@ -1,6 +1,7 @@
 CREATE TYPE "public"."payment_kind" AS ENUM('payment', 'refund');--> statement-breakpoint
 CREATE TYPE "public"."payment_method" AS ENUM('card', 'transfer', 'cash');--> statement-breakpoint
 CREATE TYPE "public"."payment_status" AS ENUM('pending', 'succeeded', 'failed');--> statement-breakpoint
+ALTER TYPE "public"."notification_kind" ADD VALUE 'payment';--> statement-breakpoint
 ALTER TYPE "public"."event_kind" ADD VALUE 'payment-received';--> statement-breakpoint
 ALTER TYPE "public"."event_kind" ADD VALUE 'payment-refunded';--> statement-breakpoint
 CREATE TABLE "payment_events" (
@@ -31,6 +32,7 @@ CREATE TABLE "payments" (
 	CONSTRAINT "payments_amount_positive" CHECK ("payments"."amount" > 0)
 );
 --> statement-breakpoint
+ALTER TABLE "notifications" ALTER COLUMN "finding_id" DROP NOT NULL;--> statement-breakpoint
 ALTER TABLE "payment_events" ADD CONSTRAINT "payment_events_payment_id_payments_id_fk" FOREIGN KEY ("payment_id") REFERENCES "public"."payments"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "payments" ADD CONSTRAINT "payments_invoice_id_invoices_id_fk" FOREIGN KEY ("invoice_id") REFERENCES "public"."invoices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "payments" ADD CONSTRAINT "payments_restoration_id_restorations_id_fk" FOREIGN KEY ("restoration_id") REFERENCES "public"."restorations"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint

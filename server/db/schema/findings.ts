@@ -89,7 +89,7 @@ export const comments = pgTable(
   ],
 );
 
-export const notificationKindEnum = pgEnum('notification_kind', ['mention', 'question', 'reply']);
+export const notificationKindEnum = pgEnum('notification_kind', ['mention', 'question', 'reply', 'payment']);
 
 /** An unread item for one person; e-mails are batched from these rows (several instances share them). */
 export const notifications = pgTable(
@@ -102,9 +102,8 @@ export const notifications = pgTable(
     restorationId: integer()
       .notNull()
       .references(() => restorations.id, { onDelete: 'cascade' }),
-    findingId: integer()
-      .notNull()
-      .references(() => findings.id, { onDelete: 'cascade' }),
+    /** The finding it is about; none for a payment received or refunded. */
+    findingId: integer().references(() => findings.id, { onDelete: 'cascade' }),
     commentId: integer().references(() => comments.id, { onDelete: 'cascade' }),
     kind: notificationKindEnum().notNull(),
     /** One line for the list and the e-mail, written for this recipient (no internal text for owners). */

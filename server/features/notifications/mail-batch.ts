@@ -6,7 +6,7 @@ import { notificationJoins, notificationVisible } from '../visibility/notificati
 
 const MAIL_LOCK = 5180002;
 
-type Claimed = { person: { id: number; email: string; name: string }; items: { id: number; summary: string; findingId: number; restorationId: number; photoId: number }[] };
+type Claimed = { person: { id: number; email: string; name: string }; items: { id: number; summary: string; findingId: number | null; restorationId: number; photoId: number | null }[] };
 
 /**
  * Claims what is due, per person, and commits the claim before anything is sent. Rows are taken with SKIP
@@ -20,7 +20,7 @@ async function claimDue(deps: Pick<AppDeps, 'db' | 'config'>, now: Date): Promis
       .select({ id: notifications.id, userId: notifications.userId, summary: notifications.summary, findingId: notifications.findingId,
         restorationId: notifications.restorationId, photoId: findings.photoId })
       .from(notifications)
-      .innerJoin(findings, eq(findings.id, notifications.findingId))
+      .leftJoin(findings, eq(findings.id, notifications.findingId))
       .where(and(isNull(notifications.mailClaimedAt), isNull(notifications.emailedAt), isNull(notifications.readAt)))
       .orderBy(notifications.id)
       .for('update', { of: notifications, skipLocked: true });
@@ -41,8 +41,8 @@ async function claimDue(deps: Pick<AppDeps, 'db' | 'config'>, now: Date): Promis
       const readable = await tx
         .select({ id: notifications.id })
         .from(notifications)
-        .innerJoin(findings, notificationJoins.finding)
-        .innerJoin(photos, notificationJoins.photo)
+        .leftJoin(findings, notificationJoins.finding)
+        .leftJoin(photos, notificationJoins.photo)
         .innerJoin(memberships, notificationJoins.membership)
         .leftJoin(comments, notificationJoins.comment)
         .where(and(inArray(notifications.id, mine.map((i) => i.id)), notificationVisible));
@@ -68,7 +68,7 @@ export async function flushNotificationMail(deps: Pick<AppDeps, 'db' | 'mailer' 
   const failures: Error[] = [];
   for (const { person, items } of claimed) {
     const ids = items.map((i) => i.id);
-    const lines = items.map((i) => `• ${i.summary}\n  ${deps.config.publicOrigin}${findingPath({ restorationId: i.restorationId, photoId: i.photoId, id: i.findingId })}`);
+    const lines = items.map((i) => `• ${i.summary}\n  ${deps.config.publicOrigin}${i.findingId && i.photoId ? findingPath({ restorationId: i.restorationId, photoId: i.photoId, id: i.findingId }) : `/restorations/${i.restorationId}/money`}`);
     try {
       await deps.mailer.send({
         to: person.email,

@@ -24,8 +24,8 @@ export function notificationsRepo(db: Executor) {
       return db
         .select({ n: notifications, photoId: findings.photoId })
         .from(notifications)
-        .innerJoin(findings, notificationJoins.finding)
-        .innerJoin(photos, notificationJoins.photo)
+        .leftJoin(findings, notificationJoins.finding)
+        .leftJoin(photos, notificationJoins.photo)
         .innerJoin(memberships, notificationJoins.membership)
         .leftJoin(comments, notificationJoins.comment)
         .where(and(eq(notifications.userId, userId), notificationVisible, beforeId ? lt(notifications.id, beforeId) : undefined))

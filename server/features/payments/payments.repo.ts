@@ -1,9 +1,12 @@
 import { and, asc, eq, sql } from 'drizzle-orm';
-import type { Role } from '../../../shared/permissions';
-import type { Payment } from '../../../shared/schemas/payments';
+import { formatMoney } from '../../../shared/money/currency';
+import { mayView, type Role } from '../../../shared/permissions';
+import { invoiceKindLabels } from '../../../shared/schemas/invoices';
+import { paymentMethodLabels, type Payment } from '../../../shared/schemas/payments';
 import type { Executor, Tx } from '../../db/client';
 import { events, invoices, payments } from '../../db/schema';
 import { NotFoundError } from '../../http/errors';
+import { notificationsRepo } from '../notifications/notifications.repo';
 import { visibleSql } from '../visibility/visibility-sql';
 
 type Row = typeof payments.$inferSelect;
@@ -30,12 +33,22 @@ export async function settleInvoice(tx: Tx, invoiceId: number) {
   await tx.update(invoices).set({ paid }).where(eq(invoices.id, invoiceId));
 }
 
-/** The history line for money that arrived or went back, in the same transaction as the change. */
+/**
+ * The history line and the notifications (technicians and the owner, never mentors; not the person who recorded it)
+ * for money that arrived or went back, in the same transaction as the change.
+ */
 export async function recordPaymentEvent(tx: Tx, invoice: InvoiceRow, p: Row, actorId: number | null) {
   await tx.insert(events).values({
     restorationId: invoice.restorationId, kind: p.kind === 'refund' ? 'payment-refunded' : 'payment-received', actorId,
     data: { invoiceId: invoice.id, number: invoice.number, kind: invoice.kind, method: p.method, paymentId: p.id },
   });
+  const what = `${invoiceKindLabels[invoice.kind].toLowerCase()} no. ${invoice.number}`;
+  const amount = formatMoney({ amount: p.amount, currency: p.currency }, 'en-GB');
+  const summary = p.kind === 'refund' ? `Refund of ${amount} on ${what} (${paymentMethodLabels[p.method].toLowerCase()})`
+    : `Payment of ${amount} received for ${what} (${paymentMethodLabels[p.method].toLowerCase()})`;
+  const people = await notificationsRepo(tx).membersWithRole(invoice.restorationId, ['technician', 'owner']);
+  await notificationsRepo(tx).insert(people.filter((m) => m.userId !== actorId && mayView(m.role, 'payment', {}))
+    .map((m) => ({ userId: m.userId, restorationId: invoice.restorationId, kind: 'payment' as const, summary })));
 }
 
 function present(p: Row, invoice: { number: number; kind: InvoiceRow['kind'] }, all: Row[]): Payment {

@@ -4,7 +4,7 @@ import { findingPath, type Notification } from '../../../../shared/schemas/findi
 import { useMarkNotificationsRead, useNotifications } from '../api/get-notifications';
 import { fullTime, relativeTime } from './finding-format';
 
-const kindGlyph: Record<Notification['kind'], string> = { mention: '@', question: '?', reply: '↩' };
+const kindGlyph: Record<Notification['kind'], string> = { mention: '@', question: '?', reply: '↩', payment: '£' };
 
 /** The header's bell: unread count on the button, the list in a popover; Escape or a click outside closes it. */
 export function NotificationsMenu() {
@@ -38,7 +38,8 @@ export function NotificationsMenu() {
   const openItem = (n: Notification) => {
     if (!n.read) markRead.mutate([n.id]);
     close(false);
-    void navigate(findingPath({ restorationId: n.restorationId, photoId: n.photoId, id: n.findingId }));
+    // A payment has no finding: it opens the set's Money tab.
+    void navigate(n.findingId && n.photoId ? findingPath({ restorationId: n.restorationId, photoId: n.photoId, id: n.findingId }) : `/restorations/${n.restorationId}/money`);
   };
 
   return (
