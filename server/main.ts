@@ -49,9 +49,7 @@ async function main() {
   const storage = createStorage(await resolveStorage(env, root, stops));
   const mailer = createMailer(await resolveMail(env, handle, stops), env.MAIL_FROM);
   const uploads = uploadLimits(env);
-  // The local payment fake posts its events to this process directly, on loopback.
-  const appHost = listenHost(env) === '0.0.0.0' || listenHost(env) === '::' ? '127.0.0.1' : listenHost(env);
-  const payments = createPaymentService(await resolvePayments(env, `http://${appHost.includes(':') ? `[${appHost}]` : appHost}:${env.PORT}/api/payments/webhook`, stops));
+  const payments = createPaymentService(await resolvePayments(env, stops));
   if (demo) {
     await seedDemo(handle.db);
     await seedDemoPhotos({ db: handle.db, storage, config: { uploads } });

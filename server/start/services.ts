@@ -1,5 +1,5 @@
 import path from 'node:path';
-import type { Env } from '../env';
+import { listenHost, type Env } from '../env';
 import type { DatabaseHandle } from '../db/client';
 import { startMailCapture } from '../local-services/mail-capture';
 import { startLocalPostgres } from '../local-services/postgres';
@@ -57,9 +57,16 @@ export function dataRoot(env: Env, root: string): string {
  * The hosted payment service when its key and signing secret are set; otherwise the local payment fake on
  * loopback, which posts its events to `webhookUrl` (this app's /api/payments/webhook).
  */
-export async function resolvePayments(env: Env, webhookUrl: string, stops: Stop[]): Promise<PaymentServiceConfig> {
+export async function resolvePayments(env: Env, stops: Stop[]): Promise<PaymentServiceConfig> {
   if (env.STRIPE_SECRET_KEY && env.STRIPE_WEBHOOK_SECRET) return { secretKey: env.STRIPE_SECRET_KEY, webhookSecret: env.STRIPE_WEBHOOK_SECRET };
-  const fake = await startPaymentFake({ port: localPorts(env).payments, webhookUrl });
+  const fake = await startPaymentFake({ port: localPorts(env).payments, webhookUrl: localWebhookUrl(env) });
   stops.push({ name: 'local payment service', stop: fake.close });
   return { secretKey: fake.secretKey, webhookSecret: fake.webhookSecret, api: fake.api };
+}
+
+/** This process's webhook endpoint as the local fake reaches it: over loopback when listening on every address. */
+function localWebhookUrl(env: Env): string {
+  const host = listenHost(env);
+  const reach = host === '0.0.0.0' || host === '::' ? '127.0.0.1' : host.includes(':') ? `[${host}]` : host;
+  return `http://${reach}:${env.PORT}/api/payments/webhook`;
 }
