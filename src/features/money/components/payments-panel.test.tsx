@@ -63,4 +63,17 @@ describe('PaymentsPanel', () => {
     expect(await screen.findByText('Card payment received')).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Refund/ })).not.toBeInTheDocument();
   });
+
+  it('when a technician records a transfer in pounds, then it is sent in pence with the day it arrived', async () => {
+    const api = fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit()]) : c.method === 'GET' ? ok([]) : { status: 201, body: { ...cardPayment, method: 'transfer' } }));
+    renderPanel('technician');
+    await userEvent.type(await screen.findByLabelText('Amount (GBP)'), '20.50');
+    const day = screen.getByLabelText('Received on');
+    await userEvent.clear(day);
+    await userEvent.type(day, '2026-11-30');
+    await userEvent.click(screen.getByRole('button', { name: 'Record payment' }));
+    await waitFor(() => expect(api.calls.some((c) => c.method === 'POST')).toBe(true));
+    expect(api.calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: '/invoices/4/payments',
+      body: { amount: { amount: 2050, currency: 'GBP' }, method: 'transfer', receivedOn: '2026-11-30' } });
+  });
 });
