@@ -2,6 +2,7 @@ import type pg from 'pg';
 import type { Logger } from 'pino';
 import type { Database } from './db/client';
 import type { ThrottleConfig } from './features/auth/throttle';
+import type { PaymentService } from './features/payments/payment-service';
 import type { Mailer } from './mail';
 import type { Storage } from './storage';
 
@@ -13,6 +14,8 @@ export interface AppDeps {
   storage: Storage;
   mailer: Mailer;
   logger: Logger;
+  /** The hosted payment service's SDK (the real service, or the local fake) and its webhook signing secret. */
+  payments: PaymentService;
   config: {
     /** e.g. https://gridleak.example.org; writes from other origins are refused, links in e-mail point here. */
     publicOrigin: string;

@@ -32,6 +32,7 @@ import { estimatesRoutes } from './features/estimates/estimates.routes';
 import { labourRoutes } from './features/labour/labour.routes';
 import { invoicesRoutes } from './features/invoices/invoices.routes';
 import { workshopRoutes } from './features/workshop/workshop.routes';
+import { paymentsRoutes, paymentWebhookRoute } from './features/payments/payments.routes';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { redactedError } from './http/redact-error';
 import { requireSameOrigin } from './http/same-origin';
@@ -67,6 +68,8 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   const api = Router();
   // JSON answers above 1 kB are compressed (brotli or gzip, as the client accepts).
   api.use(compression({ threshold: 1024 }));
+  // The payment service's events need their raw bytes for the signature check: before the JSON parser, no session.
+  api.use(paymentWebhookRoute(deps));
   api.use(express.json({ limit: '1mb' }));
   api.use(requireSameOrigin(deps.config.publicOrigin));
   api.use(healthRoutes(deps));
@@ -99,6 +102,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(labourRoutes(deps));
   api.use(invoicesRoutes(deps));
   api.use(workshopRoutes(deps));
+  api.use(paymentsRoutes(deps));
   if (deps.config.devMail) api.use(devMailRoutes(deps));
   api.use(apiNotFound);
   api.use(errorMiddleware);

@@ -33,6 +33,13 @@ describe('environment', () => {
     expect(lines).toEqual(expect.arrayContaining([expect.stringMatching(/^S3_BUCKET is required/), expect.stringMatching(/^S3_SECRET_ACCESS_KEY/)]));
   });
 
+  it('when only one of the payment service settings is given, or one is malformed, then start-up names it', () => {
+    expect(problems({ STRIPE_SECRET_KEY: 'sk_test_abc123' })).toEqual(['STRIPE_WEBHOOK_SECRET is required when STRIPE_SECRET_KEY is set']);
+    expect(problems({ STRIPE_WEBHOOK_SECRET: 'whsec_abc123' })).toEqual(['STRIPE_SECRET_KEY is required when STRIPE_WEBHOOK_SECRET is set']);
+    expect(problems({ STRIPE_SECRET_KEY: 'pk_test_abc123', STRIPE_WEBHOOK_SECRET: 'whsec_abc123' })).toEqual([expect.stringMatching(/^STRIPE_SECRET_KEY must be a secret key/)]);
+    expect(parseEnv({ STRIPE_SECRET_KEY: 'sk_test_abc123', STRIPE_WEBHOOK_SECRET: 'whsec_abc123' }).STRIPE_SECRET_KEY).toBe('sk_test_abc123');
+  });
+
   it('when PORT is not a number, then it is reported with the others', () => {
     const lines = problems({ PORT: 'eighty', PUBLIC_URL: 'not a url' });
     expect(lines).toHaveLength(2);

@@ -24,7 +24,8 @@ import { defaultThrottle } from './features/auth/throttle';
 import { LocalServiceError } from './local-services/run-command';
 import { redactedError } from './http/redact-error';
 import { createMailer } from './mail';
-import { resolveDatabase, resolveMail, resolveStorage, type Stop } from './start/services';
+import { resolveDatabase, resolveMail, resolvePayments, resolveStorage, type Stop } from './start/services';
+import { createPaymentService } from './features/payments/payment-service';
 import { createStorage } from './storage';
 
 process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
@@ -48,6 +49,7 @@ async function main() {
   const storage = createStorage(await resolveStorage(env, root, stops));
   const mailer = createMailer(await resolveMail(env, handle, stops), env.MAIL_FROM);
   const uploads = uploadLimits(env);
+  const payments = createPaymentService(await resolvePayments(env, stops));
   if (demo) {
     await seedDemo(handle.db);
     await seedDemoPhotos({ db: handle.db, storage, config: { uploads } });
@@ -70,6 +72,7 @@ async function main() {
       storage,
       mailer,
       logger,
+      payments,
       config: { publicOrigin: origin, sessionSecret: sessionSecret(env), demo, devMail: env.NODE_ENV !== 'production', throttle: defaultThrottle,
         uploads,
         notificationWindowSeconds: env.NOTIFICATION_WINDOW_SECONDS },

@@ -52,6 +52,9 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'labour.record': { technician: true, mentor: false, owner: false },
   'settings.view': { technician: true, mentor: false, owner: false },
   'settings.edit': { technician: true, mentor: false, owner: false },
+  // Owners pay their own invoices by card; technicians may too (at the counter), and alone record transfers, cash and refunds.
+  'payments.checkout': { technician: true, mentor: false, owner: true },
+  'payments.record': { technician: true, mentor: false, owner: false },
 };
 
 describe('can()', () => {

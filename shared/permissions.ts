@@ -56,6 +56,8 @@ export const actions = [
   'labour.record',
   'settings.view',
   'settings.edit',
+  'payments.checkout',
+  'payments.record',
 ] as const;
 export type Action = (typeof actions)[number];
 
@@ -134,6 +136,10 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   // role: a technician on any restoration is one of the workshop's technicians (see `workshopRole`).
   'settings.view': (role) => role === 'technician',
   'settings.edit': (role) => role === 'technician',
+  // Paying by card through the hosted checkout: the owner, or a technician taking the payment at the counter.
+  'payments.checkout': (role) => role !== 'mentor',
+  // Transfers and cash recorded by hand, and refunds: the workshop's books, technicians only.
+  'payments.record': (role) => role === 'technician',
 };
 
 /**
@@ -171,22 +177,22 @@ const sinceShared = (entity: 'event' | 'change'): Condition => ({ field: `${enti
 const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all: [{ field: 'event.kind', is: kind }, ...conditions] });
 
 export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark', 'estimate',
-  'readingRequest', 'symptomCheck'] as const;
+  'readingRequest', 'symptomCheck', 'payment'] as const;
 export type VisibilitySubject = (typeof visibilitySubjects)[number];
 
 const all: Condition = { always: true };
 const everything: Record<VisibilitySubject, Condition> = {
   photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, sheetPage: all, referenceMark: all, estimate: all,
-  readingRequest: all, symptomCheck: all,
+  readingRequest: all, symptomCheck: all, payment: all,
 };
 /** Mentors help with the work and see none of its money. */
 const noMoney: Condition = { never: true };
 /** History lines about money (estimates sent and answered, invoices issued and voided); they carry no amounts, but still. */
-const moneyEvent: Condition = { field: 'event.kind', in: ['estimate-sent', 'estimate-decided', 'invoice-issued', 'invoice-voided'] };
+const moneyEvent: Condition = { field: 'event.kind', in: ['estimate-sent', 'estimate-decided', 'invoice-issued', 'invoice-voided', 'payment-received', 'payment-refunded'] };
 
 export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   technician: everything,
-  mentor: { ...everything, estimate: noMoney, event: { not: moneyEvent } },
+  mentor: { ...everything, estimate: noMoney, payment: noMoney, event: { not: moneyEvent }, notification: { not: { field: 'notification.kind', is: 'payment' } } },
   owner: {
     photo: sharedPhoto,
     finding: sharedFinding,
@@ -219,6 +225,8 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
         eventOf('estimate-decided'),
         eventOf('invoice-issued'),
         eventOf('invoice-voided'),
+        eventOf('payment-received'),
+        eventOf('payment-refunded'),
       ],
     },
     /** A finding's change record, only from after it was shared. */
@@ -235,7 +243,15 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
      * to the checklist itself): its note is never sent, its reading and finding follow their own rules.
      */
     symptomCheck: all,
-    notification: { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
+    /** Payments and refunds on their own sets' invoices (membership is checked by the guard), card or by hand. */
+    payment: all,
+    notification: {
+      any: [
+        { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
+        // Money received or refunded on their own set.
+        { field: 'notification.kind', is: 'payment' },
+      ],
+    },
   },
 };
 

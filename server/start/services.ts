@@ -1,15 +1,18 @@
 import path from 'node:path';
-import type { Env } from '../env';
+import { listenHost, type Env } from '../env';
 import type { DatabaseHandle } from '../db/client';
 import { startMailCapture } from '../local-services/mail-capture';
 import { startLocalPostgres } from '../local-services/postgres';
+import { startPaymentFake } from '../local-services/payments/payment-fake';
 import { startS3StandIn } from '../local-services/s3-stand-in';
+import type { PaymentServiceConfig } from '../features/payments/payment-service';
 import type { StorageConfig } from '../storage';
 
 /** Ports of the local stand-ins, each of its own; a second checkout can move them with GRIDLEAK_PORT_BASE. */
 export function localPorts(env: Env) {
   const base = env.GRIDLEAK_PORT_BASE;
-  return { postgres: base, s3: base + 1, smtp: base + 2 };
+  // base + 3 is left free: the journeys put the app itself there.
+  return { postgres: base, s3: base + 1, smtp: base + 2, payments: base + 4 };
 }
 
 export interface Stop {
@@ -48,4 +51,22 @@ export async function resolveMail(env: Env, handle: DatabaseHandle, stops: Stop[
 
 export function dataRoot(env: Env, root: string): string {
   return env.GRIDLEAK_DATA_DIR ?? path.join(root, '.data');
+}
+
+/**
+ * The hosted payment service when its key and signing secret are set; otherwise the local payment fake on
+ * loopback, which posts its events to `webhookUrl` (this app's /api/payments/webhook).
+ */
+export async function resolvePayments(env: Env, stops: Stop[]): Promise<PaymentServiceConfig> {
+  if (env.STRIPE_SECRET_KEY && env.STRIPE_WEBHOOK_SECRET) return { secretKey: env.STRIPE_SECRET_KEY, webhookSecret: env.STRIPE_WEBHOOK_SECRET };
+  const fake = await startPaymentFake({ port: localPorts(env).payments, webhookUrl: localWebhookUrl(env) });
+  stops.push({ name: 'local payment service', stop: fake.close });
+  return { secretKey: fake.secretKey, webhookSecret: fake.webhookSecret, api: fake.api };
+}
+
+/** This process's webhook endpoint as the local fake reaches it: over loopback when listening on every address. */
+function localWebhookUrl(env: Env): string {
+  const host = listenHost(env);
+  const reach = host === '0.0.0.0' || host === '::' ? '127.0.0.1' : host.includes(':') ? `[${host}]` : host;
+  return `http://${reach}:${env.PORT}/api/payments/webhook`;
 }

@@ -124,10 +124,10 @@ export type FindingChange = z.infer<typeof findingChangeSchema>;
 
 export const notificationSchema = z.object({
   id: z.number().int(),
-  kind: z.enum(['mention', 'question', 'reply', 'help-request', 'reading-requested', 'reading-answered']),
+  kind: z.enum(['mention', 'question', 'reply', 'help-request', 'reading-requested', 'reading-answered', 'payment']),
   summary: z.string(),
   restorationId: z.number().int(),
-  /** What it is about: a finding on a photo, or (both null) the restoration's help requests. */
+  /** What it is about: a finding on a photo; else (both null) the restoration's help requests, or its Money tab for a payment. */
   findingId: z.number().int().nullable(),
   photoId: z.number().int().nullable(),
   helpRequestId: z.number().int().nullable(),
@@ -153,6 +153,7 @@ export type OpenQuestion = z.infer<typeof openQuestionSchema>;
 export const findingPath = (f: { restorationId: number; photoId: number; id: number }) =>
   `/restorations/${f.restorationId}/photos/${f.photoId}/findings/${f.id}`;
 
-/** Where a notification leads: its finding, or the Help tab for help requests and requests for readings. */
-export const notificationPath = (n: { restorationId: number; findingId: number | null; photoId: number | null }) =>
-  n.findingId !== null && n.photoId !== null ? findingPath({ restorationId: n.restorationId, photoId: n.photoId, id: n.findingId }) : `/restorations/${n.restorationId}/help`;
+/** Where a notification leads: its finding, the Money tab for a payment, or the Help tab for help requests and requests for readings. */
+export const notificationPath = (n: { restorationId: number; kind?: string; findingId: number | null; photoId: number | null }) =>
+  n.findingId !== null && n.photoId !== null ? findingPath({ restorationId: n.restorationId, photoId: n.photoId, id: n.findingId })
+    : n.kind === 'payment' ? `/restorations/${n.restorationId}/money` : `/restorations/${n.restorationId}/help`;

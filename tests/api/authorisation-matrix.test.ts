@@ -12,6 +12,7 @@ import { sheetsRepo } from '../../server/features/sheets/sheets.repo';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
 import { estimatesService } from '../../server/features/estimates/estimates.service';
 import { invoicesService } from '../../server/features/invoices/invoices.service';
+import { paymentsService } from '../../server/features/payments/payments.service';
 import { findingsRepo } from '../../server/features/findings/findings.repo';
 import { helpRepo } from '../../server/features/help/help.repo';
 import { newToken } from '../../server/features/auth/tokens';
@@ -27,7 +28,7 @@ type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
 type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; pageId: number; markId: number;
   helpRequestId: number; helpToken: string; replyId: number; estimateId: number; draftEstimateId: number; invoiceId: number;
-  symptomId: string; causeId: string; readingRequestId: number };
+  symptomId: string; causeId: string; readingRequestId: number; paymentId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
 type Row = [Method, string, Expect, ((f: Fixture) => object | Buffer)?, 'fresh people'?];
 
@@ -163,6 +164,13 @@ const matrix: Row[] = [
   ['POST', '/api/restorations/:id/deposits', [201, 403, 403, 404, 401], () => ({ amount: 5000 })],
   ['POST', '/api/restorations/:id/invoices', [409, 403, 403, 404, 401]],
   ['POST', '/api/invoices/:invoiceId/void', [200, 403, 403, 404, 401], () => ({ reason: 'Issued to the wrong set.' })],
+  // Payments: a second deposit of the fixture has £10 paid in cash; the owner pays by card through the checkout (mentors see no money).
+  ['GET', '/api/restorations/:id/payments', [200, 403, 200, 404, 401]],
+  ['POST', '/api/invoices/:invoiceId/checkout', [200, 403, 200, 404, 401]],
+  ['POST', '/api/invoices/:invoiceId/payments', [201, 403, 403, 404, 401], () => ({ amount: { amount: 1000, currency: 'GBP' }, method: 'transfer', receivedOn: '2026-12-01' })],
+  ['POST', '/api/payments/:paymentId/refund', [201, 403, 403, 404, 401], () => ({})],
+  // The payment service's events need no session, only a valid signature.
+  ['POST', '/api/payments/webhook', [400, 400, 400, 400, 400], () => ({ id: 'evt_unsigned', type: 'checkout.session.completed' })],
   ['POST', '/api/estimates/:estimateId/decision', [403, 403, 200, 404, 401], () => ({ decision: 'approved', name: 'Ada Owner', version: 1 })],
   ['GET', '/api/restorations/:id/invoices/preview', [200, 403, 403, 404, 401]],
   ['GET', '/api/invoices/:invoiceId/invoice.pdf', [200, 403, 200, 404, 401]],
@@ -219,10 +227,12 @@ async function fixture(): Promise<Fixture> {
   const estimateId = (await estimates.create(r.id, { note: '', send: true, lines: [{ kind: 'part', description: 'Capacitors', low: 1000, high: 1500 }] }, people.technician!.id, 'technician')).id;
   const draftEstimateId = (await estimates.create(r.id, { note: '', send: false, lines: [{ kind: 'part', description: 'Capacitors', low: 1200, high: 1500 }] }, people.technician!.id, 'technician')).id;
   const invoiceId = (await invoicesService(t.deps).deposit(r.id, { amount: 5000 }, people.technician!.id)).id;
+  const paidDepositId = (await invoicesService(t.deps).deposit(r.id, { amount: 3000 }, people.technician!.id)).id;
+  const paymentId = (await paymentsService(t.deps).record(paidDepositId, { amount: { amount: 1000, currency: 'GBP' }, method: 'cash', receivedOn: '2026-12-01' }, people.technician!.id, 'technician')).id;
   const readingRequestId = (await t.db.insert(readingRequests).values({ restorationId: r.id, helpRequestId: helpRequest.id, kind: 'reading', body: 'Measure V3 pin 6', askedById: people.mentor!.id })
     .returning({ id: readingRequests.id }))[0]!.id;
   return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, pageId, markId,
-    helpRequestId: helpRequest.id, helpToken: link.token, replyId, estimateId, draftEstimateId, invoiceId, symptomId: 'hum', causeId: 'poor-earth', readingRequestId };
+    helpRequestId: helpRequest.id, helpToken: link.token, replyId, estimateId, draftEstimateId, invoiceId, symptomId: 'hum', causeId: 'poor-earth', readingRequestId, paymentId };
 }
 
 /** New people who each hold one role on one new set, and one who holds none. */

@@ -2,7 +2,7 @@ import { sql, type SQL } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mayView, roles, visibilitySubjects, type Role, type VisibilitySubject } from '../../shared/permissions';
 import type { FieldRef, VisibilityFacts } from '../../shared/visibility-rule';
-import { eventKindEnum, partActionEnum, partStateEnum } from '../../server/db/schema';
+import { eventKindEnum, notificationKindEnum, partActionEnum, partStateEnum } from '../../server/db/schema';
 import { fieldsRead, visibleSql, type FieldSources } from '../../server/features/visibility/visibility-sql';
 import { createTestDatabase } from '../support/test-database';
 
@@ -57,6 +57,10 @@ const table: [string, Role, VisibilitySubject, VisibilityFacts, boolean][] = [
   ['an invoice issued, as a history line for a mentor', 'mentor', 'event', { event: { kind: 'invoice-issued', createdAt: t0 } }, false],
   ['a stage change, as a history line for a mentor', 'mentor', 'event', { event: { kind: 'stage-changed', createdAt: t0 } }, true],
   ['a draft estimate, for the technician', 'technician', 'estimate', { estimate: { sent: false } }, true],
+  ['a payment on their own set, for the owner', 'owner', 'payment', {}, true],
+  ['a payment, for a mentor (mentors see no money)', 'mentor', 'payment', {}, false],
+  ['a payment, for the technician', 'technician', 'payment', {}, true],
+  ['a payment received, in the owner\'s history', 'owner', 'event', { event: { kind: 'payment-received', createdAt: t0 } }, true],
   ['an unshared photo', 'owner', 'photo', { photo: internal }, false],
   ['a shared finding on an unshared photo', 'owner', 'finding', { finding: shared, photo: internal }, false],
   ['a shared finding on a shared photo', 'owner', 'finding', { finding: shared, photo: shared }, true],
@@ -79,7 +83,9 @@ const table: [string, Role, VisibilitySubject, VisibilityFacts, boolean][] = [
   ['a shared reply on a finding later unshared', 'owner', 'notification', { notification: { commentId: 7 }, comment: { internal: false }, finding: internal, photo: shared }, false],
   ['a shared reply on a shared finding', 'owner', 'notification', { notification: { commentId: 7 }, comment: { internal: false }, finding: shared, photo: shared }, true],
   ['an internal reply', 'owner', 'notification', { notification: { commentId: 7 }, comment: { internal: true }, finding: shared, photo: shared }, false],
-  ['a question notification, for a mentor', 'mentor', 'notification', { notification: { commentId: null }, finding: internal, photo: internal }, true],
+  ['a question notification, for a mentor', 'mentor', 'notification', { notification: { commentId: null, kind: 'question' }, finding: internal, photo: internal }, true],
+  ['a payment notification, for the owner (no finding)', 'owner', 'notification', { notification: { commentId: null, kind: 'payment' } }, true],
+  ['a payment notification, for a mentor (mentors see no money)', 'mentor', 'notification', { notification: { commentId: null, kind: 'payment' } }, false],
   ['an unshared sheet page', 'owner', 'sheetPage', { sheetPage: internal }, false],
   ['a shared sheet page', 'owner', 'sheetPage', { sheetPage: shared }, true],
   ['an unshared sheet page, for a mentor', 'mentor', 'sheetPage', { sheetPage: internal }, true],
@@ -100,6 +106,7 @@ describe('the visibility rule, in memory and in SQL', () => {
     const domain = (ref: FieldRef): unknown[] => {
       const field = ref.split('.')[1]!;
       if (ref === 'event.kind') return [...eventKindEnum.enumValues, null];
+      if (ref === 'notification.kind') return [...notificationKindEnum.enumValues, null];
       if (ref === 'part.state') return [...partStateEnum.enumValues, null];
       if (ref === 'part.action') return [...partActionEnum.enumValues, null];
       if (field.endsWith('At')) return [t0, t1, null];

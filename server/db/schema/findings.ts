@@ -90,7 +90,7 @@ export const comments = pgTable(
   ],
 );
 
-export const notificationKindEnum = pgEnum('notification_kind', ['mention', 'question', 'reply', 'help-request', 'reading-requested', 'reading-answered']);
+export const notificationKindEnum = pgEnum('notification_kind', ['mention', 'question', 'reply', 'help-request', 'reading-requested', 'reading-answered', 'payment']);
 
 /** An unread item for one person; e-mails are batched from these rows (several instances share them). */
 export const notifications = pgTable(

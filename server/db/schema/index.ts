@@ -13,3 +13,4 @@ export * from './bringup';
 export * from './sheets';
 export * from './help';
 export * from './money';
+export * from './payments';

@@ -46,6 +46,7 @@ export const eventKindEnum = pgEnum('event_kind', [
   'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
   'help-requested', 'help-link-made', 'help-link-withdrawn', 'cause-checked', 'reading-requested', 'reading-answered',
   'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided',
+  'payment-received', 'payment-refunded',
 ]);
 
 /**

@@ -83,6 +83,8 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           : e.kind === 'labour-logged' ? `Time logged: ${String(e.data.minutes)} min${e.data.billable ? '' : ' (not billable)'}`
           : e.kind === 'invoice-issued' ? `${String(e.data.kind) === 'credit-note' ? 'Credit note' : String(e.data.kind) === 'deposit' ? 'Deposit request' : 'Invoice'} ${String(e.data.reference ?? e.data.number)} issued`
           : e.kind === 'invoice-voided' ? `Invoice ${String(e.data.reference ?? e.data.number)} voided`
+          : e.kind === 'payment-received' ? `Payment received (${String(e.data.method)}) against ${String(e.data.kind) === 'deposit' ? 'deposit request' : 'invoice'} ${String(e.data.reference ?? e.data.number)}`
+          : e.kind === 'payment-refunded' ? `Refund against ${String(e.data.kind) === 'deposit' ? 'deposit request' : 'invoice'} ${String(e.data.reference ?? e.data.number)}`
           : e.kind === 'stage-changed' ? `Stage: ${stageLabels[data.from as Stage] ?? data.from} → ${stageLabels[data.to as Stage] ?? data.to}`
           : `Out of tolerance: ${m ? `${quantityLabels[m.quantity]} at ${m.location}, ${m.verdictReason}` : ''}`;
         return {

@@ -39,15 +39,15 @@ export function notificationsService(deps: AppDeps) {
     async commentWritten(tx: Executor, f: FindingLike, c: CommentLike, actor: { id: number; name: string }, mentioned: number[], participants: number[]) {
       const members = await notificationsRepo(tx).membersWithRole(f.restorationId, ['technician', 'mentor', 'owner']);
       const roleOf = new Map<number, Role>(members.map((m) => [m.userId, m.role]));
-      const facts = { notification: { commentId: c.id }, comment: c, finding: f, photo: { ownerVisible: f.photoOwnerVisible } };
-      const mayRead = (userId: number) => mayView(roleOf.get(userId), 'notification', facts);
+      const facts = (kind: 'reply' | 'mention') => ({ notification: { commentId: c.id, kind }, comment: c, finding: f, photo: { ownerVisible: f.photoOwnerVisible } });
+      const mayRead = (userId: number, kind: 'reply' | 'mention') => mayView(roleOf.get(userId), 'notification', facts(kind));
       const rows = new Map<number, NewNotification>();
       for (const userId of [...participants, ...(f.authorId ? [f.authorId] : [])])
-        if (userId !== actor.id && mayRead(userId))
+        if (userId !== actor.id && mayRead(userId, 'reply'))
           rows.set(userId, { userId, restorationId: f.restorationId, findingId: f.id, commentId: c.id, kind: 'reply',
             summary: `${actor.name} replied on ${label(f)}: ${excerpt(c.body)}` });
       for (const userId of mentioned)
-        if (userId !== actor.id && mayRead(userId))
+        if (userId !== actor.id && mayRead(userId, 'mention'))
           rows.set(userId, { userId, restorationId: f.restorationId, findingId: f.id, commentId: c.id, kind: 'mention',
             summary: `${actor.name} mentioned you on ${label(f)}: ${excerpt(c.body)}` });
       await notificationsRepo(tx).insert([...rows.values()]);

@@ -8,6 +8,7 @@ import { useRestorationFindings } from '../../features/findings/api/get-restorat
 import { BeforeAfter } from '../../features/history/components/before-after';
 import { Timeline } from '../../features/history/components/timeline';
 import { suggestPairs } from '../../features/history/lib/suggest-pairs';
+import { PaymentsPanel } from '../../features/money/components/payments-panel';
 import { OwnerHome } from '../../features/owner/components/owner-home';
 import { OwnerSet } from '../../features/owner/components/owner-set';
 import { OwnerSetCard } from '../../features/owner/components/owner-set-card';
@@ -58,6 +59,7 @@ function SetPage({ set }: { set: Restoration }) {
         </Loaded>
       }
       timeline={<Timeline restorationId={set.id} />}
+      payments={<PaymentsPanel restorationId={set.id} role="owner" />}
     />
   );
 }

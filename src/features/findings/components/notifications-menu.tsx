@@ -4,7 +4,7 @@ import { notificationPath, type Notification } from '../../../../shared/schemas/
 import { useMarkNotificationsRead, useNotifications } from '../api/get-notifications';
 import { fullTime, relativeTime } from './finding-format';
 
-const kindGlyph: Record<Notification['kind'], string> = { mention: '@', question: '?', reply: '↩', 'help-request': '?', 'reading-requested': '⌁', 'reading-answered': '✓' };
+const kindGlyph: Record<Notification['kind'], string> = { mention: '@', question: '?', reply: '↩', 'help-request': '?', 'reading-requested': '⌁', 'reading-answered': '✓', payment: '£' };
 
 /** The header's bell: unread count on the button, the list in a popover; Escape or a click outside closes it. */
 export function NotificationsMenu() {

@@ -176,6 +176,20 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="m4 4 12 12" />
     </>
   ),
+  // A coin going in: money received.
+  'payment-received': (
+    <>
+      <circle cx="10" cy="11" r="5.5" />
+      <path d="M10 1.5v4M8 3.5l2 2 2-2" />
+    </>
+  ),
+  // A coin coming back out: a refund.
+  'payment-refunded': (
+    <>
+      <circle cx="10" cy="11" r="5.5" />
+      <path d="M10 5.5v-4M8 3.5l2-2 2 2" />
+    </>
+  ),
 };
 
 export function EventGlyph({ kind, caution = false, className = '' }: { kind: Kind; caution?: boolean; className?: string }) {

@@ -32,6 +32,8 @@ export const eventKindLabels: Record<Kind, string> = {
   'labour-logged': 'Time logged',
   'invoice-issued': 'Invoices issued',
   'invoice-voided': 'Invoices voided',
+  'payment-received': 'Payments received',
+  'payment-refunded': 'Refunds',
 };
 
 export const eventKinds = timelineKinds;

@@ -23,7 +23,7 @@ function Part({ id, title, children }: { id: string; title: string; children: Re
  * the care notes, the history and the report. The route fills the slots (comparisons, repairs, timeline) so this
  * page stays free of other features' components.
  */
-export function OwnerSet({ restoration: r, hero, comparisons, repairs, timeline }: {
+export function OwnerSet({ restoration: r, hero, comparisons, repairs, timeline, payments }: {
   restoration: Restoration;
   /** The picture at the top; undefined while none is shared. */
   hero: Photo | undefined;
@@ -32,6 +32,8 @@ export function OwnerSet({ restoration: r, hero, comparisons, repairs, timeline 
   /** The repaired findings (or their loading or error state). */
   repairs: ReactNode;
   timeline: ReactNode;
+  /** Deposit requests and invoices to pay, and the payments made; undefined hides the part. */
+  payments?: ReactNode;
 }) {
   const name = setName(r);
   const ids = (part: string) => `set-${r.id}-${part}`;
@@ -47,6 +49,11 @@ export function OwnerSet({ restoration: r, hero, comparisons, repairs, timeline 
         </div>
         <ReportLink restorationId={r.id} />
       </div>
+      {payments && (
+        <Part id={ids('payments')} title="Paying for the work">
+          {payments}
+        </Part>
+      )}
       {r.story && (
         <Part id={ids('story')} title="Its story">
           <p className="leading-relaxed whitespace-pre-line">{r.story}</p>

@@ -1,0 +1,53 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Invoice } from '../../../../shared/schemas/invoices';
+import type { ManualPaymentInput, Payment } from '../../../../shared/schemas/payments';
+import { api } from '../../../lib/api-client';
+
+/** Query keys follow the resource paths. */
+export const paymentKeys = {
+  invoices: (restorationId: number) => ['restorations', restorationId, 'invoices'] as const,
+  payments: (restorationId: number) => ['restorations', restorationId, 'payments'] as const,
+  history: (restorationId: number) => ['restorations', restorationId, 'events'] as const,
+};
+
+/** While a payment is being processed the lists are asked again every few seconds, until its event has arrived. */
+const pollEvery = (polling: boolean) => (polling ? 2500 : false);
+
+export const invoicesQueryOptions = (restorationId: number, polling = false) =>
+  queryOptions({ queryKey: paymentKeys.invoices(restorationId), queryFn: () => api<Invoice[]>(`/restorations/${restorationId}/invoices`), refetchInterval: pollEvery(polling) });
+export const useRestorationInvoices = (restorationId: number, polling = false) => useQuery(invoicesQueryOptions(restorationId, polling));
+
+export const paymentsQueryOptions = (restorationId: number, polling = false) =>
+  queryOptions({ queryKey: paymentKeys.payments(restorationId), queryFn: () => api<Payment[]>(`/restorations/${restorationId}/payments`), refetchInterval: pollEvery(polling) });
+export const usePayments = (restorationId: number, polling = false) => useQuery(paymentsQueryOptions(restorationId, polling));
+
+/** Asks for a hosted checkout and goes there; the card is entered on the payment service's page, never here. */
+export function useCheckout() {
+  return useMutation({
+    mutationFn: (invoiceId: number) => api<{ url: string }>(`/invoices/${invoiceId}/checkout`, { method: 'POST' }),
+    onSuccess: ({ url }) => window.location.assign(url),
+  });
+}
+
+function useAfterWrite(restorationId: number) {
+  const client = useQueryClient();
+  return () => Promise.all(Object.values(paymentKeys).map((key) => client.invalidateQueries({ queryKey: key(restorationId) })));
+}
+
+/** A transfer or cash received, recorded by a technician. */
+export function useRecordPayment(restorationId: number) {
+  const after = useAfterWrite(restorationId);
+  return useMutation({
+    mutationFn: ({ invoiceId, ...input }: ManualPaymentInput & { invoiceId: number }) => api<Payment>(`/invoices/${invoiceId}/payments`, { method: 'POST', json: input }),
+    onSuccess: after,
+  });
+}
+
+/** A full refund; a card refund shows once the payment service confirms it. */
+export function useRefund(restorationId: number) {
+  const after = useAfterWrite(restorationId);
+  return useMutation({
+    mutationFn: (paymentId: number) => api<unknown>(`/payments/${paymentId}/refund`, { method: 'POST', json: {} }),
+    onSuccess: after,
+  });
+}

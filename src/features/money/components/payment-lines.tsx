@@ -1,0 +1,55 @@
+import { can, type Role } from '../../../../shared/permissions';
+import { invoiceKindLabels } from '../../../../shared/schemas/invoices';
+import { paymentMethodLabels, type Payment } from '../../../../shared/schemas/payments';
+import { Button } from '../../../components/button';
+import { useConfirm } from '../../../components/use-confirm';
+import { useRefund } from '../api/payments';
+import { moneyText } from './money-text';
+
+const statusWords: Record<Payment['status'], string> = { pending: 'processing', succeeded: 'received', failed: 'did not go through' };
+const dayText = (p: Payment) => new Date(p.receivedOn ? `${p.receivedOn}T12:00:00Z` : p.createdAt).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+
+function describe(p: Payment) {
+  if (p.kind === 'refund') return `Refund${p.method === 'card' ? ' to the card' : ` (${paymentMethodLabels[p.method].toLowerCase()})`}${p.status === 'succeeded' ? '' : `, ${statusWords[p.status]}`}`;
+  return `${paymentMethodLabels[p.method]} payment ${statusWords[p.status]}`;
+}
+
+/** Money received and refunded on a set, oldest first; technicians may refund what is left of a payment. */
+export function PaymentLines({ restorationId, role, payments }: { restorationId: number; role: Role; payments: Payment[] }) {
+  const refund = useRefund(restorationId);
+  const { confirm, dialog } = useConfirm();
+  const canRefund = can(role, 'payments.record');
+  const ask = async (p: Payment) => {
+    const left = { amount: p.amount.amount - p.refunded.amount, currency: p.amount.currency };
+    const ok = await confirm({ title: `Refund ${moneyText(left)}?`,
+      consequence: p.method === 'card' ? 'The payment service returns it to the card; the line appears once it confirms.' : 'Record that the money was handed back.',
+      confirmLabel: 'Refund', danger: true });
+    if (ok) refund.mutate(p.id);
+  };
+  return (
+    <div className="space-y-2">
+      <ul className="divide-y divide-rule rounded-xl border border-rule bg-panel">
+        {payments.map((p) => (
+          <li key={p.id} className="flex flex-wrap items-center justify-between gap-3 px-4 py-3">
+            <div>
+              <p className="font-semibold">{describe(p)}</p>
+              <p className="text-sm text-ink-soft">
+                {dayText(p)} · {p.kind === 'refund' ? 'against' : 'for'} {invoiceKindLabels[p.invoiceKind].toLowerCase()} no. {p.invoiceNumber}
+                {p.kind === 'payment' && p.refunded.amount > 0 && ` · ${moneyText(p.refunded)} refunded`}
+              </p>
+            </div>
+            <div className="flex items-center gap-3">
+              <span className={`font-mono ${p.status === 'failed' ? 'text-ink-soft line-through' : ''}`}>{p.kind === 'refund' ? '−' : ''}{moneyText(p.amount)}</span>
+              {canRefund && p.kind === 'payment' && p.status === 'succeeded' && p.refunded.amount < p.amount.amount && (
+                <Button variant="quiet" onClick={() => void ask(p)} disabled={refund.isPending} aria-label={`Refund the ${paymentMethodLabels[p.method].toLowerCase()} payment of ${moneyText(p.amount)}`}>Refund</Button>
+              )}
+            </div>
+          </li>
+        ))}
+      </ul>
+      {refund.error && <p role="alert" className="font-semibold text-danger">{refund.error.message}</p>}
+      {refund.isSuccess && <p role="status">Refund asked for; it shows here once confirmed.</p>}
+      {dialog}
+    </div>
+  );
+}

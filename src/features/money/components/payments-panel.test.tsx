@@ -1,0 +1,79 @@
+// @vitest-environment happy-dom
+import '@testing-library/jest-dom/vitest';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { cleanup, render, screen, waitFor } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { createMemoryRouter, RouterProvider } from 'react-router';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import type { Role } from '../../../../shared/permissions';
+import type { Invoice } from '../../../../shared/schemas/invoices';
+import type { Payment } from '../../../../shared/schemas/payments';
+import { fakeApi, ok } from '../../../testing/fake-api';
+import { PaymentsPanel } from './payments-panel';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const gbp = (amount: number) => ({ amount, currency: 'GBP' });
+const deposit = (over: Partial<Invoice> = {}): Invoice => ({
+  id: 4, number: 12, kind: 'deposit', issuedAt: '2026-12-01T09:00:00.000Z', tax: null, net: gbp(5000), taxAmount: gbp(0), gross: gbp(5000),
+  deducted: gbp(0), due: gbp(5000), paid: gbp(0), status: 'open', creditsInvoiceId: null, voidReason: null, lines: [{ description: 'Deposit', net: gbp(5000), tax: gbp(0) }], ...over,
+});
+const cardPayment: Payment = { id: 9, invoiceId: 4, invoiceNumber: 12, invoiceKind: 'deposit', kind: 'payment', method: 'card', status: 'succeeded', amount: gbp(5000),
+  refunded: gbp(0), refundOfId: null, checkoutSessionId: 'cs_test_a', receivedOn: null, createdAt: '2026-12-02T09:00:00.000Z' };
+
+const renderPanel = (role: Role, url = '/home?set=7') => {
+  const router = createMemoryRouter([{ path: '/home', element: <PaymentsPanel restorationId={7} role={role} /> }], { initialEntries: [url] });
+  return render(
+    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>,
+  );
+};
+
+describe('PaymentsPanel', () => {
+  it('when the owner has an open deposit, then Pay asks for a checkout and goes to the page it names', async () => {
+    const assign = vi.fn();
+    vi.stubGlobal('location', { ...window.location, assign });
+    const api = fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit()]) : c.path.endsWith('/payments') ? ok([]) : ok({ url: 'http://127.0.0.1:9/checkout/cs_test_a' })));
+    renderPanel('owner');
+    expect(await screen.findByText('Deposit request no. 12')).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Pay £50.00 by card' }));
+    await waitFor(() => expect(assign).toHaveBeenCalledWith('http://127.0.0.1:9/checkout/cs_test_a'));
+    expect(api.calls.find((c) => c.method === 'POST')).toMatchObject({ method: 'POST', path: '/invoices/4/checkout' });
+  });
+
+  it('when the owner comes back before the payment is confirmed, then it says processing and offers no second Pay for that deposit', async () => {
+    fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit()]) : ok([])));
+    renderPanel('owner', '/home?set=7&payment=processing&invoice=4&session=cs_test_a');
+    expect(await screen.findByText(/Payment processing/)).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /^Pay/ })).not.toBeInTheDocument();
+  });
+
+  it('when a card payment was received, then the technician sees its line with a Refund button and the owner sees it without', async () => {
+    fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), status: 'paid' })]) : ok([cardPayment])));
+    renderPanel('technician');
+    expect(await screen.findByText('Card payment received')).toBeInTheDocument();
+    expect(screen.getByText(/for deposit request no\. 12/)).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Refund the card payment of £50.00' })).toBeInTheDocument();
+    cleanup();
+    renderPanel('owner');
+    expect(await screen.findByText('Card payment received')).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Refund/ })).not.toBeInTheDocument();
+  });
+
+  it('when a technician records a transfer in pounds, then it is sent in pence with the day it arrived', async () => {
+    const api = fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit()]) : c.method === 'GET' ? ok([]) : { status: 201, body: { ...cardPayment, method: 'transfer' } }));
+    renderPanel('technician');
+    await userEvent.type(await screen.findByLabelText('Amount (GBP)'), '20.50');
+    const day = screen.getByLabelText('Received on');
+    await userEvent.clear(day);
+    await userEvent.type(day, '2026-11-30');
+    await userEvent.click(screen.getByRole('button', { name: 'Record payment' }));
+    await waitFor(() => expect(api.calls.some((c) => c.method === 'POST')).toBe(true));
+    expect(api.calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: '/invoices/4/payments',
+      body: { amount: { amount: 2050, currency: 'GBP' }, method: 'transfer', receivedOn: '2026-11-30' } });
+  });
+});
