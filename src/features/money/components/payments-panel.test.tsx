@@ -18,7 +18,7 @@ afterEach(() => {
 
 const gbp = (amount: number) => ({ amount, currency: 'GBP' });
 const deposit = (over: Partial<Invoice> = {}): Invoice => ({
-  id: 4, number: 12, kind: 'deposit', issuedAt: '2026-12-01T09:00:00.000Z', tax: null, net: gbp(5000), taxAmount: gbp(0), gross: gbp(5000),
+  id: 4, number: 12, reference: '12', kind: 'deposit', issuedAt: '2026-12-01T09:00:00.000Z', tax: null, net: gbp(5000), taxAmount: gbp(0), gross: gbp(5000),
   deducted: gbp(0), due: gbp(5000), paid: gbp(0), status: 'open', creditsInvoiceId: null, voidReason: null, lines: [{ description: 'Deposit', net: gbp(5000), tax: gbp(0) }], ...over,
 });
 const cardPayment: Payment = { id: 9, invoiceId: 4, invoiceNumber: 12, invoiceKind: 'deposit', kind: 'payment', method: 'card', status: 'succeeded', amount: gbp(5000),

@@ -36,7 +36,7 @@ export function PaymentsPanel({ restorationId, role }: { restorationId: number; 
           {open.map((i) => (
             <li key={i.id} className="flex flex-wrap items-center justify-between gap-3 rounded-xl border border-rule bg-panel px-4 py-3">
               <div>
-                <p className="font-semibold">{invoiceKindLabels[i.kind]} no. {i.number}</p>
+                <p className="font-semibold">{invoiceKindLabels[i.kind]} no. {i.reference}</p>
                 <p className="text-ink-soft">
                   {moneyText({ amount: i.due.amount - i.paid.amount, currency: i.due.currency })} to pay{i.paid.amount > 0 && ` (${moneyText(i.paid)} paid so far)`}
                 </p>
