@@ -96,7 +96,8 @@ export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status',
   'safety-test', 'safety-override', 'soak-session', 'report-sent',
   'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
   'help-requested', 'help-link-made', 'help-link-withdrawn',
-  'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided'] as const;
+  'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided',
+  'sheet-added', 'reference-marked', 'mismatch-noted'] as const;
 export const timelineQuerySchema = z.object({ kind: z.enum(timelineKinds).optional() });
 
 export const timelineEventSchema = z.object({

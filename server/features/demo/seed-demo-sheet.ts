@@ -74,7 +74,7 @@ export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
     const file = path.join(os.tmpdir(), `gridleak-demo-sheet-${randomUUID()}.png`);
     await writeFile(file, bytes);
     try {
-      const sheet = await service.ingest(set.id, { path: file, size: bytes.length }, { kind, title }, tech.id, 'technician');
+      const sheet = await service.ingest(set.id, { path: file, size: bytes.length, mimeType: 'image/png' }, { kind, title }, tech.id, 'technician');
       ids.push(sheet.pages[0]!.id);
     } finally {
       await rm(file, { force: true });

@@ -47,8 +47,8 @@ export const withDecodeSlot = <T>(work: () => Promise<T>) => decodeSlots(work);
 const unsupported = (message?: string) =>
   new HttpError(415, 'unsupported_type', message ?? 'That file is not a photo Gridleak can read: send JPEG, PNG, WebP or AVIF (HEIC may need exporting as JPEG).');
 
-/** Checks, orients and resizes one uploaded image; served variants carry no metadata (GPS above all). */
-export function processPhoto(path: string, limits: PipelineLimits, options: PipelineOptions = {}): Promise<ProcessedPhoto> {
+/** Checks, orients and resizes one uploaded image (a file or bytes); served variants carry no metadata (GPS above all). */
+export function processPhoto(path: string | Buffer, limits: PipelineLimits, options: PipelineOptions = {}): Promise<ProcessedPhoto> {
   return decodeSlots(async () => {
     const open = () => sharp(path, { limitInputPixels: limits.maxPixels, failOn: 'error', sequentialRead: true });
     let meta: Metadata;

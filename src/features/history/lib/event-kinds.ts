@@ -29,6 +29,9 @@ export const eventKindLabels: Record<Kind, string> = {
   'labour-logged': 'Time logged',
   'invoice-issued': 'Invoices issued',
   'invoice-voided': 'Invoices voided',
+  'sheet-added': 'Service sheet pages',
+  'reference-marked': 'References marked',
+  'mismatch-noted': 'Mismatches noted',
 };
 
 export const eventKinds = timelineKinds;
