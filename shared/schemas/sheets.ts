@@ -123,6 +123,11 @@ export const mismatchNoteInputSchema = z
   })
   .refine((m) => m.diagramSays || m.chassisHas || m.note, { path: ['note'], message: 'say what differs: what the diagram says, what is fitted, or a note' });
 export type MismatchNoteInput = z.input<typeof mismatchNoteInputSchema>;
+/** A patch has no defaults (decision 15). */
+export const mismatchNotePatchSchema = z
+  .object({ kind: z.enum(mismatchKinds), diagramSays: shortText(200), chassisHas: shortText(200), note: shortText(2000), ownerVisible: z.boolean() })
+  .partial();
+export type MismatchNotePatch = z.infer<typeof mismatchNotePatchSchema>;
 
 export const mismatchNoteSchema = z.object({
   id: z.number().int(),

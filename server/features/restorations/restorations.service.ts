@@ -3,6 +3,9 @@ import type { Role } from '../../../shared/permissions';
 import type { Restoration, restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
 import type { Database, Tx } from '../../db/client';
 import { ConflictError, NotFoundError } from '../../http/errors';
+import { eq } from 'drizzle-orm';
+import { sheets } from '../../db/schema';
+import { unitOfWork } from '../../db/unit-of-work';
 import { recordEvent } from '../events/record-event';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
 import { stageGates } from './stage-gates';
@@ -18,7 +21,10 @@ export function toRestoration(row: RestorationRow, role: Role): Restoration {
 /** Sends an invitation on the caller's transaction (the invitations service's `inviteIn`). */
 type InviteIn = (tx: Tx, restorationId: number, email: string, role: Role, inviterId: number) => Promise<unknown>;
 
-export function restorationsService(db: Database, invite?: InviteIn) {
+/** Deletes the objects a removed restoration leaves behind (service sheets), once its rows are gone. */
+type RemoveObjects = (storageKeys: string[]) => Promise<void>;
+
+export function restorationsService(db: Database, invite?: InviteIn, removeObjects?: RemoveObjects) {
   const repo = restorationsRepo(db);
   return {
     async listFor(userId: number, filter: Parameters<typeof repo.listFor>[1]) {
@@ -60,8 +66,13 @@ export function restorationsService(db: Database, invite?: InviteIn) {
       });
       return toRestoration(row, role);
     },
+    /** The rows go in one transaction; the sheets' objects only after it has committed. */
     async remove(id: number) {
-      if (!(await repo.remove(id))) throw new NotFoundError();
+      await unitOfWork(db, async (tx, afterCommit) => {
+        const keys = (await tx.select({ key: sheets.storageKey }).from(sheets).where(eq(sheets.restorationId, id)).for('update')).map((s) => s.key);
+        if (!(await restorationsRepo(tx).remove(id))) throw new NotFoundError();
+        if (keys.length && removeObjects) afterCommit(() => removeObjects(keys));
+      });
     },
   };
 }

@@ -80,8 +80,8 @@ export function sheetsService({ db, storage, config }: PhotosDeps) {
     async remove(id: number, role: Role) {
       await visible(id, role, 'sheets.edit');
       await unitOfWork(db, async (tx, afterCommit) => {
-        const storageKey = await sheetsRepo(tx).removePage(id);
-        if (storageKey) afterCommit(() => deleteSheetObjects(storage, storageKey).catch(() => {}));
+        const gone = await sheetsRepo(tx).removePage(id);
+        if (gone) afterCommit(() => deleteSheetObjects(storage, gone.storageKey, gone.sheetGone ? undefined : gone.pageNumber).catch(() => {}));
       });
     },
     restorationOfPage: (id: number) => repo.restorationOfPage(id),
