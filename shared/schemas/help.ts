@@ -41,6 +41,8 @@ export interface HelpReading {
 }
 export interface HelpPin { id: number; number: number; shape: Shape; points: NormalisedPoint[]; title: string; componentRef: string; kind: string; severity: string; status: string }
 export interface HelpPhoto { id: number; caption: string; view: string; phase: string; width: number; height: number; url: string; thumbUrl: string; pins: HelpPin[] }
+/** A part on the chassis that differs from the diagram, for a reference the request names. */
+export interface HelpMismatch { id: number; ref: string; line: string }
 export interface HelpReply { id: number; name: string; body: string; createdAt: string; approved: boolean }
 
 /** The request as one reader may see it: the link's reader is judged like an owner (nothing unshared). */
@@ -54,6 +56,8 @@ export interface HelpContent {
   parts: HelpPart[];
   readings: HelpReading[];
   photos: HelpPhoto[];
+  /** Mismatch notes on the references the chosen parts, readings and pins name. */
+  mismatches: HelpMismatch[];
   replies: HelpReply[];
 }
 

@@ -21,6 +21,7 @@ const help: SharedHelp = {
     chartMeter: '1k/V', verdict: 'out', verdictReason: 'below the tolerance', measuredAt: '2026-12-01T09:00:00.000Z' }],
   photos: [{ id: 3, caption: 'Underside', view: 'underside', phase: 'before', width: 600, height: 400, url: '/x.jpg', thumbUrl: '/x-t.jpg',
     pins: [{ id: 5, number: 1, shape: 'pin', points: [{ x: 0.25, y: 0.75 }], title: 'Leaky C27', componentRef: 'C27', kind: 'leaking', severity: 'fault', status: 'observed' }] }],
+  mismatches: [{ id: 6, ref: 'C27', line: 'C27: different value fitted; the diagram says 22nF; the chassis has 47nF' }],
   replies: [],
 };
 const show = () =>
@@ -38,6 +39,8 @@ describe('the shared help page', () => {
     expect(screen.getByRole('row', { name: /HT after smoothing/ })).toHaveTextContent(/250.*212.*out.*10 MΩ.*chart taken with 1k\/V/);
     const pin = screen.getByTestId('help-pin');
     expect([pin.getAttribute('data-x'), pin.getAttribute('data-y')]).toEqual(['0.25', '0.75']);
+    expect(screen.getByRole('heading', { name: 'Where the chassis differs from the diagram' })).toBeInTheDocument();
+    expect(screen.getByText('C27: different value fitted; the diagram says 22nF; the chassis has 47nF').tagName).toBe('LI');
     expect(document.querySelector('meta[name="robots"]')).toHaveAttribute('content', expect.stringMatching(/noindex/));
   });
 
