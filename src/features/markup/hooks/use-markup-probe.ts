@@ -8,6 +8,8 @@ import { imagePoint, imageToStage, type ImageSize, type StageSize, type ViewTran
  * - `image`: the photo's size in image px; `stage`: the stage's size in CSS px;
  * - `imageToClient(x, y)`: a normalised image point (0..1) as viewport (client) CSS px, ready for `page.mouse`.
  * A new object replaces it after every view change, so read it again after zooming or panning.
+ * When several canvases are on screen (a diagram beside a chassis photo), each one inside an element with
+ * `data-markup-probe="<name>"` is also under `window.__gridleakMarkups[name]`.
  */
 export interface MarkupProbe {
   readonly view: ViewTransform;
@@ -19,6 +21,7 @@ export interface MarkupProbe {
 declare global {
   interface Window {
     __gridleakMarkup?: MarkupProbe;
+    __gridleakMarkups?: Record<string, MarkupProbe>;
   }
 }
 
@@ -36,8 +39,11 @@ export function useMarkupProbe(ref: RefObject<HTMLElement | null>, view: ViewTra
       },
     });
     window.__gridleakMarkup = probe;
+    const name = ref.current?.closest('[data-markup-probe]')?.getAttribute('data-markup-probe');
+    if (name) window.__gridleakMarkups = { ...window.__gridleakMarkups, [name]: probe };
     return () => {
       if (window.__gridleakMarkup === probe) delete window.__gridleakMarkup;
+      if (name && window.__gridleakMarkups?.[name] === probe) delete window.__gridleakMarkups[name];
     };
   }, [ref, view, image, stage]);
 }
