@@ -13,6 +13,8 @@ import { FindingsList } from '../../features/markup/components/findings-list';
 import { MarkupCanvas } from '../../features/markup/components/markup-canvas';
 import { NewFindingForm } from '../../features/markup/components/new-finding-form';
 import { useMembers } from '../../features/members/api/get-members';
+import { DuplicateFindingOffer } from '../../features/sheets/components/duplicate-finding-offer';
+import { KnownReferences } from '../../features/sheets/components/known-references';
 import { usePhotos } from '../../features/photos/api/get-photos';
 import { useRefreshExpiredUrls } from '../../features/photos/hooks/use-refresh-expired-urls';
 import { photoLabel } from '../../features/photos/lib/photo-format';
@@ -155,6 +157,13 @@ function PhotoMarkup({
                 error={actions.createError}
                 onSubmit={actions.submitCreate}
                 onCancel={actions.cancelCreate}
+                referenceListId="known-references"
+                referenceHelp={(typed) => (
+                  <>
+                    <KnownReferences restorationId={r.id} id="known-references" />
+                    <DuplicateFindingOffer restorationId={r.id} photoId={photo.id} typed={typed} mark={actions.pending!} onAttached={actions.cancelCreate} />
+                  </>
+                )}
               />
             </div>
           ) : selected && !drawn ? (

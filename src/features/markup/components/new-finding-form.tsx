@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import type { ReactNode } from 'react';
 import { useForm } from 'react-hook-form';
 import { kindLabels, kinds, severities, severityLabels, type Shape } from '../../../../shared/schemas/findings';
 import { buttonClass } from '../../../components/button';
@@ -13,14 +14,20 @@ export function NewFindingForm({
   error,
   onSubmit,
   onCancel,
+  referenceListId,
+  referenceHelp,
 }: {
   shape: Shape;
   busy: boolean;
   error?: string;
   onSubmit: (values: NewFindingValues) => void;
   onCancel: () => void;
+  /** A `<datalist>` of the references already known, offered as the reference is typed. */
+  referenceListId?: string;
+  /** Shown under the reference as it is typed (the known references, an existing finding for the same part). */
+  referenceHelp?: (typed: string) => ReactNode;
 }) {
-  const { register, handleSubmit, formState } = useForm<NewFindingValues>({ resolver: zodResolver(newFindingSchema), defaultValues: newFindingDefaults });
+  const { register, handleSubmit, formState, watch } = useForm<NewFindingValues>({ resolver: zodResolver(newFindingSchema), defaultValues: newFindingDefaults });
   const errors = formState.errors;
   return (
     <form
@@ -40,8 +47,9 @@ export function NewFindingForm({
         {(a) => <input {...a} {...register('title')} autoFocus maxLength={140} className={inputClass} />}
       </Field>
       <Field label="Component reference" hint="As the schematic prints it, e.g. C27, R20 or V5" error={errors.componentRef?.message}>
-        {(a) => <input {...a} {...register('componentRef')} maxLength={20} autoComplete="off" className={`${inputClass} font-mono`} />}
+        {(a) => <input {...a} {...register('componentRef')} list={referenceListId} maxLength={20} autoComplete="off" className={`${inputClass} font-mono`} />}
       </Field>
+      {referenceHelp?.(watch('componentRef') ?? '')}
       <div className="grid grid-cols-2 gap-3">
         <Field label="Kind">
           {(a) => (
