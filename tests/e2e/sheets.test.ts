@@ -39,8 +39,9 @@ async function expectPaneZoomedOnto(page: Page, side: Side, at: { x: number; y: 
       const off = Math.max(Math.abs(p.x - (stage.x + stage.width / 2)) / stage.width, Math.abs(p.y - (stage.y + stage.height / 2)) / stage.height);
       return { zoom: probe.view.scale / fit, off };
     }, [side, at.x, at.y] as const);
-  await expect.poll(async () => (await state())?.zoom ?? 0).toBeGreaterThan(1.5);
-  await expect.poll(async () => (await state())?.off ?? Number.POSITIVE_INFINITY).toBeLessThan(0.1);
+  // Generous waits, not timings: the page and both pictures load first on a busy machine.
+  await expect.poll(async () => (await state())?.zoom ?? 0, { timeout: 30_000 }).toBeGreaterThan(1.5);
+  await expect.poll(async () => (await state())?.off ?? Number.POSITIVE_INFINITY, { timeout: 30_000 }).toBeLessThan(0.1);
 }
 
 const paneBox = (page: Page, side: Side) => page.locator(`[data-markup-probe="${side}"]`).boundingBox();
@@ -50,7 +51,8 @@ describe('the service sheet beside the chassis', () => {
     const tech = await newPage(ctx.browser, { width: 1400, height: 950 });
     await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     await tech.getByRole('link', { name: /OV-54-20417/ }).click();
-    const notebook = tech.url().replace(/\/[^/]*$/, '');
+    await tech.waitForURL(/\/restorations\/\d+/);
+    const notebook = tech.url().match(/^.*\/restorations\/\d+/)![0];
 
     // A two-page PDF service sheet; the upload is held at the server's door for a moment, so its progress shows.
     await tech.getByRole('link', { name: 'Service sheet' }).click();

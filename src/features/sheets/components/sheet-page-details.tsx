@@ -23,6 +23,8 @@ export function SheetPageDetails({ page, canEdit }: { page: SheetPage; canEdit: 
     update.mutate({ kind, title, ownerVisible }, { onSuccess: () => setSaved('Saved.') });
   };
   return (
+    <div className="space-y-2">
+    {original && <p>{original}</p>}
     <details className="rounded-xl border border-rule bg-panel p-3">
       <summary className="min-h-11 cursor-pointer content-center font-semibold">Kind, title and sharing</summary>
       <form onSubmit={submit} className="mt-2 grid items-end gap-3 sm:grid-cols-[12rem_1fr_auto_auto]">
@@ -49,8 +51,9 @@ export function SheetPageDetails({ page, canEdit }: { page: SheetPage; canEdit: 
         </Button>
       </form>
       <p role="status" className="mt-2 text-sm">
-        {update.isError ? <span className="text-danger">{update.error.message}</span> : saved} {original}
+        {update.isError ? <span className="text-danger">{update.error.message}</span> : saved}
       </p>
     </details>
+    </div>
   );
 }
