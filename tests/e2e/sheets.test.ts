@@ -1,6 +1,7 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { expectAccessible } from '../support/axe';
+import { watchConsole } from '../support/console';
 import { newPage } from '../support/browser';
 import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
@@ -49,6 +50,7 @@ const paneBox = (page: Page, side: Side) => page.locator(`[data-markup-probe="${
 describe('the service sheet beside the chassis', () => {
   it('when R23 is marked on a PDF diagram page and named by a finding on a chassis photo, then each opens both pictures zoomed onto it', async () => {
     const tech = await newPage(ctx.browser, { width: 1400, height: 950 });
+    const techConsole = watchConsole(tech);
     await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     await tech.getByRole('link', { name: /OV-54-20417/ }).click();
     await tech.waitForURL(/\/restorations\/\d+/);
@@ -124,10 +126,12 @@ describe('the service sheet beside the chassis', () => {
 
     // On a phone the two pictures come one after the other, the one asked for first.
     const phone = await newPage(ctx.browser, { width: 390, height: 844 });
+    const phoneConsole = watchConsole(phone);
     await signInAs(phone, ctx.product.origin, 'mara@cobbold-lane.test');
     await phone.goto(referenceUrl);
     await expectPaneZoomedOnto(phone, 'chassis', ON_CHASSIS);
     const [top, below] = [await paneBox(phone, 'chassis'), await paneBox(phone, 'diagram')];
     expect(below!.y).toBeGreaterThanOrEqual(top!.y + top!.height);
+    expect([...techConsole, ...phoneConsole]).toEqual([]);
   });
 });
