@@ -23,6 +23,8 @@ export interface PipelineOptions {
   largePx?: number;
   /** What a refused file is told (415). */
   unsupportedMessage?: string;
+  /** `false`: no phone variant is made (service sheet pages are read on the large variant); `phone` is then empty. */
+  phone?: false;
 }
 
 export interface ProcessedPhoto {
@@ -72,7 +74,7 @@ export function processPhoto(path: string | Buffer, limits: PipelineLimits, opti
         .webp({ quality: 82 })
         .toBuffer();
       // The smaller variants come from the display image: far less to decode than the original.
-      const [phone, thumb] = await Promise.all([phoneVariant(display), sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer()]);
+      const [phone, thumb] = await Promise.all([options.phone === false ? Buffer.alloc(0) : phoneVariant(display), sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer()]);
       return {
         contentType: meta.format === 'heif' && meta.compression === 'av1' ? 'image/avif' : contentType,
         width: rotated ? meta.height : meta.width,

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import { readFile } from 'node:fs/promises';
+import sharp from 'sharp';
 import { HttpError } from '../../http/errors';
 import type { Storage } from '../../storage';
 import { processPhoto } from '../photos/photo-pipeline';
@@ -29,13 +30,15 @@ interface IngestOptions {
 
 /** A page image through the photo pipeline, its three variants stored under the sheet's key. */
 async function storePage(storage: Storage, storageKey: string, pageNumber: number, source: string | Buffer, options: IngestOptions) {
-  const processed = await processPhoto(source, { maxPixels: options.maxPixels }, { formats, largePx: SHEET_LARGE_PX, unsupportedMessage });
+  const processed = await processPhoto(source, { maxPixels: options.maxPixels }, { formats, largePx: SHEET_LARGE_PX, unsupportedMessage, phone: false });
   const keys = sheetKeys(storageKey).page(pageNumber);
   const { signal } = options;
   signal?.throwIfAborted();
-  await storage.putObject(keys.large, processed.large!, 'image/webp', undefined, { signal });
-  await storage.putObject(keys.display, processed.display, 'image/webp', undefined, { signal });
-  await storage.putObject(keys.thumb, processed.thumb, 'image/webp', undefined, { signal });
+  await Promise.all([
+    storage.putObject(keys.large, processed.large!, 'image/webp', undefined, { signal }),
+    storage.putObject(keys.display, processed.display, 'image/webp', undefined, { signal }),
+    storage.putObject(keys.thumb, processed.thumb, 'image/webp', undefined, { signal }),
+  ]);
   return { pageNumber, width: processed.width, height: processed.height, contentType: processed.contentType };
 }
 
@@ -48,26 +51,39 @@ export async function storeSheetFile(storage: Storage, file: { path: string; siz
   const storageKey = `${options.restorationId}/${randomUUID()}`;
   const keys = sheetKeys(storageKey);
   const { signal } = options;
+  let original: Promise<unknown> | undefined;
   try {
     const pdf = await looksLikePdf(file.path);
     if (!pdf && file.mimeType === 'application/pdf')
       throw new HttpError(415, 'unsupported_type', 'That file is named as a PDF but is not one (a PDF starts with "%PDF-"). Export the service sheet as a PDF again, or send the pages as scans.');
     const pages: StoredSheet['pages'] = [];
     let contentType = 'application/pdf';
+    // The original goes up while the pages are drawn; a scan's type is known once the pipeline has read it.
+    const storeOriginal = (type: string) => storage.putObject(keys.original, createReadStream(file.path), type, file.size, { signal });
     if (pdf) {
+      original = storeOriginal(contentType);
+      original.catch(() => {});
       const data = new Uint8Array(await readFile(file.path));
       for await (const page of renderPdfPages(data, { longSidePx: SHEET_LARGE_PX, maxPixels: options.maxPixels }, signal))
         pages.push(await storePage(storage, storageKey, page.pageNumber, page.png, options));
     } else {
+      // The header tells a scan's type at once, so its original goes up while the variants are made.
+      const format = (await sharp(file.path).metadata().catch(() => undefined))?.format;
+      const known = format && { jpeg: 'image/jpeg', png: 'image/png', tiff: 'image/tiff', webp: 'image/webp' }[format as string];
+      if (known) {
+        original = storeOriginal(known);
+        original.catch(() => {});
+      }
       const page = await storePage(storage, storageKey, 1, file.path, options);
       contentType = page.contentType;
       pages.push(page);
     }
     if (!pages.length) throw new HttpError(415, 'unsupported_type', 'That PDF has no pages.');
     signal?.throwIfAborted();
-    await storage.putObject(keys.original, createReadStream(file.path), contentType, file.size, { signal });
+    await (original ?? storeOriginal(contentType));
     return { storageKey, contentType, pages: pages.map(({ pageNumber, width, height }) => ({ pageNumber, width, height })) };
   } catch (err) {
+    await original?.catch(() => {});
     await deleteSheetObjects(storage, storageKey).catch(() => {});
     throw err;
   }
