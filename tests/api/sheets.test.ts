@@ -113,6 +113,17 @@ describe('uploading service sheets', () => {
   });
 });
 
+describe('editing a page', () => {
+  it('when a technician changes the kind and title of a page, then the page reads so; a mentor may not change it', async () => {
+    const page = (await upload(tech, restorationId, await twoToneJpeg(), 'page.jpg')).body.pages[0];
+    const res = await tech.patch(`/api/sheet-pages/${page.id}`).send({ kind: 'voltage-chart', title: 'Voltages, no signal' });
+    expect(res.status).toBe(200);
+    expect((await tech.get(`/api/sheet-pages/${page.id}`)).body).toMatchObject({ kind: 'voltage-chart', title: 'Voltages, no signal', ownerVisible: false });
+    expect((await mentor.patch(`/api/sheet-pages/${page.id}`).send({ title: 'Mine now' })).status).toBe(403);
+    expect((await tech.patch(`/api/sheet-pages/${page.id}`).send({ kind: 'brochure' })).status).toBe(400);
+  });
+});
+
 describe('who sees sheet pages', () => {
   it('when a page is not shared, then the owner does not see it; once shared, they do; the mentor always does', async () => {
     const page = (await upload(tech, restorationId, await twoToneJpeg(), 'page.jpg', { title: 'Power supply' })).body.pages[0];
