@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { twoToneJpeg } from '../factories/images';
 import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
+import { sweepOrphanedSheetObjects } from '../../server/features/sheets/sweep-sheet-orphans';
 import { startTestApp } from '../support/test-app';
 
 let t: Awaited<ReturnType<typeof startTestApp>>;
@@ -78,5 +79,13 @@ describe('sheet history and clean-up', () => {
     expect(await sheetObjects(otherId)).toBeGreaterThan(0);
     expect((await otherTech.delete(`/api/restorations/${otherId}`)).status).toBe(204);
     expect(await sheetObjects(otherId)).toBe(0);
+  });
+
+  it('when sheet objects are left with no row (a crash after a commit), then the sweep removes them and keeps the rest', async () => {
+    await tech.post(`/api/restorations/${restorationId}/sheets`).attach('file', await twoToneJpeg(), 'kept.jpg');
+    const kept = await sheetObjects(restorationId);
+    await t.deps.storage.putObject(`sheets/${restorationId}/left-behind/original`, Buffer.from('x'), 'image/png');
+    expect(await sweepOrphanedSheetObjects(t.db, t.deps.storage, -1000)).toBe(1);
+    expect(await sheetObjects(restorationId)).toBe(kept);
   });
 });
