@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import { mismatchLine, type MismatchNote, type ReferenceMark } from '../../../../shared/schemas/sheets';
+import { mismatchLine, type MismatchNote, type ReferenceMark, type ReferenceSummary } from '../../../../shared/schemas/sheets';
 import { referencePath } from '../lib/reference-path';
 
 interface Props {
@@ -11,20 +11,23 @@ interface Props {
   loading: boolean;
   /** Mismatch notes of the restoration, shown under the reference they are about. */
   mismatches: MismatchNote[];
+  /** The references' counts: a finding naming the reference shows it on the chassis too. */
+  summary: ReferenceSummary[];
   selectedId?: number;
   onSelect: (id: number) => void;
   onDelete?: (id: number) => void;
 }
 
 /** The references on this picture; each links to the same reference on the diagram and on the chassis. */
-export function ReferenceMarkList({ restorationId, here, all, loading, mismatches, selectedId, onSelect, onDelete }: Props) {
+export function ReferenceMarkList({ restorationId, here, all, loading, mismatches, summary, selectedId, onSelect, onDelete }: Props) {
   if (loading) return <p className="text-sm text-ink-soft">Fetching the references…</p>;
   if (!here.length) return <p className="text-sm text-ink-soft">No references marked on this picture yet.</p>;
   return (
     <ul className="space-y-2" aria-label="References on this picture">
       {here.map((m, i) => {
         const onDiagram = m.sheetPageId !== null;
-        const others = all.filter((o) => o.ref === m.ref && (o.sheetPageId !== null) !== onDiagram).length;
+        const counts = summary.find((r) => r.ref === m.ref);
+        const others = onDiagram ? (counts ? counts.chassisMarks + counts.findings : 0) : all.filter((o) => o.ref === m.ref && o.sheetPageId !== null).length;
         const other = onDiagram ? 'on the chassis' : 'on the diagram';
         const path = referencePath(restorationId, m.ref, onDiagram ? { diagram: m.id, first: 'chassis' } : { chassis: m.id, first: 'diagram' });
         return (

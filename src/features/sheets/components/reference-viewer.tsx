@@ -102,6 +102,7 @@ export function ReferenceViewer({ restorationId, label, imageUrl, imageSize, tar
           all={marks.data ?? []}
           loading={marks.isPending}
           mismatches={mismatches.data ?? []}
+          summary={known.data ?? []}
           selectedId={selectedId}
           onSelect={setSelectedId}
           onDelete={canMark ? (id) => remove.mutate(id) : undefined}
