@@ -24,6 +24,7 @@ import { notificationsRoutes } from './features/notifications/notifications.rout
 import { partsRoutes } from './features/parts/parts.routes';
 import { photosRoutes } from './features/photos/photos.routes';
 import { referencesRoutes } from './features/references/references.routes';
+import { mismatchesRoutes } from './features/mismatches/mismatches.routes';
 import { reportRoutes } from './features/report/report.routes';
 import { restorationsRoutes } from './features/restorations/restorations.routes';
 import { safetyRoutes } from './features/safety/safety.routes';
@@ -95,6 +96,7 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
   api.use(bringupRoutes(deps));
   api.use(sheetsRoutes(deps));
   api.use(referencesRoutes(deps));
+  api.use(mismatchesRoutes(deps));
   api.use(helpRoutes(deps));
   api.use(symptomChecksRoutes(deps));
   api.use(readingRequestsRoutes(deps));

@@ -170,6 +170,8 @@ const sharedComment: Condition = { all: [{ field: 'comment.internal', is: false 
 const sharedSheetPage: Condition = { field: 'sheetPage.ownerVisible', is: true };
 /** A reference mark follows what it is placed on: a sheet page or a chassis photo. */
 const sharedReferenceMark: Condition = { any: [sharedSheetPage, sharedPhoto] };
+/** A mismatch note (the chassis differs from the diagram) is workshop material unless shared. */
+const sharedMismatch: Condition = { field: 'mismatch.ownerVisible', is: true };
 const sharedReading: Condition = { field: 'reading.ownerVisible', is: true };
 /** Planned and ordered lines are the workshop's business; the owner sees what was fitted or kept. */
 const ownerPart: Condition = { any: [{ field: 'part.state', is: 'fitted' }, { field: 'part.action', is: 'kept-original' }] };
@@ -177,13 +179,13 @@ const sinceShared = (entity: 'event' | 'change'): Condition => ({ field: `${enti
 const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all: [{ field: 'event.kind', is: kind }, ...conditions] });
 
 export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark', 'estimate',
-  'readingRequest', 'symptomCheck', 'payment'] as const;
+  'readingRequest', 'symptomCheck', 'payment', 'mismatchNote'] as const;
 export type VisibilitySubject = (typeof visibilitySubjects)[number];
 
 const all: Condition = { always: true };
 const everything: Record<VisibilitySubject, Condition> = {
   photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, sheetPage: all, referenceMark: all, estimate: all,
-  readingRequest: all, symptomCheck: all, payment: all,
+  readingRequest: all, symptomCheck: all, payment: all, mismatchNote: all,
 };
 /** Mentors help with the work and see none of its money. */
 const noMoney: Condition = { never: true };
@@ -227,12 +229,17 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
         eventOf('invoice-voided'),
         eventOf('payment-received'),
         eventOf('payment-refunded'),
+        // The service sheet: a page added, a reference marked, a mismatch noted, each as its subject is shared.
+        eventOf('sheet-added', sharedSheetPage),
+        eventOf('reference-marked', sharedReferenceMark),
+        eventOf('mismatch-noted', sharedMismatch),
       ],
     },
     /** A finding's change record, only from after it was shared. */
     change: { all: [sharedFinding, sinceShared('change')] },
     sheetPage: sharedSheetPage,
     referenceMark: sharedReferenceMark,
+    mismatchNote: sharedMismatch,
     /** An in-app notification or its e-mail, judged when read or sent, not when written. */
     /** An estimate once sent to them; drafts stay in the workshop. */
     estimate: { field: 'estimate.sent', is: true },

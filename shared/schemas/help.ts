@@ -51,6 +51,8 @@ export interface HelpPin {
 /** A symptom of the checklist with the results of its causes (causes, tests and sources come from shared/bench/symptoms). */
 export interface HelpChecklist { symptomId: string; checks: SymptomCheck[] }
 export interface HelpPhoto { id: number; caption: string; view: string; phase: string; width: number; height: number; url: string; thumbUrl: string; pins: HelpPin[] }
+/** A part on the chassis that differs from the diagram, for a reference the request names. */
+export interface HelpMismatch { id: number; ref: string; line: string }
 export interface HelpReply { id: number; name: string; body: string; createdAt: string; approved: boolean }
 
 /** The request as one reader may see it: the link's reader is judged like an owner (nothing unshared). */
@@ -65,6 +67,8 @@ export interface HelpContent {
   readings: HelpReading[];
   photos: HelpPhoto[];
   checklist: HelpChecklist[];
+  /** Mismatch notes on the references the chosen parts, readings and pins name. */
+  mismatches: HelpMismatch[];
   replies: HelpReply[];
 }
 

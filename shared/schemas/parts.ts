@@ -97,7 +97,7 @@ export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status',
   'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
   'help-requested', 'help-link-made', 'help-link-withdrawn', 'cause-checked', 'reading-requested', 'reading-answered',
   'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided',
-  'payment-received', 'payment-refunded'] as const;
+  'payment-received', 'payment-refunded', 'sheet-added', 'reference-marked', 'mismatch-noted'] as const;
 export const timelineQuerySchema = z.object({ kind: z.enum(timelineKinds).optional() });
 
 export const timelineEventSchema = z.object({

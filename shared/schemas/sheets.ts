@@ -102,3 +102,52 @@ export type ReferenceSummary = z.infer<typeof referenceSummarySchema>;
 
 export const sheetPageParamsSchema = z.object({ pageId: idSchema });
 export const referenceMarkParamsSchema = z.object({ markId: idSchema });
+
+/** How a part on the chassis differs from the diagram. */
+export const mismatchKinds = ['value-differs', 'unlisted-part', 'misprint', 'other'] as const;
+export type MismatchKind = (typeof mismatchKinds)[number];
+export const mismatchKindLabels: Record<MismatchKind, string> = {
+  'value-differs': 'Different value fitted', 'unlisted-part': 'Part not on the diagram', misprint: 'Misprint on the sheet', other: 'Other difference',
+};
+
+const shortText = (max: number) => z.string().trim().max(max, `Keep it under ${max} characters`);
+
+export const mismatchNoteInputSchema = z
+  .object({
+    ref: markRefSchema,
+    kind: z.enum(mismatchKinds),
+    diagramSays: shortText(200).default(''),
+    chassisHas: shortText(200).default(''),
+    note: shortText(2000).default(''),
+    ownerVisible: z.boolean().default(false),
+  })
+  .refine((m) => m.diagramSays || m.chassisHas || m.note, { path: ['note'], message: 'say what differs: what the diagram says, what is fitted, or a note' });
+export type MismatchNoteInput = z.input<typeof mismatchNoteInputSchema>;
+/** A patch has no defaults (decision 15). */
+export const mismatchNotePatchSchema = z
+  .object({ kind: z.enum(mismatchKinds), diagramSays: shortText(200), chassisHas: shortText(200), note: shortText(2000), ownerVisible: z.boolean() })
+  .partial();
+export type MismatchNotePatch = z.infer<typeof mismatchNotePatchSchema>;
+
+export const mismatchNoteSchema = z.object({
+  id: z.number().int(),
+  restorationId: z.number().int(),
+  ref: z.string(),
+  kind: z.enum(mismatchKinds),
+  diagramSays: z.string(),
+  chassisHas: z.string(),
+  note: z.string(),
+  ownerVisible: z.boolean(),
+  createdAt: z.string(),
+});
+export type MismatchNote = z.infer<typeof mismatchNoteSchema>;
+export const mismatchNoteParamsSchema = z.object({ noteId: idSchema });
+
+/** One line of a mismatch in words, for the report and a help request. */
+export const mismatchLine = (m: Pick<MismatchNote, 'ref' | 'kind' | 'diagramSays' | 'chassisHas' | 'note'>) =>
+  [
+    `${m.ref}: ${mismatchKindLabels[m.kind].toLowerCase()}`,
+    m.diagramSays && `the diagram says ${m.diagramSays}`,
+    m.chassisHas && `the chassis has ${m.chassisHas}`,
+    m.note,
+  ].filter(Boolean).join('; ');

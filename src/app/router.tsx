@@ -53,6 +53,7 @@ export const router = createBrowserRouter([
               { path: 'sheets', lazy: page(() => import('./routes/sheets'), 'SheetsRoute') },
               { path: 'sheets/:pageId', lazy: page(() => import('./routes/sheet-page'), 'SheetPageRoute') },
               { path: 'sheets/chassis/:photoId', lazy: page(() => import('./routes/sheet-page'), 'ChassisReferencesRoute') },
+              { path: 'references/:ref', lazy: page(() => import('./routes/reference'), 'ReferenceRoute') },
               { path: 'people', loader: peopleLoader, lazy: page(() => import('./routes/people'), 'PeopleRoute') },
               { path: 'help', lazy: page(() => import('./routes/help'), 'HelpRoute') },
             ],

@@ -9,6 +9,7 @@ import { measurementsService } from '../../server/features/measurements/measurem
 import { partsService } from '../../server/features/parts/parts.service';
 import { referencesRepo } from '../../server/features/references/references.repo';
 import { sheetsRepo } from '../../server/features/sheets/sheets.repo';
+import { mismatchesRepo } from '../../server/features/mismatches/mismatches.repo';
 import { commentsRepo } from '../../server/features/comments/comments.repo';
 import { estimatesService } from '../../server/features/estimates/estimates.service';
 import { invoicesService } from '../../server/features/invoices/invoices.service';
@@ -26,7 +27,7 @@ import { startTestApp } from '../support/test-app';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 type Expect = [technician: number, mentor: number, owner: number, nonMember: number, signedOut: number];
-type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; pageId: number; markId: number;
+type Fixture = { id: number; userId: number; invitationId: number; token: string; photoId: number; findingId: number; commentId: number; measurementId: number; partId: number; pageId: number; markId: number; noteId: number;
   helpRequestId: number; helpToken: string; replyId: number; estimateId: number; draftEstimateId: number; invoiceId: number;
   symptomId: string; causeId: string; readingRequestId: number; paymentId: number };
 /** A body is JSON, or a Buffer sent as the multipart field `file`. */
@@ -130,6 +131,11 @@ const matrix: Row[] = [
   ['GET', '/api/restorations/:id/reference-marks', [200, 200, 200, 404, 401]],
   ['POST', '/api/restorations/:id/reference-marks', [201, 403, 403, 404, 401], (f) => ({ sheetPageId: f.pageId, ref: 'C14', shape: 'pin', points: [{ x: 0.3, y: 0.6 }] })],
   ['DELETE', '/api/reference-marks/:markId', [204, 403, 404, 404, 401]],
+  // The fixture's mismatch note on R23 is not shared with the owner.
+  ['GET', '/api/restorations/:id/mismatch-notes', [200, 200, 200, 404, 401]],
+  ['POST', '/api/restorations/:id/mismatch-notes', [201, 403, 403, 404, 401], () => ({ ref: 'R23', kind: 'value-differs', diagramSays: '47k', chassisHas: '39k' })],
+  ['PATCH', '/api/mismatch-notes/:noteId', [200, 403, 404, 404, 401], () => ({ ownerVisible: true })],
+  ['DELETE', '/api/mismatch-notes/:noteId', [204, 403, 404, 404, 401]],
   // Help requests are the workshop's questions: mentors read them, owners never see them.
   ['POST', '/api/restorations/:id/help-requests', [201, 403, 403, 404, 401], () => ({ symptom: 'Hum with the volume at zero' })],
   ['GET', '/api/restorations/:id/help-requests', [200, 200, 403, 404, 401]],
@@ -218,6 +224,7 @@ async function fixture(): Promise<Fixture> {
   const sheetId = await sheetsRepo(t.db).insertSheet({ restorationId: r.id, storageKey: `${r.id}/${randomBytes(8).toString('hex')}`, contentType: 'image/png', sizeBytes: 1 });
   const pageId = await sheetsRepo(t.db).insertPage({ sheetId, restorationId: r.id, pageNumber: 1, kind: 'circuit-diagram', width: 600, height: 400 });
   const markId = (await referencesRepo(t.db).insertMark({ restorationId: r.id, sheetPageId: pageId, ref: 'R23', shape: 'pin', points: [{ x: 0.5, y: 0.5 }] })).id;
+  const noteId = (await mismatchesRepo(t.db).insert({ restorationId: r.id, ref: 'R23', kind: 'misprint', note: 'Printed as 4k7' })).id;
   const help = helpRepo(t.db);
   const helpRequest = await help.insert({ restorationId: r.id, symptom: 'Hum', authorId: people.technician!.id, partIds: [partId], measurementIds: [measurementId], photoIds: [photoId] });
   const link = newToken();
@@ -231,7 +238,7 @@ async function fixture(): Promise<Fixture> {
   const paymentId = (await paymentsService(t.deps).record(paidDepositId, { amount: { amount: 1000, currency: 'GBP' }, method: 'cash', receivedOn: '2026-12-01' }, people.technician!.id, 'technician')).id;
   const readingRequestId = (await t.db.insert(readingRequests).values({ restorationId: r.id, helpRequestId: helpRequest.id, kind: 'reading', body: 'Measure V3 pin 6', askedById: people.mentor!.id })
     .returning({ id: readingRequests.id }))[0]!.id;
-  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, pageId, markId,
+  return { id: r.id, userId: extra.id, invitationId: invitation.id, token, photoId, findingId, commentId, measurementId, partId, pageId, markId, noteId,
     helpRequestId: helpRequest.id, helpToken: link.token, replyId, estimateId, draftEstimateId, invoiceId, symptomId: 'hum', causeId: 'poor-earth', readingRequestId, paymentId };
 }
 

@@ -1,6 +1,6 @@
 import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { photos, referenceMarks, restorations, sheetPages } from '../../server/db/schema';
+import { photos, referenceMarks, mismatchNotes, restorations, sheetPages } from '../../server/db/schema';
 import { seedDemo } from '../../server/db/seed/seed-demo';
 import { chassisLandmarks } from '../../server/features/demo/chassis';
 import { seedDemoFindings } from '../../server/features/demo/seed-demo-findings';
@@ -44,6 +44,11 @@ describe('the demo service sheet', () => {
     const [mark] = await t.db.select().from(referenceMarks).where(and(eq(referenceMarks.photoId, underside!.id), eq(referenceMarks.ref, 'C27')));
     const spot = chassisLandmarks('underside').C27!;
     expect(Math.hypot(mark!.points[0]!.x - spot.x, mark!.points[0]!.y - spot.y)).toBeLessThan(spot.r);
+  });
+
+  it('when the demo is seeded, then R29 carries a workshop mismatch note: fitted 180Ω where the diagram prints 150Ω', async () => {
+    const notes = await t.db.select().from(mismatchNotes).where(eq(mismatchNotes.restorationId, setId));
+    expect(notes.map((n) => [n.ref, n.kind, n.diagramSays, n.ownerVisible])).toEqual([['R29', 'value-differs', '150Ω 1W', false]]);
   });
 
   it('when the seed runs again, then nothing is added twice', async () => {

@@ -42,6 +42,8 @@ beforeAll(async () => {
   await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'Mains pins to chassis', quantity: 'insulation', reading: '50M', ownerVisible: true });
   const part = (await tech.post(`/api/restorations/${id}/parts`).send({ componentRef: 'C27', originalRating: '0.022µF 350V', replacementPart: 'Polyester film', replacementRating: '22nF 630V', testedAfter: 'Output cathode 8.3 V' })).body;
   await tech.patch(`/api/parts/${part.id}`).send({ state: 'fitted' });
+  await tech.post(`/api/restorations/${id}/mismatch-notes`).send({ ref: 'R23', kind: 'value-differs', diagramSays: '47k', chassisHas: '39k', ownerVisible: true });
+  await tech.post(`/api/restorations/${id}/mismatch-notes`).send({ ref: 'C9', kind: 'misprint', note: 'INTERNAL-MISMATCH' });
 });
 afterAll(() => t.stop());
 
@@ -51,9 +53,9 @@ describe('hand-back report', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = await pdfText(res.body as Buffer);
-    for (const expected of ['Hand-back report', 'Farrowby Nightjar 6', 'Leaky coupling capacitor to the output valve', 'Before and after', 'Polyester film', '22nF 630V', 'HT line', 'Mains pins to chassis', 'not a certificate of electrical safety'])
+    for (const expected of ['Hand-back report', 'Farrowby Nightjar 6', 'Leaky coupling capacitor to the output valve', 'Before and after', 'Polyester film', '22nF 630V', 'HT line', 'Mains pins to chassis', 'R23: different value fitted; the diagram says 47k; the chassis has 39k', 'not a certificate of electrical safety'])
       expect(text.replace(/\s+/g, ' ')).toContain(expected);
-    for (const secret of ['INTERNAL-COMMENT-TEXT', 'INTERNAL-FINDING-TITLE', 'INTERNAL-READING', 'PRIVATE-PHOTO-CAPTION', 'ON-PRIVATE-PHOTO'])
+    for (const secret of ['INTERNAL-COMMENT-TEXT', 'INTERNAL-FINDING-TITLE', 'INTERNAL-READING', 'PRIVATE-PHOTO-CAPTION', 'ON-PRIVATE-PHOTO', 'INTERNAL-MISMATCH'])
       expect(text).not.toContain(secret);
   });
 

@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sheetPages, sheets } from '../../server/db/schema';
 import { sheetKeys } from '../../server/features/sheets/sheet-objects';
 import { twoToneJpeg } from '../factories/images';
+import { servicePdf } from '../factories/pdfs';
 import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
 import { startTestApp } from '../support/test-app';
@@ -65,11 +66,38 @@ describe('uploading service sheets', () => {
     expect([large.width, large.height]).toEqual([3508, 4961]);
   });
 
-  it('when a PDF is sent, then it is refused with 415 and a way forward, and nothing is stored', async () => {
+  it('when a two-page PDF is sent, then both pages come back drawn, the original PDF is kept, and the upload is in the history', async () => {
+    const pdf = await servicePdf(['Circuit diagram', 'Layout']);
+    const res = await upload(tech, restorationId, pdf, 'sheet.pdf', { kind: 'circuit-diagram', title: 'Ostrander & Vale 54' });
+    expect(res.status).toBe(201);
+    expect(res.body.contentType).toBe('application/pdf');
+    expect(res.body.pages.map((p: { pageNumber: number }) => p.pageNumber)).toEqual([1, 2]);
+    // A4 is 595.28 × 841.89 pt (ISO 216 through PDF's 72 pt per inch): at 300 dpi, 2480 × 3507 px.
+    expect([res.body.pages[0].width, res.body.pages[0].height]).toEqual([2480, 3507]);
+    const [row] = await t.db.select().from(sheetPages).where(sql`${sheetPages.id} = ${res.body.pages[1].id}`);
+    const [sheet] = await t.db.select().from(sheets).where(sql`${sheets.id} = ${row!.sheetId}`);
+    expect((await t.deps.storage.getObject(sheetKeys(sheet!.storageKey).original)).equals(pdf)).toBe(true);
+    // The second page is drawn, not blank: its thin lines leave dark pixels.
+    const page2 = await sharp(await t.deps.storage.getObject(sheetKeys(sheet!.storageKey).page(2).large)).greyscale().stats();
+    expect(page2.channels[0]!.min).toBeLessThan(100);
+    expect(res.body.pages[0].urls.original).toMatch(/original/);
+    const history = (await tech.get(`/api/restorations/${restorationId}/events`)).body as { kind: string; summary: string }[];
+    expect(history.find((e) => e.kind === 'sheet-added')?.summary).toBe('Service sheet added: Ostrander & Vale 54 and 1 more page');
+  });
+
+  it('when a damaged PDF is sent, then it is refused with 415 saying so, and nothing is stored', async () => {
     const [rows, objects] = [await pageRows(), await sheetObjects()];
     const res = await upload(tech, restorationId, Buffer.from('%PDF-1.7\n1 0 obj << >> endobj\n%%EOF\n'), 'sheet.pdf');
     expect(res.status).toBe(415);
-    expect(res.body.error.message).toMatch(/PNG or TIFF/);
+    expect(res.body.error.message).toMatch(/PDF could not be read/);
+    expect([await pageRows(), await sheetObjects()]).toEqual([rows, objects]);
+  });
+
+  it('when a file sent as a PDF does not start like one, then it is refused with 415 and nothing is stored', async () => {
+    const [rows, objects] = [await pageRows(), await sheetObjects()];
+    const res = await tech.post(`/api/restorations/${restorationId}/sheets`).attach('file', Buffer.from('<html>not a sheet</html>'), { filename: 'sheet.pdf', contentType: 'application/pdf' });
+    expect(res.status).toBe(415);
+    expect(res.body.error.message).toMatch(/named as a PDF but is not one/);
     expect([await pageRows(), await sheetObjects()]).toEqual([rows, objects]);
   });
 
@@ -82,6 +110,17 @@ describe('uploading service sheets', () => {
 
   it('when the kind is not one Gridleak knows, then the upload is refused with 400', async () => {
     expect((await upload(tech, restorationId, await twoToneJpeg(), 'page.jpg', { kind: 'brochure' })).status).toBe(400);
+  });
+});
+
+describe('editing a page', () => {
+  it('when a technician changes the kind and title of a page, then the page reads so; a mentor may not change it', async () => {
+    const page = (await upload(tech, restorationId, await twoToneJpeg(), 'page.jpg')).body.pages[0];
+    const res = await tech.patch(`/api/sheet-pages/${page.id}`).send({ kind: 'voltage-chart', title: 'Voltages, no signal' });
+    expect(res.status).toBe(200);
+    expect((await tech.get(`/api/sheet-pages/${page.id}`)).body).toMatchObject({ kind: 'voltage-chart', title: 'Voltages, no signal', ownerVisible: false });
+    expect((await mentor.patch(`/api/sheet-pages/${page.id}`).send({ title: 'Mine now' })).status).toBe(403);
+    expect((await tech.patch(`/api/sheet-pages/${page.id}`).send({ kind: 'brochure' })).status).toBe(400);
   });
 });
 

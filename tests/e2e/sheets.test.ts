@@ -1,87 +1,137 @@
 import type { Page } from 'playwright-core';
-import sharp from 'sharp';
 import { describe, expect, it } from 'vitest';
 import { expectAccessible } from '../support/axe';
+import { watchConsole } from '../support/console';
 import { newPage } from '../support/browser';
 import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
+import { servicePdf } from '../factories/pdfs';
+import { twoToneJpeg } from '../factories/images';
 
 /** The canvas's read-only probe (see DEVELOPERS.md, "The markup canvas in journeys"). */
-type Probe = { view: { scale: number }; stage: { width: number; height: number }; imageToClient(x: number, y: number): { x: number; y: number } };
-const scale = (page: Page) => page.evaluate(() => (window as unknown as { __gridleakMarkup?: Probe }).__gridleakMarkup?.view.scale ?? 0);
+type Probe = {
+  view: { scale: number }; image: { width: number; height: number }; stage: { width: number; height: number };
+  imageToClient(x: number, y: number): { x: number; y: number };
+};
+type Side = 'diagram' | 'chassis';
+type ProbeWindow = { __gridleakMarkup?: Probe; __gridleakMarkups?: Record<string, Probe> };
+const scale = (page: Page) => page.evaluate(() => (window as unknown as ProbeWindow).__gridleakMarkup?.view.scale ?? 0);
 const toClient = (page: Page, x: number, y: number) =>
-  page.evaluate(([px, py]) => (window as unknown as { __gridleakMarkup: Probe }).__gridleakMarkup.imageToClient(px!, py!), [x, y]);
+  page.evaluate(([px, py]) => (window as unknown as ProbeWindow).__gridleakMarkup!.imageToClient(px!, py!), [x, y]);
 
 const ctx = useProductAndBrowser();
 
-/** A white diagram page with a few thin lines. */
-const diagramPng = () =>
-  sharp({ create: { width: 1600, height: 1100, channels: 3, background: '#ffffff' } })
-    .composite([{ input: Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="1600" height="1100"><path d="M100 300 H1500 M640 200 V900" stroke="#000" stroke-width="2" fill="none"/><rect x="620" y="320" width="40" height="120" stroke="#000" fill="none" stroke-width="2"/></svg>'), top: 0, left: 0 }])
-    .png()
-    .toBuffer();
-
-const ON_DIAGRAM = { x: 0.4, y: 0.34 };
+// servicePdf draws R23's resistor on page 1 as a box 220–240 pt across and 280–340 pt down an A4 page (595 × 842 pt).
+const ON_DIAGRAM = { x: 230 / 595.28, y: 310 / 841.89 };
 const ON_CHASSIS = { x: 0.62, y: 0.48 };
 
-/** Places a pin with a reference at a normalised point of the picture on screen. */
-async function markAt(page: Page, ref: string, at: { x: number; y: number }) {
-  await page.getByTestId('markup-stage').waitFor();
-  await expect.poll(() => scale(page)).toBeGreaterThan(0);
-  await page.getByLabel('Reference for the next mark').fill(ref);
-  await page.getByRole('button', { name: /^Pin/ }).click();
-  const p = await toClient(page, at.x, at.y);
-  await page.mouse.click(p.x, p.y);
-  await page.getByRole('status').filter({ hasText: `${ref} marked.` }).waitFor();
+/**
+ * One canvas of the side-by-side view is zoomed past its fit onto the point, which sits near the middle of its
+ * stage. The stage may still be settling after the navigation: both are read again until they agree.
+ */
+async function expectPaneZoomedOnto(page: Page, side: Side, at: { x: number; y: number }) {
+  const state = () =>
+    page.evaluate(([name, px, py]) => {
+      const probe = (window as unknown as ProbeWindow).__gridleakMarkups?.[name as string];
+      const stage = document.querySelector(`[data-markup-probe="${name as string}"] [data-testid="markup-stage"]`)?.getBoundingClientRect();
+      if (!probe || !stage) return null;
+      const fit = Math.min(probe.stage.width / probe.image.width, probe.stage.height / probe.image.height);
+      const p = probe.imageToClient(px as number, py as number);
+      const off = Math.max(Math.abs(p.x - (stage.x + stage.width / 2)) / stage.width, Math.abs(p.y - (stage.y + stage.height / 2)) / stage.height);
+      return { zoom: probe.view.scale / fit, off };
+    }, [side, at.x, at.y] as const);
+  // Generous waits, not timings: the page and both pictures load first on a busy machine.
+  await expect.poll(async () => (await state())?.zoom ?? 0, { timeout: 30_000 }).toBeGreaterThan(1.5);
+  await expect.poll(async () => (await state())?.off ?? Number.POSITIVE_INFINITY, { timeout: 30_000 }).toBeLessThan(0.1);
 }
 
-/** The point is shown near the middle of the stage, at more than the fit zoom. */
-async function expectZoomedOnto(page: Page, at: { x: number; y: number }, fitScale: number) {
-  await expect.poll(() => scale(page)).toBeGreaterThan(fitScale * 1.5);
-  // The stage may still be settling after the navigation: read the stage and the probe again until both are there.
-  const offCentre = async () => {
-    const box = await page.getByTestId('markup-stage').boundingBox();
-    const p = await page.evaluate(([px, py]) => (window as unknown as { __gridleakMarkup?: Probe }).__gridleakMarkup?.imageToClient(px!, py!) ?? null, [at.x, at.y]);
-    if (!box || !p) return Number.POSITIVE_INFINITY;
-    return Math.max(Math.abs(p.x - (box.x + box.width / 2)) / box.width, Math.abs(p.y - (box.y + box.height / 2)) / box.height);
-  };
-  await expect.poll(offCentre).toBeLessThan(0.1);
-}
+const paneBox = (page: Page, side: Side) => page.locator(`[data-markup-probe="${side}"]`).boundingBox();
 
 describe('the service sheet beside the chassis', () => {
-  it('when R23 is marked on a diagram page and on a chassis photo, then each links to the other, zoomed onto the part', async () => {
+  it('when R23 is marked on a PDF diagram page and named by a finding on a chassis photo, then each opens both pictures zoomed onto it', async () => {
     const tech = await newPage(ctx.browser, { width: 1400, height: 950 });
+    const techConsole = watchConsole(tech);
     await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     await tech.getByRole('link', { name: /OV-54-20417/ }).click();
+    await tech.waitForURL(/\/restorations\/\d+/);
+    const notebook = tech.url().match(/^.*\/restorations\/\d+/)![0];
+
+    // A two-page PDF service sheet; the upload is held at the server's door for a moment, so its progress shows.
     await tech.getByRole('link', { name: 'Service sheet' }).click();
-    await tech.getByLabel('Title (optional)').fill('Sheet 1, audio stages');
-    await tech.getByLabel('Scan').setInputFiles({ name: 'diagram.png', mimeType: 'image/png', buffer: await diagramPng() });
-    await tech.getByRole('button', { name: 'Add page' }).click();
-    await tech.getByText('Added one page.').waitFor();
+    await tech.route('**/api/restorations/*/sheets', async (route) => {
+      if (route.request().method() === 'POST') await new Promise((r) => setTimeout(r, 1000));
+      await route.continue();
+    });
+    await tech.getByLabel('Title (optional)').fill('Meridian 54 sheet');
+    await tech.getByLabel('PDF or scan').setInputFiles({ name: 'meridian-54.pdf', mimeType: 'application/pdf', buffer: await servicePdf(['Circuit diagram', 'Layout']) });
+    await tech.getByRole('button', { name: 'Add to the sheet' }).click();
+    await tech.getByRole('progressbar').first().waitFor();
+    await tech.getByText('Added 2 pages.').waitFor({ timeout: 60_000 });
+    await expect.poll(() => tech.getByRole('link', { name: /Meridian 54 sheet/ }).count()).toBe(2);
     await expectAccessible(tech, 'the service sheet');
 
-    await tech.getByRole('link', { name: /Sheet 1, audio stages/ }).click();
-    await markAt(tech, 'R23', ON_DIAGRAM);
-    const diagramFit = await scale(tech);
+    // R23 on the diagram (page 1).
+    await tech.getByRole('link', { name: /Meridian 54 sheet/ }).first().click();
+    await tech.getByTestId('markup-stage').waitFor();
+    await expect.poll(() => scale(tech)).toBeGreaterThan(0);
+    await tech.getByLabel('Reference for the next mark').fill('R23');
+    await tech.getByRole('button', { name: /^Pin/ }).click();
+    const d = await toClient(tech, ON_DIAGRAM.x, ON_DIAGRAM.y);
+    await tech.mouse.click(d.x, d.y);
+    await tech.getByRole('status').filter({ hasText: 'R23 marked.' }).waitFor();
+    await expect.poll(() => tech.getByRole('link', { name: 'Download the original file' }).count()).toBe(1);
     await expectAccessible(tech, 'a service sheet page');
+    const diagramPage = tech.url();
 
-    await tech.getByRole('link', { name: 'Back to the service sheet' }).click();
-    await tech.getByRole('navigation', { name: 'Mark references on a chassis photo' }).getByRole('link').first().click();
-    await markAt(tech, 'R23', ON_CHASSIS);
-    const chassisFit = await scale(tech);
+    // A chassis photo, and a finding on it that names R23.
+    await tech.goto(`${notebook}/photos`);
+    await tech.getByLabel('View').first().selectOption('rear');
+    await tech.locator('input[type=file][multiple]').setInputFiles([{ name: 'rear.jpg', mimeType: 'image/jpeg', buffer: await twoToneJpeg(1600, 1200) }]);
+    await tech.getByRole('button', { name: /Rear, before/ }).first().click({ timeout: 30_000 });
+    await tech.getByRole('link', { name: 'Mark up this photo' }).click();
+    await tech.getByTestId('markup-stage').waitFor();
+    await expect.poll(() => scale(tech)).toBeGreaterThan(0);
+    await tech.getByRole('button', { name: /^Pin/ }).click();
+    const c = await toClient(tech, ON_CHASSIS.x, ON_CHASSIS.y);
+    await tech.mouse.click(c.x, c.y);
+    const form = tech.getByRole('form', { name: 'New finding' });
+    await form.getByLabel('Title').fill('Cathode resistor scorched');
+    await form.getByLabel('Component reference').fill('R23');
+    await form.getByRole('button', { name: 'Save finding' }).click();
+    await tech.waitForURL(/\/findings\/\d+$/);
 
-    // From the chassis mark: "on the diagram" opens the page zoomed onto the symbol.
-    await tech.getByRole('link', { name: 'on the diagram' }).click();
-    await tech.waitForURL(/\/sheets\/\d+\?mark=\d+$/);
-    await expectZoomedOnto(tech, ON_DIAGRAM, diagramFit);
+    // From the finding: "on the diagram" opens both pictures, side by side, each zoomed onto R23.
+    await tech.getByRole('link', { name: 'R23 on the diagram' }).click();
+    await tech.waitForURL(/\/references\/R23\?finding=\d+&first=diagram$/);
+    await expectPaneZoomedOnto(tech, 'diagram', ON_DIAGRAM);
+    await expectPaneZoomedOnto(tech, 'chassis', ON_CHASSIS);
+    const [left, right] = [await paneBox(tech, 'diagram'), await paneBox(tech, 'chassis')];
+    expect(right!.x).toBeGreaterThanOrEqual(left!.x + left!.width);
+    await expectAccessible(tech, 'a reference beside the diagram');
 
-    // And back: "on the chassis" opens the photo zoomed onto the part.
-    await tech.getByRole('link', { name: 'on the chassis' }).click();
-    await tech.waitForURL(/\/sheets\/chassis\/\d+\?mark=\d+$/);
-    await expectZoomedOnto(tech, ON_CHASSIS, chassisFit);
+    // A mismatch note is shown on both pictures.
+    await tech.getByLabel('The diagram says').fill('47k');
+    await tech.getByLabel('The chassis has').fill('39k');
+    await tech.getByRole('button', { name: 'Note the difference' }).click();
+    const line = 'Differs from the diagram: R23: different value fitted; the diagram says 47k; the chassis has 39k';
+    await expect.poll(() => tech.locator('figure figcaption').filter({ hasText: line }).count()).toBe(2);
 
-    await tech.getByRole('link', { name: 'Back to the service sheet' }).click();
-    const row = tech.getByRole('row', { name: /R23/ });
-    await expect.poll(async () => (await row.getByRole('cell').allTextContents()).slice(0, 2)).toEqual(['1', '1']);
+    // From the diagram: "on the chassis" opens both again, the chassis asked for.
+    await tech.goto(diagramPage);
+    await tech.getByRole('link', { name: 'R23 on the chassis' }).click();
+    await tech.waitForURL(/\/references\/R23\?diagram=\d+&first=chassis$/);
+    await expectPaneZoomedOnto(tech, 'chassis', ON_CHASSIS);
+    await expectPaneZoomedOnto(tech, 'diagram', ON_DIAGRAM);
+    const referenceUrl = tech.url();
+
+    // On a phone the two pictures come one after the other, the one asked for first.
+    const phone = await newPage(ctx.browser, { width: 390, height: 844 });
+    const phoneConsole = watchConsole(phone);
+    await signInAs(phone, ctx.product.origin, 'mara@cobbold-lane.test');
+    await phone.goto(referenceUrl);
+    await expectPaneZoomedOnto(phone, 'chassis', ON_CHASSIS);
+    const [top, below] = [await paneBox(phone, 'chassis'), await paneBox(phone, 'diagram')];
+    expect(below!.y).toBeGreaterThanOrEqual(top!.y + top!.height);
+    expect([...techConsole, ...phoneConsole]).toEqual([]);
   });
 });

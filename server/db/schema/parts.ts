@@ -5,6 +5,7 @@ import { measurements } from './measurements';
 import { photos } from './photos';
 import { restorations } from './restorations';
 import { users } from './users';
+import { mismatchNotes, sheetPages } from './sheets';
 
 export const partActionEnum = pgEnum('part_action', ['replaced', 'restuffed', 'kept-original', 'removed']);
 export const partStateEnum = pgEnum('part_state', ['planned', 'ordered', 'fitted']);
@@ -47,6 +48,7 @@ export const eventKindEnum = pgEnum('event_kind', [
   'help-requested', 'help-link-made', 'help-link-withdrawn', 'cause-checked', 'reading-requested', 'reading-answered',
   'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided',
   'payment-received', 'payment-refunded',
+  'sheet-added', 'reference-marked', 'mismatch-noted',
 ]);
 
 /**
@@ -66,6 +68,8 @@ export const events = pgTable(
     findingId: integer().references(() => findings.id, { onDelete: 'cascade' }),
     partId: integer().references(() => parts.id, { onDelete: 'cascade' }),
     measurementId: integer().references(() => measurements.id, { onDelete: 'cascade' }),
+    sheetPageId: integer().references(() => sheetPages.id, { onDelete: 'cascade' }),
+    mismatchNoteId: integer().references(() => mismatchNotes.id, { onDelete: 'cascade' }),
     /** Kind-specific facts, e.g. { from, to } for a status or stage change. */
     data: jsonb().$type<Record<string, unknown>>().notNull().default({}),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
@@ -77,5 +81,7 @@ export const events = pgTable(
     index('events_finding_id_idx').on(t.findingId),
     index('events_part_id_idx').on(t.partId),
     index('events_measurement_id_idx').on(t.measurementId),
+    index('events_sheet_page_id_idx').on(t.sheetPageId),
+    index('events_mismatch_note_id_idx').on(t.mismatchNoteId),
   ],
 );

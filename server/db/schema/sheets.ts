@@ -1,7 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { boolean, check, index, integer, jsonb, pgEnum, pgTable, serial, text, timestamp } from 'drizzle-orm/pg-core';
 import type { NormalisedPoint } from '../../../shared/schemas/findings';
-import { referenceShapes, sheetKinds } from '../../../shared/schemas/sheets';
+import { mismatchKinds, referenceShapes, sheetKinds } from '../../../shared/schemas/sheets';
 import { timestamps } from './columns';
 import { photos } from './photos';
 import { restorations } from './restorations';
@@ -9,6 +9,7 @@ import { users } from './users';
 
 export const sheetKindEnum = pgEnum('sheet_kind', sheetKinds);
 export const referenceShapeEnum = pgEnum('reference_shape', referenceShapes);
+export const mismatchKindEnum = pgEnum('mismatch_kind', mismatchKinds);
 
 /** One uploaded service sheet file; its original lives under `sheets/<storageKey>/original`. */
 export const sheets = pgTable(
@@ -74,4 +75,30 @@ export const referenceMarks = pgTable(
     index('reference_marks_created_by_id_idx').on(t.createdById),
     check('reference_marks_one_target', sql`(${t.sheetPageId} is null) <> (${t.photoId} is null)`),
   ],
+);
+
+/**
+ * A part on the chassis that differs from the diagram (another value fitted at the factory, a part the diagram
+ * does not list, a misprint), recorded against the reference in one restoration.
+ */
+export const mismatchNotes = pgTable(
+  'mismatch_notes',
+  {
+    id: serial().primaryKey(),
+    restorationId: integer()
+      .notNull()
+      .references(() => restorations.id, { onDelete: 'cascade' }),
+    ref: text().notNull(),
+    kind: mismatchKindEnum().notNull(),
+    /** What the diagram or parts list prints, e.g. "47k". */
+    diagramSays: text().notNull().default(''),
+    /** What is fitted on the chassis, e.g. "39k, original solder joints". */
+    chassisHas: text().notNull().default(''),
+    note: text().notNull().default(''),
+    /** Workshop material unless shared with the owner. */
+    ownerVisible: boolean().notNull().default(false),
+    createdById: integer().references(() => users.id, { onDelete: 'set null' }),
+    ...timestamps,
+  },
+  (t) => [index('mismatch_notes_restoration_id_ref_idx').on(t.restorationId, t.ref), index('mismatch_notes_created_by_id_idx').on(t.createdById)],
 );

@@ -1,3 +1,5 @@
+import { recordEvent } from '../events/record-event';
+import { mismatchesRepo } from '../mismatches/mismatches.repo';
 import { randomUUID } from 'node:crypto';
 import { rm, writeFile } from 'node:fs/promises';
 import os from 'node:os';
@@ -74,7 +76,7 @@ export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
     const file = path.join(os.tmpdir(), `gridleak-demo-sheet-${randomUUID()}.png`);
     await writeFile(file, bytes);
     try {
-      const sheet = await service.ingest(set.id, { path: file, size: bytes.length }, { kind, title }, tech.id, 'technician');
+      const sheet = await service.ingest(set.id, { path: file, size: bytes.length, mimeType: 'image/png' }, { kind, title }, tech.id, 'technician');
       ids.push(sheet.pages[0]!.id);
     } finally {
       await rm(file, { force: true });
@@ -91,5 +93,11 @@ export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
       await repo.insertMark({ restorationId: set.id, sheetPageId: ids[1]!, ref: s.ref, shape: 'pin', points: [{ x: at.x, y: at.y }], createdById: tech.id });
       if (underside) await repo.insertMark({ restorationId: set.id, photoId: underside.id, ref: s.ref, shape: 'pin', points: [{ x: at.x, y: at.y }], createdById: tech.id });
     }
+    // The set as built differs from its sheet in one place, noted against the reference.
+    const note = await mismatchesRepo(tx).insert({
+      restorationId: set.id, ref: 'R29', kind: 'value-differs', diagramSays: '150Ω 1W', chassisHas: '180Ω 1W, original factory joints',
+      note: 'Both Meridian 54 chassis on the Cobbold Lane bench carry 180Ω here; treat it as a production change, not a repair.', createdById: tech.id,
+    });
+    await recordEvent(tx, { restorationId: set.id, kind: 'mismatch-noted', actorId: tech.id, mismatchNoteId: note.id, data: { ref: 'R29' } });
   });
 }

@@ -6,7 +6,8 @@ import { quantityLabels } from '../../../shared/schemas/measurements';
 import type { Role } from '../../../shared/permissions';
 import type { TimelineEvent } from '../../../shared/schemas/parts';
 import type { AppDeps } from '../../app-deps';
-import { events, findings, measurements, memberships, parts, photos, users } from '../../db/schema';
+import { events, findings, measurements, memberships, mismatchNotes, parts, photos, sheetPages, users } from '../../db/schema';
+import { mismatchLine } from '../../../shared/schemas/sheets';
 import { bringupEventWords, isBringupEvent } from '../bringup/bringup-events';
 import { photoKeys } from '../photos/photo-objects';
 import { columnsOf, findingFields, visibleSql, visibleSqlByRole, type FieldSources } from '../visibility/visibility-sql';
@@ -22,6 +23,7 @@ const photoSources: FieldSources = { photo: columnsOf(photos) };
 // An event about a finding is judged with the finding's photo; a photo's own event with that photo.
 const eventSources: FieldSources = {
   event: columnsOf(events), finding: findingFields(), part: columnsOf(parts), reading: columnsOf(measurements),
+  sheetPage: columnsOf(sheetPages), mismatch: columnsOf(mismatchNotes),
   photo: { ownerVisible: sql`coalesce(${findingPhotos.ownerVisible}, ${photos.ownerVisible})` },
 };
 /** The visibility rule for one role, or for the role a column holds (a person's role differs per restoration). */
@@ -38,7 +40,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
     const role: Role | SQLWrapper = 'role' in reader ? reader.role : memberships.role;
     const query = db
       .select({
-        e: events, at: atMs.mapWith((v: string | Date) => new Date(v)), actorName: users.name, photo: photos, finding: findings, part: parts, m: measurements,
+        e: events, sheetPage: sheetPages, mismatch: mismatchNotes, at: atMs.mapWith((v: string | Date) => new Date(v)), actorName: users.name, photo: photos, finding: findings, part: parts, m: measurements,
         findingVisible: rule(role, 'finding', findingSources), photoVisible: rule(role, 'photo', photoSources),
       })
       .from(events)
@@ -48,6 +50,8 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
       .leftJoin(findingPhotos, eq(findingPhotos.id, findings.photoId))
       .leftJoin(parts, eq(parts.id, events.partId))
       .leftJoin(measurements, eq(measurements.id, events.measurementId))
+      .leftJoin(sheetPages, eq(sheetPages.id, events.sheetPageId))
+      .leftJoin(mismatchNotes, eq(mismatchNotes.id, events.mismatchNoteId))
       .leftJoin(memberships, 'userId' in reader ? and(eq(memberships.restorationId, events.restorationId), eq(memberships.userId, reader.userId)) : sql`false`)
       .where(and(where, rule(role, 'event', eventSources), before ? sql`(${atMs}, ${events.id}) < (${before.at.toISOString()}::timestamptz, ${before.id})` : undefined))
       .orderBy(desc(atMs), desc(events.id))
@@ -58,7 +62,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
   /** Rows in words; ids and pictures of what the reader may not see are left out (a part fitted for an internal finding). */
   function present(list: TimelineRow[]): Promise<TimelineEvent[]> {
     return Promise.all(
-      list.map(async ({ e, actorName, photo: eventPhoto, finding: eventFinding, part, m, findingVisible: seesFinding, photoVisible: seesPhoto }) => {
+      list.map(async ({ e, sheetPage, mismatch, actorName, photo: eventPhoto, finding: eventFinding, part, m, findingVisible: seesFinding, photoVisible: seesPhoto }) => {
         const finding = seesFinding ? eventFinding : null;
         const photo = seesPhoto ? eventPhoto : null;
         const label = finding ? `#${finding.number}${finding.componentRef ? ` ${finding.componentRef}` : ''} ${finding.title}` : '';
@@ -85,6 +89,9 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           : e.kind === 'invoice-voided' ? `Invoice ${String(e.data.reference ?? e.data.number)} voided`
           : e.kind === 'payment-received' ? `Payment received (${String(e.data.method)}) against ${String(e.data.kind) === 'deposit' ? 'deposit request' : 'invoice'} ${String(e.data.reference ?? e.data.number)}`
           : e.kind === 'payment-refunded' ? `Refund against ${String(e.data.kind) === 'deposit' ? 'deposit request' : 'invoice'} ${String(e.data.reference ?? e.data.number)}`
+          : e.kind === 'sheet-added' ? `Service sheet added: ${sheetPage ? sheetPage.title || 'page 1' : ''}${Number(e.data.pages) > 1 ? ` and ${Number(e.data.pages) - 1} more page${Number(e.data.pages) > 2 ? 's' : ''}` : ''}`
+          : e.kind === 'reference-marked' ? `${String(e.data.ref)} marked ${sheetPage ? 'on the diagram' : 'on the chassis'}`
+          : e.kind === 'mismatch-noted' ? `Differs from the diagram: ${mismatch ? mismatchLine(mismatch) : String(e.data.ref)}`
           : e.kind === 'stage-changed' ? `Stage: ${stageLabels[data.from as Stage] ?? data.from} → ${stageLabels[data.to as Stage] ?? data.to}`
           : `Out of tolerance: ${m ? `${quantityLabels[m.quantity]} at ${m.location}, ${m.verdictReason}` : ''}`;
         return {

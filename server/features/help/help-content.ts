@@ -4,8 +4,10 @@ import type { HelpContent, HelpPhoto, HelpReply } from '../../../shared/schemas/
 import type { AppDeps } from '../../app-deps';
 import { redactedError } from '../../http/redact-error';
 import type { helpRequests } from '../../db/schema';
-import { findings, helpReplies, measurements, parts, photos, restorations, valves } from '../../db/schema';
+import { mismatchLine } from '../../../shared/schemas/sheets';
+import { findings, helpReplies, measurements, mismatchNotes, parts, photos, restorations, valves } from '../../db/schema';
 import { ensureCloseup } from '../closeups/closeups';
+import { mismatchVisible } from '../mismatches/mismatches.repo';
 import { photoKeys } from '../photos/photo-objects';
 import { listSymptomChecks } from '../symptom-checks/symptom-checks.repo';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
@@ -38,6 +40,12 @@ export async function helpContent(deps: Pick<AppDeps, 'storage' | 'logger' | 'db
   const pinRows = photoRows.length
     ? (await db.select({ f: findings }).from(findings).innerJoin(photos, eq(photos.id, findings.photoId))
         .where(and(inArray(findings.photoId, photoRows.map((p) => p.id)), rule('finding'))).orderBy(asc(findings.number))).map((r) => r.f)
+    : [];
+  // The references the chosen items name ("V5 pin 3" → V5), and the mismatch notes on them the reader may see.
+  const refs = [...new Set([...partRows.map((p) => p.componentRef), ...readingRows.map((m) => m.location), ...pinRows.map((f) => f.componentRef)]
+    .map((text) => /^([A-Za-z]{1,4}[0-9]{1,5}[A-Za-z]?)(\s|$)/.exec(text.trim())?.[1]?.toUpperCase()).filter((r): r is string => !!r))];
+  const mismatchRows = refs.length
+    ? await db.select().from(mismatchNotes).where(and(eq(mismatchNotes.restorationId, request.restorationId), inArray(mismatchNotes.ref, refs), mismatchVisible(role))).orderBy(asc(mismatchNotes.ref), asc(mismatchNotes.id))
     : [];
   const replyRows = await db.select().from(helpReplies)
     .where(and(eq(helpReplies.helpRequestId, request.id), replies === 'approved' ? sql`${helpReplies.approvedAt} is not null` : undefined))
@@ -79,6 +87,7 @@ export async function helpContent(deps: Pick<AppDeps, 'storage' | 'logger' | 'db
     })),
     photos: photoList,
     checklist: request.symptomIds.map((symptomId) => ({ symptomId, checks: checks.filter((c) => c.symptomId === symptomId) })),
+    mismatches: mismatchRows.map((m) => ({ id: m.id, ref: m.ref, line: mismatchLine(m) })),
     replies: replyRows.map((r): HelpReply => ({ id: r.id, name: r.name, body: r.body, createdAt: r.createdAt.toISOString(), approved: r.approvedAt !== null })),
   };
 }

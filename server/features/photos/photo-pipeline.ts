@@ -23,6 +23,8 @@ export interface PipelineOptions {
   largePx?: number;
   /** What a refused file is told (415). */
   unsupportedMessage?: string;
+  /** `false`: no phone variant is made (service sheet pages are read on the large variant); `phone` is then empty. */
+  phone?: false;
 }
 
 export interface ProcessedPhoto {
@@ -47,8 +49,8 @@ export const withDecodeSlot = <T>(work: () => Promise<T>) => decodeSlots(work);
 const unsupported = (message?: string) =>
   new HttpError(415, 'unsupported_type', message ?? 'That file is not a photo Gridleak can read: send JPEG, PNG, WebP or AVIF (HEIC may need exporting as JPEG).');
 
-/** Checks, orients and resizes one uploaded image; served variants carry no metadata (GPS above all). */
-export function processPhoto(path: string, limits: PipelineLimits, options: PipelineOptions = {}): Promise<ProcessedPhoto> {
+/** Checks, orients and resizes one uploaded image (a file or bytes); served variants carry no metadata (GPS above all). */
+export function processPhoto(path: string | Buffer, limits: PipelineLimits, options: PipelineOptions = {}): Promise<ProcessedPhoto> {
   return decodeSlots(async () => {
     const open = () => sharp(path, { limitInputPixels: limits.maxPixels, failOn: 'error', sequentialRead: true });
     let meta: Metadata;
@@ -72,7 +74,7 @@ export function processPhoto(path: string, limits: PipelineLimits, options: Pipe
         .webp({ quality: 82 })
         .toBuffer();
       // The smaller variants come from the display image: far less to decode than the original.
-      const [phone, thumb] = await Promise.all([phoneVariant(display), sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer()]);
+      const [phone, thumb] = await Promise.all([options.phone === false ? Buffer.alloc(0) : phoneVariant(display), sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer()]);
       return {
         contentType: meta.format === 'heif' && meta.compression === 'av1' ? 'image/avif' : contentType,
         width: rotated ? meta.height : meta.width,

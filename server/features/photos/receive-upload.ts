@@ -11,6 +11,8 @@ export interface ReceivedUpload {
   path: string;
   size: number;
   fields: Record<string, string>;
+  /** The content type the client declared for the file (never trusted alone: content is sniffed). */
+  mimeType: string;
   discard(): Promise<void>;
 }
 
@@ -26,17 +28,19 @@ export function receiveUpload(req: Request, maxBytes: number): Promise<ReceivedU
   return new Promise<ReceivedUpload>((resolve, reject) => {
     const fields: Record<string, string> = {};
     let file: Promise<number> | undefined;
+    let mimeType = '';
     let failed: HttpError | undefined;
     const fail = (err: HttpError) => {
       failed ??= err;
     };
     const parser = busboy({ headers: req.headers, limits: { files: 1, fields: 20, fileSize: maxBytes, fieldSize: 4096 } });
     parser.on('field', (name, value) => (fields[name] = value));
-    parser.on('file', (name, stream) => {
+    parser.on('file', (name, stream, info) => {
       if (name !== 'file' || file) {
         stream.resume();
         return;
       }
+      mimeType = info.mimeType;
       let size = 0;
       stream.on('data', (chunk: Buffer) => (size += chunk.length));
       stream.on('limit', () => fail(new HttpError(413, 'too_large', `The file is larger than ${Math.round(maxBytes / 1024 / 1024)} MB.`)));
@@ -64,7 +68,7 @@ export function receiveUpload(req: Request, maxBytes: number): Promise<ReceivedU
           await discard();
           return reject(failed);
         }
-        resolve({ path: tmp, size, fields, discard });
+        resolve({ path: tmp, size, fields, mimeType, discard });
       } catch {
         await discard();
         reject(new BadRequestError('The upload was cut off before it finished.'));

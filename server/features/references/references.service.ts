@@ -6,6 +6,7 @@ import type { z } from 'zod';
 import type { Database } from '../../db/client';
 import { photos, sheetPages } from '../../db/schema';
 import { ForbiddenError, NotFoundError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
 import { referencesRepo, type ReferenceMarkRow } from './references.repo';
 
 type MarkInput = z.output<typeof referenceMarkInputSchema>;
@@ -35,6 +36,9 @@ export function referencesService(db: Database) {
         const row = await referencesRepo(tx).insertMark({
           restorationId, sheetPageId: input.sheetPageId ?? null, photoId: input.photoId ?? null,
           ref: input.ref, shape: input.shape, points: input.points, createdById,
+        });
+        await recordEvent(tx, {
+          restorationId, kind: 'reference-marked', actorId: createdById, sheetPageId: row.sheetPageId, photoId: row.photoId, data: { ref: row.ref },
         });
         return toMark(row);
       });

@@ -1,7 +1,8 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { AppDeps } from '../../app-deps';
 import { compareComponentRefs } from '../../../shared/natural-order';
-import { findings, measurements, memberships, parts, photos, restorations, users } from '../../db/schema';
+import { findings, measurements, memberships, mismatchNotes, parts, photos, restorations, users } from '../../db/schema';
+import { mismatchVisible } from '../mismatches/mismatches.repo';
 import { bringupForReport } from '../bringup/bringup-report';
 import { ensureCloseup } from '../closeups/closeups';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
@@ -29,6 +30,7 @@ export async function reportData(deps: Pick<AppDeps, 'db' | 'storage' | 'config'
   const ledger = (await db.select().from(parts).where(and(eq(parts.restorationId, restorationId), owner('part'))).orderBy(asc(parts.id)))
     .sort((a, b) => compareComponentRefs(a.componentRef, b.componentRef));
   const readings = await db.select().from(measurements).where(and(eq(measurements.restorationId, restorationId), owner('reading'))).orderBy(asc(measurements.measuredAt));
+  const mismatches = await db.select().from(mismatchNotes).where(and(eq(mismatchNotes.restorationId, restorationId), mismatchVisible('owner'))).orderBy(asc(mismatchNotes.ref), asc(mismatchNotes.id));
   const technicians = await db
     .select({ name: users.name })
     .from(memberships)
@@ -61,6 +63,7 @@ export async function reportData(deps: Pick<AppDeps, 'db' | 'storage' | 'config'
     repaired,
     replaced: ledger.filter((p) => p.action !== 'kept-original' && p.state === 'fitted'),
     kept: ledger.filter((p) => p.action === 'kept-original'),
+    mismatches,
     readings: readings.filter((m) => m.quantity !== 'insulation' && m.quantity !== 'leakage'),
     safetyChecks: readings.filter((m) => m.quantity === 'insulation' || m.quantity === 'leakage'),
     safety: await safetyReportData(db, restorationId),

@@ -1,3 +1,4 @@
+import { mismatchLine } from '../../../shared/schemas/sheets';
 import { formatQuantity, isOverRange, quantityUnits } from '../../../shared/bench';
 import { kindLabels, statusLabels } from '../../../shared/schemas/findings';
 import { quantityLabels } from '../../../shared/schemas/measurements';
@@ -65,6 +66,10 @@ export async function renderReport(d: ReportData): Promise<{ pdf: Buffer; pageCo
     w.text(`${p.componentRef}: ${[p.originalPart, p.originalRating].filter(Boolean).join(' ') || 'original'} → ${[p.replacementPart, p.replacementRating].filter(Boolean).join(' ')} (${partActionLabels[p.action].toLowerCase()})${p.testedAfter ? `; tested after: ${p.testedAfter}` : ''}`, { size: 10, gap: 0.15 });
   w.heading('Original parts kept');
   w.text(d.kept.length ? d.kept.map((p) => `${p.componentRef} ${p.originalPart} ${p.originalRating}`.trim()).join('; ') : 'None recorded separately.');
+  if (d.mismatches.length) {
+    w.heading('Where the set differs from its service sheet');
+    for (const m of d.mismatches) w.text(mismatchLine(m), { size: 10, gap: 0.15 });
+  }
   w.heading('Key measurements');
   if (!d.readings.length) w.text('No readings have been shared in this report.');
   for (const m of d.readings) w.text(reading(m), { size: 10, gap: 0.15 });

@@ -9,6 +9,7 @@ import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
 import { input, validate } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
+import { deleteSheetObjects } from '../sheets/sheet-objects';
 import { restorationsService } from './restorations.service';
 
 const list = { query: restorationListQuerySchema };
@@ -18,7 +19,10 @@ const patch = { params: idParamsSchema, body: restorationPatchSchema };
 
 export function restorationsRoutes(deps: AppDeps): Router {
   const { db } = deps;
-  const service = restorationsService(db, invitationsService(deps).inviteIn);
+  const removeObjects = async (keys: string[]) => {
+    for (const key of keys) await deleteSheetObjects(deps.storage, key).catch((err: unknown) => deps.logger.warn({ err }, 'sheet objects left for the sweep'));
+  };
+  const service = restorationsService(db, invitationsService(deps).inviteIn, removeObjects);
   const router = Router();
   router.get('/restorations', requireUser, validate(list), async (req, res) => {
     res.json(await service.listFor(req.user!.id, input(res, list).query));

@@ -3,8 +3,9 @@ import type { Role } from '../../../shared/permissions';
 import type { Restoration, restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
 import { count, eq } from 'drizzle-orm';
 import type { Database, Tx } from '../../db/client';
-import { invoices, restorations } from '../../db/schema';
+import { invoices, restorations, sheets } from '../../db/schema';
 import { ConflictError, NotFoundError } from '../../http/errors';
+import { unitOfWork } from '../../db/unit-of-work';
 import { recordEvent } from '../events/record-event';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
 import { stageGates } from './stage-gates';
@@ -20,7 +21,10 @@ export function toRestoration(row: RestorationRow, role: Role): Restoration {
 /** Sends an invitation on the caller's transaction (the invitations service's `inviteIn`). */
 type InviteIn = (tx: Tx, restorationId: number, email: string, role: Role, inviterId: number) => Promise<unknown>;
 
-export function restorationsService(db: Database, invite?: InviteIn) {
+/** Deletes the objects a removed restoration leaves behind (service sheets), once its rows are gone. */
+type RemoveObjects = (storageKeys: string[]) => Promise<void>;
+
+export function restorationsService(db: Database, invite?: InviteIn, removeObjects?: RemoveObjects) {
   const repo = restorationsRepo(db);
   return {
     async listFor(userId: number, filter: Parameters<typeof repo.listFor>[1]) {
@@ -65,15 +69,18 @@ export function restorationsService(db: Database, invite?: InviteIn) {
     /**
      * Deletes a set and everything on it, except that issued invoices, deposit requests and credit notes are the
      * workshop's accounting record: a set with any is refused (the lock makes a concurrent issue wait or see it gone).
+     * The rows go in one transaction; the sheets' objects only after it has committed.
      */
     async remove(id: number) {
-      await db.transaction(async (tx) => {
+      await unitOfWork(db, async (tx, afterCommit) => {
         const [r] = await tx.select({ id: restorations.id }).from(restorations).where(eq(restorations.id, id)).for('update');
         if (!r) throw new NotFoundError();
         const [issued] = await tx.select({ n: count() }).from(invoices).where(eq(invoices.restorationId, id));
         if (issued!.n > 0)
           throw new ConflictError(`This set has ${issued!.n === 1 ? 'an issued invoice' : `${issued!.n} issued invoices`} (deposit requests and credit notes count), which are kept for the workshop's accounts, so it cannot be deleted. Set its stage to Returned instead.`, { invoices: issued!.n });
-        await restorationsRepo(tx).remove(id);
+        const keys = (await tx.select({ key: sheets.storageKey }).from(sheets).where(eq(sheets.restorationId, id)).for('update')).map((s) => s.key);
+        if (!(await restorationsRepo(tx).remove(id))) throw new NotFoundError();
+        if (keys.length && removeObjects) afterCommit(() => removeObjects(keys));
       });
     },
   };

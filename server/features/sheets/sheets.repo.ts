@@ -40,14 +40,14 @@ export function sheetsRepo(db: Executor) {
     async updatePage(id: number, values: Partial<typeof sheetPages.$inferInsert>) {
       await db.update(sheetPages).set(values).where(eq(sheetPages.id, id));
     },
-    /** Deletes a page; when it was the sheet's last, the sheet goes too and its storage key is returned. */
-    async removePage(id: number): Promise<string | undefined> {
-      const [page] = await db.delete(sheetPages).where(eq(sheetPages.id, id)).returning({ sheetId: sheetPages.sheetId });
+    /** Deletes a page (and the sheet when it was its last): which objects to delete once committed. */
+    async removePage(id: number): Promise<{ storageKey: string; pageNumber: number; sheetGone: boolean } | undefined> {
+      const [page] = await db.delete(sheetPages).where(eq(sheetPages.id, id)).returning({ sheetId: sheetPages.sheetId, pageNumber: sheetPages.pageNumber });
       if (!page) return undefined;
+      const [sheet] = await db.select({ storageKey: sheets.storageKey }).from(sheets).where(eq(sheets.id, page.sheetId)).for('update');
       const [left] = await db.select({ n: sql<number>`count(*)::int` }).from(sheetPages).where(eq(sheetPages.sheetId, page.sheetId));
-      if (left!.n > 0) return undefined;
-      const [sheet] = await db.delete(sheets).where(eq(sheets.id, page.sheetId)).returning({ storageKey: sheets.storageKey });
-      return sheet?.storageKey;
+      if (left!.n === 0) await db.delete(sheets).where(eq(sheets.id, page.sheetId));
+      return { storageKey: sheet!.storageKey, pageNumber: page.pageNumber, sheetGone: left!.n === 0 };
     },
   };
 }

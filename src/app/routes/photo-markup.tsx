@@ -14,6 +14,8 @@ import { FindingsList } from '../../features/markup/components/findings-list';
 import { MarkupCanvas } from '../../features/markup/components/markup-canvas';
 import { NewFindingForm } from '../../features/markup/components/new-finding-form';
 import { useMembers } from '../../features/members/api/get-members';
+import { DuplicateFindingOffer } from '../../features/sheets/components/duplicate-finding-offer';
+import { KnownReferences } from '../../features/sheets/components/known-references';
 import { usePhotos } from '../../features/photos/api/get-photos';
 import { useRefreshExpiredUrls } from '../../features/photos/hooks/use-refresh-expired-urls';
 import { photoLabel } from '../../features/photos/lib/photo-format';
@@ -179,6 +181,13 @@ function PhotoMarkup({
                 onSubmit={actions.submitCreate}
                 onCancel={actions.cancelCreate}
                 refNotice={(ref) => <SameReferenceFinding restorationId={r.id} componentRef={ref} />}
+                referenceListId="known-references"
+                referenceHelp={(typed) => (
+                  <>
+                    <KnownReferences restorationId={r.id} id="known-references" />
+                    <DuplicateFindingOffer restorationId={r.id} photoId={photo.id} typed={typed} mark={actions.pending!} onAttached={actions.cancelCreate} />
+                  </>
+                )}
               />
             </div>
           ) : selected && !drawn ? (

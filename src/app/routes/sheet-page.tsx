@@ -6,6 +6,7 @@ import { usePhotos } from '../../features/photos/api/get-photos';
 import { photoLabel } from '../../features/photos/lib/photo-format';
 import { useSheetPages } from '../../features/sheets/api/get-sheet-pages';
 import { ReferenceViewer } from '../../features/sheets/components/reference-viewer';
+import { SheetPageDetails } from '../../features/sheets/components/sheet-page-details';
 import { useRestorationContext } from '../restoration-context';
 
 const focusOf = (params: URLSearchParams) => {
@@ -29,6 +30,7 @@ export function SheetPageRoute() {
     <section className="space-y-3" aria-label={label}>
       <p>{back}</p>
       <h2 className="text-xl font-bold">{label}</h2>
+      <SheetPageDetails key={`${page.id}-${page.kind}-${page.title}-${page.ownerVisible}`} page={page} canEdit={can(r.role, 'sheets.edit')} />
       <ReferenceViewer
         key={`${page.id}-${search.get('mark') ?? ''}`}
         restorationId={r.id}

@@ -13,6 +13,7 @@ import { fullTime, relativeTime, type FindingMember } from './finding-format';
 import { FindingHistory } from './finding-history';
 import { OpenQuestionBadge, QuestionToggle, ShareWithOwner } from './finding-sharing';
 import { SeverityMark, StatusMark } from './status-mark';
+import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
 
 export interface FindingPanelProps {
   finding: Finding;
@@ -65,6 +66,7 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
           <StatusMark status={shown.status} />
           <SeverityMark severity={shown.severity} />
           {shown.componentRef && <span className="font-mono font-semibold">{shown.componentRef}</span>}
+          {shown.componentRef && <OnTheDiagramLink restorationId={restorationId} text={shown.componentRef} from={{ finding: shown.id }} />}
           {workshop && shown.questionOpen && <OpenQuestionBadge />}
         </div>
         <h2 id={headingId} className="text-xl font-bold break-words">

@@ -80,6 +80,13 @@ export function HelpContentView({ content, extra, removeSymptom }: {
           </table>
         </Section>
       )}
+      {content.mismatches.length > 0 && (
+        <Section title="Where the chassis differs from the diagram">
+          <ul className="list-disc space-y-1 pl-5">
+            {content.mismatches.map((m) => <li key={m.id}>{m.line}</li>)}
+          </ul>
+        </Section>
+      )}
       {content.photos.length > 0 && (
         <Section title="Photos">
           <div className="grid gap-6 md:grid-cols-2 print:grid-cols-2">

@@ -23,6 +23,7 @@ const help: SharedHelp = {
     pins: [{ id: 5, number: 1, shape: 'pin', points: [{ x: 0.25, y: 0.75 }], title: 'Leaky C27', componentRef: 'C27', kind: 'leaking', severity: 'fault', status: 'observed', closeupUrl: '/c.webp' }] }],
   checklist: [{ symptomId: 'hum', checks: [{ symptomId: 'hum', causeId: 'poor-earth', result: 'confirmed', note: '', checkedBy: null, updatedAt: '2026-12-01T09:30:00.000Z',
     reading: { id: 8, location: 'V2 earth tag', reading: '4.7', expected: '0.5', verdict: 'out', verdictReason: 'above the tolerance' }, finding: null }] }],
+  mismatches: [{ id: 6, ref: 'C27', line: 'C27: different value fitted; the diagram says 22nF; the chassis has 47nF' }],
   replies: [],
 };
 const show = () =>
@@ -44,6 +45,8 @@ describe('the shared help page', () => {
     // The checklist: every cause of the symptom in order, the checked one with its result and reading.
     const checklist = screen.getByRole('heading', { name: 'Checklist: Loud hum' }).closest('div')!.parentElement!;
     expect(checklist).toHaveTextContent(/1\. Reservoir .*not checked yet.*2\. Poor earth .*Confirmed.*V2 earth tag read 4\.7/);
+    expect(screen.getByRole('heading', { name: 'Where the chassis differs from the diagram' })).toBeInTheDocument();
+    expect(screen.getByText('C27: different value fitted; the diagram says 22nF; the chassis has 47nF').tagName).toBe('LI');
     expect(document.querySelector('meta[name="robots"]')).toHaveAttribute('content', expect.stringMatching(/noindex/));
   });
 

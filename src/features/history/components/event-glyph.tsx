@@ -190,6 +190,27 @@ const drawings: Record<Kind, ReactNode> = {
       <path d="M10 5.5v-4M8 3.5l2-2 2 2" />
     </>
   ),
+  // A folded sheet with a zig-zag: a service sheet page added.
+  'sheet-added': (
+    <>
+      <path d="M5 3h7l3 3v11H5Z" />
+      <path d="M7 11h2l1-2 1.5 4 1-2H13" />
+    </>
+  ),
+  // A pin with a crossbar: a reference marked on a picture.
+  'reference-marked': (
+    <>
+      <path d="M10 17s-5-5-5-9a5 5 0 0 1 10 0c0 4-5 9-5 9Z" />
+      <path d="M8 8h4" />
+    </>
+  ),
+  // Two bars that do not line up: the chassis differs from the diagram.
+  'mismatch-noted': (
+    <>
+      <path d="M4 7h7M9 13h7" />
+      <path d="m13 4-6 12" />
+    </>
+  ),
 };
 
 export function EventGlyph({ kind, caution = false, className = '' }: { kind: Kind; caution?: boolean; className?: string }) {

@@ -34,6 +34,9 @@ export const eventKindLabels: Record<Kind, string> = {
   'invoice-voided': 'Invoices voided',
   'payment-received': 'Payments received',
   'payment-refunded': 'Refunds',
+  'sheet-added': 'Service sheet pages',
+  'reference-marked': 'References marked',
+  'mismatch-noted': 'Mismatches noted',
 };
 
 export const eventKinds = timelineKinds;

@@ -15,6 +15,8 @@ export function NewFindingForm({
   onSubmit,
   onCancel,
   refNotice,
+  referenceListId,
+  referenceHelp,
 }: {
   shape: Shape;
   /** Shown under the reference as it is typed: the page points out another finding for the same part. */
@@ -23,6 +25,10 @@ export function NewFindingForm({
   error?: string;
   onSubmit: (values: NewFindingValues) => void;
   onCancel: () => void;
+  /** A `<datalist>` of the references already known, offered as the reference is typed. */
+  referenceListId?: string;
+  /** Shown under the reference as it is typed (the known references, an existing finding for the same part). */
+  referenceHelp?: (typed: string) => ReactNode;
 }) {
   const { register, handleSubmit, formState, watch } = useForm<NewFindingValues>({ resolver: zodResolver(newFindingSchema), defaultValues: newFindingDefaults });
   const errors = formState.errors;
@@ -44,9 +50,10 @@ export function NewFindingForm({
         {(a) => <input {...a} {...register('title')} autoFocus maxLength={140} className={inputClass} />}
       </Field>
       <Field label="Component reference" hint="As the schematic prints it, e.g. C27, R20 or V5" error={errors.componentRef?.message}>
-        {(a) => <input {...a} {...register('componentRef')} maxLength={20} autoComplete="off" className={`${inputClass} font-mono`} />}
+        {(a) => <input {...a} {...register('componentRef')} list={referenceListId} maxLength={20} autoComplete="off" className={`${inputClass} font-mono`} />}
       </Field>
       {refNotice?.(watch('componentRef') ?? '')}
+      {referenceHelp?.(watch('componentRef') ?? '')}
       <div className="grid grid-cols-2 gap-3">
         <Field label="Kind">
           {(a) => (

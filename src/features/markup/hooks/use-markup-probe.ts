@@ -9,6 +9,8 @@ import { imagePoint, imageToStage, type ImageSize, type StageSize, type ViewTran
  * - `imageToClient(x, y)`: a normalised image point (0..1) as viewport (client) CSS px, ready for `page.mouse`;
  * - `pending`: the first point of a new mark waiting for its words, normalised, while there is one.
  * A new object replaces it after every view change, so read it again after zooming or panning.
+ * When several canvases are on screen (a diagram beside a chassis photo), each one inside an element with
+ * `data-markup-probe="<name>"` is also under `window.__gridleakMarkups[name]`.
  */
 export interface MarkupProbe {
   readonly view: ViewTransform;
@@ -21,6 +23,7 @@ export interface MarkupProbe {
 declare global {
   interface Window {
     __gridleakMarkup?: MarkupProbe;
+    __gridleakMarkups?: Record<string, MarkupProbe>;
   }
 }
 
@@ -45,8 +48,11 @@ export function useMarkupProbe(
       },
     });
     window.__gridleakMarkup = probe;
+    const name = ref.current?.closest('[data-markup-probe]')?.getAttribute('data-markup-probe');
+    if (name) window.__gridleakMarkups = { ...window.__gridleakMarkups, [name]: probe };
     return () => {
       if (window.__gridleakMarkup === probe) delete window.__gridleakMarkup;
+      if (name && window.__gridleakMarkups?.[name] === probe) delete window.__gridleakMarkups[name];
     };
   }, [ref, view, image, stage, pending]);
 }

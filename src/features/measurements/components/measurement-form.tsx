@@ -1,3 +1,4 @@
+import { KnownReferences } from '../../sheets/components/known-references';
 import { useId } from 'react';
 import { measuredQuantities } from '../../../../shared/bench';
 import { quantityLabels, type Measurement } from '../../../../shared/schemas/measurements';
@@ -40,8 +41,9 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
       className="space-y-4 rounded-xl border border-rule bg-panel p-4">
       {!editing && <h3 className="text-lg font-bold">Record a reading</h3>}
       <div className="grid gap-3 sm:grid-cols-2">
+        <KnownReferences restorationId={restorationId} id="reading-known-references" />
         <Field label="Location" hint="Component or test point, e.g. C27, V5 pin 3" error={errorOf('location')}>
-          {(a) => <input {...a} {...register('location')} {...typed} className={inputClass} placeholder="e.g. V5 pin 3" />}
+          {(a) => <input {...a} {...register('location')} {...typed} list="reading-known-references" className={inputClass} placeholder="e.g. V5 pin 3" />}
         </Field>
         <Field label="Quantity" error={errorOf('quantity')}>
           {(a) => (

@@ -1,3 +1,4 @@
+import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
 import { useState } from 'react';
 import { quantityLabels, type Measurement } from '../../../../shared/schemas/measurements';
 import { buttonClass } from '../../../components/button';
@@ -20,7 +21,7 @@ export function MeasurementRow({ restorationId, m, canRecord, onEdit }: {
   return (
     <tr className="border-t border-rule" data-verdict={m.verdict}>
       <th scope="row" className={`${cell} text-left font-semibold`}>
-        {m.location}
+        {m.location} <OnTheDiagramLink restorationId={restorationId} text={m.location} />
         {m.ownerVisible && <span className="block text-xs font-normal text-ink-soft">shared with owner</span>}
       </th>
       <td className={cell}>{quantityLabels[m.quantity]}</td>

@@ -1,3 +1,4 @@
+import { KnownReferences } from '../../sheets/components/known-references';
 import { useId } from 'react';
 import { mainsPositionLabels, mainsPositions, partActionLabels, partActions, partStateLabels, partStates, type Part } from '../../../../shared/schemas/parts';
 import { buttonClass } from '../../../components/button';
@@ -33,8 +34,9 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
       className="space-y-4 rounded-xl border border-rule bg-panel p-4 print:hidden">
       <h3 className="text-lg font-bold">{editing ? `Change ${part.componentRef}` : 'Record a part'}</h3>
       <div className="grid gap-3 sm:grid-cols-3">
+        <KnownReferences restorationId={restorationId} id="ledger-known-references" />
         <Field label="Component reference" hint="As the schematic prints it, e.g. C27" error={errors.componentRef?.message}>
-          {(a) => <input {...a} {...register('componentRef')} {...typed} className={mono} />}
+          {(a) => <input {...a} {...register('componentRef')} {...typed} list="ledger-known-references" className={mono} />}
         </Field>
         <Field label="Action" error={errors.action?.message}>
           {(a) => (

@@ -3,6 +3,7 @@ import { mainsPositionLabels, partActionLabels, partStates, type Part } from '..
 import type { FindingChoice } from '../lib/finding-choice';
 import { formatMinor, type Currency } from '../lib/money';
 import { compareComponentRefs } from '../../../../shared/natural-order';
+import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
 import { StateCell } from './state-cell';
 import { WarningList } from './warning-list';
 
@@ -37,7 +38,12 @@ export function partColumns({ showPrivate, currency, findingOf, onAdvance, onEdi
   const columns = [
     helper.accessor('componentRef', {
       header: 'Ref',
-      cell: (c) => <span className="font-mono font-semibold">{c.getValue()}</span>,
+      cell: (c) => (
+        <span className="flex flex-col">
+          <span className="font-mono font-semibold">{c.getValue()}</span>
+          <OnTheDiagramLink restorationId={c.row.original.restorationId} text={c.getValue()} />
+        </span>
+      ),
       sortingFn: (a, b, id) => compareComponentRefs(a.getValue<string>(id), b.getValue<string>(id)),
     }),
     helper.accessor('action', { header: 'Action', cell: (c) => partActionLabels[c.getValue()], enableSorting: false }),

@@ -14,8 +14,8 @@ export const referenceMarksQueryOptions = (restorationId: number) =>
 export const useReferenceMarks = (restorationId: number) => useQuery(referenceMarksQueryOptions(restorationId));
 
 /** Every known reference with its counts. */
-export const useReferences = (restorationId: number) =>
-  useQuery({ queryKey: referencesQueryKey(restorationId), queryFn: () => api<ReferenceSummary[]>(`/restorations/${restorationId}/references`) });
+export const useReferences = (restorationId: number, enabled = true) =>
+  useQuery({ queryKey: referencesQueryKey(restorationId), queryFn: () => api<ReferenceSummary[]>(`/restorations/${restorationId}/references`), enabled });
 
 function useInvalidateReferences(restorationId: number) {
   const client = useQueryClient();

@@ -1,6 +1,7 @@
 import { useReferenceMarks, useReferences } from '../api/reference-marks';
 import { Link } from 'react-router';
 import { markPath } from '../lib/mark-as-finding';
+import { referencePath } from '../lib/reference-path';
 
 /** Every reference known in the restoration, with where it appears; each mark count links to the first mark. */
 export function ReferenceTable({ restorationId }: { restorationId: number }) {
@@ -36,7 +37,9 @@ export function ReferenceTable({ restorationId }: { restorationId: number }) {
       <tbody>
         {refs.data.map((r) => (
           <tr key={r.ref} className="border-b border-rule">
-            <th scope="row" className="py-2 font-mono">{r.ref}</th>
+            <th scope="row" className="py-2 font-mono">
+              <Link to={referencePath(restorationId, r.ref)} className="font-semibold text-glow-strong underline">{r.ref}</Link>
+            </th>
             <td>{linked(r.ref, r.diagramMarks, true)}</td>
             <td>{linked(r.ref, r.chassisMarks, false)}</td>
             <td>{r.findings}</td>

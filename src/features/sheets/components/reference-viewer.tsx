@@ -4,6 +4,7 @@ import { inputClass } from '../../../components/field';
 import { MarkupCanvas } from '../../markup/components/markup-canvas';
 import type { NewMark } from '../../markup/lib/marks';
 import { useCreateReferenceMark, useDeleteReferenceMark, useReferenceMarks, useReferences } from '../api/reference-marks';
+import { useMismatchNotes } from '../api/mismatch-notes';
 import { markAsFinding } from '../lib/mark-as-finding';
 import { ReferenceMarkList } from './reference-mark-list';
 
@@ -30,6 +31,7 @@ const onThis = (m: ReferenceMark, target: MarkTarget) => (target.sheetPageId !==
 export function ReferenceViewer({ restorationId, label, imageUrl, imageSize, target, canMark, focusMarkId, onImageError }: Props) {
   const marks = useReferenceMarks(restorationId);
   const known = useReferences(restorationId);
+  const mismatches = useMismatchNotes(restorationId);
   const create = useCreateReferenceMark(restorationId);
   const remove = useDeleteReferenceMark(restorationId);
   const [ref, setRef] = useState('');
@@ -61,7 +63,7 @@ export function ReferenceViewer({ restorationId, label, imageUrl, imageSize, tar
 
   return (
     <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
-      <div className="h-[70vh] min-h-80">
+      <div className="h-[70vh] min-h-80" data-markup-probe={target.sheetPageId !== undefined ? 'diagram' : 'chassis'}>
         <MarkupCanvas
           imageUrl={imageUrl}
           imageSize={imageSize}
@@ -99,6 +101,8 @@ export function ReferenceViewer({ restorationId, label, imageUrl, imageSize, tar
           here={here}
           all={marks.data ?? []}
           loading={marks.isPending}
+          mismatches={mismatches.data ?? []}
+          summary={known.data ?? []}
           selectedId={selectedId}
           onSelect={setSelectedId}
           onDelete={canMark ? (id) => remove.mutate(id) : undefined}

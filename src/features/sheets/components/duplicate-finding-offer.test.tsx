@@ -1,0 +1,56 @@
+// @vitest-environment happy-dom
+import '@testing-library/jest-dom/vitest';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { cleanup, render, screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { createMemoryRouter, RouterProvider } from 'react-router';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import type { Finding } from '../../../../shared/schemas/findings';
+import { fakeApi, ok } from '../../../testing/fake-api';
+import { DuplicateFindingOffer } from './duplicate-finding-offer';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const existing = { id: 4, restorationId: 3, photoId: 7, number: 2, title: 'Cathode resistor scorched', componentRef: 'R23' } as Finding;
+
+function show(typed: string, onAttached = vi.fn()) {
+  const router = createMemoryRouter(
+    [
+      { path: '/new', element: <DuplicateFindingOffer restorationId={3} photoId={8} typed={typed} mark={{ shape: 'circle', points: [{ x: 0.4, y: 0.5 }, { x: 0.45, y: 0.5 }] }} onAttached={onAttached} /> },
+      { path: '/restorations/:id/photos/:photoId/findings/:findingId', element: <p>the existing finding</p> },
+    ],
+    { initialEntries: ['/new'] },
+  );
+  render(
+    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>,
+  );
+  return { router, onAttached };
+}
+
+describe('a second finding for the same part', () => {
+  it('when R23 already has a finding, then attaching posts a location mark on this photo and opens that finding', async () => {
+    const api = fakeApi((call) =>
+      call.method === 'POST' ? { status: 201, body: { id: 11, ...(call.body as object) } } : call.path === '/restorations/3/findings' ? ok([existing]) : undefined,
+    );
+    const { router, onAttached } = show('r23');
+    await userEvent.click(await screen.findByRole('button', { name: 'Attach to #2' }));
+    expect(api.calls.find((c) => c.method === 'POST')).toEqual({
+      method: 'POST', path: '/restorations/3/reference-marks', body: { photoId: 8, ref: 'R23', shape: 'pin', points: [{ x: 0.4, y: 0.5 }] },
+    });
+    expect(await screen.findByText('the existing finding')).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/restorations/3/photos/7/findings/4');
+    expect(onAttached).toHaveBeenCalled();
+  });
+
+  it('when no finding names the reference typed, then nothing is offered', async () => {
+    const api = fakeApi((call) => (call.path === '/restorations/3/findings' ? ok([existing]) : undefined));
+    show('C14');
+    await vi.waitFor(() => expect(api.calls.some((c) => c.path === '/restorations/3/findings')).toBe(true));
+    expect(screen.queryByRole('group', { name: /already has a finding/ })).not.toBeInTheDocument();
+  });
+});
