@@ -1,6 +1,7 @@
-import { and, asc, desc, eq, max, sql } from 'drizzle-orm';
+import { and, desc, eq, max, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
+import { keyset, type PageWindow } from '../../db/keyset';
 import { comments, findingChanges, findings, photos, restorations, users } from '../../db/schema';
 import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 
@@ -9,6 +10,9 @@ export type FindingWithContext = FindingRow & { authorName: string | null; photo
 type NewFinding = Omit<typeof findings.$inferInsert, 'number' | 'id'>;
 
 const findingSources = { finding: columnsOf(findings), photo: columnsOf(photos) };
+/** A restoration's findings by number (then id). */
+export const findingOrder = keyset('asc', [{ by: findings.number, kind: 'number' }, { by: findings.id, kind: 'number' }]);
+export const findingCursor = (row: FindingRow) => [row.number, row.id];
 
 export function findingsRepo(db: Executor) {
   /** The comments this role may read in each finding's thread (owners count only the shared ones). */
@@ -25,9 +29,12 @@ export function findingsRepo(db: Executor) {
   const flat = (r: Joined): FindingWithContext => ({ ...r.finding, authorName: r.authorName, photoOwnerVisible: r.photoOwnerVisible, commentCount: r.commentCount });
 
   return {
-    /** The restoration's findings this role may see. */
-    async listByRestoration(restorationId: number, role: Role) {
-      return (await select(role).where(and(eq(findings.restorationId, restorationId), visibleSql(role, 'finding', findingSources))).orderBy(asc(findings.number))).map(flat);
+    /** The restoration's findings this role may see, all of them or one page (`window`). */
+    async listByRestoration(restorationId: number, role: Role, window?: PageWindow) {
+      const query = select(role)
+        .where(and(eq(findings.restorationId, restorationId), visibleSql(role, 'finding', findingSources), findingOrder.after(window?.cursor)))
+        .orderBy(...findingOrder.orderBy);
+      return (window ? await query.limit(window.limit) : await query).map(flat);
     },
     /**
      * One finding, with the comment count as this role reads it; whether they may see it is the caller's check.

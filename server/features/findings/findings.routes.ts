@@ -1,14 +1,18 @@
 import { Router, type Request, type Response } from 'express';
 import { findingInputSchema, findingPatchSchema } from '../../../shared/schemas/findings';
+import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
+import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { photosRepo } from '../photos/photos.repo';
 import { findingsListCache, sendCachedList } from './findings-cache';
-import { findingsService } from './findings.service';
+import { findingCursor, findingOrder } from './findings.repo';
+import { findingsService, toFinding } from './findings.service';
 
 const one = { params: idParamsSchema };
+const paged = { params: idParamsSchema, query: pageQuerySchema };
 const create = { params: idParamsSchema, body: findingInputSchema };
 const patch = { params: idParamsSchema, body: findingPatchSchema };
 
@@ -41,8 +45,11 @@ export function findingsRoutes(deps: AppDeps): Router {
     const { params, body } = input(res, create);
     res.status(201).json(await service.create(params.id, body as typeof body & { ownerVisible: boolean }, actorOf(req, res)));
   });
-  router.get('/restorations/:id/findings', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
-    res.json(await service.listByRestoration(input(res, one).params.id, roleOf(res)));
+  // By number, in pages (see shared/schemas/pagination.ts).
+  router.get('/restorations/:id/findings', requireUser, validate(paged), guard(db, 'restoration.view'), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const rows = await service.pageByRestoration(params.id, roleOf(res), { limit: query.limit + 1, cursor: decodeCursor(query.cursor, findingOrder.kinds) });
+    await sendPage(req, res, rows, query.limit, findingCursor, (page) => page.map((f) => toFinding(f, roleOf(res))));
   });
   router.get('/findings/:id', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (_req, res) => {
     res.json(await service.get(input(res, one).params.id, roleOf(res)));

@@ -1,6 +1,7 @@
 import { can, hiddenChangeFields, mayView, type Role } from '../../../shared/permissions';
 import { geometrySchema, type Finding, type FindingChange, type FindingInput, type FindingPatch } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
+import type { PageWindow } from '../../db/keyset';
 import { unitOfWork } from '../../db/unit-of-work';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
@@ -44,9 +45,11 @@ export function findingsService(deps: AppDeps) {
       if (!photo || !can(role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
       return photoFindingsJson(deps.db, photoId, role);
     },
-    async listByRestoration(restorationId: number, role: Role) {
-      return (await repo.listByRestoration(restorationId, role)).map((f) => toFinding(f, role));
+    /** One page of the restoration's findings this role may see (`limit + 1` rows read, for the page helper to cut). */
+    async pageByRestoration(restorationId: number, role: Role, window: PageWindow) {
+      return repo.listByRestoration(restorationId, role, window);
     },
+
     async get(id: number, role: Role) {
       return toFinding(await visible(id, role), role);
     },

@@ -1,6 +1,7 @@
-import { and, asc, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
+import { keyset, toMs, type PageWindow } from '../../db/keyset';
 import { memberships, photos, users } from '../../db/schema';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
@@ -8,14 +9,20 @@ export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null 
 type NewPhoto = typeof photos.$inferInsert;
 
 const columns = { photo: photos, uploadedBy: users.name };
+/** Oldest first (the order they were taken in at the bench), then by id. */
+export const photoOrder = keyset('asc', [{ by: toMs(photos.createdAt), kind: 'instant' }, { by: photos.id, kind: 'number' }]);
+export const photoCursor = (row: PhotoRow) => [row.createdAt.toISOString(), row.id];
 
 export function photosRepo(db: Executor) {
   const select = () => db.select(columns).from(photos).leftJoin(users, eq(users.id, photos.uploadedById));
   const flat = (r: { photo: typeof photos.$inferSelect; uploadedBy: string | null }): PhotoRow => ({ ...r.photo, uploadedBy: r.uploadedBy });
   return {
-    /** The restoration's photos this role may see. */
-    async list(restorationId: number, role: Role): Promise<PhotoRow[]> {
-      return (await select().where(and(eq(photos.restorationId, restorationId), visibleSql(role, 'photo', { photo: columnsOf(photos) }))).orderBy(asc(photos.createdAt), asc(photos.id))).map(flat);
+    /** The restoration's photos this role may see, all of them or one page (`window`). */
+    async list(restorationId: number, role: Role, window?: PageWindow): Promise<PhotoRow[]> {
+      const query = select()
+        .where(and(eq(photos.restorationId, restorationId), visibleSql(role, 'photo', { photo: columnsOf(photos) }), photoOrder.after(window?.cursor)))
+        .orderBy(...photoOrder.orderBy);
+      return (window ? await query.limit(window.limit) : await query).map(flat);
     },
     async find(id: number): Promise<PhotoRow | undefined> {
       const [row] = await select().where(eq(photos.id, id));

@@ -8,6 +8,7 @@ import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/error
 import { recordEvent } from '../events/record-event';
 import { deletePhotoObjects, photoKeys } from './photo-objects';
 import { processPhoto } from './photo-pipeline';
+import type { PageWindow } from '../../db/keyset';
 import { photosRepo, type PhotoRow } from './photos.repo';
 
 const extension: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'image/heif': 'heic', 'image/avif': 'avif' };
@@ -45,8 +46,11 @@ export function photosService({ db, storage, config }: PhotosDeps) {
   }
 
   return {
-    async list(restorationId: number, role: Role): Promise<Photo[]> {
-      const rows = await repo.list(restorationId, role);
+    /** One page of the photos this role may see (`limit + 1` rows read, for the page helper to cut). */
+    page(restorationId: number, role: Role, window: PageWindow): Promise<PhotoRow[]> {
+      return repo.list(restorationId, role, window);
+    },
+    present(rows: PhotoRow[], role: Role): Promise<Photo[]> {
       return Promise.all(rows.map((r) => toPhoto(r, role)));
     },
     async get(id: number, role: Role) {

@@ -21,8 +21,9 @@ type InviteIn = (tx: Tx, restorationId: number, email: string, role: Role, invit
 export function restorationsService(db: Database, invite?: InviteIn) {
   const repo = restorationsRepo(db);
   return {
-    async listFor(userId: number, filter: Parameters<typeof repo.listFor>[1]) {
-      return (await repo.listFor(userId, filter)).map((r) => toRestoration(r, r.role));
+    /** One page of the bench (`limit + 1` rows read, for the page helper to cut). */
+    async pageFor(userId: number, filter: Parameters<typeof repo.listFor>[1], window: Parameters<typeof repo.listFor>[2]) {
+      return repo.listFor(userId, filter, window);
     },
     async get(id: number, role: Role) {
       const row = await repo.find(id);
