@@ -29,7 +29,7 @@ afterAll(() => t.stop());
 
 type Item = Record<string, unknown>;
 /** Reads a list page by page (limit 3), calling `between` after each page; returns every item seen, in order. */
-async function walk(path: string, between: (page: number) => Promise<void>) {
+async function walk(path: string, between: (page: number) => Promise<unknown>) {
   const items: Item[] = [];
   let cursor: string | undefined;
   for (let page = 0; page < 100; page++) {
