@@ -5,7 +5,7 @@
  * Prints requests per second, p95 per route, errors (goal: none), and the server's RSS before and after (each
  * measured after a full garbage collection, so garbage not yet collected is not counted as growth).
  * Run: npx tsx tests/bench/load.ts [seconds] [warm-up seconds]
- * Set MALLOC_ARENA_MAX in the environment to try the server under another glibc arena limit.
+ * The server runs with MALLOC_ARENA_MAX=2 as `npm start` does; `MALLOC_ARENA_MAX= npx tsx …` runs it with glibc's default.
  */
 import { fork } from 'node:child_process';
 import autocannon from 'autocannon';
@@ -27,10 +27,14 @@ const uploadBody = Buffer.concat([
 ]);
 
 const p95 = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length * 0.95)] ?? NaN;
+/** glibc's malloc arenas for the server, as `npm start` sets them (2); an empty value leaves glibc's default (8 per core). */
+const arenas = process.env.MALLOC_ARENA_MAX ?? '2';
+const { MALLOC_ARENA_MAX: _unset, ...inherited } = process.env;
+void _unset;
 const cluster = await startTestCluster();
 const child = fork('tests/bench/load-server.ts', [], {
   execArgv: ['--expose-gc', '--import', 'tsx'],
-  env: { ...process.env, GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl, AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' },
+  env: { ...inherited, ...(arenas ? { MALLOC_ARENA_MAX: arenas } : {}), GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl, AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' },
   stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
 });
 const memory = () => new Promise<NodeJS.MemoryUsage>((resolve) => {
@@ -103,7 +107,7 @@ try {
   for (const [what, n] of failures) console.log(`    ${what}: ${n}`);
   console.log('  p95 per route:');
   for (const [route, xs] of [...byRoute].sort((a, b) => p95(b[1]) - p95(a[1]))) console.log(`    ${p95(xs).toFixed(0).padStart(6)} ms  ${route} (${xs.length})`);
-  console.log('  server memory, each after a full garbage collection:');
+  console.log(`  server memory (MALLOC_ARENA_MAX=${arenas || "glibc's default"}), each after a full garbage collection:`);
   console.log(line('at start', atStart));
   console.log(line(`after a ${warmUpSeconds} s warm-up of the same mix`, afterWarmUp));
   console.log(line(`after the ${seconds} s run`, afterRun));

@@ -28,7 +28,8 @@ export function commentsRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const service = commentsService(deps);
   const findings = findingsService(deps);
-  const ofFinding = (_req: Request, res: Response) => findings.restorationOf(input(res, one).params.id);
+  // The finding's restoration and the reader's role in one query.
+  const ofFinding = (req: Request, res: Response) => findings.accessOf(input(res, one).params.id, req.user!.id);
   const ofComment = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
   const router = Router();
 

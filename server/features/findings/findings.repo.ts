@@ -2,7 +2,7 @@ import { and, desc, eq, max, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
 import { keyset, type PageWindow } from '../../db/keyset';
-import { comments, findingChanges, findings, photos, restorations, users } from '../../db/schema';
+import { comments, findingChanges, findings, memberships, photos, restorations, users } from '../../db/schema';
 import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 
 export type FindingRow = typeof findings.$inferSelect;
@@ -48,6 +48,15 @@ export function findingsRepo(db: Executor) {
     async restorationOf(id: number) {
       const [row] = await db.select({ id: findings.restorationId }).from(findings).where(eq(findings.id, id));
       return row?.id;
+    },
+    /** The finding's restoration and the reader's role there (if a member), in one query, for the route guard. */
+    async accessOf(id: number, userId: number) {
+      const [row] = await db
+        .select({ restorationId: findings.restorationId, role: memberships.role })
+        .from(findings)
+        .leftJoin(memberships, and(eq(memberships.restorationId, findings.restorationId), eq(memberships.userId, userId)))
+        .where(eq(findings.id, id));
+      return row && { restorationId: row.restorationId, role: row.role ?? undefined };
     },
     /** Numbers count up per restoration; the restoration row is locked so two creations never share one. */
     async insert(values: NewFinding): Promise<number> {

@@ -24,7 +24,8 @@ export function findingsRoutes(deps: AppDeps): Router {
   const service = findingsService(deps);
   const photos = photosRepo(db);
   const ofPhoto = (_req: Request, res: Response) => photos.restorationOf(input(res, one).params.id);
-  const ofFinding = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
+  // The finding's restoration and the reader's role in one query.
+  const ofFinding = (req: Request, res: Response) => service.accessOf(input(res, one).params.id, req.user!.id);
   const router = Router();
 
   // The hot read of the markup canvas: the photo, the membership and the list's version in one query,

@@ -39,6 +39,8 @@ export function findingsService(deps: AppDeps) {
   return {
     visible,
     restorationOf: (id: number) => repo.restorationOf(id),
+    /** The finding's restoration with the reader's role, in one query (see `guard`). */
+    accessOf: (id: number, userId: number) => repo.accessOf(id, userId),
     /** The photo's findings as ready JSON text (see findings-json.ts); owners get only what is shared. */
     async listByPhotoJson(photoId: number, role: Role): Promise<string> {
       const photo = await photos.find(photoId);
