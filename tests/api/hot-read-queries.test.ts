@@ -1,4 +1,3 @@
-import type pg from 'pg';
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { comments, findings } from '../../server/db/schema';
@@ -26,8 +25,8 @@ beforeAll(async () => {
   await t.db.insert(comments).values({ findingId, authorId: user.id, body: 'Checked at 250 V, fine.' });
   tech = await signedIn(t.app, user);
   // Every statement of the app (Drizzle and the session store) goes through this pool's `query`.
-  const pool = t.deps.pool as pg.Pool & { query: (...args: unknown[]) => unknown };
-  const query = pool.query.bind(pool) as (...args: unknown[]) => unknown;
+  const pool = t.deps.pool as unknown as { query: (...args: unknown[]) => unknown };
+  const query = pool.query.bind(pool);
   pool.query = (...args: unknown[]) => {
     const first = args[0] as string | { text?: string };
     if (recording) statements.push(typeof first === 'string' ? first : first.text ?? '');
