@@ -69,7 +69,15 @@ export function photosService({ db, storage, config }: PhotosDeps) {
       try {
         // A client that gave up (closed the connection) gets nothing stored: the signal aborts the puts.
         signal?.throwIfAborted();
-        await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size, { signal });
+        // A stream cannot be replayed by the SDK's own retries: a failed attempt opens the file again (three in all, as for buffers).
+        for (let attempt = 1; ; attempt++) {
+          try {
+            await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size, { signal });
+            break;
+          } catch (err) {
+            if (attempt >= 3 || signal?.aborted) throw err;
+          }
+        }
         await storage.putObject(keys.display, processed.display, 'image/webp', undefined, { signal });
         await storage.putObject(keys.phone, processed.phone, 'image/webp', undefined, { signal });
         await storage.putObject(keys.thumb, processed.thumb, 'image/webp', undefined, { signal });
