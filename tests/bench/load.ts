@@ -99,6 +99,9 @@ try {
   failures = new Map();
   const result = await run(seconds);
   const afterRun = await memory();
+  // Ten quiet seconds later: memory V8 and glibc give back once the load stops, versus memory still held.
+  await new Promise((r) => setTimeout(r, 10_000));
+  const afterRest = await memory();
   const mb = (n: number) => `${(n / 1024 / 1024).toFixed(0)} MB`;
   const line = (what: string, m: NodeJS.MemoryUsage) =>
     `    ${what}: RSS ${mb(m.rss)} (V8 heap used ${mb(m.heapUsed)} of ${mb(m.heapTotal)}, external ${mb(m.external)}, of which array buffers ${mb(m.arrayBuffers)})`;
@@ -111,7 +114,9 @@ try {
   console.log(line('at start', atStart));
   console.log(line(`after a ${warmUpSeconds} s warm-up of the same mix`, afterWarmUp));
   console.log(line(`after the ${seconds} s run`, afterRun));
-  console.log(`  server RSS growth over the run: ${mb(afterWarmUp.rss)} → ${mb(afterRun.rss)} (${(((afterRun.rss - afterWarmUp.rss) / afterWarmUp.rss) * 100).toFixed(0)} %)`);
+  console.log(line('after 10 s without requests', afterRest));
+  const growth = (m: NodeJS.MemoryUsage) => `${mb(afterWarmUp.rss)} → ${mb(m.rss)} (${(((m.rss - afterWarmUp.rss) / afterWarmUp.rss) * 100).toFixed(0)} %)`;
+  console.log(`  server RSS growth over the run: ${growth(afterRun)}; after 10 s at rest: ${growth(afterRest)}`);
 } finally {
   child.kill('SIGTERM');
   await new Promise((r) => child.once('exit', r));
