@@ -38,7 +38,11 @@ function preloadImage(url: string) {
 }
 
 export const restorationLoader = loader((id) => start(restorationQueryOptions(id)));
-export const photosLoader = loader((id) => start(photosQueryOptions(id)));
+export const photosLoader = loader((id) => {
+  start(photosQueryOptions(id));
+  // A photo is the likely next step from the grid: its canvas's code (the same chunk the router loads) comes ahead of the click.
+  void import('./routes/photo-markup').catch(() => {});
+});
 export const findingsLoader = loader((id) => start(restorationFindingsQueryOptions(id)));
 export const readingsLoader = loader((id) => {
   start(measurementsQueryOptions(id));

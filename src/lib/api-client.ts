@@ -18,6 +18,13 @@ export async function api<T>(path: string, init: RequestInit & { json?: unknown 
   return (await apiWithHeaders<T>(path, init)).body;
 }
 
+/** One page of a paged list (see shared/schemas/pagination.ts) and the cursor of the next, null on the last. */
+export async function apiPage<T>(path: string, cursor?: string | null): Promise<{ items: T[]; next: string | null }> {
+  const url = cursor ? `${path}${path.includes('?') ? '&' : '?'}cursor=${encodeURIComponent(cursor)}` : path;
+  const { body, headers } = await apiWithHeaders<T[]>(url);
+  return { items: body, next: headers.get(NEXT_CURSOR_HEADER) };
+}
+
 /**
  * Every item of a paged list (see shared/schemas/pagination.ts), page after page until the server gives no
  * next cursor; `maxPages` keeps a runaway list from looping for ever.
@@ -26,10 +33,9 @@ export async function apiAllPages<T>(path: string, maxPages = 50): Promise<T[]> 
   const items: T[] = [];
   let cursor: string | null = null;
   for (let page = 0; page < maxPages; page++) {
-    const url: string = cursor ? `${path}${path.includes('?') ? '&' : '?'}cursor=${encodeURIComponent(cursor)}` : path;
-    const { body, headers } = await apiWithHeaders<T[]>(url);
-    items.push(...body);
-    cursor = headers.get(NEXT_CURSOR_HEADER);
+    const { items: more, next }: { items: T[]; next: string | null } = await apiPage<T>(path, cursor);
+    items.push(...more);
+    cursor = next;
     if (!cursor) break;
   }
   return items;

@@ -10,7 +10,8 @@ export interface Call {
   path: string;
   body: unknown;
 }
-export type Reply = { status: number; body?: unknown };
+/** `headers`: response headers beyond the content type, such as a page's `X-Next-Cursor`. */
+export type Reply = { status: number; body?: unknown; headers?: Record<string, string> };
 
 /** The code the server sends with each status when nothing more specific applies (see server/http/errors.ts). */
 const usualCode: Record<number, ApiErrorCode> = {
@@ -27,8 +28,8 @@ export const notFound = (): Reply => apiError(404, 'Not found.');
 
 /** A fetch Response for a reply (204 carries no body). */
 export function toResponse(reply: Reply): Response {
-  if (reply.status === 204 || reply.body === undefined) return new Response(null, { status: reply.status });
-  return new Response(JSON.stringify(reply.body), { status: reply.status, headers: { 'Content-Type': 'application/json' } });
+  if (reply.status === 204 || reply.body === undefined) return new Response(null, { status: reply.status, headers: reply.headers });
+  return new Response(JSON.stringify(reply.body), { status: reply.status, headers: { 'Content-Type': 'application/json', ...reply.headers } });
 }
 
 /**

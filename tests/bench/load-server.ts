@@ -1,7 +1,8 @@
 /**
  * Child process for the load test: the real app on a fresh test database with 10 restorations, each with
  * five technicians, a photo carrying 60 findings and a few comments. Prints one JSON line with the port,
- * a session cookie per person and the ids to use; answers `rss` messages with its resident set size.
+ * a session cookie per person and the ids to use; answers `rss` messages with its memory use
+ * (resident set, V8 heap, external and array buffers) after a full garbage collection.
  */
 import supertest from 'supertest';
 import { comments, findings } from '../../server/db/schema';
@@ -33,6 +34,6 @@ const server = t.app.listen(0, '127.0.0.1', () => {
 process.on('message', (m) => {
   if (m !== 'rss') return;
   (globalThis as { gc?: () => void }).gc?.();
-  process.send!({ rss: process.memoryUsage().rss });
+  process.send!(process.memoryUsage());
 });
 process.on('SIGTERM', () => void t.stop().then(() => process.exit(0)));

@@ -4,7 +4,8 @@
  * restoration's tabs, a photo's findings, a comment, a reading, and an upload every tenth round.
  * Prints requests per second, p95 per route, errors (goal: none), and the server's RSS before and after (each
  * measured after a full garbage collection, so garbage not yet collected is not counted as growth).
- * Run: npx tsx tests/bench/load.ts [seconds]
+ * Run: npx tsx tests/bench/load.ts [seconds] [warm-up seconds]
+ * The server runs with MALLOC_ARENA_MAX=2 as `npm start` does; `MALLOC_ARENA_MAX= npx tsx …` runs it with glibc's default.
  */
 import { fork } from 'node:child_process';
 import autocannon from 'autocannon';
@@ -14,6 +15,8 @@ import { startTestCluster } from '../support/test-cluster';
 type Person = { cookie: string; restorationId: number; photoId: number; findingId: number };
 type Ctx = { person?: Person; route?: string };
 const seconds = Number(process.argv[2] ?? 60);
+/** The same mix run first, so that what any server holds once it has served (pools, compiled code, libvips' threads) is not counted as growth. */
+const warmUpSeconds = Number(process.argv[3] ?? 15);
 const boundary = 'gridleak-load-boundary';
 const jpeg = await twoToneJpeg(1600, 1200);
 const uploadBody = Buffer.concat([
@@ -24,14 +27,18 @@ const uploadBody = Buffer.concat([
 ]);
 
 const p95 = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length * 0.95)] ?? NaN;
+/** glibc's malloc arenas for the server, as `npm start` sets them (2); an empty value leaves glibc's default (8 per core). */
+const arenas = process.env.MALLOC_ARENA_MAX ?? '2';
+const { MALLOC_ARENA_MAX: _unset, ...inherited } = process.env;
+void _unset;
 const cluster = await startTestCluster();
 const child = fork('tests/bench/load-server.ts', [], {
   execArgv: ['--expose-gc', '--import', 'tsx'],
-  env: { ...process.env, GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl, AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' },
+  env: { ...inherited, ...(arenas ? { MALLOC_ARENA_MAX: arenas } : {}), GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl, AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' },
   stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
 });
-const rss = () => new Promise<number>((resolve) => {
-  child.once('message', (m) => resolve((m as { rss: number }).rss));
+const memory = () => new Promise<NodeJS.MemoryUsage>((resolve) => {
+  child.once('message', (m) => resolve(m as NodeJS.MemoryUsage));
   child.send('rss');
 });
 try {
@@ -72,11 +79,11 @@ try {
       return { method: 'POST', path: `/api/restorations/${p.restorationId}/photos`, body: uploadBody, headers: { 'content-type': `multipart/form-data; boundary=${boundary}` } };
     }),
   ];
-  const rssBefore = await rss();
-  const byRoute = new Map<string, number[]>();
-  const failures = new Map<string, number>();
-  const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const instance = autocannon({ url: `http://127.0.0.1:${info.port}`, connections: 50, duration: seconds, requests: requests as never, timeout: 30 },
+  const atStart = await memory();
+  let byRoute = new Map<string, number[]>();
+  let failures = new Map<string, number>();
+  const run = (duration: number) => new Promise<autocannon.Result>((resolve, reject) => {
+    const instance = autocannon({ url: `http://127.0.0.1:${info.port}`, connections: 50, duration, requests: requests as never, timeout: 30 },
       (err, res) => (err ? reject(err) : resolve(res)));
     instance.on('response', (client, status, _bytes, ms) => {
       const ctx = (client as unknown as { requestIterator: { context: Ctx } }).requestIterator.context;
@@ -86,14 +93,30 @@ try {
       if (status >= 400) failures.set(`${route} → ${status}`, (failures.get(`${route} → ${status}`) ?? 0) + 1);
     });
   });
-  const rssAfter = await rss();
+  if (warmUpSeconds > 0) await run(warmUpSeconds);
+  const afterWarmUp = await memory();
+  byRoute = new Map();
+  failures = new Map();
+  const result = await run(seconds);
+  const afterRun = await memory();
+  // Ten quiet seconds later: memory V8 and glibc give back once the load stops, versus memory still held.
+  await new Promise((r) => setTimeout(r, 10_000));
+  const afterRest = await memory();
   const mb = (n: number) => `${(n / 1024 / 1024).toFixed(0)} MB`;
+  const line = (what: string, m: NodeJS.MemoryUsage) =>
+    `    ${what}: RSS ${mb(m.rss)} (V8 heap used ${mb(m.heapUsed)} of ${mb(m.heapTotal)}, external ${mb(m.external)}, of which array buffers ${mb(m.arrayBuffers)})`;
   console.log(`\nload: 50 signed-in users, ${seconds} s, a round of ${requests.length} requests each (an upload every tenth round)`);
   console.log(`  requests: ${result.requests.total} (${(result.requests.total / seconds).toFixed(0)}/s); errors: ${result.errors} connection, ${result.non2xx} non-2xx; timeouts ${result.timeouts}`);
   for (const [what, n] of failures) console.log(`    ${what}: ${n}`);
   console.log('  p95 per route:');
   for (const [route, xs] of [...byRoute].sort((a, b) => p95(b[1]) - p95(a[1]))) console.log(`    ${p95(xs).toFixed(0).padStart(6)} ms  ${route} (${xs.length})`);
-  console.log(`  server RSS: ${mb(rssBefore)} before, ${mb(rssAfter)} after (${(((rssAfter - rssBefore) / rssBefore) * 100).toFixed(0)} %)`);
+  console.log(`  server memory (MALLOC_ARENA_MAX=${arenas || "glibc's default"}), each after a full garbage collection:`);
+  console.log(line('at start', atStart));
+  console.log(line(`after a ${warmUpSeconds} s warm-up of the same mix`, afterWarmUp));
+  console.log(line(`after the ${seconds} s run`, afterRun));
+  console.log(line('after 10 s without requests', afterRest));
+  const growth = (m: NodeJS.MemoryUsage) => `${mb(afterWarmUp.rss)} → ${mb(m.rss)} (${(((m.rss - afterWarmUp.rss) / afterWarmUp.rss) * 100).toFixed(0)} %)`;
+  console.log(`  server RSS growth over the run: ${growth(afterRun)}; after 10 s at rest: ${growth(afterRest)}`);
 } finally {
   child.kill('SIGTERM');
   await new Promise((r) => child.once('exit', r));

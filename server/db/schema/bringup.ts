@@ -29,7 +29,12 @@ export const intakeChecks = pgTable(
     checkedById: integer().references(() => users.id, { onDelete: 'set null' }),
     ...timestamps,
   },
-  (t) => [uniqueIndex('intake_checks_restoration_id_item_idx').on(t.restorationId, t.item)],
+  (t) => [
+    uniqueIndex('intake_checks_restoration_id_item_idx').on(t.restorationId, t.item),
+    index('intake_checks_finding_id_idx').on(t.findingId),
+    index('intake_checks_photo_id_idx').on(t.photoId),
+    index('intake_checks_checked_by_id_idx').on(t.checkedById),
+  ],
 );
 
 /** One line of the pre-power checklist: done, not applicable (why) or waived (why). */
@@ -44,7 +49,7 @@ export const prePowerChecks = pgTable(
     checkedById: integer().references(() => users.id, { onDelete: 'set null' }),
     ...timestamps,
   },
-  (t) => [uniqueIndex('pre_power_checks_restoration_id_item_idx').on(t.restorationId, t.item)],
+  (t) => [uniqueIndex('pre_power_checks_restoration_id_item_idx').on(t.restorationId, t.item), index('pre_power_checks_checked_by_id_idx').on(t.checkedById)],
 );
 
 /** A technician's sign-off of the whole pre-power checklist; changing any item afterwards removes it. */
@@ -57,7 +62,7 @@ export const prePowerSignoffs = pgTable(
     signedAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
     ...timestamps,
   },
-  (t) => [uniqueIndex('pre_power_signoffs_restoration_id_idx').on(t.restorationId)],
+  (t) => [uniqueIndex('pre_power_signoffs_restoration_id_idx').on(t.restorationId), index('pre_power_signoffs_signed_by_id_idx').on(t.signedById)],
 );
 
 /** One step of the staged first power-up, numbered in the order taken. */
@@ -81,7 +86,11 @@ export const bringupSteps = pgTable(
     takenAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
     ...timestamps,
   },
-  (t) => [uniqueIndex('bringup_steps_restoration_id_number_idx').on(t.restorationId, t.number)],
+  (t) => [
+    uniqueIndex('bringup_steps_restoration_id_number_idx').on(t.restorationId, t.number),
+    index('bringup_steps_finding_id_idx').on(t.findingId),
+    index('bringup_steps_taken_by_id_idx').on(t.takenById),
+  ],
 );
 
 /** The ordinary readings (measurements) taken at a step. */

@@ -72,7 +72,11 @@ export const estimates = pgTable(
     decidedAt: timestamp({ withTimezone: true, mode: 'date' }),
     ...timestamps,
   },
-  (t) => [uniqueIndex('estimates_restoration_id_version_idx').on(t.restorationId, t.version)],
+  (t) => [
+    uniqueIndex('estimates_restoration_id_version_idx').on(t.restorationId, t.version),
+    index('estimates_created_by_id_idx').on(t.createdById),
+    index('estimates_decided_by_id_idx').on(t.decidedById),
+  ],
 );
 
 /** A line of an estimate: labour hours as a range, a part expected, or a flagged extra; each low and high. */
@@ -120,6 +124,7 @@ export const labourEntries = pgTable(
   (t) => [
     index('labour_entries_restoration_id_idx').on(t.restorationId),
     index('labour_entries_technician_id_started_at_idx').on(t.technicianId, t.startedAt),
+    index('labour_entries_finding_id_idx').on(t.findingId),
     // One running timer per technician.
     uniqueIndex('labour_entries_running_idx').on(t.technicianId).where(sql`${t.stoppedAt} is null`),
   ],
@@ -165,7 +170,11 @@ export const invoices = pgTable(
     issuedAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
     ...timestamps,
   },
-  (t) => [uniqueIndex('invoices_number_idx').on(t.number), index('invoices_restoration_id_idx').on(t.restorationId)],
+  (t) => [
+    uniqueIndex('invoices_number_idx').on(t.number),
+    index('invoices_restoration_id_idx').on(t.restorationId),
+    index('invoices_issued_by_id_idx').on(t.issuedById),
+  ],
 );
 
 export const invoiceLines = pgTable(

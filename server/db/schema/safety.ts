@@ -33,7 +33,7 @@ export const safetyTests = pgTable(
     testedById: integer().references(() => users.id, { onDelete: 'set null' }),
     testedAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('safety_tests_restoration_id_tested_at_idx').on(t.restorationId, t.testedAt)],
+  (t) => [index('safety_tests_restoration_id_tested_at_idx').on(t.restorationId, t.testedAt), index('safety_tests_tested_by_id_idx').on(t.testedById)],
 );
 
 /** A technician returning a set without a passing safety test, and why; shown in red in the history and report. */
@@ -48,7 +48,7 @@ export const safetyOverrides = pgTable(
     actorId: integer().references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('safety_overrides_restoration_id_idx').on(t.restorationId)],
+  (t) => [index('safety_overrides_restoration_id_idx').on(t.restorationId), index('safety_overrides_actor_id_idx').on(t.actorId)],
 );
 
 /** One soak run: open while `endedAt` is null (at most one per restoration). */
@@ -73,6 +73,8 @@ export const soakSessions = pgTable(
   },
   (t) => [
     index('soak_sessions_restoration_id_idx').on(t.restorationId),
+    index('soak_sessions_finding_id_idx').on(t.findingId),
+    index('soak_sessions_started_by_id_idx').on(t.startedById),
     uniqueIndex('soak_sessions_restoration_id_running_idx').on(t.restorationId).where(sql`${t.endedAt} is null`),
   ],
 );
@@ -95,5 +97,5 @@ export const reportSends = pgTable(
     stage: text().notNull(),
     sentAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('report_sends_restoration_id_idx').on(t.restorationId)],
+  (t) => [index('report_sends_restoration_id_idx').on(t.restorationId), index('report_sends_sent_by_id_idx').on(t.sentById)],
 );

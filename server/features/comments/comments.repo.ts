@@ -1,22 +1,27 @@
-import { asc, eq, isNull, and } from 'drizzle-orm';
+import { eq, isNull, and } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
+import { keyset, toMs, type PageWindow } from '../../db/keyset';
 import { comments, findings, photos, users } from '../../db/schema';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 export type CommentRow = typeof comments.$inferSelect & { authorName: string | null };
 
+/** A thread oldest first (then by id). */
+export const commentOrder = keyset('asc', [{ by: toMs(comments.createdAt), kind: 'instant' }, { by: comments.id, kind: 'number' }]);
+
 export function commentsRepo(db: Executor) {
   const select = () => db.select({ c: comments, authorName: users.name }).from(comments).leftJoin(users, eq(users.id, comments.authorId));
   return {
     /** The thread as this role may read it (owners: the shared comments of a finding they may see). */
-    async list(findingId: number, role: Role): Promise<CommentRow[]> {
+    async list(findingId: number, role: Role, window?: PageWindow): Promise<CommentRow[]> {
       const visible = visibleSql(role, 'comment', { comment: columnsOf(comments), finding: columnsOf(findings), photo: columnsOf(photos) });
-      const rows = await select()
+      const query = select()
         .innerJoin(findings, eq(findings.id, comments.findingId))
         .innerJoin(photos, eq(photos.id, findings.photoId))
-        .where(and(eq(comments.findingId, findingId), visible))
-        .orderBy(asc(comments.createdAt), asc(comments.id));
+        .where(and(eq(comments.findingId, findingId), visible, commentOrder.after(window?.cursor)))
+        .orderBy(...commentOrder.orderBy);
+      const rows = window ? await query.limit(window.limit) : await query;
       return rows.map((r) => ({ ...r.c, authorName: r.authorName }));
     },
     async find(id: number): Promise<CommentRow | undefined> {

@@ -1,15 +1,19 @@
 import { Router, type Request, type Response } from 'express';
 import { commentInputSchema, commentPatchSchema } from '../../../shared/schemas/findings';
+import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError } from '../../http/errors';
 import { guard, requireUser, roleOf } from '../../http/guard';
+import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { actorOf } from '../findings/findings.routes';
 import { findingsService } from '../findings/findings.service';
+import { commentOrder } from './comments.repo';
 import { commentsService } from './comments.service';
 
 const one = { params: idParamsSchema };
+const paged = { params: idParamsSchema, query: pageQuerySchema };
 const create = { params: idParamsSchema, body: commentInputSchema };
 /** A client retrying a post sends the same `Idempotency-Key` (printable ASCII, up to 128 characters). */
 function idempotencyKey(req: Request): string | undefined {
@@ -24,12 +28,16 @@ export function commentsRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const service = commentsService(deps);
   const findings = findingsService(deps);
-  const ofFinding = (_req: Request, res: Response) => findings.restorationOf(input(res, one).params.id);
+  // The finding's restoration and the reader's role in one query.
+  const ofFinding = (req: Request, res: Response) => findings.accessOf(input(res, one).params.id, req.user!.id);
   const ofComment = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
   const router = Router();
 
-  router.get('/findings/:id/comments', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (_req, res) => {
-    res.json(await service.list(input(res, one).params.id, roleOf(res)));
+  // Oldest first, in pages (see shared/schemas/pagination.ts).
+  router.get('/findings/:id/comments', requireUser, validate(paged), guard(db, 'restoration.view', ofFinding), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const rows = await service.list(params.id, roleOf(res), { limit: query.limit + 1, cursor: decodeCursor(query.cursor, commentOrder.kinds) });
+    await sendPage(req, res, rows, query.limit, (c) => [c.createdAt, c.id], (page) => page);
   });
   router.post('/findings/:id/comments', requireUser, validate(create), guard(db, 'restoration.view', ofFinding), async (req, res) => {
     const { params, body } = input(res, create);

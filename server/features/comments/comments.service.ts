@@ -1,6 +1,7 @@
 import { can, mayView, type Role } from '../../../shared/permissions';
 import type { Comment } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
+import type { PageWindow } from '../../db/keyset';
 import { unitOfWork } from '../../db/unit-of-work';
 import { ConflictError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { findingsService, ownerMaySee } from '../findings/findings.service';
@@ -44,9 +45,10 @@ export function commentsService(deps: AppDeps) {
       const c = await repo.find(commentId);
       return c ? findings.restorationOf(c.findingId) : undefined;
     },
-    async list(findingId: number, role: Role) {
+    /** One page of the thread this role may read (`limit + 1` comments read, for the page helper to cut). */
+    async list(findingId: number, role: Role, window: PageWindow) {
       await findings.visible(findingId, role);
-      return (await repo.list(findingId, role)).map(toComment);
+      return (await repo.list(findingId, role, window)).map(toComment);
     },
     /** `key` is the client's Idempotency-Key: the same key from the same author stores one comment. */
     async create(findingId: number, input: { body: string; internal: boolean }, actor: Actor, key?: string) {

@@ -1,7 +1,8 @@
-import { and, asc, desc, eq, max, sql } from 'drizzle-orm';
+import { and, desc, eq, max, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
-import { comments, findingChanges, findings, photos, restorations, users } from '../../db/schema';
+import { keyset, type PageWindow } from '../../db/keyset';
+import { comments, findingChanges, findings, memberships, photos, restorations, users } from '../../db/schema';
 import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 
 export type FindingRow = typeof findings.$inferSelect;
@@ -9,6 +10,9 @@ export type FindingWithContext = FindingRow & { authorName: string | null; photo
 export type NewFinding = Omit<typeof findings.$inferInsert, 'number' | 'id'>;
 
 const findingSources = { finding: columnsOf(findings), photo: columnsOf(photos) };
+/** A restoration's findings by number (then id). */
+export const findingOrder = keyset('asc', [{ by: findings.number, kind: 'number' }, { by: findings.id, kind: 'number' }]);
+export const findingCursor = (row: FindingRow) => [row.number, row.id];
 
 export function findingsRepo(db: Executor) {
   /** The comments this role may read in each finding's thread (owners count only the shared ones). */
@@ -25,9 +29,12 @@ export function findingsRepo(db: Executor) {
   const flat = (r: Joined): FindingWithContext => ({ ...r.finding, authorName: r.authorName, photoOwnerVisible: r.photoOwnerVisible, commentCount: r.commentCount });
 
   return {
-    /** The restoration's findings this role may see. */
-    async listByRestoration(restorationId: number, role: Role) {
-      return (await select(role).where(and(eq(findings.restorationId, restorationId), visibleSql(role, 'finding', findingSources))).orderBy(asc(findings.number))).map(flat);
+    /** The restoration's findings this role may see, all of them or one page (`window`). */
+    async listByRestoration(restorationId: number, role: Role, window?: PageWindow) {
+      const query = select(role)
+        .where(and(eq(findings.restorationId, restorationId), visibleSql(role, 'finding', findingSources), findingOrder.after(window?.cursor)))
+        .orderBy(...findingOrder.orderBy);
+      return (window ? await query.limit(window.limit) : await query).map(flat);
     },
     /**
      * One finding, with the comment count as this role reads it; whether they may see it is the caller's check.
@@ -41,6 +48,15 @@ export function findingsRepo(db: Executor) {
     async restorationOf(id: number) {
       const [row] = await db.select({ id: findings.restorationId }).from(findings).where(eq(findings.id, id));
       return row?.id;
+    },
+    /** The finding's restoration and the reader's role there (if a member), in one query, for the route guard. */
+    async accessOf(id: number, userId: number) {
+      const [row] = await db
+        .select({ restorationId: findings.restorationId, role: memberships.role })
+        .from(findings)
+        .leftJoin(memberships, and(eq(memberships.restorationId, findings.restorationId), eq(memberships.userId, userId)))
+        .where(eq(findings.id, id));
+      return row && { restorationId: row.restorationId, role: row.role ?? undefined };
     },
     /** Numbers count up per restoration; the restoration row is locked so two creations never share one. */
     async insert(values: NewFinding): Promise<number> {

@@ -1,14 +1,18 @@
 import { Router, type Request, type Response } from 'express';
 import { findingInputSchema, findingPatchSchema } from '../../../shared/schemas/findings';
+import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
+import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { photosRepo } from '../photos/photos.repo';
 import { findingsListCache, sendCachedList } from './findings-cache';
-import { findingsService } from './findings.service';
+import { findingCursor, findingOrder } from './findings.repo';
+import { findingsService, toFinding } from './findings.service';
 
 const one = { params: idParamsSchema };
+const paged = { params: idParamsSchema, query: pageQuerySchema };
 const create = { params: idParamsSchema, body: findingInputSchema };
 const patch = { params: idParamsSchema, body: findingPatchSchema };
 
@@ -20,7 +24,8 @@ export function findingsRoutes(deps: AppDeps): Router {
   const service = findingsService(deps);
   const photos = photosRepo(db);
   const ofPhoto = (_req: Request, res: Response) => photos.restorationOf(input(res, one).params.id);
-  const ofFinding = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
+  // The finding's restoration and the reader's role in one query.
+  const ofFinding = (req: Request, res: Response) => service.accessOf(input(res, one).params.id, req.user!.id);
   const router = Router();
 
   // The hot read of the markup canvas: the photo, the membership and the list's version in one query,
@@ -41,8 +46,11 @@ export function findingsRoutes(deps: AppDeps): Router {
     const { params, body } = input(res, create);
     res.status(201).json(await service.create(params.id, body as typeof body & { ownerVisible: boolean }, actorOf(req, res)));
   });
-  router.get('/restorations/:id/findings', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
-    res.json(await service.listByRestoration(input(res, one).params.id, roleOf(res)));
+  // By number, in pages (see shared/schemas/pagination.ts).
+  router.get('/restorations/:id/findings', requireUser, validate(paged), guard(db, 'restoration.view'), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const rows = await service.pageByRestoration(params.id, roleOf(res), { limit: query.limit + 1, cursor: decodeCursor(query.cursor, findingOrder.kinds) });
+    await sendPage(req, res, rows, query.limit, findingCursor, (page) => page.map((f) => toFinding(f, roleOf(res))));
   });
   router.get('/findings/:id', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (_req, res) => {
     res.json(await service.get(input(res, one).params.id, roleOf(res)));

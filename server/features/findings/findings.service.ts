@@ -1,6 +1,7 @@
 import { can, hiddenChangeFields, mayView, type Role } from '../../../shared/permissions';
 import { geometrySchema, type Finding, type FindingChange, type FindingInput, type FindingPatch } from '../../../shared/schemas/findings';
 import type { AppDeps } from '../../app-deps';
+import type { PageWindow } from '../../db/keyset';
 import { unitOfWork } from '../../db/unit-of-work';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
@@ -49,15 +50,19 @@ export function findingsService(deps: AppDeps) {
   return {
     visible,
     restorationOf: (id: number) => repo.restorationOf(id),
+    /** The finding's restoration with the reader's role, in one query (see `guard`). */
+    accessOf: (id: number, userId: number) => repo.accessOf(id, userId),
     /** The photo's findings as ready JSON text (see findings-json.ts); owners get only what is shared. */
     async listByPhotoJson(photoId: number, role: Role): Promise<string> {
       const photo = await photos.find(photoId);
       if (!photo || !can(role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
       return photoFindingsJson(deps.db, photoId, role);
     },
-    async listByRestoration(restorationId: number, role: Role) {
-      return (await repo.listByRestoration(restorationId, role)).map((f) => toFinding(f, role));
+    /** One page of the restoration's findings this role may see (`limit + 1` rows read, for the page helper to cut). */
+    async pageByRestoration(restorationId: number, role: Role, window: PageWindow) {
+      return repo.listByRestoration(restorationId, role, window);
     },
+
     async get(id: number, role: Role) {
       return toFinding(await visible(id, role), role);
     },

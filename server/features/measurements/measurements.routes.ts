@@ -1,12 +1,14 @@
 import { Router, type Request, type Response } from 'express';
 import { lineUpSchema, measurementInputSchema, measurementListQuerySchema, measurementPatchSchema } from '../../../shared/schemas/measurements';
+import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
+import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
-import { measurementsService } from './measurements.service';
+import { measurementOrder, measurementsService } from './measurements.service';
 
-const list = { params: idParamsSchema, query: measurementListQuerySchema };
+const list = { params: idParamsSchema, query: measurementListQuerySchema.extend(pageQuerySchema.shape) };
 const create = { params: idParamsSchema, body: measurementInputSchema };
 const one = { params: idParamsSchema };
 const patch = { params: idParamsSchema, body: measurementPatchSchema };
@@ -17,9 +19,12 @@ export function measurementsRoutes({ db }: AppDeps): Router {
   const service = measurementsService(db);
   const ofMeasurement = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
   const router = Router();
-  router.get('/restorations/:id/measurements', requireUser, validate(list), guard(db, 'restoration.view'), async (_req, res) => {
+  // In the order they were taken, in pages (see shared/schemas/pagination.ts).
+  router.get('/restorations/:id/measurements', requireUser, validate(list), guard(db, 'restoration.view'), async (req, res) => {
     const { params, query } = input(res, list);
-    res.json(await service.list(params.id, roleOf(res), query.findingId));
+    const window = { limit: query.limit + 1, cursor: decodeCursor(query.cursor, measurementOrder.kinds) };
+    const rows = await service.list(params.id, roleOf(res), query.findingId, window);
+    await sendPage(req, res, rows, query.limit, (m) => [m.measuredAt, m.id], (page) => page);
   });
   router.post('/restorations/:id/measurements', requireUser, validate(create), guard(db, 'measurements.record'), async (req, res) => {
     const { params, body } = input(res, create);

@@ -1,8 +1,9 @@
-import { and, asc, eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { BenchInputError, liveChassisLikely, measurementVerdict } from '../../../shared/bench';
 import { can, type Role } from '../../../shared/permissions';
 import type { LineUp, Measurement, MeasurementInput, Valve } from '../../../shared/schemas/measurements';
 import type { Database, Executor } from '../../db/client';
+import { keyset, toMs, type PageWindow } from '../../db/keyset';
 import { findings, measurements, photos, restorations, users, valves } from '../../db/schema';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { assertPrePowerSignedOff } from '../bringup/power-gate';
@@ -33,6 +34,9 @@ export function judge(f: Fields) {
   }
 }
 
+/** Readings in the order they were taken (then by id). */
+export const measurementOrder = keyset('asc', [{ by: toMs(measurements.measuredAt), kind: 'instant' }, { by: measurements.id, kind: 'number' }]);
+
 export function measurementsService(db: Database) {
   const select = (on: Executor = db) => on.select({ m: measurements, measuredBy: users.name }).from(measurements).leftJoin(users, eq(users.id, measurements.measuredById));
   const find = async (id: number, on: Executor = db) => {
@@ -57,17 +61,19 @@ export function measurementsService(db: Database) {
       return r?.id;
     },
     /** The readings this role may see; a reading's finding is named only when the reader may see it. */
-    async list(restorationId: number, role: Role, findingId?: number) {
+    /** The readings this role may see (of one finding, when asked), all of them or one page (`window`). */
+    async list(restorationId: number, role: Role, findingId?: number, window?: PageWindow) {
       const findingVisible = visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) });
-      const rows = await db
+      const query = db
         .select({ m: measurements, measuredBy: users.name, findingVisible })
         .from(measurements)
         .leftJoin(users, eq(users.id, measurements.measuredById))
         .leftJoin(findings, eq(findings.id, measurements.findingId))
         .leftJoin(photos, eq(photos.id, findings.photoId))
         .where(and(eq(measurements.restorationId, restorationId), findingId ? and(eq(measurements.findingId, findingId), findingVisible) : undefined,
-          visibleSql(role, 'reading', { reading: columnsOf(measurements) })))
-        .orderBy(asc(measurements.measuredAt), asc(measurements.id));
+          visibleSql(role, 'reading', { reading: columnsOf(measurements) }), measurementOrder.after(window?.cursor)))
+        .orderBy(...measurementOrder.orderBy);
+      const rows = window ? await query.limit(window.limit) : await query;
       return rows.map((r) => toMeasurement({ ...r.m, measuredBy: r.measuredBy, findingId: r.findingVisible ? r.m.findingId : null }));
     },
     async create(restorationId: number, input: Fields, userId: number) {

@@ -1,7 +1,13 @@
-import { and, asc, eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
+import { keyset, toMs, type PageWindow } from '../../db/keyset';
 import { memberships, users } from '../../db/schema';
+
+/** Members in the order they joined (people who joined together by name, then id). */
+export const memberOrder = keyset('asc', [
+  { by: toMs(memberships.createdAt), kind: 'instant' }, { by: users.name, kind: 'string' }, { by: memberships.userId, kind: 'number' },
+]);
 
 export function membersRepo(db: Executor) {
   return {
@@ -12,13 +18,15 @@ export function membersRepo(db: Executor) {
         .where(and(eq(memberships.userId, userId), eq(memberships.restorationId, restorationId)));
       return row?.role;
     },
-    list(restorationId: number) {
-      return db
+    /** The restoration's members, all of them or one page (`window`). */
+    async list(restorationId: number, window?: PageWindow) {
+      const query = db
         .select({ userId: users.id, name: users.name, email: users.email, role: memberships.role, since: memberships.createdAt })
         .from(memberships)
         .innerJoin(users, eq(users.id, memberships.userId))
-        .where(eq(memberships.restorationId, restorationId))
-        .orderBy(asc(memberships.createdAt), asc(users.name));
+        .where(and(eq(memberships.restorationId, restorationId), memberOrder.after(window?.cursor)))
+        .orderBy(...memberOrder.orderBy);
+      return window ? query.limit(window.limit) : query;
     },
     /** Every membership of the restoration, locked FOR UPDATE until the calling transaction ends. */
     lockAll(restorationId: number) {

@@ -1,15 +1,19 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { invitationInputSchema, memberParamsSchema, memberPatchSchema } from '../../../shared/schemas/members';
+import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser } from '../../http/guard';
+import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
+import { memberOrder } from './members.repo';
 import { membersService } from './members.service';
 import { idSchema } from '../../../shared/schemas/ids';
 
 const one = { params: idParamsSchema };
+const paged = { params: idParamsSchema, query: pageQuerySchema };
 const member = { params: memberParamsSchema };
 const rolePatch = { params: memberParamsSchema, body: memberPatchSchema };
 const invite = { params: idParamsSchema, body: invitationInputSchema };
@@ -23,8 +27,11 @@ export function membersRoutes(deps: AppDeps): Router {
   const router = Router();
   const base = '/restorations/:id';
 
-  router.get(`${base}/members`, requireUser, validate(one), guard(db, 'members.view'), async (_req, res) => {
-    res.json(await members.list(input(res, one).params.id));
+  // In the order people joined, in pages (see shared/schemas/pagination.ts).
+  router.get(`${base}/members`, requireUser, validate(paged), guard(db, 'members.view'), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const rows = await members.list(params.id, { limit: query.limit + 1, cursor: decodeCursor(query.cursor, memberOrder.kinds) });
+    await sendPage(req, res, rows, query.limit, (m) => [m.since, m.name, m.userId], (page) => page);
   });
   router.patch(`${base}/members/:userId`, requireUser, validate(rolePatch), guard(db, 'members.manage'), async (_req, res) => {
     const { params, body } = input(res, rolePatch);

@@ -1,6 +1,7 @@
 import type { Role } from '../../../shared/permissions';
 import type { Member } from '../../../shared/schemas/members';
 import type { Database, Executor } from '../../db/client';
+import type { PageWindow } from '../../db/keyset';
 import { ConflictError, NotFoundError } from '../../http/errors';
 import { membersRepo } from './members.repo';
 
@@ -22,8 +23,9 @@ export function membersService(db: Database) {
   }
 
   return {
-    async list(restorationId: number): Promise<Member[]> {
-      return (await repo.list(restorationId)).map((m) => ({ ...m, since: m.since.toISOString() }));
+    /** The members, all of them or one page (`window`: `limit + 1` read, for the page helper to cut). */
+    async list(restorationId: number, window?: PageWindow): Promise<Member[]> {
+      return (await repo.list(restorationId, window)).map((m) => ({ ...m, since: m.since.toISOString() }));
     },
     async changeRole(restorationId: number, userId: number, role: Role) {
       await db.transaction(async (tx) => {

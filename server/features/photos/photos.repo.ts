@@ -1,7 +1,8 @@
-import { and, asc, eq, inArray, sql } from 'drizzle-orm';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Status } from '../../../shared/schemas/findings';
 import type { Executor } from '../../db/client';
+import { keyset, toMs, type PageWindow } from '../../db/keyset';
 import { findings, memberships, photos, users } from '../../db/schema';
 import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 
@@ -9,28 +10,31 @@ export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null;
 type NewPhoto = typeof photos.$inferInsert;
 
 const columns = { photo: photos, uploadedBy: users.name };
+/** Oldest first (the order they were taken in at the bench), then by id. */
+export const photoOrder = keyset('asc', [{ by: toMs(photos.createdAt), kind: 'instant' }, { by: photos.id, kind: 'number' }]);
+export const photoCursor = (row: PhotoRow) => [row.createdAt.toISOString(), row.id];
 
 export function photosRepo(db: Executor) {
   const select = () => db.select(columns).from(photos).leftJoin(users, eq(users.id, photos.uploadedById));
   const flat = (r: { photo: typeof photos.$inferSelect; uploadedBy: string | null }): PhotoRow => ({ ...r.photo, uploadedBy: r.uploadedBy });
   return {
     /**
-     * The restoration's photos this role may see, each with its findings counted by status under the same rule
-     * (one query: the counts are a correlated aggregate, not a query per photo).
+     * The restoration's photos this role may see, all of them or one page (`window`), each with its findings counted
+     * by status under the same rule (one query: the counts are a correlated aggregate, not a query per photo).
      */
-    async list(restorationId: number, role: Role): Promise<PhotoRow[]> {
+    async list(restorationId: number, role: Role, window?: PageWindow): Promise<PhotoRow[]> {
       const findingCounts = sql<Partial<Record<Status, number>>>`(
         select coalesce(jsonb_object_agg(s.status, s.n), '{}'::jsonb) from (
           select ${findings.status} as status, count(*)::int as n from ${findings}
             where ${findings.photoId} = ${photos.id} and ${visibleSql(role, 'finding', { finding: findingFields(), photo: columnsOf(photos) })}
             group by ${findings.status}) s)`;
-      const rows = await db
+      const query = db
         .select({ ...columns, findingCounts })
         .from(photos)
         .leftJoin(users, eq(users.id, photos.uploadedById))
-        .where(and(eq(photos.restorationId, restorationId), visibleSql(role, 'photo', { photo: columnsOf(photos) })))
-        .orderBy(asc(photos.createdAt), asc(photos.id));
-      return rows.map((r) => ({ ...flat(r), findingCounts: r.findingCounts }));
+        .where(and(eq(photos.restorationId, restorationId), visibleSql(role, 'photo', { photo: columnsOf(photos) }), photoOrder.after(window?.cursor)))
+        .orderBy(...photoOrder.orderBy);
+      return (window ? await query.limit(window.limit) : await query).map((r) => ({ ...flat(r), findingCounts: r.findingCounts }));
     },
     async find(id: number): Promise<PhotoRow | undefined> {
       const [row] = await select().where(eq(photos.id, id));

@@ -1,13 +1,17 @@
 import { Router, type Request, type Response } from 'express';
 import { photoParamsSchema, photoPatchSchema } from '../../../shared/schemas/photos';
+import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
+import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
+import { photoCursor, photoOrder } from './photos.repo';
 import { photosService } from './photos.service';
 import { receiveUpload } from './receive-upload';
 
 const one = { params: idParamsSchema };
+const paged = { params: idParamsSchema, query: pageQuerySchema };
 const photo = { params: photoParamsSchema };
 const patch = { params: photoParamsSchema, body: photoPatchSchema };
 
@@ -17,8 +21,11 @@ export function photosRoutes(deps: AppDeps): Router {
   const ofPhoto = (_req: Request, res: Response) => service.restorationOf(input(res, photo).params.id);
   const router = Router();
 
-  router.get('/restorations/:id/photos', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
-    res.json(await service.list(input(res, one).params.id, roleOf(res)));
+  // Oldest first, in pages (see shared/schemas/pagination.ts).
+  router.get('/restorations/:id/photos', requireUser, validate(paged), guard(db, 'restoration.view'), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const rows = await service.page(params.id, roleOf(res), { limit: query.limit + 1, cursor: decodeCursor(query.cursor, photoOrder.kinds) });
+    await sendPage(req, res, rows, query.limit, photoCursor, (page) => service.present(page, roleOf(res)));
   });
   // Permission is settled before a byte of the body is read.
   router.post('/restorations/:id/photos', requireUser, validate(one), guard(db, 'photos.upload'), async (req, res) => {

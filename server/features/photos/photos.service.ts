@@ -8,6 +8,7 @@ import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/error
 import { recordEvent } from '../events/record-event';
 import { deletePhotoObjects, photoKeys } from './photo-objects';
 import { processPhoto } from './photo-pipeline';
+import type { PageWindow } from '../../db/keyset';
 import { photosRepo, type PhotoRow } from './photos.repo';
 
 const extension: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'image/heif': 'heic', 'image/avif': 'avif' };
@@ -46,8 +47,11 @@ export function photosService({ db, storage, config }: PhotosDeps) {
   }
 
   return {
-    async list(restorationId: number, role: Role): Promise<Photo[]> {
-      const rows = await repo.list(restorationId, role);
+    /** One page of the photos this role may see (`limit + 1` rows read, for the page helper to cut). */
+    page(restorationId: number, role: Role, window: PageWindow): Promise<PhotoRow[]> {
+      return repo.list(restorationId, role, window);
+    },
+    present(rows: PhotoRow[], role: Role): Promise<Photo[]> {
       return Promise.all(rows.map((r) => toPhoto(r, role)));
     },
     async get(id: number, role: Role) {
@@ -66,7 +70,15 @@ export function photosService({ db, storage, config }: PhotosDeps) {
       try {
         // A client that gave up (closed the connection) gets nothing stored: the signal aborts the puts.
         signal?.throwIfAborted();
-        await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size, { signal });
+        // A stream cannot be replayed by the SDK's own retries: a failed attempt opens the file again (three in all, as for buffers).
+        for (let attempt = 1; ; attempt++) {
+          try {
+            await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size, { signal });
+            break;
+          } catch (err) {
+            if (attempt >= 3 || signal?.aborted) throw err;
+          }
+        }
         await storage.putObject(keys.display, processed.display, 'image/webp', undefined, { signal });
         await storage.putObject(keys.phone, processed.phone, 'image/webp', undefined, { signal });
         await storage.putObject(keys.thumb, processed.thumb, 'image/webp', undefined, { signal });

@@ -1,17 +1,22 @@
-import { and, desc, eq, ilike, or, type SQL } from 'drizzle-orm';
+import { and, eq, ilike, or, type SQL } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Stage } from '../../../shared/schemas/restorations';
 import type { Executor } from '../../db/client';
+import { keyset, toMs, type PageWindow } from '../../db/keyset';
 import { memberships, restorations } from '../../db/schema';
 
 export type RestorationRow = typeof restorations.$inferSelect;
 type Values = Omit<typeof restorations.$inferInsert, 'id' | 'createdAt' | 'updatedAt'>;
 
+/** The bench: most recently changed first (then the newest id). */
+export const benchOrder = keyset('desc', [{ by: toMs(restorations.updatedAt), kind: 'instant' }, { by: restorations.id, kind: 'number' }]);
+export const benchCursor = (row: RestorationRow) => [row.updatedAt.toISOString(), row.id];
+
 export function restorationsRepo(db: Executor) {
   return {
-    /** The restorations a person is a member of, with their role, most recently changed first. */
-    async listFor(userId: number, filter: { q?: string; stage?: Stage }): Promise<(RestorationRow & { role: Role })[]> {
-      const where: SQL[] = [eq(memberships.userId, userId)];
+    /** The restorations a person is a member of, with their role, most recently changed first; one page (`window`). */
+    async listFor(userId: number, filter: { q?: string; stage?: Stage }, window: PageWindow): Promise<(RestorationRow & { role: Role })[]> {
+      const where: (SQL | undefined)[] = [eq(memberships.userId, userId), benchOrder.after(window.cursor)];
       if (filter.stage) where.push(eq(restorations.stage, filter.stage));
       if (filter.q) {
         const like = `%${filter.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
@@ -22,7 +27,8 @@ export function restorationsRepo(db: Executor) {
         .from(restorations)
         .innerJoin(memberships, eq(memberships.restorationId, restorations.id))
         .where(and(...where))
-        .orderBy(desc(restorations.updatedAt));
+        .orderBy(...benchOrder.orderBy)
+        .limit(window.limit);
       return rows.map((r) => ({ ...r.restoration, role: r.role }));
     },
     /** `lock` takes the row FOR UPDATE (inside a transaction) until the change commits. */

@@ -5,14 +5,17 @@ import {
   restorationListQuerySchema,
   restorationPatchSchema,
 } from '../../../shared/schemas/restorations';
+import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
+import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
 import { deleteSheetObjects } from '../sheets/sheet-objects';
-import { restorationsService } from './restorations.service';
+import { benchCursor, benchOrder } from './restorations.repo';
+import { restorationsService, toRestoration } from './restorations.service';
 
-const list = { query: restorationListQuerySchema };
+const list = { query: restorationListQuerySchema.extend(pageQuerySchema.shape) };
 const create = { body: restorationInputSchema };
 const one = { params: idParamsSchema };
 const patch = { params: idParamsSchema, body: restorationPatchSchema };
@@ -24,8 +27,11 @@ export function restorationsRoutes(deps: AppDeps): Router {
   };
   const service = restorationsService(db, invitationsService(deps).inviteIn, removeObjects);
   const router = Router();
+  // The bench, most recently changed first, in pages (see shared/schemas/pagination.ts).
   router.get('/restorations', requireUser, validate(list), async (req, res) => {
-    res.json(await service.listFor(req.user!.id, input(res, list).query));
+    const { query } = input(res, list);
+    const rows = await service.pageFor(req.user!.id, query, { limit: query.limit + 1, cursor: decodeCursor(query.cursor, benchOrder.kinds) });
+    await sendPage(req, res, rows, query.limit, benchCursor, (page) => page.map((r) => toRestoration(r, r.role)));
   });
   router.post('/restorations', requireUser, validate(create), async (req, res) => {
     res.status(201).json(await service.create(input(res, create).body, req.user!.id));

@@ -27,8 +27,9 @@ type RemoveObjects = (storageKeys: string[]) => Promise<void>;
 export function restorationsService(db: Database, invite?: InviteIn, removeObjects?: RemoveObjects) {
   const repo = restorationsRepo(db);
   return {
-    async listFor(userId: number, filter: Parameters<typeof repo.listFor>[1]) {
-      return (await repo.listFor(userId, filter)).map((r) => toRestoration(r, r.role));
+    /** One page of the bench (`limit + 1` rows read, for the page helper to cut). */
+    async pageFor(userId: number, filter: Parameters<typeof repo.listFor>[1], window: Parameters<typeof repo.listFor>[2]) {
+      return repo.listFor(userId, filter, window);
     },
     async get(id: number, role: Role) {
       const row = await repo.find(id);

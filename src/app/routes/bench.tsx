@@ -7,15 +7,16 @@ import { OpenQuestions } from '../../features/findings/components/open-questions
 import { HelpOnBench } from '../../features/help/components/help-on-bench';
 import { TasksOnBench } from '../../features/help/components/tasks-on-bench';
 import { RecentActivity } from '../../features/history/components/recent-activity';
-import { useRestorations } from '../../features/restorations/api/get-restorations';
+import { useBenchPages } from '../../features/restorations/api/get-restorations';
 import { StageColumns } from '../../features/restorations/components/stage-columns';
 
 export function BenchRoute() {
   const [search, setSearch] = useState('');
   const q = useDeferredValue(search.trim());
-  const list = useRestorations(q ? { q } : {});
+  const list = useBenchPages(q ? { q } : {});
+  const sets = list.data?.pages.flatMap((p) => p.items);
   // Owners follow their sets from a calmer page of their own.
-  if (!q && list.data?.length && list.data.every((r) => r.role === 'owner')) return <Navigate to="/home" replace />;
+  if (!q && sets?.length && sets.every((r) => r.role === 'owner')) return <Navigate to="/home" replace />;
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-end justify-between gap-4">
@@ -45,9 +46,9 @@ export function BenchRoute() {
       </div>
       {list.isPending ? (
         <Loading label="Fetching the bench…" />
-      ) : list.isError ? (
+      ) : list.isError && !sets ? (
         <ErrorState error={list.error} onRetry={() => list.refetch()} />
-      ) : list.data.length === 0 ? (
+      ) : !sets?.length ? (
         q ? (
           <EmptyState title={`Nothing matches “${q}”`}>Try part of the maker's name, the model or the serial number.</EmptyState>
         ) : (
@@ -56,7 +57,15 @@ export function BenchRoute() {
           </EmptyState>
         )
       ) : (
-        <StageColumns restorations={list.data} />
+        <>
+          <StageColumns restorations={sets} />
+          {list.isFetchNextPageError && <ErrorState error={list.error} onRetry={() => list.fetchNextPage()} />}
+          {list.hasNextPage && (
+            <button type="button" className={buttonClass('quiet')} disabled={list.isFetchingNextPage} onClick={() => list.fetchNextPage()}>
+              {list.isFetchingNextPage ? 'Fetching more sets…' : 'Show more sets'}
+            </button>
+          )}
+        </>
       )}
       {!q && <RecentActivity />}
     </div>

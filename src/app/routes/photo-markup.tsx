@@ -24,6 +24,9 @@ import { useStoredFlag } from '../../lib/use-stored-flag';
 import { useRestorationContext } from '../restoration-context';
 import { usePhotoMarkupActions } from './use-photo-markup-actions';
 
+/** Rows of the findings list drawn together with the canvas's first frame; the others follow once it is drawn. */
+const FIRST_ROWS = 40;
+
 /** One photo with its findings on the markup canvas; `/…/photos/:photoId` and `/…/photos/:photoId/findings/:findingId`. */
 export function PhotoMarkupRoute() {
   const r = useRestorationContext();
@@ -154,7 +157,8 @@ function PhotoMarkup({
             </h2>
             {findings.length > 0 ? (
               <FindingsList
-                items={findings}
+                // A thousand rows would hold up the canvas's first frame: the first few come with it, the rest right after.
+                items={drawn ? findings : [...findings].sort((a, b) => a.number - b.number).slice(0, FIRST_ROWS)}
                 selectedId={selected?.id}
                 onPick={(id) => {
                   setFocusId(id);

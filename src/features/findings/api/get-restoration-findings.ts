@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Finding } from '../../../../shared/schemas/findings';
-import { api } from '../../../lib/api-client';
+import { apiAllPages } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
-export const getRestorationFindings = (restorationId: number) => api<Finding[]>(`/restorations/${restorationId}/findings`);
+export const getRestorationFindings = (restorationId: number) => apiAllPages<Finding>(`/restorations/${restorationId}/findings`);
 
 export const restorationFindingsQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: findingKeys.restoration(restorationId), queryFn: () => getRestorationFindings(restorationId) });

@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Photo } from '../../../../shared/schemas/photos';
-import { api } from '../../../lib/api-client';
+import { apiAllPages } from '../../../lib/api-client';
 
-export const getPhotos = (restorationId: number) => api<Photo[]>(`/restorations/${restorationId}/photos`);
+export const getPhotos = (restorationId: number) => apiAllPages<Photo>(`/restorations/${restorationId}/photos`);
 
 export const photosQueryKey = (restorationId: number) => ['restorations', restorationId, 'photos'] as const;
 
