@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { bodyIdSchema } from './ids';
+import { isKnownTimeZone } from '../format/dates';
+import { isCurrencyCode } from '../money/currency';
 
 export const partActions = ['replaced', 'restuffed', 'kept-original', 'removed'] as const;
 export const partStates = ['planned', 'ordered', 'fitted'] as const;
@@ -72,14 +74,6 @@ export const partSchema = z.object({
 });
 export type Part = z.infer<typeof partSchema>;
 
-const knownTimeZone = (zone: string) => {
-  try {
-    new Intl.DateTimeFormat('en', { timeZone: zone });
-    return true;
-  } catch {
-    return false;
-  }
-};
 
 /**
  * `GET /api/restorations/:id/parts.csv?currency=GBP&timeZone=Europe/London`: the workshop's currency for the cost
@@ -87,8 +81,8 @@ const knownTimeZone = (zone: string) => {
  * dates are UTC.
  */
 export const partsCsvQuerySchema = z.object({
-  currency: z.string().regex(/^[A-Z]{3}$/).refine((c) => Intl.supportedValuesOf('currency').includes(c), 'Not a known currency').optional(),
-  timeZone: z.string().max(64).refine(knownTimeZone, 'Not a known time zone').optional(),
+  currency: z.string().regex(/^[A-Z]{3}$/).refine(isCurrencyCode, 'Not a known currency').optional(),
+  timeZone: z.string().max(64).refine(isKnownTimeZone, 'Not a known time zone').optional(),
 });
 export type PartsCsvQuery = z.infer<typeof partsCsvQuerySchema>;
 

@@ -1,6 +1,7 @@
-import { DEFAULT_TOLERANCE, formatQuantity, parseTolerance } from '../../../../shared/bench';
+import { DEFAULT_TOLERANCE, parseTolerance } from '../../../../shared/bench';
 import type { Measurement } from '../../../../shared/schemas/measurements';
 import { formatTolerance } from './measurement-format';
+import { formatSignedQuantity } from '../../../lib/format';
 
 type Verdict = Measurement['verdict'];
 
@@ -88,7 +89,7 @@ export function plotLimit(points: readonly VoltagePoint[]): number {
 }
 
 /** Volts with an SI prefix and a true minus sign: −2.1 V, 1.2 kV; "—" for none. */
-export const voltsText = (v: number | null) => (v === null ? '—' : formatQuantity(v, 'V').replace('-', '\u2212'));
+export const voltsText = (v: number | null) => (v === null ? '—' : formatSignedQuantity(v, 'V'));
 
 /** One point in words, e.g. "V5 pin 7 reads 310 V against 255 V ±10 %". */
 export function describePoint(p: VoltagePoint): string {
