@@ -2,6 +2,7 @@ import { DEFAULT_TOLERANCE, parseTolerance } from '../../../../shared/bench';
 import type { Measurement } from '../../../../shared/schemas/measurements';
 import { formatTolerance } from './measurement-format';
 import { formatSignedQuantity } from '../../../lib/format';
+import { naturalCompare } from '../../../../shared/natural-order';
 
 type Verdict = Measurement['verdict'];
 
@@ -51,7 +52,7 @@ function bandOf(m: Measurement): Pick<VoltagePoint, 'band' | 'bandPct'> {
 }
 
 const byLocation = (a: VoltagePoint, b: VoltagePoint) =>
-  a.group.localeCompare(b.group, undefined, { numeric: true }) || a.label.localeCompare(b.label, undefined, { numeric: true });
+  naturalCompare(a.group, b.group) || naturalCompare(a.label, b.label);
 
 /** The voltage readings as chart points: the latest at each location (and kind), in valve then pin order. */
 export function voltagePoints(measurements: readonly Measurement[]): VoltagePoint[] {
