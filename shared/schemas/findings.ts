@@ -92,28 +92,6 @@ export const findingSchema = z.object({
 });
 export type Finding = z.infer<typeof findingSchema>;
 
-export const commentInputSchema = z.object({
-  body: z.string().trim().min(1, 'Write something first').max(8000, 'Keep a comment under 8,000 characters'),
-  /** Internal comments stay between technicians and mentors; owners never receive them. */
-  internal: z.boolean().default(true),
-});
-export const commentPatchSchema = z.object({ body: z.string().trim().min(1).max(8000) });
-
-export const commentSchema = z.object({
-  id: z.number().int(),
-  findingId: z.number().int(),
-  body: z.string(),
-  internal: z.boolean(),
-  authorId: z.number().int().nullable(),
-  authorName: z.string().nullable(),
-  mentions: z.array(z.number().int()),
-  createdAt: z.string(),
-  editedAt: z.string().nullable(),
-  /** Deleted comments keep their place in the thread with an empty body. */
-  deletedAt: z.string().nullable(),
-});
-export type Comment = z.infer<typeof commentSchema>;
-
 export const findingChangeSchema = z.object({
   id: z.number().int(),
   actorName: z.string().nullable(),
@@ -121,18 +99,6 @@ export const findingChangeSchema = z.object({
   createdAt: z.string(),
 });
 export type FindingChange = z.infer<typeof findingChangeSchema>;
-
-export const notificationSchema = z.object({
-  id: z.number().int(),
-  kind: z.enum(['mention', 'question', 'reply']),
-  summary: z.string(),
-  restorationId: z.number().int(),
-  findingId: z.number().int(),
-  photoId: z.number().int(),
-  read: z.boolean(),
-  createdAt: z.string(),
-});
-export type Notification = z.infer<typeof notificationSchema>;
 
 export const openQuestionSchema = z.object({
   findingId: z.number().int(),

@@ -74,7 +74,6 @@ export const partSchema = z.object({
 });
 export type Part = z.infer<typeof partSchema>;
 
-
 /**
  * `GET /api/restorations/:id/parts.csv?currency=GBP&timeZone=Europe/London`: the workshop's currency for the cost
  * column (ISO 4217) and the reader's time zone for the dates (IANA). Without them, costs have two decimals and
@@ -86,28 +85,3 @@ export const partsCsvQuerySchema = z.object({
 });
 export type PartsCsvQuery = z.infer<typeof partsCsvQuerySchema>;
 
-export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
-  'safety-test', 'safety-override', 'soak-session', 'report-sent',
-  'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
-  'help-requested', 'help-link-made', 'help-link-withdrawn',
-  'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided'] as const;
-export const timelineQuerySchema = z.object({ kind: z.enum(timelineKinds).optional() });
-
-export const timelineEventSchema = z.object({
-  id: z.number().int(),
-  kind: z.enum(timelineKinds),
-  at: z.string(),
-  actorName: z.string().nullable(),
-  /** What happened, in words, written for the person reading it. */
-  summary: z.string(),
-  photoId: z.number().int().nullable(),
-  findingId: z.number().int().nullable(),
-  thumbUrl: z.string().nullable(),
-  /** A safety departure (a waived pre-power item, a stop at power-up): shown in red. */
-  caution: z.boolean(),
-});
-export type TimelineEvent = z.infer<typeof timelineEventSchema>;
-
-/** A timeline line on the bench, with the set it belongs to. */
-export const activityItemSchema = timelineEventSchema.extend({ restorationId: z.number().int(), set: z.string() });
-export type ActivityItem = z.infer<typeof activityItemSchema>;

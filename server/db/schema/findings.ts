@@ -4,6 +4,7 @@ import { timestamps } from './columns';
 import { photos } from './photos';
 import { restorations } from './restorations';
 import { users } from './users';
+import { notificationKinds } from '../../../shared/schemas/notifications';
 
 export const shapeEnum = pgEnum('finding_shape', shapes);
 export const kindEnum = pgEnum('finding_kind', kinds);
@@ -89,7 +90,7 @@ export const comments = pgTable(
   ],
 );
 
-export const notificationKindEnum = pgEnum('notification_kind', ['mention', 'question', 'reply']);
+export const notificationKindEnum = pgEnum('notification_kind', notificationKinds);
 
 /** An unread item for one person; e-mails are batched from these rows (several instances share them). */
 export const notifications = pgTable(

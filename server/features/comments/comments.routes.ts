@@ -1,5 +1,5 @@
 import { Router, type Request, type Response } from 'express';
-import { commentInputSchema, commentPatchSchema } from '../../../shared/schemas/findings';
+import { commentInputSchema, commentPatchSchema } from '../../../shared/schemas/comments';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError } from '../../http/errors';

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { eq, inArray } from 'drizzle-orm';
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
-import { timelineQuerySchema, type ActivityItem } from '../../../shared/schemas/parts';
+import { timelineQuerySchema, type ActivityItem } from '../../../shared/schemas/events';
 import { events, memberships, restorations } from '../../db/schema';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';

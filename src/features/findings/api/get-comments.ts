@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Comment } from '../../../../shared/schemas/findings';
+import type { Comment } from '../../../../shared/schemas/comments';
 import { api } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 

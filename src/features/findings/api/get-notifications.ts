@@ -1,5 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Notification } from '../../../../shared/schemas/findings';
+import type { Notification } from '../../../../shared/schemas/notifications';
 import { api } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 

@@ -2,7 +2,8 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { MemoryRouter, Route, Routes, useLocation } from 'react-router';
-import type { Comment, Finding } from '../../../../shared/schemas/findings';
+import type { Finding } from '../../../../shared/schemas/findings';
+import type { Comment } from '../../../../shared/schemas/comments';
 import { apiError } from '../../../testing/fake-api';
 import type { FindingMember } from './finding-format';
 

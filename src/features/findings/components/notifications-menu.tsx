@@ -1,6 +1,7 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import { useNavigate } from 'react-router';
-import { findingPath, type Notification } from '../../../../shared/schemas/findings';
+import { findingPath } from '../../../../shared/schemas/findings';
+import { type Notification } from '../../../../shared/schemas/notifications';
 import { useMarkNotificationsRead, useNotifications } from '../api/get-notifications';
 import { fullTime, relativeTime } from './finding-format';
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ActivityItem } from '../../../../shared/schemas/parts';
+import type { ActivityItem } from '../../../../shared/schemas/events';
 import { api } from '../../../lib/api-client';
 
 export const getActivity = () => api<ActivityItem[]>('/activity');

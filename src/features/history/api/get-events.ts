@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { TimelineEvent } from '../../../../shared/schemas/parts';
+import type { TimelineEvent } from '../../../../shared/schemas/events';
 import { apiAllPages } from '../../../lib/api-client';
 
 export type EventKind = TimelineEvent['kind'];
