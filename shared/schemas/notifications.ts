@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { bodyIdSchema } from './ids';
 
 /** Why a person is told of something (also the `notification_kind` database enum). */
 export const notificationKinds = ['mention', 'question', 'reply'] as const;
@@ -14,3 +15,6 @@ export const notificationSchema = z.object({
   createdAt: z.string(),
 });
 export type Notification = z.infer<typeof notificationSchema>;
+
+/** `POST /api/notifications/read`: the items to mark read; none named marks them all. */
+export const notificationsReadSchema = z.object({ ids: z.array(bodyIdSchema).max(500).optional() });

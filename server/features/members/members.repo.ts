@@ -1,16 +1,13 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
+import { membershipRole } from '../../db/membership-role';
 import { memberships, users } from '../../db/schema';
 
 export function membersRepo(db: Executor) {
   return {
-    async roleOf(userId: number, restorationId: number): Promise<Role | undefined> {
-      const [row] = await db
-        .select({ role: memberships.role })
-        .from(memberships)
-        .where(and(eq(memberships.userId, userId), eq(memberships.restorationId, restorationId)));
-      return row?.role;
+    roleOf(userId: number, restorationId: number): Promise<Role | undefined> {
+      return membershipRole(db, userId, restorationId);
     },
     list(restorationId: number) {
       return db

@@ -1,19 +1,17 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { invitationInputSchema, memberParamsSchema, memberPatchSchema } from '../../../shared/schemas/members';
+import { invitationInputSchema, invitationParamsSchema, memberParamsSchema, memberPatchSchema } from '../../../shared/schemas/members';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser } from '../../http/guard';
 import { input, validate } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
 import { membersService } from './members.service';
-import { idSchema } from '../../../shared/schemas/ids';
 
 const one = { params: idParamsSchema };
 const member = { params: memberParamsSchema };
 const rolePatch = { params: memberParamsSchema, body: memberPatchSchema };
 const invite = { params: idParamsSchema, body: invitationInputSchema };
-const invitation = { params: z.object({ id: idSchema, invitationId: idSchema }) };
+const invitation = { params: invitationParamsSchema };
 
 /** People on a restoration: members, roles and pending invitations. */
 export function membersRoutes(deps: AppDeps): Router {

@@ -6,7 +6,7 @@ import { viewLabels } from '../../../shared/schemas/photos';
 import { equipmentKindLabels, workLevelLabels } from '../../../shared/schemas/restorations';
 import { writeBringupSection } from '../bringup/bringup-report';
 import { documentDate } from '../../format';
-import type { ReportData } from './report-data';
+import type { ReportData } from './report.repo';
 import { createWriter, type Writer } from './pdf-writer';
 import { writeSafetyTestSection, writeSoakSection } from './report-safety-sections';
 

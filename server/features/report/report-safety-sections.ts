@@ -1,7 +1,7 @@
 import { equipmentClassLabels, formatQuantity } from '../../../shared/bench';
 import { specificationLabels, type SafetyLineView } from '../../../shared/schemas/safety';
 import { documentDate as when } from '../../format';
-import type { ReportData } from './report-data';
+import type { ReportData } from './report.repo';
 import type { Writer } from './pdf-writer';
 
 const DANGER = '#a3261b';

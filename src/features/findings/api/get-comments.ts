@@ -1,9 +1,10 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Comment } from '../../../../shared/schemas/comments';
-import { api } from '../../../lib/api-client';
+import { commentSchema } from '../../../../shared/schemas/comments';
+import { apiGet } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
-export const getComments = (findingId: number) => api<Comment[]>(`/findings/${findingId}/comments`);
+export const getComments = (findingId: number) => apiGet(`/findings/${findingId}/comments`, z.array(commentSchema));
 
 export const commentsQueryOptions = (findingId: number) =>
   queryOptions({ queryKey: findingKeys.comments(findingId), queryFn: () => getComments(findingId), refetchInterval: 20_000 });

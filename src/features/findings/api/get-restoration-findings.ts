@@ -1,9 +1,10 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Finding } from '../../../../shared/schemas/findings';
-import { api } from '../../../lib/api-client';
+import { findingSchema } from '../../../../shared/schemas/findings';
+import { apiGet } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
-export const getRestorationFindings = (restorationId: number) => api<Finding[]>(`/restorations/${restorationId}/findings`);
+export const getRestorationFindings = (restorationId: number) => apiGet(`/restorations/${restorationId}/findings`, z.array(findingSchema));
 
 export const restorationFindingsQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: findingKeys.restoration(restorationId), queryFn: () => getRestorationFindings(restorationId) });

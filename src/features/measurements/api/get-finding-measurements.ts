@@ -1,11 +1,12 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Measurement } from '../../../../shared/schemas/measurements';
-import { api } from '../../../lib/api-client';
+import { measurementSchema } from '../../../../shared/schemas/measurements';
+import { apiGet } from '../../../lib/api-client';
 import { measurementKeys } from './keys';
 
 /** The readings tied to one finding (the same list endpoint, filtered by the server). */
 export const getFindingMeasurements = (restorationId: number, findingId: number) =>
-  api<Measurement[]>(`/restorations/${restorationId}/measurements?findingId=${findingId}`);
+  apiGet(`/restorations/${restorationId}/measurements?findingId=${findingId}`, z.array(measurementSchema));
 
 export const findingMeasurementsQueryOptions = (restorationId: number, findingId: number) =>
   queryOptions({ queryKey: measurementKeys.finding(findingId), queryFn: () => getFindingMeasurements(restorationId, findingId) });

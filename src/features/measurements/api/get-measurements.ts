@@ -1,10 +1,11 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Measurement } from '../../../../shared/schemas/measurements';
-import { api } from '../../../lib/api-client';
+import { measurementSchema } from '../../../../shared/schemas/measurements';
+import { apiGet } from '../../../lib/api-client';
 import { measurementKeys } from './keys';
 
 /** Every reading on a restoration the caller may see (owners get only the shared ones), oldest first. */
-export const getMeasurements = (restorationId: number) => api<Measurement[]>(`/restorations/${restorationId}/measurements`);
+export const getMeasurements = (restorationId: number) => apiGet(`/restorations/${restorationId}/measurements`, z.array(measurementSchema));
 
 export const measurementsQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: measurementKeys.restoration(restorationId), queryFn: () => getMeasurements(restorationId) });

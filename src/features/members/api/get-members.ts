@@ -1,8 +1,9 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Member } from '../../../../shared/schemas/members';
-import { api } from '../../../lib/api-client';
+import { memberSchema } from '../../../../shared/schemas/members';
+import { apiGet } from '../../../lib/api-client';
 
-export const getMembers = (restorationId: number) => api<Member[]>(`/restorations/${restorationId}/members`);
+export const getMembers = (restorationId: number) => apiGet(`/restorations/${restorationId}/members`, z.array(memberSchema));
 
 export const membersQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: ['restorations', restorationId, 'members'], queryFn: () => getMembers(restorationId) });

@@ -16,6 +16,7 @@ import { OwnerHome } from './owner-home';
 import { OwnerSet } from './owner-set';
 import { OwnerSetCard } from './owner-set-card';
 import { RepairedFindings } from './repaired-findings';
+import type { TimelineEvent } from '../../../../shared/schemas/events';
 
 afterEach(() => {
   cleanup();
@@ -38,7 +39,7 @@ const finding = (id: number, status: Finding['status']): Finding => ({
   questionOpen: false, commentCount: 0, createdAt: '2026-11-20T09:00:00Z', updatedAt: '2026-11-20T09:00:00Z',
 });
 const findings = [finding(4, 'repaired'), finding(5, 'confirmed')];
-const event = { id: 1, kind: 'stage-changed', at: '2026-11-24T12:00:00Z', actorName: 'Tessa Bench', summary: 'Stage: Assessment → Repair', photoId: null, findingId: null, thumbUrl: null };
+const event = { id: 1, kind: 'stage-changed', at: '2026-11-24T12:00:00Z', actorName: 'Tessa Bench', summary: 'Stage: Assessment → Repair', photoId: null, findingId: null, thumbUrl: null, caution: false } satisfies TimelineEvent;
 
 /** Composes the page the way the /home route does, with the photos and findings given and the timeline fetched. */
 function showHome(sets: Restoration[], path = '/home') {

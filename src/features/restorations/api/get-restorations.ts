@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { Restoration, Stage } from '../../../../shared/schemas/restorations';
-import { api } from '../../../lib/api-client';
+import { z } from 'zod';
+import { restorationSchema, type Restoration, type Stage } from '../../../../shared/schemas/restorations';
+import { apiGet } from '../../../lib/api-client';
 
 export interface RestorationFilter {
   q?: string;
@@ -12,7 +13,7 @@ export function getRestorations(filter: RestorationFilter = {}): Promise<Restora
   if (filter.q) params.set('q', filter.q);
   if (filter.stage) params.set('stage', filter.stage);
   const qs = params.toString();
-  return api<Restoration[]>(`/restorations${qs ? `?${qs}` : ''}`);
+  return apiGet(`/restorations${qs ? `?${qs}` : ''}`, z.array(restorationSchema));
 }
 
 export const restorationsQueryOptions = (filter: RestorationFilter = {}) =>
