@@ -1,7 +1,3 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render } from '@testing-library/react';
-import type { ReactNode } from 'react';
-import { MemoryRouter } from 'react-router';
 import { vi } from 'vitest';
 import type { TimelineEvent } from '../../../../shared/schemas/events';
 import { notFound, toResponse } from '../../../testing/fake-api';
@@ -30,14 +26,4 @@ export function fakeJsonApi(routes: Record<string, unknown>) {
     }),
   );
   return { asked };
-}
-
-/** Renders with a fresh query cache (no retries) inside a memory router, since the timeline links to photos. */
-export function renderWithQueries(ui: ReactNode) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  return render(
-    <QueryClientProvider client={client}>
-      <MemoryRouter>{ui}</MemoryRouter>
-    </QueryClientProvider>,
-  );
 }

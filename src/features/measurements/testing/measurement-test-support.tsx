@@ -1,6 +1,3 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render } from '@testing-library/react';
-import type { ReactNode } from 'react';
 import { vi } from 'vitest';
 import { BenchInputError } from '../../../../shared/bench';
 import type { LineUp, Measurement, MeasurementInput } from '../../../../shared/schemas/measurements';
@@ -72,9 +69,4 @@ export function fakeReadingsApi(initial: Measurement[], { lineUp, refuseLocation
   });
   vi.stubGlobal('fetch', fetchMock);
   return { calls, fetchMock };
-}
-
-export function renderWithQueries(ui: ReactNode) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  return { client, ...render(<QueryClientProvider client={client}>{ui}</QueryClientProvider>) };
 }

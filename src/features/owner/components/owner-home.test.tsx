@@ -1,6 +1,6 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { createMemoryRouter, RouterProvider, useSearchParams } from 'react-router';
@@ -17,6 +17,7 @@ import { OwnerSet } from './owner-set';
 import { OwnerSetCard } from './owner-set-card';
 import { RepairedFindings } from './repaired-findings';
 import type { TimelineEvent } from '../../../../shared/schemas/events';
+import { testQueryClient } from '../../../testing/render';
 
 afterEach(() => {
   cleanup();
@@ -58,7 +59,7 @@ function showHome(sets: Restoration[], path = '/home') {
     return <OwnerHome name="Mara Lind" sets={sets} selectedId={selectedId} renderSet={renderSet} renderCard={(r, to) => <OwnerSetCard restoration={r} hero={photos[1]} to={to} />} now={new Date(2026, 10, 24, 9)} />;
   };
   const router = createMemoryRouter([{ path: '/home', Component: Page }], { initialEntries: [path] });
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  const client = testQueryClient();
   render(
     <QueryClientProvider client={client}>
       <RouterProvider router={router} />

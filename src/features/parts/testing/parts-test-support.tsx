@@ -1,6 +1,3 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render } from '@testing-library/react';
-import type { ReactNode } from 'react';
 import { vi } from 'vitest';
 import type { Part, PartInput } from '../../../../shared/schemas/parts';
 import { makePart } from './part-fixtures';
@@ -54,10 +51,6 @@ export function fakePartsApi(
   return { calls, fetchMock };
 }
 
-export function renderWithQueries(ui: ReactNode) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  return { client, ...render(<QueryClientProvider client={client}>{ui}</QueryClientProvider>) };
-}
 
 /** A promise and the function that settles it. */
 export function gate() {
