@@ -1,6 +1,5 @@
-import { vi } from 'vitest';
 import type { TimelineEvent } from '../../../../shared/schemas/events';
-import { notFound, toResponse } from '../../../testing/fake-api';
+import { fakeApi, ok } from '../../../testing/fake-api';
 
 /** An event as the API answers it; tests override what they care about. */
 export function makeEvent(id: number, overrides: Partial<TimelineEvent> = {}): TimelineEvent {
@@ -12,18 +11,8 @@ export function makeEvent(id: number, overrides: Partial<TimelineEvent> = {}): T
 
 /**
  * Stands in for the API behind `fetch`: `routes` maps a path (without /api) to the JSON it answers; anything else
- * is a 404. Returns the paths asked for.
+ * is a 404. Returns the calls made.
  */
 export function fakeJsonApi(routes: Record<string, unknown>) {
-  const asked: string[] = [];
-  const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
-  vi.stubGlobal(
-    'fetch',
-    vi.fn(async (input: RequestInfo | URL) => {
-      const path = String(input).replace(/^\/api/, '');
-      asked.push(path);
-      return path in routes ? json(200, routes[path]) : toResponse(notFound());
-    }),
-  );
-  return { asked };
+  return fakeApi(({ path }) => (path in routes ? ok(routes[path]) : undefined));
 }

@@ -1,7 +1,6 @@
-import { vi } from 'vitest';
 import type { Part, PartInput } from '../../../../shared/schemas/parts';
 import { makePart } from './part-fixtures';
-import { apiError, notFound, toResponse } from '../../../testing/fake-api';
+import { apiError, fakeApi, notFound, toResponse } from '../../../testing/fake-api';
 
 export interface Call {
   method: string;
@@ -23,10 +22,8 @@ export function fakePartsApi(
   let list = [...initial];
   let nextId = 100;
   const calls: Call[] = [];
-  const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
-    const url = String(input);
-    const method = init.method ?? 'GET';
-    const body: unknown = typeof init.body === 'string' ? JSON.parse(init.body) : undefined;
+  const { fetchMock } = fakeApi(async ({ method, path, body }) => {
+    const url = `/api${path}`;
     calls.push({ method, url, body });
     if (url.endsWith('/parts') && method === 'GET') return json(200, list);
     if (url.endsWith('/parts') && method === 'POST') {
@@ -47,7 +44,6 @@ export function fakePartsApi(
     }
     return toResponse(notFound());
   });
-  vi.stubGlobal('fetch', fetchMock);
   return { calls, fetchMock };
 }
 
