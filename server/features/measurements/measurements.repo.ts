@@ -23,10 +23,6 @@ export function measurementsRepo(db: Executor) {
       const [r] = await db.select({ id: measurements.restorationId }).from(measurements).where(eq(measurements.id, id));
       return r?.id;
     },
-    async findingIsOn(restorationId: number, findingId: number) {
-      const [f] = await db.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
-      return f !== undefined;
-    },
     /** The readings this role may see, oldest first; a reading's finding is named only when the reader may see it. */
     async list(restorationId: number, role: Role, findingId?: number): Promise<MeasurementRow[]> {
       const findingVisible = visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) });

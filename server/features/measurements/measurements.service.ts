@@ -5,6 +5,7 @@ import type { Database, Executor } from '../../db/client';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { assertPrePowerSignedOff } from '../bringup/power-gate';
 import { recordEvent } from '../events/record-event';
+import { findingsRepo } from '../findings/findings.repo';
 import { measurementsRepo, type MeasurementRow } from './measurements.repo';
 
 type Fields = Required<Pick<MeasurementInput, 'location' | 'quantity' | 'reading'>> & Partial<MeasurementInput>;
@@ -35,7 +36,7 @@ export function measurementsService(db: Database) {
   const find = (id: number, on: Executor = db) => measurementsRepo(on).find(id);
   async function assertFinding(tx: Executor, restorationId: number, findingId: number | null | undefined) {
     if (!findingId) return;
-    if (!(await measurementsRepo(tx).findingIsOn(restorationId, findingId))) throw new BadRequestError('findingId: no such finding on this restoration.');
+    if ((await findingsRepo(tx).restorationOf(findingId)) !== restorationId) throw new BadRequestError('findingId: no such finding on this restoration.');
   }
   const columns = (f: Fields) => ({
     location: f.location, quantity: f.quantity, expectedText: f.expected ?? '', toleranceText: f.tolerance ?? '', ratingText: f.rating ?? '',
