@@ -60,6 +60,23 @@ export default tseslint.config(
     },
   },
   {
+    // Formatting for people goes through shared/format (src/lib/format.ts, server/format.ts), in the person's locale and zone.
+    files: ['src/**/*.{ts,tsx}', 'server/**/*.ts', 'shared/**/*.ts'],
+    ignores: [
+      'shared/format/**', 'shared/money/**', '**/*.test.{ts,tsx}',
+      // TODO: dates still formatted in place; route them through src/lib/format.ts.
+      'src/features/money/components/estimate-card.tsx', 'src/features/help/components/help-on-bench.tsx', 'src/features/help/components/help-tab.tsx',
+      'src/features/help/components/help-link-panel.tsx', 'src/features/help/components/help-replies.tsx', 'src/features/help/components/shared-help-page.tsx',
+      'src/features/photos/lib/photo-format.ts',
+    ],
+    rules: {
+      'no-restricted-syntax': ['error',
+        { selector: "CallExpression[callee.property.name=/^toLocale(Date|Time)?String$/]", message: 'Format dates with src/lib/format.ts (client) or server/format.ts (server).' },
+        { selector: "NewExpression[callee.object.name='Intl'][callee.property.name=/^(DateTimeFormat|NumberFormat|RelativeTimeFormat)$/]", message: 'Format with shared/format (src/lib/format.ts, server/format.ts) or shared/money.' },
+      ],
+    },
+  },
+  {
     // Layers on the server: routes → service → repo. A route handler validates, guards and answers; queries live in repos.
     files: ['server/features/**/*.routes.ts'],
     rules: {
