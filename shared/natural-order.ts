@@ -1,5 +1,8 @@
 const collator = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
 
+/** Text with numbers read as numbers, case ignored: "V3 pin 9" before "V3 pin 10", "V2" before "V10". */
+export const naturalCompare = (a: string, b: string): number => collator.compare(a, b);
+
 /**
  * Component references in the order a schematic's parts list gives them: letters first, then the number as a
  * number (C2 before C14), then any suffix (R1 before R1A before R1B); case does not matter. A line without a
@@ -9,7 +12,7 @@ export function compareComponentRefs(a: string, b: string): number {
   const x = a.trim();
   const y = b.trim();
   if (x === '' || y === '') return (x === '' ? 1 : 0) - (y === '' ? 1 : 0);
-  return collator.compare(x, y);
+  return naturalCompare(x, y);
 }
 
 /** The same reference however it was typed: "c27 " and "C27" are one part. */

@@ -1,7 +1,7 @@
 import type { Request, RequestHandler, Response } from 'express';
 import { can, type Action, type Role } from '../../shared/permissions';
 import type { Database } from '../db/client';
-import { membersRepo } from '../features/members/members.repo';
+import { membershipRole } from '../db/membership-role';
 import { ForbiddenError, NotFoundError, UnauthorizedError } from './errors';
 
 /** 401 unless signed in. */
@@ -22,12 +22,11 @@ const fromIdParam: RestorationOf = (_req, res) => (res.locals.input as { params?
  * hint that it exists), and allowed by the policy (else 403). Puts `role` and `restorationId` on res.locals.
  */
 export function guard(db: Database, action: Action, restorationOf: RestorationOf = fromIdParam): RequestHandler {
-  const members = membersRepo(db);
   return async (req, res, next) => {
     if (!req.user) throw new UnauthorizedError();
     const found = await restorationOf(req, res);
     const restorationId = typeof found === 'object' ? found.restorationId : found;
-    const role = typeof found === 'object' ? found.role : restorationId ? await members.roleOf(req.user.id, restorationId) : undefined;
+    const role = typeof found === 'object' ? found.role : restorationId ? await membershipRole(db, req.user.id, restorationId) : undefined;
     if (!restorationId || !role) throw new NotFoundError();
     if (!can(role, action)) throw new ForbiddenError();
     res.locals.role = role;

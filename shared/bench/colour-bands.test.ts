@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { colourBands } from './index';
+import { BenchInputError, colourBands, resistorBands } from './index';
 import { expectRelative } from './bench-test-support';
 
 // Colour meanings per IEC 60062 (colour-code summary pages: kodekata.net, instrumentationtools.com, elektropage.com):
@@ -76,5 +76,40 @@ describe('colourBands refuses colours that mean nothing in their position', () =
 
   it('refuses a two-band code', () => {
     expect(() => colourBands(['red', 'red'])).toThrow(/3, 4, 5 or 6 bands; got 2/); // IEC 60062: 3 to 6 bands
+  });
+});
+
+describe('resistor colour bands', () => {
+  // IEC 60062 colour code: digits black 0 … white 9; multiplier by the same colours
+  // (gold ×0.1, silver ×0.01); tolerance gold ±5 %, silver ±10 %, no band ±20 %.
+  it('when a value is 150 Ω, then it reads brown green brown gold', () => {
+    expect(resistorBands(150)).toEqual(['brown', 'green', 'brown', 'gold']);
+  });
+
+  it('when a value is 1 MΩ, then it reads brown black green gold', () => {
+    expect(resistorBands(1e6)).toEqual(['brown', 'black', 'green', 'gold']);
+  });
+
+  it('when a value is 47 kΩ, then it reads yellow violet orange gold', () => {
+    expect(resistorBands(47e3)).toEqual(['yellow', 'violet', 'orange', 'gold']);
+  });
+
+  it('when values sit at the ends of the scale, then the multiplier band follows', () => {
+    expect(resistorBands(220e3)).toEqual(['red', 'red', 'yellow', 'gold']);
+    expect(resistorBands(2.2e3)).toEqual(['red', 'red', 'red', 'gold']);
+    expect(resistorBands(4.7)).toEqual(['yellow', 'violet', 'gold', 'gold']);
+    expect(resistorBands(470e3, 0.1)).toEqual(['yellow', 'violet', 'yellow', 'silver']);
+    expect(resistorBands(10e3, 0.2)).toEqual(['brown', 'black', 'orange']);
+  });
+
+  it('when bands are written for a value, then the decoder reads the same value back', () => {
+    // Round trip through the one IEC 60062 table: encoder and decoder cannot disagree.
+    for (const ohms of [4.7, 10, 150, 2.2e3, 47e3, 470e3, 1e6]) expect(colourBands(resistorBands(ohms)).ohms).toBeCloseTo(ohms, 9);
+    expect(colourBands(resistorBands(470e3, 0.1)).tolerance).toBe(0.1);
+  });
+
+  it('when a value needs three significant digits, then it is refused', () => {
+    expect(() => resistorBands(1234)).toThrow(BenchInputError);
+    expect(() => resistorBands(0)).toThrow(BenchInputError);
   });
 });

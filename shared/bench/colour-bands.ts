@@ -7,7 +7,7 @@ export interface ColourBandReading {
   tempcoPpm?: number;
 }
 
-interface ColourMeaning {
+export interface ColourMeaning {
   digit?: number;
   multiplierExponent?: number;
   tolerance?: number;
@@ -16,7 +16,7 @@ interface ColourMeaning {
 
 // IEC 60062:2016 meanings. Orange/yellow/grey tolerances and pink differ in older charts;
 // they never occur on valve-era parts, so the current edition is followed.
-const COLOURS: Record<string, ColourMeaning> = {
+export const COLOUR_MEANINGS: Readonly<Record<string, ColourMeaning>> = {
   black: { digit: 0, multiplierExponent: 0, tempcoPpm: 250 },
   brown: { digit: 1, multiplierExponent: 1, tolerance: 0.01, tempcoPpm: 100 },
   red: { digit: 2, multiplierExponent: 2, tolerance: 0.02, tempcoPpm: 50 },
@@ -35,7 +35,7 @@ const COLOURS: Record<string, ColourMeaning> = {
 const ALIASES: Record<string, string> = { gray: 'grey', purple: 'violet' };
 
 /** Tolerance of a part with no tolerance band (three-band code): ±20 %. */
-const NO_BAND_TOLERANCE = 0.2;
+export const NO_BAND_TOLERANCE = 0.2;
 
 type Role = 'digit' | 'multiplier' | 'tolerance' | 'temperature coefficient';
 
@@ -49,10 +49,10 @@ const LAYOUTS: Record<number, readonly Role[]> = {
 function meaningOf(colour: unknown, band: number): [string, ColourMeaning] {
   const word = typeof colour === 'string' ? colour.trim().toLowerCase() : '';
   const name = ALIASES[word] ?? word;
-  const meaning = COLOURS[name];
+  const meaning = COLOUR_MEANINGS[name];
   if (meaning === undefined) {
     throw new BenchInputError(
-      `'${String(colour)}' (band ${band}) is not a colour of the resistor code; use ${Object.keys(COLOURS).join(', ')}.`,
+      `'${String(colour)}' (band ${band}) is not a colour of the resistor code; use ${Object.keys(COLOUR_MEANINGS).join(', ')}.`,
     );
   }
   return [name, meaning];

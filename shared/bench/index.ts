@@ -21,6 +21,8 @@ export { describeDeviation, signedPercent } from './verdict-words';
 export type { DeviationInput, LimitKind } from './verdict-words';
 export { colourBands } from './colour-bands';
 export type { ColourBandReading } from './colour-bands';
+export { resistorBands } from './colour-bands-encode';
+export type { BandTolerance } from './colour-bands-encode';
 export { preferredValue, seriesValues } from './e-series';
 export type { ESeries } from './e-series';
 export { esrFromTanDelta, esrLimit, esrLimitDetail } from './esr-limit';

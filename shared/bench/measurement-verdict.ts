@@ -8,6 +8,7 @@ import { parseQuantity, type QuantityUnit } from './quantity-parse';
 import { parseReading } from './reading-text';
 import { readingVerdict, type Tolerance } from './reading-verdict';
 import { parseTolerance } from './tolerance-text';
+import { formatTolerance, signOf } from '../format';
 import { describeDeviation, signedPercent, type LimitKind } from './verdict-words';
 
 export const measuredQuantities = ['esr', 'capacitance', 'leakage', 'resistance', 'dc-voltage', 'ac-voltage', 'current', 'insulation', 'frequency'] as const;
@@ -147,7 +148,7 @@ function againstNominal(input: MeasurementInput, c: Context, expected: number): 
     const tol = typed === '' ? frequencyTolerance(expected) : read(typed.replace(/^±\s*/, ''), 'Hz', 'Tolerance');
     const diff = reading - expected;
     const verdict = Math.abs(diff) <= tol ? 'within' : Math.abs(diff) <= 1.5 * tol ? 'marginal' : 'out';
-    const off = `${diff >= 0 ? '+' : '\u2212'}${c.show(Math.abs(diff))}`;
+    const off = `${signOf(diff, '+')}${c.show(Math.abs(diff))}`;
     return { verdict, deviation: diff / expected, reference: expected, absolute: true,
       reason: `Reads ${c.show(reading)} against ${c.show(expected)} ±${c.show(tol)}${typed === '' ? ' (usual alignment allowance; common practice)' : ''}: ${off}, ${verdict}.` };
   }
@@ -156,7 +157,7 @@ function againstNominal(input: MeasurementInput, c: Context, expected: number): 
   // A bias typed positive (cathode to chassis) against a data sheet's negative grid bias: compare the sizes, and say so.
   const flipped = Math.sign(reading) * Math.sign(expected) === -1;
   const { verdict, deviation } = readingVerdict({ expected: Math.abs(expected), reading: Math.abs(reading), tolerance });
-  const band = typeof tolerance === 'number' ? `±${+(tolerance * 100).toFixed(2)} %` : `\u2212${+(tolerance.minus * 100).toFixed(2)} %/+${+(tolerance.plus * 100).toFixed(2)} %`;
+  const band = formatTolerance(tolerance, 4);
   const judged: Judged = { verdict, deviation, reference: expected,
     reason: `Reads ${c.show(reading)} against ${c.show(expected)} ${band}${fallback ? ` (${fallback.words})` : ''}: ${signedPercent(deviation)}${flipped ? ' in size' : ''}, ${verdict}.` };
   if (flipped)

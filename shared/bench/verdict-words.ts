@@ -1,16 +1,12 @@
 import { formatQuantity } from './quantity-format';
 import type { QuantityUnit } from './quantity-parse';
+import { formatDifference, signedPercent } from '../format';
+
+export { signedPercent };
 
 /** How a reading is judged: under a maximum (ESR, leakage, earth continuity, ripple), over a minimum (insulation), or about a nominal value. */
 export type LimitKind = 'maximum' | 'minimum' | 'nominal';
 
-const MINUS = '\u2212';
-
-/** A signed per cent to one decimal with a true minus: 0.128 → "+12.8 %", −0.2 → "−20.0 %". */
-export function signedPercent(fraction: number): string {
-  const size = Math.abs(fraction * 100).toFixed(1);
-  return `${fraction > 0 ? '+' : fraction < 0 ? MINUS : ''}${size} %`;
-}
 
 export interface DeviationInput {
   limit: LimitKind;
@@ -46,8 +42,7 @@ export function describeDeviation(d: DeviationInput): string {
   if (d.overRange) return read;
   if (d.deviation === null || d.reading === null) return '—';
   if (d.absolute) {
-    const diff = d.reading - d.reference;
-    return `${diff > 0 ? '+' : diff < 0 ? MINUS : ''}${formatQuantity(Math.abs(diff), d.unit)}`;
+    return formatDifference(d.reading - d.reference, d.unit);
   }
   return signedPercent(d.deviation);
 }

@@ -10,3 +10,6 @@ export const capturedMailSchema = z.object({
   date: z.string(),
 });
 export type CapturedMail = z.infer<typeof capturedMailSchema>;
+
+/** `GET /api/dev/mail?limit=`: the newest messages first, 100 unless asked. */
+export const devMailQuerySchema = z.object({ limit: z.coerce.number().int().min(1).max(500).default(100) });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isKnownTimeZone } from '../format/dates';
 import { isCurrencyCode } from '../money/currency';
 import { taxRoundings } from '../money/tax';
 import { bodyIdSchema, idSchema } from './ids';
@@ -7,14 +8,7 @@ import { bodyIdSchema, idSchema } from './ids';
 export const moneySchema = z.object({ amount: z.number().int(), currency: z.string().length(3) });
 
 /** Whether the runtime's Intl knows the name as an IANA time zone. */
-export function isTimeZone(name: string): boolean {
-  try {
-    new Intl.DateTimeFormat('en', { timeZone: name });
-    return name.length > 0;
-  } catch {
-    return false;
-  }
-}
+export const isTimeZone = (name: string): boolean => name.length > 0 && isKnownTimeZone(name);
 
 const minor = z.number().int('must be whole minor units (pence, cents)').min(0).max(100_000_000);
 const minutes = z.number().int('must be whole minutes').min(0).max(100 * 60 * 10);

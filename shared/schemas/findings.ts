@@ -92,28 +92,6 @@ export const findingSchema = z.object({
 });
 export type Finding = z.infer<typeof findingSchema>;
 
-export const commentInputSchema = z.object({
-  body: z.string().trim().min(1, 'Write something first').max(8000, 'Keep a comment under 8,000 characters'),
-  /** Internal comments stay between technicians and mentors; owners never receive them. */
-  internal: z.boolean().default(true),
-});
-export const commentPatchSchema = z.object({ body: z.string().trim().min(1).max(8000) });
-
-export const commentSchema = z.object({
-  id: z.number().int(),
-  findingId: z.number().int(),
-  body: z.string(),
-  internal: z.boolean(),
-  authorId: z.number().int().nullable(),
-  authorName: z.string().nullable(),
-  mentions: z.array(z.number().int()),
-  createdAt: z.string(),
-  editedAt: z.string().nullable(),
-  /** Deleted comments keep their place in the thread with an empty body. */
-  deletedAt: z.string().nullable(),
-});
-export type Comment = z.infer<typeof commentSchema>;
-
 export const findingChangeSchema = z.object({
   id: z.number().int(),
   actorName: z.string().nullable(),
@@ -121,21 +99,6 @@ export const findingChangeSchema = z.object({
   createdAt: z.string(),
 });
 export type FindingChange = z.infer<typeof findingChangeSchema>;
-
-export const notificationSchema = z.object({
-  id: z.number().int(),
-  kind: z.enum(['mention', 'question', 'reply', 'help-request', 'reading-requested', 'reading-answered', 'payment']),
-  summary: z.string(),
-  restorationId: z.number().int(),
-  /** What it is about: a finding on a photo; else (both null) the restoration's help requests, or its Money tab for a payment. */
-  findingId: z.number().int().nullable(),
-  photoId: z.number().int().nullable(),
-  helpRequestId: z.number().int().nullable(),
-  readingRequestId: z.number().int().nullable(),
-  read: z.boolean(),
-  createdAt: z.string(),
-});
-export type Notification = z.infer<typeof notificationSchema>;
 
 export const openQuestionSchema = z.object({
   findingId: z.number().int(),
@@ -152,8 +115,3 @@ export type OpenQuestion = z.infer<typeof openQuestionSchema>;
 /** The link that opens a finding on its photo, zoomed onto it. */
 export const findingPath = (f: { restorationId: number; photoId: number; id: number }) =>
   `/restorations/${f.restorationId}/photos/${f.photoId}/findings/${f.id}`;
-
-/** Where a notification leads: its finding, the Money tab for a payment, or the Help tab for help requests and requests for readings. */
-export const notificationPath = (n: { restorationId: number; kind?: string; findingId: number | null; photoId: number | null }) =>
-  n.findingId !== null && n.photoId !== null ? findingPath({ restorationId: n.restorationId, photoId: n.photoId, id: n.findingId })
-    : n.kind === 'payment' ? `/restorations/${n.restorationId}/money` : `/restorations/${n.restorationId}/help`;

@@ -28,6 +28,9 @@ const fields = {
   powerOn: z.boolean(),
 };
 
+/** How a reading was judged (also the `verdict` database enum). */
+export const verdicts = ['within', 'marginal', 'out', 'unknown'] as const;
+
 /** A reading as a person types it; the server computes the SI values and the verdict. */
 export const measurementInputSchema = z.object({
   ...fields,
@@ -67,7 +70,7 @@ export const measurementSchema = z.object({
   rating: z.number().nullable(),
   reference: z.number().nullable(),
   deviation: z.number().nullable(),
-  verdict: z.enum(['within', 'marginal', 'out', 'unknown']),
+  verdict: z.enum(verdicts),
   verdictReason: z.string(),
   ownerVisible: z.boolean(),
   powerOn: z.boolean(),

@@ -42,5 +42,7 @@ export const memberParamsSchema = z.object({
   id: idSchema,
   userId: idSchema,
 });
+/** `/api/restorations/:id/invitations/:invitationId`. */
+export const invitationParamsSchema = z.object({ id: idSchema, invitationId: idSchema });
 export const memberPatchSchema = z.object({ role: roleSchema });
 export const tokenParamsSchema = z.object({ token: z.string().min(20).max(200) });

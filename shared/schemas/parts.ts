@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { bodyIdSchema } from './ids';
+import { isKnownTimeZone } from '../format/dates';
+import { isCurrencyCode } from '../money/currency';
 
 export const partActions = ['replaced', 'restuffed', 'kept-original', 'removed'] as const;
 export const partStates = ['planned', 'ordered', 'fitted'] as const;
@@ -72,49 +74,14 @@ export const partSchema = z.object({
 });
 export type Part = z.infer<typeof partSchema>;
 
-const knownTimeZone = (zone: string) => {
-  try {
-    new Intl.DateTimeFormat('en', { timeZone: zone });
-    return true;
-  } catch {
-    return false;
-  }
-};
-
 /**
  * `GET /api/restorations/:id/parts.csv?currency=GBP&timeZone=Europe/London`: the workshop's currency for the cost
  * column (ISO 4217) and the reader's time zone for the dates (IANA). Without them, costs have two decimals and
  * dates are UTC.
  */
 export const partsCsvQuerySchema = z.object({
-  currency: z.string().regex(/^[A-Z]{3}$/).refine((c) => Intl.supportedValuesOf('currency').includes(c), 'Not a known currency').optional(),
-  timeZone: z.string().max(64).refine(knownTimeZone, 'Not a known time zone').optional(),
+  currency: z.string().regex(/^[A-Z]{3}$/).refine(isCurrencyCode, 'Not a known currency').optional(),
+  timeZone: z.string().max(64).refine(isKnownTimeZone, 'Not a known time zone').optional(),
 });
 export type PartsCsvQuery = z.infer<typeof partsCsvQuerySchema>;
 
-export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
-  'safety-test', 'safety-override', 'soak-session', 'report-sent',
-  'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
-  'help-requested', 'help-link-made', 'help-link-withdrawn', 'cause-checked', 'reading-requested', 'reading-answered',
-  'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided',
-  'payment-received', 'payment-refunded', 'sheet-added', 'reference-marked', 'mismatch-noted'] as const;
-export const timelineQuerySchema = z.object({ kind: z.enum(timelineKinds).optional() });
-
-export const timelineEventSchema = z.object({
-  id: z.number().int(),
-  kind: z.enum(timelineKinds),
-  at: z.string(),
-  actorName: z.string().nullable(),
-  /** What happened, in words, written for the person reading it. */
-  summary: z.string(),
-  photoId: z.number().int().nullable(),
-  findingId: z.number().int().nullable(),
-  thumbUrl: z.string().nullable(),
-  /** A safety departure (a waived pre-power item, a stop at power-up): shown in red. */
-  caution: z.boolean(),
-});
-export type TimelineEvent = z.infer<typeof timelineEventSchema>;
-
-/** A timeline line on the bench, with the set it belongs to. */
-export const activityItemSchema = timelineEventSchema.extend({ restorationId: z.number().int(), set: z.string() });
-export type ActivityItem = z.infer<typeof activityItemSchema>;

@@ -46,6 +46,9 @@ export const safetyTestInputSchema = z
   });
 export type SafetyTestInput = z.input<typeof safetyTestInputSchema>;
 
+/** A whole test's outcome (also the `safety_verdict` database enum). */
+export const safetyVerdicts = ['pass', 'fail'] as const;
+
 export const safetyLineSchema = z.object({
   key: z.enum(['earth', 'insulation', 'touch', 'y-capacitor', 'fuse', 'lead', 'covers', 'capacitor-class']),
   label: z.string(),
@@ -67,7 +70,7 @@ export const safetyTestSchema = z.object({
   modifications: z.string(),
   notes: z.string(),
   lines: z.array(safetyLineSchema),
-  verdict: z.enum(['pass', 'fail']),
+  verdict: z.enum(safetyVerdicts),
   testedBy: z.string().nullable(),
   testedAt: z.string(),
 });

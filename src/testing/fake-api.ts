@@ -7,6 +7,7 @@ import { knownApiErrorSchema, type ApiErrorCode } from '../../shared/schemas/err
  */
 export interface Call {
   method: string;
+  /** The path without /api, e.g. `/parts/3`. */
   path: string;
   body: unknown;
 }
@@ -33,18 +34,21 @@ export function toResponse(reply: Reply): Response {
 }
 
 /**
- * Stands in for the API behind `fetch`: `answer` gets each call (path without /api) and returns the reply, or
- * nothing for the server's 404. Every call and its headers are recorded so tests can check what was sent.
+ * Stands in for the API behind `fetch`: `answer` gets each call (path without /api) and returns the reply (or a
+ * ready Response), or nothing for the server's 404. Every call and its headers are recorded so tests can check what
+ * was sent. Successful answers meet the client's schema check (src/lib/api-client.ts), so a fake cannot drift from
+ * the contract.
  */
-export function fakeApi(answer: (call: Call) => Reply | undefined | Promise<Reply | undefined>) {
+export function fakeApi(answer: (call: Call) => Reply | Response | undefined | Promise<Reply | Response | undefined>) {
   const calls: Call[] = [];
   /** The request headers of each call, in the same order as `calls`. */
   const headers: Record<string, string>[] = [];
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
-    const call = { method: init.method ?? 'GET', path: String(input).replace(/^\/api/, ''), body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined };
+    const call = { method: init.method ?? 'GET', path: String(input).replace(/^\/api/, ''), body: typeof init.body === 'string' ? JSON.parse(init.body) as unknown : undefined };
     calls.push(call);
     headers.push(Object.fromEntries([...new Headers(init.headers).entries()].map(([k, v]) => [k.toLowerCase(), v])));
-    return toResponse((await answer(call)) ?? notFound());
+    const reply = await answer(call);
+    return reply instanceof Response ? reply : toResponse(reply ?? notFound());
   });
   vi.stubGlobal('fetch', fetchMock);
   return { calls, headers, fetchMock };

@@ -1,7 +1,7 @@
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { prePowerItems } from '../../shared/schemas/bringup';
-import type { TimelineEvent } from '../../shared/schemas/parts';
+import type { TimelineEvent } from '../../shared/schemas/events';
 import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
 import { pdfText } from '../support/pdf-text';

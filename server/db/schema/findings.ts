@@ -5,6 +5,7 @@ import { helpRequests, readingRequests } from './help';
 import { photos } from './photos';
 import { restorations } from './restorations';
 import { users } from './users';
+import { notificationKinds } from '../../../shared/schemas/notifications';
 
 export const shapeEnum = pgEnum('finding_shape', shapes);
 export const kindEnum = pgEnum('finding_kind', kinds);
@@ -90,7 +91,7 @@ export const comments = pgTable(
   ],
 );
 
-export const notificationKindEnum = pgEnum('notification_kind', ['mention', 'question', 'reply', 'help-request', 'reading-requested', 'reading-answered', 'payment']);
+export const notificationKindEnum = pgEnum('notification_kind', notificationKinds);
 
 /** An unread item for one person; e-mails are batched from these rows (several instances share them). */
 export const notifications = pgTable(

@@ -4,9 +4,10 @@ import { timestamps } from './columns';
 import { findings } from './findings';
 import { restorations } from './restorations';
 import { users } from './users';
+import { verdicts } from '../../../shared/schemas/measurements';
 
 export const quantityEnum = pgEnum('measured_quantity', measuredQuantities);
-export const verdictEnum = pgEnum('verdict', ['within', 'marginal', 'out', 'unknown']);
+export const verdictEnum = pgEnum('verdict', verdicts);
 
 /**
  * One bench reading. The typed texts are kept as written ("4k7", "250 V"); the SI values, the verdict

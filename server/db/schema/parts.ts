@@ -6,10 +6,12 @@ import { photos } from './photos';
 import { restorations } from './restorations';
 import { users } from './users';
 import { mismatchNotes, sheetPages } from './sheets';
+import { mainsPositions, partActions, partStates } from '../../../shared/schemas/parts';
+import { timelineKinds } from '../../../shared/schemas/events';
 
-export const partActionEnum = pgEnum('part_action', ['replaced', 'restuffed', 'kept-original', 'removed']);
-export const partStateEnum = pgEnum('part_state', ['planned', 'ordered', 'fitted']);
-export const mainsPositionEnum = pgEnum('mains_position', ['none', 'across-line', 'line-to-chassis']);
+export const partActionEnum = pgEnum('part_action', partActions);
+export const partStateEnum = pgEnum('part_state', partStates);
+export const mainsPositionEnum = pgEnum('mains_position', mainsPositions);
 
 /** One line of the parts ledger, keyed by component reference, so each change can be traced later. */
 export const parts = pgTable(
@@ -41,15 +43,7 @@ export const parts = pgTable(
   (t) => [index('parts_restoration_id_idx').on(t.restorationId), index('parts_finding_id_idx').on(t.findingId)],
 );
 
-export const eventKindEnum = pgEnum('event_kind', [
-  'photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
-  'safety-test', 'safety-override', 'soak-session', 'report-sent',
-  'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
-  'help-requested', 'help-link-made', 'help-link-withdrawn', 'cause-checked', 'reading-requested', 'reading-answered',
-  'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided',
-  'payment-received', 'payment-refunded',
-  'sheet-added', 'reference-marked', 'mismatch-noted',
-]);
+export const eventKindEnum = pgEnum('event_kind', timelineKinds);
 
 /**
  * The history a restoration's timeline is drawn from. Events point at their subject; whether an owner

@@ -1,14 +1,14 @@
 import { sql } from 'drizzle-orm';
 import { doublePrecision, index, integer, jsonb, pgEnum, pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
 import { equipmentClasses, type SafetyLine } from '../../../shared/bench/safety-test';
-import { specifications } from '../../../shared/schemas/safety';
+import { safetyVerdicts, specifications } from '../../../shared/schemas/safety';
 import { findings } from './findings';
 import { restorations } from './restorations';
 import { users } from './users';
 
 export const equipmentClassEnum = pgEnum('equipment_class', equipmentClasses);
 export const specificationEnum = pgEnum('specification', specifications);
-export const safetyVerdictEnum = pgEnum('safety_verdict', ['pass', 'fail']);
+export const safetyVerdictEnum = pgEnum('safety_verdict', safetyVerdicts);
 
 /**
  * One final safety test as recorded. The typed readings are kept as written; the lines (value, limit, source,

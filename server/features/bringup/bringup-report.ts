@@ -1,4 +1,5 @@
 import { decisionLabels, prePowerItemWords, prePowerStatusLabels, supplyLabels, type Bringup } from '../../../shared/schemas/bringup';
+import { documentDate as day } from '../../format';
 import type { Writer } from '../report/pdf-writer';
 import { readBringup } from './bringup.repo';
 import type { Db } from './power-gate';
@@ -9,7 +10,6 @@ const SOFT = '#5d5247';
 /** The bring-up record as the owner reads it (the report is the owner's document, whoever downloads it). */
 export const bringupForReport = (db: Db, restorationId: number) => readBringup(db, restorationId, 'owner');
 
-const day = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 /** "Before the first switch-on": the pre-power sign-off with every item, waivers in red, and the staged power-up in brief. */
 export function writeBringupSection(w: Writer, b: Bringup) {

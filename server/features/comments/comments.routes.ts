@@ -1,5 +1,5 @@
 import { Router, type Request, type Response } from 'express';
-import { commentInputSchema, commentPatchSchema } from '../../../shared/schemas/findings';
+import { commentInputSchema, commentPatchSchema } from '../../../shared/schemas/comments';
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';

@@ -1,5 +1,5 @@
 import { can, mayView, type Role } from '../../../shared/permissions';
-import type { Comment } from '../../../shared/schemas/findings';
+import type { Comment } from '../../../shared/schemas/comments';
 import type { AppDeps } from '../../app-deps';
 import type { PageWindow } from '../../db/keyset';
 import { unitOfWork } from '../../db/unit-of-work';

@@ -4,7 +4,7 @@ import { phaseLabels, viewLabels } from '../../../shared/schemas/photos';
 import { statusLabels, type Status } from '../../../shared/schemas/findings';
 import { quantityLabels } from '../../../shared/schemas/measurements';
 import type { Role } from '../../../shared/permissions';
-import type { TimelineEvent } from '../../../shared/schemas/parts';
+import type { TimelineEvent } from '../../../shared/schemas/events';
 import type { AppDeps } from '../../app-deps';
 import { events, findings, measurements, memberships, mismatchNotes, parts, photos, sheetPages, users } from '../../db/schema';
 import { mismatchLine } from '../../../shared/schemas/sheets';

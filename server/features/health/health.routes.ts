@@ -1,7 +1,7 @@
-import { sql } from 'drizzle-orm';
 import { Router } from 'express';
 import type { Health } from '../../../shared/schemas/health';
 import type { AppDeps } from '../../app-deps';
+import { databaseAnswers } from './health.repo';
 
 /**
  * GET /api/health probes each service for real. The database and storage decide readiness (503 when
@@ -12,7 +12,7 @@ export function healthRoutes(deps: AppDeps): Router {
   const router = Router();
   router.get('/health', async (_req, res) => {
     const [database, storage, mail] = await Promise.all([
-      deps.db.execute(sql`select 1`).then(() => true, () => false),
+      databaseAnswers(deps.db),
       deps.storage.probe(),
       deps.mailer.probe(),
     ]);

@@ -1,19 +1,17 @@
-import { and, eq } from 'drizzle-orm';
 import { BenchInputError, liveChassisLikely, measurementVerdict } from '../../../shared/bench';
 import { can, type Role } from '../../../shared/permissions';
 import type { LineUp, Measurement, MeasurementInput, Valve } from '../../../shared/schemas/measurements';
 import type { Database, Executor } from '../../db/client';
-import { keyset, toMs, type PageWindow } from '../../db/keyset';
-import { findings, measurements, photos, restorations, users, valves } from '../../db/schema';
+import type { PageWindow } from '../../db/keyset';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
 import { assertPrePowerSignedOff } from '../bringup/power-gate';
 import { recordEvent } from '../events/record-event';
-import { columnsOf, visibleSql } from '../visibility/visibility-sql';
+import { findingsRepo } from '../findings/findings.repo';
+import { measurementsRepo, type MeasurementRow } from './measurements.repo';
 
-type Row = typeof measurements.$inferSelect & { measuredBy: string | null };
 type Fields = Required<Pick<MeasurementInput, 'location' | 'quantity' | 'reading'>> & Partial<MeasurementInput>;
 
-const toMeasurement = (m: Row): Measurement => ({
+const toMeasurement = (m: MeasurementRow): Measurement => ({
   id: m.id, restorationId: m.restorationId, findingId: m.findingId, location: m.location, quantity: m.quantity,
   expectedText: m.expectedText, toleranceText: m.toleranceText, ratingText: m.ratingText, readingText: m.readingText,
   conditions: m.conditions, method: m.method, chartMeterText: m.chartMeterText, meterText: m.meterText, sourceText: m.sourceText, expected: m.expected, reading: m.reading, rating: m.rating,
@@ -34,19 +32,14 @@ export function judge(f: Fields) {
   }
 }
 
-/** Readings in the order they were taken (then by id). */
-export const measurementOrder = keyset('asc', [{ by: toMs(measurements.measuredAt), kind: 'instant' }, { by: measurements.id, kind: 'number' }]);
+export { measurementOrder } from './measurements.repo';
 
 export function measurementsService(db: Database) {
-  const select = (on: Executor = db) => on.select({ m: measurements, measuredBy: users.name }).from(measurements).leftJoin(users, eq(users.id, measurements.measuredById));
-  const find = async (id: number, on: Executor = db) => {
-    const [r] = await select(on).where(eq(measurements.id, id));
-    return r && { ...r.m, measuredBy: r.measuredBy };
-  };
+  const repo = measurementsRepo(db);
+  const find = (id: number, on: Executor = db) => measurementsRepo(on).find(id);
   async function assertFinding(tx: Executor, restorationId: number, findingId: number | null | undefined) {
     if (!findingId) return;
-    const [f] = await tx.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
-    if (!f) throw new BadRequestError('findingId: no such finding on this restoration.');
+    if ((await findingsRepo(tx).restorationOf(findingId)) !== restorationId) throw new BadRequestError('findingId: no such finding on this restoration.');
   }
   const columns = (f: Fields) => ({
     location: f.location, quantity: f.quantity, expectedText: f.expected ?? '', toleranceText: f.tolerance ?? '', ratingText: f.rating ?? '',
@@ -56,25 +49,11 @@ export function measurementsService(db: Database) {
   });
 
   return {
-    async restorationOf(id: number) {
-      const [r] = await db.select({ id: measurements.restorationId }).from(measurements).where(eq(measurements.id, id));
-      return r?.id;
-    },
+    restorationOf: (id: number) => repo.restorationOf(id),
     /** The readings this role may see; a reading's finding is named only when the reader may see it. */
     /** The readings this role may see (of one finding, when asked), all of them or one page (`window`). */
     async list(restorationId: number, role: Role, findingId?: number, window?: PageWindow) {
-      const findingVisible = visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) });
-      const query = db
-        .select({ m: measurements, measuredBy: users.name, findingVisible })
-        .from(measurements)
-        .leftJoin(users, eq(users.id, measurements.measuredById))
-        .leftJoin(findings, eq(findings.id, measurements.findingId))
-        .leftJoin(photos, eq(photos.id, findings.photoId))
-        .where(and(eq(measurements.restorationId, restorationId), findingId ? and(eq(measurements.findingId, findingId), findingVisible) : undefined,
-          visibleSql(role, 'reading', { reading: columnsOf(measurements) }), measurementOrder.after(window?.cursor)))
-        .orderBy(...measurementOrder.orderBy);
-      const rows = window ? await query.limit(window.limit) : await query;
-      return rows.map((r) => toMeasurement({ ...r.m, measuredBy: r.measuredBy, findingId: r.findingVisible ? r.m.findingId : null }));
+      return (await repo.list(restorationId, role, findingId, window)).map(toMeasurement);
     },
     async create(restorationId: number, input: Fields, userId: number) {
       const id = await db.transaction((tx) => this.createIn(tx, restorationId, input, userId));
@@ -85,9 +64,9 @@ export function measurementsService(db: Database) {
       const verdict = judge(input);
       await assertFinding(tx, restorationId, input.findingId);
       if (input.powerOn) await assertPrePowerSignedOff(tx, restorationId, 'recording a reading taken with the set powered');
-      const [row] = await tx.insert(measurements).values({ restorationId, ...columns(input), ...verdict, measuredById: userId }).returning({ id: measurements.id });
-      if (verdict.verdict === 'out') await recordEvent(tx, { restorationId, kind: 'measurement-out', actorId: userId, measurementId: row!.id, findingId: input.findingId ?? null });
-      return row!.id;
+      const id = await measurementsRepo(tx).insert(restorationId, { ...columns(input), ...verdict }, userId);
+      if (verdict.verdict === 'out') await recordEvent(tx, { restorationId, kind: 'measurement-out', actorId: userId, measurementId: id, findingId: input.findingId ?? null });
+      return id;
     },
     /** Recomputes the verdict from the merged texts whenever anything changes. */
     async update(id: number, patch: Partial<MeasurementInput>, userId: number) {
@@ -96,7 +75,7 @@ export function measurementsService(db: Database) {
     },
     /** The update on one transaction; the row is locked so two edits cannot both record "went out of range". */
     async updateIn(tx: Executor, id: number, patch: Partial<MeasurementInput>, userId: number) {
-      await tx.select({ id: measurements.id }).from(measurements).where(eq(measurements.id, id)).for('update');
+      await measurementsRepo(tx).lock(id);
       const current = await find(id, tx);
       if (!current) throw new NotFoundError();
       const merged: Fields = {
@@ -111,7 +90,7 @@ export function measurementsService(db: Database) {
       if (merged.powerOn && !current.powerOn)
         await assertPrePowerSignedOff(tx, current.restorationId, 'recording a reading taken with the set powered');
       const verdict = judge(merged);
-      await tx.update(measurements).set({ ...columns(merged), ...verdict }).where(eq(measurements.id, id));
+      await measurementsRepo(tx).update(id, { ...columns(merged), ...verdict });
       if (verdict.verdict === 'out' && current.verdict !== 'out')
         await recordEvent(tx, { restorationId: current.restorationId, kind: 'measurement-out', actorId: userId, measurementId: id, findingId: merged.findingId ?? null });
     },
@@ -121,11 +100,9 @@ export function measurementsService(db: Database) {
       if (!m || !can(role, 'measurements.view', { ownerVisible: m.ownerVisible })) throw new NotFoundError();
       if (!can(role, 'measurements.record')) throw new ForbiddenError('Only a technician records and changes readings.');
     },
-    async remove(id: number) {
-      await db.delete(measurements).where(eq(measurements.id, id));
-    },
+    remove: (id: number) => repo.remove(id),
     async lineUp(restorationId: number): Promise<LineUp> {
-      const rows = await db.select().from(valves).where(eq(valves.restorationId, restorationId));
+      const rows = await repo.valves(restorationId);
       const list: Valve[] = rows
         .map((v) => ({ position: v.position, type: v.type, notes: v.notes }))
         .sort((a, b) => Number(a.position.slice(1)) - Number(b.position.slice(1)));
@@ -136,10 +113,8 @@ export function measurementsService(db: Database) {
       const positions = new Set(list.map((v) => v.position));
       if (positions.size !== list.length) throw new BadRequestError('Each position (V1, V2, …) may appear once.');
       await db.transaction(async (tx) => {
-        await tx.delete(valves).where(eq(valves.restorationId, restorationId));
-        if (list.length) await tx.insert(valves).values(list.map((v) => ({ ...v, restorationId })));
-        if (liveChassisLikely(list.map((v) => v.type)).likely)
-          await tx.update(restorations).set({ liveChassis: true }).where(eq(restorations.id, restorationId));
+        await measurementsRepo(tx).replaceValves(restorationId, list);
+        if (liveChassisLikely(list.map((v) => v.type)).likely) await measurementsRepo(tx).markLiveChassis(restorationId);
       });
       return this.lineUp(restorationId);
     },

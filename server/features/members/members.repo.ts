@@ -2,6 +2,7 @@ import { and, eq } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
 import { keyset, toMs, type PageWindow } from '../../db/keyset';
+import { membershipRole } from '../../db/membership-role';
 import { memberships, users } from '../../db/schema';
 
 /** Members in the order they joined (people who joined together by name, then id). */
@@ -11,12 +12,8 @@ export const memberOrder = keyset('asc', [
 
 export function membersRepo(db: Executor) {
   return {
-    async roleOf(userId: number, restorationId: number): Promise<Role | undefined> {
-      const [row] = await db
-        .select({ role: memberships.role })
-        .from(memberships)
-        .where(and(eq(memberships.userId, userId), eq(memberships.restorationId, restorationId)));
-      return row?.role;
+    roleOf(userId: number, restorationId: number): Promise<Role | undefined> {
+      return membershipRole(db, userId, restorationId);
     },
     /** The restoration's members, all of them or one page (`window`). */
     async list(restorationId: number, window?: PageWindow) {

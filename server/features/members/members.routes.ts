@@ -1,6 +1,5 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { invitationInputSchema, memberParamsSchema, memberPatchSchema } from '../../../shared/schemas/members';
+import { invitationInputSchema, invitationParamsSchema, memberParamsSchema, memberPatchSchema } from '../../../shared/schemas/members';
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
@@ -10,14 +9,13 @@ import { input, validate } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
 import { memberOrder } from './members.repo';
 import { membersService } from './members.service';
-import { idSchema } from '../../../shared/schemas/ids';
 
 const one = { params: idParamsSchema };
 const paged = { params: idParamsSchema, query: pageQuerySchema };
 const member = { params: memberParamsSchema };
 const rolePatch = { params: memberParamsSchema, body: memberPatchSchema };
 const invite = { params: idParamsSchema, body: invitationInputSchema };
-const invitation = { params: z.object({ id: idSchema, invitationId: idSchema }) };
+const invitation = { params: invitationParamsSchema };
 
 /** People on a restoration: members, roles and pending invitations. */
 export function membersRoutes(deps: AppDeps): Router {

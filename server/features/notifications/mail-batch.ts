@@ -1,5 +1,5 @@
 import { and, eq, inArray, isNull, sql } from 'drizzle-orm';
-import { notificationPath } from '../../../shared/schemas/findings';
+import { notificationPath } from '../../../shared/schemas/notifications';
 import type { AppDeps } from '../../app-deps';
 import { comments, findings, memberships, notifications, photos, users } from '../../db/schema';
 import { notificationJoins, notificationVisible } from '../visibility/notification-visibility';

@@ -1,5 +1,5 @@
 import { mayView, type Role } from '../../../shared/permissions';
-import type { Notification } from '../../../shared/schemas/findings';
+import type { Notification } from '../../../shared/schemas/notifications';
 import type { AppDeps } from '../../app-deps';
 import type { Executor } from '../../db/client';
 import { requestNotificationMail } from './mail-batch';

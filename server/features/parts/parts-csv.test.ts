@@ -1,7 +1,8 @@
 import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
 import type { Part } from '../../../shared/schemas/parts';
-import { isoDate, neutraliseFormula, partsCsv } from './parts-csv';
+import { isoDate } from '../../format';
+import { neutraliseFormula, partsCsv } from './parts-csv';
 
 describe('CSV formula neutralising', () => {
   // OWASP, "CSV Injection": cells beginning with =, +, -, @, tab (0x09) or carriage return (0x0D) are

@@ -1,4 +1,6 @@
 import { stringify } from 'csv-stringify/sync';
+import { isoDate } from '../../format';
+import { minorDigits } from '../../../shared/money';
 import { mainsPositionLabels, partActionLabels, partStateLabels, type Part, type PartsCsvQuery } from '../../../shared/schemas/parts';
 
 /** A ledger line for export, with the finding it answers when the reader may see that finding. */
@@ -7,15 +9,6 @@ export interface CsvLine {
   finding: { number: number; title: string } | null;
 }
 
-/** How many minor units make one major unit, as a power of ten (2 for pence and cents, 0 for yen): ISO 4217 via Intl. */
-const minorDigits = (currency: string) => new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
-
-/** An instant as an ISO 8601 calendar date (2026-03-09) on the wall calendar of `timeZone`. */
-export function isoDate(instant: string, timeZone = 'UTC'): string {
-  const parts = new Intl.DateTimeFormat('en', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).formatToParts(new Date(instant));
-  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
-  return `${get('year')}-${get('month')}-${get('day')}`;
-}
 
 function columns({ currency, timeZone }: PartsCsvQuery) {
   const digits = currency ? minorDigits(currency) : 2;

@@ -1,15 +1,14 @@
-import { and, asc, eq, sql } from 'drizzle-orm';
 import { partWarnings } from '../../../shared/bench';
 import { compareComponentRefs } from '../../../shared/natural-order';
 import type { Role } from '../../../shared/permissions';
 import type { Part, PartInput } from '../../../shared/schemas/parts';
 import type { Database, Executor } from '../../db/client';
-import { findings, parts, photos } from '../../db/schema';
 import { BadRequestError, NotFoundError } from '../../http/errors';
 import { recordEvent } from '../events/record-event';
-import { columnsOf, visibleSql } from '../visibility/visibility-sql';
+import { findingsRepo } from '../findings/findings.repo';
+import { partsRepo, type PartRow } from './parts.repo';
 
-type Row = typeof parts.$inferSelect;
+type Row = PartRow;
 
 /** A ledger line as the caller may see it, with the bench library's warnings on the replacement. */
 export function toPart(row: Row, role: Role): Part {
@@ -29,31 +28,11 @@ export function toPart(row: Row, role: Role): Part {
 export function partsService(db: Database) {
   async function assertFinding(tx: Executor, restorationId: number, findingId: number | null | undefined) {
     if (!findingId) return;
-    const [f] = await tx.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
-    if (!f) throw new BadRequestError('findingId: no such finding on this restoration.');
+    if ((await findingsRepo(tx).restorationOf(findingId)) !== restorationId) throw new BadRequestError('findingId: no such finding on this restoration.');
   }
-  const find = async (id: number) => (await db.select().from(parts).where(eq(parts.id, id)))[0];
-  /** Ledger lines as this role may see them, each with its finding's number and title when the reader may see it. */
-  const withFindings = async (restorationId: number, role: Role, limit?: number, after?: { componentRef: string; id: number }) => {
-    const query = db
-      .select({
-        part: parts,
-        findingVisible: visibleSql(role, 'finding', { finding: columnsOf(findings), photo: columnsOf(photos) }),
-        findingNumber: findings.number,
-        findingTitle: findings.title,
-      })
-      .from(parts)
-      .leftJoin(findings, eq(findings.id, parts.findingId))
-      .leftJoin(photos, eq(photos.id, findings.photoId))
-      .where(and(eq(parts.restorationId, restorationId), visibleSql(role, 'part', { part: columnsOf(parts) }),
-        after ? sql`(${parts.componentRef}, ${parts.id}) > (${after.componentRef}, ${after.id})` : undefined))
-      .orderBy(asc(parts.componentRef), asc(parts.id));
-    const rows = limit ? await query.limit(limit) : await query;
-    return rows.map(({ part, findingVisible, findingNumber, findingTitle }) => ({
-      row: { ...part, findingId: findingVisible ? part.findingId : null },
-      finding: findingVisible && findingNumber !== null ? { number: findingNumber, title: findingTitle ?? '' } : null,
-    }));
-  };
+  const repo = partsRepo(db);
+  const find = (id: number) => repo.find(id);
+  const withFindings = repo.withFindings;
   /** One page of the ledger as this role may see it, in its order (reference, then id), after the part `after` names. */
   const page = async (restorationId: number, role: Role, limit?: number, after?: { componentRef: string; id: number }): Promise<Row[]> =>
     (await withFindings(restorationId, role, limit, after)).map(({ row }) => row);
@@ -77,26 +56,24 @@ export function partsService(db: Database) {
       const fitted = fittedAt && input.action !== 'kept-original';
       return db.transaction(async (tx) => {
         await assertFinding(tx, restorationId, input.findingId);
-        const [row] = await tx.insert(parts).values({ ...input, restorationId, findingId: input.findingId ?? null, fittedAt }).returning();
-        if (fitted) await recordEvent(tx, { restorationId, kind: 'part-fitted', actorId, partId: row!.id, findingId: row!.findingId });
-        return row!;
+        const row = await partsRepo(tx).insert({ ...input, restorationId, findingId: input.findingId ?? null, fittedAt });
+        if (fitted) await recordEvent(tx, { restorationId, kind: 'part-fitted', actorId, partId: row.id, findingId: row.findingId });
+        return row;
       });
     },
     async update(id: number, patch: Partial<Row>, actorId: number) {
       return db.transaction(async (tx) => {
         // Locked, so two edits of one line cannot both see it unfitted and record two fittings.
-        const [before] = await tx.select().from(parts).where(eq(parts.id, id)).for('update');
+        const before = await partsRepo(tx).find(id, { lock: true });
         if (!before) throw new NotFoundError();
         if (patch.findingId !== undefined) await assertFinding(tx, before.restorationId, patch.findingId);
         const becameFitted = patch.state === 'fitted' && before.state !== 'fitted';
         const values = { ...patch, ...(becameFitted ? { fittedAt: new Date() } : patch.state && patch.state !== 'fitted' ? { fittedAt: null } : {}) };
-        const [row] = await tx.update(parts).set(values).where(eq(parts.id, id)).returning();
-        if (becameFitted && row!.action !== 'kept-original') await recordEvent(tx, { restorationId: before.restorationId, kind: 'part-fitted', actorId, partId: id, findingId: row!.findingId });
-        return row!;
+        const row = await partsRepo(tx).update(id, values);
+        if (becameFitted && row.action !== 'kept-original') await recordEvent(tx, { restorationId: before.restorationId, kind: 'part-fitted', actorId, partId: id, findingId: row.findingId });
+        return row;
       });
     },
-    async remove(id: number) {
-      await db.delete(parts).where(eq(parts.id, id));
-    },
+    remove: (id: number) => repo.remove(id),
   };
 }

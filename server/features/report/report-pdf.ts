@@ -6,7 +6,8 @@ import { partActionLabels } from '../../../shared/schemas/parts';
 import { viewLabels } from '../../../shared/schemas/photos';
 import { equipmentKindLabels, workLevelLabels } from '../../../shared/schemas/restorations';
 import { writeBringupSection } from '../bringup/bringup-report';
-import type { ReportData } from './report-data';
+import { documentDate } from '../../format';
+import type { ReportData } from './report.repo';
 import { createWriter, type Writer } from './pdf-writer';
 import { writeSafetyTestSection, writeSoakSection } from './report-safety-sections';
 
@@ -27,7 +28,7 @@ export async function renderReport(d: ReportData): Promise<{ pdf: Buffer; pageCo
   const title = `${d.set.make} ${d.set.model}${d.set.year ? ` (${d.set.year})` : ''}`;
   w.text('Hand-back report', { size: 12, colour: '#b4530b', bold: true, gap: 0.2 });
   w.text(title, { size: 26, bold: true, gap: 0.3 });
-  w.text(`${equipmentKindLabels[d.set.equipmentKind]}${d.set.serial ? ` · serial ${d.set.serial}` : ''} · restored by ${d.technicians.map((t) => t.name).join(', ') || 'the workshop'} · ${new Date().toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric' })}`, { colour: '#5d5247' });
+  w.text(`${equipmentKindLabels[d.set.equipmentKind]}${d.set.serial ? ` · serial ${d.set.serial}` : ''} · restored by ${d.technicians.map((t) => t.name).join(', ') || 'the workshop'} · ${documentDate(new Date())}`, { colour: '#5d5247' });
   if (d.cover) await w.image(d.cover, w.width, 300).then((s) => w.doc.moveDown(s.height / 14 + 0.5));
 
   w.heading('The set and its story');

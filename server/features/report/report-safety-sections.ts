@@ -1,13 +1,13 @@
 import { equipmentClassLabels, formatQuantity } from '../../../shared/bench';
 import { specificationLabels, type SafetyLineView } from '../../../shared/schemas/safety';
-import type { ReportData } from './report-data';
+import { documentDate as when } from '../../format';
+import type { ReportData } from './report.repo';
 import type { Writer } from './pdf-writer';
 
 const DANGER = '#a3261b';
 const OK = '#0b6e4f';
 const SOFT = '#5d5247';
 const verdictWords: Record<SafetyLineView['verdict'], string> = { pass: 'PASS', fail: 'FAIL', 'not-applicable': 'not applicable', 'not-measured': 'not measured' };
-const when = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 // The report's fonts have no ≤ or ≥, and words read better to an owner anyway.
 const limitWords = (text: string) => text.replace(/^≤ /, 'at most ').replace(/^≥ /, 'at least ');

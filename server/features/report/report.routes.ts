@@ -4,7 +4,7 @@ import type { AppDeps } from '../../app-deps';
 import { NotFoundError } from '../../http/errors';
 import { guard, requireUser } from '../../http/guard';
 import { input, validate } from '../../http/validate';
-import { reportData } from './report-data';
+import { reportData } from './report.repo';
 import { renderReport } from './report-pdf';
 
 const one = { params: idParamsSchema };

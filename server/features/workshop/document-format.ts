@@ -1,4 +1,5 @@
 import { formatMoney } from '../../../shared/money/currency';
+import { formatInstant } from '../../../shared/format';
 
 /**
  * How amounts and dates read in the workshop's e-mails and PDFs: British English conventions (£1,234.56,
@@ -7,4 +8,4 @@ import { formatMoney } from '../../../shared/money/currency';
 export const documentMoney = (amount: number, currency: string) => formatMoney({ amount, currency }, 'en-GB');
 
 export const documentDate = (instant: Date, timeZone: string) =>
-  instant.toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone });
+  formatInstant(instant, 'longDate', { locale: 'en-GB', timeZone });

@@ -1,28 +1,9 @@
-import { Router, type RequestHandler } from 'express';
-import { eq } from 'drizzle-orm';
-import { can, workshopRole, type Action } from '../../../shared/permissions';
+import { Router } from 'express';
 import { workshopSettingsSchema } from '../../../shared/schemas/estimates';
 import type { AppDeps } from '../../app-deps';
-import type { Database } from '../../db/client';
-import { memberships } from '../../db/schema';
-import { ForbiddenError, UnauthorizedError } from '../../http/errors';
 import { input, validate } from '../../http/validate';
+import { workshopGuard } from './workshop-guard';
 import { readWorkshopSettings, writeWorkshopSettings } from './workshop-settings';
-
-/**
- * The guard for workshop-wide routes: signed in (else 401), and allowed by the policy for the person's workshop
- * role, taken from the roles they hold on restorations (else 403: the settings' existence is no secret).
- */
-function workshopGuard(db: Database, action: Action): RequestHandler {
-  return async (req, res, next) => {
-    if (!req.user) throw new UnauthorizedError();
-    const held = await db.selectDistinct({ role: memberships.role }).from(memberships).where(eq(memberships.userId, req.user.id));
-    const role = workshopRole(held.map((h) => h.role));
-    if (!can(role, action)) throw new ForbiddenError();
-    res.locals.role = role;
-    next();
-  };
-}
 
 const put = { body: workshopSettingsSchema };
 

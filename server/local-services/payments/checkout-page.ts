@@ -1,11 +1,10 @@
+import { formatMoney } from '../../../shared/money/currency';
 import type { FakeSession } from './payment-fake-state';
 
 const escape = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 function amountText(s: FakeSession) {
-  const currency = s.currency.toUpperCase();
-  const digits = new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
-  return new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(s.amount_total / 10 ** digits);
+  return formatMoney({ amount: s.amount_total, currency: s.currency.toUpperCase() }, 'en-GB');
 }
 
 /** The local test payment page: what a hosted checkout shows, with the three outcomes as buttons. */

@@ -29,7 +29,7 @@ export const RESISTORS: readonly (ResistorSpec & Ref)[] = [
   { ref: 'R6', note: 'ECF80 pentode anode decoupling', ohms: 2.2e3, a: tag('TS2', 0), b: tag('TS2', 2), lift: -55 },
   { ref: 'R1', note: 'ECF80 pentode grid leak', ohms: 1e6, a: pin('V2', 3), b: tag('TS2', 4) },
   { ref: 'R15', note: 'ECC81 anode load', ohms: 10e3, a: tag('TS4', 0), b: pin('V1', 3) },
-  { ref: 'R16', note: 'ECC81 grid leak', ohms: 470e3, a: tag('TS4', 3), b: pin('V1', 8), tolerance: 10 },
+  { ref: 'R16', note: 'ECC81 grid leak', ohms: 470e3, a: tag('TS4', 3), b: pin('V1', 8), tolerance: 0.1 },
   { ref: 'R18', note: 'oscillator grid', ohms: 100e3, a: tag('TS5', 0), b: tag('TS5', 2), lift: -52 },
   { ref: 'R19', note: 'oscillator anode feed', ohms: 4.7e3, a: tag('TS5', 3), b: tag('TS5', 5), lift: -52 },
 ];

@@ -1,5 +1,5 @@
-import { BAND_PAINT, resistorBands } from './colour-code';
-import type { Tolerance } from './colour-code';
+import { resistorBands, type BandTolerance } from '../../../../shared/bench';
+import { BAND_PAINT } from './band-paint';
 import { turnedRectD } from './chassis-parts';
 import type { Drawn } from './chassis-parts';
 import { angleOf, distance, f, midpoint, place, shade, text } from './svg-kit';
@@ -43,7 +43,7 @@ export const CYL = (len: number, dia: number, rx = dia / 2): string =>
   `<rect x="${f(-len / 2)}" y="${f(-dia / 2)}" width="${f(len)}" height="${f(dia)}" rx="${f(rx)}" fill="url(#cyl)" stroke="#000" stroke-opacity="0.45" stroke-width="1.2"/>`;
 
 export interface ResistorSpec {
-  a: Pt; b: Pt; lift?: number; ohms: number; tolerance?: Tolerance; watts?: 0.5 | 1 | 2;
+  a: Pt; b: Pt; lift?: number; ohms: number; tolerance?: BandTolerance; watts?: 0.5 | 1 | 2;
   /** A newly fitted resistor: clean lacquer in `body` colour, bright leads, bands set towards one end. */
   fresh?: boolean; body?: string;
 }
@@ -54,7 +54,7 @@ const RESISTOR_SIZE = { 0.5: [84, 25], 1: [104, 30], 2: [124, 36] } as const;
 /** A carbon resistor whose bands are worked out from its value. */
 export function resistor(r: ResistorSpec): Drawn {
   const [len, dia] = RESISTOR_SIZE[r.watts ?? 0.5];
-  const bands = resistorBands(r.ohms, r.tolerance ?? 5);
+  const bands = resistorBands(r.ohms, r.tolerance);
   const bodyColour = r.body ?? '#d6bd8c';
   const bw = len * (r.fresh ? 0.075 : 0.085);
   const at = r.fresh ? [0.2, 0.31, 0.42, 0.78] : [0.17, 0.31, 0.45, 0.8];
@@ -65,7 +65,7 @@ export function resistor(r: ResistorSpec): Drawn {
       s += [-1, 1].map((k) => `<rect x="${f(k < 0 ? -l / 2 - 2 : l / 2 - l * 0.16 + 2)}" y="${f(-dia / 2 - 2)}" width="${f(l * 0.16)}" height="${f(dia + 4)}" rx="${f(dia * 0.45)}" fill="${bodyColour}"/>`).join('');
     }
     bands.forEach((band, i) => {
-      s += `<rect x="${f(-l / 2 + l * (at[i] ?? 0) - bw / 2)}" y="${f(-dia / 2 + 0.5)}" width="${f(bw)}" height="${f(dia - 1)}" fill="${BAND_PAINT[band]}"/>`;
+      s += `<rect x="${f(-l / 2 + l * (at[i] ?? 0) - bw / 2)}" y="${f(-dia / 2 + 0.5)}" width="${f(bw)}" height="${f(dia - 1)}" fill="${BAND_PAINT[band] ?? '#000'}"/>`;
     });
     if (r.fresh) s += `<rect x="${f(-l * 0.4)}" y="${f(-dia * 0.36)}" width="${f(l * 0.8)}" height="${f(dia * 0.12)}" rx="2" fill="#fff" fill-opacity="0.55"/>`;
     return s + CYL(l, dia, dia * 0.42);

@@ -1,6 +1,4 @@
 export { chassisLandmarks, plainChassisSpot } from './chassis-landmarks';
 export type { ChassisView, Landmark } from './chassis-landmarks';
 export { chassisSvg, renderChassisJpeg } from './render-chassis';
-export { resistorBands } from './colour-code';
 export type { ChassisState } from './chassis-restoration';
-export type { BandColour } from './colour-code';

@@ -5,7 +5,7 @@ import type { ChassisView } from './chassis-landmarks';
 import { bodyCentre } from './chassis-parts-underside';
 import { HT_LEAD_ROUTE, undersideParts } from './chassis-restoration';
 import type { ChassisState } from './chassis-restoration';
-import { BAND_PAINT, resistorBands } from './colour-code';
+import { BAND_PAINT } from './band-paint';
 import { chassisSvg, renderChassisJpeg } from './render-chassis';
 import { HEIGHT, WIDTH } from './svg-kit';
 
@@ -129,34 +129,5 @@ describe('demo chassis pictures', () => {
     const lum = await luminanceAt(jpeg('top', state), plain.x, plain.y);
     expect(lum).toBeGreaterThan(100);
     expect(lum).toBeLessThan(230);
-  });
-});
-
-describe('resistor colour bands', () => {
-  // IEC 60062 colour code: digits black 0 … white 9; multiplier by the same colours
-  // (gold ×0.1, silver ×0.01); tolerance gold ±5 %, silver ±10 %, no band ±20 %.
-  it('when a value is 150 Ω, then it reads brown green brown gold', () => {
-    expect(resistorBands(150)).toEqual(['brown', 'green', 'brown', 'gold']);
-  });
-
-  it('when a value is 1 MΩ, then it reads brown black green gold', () => {
-    expect(resistorBands(1e6)).toEqual(['brown', 'black', 'green', 'gold']);
-  });
-
-  it('when a value is 47 kΩ, then it reads yellow violet orange gold', () => {
-    expect(resistorBands(47e3)).toEqual(['yellow', 'violet', 'orange', 'gold']);
-  });
-
-  it('when values sit at the ends of the scale, then the multiplier band follows', () => {
-    expect(resistorBands(220e3)).toEqual(['red', 'red', 'yellow', 'gold']);
-    expect(resistorBands(2.2e3)).toEqual(['red', 'red', 'red', 'gold']);
-    expect(resistorBands(4.7)).toEqual(['yellow', 'violet', 'gold', 'gold']);
-    expect(resistorBands(470e3, 10)).toEqual(['yellow', 'violet', 'yellow', 'silver']);
-    expect(resistorBands(10e3, 20)).toEqual(['brown', 'black', 'orange']);
-  });
-
-  it('when a value needs three significant digits, then it is refused', () => {
-    expect(() => resistorBands(1234)).toThrow(RangeError);
-    expect(() => resistorBands(0)).toThrow(RangeError);
   });
 });

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Session, User } from '../../../../shared/schemas/auth';
-import { api } from '../../../lib/api-client';
+import { sessionSchema, type User } from '../../../../shared/schemas/auth';
+import { apiGet } from '../../../lib/api-client';
 import { ME_KEY } from '../../../lib/session-key';
 
 export { ME_KEY };
@@ -10,7 +10,7 @@ export { ME_KEY };
  * signed-out page logs no failed request.
  */
 export async function getMe(): Promise<User | null> {
-  return (await api<Session>('/auth/session')).user;
+  return (await apiGet('/auth/session', sessionSchema)).user;
 }
 
 export const meQueryOptions = () => queryOptions({ queryKey: ME_KEY, queryFn: getMe, staleTime: 60_000 });

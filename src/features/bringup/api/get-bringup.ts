@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Bringup } from '../../../../shared/schemas/bringup';
-import { api } from '../../../lib/api-client';
+import { bringupSchema } from '../../../../shared/schemas/bringup';
+import { apiGet } from '../../../lib/api-client';
 import { bringupKeys } from './keys';
 
 /** The intake checklist, the pre-power checklist with its sign-off, and the power-up log (owners get theirs without bench notes). */
-export const getBringup = (restorationId: number) => api<Bringup>(`/restorations/${restorationId}/bringup`);
+export const getBringup = (restorationId: number) => apiGet(`/restorations/${restorationId}/bringup`, bringupSchema);
 
 export const bringupQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: bringupKeys.restoration(restorationId), queryFn: () => getBringup(restorationId) });

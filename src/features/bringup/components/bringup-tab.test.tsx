@@ -1,12 +1,12 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen, waitFor, within } from '@testing-library/react';
+import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { intakeItems, prePowerItems, prePowerMissing, type Bringup } from '../../../../shared/schemas/bringup';
 import type { Role } from '../../../../shared/permissions';
 import { BringupTab } from './bringup-tab';
+import { renderWithQueries } from '../../../testing/render';
 
 afterEach(() => {
   cleanup();
@@ -38,11 +38,7 @@ function fakeApi(initial: Bringup | { status: number; message: string }) {
 }
 
 const renderTab = (role: Role) =>
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <BringupTab restorationId={7} role={role} liveChassis />
-    </QueryClientProvider>,
-  );
+  renderWithQueries(<BringupTab restorationId={7} role={role} liveChassis />, { router: false });
 
 describe('BringupTab', () => {
   it('when it loads, then it says so; when loading fails, then the error shows with a way to try again', async () => {

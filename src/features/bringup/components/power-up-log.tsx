@@ -1,7 +1,7 @@
 import { decisionLabels, lampBehaviourLabels, supplyLabels, type Bringup } from '../../../../shared/schemas/bringup';
 import { EmptyState } from '../../../components/states';
 import { lampLimitWords } from '../lib/inline-limits';
-import { when } from '../lib/when';
+import { formatDateTime as when } from '../../../lib/format';
 
 const verdictClass = { within: 'text-ok', marginal: 'text-glow-strong', out: 'text-danger font-semibold', unknown: 'text-ink-soft' } as const;
 

@@ -2,7 +2,7 @@ import { prePowerItemWords, prePowerStatusLabels, type Bringup } from '../../../
 import { Button } from '../../../components/button';
 import { useSavePrePowerCheck } from '../api/save-pre-power-check';
 import { useSignOffPrePower } from '../api/sign-off-pre-power';
-import { when } from '../lib/when';
+import { formatDateTime as when } from '../../../lib/format';
 import { DischargeCaution } from './power-cautions';
 import { PrePowerItemRow } from './pre-power-item-row';
 import { TapCheck } from './tap-check';

@@ -1,4 +1,5 @@
 import { seriesLampLimitDetail, tapScaled } from '../../../../shared/bench';
+import { formatSignedFixed } from '../../../lib/format';
 
 const round = (value: number, places: number) => value.toFixed(places);
 
@@ -22,6 +23,6 @@ export function tapWords(t: { ratedVolts: number | null; tapVolts: number | null
   if (!ratedVolts || !tapVolts || !mainsVolts || ratedVolts <= 0 || tapVolts <= 0 || mainsVolts <= 0) return null;
   const volts = tapScaled({ ratedVolts, tapVolts, mainsVolts });
   const change = (volts / ratedVolts - 1) * 100;
-  const direction = Math.abs(change) < 0.5 ? 'as rated' : `${change > 0 ? '+' : '\u2212'}${round(Math.abs(change), 1)} %`;
+  const direction = Math.abs(change) < 0.5 ? 'as rated' : `${formatSignedFixed(change, 1)} %`;
   return `A ${ratedVolts} V winding gives about ${round(volts, 2)} V on the ${tapVolts} V tap at ${mainsVolts} V mains (${direction}).`;
 }

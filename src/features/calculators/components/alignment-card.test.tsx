@@ -3,16 +3,10 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it } from 'vitest';
+import { typeInto } from '../../../testing/render';
 import { AlignmentCard } from './alignment-card';
 
 afterEach(cleanup);
-
-async function typeInto(label: string, text: string) {
-  const user = userEvent.setup();
-  const input = screen.getByLabelText(label);
-  await user.clear(input);
-  await user.type(input, text);
-}
 
 describe('alignment aids', () => {
   it('when an IF is 75 kHz off its 470 kHz, then it is out, not 16 % within a per-cent band', async () => {

@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import { BenchInputError, formatQuantity, frequencyOf, IF_PRESETS, parseQuantity, wavelengthOf } from '../../../../shared/bench';
 import { inputClass } from '../../../components/field';
+import { formatDifference } from '../../../lib/format';
 import { useQuantity } from '../hooks/use-quantity';
 import { calculate } from '../lib/outcome';
 import { anyInvalid } from '../lib/read-quantity';
@@ -35,7 +36,7 @@ export function AlignmentCard() {
     const off = hertz - chosen.hertz;
     const size = Math.abs(off);
     const verdict = size <= chosen.toleranceHertz ? 'within' : size <= 1.5 * chosen.toleranceHertz ? 'marginal' : 'out';
-    return { verdict, off: `${off >= 0 ? '+' : '\u2212'}${formatQuantity(size, 'Hz')}`, tolerance: `±${formatQuantity(chosen.toleranceHertz, 'Hz')}` } as const;
+    return { verdict, off: formatDifference(off, 'Hz', '+'), tolerance: `±${formatQuantity(chosen.toleranceHertz, 'Hz')}` } as const;
   });
   const dial = calculate([mark.trim() === '' ? undefined : mark], ([text]) => dialMark(text));
   return (

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { capacitorCode, formatQuantity } from '../../../../shared/bench';
-import { formatNumber } from '../lib/format';
+import { formatNumber } from '../../../lib/format';
 import { calculate } from '../lib/outcome';
 import { CalculatorCard } from './calculator-card';
 import { ResultPanel } from './result-panel';

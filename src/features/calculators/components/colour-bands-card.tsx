@@ -3,7 +3,7 @@ import { colourBands, formatQuantity } from '../../../../shared/bench';
 import { inputClass } from '../../../components/field';
 import { BAND_COUNTS, BAND_LAYOUTS, DEFAULT_BANDS, capitalise } from '../lib/band-colours';
 import type { BandCount } from '../lib/band-colours';
-import { formatPercent } from '../lib/format';
+import { formatPercent } from '../../../lib/format';
 import { calculate } from '../lib/outcome';
 import { BandSelect } from './band-select';
 import { CalculatorCard, CardFields } from './calculator-card';

@@ -1,18 +1,11 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
 import { cleanup, render, screen } from '@testing-library/react';
-import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it } from 'vitest';
+import { typeInto } from '../../../testing/render';
 import { HeaterChainCard } from './heater-chain-card';
 
 afterEach(cleanup);
-
-async function typeInto(label: string, text: string) {
-  const user = userEvent.setup();
-  const input = screen.getByLabelText(label);
-  await user.clear(input);
-  await user.type(input, text);
-}
 
 describe('series heater string calculator', () => {
   it('when the 100 mA five-valve string runs on 230 V, then the dropper is 874 Ω dissipating 8.74 W', async () => {

@@ -1,6 +1,6 @@
 import { formatQuantity, leakageLimitDetail } from '../../../../shared/bench';
 import { useQuantity } from '../hooks/use-quantity';
-import { formatWait } from '../lib/format';
+import { formatWait } from '../lib/format-wait';
 import { calculate } from '../lib/outcome';
 import { anyInvalid } from '../lib/read-quantity';
 import { CalculatorCard, CardFields } from './calculator-card';

@@ -3,16 +3,10 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it } from 'vitest';
+import { typeInto } from '../../../testing/render';
 import { MeterLoadingCard } from './meter-loading-card';
 
 afterEach(cleanup);
-
-async function typeInto(label: string, text: string) {
-  const user = userEvent.setup();
-  const input = screen.getByLabelText(label);
-  await user.clear(input);
-  await user.type(input, text);
-}
 
 describe('meter loading calculator', () => {
   it('when the textbook divider is entered, then the 20 kΩ/V meter’s 10 V means 15 V unloaded', async () => {

@@ -3,7 +3,7 @@ import { formatQuantity } from '../../../../shared/bench';
 import type { ESeries } from '../../../../shared/bench';
 import { inputClass } from '../../../components/field';
 import { useQuantity } from '../hooks/use-quantity';
-import { formatPercent } from '../lib/format';
+import { formatPercent } from '../../../lib/format';
 import { calculate } from '../lib/outcome';
 import { E_SERIES, preferredNeighbours } from '../lib/preferred-neighbours';
 import { CalculatorCard, CardFields } from './calculator-card';

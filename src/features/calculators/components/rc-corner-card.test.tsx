@@ -1,19 +1,11 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
 import { cleanup, render, screen } from '@testing-library/react';
-import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it } from 'vitest';
+import { typeInto } from '../../../testing/render';
 import { RcCornerCard } from './rc-corner-card';
 
 afterEach(cleanup);
-
-async function typeInto(label: string, text: string) {
-  const user = userEvent.setup();
-  const input = screen.getByLabelText(label);
-  await user.clear(input);
-  await user.type(input, text);
-  return input;
-}
 
 describe('RC corner calculator', () => {
   it('when 4k7 and 47n are typed, then it shows about 720 Hz as the person types', async () => {

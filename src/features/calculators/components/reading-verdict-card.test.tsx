@@ -1,18 +1,11 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
 import { cleanup, render, screen } from '@testing-library/react';
-import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it } from 'vitest';
+import { typeInto } from '../../../testing/render';
 import { ReadingVerdictCard } from './reading-verdict-card';
 
 afterEach(cleanup);
-
-async function typeInto(label: string, text: string) {
-  const user = userEvent.setup();
-  const input = screen.getByLabelText(label);
-  await user.clear(input);
-  await user.type(input, text);
-}
 
 describe('reading against the manual', () => {
   it('when a reading is within the tolerance, then the verdict shows its glyph and word', async () => {

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { BenchInputError, formatQuantity, readingVerdict } from '../../../../shared/bench';
 import { useQuantity } from '../hooks/use-quantity';
-import { formatDifference, formatPercent } from '../lib/format';
+import { formatDifference, formatPercent } from '../../../lib/format';
 import { calculate } from '../lib/outcome';
 import { anyInvalid } from '../lib/read-quantity';
 import { readTolerance } from '../lib/read-tolerance';

@@ -1,7 +1,7 @@
 import { formatQuantity, resistorDissipation } from '../../../../shared/bench';
 import { useQuantity } from '../hooks/use-quantity';
 import { suggestedRating } from '../lib/bench-advice';
-import { formatPercent } from '../lib/format';
+import { formatPercent } from '../../../lib/format';
 import { calculate } from '../lib/outcome';
 import { anyInvalid } from '../lib/read-quantity';
 import { CalculatorCard, CardFields } from './calculator-card';

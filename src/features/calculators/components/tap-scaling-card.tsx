@@ -1,6 +1,6 @@
 import { formatQuantity, tapScaled } from '../../../../shared/bench';
 import { useQuantity } from '../hooks/use-quantity';
-import { formatPercent } from '../lib/format';
+import { formatPercent } from '../../../lib/format';
 import { calculate } from '../lib/outcome';
 import { anyInvalid } from '../lib/read-quantity';
 import { CalculatorCard, CardFields } from './calculator-card';

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { anodeDissipation, formatQuantity, rectifierLoad } from '../../../../shared/bench';
 import type { RatingCheck } from '../../../../shared/bench';
 import { useQuantity } from '../hooks/use-quantity';
-import { formatPercent } from '../lib/format';
+import { formatPercent } from '../../../lib/format';
 import { calculate } from '../lib/outcome';
 import { anyInvalid } from '../lib/read-quantity';
 import { CalculatorCard, CardFields } from './calculator-card';

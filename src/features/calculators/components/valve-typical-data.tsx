@@ -1,6 +1,6 @@
 import { formatQuantity } from '../../../../shared/bench';
 import type { DataConfidence, QuantityUnit, TypicalOperation, ValveData } from '../../../../shared/bench';
-import { formatNumber } from '../lib/format';
+import { formatNumber } from '../../../lib/format';
 import { ResultLine, ResultList, ResultNote } from './result-line';
 
 const ROWS: ReadonlyArray<readonly [keyof TypicalOperation, string, QuantityUnit | 'mA/V' | 'µ']> = [

@@ -1,5 +1,5 @@
 import { colourBands, formatQuantity } from '../../../../shared/bench';
-import { formatNumber, formatPercent } from './format';
+import { formatNumber, formatPercent } from '../../../lib/format';
 
 export type BandCount = 3 | 4 | 5 | 6;
 export type BandRole = 'digit' | 'multiplier' | 'tolerance' | 'tempco';

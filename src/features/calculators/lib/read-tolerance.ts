@@ -1,5 +1,5 @@
 import { parseTolerance, type Tolerance } from '../../../../shared/bench';
-import { formatNumber } from './format';
+import { formatTolerance } from '../../../lib/format';
 
 /** A tolerance field read: the fraction(s) for readingVerdict and how it was understood, or why not. */
 export interface ToleranceReading {
@@ -13,9 +13,7 @@ export function readTolerance(text: string): ToleranceReading {
   if (text.trim() === '') return {};
   try {
     const tolerance = parseTolerance(text);
-    const pct = (f: number) => formatNumber(f * 100, 4);
-    const display = typeof tolerance === 'number' ? `±${pct(tolerance)} %` : `\u2212${pct(tolerance.minus)} % / +${pct(tolerance.plus)} %`;
-    return { tolerance, display };
+    return { tolerance, display: formatTolerance(tolerance, 4) };
   } catch (err) {
     return { error: (err as Error).message };
   }

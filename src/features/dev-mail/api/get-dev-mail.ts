@@ -1,8 +1,9 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { CapturedMail } from '../../../../shared/schemas/dev-mail';
-import { api } from '../../../lib/api-client';
+import { capturedMailSchema } from '../../../../shared/schemas/dev-mail';
+import { apiGet } from '../../../lib/api-client';
 
-export const getDevMail = () => api<CapturedMail[]>('/dev/mail');
+export const getDevMail = () => apiGet('/dev/mail', z.array(capturedMailSchema));
 
 export const devMailQueryOptions = () => queryOptions({ queryKey: ['dev', 'mail'], queryFn: getDevMail, refetchInterval: 5000 });
 

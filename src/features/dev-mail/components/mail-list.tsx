@@ -1,4 +1,5 @@
 import type { CapturedMail } from '../../../../shared/schemas/dev-mail';
+import { formatDateTime } from '../../../lib/format';
 
 /** Captured messages as plain text; links in them are made clickable. */
 export function MailList({ mails }: { mails: CapturedMail[] }) {
@@ -7,7 +8,7 @@ export function MailList({ mails }: { mails: CapturedMail[] }) {
       {mails.map((m, i) => (
         <li key={`${m.date}-${i}`} className="rounded-xl border border-rule bg-panel p-4">
           <p className="text-sm text-ink-soft">
-            {new Date(m.date).toLocaleString()} · to <span className="font-mono">{m.to}</span>
+            {formatDateTime(m.date)} · to <span className="font-mono">{m.to}</span>
           </p>
           <p className="mt-1 font-bold">{m.subject}</p>
           <pre className="mt-2 whitespace-pre-wrap break-words font-sans text-sm">{linkify(m.text)}</pre>

@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Comment } from '../../../../shared/schemas/findings';
+import { commentSchema } from '../../../../shared/schemas/comments';
 import { apiAllPages } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
-export const getComments = (findingId: number) => apiAllPages<Comment>(`/findings/${findingId}/comments`);
+export const getComments = (findingId: number) => apiAllPages(`/findings/${findingId}/comments`, commentSchema);
 
 export const commentsQueryOptions = (findingId: number) =>
   queryOptions({ queryKey: findingKeys.comments(findingId), queryFn: () => getComments(findingId), refetchInterval: 20_000 });

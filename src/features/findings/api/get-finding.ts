@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Finding } from '../../../../shared/schemas/findings';
-import { api } from '../../../lib/api-client';
+import { findingSchema } from '../../../../shared/schemas/findings';
+import { apiGet } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
-export const getFinding = (id: number) => api<Finding>(`/findings/${id}`);
+export const getFinding = (id: number) => apiGet(`/findings/${id}`, findingSchema);
 
 export const findingQueryOptions = (id: number) => queryOptions({ queryKey: findingKeys.one(id), queryFn: () => getFinding(id) });
 

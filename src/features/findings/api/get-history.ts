@@ -1,9 +1,10 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { FindingChange } from '../../../../shared/schemas/findings';
-import { api } from '../../../lib/api-client';
+import { findingChangeSchema } from '../../../../shared/schemas/findings';
+import { apiGet } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
-export const getHistory = (id: number) => api<FindingChange[]>(`/findings/${id}/history`);
+export const getHistory = (id: number) => apiGet(`/findings/${id}/history`, z.array(findingChangeSchema));
 
 export const historyQueryOptions = (id: number) => queryOptions({ queryKey: findingKeys.history(id), queryFn: () => getHistory(id) });
 

@@ -1,10 +1,11 @@
+import { z } from 'zod';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Notification } from '../../../../shared/schemas/findings';
-import { api } from '../../../lib/api-client';
+import { notificationSchema } from '../../../../shared/schemas/notifications';
+import { api, apiGet } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
 /** The newest page only: the menu shows the latest items. */
-export const getNotifications = () => api<Notification[]>('/notifications?limit=50');
+export const getNotifications = () => apiGet('/notifications?limit=50', z.array(notificationSchema));
 export const markNotificationsRead = (ids?: number[]) => api<void>('/notifications/read', { method: 'POST', json: { ids } });
 
 export const notificationsQueryOptions = () =>

@@ -1,9 +1,10 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Finding } from '../../../../shared/schemas/findings';
-import { api } from '../../../lib/api-client';
+import { findingSchema } from '../../../../shared/schemas/findings';
+import { apiGet } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
-export const getPhotoFindings = (photoId: number) => api<Finding[]>(`/photos/${photoId}/findings`);
+export const getPhotoFindings = (photoId: number) => apiGet(`/photos/${photoId}/findings`, z.array(findingSchema));
 
 export const photoFindingsQueryOptions = (photoId: number) =>
   queryOptions({ queryKey: findingKeys.photo(photoId), queryFn: () => getPhotoFindings(photoId) });

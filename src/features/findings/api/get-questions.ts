@@ -1,9 +1,10 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { OpenQuestion } from '../../../../shared/schemas/findings';
-import { api } from '../../../lib/api-client';
+import { openQuestionSchema } from '../../../../shared/schemas/findings';
+import { apiGet } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 
-export const getQuestions = () => api<OpenQuestion[]>('/questions');
+export const getQuestions = () => apiGet('/questions', z.array(openQuestionSchema));
 
 export const questionsQueryOptions = () => queryOptions({ queryKey: findingKeys.questions, queryFn: getQuestions });
 

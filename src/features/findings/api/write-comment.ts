@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRef } from 'react';
-import type { Comment } from '../../../../shared/schemas/findings';
+import type { Comment } from '../../../../shared/schemas/comments';
 import { api, ApiError } from '../../../lib/api-client';
 import { findingKeys } from './keys';
 

@@ -1,6 +1,6 @@
 import { useId, useRef, useState } from 'react';
 import { can, type Role } from '../../../../shared/permissions';
-import { commentInputSchema } from '../../../../shared/schemas/findings';
+import { commentInputSchema } from '../../../../shared/schemas/comments';
 import { buttonClass } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import type { FindingMember } from './finding-format';

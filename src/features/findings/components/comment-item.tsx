@@ -1,6 +1,6 @@
 import { useId, useState } from 'react';
 import { can, type Role } from '../../../../shared/permissions';
-import { commentPatchSchema, type Comment } from '../../../../shared/schemas/findings';
+import { commentPatchSchema, type Comment } from '../../../../shared/schemas/comments';
 import { buttonClass } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import { useConfirm } from '../../../components/use-confirm';

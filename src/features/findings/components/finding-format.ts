@@ -1,5 +1,6 @@
 import type { Role } from '../../../../shared/permissions';
 import { kindLabels, severityLabels, statusLabels, type Kind, type Severity, type Shape, type Status } from '../../../../shared/schemas/findings';
+import { formatDateTime, relativeTime } from '../../../lib/format';
 
 /** A member of the restoration as the panel and the thread need them: to name authors and offer @mentions. */
 export interface FindingMember {
@@ -8,37 +9,8 @@ export interface FindingMember {
   role: Role;
 }
 
-const relative = new Intl.RelativeTimeFormat('en', { numeric: 'auto' });
-/** Each unit and how many of it make the next one up. */
-const steps: [Intl.RelativeTimeFormatUnit, number][] = [
-  ['second', 60],
-  ['minute', 60],
-  ['hour', 24],
-  ['day', 7],
-  ['week', 4.345],
-  ['month', 12],
-  ['year', Number.POSITIVE_INFINITY],
-];
-
-/** "just now", "5 minutes ago", "yesterday", "3 weeks ago": when something happened, read at a glance. */
-export function relativeTime(iso: string, now: number = Date.now()): string {
-  const then = Date.parse(iso);
-  if (Number.isNaN(then)) return '';
-  let value = (then - now) / 1000;
-  if (Math.abs(value) < 45) return 'just now';
-  for (const [unit, size] of steps) {
-    if (Math.abs(value) < size) return relative.format(Math.round(value), unit);
-    value /= size;
-  }
-  return '';
-}
-
-/** The full date and time, for a tooltip beside a relative time. */
-export function fullTime(iso: string): string {
-  const date = new Date(iso);
-  return Number.isNaN(date.getTime()) ? '' : date.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-}
-
+/** "just now", "5 minutes ago"; and the full date and time, for a tooltip beside a relative time. */
+export { relativeTime, formatDateTime as fullTime };
 
 const fieldNames: Record<string, string> = {
   title: 'Title',

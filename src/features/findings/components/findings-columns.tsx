@@ -1,7 +1,7 @@
 import { createColumnHelper, type FilterFn, type SortingFn } from '@tanstack/react-table';
 import { Link } from 'react-router';
 import { findingPath, kindLabels, severities, statuses, type Finding } from '../../../../shared/schemas/findings';
-import { compareComponentRefs } from '../../../../shared/natural-order';
+import { byComponentRef } from '../../../lib/table-sorting';
 import { fullTime, relativeTime } from './finding-format';
 import { SeverityMark, StatusMark } from './status-mark';
 
@@ -49,7 +49,7 @@ export function findingColumns(photoLabel: (photoId: number) => string) {
       id: 'componentRef',
       header: 'Component',
       cell: (c) => <span className="font-mono">{c.getValue() ?? '—'}</span>,
-      sortingFn: (a, b, id) => compareComponentRefs(a.getValue<string>(id), b.getValue<string>(id)),
+      sortingFn: byComponentRef,
       sortUndefined: 'last',
       filterFn: refContainsFilter,
     }),

@@ -1,10 +1,12 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { MemoryRouter, Route, Routes, useLocation } from 'react-router';
-import type { Comment, Finding } from '../../../../shared/schemas/findings';
+import type { Finding } from '../../../../shared/schemas/findings';
+import type { Comment } from '../../../../shared/schemas/comments';
 import { apiError } from '../../../testing/fake-api';
 import type { FindingMember } from './finding-format';
+import { testQueryClient } from '../../../testing/render';
 
 /** A finding as the API answers it; tests override what they care about. */
 export function makeFinding(id: number, overrides: Partial<Finding> = {}): Finding {
@@ -40,7 +42,7 @@ function Location() {
 
 /** Renders with a fresh query cache (no retries) inside a memory router that shows where it has navigated to. */
 export function renderWithApp(ui: ReactNode, path = '/restorations/7/findings') {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  const client = testQueryClient();
   const result = render(
     <QueryClientProvider client={client}>
       <MemoryRouter initialEntries={[path]}>

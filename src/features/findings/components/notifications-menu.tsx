@@ -1,6 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import { useNavigate } from 'react-router';
-import { notificationPath, type Notification } from '../../../../shared/schemas/findings';
+import { notificationPath, type Notification } from '../../../../shared/schemas/notifications';
 import { useMarkNotificationsRead, useNotifications } from '../api/get-notifications';
 import { fullTime, relativeTime } from './finding-format';
 

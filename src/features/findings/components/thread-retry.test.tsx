@@ -3,7 +3,7 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Comment } from '../../../../shared/schemas/findings';
+import type { Comment } from '../../../../shared/schemas/comments';
 import { apiError } from '../../../testing/fake-api';
 import { fakeApi, makeComment, makeFinding, members, ok, renderWithApp, type Reply } from './findings-test-support';
 import { Thread } from './thread';

@@ -1,8 +1,9 @@
 import type { ReadingRequest } from '../../../../shared/schemas/reading-requests';
 import { readingRequestKindLabels } from '../../../../shared/schemas/reading-requests';
 import { VerdictBadge } from '../../measurements/components/verdict-badge';
+import { formatDateTime } from '../../../lib/format';
 
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const when = (iso: string) => formatDateTime(iso);
 
 /** One request for a reading and, once given, its answer. */
 export function ReadingRequestItem({ request: r }: { request: ReadingRequest }) {

@@ -1,8 +1,9 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ActivityItem } from '../../../../shared/schemas/parts';
-import { api } from '../../../lib/api-client';
+import { activityItemSchema } from '../../../../shared/schemas/events';
+import { apiGet } from '../../../lib/api-client';
 
-export const getActivity = () => api<ActivityItem[]>('/activity');
+export const getActivity = () => apiGet('/activity', z.array(activityItemSchema));
 
 export const activityQueryOptions = () => queryOptions({ queryKey: ['activity'], queryFn: getActivity, staleTime: 30_000 });
 

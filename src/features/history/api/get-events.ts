@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { TimelineEvent } from '../../../../shared/schemas/parts';
+import { timelineEventSchema, type TimelineEvent } from '../../../../shared/schemas/events';
 import { apiAllPages } from '../../../lib/api-client';
 
 export type EventKind = TimelineEvent['kind'];
 
 export const getEvents = (restorationId: number, kind?: EventKind) =>
-  apiAllPages<TimelineEvent>(`/restorations/${restorationId}/events${kind ? `?kind=${kind}` : ''}`);
+  apiAllPages(`/restorations/${restorationId}/events${kind ? `?kind=${kind}` : ''}`, timelineEventSchema);
 
 export const eventsQueryKey = (restorationId: number, kind?: EventKind) =>
   kind ? (['restorations', restorationId, 'events', kind] as const) : (['restorations', restorationId, 'events'] as const);

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { TimelineEvent } from '../../../../shared/schemas/parts';
+import type { TimelineEvent } from '../../../../shared/schemas/events';
 
 type Kind = TimelineEvent['kind'];
 

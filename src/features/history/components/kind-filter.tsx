@@ -1,4 +1,4 @@
-import type { TimelineEvent } from '../../../../shared/schemas/parts';
+import type { TimelineEvent } from '../../../../shared/schemas/events';
 import { eventKindLabels, eventKinds } from '../lib/event-kinds';
 
 type Kind = TimelineEvent['kind'];

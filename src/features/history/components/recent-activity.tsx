@@ -2,6 +2,7 @@ import { Link } from 'react-router';
 import { findingPath } from '../../../../shared/schemas/findings';
 import { useActivity } from '../api/get-activity';
 import { EventGlyph } from './event-glyph';
+import { formatDayAndTime } from '../../../lib/format';
 
 /** The bench's "what happened lately" across every set the person works on. Quiet when there is nothing. */
 export function RecentActivity() {
@@ -23,7 +24,7 @@ export function RecentActivity() {
               <span className="min-w-0 flex-1">
                 <span className="block truncate">{e.summary}</span>
                 <span className="block text-sm text-ink-soft">
-                  {e.set} · {new Date(e.at).toLocaleString(undefined, { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' })}
+                  {e.set} · {formatDayAndTime(e.at)}
                   {e.actorName ? ` · ${e.actorName}` : ''}
                 </span>
               </span>

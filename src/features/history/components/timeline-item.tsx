@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
 import { findingPath } from '../../../../shared/schemas/findings';
-import type { TimelineEvent } from '../../../../shared/schemas/parts';
+import type { TimelineEvent } from '../../../../shared/schemas/events';
 import { findingKinds } from '../lib/event-kinds';
 import { timeOfDay } from '../lib/group-by-day';
 import { EventGlyph } from './event-glyph';

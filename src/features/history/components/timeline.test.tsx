@@ -3,7 +3,8 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { fakeJsonApi, makeEvent, renderWithQueries } from '../testing/history-test-support';
+import { fakeJsonApi, makeEvent } from '../testing/history-test-support';
+import { renderWithQueries } from '../../../testing/render';
 import { Timeline } from './timeline';
 
 afterEach(() => {

@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import type { TimelineEvent } from '../../../../shared/schemas/parts';
+import type { TimelineEvent } from '../../../../shared/schemas/events';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
 import { useEvents } from '../api/get-events';
 import { countByKind } from '../lib/event-kinds';

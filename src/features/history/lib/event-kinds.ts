@@ -1,4 +1,4 @@
-import { timelineKinds, type TimelineEvent } from '../../../../shared/schemas/parts';
+import { timelineKinds, type TimelineEvent } from '../../../../shared/schemas/events';
 
 type Kind = TimelineEvent['kind'];
 

@@ -1,11 +1,11 @@
 import { phaseLabels, viewLabels, type Photo } from '../../../../shared/schemas/photos';
+import { formatMediumDate } from '../../../lib/format';
 
-const day = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 
 /** The day a photo was taken (or, failing the camera's word, uploaded): "24 Nov 2026". */
 export function photoDay(photo: Pick<Photo, 'takenAt' | 'uploadedAt'>): string {
-  const date = new Date(photo.takenAt ?? photo.uploadedAt);
-  return Number.isNaN(date.getTime()) ? '' : day.format(date);
+  // Pickers name photos the same way in every locale (British English, the product's own words).
+  return formatMediumDate(photo.takenAt ?? photo.uploadedAt, 'en-GB');
 }
 
 /** Words for an image's alt text: "Top, before: as received". */

@@ -1,10 +1,5 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render } from '@testing-library/react';
-import type { ReactNode } from 'react';
-import { MemoryRouter } from 'react-router';
-import { vi } from 'vitest';
-import type { TimelineEvent } from '../../../../shared/schemas/parts';
-import { notFound, toResponse } from '../../../testing/fake-api';
+import type { TimelineEvent } from '../../../../shared/schemas/events';
+import { fakeApi, ok } from '../../../testing/fake-api';
 
 /** An event as the API answers it; tests override what they care about. */
 export function makeEvent(id: number, overrides: Partial<TimelineEvent> = {}): TimelineEvent {
@@ -16,28 +11,8 @@ export function makeEvent(id: number, overrides: Partial<TimelineEvent> = {}): T
 
 /**
  * Stands in for the API behind `fetch`: `routes` maps a path (without /api) to the JSON it answers; anything else
- * is a 404. Returns the paths asked for.
+ * is a 404. Returns the calls made.
  */
 export function fakeJsonApi(routes: Record<string, unknown>) {
-  const asked: string[] = [];
-  const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
-  vi.stubGlobal(
-    'fetch',
-    vi.fn(async (input: RequestInfo | URL) => {
-      const path = String(input).replace(/^\/api/, '');
-      asked.push(path);
-      return path in routes ? json(200, routes[path]) : toResponse(notFound());
-    }),
-  );
-  return { asked };
-}
-
-/** Renders with a fresh query cache (no retries) inside a memory router, since the timeline links to photos. */
-export function renderWithQueries(ui: ReactNode) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  return render(
-    <QueryClientProvider client={client}>
-      <MemoryRouter>{ui}</MemoryRouter>
-    </QueryClientProvider>,
-  );
+  return fakeApi(({ path }) => (path in routes ? ok(routes[path]) : undefined));
 }

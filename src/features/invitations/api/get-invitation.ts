@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { InvitationPreview } from '../../../../shared/schemas/members';
-import { api } from '../../../lib/api-client';
+import { invitationPreviewSchema } from '../../../../shared/schemas/members';
+import { apiGet } from '../../../lib/api-client';
 
-export const getInvitation = (token: string) => api<InvitationPreview>(`/invitations/${token}`);
+export const getInvitation = (token: string) => apiGet(`/invitations/${token}`, invitationPreviewSchema);
 
 export const invitationQueryOptions = (token: string) =>
   queryOptions({ queryKey: ['invitations', token], queryFn: () => getInvitation(token) });

@@ -3,7 +3,8 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { fakeReadingsApi, renderWithQueries } from '../testing/measurement-test-support';
+import { fakeReadingsApi } from '../testing/measurement-test-support';
+import { renderWithQueries } from '../../../testing/render';
 import { MeasurementForm } from './measurement-form';
 
 afterEach(() => {

@@ -3,7 +3,8 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { makeMeasurement, volts } from '../testing/measurement-fixtures';
-import { fakeReadingsApi, renderWithQueries } from '../testing/measurement-test-support';
+import { fakeReadingsApi } from '../testing/measurement-test-support';
+import { renderWithQueries } from '../../../testing/render';
 import { MeasurementsForFinding } from './measurements-for-finding';
 
 afterEach(() => {

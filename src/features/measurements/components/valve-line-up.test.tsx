@@ -4,7 +4,8 @@ import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { seriesLineUp } from '../testing/measurement-fixtures';
-import { fakeReadingsApi, renderWithQueries } from '../testing/measurement-test-support';
+import { fakeReadingsApi } from '../testing/measurement-test-support';
+import { renderWithQueries } from '../../../testing/render';
 import { ValveLineUp } from './valve-line-up';
 
 afterEach(() => {

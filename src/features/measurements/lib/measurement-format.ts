@@ -1,25 +1,18 @@
 import { absoluteTolerance, describeDeviation, formatQuantity, frequencyTolerance, isOverRange, limitOf, parseTolerance, quantityUnits } from '../../../../shared/bench';
 import type { MeasuredQuantity } from '../../../../shared/bench';
 import type { Measurement } from '../../../../shared/schemas/measurements';
+import { formatDateTime, formatDeviation, formatTolerance as formatToleranceBand, MINUS } from '../../../lib/format';
 
-const MINUS = '\u2212';
 // The bench library treats a capacitance of 1 µF and more as an electrolytic when no tolerance is typed.
 const DEFAULT_ELECTROLYTIC_SIZE = 1e-6;
-const percent = (fraction: number) => String(Number((fraction * 100).toPrecision(3)));
 
-/** A signed fraction as per cent to one decimal: 0.06 → "+6.0 %", −0.2 → "−20.0 %"; null → "—". */
-export function formatDeviation(fraction: number | null): string {
-  if (fraction === null || !Number.isFinite(fraction)) return '—';
-  const size = Math.abs(fraction * 100).toFixed(1);
-  return `${fraction > 0 ? '+' : fraction < 0 ? MINUS : ''}${size} %`;
-}
+export { formatDeviation };
 
 /** A typed tolerance in words: "10" → "±10 %", "-20/+50" → "−20/+50 %", "K" → "±10 %"; "max"/"min" and what cannot be read are shown as typed. */
 export function formatTolerance(text: string): string {
   if (text.trim() === '') return '';
   try {
-    const t = parseTolerance(text);
-    return typeof t === 'number' ? `±${percent(t)} %` : `${MINUS}${percent(t.minus)}/+${percent(t.plus)} %`;
+    return formatToleranceBand(parseTolerance(text));
   } catch {
     return text;
   }
@@ -56,8 +49,5 @@ export function expectedSummary(m: Pick<Measurement, 'quantity' | 'expectedText'
   return [m.expectedText, usualBand(m.quantity, m.expected ?? null)].join(' ');
 }
 
-/** Date and time a reading was taken, in the reader's own format. */
-export function formatWhen(iso: string): string {
-  const date = new Date(iso);
-  return Number.isNaN(date.getTime()) ? iso : date.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-}
+/** Date and time a reading was taken, in the reader's own format; the text as stored when it cannot be read. */
+export const formatWhen = (iso: string): string => formatDateTime(iso) || iso;

@@ -1,3 +1,4 @@
+import { signOf } from '../../../lib/format';
 import type { VoltagePoint } from './voltage-points';
 
 /** One row of the voltage plot, in per cent of the expected value. */
@@ -33,4 +34,4 @@ export function plotRows(points: readonly VoltagePoint[], limit: number): PlotRo
 /** Axis ticks: the edges, halfway and the expected value. */
 export const plotTicks = (limit: number) => [-limit, -limit / 2, 0, limit / 2, limit];
 
-export const formatTick = (v: number) => (v === 0 ? '0' : `${v > 0 ? '+' : '\u2212'}${Math.abs(v)} %`);
+export const formatTick = (v: number) => (v === 0 ? '0' : `${signOf(v)}${Math.abs(v)} %`);

@@ -1,6 +1,8 @@
-import { DEFAULT_TOLERANCE, formatQuantity, parseTolerance } from '../../../../shared/bench';
+import { DEFAULT_TOLERANCE, parseTolerance } from '../../../../shared/bench';
 import type { Measurement } from '../../../../shared/schemas/measurements';
 import { formatTolerance } from './measurement-format';
+import { formatSignedQuantity } from '../../../lib/format';
+import { naturalCompare } from '../../../../shared/natural-order';
 
 type Verdict = Measurement['verdict'];
 
@@ -50,7 +52,7 @@ function bandOf(m: Measurement): Pick<VoltagePoint, 'band' | 'bandPct'> {
 }
 
 const byLocation = (a: VoltagePoint, b: VoltagePoint) =>
-  a.group.localeCompare(b.group, undefined, { numeric: true }) || a.label.localeCompare(b.label, undefined, { numeric: true });
+  naturalCompare(a.group, b.group) || naturalCompare(a.label, b.label);
 
 /** The voltage readings as chart points: the latest at each location (and kind), in valve then pin order. */
 export function voltagePoints(measurements: readonly Measurement[]): VoltagePoint[] {
@@ -88,7 +90,7 @@ export function plotLimit(points: readonly VoltagePoint[]): number {
 }
 
 /** Volts with an SI prefix and a true minus sign: −2.1 V, 1.2 kV; "—" for none. */
-export const voltsText = (v: number | null) => (v === null ? '—' : formatQuantity(v, 'V').replace('-', '\u2212'));
+export const voltsText = (v: number | null) => (v === null ? '—' : formatSignedQuantity(v, 'V'));
 
 /** One point in words, e.g. "V5 pin 7 reads 310 V against 255 V ±10 %". */
 export function describePoint(p: VoltagePoint): string {

@@ -1,11 +1,7 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render } from '@testing-library/react';
-import type { ReactNode } from 'react';
-import { vi } from 'vitest';
 import { BenchInputError } from '../../../../shared/bench';
 import type { LineUp, Measurement, MeasurementInput } from '../../../../shared/schemas/measurements';
 import { makeMeasurement } from './measurement-fixtures';
-import { apiError, notFound, toResponse } from '../../../testing/fake-api';
+import { apiError, fakeApi, notFound, toResponse } from '../../../testing/fake-api';
 
 export interface Call {
   method: string;
@@ -26,10 +22,8 @@ export function fakeReadingsApi(initial: Measurement[], { lineUp, refuseLocation
   let valves: LineUp = lineUp ?? { valves: [], liveChassis: { likely: false, reasons: [] } };
   let nextId = 100;
   const calls: Call[] = [];
-  const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
-    const url = String(input);
-    const method = init.method ?? 'GET';
-    const body: unknown = typeof init.body === 'string' ? JSON.parse(init.body) : undefined;
+  const { fetchMock } = fakeApi(async ({ method, path, body }) => {
+    const url = `/api${path}`;
     calls.push({ method, url, body });
     const findingId = Number(/findingId=(\d+)/.exec(url)?.[1]);
     if (/\/measurements(\?|$)/.test(url) && method === 'GET') return json(200, findingId ? list.filter((m) => m.findingId === findingId) : list);
@@ -70,11 +64,5 @@ export function fakeReadingsApi(initial: Measurement[], { lineUp, refuseLocation
     }
     return toResponse(notFound());
   });
-  vi.stubGlobal('fetch', fetchMock);
   return { calls, fetchMock };
-}
-
-export function renderWithQueries(ui: ReactNode) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  return { client, ...render(<QueryClientProvider client={client}>{ui}</QueryClientProvider>) };
 }

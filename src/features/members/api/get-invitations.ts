@@ -1,8 +1,9 @@
+import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Invitation } from '../../../../shared/schemas/members';
-import { api } from '../../../lib/api-client';
+import { invitationSchema } from '../../../../shared/schemas/members';
+import { apiGet } from '../../../lib/api-client';
 
-export const getInvitations = (restorationId: number) => api<Invitation[]>(`/restorations/${restorationId}/invitations`);
+export const getInvitations = (restorationId: number) => apiGet(`/restorations/${restorationId}/invitations`, z.array(invitationSchema));
 
 export const invitationsQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: ['restorations', restorationId, 'invitations'], queryFn: () => getInvitations(restorationId) });

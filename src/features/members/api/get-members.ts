@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Member } from '../../../../shared/schemas/members';
+import { memberSchema } from '../../../../shared/schemas/members';
 import { apiAllPages } from '../../../lib/api-client';
 
-export const getMembers = (restorationId: number) => apiAllPages<Member>(`/restorations/${restorationId}/members`);
+export const getMembers = (restorationId: number) => apiAllPages(`/restorations/${restorationId}/members`, memberSchema);
 
 export const membersQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: ['restorations', restorationId, 'members'], queryFn: () => getMembers(restorationId) });

@@ -2,6 +2,7 @@ import { roleLabels } from '../../../../shared/permissions';
 import type { Invitation } from '../../../../shared/schemas/members';
 import { useResendInvitation, useRevokeInvitation } from '../api/manage-members';
 import { FormAlertInline } from './form-alert-inline';
+import { formatMediumDate } from '../../../lib/format';
 
 export function InvitationsList({ restorationId, invitations }: { restorationId: number; invitations: Invitation[] }) {
   const resend = useResendInvitation(restorationId);
@@ -15,7 +16,7 @@ export function InvitationsList({ restorationId, invitations }: { restorationId:
             <div className="min-w-0 flex-1">
               <p className="truncate font-semibold">{i.email}</p>
               <p className="text-sm text-ink-soft">
-                {roleLabels[i.role]} · expires {new Date(i.expiresAt).toLocaleDateString()}
+                {roleLabels[i.role]} · expires {formatMediumDate(i.expiresAt)}
               </p>
             </div>
             <button type="button" className="min-h-11 rounded-lg px-3 text-sm hover:bg-sunken" disabled={resend.isPending} onClick={() => resend.mutate(i.id)}>

@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Meta } from '../../../../shared/schemas/meta';
-import { api } from '../../../lib/api-client';
+import { metaSchema } from '../../../../shared/schemas/meta';
+import { apiGet } from '../../../lib/api-client';
 
-export const getMeta = () => api<Meta>('/meta');
+export const getMeta = () => apiGet('/meta', metaSchema);
 
 export const metaQueryOptions = () => queryOptions({ queryKey: ['meta'], queryFn: getMeta, staleTime: Infinity });
 

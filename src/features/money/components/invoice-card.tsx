@@ -5,9 +5,10 @@ import { inputClass } from '../../../components/field';
 import { documentUrl, useVoidInvoice } from '../api/invoices';
 import { InvoiceTotals } from './invoice-totals';
 import { moneyText } from './money-text';
+import { formatLongDate } from '../../../lib/format';
 
 const statusText: Record<Invoice['status'], string> = { open: 'Open', paid: 'Paid', void: 'Void', credit: 'Credit note' };
-const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { dateStyle: 'long' });
+const day = (iso: string) => formatLongDate(iso);
 
 /** One issued document as it was issued: never edited; a technician may void it, which issues a credit note. */
 export function InvoiceCard({ restorationId, invoice: i, all, canEdit }: { restorationId: number; invoice: Invoice; all: Invoice[]; canEdit: boolean }) {

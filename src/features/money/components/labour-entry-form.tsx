@@ -3,6 +3,7 @@ import { Button } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import { useAddLabour } from '../api/labour';
 import { LabourTargetSelect, targetOf, type TargetValue } from './labour-target';
+import { calendarDay } from '../../../lib/format';
 
 /** Hours as typed ("1.5", "0.25", "2") to whole minutes; null when it is no number of hours in a day. */
 export const typedMinutes = (text: string) => {
@@ -12,7 +13,7 @@ export const typedMinutes = (text: string) => {
 };
 
 /** Today on the reader's calendar, as a date input writes it. */
-const today = () => new Date().toLocaleDateString('en-CA');
+const today = () => calendarDay(new Date());
 
 /** Typed hours on a day (noon on that day in the reader's zone), for work done away from the timer. */
 export function LabourEntryForm({ restorationId }: { restorationId: number }) {

@@ -5,8 +5,9 @@ import { useLabour } from '../api/labour';
 import { LabourEntryForm } from './labour-entry-form';
 import { LabourTimer } from './labour-timer';
 import { hoursText } from './money-text';
+import { formatMediumDate } from '../../../lib/format';
 
-const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { dateStyle: 'medium' });
+const day = (iso: string) => formatMediumDate(iso);
 
 /** The labour log on the Money tab: the reader's timer, typed hours, every entry and this week's totals. */
 export function LabourLog({ restorationId }: { restorationId: number }) {

@@ -5,6 +5,7 @@ import { Button } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import { useStartTimer, useStopTimer } from '../api/labour';
 import { clockText, LabourTargetSelect, targetOf, type TargetValue } from './labour-target';
+import { formatTimeOfDay } from '../../../lib/format';
 
 /** Seconds since an instant, ticking once a second while shown. */
 function useElapsed(since: string | null): number {
@@ -35,7 +36,7 @@ export function LabourTimer({ restorationId, running }: { restorationId: number;
   if (running && running.restorationId !== restorationId)
     return (
       <p className="rounded-lg bg-sunken p-3">
-        Your timer is running on another set since {new Date(running.startedAt).toLocaleTimeString(undefined, { timeStyle: 'short' })}.{' '}
+        Your timer is running on another set since {formatTimeOfDay(running.startedAt)}.{' '}
         <Link className="font-semibold underline" to={`/restorations/${running.restorationId}/money`}>Go to it to stop it</Link>.
       </p>
     );
@@ -44,7 +45,7 @@ export function LabourTimer({ restorationId, running }: { restorationId: number;
       <div className="flex flex-wrap items-center gap-3 rounded-lg border border-glow bg-sunken p-3">
         <p role="timer" aria-label="Time on the running timer" className="font-mono text-2xl">{clockText(elapsed)}</p>
         <p className="text-sm text-ink-soft">
-          Running since {new Date(running.startedAt).toLocaleTimeString(undefined, { timeStyle: 'short' })}{running.billable ? '' : ' (not billable)'}{running.note ? `: ${running.note}` : ''}
+          Running since {formatTimeOfDay(running.startedAt)}{running.billable ? '' : ' (not billable)'}{running.note ? `: ${running.note}` : ''}
         </p>
         <Button onClick={() => stop.mutate(undefined)} disabled={stop.isPending}>{stop.isPending ? 'Stopping…' : 'Stop the timer'}</Button>
         {error && <p role="alert" className="w-full font-semibold text-danger">{error.message}</p>}

@@ -3,8 +3,9 @@ import { minorDigits } from '../../../../shared/money/currency';
 import { invoiceKindLabels, type Invoice } from '../../../../shared/schemas/invoices';
 import { Button } from '../../../components/button';
 import { useRecordPayment } from '../api/payments';
+import { calendarDay } from '../../../lib/format';
 
-const today = () => new Date().toLocaleDateString('en-CA');
+const today = () => calendarDay(new Date());
 const field = 'mt-1 block w-full rounded-lg border border-rule bg-paper px-3 py-2';
 
 /** A bank transfer or cash that arrived, recorded by a technician against an open deposit request or invoice. */

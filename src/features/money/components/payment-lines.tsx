@@ -5,9 +5,10 @@ import { Button } from '../../../components/button';
 import { useConfirm } from '../../../components/use-confirm';
 import { useRefund } from '../api/payments';
 import { moneyText } from './money-text';
+import { formatMediumDate } from '../../../lib/format';
 
 const statusWords: Record<Payment['status'], string> = { pending: 'processing', succeeded: 'received', failed: 'did not go through' };
-const dayText = (p: Payment) => new Date(p.receivedOn ? `${p.receivedOn}T12:00:00Z` : p.createdAt).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+const dayText = (p: Payment) => formatMediumDate(p.receivedOn ? `${p.receivedOn}T12:00:00Z` : p.createdAt);
 
 function describe(p: Payment) {
   if (p.kind === 'refund') return `Refund${p.method === 'card' ? ' to the card' : ` (${paymentMethodLabels[p.method].toLowerCase()})`}${p.status === 'succeeded' ? '' : `, ${statusWords[p.status]}`}`;

@@ -1,6 +1,6 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { createMemoryRouter, RouterProvider, useSearchParams } from 'react-router';
@@ -16,6 +16,8 @@ import { OwnerHome } from './owner-home';
 import { OwnerSet } from './owner-set';
 import { OwnerSetCard } from './owner-set-card';
 import { RepairedFindings } from './repaired-findings';
+import type { TimelineEvent } from '../../../../shared/schemas/events';
+import { testQueryClient } from '../../../testing/render';
 
 afterEach(() => {
   cleanup();
@@ -38,7 +40,7 @@ const finding = (id: number, status: Finding['status']): Finding => ({
   questionOpen: false, commentCount: 0, createdAt: '2026-11-20T09:00:00Z', updatedAt: '2026-11-20T09:00:00Z',
 });
 const findings = [finding(4, 'repaired'), finding(5, 'confirmed')];
-const event = { id: 1, kind: 'stage-changed', at: '2026-11-24T12:00:00Z', actorName: 'Tessa Bench', summary: 'Stage: Assessment → Repair', photoId: null, findingId: null, thumbUrl: null };
+const event = { id: 1, kind: 'stage-changed', at: '2026-11-24T12:00:00Z', actorName: 'Tessa Bench', summary: 'Stage: Assessment → Repair', photoId: null, findingId: null, thumbUrl: null, caution: false } satisfies TimelineEvent;
 
 /** Composes the page the way the /home route does, with the photos and findings given and the timeline fetched. */
 function showHome(sets: Restoration[], path = '/home') {
@@ -57,7 +59,7 @@ function showHome(sets: Restoration[], path = '/home') {
     return <OwnerHome name="Mara Lind" sets={sets} selectedId={selectedId} renderSet={renderSet} renderCard={(r, to) => <OwnerSetCard restoration={r} hero={photos[1]} to={to} />} now={new Date(2026, 10, 24, 9)} />;
   };
   const router = createMemoryRouter([{ path: '/home', Component: Page }], { initialEntries: [path] });
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  const client = testQueryClient();
   render(
     <QueryClientProvider client={client}>
       <RouterProvider router={router} />

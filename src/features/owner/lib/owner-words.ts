@@ -1,6 +1,7 @@
 import type { Finding } from '../../../../shared/schemas/findings';
 import type { Photo } from '../../../../shared/schemas/photos';
 import { stageLabels, type Restoration, type Stage } from '../../../../shared/schemas/restorations';
+import { hourIn } from '../../../lib/format';
 
 /** Where the set is, in the owner's words: "With the workshop: repair", or "Ready to collect" once returned. */
 export function stageInWords(stage: Stage): string {
@@ -9,12 +10,6 @@ export function stageInWords(stage: Stage): string {
 
 /** The set as its owner knows it: "Aldermoor Cantata" (the year is shown beside it). */
 export const setName = (r: Pick<Restoration, 'make' | 'model'>) => `${r.make} ${r.model}`.trim();
-
-/** The hour (0–23) on the clock of `timeZone`; the browser's own zone when none is given. */
-function hourIn(now: Date, timeZone?: string): number {
-  const hour = new Intl.DateTimeFormat('en', { hour: 'numeric', hourCycle: 'h23', timeZone }).formatToParts(now).find((p) => p.type === 'hour')?.value;
-  return hour === undefined ? now.getHours() : Number(hour) % 24;
-}
 
 /** "Good morning, Mara": the first name, and the part of the day on the reader's own clock (their time zone). */
 export function greeting(name: string | null | undefined, now = new Date(), timeZone?: string): string {

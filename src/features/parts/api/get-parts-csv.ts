@@ -1,3 +1,4 @@
+import { personTimeZone } from '../../../lib/format';
 /**
  * The ledger as a spreadsheet file. A plain link with `download` fetches it: same origin, so the session cookie goes
  * with it, and the server names the file. Owners get it without costs, sources and notes, as in the ledger. Costs
@@ -6,7 +7,7 @@
 export const partsCsvHref = (restorationId: number, currency?: string) => {
   const query = new URLSearchParams();
   if (currency) query.set('currency', currency);
-  const zone = Intl.DateTimeFormat().resolvedOptions().timeZone;
+  const zone = personTimeZone();
   if (zone) query.set('timeZone', zone);
   const search = query.toString();
   return `/api/restorations/${restorationId}/parts.csv${search ? `?${search}` : ''}`;

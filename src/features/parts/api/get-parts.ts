@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Part } from '../../../../shared/schemas/parts';
+import { partSchema } from '../../../../shared/schemas/parts';
 import { apiAllPages } from '../../../lib/api-client';
 import { partKeys } from './keys';
 
 /** The restoration's parts ledger; owners get it without costs, sources and notes. */
-export const getParts = (restorationId: number) => apiAllPages<Part>(`/restorations/${restorationId}/parts`);
+export const getParts = (restorationId: number) => apiAllPages(`/restorations/${restorationId}/parts`, partSchema);
 
 export const partsQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: partKeys.restoration(restorationId), queryFn: () => getParts(restorationId) });

@@ -4,7 +4,8 @@ import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { makePart } from '../testing/part-fixtures';
-import { fakePartsApi, renderWithQueries } from '../testing/parts-test-support';
+import { fakePartsApi } from '../testing/parts-test-support';
+import { renderWithQueries } from '../../../testing/render';
 import { PartForm } from './part-form';
 
 afterEach(() => {

@@ -2,7 +2,7 @@ import { createColumnHelper, type FilterFn } from '@tanstack/react-table';
 import { mainsPositionLabels, partActionLabels, partStates, type Part } from '../../../../shared/schemas/parts';
 import type { FindingChoice } from '../lib/finding-choice';
 import { formatMinor, type Currency } from '../lib/money';
-import { compareComponentRefs } from '../../../../shared/natural-order';
+import { byComponentRef } from '../../../lib/table-sorting';
 import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
 import { StateCell } from './state-cell';
 import { WarningList } from './warning-list';
@@ -44,7 +44,7 @@ export function partColumns({ showPrivate, currency, findingOf, onAdvance, onEdi
           <OnTheDiagramLink restorationId={c.row.original.restorationId} text={c.getValue()} />
         </span>
       ),
-      sortingFn: (a, b, id) => compareComponentRefs(a.getValue<string>(id), b.getValue<string>(id)),
+      sortingFn: byComponentRef,
     }),
     helper.accessor('action', { header: 'Action', cell: (c) => partActionLabels[c.getValue()], enableSorting: false }),
     helper.accessor('state', {

@@ -4,7 +4,8 @@ import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { asOwnerSees, makePart } from '../testing/part-fixtures';
-import { fakePartsApi, gate, renderWithQueries } from '../testing/parts-test-support';
+import { fakePartsApi, gate } from '../testing/parts-test-support';
+import { renderWithQueries } from '../../../testing/render';
 import { PartsLedger } from './parts-ledger';
 
 afterEach(() => {

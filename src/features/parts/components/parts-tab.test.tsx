@@ -4,7 +4,8 @@ import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { asOwnerSees, makePart } from '../testing/part-fixtures';
-import { fakePartsApi, renderWithQueries } from '../testing/parts-test-support';
+import { fakePartsApi } from '../testing/parts-test-support';
+import { renderWithQueries } from '../../../testing/render';
 import { PartsTab } from './parts-tab';
 
 afterEach(() => {

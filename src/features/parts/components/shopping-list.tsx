@@ -3,6 +3,7 @@ import { Button } from '../../../components/button';
 import { EmptyState } from '../../../components/states';
 import { printAlone } from '../lib/print-alone';
 import { shoppingLines, type ShoppingLine } from '../lib/shopping-list';
+import { formatLongDate } from '../../../lib/format';
 
 export interface ShoppingListProps {
   parts: Part[];
@@ -10,7 +11,7 @@ export interface ShoppingListProps {
   setName: string;
 }
 
-const today = () => new Date().toLocaleDateString(undefined, { day: 'numeric', month: 'long', year: 'numeric' });
+const today = () => formatLongDate(new Date());
 
 function Lines({ heading, lines }: { heading: string; lines: ShoppingLine[] }) {
   if (lines.length === 0) return null;

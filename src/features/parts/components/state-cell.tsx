@@ -1,7 +1,7 @@
 import { partStateLabels, type Part } from '../../../../shared/schemas/parts';
 import { nextState, StateMark } from './state-mark';
+import { formatMediumDate as dateOnly } from '../../../lib/format';
 
-const dateOnly = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 
 /** A part's state, when it was fitted, and (for technicians) one button to move it on a step. */
 export function StateCell({ part, onAdvance, busy = false }: { part: Part; onAdvance?: (part: Part) => void; busy?: boolean }) {

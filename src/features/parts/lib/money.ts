@@ -1,14 +1,10 @@
+import { formatMoney, minorDigits } from '../../../../shared/money';
+
 /** An ISO 4217 code: the ledger stores minor units, shown in the workshop's currency (its settings). */
 export type Currency = string;
 
-/** How many minor units make one major unit, as a power of ten: 2 for pence and cents, 0 for yen. */
-export const minorDigits = (currency: Currency): number =>
-  new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
-
 /** A cost in minor units (185) as money in the reader's locale (£1.85). */
-export function formatMinor(minor: number, currency: Currency, locale?: string): string {
-  return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(minor / 10 ** minorDigits(currency));
-}
+export const formatMinor = (minor: number, currency: Currency, locale?: string): string => formatMoney({ amount: minor, currency }, locale);
 
 /** Minor units back to the figure a person types: 185 → "1.85". */
 export const minorToText = (minor: number | null, currency: Currency): string =>

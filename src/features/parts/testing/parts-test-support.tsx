@@ -1,10 +1,6 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render } from '@testing-library/react';
-import type { ReactNode } from 'react';
-import { vi } from 'vitest';
 import type { Part, PartInput } from '../../../../shared/schemas/parts';
 import { makePart } from './part-fixtures';
-import { apiError, notFound, toResponse } from '../../../testing/fake-api';
+import { apiError, fakeApi, notFound, toResponse } from '../../../testing/fake-api';
 
 export interface Call {
   method: string;
@@ -26,10 +22,8 @@ export function fakePartsApi(
   let list = [...initial];
   let nextId = 100;
   const calls: Call[] = [];
-  const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
-    const url = String(input);
-    const method = init.method ?? 'GET';
-    const body: unknown = typeof init.body === 'string' ? JSON.parse(init.body) : undefined;
+  const { fetchMock } = fakeApi(async ({ method, path, body }) => {
+    const url = `/api${path}`;
     calls.push({ method, url, body });
     if (url.endsWith('/parts') && method === 'GET') return json(200, list);
     // The workshop's currency comes with the deployment's meta.
@@ -52,14 +46,9 @@ export function fakePartsApi(
     }
     return toResponse(notFound());
   });
-  vi.stubGlobal('fetch', fetchMock);
   return { calls, fetchMock };
 }
 
-export function renderWithQueries(ui: ReactNode) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  return { client, ...render(<QueryClientProvider client={client}>{ui}</QueryClientProvider>) };
-}
 
 /** A promise and the function that settles it. */
 export function gate() {

@@ -1,12 +1,12 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen } from '@testing-library/react';
+import { cleanup, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../shared/permissions';
 import { ReportPanel } from './report-panel';
 import { apiError, notFound, toResponse } from '../../../testing/fake-api';
+import { renderWithQueries } from '../../../testing/render';
 
 afterEach(() => {
   cleanup();
@@ -34,11 +34,7 @@ function fakeSend(answer: () => Response, warnings: { code: string; message: str
 }
 
 const renderPanel = (role: Role) =>
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { mutations: { retry: false } } })}>
-      <ReportPanel restorationId={7} role={role} />
-    </QueryClientProvider>,
-  );
+  renderWithQueries(<ReportPanel restorationId={7} role={role} />, { router: false });
 
 describe('report panel', () => {
   it('when a technician sends the report, then it shows it is sending, then who it was sent to', async () => {

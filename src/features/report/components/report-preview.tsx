@@ -1,6 +1,6 @@
 import type { ReportPreview as Preview } from '../../../../shared/schemas/safety';
+import { formatDateTime as when } from '../../../lib/format';
 
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 /** The e-mail as the owner will receive it, with the warnings first when sending now would be premature. */
 export function ReportPreview({ preview }: { preview: Preview }) {

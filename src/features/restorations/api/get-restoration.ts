@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Restoration } from '../../../../shared/schemas/restorations';
-import { api } from '../../../lib/api-client';
+import { restorationSchema } from '../../../../shared/schemas/restorations';
+import { apiGet } from '../../../lib/api-client';
 
-export const getRestoration = (id: number) => api<Restoration>(`/restorations/${id}`);
+export const getRestoration = (id: number) => apiGet(`/restorations/${id}`, restorationSchema);
 
 export const restorationQueryOptions = (id: number) =>
   queryOptions({ queryKey: ['restorations', id], queryFn: () => getRestoration(id) });

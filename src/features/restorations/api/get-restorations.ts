@@ -1,5 +1,5 @@
 import { infiniteQueryOptions, keepPreviousData, queryOptions, useInfiniteQuery, useQuery } from '@tanstack/react-query';
-import type { Restoration, Stage } from '../../../../shared/schemas/restorations';
+import { restorationSchema, type Restoration, type Stage } from '../../../../shared/schemas/restorations';
 import { apiAllPages, apiPage } from '../../../lib/api-client';
 
 export interface RestorationFilter {
@@ -16,7 +16,7 @@ const pathOf = (filter: RestorationFilter) => {
 };
 
 /** Every restoration the caller is on (the owner's home: a person's own sets are few). */
-export const getRestorations = (filter: RestorationFilter = {}): Promise<Restoration[]> => apiAllPages<Restoration>(pathOf(filter));
+export const getRestorations = (filter: RestorationFilter = {}): Promise<Restoration[]> => apiAllPages(pathOf(filter), restorationSchema);
 
 export const restorationsQueryOptions = (filter: RestorationFilter = {}) =>
   // While a search is typed, the previous list stays on screen instead of flashing to a spinner.
@@ -28,7 +28,7 @@ export const useRestorations = (filter: RestorationFilter = {}) => useQuery(rest
 export const benchPagesQueryOptions = (filter: RestorationFilter = {}) =>
   infiniteQueryOptions({
     queryKey: ['restorations', 'bench', filter],
-    queryFn: ({ pageParam }) => apiPage<Restoration>(pathOf(filter), pageParam),
+    queryFn: ({ pageParam }) => apiPage(pathOf(filter), pageParam, restorationSchema),
     initialPageParam: null as string | null,
     getNextPageParam: (last) => last.next,
     placeholderData: keepPreviousData,

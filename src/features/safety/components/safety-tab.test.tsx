@@ -1,11 +1,11 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen } from '@testing-library/react';
+import { cleanup, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../shared/permissions';
 import type { SafetyStatus, SafetyTest, SoakLog } from '../../../../shared/schemas/safety';
 import { SafetyTab } from './safety-tab';
+import { renderWithQueries } from '../../../testing/render';
 
 afterEach(() => {
   cleanup();
@@ -26,11 +26,7 @@ function serve(status: SafetyStatus) {
   vi.stubGlobal('fetch', vi.fn(async (input: RequestInfo | URL) => (String(input).endsWith('/soak-sessions') ? json(soak) : json(status))));
 }
 const show = (role: Role) =>
-  render(
-    <QueryClientProvider client={new QueryClient()}>
-      <SafetyTab restorationId={7} role={role} liveChassis={false} />
-    </QueryClientProvider>,
-  );
+  renderWithQueries(<SafetyTab restorationId={7} role={role} liveChassis={false} />, { router: false });
 
 describe('safety tab', () => {
   it('when the latest test failed, then the technician sees the failing line with its limit and source, the gate, and the override form', async () => {

@@ -1,5 +1,6 @@
 import { equipmentClassLabels, formatQuantity } from '../../../../shared/bench';
 import { specificationLabels, type SafetyLineView, type SafetyTest } from '../../../../shared/schemas/safety';
+import { formatDateTime as when } from '../../../lib/format';
 
 const verdictStyle: Record<SafetyLineView['verdict'], { text: string; className: string }> = {
   pass: { text: 'Pass', className: 'text-ok' },
@@ -7,7 +8,6 @@ const verdictStyle: Record<SafetyLineView['verdict'], { text: string; className:
   'not-applicable': { text: 'Not applicable', className: 'text-ink-soft' },
   'not-measured': { text: 'Not measured', className: 'text-ink-soft' },
 };
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 /** One recorded test: each line with the value, its limit and the source of the limit, and the verdict. */
 export function SafetyTestResult({ test, heading }: { test: SafetyTest; heading: string }) {

@@ -9,9 +9,9 @@ import { useStopSoak } from '../api/stop-soak';
 import { SoakCaution } from './safety-test-caution';
 import { SoakPlot } from './soak-plot';
 import { SoakTimer } from './soak-timer';
+import { formatDateTime as when } from '../../../lib/format';
 
 const blank = { ambientC: '', chassisC: '', mainsCurrent: '', faults: '', actionTaken: '' };
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 /** Soak runs: start and stop (the clock survives a reload), temperatures, mains current and faults; a fault opens a finding. */
 export function SoakPanel({ restorationId, canRecord }: { restorationId: number; canRecord: boolean }) {
