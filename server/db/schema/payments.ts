@@ -45,6 +45,7 @@ export const payments = pgTable(
     index('payments_invoice_id_idx').on(t.invoiceId),
     index('payments_restoration_id_idx').on(t.restorationId),
     index('payments_refund_of_id_idx').on(t.refundOfId),
+    index('payments_recorded_by_id_idx').on(t.recordedById),
     check('payments_amount_positive', sql`${t.amount} > 0`),
   ],
 );

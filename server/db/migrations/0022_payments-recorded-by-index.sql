@@ -1,0 +1,1 @@
+CREATE INDEX "payments_recorded_by_id_idx" ON "payments" USING btree ("recorded_by_id");
