@@ -43,10 +43,12 @@ export type { LiveChassisAssessment } from './live-chassis';
 export { readingVerdict } from './reading-verdict';
 export type { ReadingVerdict, Tolerance } from './reading-verdict';
 export { parseTolerance, TOLERANCE_LETTERS } from './tolerance-text';
-export {
-  absoluteTolerance, DEFAULT_ELECTROLYTIC_TOLERANCE, DEFAULT_INSULATION_MIN, DEFAULT_TOLERANCE, limitKinds, limitOf, measuredQuantities, measurementVerdict, quantityUnits,
-} from './measurement-verdict';
-export type { MeasuredQuantity, MeasurementInput, MeasurementVerdict } from './measurement-verdict';
+export { measurementVerdict } from './measurement-verdict';
+export type { MeasurementInput, MeasurementVerdict } from './measurement-verdict';
+export { DEFAULT_TOLERANCE, measuredQuantities, readingKinds } from './reading-kinds';
+export type { FormHints, MeasuredQuantity, ReadingKind, ReadingRule, SignRule, UsualBand } from './reading-kinds';
+export { absoluteTolerance, applicableFields, applicableTexts, limitOf, outHeadings } from './reading-kind-rules';
+export type { KindTexts } from './reading-kind-rules';
 export { partWarnings, readRating } from './part-rules';
 export type { MainsPosition, PartWarning } from './part-rules';
 export {
