@@ -72,9 +72,9 @@ export interface ReadingKind {
 /** ±20 %: the usual allowance on voltage charts and old carbon parts when the manual gives none (common practice, no source). */
 export const DEFAULT_TOLERANCE = 0.2;
 /** An electrolytic's usual tolerance, −20 %/+50 % (IEC 60062 letter S), used for capacitances of 1 µF and more when none is typed. */
-export const DEFAULT_ELECTROLYTIC_TOLERANCE = { minus: 0.2, plus: 0.5 } as const;
+const DEFAULT_ELECTROLYTIC_TOLERANCE = { minus: 0.2, plus: 0.5 } as const;
 /** A minimum insulation resistance of 1 MΩ at 500 V DC (in-service testing code of practice, Class I), used when none is given. */
-export const DEFAULT_INSULATION_MIN = 1e6;
+const DEFAULT_INSULATION_MIN = 1e6;
 
 const plusMinus20 = (words: string) => (): UsualBand => ({ tolerance: DEFAULT_TOLERANCE, words, label: `${formatTolerance(DEFAULT_TOLERANCE)} (usual)` });
 const chartBand = plusMinus20('the usual allowance on service charts when the manual states none; common practice');
