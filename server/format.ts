@@ -10,5 +10,3 @@ export const documentPlace: FormatPlace = { locale: 'en-GB', timeZone: 'UTC' };
 
 /** "2 December 2026" on the document's calendar. */
 export const documentDate = (instant: string | number | Date, place: FormatPlace = documentPlace) => formatInstant(instant, 'longDate', place);
-/** "2 Dec 2026, 14:05" on the document's calendar. */
-export const documentDateTime = (instant: string | number | Date, place: FormatPlace = documentPlace) => formatInstant(instant, 'dateTime', place);

@@ -55,8 +55,6 @@ function parse(req: SignedRequest): Parsed | undefined {
   return undefined;
 }
 
-/** The key id a request claims, if it is signed with Signature Version 4 at all. */
-export const claimedKeyId = (req: SignedRequest) => parse(req)?.keyId;
 export const isPresigned = (req: SignedRequest) => !header(req, 'authorization') && new URLSearchParams(req.url.split('?')[1] ?? '').has('X-Amz-Signature');
 
 /** True when the request is signed with this key pair and the signature matches. */

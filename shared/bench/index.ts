@@ -9,7 +9,7 @@ export { formatQuantity } from './quantity-format';
 export { capacitorCode } from './capacitor-code';
 export { meterCorrection, meterOhms, loadedReading } from './meter-loading';
 export type { MeterCorrection, MeterSpec } from './meter-loading';
-export { correctedForMeter, parseMeter } from './meter-text';
+export { parseMeter } from './meter-text';
 export type { MeterTexts } from './meter-text';
 export { heaterChain } from './heater-chain';
 export type { ChainValve, HeaterChain, HeaterChainInput } from './heater-chain';
@@ -17,7 +17,7 @@ export { anodeDissipation, rectifierLoad, resistorDissipation } from './dissipat
 export type { RatingCheck } from './dissipation';
 export { frequencyOf, frequencyTolerance, IF_PRESETS, wavelengthOf } from './alignment';
 export type { IfPreset } from './alignment';
-export { describeDeviation, signedPercent } from './verdict-words';
+export { describeDeviation } from './verdict-words';
 export type { DeviationInput, LimitKind } from './verdict-words';
 export { colourBands } from './colour-bands';
 export type { ColourBandReading } from './colour-bands';
@@ -42,15 +42,17 @@ export { liveChassisLikely } from './live-chassis';
 export type { LiveChassisAssessment } from './live-chassis';
 export { readingVerdict } from './reading-verdict';
 export type { ReadingVerdict, Tolerance } from './reading-verdict';
-export { parseTolerance, TOLERANCE_LETTERS } from './tolerance-text';
-export {
-  absoluteTolerance, DEFAULT_ELECTROLYTIC_TOLERANCE, DEFAULT_INSULATION_MIN, DEFAULT_TOLERANCE, limitKinds, limitOf, measuredQuantities, measurementVerdict, quantityUnits,
-} from './measurement-verdict';
-export type { MeasuredQuantity, MeasurementInput, MeasurementVerdict } from './measurement-verdict';
+export { parseTolerance } from './tolerance-text';
+export { measurementVerdict } from './measurement-verdict';
+export type { MeasurementInput, MeasurementVerdict } from './measurement-verdict';
+export { DEFAULT_TOLERANCE, measuredQuantities, readingKinds } from './reading-kinds';
+export type { FormHints, MeasuredQuantity, ReadingKind, ReadingRule, SignRule, UsualBand } from './reading-kinds';
+export { absoluteTolerance, applicableFields, applicableTexts, limitOf, outHeadings } from './reading-kind-rules';
+export type { KindTexts } from './reading-kind-rules';
 export { partWarnings, readRating } from './part-rules';
 export type { MainsPosition, PartWarning } from './part-rules';
 export {
-  EARTH_CONTINUITY_BASE_OHMS, INSULATION_TEST_VOLTS, SAFETY_SOURCES, capacitorCurrent, earthContinuityLimit, equipmentClassLabels, equipmentClasses,
+  capacitorCurrent, earthContinuityLimit, equipmentClassLabels, equipmentClasses,
   flexSizes, insulationMinimum, leadResistance, safetyTest, touchCurrentLimit,
 } from './safety-test';
 export type { EquipmentClass, LineVerdict, SafetyLine, SafetyTestInput, SafetyTestResult } from './safety-test';

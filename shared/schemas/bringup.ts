@@ -122,7 +122,6 @@ export const bringupSchema = z.object({
   })),
 });
 export type Bringup = z.infer<typeof bringupSchema>;
-export type BringupStep = Bringup['steps'][number];
 
 /**
  * What still stands between a pre-power checklist and its sign-off, in words a person can act on:

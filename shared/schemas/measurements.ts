@@ -1,11 +1,6 @@
 import { z } from 'zod';
-import { measuredQuantities, type MeasuredQuantity } from '../bench/measurement-verdict';
+import { measuredQuantities } from '../bench/reading-kinds';
 import { idSchema, bodyIdSchema } from './ids';
-
-export const quantityLabels: Record<MeasuredQuantity, string> = {
-  esr: 'ESR', capacitance: 'Capacitance', leakage: 'Leakage current', resistance: 'Resistance', 'dc-voltage': 'DC voltage',
-  'ac-voltage': 'AC voltage', current: 'Current', insulation: 'Insulation resistance', frequency: 'Frequency',
-};
 
 const text = (max: number) => z.string().trim().max(max);
 

@@ -10,4 +10,3 @@ export const pageQuerySchema = z.object({
   limit: z.coerce.number().int().min(1).max(PAGE_MAX).default(PAGE_DEFAULT),
   cursor: z.string().max(400).optional(),
 });
-export type PageQuery = z.infer<typeof pageQuerySchema>;

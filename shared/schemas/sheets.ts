@@ -21,7 +21,6 @@ export const sheetUploadFieldsSchema = z.object({
   title: z.string().trim().max(200, 'Keep the title under 200 characters').default(''),
   ownerVisible: formFlag,
 });
-export type SheetUploadFields = z.input<typeof sheetUploadFieldsSchema>;
 
 export const sheetPagePatchSchema = z
   .object({ kind: z.enum(sheetKinds), title: z.string().trim().max(200, 'Keep the title under 200 characters'), ownerVisible: z.boolean() })
@@ -56,7 +55,6 @@ export type Sheet = z.infer<typeof sheetSchema>;
 export const markRefSchema = componentRefSchema.min(1, 'give the reference, e.g. R23').transform((ref) => ref.toUpperCase());
 
 export const referenceShapes = ['pin', 'rect'] as const;
-export type ReferenceShape = (typeof referenceShapes)[number];
 
 /** A reference mark: on a sheet page (a diagram mark) or on a chassis photo (a location mark), never both. */
 export const referenceMarkInputSchema = z

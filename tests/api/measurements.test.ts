@@ -55,6 +55,27 @@ describe('measurements', () => {
     expect(patched).toMatchObject({ verdict: 'out', readingText: '310 V', reading: 310 });
   });
 
+  it('when a field does not apply to the kind of reading, then it is neither judged nor stored, as the form does', async () => {
+    // A tolerance means nothing to an ESR (its table rules) and a rating nothing to a voltage: left over from another kind, they are dropped.
+    const esr = await post({ location: 'C1a', quantity: 'esr', expected: '32µ', rating: '350 V', tolerance: 'nonsense', reading: '0.9 Ω', chartMeter: '1k/V 250 V' });
+    expect(esr.status).toBe(201);
+    expect(esr.body).toMatchObject({ toleranceText: '', ratingText: '350 V', chartMeterText: '' });
+    const volts = (await tech.patch(`/api/measurements/${esr.body.id}`).send({ quantity: 'dc-voltage', expected: '255', reading: '263' })).body;
+    expect(volts).toMatchObject({ quantity: 'dc-voltage', ratingText: '', rating: null, verdict: 'within' }); // +3.1 % inside the usual ±20 % (common practice)
+  });
+
+  it('when a reading judged against a limit is out, then the history says which limit it missed, not a tolerance', async () => {
+    // Worst-case ESR table (glodark.com/design/esrchart.htm): 32 µF at 250 V and over is about 1 Ω; 9.5 Ω is more than twice that
+    await post({ location: 'C1a (reservoir)', quantity: 'esr', expected: '32µ', rating: '350 V', reading: '9.5 Ω' });
+    // in-service inspection code of practice: Class I insulation at least 1 MΩ at 500 V DC
+    await post({ location: 'Mains pins to chassis', quantity: 'insulation', reading: '400k' });
+    await post({ location: 'V5 pin 7', quantity: 'dc-voltage', expected: '250', tolerance: '10', reading: '330 V' });
+    const lines = ((await tech.get(`/api/restorations/${restorationId}/events`).query({ kind: 'measurement-out' })).body as { summary: string }[]).map((e) => e.summary);
+    expect(lines).toContainEqual(expect.stringMatching(/^Over its limit: ESR at C1a \(reservoir\), /));
+    expect(lines).toContainEqual(expect.stringMatching(/^Under its minimum: Insulation resistance at Mains pins to chassis, /));
+    expect(lines).toContainEqual(expect.stringMatching(/^Out of tolerance: DC voltage at V5 pin 7, /));
+  });
+
   const bad: [string, object, RegExp][] = [
     ['an unparseable value', { location: 'R23', quantity: 'resistance', expected: 'about four k', reading: '4k7' }, /Expected value/],
     ['an unknown unit', { location: 'R23', quantity: 'resistance', expected: '4k7', reading: '4.7 furlongs' }, /Reading/],

@@ -73,4 +73,3 @@ export function createThrottles(pool: pg.Pool, config: ThrottleConfig) {
     },
   };
 }
-export type Throttles = ReturnType<typeof createThrottles>;

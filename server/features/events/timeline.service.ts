@@ -2,7 +2,7 @@ import { aliasedTable, and, desc, eq, sql, type SQL, type SQLWrapper } from 'dri
 import { stageLabels, type Stage } from '../../../shared/schemas/restorations';
 import { phaseLabels, viewLabels } from '../../../shared/schemas/photos';
 import { statusLabels, type Status } from '../../../shared/schemas/findings';
-import { quantityLabels } from '../../../shared/schemas/measurements';
+import { limitOf, outHeadings, readingKinds } from '../../../shared/bench';
 import type { Role } from '../../../shared/permissions';
 import type { TimelineEvent } from '../../../shared/schemas/events';
 import type { AppDeps } from '../../app-deps';
@@ -93,7 +93,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           : e.kind === 'reference-marked' ? `${String(e.data.ref)} marked ${sheetPage ? 'on the diagram' : 'on the chassis'}`
           : e.kind === 'mismatch-noted' ? `Differs from the diagram: ${mismatch ? mismatchLine(mismatch) : String(e.data.ref)}`
           : e.kind === 'stage-changed' ? `Stage: ${stageLabels[data.from as Stage] ?? data.from} → ${stageLabels[data.to as Stage] ?? data.to}`
-          : `Out of tolerance: ${m ? `${quantityLabels[m.quantity]} at ${m.location}, ${m.verdictReason}` : ''}`;
+          : m ? `${outHeadings[limitOf(m.quantity, m.toleranceText)]}: ${readingKinds[m.quantity].label} at ${m.location}, ${m.verdictReason}` : 'A reading was judged out';
         return {
           id: e.id, kind: e.kind, at: e.createdAt.toISOString(), actorName, summary,
           photoId: photo?.id ?? finding?.photoId ?? null, findingId: finding?.id ?? null,

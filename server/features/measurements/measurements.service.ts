@@ -1,4 +1,4 @@
-import { BenchInputError, liveChassisLikely, measurementVerdict } from '../../../shared/bench';
+import { applicableTexts, BenchInputError, liveChassisLikely, measurementVerdict } from '../../../shared/bench';
 import { can, type Role } from '../../../shared/permissions';
 import type { LineUp, Measurement, MeasurementInput, Valve } from '../../../shared/schemas/measurements';
 import type { Database, Executor } from '../../db/client';
@@ -60,7 +60,9 @@ export function measurementsService(db: Database) {
       return toMeasurement((await find(id))!);
     },
     /** Records a reading on the caller's transaction (an answer or a checklist result that files one); returns its id. */
-    async createIn(tx: Executor, restorationId: number, input: Fields, userId: number) {
+    async createIn(tx: Executor, restorationId: number, typed: Fields, userId: number) {
+      // What the reading's kind does not use (a tolerance on an ESR, a rating on a voltage) is neither judged nor stored.
+      const input = applicableTexts(typed);
       const verdict = judge(input);
       await assertFinding(tx, restorationId, input.findingId);
       if (input.powerOn) await assertPrePowerSignedOff(tx, restorationId, 'recording a reading taken with the set powered');
@@ -78,14 +80,14 @@ export function measurementsService(db: Database) {
       await measurementsRepo(tx).lock(id);
       const current = await find(id, tx);
       if (!current) throw new NotFoundError();
-      const merged: Fields = {
+      const merged: Fields = applicableTexts({
         location: patch.location ?? current.location, quantity: patch.quantity ?? current.quantity, reading: patch.reading ?? current.readingText,
         expected: patch.expected ?? current.expectedText, tolerance: patch.tolerance ?? current.toleranceText, rating: patch.rating ?? current.ratingText,
         conditions: patch.conditions ?? current.conditions, method: patch.method ?? current.method,
         chartMeter: patch.chartMeter ?? current.chartMeterText, meter: patch.meter ?? current.meterText, source: patch.source ?? current.sourceText,
         findingId: patch.findingId === undefined ? current.findingId : patch.findingId, ownerVisible: patch.ownerVisible ?? current.ownerVisible,
         powerOn: patch.powerOn ?? current.powerOn,
-      };
+      });
       await assertFinding(tx, current.restorationId, merged.findingId);
       if (merged.powerOn && !current.powerOn)
         await assertPrePowerSignedOff(tx, current.restorationId, 'recording a reading taken with the set powered');

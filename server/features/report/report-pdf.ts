@@ -1,7 +1,6 @@
 import { mismatchLine } from '../../../shared/schemas/sheets';
-import { formatQuantity, isOverRange, quantityUnits } from '../../../shared/bench';
+import { formatQuantity, isOverRange, readingKinds } from '../../../shared/bench';
 import { kindLabels, statusLabels } from '../../../shared/schemas/findings';
-import { quantityLabels } from '../../../shared/schemas/measurements';
 import { partActionLabels } from '../../../shared/schemas/parts';
 import { viewLabels } from '../../../shared/schemas/photos';
 import { equipmentKindLabels, workLevelLabels } from '../../../shared/schemas/restorations';
@@ -20,7 +19,7 @@ export const SAFETY_TEXT = [
 
 const WORK = (d: ReportData) => `${workLevelLabels[d.set.workLevel]}${d.set.hiddenPartsOriginal ? ', with hidden parts kept original-looking' : ''}.`;
 const reading = (m: ReportData['readings'][number]) =>
-  `${quantityLabels[m.quantity]} at ${m.location}: ${isOverRange(m.readingText) ? `${m.readingText.trim()} (over range)` : formatQuantity(m.reading, quantityUnits[m.quantity])} — ${m.verdictReason}`;
+  `${readingKinds[m.quantity].label} at ${m.location}: ${isOverRange(m.readingText) ? `${m.readingText.trim()} (over range)` : formatQuantity(m.reading, readingKinds[m.quantity].unit)} — ${m.verdictReason}`;
 
 /** The owner's hand-back report as a PDF, made on the server without a browser. */
 export async function renderReport(d: ReportData): Promise<{ pdf: Buffer; pageCount: number }> {

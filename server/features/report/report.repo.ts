@@ -1,6 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { AppDeps } from '../../app-deps';
 import { compareComponentRefs } from '../../../shared/natural-order';
+import { readingKinds } from '../../../shared/bench';
 import { findings, measurements, memberships, mismatchNotes, parts, photos, restorations, users } from '../../db/schema';
 import { mismatchVisible } from '../mismatches/mismatches.repo';
 import { bringupForReport } from '../bringup/bringup-report';
@@ -64,8 +65,8 @@ export async function reportData(deps: Pick<AppDeps, 'db' | 'storage' | 'config'
     replaced: ledger.filter((p) => p.action !== 'kept-original' && p.state === 'fitted'),
     kept: ledger.filter((p) => p.action === 'kept-original'),
     mismatches,
-    readings: readings.filter((m) => m.quantity !== 'insulation' && m.quantity !== 'leakage'),
-    safetyChecks: readings.filter((m) => m.quantity === 'insulation' || m.quantity === 'leakage'),
+    readings: readings.filter((m) => readingKinds[m.quantity].report === 'readings'),
+    safetyChecks: readings.filter((m) => readingKinds[m.quantity].report === 'safety-checks'),
     safety: await safetyReportData(db, restorationId),
     bringup: await bringupForReport(db, restorationId),
   };

@@ -18,4 +18,3 @@ export async function safetyReportData(db: Database, restorationId: number) {
     soakSessions: soak.sessions.filter((s) => s.endedAt !== null),
   };
 }
-export type SafetyReportData = Awaited<ReturnType<typeof safetyReportData>>;

@@ -104,4 +104,3 @@ export async function startPaymentFake(options: PaymentFakeOptions) {
     close: () => new Promise<void>((resolve) => { server.closeAllConnections(); server.close(() => resolve()); }),
   };
 }
-export type PaymentFake = Awaited<ReturnType<typeof startPaymentFake>>;

@@ -1,4 +1,4 @@
-import type { MeasuredQuantity } from '../measurement-verdict';
+import type { MeasuredQuantity } from '../reading-kinds';
 
 /** "common practice, no source" when a line rests on the trade's habit rather than a text we read. */
 export const NO_SOURCE = 'common practice, no source';

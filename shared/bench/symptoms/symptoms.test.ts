@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { measuredQuantities } from '../measurement-verdict';
+import { measuredQuantities } from '../reading-kinds';
 import { findCause, NO_SOURCE, symptoms } from './index';
 
 // The order of the causes follows the trade notes' "check in this order" column (TRADE.md §5, sources S1–S65

@@ -1,4 +1,4 @@
-import { quantityLabels } from '../../../../shared/schemas/measurements';
+import { readingKinds } from '../../../../shared/bench';
 import { inputClass } from '../../../components/field';
 import type { StepDraft } from '../lib/step-draft';
 
@@ -26,7 +26,7 @@ export function StepReadings({ rows, errors, onChange }: { rows: Row[]; errors: 
       {rows.map((r, i) => (
         <div key={i} className="grid gap-2 rounded-lg bg-sunken p-2 sm:grid-cols-[1.4fr_1fr_1fr_0.7fr_1fr]">
           {box(i, 'location', 'Where', false)}
-          <p className="self-end pb-2 text-sm">{quantityLabels[r.quantity]}</p>
+          <p className="self-end pb-2 text-sm">{readingKinds[r.quantity].label}</p>
           {box(i, 'expected', 'Expected')}
           {box(i, 'tolerance', 'Tolerance (%)')}
           {box(i, 'reading', 'Reading')}

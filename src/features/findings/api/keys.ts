@@ -4,7 +4,6 @@ export const findingKeys = {
   restoration: (restorationId: number) => ['restorations', restorationId, 'findings'] as const,
   /** The photos list, which carries each photo's finding counts: marked stale (not refetched) by finding changes. */
   photoCounts: (restorationId: number) => ['restorations', restorationId, 'photos'] as const,
-  one: (findingId: number) => ['findings', findingId] as const,
   comments: (findingId: number) => ['findings', findingId, 'comments'] as const,
   history: (findingId: number) => ['findings', findingId, 'history'] as const,
   notifications: ['notifications'] as const,

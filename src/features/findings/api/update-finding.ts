@@ -25,7 +25,6 @@ export function useUpdateFinding(photoId: number, restorationId: number) {
     },
     onSuccess: (updated) => {
       client.setQueryData<Finding[]>(key, (list) => list?.map((f) => (f.id === updated.id ? updated : f)));
-      client.setQueryData(findingKeys.one(updated.id), updated);
     },
     onSettled: (_d, _e, { id }) => {
       void client.invalidateQueries({ queryKey: findingKeys.history(id) });

@@ -1,7 +1,5 @@
 import { useState } from 'react';
-import type { MeasuredQuantity } from '../../../../shared/bench/measurement-verdict';
-import { measuredQuantities } from '../../../../shared/bench/measurement-verdict';
-import { quantityLabels } from '../../../../shared/schemas/measurements';
+import { measuredQuantities, readingKinds, type MeasuredQuantity } from '../../../../shared/bench/reading-kinds';
 import type { Photo } from '../../../../shared/schemas/photos';
 import type { ReadingAnswerInput, ReadingRequest } from '../../../../shared/schemas/reading-requests';
 import { Button } from '../../../components/button';
@@ -26,7 +24,7 @@ export function AnswerForm({ request, photos, pending, onAnswer }: { request: Re
         <label className="text-sm">Where measured<input className={inputClass} value={location} onChange={(e) => setLocation(e.target.value)} placeholder="e.g. V3 pin 6" /></label>
         <label className="text-sm">Kind
           <select className={inputClass} value={quantity} onChange={(e) => setQuantity(e.target.value as MeasuredQuantity)}>
-            {measuredQuantities.map((q) => <option key={q} value={q}>{quantityLabels[q]}</option>)}
+            {measuredQuantities.map((q) => <option key={q} value={q}>{readingKinds[q].label}</option>)}
           </select>
         </label>
         <label className="text-sm">Expected (chart)<input className={inputClass} value={expected} onChange={(e) => setExpected(e.target.value)} /></label>

@@ -1,11 +1,10 @@
 import { KnownReferences } from '../../sheets/components/known-references';
 import { useId } from 'react';
-import { measuredQuantities } from '../../../../shared/bench';
-import { quantityLabels, type Measurement } from '../../../../shared/schemas/measurements';
+import { measuredQuantities, readingKinds } from '../../../../shared/bench';
+import type { Measurement } from '../../../../shared/schemas/measurements';
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useReadingForm } from '../hooks/use-reading-form';
-import { toleranceHint } from '../lib/tolerance-hint';
 import { LiveReadingsNote } from './live-readings-note';
 import { MeterLoadingFields } from './meter-loading-fields';
 import { VerdictPreviewPanel } from './verdict-preview-panel';
@@ -32,7 +31,7 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
   onDone?: () => void;
   onCancel?: () => void;
 }) {
-  const { form, fields, preview, errorOf, onSubmit, saving, saved, serverMessage } = useReadingForm({ restorationId, measurement, findingId, onDone });
+  const { form, hints, applies, preview, errorOf, onSubmit, saving, saved, serverMessage } = useReadingForm({ restorationId, measurement, findingId, onDone });
   const { register } = form;
   const powerHintId = useId();
   const editing = measurement !== undefined;
@@ -49,29 +48,29 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
           {(a) => (
             <select {...a} {...register('quantity')} className={inputClass}>
               {measuredQuantities.map((q) => (
-                <option key={q} value={q}>{quantityLabels[q]}</option>
+                <option key={q} value={q}>{readingKinds[q].label}</option>
               ))}
             </select>
           )}
         </Field>
-        <Field label={fields.expectedLabel} error={errorOf('expected')}>
-          {(a) => <input {...a} {...register('expected')} {...typed} className={valueInput} placeholder={fields.expectedPlaceholder} />}
+        <Field label={hints.expectedLabel} error={errorOf('expected')}>
+          {(a) => <input {...a} {...register('expected')} {...typed} className={valueInput} placeholder={hints.expectedPlaceholder} />}
         </Field>
-        {fields.showTolerance && (
-          <Field label="Tolerance (%)" hint={toleranceHint(form.watch('quantity'))} error={errorOf('tolerance')}>
+        {applies.tolerance && (
+          <Field label="Tolerance (%)" hint={hints.toleranceHint} error={errorOf('tolerance')}>
             {(a) => <input {...a} {...register('tolerance')} {...typed} className={valueInput} placeholder="e.g. 10" inputMode="text" />}
           </Field>
         )}
-        {fields.showRating && (
+        {applies.rating && (
           <Field label="Rated voltage" error={errorOf('rating')}>
             {(a) => <input {...a} {...register('rating')} {...typed} className={valueInput} placeholder="e.g. 350 V" />}
           </Field>
         )}
         <Field label="Reading" hint="As the meter showed it" error={errorOf('reading')}>
-          {(a) => <input {...a} {...register('reading')} {...typed} className={valueInput} placeholder={fields.readingPlaceholder} />}
+          {(a) => <input {...a} {...register('reading')} {...typed} className={valueInput} placeholder={hints.readingPlaceholder} />}
         </Field>
       </div>
-      {(form.watch('quantity') === 'dc-voltage' || form.watch('quantity') === 'ac-voltage') && (
+      {applies.meterLoading && (
         <MeterLoadingFields register={register} errorOf={errorOf} open={Boolean(form.getValues('chartMeter'))} />
       )}
       <VerdictPreviewPanel preview={preview} />
@@ -79,7 +78,7 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
         <Field label="Conditions" hint="e.g. 236 V mains on the 245 V tap, no signal, volume minimum" error={errorOf('conditions')}>
           {(a) => <input {...a} {...register('conditions')} className={inputClass} />}
         </Field>
-        <Field label="Method" hint={fields.methodHint} error={errorOf('method')}>
+        <Field label="Method" hint={hints.methodHint} error={errorOf('method')}>
           {(a) => <input {...a} {...register('method')} className={inputClass} />}
         </Field>
         {findings && findings.length > 0 && (
@@ -106,7 +105,7 @@ export function MeasurementForm({ restorationId, findings, measurement, findingI
           Powered readings are recorded only after the pre-power checklist is signed off (Bring-up tab).
         </p>
       </div>
-      {fields.live && <LiveReadingsNote />}
+      {hints.live && <LiveReadingsNote />}
       {serverMessage && (
         <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
           Not saved: {serverMessage}

@@ -1,6 +1,7 @@
 import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
 import { useState } from 'react';
-import { quantityLabels, type Measurement } from '../../../../shared/schemas/measurements';
+import { readingKinds } from '../../../../shared/bench';
+import type { Measurement } from '../../../../shared/schemas/measurements';
 import { buttonClass } from '../../../components/button';
 import { useDeleteMeasurement } from '../api/delete-measurement';
 import { deviationWords, expectedSummary, formatWhen } from '../lib/measurement-format';
@@ -24,7 +25,7 @@ export function MeasurementRow({ restorationId, m, canRecord, onEdit }: {
         {m.location} <OnTheDiagramLink restorationId={restorationId} text={m.location} />
         {m.ownerVisible && <span className="block text-xs font-normal text-ink-soft">shared with owner</span>}
       </th>
-      <td className={cell}>{quantityLabels[m.quantity]}</td>
+      <td className={cell}>{readingKinds[m.quantity].label}</td>
       <td className={`${cell} font-mono`}>{expectedSummary(m)}</td>
       <td className={`${cell} whitespace-nowrap font-mono`}>{m.readingText}</td>
       <td className={`${cell} font-mono`}>{deviationWords(m)}</td>

@@ -1,5 +1,5 @@
 import { can, type Role } from '../../../../shared/permissions';
-import { quantityLabels } from '../../../../shared/schemas/measurements';
+import { readingKinds } from '../../../../shared/bench';
 import { ErrorState, Loading } from '../../../components/states';
 import { useFindingMeasurements } from '../api/get-finding-measurements';
 import { expectedSummary } from '../lib/measurement-format';
@@ -24,7 +24,7 @@ export function MeasurementsForFinding({ restorationId, findingId, role }: { res
         <li key={m.id} className="space-y-1 px-3 py-2" data-verdict={m.verdict}>
           <p className="flex flex-wrap items-center gap-x-2">
             <span className="font-semibold">{m.location}</span>
-            <span className="text-sm text-ink-soft">{quantityLabels[m.quantity]}</span>
+            <span className="text-sm text-ink-soft">{readingKinds[m.quantity].label}</span>
             <span className="font-mono">{m.readingText}</span>
             <span className="font-mono text-sm text-ink-soft">({expectedSummary(m)})</span>
             <VerdictBadge verdict={m.verdict} />

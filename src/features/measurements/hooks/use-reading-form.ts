@@ -4,8 +4,8 @@ import { z } from 'zod';
 import { measurementInputSchema, type Measurement } from '../../../../shared/schemas/measurements';
 import { useCreateMeasurement } from '../api/create-measurement';
 import { useUpdateMeasurement } from '../api/update-measurement';
-import { quantityFields } from '../lib/quantity-fields';
-import { fieldOfMessage, previewVerdict, relevantTexts, type ReadingField } from '../lib/verdict-preview';
+import { applicableFields, applicableTexts, readingKinds } from '../../../../shared/bench';
+import { fieldOfMessage, previewVerdict, type ReadingField } from '../lib/verdict-preview';
 
 // The API's own rules, with the finding link as a select gives it (a string; '' for none).
 const formSchema = measurementInputSchema.extend({
@@ -61,7 +61,7 @@ export function useReadingForm({ restorationId, measurement, findingId, onDone }
       if (preview.field) form.setFocus(preview.field as keyof ReadingFormValues);
       return;
     }
-    const input = { ...values, ...relevantTexts(values) };
+    const input = applicableTexts(values);
     if (measurement) {
       update.mutate({ id: measurement.id, patch: input }, { onSuccess: () => onDone?.() });
       return;
@@ -77,7 +77,8 @@ export function useReadingForm({ restorationId, measurement, findingId, onDone }
 
   return {
     form,
-    fields: quantityFields[quantity],
+    hints: readingKinds[quantity].form,
+    applies: applicableFields(quantity),
     preview,
     errorOf,
     onSubmit,

@@ -1,10 +1,6 @@
-import { absoluteTolerance, describeDeviation, formatQuantity, frequencyTolerance, isOverRange, limitOf, parseTolerance, quantityUnits } from '../../../../shared/bench';
-import type { MeasuredQuantity } from '../../../../shared/bench';
+import { absoluteTolerance, describeDeviation, formatQuantity, isOverRange, limitOf, parseTolerance, readingKinds } from '../../../../shared/bench';
 import type { Measurement } from '../../../../shared/schemas/measurements';
-import { formatDateTime, formatDeviation, formatTolerance as formatToleranceBand, MINUS } from '../../../lib/format';
-
-// The bench library treats a capacitance of 1 µF and more as an electrolytic when no tolerance is typed.
-const DEFAULT_ELECTROLYTIC_SIZE = 1e-6;
+import { formatDateTime, formatDeviation, formatTolerance as formatToleranceBand } from '../../../lib/format';
 
 export { formatDeviation };
 
@@ -26,27 +22,22 @@ export function deviationWords(m: Pick<Measurement, 'quantity' | 'toleranceText'
   const overRange = isOverRange(m.readingText);
   return describeDeviation({
     limit: limitOf(m.quantity, m.toleranceText), reading: overRange && /^\s*(?:O\.?L|over|∞)/i.test(m.readingText) ? null : m.reading,
-    reference: m.reference, deviation: m.deviation, unit: quantityUnits[m.quantity], overRange, absolute: absoluteTolerance(m.quantity, m.toleranceText),
+    reference: m.reference, deviation: m.deviation, unit: readingKinds[m.quantity].unit, overRange, absolute: absoluteTolerance(m.quantity, m.toleranceText),
   });
 }
 
-/** The band the bench library applies when none is typed: electrolytic S band, an IF's kHz, ±20 % otherwise. */
-function usualBand(quantity: MeasuredQuantity, expected: number | null): string {
-  if (quantity === 'capacitance' && expected !== null && expected >= DEFAULT_ELECTROLYTIC_SIZE) return `${MINUS}20/+50 % (electrolytic)`;
-  if (quantity === 'frequency' && expected !== null) return `±${formatQuantity(frequencyTolerance(expected), 'Hz')} (usual)`;
-  return '±20 % (usual)';
-}
-
-/** The expected side of a reading as the manual gives it: value, tolerance and rating where they apply. */
+/** The expected side of a reading as the manual gives it: value, tolerance and rating where its kind's rule uses them. */
 export function expectedSummary(m: Pick<Measurement, 'quantity' | 'expectedText' | 'toleranceText' | 'ratingText'> & { expected?: number | null }): string {
-  if (m.quantity === 'esr' || m.quantity === 'leakage')
-    return [m.expectedText, m.ratingText].filter((t) => t.trim() !== '').join(' ') || '—';
-  if (m.quantity === 'insulation') return m.expectedText ? `min ${m.expectedText}` : 'min 1 MΩ';
-  if (m.expectedText.trim() === '') return '—';
+  const rule = readingKinds[m.quantity].rule;
+  if (rule.type === 'capacitor-limit') return [m.expectedText, m.ratingText].filter((t) => t.trim() !== '').join(' ') || '—';
   const limit = limitOf(m.quantity, m.toleranceText);
-  if (limit !== 'nominal') return `${limit === 'maximum' ? 'max' : 'min'} ${m.expectedText}`;
+  const word = limit === 'maximum' ? 'max' : 'min';
+  if (rule.type !== 'band' && rule.default && m.expectedText.trim() === '') return `${word} ${formatQuantity(rule.default.value, readingKinds[m.quantity].unit)}`;
+  if (m.expectedText.trim() === '') return '—';
+  if (limit !== 'nominal') return `${word} ${m.expectedText}`;
+  if (rule.type !== 'band') return m.expectedText;
   if (m.toleranceText.trim()) return [m.expectedText, formatTolerance(m.toleranceText)].join(' ');
-  return [m.expectedText, usualBand(m.quantity, m.expected ?? null)].join(' ');
+  return [m.expectedText, rule.usual(m.expected ?? null).label].join(' ');
 }
 
 /** Date and time a reading was taken, in the reader's own format; the text as stored when it cannot be read. */

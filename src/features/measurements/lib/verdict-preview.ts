@@ -1,6 +1,5 @@
-import { BenchInputError, measurementVerdict } from '../../../../shared/bench';
+import { applicableTexts, BenchInputError, measurementVerdict } from '../../../../shared/bench';
 import type { MeasuredQuantity, MeasurementVerdict } from '../../../../shared/bench';
-import { quantityFields } from './quantity-fields';
 
 /** The form's fields a message can be about. */
 export type ReadingField =
@@ -40,19 +39,9 @@ export function fieldOfMessage(message: string): ReadingField | undefined {
   return undefined;
 }
 
-/** Drops what a kind of reading does not use, so a value left over from another kind does not count. */
-export function relevantTexts(texts: ReadingTexts): ReadingTexts {
-  const fields = quantityFields[texts.quantity];
-  const volts = texts.quantity === 'dc-voltage' || texts.quantity === 'ac-voltage';
-  return {
-    ...texts, tolerance: fields.showTolerance ? texts.tolerance : '', rating: fields.showRating ? texts.rating : '',
-    chartMeter: volts ? (texts.chartMeter ?? '') : '', meter: volts ? (texts.meter ?? '') : '', source: volts ? (texts.source ?? '') : '',
-  };
-}
-
 /** The verdict the server will store, worked out as the person types; waits for a reading. */
 export function previewVerdict(texts: ReadingTexts): Preview {
-  const t = relevantTexts(texts);
+  const t = applicableTexts(texts);
   if (t.reading.trim() === '') return { status: 'waiting' };
   try {
     return { status: 'ready', verdict: measurementVerdict(t) };
