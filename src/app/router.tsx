@@ -14,8 +14,13 @@ const page =
 const wideScreen = { wide: true };
 
 export const router = createBrowserRouter([
-  // A read-only help link: no app shell, no session.
-  { path: 'shared/help/:token', ErrorBoundary: RouteError, lazy: page(() => import('./routes/shared-help'), 'SharedHelpRoute') },
+  // A read-only help link: no app shell, no session; its own fallback while its code arrives (else a console warning).
+  {
+    path: 'shared/help/:token',
+    ErrorBoundary: RouteError,
+    HydrateFallback: () => <Loading label="Loading the help request…" />,
+    lazy: page(() => import('./routes/shared-help'), 'SharedHelpRoute'),
+  },
   {
     Component: AppShell,
     ErrorBoundary: RouteError,

@@ -1,6 +1,9 @@
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { eq } from 'drizzle-orm';
+import { sheetPages, sheets } from '../../server/db/schema';
 import { twoToneJpeg } from '../factories/images';
+import { servicePdf } from '../factories/pdfs';
 import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
 import { sweepOrphanedSheetObjects } from '../../server/features/sheets/sweep-sheet-orphans';
@@ -87,5 +90,30 @@ describe('sheet history and clean-up', () => {
     await t.deps.storage.putObject(`sheets/${restorationId}/left-behind/original`, Buffer.from('x'), 'image/png');
     expect(await sweepOrphanedSheetObjects(t.db, t.deps.storage, -1000)).toBe(1);
     expect(await sheetObjects(restorationId)).toBe(kept);
+  });
+
+  it('when a page of a longer sheet is deleted and its objects are left (a crash after the commit), then the sweep removes that page\'s objects only', async () => {
+    const res = await tech.post(`/api/restorations/${restorationId}/sheets`).attach('file', await servicePdf(['Circuit diagram', 'Layout']), { filename: 'sheet.pdf', contentType: 'application/pdf' });
+    expect(res.status).toBe(201);
+    const [first, second] = res.body.pages as { id: number; pageNumber: number }[];
+    const [sheet] = await t.db.select({ key: sheets.storageKey }).from(sheets).innerJoin(sheetPages, eq(sheetPages.sheetId, sheets.id)).where(eq(sheetPages.id, second!.id));
+    const objectsUnder = async (prefix: string) => {
+      const keys: string[] = [];
+      for await (const o of t.deps.storage.listObjects(prefix)) keys.push(o.key);
+      return keys.sort();
+    };
+    const pageTwo = `sheets/${sheet!.key}/p${second!.pageNumber}/`;
+    const pageOne = await objectsUnder(`sheets/${sheet!.key}/p${first!.pageNumber}/`);
+    const left = await objectsUnder(pageTwo);
+    expect(left.length).toBeGreaterThan(0);
+    // The page's row goes in its transaction; the process stops before the objects are deleted.
+    await t.db.delete(sheetPages).where(eq(sheetPages.id, second!.id));
+    const before = await sheetObjects(restorationId);
+    expect(await sweepOrphanedSheetObjects(t.db, t.deps.storage, -1000)).toBe(left.length);
+    expect(await objectsUnder(pageTwo)).toEqual([]);
+    expect(await objectsUnder(`sheets/${sheet!.key}/p${first!.pageNumber}/`)).toEqual(pageOne);
+    expect(await objectsUnder(`sheets/${sheet!.key}/original`)).toEqual([`sheets/${sheet!.key}/original`]);
+    expect(await sheetObjects(restorationId)).toBe(before - left.length);
+    expect((await tech.get(`/api/sheet-pages/${first!.id}`)).status).toBe(200);
   });
 });

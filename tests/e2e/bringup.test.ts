@@ -4,6 +4,7 @@ import { prePowerItemWords, prePowerItems } from '../../shared/schemas/bringup';
 import { artifactPath } from '../support/artifacts';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { watchConsole } from '../support/console';
 import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 
@@ -34,6 +35,7 @@ async function logStep(page: Page, n: number, s: Step) {
 describe('bring-up', () => {
   it('when a technician signs the pre-power check off and logs a three-step bring-up with one stop-and-fix, then the log, readings and history show it', async () => {
     const page = await newPage(ctx.browser, { width: 1280, height: 1000 });
+    const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
     await page.getByRole('link', { name: /Kestrel Wireless Co\. Wren AC\/DC/ }).click();
     await page.getByRole('link', { name: 'Bring-up' }).click();
@@ -88,5 +90,6 @@ describe('bring-up', () => {
     const stop = page.getByText(/Power-up step 2: series lamp 60 W, lamp: bright and staying bright — stop and find the fault/);
     await stop.waitFor();
     expect(await stop.evaluate((el) => el.className)).toMatch(/text-danger/);
+    expect(messages).toEqual([]);
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { watchConsole } from '../support/console';
 import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 
@@ -18,6 +19,7 @@ async function openHelpTab(page: Awaited<ReturnType<typeof newPage>>, model: str
 describe('working through a symptom and asking for readings', () => {
   it('when the technician ticks causes off with a reading, then the help request carries the checklist and its results', async () => {
     const page = await newPage(ctx.browser);
+    const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
     await openHelpTab(page, 'Tonecraft 12');
     await page.getByLabel('Symptom', { exact: true }).selectOption({ label: 'Loud hum' });
@@ -48,10 +50,12 @@ describe('working through a symptom and asking for readings', () => {
 
     await page.getByRole('button', { name: 'Remove the checklist for Loud hum from the request' }).click();
     await expect.poll(async () => page.getByRole('heading', { name: 'Checklist: Loud hum' }).count()).toBe(0);
+    expect(messages).toEqual([]);
   });
 
   it('when a mentor asks for a reading, then it waits on the technician\'s bench, is answered with a reading, and the mentor sees the answer', async () => {
     const mentor = await newPage(ctx.browser);
+    const mentorMessages = watchConsole(mentor);
     await signInAs(mentor, ctx.product.origin, 'teodor@cobbold-lane.test');
     await openHelpTab(mentor, 'Wren AC/DC');
     await mentor.getByLabel('What, and where').fill('Measure V3 pin 6 with no signal');
@@ -61,6 +65,7 @@ describe('working through a symptom and asking for readings', () => {
     await expectAccessible(mentor, 'requests for readings, mentor');
 
     const tech = await newPage(ctx.browser);
+    const techMessages = watchConsole(tech);
     await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     await tech.getByRole('heading', { name: 'Readings asked for' }).waitFor();
     await expectAccessible(tech, 'bench with a reading asked for');
@@ -80,5 +85,7 @@ describe('working through a symptom and asking for readings', () => {
     expect(await answered.getByText('95').count()).toBeGreaterThan(0);
     await mentor.getByRole('button', { name: /^Notifications, \d+ unread/ }).click();
     await mentor.getByRole('region', { name: 'Notifications' }).getByText(/Mara Ellingsworth answered .*Measure V3 pin 6/).waitFor();
+    expect(mentorMessages).toEqual([]);
+    expect(techMessages).toEqual([]);
   });
 });

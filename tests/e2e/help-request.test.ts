@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { watchConsole } from '../support/console';
 import { pdfPages } from '../support/pdf-text';
 import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
@@ -12,6 +13,7 @@ const ctx = useProductAndBrowser();
 describe('asking for help outside the workshop', () => {
   it('when the technician shares a help request, then a stranger sees the chart and the pin at its spot, no internal thread, and their reply waits for approval', async () => {
     const page = await newPage(ctx.browser);
+    const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
     const target = await page.evaluate(async () => {
       const sets = (await (await fetch('/api/restorations')).json()) as { id: number; model: string }[];
@@ -32,6 +34,7 @@ describe('asking for help outside the workshop', () => {
 
     // A fresh browser with no account.
     const stranger = await newPage(ctx.browser);
+    const strangerMessages = watchConsole(stranger);
     await stranger.goto(url);
     await stranger.getByRole('heading', { name: /Meridian 54/ }).waitFor();
     await stranger.getByText('HT at can section A').waitFor();
@@ -68,5 +71,7 @@ describe('asking for help outside the workshop', () => {
 
     await stranger.reload();
     await stranger.getByText('Check the new grid leak is really 470 kΩ').waitFor();
+    expect(messages).toEqual([]);
+    expect(strangerMessages).toEqual([]);
   });
 });

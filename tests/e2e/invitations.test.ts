@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { watchConsole } from '../support/console';
 import { firstLink, mailTo, signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 
@@ -12,6 +13,7 @@ const password = 'a long evening with the dial cord';
 describe('inviting people to a restoration', () => {
   it('when the technician invites a mentor and an owner, then each joins from the e-mail link; a third account gets "not found"', async () => {
     const tech = await newPage(ctx.browser);
+    const techMessages = watchConsole(tech);
     await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     // The set's card on the bench (its serial), not its lines under Recent activity.
     await tech.getByRole('link', { name: /KW-3381/ }).click();
@@ -27,11 +29,13 @@ describe('inviting people to a restoration', () => {
     }
     await tech.screenshot({ path: artifactPath('people-tab.png'), fullPage: true });
     await expectAccessible(tech, 'the People tab');
+    expect(techMessages).toEqual([]);
 
     for (const [email, name] of [['orla.mentor@example.test', 'Orla Finch'], ['bram.owner@example.test', 'Bram Holt']]) {
       const link = firstLink(await mailTo(ctx.product.origin, email!, /invited you/));
       expect(link).toMatch(/\/invitations\/[A-Za-z0-9_-]+$/);
       const page = await newPage(ctx.browser, { width: 390, height: 844 });
+      const messages = watchConsole(page);
       await page.goto(link);
       await page.getByText('invited').first().waitFor();
       await expectAccessible(page, 'the invitation page');
@@ -41,9 +45,11 @@ describe('inviting people to a restoration', () => {
       await page.getByRole('heading', { name: /Kestrel Wireless Co\. Wren AC\/DC/ }).waitFor();
       expect(page.url()).toBe(restorationUrl);
       await expectAccessible(page, `the restoration as a new ${name === 'Orla Finch' ? 'mentor' : 'owner'}`);
+      expect(messages).toEqual([]);
     }
 
     const third = await newPage(ctx.browser);
+    const thirdMessages = watchConsole(third);
     await third.goto(`${ctx.product.origin}/sign-up`);
     await expectAccessible(third, 'the sign-up page');
     await third.getByLabel('Your name').fill('Cass Nobody');
@@ -53,6 +59,8 @@ describe('inviting people to a restoration', () => {
     await third.getByText('Check your e-mail').waitFor();
     await third.goto(firstLink(await mailTo(ctx.product.origin, 'cass@example.test', /Confirm/)));
     await third.getByRole('heading', { name: 'The bench' }).waitFor();
+    // Quiet up to here; the restoration that is not theirs is refused on purpose next.
+    expect(thirdMessages).toEqual([]);
     await third.goto(restorationUrl);
     await third.getByText('Restoration not found').waitFor();
     await expectAccessible(third, 'a restoration that is not theirs');

@@ -12,6 +12,7 @@ describe('paying a deposit by card', () => {
   it('when the owner pays an open deposit on the local checkout page, then back on their set it shows processing until confirmed, then paid', async () => {
     // The workshop asks for a deposit (through the API: the deposit form is not part of this journey).
     const bench = await newPage(ctx.browser);
+    const benchMessages = watchConsole(bench);
     await signInAs(bench, ctx.product.origin, 'mara@cobbold-lane.test');
     const setId = await bench.evaluate(async () => {
       const sets = (await (await fetch('/api/restorations')).json()) as { id: number; model: string }[];
@@ -20,6 +21,7 @@ describe('paying a deposit by card', () => {
       if (res.status !== 201) throw new Error(`deposit: ${res.status}`);
       return set.id;
     });
+    expect(benchMessages).toEqual([]);
     await bench.context().close();
 
     const page = await newPage(ctx.browser, { width: 390, height: 844 });

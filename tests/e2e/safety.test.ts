@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { watchConsole } from '../support/console';
 import { mailTo, signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 import { pdfText } from '../support/pdf-text';
@@ -26,6 +27,7 @@ async function recordTest(page: Page, earth: string) {
 describe('the final safety test, the soak and the hand-back', () => {
   it('when the technician records a failing then a passing test, runs a soak and sends the report, then the owner’s PDF shows the safety table', async () => {
     const page = await newPage(ctx.browser);
+    const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
     const sets = (await (await page.request.get(`${ctx.product.origin}/api/restorations?q=Meridian`)).json()) as { id: number }[];
     const id = sets[0]!.id;
@@ -69,8 +71,10 @@ describe('the final safety test, the soak and the hand-back', () => {
     await page.getByRole('button', { name: 'Send anyway' }).click();
     await page.getByText('Sent to imogen@example.test.').waitFor();
     await mailTo(ctx.product.origin, 'imogen@example.test', /Meridian 54: the hand-back report/);
+    expect(messages).toEqual([]);
 
     const owner = await newPage(ctx.browser);
+    const ownerMessages = watchConsole(owner);
     await signInAs(owner, ctx.product.origin, 'imogen@example.test');
     const res = await owner.request.get(`${ctx.product.origin}/api/restorations/${id}/report.pdf`);
     expect(res.status()).toBe(200);
@@ -81,5 +85,6 @@ describe('the final safety test, the soak and the hand-back', () => {
     expect(text).toContain('Insulation, live and neutral joined to exposed metal, at 500 V DC: 50 MΩ — PASS (limit at least 1 MΩ at 500 V DC; IET Code of Practice');
     expect(text).toMatch(/Soak test \d+\.\d hours in 1 run/);
     expect(text).toContain('not a certificate of electrical safety');
+    expect(ownerMessages).toEqual([]);
   });
 });

@@ -99,6 +99,7 @@ describe('the service sheet beside the chassis', () => {
     await form.getByLabel('Component reference').fill('R23');
     await form.getByRole('button', { name: 'Save finding' }).click();
     await tech.waitForURL(/\/findings\/\d+$/);
+    const [, photoId, findingId] = tech.url().match(/\/photos\/(\d+)\/findings\/(\d+)$/)!.map(Number);
 
     // From the finding: "on the diagram" opens both pictures, side by side, each zoomed onto R23.
     await tech.getByRole('link', { name: 'R23 on the diagram' }).click();
@@ -133,5 +134,42 @@ describe('the service sheet beside the chassis', () => {
     const [top, below] = [await paneBox(phone, 'chassis'), await paneBox(phone, 'diagram')];
     expect(below!.y).toBeGreaterThanOrEqual(top!.y + top!.height);
     expect([...techConsole, ...phoneConsole]).toEqual([]);
+
+    // The mentor reads the same view without tools, each picture still zoomed onto R23.
+    const mentor = await newPage(ctx.browser, { width: 1400, height: 950 });
+    const mentorConsole = watchConsole(mentor);
+    await signInAs(mentor, ctx.product.origin, 'teodor@cobbold-lane.test');
+    await mentor.goto(referenceUrl);
+    await expectPaneZoomedOnto(mentor, 'chassis', ON_CHASSIS);
+    await expectPaneZoomedOnto(mentor, 'diagram', ON_DIAGRAM);
+    expect(await mentor.getByRole('button', { name: /^Pin/ }).count()).toBe(0);
+    await expectAccessible(mentor, 'a reference as the mentor reads it');
+    expect(mentorConsole).toEqual([]);
+
+    // The owner sees what is shared only: nothing of R23 while the page, the photo and the finding are the workshop's.
+    const owner = await newPage(ctx.browser, { width: 1400, height: 950 });
+    const ownerConsole = watchConsole(owner);
+    await signInAs(owner, ctx.product.origin, 'imogen@example.test');
+    await owner.goto(referenceUrl);
+    await owner.getByText(/R23 is not marked on a chassis photo yet/).waitFor();
+    await owner.getByText(/R23 is not marked on a service sheet page yet/).waitFor();
+    expect(await owner.locator('[data-markup-probe]').count()).toBe(0);
+
+    const diagramPageId = Number(diagramPage.match(/\/sheets\/(\d+)/)![1]);
+    const shared = await tech.evaluate(async ({ pageId, photo, finding }) => {
+      const patch = (path: string) =>
+        fetch(path, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ ownerVisible: true }) }).then((r) => r.status);
+      return [await patch(`/api/sheet-pages/${pageId}`), await patch(`/api/photos/${photo}`), await patch(`/api/findings/${finding}`)];
+    }, { pageId: diagramPageId, photo: photoId!, finding: findingId! });
+    expect(shared).toEqual([200, 200, 200]);
+
+    // Once shared, the owner reads both pictures zoomed onto R23, without tools and without the unshared mismatch note.
+    await owner.reload();
+    await expectPaneZoomedOnto(owner, 'chassis', ON_CHASSIS);
+    await expectPaneZoomedOnto(owner, 'diagram', ON_DIAGRAM);
+    expect(await owner.getByRole('button', { name: /^Pin/ }).count()).toBe(0);
+    expect(await owner.getByText(line).count()).toBe(0);
+    await expectAccessible(owner, 'a reference as the owner reads it');
+    expect(ownerConsole).toEqual([]);
   });
 });

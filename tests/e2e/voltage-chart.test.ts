@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { artifactPath } from '../support/artifacts';
 import { expectAccessible } from '../support/axe';
 import { newPage } from '../support/browser';
+import { watchConsole } from '../support/console';
 import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 
@@ -19,6 +20,7 @@ const points = [
 describe('voltage chart', () => {
   it('when five points are entered and one is out of tolerance, then the table and the plot flag exactly that one', async () => {
     const page = await newPage(ctx.browser, { width: 1280, height: 1000 });
+    const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
     // The set's card on the bench (its serial), not its lines under Recent activity.
     await page.getByRole('link', { name: /HT12-0988/ }).click();
@@ -51,5 +53,6 @@ describe('voltage chart', () => {
     expect(summary).not.toMatch(/Out of tolerance:[^.]*(pin 6|pin 9|pin 3)/);
     await expectAccessible(page, 'the voltage chart and its plot');
     await page.screenshot({ path: artifactPath('voltage-chart.png'), fullPage: true });
+    expect(messages).toEqual([]);
   });
 });

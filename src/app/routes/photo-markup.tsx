@@ -7,7 +7,6 @@ import { EmptyState, ErrorState, Loading } from '../../components/states';
 import { useMe } from '../../features/auth/api/get-me';
 import { usePhotoFindings } from '../../features/findings/api/get-photo-findings';
 import { FindingPanel } from '../../features/findings/components/finding-panel';
-import { SameReferenceFinding } from '../../features/findings/components/same-reference-finding';
 import { Thread } from '../../features/findings/components/thread';
 import { MeasurementsForFinding } from '../../features/measurements/components/measurements-for-finding';
 import { FindingsList } from '../../features/markup/components/findings-list';
@@ -184,14 +183,9 @@ function PhotoMarkup({
                 error={actions.createError}
                 onSubmit={actions.submitCreate}
                 onCancel={actions.cancelCreate}
-                refNotice={(ref) => <SameReferenceFinding restorationId={r.id} componentRef={ref} />}
+                refNotice={(typed) => <DuplicateFindingOffer restorationId={r.id} photoId={photo.id} typed={typed} mark={actions.pending!} onAttached={actions.cancelCreate} />}
                 referenceListId="known-references"
-                referenceHelp={(typed) => (
-                  <>
-                    <KnownReferences restorationId={r.id} id="known-references" />
-                    <DuplicateFindingOffer restorationId={r.id} photoId={photo.id} typed={typed} mark={actions.pending!} onAttached={actions.cancelCreate} />
-                  </>
-                )}
+                referenceHelp={() => <KnownReferences restorationId={r.id} id="known-references" />}
               />
             </div>
           ) : selected && !drawn ? (

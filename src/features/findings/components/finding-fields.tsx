@@ -1,13 +1,18 @@
-import type { ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { kindLabels, kinds, severities, severityLabels, type Finding, type FindingPatch } from '../../../../shared/schemas/findings';
 import { Field, inputClass } from '../../../components/field';
 import { checkComponentRef, checkTitle } from './finding-edit';
 import { InlineTextField } from './inline-text-field';
+import { SameReferenceFinding } from './same-reference-finding';
 import { SeverityMark, StatusMark } from './status-mark';
 import { StatusButtons } from './status-buttons';
 
-/** What a person who may change the finding edits: each field saves on its own. */
+/**
+ * What a person who may change the finding edits: each field saves on its own. A reference another finding
+ * already names is pointed out with a link to that one, as it is typed and once saved; it is never refused.
+ */
 export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (patch: FindingPatch) => void }) {
+  const [typedRef, setTypedRef] = useState<string | null>(null);
   return (
     <div className="space-y-3">
       <InlineTextField label="Title" value={finding.title} check={checkTitle} onSave={(title) => onSave({ title })} />
@@ -19,6 +24,7 @@ export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (
           value={finding.componentRef}
           check={checkComponentRef}
           onSave={(componentRef) => onSave({ componentRef })}
+          onDraft={setTypedRef}
         />
         <Field label="Kind" hint="What was seen">
           {(a) => (
@@ -32,6 +38,9 @@ export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (
           )}
         </Field>
       </div>
+      {(typedRef ?? finding.componentRef).trim() !== '' && (
+        <SameReferenceFinding restorationId={finding.restorationId} componentRef={typedRef ?? finding.componentRef} exceptId={finding.id} />
+      )}
       <Field label="Severity">
         {(a) => (
           <select {...a} value={finding.severity} onChange={(e) => onSave({ severity: e.target.value as Finding['severity'] })} className={inputClass}>

@@ -13,6 +13,7 @@ export function InlineTextField({
   mono = false,
   check,
   onSave,
+  onDraft,
 }: {
   label: string;
   value: string;
@@ -20,8 +21,14 @@ export function InlineTextField({
   mono?: boolean;
   check: (raw: string) => Checked;
   onSave: (next: string) => void;
+  /** What is being typed, or null when the field shows `value` again. */
+  onDraft?: (draft: string | null) => void;
 }) {
-  const [draft, setDraft] = useState<string | null>(null);
+  const [draft, setDraftState] = useState<string | null>(null);
+  const setDraft = (next: string | null) => {
+    setDraftState(next);
+    onDraft?.(next);
+  };
   const [error, setError] = useState<string>();
 
   function commit() {

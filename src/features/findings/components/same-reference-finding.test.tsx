@@ -1,10 +1,11 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { cleanup, screen } from '@testing-library/react';
+import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { NewFindingForm } from '../../markup/components/new-finding-form';
-import { fakeApi, makeFinding, ok, renderWithApp } from './findings-test-support';
+import { FindingPanel } from './finding-panel';
+import { fakeApi, makeFinding, members, ok, renderWithApp } from './findings-test-support';
 import { SameReferenceFinding } from './same-reference-finding';
 
 afterEach(() => {
@@ -29,5 +30,31 @@ describe('a second finding for the same reference', () => {
     await user.clear(screen.getByLabelText('Component reference'));
     await user.type(screen.getByLabelText('Component reference'), 'V5');
     expect(screen.queryByRole('link', { name: /^Open #/ })).not.toBeInTheDocument();
+  });
+
+  it('when the reference of an existing finding is changed to one another finding names, then the panel links to that one and still saves', async () => {
+    const first = makeFinding(40, { number: 3, componentRef: 'C27', title: 'Leaky coupling capacitor', photoId: 11 });
+    const edited = makeFinding(52, { number: 9, componentRef: 'R20', title: 'Hum at low volume' });
+    const api = fakeApi(({ method, path, body }) => {
+      if (path === '/restorations/7/findings') return ok([first, edited]);
+      if (path === `/photos/${edited.photoId}/findings`) return ok([edited]);
+      if (method === 'PATCH' && path === `/findings/${edited.id}`) return ok({ ...edited, ...(body as object) });
+      return undefined;
+    });
+    renderWithApp(<FindingPanel finding={edited} role="technician" meId={1} restorationId={7} members={members} />);
+    const user = userEvent.setup();
+    const field = screen.getByLabelText('Component');
+    await user.clear(field);
+    await user.type(field, 'c27');
+    const notice = await screen.findByRole('group', { name: 'C27 already has a finding' });
+    expect(within(notice).getByRole('status')).toHaveTextContent('C27 already has finding #3, “Leaky coupling capacitor”.');
+    expect(within(notice).getByRole('link', { name: 'Open #3' })).toHaveAttribute('href', '/restorations/7/photos/11/findings/40');
+    // A note, not a refusal: the reference is saved all the same.
+    await user.keyboard('{Enter}');
+    await vi.waitFor(() => expect(api.calls.find((c) => c.method === 'PATCH')?.body).toEqual({ componentRef: 'c27' }));
+    // The finding's own reference is never pointed out as a duplicate of itself.
+    await user.clear(field);
+    await user.type(field, 'R20');
+    await vi.waitFor(() => expect(screen.queryByRole('group', { name: /already has a finding/ })).not.toBeInTheDocument());
   });
 });

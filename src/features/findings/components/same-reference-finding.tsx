@@ -1,22 +1,34 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import { firstWithComponentRef } from '../../../../shared/natural-order';
-import { findingPath } from '../../../../shared/schemas/findings';
+import { findingPath, type Finding } from '../../../../shared/schemas/findings';
 import { useRestorationFindings } from '../api/get-restoration-findings';
 
 /**
+ * The one notice that a reference already has a finding: it names the first one and links to it; `children`
+ * may add an offer (attach this view to it). It never stops a second finding (a part may well have two faults).
+ */
+export function ReferenceFindingNotice({ first, children }: { first: Finding; children?: ReactNode }) {
+  const ref = first.componentRef.trim().toUpperCase();
+  return (
+    <div role="group" aria-label={`${ref} already has a finding`} className="space-y-2 rounded-lg border border-glow bg-glow-soft px-3 py-2 text-sm">
+      <p role="status">
+        {ref} already has finding #{first.number}, “{first.title}”.{' '}
+        <Link to={findingPath(first)} className="font-semibold text-glow-strong underline">
+          Open #{first.number}
+        </Link>
+      </p>
+      {children}
+    </div>
+  );
+}
+
+/**
  * Points out that another finding of this restoration already names the reference, with a link to the first
- * one; it does not stop a second finding (a part may well have two faults). Says nothing until the list is here.
+ * one (`exceptId`: the finding being edited). Says nothing until the list is here.
  */
 export function SameReferenceFinding({ restorationId, componentRef, exceptId }: { restorationId: number; componentRef: string; exceptId?: number }) {
   const findings = useRestorationFindings(restorationId);
   const first = findings.data ? firstWithComponentRef(findings.data, componentRef, exceptId) : undefined;
-  if (!first) return null;
-  return (
-    <p role="status" className="rounded-lg bg-glow-soft px-3 py-2 text-sm">
-      {first.componentRef.toUpperCase()} already has finding #{first.number}, “{first.title}”.{' '}
-      <Link to={findingPath(first)} className="font-semibold text-glow-strong underline">
-        Open #{first.number}
-      </Link>
-    </p>
-  );
+  return first ? <ReferenceFindingNotice first={first} /> : null;
 }

@@ -83,6 +83,15 @@ describe('MarkupCanvas read-only', () => {
     // Fit, worked by hand above: (600 − 2 × 16) / 3000 = 19 %.
     expect(zoom()).toHaveTextContent('19 %');
   });
+
+  it('when a reader\'s canvas is asked to zoom onto a part, then it zooms past Fit onto it, still without tools', async () => {
+    const { zoom } = renderCanvas({ canCreate: false, canEdit: () => false, focusId: 2, selectedId: 2, focusWhenReading: true });
+    expect(screen.queryByRole('button', { name: 'Select' })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Undo/ })).not.toBeInTheDocument();
+    // Finding 2 is a box of 400 × 300 photo px; a focused box fills half the 800 × 600 stage, worked by hand:
+    // min(800 × 0.5 / 400, 600 × 0.5 / 300) = 1, so 100 % (Fit would be 19 %).
+    await waitFor(() => expect(zoom()).toHaveTextContent('100 %'));
+  });
 });
 
 describe('MarkupCanvas help and zoom', () => {

@@ -30,6 +30,8 @@ export interface MarkupCanvasProps extends CommandCallbacks {
   selectedId?: number;
   /** Zoom onto this finding when it is set (opening a finding's URL, picking it from a list). */
   focusId?: number;
+  /** A reader's canvas (no tools) zooms onto `focusId` too, as the reference view does; otherwise it stays at Fit. */
+  focusWhenReading?: boolean;
   canCreate: boolean;
   canEdit: (finding: Finding) => boolean;
   onSelect: (id: number | undefined) => void;
@@ -50,7 +52,7 @@ export interface MarkupCanvasProps extends CommandCallbacks {
  * tools, zoom and pan by mouse, keys and touch. Props in, callbacks out; it fetches nothing.
  */
 export function MarkupCanvas(props: MarkupCanvasProps) {
-  const { items, selectedId, focusId, canCreate, canEdit, onSelect, pendingMark } = props;
+  const { items, selectedId, focusId, focusWhenReading, canCreate, canEdit, onSelect, pendingMark } = props;
   const { ref, size } = useContainerSize<HTMLDivElement>();
   const imageSize = useMemo(() => ({ width: props.imageSize.width, height: props.imageSize.height }), [props.imageSize.width, props.imageSize.height]);
   const photo = usePhotoImage(props.imageUrl, props.onImageError);
@@ -77,7 +79,8 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   const [spaceHeld, setSpaceHeld] = useState(false);
 
   const editable = useMemo(() => new Set(items.filter(canEdit).map((f) => f.id)), [items, canEdit]);
-  // Someone who may neither place nor change a mark reads the photo: no tools, no undo, and it stays at Fit.
+  // Someone who may neither place nor change a mark reads the photo: no tools, no undo, and it stays at Fit
+  // unless the page asks for the part (`focusWhenReading`).
   const readOnly = !canCreate && editable.size === 0;
   const selected = commands.marks.find((m) => m.id === selectedId);
   const onResult = (result: ToolResult) => {
@@ -127,10 +130,10 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   useEffect(() => {
     if (focusId === undefined) focused.current = undefined;
     const mark = commands.marks.find((m) => m.id === focusId);
-    if (readOnly || !ready || !mark || focused.current === focusId) return;
+    if ((readOnly && !focusWhenReading) || !ready || !mark || focused.current === focusId) return;
     focused.current = focusId;
     view.focus(mark.shape === 'pin' ? (mark.points[0] ?? imagePoint(0.5, 0.5)) : bounds(mark, imageSize));
-  }, [focusId, readOnly, ready, commands.marks, view, imageSize]);
+  }, [focusId, readOnly, focusWhenReading, ready, commands.marks, view, imageSize]);
 
   useMarkupProbe(ref, view.view, imageSize, size, pendingMark?.points[0]);
   useRevealPending(ref, props.pendingCover, pendingMark, view, imageSize);

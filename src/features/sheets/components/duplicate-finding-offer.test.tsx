@@ -1,12 +1,12 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen } from '@testing-library/react';
+import { cleanup, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Finding } from '../../../../shared/schemas/findings';
 import { fakeApi, ok } from '../../../testing/fake-api';
+import { makeFinding } from '../../markup/testing/finding-fixtures';
 import { DuplicateFindingOffer } from './duplicate-finding-offer';
 
 afterEach(() => {
@@ -14,7 +14,8 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const existing = { id: 4, restorationId: 3, photoId: 7, number: 2, title: 'Cathode resistor scorched', componentRef: 'R23' } as Finding;
+// A whole finding as the API answers it: the client checks each answer against the shared schema.
+const existing = makeFinding(4, { restorationId: 3, photoId: 7, number: 2, title: 'Cathode resistor scorched', componentRef: 'R23' });
 
 function show(typed: string, onAttached = vi.fn()) {
   const router = createMemoryRouter(
@@ -38,7 +39,12 @@ describe('a second finding for the same part', () => {
       call.method === 'POST' ? { status: 201, body: { id: 11, ...(call.body as object) } } : call.path === '/restorations/3/findings' ? ok([existing]) : undefined,
     );
     const { router, onAttached } = show('r23');
-    await userEvent.click(await screen.findByRole('button', { name: 'Attach to #2' }));
+    // One notice: it names the finding, links to it and offers to attach.
+    const notice = await screen.findByRole('group', { name: 'R23 already has a finding' });
+    expect(within(notice).getByRole('status')).toHaveTextContent('R23 already has finding #2, “Cathode resistor scorched”.');
+    expect(within(notice).getByRole('link', { name: 'Open #2' })).toHaveAttribute('href', '/restorations/3/photos/7/findings/4');
+    expect(screen.getAllByRole('status')).toHaveLength(1);
+    await userEvent.click(within(notice).getByRole('button', { name: 'Attach to #2' }));
     expect(api.calls.find((c) => c.method === 'POST')).toEqual({
       method: 'POST', path: '/restorations/3/reference-marks', body: { photoId: 8, ref: 'R23', shape: 'pin', points: [{ x: 0.4, y: 0.5 }] },
     });

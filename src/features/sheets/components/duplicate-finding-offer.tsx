@@ -1,8 +1,10 @@
 import { useState } from 'react';
 import { useNavigate } from 'react-router';
-import { findingPath } from '../../../../shared/schemas/findings';
+import { firstWithComponentRef } from '../../../../shared/natural-order';
+import { findingPath, type Finding } from '../../../../shared/schemas/findings';
 import { buttonClass } from '../../../components/button';
 import { useRestorationFindings } from '../../findings/api/get-restoration-findings';
+import { ReferenceFindingNotice } from '../../findings/components/same-reference-finding';
 import type { NewMark } from '../../markup/lib/marks';
 import { useCreateReferenceMark } from '../api/reference-marks';
 import { refOf } from '../lib/reference-path';
@@ -23,8 +25,8 @@ const asLocation = (mark: NewMark) =>
   mark.shape === 'rect' ? { shape: 'rect' as const, points: mark.points.slice(0, 2) } : { shape: 'pin' as const, points: mark.points.slice(0, 1) };
 
 /**
- * When the reference typed for a new finding already has a finding, offers to attach this view of the part to
- * it as a location mark instead of opening a second finding for the same part.
+ * The new finding's one notice when the reference typed already has a finding: a link to the first one and the
+ * offer to attach this view of the part to it as a location mark instead of opening a second finding.
  */
 export function DuplicateFindingOffer({ restorationId, photoId, typed, mark, onAttached }: Props) {
   const ref = refOf(typed);
@@ -32,27 +34,25 @@ export function DuplicateFindingOffer({ restorationId, photoId, typed, mark, onA
   const create = useCreateReferenceMark(restorationId);
   const navigate = useNavigate();
   const [error, setError] = useState('');
-  const existing = ref ? findings.data?.find((f) => refOf(f.componentRef) === ref) : undefined;
-  if (!ref || !existing) return null;
-  const attach = async () => {
+  const existing = findings.data ? firstWithComponentRef(findings.data, typed) : undefined;
+  if (!existing || !ref) return null;
+  const attach = async (to: Finding, as: string) => {
     setError('');
     try {
-      await create.mutateAsync({ photoId, ref, ...asLocation(mark) });
+      await create.mutateAsync({ photoId, ref: as, ...asLocation(mark) });
       onAttached();
-      navigate(findingPath(existing));
+      navigate(findingPath(to));
     } catch (err) {
       setError(err instanceof Error ? err.message : 'The view was not attached.');
     }
   };
   return (
-    <div className="space-y-2 rounded-lg border border-glow bg-sunken p-3 text-sm" role="group" aria-label={`${ref} already has a finding`}>
-      <p>
-        {ref} already has finding #{existing.number} “{existing.title}”. Attach this view of {ref} to it as a location mark instead of opening a second finding?
-      </p>
-      <button type="button" className={buttonClass('quiet')} onClick={() => void attach()} disabled={create.isPending}>
+    <ReferenceFindingNotice first={existing}>
+      <p>Attach this view of {ref} to it as a location mark instead of opening a second finding?</p>
+      <button type="button" className={buttonClass('quiet')} onClick={() => void attach(existing, ref)} disabled={create.isPending}>
         {create.isPending ? 'Attaching…' : `Attach to #${existing.number}`}
       </button>
       {error && <p role="alert" className="text-danger">{error}</p>}
-    </div>
+    </ReferenceFindingNotice>
   );
 }

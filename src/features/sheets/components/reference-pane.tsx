@@ -28,7 +28,7 @@ interface Props {
   onImageError?: () => void;
 }
 
-/** One picture of the side-by-side view, zoomed onto the part; a technician may mark the reference here too. */
+/** One picture of the side-by-side view, zoomed onto the part for every reader; a technician may mark the reference here too. */
 export function ReferencePane({ restorationId, refName, side, label, imageUrl, imageSize, target, marks, findings = [], focusId, mismatches, canMark, onImageError }: Props) {
   const create = useCreateReferenceMark(restorationId);
   const [message, setMessage] = useState('');
@@ -68,6 +68,7 @@ export function ReferencePane({ restorationId, refName, side, label, imageUrl, i
           items={items}
           selectedId={selectedId}
           focusId={focusId}
+          focusWhenReading
           canCreate={canMark}
           canEdit={() => false}
           onSelect={setSelectedId}

@@ -70,6 +70,7 @@ export function ReferenceViewer({ restorationId, label, imageUrl, imageSize, tar
           items={items}
           selectedId={selectedId}
           focusId={focusMarkId}
+          focusWhenReading
           canCreate={canMark}
           canEdit={() => false}
           onSelect={setSelectedId}
