@@ -26,7 +26,7 @@ try {
   const warm = await newPage(browser, { width: 1280, height: 900 });
   await signInAs(warm, product.origin, 'mara@cobbold-lane.test');
   await warm.goto(fixture.url);
-  await warm.waitForFunction(() => window.__gridleakMarkup?.view.scale, null, { timeout: 60_000 });
+  await warm.waitForFunction(() => (window as { __gridleakMarkup?: { view: { scale: number } } }).__gridleakMarkup?.view.scale, null, { timeout: 60_000 });
   await warm.context().close();
 
   const page = await newPage(browser, { width: 1280, height: 900 });
@@ -42,7 +42,7 @@ try {
   await cdp.send('Profiler.start');
   const started = Date.now();
   await page.goto(fixture.url);
-  await page.waitForFunction(() => window.__gridleakMarkup?.view.scale, null, { timeout: 60_000 });
+  await page.waitForFunction(() => (window as { __gridleakMarkup?: { view: { scale: number } } }).__gridleakMarkup?.view.scale, null, { timeout: 60_000 });
   await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
   const ms = Date.now() - started;
   const { profile } = await cdp.send('Profiler.stop');

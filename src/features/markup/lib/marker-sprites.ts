@@ -1,4 +1,4 @@
-import { badgeOffset, BADGE_RADIUS, drawBadge, drawMarkerBody, drawMarkerLabel, type MarkerLook } from './draw-marker';
+import { badgeOffset, BADGE_RADIUS, drawBadge, drawMarkerBody, drawMarkerLabel } from './draw-marker';
 import type { MarkerPainter } from './draw-marks';
 
 /** Enough room around a marker's centre for its largest shape (the triangle) and its halo, CSS px. */
