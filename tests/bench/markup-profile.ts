@@ -5,6 +5,7 @@
  * request finished and the renderer's main-thread work in that time: by kind of task, by script, and its longest tasks.
  * Run: npx tsx tests/bench/markup-profile.ts   (MARKUP_PROFILE_FEW=1 profiles the page with the demo's few findings)
  */
+import { rmSync } from 'node:fs';
 import os from 'node:os';
 import { launchBrowser, newPage } from '../support/browser';
 import { signInAs } from '../support/journey';
@@ -14,6 +15,9 @@ import { markupFixture } from './markup-fixture';
 
 type TraceEvent = { name: string; ph: string; ts: number; dur?: number; pid: number; tid: number; cat: string; args?: { name?: string; data?: Record<string, unknown>; beginData?: Record<string, unknown> } };
 
+// A journey run leaves a test build in dist/ (React's development runtime, answers checked against their schemas):
+// the product rebuilds the client as \`npm start\` would, so the figures are those of a production build.
+rmSync('dist/index.html', { force: true });
 const cluster = await startTestCluster();
 process.env.GRIDLEAK_TEST_TEMPLATE_URL = cluster.templateUrl;
 const product = await startProduct();
