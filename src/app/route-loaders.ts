@@ -11,6 +11,7 @@ import { partsQueryOptions } from '../features/parts/api/get-parts';
 import { photosQueryOptions } from '../features/photos/api/get-photos';
 import { restorationQueryOptions } from '../features/restorations/api/get-restoration';
 import { queryClient } from '../lib/query-client';
+import { probablySignedIn } from '../lib/signed-in-hint';
 
 /**
  * Route loaders start a page's data as soon as the route is known, in parallel with each other and with the
@@ -22,11 +23,20 @@ function start<T, K extends QueryKey>(options: EnsureQueryDataOptions<T, Error, 
   void queryClient.ensureQueryData(options).catch(() => {});
 }
 
-/** Starts a page's data once someone is known to be signed in: a signed-out visit asks for nothing it would be refused. */
+/**
+ * Starts a page's data once someone is known to be signed in: a signed-out visit asks for nothing it would be
+ * refused. When this tab saw the session signed in lately, the data starts together with the sign-in check
+ * instead of a round trip later (`probablySignedIn`).
+ */
 const loader = (begin: Start) => ({ params }: LoaderFunctionArgs) => {
   const id = Number(params.id);
-  if (Number.isInteger(id) && id > 0)
+  if (!Number.isInteger(id) || id <= 0) return null;
+  if (probablySignedIn()) {
+    start(meQueryOptions());
+    begin(id, params);
+  } else {
     void queryClient.ensureQueryData(meQueryOptions()).then((me) => me && begin(id, params), () => {});
+  }
   return null;
 };
 

@@ -1,6 +1,7 @@
 import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
 import { ApiError } from './api-client';
 import { ME_KEY } from './session-key';
+import { followSignedIn } from './signed-in-hint';
 
 /** A 401 anywhere means the session ended: forget who was signed in, and the sign-in gate takes over. */
 function onError(error: unknown) {
@@ -18,3 +19,5 @@ export const queryClient = new QueryClient({
     },
   },
 });
+
+followSignedIn(queryClient);

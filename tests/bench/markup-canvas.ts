@@ -5,14 +5,13 @@
  * frame times while panning and zooming (goal: median under 16 ms).
  * Run: npx tsx tests/bench/markup-canvas.ts
  */
+import { rmSync } from 'node:fs';
 import os from 'node:os';
-import { findings } from '../../server/db/schema';
 import { launchBrowser, newPage } from '../support/browser';
 import { signInAs } from '../support/journey';
 import { startProduct } from '../support/start-product';
 import { startTestCluster } from '../support/test-cluster';
-import { connectDatabase } from '../../server/db/client';
-import { sql } from 'drizzle-orm';
+import { markupFixture } from './markup-fixture';
 
 /** A fresh context (cold cache), signed in, then navigation to the first drawn frame: its time and what came when. */
 async function firstFrame(url: string) {
@@ -34,25 +33,20 @@ async function firstFrame(url: string) {
   return { page, ms, parts };
 }
 
+// A journey run leaves a test build in dist/ (React's development runtime, answers checked against their schemas):
+// the product rebuilds the client as \`npm start\` would, so the figures are those of a production build.
+rmSync('dist/index.html', { force: true });
 const cluster = await startTestCluster();
 process.env.GRIDLEAK_TEST_TEMPLATE_URL = cluster.templateUrl;
 const product = await startProduct();
 const browser = await launchBrowser();
 try {
-  const db = connectDatabase(product.databaseUrl);
-  const [photo] = (await db.db.execute<{ id: number; restoration_id: number }>(sql`select id, restoration_id from photos where view = 'underside' and phase = 'before' limit 1`)).rows;
-  const url = `${product.origin}/restorations/${photo!.restoration_id}/photos/${photo!.id}`;
+  const fixture = await markupFixture(product);
+  const url = fixture.url;
   // Side by side: the same page with the demo's few findings first (each in a fresh browser context, cold cache).
   const few = await firstFrame(url);
-  const shapes = ['pin', 'circle', 'rect', 'arrow', 'freehand'] as const;
-  await db.db.insert(findings).values(Array.from({ length: 997 }, (_, i) => {
-    const shape = shapes[i % 5]!;
-    const x = 0.02 + (i % 40) / 41;
-    const y = 0.02 + Math.floor(i / 40) / 26;
-    const points = shape === 'pin' ? [{ x, y }] : shape === 'freehand' ? Array.from({ length: 12 }, (_, k) => ({ x: x + k * 0.001, y: y + Math.sin(k) * 0.005 })) : [{ x, y }, { x: x + 0.01, y: y + 0.015 }];
-    return { restorationId: photo!.restoration_id, photoId: photo!.id, number: 100 + i, shape, points, title: `Bench mark ${i}`, kind: 'note' as const, severity: 'info' as const };
-  }));
-  await db.pool.end();
+  await fixture.addFindings();
+  await fixture.close();
 
   const many = await firstFrame(url);
   const page = many.page;

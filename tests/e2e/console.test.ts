@@ -18,6 +18,18 @@ describe('the console', () => {
     expect(messages).toEqual([]);
   });
 
+  it('when a technician signs out and the tab then opens a photo page, then the sign-in gate takes over and nothing is logged', async () => {
+    const page = await newPage(ctx.browser);
+    await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
+    // Signed in, this tab starts a page's data together with the sign-in check; signed out, it must ask for nothing.
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('link', { name: 'Sign in' }).or(page.getByRole('button', { name: 'Sign in' })).first().waitFor();
+    const messages = watchConsole(page);
+    await page.goto(`${ctx.product.origin}/restorations/1/photos/1`);
+    await page.getByRole('button', { name: 'Sign in' }).waitFor();
+    expect(messages).toEqual([]);
+  });
+
   it('when a technician signs in and opens the bench, then nothing is logged', async () => {
     const page = await newPage(ctx.browser);
     const messages = watchConsole(page);

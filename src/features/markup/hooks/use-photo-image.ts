@@ -5,7 +5,7 @@ export type PhotoImage = { readonly status: 'loading' | 'error'; readonly image?
 /**
  * Loads the display image for the canvas. No `crossOrigin`: the canvas only shows the photo and never reads its
  * pixels, so the storage origin needs no CORS headers. When the URL changes (a fresh presigned URL for the same
- * photo) the image already shown stays until the new one has loaded.
+ * photo) the image already shown stays until the new one has loaded (and been decoded).
  */
 export function usePhotoImage(url: string, onError?: () => void): PhotoImage {
   const [state, setState] = useState<PhotoImage>({ status: 'loading' });
@@ -19,7 +19,11 @@ export function usePhotoImage(url: string, onError?: () => void): PhotoImage {
     const img = new window.Image();
     img.decoding = 'async';
     img.onload = () => {
-      if (live) setState({ status: 'loaded', image: img });
+      // Decoded off the main thread before the stage draws it, so the first frame with the photo does not wait on it.
+      const decoded = typeof img.decode === 'function' ? img.decode().catch(() => {}) : Promise.resolve();
+      void decoded.then(() => {
+        if (live) setState({ status: 'loaded', image: img });
+      });
     };
     img.onerror = () => {
       if (!live) return;

@@ -25,8 +25,21 @@ export function findingLook(number: number, status: Status, severity: Severity):
 /** Font size for the number: three digits need a smaller size to stay inside the marker. */
 const labelPx = (r: number, text: string): number => Math.round(r * (text.length >= 3 ? 0.72 : 0.88));
 
+/** The badge's disc, CSS px. */
+export const BADGE_RADIUS = 7.5;
+
 /** Draw a marker centred on `x`, `y` with radius `r` stage px: its size does not change with the zoom. */
 export function drawMarker(pen: Pen, x: number, y: number, r: number, look: MarkerLook): void {
+  drawMarkerBody(pen, x, y, r, look);
+  drawMarkerLabel(pen, x, y, r, look);
+  if (look.glyph) drawBadge(pen, x + badgeOffset(r), y - badgeOffset(r), look.glyph);
+}
+
+/** Where a marker's status badge sits from its centre, stage px. */
+export const badgeOffset = (r: number) => r * 0.95;
+
+/** The marker's outline with its halo and fill (and a ring's paper hole): everything but its number and badge. */
+export function drawMarkerBody(pen: Pen, x: number, y: number, r: number, look: Pick<MarkerLook, 'shape' | 'fill'>): void {
   traceOutline(pen, markerOutline(look.shape, r), x, y);
   pen.lineJoin = 'round';
   pen.strokeStyle = HALO_DARK;
@@ -37,24 +50,25 @@ export function drawMarker(pen: Pen, x: number, y: number, r: number, look: Mark
   pen.stroke();
   pen.fillStyle = look.fill;
   pen.fill();
-  let ink = look.ink;
   if (look.shape === 'ring') {
     traceOutline(pen, { kind: 'circle', r: r * RING_HOLE }, x, y);
     pen.fillStyle = PAPER;
     pen.fill();
-    ink = '#000000';
   }
-  pen.fillStyle = ink;
+}
+
+/** The marker's number, in its ink (black inside a ring's paper hole). */
+export function drawMarkerLabel(pen: Pen, x: number, y: number, r: number, look: MarkerLook): void {
+  pen.fillStyle = look.shape === 'ring' ? '#000000' : look.ink;
   pen.font = `bold ${labelPx(r, look.text)}px ${LABEL_FONT_FAMILY}`;
   pen.textAlign = 'center';
   pen.textBaseline = 'middle';
   pen.fillText(look.text, x, y + labelDrop(look.shape, r));
-  if (look.glyph) drawBadge(pen, x + r * 0.95, y - r * 0.95, look.glyph);
 }
 
 /** The status glyph on a small white disc at the marker's upper right: it reads without any colour. */
-function drawBadge(pen: Pen, x: number, y: number, glyph: string): void {
-  traceOutline(pen, { kind: 'circle', r: 7.5 }, x, y);
+export function drawBadge(pen: Pen, x: number, y: number, glyph: string): void {
+  traceOutline(pen, { kind: 'circle', r: BADGE_RADIUS }, x, y);
   pen.fillStyle = HALO_LIGHT;
   pen.fill();
   pen.strokeStyle = HALO_DARK;
