@@ -19,10 +19,10 @@ afterEach(() => {
 const gbp = (amount: number) => ({ amount, currency: 'GBP' });
 const deposit = (over: Partial<Invoice> = {}): Invoice => ({
   id: 4, number: 12, reference: '12', kind: 'deposit', issuedAt: '2026-12-01T09:00:00.000Z', tax: null, net: gbp(5000), taxAmount: gbp(0), gross: gbp(5000),
-  deducted: gbp(0), due: gbp(5000), paid: gbp(0), status: 'open', creditsInvoiceId: null, voidReason: null, lines: [{ description: 'Deposit', net: gbp(5000), tax: gbp(0) }], ...over,
+  deducted: gbp(0), due: gbp(5000), paid: gbp(0), refunded: gbp(0), left: gbp(5000), status: 'open', creditsInvoiceId: null, voidReason: null, lines: [{ description: 'Deposit', net: gbp(5000), tax: gbp(0) }], ...over,
 });
 const cardPayment: Payment = { id: 9, invoiceId: 4, invoiceNumber: 12, invoiceKind: 'deposit', kind: 'payment', method: 'card', status: 'succeeded', amount: gbp(5000),
-  refunded: gbp(0), refundOfId: null, checkoutSessionId: 'cs_test_a', receivedOn: null, createdAt: '2026-12-02T09:00:00.000Z' };
+  refunded: gbp(0), refundDue: gbp(0), refundOfId: null, checkoutSessionId: 'cs_test_a', receivedOn: null, createdAt: '2026-12-02T09:00:00.000Z' };
 
 const renderPanel = (role: Role, url = '/home?set=7') => {
   const router = createMemoryRouter([{ path: '/home', element: <PaymentsPanel restorationId={7} role={role} /> }], { initialEntries: [url] });
@@ -53,7 +53,7 @@ describe('PaymentsPanel', () => {
   });
 
   it('when a card payment was received, then the technician sees its line with a Refund button and the owner sees it without', async () => {
-    fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), status: 'paid' })]) : ok([cardPayment])));
+    fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })]) : ok([cardPayment])));
     renderPanel('technician');
     expect(await screen.findByText('Card payment received')).toBeInTheDocument();
     expect(screen.getByText(/for deposit request no\. 12/)).toBeInTheDocument();
