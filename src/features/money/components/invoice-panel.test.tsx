@@ -84,4 +84,13 @@ describe('InvoicePanel', () => {
     await waitFor(() => expect(api.calls.some((c) => c.method === 'POST')).toBe(true));
     expect(api.calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: '/invoices/12/void', body: { reason: 'Wrong labour rate' } });
   });
+
+  it('when a deposit was refunded in full, then its card says refunded and what went back, and offers a receipt', async () => {
+    fakeApi(() => ok([{ ...deposit, paid: gbp(0), refunded: gbp(3600), status: 'refunded' }]));
+    renderPanel(true);
+    const card = await screen.findByRole('region', { name: 'Deposit request CL-41' });
+    expect(within(card).getByText('Refunded', { selector: 'p' })).toBeInTheDocument();
+    expect(card).toHaveTextContent('Refunded: £36.00 — everything received went back; nothing is left to pay.');
+    expect(within(card).getByRole('link', { name: 'Receipt for CL-41' })).toBeInTheDocument();
+  });
 });
