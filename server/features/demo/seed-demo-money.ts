@@ -1,14 +1,14 @@
 import { and, eq } from 'drizzle-orm';
-import { shareOf } from '../../../shared/money/totals';
 import type { Database } from '../../db/client';
 import { estimates, events, payments, restorations, users } from '../../db/schema';
 import { demoPeople } from '../../db/seed/demo-scenario';
 import { estimatesService } from '../estimates/estimates.service';
 import { issueInvoice } from '../invoices/issue-invoice';
-import { recordPaymentEvent, settleInvoice } from '../payments/payments.repo';
+import { settleInvoice } from '../payments/payments.repo';
 import { readWorkshopSettings } from '../workshop/workshop-settings';
 
-const DEPOSIT_SHARE = 3000; // 30% of the estimate's high figure, in basis points
+/** A modest fixed deposit, in minor units of the workshop's currency: the final invoice still has plenty left to pay. */
+const DEPOSIT = 2500;
 
 /**
  * The Meridian 54's money, so its Money tab is not empty in the demo: an estimate Imogen approved and a deposit she
@@ -45,16 +45,17 @@ export async function seedDemoMoney(db: Database): Promise<void> {
       { restorationId: set.id, kind: 'estimate-decided', actorId: ownerId, data: { estimateId: estimate.id, version: estimate.version, decision: 'approved', name: demoPeople.owner.name } },
     ]);
     const settings = await readWorkshopSettings(tx);
-    const amount = shareOf(estimate.high.amount, DEPOSIT_SHARE);
     const deposit = await issueInvoice(tx, {
       restorationId: set.id, kind: 'deposit', userId: techId, prices: { ...settings, taxRateBasisPoints: null },
-      lines: [{ description: `Deposit: ${DEPOSIT_SHARE / 100}% of estimate version ${estimate.version}`, priced: { kind: 'fixed', quantity: 1, unitAmount: amount } }],
+      lines: [{ description: 'Deposit', priced: { kind: 'fixed', quantity: 1, unitAmount: DEPOSIT } }],
     });
     const [paid] = await tx.insert(payments).values({
       invoiceId: deposit.id, restorationId: set.id, kind: 'payment', method: 'transfer', status: 'succeeded', amount: deposit.due,
       currency: deposit.currency, receivedOn: sentAt.toISOString().slice(0, 10), recordedById: techId, settledAt: sentAt,
     }).returning();
     await settleInvoice(tx, deposit.id);
-    await recordPaymentEvent(tx, deposit, paid!, techId);
+    // The history line only: a demo that starts with unread notifications would greet people with old news.
+    await tx.insert(events).values({ restorationId: set.id, kind: 'payment-received', actorId: techId,
+      data: { invoiceId: deposit.id, number: deposit.number, kind: deposit.kind, method: 'transfer', paymentId: paid!.id } });
   });
 }
