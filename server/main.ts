@@ -15,6 +15,7 @@ import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
 import { seedDemoSheet } from './features/demo/seed-demo-sheet';
 import { seedDemoSafety } from './features/demo/seed-demo-safety';
+import { seedDemoMoney } from './features/demo/seed-demo-money';
 import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
 import { backfillPhoneVariants } from './features/photos/backfill-phone-variants';
 import { scheduleSweep } from './features/photos/schedule-sweep';
@@ -56,6 +57,7 @@ async function main() {
     await seedDemoFindings(handle.db);
     await seedDemoSheet({ db: handle.db, storage, config: { uploads } });
     await seedDemoWorkshop(handle.db);
+    await seedDemoMoney(handle.db);
     await seedDemoSafety(handle.db);
     await seedDemoBringup(handle.db);
   }

@@ -29,6 +29,7 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'measurements.record': { technician: true, mentor: false, owner: false },
   'parts.view': { technician: true, mentor: true, owner: true },
   'parts.edit': { technician: true, mentor: false, owner: false },
+  'parts.costs': { technician: true, mentor: false, owner: false },
   'report.download': { technician: true, mentor: true, owner: true },
   'report.send': { technician: true, mentor: false, owner: false },
   'workshop.view': { technician: true, mentor: true, owner: false },

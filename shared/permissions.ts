@@ -35,6 +35,7 @@ export const actions = [
   'measurements.record',
   'parts.view',
   'parts.edit',
+  'parts.costs',
   'report.download',
   'report.send',
   'workshop.view',
@@ -100,6 +101,8 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   // Owners see the ledger without costs, sources and notes; technicians keep it.
   'parts.view': () => true,
   'parts.edit': (role) => role === 'technician',
+  // A part's cost is money: not for mentors (money.view), nor for owners, who read the ledger without costs.
+  'parts.costs': (role) => can(role, 'money.view') && role !== 'owner',
   'report.download': () => true,
   'report.send': (role) => role === 'technician',
   // The workshop's own working views: planned parts, the shopping list, CSV export, bench warnings, the

@@ -3,3 +3,4 @@ export * from './rounding';
 export * from './tax';
 export * from './totals';
 export * from './estimate-range';
+export * from './invoice-status';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { invoiceStatuses } from '../money/invoice-status';
 import { isTimeZone, moneySchema } from './estimates';
 import { idSchema } from './ids';
 
@@ -34,8 +35,14 @@ export const invoiceSchema = z.object({
   gross: moneySchema,
   deducted: moneySchema,
   due: moneySchema,
+  /** Received less refunded. */
   paid: moneySchema,
-  status: z.enum(['open', 'paid', 'void', 'credit']),
+  /** Given back so far. */
+  refunded: moneySchema,
+  /** Still to pay (`amountLeft` in shared/money): nothing once void, credited, settled or refunded. */
+  left: moneySchema,
+  /** From `invoiceStatus` in shared/money, the one place it is derived. */
+  status: z.enum(invoiceStatuses),
   creditsInvoiceId: z.number().nullable(),
   voidReason: z.string().nullable(),
   lines: z.array(z.object({ description: z.string(), net: moneySchema, tax: moneySchema })),

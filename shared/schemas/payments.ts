@@ -45,6 +45,8 @@ export const paymentSchema = z.object({
   amount: moneySchema,
   /** Card payments: what has been refunded of it so far (succeeded refunds). */
   refunded: moneySchema,
+  /** A card payment that arrived when it was not due (its invoice void, or already paid): what is still to give back. */
+  refundDue: moneySchema,
   /** The payment a refund returns. */
   refundOfId: z.number().nullable(),
   /** The checkout session a card payment came from (the way back from the checkout page names it). */

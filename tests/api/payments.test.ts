@@ -127,7 +127,7 @@ describe('card payments through the hosted checkout (the real SDK against the lo
     expect((await invoiceOf(id, deposit.id)).status).toBe('open');
   });
 
-  it('when a technician refunds part and then the rest of a card payment, then each refund arrives by its event and the deposit is open again', async () => {
+  it('when a technician refunds part and then the rest of a card payment, then each refund arrives by its event and the deposit ends refunded, with nothing to pay', async () => {
     const { id, deposit } = await newDeposit(6000);
     await checkout(deposit.id, 'pay');
     const [paid] = await paymentsOf(id);
@@ -135,7 +135,8 @@ describe('card payments through the hosted checkout (the real SDK against the lo
     const part = await tech.post(`/api/payments/${paid!.id}/refund`).send({ amount: { amount: 2500, currency: 'GBP' } });
     expect(part.status).toBe(202);
     await t.paymentFake.settled();
-    expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'open', paid: { amount: 3500, currency: 'GBP' } });
+    // A refund gives money back; it never asks for it again: the deposit stays paid with nothing left.
+    expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'paid', paid: { amount: 3500, currency: 'GBP' }, refunded: { amount: 2500, currency: 'GBP' }, left: { amount: 0, currency: 'GBP' } });
     // Both the refund event and the charge event describe the same refund: it is recorded once.
     expect((await paymentsOf(id)).filter((p) => p.kind === 'refund')).toHaveLength(1);
     expect((await tech.post(`/api/payments/${paid!.id}/refund`).send({ amount: { amount: 3501, currency: 'GBP' } })).status).toBe(409);
@@ -145,7 +146,10 @@ describe('card payments through the hosted checkout (the real SDK against the lo
     const lines = await paymentsOf(id);
     expect(lines.map((p) => [p.kind, p.status, p.amount.amount])).toEqual([['payment', 'succeeded', 6000], ['refund', 'succeeded', 2500], ['refund', 'succeeded', 3500]]);
     expect(lines[0]!.refunded).toEqual({ amount: 6000, currency: 'GBP' });
-    expect(await invoiceOf(id, deposit.id)).toMatchObject({ paid: { amount: 0, currency: 'GBP' } });
+    expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'refunded', paid: { amount: 0, currency: 'GBP' }, refunded: { amount: 6000, currency: 'GBP' }, left: { amount: 0, currency: 'GBP' } });
+    // Refunded in full is not open again: no checkout, no transfer against it.
+    expect((await owner.post(`/api/invoices/${deposit.id}/checkout`)).status).toBe(409);
+    expect((await tech.post(`/api/invoices/${deposit.id}/payments`).send({ amount: { amount: 100, currency: 'GBP' }, method: 'cash', receivedOn: '2026-12-01' })).status).toBe(409);
     // Every refund event again, in reverse order: nothing changes.
     for (const e of t.paymentFake.sent.filter((x) => x.type.includes('refund')).reverse()) await t.paymentFake.post(e.payload, e.header);
     expect((await paymentsOf(id)).length).toBe(3);
@@ -179,6 +183,12 @@ describe('payments recorded by hand', () => {
     const cash = (await paymentsOf(id)).find((p) => p.method === 'cash')!;
     const refund = await tech.post(`/api/payments/${cash.id}/refund`).send({ amount: { amount: 1000, currency: 'GBP' } });
     expect(refund.status).toBe(201);
-    expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'open', paid: { amount: 7000, currency: 'GBP' } });
+    expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'paid', paid: { amount: 7000, currency: 'GBP' }, refunded: { amount: 1000, currency: 'GBP' }, left: { amount: 0, currency: 'GBP' } });
+    // The rest of the cash and all of the transfer back: refunded, with nothing left to pay.
+    expect((await tech.post(`/api/payments/${cash.id}/refund`).send({})).status).toBe(201);
+    const transfer = (await paymentsOf(id)).find((p) => p.method === 'transfer')!;
+    expect((await tech.post(`/api/payments/${transfer.id}/refund`).send({})).status).toBe(201);
+    expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'refunded', paid: { amount: 0, currency: 'GBP' }, refunded: { amount: 8000, currency: 'GBP' }, left: { amount: 0, currency: 'GBP' } });
+    expect((await owner.post(`/api/invoices/${deposit.id}/checkout`)).status).toBe(409);
   });
 });

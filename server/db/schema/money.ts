@@ -161,7 +161,9 @@ export const invoices = pgTable(
     /** Deposits paid, deducted on a final invoice. */
     deducted: integer().notNull().default(0),
     due: integer().notNull(),
+    /** Received less refunded; `refunded` is what went back (both from succeeded payment lines, kept by settling). */
     paid: integer().notNull().default(0),
+    refunded: integer().notNull().default(0),
     /** The invoice a credit note corrects. */
     creditsInvoiceId: integer(),
     voidedAt: timestamp({ withTimezone: true, mode: 'date' }),

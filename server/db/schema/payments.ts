@@ -34,6 +34,8 @@ export const payments = pgTable(
     /** Transfers and cash: the day the money arrived, as the technician typed it. */
     receivedOn: date({ mode: 'string' }),
     recordedById: integer().references(() => users.id, { onDelete: 'set null' }),
+    /** A card payment that arrived when nothing (or less) was due, e.g. on an invoice voided meanwhile: what to give back. */
+    refundDue: integer().notNull().default(0),
     /** When it succeeded (or failed): the service's event time for card payments. */
     settledAt: timestamp({ withTimezone: true, mode: 'date' }),
     ...timestamps,

@@ -1,3 +1,4 @@
+import { amountLeft } from '../../../shared/money/invoice-status';
 import { taxRoundingLabels } from '../../../shared/money/tax';
 import { invoiceKindLabels } from '../../../shared/schemas/invoices';
 import { createWriter } from '../report/pdf-writer';
@@ -54,7 +55,9 @@ export async function renderInvoice(d: InvoiceDocument, kind: DocumentKind, time
   } else {
     w.heading('Received');
     w.text(`${m(i.paid)} received against ${d.reference} (total ${m(i.due)}).`, { size: 13 });
-    w.text(i.paid >= i.due ? 'Paid in full. Thank you.' : `Still to pay: ${m(i.due - i.paid)}.`, { bold: true });
+    if (i.refunded) w.text(`${m(i.refunded)} refunded.`, { size: 13 });
+    const left = amountLeft({ kind: i.kind, voided: i.voidedAt !== null, due: i.due, paid: i.paid, refunded: i.refunded });
+    w.text(left > 0 ? `Still to pay: ${m(left)}.` : i.paid > 0 ? 'Paid in full. Thank you.' : 'Nothing is left to pay.', { bold: true });
     w.text(`Receipt printed ${documentDate(new Date(), timeZone)}.`, { colour: SOFT, size: 9 });
   }
   w.text(`Amounts in ${i.currency}.`, { colour: SOFT, size: 9 });

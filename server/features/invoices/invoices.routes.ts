@@ -43,7 +43,7 @@ export function invoicesRoutes(deps: AppDeps): Router {
     const { params, query } = input(res, document);
     const d = await invoiceDocument(db, params.invoiceId);
     if (!d) throw new NotFoundError();
-    if (kind === 'receipt' && d.invoice.paid <= 0) throw new ConflictError(`Nothing has been paid against ${d.reference} yet, so there is no receipt.`);
+    if (kind === 'receipt' && d.invoice.paid <= 0 && d.invoice.refunded <= 0) throw new ConflictError(`Nothing has been paid against ${d.reference} yet, so there is no receipt.`);
     const timeZone = query.timeZone ?? (await readWorkshopSettings(db)).timeZone;
     const title = documentTitle(d, kind);
     res.type('application/pdf').attachment(`${title.replace(/[^\w]+/g, '-').toLowerCase()}.pdf`).send(await renderInvoice(d, kind, timeZone));

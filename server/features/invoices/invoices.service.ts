@@ -1,5 +1,6 @@
 import { and, asc, desc, eq, inArray, isNull, ne } from 'drizzle-orm';
 import type { DepositInput, Invoice, InvoicePreview } from '../../../shared/schemas/invoices';
+import { amountLeft, invoiceStatus } from '../../../shared/money/invoice-status';
 import { shareOf } from '../../../shared/money/totals';
 import type { AppDeps } from '../../app-deps';
 import type { Tx } from '../../db/client';
@@ -17,12 +18,12 @@ type Deps = Pick<AppDeps, 'db' | 'mailer' | 'config'>;
 
 function present(i: Row, lines: (typeof invoiceLines.$inferSelect)[]): Invoice {
   const m = (amount: number) => ({ amount, currency: i.currency });
-  const status = i.voidedAt ? 'void' : i.kind === 'credit-note' ? 'credit' : i.paid >= i.due ? 'paid' : 'open';
+  const figures = { kind: i.kind, voided: i.voidedAt !== null, due: i.due, paid: i.paid, refunded: i.refunded };
   return {
     id: i.id, number: i.number, reference: referenceOf(i), kind: i.kind, issuedAt: i.issuedAt.toISOString(),
     tax: i.taxRateBasisPoints === null ? null : { name: i.taxName, rateBasisPoints: i.taxRateBasisPoints },
     net: m(i.net), taxAmount: m(i.tax), gross: m(i.gross), deducted: m(i.deducted), due: m(i.due), paid: m(i.paid),
-    status, creditsInvoiceId: i.creditsInvoiceId, voidReason: i.voidReason,
+    refunded: m(i.refunded), left: m(amountLeft(figures)), status: invoiceStatus(figures), creditsInvoiceId: i.creditsInvoiceId, voidReason: i.voidReason,
     lines: lines.map((l) => ({ description: l.description, net: m(l.net), tax: m(l.tax) })),
   };
 }

@@ -30,6 +30,21 @@ describe('CSV formula neutralising', () => {
   });
 });
 
+describe('CSV cost column', () => {
+  it('when the reader may not see money, then the file has no cost column; otherwise it has one in the currency', () => {
+    const part = {
+      id: 1, restorationId: 1, findingId: null, componentRef: 'C7', action: 'replaced', state: 'fitted', originalPart: 'Wax paper',
+      originalRating: '', replacementPart: 'Film', replacementRating: '', mainsPosition: 'none', quantity: 1, costMinor: 385,
+      source: '', testedAfter: '', notes: '', fittedAt: null, warnings: [],
+    } as unknown as Part;
+    const header = (text: string) => (parse(text, { bom: true, to: 1 }) as string[][])[0]!;
+    expect(header(partsCsv([{ part, finding: null }], { currency: 'GBP' }))).toContain('Cost (GBP)');
+    const hidden = partsCsv([{ part, finding: null }], { currency: 'GBP' }, { costs: false });
+    expect(header(hidden).some((h) => h.startsWith('Cost'))).toBe(false);
+    expect(hidden).not.toContain('3.85');
+  });
+});
+
 describe('CSV dates', () => {
   // Offsets from the IANA tz database: Europe/Berlin is UTC+1 in winter, America/New_York UTC-5 (EST) before
   // 8 March 2026 and UTC-4 from then; Pacific/Auckland UTC+13 in January (NZDT).

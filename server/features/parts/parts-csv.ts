@@ -10,9 +10,14 @@ export interface CsvLine {
 }
 
 
-function columns({ currency, timeZone }: PartsCsvQuery) {
+/** Who reads the export: without `costs` (mentors see no money) the cost column is left out altogether. */
+export interface CsvReader {
+  costs: boolean;
+}
+
+function columns({ currency, timeZone }: PartsCsvQuery, reader: CsvReader) {
   const digits = currency ? minorDigits(currency) : 2;
-  return [
+  const all = [
     ['Reference', ({ part }: CsvLine) => part.componentRef],
     ['Finding', ({ finding }: CsvLine) => (finding ? `#${finding.number} ${finding.title}` : '')],
     ['Action', ({ part }: CsvLine) => partActionLabels[part.action]],
@@ -30,6 +35,7 @@ function columns({ currency, timeZone }: PartsCsvQuery) {
     ['Fitted', ({ part }: CsvLine) => (part.fittedAt ? isoDate(part.fittedAt, timeZone) : '')],
     ['Warnings', ({ part }: CsvLine) => part.warnings.map((w) => w.message).join(' | ')],
   ] as const;
+  return reader.costs ? all : all.filter(([header]) => !header.startsWith('Cost'));
 }
 
 /**
@@ -44,8 +50,8 @@ export function neutraliseFormula(cell: string): string {
  * The ledger as CSV (RFC 4180 quoting by csv-stringify), with a byte-order mark so spreadsheets read UTF-8, in the
  * order given (the service gives parts-list order), dates as ISO 8601 dates and costs as plain numbers.
  */
-export function partsCsv(lines: CsvLine[], options: PartsCsvQuery = {}): string {
-  const cols = columns(options);
+export function partsCsv(lines: CsvLine[], options: PartsCsvQuery = {}, reader: CsvReader = { costs: true }): string {
+  const cols = columns(options, reader);
   const rows = [cols.map(([h]) => h), ...lines.map((line) => cols.map(([, get]) => get(line)))];
   return stringify(rows.map((row) => row.map(neutraliseFormula)), { bom: true, record_delimiter: 'windows', quoted_string: true });
 }

@@ -1,4 +1,5 @@
 import { Router, type Request, type Response } from 'express';
+import { can } from '../../../shared/permissions';
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { partInputSchema, partPatchSchema, partsCsvQuerySchema } from '../../../shared/schemas/parts';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
@@ -31,9 +32,11 @@ export function partsRoutes({ db }: AppDeps): Router {
   router.get('/restorations/:id/parts.csv', requireUser, validate(csv), guard(db, 'parts.view'), async (_req, res) => {
     const { params, query } = input(res, csv);
     const lines = (await service.forExport(params.id, roleOf(res))).map(({ row, finding }) => ({ part: toPart(row, roleOf(res)), finding }));
-    // Costs in the workshop's currency; `?currency=` still overrides it for a reader who asks.
+    // Costs in the workshop's currency; `?currency=` still overrides it for a reader who asks. Mentors see no money,
+    // so their export has no cost column at all (owners keep it, blank, as the ledger they read has no costs).
     const currency = query.currency ?? (await readWorkshopSettings(db)).currency;
-    res.type('text/csv; charset=utf-8').attachment(`restoration-${params.id}-parts.csv`).send(partsCsv(lines, { ...query, currency }));
+    const reader = { costs: can(roleOf(res), 'money.view') };
+    res.type('text/csv; charset=utf-8').attachment(`restoration-${params.id}-parts.csv`).send(partsCsv(lines, { ...query, currency }, reader));
   });
   router.post('/restorations/:id/parts', requireUser, validate(create), guard(db, 'parts.edit'), async (req, res) => {
     const { params, body } = input(res, create);

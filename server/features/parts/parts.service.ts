@@ -1,6 +1,6 @@
 import { partWarnings } from '../../../shared/bench';
 import { compareComponentRefs } from '../../../shared/natural-order';
-import type { Role } from '../../../shared/permissions';
+import { can, type Role } from '../../../shared/permissions';
 import type { Part, PartInput } from '../../../shared/schemas/parts';
 import type { Database, Executor } from '../../db/client';
 import { BadRequestError, NotFoundError } from '../../http/errors';
@@ -14,11 +14,13 @@ type Row = PartRow;
 export function toPart(row: Row, role: Role): Part {
   const warnings = partWarnings({ original: `${row.originalPart} ${row.originalRating}`, replacement: `${row.replacementPart} ${row.replacementRating}`, mainsPosition: row.mainsPosition });
   const owner = role === 'owner';
+  // Costs follow the one policy: technicians only (mentors see no money; owners read the ledger without costs).
+  const costs = can(role, 'parts.costs');
   return {
     id: row.id, restorationId: row.restorationId, findingId: row.findingId, componentRef: row.componentRef,
     originalPart: row.originalPart, originalRating: row.originalRating, replacementPart: row.replacementPart,
     replacementRating: row.replacementRating, action: row.action, state: row.state, mainsPosition: row.mainsPosition,
-    quantity: row.quantity, costMinor: owner ? null : row.costMinor, source: owner ? '' : row.source, testedAfter: row.testedAfter,
+    quantity: row.quantity, costMinor: costs ? row.costMinor : null, source: owner ? '' : row.source, testedAfter: row.testedAfter,
     notes: owner ? '' : row.notes, fittedAt: row.fittedAt?.toISOString() ?? null,
     // The bench checks on a replacement are the technician's working notes, not the owner's.
     warnings: !owner && (row.action === 'replaced' || row.action === 'restuffed') ? warnings : [],

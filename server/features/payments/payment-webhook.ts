@@ -3,7 +3,8 @@ import type Stripe from 'stripe';
 import type { Database, Tx } from '../../db/client';
 import { paymentEvents, payments } from '../../db/schema';
 import { ConflictError } from '../../http/errors';
-import { lockInvoice, recordPaymentEvent, settleInvoice } from './payments.repo';
+import { notDue } from '../../../shared/money/invoice-status';
+import { lockInvoice, outstanding, recordPaymentEvent, settleInvoice } from './payments.repo';
 
 type Status = (typeof payments.$inferSelect)['status'];
 
@@ -45,8 +46,12 @@ async function fromSession(tx: Tx, type: string, s: Stripe.Checkout.Session, at:
   }).returning())[0]!;
   if (!row.paymentIntentId && s.payment_intent) await tx.update(payments).set({ paymentIntentId: idOf(s.payment_intent) }).where(eq(payments.id, row.id));
   if (await advance(tx, row, status, at)) {
+    // Money taken for an invoice voided (or paid another way) meanwhile is kept on record, never dropped, and
+    // flagged with what was not due, for a technician to refund: the webhook itself never moves money.
+    const refundDue = notDue(row.amount, outstanding(invoice));
+    if (refundDue) await tx.update(payments).set({ refundDue }).where(eq(payments.id, row.id));
     await settleInvoice(tx, invoiceId);
-    await recordPaymentEvent(tx, invoice, { ...row, status: 'succeeded' }, null);
+    await recordPaymentEvent(tx, invoice, { ...row, status: 'succeeded', refundDue }, null);
   }
   return row.id;
 }

@@ -1,4 +1,5 @@
 import { and, asc, eq, sql } from 'drizzle-orm';
+import { amountLeft } from '../../../shared/money/invoice-status';
 import { formatMoney } from '../../../shared/money/currency';
 import { mayView, type Role } from '../../../shared/permissions';
 import { invoiceKindLabels } from '../../../shared/schemas/invoices';
@@ -19,18 +20,21 @@ export async function lockInvoice(tx: Tx, invoiceId: number): Promise<InvoiceRow
   return row;
 }
 
-/** What is still to pay on an invoice; nothing on a void one or a credit note. */
-export const outstanding = (i: InvoiceRow) => (i.voidedAt || i.kind === 'credit-note' ? 0 : Math.max(0, i.due - i.paid));
+/** What is still to pay on an invoice (`amountLeft`): nothing on a void one, a credit note, or one settled or refunded. */
+export const outstanding = (i: InvoiceRow) => amountLeft({ kind: i.kind, voided: i.voidedAt !== null, due: i.due, paid: i.paid, refunded: i.refunded });
 
 /**
- * Recomputes the invoice's `paid` from its succeeded payments less their succeeded refunds, so settling twice
+ * Recomputes the invoice's `paid` (succeeded payments less succeeded refunds) and `refunded`, so settling twice
  * gives the same answer. The caller holds the invoice lock.
  */
 export async function settleInvoice(tx: Tx, invoiceId: number) {
-  const [{ paid } = { paid: 0 }] = await tx
-    .select({ paid: sql<number>`coalesce(sum(case when ${payments.kind} = 'payment' then ${payments.amount} else -${payments.amount} end), 0)::int` })
+  const [{ received, refunded } = { received: 0, refunded: 0 }] = await tx
+    .select({
+      received: sql<number>`coalesce(sum(${payments.amount}) filter (where ${payments.kind} = 'payment'), 0)::int`,
+      refunded: sql<number>`coalesce(sum(${payments.amount}) filter (where ${payments.kind} = 'refund'), 0)::int`,
+    })
     .from(payments).where(and(eq(payments.invoiceId, invoiceId), eq(payments.status, 'succeeded')));
-  await tx.update(invoices).set({ paid }).where(eq(invoices.id, invoiceId));
+  await tx.update(invoices).set({ paid: received - refunded, refunded }).where(eq(invoices.id, invoiceId));
 }
 
 /**
@@ -45,7 +49,8 @@ export async function recordPaymentEvent(tx: Tx, invoice: InvoiceRow, p: Row, ac
   const what = `${invoiceKindLabels[invoice.kind].toLowerCase()} no. ${invoice.number}`;
   const amount = formatMoney({ amount: p.amount, currency: p.currency }, 'en-GB');
   const summary = p.kind === 'refund' ? `Refund of ${amount} on ${what} (${paymentMethodLabels[p.method].toLowerCase()})`
-    : `Payment of ${amount} received for ${what} (${paymentMethodLabels[p.method].toLowerCase()})`;
+    : `Payment of ${amount} received for ${what} (${paymentMethodLabels[p.method].toLowerCase()})${p.refundDue
+      ? `; ${formatMoney({ amount: p.refundDue, currency: p.currency }, 'en-GB')} of it was not due (${invoice.voidedAt ? 'the invoice is void' : 'already paid'}) and is to be refunded` : ''}`;
   const people = await notificationsRepo(tx).membersWithRole(invoice.restorationId, ['technician', 'owner']);
   await notificationsRepo(tx).insert(people.filter((m) => m.userId !== actorId && mayView(m.role, 'payment', {}))
     .map((m) => ({ userId: m.userId, restorationId: invoice.restorationId, kind: 'payment' as const, summary })));
@@ -57,6 +62,7 @@ function present(p: Row, invoice: { number: number; kind: InvoiceRow['kind'] }, 
   return {
     id: p.id, invoiceId: p.invoiceId, invoiceNumber: invoice.number, invoiceKind: invoice.kind, kind: p.kind, method: p.method, status: p.status,
     amount: { amount: p.amount, currency: p.currency }, refunded: { amount: refunded, currency: p.currency },
+    refundDue: { amount: Math.max(0, p.refundDue - refunded), currency: p.currency },
     refundOfId: p.refundOfId, checkoutSessionId: p.checkoutSessionId, receivedOn: p.receivedOn, createdAt: p.createdAt.toISOString(),
   };
 }

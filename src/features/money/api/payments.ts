@@ -1,4 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Money } from '../../../../shared/money/currency';
 import type { Invoice } from '../../../../shared/schemas/invoices';
 import type { ManualPaymentInput, Payment } from '../../../../shared/schemas/payments';
 import { api } from '../../../lib/api-client';
@@ -43,11 +44,12 @@ export function useRecordPayment(restorationId: number) {
   });
 }
 
-/** A full refund; a card refund shows once the payment service confirms it. */
+/** A refund of all of a payment (no amount) or part of it; a card refund shows once the payment service confirms it. */
 export function useRefund(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
-    mutationFn: (paymentId: number) => api<unknown>(`/payments/${paymentId}/refund`, { method: 'POST', json: {} }),
+    mutationFn: ({ paymentId, amount }: { paymentId: number; amount?: Money }) =>
+      api<unknown>(`/payments/${paymentId}/refund`, { method: 'POST', json: amount ? { amount } : {} }),
     onSuccess: after,
   });
 }

@@ -7,7 +7,7 @@ import { InvoiceTotals } from './invoice-totals';
 import { moneyText } from './money-text';
 import { formatLongDate } from '../../../lib/format';
 
-const statusText: Record<Invoice['status'], string> = { open: 'Open', paid: 'Paid', void: 'Void', credit: 'Credit note' };
+const statusText: Record<Invoice['status'], string> = { open: 'Open', paid: 'Paid', refunded: 'Refunded', void: 'Void', credit: 'Credit note' };
 const day = (iso: string) => formatLongDate(iso);
 
 /** One issued document as it was issued: never edited; a technician may void it, which issues a credit note. */
@@ -30,9 +30,10 @@ export function InvoiceCard({ restorationId, invoice: i, all, canEdit }: { resto
       {i.status === 'void' && <p className="font-semibold text-danger">Void: {i.voidReason}</p>}
       <InvoiceTotals priced={i} caption={`Lines of ${title}`} dueLabel={i.kind === 'credit-note' ? 'Credited' : 'Amount due'} />
       {i.paid.amount > 0 && <p>Paid so far: <span className="font-mono">{moneyText(i.paid)}</span></p>}
+      {i.refunded.amount > 0 && <p>Refunded: <span className="font-mono">{moneyText(i.refunded)}</span>{i.status === 'refunded' && ' — everything received went back; nothing is left to pay.'}</p>}
       <div className="flex flex-wrap gap-2">
         <a className={buttonClass('quiet')} href={documentUrl(i.id, 'invoice')} download>PDF of {i.reference}</a>
-        {i.paid.amount > 0 && <a className={buttonClass('quiet')} href={documentUrl(i.id, 'receipt')} download>Receipt for {i.reference}</a>}
+        {(i.paid.amount > 0 || i.refunded.amount > 0) && <a className={buttonClass('quiet')} href={documentUrl(i.id, 'receipt')} download>Receipt for {i.reference}</a>}
         {canEdit && i.kind !== 'credit-note' && i.status !== 'void' && i.paid.amount === 0 && !voiding && (
           <Button variant="quiet" onClick={() => setVoiding(true)}>Void {i.reference}…</Button>
         )}

@@ -17,7 +17,7 @@ const gbp = (amount: number) => ({ amount, currency: 'GBP' });
 const vat = { name: 'VAT', rateBasisPoints: 2000 };
 const deposit: Invoice = {
   id: 11, number: 41, reference: 'CL-41', kind: 'deposit', issuedAt: '2026-11-20T10:00:00.000Z', tax: null,
-  net: gbp(3600), taxAmount: gbp(0), gross: gbp(3600), deducted: gbp(0), due: gbp(3600), paid: gbp(3600), status: 'paid',
+  net: gbp(3600), taxAmount: gbp(0), gross: gbp(3600), deducted: gbp(0), due: gbp(3600), paid: gbp(3600), refunded: gbp(0), left: gbp(0), status: 'paid',
   creditsInvoiceId: null, voidReason: null, lines: [{ description: 'Deposit', net: gbp(3600), tax: gbp(0) }],
 };
 // Worked by hand: £100.00 labour + £2.49 part = £102.49; VAT 20% rounded down £20.49; £122.98; less £36.00 deposit: £86.98.
@@ -25,7 +25,7 @@ const preview: InvoicePreview = {
   tax: vat, lines: [{ description: 'Labour, 2.5 h', net: gbp(10000), tax: gbp(0) }, { description: 'C27 22nF 630V', net: gbp(249), tax: gbp(0) }],
   net: gbp(10249), taxAmount: gbp(2049), gross: gbp(12298), deducted: gbp(3600), due: gbp(8698),
 };
-const final: Invoice = { ...deposit, ...preview, id: 12, number: 42, reference: 'CL-42', kind: 'final', paid: gbp(0), status: 'open', issuedAt: '2026-12-01T10:00:00.000Z' };
+const final: Invoice = { ...deposit, ...preview, id: 12, number: 42, reference: 'CL-42', kind: 'final', paid: gbp(0), left: preview.due, status: 'open', issuedAt: '2026-12-01T10:00:00.000Z' };
 
 const renderPanel = (canEdit: boolean) =>
   render(
@@ -83,5 +83,14 @@ describe('InvoicePanel', () => {
     await userEvent.click(submit);
     await waitFor(() => expect(api.calls.some((c) => c.method === 'POST')).toBe(true));
     expect(api.calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: '/invoices/12/void', body: { reason: 'Wrong labour rate' } });
+  });
+
+  it('when a deposit was refunded in full, then its card says refunded and what went back, and offers a receipt', async () => {
+    fakeApi(() => ok([{ ...deposit, paid: gbp(0), refunded: gbp(3600), status: 'refunded' }]));
+    renderPanel(true);
+    const card = await screen.findByRole('region', { name: 'Deposit request CL-41' });
+    expect(within(card).getByText('Refunded', { selector: 'p' })).toBeInTheDocument();
+    expect(card).toHaveTextContent('Refunded: £36.00 — everything received went back; nothing is left to pay.');
+    expect(within(card).getByRole('link', { name: 'Receipt for CL-41' })).toBeInTheDocument();
   });
 });

@@ -6,7 +6,7 @@ import { moneyText } from './money-text';
 /** Pays what is left on a deposit request or invoice by card, on the payment service's own checkout page. */
 export function PayButton({ invoice }: { invoice: Invoice }) {
   const checkout = useCheckout();
-  const left = { amount: invoice.due.amount - invoice.paid.amount, currency: invoice.due.currency };
+  const left = invoice.left;
   return (
     <div className="space-y-2">
       <Button onClick={() => checkout.mutate(invoice.id)} disabled={checkout.isPending || checkout.isSuccess}>

@@ -1,10 +1,10 @@
 import { can, type Role } from '../../../../shared/permissions';
 import { invoiceKindLabels } from '../../../../shared/schemas/invoices';
 import { paymentMethodLabels, type Payment } from '../../../../shared/schemas/payments';
+import { useState } from 'react';
 import { Button } from '../../../components/button';
-import { useConfirm } from '../../../components/use-confirm';
-import { useRefund } from '../api/payments';
 import { moneyText } from './money-text';
+import { RefundForm } from './refund-form';
 import { formatMediumDate } from '../../../lib/format';
 
 const statusWords: Record<Payment['status'], string> = { pending: 'processing', succeeded: 'received', failed: 'did not go through' };
@@ -17,16 +17,8 @@ function describe(p: Payment) {
 
 /** Money received and refunded on a set, oldest first; technicians may refund what is left of a payment. */
 export function PaymentLines({ restorationId, role, payments }: { restorationId: number; role: Role; payments: Payment[] }) {
-  const refund = useRefund(restorationId);
-  const { confirm, dialog } = useConfirm();
+  const [refunding, setRefunding] = useState<number | null>(null);
   const canRefund = can(role, 'payments.record');
-  const ask = async (p: Payment) => {
-    const left = { amount: p.amount.amount - p.refunded.amount, currency: p.amount.currency };
-    const ok = await confirm({ title: `Refund ${moneyText(left)}?`,
-      consequence: p.method === 'card' ? 'The payment service returns it to the card; the line appears once it confirms.' : 'Record that the money was handed back.',
-      confirmLabel: 'Refund', danger: true });
-    if (ok) refund.mutate(p.id);
-  };
   return (
     <div className="space-y-2">
       <ul className="divide-y divide-rule rounded-xl border border-rule bg-panel">
@@ -38,19 +30,20 @@ export function PaymentLines({ restorationId, role, payments }: { restorationId:
                 {dayText(p)} · {p.kind === 'refund' ? 'against' : 'for'} {invoiceKindLabels[p.invoiceKind].toLowerCase()} no. {p.invoiceNumber}
                 {p.kind === 'payment' && p.refunded.amount > 0 && ` · ${moneyText(p.refunded)} refunded`}
               </p>
+              {p.refundDue.amount > 0 && (
+                <p className="text-sm font-semibold text-danger">{moneyText(p.refundDue)} of it was not due (the invoice was void or already paid when it arrived): to be refunded.</p>
+              )}
             </div>
             <div className="flex items-center gap-3">
               <span className={`font-mono ${p.status === 'failed' ? 'text-ink-soft line-through' : ''}`}>{p.kind === 'refund' ? '−' : ''}{moneyText(p.amount)}</span>
-              {canRefund && p.kind === 'payment' && p.status === 'succeeded' && p.refunded.amount < p.amount.amount && (
-                <Button variant="quiet" onClick={() => void ask(p)} disabled={refund.isPending} aria-label={`Refund the ${paymentMethodLabels[p.method].toLowerCase()} payment of ${moneyText(p.amount)}`}>Refund</Button>
+              {canRefund && p.kind === 'payment' && p.status === 'succeeded' && p.refunded.amount < p.amount.amount && refunding !== p.id && (
+                <Button variant="quiet" onClick={() => setRefunding(p.id)} aria-label={`Refund the ${paymentMethodLabels[p.method].toLowerCase()} payment of ${moneyText(p.amount)}`}>Refund…</Button>
               )}
             </div>
+            {refunding === p.id && <RefundForm restorationId={restorationId} payment={p} onDone={() => setRefunding(null)} />}
           </li>
         ))}
       </ul>
-      {refund.error && <p role="alert" className="font-semibold text-danger">{refund.error.message}</p>}
-      {refund.isSuccess && <p role="status">Refund asked for; it shows here once confirmed.</p>}
-      {dialog}
     </div>
   );
 }

@@ -8,7 +8,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../shared/permissions';
 import type { Invoice } from '../../../../shared/schemas/invoices';
 import type { Payment } from '../../../../shared/schemas/payments';
-import { fakeApi, ok } from '../../../testing/fake-api';
+import { apiError, fakeApi, ok } from '../../../testing/fake-api';
 import { PaymentsPanel } from './payments-panel';
 
 afterEach(() => {
@@ -19,10 +19,10 @@ afterEach(() => {
 const gbp = (amount: number) => ({ amount, currency: 'GBP' });
 const deposit = (over: Partial<Invoice> = {}): Invoice => ({
   id: 4, number: 12, reference: '12', kind: 'deposit', issuedAt: '2026-12-01T09:00:00.000Z', tax: null, net: gbp(5000), taxAmount: gbp(0), gross: gbp(5000),
-  deducted: gbp(0), due: gbp(5000), paid: gbp(0), status: 'open', creditsInvoiceId: null, voidReason: null, lines: [{ description: 'Deposit', net: gbp(5000), tax: gbp(0) }], ...over,
+  deducted: gbp(0), due: gbp(5000), paid: gbp(0), refunded: gbp(0), left: gbp(5000), status: 'open', creditsInvoiceId: null, voidReason: null, lines: [{ description: 'Deposit', net: gbp(5000), tax: gbp(0) }], ...over,
 });
 const cardPayment: Payment = { id: 9, invoiceId: 4, invoiceNumber: 12, invoiceKind: 'deposit', kind: 'payment', method: 'card', status: 'succeeded', amount: gbp(5000),
-  refunded: gbp(0), refundOfId: null, checkoutSessionId: 'cs_test_a', receivedOn: null, createdAt: '2026-12-02T09:00:00.000Z' };
+  refunded: gbp(0), refundDue: gbp(0), refundOfId: null, checkoutSessionId: 'cs_test_a', receivedOn: null, createdAt: '2026-12-02T09:00:00.000Z' };
 
 const renderPanel = (role: Role, url = '/home?set=7') => {
   const router = createMemoryRouter([{ path: '/home', element: <PaymentsPanel restorationId={7} role={role} /> }], { initialEntries: [url] });
@@ -53,11 +53,12 @@ describe('PaymentsPanel', () => {
   });
 
   it('when a card payment was received, then the technician sees its line with a Refund button and the owner sees it without', async () => {
-    fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), status: 'paid' })]) : ok([cardPayment])));
+    fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })]) : ok([cardPayment])));
     renderPanel('technician');
     expect(await screen.findByText('Card payment received')).toBeInTheDocument();
     expect(screen.getByText(/for deposit request no\. 12/)).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Refund the card payment of £50.00' })).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /^Pay/ })).not.toBeInTheDocument();
     cleanup();
     renderPanel('owner');
     expect(await screen.findByText('Card payment received')).toBeInTheDocument();
@@ -75,5 +76,64 @@ describe('PaymentsPanel', () => {
     await waitFor(() => expect(api.calls.some((c) => c.method === 'POST')).toBe(true));
     expect(api.calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: '/invoices/4/payments',
       body: { amount: { amount: 2050, currency: 'GBP' }, method: 'transfer', receivedOn: '2026-11-30' } });
+  });
+
+  it('when a technician refunds part of a payment, then the amount defaults to the rest and the part typed is sent in pence', async () => {
+    const api = fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })])
+      : c.method === 'GET' ? ok([{ ...cardPayment, refunded: gbp(1000) }]) : { status: 202, body: { refundId: 're_1', amount: gbp(1500), status: 'pending' } }));
+    renderPanel('technician');
+    await userEvent.click(await screen.findByRole('button', { name: 'Refund the card payment of £50.00' }));
+    const amount = screen.getByLabelText('Amount to refund (GBP)');
+    expect(amount).toHaveValue('40.00'); // £50.00 less the £10.00 already refunded
+    await userEvent.clear(amount);
+    await userEvent.type(amount, '15');
+    await userEvent.click(screen.getByRole('button', { name: 'Refund' }));
+    await waitFor(() => expect(api.calls.some((c) => c.method === 'POST')).toBe(true));
+    expect(api.calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: '/payments/9/refund', body: { amount: { amount: 1500, currency: 'GBP' } } });
+    expect(await screen.findByText(/Refund asked for/)).toBeInTheDocument();
+  });
+
+  it('when the amount to refund is more than is left, not a number, or refused by the server, then it says so clearly', async () => {
+    const api = fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })])
+      : c.method === 'GET' ? ok([{ ...cardPayment, method: 'cash', checkoutSessionId: null }]) : apiError(409, 'At most 2000 (minor units) of this payment can be refunded.')));
+    renderPanel('technician');
+    await userEvent.click(await screen.findByRole('button', { name: 'Refund the cash payment of £50.00' }));
+    const amount = screen.getByLabelText('Amount to refund (GBP)');
+    await userEvent.clear(amount);
+    await userEvent.type(amount, '50.01');
+    await userEvent.click(screen.getByRole('button', { name: 'Refund' }));
+    expect(await screen.findByText('At most £50.00 of this payment can be refunded.')).toBeInTheDocument();
+    expect(amount).toHaveAttribute('aria-invalid', 'true');
+    await userEvent.clear(amount);
+    await userEvent.type(amount, '12.345');
+    await userEvent.click(screen.getByRole('button', { name: 'Refund' }));
+    expect(await screen.findByText(/Enter an amount in GBP, such as 50.00, with at most 2 decimals/)).toBeInTheDocument();
+    expect(api.calls.filter((c) => c.method === 'POST')).toEqual([]);
+    await userEvent.clear(amount);
+    await userEvent.type(amount, '30');
+    await userEvent.click(screen.getByRole('button', { name: 'Refund' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent('At most 2000 (minor units) of this payment can be refunded.');
+  });
+
+  it('when a deposit was refunded in full, then technician and owner see it as refunded, with no Pay button', async () => {
+    const refundedDeposit = deposit({ paid: gbp(0), refunded: gbp(5000), left: gbp(0), status: 'refunded' });
+    const lines = [{ ...cardPayment, refunded: gbp(5000) }, { ...cardPayment, id: 10, kind: 'refund' as const, refundOfId: 9, checkoutSessionId: null }];
+    for (const role of ['owner', 'technician'] as const) {
+      fakeApi((c) => (c.path.endsWith('/invoices') ? ok([refundedDeposit]) : ok(lines)));
+      renderPanel(role);
+      expect(await screen.findByText('Deposit request no. 12: refunded')).toBeInTheDocument();
+      expect(screen.getByText('£50.00 went back; nothing is left to pay.')).toBeInTheDocument();
+      expect(screen.queryByRole('button', { name: /^Pay/ })).not.toBeInTheDocument();
+      expect(screen.queryByRole('form', { name: 'Record a transfer or cash' })).not.toBeInTheDocument();
+      cleanup();
+    }
+  });
+
+  it('when a card payment arrived after its deposit was voided, then the technician is told to refund it and the form offers what was not due', async () => {
+    fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ status: 'void', left: gbp(0), paid: gbp(5000) })]) : ok([{ ...cardPayment, refundDue: gbp(5000) }])));
+    renderPanel('technician');
+    expect(await screen.findByText(/£50.00 of it was not due .*: to be refunded\./)).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Refund the card payment of £50.00' }));
+    expect(screen.getByLabelText('Amount to refund (GBP)')).toHaveValue('50.00');
   });
 });

@@ -26,7 +26,8 @@ export function PaymentsPanel({ restorationId, role }: { restorationId: number; 
   if (payments.isError) return <ErrorState error={payments.error} onRetry={() => payments.refetch()} />;
   const state = returnState(outcome, invoices.data.find((i) => i.id === returnedFor), payments.data, params.get('session'), tooLong);
   // Once confirmed, the lists stop being asked again (the query options above follow `waiting`).
-  const open = invoices.data.filter((i) => i.status === 'open' && i.kind !== 'credit-note' && i.due.amount > i.paid.amount);
+  const open = invoices.data.filter((i) => i.status === 'open' && i.left.amount > 0);
+  const refunded = invoices.data.filter((i) => i.status === 'refunded');
   const paying = state === 'processing' || state === 'slow';
   return (
     <div className="space-y-4">
@@ -38,10 +39,20 @@ export function PaymentsPanel({ restorationId, role }: { restorationId: number; 
               <div>
                 <p className="font-semibold">{invoiceKindLabels[i.kind]} no. {i.reference}</p>
                 <p className="text-ink-soft">
-                  {moneyText({ amount: i.due.amount - i.paid.amount, currency: i.due.currency })} to pay{i.paid.amount > 0 && ` (${moneyText(i.paid)} paid so far)`}
+                  {moneyText(i.left)} to pay{i.paid.amount > 0 && ` (${moneyText(i.paid)} paid so far)`}
                 </p>
               </div>
               {can(role, 'payments.checkout') && !(paying && i.id === returnedFor) && <PayButton invoice={i} />}
+            </li>
+          ))}
+        </ul>
+      )}
+      {refunded.length > 0 && (
+        <ul className="space-y-2">
+          {refunded.map((i) => (
+            <li key={i.id} className="rounded-xl border border-rule bg-sunken px-4 py-3">
+              <p className="font-semibold">{invoiceKindLabels[i.kind]} no. {i.reference}: refunded</p>
+              <p className="text-ink-soft">{moneyText(i.refunded)} went back; nothing is left to pay.</p>
             </li>
           ))}
         </ul>

@@ -23,8 +23,10 @@ function PartText({ part, rating }: { part: string; rating: string }) {
 }
 
 export interface PartColumnsOptions {
-  /** Costs and sources: never shown to owners (the server withholds them too). */
+  /** Sources: never shown to owners (the server withholds them too). */
   showPrivate: boolean;
+  /** Costs: technicians only (`parts.costs`: mentors see no money, owners no costs); the server withholds them too. */
+  showCost: boolean;
   currency: Currency;
   /** The finding a part is linked to, if the reader can see it (owners see only shared findings). */
   findingOf: (findingId: number) => FindingChoice | undefined;
@@ -34,7 +36,7 @@ export interface PartColumnsOptions {
 }
 
 /** The ledger's columns, keyed by component reference. */
-export function partColumns({ showPrivate, currency, findingOf, onAdvance, onEdit, busyIds }: PartColumnsOptions) {
+export function partColumns({ showPrivate, showCost, currency, findingOf, onAdvance, onEdit, busyIds }: PartColumnsOptions) {
   const columns = [
     helper.accessor('componentRef', {
       header: 'Ref',
@@ -76,7 +78,7 @@ export function partColumns({ showPrivate, currency, findingOf, onAdvance, onEdi
       enableSorting: false,
     }),
     helper.accessor('quantity', { header: 'Qty', cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
-    ...(showPrivate
+    ...(showCost
       ? [
           helper.accessor((p) => p.costMinor ?? undefined, {
             id: 'cost',
@@ -87,9 +89,9 @@ export function partColumns({ showPrivate, currency, findingOf, onAdvance, onEdi
             },
             sortUndefined: 'last',
           }),
-          helper.accessor('source', { header: 'Source', enableSorting: false }),
         ]
       : []),
+    ...(showPrivate ? [helper.accessor('source', { header: 'Source', enableSorting: false })] : []),
     helper.accessor('testedAfter', { header: 'Tested after', enableSorting: false }),
     helper.accessor('findingId', {
       header: 'Finding',

@@ -51,6 +51,15 @@ describe('parts ledger', () => {
     expect(screen.queryByRole('button', { name: /^Edit/ })).not.toBeInTheDocument();
   });
 
+  it('when a mentor reads it, then there is no cost column (mentors see no money), and no cost shows even if one were sent', async () => {
+    fakePartsApi([reservoir]);
+    renderWithQueries(<PartsLedger restorationId={7} role="mentor" />);
+    await screen.findByRole('row', { name: 'Part C15' });
+    expect(screen.getByRole('columnheader', { name: /Qty/ })).toBeInTheDocument();
+    expect(screen.queryByRole('columnheader', { name: /Cost/ })).not.toBeInTheDocument();
+    expect(screen.queryByText('£1.85')).not.toBeInTheDocument();
+  });
+
   it('when listed, then rows go by reference as a schematic numbers them, and the state filter narrows them', async () => {
     fakePartsApi([reservoir, coupling, bias]);
     const user = userEvent.setup();

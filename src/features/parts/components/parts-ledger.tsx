@@ -62,7 +62,7 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
         setRefused(`${part.componentRef} was not marked ${partStateLabels[to].toLowerCase()} and is back to ${partStateLabels[part.state].toLowerCase()}: ${e.message}`),
       );
     };
-    return partColumns({ showPrivate: canEdit, currency, findingOf: (id) => byId.get(id), onAdvance: canEdit ? advance : undefined, onEdit: canEdit ? onEdit : undefined, busyIds });
+    return partColumns({ showPrivate: canEdit, showCost: can(role, 'parts.costs'), currency, findingOf: (id) => byId.get(id), onAdvance: canEdit ? advance : undefined, onEdit: canEdit ? onEdit : undefined, busyIds });
   }, [findings, canEdit, currency, onEdit, busyIds, update]);
 
   const table = useReactTable({
