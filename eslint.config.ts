@@ -1,6 +1,6 @@
 import { readdirSync } from 'node:fs';
 import js from '@eslint/js';
-import { importX } from 'eslint-plugin-import-x';
+import { createNodeResolver, importX } from 'eslint-plugin-import-x';
 import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
@@ -8,18 +8,28 @@ import tseslint from 'typescript-eslint';
  * Cross-feature imports that exist today (client). Each is a debt: move the shared piece to src/components or src/lib
  * (or let the app layer compose the two features), then delete its entry. A new cross-feature import fails lint.
  * TODO:
- * - findings → markup: status-buttons and status-mark take the status colours from markup's legend.
- * - help → measurements: help-content-view shows readings with the measurements table's words.
+ * - findings → markup: status-buttons and status-mark take the status colours from markup's legend; a test renders
+ *   markup's new-finding-form.
+ * - findings, measurements, parts → sheets: on-the-diagram-link and known-references.
+ * - help → measurements, photos: the verdict badge; the photo list.
  * - history → photos: before-after, pair-picker and suggest-pairs tests build photos with photos' fixtures.
+ * - money → findings: the restoration's findings.
  * - owner → history, photos: owner-home's test uses their fixtures.
- * - sheets → markup, photos: reference-viewer draws with markup's canvas pieces; chassis-photo-picker lists photos.
+ * - parts → meta: the workshop currency.
+ * - photos → findings: the status mark.
+ * - sheets → findings, markup, photos: the restoration's findings; reference-viewer draws with markup's canvas
+ *   pieces; chassis-photo-picker lists photos.
  */
 const crossFeatureDebt: Record<string, string[]> = {
-  findings: ['markup'],
-  help: ['measurements'],
+  findings: ['markup', 'sheets'],
+  help: ['measurements', 'photos'],
   history: ['photos'],
+  measurements: ['sheets'],
+  money: ['findings'],
   owner: ['history', 'photos'],
-  sheets: ['markup', 'photos'],
+  parts: ['meta', 'sheets'],
+  photos: ['findings'],
+  sheets: ['findings', 'markup', 'photos'],
 };
 const clientFeatures = readdirSync(new URL('./src/features', import.meta.url), { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
 const featureZones = clientFeatures.map((name) => ({
@@ -37,6 +47,9 @@ export default tseslint.config(
     files: ['**/*.{ts,tsx}'],
     plugins: { 'import-x': importX },
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
+    // Imports are written without extensions: without a resolver that tries .ts and .tsx the path rules below see
+    // no file and pass every import.
+    settings: { 'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] })] },
     rules: {
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/consistent-type-imports': 'error',
