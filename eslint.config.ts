@@ -12,7 +12,6 @@ import tseslint from 'typescript-eslint';
  *   markup's new-finding-form.
  * - findings, measurements, parts → sheets: on-the-diagram-link and known-references.
  * - help → measurements, photos: the verdict badge; the photo list.
- * - history → photos: before-after, pair-picker and suggest-pairs tests build photos with photos' fixtures.
  * - money → findings: the restoration's findings.
  * - owner → history, photos: owner-home's test uses their fixtures.
  * - parts → meta: the workshop currency.
@@ -23,7 +22,6 @@ import tseslint from 'typescript-eslint';
 const crossFeatureDebt: Record<string, string[]> = {
   findings: ['markup', 'sheets'],
   help: ['measurements', 'photos'],
-  history: ['photos'],
   measurements: ['sheets'],
   money: ['findings'],
   owner: ['history', 'photos'],

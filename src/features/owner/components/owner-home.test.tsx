@@ -10,7 +10,7 @@ import type { Restoration } from '../../../../shared/schemas/restorations';
 import { BeforeAfter } from '../../history/components/before-after';
 import { Timeline } from '../../history/components/timeline';
 import { suggestPairs } from '../../history/lib/suggest-pairs';
-import { makePhoto } from '../../photos/testing/photo-fixtures';
+import { makePhoto } from '../../../testing/photo-fixtures';
 import { heroPhoto, repairedFindings } from '../lib/owner-words';
 import { OwnerHome } from './owner-home';
 import { OwnerSet } from './owner-set';
