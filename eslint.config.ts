@@ -13,7 +13,6 @@ import tseslint from 'typescript-eslint';
  * - findings, measurements, parts → sheets: on-the-diagram-link and known-references.
  * - help → measurements, photos: the verdict badge; the photo list.
  * - money → findings: the restoration's findings.
- * - owner → history, photos: owner-home's test uses their fixtures.
  * - parts → meta: the workshop currency.
  * - photos → findings: the status mark.
  * - sheets → findings, markup, photos: the restoration's findings; reference-viewer draws with markup's canvas
@@ -24,7 +23,6 @@ const crossFeatureDebt: Record<string, string[]> = {
   help: ['measurements', 'photos'],
   measurements: ['sheets'],
   money: ['findings'],
-  owner: ['history', 'photos'],
   parts: ['meta', 'sheets'],
   photos: ['findings'],
   sheets: ['findings', 'markup', 'photos'],
