@@ -11,7 +11,6 @@ import tseslint from 'typescript-eslint';
  * - findings → markup: status-buttons and status-mark take the status colours from markup's legend; a test renders
  *   markup's new-finding-form.
  * - findings, measurements, parts → sheets: on-the-diagram-link and known-references.
- * - help → measurements, photos: the verdict badge; the photo list.
  * - money → findings: the restoration's findings.
  * - parts → meta: the workshop currency.
  * - photos → findings: the status mark.
@@ -20,7 +19,6 @@ import tseslint from 'typescript-eslint';
  */
 const crossFeatureDebt: Record<string, string[]> = {
   findings: ['markup', 'sheets'],
-  help: ['measurements', 'photos'],
   measurements: ['sheets'],
   money: ['findings'],
   parts: ['meta', 'sheets'],

@@ -8,7 +8,7 @@ import { measurementsQueryOptions } from '../features/measurements/api/get-measu
 import { valvesQueryOptions } from '../features/measurements/api/get-valves';
 import { membersQueryOptions } from '../features/members/api/get-members';
 import { partsQueryOptions } from '../features/parts/api/get-parts';
-import { photosQueryOptions } from '../features/photos/api/get-photos';
+import { photosQueryOptions } from '../lib/queries/get-photos';
 import { restorationQueryOptions } from '../features/restorations/api/get-restoration';
 import { queryClient } from '../lib/query-client';
 

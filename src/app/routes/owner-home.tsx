@@ -14,7 +14,7 @@ import { OwnerSet } from '../../features/owner/components/owner-set';
 import { OwnerSetCard } from '../../features/owner/components/owner-set-card';
 import { RepairedFindings } from '../../features/owner/components/repaired-findings';
 import { heroPhoto, repairedFindings } from '../../features/owner/lib/owner-words';
-import { usePhotos } from '../../features/photos/api/get-photos';
+import { usePhotos } from '../../lib/queries/get-photos';
 import { useRestorations } from '../../features/restorations/api/get-restorations';
 import { OWNER_COLUMN_SIZES } from '../../lib/photo-sources';
 

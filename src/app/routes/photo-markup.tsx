@@ -16,7 +16,7 @@ import { NewFindingForm } from '../../features/markup/components/new-finding-for
 import { useMembers } from '../../features/members/api/get-members';
 import { DuplicateFindingOffer } from '../../features/sheets/components/duplicate-finding-offer';
 import { KnownReferences } from '../../features/sheets/components/known-references';
-import { usePhotos } from '../../features/photos/api/get-photos';
+import { usePhotos } from '../../lib/queries/get-photos';
 import { useRefreshExpiredUrls } from '../../features/photos/hooks/use-refresh-expired-urls';
 import { photoLabel } from '../../features/photos/lib/photo-format';
 import { ApiError } from '../../lib/api-client';

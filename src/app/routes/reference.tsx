@@ -2,7 +2,7 @@ import { Link, useParams, useSearchParams } from 'react-router';
 import { can } from '../../../shared/permissions';
 import { ErrorState, Loading } from '../../components/states';
 import { useRestorationFindings } from '../../features/findings/api/get-restoration-findings';
-import { usePhotos } from '../../features/photos/api/get-photos';
+import { usePhotos } from '../../lib/queries/get-photos';
 import { useSheetPages } from '../../features/sheets/api/get-sheet-pages';
 import { useMismatchNotes } from '../../features/sheets/api/mismatch-notes';
 import { useReferenceMarks } from '../../features/sheets/api/reference-marks';

@@ -2,7 +2,7 @@ import { Link, useParams, useSearchParams } from 'react-router';
 import { can } from '../../../shared/permissions';
 import { sheetKindLabels } from '../../../shared/schemas/sheets';
 import { EmptyState, ErrorState, Loading } from '../../components/states';
-import { usePhotos } from '../../features/photos/api/get-photos';
+import { usePhotos } from '../../lib/queries/get-photos';
 import { photoLabel } from '../../features/photos/lib/photo-format';
 import { useSheetPages } from '../../features/sheets/api/get-sheet-pages';
 import { ReferenceViewer } from '../../features/sheets/components/reference-viewer';

@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import { usePhotos } from '../../photos/api/get-photos';
+import { usePhotos } from '../../../lib/queries/get-photos';
 import { photoLabel } from '../../photos/lib/photo-format';
 
 /** The chassis photos, each opening it to mark where a reference sits (a location mark). */
