@@ -3,7 +3,7 @@ import { kindLabels, kinds, severities, severityLabels, type Finding, type Findi
 import { Field, inputClass } from '../../../components/field';
 import { checkComponentRef, checkTitle } from './finding-edit';
 import { InlineTextField } from './inline-text-field';
-import { SeverityMark, StatusMark } from './status-mark';
+import { SeverityMark, StatusMark } from '../../../components/status-mark';
 import { StatusButtons } from './status-buttons';
 
 /** What a person who may change the finding edits: each field saves on its own. */

@@ -12,7 +12,7 @@ import { FindingFields, FindingSummary } from './finding-fields';
 import { fullTime, relativeTime, type FindingMember } from './finding-format';
 import { FindingHistory } from './finding-history';
 import { OpenQuestionBadge, QuestionToggle, ShareWithOwner } from './finding-sharing';
-import { SeverityMark, StatusMark } from './status-mark';
+import { SeverityMark, StatusMark } from '../../../components/status-mark';
 import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
 
 export interface FindingPanelProps {
