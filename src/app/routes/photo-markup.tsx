@@ -15,7 +15,7 @@ import { MarkupCanvas } from '../../features/markup/components/markup-canvas';
 import { NewFindingForm } from '../../features/markup/components/new-finding-form';
 import { useMembers } from '../../features/members/api/get-members';
 import { DuplicateFindingOffer } from '../../features/sheets/components/duplicate-finding-offer';
-import { KnownReferences } from '../../features/sheets/components/known-references';
+import { KnownReferences } from '../../components/known-references';
 import { usePhotos } from '../../lib/queries/get-photos';
 import { useRefreshExpiredUrls } from '../../features/photos/hooks/use-refresh-expired-urls';
 import { photoLabel } from '../../features/photos/lib/photo-format';

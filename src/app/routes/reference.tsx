@@ -8,7 +8,7 @@ import { useMismatchNotes } from '../../features/sheets/api/mismatch-notes';
 import { useReferenceMarks } from '../../features/sheets/api/reference-marks';
 import { MismatchNotesPanel } from '../../features/sheets/components/mismatch-notes-panel';
 import { ReferenceSideBySide } from '../../features/sheets/components/reference-side-by-side';
-import type { ReferenceView } from '../../features/sheets/lib/reference-path';
+import type { ReferenceView } from '../../lib/reference-path';
 import { useRestorationContext } from '../restoration-context';
 
 const idOf = (v: string | null) => (v && /^\d+$/.test(v) ? Number(v) : undefined);

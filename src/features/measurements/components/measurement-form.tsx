@@ -1,4 +1,4 @@
-import { KnownReferences } from '../../sheets/components/known-references';
+import { KnownReferences } from '../../../components/known-references';
 import { useId } from 'react';
 import { measuredQuantities } from '../../../../shared/bench';
 import { quantityLabels, type Measurement } from '../../../../shared/schemas/measurements';

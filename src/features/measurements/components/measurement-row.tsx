@@ -1,4 +1,4 @@
-import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
+import { OnTheDiagramLink } from '../../../components/on-the-diagram-link';
 import { useState } from 'react';
 import { quantityLabels, type Measurement } from '../../../../shared/schemas/measurements';
 import { buttonClass } from '../../../components/button';

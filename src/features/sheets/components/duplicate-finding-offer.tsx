@@ -5,7 +5,7 @@ import { buttonClass } from '../../../components/button';
 import { useRestorationFindings } from '../../findings/api/get-restoration-findings';
 import type { NewMark } from '../../markup/lib/marks';
 import { useCreateReferenceMark } from '../api/reference-marks';
-import { refOf } from '../lib/reference-path';
+import { refOf } from '../../../lib/reference-path';
 
 interface Props {
   restorationId: number;

@@ -3,7 +3,8 @@ import { markRefSchema, type ReferenceMark } from '../../../../shared/schemas/sh
 import { inputClass } from '../../../components/field';
 import { MarkupCanvas } from '../../markup/components/markup-canvas';
 import type { NewMark } from '../../markup/lib/marks';
-import { useCreateReferenceMark, useDeleteReferenceMark, useReferenceMarks, useReferences } from '../api/reference-marks';
+import { useReferences } from '../../../lib/queries/references';
+import { useCreateReferenceMark, useDeleteReferenceMark, useReferenceMarks } from '../api/reference-marks';
 import { useMismatchNotes } from '../api/mismatch-notes';
 import { markAsFinding } from '../lib/mark-as-finding';
 import { ReferenceMarkList } from './reference-mark-list';
