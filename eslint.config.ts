@@ -9,13 +9,11 @@ import tseslint from 'typescript-eslint';
  * (or let the app layer compose the two features), then delete its entry. A new cross-feature import fails lint.
  * TODO:
  * - money → findings: the restoration's findings.
- * - parts → meta: the workshop currency.
  * - sheets → findings, markup, photos: the restoration's findings; reference-viewer draws with markup's canvas
  *   pieces; chassis-photo-picker lists photos.
  */
 const crossFeatureDebt: Record<string, string[]> = {
   money: ['findings'],
-  parts: ['meta'],
   sheets: ['findings', 'markup', 'photos'],
 };
 const clientFeatures = readdirSync(new URL('./src/features', import.meta.url), { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
