@@ -2,7 +2,7 @@ import type { EnsureQueryDataOptions, QueryKey } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { meQueryOptions } from '../features/auth/api/get-me';
 import { photoFindingsQueryOptions } from '../features/findings/api/get-photo-findings';
-import { restorationFindingsQueryOptions } from '../features/findings/api/get-restoration-findings';
+import { restorationFindingsQueryOptions } from '../lib/queries/get-restoration-findings';
 import { eventsQueryOptions } from '../features/history/api/get-events';
 import { measurementsQueryOptions } from '../features/measurements/api/get-measurements';
 import { valvesQueryOptions } from '../features/measurements/api/get-valves';

@@ -4,7 +4,7 @@ import { useSearchParams } from 'react-router';
 import type { Restoration } from '../../../shared/schemas/restorations';
 import { ErrorState, Loading } from '../../components/states';
 import { useMe } from '../../features/auth/api/get-me';
-import { useRestorationFindings } from '../../features/findings/api/get-restoration-findings';
+import { useRestorationFindings } from '../../lib/queries/get-restoration-findings';
 import { BeforeAfter } from '../../features/history/components/before-after';
 import { Timeline } from '../../features/history/components/timeline';
 import { suggestPairs } from '../../features/history/lib/suggest-pairs';

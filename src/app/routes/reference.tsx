@@ -1,7 +1,7 @@
 import { Link, useParams, useSearchParams } from 'react-router';
 import { can } from '../../../shared/permissions';
 import { ErrorState, Loading } from '../../components/states';
-import { useRestorationFindings } from '../../features/findings/api/get-restoration-findings';
+import { useRestorationFindings } from '../../lib/queries/get-restoration-findings';
 import { usePhotos } from '../../lib/queries/get-photos';
 import { useSheetPages } from '../../features/sheets/api/get-sheet-pages';
 import { useMismatchNotes } from '../../features/sheets/api/mismatch-notes';

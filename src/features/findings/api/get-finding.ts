@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { findingSchema } from '../../../../shared/schemas/findings';
 import { apiGet } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const getFinding = (id: number) => apiGet(`/findings/${id}`, findingSchema);
 

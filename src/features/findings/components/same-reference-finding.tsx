@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import { firstWithComponentRef } from '../../../../shared/natural-order';
 import { findingPath } from '../../../../shared/schemas/findings';
-import { useRestorationFindings } from '../api/get-restoration-findings';
+import { useRestorationFindings } from '../../../lib/queries/get-restoration-findings';
 
 /**
  * Points out that another finding of this restoration already names the reference, with a link to the first

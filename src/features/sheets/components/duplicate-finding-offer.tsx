@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useNavigate } from 'react-router';
 import { findingPath } from '../../../../shared/schemas/findings';
 import { buttonClass } from '../../../components/button';
-import { useRestorationFindings } from '../../findings/api/get-restoration-findings';
+import { useRestorationFindings } from '../../../lib/queries/get-restoration-findings';
 import type { NewMark } from '../../markup/lib/marks';
 import { useCreateReferenceMark } from '../api/reference-marks';
 import { refOf } from '../../../lib/reference-path';
