@@ -18,7 +18,7 @@ import { DuplicateFindingOffer } from '../../features/sheets/components/duplicat
 import { KnownReferences } from '../../components/known-references';
 import { usePhotos } from '../../lib/queries/get-photos';
 import { useRefreshExpiredUrls } from '../../features/photos/hooks/use-refresh-expired-urls';
-import { photoLabel } from '../../features/photos/lib/photo-format';
+import { photoLabel } from '../../lib/photo-format';
 import { ApiError } from '../../lib/api-client';
 import { useStoredFlag } from '../../lib/use-stored-flag';
 import { useRestorationContext } from '../restoration-context';

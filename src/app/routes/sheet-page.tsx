@@ -3,7 +3,7 @@ import { can } from '../../../shared/permissions';
 import { sheetKindLabels } from '../../../shared/schemas/sheets';
 import { EmptyState, ErrorState, Loading } from '../../components/states';
 import { usePhotos } from '../../lib/queries/get-photos';
-import { photoLabel } from '../../features/photos/lib/photo-format';
+import { photoLabel } from '../../lib/photo-format';
 import { useSheetPages } from '../../features/sheets/api/get-sheet-pages';
 import { ReferenceViewer } from '../../features/sheets/components/reference-viewer';
 import { SheetPageDetails } from '../../features/sheets/components/sheet-page-details';
