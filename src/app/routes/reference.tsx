@@ -10,6 +10,7 @@ import { MismatchNotesPanel } from '../../features/sheets/components/mismatch-no
 import { ReferenceSideBySide } from '../../features/sheets/components/reference-side-by-side';
 import type { ReferenceView } from '../../lib/reference-path';
 import { useRestorationContext } from '../restoration-context';
+import { WithMarkupCanvas } from './sheet-canvas-provider';
 
 const idOf = (v: string | null) => (v && /^\d+$/.test(v) ? Number(v) : undefined);
 
@@ -42,11 +43,13 @@ export function ReferenceRoute() {
         <Loading label={`Finding ${refName} on the diagram and the chassis…`} />
       ) : (
         <>
-          <ReferenceSideBySide
-            restorationId={r.id} refName={refName} view={view} marks={marks.data} pages={pages.data} photos={photos.data}
-            findings={findings.data} mismatches={notes.data.filter((n) => n.ref === refName)} canMark={can(r.role, 'references.mark')}
-            onImageError={() => void Promise.all([pages.refetch(), photos.refetch()])}
-          />
+          <WithMarkupCanvas>
+            <ReferenceSideBySide
+              restorationId={r.id} refName={refName} view={view} marks={marks.data} pages={pages.data} photos={photos.data}
+              findings={findings.data} mismatches={notes.data.filter((n) => n.ref === refName)} canMark={can(r.role, 'references.mark')}
+              onImageError={() => void Promise.all([pages.refetch(), photos.refetch()])}
+            />
+          </WithMarkupCanvas>
           <MismatchNotesPanel restorationId={r.id} refName={refName} notes={notes.data.filter((n) => n.ref === refName)} canEdit={can(r.role, 'references.mark')} />
         </>
       )}

@@ -3,7 +3,7 @@ import { useNavigate } from 'react-router';
 import { findingPath } from '../../../../shared/schemas/findings';
 import { buttonClass } from '../../../components/button';
 import { useRestorationFindings } from '../../../lib/queries/get-restoration-findings';
-import type { NewMark } from '../../markup/lib/marks';
+import type { NewMark } from '../../../lib/new-mark';
 import { useCreateReferenceMark } from '../api/reference-marks';
 import { refOf } from '../../../lib/reference-path';
 
