@@ -30,7 +30,7 @@ export function commentsRoutes(deps: AppDeps): Router {
   const findings = findingsService(deps);
   // The finding's restoration and the reader's role in one query.
   const ofFinding = (req: Request, res: Response) => findings.accessOf(input(res, one).params.id, req.user!.id);
-  const ofComment = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
+  const ofComment = (denied: string) => (req: Request, res: Response) => service.subjectOf(input(res, one).params.id, req.user!.id, denied);
   const router = Router();
 
   // Oldest first, in pages (see shared/schemas/pagination.ts).
@@ -43,11 +43,11 @@ export function commentsRoutes(deps: AppDeps): Router {
     const { params, body } = input(res, create);
     res.status(201).json(await service.create(params.id, body, actorOf(req, res), idempotencyKey(req)));
   });
-  router.patch('/comments/:id', requireUser, validate(edit), guard(db, 'restoration.view', ofComment), async (req, res) => {
+  router.patch('/comments/:id', requireUser, validate(edit), guard(db, 'comments.edit', ofComment('Only the author edits a comment.')), async (req, res) => {
     const { params, body } = input(res, edit);
     res.json(await service.edit(params.id, body.body, actorOf(req, res)));
   });
-  router.delete('/comments/:id', requireUser, validate(one), guard(db, 'restoration.view', ofComment), async (req, res) => {
+  router.delete('/comments/:id', requireUser, validate(one), guard(db, 'comments.delete', ofComment('Only the author or a technician deletes a comment.')), async (req, res) => {
     await service.remove(input(res, one).params.id, actorOf(req, res));
     res.status(204).end();
   });

@@ -59,7 +59,9 @@ export function findingsRoutes(deps: AppDeps): Router {
     const { params, body } = input(res, patch);
     res.json(await service.update(params.id, body, actorOf(req, res)));
   });
-  router.delete('/findings/:id', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (req, res) => {
+  const ofFindingToDelete = (req: Request, res: Response) =>
+    service.subjectOf(input(res, one).params.id, req.user!.id, 'Only a technician deletes a finding someone else placed.');
+  router.delete('/findings/:id', requireUser, validate(one), guard(db, 'findings.delete', ofFindingToDelete), async (req, res) => {
     await service.remove(input(res, one).params.id, actorOf(req, res));
     res.status(204).end();
   });
