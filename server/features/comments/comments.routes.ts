@@ -30,6 +30,8 @@ export function commentsRoutes(deps: AppDeps): Router {
   const findings = findingsService(deps);
   // The finding's restoration and the reader's role in one query.
   const ofFinding = (req: Request, res: Response) => findings.accessOf(input(res, one).params.id, req.user!.id);
+  // The finding commented on: who may not see it gets a 404; owners comment only on what is shared with them.
+  const ofFindingToComment = (req: Request, res: Response) => findings.subjectOf(input(res, one).params.id, req.user!.id);
   const ofComment = (denied: string) => (req: Request, res: Response) => service.subjectOf(input(res, one).params.id, req.user!.id, denied);
   const router = Router();
 
@@ -39,7 +41,7 @@ export function commentsRoutes(deps: AppDeps): Router {
     const rows = await service.list(params.id, roleOf(res), { limit: query.limit + 1, cursor: decodeCursor(query.cursor, commentOrder.kinds) });
     await sendPage(req, res, rows, query.limit, (c) => [c.createdAt, c.id], (page) => page);
   });
-  router.post('/findings/:id/comments', requireUser, validate(create), guard(db, 'restoration.view', ofFinding), async (req, res) => {
+  router.post('/findings/:id/comments', requireUser, validate(create), guard(db, 'comments.create', ofFindingToComment), async (req, res) => {
     const { params, body } = input(res, create);
     res.status(201).json(await service.create(params.id, body, actorOf(req, res), idempotencyKey(req)));
   });

@@ -53,13 +53,16 @@ export function findingsService(deps: AppDeps) {
     restorationOf: (id: number) => repo.restorationOf(id),
     /** The finding's restoration with the reader's role, in one query (see `guard`). */
     accessOf: (id: number, userId: number) => repo.accessOf(id, userId),
-    /** The finding as the guard's subject: who may not see it gets a 404; the rules read whether the caller placed it. */
+    /**
+     * The finding as the guard's subject: who may not see it gets a 404; the rules read whether the caller placed it
+     * and whether the owner sees it.
+     */
     async subjectOf(id: number, userId: number, denied?: string): Promise<RestorationAndRole | undefined> {
       const access = await repo.accessOf(id, userId);
       if (!access?.role) return access;
       const f = await repo.find(id, access.role);
       const seen = Boolean(f && mayView(access.role, 'finding', { finding: f, photo: { ownerVisible: f.photoOwnerVisible } }));
-      return { ...access, subject: { view: async () => seen, context: { isAuthor: f?.authorId === userId }, denied } };
+      return { ...access, subject: { view: async () => seen, context: { isAuthor: f?.authorId === userId, ownerVisible: f !== undefined && ownerMaySee(f) }, denied } };
     },
     /** The photo's findings as ready JSON text (see findings-json.ts); owners get only what is shared. */
     async listByPhotoJson(photoId: number, role: Role): Promise<string> {
@@ -78,7 +81,6 @@ export function findingsService(deps: AppDeps) {
     async create(photoId: number, input: FindingInput & { ownerVisible: boolean }, actor: Actor) {
       const photo = await photos.find(photoId);
       if (!photo || !can(actor.role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
-      if (!can(actor.role, 'findings.create')) throw new ForbiddenError('Owners follow findings; technicians and mentors place them.');
       if (input.ownerVisible && !can(actor.role, 'findings.share')) throw new ForbiddenError('Only a technician shares findings with the owner.');
       const id = await deps.db.transaction((tx) => openFindingIn(tx, {
         restorationId: photo.restorationId, photoId, shape: input.shape, points: input.points, title: input.title,
