@@ -1,6 +1,6 @@
 import { useId, useState } from 'react';
 import { Link, NavLink, Outlet, useLocation, useMatches } from 'react-router';
-import { useMeta } from '../features/meta/api/get-meta';
+import { useMeta } from '../lib/queries/get-meta';
 import { Logo } from '../components/logo';
 import { ThemeToggle } from '../components/theme-toggle';
 import { useMe } from '../features/auth/api/get-me';

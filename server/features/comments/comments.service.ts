@@ -3,8 +3,9 @@ import type { Comment } from '../../../shared/schemas/comments';
 import type { AppDeps } from '../../app-deps';
 import type { PageWindow } from '../../db/keyset';
 import { unitOfWork } from '../../db/unit-of-work';
-import { ConflictError, ForbiddenError, NotFoundError } from '../../http/errors';
-import { findingsService, ownerMaySee } from '../findings/findings.service';
+import { ConflictError, NotFoundError } from '../../http/errors';
+import type { RestorationAndRole } from '../../http/guard';
+import { findingsService } from '../findings/findings.service';
 import { membersRepo } from '../members/members.repo';
 import { notificationsService } from '../notifications/notifications.service';
 import { commentsRepo, type CommentRow } from './comments.repo';
@@ -41,9 +42,19 @@ export function commentsService(deps: AppDeps) {
   }
 
   return {
-    async restorationOf(commentId: number) {
+    /**
+     * The comment as the guard's subject: who may not read it gets a 404 (a deleted comment, an internal one for an
+     * owner, one on a finding they do not see); the rules read whether the caller wrote it.
+     */
+    async subjectOf(commentId: number, userId: number, denied?: string): Promise<RestorationAndRole | undefined> {
       const c = await repo.find(commentId);
-      return c ? findings.restorationOf(c.findingId) : undefined;
+      const restorationId = c && (await findings.restorationOf(c.findingId));
+      if (!c || restorationId === undefined) return undefined;
+      const view = (role: Role) => own(commentId, { id: userId, name: '', role }).then(() => true, (err: unknown) => {
+        if (err instanceof NotFoundError) return false;
+        throw err;
+      });
+      return { restorationId, subject: { view, context: { isAuthor: c.authorId === userId }, denied } };
     },
     /** One page of the thread this role may read (`limit + 1` comments read, for the page helper to cut). */
     async list(findingId: number, role: Role, window: PageWindow) {
@@ -53,7 +64,6 @@ export function commentsService(deps: AppDeps) {
     /** `key` is the client's Idempotency-Key: the same key from the same author stores one comment. */
     async create(findingId: number, input: { body: string; internal: boolean }, actor: Actor, key?: string) {
       const f = await findings.visible(findingId, actor.role);
-      if (!can(actor.role, 'comments.create', { ownerVisible: ownerMaySee(f) })) throw new ForbiddenError();
       // An owner's comment is always in the shared thread.
       const internal = input.internal && can(actor.role, 'comments.internal');
       const people = await members.list(f.restorationId);
@@ -71,16 +81,15 @@ export function commentsService(deps: AppDeps) {
       });
       return toComment(created);
     },
+    /** Edits a comment the caller may read (the guard has judged `comments.edit` with who wrote it). */
     async edit(id: number, body: string, actor: Actor) {
-      const c = await own(id, actor);
-      if (!can(actor.role, 'comments.edit', { isAuthor: c.authorId === actor.id })) throw new ForbiddenError('Only the author edits a comment.');
+      await own(id, actor);
       await repo.update(id, { body, editedAt: new Date() });
       return toComment((await repo.find(id))!);
     },
     /** Deleted comments keep their place in the thread, marked deleted, with the text gone. */
     async remove(id: number, actor: Actor) {
-      const c = await own(id, actor);
-      if (!can(actor.role, 'comments.delete', { isAuthor: c.authorId === actor.id })) throw new ForbiddenError('Only the author or a technician deletes a comment.');
+      await own(id, actor);
       await repo.update(id, { deletedAt: new Date(), body: '' });
     },
   };

@@ -18,12 +18,20 @@ const patch = { params: idParamsSchema, body: findingPatchSchema };
 
 export const actorOf = (req: Request, res: Response) => ({ id: req.user!.id, name: req.user!.name, role: roleOf(res) });
 
-/** Findings: marks on a photo. The guard admits members; the service settles visibility (404) and rights (403). */
+/**
+ * Findings: marks on a photo. The guard admits members, settles visibility (404) and the route's action (403); a
+ * change asks the policy field by field in the service (sharing, asking the mentors, resolving).
+ */
 export function findingsRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const service = findingsService(deps);
   const photos = photosRepo(db);
-  const ofPhoto = (_req: Request, res: Response) => photos.restorationOf(input(res, one).params.id);
+  // The photo a finding is placed on: who may not see it gets a 404, then the rule for placing findings.
+  const ofPhoto = async (_req: Request, res: Response) => {
+    const photo = await photos.find(input(res, one).params.id);
+    const denied = 'Owners follow findings; technicians and mentors place them.';
+    return photo && { restorationId: photo.restorationId, subject: { view: 'photos.view' as const, context: { ownerVisible: photo.ownerVisible }, denied } };
+  };
   // The finding's restoration and the reader's role in one query.
   const ofFinding = (req: Request, res: Response) => service.accessOf(input(res, one).params.id, req.user!.id);
   const router = Router();
@@ -42,7 +50,7 @@ export function findingsRoutes(deps: AppDeps): Router {
     const entry = await lists.read(photoId, role, res.locals.findingsVersion as number, () => service.listByPhotoJson(photoId, role));
     await sendCachedList(req, res, entry);
   });
-  router.post('/photos/:id/findings', requireUser, validate(create), guard(db, 'restoration.view', ofPhoto), async (req, res) => {
+  router.post('/photos/:id/findings', requireUser, validate(create), guard(db, 'findings.create', ofPhoto), async (req, res) => {
     const { params, body } = input(res, create);
     res.status(201).json(await service.create(params.id, body as typeof body & { ownerVisible: boolean }, actorOf(req, res)));
   });
@@ -59,7 +67,9 @@ export function findingsRoutes(deps: AppDeps): Router {
     const { params, body } = input(res, patch);
     res.json(await service.update(params.id, body, actorOf(req, res)));
   });
-  router.delete('/findings/:id', requireUser, validate(one), guard(db, 'restoration.view', ofFinding), async (req, res) => {
+  const ofFindingToDelete = (req: Request, res: Response) =>
+    service.subjectOf(input(res, one).params.id, req.user!.id, 'Only a technician deletes a finding someone else placed.');
+  router.delete('/findings/:id', requireUser, validate(one), guard(db, 'findings.delete', ofFindingToDelete), async (req, res) => {
     await service.remove(input(res, one).params.id, actorOf(req, res));
     res.status(204).end();
   });

@@ -4,6 +4,7 @@ import type { AppDeps } from '../../app-deps';
 import type { PageWindow } from '../../db/keyset';
 import { unitOfWork } from '../../db/unit-of-work';
 import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import type { RestorationAndRole } from '../../http/guard';
 import { recordEvent } from '../events/record-event';
 import { ensureCloseup, scheduleCloseup } from '../closeups/closeups';
 import { notificationsService } from '../notifications/notifications.service';
@@ -52,6 +53,17 @@ export function findingsService(deps: AppDeps) {
     restorationOf: (id: number) => repo.restorationOf(id),
     /** The finding's restoration with the reader's role, in one query (see `guard`). */
     accessOf: (id: number, userId: number) => repo.accessOf(id, userId),
+    /**
+     * The finding as the guard's subject: who may not see it gets a 404; the rules read whether the caller placed it
+     * and whether the owner sees it.
+     */
+    async subjectOf(id: number, userId: number, denied?: string): Promise<RestorationAndRole | undefined> {
+      const access = await repo.accessOf(id, userId);
+      if (!access?.role) return access;
+      const f = await repo.find(id, access.role);
+      const seen = Boolean(f && mayView(access.role, 'finding', { finding: f, photo: { ownerVisible: f.photoOwnerVisible } }));
+      return { ...access, subject: { view: async () => seen, context: { isAuthor: f?.authorId === userId, ownerVisible: f !== undefined && ownerMaySee(f) }, denied } };
+    },
     /** The photo's findings as ready JSON text (see findings-json.ts); owners get only what is shared. */
     async listByPhotoJson(photoId: number, role: Role): Promise<string> {
       const photo = await photos.find(photoId);
@@ -69,7 +81,6 @@ export function findingsService(deps: AppDeps) {
     async create(photoId: number, input: FindingInput & { ownerVisible: boolean }, actor: Actor) {
       const photo = await photos.find(photoId);
       if (!photo || !can(actor.role, 'photos.view', { ownerVisible: photo.ownerVisible })) throw new NotFoundError();
-      if (!can(actor.role, 'findings.create')) throw new ForbiddenError('Owners follow findings; technicians and mentors place them.');
       if (input.ownerVisible && !can(actor.role, 'findings.share')) throw new ForbiddenError('Only a technician shares findings with the owner.');
       const id = await deps.db.transaction((tx) => openFindingIn(tx, {
         restorationId: photo.restorationId, photoId, shape: input.shape, points: input.points, title: input.title,
@@ -126,9 +137,9 @@ export function findingsService(deps: AppDeps) {
       if (next.shape !== undefined || next.points !== undefined) scheduleCloseup(deps, (await photos.find(f.photoId))!, updated);
       return toFinding(updated);
     },
+    /** Removes a finding the caller may see (the guard has judged `findings.delete` with who placed it). */
     async remove(id: number, actor: Actor) {
-      const f = await visible(id, actor.role);
-      if (!can(actor.role, 'findings.delete', { isAuthor: f.authorId === actor.id })) throw new ForbiddenError('Only a technician deletes a finding someone else placed.');
+      await visible(id, actor.role);
       await repo.remove(id);
     },
     async closeupUrl(id: number, role: Role) {

@@ -17,7 +17,7 @@ const lineUp = { params: idParamsSchema, body: lineUpSchema };
 /** Readings with verdicts, and the valve line-up. Recording is the technician's; owners see shared readings. */
 export function measurementsRoutes({ db }: AppDeps): Router {
   const service = measurementsService(db);
-  const ofMeasurement = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
+  const ofMeasurement = (_req: Request, res: Response) => service.subjectOf(input(res, one).params.id);
   const router = Router();
   // In the order they were taken, in pages (see shared/schemas/pagination.ts).
   router.get('/restorations/:id/measurements', requireUser, validate(list), guard(db, 'restoration.view'), async (req, res) => {
@@ -30,13 +30,11 @@ export function measurementsRoutes({ db }: AppDeps): Router {
     const { params, body } = input(res, create);
     res.status(201).json(await service.create(params.id, body, req.user!.id));
   });
-  router.patch('/measurements/:id', requireUser, validate(patch), guard(db, 'restoration.view', ofMeasurement), async (req, res) => {
+  router.patch('/measurements/:id', requireUser, validate(patch), guard(db, 'measurements.record', ofMeasurement), async (req, res) => {
     const { params, body } = input(res, patch);
-    await service.assertMayRecord(params.id, roleOf(res));
     res.json(await service.update(params.id, body, req.user!.id));
   });
-  router.delete('/measurements/:id', requireUser, validate(one), guard(db, 'restoration.view', ofMeasurement), async (_req, res) => {
-    await service.assertMayRecord(input(res, one).params.id, roleOf(res));
+  router.delete('/measurements/:id', requireUser, validate(one), guard(db, 'measurements.record', ofMeasurement), async (_req, res) => {
     await service.remove(input(res, one).params.id);
     res.status(204).end();
   });

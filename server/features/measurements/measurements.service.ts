@@ -1,9 +1,10 @@
 import { applicableTexts, BenchInputError, liveChassisLikely, measurementVerdict } from '../../../shared/bench';
-import { can, type Role } from '../../../shared/permissions';
+import type { Role } from '../../../shared/permissions';
 import type { LineUp, Measurement, MeasurementInput, Valve } from '../../../shared/schemas/measurements';
 import type { Database, Executor } from '../../db/client';
 import type { PageWindow } from '../../db/keyset';
-import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import { BadRequestError, NotFoundError } from '../../http/errors';
+import type { RestorationAndRole } from '../../http/guard';
 import { assertPrePowerSignedOff } from '../bringup/power-gate';
 import { recordEvent } from '../events/record-event';
 import { findingsRepo } from '../findings/findings.repo';
@@ -49,7 +50,11 @@ export function measurementsService(db: Database) {
   });
 
   return {
-    restorationOf: (id: number) => repo.restorationOf(id),
+    /** The reading as the guard's subject: who may not see it gets a 404 (owners, unshared readings), then the rule. */
+    async subjectOf(id: number): Promise<RestorationAndRole | undefined> {
+      const m = await find(id);
+      return m && { restorationId: m.restorationId, subject: { view: 'measurements.view', context: { ownerVisible: m.ownerVisible } } };
+    },
     /** The readings this role may see; a reading's finding is named only when the reader may see it. */
     /** The readings this role may see (of one finding, when asked), all of them or one page (`window`). */
     async list(restorationId: number, role: Role, findingId?: number, window?: PageWindow) {
@@ -95,12 +100,6 @@ export function measurementsService(db: Database) {
       await measurementsRepo(tx).update(id, { ...columns(merged), ...verdict });
       if (verdict.verdict === 'out' && current.verdict !== 'out')
         await recordEvent(tx, { restorationId: current.restorationId, kind: 'measurement-out', actorId: userId, measurementId: id, findingId: merged.findingId ?? null });
-    },
-    /** 404 when the caller may not see the reading (owners and unshared readings), 403 when they may not record. */
-    async assertMayRecord(id: number, role: Role) {
-      const m = await find(id);
-      if (!m || !can(role, 'measurements.view', { ownerVisible: m.ownerVisible })) throw new NotFoundError();
-      if (!can(role, 'measurements.record')) throw new ForbiddenError('Only a technician records and changes readings.');
     },
     remove: (id: number) => repo.remove(id),
     async lineUp(restorationId: number): Promise<LineUp> {

@@ -14,7 +14,7 @@ const patch = { params: mismatchNoteParamsSchema, body: mismatchNotePatchSchema 
 export function mismatchesRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const service = mismatchesService(db);
-  const ofNote = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.noteId);
+  const ofNote = (_req: Request, res: Response) => service.subjectOf(input(res, one).params.noteId);
   const router = Router();
 
   router.get('/restorations/:id/mismatch-notes', requireUser, validate(list), guard(db, 'restoration.view'), async (_req, res) => {
@@ -25,11 +25,11 @@ export function mismatchesRoutes(deps: AppDeps): Router {
     const { params, body } = input(res, create);
     res.status(201).json(await service.create(params.id, body, req.user!.id));
   });
-  router.patch('/mismatch-notes/:noteId', requireUser, validate(patch), guard(db, 'restoration.view', ofNote), async (_req, res) => {
+  router.patch('/mismatch-notes/:noteId', requireUser, validate(patch), guard(db, 'references.mark', ofNote), async (_req, res) => {
     const { params, body } = input(res, patch);
     res.json(await service.update(params.noteId, body, roleOf(res)));
   });
-  router.delete('/mismatch-notes/:noteId', requireUser, validate(one), guard(db, 'restoration.view', ofNote), async (_req, res) => {
+  router.delete('/mismatch-notes/:noteId', requireUser, validate(one), guard(db, 'references.mark', ofNote), async (_req, res) => {
     await service.remove(input(res, one).params.noteId, roleOf(res));
     res.status(204).end();
   });

@@ -1,8 +1,9 @@
 import type { z } from 'zod';
-import { can, type Role } from '../../../shared/permissions';
+import type { Role } from '../../../shared/permissions';
 import type { MismatchNote, mismatchNoteInputSchema, mismatchNotePatchSchema } from '../../../shared/schemas/sheets';
 import type { Database } from '../../db/client';
-import { ForbiddenError, NotFoundError } from '../../http/errors';
+import { NotFoundError } from '../../http/errors';
+import type { RestorationAndRole } from '../../http/guard';
 import { recordEvent } from '../events/record-event';
 import { mismatchesRepo, type MismatchNoteRow } from './mismatches.repo';
 
@@ -17,10 +18,9 @@ export const toMismatchNote = (row: MismatchNoteRow): MismatchNote => ({
 /** Where the chassis differs from the diagram, recorded against a reference of one restoration. */
 export function mismatchesService(db: Database) {
   const repo = mismatchesRepo(db);
-  /** 404 when the caller may not see the note, 403 when they may not change it. */
+  /** A note the caller may see (the guard has judged who may change it). */
   async function changeable(id: number, role: Role) {
     if (!(await repo.find(id, role))) throw new NotFoundError();
-    if (!can(role, 'references.mark')) throw new ForbiddenError();
   }
   return {
     list: async (restorationId: number, role: Role, ref?: string) => (await repo.list(restorationId, role, ref)).map(toMismatchNote),
@@ -39,6 +39,10 @@ export function mismatchesService(db: Database) {
       await changeable(id, role);
       await repo.remove(id);
     },
-    restorationOf: (id: number) => repo.restorationOf(id),
+    /** The note as the guard's subject: who may not see it (the visibility rule, in SQL) gets a 404. */
+    async subjectOf(id: number): Promise<RestorationAndRole | undefined> {
+      const restorationId = await repo.restorationOf(id);
+      return restorationId === undefined ? undefined : { restorationId, subject: { view: async (role) => Boolean(await repo.find(id, role)) } };
+    },
   };
 }

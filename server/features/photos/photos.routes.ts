@@ -18,7 +18,7 @@ const patch = { params: photoParamsSchema, body: photoPatchSchema };
 export function photosRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const service = photosService(deps);
-  const ofPhoto = (_req: Request, res: Response) => service.restorationOf(input(res, photo).params.id);
+  const ofPhoto = (_req: Request, res: Response) => service.subjectOf(input(res, photo).params.id);
   const router = Router();
 
   // Oldest first, in pages (see shared/schemas/pagination.ts).
@@ -41,15 +41,15 @@ export function photosRoutes(deps: AppDeps): Router {
       await upload.discard();
     }
   });
-  // One photo: the service settles visibility (404) before the action (403).
-  router.get('/photos/:id', requireUser, validate(photo), guard(db, 'restoration.view', ofPhoto), async (_req, res) => {
+  // One photo: the guard settles visibility (404) before the action (403).
+  router.get('/photos/:id', requireUser, validate(photo), guard(db, 'photos.view', ofPhoto), async (_req, res) => {
     res.json(await service.get(input(res, photo).params.id, roleOf(res)));
   });
-  router.patch('/photos/:id', requireUser, validate(patch), guard(db, 'restoration.view', ofPhoto), async (_req, res) => {
+  router.patch('/photos/:id', requireUser, validate(patch), guard(db, 'photos.edit', ofPhoto), async (_req, res) => {
     const { params, body } = input(res, patch);
     res.json(await service.update(params.id, body, roleOf(res)));
   });
-  router.delete('/photos/:id', requireUser, validate(photo), guard(db, 'restoration.view', ofPhoto), async (_req, res) => {
+  router.delete('/photos/:id', requireUser, validate(photo), guard(db, 'photos.delete', ofPhoto), async (_req, res) => {
     await service.remove(input(res, photo).params.id, roleOf(res));
     res.status(204).end();
   });

@@ -1,10 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
-import { can, type Action, type Role } from '../../../shared/permissions';
+import { can, type Role } from '../../../shared/permissions';
 import type { Photo, PhotoPatch } from '../../../shared/schemas/photos';
 import { photoUploadFieldsSchema } from '../../../shared/schemas/photos';
 import type { AppDeps } from '../../app-deps';
-import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import { BadRequestError, NotFoundError } from '../../http/errors';
+import type { RestorationAndRole } from '../../http/guard';
 import { recordEvent } from '../events/record-event';
 import { deletePhotoObjects, photoKeys } from './photo-objects';
 import { processPhoto } from './photo-pipeline';
@@ -35,14 +36,10 @@ export function photosService({ db, storage, config }: PhotosDeps) {
     };
   }
 
-  /**
-   * A photo the caller may see and act on: 404 when they may not see it (an owner is never told that an
-   * unshared photo exists), 403 when they see it but the action is not theirs.
-   */
-  async function visible(id: number, role: Role, action?: Action): Promise<PhotoRow> {
+  /** A photo the caller may see: 404 when they may not (an owner is never told that an unshared photo exists). */
+  async function visible(id: number, role: Role): Promise<PhotoRow> {
     const row = await repo.find(id);
     if (!row || !can(role, 'photos.view', { ownerVisible: row.ownerVisible })) throw new NotFoundError();
-    if (action && !can(role, action)) throw new ForbiddenError();
     return row;
   }
 
@@ -99,16 +96,21 @@ export function photosService({ db, storage, config }: PhotosDeps) {
       }
     },
     async update(id: number, patch: PhotoPatch, role: Role) {
-      await visible(id, role, 'photos.edit');
+      await visible(id, role);
       await repo.update(id, patch);
       return toPhoto((await repo.find(id))!, role);
     },
     /** Deletes the row, then its objects; an object left by a failure here is caught by the sweep. */
     async remove(id: number, role: Role) {
-      await visible(id, role, 'photos.delete');
+      await visible(id, role);
       const storageKey = await repo.remove(id);
       if (storageKey) await deletePhotoObjects(storage, storageKey).catch(() => {});
     },
     restorationOf: (id: number) => repo.restorationOf(id),
+    /** The photo as the guard's subject: who may not see it gets a 404, then the route's rule decides. */
+    async subjectOf(id: number): Promise<RestorationAndRole | undefined> {
+      const row = await repo.find(id);
+      return row && { restorationId: row.restorationId, subject: { view: 'photos.view', context: { ownerVisible: row.ownerVisible } } };
+    },
   };
 }

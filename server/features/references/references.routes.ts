@@ -14,7 +14,7 @@ const mark = { params: referenceMarkParamsSchema };
 export function referencesRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const service = referencesService(db);
-  const ofMark = (_req: Request, res: Response) => service.restorationOfMark(input(res, mark).params.markId);
+  const ofMark = (_req: Request, res: Response) => service.subjectOfMark(input(res, mark).params.markId);
   const router = Router();
 
   router.get('/restorations/:id/references', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
@@ -28,7 +28,7 @@ export function referencesRoutes(deps: AppDeps): Router {
     const { params, body } = input(res, create);
     res.status(201).json(await service.mark(params.id, body, req.user!.id));
   });
-  router.delete('/reference-marks/:markId', requireUser, validate(mark), guard(db, 'restoration.view', ofMark), async (_req, res) => {
+  router.delete('/reference-marks/:markId', requireUser, validate(mark), guard(db, 'references.mark', ofMark), async (_req, res) => {
     await service.remove(input(res, mark).params.markId, roleOf(res));
     res.status(204).end();
   });

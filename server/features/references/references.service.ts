@@ -1,11 +1,12 @@
 import { and, eq } from 'drizzle-orm';
-import { can, type Role } from '../../../shared/permissions';
+import type { Role } from '../../../shared/permissions';
 import type { referenceMarkInputSchema} from '../../../shared/schemas/sheets';
 import { type ReferenceMark, type ReferenceSummary } from '../../../shared/schemas/sheets';
 import type { z } from 'zod';
 import type { Database } from '../../db/client';
 import { photos, sheetPages } from '../../db/schema';
-import { ForbiddenError, NotFoundError } from '../../http/errors';
+import { NotFoundError } from '../../http/errors';
+import type { RestorationAndRole } from '../../http/guard';
 import { recordEvent } from '../events/record-event';
 import { referencesRepo, type ReferenceMarkRow } from './references.repo';
 
@@ -43,12 +44,15 @@ export function referencesService(db: Database) {
         return toMark(row);
       });
     },
-    /** 404 when the caller may not see the mark, 403 when they may not remove it. */
+    /** Removes a mark the caller may see (the guard has judged who may remove it). */
     async remove(id: number, role: Role) {
       if (!(await repo.findMark(id, role))) throw new NotFoundError();
-      if (!can(role, 'references.mark')) throw new ForbiddenError();
       await db.transaction((tx) => referencesRepo(tx).removeMark(id));
     },
-    restorationOfMark: (id: number) => repo.restorationOfMark(id),
+    /** The mark as the guard's subject: who may not see it (the visibility rule, in SQL) gets a 404. */
+    async subjectOfMark(id: number): Promise<RestorationAndRole | undefined> {
+      const restorationId = await repo.restorationOfMark(id);
+      return restorationId === undefined ? undefined : { restorationId, subject: { view: async (role) => Boolean(await repo.findMark(id, role)) } };
+    },
   };
 }

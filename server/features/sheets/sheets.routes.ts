@@ -14,7 +14,7 @@ const patch = { params: sheetPageParamsSchema, body: sheetPagePatchSchema };
 export function sheetsRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const service = sheetsService(deps);
-  const ofPage = (_req: Request, res: Response) => service.restorationOfPage(input(res, page).params.pageId);
+  const ofPage = (_req: Request, res: Response) => service.subjectOfPage(input(res, page).params.pageId);
   const router = Router();
 
   router.get('/restorations/:id/sheets', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
@@ -31,15 +31,15 @@ export function sheetsRoutes(deps: AppDeps): Router {
       await upload.discard();
     }
   });
-  // One page: the service settles visibility (404) before the action (403).
-  router.get('/sheet-pages/:pageId', requireUser, validate(page), guard(db, 'restoration.view', ofPage), async (_req, res) => {
+  // One page: the guard settles visibility (404) before the action (403).
+  router.get('/sheet-pages/:pageId', requireUser, validate(page), guard(db, 'sheets.view', ofPage), async (_req, res) => {
     res.json(await service.get(input(res, page).params.pageId, roleOf(res)));
   });
-  router.patch('/sheet-pages/:pageId', requireUser, validate(patch), guard(db, 'restoration.view', ofPage), async (_req, res) => {
+  router.patch('/sheet-pages/:pageId', requireUser, validate(patch), guard(db, 'sheets.edit', ofPage), async (_req, res) => {
     const { params, body } = input(res, patch);
     res.json(await service.update(params.pageId, body, roleOf(res)));
   });
-  router.delete('/sheet-pages/:pageId', requireUser, validate(page), guard(db, 'restoration.view', ofPage), async (_req, res) => {
+  router.delete('/sheet-pages/:pageId', requireUser, validate(page), guard(db, 'sheets.edit', ofPage), async (_req, res) => {
     await service.remove(input(res, page).params.pageId, roleOf(res));
     res.status(204).end();
   });

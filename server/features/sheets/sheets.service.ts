@@ -1,8 +1,9 @@
-import { can, type Action, type Role } from '../../../shared/permissions';
+import { can, type Role } from '../../../shared/permissions';
 import { sheetUploadFieldsSchema, type Sheet, type SheetPage, type SheetPagePatch } from '../../../shared/schemas/sheets';
 import type { PhotosDeps } from '../photos/photos.service';
 import { unitOfWork } from '../../db/unit-of-work';
-import { BadRequestError, ForbiddenError, NotFoundError } from '../../http/errors';
+import { BadRequestError, NotFoundError } from '../../http/errors';
+import type { RestorationAndRole } from '../../http/guard';
 import { recordEvent } from '../events/record-event';
 import { deleteSheetObjects, sheetKeys } from './sheet-objects';
 import { storeSheetFile, type StoredSheet } from './sheet-ingest';
@@ -29,11 +30,10 @@ export function sheetsService({ db, storage, config }: PhotosDeps) {
     };
   }
 
-  /** A page the caller may see (else 404) and act on (else 403). */
-  async function visible(id: number, role: Role, action?: Action): Promise<SheetPageRow> {
+  /** A page the caller may see (else 404). */
+  async function visible(id: number, role: Role): Promise<SheetPageRow> {
     const row = await repo.findPage(id);
     if (!row || !can(role, 'sheets.view', { ownerVisible: row.ownerVisible })) throw new NotFoundError();
-    if (action && !can(role, action)) throw new ForbiddenError();
     return row;
   }
 
@@ -72,18 +72,23 @@ export function sheetsService({ db, storage, config }: PhotosDeps) {
       }
     },
     async update(id: number, patch: SheetPagePatch, role: Role) {
-      await visible(id, role, 'sheets.edit');
+      await visible(id, role);
       await repo.updatePage(id, patch);
       return toPage((await repo.findPage(id))!, role);
     },
     /** Deletes the page (and the sheet with its objects when it was the last page). */
     async remove(id: number, role: Role) {
-      await visible(id, role, 'sheets.edit');
+      await visible(id, role);
       await unitOfWork(db, async (tx, afterCommit) => {
         const gone = await sheetsRepo(tx).removePage(id);
         if (gone) afterCommit(() => deleteSheetObjects(storage, gone.storageKey, gone.sheetGone ? undefined : gone.pageNumber).catch(() => {}));
       });
     },
     restorationOfPage: (id: number) => repo.restorationOfPage(id),
+    /** The page as the guard's subject: who may not see it gets a 404, then the route's rule decides. */
+    async subjectOfPage(id: number): Promise<RestorationAndRole | undefined> {
+      const row = await repo.findPage(id);
+      return row && { restorationId: row.restorationId, subject: { view: 'sheets.view', context: { ownerVisible: row.ownerVisible } } };
+    },
   };
 }

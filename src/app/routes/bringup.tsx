@@ -1,8 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { viewLabels } from '../../../shared/schemas/photos';
 import { BringupTab } from '../../features/bringup/components/bringup-tab';
-import { restorationFindingsQueryOptions } from '../../features/findings/api/get-restoration-findings';
-import { photosQueryOptions } from '../../features/photos/api/get-photos';
+import { restorationFindingsQueryOptions } from '../../lib/queries/get-restoration-findings';
+import { photosQueryOptions } from '../../lib/queries/get-photos';
 import { useRestorationContext } from '../restoration-context';
 
 /** The Bring-up tab: its checklists link to the restoration's own findings and photos. */

@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import { FindingsTable } from '../../features/findings/components/findings-table';
 import { photoLabels } from '../../features/findings/components/photo-labels';
-import { usePhotos } from '../../features/photos/api/get-photos';
+import { usePhotos } from '../../lib/queries/get-photos';
 import { useRestorationContext } from '../restoration-context';
 
 /** The restoration's Findings tab: every mark on every photo, in one table. */

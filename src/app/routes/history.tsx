@@ -4,7 +4,7 @@ import { BeforeAfter } from '../../features/history/components/before-after';
 import { PairPicker } from '../../features/history/components/pair-picker';
 import { Timeline } from '../../features/history/components/timeline';
 import { suggestPairs } from '../../features/history/lib/suggest-pairs';
-import { usePhotos } from '../../features/photos/api/get-photos';
+import { usePhotos } from '../../lib/queries/get-photos';
 import { useRestorationContext } from '../restoration-context';
 
 /** The History tab: before/after pairs of each view, any two photos compared (not for owners), then the timeline. */

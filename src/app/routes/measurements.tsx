@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { can } from '../../../shared/permissions';
-import { restorationFindingsQueryOptions } from '../../features/findings/api/get-restoration-findings';
+import { restorationFindingsQueryOptions } from '../../lib/queries/get-restoration-findings';
 import { ReadingsTab } from '../../features/measurements/components/readings-tab';
 import { useRestorationContext } from '../restoration-context';
 

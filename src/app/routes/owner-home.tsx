@@ -4,7 +4,7 @@ import { useSearchParams } from 'react-router';
 import type { Restoration } from '../../../shared/schemas/restorations';
 import { ErrorState, Loading } from '../../components/states';
 import { useMe } from '../../features/auth/api/get-me';
-import { useRestorationFindings } from '../../features/findings/api/get-restoration-findings';
+import { useRestorationFindings } from '../../lib/queries/get-restoration-findings';
 import { BeforeAfter } from '../../features/history/components/before-after';
 import { Timeline } from '../../features/history/components/timeline';
 import { suggestPairs } from '../../features/history/lib/suggest-pairs';
@@ -14,7 +14,7 @@ import { OwnerSet } from '../../features/owner/components/owner-set';
 import { OwnerSetCard } from '../../features/owner/components/owner-set-card';
 import { RepairedFindings } from '../../features/owner/components/repaired-findings';
 import { heroPhoto, repairedFindings } from '../../features/owner/lib/owner-words';
-import { usePhotos } from '../../features/photos/api/get-photos';
+import { usePhotos } from '../../lib/queries/get-photos';
 import { useRestorations } from '../../features/restorations/api/get-restorations';
 import { OWNER_COLUMN_SIZES } from '../../lib/photo-sources';
 

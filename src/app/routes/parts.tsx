@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router';
-import { restorationFindingsQueryOptions } from '../../features/findings/api/get-restoration-findings';
+import { restorationFindingsQueryOptions } from '../../lib/queries/get-restoration-findings';
 import { PartsTab, type PartsView } from '../../features/parts/components/parts-tab';
 import { useRestorationContext } from '../restoration-context';
 

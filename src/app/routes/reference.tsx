@@ -1,15 +1,16 @@
 import { Link, useParams, useSearchParams } from 'react-router';
 import { can } from '../../../shared/permissions';
 import { ErrorState, Loading } from '../../components/states';
-import { useRestorationFindings } from '../../features/findings/api/get-restoration-findings';
-import { usePhotos } from '../../features/photos/api/get-photos';
+import { useRestorationFindings } from '../../lib/queries/get-restoration-findings';
+import { usePhotos } from '../../lib/queries/get-photos';
 import { useSheetPages } from '../../features/sheets/api/get-sheet-pages';
 import { useMismatchNotes } from '../../features/sheets/api/mismatch-notes';
 import { useReferenceMarks } from '../../features/sheets/api/reference-marks';
 import { MismatchNotesPanel } from '../../features/sheets/components/mismatch-notes-panel';
 import { ReferenceSideBySide } from '../../features/sheets/components/reference-side-by-side';
-import type { ReferenceView } from '../../features/sheets/lib/reference-path';
+import type { ReferenceView } from '../../lib/reference-path';
 import { useRestorationContext } from '../restoration-context';
+import { WithMarkupCanvas } from './sheet-canvas-provider';
 
 const idOf = (v: string | null) => (v && /^\d+$/.test(v) ? Number(v) : undefined);
 
@@ -42,11 +43,13 @@ export function ReferenceRoute() {
         <Loading label={`Finding ${refName} on the diagram and the chassis…`} />
       ) : (
         <>
-          <ReferenceSideBySide
-            restorationId={r.id} refName={refName} view={view} marks={marks.data} pages={pages.data} photos={photos.data}
-            findings={findings.data} mismatches={notes.data.filter((n) => n.ref === refName)} canMark={can(r.role, 'references.mark')}
-            onImageError={() => void Promise.all([pages.refetch(), photos.refetch()])}
-          />
+          <WithMarkupCanvas>
+            <ReferenceSideBySide
+              restorationId={r.id} refName={refName} view={view} marks={marks.data} pages={pages.data} photos={photos.data}
+              findings={findings.data} mismatches={notes.data.filter((n) => n.ref === refName)} canMark={can(r.role, 'references.mark')}
+              onImageError={() => void Promise.all([pages.refetch(), photos.refetch()])}
+            />
+          </WithMarkupCanvas>
           <MismatchNotesPanel restorationId={r.id} refName={refName} notes={notes.data.filter((n) => n.ref === refName)} canEdit={can(r.role, 'references.mark')} />
         </>
       )}

@@ -2,12 +2,13 @@ import { Link, useParams, useSearchParams } from 'react-router';
 import { can } from '../../../shared/permissions';
 import { sheetKindLabels } from '../../../shared/schemas/sheets';
 import { EmptyState, ErrorState, Loading } from '../../components/states';
-import { usePhotos } from '../../features/photos/api/get-photos';
-import { photoLabel } from '../../features/photos/lib/photo-format';
+import { usePhotos } from '../../lib/queries/get-photos';
+import { photoLabel } from '../../lib/photo-format';
 import { useSheetPages } from '../../features/sheets/api/get-sheet-pages';
 import { ReferenceViewer } from '../../features/sheets/components/reference-viewer';
 import { SheetPageDetails } from '../../features/sheets/components/sheet-page-details';
 import { useRestorationContext } from '../restoration-context';
+import { WithMarkupCanvas } from './sheet-canvas-provider';
 
 const focusOf = (params: URLSearchParams) => {
   const mark = Number(params.get('mark'));
@@ -31,17 +32,19 @@ export function SheetPageRoute() {
       <p>{back}</p>
       <h2 className="text-xl font-bold">{label}</h2>
       <SheetPageDetails key={`${page.id}-${page.kind}-${page.title}-${page.ownerVisible}`} page={page} canEdit={can(r.role, 'sheets.edit')} />
-      <ReferenceViewer
-        key={`${page.id}-${search.get('mark') ?? ''}`}
-        restorationId={r.id}
-        label={label}
-        imageUrl={page.urls.large}
-        imageSize={{ width: page.width, height: page.height }}
-        target={{ sheetPageId: page.id }}
-        canMark={can(r.role, 'references.mark')}
-        focusMarkId={focusOf(search)}
-        onImageError={() => void pages.refetch()}
-      />
+      <WithMarkupCanvas>
+        <ReferenceViewer
+          key={`${page.id}-${search.get('mark') ?? ''}`}
+          restorationId={r.id}
+          label={label}
+          imageUrl={page.urls.large}
+          imageSize={{ width: page.width, height: page.height }}
+          target={{ sheetPageId: page.id }}
+          canMark={can(r.role, 'references.mark')}
+          focusMarkId={focusOf(search)}
+          onImageError={() => void pages.refetch()}
+        />
+      </WithMarkupCanvas>
     </section>
   );
 }
@@ -64,17 +67,19 @@ export function ChassisReferencesRoute() {
         {back} · <Link to={`/restorations/${r.id}/photos/${photo.id}`} className="font-semibold text-glow-strong underline">Findings on this photo</Link>
       </p>
       <h2 className="text-xl font-bold">{label}</h2>
-      <ReferenceViewer
-        key={`${photo.id}-${search.get('mark') ?? ''}`}
-        restorationId={r.id}
-        label={label}
-        imageUrl={photo.urls.display}
-        imageSize={{ width: photo.width, height: photo.height }}
-        target={{ photoId: photo.id }}
-        canMark={can(r.role, 'references.mark')}
-        focusMarkId={focusOf(search)}
-        onImageError={() => void photos.refetch()}
-      />
+      <WithMarkupCanvas>
+        <ReferenceViewer
+          key={`${photo.id}-${search.get('mark') ?? ''}`}
+          restorationId={r.id}
+          label={label}
+          imageUrl={photo.urls.display}
+          imageSize={{ width: photo.width, height: photo.height }}
+          target={{ photoId: photo.id }}
+          canMark={can(r.role, 'references.mark')}
+          focusMarkId={focusOf(search)}
+          onImageError={() => void photos.refetch()}
+        />
+      </WithMarkupCanvas>
     </section>
   );
 }

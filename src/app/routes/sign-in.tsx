@@ -4,7 +4,7 @@ import { useMe } from '../../features/auth/api/get-me';
 import { AuthPanel } from '../../features/auth/components/auth-panel';
 import { DemoAccounts } from '../../features/auth/components/demo-accounts';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
-import { useMeta } from '../../features/meta/api/get-meta';
+import { useMeta } from '../../lib/queries/get-meta';
 import { safeNext } from '../require-sign-in';
 
 export function SignInRoute() {

@@ -3,7 +3,7 @@ import type { Finding } from '../../../shared/schemas/findings';
 import { useCreateFinding } from '../../features/findings/api/create-finding';
 import { useDeleteFinding } from '../../features/findings/api/delete-finding';
 import { useUpdateFinding } from '../../features/findings/api/update-finding';
-import type { NewMark } from '../../features/markup/lib/marks';
+import type { NewMark } from '../../lib/new-mark';
 import type { NewFindingValues } from '../../features/markup/lib/new-finding';
 import type { Command } from '../../features/markup/model/commands';
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Finding, FindingInput } from '../../../../shared/schemas/findings';
 import { api } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const createFinding = (photoId: number, input: FindingInput) =>
   api<Finding>(`/photos/${photoId}/findings`, { method: 'POST', json: input });

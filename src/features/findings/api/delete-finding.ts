@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Finding } from '../../../../shared/schemas/findings';
 import { api } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const deleteFinding = (id: number) => api<void>(`/findings/${id}`, { method: 'DELETE' });
 

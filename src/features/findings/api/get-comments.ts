@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { commentSchema } from '../../../../shared/schemas/comments';
 import { apiAllPages } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const getComments = (findingId: number) => apiAllPages(`/findings/${findingId}/comments`, commentSchema);
 

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { findingChangeSchema } from '../../../../shared/schemas/findings';
 import { apiGet } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const getHistory = (id: number) => apiGet(`/findings/${id}/history`, z.array(findingChangeSchema));
 

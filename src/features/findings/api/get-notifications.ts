@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { notificationSchema } from '../../../../shared/schemas/notifications';
 import { api, apiGet } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 /** The newest page only: the menu shows the latest items. */
 export const getNotifications = () => apiGet('/notifications?limit=50', z.array(notificationSchema));

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { findingSchema } from '../../../../shared/schemas/findings';
 import { apiGet } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const getPhotoFindings = (photoId: number) => apiGet(`/photos/${photoId}/findings`, z.array(findingSchema));
 

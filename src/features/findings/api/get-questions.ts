@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { openQuestionSchema } from '../../../../shared/schemas/findings';
 import { apiGet } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const getQuestions = () => apiGet('/questions', z.array(openQuestionSchema));
 

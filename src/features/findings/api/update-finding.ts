@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Finding, FindingPatch } from '../../../../shared/schemas/findings';
 import { api } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const updateFinding = (id: number, patch: FindingPatch) => api<Finding>(`/findings/${id}`, { method: 'PATCH', json: patch });
 

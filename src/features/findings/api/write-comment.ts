@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRef } from 'react';
 import type { Comment } from '../../../../shared/schemas/comments';
 import { api, ApiError } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 
 type CommentInput = { body: string; internal: boolean };
 

@@ -2,7 +2,7 @@ import type { Row } from '@tanstack/react-table';
 import { Link } from 'react-router';
 import { findingPath, kindLabels, type Finding } from '../../../../shared/schemas/findings';
 import { relativeTime } from './finding-format';
-import { SeverityMark, StatusMark } from './status-mark';
+import { SeverityMark, StatusMark } from '../../../components/status-mark';
 
 /** The findings as cards, for a phone propped against a chassis: each card is one link. */
 export function FindingCards({ rows, photoLabel, className = '' }: { rows: Row<Finding>[]; photoLabel: (id: number) => string; className?: string }) {

@@ -4,7 +4,7 @@ import { Field, inputClass } from '../../../components/field';
 import { checkComponentRef, checkTitle } from './finding-edit';
 import { InlineTextField } from './inline-text-field';
 import { SameReferenceFinding } from './same-reference-finding';
-import { SeverityMark, StatusMark } from './status-mark';
+import { SeverityMark, StatusMark } from '../../../components/status-mark';
 import { StatusButtons } from './status-buttons';
 
 /**

@@ -4,7 +4,7 @@ import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Finding } from '../../../../shared/schemas/findings';
-import { findingKeys } from '../api/keys';
+import { findingKeys } from '../../../lib/queries/finding-keys';
 import { FindingPanel } from './finding-panel';
 import { fakeApi, makeFinding, members, ok, refuse, renderWithApp, type Reply } from './findings-test-support';
 import { Thread } from './thread';

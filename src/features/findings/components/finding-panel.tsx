@@ -12,8 +12,8 @@ import { FindingFields, FindingSummary } from './finding-fields';
 import { fullTime, relativeTime, type FindingMember } from './finding-format';
 import { FindingHistory } from './finding-history';
 import { OpenQuestionBadge, QuestionToggle, ShareWithOwner } from './finding-sharing';
-import { SeverityMark, StatusMark } from './status-mark';
-import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
+import { SeverityMark, StatusMark } from '../../../components/status-mark';
+import { OnTheDiagramLink } from '../../../components/on-the-diagram-link';
 
 export interface FindingPanelProps {
   finding: Finding;

@@ -3,7 +3,7 @@ import { Link } from 'react-router';
 import { findingPath, kindLabels, severities, statuses, type Finding } from '../../../../shared/schemas/findings';
 import { byComponentRef } from '../../../lib/table-sorting';
 import { fullTime, relativeTime } from './finding-format';
-import { SeverityMark, StatusMark } from './status-mark';
+import { SeverityMark, StatusMark } from '../../../components/status-mark';
 
 const helper = createColumnHelper<Finding>();
 

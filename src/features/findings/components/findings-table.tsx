@@ -12,7 +12,7 @@ import { useNavigate } from 'react-router';
 import { findingPath, type Finding } from '../../../../shared/schemas/findings';
 import { Button } from '../../../components/button';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
-import { useRestorationFindings } from '../api/get-restoration-findings';
+import { useRestorationFindings } from '../../../lib/queries/get-restoration-findings';
 import { FindingCards } from './finding-cards';
 import { findingColumns } from './findings-columns';
 import { FindingsFilters } from './findings-filters';

@@ -2,9 +2,9 @@ import { useId, useState } from 'react';
 import type { FindingPatch, Status } from '../../../../shared/schemas/findings';
 import { Field, inputClass } from '../../../components/field';
 import { buttonClass } from '../../../components/button';
-import { statusStyle } from '../../markup/model/legend';
+import { statusStyle } from '../../../lib/finding-legend';
 import { checkDismissReason, workflow } from './finding-edit';
-import { StatusGlyph } from './status-mark';
+import { StatusGlyph } from '../../../components/status-mark';
 
 const chip = 'inline-flex min-h-11 items-center gap-1.5 rounded-lg border px-3 py-1.5 text-sm font-semibold transition-colors';
 

@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { findSymptom } from '../../../../shared/bench/symptoms';
 import type { HelpChecklist } from '../../../../shared/schemas/help';
 import { causeResultLabels } from '../../../../shared/schemas/symptom-checks';
-import { VerdictBadge } from '../../measurements/components/verdict-badge';
+import { VerdictBadge } from '../../../components/verdict-badge';
 
 /** The checklist inside a help request: each symptom's causes in order, with their test and how each came out. */
 export function HelpChecklistView({ checklist, remove }: { checklist: HelpChecklist[]; remove?: (symptomId: string) => ReactNode }) {

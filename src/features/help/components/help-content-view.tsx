@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import type { HelpContent } from '../../../../shared/schemas/help';
-import { VerdictBadge } from '../../measurements/components/verdict-badge';
+import { VerdictBadge } from '../../../components/verdict-badge';
 import { HelpChecklistView } from './help-checklist-view';
 import { HelpPhotoFigure } from './help-photo';
 

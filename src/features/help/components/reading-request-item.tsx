@@ -1,6 +1,6 @@
 import type { ReadingRequest } from '../../../../shared/schemas/reading-requests';
 import { readingRequestKindLabels } from '../../../../shared/schemas/reading-requests';
-import { VerdictBadge } from '../../measurements/components/verdict-badge';
+import { VerdictBadge } from '../../../components/verdict-badge';
 import { formatDateTime } from '../../../lib/format';
 
 const when = (iso: string) => formatDateTime(iso);

@@ -3,7 +3,7 @@ import { readingRequestKindLabels, readingRequestKinds, type ReadingRequestKind 
 import { Button } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
-import { usePhotos } from '../../photos/api/get-photos';
+import { usePhotos } from '../../../lib/queries/get-photos';
 import { useAnswerReadingRequest, useAskForReading, useReadingRequests } from '../api/reading-requests';
 import { AnswerForm } from './answer-form';
 import { ReadingRequestItem } from './reading-request-item';

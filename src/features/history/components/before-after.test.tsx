@@ -3,7 +3,7 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it } from 'vitest';
-import { makePhoto } from '../../photos/testing/photo-fixtures';
+import { makePhoto } from '../../../testing/photo-fixtures';
 import { BeforeAfter } from './before-after';
 
 afterEach(cleanup);

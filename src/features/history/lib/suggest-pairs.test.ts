@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Photo } from '../../../../shared/schemas/photos';
-import { makePhoto } from '../../photos/testing/photo-fixtures';
+import { makePhoto } from '../../../testing/photo-fixtures';
 import { latest, suggestPairs } from './suggest-pairs';
 
 const at = (id: number, view: Photo['view'], phase: Photo['phase'], takenAt: string | null, uploadedAt = '2026-11-20T09:00:00.000Z') =>

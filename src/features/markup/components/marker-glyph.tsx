@@ -1,6 +1,6 @@
 import { labelDrop, markerOutline, outlinePath, RING_HOLE } from '../lib/marker-outline';
 import { HALO_DARK, HALO_LIGHT, PAPER } from '../lib/pen';
-import type { MarkerShape } from '../model/legend';
+import type { MarkerShape } from '../../../lib/finding-legend';
 
 const R = 11;
 

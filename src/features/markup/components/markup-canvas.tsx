@@ -10,7 +10,7 @@ import { usePhotoImage } from '../hooks/use-photo-image';
 import { usePixelRatio } from '../hooks/use-pixel-ratio';
 import { useRevealPending } from '../hooks/use-reveal-pending';
 import { useView } from '../hooks/use-view';
-import type { NewMark } from '../lib/marks';
+import type { NewMark } from '../../../lib/new-mark';
 import { ZOOM_STEP } from '../lib/zoom';
 import { imagePoint } from '../model/coordinates';
 import { bounds, toGeometry } from '../model/geometry';

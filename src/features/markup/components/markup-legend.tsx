@@ -1,5 +1,5 @@
 import { severities, statuses } from '../../../../shared/schemas/findings';
-import { severityMarker, statusStyle } from '../model/legend';
+import { severityMarker, statusStyle } from '../../../lib/finding-legend';
 import { FloatingPanel } from './floating-panel';
 import { MarkerGlyph } from './marker-glyph';
 

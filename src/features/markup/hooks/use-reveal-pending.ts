@@ -1,5 +1,5 @@
 import { useEffect, type RefObject } from 'react';
-import type { NewMark } from '../lib/marks';
+import type { NewMark } from '../../../lib/new-mark';
 import { imagePoint, imageToStage, type ImageSize } from '../model/coordinates';
 import type { ViewControls } from './use-view';
 

@@ -1,5 +1,5 @@
 import { statuses, type Severity, type Status } from '../../../../shared/schemas/findings';
-import { severityMarker, statusStyle, type MarkerShape, type StatusStyle } from '../model/legend';
+import { severityMarker, statusStyle, type MarkerShape, type StatusStyle } from '../../../lib/finding-legend';
 import { labelDrop, markerOutline, RING_HOLE } from './marker-outline';
 import { HALO_DARK, HALO_LIGHT, LABEL_FONT_FAMILY, PAPER, traceOutline, type Pen } from './pen';
 

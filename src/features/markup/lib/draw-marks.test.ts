@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { imagePoint, imageToStage } from '../model/coordinates';
 import { PIN_MARKER_RADIUS_PX } from '../model/hit-test';
-import { statusStyle } from '../model/legend';
+import { statusStyle } from '../../../lib/finding-legend';
 import { drawMarks, LABEL_RADIUS_PX } from './draw-marks';
 import type { Mark } from './marks';
 import { recordingPen } from '../testing/recording-pen';

@@ -1,4 +1,4 @@
-import type { MarkerShape } from '../model/legend';
+import type { MarkerShape } from '../../../lib/finding-legend';
 
 /**
  * The outline of a severity marker around its centre, in stage (or SVG) px, shared by the canvas and the

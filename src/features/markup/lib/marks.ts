@@ -1,6 +1,6 @@
 import type { Finding, Severity, Status } from '../../../../shared/schemas/findings';
 import type { ImagePoint } from '../model/coordinates';
-import { toMarkupItem, type Geometry, type MarkupItem } from '../model/geometry';
+import { toMarkupItem, type MarkupItem } from '../model/geometry';
 
 /** A finding as the canvas draws it: its mark plus what the marker shows (number, status, severity). */
 export interface Mark extends MarkupItem {
@@ -21,9 +21,3 @@ export const withPoints = (mark: Mark, points: readonly ImagePoint[]): Mark => (
 
 /** Points as the API takes them: plain `{ x, y }`, no brand. */
 export const plainPoints = (points: readonly ImagePoint[]): { x: number; y: number }[] => points.map((p) => ({ x: p.x, y: p.y }));
-
-/** What `onCreate` hands the page: the new mark's shape and its normalised points. */
-export interface NewMark {
-  readonly shape: Geometry['shape'];
-  readonly points: { x: number; y: number }[];
-}

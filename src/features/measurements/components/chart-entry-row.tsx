@@ -1,7 +1,7 @@
 import type { KeyboardEvent } from 'react';
 import { inputClass } from '../../../components/field';
 import { rowPreview, type EntryRow, type EntryShared } from '../lib/chart-entry';
-import { verdictMarks } from '../lib/verdict-marks';
+import { verdictMarks } from '../../../lib/verdict-marks';
 
 const cellInput = `${inputClass} font-mono`;
 const ENTRY_COLUMNS = 'sm:grid-cols-[1.4fr_1fr_0.7fr_1fr_0.9fr_8rem_2.75rem]';

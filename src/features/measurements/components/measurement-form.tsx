@@ -1,4 +1,4 @@
-import { KnownReferences } from '../../sheets/components/known-references';
+import { KnownReferences } from '../../../components/known-references';
 import { useId } from 'react';
 import { measuredQuantities, readingKinds } from '../../../../shared/bench';
 import type { Measurement } from '../../../../shared/schemas/measurements';

@@ -1,11 +1,11 @@
-import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
+import { OnTheDiagramLink } from '../../../components/on-the-diagram-link';
 import { useState } from 'react';
 import { readingKinds } from '../../../../shared/bench';
 import type { Measurement } from '../../../../shared/schemas/measurements';
 import { buttonClass } from '../../../components/button';
 import { useDeleteMeasurement } from '../api/delete-measurement';
 import { deviationWords, expectedSummary, formatWhen } from '../lib/measurement-format';
-import { VerdictBadge } from './verdict-badge';
+import { VerdictBadge } from '../../../components/verdict-badge';
 
 const cell = 'px-3 py-2 align-top';
 const small = `${buttonClass('quiet')} min-h-9 px-3 py-1 text-sm`;

@@ -3,7 +3,7 @@ import { readingKinds } from '../../../../shared/bench';
 import { ErrorState, Loading } from '../../../components/states';
 import { useFindingMeasurements } from '../api/get-finding-measurements';
 import { expectedSummary } from '../lib/measurement-format';
-import { VerdictBadge } from './verdict-badge';
+import { VerdictBadge } from '../../../components/verdict-badge';
 
 /** The readings tied to one finding, compact, for the finding panel: what, where, the verdict and why. */
 export function MeasurementsForFinding({ restorationId, findingId, role }: { restorationId: number; findingId: number; role: Role }) {

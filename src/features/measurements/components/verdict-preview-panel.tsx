@@ -1,5 +1,5 @@
 import type { Preview } from '../lib/verdict-preview';
-import { VerdictBadge } from './verdict-badge';
+import { VerdictBadge } from '../../../components/verdict-badge';
 
 /** The verdict the reading will get, worked out as it is typed; the server's verdict counts once saved. */
 export function VerdictPreviewPanel({ preview }: { preview: Preview }) {

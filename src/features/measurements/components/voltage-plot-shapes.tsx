@@ -1,6 +1,6 @@
 import type { BarShapeProps, ScatterShapeProps } from 'recharts';
 import type { PlotRow } from '../lib/plot-rows';
-import { verdictMarks } from '../lib/verdict-marks';
+import { verdictMarks } from '../../../lib/verdict-marks';
 import { voltsText } from '../lib/voltage-points';
 
 /** The tolerance band as a shaded range inside its lighter marginal zone, with the expected value as a tick. */

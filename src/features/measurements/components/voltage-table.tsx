@@ -1,7 +1,7 @@
 import { Fragment } from 'react';
 import { formatDeviation } from '../lib/measurement-format';
 import { groupPoints, voltsText, type VoltagePoint } from '../lib/voltage-points';
-import { VerdictBadge } from './verdict-badge';
+import { VerdictBadge } from '../../../components/verdict-badge';
 
 const cell = 'px-3 py-1.5 align-top';
 const heads = ['Point', 'Expected', 'Tolerance', 'Reading', 'Deviation', 'Verdict'];

@@ -1,6 +1,6 @@
 import { stageLabels } from '../../../../shared/schemas/restorations';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
-import { useRestorationFindings } from '../../findings/api/get-restoration-findings';
+import { useRestorationFindings } from '../../../lib/queries/get-restoration-findings';
 import { useLabour } from '../api/labour';
 import { LabourEntryForm } from './labour-entry-form';
 import { LabourTimer } from './labour-timer';

@@ -1,6 +1,6 @@
 import { stageLabels, stages, type Stage } from '../../../../shared/schemas/restorations';
 import { inputClass } from '../../../components/field';
-import { useRestorationFindings } from '../../findings/api/get-restoration-findings';
+import { useRestorationFindings } from '../../../lib/queries/get-restoration-findings';
 import type { LabourTarget } from '../api/labour';
 
 /** "stage:repair" or "finding:12": what a time entry is for, as one select value. */

@@ -1,4 +1,4 @@
-import { KnownReferences } from '../../sheets/components/known-references';
+import { KnownReferences } from '../../../components/known-references';
 import { useId } from 'react';
 import { mainsPositionLabels, mainsPositions, partActionLabels, partActions, partStateLabels, partStates, type Part } from '../../../../shared/schemas/parts';
 import { buttonClass } from '../../../components/button';

@@ -3,7 +3,7 @@ import { mainsPositionLabels, partActionLabels, partStates, type Part } from '..
 import type { FindingChoice } from '../lib/finding-choice';
 import { formatMinor, type Currency } from '../lib/money';
 import { byComponentRef } from '../../../lib/table-sorting';
-import { OnTheDiagramLink } from '../../sheets/components/on-the-diagram-link';
+import { OnTheDiagramLink } from '../../../components/on-the-diagram-link';
 import { StateCell } from './state-cell';
 import { WarningList } from './warning-list';
 

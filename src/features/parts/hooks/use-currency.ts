@@ -1,4 +1,4 @@
-import { useMeta } from '../../meta/api/get-meta';
+import { useMeta } from '../../../lib/queries/get-meta';
 import type { Currency } from '../lib/money';
 
 const FALLBACK: Currency = 'GBP';

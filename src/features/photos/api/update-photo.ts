@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Photo, PhotoPatch } from '../../../../shared/schemas/photos';
 import { api } from '../../../lib/api-client';
-import { photosQueryKey } from './get-photos';
+import { photosQueryKey } from '../../../lib/queries/get-photos';
 
 export const updatePhoto = (id: number, patch: PhotoPatch) => api<Photo>(`/photos/${id}`, { method: 'PATCH', json: patch });
 

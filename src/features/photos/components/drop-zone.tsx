@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState, type ChangeEvent, type DragEvent } from 'react';
 import { Button } from '../../../components/button';
-import { acceptedTypes } from '../lib/photo-format';
+import { acceptedTypes } from '../../../lib/photo-format';
 
 const carriesFiles = (e: { dataTransfer: DataTransfer | null }) => Boolean(e.dataTransfer?.types.includes('Files'));
 

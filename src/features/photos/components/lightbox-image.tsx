@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { Photo } from '../../../../shared/schemas/photos';
-import { photoLabel } from '../lib/photo-format';
+import { photoLabel } from '../../../lib/photo-format';
 import { photoSources } from '../../../lib/photo-sources';
 
 /**

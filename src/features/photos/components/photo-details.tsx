@@ -1,5 +1,5 @@
 import { phaseLabels, viewLabels, type Photo } from '../../../../shared/schemas/photos';
-import { formatDateTime } from '../lib/photo-format';
+import { formatDateTime } from '../../../lib/photo-format';
 import { SharedBadge } from './shared-badge';
 
 /** What is known about the photo on screen; announced politely as the person moves through the set. */

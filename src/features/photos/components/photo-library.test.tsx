@@ -3,7 +3,7 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { makePhoto } from '../testing/photo-fixtures';
+import { makePhoto } from '../../../testing/photo-fixtures';
 import { fakePhotoApi, renderWithQueries } from '../testing/photo-test-support';
 import { PhotoLibrary } from './photo-library';
 

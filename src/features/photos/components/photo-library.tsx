@@ -1,7 +1,7 @@
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import { can, type Role } from '../../../../shared/permissions';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
-import { usePhotos } from '../api/get-photos';
+import { usePhotos } from '../../../lib/queries/get-photos';
 import { useRefreshExpiredUrls } from '../hooks/use-refresh-expired-urls';
 import { flattenGroups, groupPhotos } from '../lib/group-photos';
 import { PhotoGallery } from './photo-gallery';

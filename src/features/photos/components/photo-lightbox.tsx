@@ -6,7 +6,7 @@ import type { Photo } from '../../../../shared/schemas/photos';
 import { buttonClass } from '../../../components/button';
 import { useModalFocus } from '../hooks/use-modal-focus';
 import { useSwipe } from '../hooks/use-swipe';
-import { photoLabel } from '../lib/photo-format';
+import { photoLabel } from '../../../lib/photo-format';
 import { LightboxImage } from './lightbox-image';
 import { PhotoDetails } from './photo-details';
 import { PhotoEditPanel } from './photo-edit-panel';

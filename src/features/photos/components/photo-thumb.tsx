@@ -1,6 +1,6 @@
 import type { Photo } from '../../../../shared/schemas/photos';
-import { StatusGlyph } from '../../findings/components/status-mark';
-import { findingCountList, findingCountText, photoLabel, thumbSize } from '../lib/photo-format';
+import { StatusGlyph } from '../../../components/status-mark';
+import { findingCountList, findingCountText, photoLabel, thumbSize } from '../../../lib/photo-format';
 import { SharedBadge } from './shared-badge';
 import { photoSources } from '../../../lib/photo-sources';
 

@@ -1,5 +1,5 @@
 import { useEffect, useRef } from 'react';
-import { formatBytes } from '../lib/photo-format';
+import { formatBytes } from '../../../lib/photo-format';
 import type { UploadItem } from '../lib/upload-queue';
 
 const smallButton = 'min-h-11 rounded-lg px-3 text-sm font-semibold hover:bg-sunken';

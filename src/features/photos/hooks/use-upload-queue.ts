@@ -3,9 +3,9 @@ import { useCallback, useEffect, useReducer, useRef } from 'react';
 import type { Photo } from '../../../../shared/schemas/photos';
 import { ApiError } from '../../../lib/api-client';
 import { ME_KEY } from '../../../lib/session-key';
-import { photosQueryKey } from '../api/get-photos';
+import { photosQueryKey } from '../../../lib/queries/get-photos';
 import { uploadPhoto, type UploadFields } from '../api/upload-photo';
-import { isAcceptedImage } from '../lib/photo-format';
+import { isAcceptedImage } from '../../../lib/photo-format';
 import { isBusy, newUploadItem, nextToStart, uploadQueueReducer, type UploadItem } from '../lib/upload-queue';
 
 /** Two at a time: enough to keep a phone's uplink busy without starving the first photo of bandwidth. */

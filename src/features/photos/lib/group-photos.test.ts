@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { makePhoto } from '../testing/photo-fixtures';
+import { makePhoto } from '../../../testing/photo-fixtures';
 import { flattenGroups, groupPhotos } from './group-photos';
 
 describe('groupPhotos', () => {

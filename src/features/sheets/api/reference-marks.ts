@@ -1,9 +1,9 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ReferenceMark, ReferenceMarkInput, ReferenceSummary } from '../../../../shared/schemas/sheets';
+import type { ReferenceMark, ReferenceMarkInput } from '../../../../shared/schemas/sheets';
 import { api } from '../../../lib/api-client';
+import { referencesQueryKey } from '../../../lib/queries/references';
 
 export const referenceMarksQueryKey = (restorationId: number) => ['restorations', restorationId, 'reference-marks'] as const;
-export const referencesQueryKey = (restorationId: number) => ['restorations', restorationId, 'references'] as const;
 
 /** Every reference mark of the restoration the reader may see (diagram pages and chassis photos). */
 export const referenceMarksQueryOptions = (restorationId: number) =>
@@ -12,10 +12,6 @@ export const referenceMarksQueryOptions = (restorationId: number) =>
     queryFn: () => api<ReferenceMark[]>(`/restorations/${restorationId}/reference-marks`),
   });
 export const useReferenceMarks = (restorationId: number) => useQuery(referenceMarksQueryOptions(restorationId));
-
-/** Every known reference with its counts. */
-export const useReferences = (restorationId: number, enabled = true) =>
-  useQuery({ queryKey: referencesQueryKey(restorationId), queryFn: () => api<ReferenceSummary[]>(`/restorations/${restorationId}/references`), enabled });
 
 function useInvalidateReferences(restorationId: number) {
   const client = useQueryClient();

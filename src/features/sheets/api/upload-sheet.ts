@@ -3,7 +3,7 @@ import type { z } from 'zod';
 import type { Sheet, sheetUploadFieldsSchema } from '../../../../shared/schemas/sheets';
 import { postForm, type FormProgress } from '../../../lib/post-form';
 import { sheetPagesQueryKey } from './get-sheet-pages';
-import { referencesQueryKey } from './reference-marks';
+import { referencesQueryKey } from '../../../lib/queries/references';
 
 export type SheetUploadValues = z.output<typeof sheetUploadFieldsSchema>;
 

@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
-import { usePhotos } from '../../photos/api/get-photos';
-import { photoLabel } from '../../photos/lib/photo-format';
+import { usePhotos } from '../../../lib/queries/get-photos';
+import { photoLabel } from '../../../lib/photo-format';
 
 /** The chassis photos, each opening it to mark where a reference sits (a location mark). */
 export function ChassisPhotoPicker({ restorationId }: { restorationId: number }) {

@@ -3,11 +3,11 @@ import { useNavigate } from 'react-router';
 import { firstWithComponentRef } from '../../../../shared/natural-order';
 import { findingPath, type Finding } from '../../../../shared/schemas/findings';
 import { buttonClass } from '../../../components/button';
-import { useRestorationFindings } from '../../findings/api/get-restoration-findings';
-import { ReferenceFindingNotice } from '../../findings/components/same-reference-finding';
-import type { NewMark } from '../../markup/lib/marks';
+import { useRestorationFindings } from '../../../lib/queries/get-restoration-findings';
+import { ReferenceFindingNotice } from '../../../components/reference-finding-notice';
+import type { NewMark } from '../../../lib/new-mark';
 import { useCreateReferenceMark } from '../api/reference-marks';
-import { refOf } from '../lib/reference-path';
+import { refOf } from '../../../lib/reference-path';
 
 interface Props {
   restorationId: number;

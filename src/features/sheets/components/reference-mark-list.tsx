@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
 import { mismatchLine, type MismatchNote, type ReferenceMark, type ReferenceSummary } from '../../../../shared/schemas/sheets';
-import { referencePath } from '../lib/reference-path';
+import { referencePath } from '../../../lib/reference-path';
 
 interface Props {
   restorationId: number;

@@ -2,10 +2,10 @@ import { useMemo, useState } from 'react';
 import type { Finding } from '../../../../shared/schemas/findings';
 import type { MismatchNote, ReferenceMark } from '../../../../shared/schemas/sheets';
 import { mismatchLine } from '../../../../shared/schemas/sheets';
-import { MarkupCanvas } from '../../markup/components/markup-canvas';
-import type { NewMark } from '../../markup/lib/marks';
+import type { NewMark } from '../../../lib/new-mark';
 import { useCreateReferenceMark } from '../api/reference-marks';
 import { markAsFinding } from '../lib/mark-as-finding';
+import { SheetCanvas } from './sheet-canvas';
 import type { MarkTarget } from './reference-viewer';
 
 interface Props {
@@ -62,7 +62,7 @@ export function ReferencePane({ restorationId, refName, side, label, imageUrl, i
         ))}
       </figcaption>
       <div className="h-[60vh] min-h-72" data-markup-probe={side}>
-        <MarkupCanvas
+        <SheetCanvas
           imageUrl={imageUrl}
           imageSize={imageSize}
           items={items}

@@ -2,9 +2,9 @@ import { Link } from 'react-router';
 import type { Finding } from '../../../../shared/schemas/findings';
 import type { Photo } from '../../../../shared/schemas/photos';
 import { sheetKindLabels, type MismatchNote, type ReferenceMark, type SheetPage } from '../../../../shared/schemas/sheets';
-import { photoLabel } from '../../photos/lib/photo-format';
+import { photoLabel } from '../../../lib/photo-format';
 import { canvasId, chassisLocationsOf, chosen, diagramMarksOf, type ChassisLocation } from '../lib/reference-locations';
-import { referencePath, refOf, type ReferenceView } from '../lib/reference-path';
+import { referencePath, refOf, type ReferenceView } from '../../../lib/reference-path';
 import { ReferencePane } from './reference-pane';
 
 interface Props {

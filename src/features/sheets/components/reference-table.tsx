@@ -1,7 +1,8 @@
-import { useReferenceMarks, useReferences } from '../api/reference-marks';
+import { useReferences } from '../../../lib/queries/references';
+import { useReferenceMarks } from '../api/reference-marks';
 import { Link } from 'react-router';
 import { markPath } from '../lib/mark-as-finding';
-import { referencePath } from '../lib/reference-path';
+import { referencePath } from '../../../lib/reference-path';
 
 /** Every reference known in the restoration, with where it appears; each mark count links to the first mark. */
 export function ReferenceTable({ restorationId }: { restorationId: number }) {

@@ -1,11 +1,12 @@
 import { useMemo, useState } from 'react';
 import { markRefSchema, type ReferenceMark } from '../../../../shared/schemas/sheets';
 import { inputClass } from '../../../components/field';
-import { MarkupCanvas } from '../../markup/components/markup-canvas';
-import type { NewMark } from '../../markup/lib/marks';
-import { useCreateReferenceMark, useDeleteReferenceMark, useReferenceMarks, useReferences } from '../api/reference-marks';
+import type { NewMark } from '../../../lib/new-mark';
+import { useReferences } from '../../../lib/queries/references';
+import { useCreateReferenceMark, useDeleteReferenceMark, useReferenceMarks } from '../api/reference-marks';
 import { useMismatchNotes } from '../api/mismatch-notes';
 import { markAsFinding } from '../lib/mark-as-finding';
+import { SheetCanvas } from './sheet-canvas';
 import { ReferenceMarkList } from './reference-mark-list';
 
 export type MarkTarget = { sheetPageId: number; photoId?: undefined } | { photoId: number; sheetPageId?: undefined };
@@ -64,7 +65,7 @@ export function ReferenceViewer({ restorationId, label, imageUrl, imageSize, tar
   return (
     <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
       <div className="h-[70vh] min-h-80" data-markup-probe={target.sheetPageId !== undefined ? 'diagram' : 'chassis'}>
-        <MarkupCanvas
+        <SheetCanvas
           imageUrl={imageUrl}
           imageSize={imageSize}
           items={items}

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { Finding } from '../../../../shared/schemas/findings';
 import type { ReferenceMark, SheetPage } from '../../../../shared/schemas/sheets';
 import { canvasId, chassisLocationsOf, chosen, diagramMarksOf } from './reference-locations';
-import { referencePath, refOf } from './reference-path';
+import { referencePath, refOf } from '../../../lib/reference-path';
 
 const mark = (id: number, ref: string, on: { sheetPageId?: number; photoId?: number }): ReferenceMark => ({
   id, restorationId: 1, sheetPageId: on.sheetPageId ?? null, photoId: on.photoId ?? null, ref, shape: 'pin', points: [{ x: 0.5, y: 0.5 }], createdAt: '2026-12-02T09:00:00.000Z',

@@ -1,6 +1,6 @@
 import type { Finding } from '../../../../shared/schemas/findings';
 import type { ReferenceMark, SheetPage } from '../../../../shared/schemas/sheets';
-import { refOf, type ReferenceView } from './reference-path';
+import { refOf, type ReferenceView } from '../../../lib/reference-path';
 
 /** Where a reference sits on the chassis: a location mark, or a finding that names it. */
 export type ChassisLocation = { kind: 'mark'; id: number; photoId: number; mark: ReferenceMark } | { kind: 'finding'; id: number; photoId: number; finding: Finding };

@@ -1,5 +1,5 @@
-import { statuses, statusLabels, type Status } from '../../../../shared/schemas/findings';
-import { phaseLabels, viewLabels, type Photo } from '../../../../shared/schemas/photos';
+import { statuses, statusLabels, type Status } from '../../shared/schemas/findings';
+import { phaseLabels, viewLabels, type Photo } from '../../shared/schemas/photos';
 
 /** What the server accepts (never SVG: it can carry script). HEIC/AVIF come from phones. */
 export const acceptedTypes = ['image/jpeg', 'image/png', 'image/webp', 'image/heic', 'image/heif', 'image/avif'] as const;

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Photo } from '../../../../shared/schemas/photos';
-import { apiAllPages } from '../../../lib/api-client';
+import type { Photo } from '../../../shared/schemas/photos';
+import { apiAllPages } from '../api-client';
 
 export const getPhotos = (restorationId: number) => apiAllPages<Photo>(`/restorations/${restorationId}/photos`);
 

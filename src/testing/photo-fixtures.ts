@@ -1,4 +1,4 @@
-import type { Photo } from '../../../../shared/schemas/photos';
+import type { Photo } from '../../shared/schemas/photos';
 
 /** A photo as the API answers it; tests override what they care about. */
 export function makePhoto(id: number, overrides: Partial<Photo> = {}): Photo {

@@ -3,10 +3,10 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { NewFindingForm } from '../../markup/components/new-finding-form';
-import { FindingPanel } from './finding-panel';
-import { fakeApi, makeFinding, members, ok, renderWithApp } from './findings-test-support';
-import { SameReferenceFinding } from './same-reference-finding';
+import { NewFindingForm } from '../../features/markup/components/new-finding-form';
+import { FindingPanel } from '../../features/findings/components/finding-panel';
+import { fakeApi, makeFinding, members, ok, renderWithApp } from '../../features/findings/components/findings-test-support';
+import { SameReferenceFinding } from '../../features/findings/components/same-reference-finding';
 
 afterEach(() => {
   cleanup();

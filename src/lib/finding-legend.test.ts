@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { severities, statuses } from '../../../../shared/schemas/findings';
+import { severities, statuses } from '../../shared/schemas/findings';
 import {
   contrastRatio,
   GREYSCALE_DISTINCT_STATUSES,
@@ -8,7 +8,7 @@ import {
   relativeLuminance,
   severityMarker,
   statusStyle,
-} from './legend';
+} from './finding-legend';
 
 const pairs = <T>(list: readonly T[]): [T, T][] => list.flatMap((a, i) => list.slice(i + 1).map((b): [T, T] => [a, b]));
 

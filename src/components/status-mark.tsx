@@ -1,5 +1,5 @@
-import type { Severity, Status } from '../../../../shared/schemas/findings';
-import { severityMarker, statusStyle, type MarkerShape } from '../../markup/model/legend';
+import type { Severity, Status } from '../../shared/schemas/findings';
+import { severityMarker, statusStyle, type MarkerShape } from '../lib/finding-legend';
 
 /** The status glyph on its colour, as the canvas draws it on the pin. The word travels beside it (or in `label`). */
 export function StatusGlyph({ status, className = '' }: { status: Status; className?: string }) {

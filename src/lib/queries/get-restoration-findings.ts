@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { findingSchema } from '../../../../shared/schemas/findings';
-import { apiAllPages } from '../../../lib/api-client';
-import { findingKeys } from './keys';
+import { findingSchema } from '../../../shared/schemas/findings';
+import { apiAllPages } from '../api-client';
+import { findingKeys } from './finding-keys';
 
 export const getRestorationFindings = (restorationId: number) => apiAllPages(`/restorations/${restorationId}/findings`, findingSchema);
 

@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import { useReferences } from '../api/reference-marks';
+import { useReferences } from '../lib/queries/references';
 import { referencePath, refOf, type ReferenceView } from '../lib/reference-path';
 
 /**

@@ -1,4 +1,4 @@
-import { severityLabels, statusLabels, type Severity, type Status } from '../../../../shared/schemas/findings';
+import { severityLabels, statusLabels, type Severity, type Status } from '../../shared/schemas/findings';
 
 /**
  * Gridleak's marks: a finding's status is a colour AND a glyph (never colour alone), its severity is the marker's

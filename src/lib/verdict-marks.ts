@@ -1,4 +1,4 @@
-import type { Measurement } from '../../../../shared/schemas/measurements';
+import type { Measurement } from '../../shared/schemas/measurements';
 
 export type Verdict = Measurement['verdict'];
 

@@ -1,4 +1,4 @@
-import { useReferences } from '../api/reference-marks';
+import { useReferences } from '../lib/queries/references';
 
 /** The references already known in the restoration (diagram, chassis, findings, ledger, readings), for an input's `list`. */
 export function KnownReferences({ restorationId, id }: { restorationId: number; id: string }) {

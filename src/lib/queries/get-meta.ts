@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { metaSchema } from '../../../../shared/schemas/meta';
-import { apiGet } from '../../../lib/api-client';
+import { metaSchema } from '../../../shared/schemas/meta';
+import { apiGet } from '../api-client';
 
 export const getMeta = () => apiGet('/meta', metaSchema);
 
