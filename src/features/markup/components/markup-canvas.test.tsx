@@ -4,7 +4,7 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { makeFinding } from '../testing/finding-fixtures';
+import { makeFinding } from '../../../testing/finding-fixtures';
 import { MarkupCanvas, type MarkupCanvasProps } from './markup-canvas';
 
 // The stage measures 800×600 at the viewport's top-left; the photo is 4000×3000, so "Fit" (16 px clear all round) is 568/3000 = 19 %.

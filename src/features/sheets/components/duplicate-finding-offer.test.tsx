@@ -6,7 +6,7 @@ import userEvent from '@testing-library/user-event';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fakeApi, ok } from '../../../testing/fake-api';
-import { makeFinding } from '../../markup/testing/finding-fixtures';
+import { makeFinding } from '../../../testing/finding-fixtures';
 import { DuplicateFindingOffer } from './duplicate-finding-offer';
 
 afterEach(() => {

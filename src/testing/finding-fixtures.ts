@@ -1,4 +1,4 @@
-import type { Finding } from '../../../../shared/schemas/findings';
+import type { Finding } from '../../shared/schemas/findings';
 
 /** A finding as the API answers it; tests override what they care about. */
 export function makeFinding(id: number, overrides: Partial<Finding> = {}): Finding {
