@@ -5,12 +5,15 @@ import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
 /** A client feature imports no other feature: shared pieces live in src/components or src/lib, and src/app composes features. */
-const clientFeatures = readdirSync(new URL('./src/features', import.meta.url), { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
+const clientFeatures = readdirSync(new URL('./src/features', import.meta.url), { withFileTypes: true })
+  .filter((d) => d.isDirectory())
+  .map((d) => d.name);
 const featureZones = clientFeatures.map((name) => ({
   target: `./src/features/${name}`,
   from: './src/features',
   except: [`./${name}`],
-  message: 'A feature does not import another feature: move the shared piece to src/components or src/lib, or compose them in src/app.',
+  message:
+    'A feature does not import another feature: move the shared piece to src/components or src/lib, or compose them in src/app.',
 }));
 
 export default tseslint.config(
@@ -23,7 +26,9 @@ export default tseslint.config(
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
     // Imports are written without extensions: without a resolver that tries .ts and .tsx the path rules below see
     // no file and pass every import.
-    settings: { 'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] })] },
+    settings: {
+      'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] })],
+    },
     rules: {
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/consistent-type-imports': 'error',
@@ -33,33 +38,65 @@ export default tseslint.config(
         'error',
         {
           zones: [
-            { target: './shared', from: ['./src', './server'], message: 'shared/ is used by both sides and imports neither.' },
+            {
+              target: './shared',
+              from: ['./src', './server'],
+              message: 'shared/ is used by both sides and imports neither.',
+            },
             { target: './src', from: './server', message: 'The client never imports server code.' },
             { target: './server', from: './src', message: 'The server never imports client code.' },
             { target: './src/features', from: './src/app', message: 'Features do not import the app layer.' },
-            { target: ['./src/components', './src/lib', './src/hooks'], from: ['./src/features', './src/app'], message: 'Shared client code stays below features.' },
-            { target: './server/http', from: './server/features', message: 'server/http is the plumbing every feature uses; it imports no feature.' },
+            {
+              target: ['./src/components', './src/lib', './src/hooks'],
+              from: ['./src/features', './src/app'],
+              message: 'Shared client code stays below features.',
+            },
+            {
+              target: './server/http',
+              from: './server/features',
+              message: 'server/http is the plumbing every feature uses; it imports no feature.',
+            },
             ...featureZones,
           ],
         },
       ],
-      'no-restricted-globals': ['error', { name: 'confirm', message: 'Use the in-app confirmation dialog (src/components), never the browser confirm().' }],
+      'no-restricted-globals': [
+        'error',
+        {
+          name: 'confirm',
+          message: 'Use the in-app confirmation dialog (src/components), never the browser confirm().',
+        },
+      ],
     },
   },
   {
     // Formatting for people goes through shared/format (src/lib/format.ts, server/format.ts), in the person's locale and zone.
     files: ['src/**/*.{ts,tsx}', 'server/**/*.ts', 'shared/**/*.ts'],
     ignores: [
-      'shared/format/**', 'shared/money/**', '**/*.test.{ts,tsx}',
+      'shared/format/**',
+      'shared/money/**',
+      '**/*.test.{ts,tsx}',
       // TODO: dates still formatted in place; route them through src/lib/format.ts.
-      'src/features/money/components/estimate-card.tsx', 'src/features/help/components/help-on-bench.tsx', 'src/features/help/components/help-tab.tsx',
-      'src/features/help/components/help-link-panel.tsx', 'src/features/help/components/help-replies.tsx', 'src/features/help/components/shared-help-page.tsx',
+      'src/features/money/components/estimate-card.tsx',
+      'src/features/help/components/help-on-bench.tsx',
+      'src/features/help/components/help-tab.tsx',
+      'src/features/help/components/help-link-panel.tsx',
+      'src/features/help/components/help-replies.tsx',
+      'src/features/help/components/shared-help-page.tsx',
       'src/lib/photo-format.ts',
     ],
     rules: {
-      'no-restricted-syntax': ['error',
-        { selector: "CallExpression[callee.property.name=/^toLocale(Date|Time)?String$/]", message: 'Format dates with src/lib/format.ts (client) or server/format.ts (server).' },
-        { selector: "NewExpression[callee.object.name='Intl'][callee.property.name=/^(DateTimeFormat|NumberFormat|RelativeTimeFormat)$/]", message: 'Format with shared/format (src/lib/format.ts, server/format.ts) or shared/money.' },
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: 'CallExpression[callee.property.name=/^toLocale(Date|Time)?String$/]',
+          message: 'Format dates with src/lib/format.ts (client) or server/format.ts (server).',
+        },
+        {
+          selector:
+            "NewExpression[callee.object.name='Intl'][callee.property.name=/^(DateTimeFormat|NumberFormat|RelativeTimeFormat)$/]",
+          message: 'Format with shared/format (src/lib/format.ts, server/format.ts) or shared/money.',
+        },
       ],
     },
   },
@@ -67,10 +104,21 @@ export default tseslint.config(
     // Layers on the server: routes → service → repo. A route handler validates, guards and answers; queries live in repos.
     files: ['server/features/**/*.routes.ts'],
     rules: {
-      'no-restricted-imports': ['error', { patterns: [
-        { group: ['drizzle-orm', 'drizzle-orm/*'], message: 'Route handlers run no queries: put the query in the feature repo (<feature>.repo.ts).' },
-        { group: ['**/db/schema', '**/db/schema/*'], message: 'Route handlers run no queries: put the query in the feature repo (<feature>.repo.ts).' },
-      ] }],
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['drizzle-orm', 'drizzle-orm/*'],
+              message: 'Route handlers run no queries: put the query in the feature repo (<feature>.repo.ts).',
+            },
+            {
+              group: ['**/db/schema', '**/db/schema/*'],
+              message: 'Route handlers run no queries: put the query in the feature repo (<feature>.repo.ts).',
+            },
+          ],
+        },
+      ],
     },
   },
 );

@@ -50,7 +50,12 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
       // Vite's dev server injects an inline React refresh preamble; the production build needs none.
       contentSecurityPolicy: options.relaxedCsp
         ? false
-        : { directives: { 'img-src': ["'self'", 'data:', 'blob:', 'http:', 'https:'], 'upgrade-insecure-requests': null } },
+        : {
+            directives: {
+              'img-src': ["'self'", 'data:', 'blob:', 'http:', 'https:'],
+              'upgrade-insecure-requests': null,
+            },
+          },
     }),
   );
   app.use(
@@ -59,7 +64,11 @@ export function createApp(deps: AppDeps, options: { trustProxy?: string | boolea
       autoLogging: { ignore: (req) => req.url === '/api/health' || !req.url?.startsWith('/api') },
       // One short line per request; bodies and cookies never reach the log.
       // Errors go through redactedError: query parameters (a password hash in a failed insert) never reach the log.
-      serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ status: res.statusCode }), err: redactedError },
+      serializers: {
+        req: (req) => ({ method: req.method, url: req.url }),
+        res: (res) => ({ status: res.statusCode }),
+        err: redactedError,
+      },
     }),
   );
 

@@ -30,14 +30,27 @@ describe('environment', () => {
 
   it('when only part of the S3 settings is given, then each missing one is named', () => {
     const lines = problems({ S3_ENDPOINT: 'https://s3.example.test' });
-    expect(lines).toEqual(expect.arrayContaining([expect.stringMatching(/^S3_BUCKET is required/), expect.stringMatching(/^S3_SECRET_ACCESS_KEY/)]));
+    expect(lines).toEqual(
+      expect.arrayContaining([
+        expect.stringMatching(/^S3_BUCKET is required/),
+        expect.stringMatching(/^S3_SECRET_ACCESS_KEY/),
+      ]),
+    );
   });
 
   it('when only one of the payment service settings is given, or one is malformed, then start-up names it', () => {
-    expect(problems({ STRIPE_SECRET_KEY: 'sk_test_abc123' })).toEqual(['STRIPE_WEBHOOK_SECRET is required when STRIPE_SECRET_KEY is set']);
-    expect(problems({ STRIPE_WEBHOOK_SECRET: 'whsec_abc123' })).toEqual(['STRIPE_SECRET_KEY is required when STRIPE_WEBHOOK_SECRET is set']);
-    expect(problems({ STRIPE_SECRET_KEY: 'pk_test_abc123', STRIPE_WEBHOOK_SECRET: 'whsec_abc123' })).toEqual([expect.stringMatching(/^STRIPE_SECRET_KEY must be a secret key/)]);
-    expect(parseEnv({ STRIPE_SECRET_KEY: 'sk_test_abc123', STRIPE_WEBHOOK_SECRET: 'whsec_abc123' }).STRIPE_SECRET_KEY).toBe('sk_test_abc123');
+    expect(problems({ STRIPE_SECRET_KEY: 'sk_test_abc123' })).toEqual([
+      'STRIPE_WEBHOOK_SECRET is required when STRIPE_SECRET_KEY is set',
+    ]);
+    expect(problems({ STRIPE_WEBHOOK_SECRET: 'whsec_abc123' })).toEqual([
+      'STRIPE_SECRET_KEY is required when STRIPE_WEBHOOK_SECRET is set',
+    ]);
+    expect(problems({ STRIPE_SECRET_KEY: 'pk_test_abc123', STRIPE_WEBHOOK_SECRET: 'whsec_abc123' })).toEqual([
+      expect.stringMatching(/^STRIPE_SECRET_KEY must be a secret key/),
+    ]);
+    expect(
+      parseEnv({ STRIPE_SECRET_KEY: 'sk_test_abc123', STRIPE_WEBHOOK_SECRET: 'whsec_abc123' }).STRIPE_SECRET_KEY,
+    ).toBe('sk_test_abc123');
   });
 
   it('when PORT is not a number, then it is reported with the others', () => {
@@ -51,7 +64,9 @@ describe('environment', () => {
   });
 
   it('when HOST lets other machines in without SESSION_SECRET, then start-up is refused; loopback keeps the local secret', () => {
-    expect(problems({ HOST: '0.0.0.0' })).toEqual([expect.stringMatching(/^SESSION_SECRET is required when HOST=0\.0\.0\.0/)]);
+    expect(problems({ HOST: '0.0.0.0' })).toEqual([
+      expect.stringMatching(/^SESSION_SECRET is required when HOST=0\.0\.0\.0/),
+    ]);
     expect(problems({ HOST: '192.0.2.10' })).toHaveLength(1);
     expect(problems({ HOST: '127.0.0.1' })).toEqual([]);
     expect(problems({ HOST: '::1' })).toEqual([]);

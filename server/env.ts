@@ -23,8 +23,14 @@ const envSchema = z
       .optional(),
     MAIL_FROM: z.string().default('Gridleak <no-reply@gridleak.local>'),
     /** The hosted payment service (Stripe); both unset means the local payment fake. */
-    STRIPE_SECRET_KEY: z.string().regex(/^(sk|rk)_(test|live)_\w+$/, 'must be a secret key such as sk_test_…').optional(),
-    STRIPE_WEBHOOK_SECRET: z.string().regex(/^whsec_\w+$/, 'must be an endpoint signing secret such as whsec_…').optional(),
+    STRIPE_SECRET_KEY: z
+      .string()
+      .regex(/^(sk|rk)_(test|live)_\w+$/, 'must be a secret key such as sk_test_…')
+      .optional(),
+    STRIPE_WEBHOOK_SECRET: z
+      .string()
+      .regex(/^whsec_\w+$/, 'must be an endpoint signing secret such as whsec_…')
+      .optional(),
     SESSION_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
     TRUST_PROXY: z.string().optional(),
     DEMO: z.enum(['true', 'false']).optional(),
@@ -39,10 +45,17 @@ const envSchema = z
     if (env.NODE_ENV === 'production' && !env.SESSION_SECRET)
       ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'is required when NODE_ENV=production' });
     else if (env.HOST && !isLoopbackHost(env.HOST) && !env.SESSION_SECRET)
-      ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: `is required when HOST=${env.HOST} lets other machines connect` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['SESSION_SECRET'],
+        message: `is required when HOST=${env.HOST} lets other machines connect`,
+      });
     if (!env.STRIPE_SECRET_KEY !== !env.STRIPE_WEBHOOK_SECRET)
-      ctx.addIssue({ code: 'custom', path: [env.STRIPE_SECRET_KEY ? 'STRIPE_WEBHOOK_SECRET' : 'STRIPE_SECRET_KEY'],
-        message: `is required when ${env.STRIPE_SECRET_KEY ? 'STRIPE_SECRET_KEY' : 'STRIPE_WEBHOOK_SECRET'} is set` });
+      ctx.addIssue({
+        code: 'custom',
+        path: [env.STRIPE_SECRET_KEY ? 'STRIPE_WEBHOOK_SECRET' : 'STRIPE_SECRET_KEY'],
+        message: `is required when ${env.STRIPE_SECRET_KEY ? 'STRIPE_SECRET_KEY' : 'STRIPE_WEBHOOK_SECRET'} is set`,
+      });
     const s3 = ['S3_ENDPOINT', 'S3_BUCKET', 'S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY'] as const;
     const set = s3.filter((k) => env[k]);
     if (set.length > 0 && set.length < s3.length)

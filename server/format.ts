@@ -4,9 +4,18 @@
  */
 import { formatInstant, type FormatPlace } from '../shared/format';
 
-export { MINUS, formatDeviation, formatPercent, formatQuantity, formatTolerance, isoDate, signedPercent } from '../shared/format';
+export {
+  MINUS,
+  formatDeviation,
+  formatPercent,
+  formatQuantity,
+  formatTolerance,
+  isoDate,
+  signedPercent,
+} from '../shared/format';
 
 export const documentPlace: FormatPlace = { locale: 'en-GB', timeZone: 'UTC' };
 
 /** "2 December 2026" on the document's calendar. */
-export const documentDate = (instant: string | number | Date, place: FormatPlace = documentPlace) => formatInstant(instant, 'longDate', place);
+export const documentDate = (instant: string | number | Date, place: FormatPlace = documentPlace) =>
+  formatInstant(instant, 'longDate', place);

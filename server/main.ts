@@ -20,7 +20,16 @@ import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
 import { backfillPhoneVariants } from './features/photos/backfill-phone-variants';
 import { scheduleSweep } from './features/photos/schedule-sweep';
 import { sweepUploadTemp } from './features/photos/upload-temp';
-import { EnvError, isDemo, listenHost, parseEnv, publicOrigin, sessionSecret, startupWarnings, uploadLimits } from './env';
+import {
+  EnvError,
+  isDemo,
+  listenHost,
+  parseEnv,
+  publicOrigin,
+  sessionSecret,
+  startupWarnings,
+  uploadLimits,
+} from './env';
 import { defaultThrottle } from './features/auth/throttle';
 import { LocalServiceError } from './local-services/run-command';
 import { redactedError } from './http/redact-error';
@@ -69,15 +78,21 @@ async function main() {
   const server = http.createServer();
   const origin = publicOrigin(env, env.PORT);
   const deps: AppDeps = {
-      db: handle.db,
-      pool: handle.pool,
-      storage,
-      mailer,
-      logger,
-      payments,
-      config: { publicOrigin: origin, sessionSecret: sessionSecret(env), demo, devMail: env.NODE_ENV !== 'production', throttle: defaultThrottle,
-        uploads,
-        notificationWindowSeconds: env.NOTIFICATION_WINDOW_SECONDS },
+    db: handle.db,
+    pool: handle.pool,
+    storage,
+    mailer,
+    logger,
+    payments,
+    config: {
+      publicOrigin: origin,
+      sessionSecret: sessionSecret(env),
+      demo,
+      devMail: env.NODE_ENV !== 'production',
+      throttle: defaultThrottle,
+      uploads,
+      notificationWindowSeconds: env.NOTIFICATION_WINDOW_SECONDS,
+    },
   };
   const app = createApp(deps, { trustProxy: env.TRUST_PROXY, relaxedCsp: dev });
   scheduleNotificationMail(deps);
@@ -97,7 +112,8 @@ function printWelcome(origin: string, demo: boolean) {
   console.log(`\nGridleak is running at ${origin}${dev ? ' (development, hot reload)' : ''}`);
   if (demo) {
     console.log(`Demo accounts (password "${DEMO_PASSWORD}"):`);
-    for (const [role, p] of Object.entries(demoPeople)) console.log(`  ${role.padEnd(10)} ${p.name.padEnd(18)} ${p.email}`);
+    for (const [role, p] of Object.entries(demoPeople))
+      console.log(`  ${role.padEnd(10)} ${p.name.padEnd(18)} ${p.email}`);
   }
   console.log('Press Ctrl-C to stop everything.\n');
 }
@@ -122,7 +138,9 @@ main().catch(async (err: unknown) => {
     for (const line of err.problems) console.error(`  ${line}`);
   } else if (err instanceof LocalServiceError) console.error(`Gridleak cannot start: ${err.message}`);
   else if ((err as NodeJS.ErrnoException).code === 'EADDRINUSE')
-    console.error(`Gridleak cannot start: port ${(err as { port?: number }).port ?? ''} is already in use (set PORT to another).`);
+    console.error(
+      `Gridleak cannot start: port ${(err as { port?: number }).port ?? ''} is already in use (set PORT to another).`,
+    );
   else console.error('Gridleak cannot start:', err);
   await shutdown(1);
 });

@@ -5,12 +5,27 @@ import { compareComponentRefs, firstWithComponentRef } from './natural-order';
 // sub-part after its parent (common practice, no source).
 describe('component reference order', () => {
   it('when references are sorted, then numbers sort as numbers, not as text', () => {
-    expect(['C14', 'C2', 'C1', 'R23', 'R3', 'V3'].sort(compareComponentRefs)).toEqual(['C1', 'C2', 'C14', 'R3', 'R23', 'V3']);
+    expect(['C14', 'C2', 'C1', 'R23', 'R3', 'V3'].sort(compareComponentRefs)).toEqual([
+      'C1',
+      'C2',
+      'C14',
+      'R3',
+      'R23',
+      'V3',
+    ]);
   });
 
   it('when a reference has a lettered suffix, then it comes after the plain one and before the next number', () => {
     expect(['R2', 'R1B', 'R1A', 'R10', 'R1'].sort(compareComponentRefs)).toEqual(['R1', 'R1A', 'R1B', 'R2', 'R10']);
-    expect(['C15b', 'R2', 'C2', 'C15a', 'C10', 'c3', 'V1'].sort(compareComponentRefs)).toEqual(['C2', 'c3', 'C10', 'C15a', 'C15b', 'R2', 'V1']);
+    expect(['C15b', 'R2', 'C2', 'C15a', 'C10', 'c3', 'V1'].sort(compareComponentRefs)).toEqual([
+      'C2',
+      'c3',
+      'C10',
+      'C15a',
+      'C15b',
+      'R2',
+      'V1',
+    ]);
   });
 
   it('when a line has no reference, then it goes after every referenced line', () => {

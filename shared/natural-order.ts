@@ -16,14 +16,20 @@ export function compareComponentRefs(a: string, b: string): number {
 }
 
 /** The same reference however it was typed: "c27 " and "C27" are one part. */
-export const sameComponentRef = (a: string, b: string): boolean => a.trim() !== '' && a.trim().toUpperCase() === b.trim().toUpperCase();
+export const sameComponentRef = (a: string, b: string): boolean =>
+  a.trim() !== '' && a.trim().toUpperCase() === b.trim().toUpperCase();
 
 /**
  * The first row (lowest id: the one recorded first) that already carries `ref`, other than `exceptId` (the row
  * being edited). Used to point out a second finding or ledger line for the same part.
  */
-export function firstWithComponentRef<T extends { id: number; componentRef: string }>(rows: readonly T[], ref: string, exceptId?: number): T | undefined {
+export function firstWithComponentRef<T extends { id: number; componentRef: string }>(
+  rows: readonly T[],
+  ref: string,
+  exceptId?: number,
+): T | undefined {
   let first: T | undefined;
-  for (const row of rows) if (row.id !== exceptId && sameComponentRef(row.componentRef, ref) && (!first || row.id < first.id)) first = row;
+  for (const row of rows)
+    if (row.id !== exceptId && sameComponentRef(row.componentRef, ref) && (!first || row.id < first.id)) first = row;
   return first;
 }

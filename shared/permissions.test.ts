@@ -70,13 +70,13 @@ describe('can()', () => {
     expect(can('owner', 'photos.view', { ownerVisible: false })).toBe(false);
   });
 
-  it('when a mentor placed a finding, then they may change it; others\' they may not', () => {
+  it("when a mentor placed a finding, then they may change it; others' they may not", () => {
     expect(can('mentor', 'findings.edit', { isAuthor: true })).toBe(true);
     expect(can('mentor', 'findings.delete', { isAuthor: false })).toBe(false);
     expect(can('owner', 'findings.edit', { isAuthor: true })).toBe(false);
   });
 
-  it('when a comment is someone\'s own, then they may edit it; technicians may also delete others\'', () => {
+  it("when a comment is someone's own, then they may edit it; technicians may also delete others'", () => {
     expect(can('owner', 'comments.edit', { isAuthor: true })).toBe(true);
     expect(can('technician', 'comments.edit', { isAuthor: false })).toBe(false);
     expect(can('technician', 'comments.delete', { isAuthor: false })).toBe(true);

@@ -96,7 +96,8 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'comments.internal': (role) => role !== 'owner',
   'comments.edit': (_role, { isAuthor }) => isAuthor === true,
   'comments.delete': (role, { isAuthor }) => isAuthor === true || role === 'technician',
-  'measurements.view': (role, { ownerVisible }) => mayView(role, 'reading', { reading: { ownerVisible: ownerVisible ?? false } }),
+  'measurements.view': (role, { ownerVisible }) =>
+    mayView(role, 'reading', { reading: { ownerVisible: ownerVisible ?? false } }),
   'measurements.record': (role) => role === 'technician',
   // Owners see the ledger without costs, sources and notes; technicians keep it.
   'parts.view': () => true,
@@ -119,7 +120,8 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'bringup.record': (role) => role === 'technician',
   'bringup.signoff': (role) => role === 'technician',
   // Service sheet pages are workshop material: owners see a page only when it is shared with them.
-  'sheets.view': (role, { ownerVisible }) => mayView(role, 'sheetPage', { sheetPage: { ownerVisible: ownerVisible ?? false } }),
+  'sheets.view': (role, { ownerVisible }) =>
+    mayView(role, 'sheetPage', { sheetPage: { ownerVisible: ownerVisible ?? false } }),
   'sheets.upload': (role) => role === 'technician',
   'sheets.edit': (role) => role === 'technician',
   // Placing a reference (R23) on a diagram page or a chassis photo: the technician at the bench.
@@ -177,27 +179,74 @@ const sharedReferenceMark: Condition = { any: [sharedSheetPage, sharedPhoto] };
 const sharedMismatch: Condition = { field: 'mismatch.ownerVisible', is: true };
 const sharedReading: Condition = { field: 'reading.ownerVisible', is: true };
 /** Planned and ordered lines are the workshop's business; the owner sees what was fitted or kept. */
-const ownerPart: Condition = { any: [{ field: 'part.state', is: 'fitted' }, { field: 'part.action', is: 'kept-original' }] };
-const sinceShared = (entity: 'event' | 'change'): Condition => ({ field: `${entity}.createdAt`, after: 'finding.sharedAt' });
-const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({ all: [{ field: 'event.kind', is: kind }, ...conditions] });
+const ownerPart: Condition = {
+  any: [
+    { field: 'part.state', is: 'fitted' },
+    { field: 'part.action', is: 'kept-original' },
+  ],
+};
+const sinceShared = (entity: 'event' | 'change'): Condition => ({
+  field: `${entity}.createdAt`,
+  after: 'finding.sharedAt',
+});
+const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({
+  all: [{ field: 'event.kind', is: kind }, ...conditions],
+});
 
-export const visibilitySubjects = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'referenceMark', 'estimate',
-  'readingRequest', 'symptomCheck', 'payment', 'mismatchNote'] as const;
+export const visibilitySubjects = [
+  'photo',
+  'finding',
+  'comment',
+  'reading',
+  'part',
+  'event',
+  'change',
+  'notification',
+  'sheetPage',
+  'referenceMark',
+  'estimate',
+  'readingRequest',
+  'symptomCheck',
+  'payment',
+  'mismatchNote',
+] as const;
 export type VisibilitySubject = (typeof visibilitySubjects)[number];
 
 const all: Condition = { always: true };
 const everything: Record<VisibilitySubject, Condition> = {
-  photo: all, finding: all, comment: all, reading: all, part: all, event: all, change: all, notification: all, sheetPage: all, referenceMark: all, estimate: all,
-  readingRequest: all, symptomCheck: all, payment: all, mismatchNote: all,
+  photo: all,
+  finding: all,
+  comment: all,
+  reading: all,
+  part: all,
+  event: all,
+  change: all,
+  notification: all,
+  sheetPage: all,
+  referenceMark: all,
+  estimate: all,
+  readingRequest: all,
+  symptomCheck: all,
+  payment: all,
+  mismatchNote: all,
 };
 /** Mentors help with the work and see none of its money. */
 const noMoney: Condition = { never: true };
 /** History lines about money (estimates sent and answered, invoices issued and voided); they carry no amounts, but still. */
-const moneyEvent: Condition = { field: 'event.kind', in: ['estimate-sent', 'estimate-decided', 'invoice-issued', 'invoice-voided', 'payment-received', 'payment-refunded'] };
+const moneyEvent: Condition = {
+  field: 'event.kind',
+  in: ['estimate-sent', 'estimate-decided', 'invoice-issued', 'invoice-voided', 'payment-received', 'payment-refunded'],
+};
 
 export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
   technician: everything,
-  mentor: { ...everything, estimate: noMoney, payment: noMoney, event: { not: moneyEvent }, notification: { not: { field: 'notification.kind', is: 'payment' } } },
+  mentor: {
+    ...everything,
+    estimate: noMoney,
+    payment: noMoney,
+    event: { not: moneyEvent },
+    notification: { not: { field: 'notification.kind', is: 'payment' } },
+  },
   owner: {
     photo: sharedPhoto,
     finding: sharedFinding,
@@ -257,7 +306,17 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
     payment: all,
     notification: {
       any: [
-        { all: [sharedFinding, { any: [{ field: 'notification.commentId', is: null }, { field: 'comment.internal', is: false }] }] },
+        {
+          all: [
+            sharedFinding,
+            {
+              any: [
+                { field: 'notification.commentId', is: null },
+                { field: 'comment.internal', is: false },
+              ],
+            },
+          ],
+        },
         // Money received or refunded on their own set.
         { field: 'notification.kind', is: 'payment' },
       ],
@@ -266,7 +325,11 @@ export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
 };
 
 /** Fields of a finding's change record a role never reads (questions to the mentors and sharing are internal). */
-export const hiddenChangeFields: Record<Role, readonly string[]> = { technician: [], mentor: [], owner: ['questionOpen', 'ownerVisible'] };
+export const hiddenChangeFields: Record<Role, readonly string[]> = {
+  technician: [],
+  mentor: [],
+  owner: ['questionOpen', 'ownerVisible'],
+};
 
 /** The in-memory twin of the SQL condition: may this role see the row these facts describe? */
 export function mayView(role: Role | null | undefined, subject: VisibilitySubject, facts: VisibilityFacts): boolean {

@@ -5,7 +5,19 @@
  */
 
 /** The kinds of thing a rule may look at; each names a row (or a joined row) by what it is. */
-export const visibilityEntities = ['photo', 'finding', 'comment', 'reading', 'part', 'event', 'change', 'notification', 'sheetPage', 'estimate', 'mismatch'] as const;
+export const visibilityEntities = [
+  'photo',
+  'finding',
+  'comment',
+  'reading',
+  'part',
+  'event',
+  'change',
+  'notification',
+  'sheetPage',
+  'estimate',
+  'mismatch',
+] as const;
 export type VisibilityEntity = (typeof visibilityEntities)[number];
 
 /** `entity.field`, e.g. `photo.ownerVisible`; fields are the camelCase names of the row's columns. */

@@ -1,5 +1,5 @@
 /**
- * `npm test`: typecheck, lint, then unit, API and end-to-end tests against real services
+ * `npm test`: typecheck, lint, the Prettier check, then unit, API and end-to-end tests against real services
  * (a throwaway PostgreSQL cluster, s3rver, the SMTP capture, Debian's Chromium).
  * `npm run test:e2e` runs only the browser journeys.
  */
@@ -23,6 +23,7 @@ let ok = true;
 if (!only) {
   ok = step('typecheck', 'npx', ['tsc', '-b']) && ok;
   ok = step('lint', 'npx', ['eslint', '.', '--max-warnings=0']) && ok;
+  ok = step('format', 'npx', ['prettier', '--check', '.', '--log-level=warn']) && ok;
 }
 if (!only || only === 'e2e') ensureChromium();
 const cluster = await startTestCluster();
@@ -30,7 +31,10 @@ const stop = () => cluster.stop();
 process.once('SIGINT', () => (stop(), process.exit(130)));
 try {
   const projects = only ? ['--project', only] : ['--project', 'unit', '--project', 'api', '--project', 'e2e'];
-  ok = step('vitest', 'npx', ['vitest', 'run', ...projects, ...filters], { GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl }) && ok;
+  ok =
+    step('vitest', 'npx', ['vitest', 'run', ...projects, ...filters], {
+      GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl,
+    }) && ok;
 } finally {
   stop();
 }

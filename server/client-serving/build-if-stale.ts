@@ -1,7 +1,14 @@
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
 
-const INPUTS = ['src', 'shared', 'index.html', 'vite.config.ts', 'package-lock.json', 'server/client-serving/precompress.ts'];
+const INPUTS = [
+  'src',
+  'shared',
+  'index.html',
+  'vite.config.ts',
+  'package-lock.json',
+  'server/client-serving/precompress.ts',
+];
 
 function newestMtime(p: string): number {
   if (!existsSync(p)) return 0;

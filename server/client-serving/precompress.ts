@@ -19,9 +19,12 @@ export function precompressDirectory(dir: string): number {
     if (!COMPRESSIBLE.test(name)) continue;
     const bytes = readFileSync(file);
     if (bytes.length < MIN_BYTES) continue;
-    writeFileSync(`${file}.br`, brotliCompressSync(bytes, {
-      params: { [constants.BROTLI_PARAM_QUALITY]: 11, [constants.BROTLI_PARAM_SIZE_HINT]: bytes.length },
-    }));
+    writeFileSync(
+      `${file}.br`,
+      brotliCompressSync(bytes, {
+        params: { [constants.BROTLI_PARAM_QUALITY]: 11, [constants.BROTLI_PARAM_SIZE_HINT]: bytes.length },
+      }),
+    );
     writeFileSync(`${file}.gz`, gzipSync(bytes, { level: 9 }));
     written += 1;
   }

@@ -19,8 +19,14 @@ export function keyset(direction: 'asc' | 'desc', keys: Key[]) {
     orderBy: keys.map((k) => (direction === 'asc' ? asc(k.by) : desc(k.by))),
     after(cursor: (string | number)[] | undefined): SQL | undefined {
       if (!cursor) return undefined;
-      const left = sql.join(keys.map((k) => sql`${k.by}`), sql`, `);
-      const right = sql.join(keys.map((k, i) => value(k, cursor[i]!)), sql`, `);
+      const left = sql.join(
+        keys.map((k) => sql`${k.by}`),
+        sql`, `,
+      );
+      const right = sql.join(
+        keys.map((k, i) => value(k, cursor[i]!)),
+        sql`, `,
+      );
       return direction === 'asc' ? sql`(${left}) > (${right})` : sql`(${left}) < (${right})`;
     },
   };

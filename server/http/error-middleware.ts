@@ -5,7 +5,8 @@ import { redactedError } from './redact-error';
 /** Body-parser and multer style errors carry a status of their own. */
 function statusFromLibrary(err: unknown): HttpError | undefined {
   const e = err as { status?: number; type?: string; message?: string };
-  if (e?.type === 'entity.parse.failed') return new HttpError(400, 'bad_request', 'The request body is not valid JSON.');
+  if (e?.type === 'entity.parse.failed')
+    return new HttpError(400, 'bad_request', 'The request body is not valid JSON.');
   if (e?.type === 'entity.too.large') return new HttpError(413, 'too_large', 'The request body is too large.');
   if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500)
     return new HttpError(e.status, 'bad_request', e.message ?? 'Bad request.');
@@ -34,7 +35,9 @@ export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
   const known = err instanceof HttpError ? err : (statusFromLibrary(err) ?? pgConflict(err));
   if (!known) {
     req.log?.error({ err: redactedError(err) }, 'unhandled error');
-    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again in a moment.' } });
+    res
+      .status(500)
+      .json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again in a moment.' } });
     return;
   }
   const body: { code: string; message: string; details?: unknown } = { code: known.code, message: known.message };

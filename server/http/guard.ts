@@ -27,8 +27,10 @@ export interface Subject {
  */
 export type RestorationAndRole = { restorationId: number; role?: Role | undefined; subject?: Subject };
 /** Where the restoration id of a request comes from; by default the validated `:id` param. */
-export type RestorationOf = (req: Request, res: Response) =>
-  Promise<number | RestorationAndRole | undefined> | number | RestorationAndRole | undefined;
+export type RestorationOf = (
+  req: Request,
+  res: Response,
+) => Promise<number | RestorationAndRole | undefined> | number | RestorationAndRole | undefined;
 const fromIdParam: RestorationOf = (_req, res) => (res.locals.input as { params?: { id?: number } })?.params?.id;
 
 /**
@@ -41,10 +43,19 @@ export function guard(db: Database, action: Action, restorationOf: RestorationOf
     if (!req.user) throw new UnauthorizedError();
     const found = await restorationOf(req, res);
     const restorationId = typeof found === 'object' ? found.restorationId : found;
-    const role = typeof found === 'object' && 'role' in found ? found.role : restorationId ? await membershipRole(db, req.user.id, restorationId) : undefined;
+    const role =
+      typeof found === 'object' && 'role' in found
+        ? found.role
+        : restorationId
+          ? await membershipRole(db, req.user.id, restorationId)
+          : undefined;
     if (!restorationId || !role) throw new NotFoundError();
     const subject = typeof found === 'object' ? found.subject : undefined;
-    if (subject && !(typeof subject.view === 'function' ? await subject.view(role) : can(role, subject.view, subject.context))) throw new NotFoundError();
+    if (
+      subject &&
+      !(typeof subject.view === 'function' ? await subject.view(role) : can(role, subject.view, subject.context))
+    )
+      throw new NotFoundError();
     if (!can(role, action, subject?.context)) throw new ForbiddenError(subject?.denied);
     res.locals.role = role;
     res.locals.restorationId = restorationId;

@@ -12,7 +12,8 @@ export function decodeCursor(cursor: string | undefined, kinds: ('string' | 'num
   if (cursor === undefined) return undefined;
   try {
     const values: unknown = JSON.parse(Buffer.from(cursor, 'base64url').toString());
-    if (Array.isArray(values) && values.length === kinds.length && values.every((v, i) => typeof v === kinds[i])) return values as Cursor;
+    if (Array.isArray(values) && values.length === kinds.length && values.every((v, i) => typeof v === kinds[i]))
+      return values as Cursor;
   } catch {
     // fall through
   }
@@ -23,7 +24,14 @@ export function decodeCursor(cursor: string | undefined, kinds: ('string' | 'num
  * Cuts `limit + 1` rows read in order to one page and sends it: the body is the plain array (the shape the
  * route always had), and the next page's cursor goes in `X-Next-Cursor` and a `Link` header.
  */
-export function sendPage<R, T>(req: Request, res: Response, rows: R[], limit: number, cursorOf: (row: R) => Cursor, toItem: (rows: R[]) => T[] | Promise<T[]>) {
+export function sendPage<R, T>(
+  req: Request,
+  res: Response,
+  rows: R[],
+  limit: number,
+  cursorOf: (row: R) => Cursor,
+  toItem: (rows: R[]) => T[] | Promise<T[]>,
+) {
   const more = rows.length > limit;
   const page = more ? rows.slice(0, limit) : rows;
   if (more) {

@@ -7,9 +7,16 @@ const hash = '$argon2id$v=19$m=19456,t=2,p=1$c2FsdHNhbHQ$aGFzaGhhc2hoYXNo';
 
 function failedInsert() {
   const cause = Object.assign(new Error('null value in column "name" violates not-null constraint'), {
-    code: '23502', table: 'users', column: 'name', detail: `Failing row contains (7, null, a@example.test, ${hash}).`,
+    code: '23502',
+    table: 'users',
+    column: 'name',
+    detail: `Failing row contains (7, null, a@example.test, ${hash}).`,
   });
-  return new DrizzleQueryError('insert into "users" ("name", "email", "password_hash") values ($1, $2, $3)', [null, 'a@example.test', hash], cause);
+  return new DrizzleQueryError(
+    'insert into "users" ("name", "email", "password_hash") values ($1, $2, $3)',
+    [null, 'a@example.test', hash],
+    cause,
+  );
 }
 
 describe('error logging', () => {

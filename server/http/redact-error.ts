@@ -10,13 +10,30 @@ export function redactedError(err: unknown, depth = 0): unknown {
   const text = (v: unknown) => (typeof v === 'string' ? withoutParams(v) : undefined);
   const out: Record<string, unknown> = {
     // A second pass (pino-http's standard serializer, then this) keeps the first pass's name.
-    type: err instanceof Error ? err.constructor.name : typeof e.name === 'string' ? e.name : typeof e.type === 'string' ? e.type : 'Error',
+    type:
+      err instanceof Error
+        ? err.constructor.name
+        : typeof e.name === 'string'
+          ? e.name
+          : typeof e.type === 'string'
+            ? e.type
+            : 'Error',
     message: text(e.message),
     stack: text(e.stack),
   };
   out.name = out.type;
   // Identifiers and the SQL text (with $1 placeholders) are safe; values are not.
-  for (const key of ['code', 'status', 'severity', 'constraint', 'table', 'column', 'schema', 'routine', 'query'] as const)
+  for (const key of [
+    'code',
+    'status',
+    'severity',
+    'constraint',
+    'table',
+    'column',
+    'schema',
+    'routine',
+    'query',
+  ] as const)
     if (typeof e[key] === 'string' || typeof e[key] === 'number') out[key] = e[key];
   if (Array.isArray(e.params)) out.params = `[${e.params.length} redacted]`;
   if (e.cause !== undefined) out.cause = redactedError(e.cause, depth + 1);

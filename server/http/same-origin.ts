@@ -11,6 +11,10 @@ export function requireSameOrigin(publicOrigin: string): RequestHandler {
   return (req, _res, next) => {
     if (SAFE.has(req.method) || !req.headers.cookie) return next();
     if (req.headers.origin === publicOrigin) return next();
-    throw new HttpError(403, 'bad_origin', `Writes must come from ${publicOrigin}; send an Origin header with that value.`);
+    throw new HttpError(
+      403,
+      'bad_origin',
+      `Writes must come from ${publicOrigin}; send an Origin header with that value.`,
+    );
   };
 }

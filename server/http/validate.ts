@@ -22,7 +22,8 @@ export function validate<S extends Schemas>(schemas: S): RequestHandler {
     const problems: { location: string; path: string; message: string }[] = [];
     for (const location of ['params', 'query', 'body'] as const) {
       const nul = findNul(req[location]);
-      if (nul !== undefined) problems.push({ location, path: nul, message: 'contains a NUL character, which is never valid text' });
+      if (nul !== undefined)
+        problems.push({ location, path: nul, message: 'contains a NUL character, which is never valid text' });
       const schema = schemas[location];
       if (!schema || nul !== undefined) continue;
       const result = schema.safeParse(req[location] ?? {});

@@ -45,5 +45,8 @@ export async function startMailCapture(db: Database, port: number): Promise<Mail
 
 function addresses(field: AddressObject | AddressObject[] | undefined): string {
   const list = Array.isArray(field) ? field : field ? [field] : [];
-  return list.flatMap((a) => a.value.map((v) => v.address ?? '')).filter(Boolean).join(', ');
+  return list
+    .flatMap((a) => a.value.map((v) => v.address ?? ''))
+    .filter(Boolean)
+    .join(', ');
 }

@@ -19,7 +19,9 @@ export const isRoot = () => process.getuid?.() === 0;
 export function ensureDebianPackage(pkg: string, present: () => boolean, why: string): void {
   if (present()) return;
   if (!isRoot())
-    throw new LocalServiceError(`${why} needs the Debian package ${pkg}: run "sudo apt-get install -y ${pkg}" and try again.`);
+    throw new LocalServiceError(
+      `${why} needs the Debian package ${pkg}: run "sudo apt-get install -y ${pkg}" and try again.`,
+    );
   console.log(`Installing ${pkg} (${why})…`);
   run('apt-get', ['update'], { stdio: 'ignore' });
   run('apt-get', ['install', '-y', '--no-install-recommends', pkg], {

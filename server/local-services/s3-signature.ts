@@ -17,7 +17,8 @@ const ALGORITHM = 'AWS4-HMAC-SHA256';
 const sha256 = (text: string) => createHash('sha256').update(text).digest('hex');
 const hmac = (key: Buffer | string, text: string) => createHmac('sha256', key).update(text).digest();
 /** RFC 3986 unreserved characters stay; everything else is percent-encoded (AWS's UriEncode). */
-const uriEncode = (text: string) => encodeURIComponent(text).replace(/[!'()*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`);
+const uriEncode = (text: string) =>
+  encodeURIComponent(text).replace(/[!'()*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`);
 const header = (req: SignedRequest, name: string) => {
   const value = req.headers[name];
   return (Array.isArray(value) ? value.join(',') : (value ?? '')).trim().replace(/\s+/g, ' ');
@@ -40,22 +41,44 @@ function parse(req: SignedRequest): Parsed | undefined {
   const q = new Map(query);
   const auth = header(req, 'authorization');
   if (auth.startsWith(`${ALGORITHM} `)) {
-    const fields = Object.fromEntries(auth.slice(ALGORITHM.length + 1).split(/,\s*/).map((f) => f.split('=') as [string, string]));
+    const fields = Object.fromEntries(
+      auth
+        .slice(ALGORITHM.length + 1)
+        .split(/,\s*/)
+        .map((f) => f.split('=') as [string, string]),
+    );
     const [keyId, ...scope] = (fields.Credential ?? '').split('/');
     if (!keyId || scope.length !== 4 || !fields.SignedHeaders || !fields.Signature) return undefined;
-    return { keyId, scope: scope.join('/'), date: scope[0]!, amzDate: header(req, 'x-amz-date'), signedHeaders: fields.SignedHeaders.split(';'),
-      signature: fields.Signature, payloadHash: header(req, 'x-amz-content-sha256') || 'UNSIGNED-PAYLOAD', query };
+    return {
+      keyId,
+      scope: scope.join('/'),
+      date: scope[0]!,
+      amzDate: header(req, 'x-amz-date'),
+      signedHeaders: fields.SignedHeaders.split(';'),
+      signature: fields.Signature,
+      payloadHash: header(req, 'x-amz-content-sha256') || 'UNSIGNED-PAYLOAD',
+      query,
+    };
   }
   if (q.get('X-Amz-Algorithm') === ALGORITHM) {
     const [keyId, ...scope] = (q.get('X-Amz-Credential') ?? '').split('/');
     if (!keyId || scope.length !== 4) return undefined;
-    return { keyId, scope: scope.join('/'), date: scope[0]!, amzDate: q.get('X-Amz-Date') ?? '', signedHeaders: (q.get('X-Amz-SignedHeaders') ?? 'host').split(';'),
-      signature: q.get('X-Amz-Signature') ?? '', payloadHash: 'UNSIGNED-PAYLOAD', query: query.filter(([k]) => k !== 'X-Amz-Signature') };
+    return {
+      keyId,
+      scope: scope.join('/'),
+      date: scope[0]!,
+      amzDate: q.get('X-Amz-Date') ?? '',
+      signedHeaders: (q.get('X-Amz-SignedHeaders') ?? 'host').split(';'),
+      signature: q.get('X-Amz-Signature') ?? '',
+      payloadHash: 'UNSIGNED-PAYLOAD',
+      query: query.filter(([k]) => k !== 'X-Amz-Signature'),
+    };
   }
   return undefined;
 }
 
-export const isPresigned = (req: SignedRequest) => !header(req, 'authorization') && new URLSearchParams(req.url.split('?')[1] ?? '').has('X-Amz-Signature');
+export const isPresigned = (req: SignedRequest) =>
+  !header(req, 'authorization') && new URLSearchParams(req.url.split('?')[1] ?? '').has('X-Amz-Signature');
 
 /** True when the request is signed with this key pair and the signature matches. */
 export function verifySignature(req: SignedRequest, keyId: string, secret: string): boolean {

@@ -31,7 +31,12 @@ describe('the local S3 stand-in', () => {
     const anonymous = await fetch(`${s3.endpoint}/gate-bucket?list-type=2`);
     expect(anonymous.status).toBe(403);
     expect(await anonymous.text()).not.toContain('original');
-    const withDefaults = createStorage({ ...s3, accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER', region: 'us-east-1' });
+    const withDefaults = createStorage({
+      ...s3,
+      accessKeyId: 'S3RVER',
+      secretAccessKey: 'S3RVER',
+      region: 'us-east-1',
+    });
     await expect(withDefaults.getObject('photos/1/abc/original')).rejects.toThrow();
     const listed: string[] = [];
     await expect(
@@ -50,7 +55,9 @@ describe('the local S3 stand-in', () => {
     const read = await fetch(url);
     expect(read.status).toBe(200);
     expect(await read.text()).toBe('an original with GPS');
-    const download = await fetch(await storage.getSignedUrl('photos/1/abc/original', { downloadName: 'photo 7 (bench).jpg' }));
+    const download = await fetch(
+      await storage.getSignedUrl('photos/1/abc/original', { downloadName: 'photo 7 (bench).jpg' }),
+    );
     expect(download.status).toBe(200);
     expect(download.headers.get('content-disposition')).toMatch(/attachment/);
     await download.body?.cancel();
@@ -97,7 +104,13 @@ describe('storage calls', () => {
     const silent = net.createServer(() => {}); // holds every socket open, says nothing
     await new Promise<void>((r) => silent.listen(0, '127.0.0.1', r));
     const port = (silent.address() as net.AddressInfo).port;
-    const hung = createStorage({ endpoint: `http://127.0.0.1:${port}`, bucket: 'b', region: 'us-east-1', accessKeyId: 'k', secretAccessKey: 's' });
+    const hung = createStorage({
+      endpoint: `http://127.0.0.1:${port}`,
+      bucket: 'b',
+      region: 'us-east-1',
+      accessKeyId: 'k',
+      secretAccessKey: 's',
+    });
     const before = STORAGE_TIMEOUT_MS.request;
     STORAGE_TIMEOUT_MS.request = 300;
     try {
@@ -114,10 +127,18 @@ describe('storage calls', () => {
     const silent = net.createServer(() => {});
     await new Promise<void>((r) => silent.listen(0, '127.0.0.1', r));
     const port = (silent.address() as net.AddressInfo).port;
-    const hung = createStorage({ endpoint: `http://127.0.0.1:${port}`, bucket: 'b', region: 'us-east-1', accessKeyId: 'k', secretAccessKey: 's' });
+    const hung = createStorage({
+      endpoint: `http://127.0.0.1:${port}`,
+      bucket: 'b',
+      region: 'us-east-1',
+      accessKeyId: 'k',
+      secretAccessKey: 's',
+    });
     try {
       const start = Date.now();
-      await expect(hung.putObject('x', Buffer.from('abc'), 'text/plain', 3, { signal: AbortSignal.timeout(200) })).rejects.toThrow();
+      await expect(
+        hung.putObject('x', Buffer.from('abc'), 'text/plain', 3, { signal: AbortSignal.timeout(200) }),
+      ).rejects.toThrow();
       expect(Date.now() - start).toBeLessThan(5_000);
     } finally {
       silent.close();

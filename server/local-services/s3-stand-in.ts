@@ -27,16 +27,26 @@ export async function startS3StandIn(directory: string, port: number, bucket = '
   const account = new AWSAccount(Number.parseInt(randomBytes(5).toString('hex'), 16), 'Gridleak');
   account.createKeyPair(accessKeyId, secretAccessKey);
 
-  const server = new S3rver({ address: '127.0.0.1', port, silent: true, directory, configureBuckets: [{ name: bucket }] });
+  const server = new S3rver({
+    address: '127.0.0.1',
+    port,
+    silent: true,
+    directory,
+    configureBuckets: [{ name: bucket }],
+  });
   server.middleware.unshift(async (ctx, next) => {
     const request = { method: ctx.method, url: ctx.url, headers: ctx.headers };
-    const readsOneObject = (ctx.method === 'GET' || ctx.method === 'HEAD') && ctx.path.split('/').filter(Boolean).length >= 2;
+    const readsOneObject =
+      (ctx.method === 'GET' || ctx.method === 'HEAD') && ctx.path.split('/').filter(Boolean).length >= 2;
     // s3rver checks only the key id of a version-4 signature, and presigned URLs show the key id to browsers.
-    const allowed = ctx.method === 'OPTIONS' || (verifySignature(request, accessKeyId, secretAccessKey) && (!isPresigned(request) || readsOneObject));
+    const allowed =
+      ctx.method === 'OPTIONS' ||
+      (verifySignature(request, accessKeyId, secretAccessKey) && (!isPresigned(request) || readsOneObject));
     if (!allowed) {
       ctx.status = 403;
       ctx.type = 'application/xml';
-      ctx.body = '<?xml version="1.0" encoding="UTF-8"?>\n<Error><Code>AccessDenied</Code><Message>Access Denied</Message></Error>';
+      ctx.body =
+        '<?xml version="1.0" encoding="UTF-8"?>\n<Error><Code>AccessDenied</Code><Message>Access Denied</Message></Error>';
       return;
     }
     await next();

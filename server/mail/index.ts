@@ -18,7 +18,12 @@ export interface Mailer {
 export function createMailer(smtpUrl: string, from: string): Mailer {
   // Bounded waits: invitation and sign-up mail is sent inside the action's transaction (sendOrRollBack below),
   // so a silent mail server must not hold it open for nodemailer's default two minutes.
-  const transport = nodemailer.createTransport({ url: smtpUrl, connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 30_000 });
+  const transport = nodemailer.createTransport({
+    url: smtpUrl,
+    connectionTimeout: 10_000,
+    greetingTimeout: 10_000,
+    socketTimeout: 30_000,
+  });
   return {
     async send(mail) {
       await transport.sendMail({ from, ...mail });

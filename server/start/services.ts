@@ -34,8 +34,13 @@ export async function resolveDatabase(env: Env, root: string, stops: Stop[]): Pr
 
 export async function resolveStorage(env: Env, root: string, stops: Stop[]): Promise<StorageConfig> {
   if (env.S3_ENDPOINT && env.S3_BUCKET && env.S3_ACCESS_KEY_ID && env.S3_SECRET_ACCESS_KEY)
-    return { endpoint: env.S3_ENDPOINT, bucket: env.S3_BUCKET, region: env.S3_REGION,
-      accessKeyId: env.S3_ACCESS_KEY_ID, secretAccessKey: env.S3_SECRET_ACCESS_KEY };
+    return {
+      endpoint: env.S3_ENDPOINT,
+      bucket: env.S3_BUCKET,
+      region: env.S3_REGION,
+      accessKeyId: env.S3_ACCESS_KEY_ID,
+      secretAccessKey: env.S3_SECRET_ACCESS_KEY,
+    };
   const dir = env.GRIDLEAK_DATA_DIR ? path.join(env.GRIDLEAK_DATA_DIR, 'objects') : path.join(root, 'uploads-dev');
   const s3 = await startS3StandIn(dir, localPorts(env).s3, env.S3_BUCKET ?? 'gridleak');
   stops.push({ name: 'local S3', stop: s3.close });
@@ -58,7 +63,8 @@ export function dataRoot(env: Env, root: string): string {
  * loopback, which posts its events to `webhookUrl` (this app's /api/payments/webhook).
  */
 export async function resolvePayments(env: Env, stops: Stop[]): Promise<PaymentServiceConfig> {
-  if (env.STRIPE_SECRET_KEY && env.STRIPE_WEBHOOK_SECRET) return { secretKey: env.STRIPE_SECRET_KEY, webhookSecret: env.STRIPE_WEBHOOK_SECRET };
+  if (env.STRIPE_SECRET_KEY && env.STRIPE_WEBHOOK_SECRET)
+    return { secretKey: env.STRIPE_SECRET_KEY, webhookSecret: env.STRIPE_WEBHOOK_SECRET };
   const fake = await startPaymentFake({ port: localPorts(env).payments, webhookUrl: localWebhookUrl(env) });
   stops.push({ name: 'local payment service', stop: fake.close });
   return { secretKey: fake.secretKey, webhookSecret: fake.webhookSecret, api: fake.api };

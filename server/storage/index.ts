@@ -28,7 +28,13 @@ export interface CallOptions {
  * has a time limit (a hung storage service must not hold requests and memory for ever) and takes a signal.
  */
 export interface Storage {
-  putObject(key: string, body: Buffer | Readable, contentType: string, contentLength?: number, options?: CallOptions): Promise<void>;
+  putObject(
+    key: string,
+    body: Buffer | Readable,
+    contentType: string,
+    contentLength?: number,
+    options?: CallOptions,
+  ): Promise<void>;
   /** A short-lived GET URL; `downloadName` makes the browser save it under that name. */
   getSignedUrl(key: string, options?: { expiresInSeconds?: number; downloadName?: string }): Promise<string>;
   getObject(key: string, options?: CallOptions): Promise<Buffer>;
@@ -61,11 +67,16 @@ export function createStorage(config: StorageConfig): Storage {
     requestHandler: { connectionTimeout: 5_000, requestTimeout: 60_000 },
   });
   const small = (options?: CallOptions) => ({ abortSignal: callSignal(STORAGE_TIMEOUT_MS.request, options?.signal) });
-  const transfer = (options?: CallOptions) => ({ abortSignal: callSignal(STORAGE_TIMEOUT_MS.transfer, options?.signal) });
+  const transfer = (options?: CallOptions) => ({
+    abortSignal: callSignal(STORAGE_TIMEOUT_MS.transfer, options?.signal),
+  });
   const Bucket = config.bucket;
   return {
     async putObject(key, body, contentType, contentLength, options) {
-      await client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: contentLength }), transfer(options));
+      await client.send(
+        new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: contentLength }),
+        transfer(options),
+      );
     },
     // Signed from the start of the current two-minute slot, so repeated lists hand out the same URL
     // and browsers reuse the images they already have; each URL still expires within minutes.
@@ -75,7 +86,9 @@ export function createStorage(config: StorageConfig): Storage {
         new GetObjectCommand({
           Bucket,
           Key: key,
-          ResponseContentDisposition: downloadName ? `attachment; filename="${downloadName.replace(/[^\w.-]/g, '_')}"` : undefined,
+          ResponseContentDisposition: downloadName
+            ? `attachment; filename="${downloadName.replace(/[^\w.-]/g, '_')}"`
+            : undefined,
         }),
         { expiresIn: expiresInSeconds, signingDate: new Date(Math.floor(Date.now() / SLOT_MS) * SLOT_MS) },
       ),
@@ -99,8 +112,12 @@ export function createStorage(config: StorageConfig): Storage {
     async *listObjects(prefix) {
       let ContinuationToken: string | undefined;
       do {
-        const page = await client.send(new ListObjectsV2Command({ Bucket, Prefix: prefix, ContinuationToken }), small());
-        for (const o of page.Contents ?? []) if (o.Key) yield { key: o.Key, lastModified: o.LastModified ?? new Date(0) };
+        const page = await client.send(
+          new ListObjectsV2Command({ Bucket, Prefix: prefix, ContinuationToken }),
+          small(),
+        );
+        for (const o of page.Contents ?? [])
+          if (o.Key) yield { key: o.Key, lastModified: o.LastModified ?? new Date(0) };
         ContinuationToken = page.IsTruncated ? page.NextContinuationToken : undefined;
       } while (ContinuationToken);
     },

@@ -24,11 +24,16 @@ describe('cathodeBias', () => {
 
   it('gives an ECL86 pentode about 7 V on 170 Ω', () => {
     // from memory: ECL86 Ia 36 mA, Ig2 6 mA, Rk 170 Ω; mathjs for (Ia+Ig2)·Rk
-    expectRelative(cathodeBias({ cathodeOhms: 170, anodeAmps: 36e-3, screenAmps: 6e-3 }).biasVolts, math.evaluate('42e-3 * 170') as number);
+    expectRelative(
+      cathodeBias({ cathodeOhms: 170, anodeAmps: 36e-3, screenAmps: 6e-3 }).biasVolts,
+      math.evaluate('42e-3 * 170') as number,
+    );
   });
 
   it('refuses a negative anode current', () => {
-    expect(() => cathodeBias({ cathodeOhms: 135, anodeAmps: -0.048 })).toThrow(/anode current \(A\) must be zero or a positive number/); // Gridleak's own message (not a computation)
+    expect(() => cathodeBias({ cathodeOhms: 135, anodeAmps: -0.048 })).toThrow(
+      /anode current \(A\) must be zero or a positive number/,
+    ); // Gridleak's own message (not a computation)
   });
 });
 

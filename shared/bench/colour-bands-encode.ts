@@ -15,7 +15,8 @@ function colourWith(key: keyof ColourMeaning, value: number, what: string): stri
  * tolerance band, or three bands for ±20 %. Only values with two significant digits fit; anything else is refused.
  */
 export function resistorBands(ohms: number, tolerance: BandTolerance = 0.05): string[] {
-  if (typeof ohms !== 'number' || !Number.isFinite(ohms) || ohms <= 0) throw new BenchInputError(`Not a resistance: ${String(ohms)}.`);
+  if (typeof ohms !== 'number' || !Number.isFinite(ohms) || ohms <= 0)
+    throw new BenchInputError(`Not a resistance: ${String(ohms)}.`);
   const exponent = Math.floor(Math.log10(ohms) + 1e-9) - 1;
   const significand = Math.round(scaleByPowerOfTen(ohms, -exponent));
   if (Math.abs(scaleByPowerOfTen(significand, exponent) - ohms) > ohms * 1e-9 || significand < 10 || significand > 99)

@@ -63,11 +63,15 @@ describe('colourBands accepts spelling variants', () => {
 
 describe('colourBands refuses colours that mean nothing in their position', () => {
   it('refuses gold as a first digit and suggests reading from the other end', () => {
-    expect(() => colourBands(['gold', 'red', 'violet', 'yellow'])).toThrow(/Band 1 is gold.*read the resistor from the other end/); // IEC 60062: gold has no digit
+    expect(() => colourBands(['gold', 'red', 'violet', 'yellow'])).toThrow(
+      /Band 1 is gold.*read the resistor from the other end/,
+    ); // IEC 60062: gold has no digit
   });
 
   it('refuses white as a tolerance band', () => {
-    expect(() => colourBands(['red', 'red', 'red', 'white'])).toThrow(/Band 4 is white, which has no meaning as a tolerance band/); // IEC 60062: white has no tolerance
+    expect(() => colourBands(['red', 'red', 'red', 'white'])).toThrow(
+      /Band 4 is white, which has no meaning as a tolerance band/,
+    ); // IEC 60062: white has no tolerance
   });
 
   it('refuses a colour that is not in the code', () => {
@@ -104,7 +108,8 @@ describe('resistor colour bands', () => {
 
   it('when bands are written for a value, then the decoder reads the same value back', () => {
     // Round trip through the one IEC 60062 table: encoder and decoder cannot disagree.
-    for (const ohms of [4.7, 10, 150, 2.2e3, 47e3, 470e3, 1e6]) expect(colourBands(resistorBands(ohms)).ohms).toBeCloseTo(ohms, 9);
+    for (const ohms of [4.7, 10, 150, 2.2e3, 47e3, 470e3, 1e6])
+      expect(colourBands(resistorBands(ohms)).ohms).toBeCloseTo(ohms, 9);
     expect(colourBands(resistorBands(470e3, 0.1)).tolerance).toBe(0.1);
   });
 

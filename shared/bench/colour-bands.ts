@@ -59,9 +59,10 @@ function meaningOf(colour: unknown, band: number): [string, ColourMeaning] {
 }
 
 function refuse(name: string, band: number, role: Role): never {
-  const hint = band === 1 && (name === 'gold' || name === 'silver')
-    ? ' Gold or silver at one end is the tolerance band: read the resistor from the other end.'
-    : '';
+  const hint =
+    band === 1 && (name === 'gold' || name === 'silver')
+      ? ' Gold or silver at one end is the tolerance band: read the resistor from the other end.'
+      : '';
   throw new BenchInputError(`Band ${band} is ${name}, which has no meaning as a ${role} band.${hint}`);
 }
 

@@ -16,11 +16,21 @@ const judge = (value: number, rating?: number): RatingCheck => {
   if (rating === undefined) return { value, verdict: 'unknown' };
   const fraction = value / rating;
   // Forgive float noise at exactly the rating (250 V × 48 mA is 12.000000000000002 W).
-  return { value, rating, fraction, verdict: fraction <= 1 + 1e-9 ? 'within' : fraction <= 1.1 + 1e-9 ? 'marginal' : 'out' };
+  return {
+    value,
+    rating,
+    fraction,
+    verdict: fraction <= 1 + 1e-9 ? 'within' : fraction <= 1.1 + 1e-9 ? 'marginal' : 'out',
+  };
 };
 
 /** A resistor's dissipation in watts from two of volts across it, current through it and its resistance: V²/R, I²R or V·I. */
-export function resistorDissipation(input: { ohms?: number; volts?: number; amps?: number; ratingWatts?: number }): RatingCheck {
+export function resistorDissipation(input: {
+  ohms?: number;
+  volts?: number;
+  amps?: number;
+  ratingWatts?: number;
+}): RatingCheck {
   const { ohms, volts, amps, ratingWatts } = input;
   let watts: number;
   if (volts !== undefined && ohms !== undefined) watts = (volts * volts) / requirePositive(ohms, 'resistance (Ω)');
@@ -31,7 +41,12 @@ export function resistorDissipation(input: { ohms?: number; volts?: number; amps
 }
 
 /** Anode dissipation Pa = Va·Ia (watts) against the valve's maximum where Gridleak's table has it (or as given). */
-export function anodeDissipation(input: { anodeVolts: number; anodeAmps: number; valve?: string; maxWatts?: number }): RatingCheck & { source?: string } {
+export function anodeDissipation(input: {
+  anodeVolts: number;
+  anodeAmps: number;
+  valve?: string;
+  maxWatts?: number;
+}): RatingCheck & { source?: string } {
   requireNonNegative(input.anodeVolts, 'anode voltage (V)');
   requireNonNegative(input.anodeAmps, 'anode current (A)');
   const data = input.valve ? valveType(input.valve).data : undefined;
@@ -41,7 +56,11 @@ export function anodeDissipation(input: { anodeVolts: number; anodeAmps: number;
 }
 
 /** A rectifier's DC load current (amperes) against its maximum where Gridleak's table has it (or as given). */
-export function rectifierLoad(input: { dcAmps: number; valve?: string; maxAmps?: number }): RatingCheck & { source?: string } {
+export function rectifierLoad(input: {
+  dcAmps: number;
+  valve?: string;
+  maxAmps?: number;
+}): RatingCheck & { source?: string } {
   requireNonNegative(input.dcAmps, 'DC load current (A)');
   const data = input.valve ? valveType(input.valve).data : undefined;
   const max = input.maxAmps ?? data?.typical?.maxDcAmps;

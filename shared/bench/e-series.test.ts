@@ -3,7 +3,10 @@ import { describe, expect, it } from 'vitest';
 import { preferredValue, seriesValues } from './index';
 
 // Lists per IEC 60063 (the E-series encyclopedia article, an amateur-radio club's reproduction of the lists and the EN 60063 abstract agree).
-const IEC_E24 = [1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1];
+const IEC_E24 = [
+  1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2,
+  9.1,
+];
 const IEC_E12 = [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2];
 
 /** Rounds 10^(k/n) to three significant figures with mathjs (IEC 60063 construction for E48 and up). */
@@ -37,7 +40,9 @@ describe('seriesValues returns the literal IEC 60063 tables', () => {
 
   it('starts E48 with the published three-figure values', () => {
     // IEC 60063 via an amateur-radio club's reproduction of the lists
-    expect(seriesValues('E48').slice(0, 12)).toEqual([1.0, 1.05, 1.1, 1.15, 1.21, 1.27, 1.33, 1.4, 1.47, 1.54, 1.62, 1.69]);
+    expect(seriesValues('E48').slice(0, 12)).toEqual([
+      1.0, 1.05, 1.1, 1.15, 1.21, 1.27, 1.33, 1.4, 1.47, 1.54, 1.62, 1.69,
+    ]);
     expect(seriesValues('E48')).toHaveLength(48); // IEC 60063: 48 values a decade
   });
 
@@ -59,7 +64,9 @@ describe('seriesValues returns the literal IEC 60063 tables', () => {
 
   it('refuses an unknown series by listing the known ones', () => {
     // @ts-expect-error: a wrong series name arriving from untyped input
-    expect(() => seriesValues('E7')).toThrow(/'E7' is not a preferred-value series; use one of E3, E6, E12, E24, E48, E96/); // IEC 60063 series names
+    expect(() => seriesValues('E7')).toThrow(
+      /'E7' is not a preferred-value series; use one of E3, E6, E12, E24, E48, E96/,
+    ); // IEC 60063 series names
   });
 });
 

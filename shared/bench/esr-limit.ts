@@ -83,8 +83,11 @@ export function esrLimitDetail(farads: number, ratedVolts: number): EsrLimitDeta
     ohms = logLog(volts, v0, left.ohms, v1, right.ohms);
     extrapolated ||= left.extrapolated;
   }
-  const notes = ['A guide, not a pass mark: be wary of a reading above double this; high-temperature types may read higher and still be good.'];
-  if (ratedVolts > highest) notes.push(`Table A stops at ${highest} V; the ${highest} V column is used for this ${ratedVolts} V part.`);
+  const notes = [
+    'A guide, not a pass mark: be wary of a reading above double this; high-temperature types may read higher and still be good.',
+  ];
+  if (ratedVolts > highest)
+    notes.push(`Table A stops at ${highest} V; the ${highest} V column is used for this ${ratedVolts} V part.`);
   if (extrapolated && ratedVolts <= highest) notes.push('Outside the table; the nearest edge value is used.');
   return { ohms, table: TABLE_NAME, testHertz: 100e3, extrapolated, note: notes.join(' ') };
 }

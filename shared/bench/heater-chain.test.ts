@@ -37,7 +37,11 @@ describe('heaterChain', () => {
 
   it('when a 50 mA dial lamp sits in a 100 mA string, then its shunt carries the other 50 mA', () => {
     // by hand: R = 6.3 V / (0.1 − 0.05) A = 126 Ω; the lamp's 6.3 V joins the heater total
-    const chain = heaterChain({ valves: ['UCH42', 'UAF42', 'UBC41', 'UL41', 'UY41'], mainsVolts: 220, dialLamp: { volts: 6.3, amps: 0.05 } });
+    const chain = heaterChain({
+      valves: ['UCH42', 'UAF42', 'UBC41', 'UL41', 'UY41'],
+      mainsVolts: 220,
+      dialLamp: { volts: 6.3, amps: 0.05 },
+    });
     expectRelative(chain.lampShuntOhms!, 126);
     expectRelative(chain.volts, 122.9);
   });

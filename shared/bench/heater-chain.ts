@@ -53,7 +53,8 @@ export function heaterOf(name: string): ChainValve | undefined {
  */
 export function heaterChain({ valves, mainsVolts, dialLamp }: HeaterChainInput): HeaterChain {
   requirePositive(mainsVolts, 'mains voltage (V)');
-  if (!Array.isArray(valves) || valves.length === 0) throw new BenchInputError('Give the valves in the heater string, for example UCH42 UAF42 UBC41 UL41 UY41.');
+  if (!Array.isArray(valves) || valves.length === 0)
+    throw new BenchInputError('Give the valves in the heater string, for example UCH42 UAF42 UBC41 UL41 UY41.');
   const read: ChainValve[] = [];
   const unknown: string[] = [];
   for (const name of valves) {
@@ -76,7 +77,13 @@ export function heaterChain({ valves, mainsVolts, dialLamp }: HeaterChainInput):
   volts = Number(volts.toFixed(6));
   const spare = Math.max(0, mainsVolts - volts);
   return {
-    volts, amps, dropperOhms: amps > 0 ? spare / amps : 0, dropperWatts: spare * amps, mixedCurrents: counts.size > 1,
-    ...(lampShuntOhms === undefined ? {} : { lampShuntOhms }), valves: read, unknown,
+    volts,
+    amps,
+    dropperOhms: amps > 0 ? spare / amps : 0,
+    dropperWatts: spare * amps,
+    mixedCurrents: counts.size > 1,
+    ...(lampShuntOhms === undefined ? {} : { lampShuntOhms }),
+    valves: read,
+    unknown,
   };
 }

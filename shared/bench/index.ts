@@ -52,7 +52,14 @@ export type { KindTexts } from './reading-kind-rules';
 export { partWarnings, readRating } from './part-rules';
 export type { MainsPosition, PartWarning } from './part-rules';
 export {
-  capacitorCurrent, earthContinuityLimit, equipmentClassLabels, equipmentClasses,
-  flexSizes, insulationMinimum, leadResistance, safetyTest, touchCurrentLimit,
+  capacitorCurrent,
+  earthContinuityLimit,
+  equipmentClassLabels,
+  equipmentClasses,
+  flexSizes,
+  insulationMinimum,
+  leadResistance,
+  safetyTest,
+  touchCurrentLimit,
 } from './safety-test';
 export type { EquipmentClass, LineVerdict, SafetyLine, SafetyTestInput, SafetyTestResult } from './safety-test';

@@ -54,7 +54,10 @@ export function liveChassisLikely(items: readonly string[]): LiveChassisAssessme
     const letter = HEATER_LETTERS[text];
     if (text.length === 1 && letter !== undefined) {
       // A bare heater letter: the person says which heater scheme the set's valves follow.
-      if (letter.supply === 'series') reasons.push(`${text}: heater letter ${text} is a series-string heater${letter.amps ? ` (${mA(letter.amps)})` : ''}`);
+      if (letter.supply === 'series')
+        reasons.push(
+          `${text}: heater letter ${text} is a series-string heater${letter.amps ? ` (${mA(letter.amps)})` : ''}`,
+        );
       continue;
     }
     const heater = heaterOf(text);
@@ -63,21 +66,30 @@ export function liveChassisLikely(items: readonly string[]): LiveChassisAssessme
       // Decodes, but its heater current is not in the table: an American number of 18 V or more still says series;
       // a European series letter alone says so too, with a request to check.
       const volts = americanVolts(text);
-      if (volts !== undefined && volts >= SERIES_ONLY_VOLTS) reasons.push(`${text}: ${volts} V heater, made for series strings`);
-      else if (seriesScheme(text)) reasons.push(`${text}: heater letter ${text.charAt(0)} reads as a series-string heater, but the type is not in Gridleak’s table: check its data`);
+      if (volts !== undefined && volts >= SERIES_ONLY_VOLTS)
+        reasons.push(`${text}: ${volts} V heater, made for series strings`);
+      else if (seriesScheme(text))
+        reasons.push(
+          `${text}: heater letter ${text.charAt(0)} reads as a series-string heater, but the type is not in Gridleak’s table: check its data`,
+        );
       continue;
     }
     known.push(heater);
-    if (heater.volts >= SERIES_ONLY_VOLTS) reasons.push(`${heater.name}: ${heater.volts} V heater at ${mA(heater.amps)}, made for series strings`);
-    else if (seriesScheme(text)) reasons.push(`${heater.name}: ${mA(heater.amps)} series-string heater (${heater.volts} V)`);
+    if (heater.volts >= SERIES_ONLY_VOLTS)
+      reasons.push(`${heater.name}: ${heater.volts} V heater at ${mA(heater.amps)}, made for series strings`);
+    else if (seriesScheme(text))
+      reasons.push(`${heater.name}: ${mA(heater.amps)} series-string heater (${heater.volts} V)`);
   }
   const byCurrent = new Map<number, ChainValve[]>();
-  for (const v of known) if (SERIES_CURRENTS.includes(v.amps)) byCurrent.set(v.amps, [...(byCurrent.get(v.amps) ?? []), v]);
+  for (const v of known)
+    if (SERIES_CURRENTS.includes(v.amps)) byCurrent.set(v.amps, [...(byCurrent.get(v.amps) ?? []), v]);
   for (const [amps, chain] of byCurrent) {
     const total = Number(chain.reduce((sum, v) => sum + v.volts, 0).toFixed(3));
     const seriesEvidence = chain.some((v) => v.volts >= SERIES_ONLY_VOLTS || seriesScheme(v.name));
     if (chain.length > 1 && seriesEvidence && total >= HALF_LOW_MAINS)
-      reasons.push(`${chain.length} valves at ${mA(amps)} add up to ${total} V of heaters: a series string across the mains`);
+      reasons.push(
+        `${chain.length} valves at ${mA(amps)} add up to ${total} V of heaters: a series string across the mains`,
+      );
   }
   return { likely: reasons.length > 0, reasons, unknown };
 }

@@ -18,7 +18,9 @@ describe('tapScaled', () => {
   });
 
   it('refuses a zero tap', () => {
-    expect(() => tapScaled({ ratedVolts: 200, tapVolts: 0, mainsVolts: 240 })).toThrow(/tap voltage \(V\) must be a number above zero/); // Gridleak's own message (not a computation)
+    expect(() => tapScaled({ ratedVolts: 200, tapVolts: 0, mainsVolts: 240 })).toThrow(
+      /tap voltage \(V\) must be a number above zero/,
+    ); // Gridleak's own message (not a computation)
   });
 });
 
@@ -30,8 +32,14 @@ describe('seriesLampLimit', () => {
   });
 
   it('lets at most P/V through when the set is a dead short', () => {
-    expectRelative(seriesLampLimit({ lampWatts: 100, lampVolts: 120, mainsVolts: 120 }), math.evaluate('100/120') as number); // mathjs
-    expectRelative(seriesLampLimit({ lampWatts: 60, lampVolts: 230, mainsVolts: 230 }), math.evaluate('60/230') as number); // mathjs
+    expectRelative(
+      seriesLampLimit({ lampWatts: 100, lampVolts: 120, mainsVolts: 120 }),
+      math.evaluate('100/120') as number,
+    ); // mathjs
+    expectRelative(
+      seriesLampLimit({ lampWatts: 60, lampVolts: 230, mainsVolts: 230 }),
+      math.evaluate('60/230') as number,
+    ); // mathjs
   });
 
   it('warns when the lamp is rated for lower mains', () => {

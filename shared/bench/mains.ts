@@ -4,7 +4,15 @@ import { requirePositive } from './bench-input-error';
  * Secondary voltage in volts of an ideal transformer winding rated `ratedVolts` (V) on the
  * `tapVolts` (V) primary tap when fed `mainsVolts` (V). Ignores regulation, so real sets read a little different.
  */
-export function tapScaled({ ratedVolts, tapVolts, mainsVolts }: { ratedVolts: number; tapVolts: number; mainsVolts: number }): number {
+export function tapScaled({
+  ratedVolts,
+  tapVolts,
+  mainsVolts,
+}: {
+  ratedVolts: number;
+  tapVolts: number;
+  mainsVolts: number;
+}): number {
   requirePositive(ratedVolts, 'rated winding voltage (V)');
   requirePositive(tapVolts, 'tap voltage (V)');
   requirePositive(mainsVolts, 'mains voltage (V)');
@@ -39,9 +47,13 @@ export function seriesLampLimitDetail({ lampWatts, lampVolts, mainsVolts }: Seri
   requirePositive(lampVolts, 'lamp voltage (V)');
   requirePositive(mainsVolts, 'mains voltage (V)');
   const hotOhms = (lampVolts * lampVolts) / lampWatts;
-  const notes = ['Uses the lamp\u2019s hot resistance; a lamp below full brightness is cooler and passes a little more per volt.'];
+  const notes = [
+    'Uses the lamp\u2019s hot resistance; a lamp below full brightness is cooler and passes a little more per volt.',
+  ];
   if (mainsVolts > lampVolts * 1.1) {
-    notes.push(`The mains (${mainsVolts} V) is well above the lamp rating (${lampVolts} V): the lamp is overrun and may fail.`);
+    notes.push(
+      `The mains (${mainsVolts} V) is well above the lamp rating (${lampVolts} V): the lamp is overrun and may fail.`,
+    );
   }
   return { maxAmps: mainsVolts / hotOhms, hotOhms, coldOhms: hotOhms * COLD_TO_HOT, note: notes.join(' ') };
 }

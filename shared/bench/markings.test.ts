@@ -1,6 +1,14 @@
 import * as math from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { capacitorCode, isOverRange, parseQuantity, parseReading, parseTolerance, partWarnings, readRating } from './index';
+import {
+  capacitorCode,
+  isOverRange,
+  parseQuantity,
+  parseReading,
+  parseTolerance,
+  partWarnings,
+  readRating,
+} from './index';
 import { expectRelative } from './bench-test-support';
 
 // Markings as they are printed on parts and in old parts lists. Each check names its source.
@@ -112,12 +120,16 @@ describe('readRating and partWarnings read ratings as written', () => {
   it('when 0.1 mfd 400 VDC is replaced by 0.1 µF 250 V, then the voltage rule fires', () => {
     // common practice, no source: never lower a capacitor's voltage rating when replacing it
     expect(readRating('0.1 mfd 400 VDC')).toEqual({ farads: 1e-7, volts: 400 });
-    expect(partWarnings({ original: '0.1 mfd 400 VDC', replacement: '0.1 µF 250 V' })[0]).toMatchObject({ level: 'danger' });
+    expect(partWarnings({ original: '0.1 mfd 400 VDC', replacement: '0.1 µF 250 V' })[0]).toMatchObject({
+      level: 'danger',
+    });
   });
 
   it('when 0.01 µF 1 kV is replaced by a 630 V part, then the voltage rule fires', () => {
     expect(readRating('0.01 µF 1 kV').volts).toBe(1000); // SI prefix kilo
-    expect(partWarnings({ original: '0.01 µF 1 kV', replacement: '630 V' })[0]!.message).toMatch(/630 V, below the original's 1000 V/); // common practice, no source
+    expect(partWarnings({ original: '0.01 µF 1 kV', replacement: '630 V' })[0]!.message).toMatch(
+      /630 V, below the original's 1000 V/,
+    ); // common practice, no source
   });
 
   it('when ratings say 8 MF 350 WV or 250 VAC, then the values and the AC marking are read', () => {

@@ -18,7 +18,9 @@ describe('measurementVerdict against a maximum', () => {
 
   it('when the same part reads 1.3 Ω, then it is marginal; at 1.7 Ω it is out', () => {
     // Table A's accompanying advice: "be wary of a capacitor with an ESR reading more than double"
-    expect(measurementVerdict({ quantity: 'esr', expected: '47µ', rating: '450', reading: '1.3' }).verdict).toBe('marginal');
+    expect(measurementVerdict({ quantity: 'esr', expected: '47µ', rating: '450', reading: '1.3' }).verdict).toBe(
+      'marginal',
+    );
     expect(measurementVerdict({ quantity: 'esr', expected: '47µ', rating: '450', reading: '1.7' }).verdict).toBe('out');
   });
 
@@ -43,8 +45,15 @@ describe('measurementVerdict against a maximum', () => {
 
   it('when the tolerance says max, then an earth-continuity reading is judged against that maximum', () => {
     // from memory: in-service inspection code of practice, earth continuity at most 0.1 Ω plus the lead
-    expect(measurementVerdict({ quantity: 'resistance', expected: '0.1', tolerance: 'max', reading: '0.08' })).toMatchObject({ verdict: 'within', limit: 'maximum' });
-    expect(measurementVerdict({ quantity: 'resistance', expected: '0.1', tolerance: 'max', reading: '0.3' }).verdict).toBe('out');
+    expect(
+      measurementVerdict({ quantity: 'resistance', expected: '0.1', tolerance: 'max', reading: '0.08' }),
+    ).toMatchObject({
+      verdict: 'within',
+      limit: 'maximum',
+    });
+    expect(
+      measurementVerdict({ quantity: 'resistance', expected: '0.1', tolerance: 'max', reading: '0.3' }).verdict,
+    ).toBe('out');
   });
 });
 
@@ -66,7 +75,10 @@ describe('measurementVerdict against a minimum', () => {
 
   it('when the tester shows OL or "> 200 M", then it is over range and passes', () => {
     // common practice, no source: an insulation tester over range means more than its top range
-    expect(measurementVerdict({ quantity: 'insulation', reading: 'OL' })).toMatchObject({ verdict: 'within', overRange: true });
+    expect(measurementVerdict({ quantity: 'insulation', reading: 'OL' })).toMatchObject({
+      verdict: 'within',
+      overRange: true,
+    });
     const v = measurementVerdict({ quantity: 'insulation', expected: '2M', reading: '> 200 M' });
     expect(v).toMatchObject({ verdict: 'within', overRange: true, reading: 200e6 });
     expect(v.summary).toBe('over range (above 200 MΩ), above the 2 MΩ minimum');
@@ -83,21 +95,32 @@ describe('measurementVerdict against a nominal value', () => {
   });
 
   it('when the same electrolytic reads 36 µF, then −23.4 % is marginal', () => {
-    expectRelative(measurementVerdict({ quantity: 'capacitance', expected: '47u', reading: '36u' }).deviation!, 36 / 47 - 1); // by hand
+    expectRelative(
+      measurementVerdict({ quantity: 'capacitance', expected: '47u', reading: '36u' }).deviation!,
+      36 / 47 - 1,
+    ); // by hand
     expect(measurementVerdict({ quantity: 'capacitance', expected: '47u', reading: '36u' }).verdict).toBe('marginal'); // IEC 60062 S, Gridleak's 1.5 × band
   });
 
   it('when a letter tolerance is typed, then it is read: 112 nF for 100 nF K is marginal', () => {
-    expect(measurementVerdict({ quantity: 'capacitance', expected: '100n', tolerance: 'K', reading: '112n' }).verdict).toBe('marginal'); // IEC 60062 K = ±10 %
+    expect(
+      measurementVerdict({ quantity: 'capacitance', expected: '100n', tolerance: 'K', reading: '112n' }).verdict,
+    ).toBe('marginal'); // IEC 60062 K = ±10 %
   });
 
   it('when the part says its tolerance after the value, then that band is used instead of the default', () => {
     // IEC 60062: K = ±10 %, so 112 nF for "100n K" is marginal; J = ±5 %, so 2.35 kΩ for "2k2 J" (+6.8 %, by hand) is marginal
-    expect(measurementVerdict({ quantity: 'capacitance', expected: '100n K', reading: '112n' }).verdict).toBe('marginal');
-    expect(measurementVerdict({ quantity: 'resistance', expected: '2k2 J', reading: '2.35k' }).verdict).toBe('marginal');
+    expect(measurementVerdict({ quantity: 'capacitance', expected: '100n K', reading: '112n' }).verdict).toBe(
+      'marginal',
+    );
+    expect(measurementVerdict({ quantity: 'resistance', expected: '2k2 J', reading: '2.35k' }).verdict).toBe(
+      'marginal',
+    );
     expect(measurementVerdict({ quantity: 'resistance', expected: '2k2 ±2 %', reading: '2.35k' }).verdict).toBe('out'); // IEC 60062 G band written in per cent
     // IEC 60062 letter Z band written out, −20/+80 %: 80 µF for "47µ -20/+80" is within (+70 %, by hand)
-    expect(measurementVerdict({ quantity: 'capacitance', expected: '47µ -20/+80', reading: '80u' }).verdict).toBe('within');
+    expect(measurementVerdict({ quantity: 'capacitance', expected: '47µ -20/+80', reading: '80u' }).verdict).toBe(
+      'within',
+    );
   });
 
   it('when an IF reads 75 kHz off its 470 kHz, then it is out, although only 16 %', () => {
@@ -128,24 +151,39 @@ describe('measurementVerdict against a nominal value', () => {
   });
 
   it('when nothing is expected, then the verdict is unknown with a reason', () => {
-    expect(measurementVerdict({ quantity: 'current', reading: '62 mA' })).toMatchObject({ verdict: 'unknown', reason: 'No expected value to compare with.' });
+    expect(measurementVerdict({ quantity: 'current', reading: '62 mA' })).toMatchObject({
+      verdict: 'unknown',
+      reason: 'No expected value to compare with.',
+    });
   });
 });
 
 describe('measurementVerdict refuses what cannot be', () => {
   it('when a resistance or ESR is negative, then it is refused with the likely cause', () => {
-    expect(() => measurementVerdict({ quantity: 'esr', expected: '47u', rating: '450', reading: '-0.2' })).toThrow(/an ESR cannot be negative .* leads/); // Gridleak's own message
-    expect(() => measurementVerdict({ quantity: 'resistance', expected: '4k7', reading: '\u22124k7' })).toThrow(/a resistance cannot be negative/);
+    expect(() => measurementVerdict({ quantity: 'esr', expected: '47u', rating: '450', reading: '-0.2' })).toThrow(
+      /an ESR cannot be negative .* leads/,
+    ); // Gridleak's own message
+    expect(() => measurementVerdict({ quantity: 'resistance', expected: '4k7', reading: '\u22124k7' })).toThrow(
+      /a resistance cannot be negative/,
+    );
   });
 
   it('when a bare OL has nothing to be judged against, then it asks for the range’s top', () => {
     expect(() => measurementVerdict({ quantity: 'resistance', reading: 'OL' })).toThrow(/^Reading: 'OL' is over range/); // Gridleak's own message
-    expect(measurementVerdict({ quantity: 'resistance', reading: '> 20 M' })).toMatchObject({ verdict: 'unknown', overRange: true, reading: 20e6 });
+    expect(measurementVerdict({ quantity: 'resistance', reading: '> 20 M' })).toMatchObject({
+      verdict: 'unknown',
+      overRange: true,
+      reading: 20e6,
+    });
   });
 
   it('when values are unparseable or in the wrong unit, then the error says which field', () => {
-    expect(() => measurementVerdict({ quantity: 'resistance', expected: 'four k', reading: '4k7' })).toThrow(/^Expected value:/); // Gridleak's own message
-    expect(() => measurementVerdict({ quantity: 'resistance', expected: '4k7', reading: '250 V' })).toThrow(/^Reading:/);
+    expect(() => measurementVerdict({ quantity: 'resistance', expected: 'four k', reading: '4k7' })).toThrow(
+      /^Expected value:/,
+    ); // Gridleak's own message
+    expect(() => measurementVerdict({ quantity: 'resistance', expected: '4k7', reading: '250 V' })).toThrow(
+      /^Reading:/,
+    );
   });
 });
 

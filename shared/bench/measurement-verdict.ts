@@ -69,67 +69,135 @@ const readMeter = (text: string, unit: Exclude<QuantityUnit, ''>) => {
   }
 };
 
-type Judged = Omit<MeasurementVerdict, 'summary' | 'expected' | 'rating' | 'limit' | 'overRange' | 'reading'> & { reading?: number; absolute?: boolean };
-type Context = { reading: number | null; overRange: boolean; expected: number | null; rating: number | null; show: (v: number, u?: QuantityUnit) => string };
+type Judged = Omit<MeasurementVerdict, 'summary' | 'expected' | 'rating' | 'limit' | 'overRange' | 'reading'> & {
+  reading?: number;
+  absolute?: boolean;
+};
+type Context = {
+  reading: number | null;
+  overRange: boolean;
+  expected: number | null;
+  rating: number | null;
+  show: (v: number, u?: QuantityUnit) => string;
+};
 type Rule<T extends ReadingKind['rule']['type']> = Extract<ReadingKind['rule'], { type: T }>;
 
 function againstCapacitorLimit(rule: Rule<'capacitor-limit'>, c: Context): Judged {
   if (c.expected === null || c.rating === null)
-    return { verdict: 'unknown', deviation: null, reference: null, reason: 'Give the capacitor’s nominal capacitance and rated voltage to judge this reading.' };
+    return {
+      verdict: 'unknown',
+      deviation: null,
+      reference: null,
+      reason: 'Give the capacitor’s nominal capacitance and rated voltage to judge this reading.',
+    };
   const { value: max, source } = rule.limit(c.expected, c.rating);
   const part = `${c.show(c.expected, 'F')} ${c.show(c.rating, 'V')}`;
   if (c.overRange)
-    return { verdict: 'out', deviation: null, reference: max, reading: c.reading ?? max, reason: `Over range against an expected maximum of ${c.show(max)} for ${part} (${source}): out; an open or dried-out part reads so.` };
+    return {
+      verdict: 'out',
+      deviation: null,
+      reference: max,
+      reading: c.reading ?? max,
+      reason: `Over range against an expected maximum of ${c.show(max)} for ${part} (${source}): out; an open or dried-out part reads so.`,
+    };
   const reading = c.reading ?? 0;
   // Up to twice the limit is "look again" rather than "condemn" (the ESR table's own advice; common practice for leakage).
   const verdict = reading <= max ? 'within' : reading <= 2 * max ? 'marginal' : 'out';
-  return { verdict, deviation: (reading - max) / max, reference: max, reason: `Reads ${c.show(reading)} against an expected maximum of ${c.show(max)} for ${part} (${source}): ${verdict}.` };
+  return {
+    verdict,
+    deviation: (reading - max) / max,
+    reference: max,
+    reason: `Reads ${c.show(reading)} against an expected maximum of ${c.show(max)} for ${part} (${source}): ${verdict}.`,
+  };
 }
 
 function againstMinimum(min: number, source: string, c: Context): Judged {
   const reading = c.reading ?? min;
   const passes = c.overRange || reading >= min;
-  const what = c.overRange ? (c.reading === null ? 'Over range' : `Over range (above ${c.show(reading)})`) : `Reads ${c.show(reading)}`;
-  return { verdict: passes ? 'within' : 'out', deviation: c.overRange ? null : (reading - min) / min, reference: min, reading,
-    reason: `${what}, ${passes ? 'above' : 'below'} the ${c.show(min)} minimum${source}: ${passes ? 'passes' : 'fails'}.` };
+  const what = c.overRange
+    ? c.reading === null
+      ? 'Over range'
+      : `Over range (above ${c.show(reading)})`
+    : `Reads ${c.show(reading)}`;
+  return {
+    verdict: passes ? 'within' : 'out',
+    deviation: c.overRange ? null : (reading - min) / min,
+    reference: min,
+    reading,
+    reason: `${what}, ${passes ? 'above' : 'below'} the ${c.show(min)} minimum${source}: ${passes ? 'passes' : 'fails'}.`,
+  };
 }
 
 function againstMaximum(max: number, source: string, c: Context): Judged {
-  if (c.overRange) return { verdict: 'out', deviation: null, reference: max, reading: c.reading ?? max, reason: `Over range, above the ${c.show(max)} maximum${source}: fails.` };
+  if (c.overRange)
+    return {
+      verdict: 'out',
+      deviation: null,
+      reference: max,
+      reading: c.reading ?? max,
+      reason: `Over range, above the ${c.show(max)} maximum${source}: fails.`,
+    };
   const reading = c.reading ?? 0;
   const passes = reading <= max;
-  return { verdict: passes ? 'within' : 'out', deviation: (reading - max) / max, reference: max,
-    reason: `Reads ${c.show(reading)}, ${passes ? 'within' : 'above'} the ${c.show(max)} maximum${source}: ${passes ? 'passes' : 'fails'}.` };
+  return {
+    verdict: passes ? 'within' : 'out',
+    deviation: (reading - max) / max,
+    reference: max,
+    reason: `Reads ${c.show(reading)}, ${passes ? 'within' : 'above'} the ${c.show(max)} maximum${source}: ${passes ? 'passes' : 'fails'}.`,
+  };
 }
 
 function againstBand(rule: Rule<'band'>, input: MeasurementInput, c: Context, expected: number): Judged {
   if (c.overRange)
-    return { verdict: 'out', deviation: null, reference: expected, reading: c.reading ?? expected, reason: `Over range against ${c.show(expected)}: out; an open circuit or a value far above the expected one reads so.` };
+    return {
+      verdict: 'out',
+      deviation: null,
+      reference: expected,
+      reading: c.reading ?? expected,
+      reason: `Over range against ${c.show(expected)}: out; an open circuit or a value far above the expected one reads so.`,
+    };
   const typed = input.tolerance?.trim() ?? '';
   const reading = c.reading ?? 0;
   const usual = typed === '' ? rule.usual(expected) : undefined;
   if (absoluteTolerance(input.quantity, typed)) {
-    const tol = usual && 'amount' in usual ? usual.amount : read(typed.replace(/^±\s*/, ''), readingKinds[input.quantity].unit, 'Tolerance');
+    const tol =
+      usual && 'amount' in usual
+        ? usual.amount
+        : read(typed.replace(/^±\s*/, ''), readingKinds[input.quantity].unit, 'Tolerance');
     const diff = reading - expected;
     const verdict = Math.abs(diff) <= tol ? 'within' : Math.abs(diff) <= 1.5 * tol ? 'marginal' : 'out';
     const off = `${signOf(diff, '+')}${c.show(Math.abs(diff))}`;
-    return { verdict, deviation: diff / expected, reference: expected, absolute: true,
-      reason: `Reads ${c.show(reading)} against ${c.show(expected)} ±${c.show(tol)}${usual ? ` (${usual.words})` : ''}: ${off}, ${verdict}.` };
+    return {
+      verdict,
+      deviation: diff / expected,
+      reference: expected,
+      absolute: true,
+      reason: `Reads ${c.show(reading)} against ${c.show(expected)} ±${c.show(tol)}${usual ? ` (${usual.words})` : ''}: ${off}, ${verdict}.`,
+    };
   }
   const tolerance: Tolerance = usual && 'tolerance' in usual ? usual.tolerance : parseTolerance(typed);
   // A bias typed positive (cathode to chassis) against a data sheet's negative grid bias: compare the sizes, and say so.
   const flipped = Math.sign(reading) * Math.sign(expected) === -1;
-  const { verdict, deviation } = readingVerdict({ expected: Math.abs(expected), reading: Math.abs(reading), tolerance });
+  const { verdict, deviation } = readingVerdict({
+    expected: Math.abs(expected),
+    reading: Math.abs(reading),
+    tolerance,
+  });
   const band = formatTolerance(tolerance, 4);
-  const judged: Judged = { verdict, deviation, reference: expected,
-    reason: `Reads ${c.show(reading)} against ${c.show(expected)} ${band}${usual ? ` (${usual.words})` : ''}: ${signedPercent(deviation)}${flipped ? ' in size' : ''}, ${verdict}.` };
+  const judged: Judged = {
+    verdict,
+    deviation,
+    reference: expected,
+    reason: `Reads ${c.show(reading)} against ${c.show(expected)} ${band}${usual ? ` (${usual.words})` : ''}: ${signedPercent(deviation)}${flipped ? ' in size' : ''}, ${verdict}.`,
+  };
   if (flipped)
     judged.hint = `The reading and the expected value have opposite signs. A data sheet writes grid bias as the grid relative to the cathode (negative); a meter from cathode to chassis reads the same bias as positive. Compared by size; check which way the meter was connected.`;
   return judged;
 }
 
 // A tolerance printed after a part's value, as the part says it: "100n K", "47µ -20/+50", "2k2 ±5 %".
-const MARKED_TOLERANCE = /^(.*\S)\s+(±?\s*\d+(?:\.\d+)?\s*%|[-\u2212]\s*\d+\s*%?\s*\/\s*\+\s*\d+\s*%?|\+\s*\d+\s*%?\s*\/\s*[-\u2212]\s*\d+\s*%?|[BCDFGJKMNSZP])$/;
+const MARKED_TOLERANCE =
+  /^(.*\S)\s+(±?\s*\d+(?:\.\d+)?\s*%|[-\u2212]\s*\d+\s*%?\s*\/\s*\+\s*\d+\s*%?|\+\s*\d+\s*%?\s*\/\s*[-\u2212]\s*\d+\s*%?|[BCDFGJKMNSZP])$/;
 
 /** Splits a part's marked tolerance off its value ("100n K" → "100n", "K") for kinds whose parts carry one. */
 function markedTolerance(input: MeasurementInput): MeasurementInput {
@@ -146,7 +214,14 @@ function judgeByRule(input: MeasurementInput, c: Context, limit: LimitKind): { j
   if (rule.type === 'capacitor-limit') return { judged: againstCapacitorLimit(rule, c) };
   const given = c.expected ?? (rule.type === 'band' ? undefined : rule.default?.value);
   if (given === undefined)
-    return { judged: { verdict: 'unknown', deviation: null, reference: null, reason: c.overRange ? 'Over range; no expected value to compare with.' : 'No expected value to compare with.' } };
+    return {
+      judged: {
+        verdict: 'unknown',
+        deviation: null,
+        reference: null,
+        reason: c.overRange ? 'Over range; no expected value to compare with.' : 'No expected value to compare with.',
+      },
+    };
   const source = c.expected === null && rule.type !== 'band' && rule.default ? ` (${rule.default.source})` : '';
   if (limit === 'minimum') return { judged: againstMinimum(given, source, c) };
   if (limit === 'maximum') return { judged: againstMaximum(given, source, c) };
@@ -165,18 +240,48 @@ export function measurementVerdict(typed: MeasurementInput): MeasurementVerdict 
   const kind = readingKinds[input.quantity];
   const unit = kind.unit;
   const meter = readMeter(input.reading, unit);
-  const expected = input.expected?.trim() ? read(input.expected, kind.rule.type === 'capacitor-limit' ? 'F' : unit, 'Expected value') : null;
+  const expected = input.expected?.trim()
+    ? read(input.expected, kind.rule.type === 'capacitor-limit' ? 'F' : unit, 'Expected value')
+    : null;
   const rating = input.rating?.trim() ? read(input.rating, 'V', 'Rating') : null;
   if (kind.sign.reading === 'not-negative' && meter.value !== null && meter.value < 0)
-    throw new BenchInputError(`Reading: ${kind.noun} cannot be negative (${input.reading.trim()} typed). A meter shows a minus when its leads are reversed or not zeroed, or the part still holds a charge.`);
+    throw new BenchInputError(
+      `Reading: ${kind.noun} cannot be negative (${input.reading.trim()} typed). A meter shows a minus when its leads are reversed or not zeroed, or the part still holds a charge.`,
+    );
   if (expected !== null && expected <= 0 && kind.sign.expected === 'above-zero')
     throw new BenchInputError('Expected value: must be above zero.');
-  const c: Context = { reading: meter.value, overRange: meter.overRange, expected, rating, show: (v, u = unit) => formatQuantity(v, u) };
+  const c: Context = {
+    reading: meter.value,
+    overRange: meter.overRange,
+    expected,
+    rating,
+    show: (v, u = unit) => formatQuantity(v, u),
+  };
   const limit = limitOf(input.quantity, input.tolerance);
   const { judged, meterWords } = judgeByRule(input, c, limit);
   const { absolute, reading: judgedReading, ...rest } = judged;
   const reading = judgedReading ?? meter.value;
-  if (reading === null) throw new BenchInputError("Reading: 'OL' is over range; give what it is judged against, or the range's top (\"> 20 M\"), so it can be recorded.");
-  const summary = describeDeviation({ limit, reading: meter.value, reference: rest.reference, deviation: rest.deviation, unit, overRange: meter.overRange, absolute: absolute ?? false });
-  return { ...rest, reading, expected, rating, limit, overRange: meter.overRange, summary, ...(meterWords ? { meterWords } : {}) };
+  if (reading === null)
+    throw new BenchInputError(
+      "Reading: 'OL' is over range; give what it is judged against, or the range's top (\"> 20 M\"), so it can be recorded.",
+    );
+  const summary = describeDeviation({
+    limit,
+    reading: meter.value,
+    reference: rest.reference,
+    deviation: rest.deviation,
+    unit,
+    overRange: meter.overRange,
+    absolute: absolute ?? false,
+  });
+  return {
+    ...rest,
+    reading,
+    expected,
+    rating,
+    limit,
+    overRange: meter.overRange,
+    summary,
+    ...(meterWords ? { meterWords } : {}),
+  };
 }

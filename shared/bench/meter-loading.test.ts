@@ -34,20 +34,32 @@ describe('loadedReading', () => {
 describe('meterCorrection', () => {
   it('when the chart read 10 V with the 400 kΩ meter, then the point is 15 V unloaded, as the textbook correction gives', () => {
     // textbook DC-meter-effect notes: V = VM + [R1R2 / (RV(R1 + R2))]·VM = 10 + 0.5 × 10 = 15 V
-    const c = meterCorrection({ chartVolts: 10, sourceOhms: 200e3, chartMeter: { ohmsPerVolt: 20e3, rangeVolts: 20 }, yourMeter: { inputOhms: 10e6 } });
+    const c = meterCorrection({
+      chartVolts: 10,
+      sourceOhms: 200e3,
+      chartMeter: { ohmsPerVolt: 20e3, rangeVolts: 20 },
+      yourMeter: { inputOhms: 10e6 },
+    });
     expectRelative(c.openCircuitVolts, 15);
     expectRelative(c.expectedOnYourMeter, 14.70588, 1e-5); // worked by hand: 15 × 10 M / 10.2 M
   });
 
   it('when a chart taken with 1 kΩ/V (1,000 V range) says 100 V behind 100 kΩ, then a 20 kΩ/V meter on 250 V reads about 8 % higher', () => {
     // worked by hand with the divider formula: open circuit 100 × 1.1 M / 1 M = 110 V; 110 × 5 M / 5.1 M = 107.84 V
-    const c = meterCorrection({ chartVolts: 100, sourceOhms: 100e3, chartMeter: { ohmsPerVolt: 1e3, rangeVolts: 1e3 }, yourMeter: { ohmsPerVolt: 20e3, rangeVolts: 250 } });
+    const c = meterCorrection({
+      chartVolts: 100,
+      sourceOhms: 100e3,
+      chartMeter: { ohmsPerVolt: 1e3, rangeVolts: 1e3 },
+      yourMeter: { ohmsPerVolt: 20e3, rangeVolts: 250 },
+    });
     expectRelative(c.expectedOnYourMeter, 107.843, 1e-5);
     expect(c.words).toBe("A 20 kΩ/V meter here reads about 8 % higher than the manual's 1 kΩ/V meter.");
   });
 
   it('refuses a meter with no sensitivity', () => {
-    expect(() => meterOhms({ ohmsPerVolt: 0, rangeVolts: 250 })).toThrow(/sensitivity \(Ω\/V\) must be a number above zero/); // Gridleak's own message (not a computation)
+    expect(() => meterOhms({ ohmsPerVolt: 0, rangeVolts: 250 })).toThrow(
+      /sensitivity \(Ω\/V\) must be a number above zero/,
+    ); // Gridleak's own message (not a computation)
   });
 });
 
@@ -61,15 +73,34 @@ describe('parseMeter and a voltage reading judged against the chart’s meter', 
 
   it('when a chart taken with 1 kΩ/V says 100 V behind 100 kΩ and a 20 kΩ/V meter reads 106 V, then it is within, not +6 %', () => {
     // worked by hand with the divider formula: your meter should read 107.84 V there; 106 V is −1.7 % of that
-    const v = measurementVerdict({ quantity: 'dc-voltage', expected: '100', tolerance: '5', reading: '106', chartMeter: '1k/V 1000 V', meter: '20 kΩ/V 250 V', source: '100k' });
+    const v = measurementVerdict({
+      quantity: 'dc-voltage',
+      expected: '100',
+      tolerance: '5',
+      reading: '106',
+      chartMeter: '1k/V 1000 V',
+      meter: '20 kΩ/V 250 V',
+      source: '100k',
+    });
     expectRelative(v.reference!, 107.843, 1e-5);
     expect(v.verdict).toBe('within');
     expect(v.meterWords).toBe("A 20 kΩ/V meter here reads about 8 % higher than the manual's 1 kΩ/V meter.");
     // without the meters, 106 V against 100 V ±5 % would be marginal
-    expect(measurementVerdict({ quantity: 'dc-voltage', expected: '100', tolerance: '5', reading: '106' }).verdict).toBe('marginal');
+    expect(
+      measurementVerdict({ quantity: 'dc-voltage', expected: '100', tolerance: '5', reading: '106' }).verdict,
+    ).toBe('marginal');
   });
 
   it('when the chart’s meter cannot be read, then the message names that field', () => {
-    expect(() => measurementVerdict({ quantity: 'dc-voltage', expected: '100', reading: '106', chartMeter: 'old Avo', meter: '10M', source: '100k' })).toThrow(/^Chart's meter:/); // Gridleak's own message
+    expect(() =>
+      measurementVerdict({
+        quantity: 'dc-voltage',
+        expected: '100',
+        reading: '106',
+        chartMeter: 'old Avo',
+        meter: '10M',
+        source: '100k',
+      }),
+    ).toThrow(/^Chart's meter:/); // Gridleak's own message
   });
 });

@@ -18,7 +18,15 @@ export function meterOhms(meter: MeterSpec): number {
  * What a meter of `meterOhms` (Ω) reads across a point whose unloaded (open-circuit) voltage is `openCircuitVolts` (V)
  * behind `sourceOhms` (Ω, the Thévenin resistance there: an anode load, a dropper): V·Rm/(Rs + Rm).
  */
-export function loadedReading({ openCircuitVolts, sourceOhms, meterOhms: rm }: { openCircuitVolts: number; sourceOhms: number; meterOhms: number }): number {
+export function loadedReading({
+  openCircuitVolts,
+  sourceOhms,
+  meterOhms: rm,
+}: {
+  openCircuitVolts: number;
+  sourceOhms: number;
+  meterOhms: number;
+}): number {
   requireFinite(openCircuitVolts, 'open-circuit voltage (V)');
   requireNonNegative(sourceOhms, 'source resistance (Ω)');
   requirePositive(rm, 'meter resistance (Ω)');
@@ -39,13 +47,20 @@ export interface MeterCorrection {
 }
 
 const describeMeter = (m: MeterSpec) =>
-  'inputOhms' in m ? `${+(m.inputOhms / 1e6).toPrecision(3)} MΩ-input meter` : `${+(m.ohmsPerVolt / 1000).toPrecision(3)} kΩ/V meter`;
+  'inputOhms' in m
+    ? `${+(m.inputOhms / 1e6).toPrecision(3)} MΩ-input meter`
+    : `${+(m.ohmsPerVolt / 1000).toPrecision(3)} kΩ/V meter`;
 
 /**
  * Turns a service chart's voltage, read with the chart's meter, into what your meter should read at the same point:
  * the chart's reading is un-loaded through the source resistance to the open-circuit voltage, then loaded again by your meter.
  */
-export function meterCorrection(input: { chartVolts: number; sourceOhms: number; chartMeter: MeterSpec; yourMeter: MeterSpec }): MeterCorrection {
+export function meterCorrection(input: {
+  chartVolts: number;
+  sourceOhms: number;
+  chartMeter: MeterSpec;
+  yourMeter: MeterSpec;
+}): MeterCorrection {
   requireFinite(input.chartVolts, 'chart voltage (V)');
   const rs = requireNonNegative(input.sourceOhms, 'source resistance (Ω)');
   const chartMeterOhms = meterOhms(input.chartMeter);

@@ -13,7 +13,9 @@ const INPUT = /(\d+(?:\.\d+)?\s*[kM]?)\s*(?:Ω|ohms?)(?!\s*(?:\/|per\s))/i;
 export function parseMeter(text: string): MeterSpec {
   const trimmed = typeof text === 'string' ? text.trim() : '';
   const fail = (): never => {
-    throw new BenchInputError(`'${trimmed}' is not a meter Gridleak can read: write its ohms per volt and range (20 kΩ/V 250 V) or its input resistance (10 MΩ).`);
+    throw new BenchInputError(
+      `'${trimmed}' is not a meter Gridleak can read: write its ohms per volt and range (20 kΩ/V 250 V) or its input resistance (10 MΩ).`,
+    );
   };
   const perVolt = PER_VOLT.exec(trimmed);
   if (perVolt) {

@@ -5,7 +5,9 @@ describe('partWarnings', () => {
   it('when a 350 V capacitor replaces a 450 V one, then it is flagged as dangerous', () => {
     // Trade rule "never lower the voltage rating": common practice, no source.
     const w = partWarnings({ original: '32 µF 450 V', replacement: '33 µF 350 V' });
-    expect(w).toEqual([expect.objectContaining({ level: 'danger', message: expect.stringMatching(/350 V, below the original's 450 V/) })]);
+    expect(w).toEqual([
+      expect.objectContaining({ level: 'danger', message: expect.stringMatching(/350 V, below the original's 450 V/) }),
+    ]);
   });
 
   it('when 47 µF 450 V replaces 50 µF 350 V, then it is accepted', () => {
@@ -20,10 +22,18 @@ describe('partWarnings', () => {
 
   it('when a capacitor on the mains is not safety-rated, then it is flagged; X2 in a Y position too', () => {
     // IEC 60384-14 classes: X across the line, Y line to chassis; "Y2 may replace X2, never X2 in a Y position" (IEC 60384-14 via a maker's X/Y subclass table and the IEEE EMC Society product-safety list).
-    expect(partWarnings({ original: '0.01µF 750V', replacement: '10nF 630V film', mainsPosition: 'across-line' })[0]!.level).toBe('danger');
-    expect(partWarnings({ original: '0.01µF 750V', replacement: '10nF X2 275V', mainsPosition: 'across-line' })).toEqual([]);
-    expect(partWarnings({ original: '4n7', replacement: '4.7nF X2 275V', mainsPosition: 'line-to-chassis' })[0]!.message).toMatch(/not X2/);
-    expect(partWarnings({ original: '4n7', replacement: '4.7nF Y2 300V', mainsPosition: 'line-to-chassis' })).toEqual([]);
+    expect(
+      partWarnings({ original: '0.01µF 750V', replacement: '10nF 630V film', mainsPosition: 'across-line' })[0]!.level,
+    ).toBe('danger');
+    expect(
+      partWarnings({ original: '0.01µF 750V', replacement: '10nF X2 275V', mainsPosition: 'across-line' }),
+    ).toEqual([]);
+    expect(
+      partWarnings({ original: '4n7', replacement: '4.7nF X2 275V', mainsPosition: 'line-to-chassis' })[0]!.message,
+    ).toMatch(/not X2/);
+    expect(partWarnings({ original: '4n7', replacement: '4.7nF Y2 300V', mainsPosition: 'line-to-chassis' })).toEqual(
+      [],
+    );
   });
 
   it('when ratings are written in several styles, then the values are read', () => {

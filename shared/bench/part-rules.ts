@@ -9,7 +9,8 @@ export interface PartWarning {
 }
 
 // A capacitance as marked: "32µF", "0.1 mfd", "8 MF" (old American: microfarads), "47UF", "100 mmfd", "4n7", "32u".
-const CAPACITANCE = /(?<![\w.])(\d+[pnuµμ]\d+(?:\s*f)?(?![a-z])|\d+(?:\.\d+)?\s*(?:mmfd|mfd|mmf|mf|[pnuµμ]f?)(?![a-z\d]))/i;
+const CAPACITANCE =
+  /(?<![\w.])(\d+[pnuµμ]\d+(?:\s*f)?(?![a-z])|\d+(?:\.\d+)?\s*(?:mmfd|mfd|mmf|mf|[pnuµμ]f?)(?![a-z\d]))/i;
 // A voltage rating as marked: "450 V", "400 VDC", "250 WV", "350 WVDC", "250 VAC", "1 kV", "1.6 kV".
 const VOLTAGE = /(?<![\w.])(\d+(?:\.\d+)?)\s*(k)?\s*(V\s*(?:DC|AC|RMS|W)?|WV(?:DC)?|DCWV)(?![a-z])/i;
 
@@ -57,7 +58,10 @@ export function partWarnings(part: {
   const cls = safetyClass(part.replacement);
   // A safety class carries an AC mains rating, not comparable with an old part's DC working voltage.
   if (was.volts && now.volts && now.volts < was.volts && !cls)
-    warnings.push({ level: 'danger', message: `Rated ${now.volts} V${now.ac ? ' AC' : ''}, below the original's ${was.volts} V${was.ac ? ' AC' : ''}: never lower the voltage rating.` });
+    warnings.push({
+      level: 'danger',
+      message: `Rated ${now.volts} V${now.ac ? ' AC' : ''}, below the original's ${was.volts} V${was.ac ? ' AC' : ''}: never lower the voltage rating.`,
+    });
   if (was.farads && now.farads && was.farads >= 1e-6) {
     const ratio = now.farads / was.farads;
     if (ratio < 0.8 || ratio > 1.5)
@@ -68,8 +72,14 @@ export function partWarnings(part: {
   }
   const position = part.mainsPosition ?? 'none';
   if (position === 'across-line' && !cls)
-    warnings.push({ level: 'danger', message: 'Across the mains this must be an X-class (or Y-class) safety capacitor; none is named.' });
+    warnings.push({
+      level: 'danger',
+      message: 'Across the mains this must be an X-class (or Y-class) safety capacitor; none is named.',
+    });
   if (position === 'line-to-chassis' && !cls?.startsWith('Y'))
-    warnings.push({ level: 'danger', message: `From the mains to the chassis this must be a Y-class safety capacitor${cls ? `, not ${cls}` : ''}.` });
+    warnings.push({
+      level: 'danger',
+      message: `From the mains to the chassis this must be a Y-class safety capacitor${cls ? `, not ${cls}` : ''}.`,
+    });
   return warnings;
 }

@@ -2,7 +2,14 @@ import { requireFinite, scaleByPowerOfTen } from './bench-input-error';
 import type { QuantityUnit } from './quantity-parse';
 
 const PREFIXES: ReadonlyArray<readonly [number, string]> = [
-  [-12, 'p'], [-9, 'n'], [-6, 'µ'], [-3, 'm'], [0, ''], [3, 'k'], [6, 'M'], [9, 'G'],
+  [-12, 'p'],
+  [-9, 'n'],
+  [-6, 'µ'],
+  [-3, 'm'],
+  [0, ''],
+  [3, 'k'],
+  [6, 'M'],
+  [9, 'G'],
 ];
 
 /**

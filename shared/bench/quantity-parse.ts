@@ -20,31 +20,70 @@ export interface ParseQuantityOptions {
 }
 
 const PREFIX_EXPONENTS: Record<string, number> = {
-  p: -12, n: -9, u: -6, U: -6, µ: -6, μ: -6, m: -3, k: 3, K: 3, M: 6, G: 9,
+  p: -12,
+  n: -9,
+  u: -6,
+  U: -6,
+  µ: -6,
+  μ: -6,
+  m: -3,
+  k: 3,
+  K: 3,
+  M: 6,
+  G: 9,
 };
 
 // IEC 60062 letter-and-digit (RKM) code: the letter stands where the decimal point would.
 // Upper-case letters are resistance letters, lower-case (and F) capacitance letters.
 const RKM_LETTERS: Record<string, { exponent: number; unit: 'Ω' | 'F' }> = {
-  L: { exponent: -3, unit: 'Ω' }, R: { exponent: 0, unit: 'Ω' }, K: { exponent: 3, unit: 'Ω' },
-  k: { exponent: 3, unit: 'Ω' }, M: { exponent: 6, unit: 'Ω' }, G: { exponent: 9, unit: 'Ω' },
-  p: { exponent: -12, unit: 'F' }, n: { exponent: -9, unit: 'F' }, u: { exponent: -6, unit: 'F' },
-  µ: { exponent: -6, unit: 'F' }, μ: { exponent: -6, unit: 'F' }, m: { exponent: -3, unit: 'F' },
+  L: { exponent: -3, unit: 'Ω' },
+  R: { exponent: 0, unit: 'Ω' },
+  K: { exponent: 3, unit: 'Ω' },
+  k: { exponent: 3, unit: 'Ω' },
+  M: { exponent: 6, unit: 'Ω' },
+  G: { exponent: 9, unit: 'Ω' },
+  p: { exponent: -12, unit: 'F' },
+  n: { exponent: -9, unit: 'F' },
+  u: { exponent: -6, unit: 'F' },
+  µ: { exponent: -6, unit: 'F' },
+  μ: { exponent: -6, unit: 'F' },
+  m: { exponent: -3, unit: 'F' },
   F: { exponent: 0, unit: 'F' },
 };
 
 // Unit words are matched case-insensitively ("47uf", "250v" are how people type), spaces and dots dropped.
 // Voltage ratings carry the marking's own words: VDC, WV (working volts), WVDC, DCWV, VAC, "V DC".
 const UNIT_WORDS: Record<string, QuantityUnit> = {
-  'ω': 'Ω', ohm: 'Ω', ohms: 'Ω', f: 'F', v: 'V', a: 'A', hz: 'Hz', w: 'W', j: 'J',
-  vdc: 'V', vac: 'V', wv: 'V', wvdc: 'V', dcwv: 'V', vdcw: 'V', vw: 'V', vrms: 'V',
+  ω: 'Ω',
+  ohm: 'Ω',
+  ohms: 'Ω',
+  f: 'F',
+  v: 'V',
+  a: 'A',
+  hz: 'Hz',
+  w: 'W',
+  j: 'J',
+  vdc: 'V',
+  vac: 'V',
+  wv: 'V',
+  wvdc: 'V',
+  dcwv: 'V',
+  vdcw: 'V',
+  vw: 'V',
+  vrms: 'V',
 };
 
 // Words that carry their own scale. Old American markings: mfd and MF = µF (never megafarads on a
 // capacitor), mmfd and MMF = pF; "meg" = megohms, as old parts lists write resistors.
 const SCALED_WORDS: Record<string, { exponent: number; unit: QuantityUnit }> = {
-  mfd: { exponent: -6, unit: 'F' }, mf: { exponent: -6, unit: 'F' }, mmfd: { exponent: -12, unit: 'F' }, mmf: { exponent: -12, unit: 'F' },
-  meg: { exponent: 6, unit: 'Ω' }, megs: { exponent: 6, unit: 'Ω' }, megohm: { exponent: 6, unit: 'Ω' }, megohms: { exponent: 6, unit: 'Ω' },
+  mfd: { exponent: -6, unit: 'F' },
+  mf: { exponent: -6, unit: 'F' },
+  mmfd: { exponent: -12, unit: 'F' },
+  mmf: { exponent: -12, unit: 'F' },
+  meg: { exponent: 6, unit: 'Ω' },
+  megs: { exponent: 6, unit: 'Ω' },
+  megohm: { exponent: 6, unit: 'Ω' },
+  megohms: { exponent: 6, unit: 'Ω' },
   r: { exponent: 0, unit: 'Ω' },
 };
 
@@ -129,7 +168,10 @@ export function parseQuantity(text: string, options: ParseQuantityOptions = {}):
   // The true minus sign (U+2212, as Gridleak prints it) and a dash typed in its place read as a minus.
   const trimmed = text.trim().replace(/^[\u2212\u2013]/, '-');
   if (/^(?:OL|O\.L\.?|over\s*range|>)/i.test(trimmed)) {
-    fail(trimmed, 'it is an over-range reading, not a value; record it as a reading, where "OL" or "> 200 M" is kept as over range');
+    fail(
+      trimmed,
+      'it is an over-range reading, not a value; record it as a reading, where "OL" or "> 200 M" is kept as over range',
+    );
   }
   if (/\d,\d/.test(trimmed)) {
     fail(trimmed, 'use a point for the decimal separator (4.7k) or the letter code (4k7)');

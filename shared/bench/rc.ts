@@ -20,7 +20,9 @@ export function dischargeTime(farads: number, ohms: number, fromVolts: number, t
   requireFinite(fromVolts, 'starting voltage (V)');
   requireFinite(toVolts, 'target voltage (V)');
   if (toVolts === 0) {
-    throw new BenchInputError('A capacitor never quite reaches 0 V through a resistor; choose a safe level such as 50 V or 1 V.');
+    throw new BenchInputError(
+      'A capacitor never quite reaches 0 V through a resistor; choose a safe level such as 50 V or 1 V.',
+    );
   }
   const ratio = fromVolts / toVolts;
   if (!(ratio > 1)) {

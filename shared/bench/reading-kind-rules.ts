@@ -20,9 +20,17 @@ export function absoluteTolerance(quantity: MeasuredQuantity, tolerance = ''): b
 }
 
 /** The optional fields that mean something for a kind: a tolerance for a band, a rated voltage for a capacitor's limit, meters for a chart. */
-export function applicableFields(quantity: MeasuredQuantity): { tolerance: boolean; rating: boolean; meterLoading: boolean } {
+export function applicableFields(quantity: MeasuredQuantity): {
+  tolerance: boolean;
+  rating: boolean;
+  meterLoading: boolean;
+} {
   const rule = readingKinds[quantity].rule;
-  return { tolerance: rule.type === 'band', rating: rule.type === 'capacitor-limit', meterLoading: rule.type === 'band' && rule.meterLoading === true };
+  return {
+    tolerance: rule.type === 'band',
+    rating: rule.type === 'capacitor-limit',
+    meterLoading: rule.type === 'band' && rule.meterLoading === true,
+  };
 }
 
 /** The texts of a reading that depend on its kind. */
@@ -40,8 +48,12 @@ export function applicableTexts<T extends KindTexts>(texts: T): T {
   const applies = applicableFields(texts.quantity);
   const keep = (on: boolean, text: string | undefined) => (on ? (text ?? '') : '');
   return {
-    ...texts, tolerance: keep(applies.tolerance, texts.tolerance), rating: keep(applies.rating, texts.rating),
-    chartMeter: keep(applies.meterLoading, texts.chartMeter), meter: keep(applies.meterLoading, texts.meter), source: keep(applies.meterLoading, texts.source),
+    ...texts,
+    tolerance: keep(applies.tolerance, texts.tolerance),
+    rating: keep(applies.rating, texts.rating),
+    chartMeter: keep(applies.meterLoading, texts.chartMeter),
+    meter: keep(applies.meterLoading, texts.meter),
+    source: keep(applies.meterLoading, texts.source),
   };
 }
 

@@ -9,40 +9,67 @@ describe('readingKinds', () => {
     expect(Object.keys(readingKinds)).toEqual([...measuredQuantities]);
   });
 
-  it.each(measuredQuantities)('when %s is described, then it has a label, an SI unit, a rule, a sign rule and the form’s words', (q) => {
-    const kind = readingKinds[q];
-    expect(kind.label).not.toBe('');
-    expect(kind.noun).toMatch(/^an? /);
-    expect(['Ω', 'F', 'A', 'V', 'Hz']).toContain(kind.unit);
-    expect(['band', 'capacitor-limit', 'minimum', 'maximum']).toContain(kind.rule.type);
-    expect(['not-negative', 'any']).toContain(kind.sign.reading);
-    expect(['above-zero', 'any']).toContain(kind.sign.expected);
-    expect(kind.form.expectedLabel).not.toBe('');
-    expect(kind.form.readingPlaceholder).toMatch(/^e\.g\. /);
-    expect(kind.form.methodHint).not.toBe('');
-    // A tolerance field is shown only for a band, and then it says what blank means.
-    expect(applicableFields(q).tolerance).toBe(kind.rule.type === 'band');
-    if (kind.rule.type === 'band') expect(kind.form.toleranceHint).toMatch(/blank for/);
-    else expect(kind.form.toleranceHint).toBeUndefined();
-  });
+  it.each(measuredQuantities)(
+    'when %s is described, then it has a label, an SI unit, a rule, a sign rule and the form’s words',
+    (q) => {
+      const kind = readingKinds[q];
+      expect(kind.label).not.toBe('');
+      expect(kind.noun).toMatch(/^an? /);
+      expect(['Ω', 'F', 'A', 'V', 'Hz']).toContain(kind.unit);
+      expect(['band', 'capacitor-limit', 'minimum', 'maximum']).toContain(kind.rule.type);
+      expect(['not-negative', 'any']).toContain(kind.sign.reading);
+      expect(['above-zero', 'any']).toContain(kind.sign.expected);
+      expect(kind.form.expectedLabel).not.toBe('');
+      expect(kind.form.readingPlaceholder).toMatch(/^e\.g\. /);
+      expect(kind.form.methodHint).not.toBe('');
+      // A tolerance field is shown only for a band, and then it says what blank means.
+      expect(applicableFields(q).tolerance).toBe(kind.rule.type === 'band');
+      if (kind.rule.type === 'band') expect(kind.form.toleranceHint).toMatch(/blank for/);
+      else expect(kind.form.toleranceHint).toBeUndefined();
+    },
+  );
 });
 
 // One reading of each kind, each from the verdict tests' sources, judged by the rule its descriptor names.
 const examples: Record<MeasuredQuantity, { input: MeasurementInput; reference: number; verdict: string }> = {
   // Worst-case ESR chart for new electrolytics, 100 kHz, 20 °C (glodark.com/design/esrchart.htm): 47 µF, 250 V column = 0.8 Ω
-  esr: { input: { quantity: 'esr', expected: '47µ', rating: '450 V', reading: '0.6 Ω' }, reference: 0.8, verdict: 'within' },
+  esr: {
+    input: { quantity: 'esr', expected: '47µ', rating: '450 V', reading: '0.6 Ω' },
+    reference: 0.8,
+    verdict: 'within',
+  },
   // General-purpose radial series datasheet rule: 0.01 × 22 µF × 25 V = 5.5 µA (by hand)
-  leakage: { input: { quantity: 'leakage', expected: '22u', rating: '25V', reading: '4u' }, reference: 5.5e-6, verdict: 'within' },
+  leakage: {
+    input: { quantity: 'leakage', expected: '22u', rating: '25V', reading: '4u' },
+    reference: 5.5e-6,
+    verdict: 'within',
+  },
   // In-service inspection code of practice: Class I insulation at least 1 MΩ at 500 V DC, used when none is given
   insulation: { input: { quantity: 'insulation', reading: '400k' }, reference: 1e6, verdict: 'out' },
   // IEC 60062 letter S (−20/+50 %) for an electrolytic with no tolerance typed: 65 µF for 47 µF is +38.3 % (by hand)
-  capacitance: { input: { quantity: 'capacitance', expected: '47u', reading: '65u' }, reference: 47e-6, verdict: 'within' },
+  capacitance: {
+    input: { quantity: 'capacitance', expected: '47u', reading: '65u' },
+    reference: 47e-6,
+    verdict: 'within',
+  },
   // IEC 60062 letter J = ±5 %: 2.35 kΩ for 2k2 is +6.8 % (by hand), inside 1.5 × the band
-  resistance: { input: { quantity: 'resistance', expected: '2k2', tolerance: 'J', reading: '2.35k' }, reference: 2200, verdict: 'marginal' },
+  resistance: {
+    input: { quantity: 'resistance', expected: '2k2', tolerance: 'J', reading: '2.35k' },
+    reference: 2200,
+    verdict: 'marginal',
+  },
   // common practice, no source: ±20 % on service charts; 290 V for 250 V is +16 % (by hand)
-  'dc-voltage': { input: { quantity: 'dc-voltage', expected: '250', reading: '290 V' }, reference: 250, verdict: 'within' },
+  'dc-voltage': {
+    input: { quantity: 'dc-voltage', expected: '250', reading: '290 V' },
+    reference: 250,
+    verdict: 'within',
+  },
   // common practice, no source: ±20 % on service charts; 6.2 V for a 6.3 V heater is −1.6 % (by hand)
-  'ac-voltage': { input: { quantity: 'ac-voltage', expected: '6.3', reading: '6.2' }, reference: 6.3, verdict: 'within' },
+  'ac-voltage': {
+    input: { quantity: 'ac-voltage', expected: '6.3', reading: '6.2' },
+    reference: 6.3,
+    verdict: 'within',
+  },
   // common practice, no source: ±20 % when the manual gives none; 57 mA for 52 mA is +9.6 % (by hand)
   current: { input: { quantity: 'current', expected: '52m', reading: '57m' }, reference: 0.052, verdict: 'within' },
   // common practice, no source: an AM IF is set within about 2 kHz; 395 kHz for 470 kHz is out
@@ -63,7 +90,8 @@ describe('the verdict follows the descriptor’s rule', () => {
   it('when a negative reading is typed, then only a kind whose sign rule allows it takes it', () => {
     for (const q of measuredQuantities) {
       const judge = () => measurementVerdict({ ...examples[q].input, reading: `-${examples[q].input.reading}` });
-      if (readingKinds[q].sign.reading === 'not-negative') expect(judge, q).toThrow(new RegExp(`${readingKinds[q].noun} cannot be negative`));
+      if (readingKinds[q].sign.reading === 'not-negative')
+        expect(judge, q).toThrow(new RegExp(`${readingKinds[q].noun} cannot be negative`));
       else expect(judge, q).not.toThrow();
     }
   });
@@ -80,9 +108,27 @@ describe('the verdict follows the descriptor’s rule', () => {
 describe('applicableTexts', () => {
   const leftOver = { tolerance: '10', rating: '350 V', chartMeter: '1k/V 250 V', meter: '10M', source: '100k' };
   it('when a kind does not use a field, then a value left from another kind is blanked', () => {
-    expect(applicableTexts({ quantity: 'esr', ...leftOver })).toEqual({ quantity: 'esr', tolerance: '', rating: '350 V', chartMeter: '', meter: '', source: '' });
-    expect(applicableTexts({ quantity: 'dc-voltage', ...leftOver })).toEqual({ quantity: 'dc-voltage', ...leftOver, rating: '' });
-    expect(applicableTexts({ quantity: 'insulation', ...leftOver })).toEqual({ quantity: 'insulation', tolerance: '', rating: '', chartMeter: '', meter: '', source: '' });
+    expect(applicableTexts({ quantity: 'esr', ...leftOver })).toEqual({
+      quantity: 'esr',
+      tolerance: '',
+      rating: '350 V',
+      chartMeter: '',
+      meter: '',
+      source: '',
+    });
+    expect(applicableTexts({ quantity: 'dc-voltage', ...leftOver })).toEqual({
+      quantity: 'dc-voltage',
+      ...leftOver,
+      rating: '',
+    });
+    expect(applicableTexts({ quantity: 'insulation', ...leftOver })).toEqual({
+      quantity: 'insulation',
+      tolerance: '',
+      rating: '',
+      chartMeter: '',
+      meter: '',
+      source: '',
+    });
   });
 });
 

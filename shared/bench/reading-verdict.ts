@@ -27,7 +27,9 @@ function bandsOf(tolerance: Tolerance): { minus: number; plus: number } {
   const minus = requireNonNegative(pair.minus, 'tolerance below the expected value (fraction)');
   const plus = requireNonNegative(pair.plus, 'tolerance above the expected value (fraction)');
   if (minus > 1) {
-    throw new BenchInputError(`A tolerance of ${minus} below is more than 100 %; tolerances are fractions, so ±10 % is 0.1.`);
+    throw new BenchInputError(
+      `A tolerance of ${minus} below is more than 100 %; tolerances are fractions, so ±10 % is 0.1.`,
+    );
   }
   return { minus, plus };
 }
@@ -36,11 +38,21 @@ function bandsOf(tolerance: Tolerance): { minus: number; plus: number } {
  * Compares a bench reading with the expected value (both in the same unit, any SI unit) under a
  * tolerance given as a fraction or { minus, plus } fractions; returns the verdict and the signed deviation.
  */
-export function readingVerdict({ expected, reading, tolerance }: { expected: number; reading: number; tolerance: Tolerance }): ReadingVerdict {
+export function readingVerdict({
+  expected,
+  reading,
+  tolerance,
+}: {
+  expected: number;
+  reading: number;
+  tolerance: Tolerance;
+}): ReadingVerdict {
   requireFinite(expected, 'expected value');
   requireFinite(reading, 'reading');
   if (expected === 0) {
-    throw new BenchInputError('The expected value is 0, so a relative tolerance means nothing; compare against an absolute limit instead.');
+    throw new BenchInputError(
+      'The expected value is 0, so a relative tolerance means nothing; compare against an absolute limit instead.',
+    );
   }
   const { minus, plus } = bandsOf(tolerance);
   const deviation = (reading - expected) / expected;

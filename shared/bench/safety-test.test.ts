@@ -1,6 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { expectRelative } from './bench-test-support';
-import { capacitorCurrent, earthContinuityLimit, insulationMinimum, leadResistance, safetyTest, touchCurrentLimit, type SafetyTestInput } from './index';
+import {
+  capacitorCurrent,
+  earthContinuityLimit,
+  insulationMinimum,
+  leadResistance,
+  safetyTest,
+  touchCurrentLimit,
+  type SafetyTestInput,
+} from './index';
 
 // Sources named beside each check. "IET CoP" is the IET Code of Practice for In-service Inspection and Testing
 // of Electrical Equipment, read through the pages that quote it (BENCH-REFERENCE §10): the earth limit "0.1 + R Ω"
@@ -29,7 +37,8 @@ describe('earth continuity limit (IET CoP: 0.1 Ω plus the lead)', () => {
 describe('insulation minimum at 500 V DC (IET CoP)', () => {
   it('is 1 MΩ for Class I', () => expect(insulationMinimum('class-1')).toBe(1e6)); // IET CoP
   it('is 2 MΩ for Class II', () => expect(insulationMinimum('class-2')).toBe(2e6)); // IET CoP
-  it('is 2 MΩ for a live-chassis set relying on insulated knobs and back', () => expect(insulationMinimum('live-chassis')).toBe(2e6)); // IET CoP, Class II figure
+  it('is 2 MΩ for a live-chassis set relying on insulated knobs and back', () =>
+    expect(insulationMinimum('live-chassis')).toBe(2e6)); // IET CoP, Class II figure
 });
 
 describe('touch current limit for the class (IEC 60335-1 cl. 16 via IET CoP 4th ed.)', () => {
@@ -54,8 +63,18 @@ describe('current through a mains-to-chassis capacitor, I = 2πfCV worked by han
 });
 
 const sound: SafetyTestInput = {
-  equipmentClass: 'class-1', earthOhms: 0.08, leadOhms: 0.05, insulationOhms: 50e6, insulationVolts: 500, mainsVolts: 230, mainsHertz: 50,
-  fuseFittedAmps: 1, fuseRecommendedAmps: 1, leadAndStrainRelief: true, coversRefitted: true, safetyClassCapacitors: true,
+  equipmentClass: 'class-1',
+  earthOhms: 0.08,
+  leadOhms: 0.05,
+  insulationOhms: 50e6,
+  insulationVolts: 500,
+  mainsVolts: 230,
+  mainsHertz: 50,
+  fuseFittedAmps: 1,
+  fuseRecommendedAmps: 1,
+  leadAndStrainRelief: true,
+  coversRefitted: true,
+  safetyClassCapacitors: true,
 };
 const line = (input: SafetyTestInput, key: string) => safetyTest(input).lines.find((l) => l.key === key)!;
 

@@ -36,13 +36,16 @@ export function earthContinuityLimit(leadOhms: number): number {
 
 // Maximum conductor resistance of class 5 (flexible) plain copper at 20 °C, Ω per km, by cross-section in mm².
 const FLEX_OHMS_PER_KM: Record<string, number> = { '0.5': 39, '0.75': 26, '1': 19.5, '1.5': 13.3, '2.5': 7.98 };
-export const flexSizes = Object.keys(FLEX_OHMS_PER_KM).map(Number).sort((a, b) => a - b);
+export const flexSizes = Object.keys(FLEX_OHMS_PER_KM)
+  .map(Number)
+  .sort((a, b) => a - b);
 
 /** Resistance (Ω) of one core of a flexible copper lead `metres` (m) long of cross-section `mm2` (mm², a standard size). */
 export function leadResistance(metres: number, mm2: number): number {
   requirePositive(metres, 'lead length (m)');
   const perKm = FLEX_OHMS_PER_KM[String(mm2)];
-  if (perKm === undefined) throw new BenchInputError(`Lead cross-section must be one of ${flexSizes.join(', ')} mm²; got ${mm2}.`);
+  if (perKm === undefined)
+    throw new BenchInputError(`Lead cross-section must be one of ${flexSizes.join(', ')} mm²; got ${mm2}.`);
   return (perKm * metres) / 1000;
 }
 
@@ -119,28 +122,96 @@ export function safetyTest(input: SafetyTestInput): SafetyTestResult {
   const cls = input.equipmentClass;
   const lines: SafetyLine[] = [];
   const earthLimit = earthContinuityLimit(input.leadOhms ?? 0);
-  lines.push(cls === 'class-1'
-    ? { key: 'earth', label: 'Protective earth continuity, chassis to plug earth pin', value: input.earthOhms ?? null, unit: 'Ω', limit: earthLimit, sense: 'max',
-        limitText: `≤ ${ohms(earthLimit)} (0.1 Ω + lead ${ohms(input.leadOhms ?? 0)})`, source: SAFETY_SOURCES.iet, verdict: judge(input.earthOhms, earthLimit, 'max') }
-    : { key: 'earth', label: 'Protective earth continuity', value: null, unit: 'Ω', limit: null, sense: 'max', limitText: 'No protective earth on this class', source: SAFETY_SOURCES.iet, verdict: 'not-applicable' });
+  lines.push(
+    cls === 'class-1'
+      ? {
+          key: 'earth',
+          label: 'Protective earth continuity, chassis to plug earth pin',
+          value: input.earthOhms ?? null,
+          unit: 'Ω',
+          limit: earthLimit,
+          sense: 'max',
+          limitText: `≤ ${ohms(earthLimit)} (0.1 Ω + lead ${ohms(input.leadOhms ?? 0)})`,
+          source: SAFETY_SOURCES.iet,
+          verdict: judge(input.earthOhms, earthLimit, 'max'),
+        }
+      : {
+          key: 'earth',
+          label: 'Protective earth continuity',
+          value: null,
+          unit: 'Ω',
+          limit: null,
+          sense: 'max',
+          limitText: 'No protective earth on this class',
+          source: SAFETY_SOURCES.iet,
+          verdict: 'not-applicable',
+        },
+  );
   const insMin = insulationMinimum(cls);
   const atVolts = input.insulationVolts ?? INSULATION_TEST_VOLTS;
-  lines.push({ key: 'insulation', label: `Insulation, live and neutral joined to exposed metal, at ${atVolts} V DC`, value: input.insulationOhms ?? null, unit: 'Ω', limit: insMin, sense: 'min',
-    limitText: `≥ ${ohms(insMin)} at ${INSULATION_TEST_VOLTS} V DC`, source: SAFETY_SOURCES.iet,
-    verdict: atVolts < INSULATION_TEST_VOLTS && input.insulationOhms != null ? 'fail' : judge(input.insulationOhms, insMin, 'min') });
+  lines.push({
+    key: 'insulation',
+    label: `Insulation, live and neutral joined to exposed metal, at ${atVolts} V DC`,
+    value: input.insulationOhms ?? null,
+    unit: 'Ω',
+    limit: insMin,
+    sense: 'min',
+    limitText: `≥ ${ohms(insMin)} at ${INSULATION_TEST_VOLTS} V DC`,
+    source: SAFETY_SOURCES.iet,
+    verdict:
+      atVolts < INSULATION_TEST_VOLTS && input.insulationOhms != null
+        ? 'fail'
+        : judge(input.insulationOhms, insMin, 'min'),
+  });
   const touchMax = touchCurrentLimit(cls);
-  lines.push({ key: 'touch', label: 'Touch or leakage current', value: input.touchAmps ?? null, unit: 'A', limit: touchMax, sense: 'max',
-    limitText: `≤ ${mA(touchMax)}`, source: SAFETY_SOURCES.classLimits, verdict: input.touchAmps == null ? 'not-applicable' : judge(input.touchAmps, touchMax, 'max') });
+  lines.push({
+    key: 'touch',
+    label: 'Touch or leakage current',
+    value: input.touchAmps ?? null,
+    unit: 'A',
+    limit: touchMax,
+    sense: 'max',
+    limitText: `≤ ${mA(touchMax)}`,
+    source: SAFETY_SOURCES.classLimits,
+    verdict: input.touchAmps == null ? 'not-applicable' : judge(input.touchAmps, touchMax, 'max'),
+  });
   const yAmps = input.yFarads ? capacitorCurrent(input.yFarads, input.mainsVolts, input.mainsHertz) : null;
-  lines.push({ key: 'y-capacitor', label: `Current through the mains-to-chassis capacitor at ${input.mainsVolts} V ${input.mainsHertz} Hz`, value: yAmps, unit: 'A', limit: touchMax, sense: 'max',
-    limitText: `≤ ${mA(touchMax)}`, source: `${SAFETY_SOURCES.physics}; ${SAFETY_SOURCES.classLimits}`, verdict: yAmps == null ? 'not-applicable' : judge(yAmps, touchMax, 'max') });
+  lines.push({
+    key: 'y-capacitor',
+    label: `Current through the mains-to-chassis capacitor at ${input.mainsVolts} V ${input.mainsHertz} Hz`,
+    value: yAmps,
+    unit: 'A',
+    limit: touchMax,
+    sense: 'max',
+    limitText: `≤ ${mA(touchMax)}`,
+    source: `${SAFETY_SOURCES.physics}; ${SAFETY_SOURCES.classLimits}`,
+    verdict: yAmps == null ? 'not-applicable' : judge(yAmps, touchMax, 'max'),
+  });
   const fitted = input.fuseFittedAmps;
   const recommended = input.fuseRecommendedAmps;
-  lines.push({ key: 'fuse', label: 'Fuse fitted against the rating recommended', value: fitted ?? null, unit: 'A', limit: recommended ?? null, sense: 'max',
-    limitText: recommended ? `≤ ${recommended} A recommended` : 'Recommended rating not given', source: SAFETY_SOURCES.practice,
-    verdict: fitted == null || recommended == null ? 'not-measured' : judge(fitted, recommended, 'max') });
+  lines.push({
+    key: 'fuse',
+    label: 'Fuse fitted against the rating recommended',
+    value: fitted ?? null,
+    unit: 'A',
+    limit: recommended ?? null,
+    sense: 'max',
+    limitText: recommended ? `≤ ${recommended} A recommended` : 'Recommended rating not given',
+    source: SAFETY_SOURCES.practice,
+    verdict: fitted == null || recommended == null ? 'not-measured' : judge(fitted, recommended, 'max'),
+  });
   const yesNo = (key: SafetyLine['key'], label: string, ok: boolean) =>
-    lines.push({ key, label, value: null, unit: '', limit: null, sense: 'check', limitText: 'Required', source: SAFETY_SOURCES.practice, verdict: check(ok) });
+    lines.push({
+      key,
+      label,
+      value: null,
+      unit: '',
+      limit: null,
+      sense: 'check',
+      limitText: 'Required',
+      source: SAFETY_SOURCES.practice,
+      verdict: check(ok),
+    });
   yesNo('lead', 'Mains lead sound, strain relief fitted', input.leadAndStrainRelief);
   yesNo('covers', 'Knobs, back cover and insulators refitted', input.coversRefitted);
   yesNo('capacitor-class', 'Mains-side capacitors of X/Y safety class', input.safetyClassCapacitors);

@@ -12,8 +12,18 @@ const ABOVE_FIRST = new RegExp(`^\\+${NUMBER}/-${NUMBER}$`);
  * which a per-cent band cannot say). S and Z are the electrolytic bands.
  */
 export const TOLERANCE_LETTERS: Readonly<Record<string, Tolerance>> = {
-  B: 0.001, C: 0.0025, D: 0.005, F: 0.01, G: 0.02, J: 0.05, K: 0.1, M: 0.2, N: 0.3,
-  S: { minus: 0.2, plus: 0.5 }, Z: { minus: 0.2, plus: 0.8 }, P: { minus: 0, plus: 1 },
+  B: 0.001,
+  C: 0.0025,
+  D: 0.005,
+  F: 0.01,
+  G: 0.02,
+  J: 0.05,
+  K: 0.1,
+  M: 0.2,
+  N: 0.3,
+  S: { minus: 0.2, plus: 0.5 },
+  Z: { minus: 0.2, plus: 0.8 },
+  P: { minus: 0, plus: 1 },
 };
 
 /**
@@ -21,7 +31,10 @@ export const TOLERANCE_LETTERS: Readonly<Record<string, Tolerance>> = {
  * IEC 60062 letter ("K", "J", "Z"), as fractions for readingVerdict.
  */
 export function parseTolerance(text: string): Tolerance {
-  const compact = String(text).trim().replace(/[\s%±]/g, '').replace(/[\u2212\u2013]/g, '-');
+  const compact = String(text)
+    .trim()
+    .replace(/[\s%±]/g, '')
+    .replace(/[\u2212\u2013]/g, '-');
   const letter = TOLERANCE_LETTERS[compact.toUpperCase()];
   if (compact.length === 1 && letter !== undefined) return letter;
   const below = BELOW_FIRST.exec(compact);

@@ -32,7 +32,10 @@ describe('valveType decodes the heater letter of the European valve type code (h
 
   it('adds the classic AC/DC line-up to 116.6 V of heaters', () => {
     // from memory: UCH42 14 + UAF42 12.6 + UBC41 14 + UL41 45 + UY41 31 (valve data handbook as recalled), summed by mathjs
-    const total = ['UCH42', 'UAF42', 'UBC41', 'UL41', 'UY41'].reduce((sum, name) => sum + (valveType(name).heater.volts ?? 0), 0);
+    const total = ['UCH42', 'UAF42', 'UBC41', 'UL41', 'UY41'].reduce(
+      (sum, name) => sum + (valveType(name).heater.volts ?? 0),
+      0,
+    );
     expectRelative(total, math.evaluate('14 + 12.6 + 14 + 45 + 31') as number);
   });
 });
@@ -47,7 +50,11 @@ describe('valveType names the electrode systems', () => {
   });
 
   it('reads EABC80 as a diode, a double diode and a triode', () => {
-    expect(valveType('EABC80').systems).toEqual(['single signal diode', 'double diode, common cathode', 'small-signal triode']); // code: A, B, C
+    expect(valveType('EABC80').systems).toEqual([
+      'single signal diode',
+      'double diode, common cathode',
+      'small-signal triode',
+    ]); // code: A, B, C
   });
 
   it('reads EZ80 as a full-wave rectifier', () => {

@@ -40,7 +40,9 @@ const ORDINARY = /^([A-Z])([A-Z]+)(\d{1,3})$/;
 const SPECIAL_QUALITY = /^([A-Z])(\d{2,3})([A-Z]+)$/;
 
 function malformed(text: string): never {
-  const hint = /^\d/.test(text) ? ' (a name starting with a digit is an American type number: heater volts, letters, a digit, e.g. 6V6GT)' : '';
+  const hint = /^\d/.test(text)
+    ? ' (a name starting with a digit is an American type number: heater volts, letters, a digit, e.g. 6V6GT)'
+    : '';
   throw new BenchInputError(
     `'${text}' does not follow the European valve type code (heater letter, system letters, base digits), e.g. EL84${hint}.`,
   );
@@ -51,20 +53,44 @@ function americanType(text: string): ValveType | undefined {
   if (parts === undefined) return undefined;
   const known = AMERICAN_VALVES[parts.core];
   const volts = known?.heaterVolts ?? americanHeaterVolts(parts.leading);
-  const supply: HeaterSupply = parts.leading === 0 ? 'none' : parts.leading === 1 ? 'battery' : volts !== undefined && volts >= 18 ? 'series' : 'parallel';
+  const supply: HeaterSupply =
+    parts.leading === 0
+      ? 'none'
+      : parts.leading === 1
+        ? 'battery'
+        : volts !== undefined && volts >= 18
+          ? 'series'
+          : 'parallel';
   const heater: ValveHeater = { letter: String(parts.leading), supply };
   if (volts !== undefined) heater.volts = volts;
   if (known) heater.amps = known.heaterAmps;
   if (supply === 'series') heater.note = 'a heater this high runs only in a series string across the mains';
   else if (volts === 12.6) heater.note = '12.6 V types also run in 150 mA series strings';
   const result: ValveType = {
-    designation: text, heater, systems: [], base: known?.base ?? 'not said by the number; see the type’s data',
-    equivalents: [...(known?.equivalents ?? [])], specialQuality: false, standardForm: parts.core, scheme: 'american',
+    designation: text,
+    heater,
+    systems: [],
+    base: known?.base ?? 'not said by the number; see the type’s data',
+    equivalents: [...(known?.equivalents ?? [])],
+    specialQuality: false,
+    standardForm: parts.core,
+    scheme: 'american',
     suffixWords: americanSuffixWords(parts.suffix),
   };
   if (known) {
-    const typical = { ...(known.maxAnodeWatts ? { maxAnodeWatts: known.maxAnodeWatts } : {}), ...(known.maxDcAmps ? { maxDcAmps: known.maxDcAmps } : {}) };
-    result.data = { description: known.description, heaterVolts: known.heaterVolts, heaterAmps: known.heaterAmps, equivalents: known.equivalents, confidence: known.confidence, source: known.source, typical };
+    const typical = {
+      ...(known.maxAnodeWatts ? { maxAnodeWatts: known.maxAnodeWatts } : {}),
+      ...(known.maxDcAmps ? { maxDcAmps: known.maxDcAmps } : {}),
+    };
+    result.data = {
+      description: known.description,
+      heaterVolts: known.heaterVolts,
+      heaterAmps: known.heaterAmps,
+      equivalents: known.equivalents,
+      confidence: known.confidence,
+      source: known.source,
+      typical,
+    };
   }
   return result;
 }
@@ -73,8 +99,24 @@ function britishType(text: string): ValveType | undefined {
   const known = BRITISH_VALVES[text];
   if (known === undefined) return undefined;
   const { base, ...data } = known;
-  const heater: ValveHeater = { letter: '', supply: 'parallel', volts: known.heaterVolts, amps: known.heaterAmps, note: 'a British type name, not the European heater-letter code' };
-  return { designation: text, heater, systems: [], base, equivalents: [], specialQuality: false, standardForm: text, data, scheme: 'british' };
+  const heater: ValveHeater = {
+    letter: '',
+    supply: 'parallel',
+    volts: known.heaterVolts,
+    amps: known.heaterAmps,
+    note: 'a British type name, not the European heater-letter code',
+  };
+  return {
+    designation: text,
+    heater,
+    systems: [],
+    base,
+    equivalents: [],
+    specialQuality: false,
+    standardForm: text,
+    data,
+    scheme: 'british',
+  };
 }
 
 /**
@@ -92,9 +134,8 @@ export function valveType(designation: string): ValveType {
   const special = ordinary === null ? SPECIAL_QUALITY.exec(text) : null;
   if (ordinary === null && special === null) malformed(text);
   // Special-quality names put the digits between the letters (E88CC); reorder to heater, systems, digits.
-  const [heaterLetter = '', systemLetters = '', digits = ''] = ordinary !== null
-    ? [ordinary[1], ordinary[2], ordinary[3]]
-    : [special?.[1], special?.[3], special?.[2]];
+  const [heaterLetter = '', systemLetters = '', digits = ''] =
+    ordinary !== null ? [ordinary[1], ordinary[2], ordinary[3]] : [special?.[1], special?.[3], special?.[2]];
   const heaterRule = HEATER_LETTERS[heaterLetter];
   if (heaterRule === undefined) {
     throw new BenchInputError(

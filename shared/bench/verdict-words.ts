@@ -7,7 +7,6 @@ export { signedPercent };
 /** How a reading is judged: under a maximum (ESR, leakage, earth continuity, ripple), over a minimum (insulation), or about a nominal value. */
 export type LimitKind = 'maximum' | 'minimum' | 'nominal';
 
-
 export interface DeviationInput {
   limit: LimitKind;
   /** Reading in SI units; for an over-range reading, the bound written, or null. */
@@ -28,7 +27,13 @@ export interface DeviationInput {
  */
 export function describeDeviation(d: DeviationInput): string {
   const show = (v: number) => formatQuantity(v, d.unit);
-  const read = d.overRange ? (d.reading === null ? 'over range' : `over range (above ${show(d.reading)})`) : d.reading === null ? '—' : show(d.reading);
+  const read = d.overRange
+    ? d.reading === null
+      ? 'over range'
+      : `over range (above ${show(d.reading)})`
+    : d.reading === null
+      ? '—'
+      : show(d.reading);
   if (d.reference === null) return d.overRange ? read : '—';
   if (d.limit === 'minimum') {
     const above = d.overRange || (d.reading ?? 0) >= d.reference;

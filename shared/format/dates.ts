@@ -39,14 +39,21 @@ export function formatInstant(instant: Instant, style: DateStyle, place: FormatP
 export function isoDate(instant: Instant, timeZone = 'UTC'): string {
   const date = toDate(instant);
   if (!date) return '';
-  const parts = new Intl.DateTimeFormat('en', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).formatToParts(date);
+  const parts = new Intl.DateTimeFormat('en', {
+    timeZone,
+    year: 'numeric',
+    month: '2-digit',
+    day: '2-digit',
+  }).formatToParts(date);
   const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
   return `${get('year')}-${get('month')}-${get('day')}`;
 }
 
 /** The hour (0–23) on the clock of `timeZone`; the runtime's own zone when none is given. */
 export function hourIn(now: Date, timeZone?: string): number {
-  const hour = new Intl.DateTimeFormat('en', { hour: 'numeric', hourCycle: 'h23', timeZone }).formatToParts(now).find((p) => p.type === 'hour')?.value;
+  const hour = new Intl.DateTimeFormat('en', { hour: 'numeric', hourCycle: 'h23', timeZone })
+    .formatToParts(now)
+    .find((p) => p.type === 'hour')?.value;
   return hour === undefined ? now.getHours() : Number(hour) % 24;
 }
 
@@ -61,7 +68,10 @@ export function isKnownTimeZone(zone: string): boolean {
 }
 
 /** "Tuesday 24 November", with the year added when it is not the current one ("Tuesday 4 March 2025"). */
-export function dayLabel(date: Date, { timeZone, now = new Date(), locale = 'en-GB' }: FormatPlace & { now?: Date } = {}): string {
+export function dayLabel(
+  date: Date,
+  { timeZone, now = new Date(), locale = 'en-GB' }: FormatPlace & { now?: Date } = {},
+): string {
   // Built from parts: ICU versions differ on the comma they put after the weekday once a year is present.
   const parts = (d: Date) =>
     Object.fromEntries(
@@ -77,7 +87,13 @@ export function dayLabel(date: Date, { timeZone, now = new Date(), locale = 'en-
 const relative = new Intl.RelativeTimeFormat('en', { numeric: 'auto' });
 /** Each unit and how many of it make the next one up. */
 const steps: [Intl.RelativeTimeFormatUnit, number][] = [
-  ['second', 60], ['minute', 60], ['hour', 24], ['day', 7], ['week', 4.345], ['month', 12], ['year', Number.POSITIVE_INFINITY],
+  ['second', 60],
+  ['minute', 60],
+  ['hour', 24],
+  ['day', 7],
+  ['week', 4.345],
+  ['month', 12],
+  ['year', Number.POSITIVE_INFINITY],
 ];
 
 /** "just now", "5 minutes ago", "yesterday", "3 weeks ago": when something happened, read at a glance. */

@@ -1,5 +1,16 @@
 import { describe, expect, it } from 'vitest';
-import { formatDeviation, formatDifference, formatInstant, formatNumber, formatPercent, formatTolerance, isoDate, MINUS, signedPercent, trueMinus } from '.';
+import {
+  formatDeviation,
+  formatDifference,
+  formatInstant,
+  formatNumber,
+  formatPercent,
+  formatTolerance,
+  isoDate,
+  MINUS,
+  signedPercent,
+  trueMinus,
+} from '.';
 
 // Unicode 15, U+2212 MINUS SIGN: the sign typography uses for negative numbers (not the hyphen-minus U+002D).
 describe('signs and per cents', () => {
@@ -36,7 +47,7 @@ describe('signs and per cents', () => {
 describe('dates', () => {
   const instant = '2026-03-08T23:30:00Z';
 
-  it('when the zone is ahead of UTC, then the calendar day is the zone\'s', () => {
+  it("when the zone is ahead of UTC, then the calendar day is the zone's", () => {
     expect(isoDate(instant, 'UTC')).toBe('2026-03-08');
     expect(isoDate(instant, 'Europe/Berlin')).toBe('2026-03-09');
   });

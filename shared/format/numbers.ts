@@ -10,7 +10,8 @@ export function formatNumber(value: number, significant = 3): string {
 }
 
 /** A quantity with a true minus: −12 V → "−12 V". */
-export const formatSignedQuantity = (value: number, unit: QuantityUnit): string => withSign(formatQuantity(value, unit));
+export const formatSignedQuantity = (value: number, unit: QuantityUnit): string =>
+  withSign(formatQuantity(value, unit));
 
 /** A difference with its sign always shown: +15 V, −220 Ω; `zero` is the sign put before 0 ("" unless asked). */
 export function formatDifference(value: number, unit: QuantityUnit, zero = ''): string {
@@ -18,4 +19,5 @@ export function formatDifference(value: number, unit: QuantityUnit, zero = ''): 
 }
 
 /** A fixed number of decimals with a sign: (12.34, 1) → "+12.3", (−0.5, 1) → "−0.5". */
-export const formatSignedFixed = (value: number, decimals: number): string => `${signOf(value)}${Math.abs(value).toFixed(decimals)}`;
+export const formatSignedFixed = (value: number, decimals: number): string =>
+  `${signOf(value)}${Math.abs(value).toFixed(decimals)}`;

@@ -21,7 +21,8 @@ export function minorDigits(currency: string): number {
 }
 
 export function money(amount: number, currency: string): Money {
-  if (!Number.isSafeInteger(amount)) throw new RangeError(`A money amount must be a whole number of minor units, got ${amount}.`);
+  if (!Number.isSafeInteger(amount))
+    throw new RangeError(`A money amount must be a whole number of minor units, got ${amount}.`);
   return { amount, currency };
 }
 

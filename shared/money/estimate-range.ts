@@ -16,8 +16,16 @@ export interface EstimateRange {
 
 /** The range an owner is quoted: each bound priced and taxed by the same rules as an invoice. */
 export function estimateRange(lines: readonly RangedLine[], currency: string, tax: TaxRule | null): EstimateRange {
-  const low = totals(lines.map((l) => l.low), currency, tax);
-  const high = totals(lines.map((l) => l.high), currency, tax);
+  const low = totals(
+    lines.map((l) => l.low),
+    currency,
+    tax,
+  );
+  const high = totals(
+    lines.map((l) => l.high),
+    currency,
+    tax,
+  );
   return {
     low: low.gross,
     high: high.gross,

@@ -3,7 +3,14 @@ import { amountLeft, invoiceStatus, notDue, type InvoiceFigures } from './invoic
 
 // Worked examples of the workshop's own rule (common practice, no source): a refund returns money and does not
 // reopen what was settled; a void document or a credit note asks for nothing.
-const deposit = (over: Partial<InvoiceFigures> = {}): InvoiceFigures => ({ kind: 'deposit', voided: false, due: 5000, paid: 0, refunded: 0, ...over });
+const deposit = (over: Partial<InvoiceFigures> = {}): InvoiceFigures => ({
+  kind: 'deposit',
+  voided: false,
+  due: 5000,
+  paid: 0,
+  refunded: 0,
+  ...over,
+});
 
 describe('invoiceStatus and amountLeft', () => {
   it('when nothing has been paid, then the whole amount is left and it is open', () => {

@@ -1,5 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import { estimateRange, formatMoney, isCurrencyCode, lineNet, minorDigits, parseMoney, shareOf, sumMoney, taxOn, totals, type TaxRule } from './index';
+import {
+  estimateRange,
+  formatMoney,
+  isCurrencyCode,
+  lineNet,
+  minorDigits,
+  parseMoney,
+  shareOf,
+  sumMoney,
+  taxOn,
+  totals,
+  type TaxRule,
+} from './index';
 
 // Sources named beside each check. HMRC: "VAT Notice 700: the VAT guide", section 17.5 "Rounding" (from memory):
 // VAT on an invoice's total may be rounded down to the whole penny; VAT worked per line is rounded to the nearest
@@ -64,7 +76,10 @@ describe('tax rounding follows the authority the workshop names', () => {
 
   it('rounds VAT per line to the nearest penny, a half up (HMRC VAT Notice 700 §17.5, from memory)', () => {
     // 99 p × 20% = 19.8 p → 20 p; £1.99 × 20% = 39.8 p → 40 p; invoice VAT 60 p (the invoice-total rule gives 59 p)
-    const lines = [{ kind: 'fixed', quantity: 1, unitAmount: 99 }, { kind: 'fixed', quantity: 1, unitAmount: 199 }] as const;
+    const lines = [
+      { kind: 'fixed', quantity: 1, unitAmount: 99 },
+      { kind: 'fixed', quantity: 1, unitAmount: 199 },
+    ] as const;
     expect(totals(lines, 'GBP', ukVatPerLine).tax.amount).toBe(60);
     expect(totals(lines, 'GBP', ukVatPerLine).lines.map((l) => l.tax.amount)).toEqual([20, 40]);
     expect(totals(lines, 'GBP', ukVat).tax.amount).toBe(59);
@@ -114,7 +129,15 @@ describe('line totals', () => {
   });
 
   it('never adds two currencies', () => {
-    expect(() => sumMoney([{ amount: 1, currency: 'GBP' }, { amount: 1, currency: 'EUR' }], 'GBP')).toThrow(/EUR/);
+    expect(() =>
+      sumMoney(
+        [
+          { amount: 1, currency: 'GBP' },
+          { amount: 1, currency: 'EUR' },
+        ],
+        'GBP',
+      ),
+    ).toThrow(/EUR/);
   });
 });
 
@@ -124,13 +147,22 @@ describe('estimate ranges', () => {
     // low  £80 + £12 = £92 + £18.40 = £110.40; high £160 + £18 = £178 + £35.60 = £213.60
     const range = estimateRange(
       [
-        { low: { kind: 'labour', minutes: 120, hourlyRate: 4000 }, high: { kind: 'labour', minutes: 240, hourlyRate: 4000 } },
-        { low: { kind: 'part', cost: 1000, markupBasisPoints: 2000 }, high: { kind: 'part', cost: 1500, markupBasisPoints: 2000 } },
+        {
+          low: { kind: 'labour', minutes: 120, hourlyRate: 4000 },
+          high: { kind: 'labour', minutes: 240, hourlyRate: 4000 },
+        },
+        {
+          low: { kind: 'part', cost: 1000, markupBasisPoints: 2000 },
+          high: { kind: 'part', cost: 1500, markupBasisPoints: 2000 },
+        },
       ],
       'GBP',
       ukVat,
     );
     expect([range.low.amount, range.high.amount]).toEqual([11040, 21360]);
-    expect(range.lines.map((l) => [l.low.amount, l.high.amount])).toEqual([[8000, 16000], [1200, 1800]]);
+    expect(range.lines.map((l) => [l.low.amount, l.high.amount])).toEqual([
+      [8000, 16000],
+      [1200, 1800],
+    ]);
   });
 });

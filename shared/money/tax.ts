@@ -26,7 +26,8 @@ export interface TaxRule {
 
 /** Tax on a net amount in minor units, rounded as stated. */
 export function taxOn(netMinor: number, rateBasisPoints: number, rounding: Rounding): number {
-  if (!Number.isSafeInteger(rateBasisPoints) || rateBasisPoints < 0) throw new RangeError('A tax rate is whole basis points, 0 or more.');
+  if (!Number.isSafeInteger(rateBasisPoints) || rateBasisPoints < 0)
+    throw new RangeError('A tax rate is whole basis points, 0 or more.');
   return divideRounded(netMinor * rateBasisPoints, 10_000, rounding);
 }
 
@@ -38,5 +39,8 @@ export function taxForLines(netLines: readonly number[], rule: TaxRule | null): 
     return { perLine, total: perLine.reduce((a, b) => a + b, 0) };
   }
   const net = netLines.reduce((a, b) => a + b, 0);
-  return { perLine: netLines.map(() => 0), total: taxOn(net, rule.rateBasisPoints, rule.rounding === 'invoice-down' ? 'down' : 'half-up') };
+  return {
+    perLine: netLines.map(() => 0),
+    total: taxOn(net, rule.rateBasisPoints, rule.rounding === 'invoice-down' ? 'down' : 'half-up'),
+  };
 }

@@ -8,7 +8,10 @@ const password = z
   .min(PASSWORD_MIN, `Use at least ${PASSWORD_MIN} characters; a few unrelated words make a strong password`)
   .max(200, 'Use at most 200 characters')
   // Tabs, line breaks, NUL and other control characters cannot be typed reliably, and some stores cut at NUL.
-  .refine((p) => !/\p{Cc}/u.test(p), 'Use letters, digits, spaces and punctuation only: no tabs, line breaks or other control characters');
+  .refine(
+    (p) => !/\p{Cc}/u.test(p),
+    'Use letters, digits, spaces and punctuation only: no tabs, line breaks or other control characters',
+  );
 
 export const signUpSchema = z.object({
   name: z.string().trim().min(1, 'Enter your name as others should see it').max(100),

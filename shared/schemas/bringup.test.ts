@@ -11,7 +11,11 @@ describe('prePowerMissing', () => {
 
   it('when every item is done, not applicable with a reason or waived with a reason, then nothing is missing', () => {
     const items = prePowerItems.map((item, i) =>
-      i === 0 ? { item, status: 'waived' as const, reason: 'Tap fixed at 240 V' } : i === 1 ? { item, status: 'not-applicable' as const, reason: 'No filter capacitors' } : { item, status: 'done' as const, reason: '' },
+      i === 0
+        ? { item, status: 'waived' as const, reason: 'Tap fixed at 240 V' }
+        : i === 1
+          ? { item, status: 'not-applicable' as const, reason: 'No filter capacitors' }
+          : { item, status: 'done' as const, reason: '' },
     );
     expect(prePowerMissing(items)).toEqual([]);
   });
@@ -27,7 +31,9 @@ describe('prePowerMissing', () => {
 
 describe('prePowerCheckInputSchema', () => {
   it('refuses "not applicable" without a reason and accepts "done" without one', () => {
-    expect(prePowerCheckInputSchema.safeParse({ item: 'discharge-method', status: 'not-applicable' }).success).toBe(false);
+    expect(prePowerCheckInputSchema.safeParse({ item: 'discharge-method', status: 'not-applicable' }).success).toBe(
+      false,
+    );
     expect(prePowerCheckInputSchema.safeParse({ item: 'discharge-method', status: 'done' }).success).toBe(true);
   });
 });

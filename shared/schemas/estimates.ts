@@ -11,10 +11,18 @@ export const moneySchema = z.object({ amount: z.number().int(), currency: z.stri
 export const isTimeZone = (name: string): boolean => name.length > 0 && isKnownTimeZone(name);
 
 const minor = z.number().int('must be whole minor units (pence, cents)').min(0).max(100_000_000);
-const minutes = z.number().int('must be whole minutes').min(0).max(100 * 60 * 10);
+const minutes = z
+  .number()
+  .int('must be whole minutes')
+  .min(0)
+  .max(100 * 60 * 10);
 
 export const workshopSettingsSchema = z.object({
-  currency: z.string().trim().toUpperCase().refine(isCurrencyCode, 'must be an ISO 4217 currency code such as GBP or EUR'),
+  currency: z
+    .string()
+    .trim()
+    .toUpperCase()
+    .refine(isCurrencyCode, 'must be an ISO 4217 currency code such as GBP or EUR'),
   labourRate: minor,
   partsMarkupBasisPoints: z.number().int().min(0).max(100_000),
   taxName: z.string().trim().min(1).max(40),
@@ -23,7 +31,11 @@ export const workshopSettingsSchema = z.object({
   taxRounding: z.enum(taxRoundings),
   estimateApprovalRequired: z.boolean(),
   /** Printed before every invoice number, e.g. "CL-" for CL-42; letters, digits, "-", "/" and "." only. */
-  invoicePrefix: z.string().trim().max(12).regex(/^[A-Za-z0-9./-]*$/, 'use letters, digits, "-", "/" or "." only'),
+  invoicePrefix: z
+    .string()
+    .trim()
+    .max(12)
+    .regex(/^[A-Za-z0-9./-]*$/, 'use letters, digits, "-", "/" or "." only'),
   /** IANA time zone for dates on documents the workshop e-mails. */
   timeZone: z.string().trim().max(64).refine(isTimeZone, 'must be an IANA time zone such as Europe/London'),
 });
@@ -47,7 +59,9 @@ const orderedMessage = { message: 'the low bound must not exceed the high bound'
 export const estimateLineInputSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('labour'), description, low: minutes, high: minutes }).refine(ordered, orderedMessage),
   z.object({ kind: z.literal('part'), description, low: minor, high: minor }).refine(ordered, orderedMessage),
-  z.object({ kind: z.literal('extra'), description, extra: z.enum(estimateExtras), low: minor, high: minor }).refine(ordered, orderedMessage),
+  z
+    .object({ kind: z.literal('extra'), description, extra: z.enum(estimateExtras), low: minor, high: minor })
+    .refine(ordered, orderedMessage),
 ]);
 export type EstimateLineInput = z.infer<typeof estimateLineInputSchema>;
 
@@ -84,15 +98,17 @@ export const estimateSchema = z.object({
   decision: z.enum(estimateDecisions).nullable(),
   decidedByName: z.string().nullable(),
   decidedAt: z.string().nullable(),
-  lines: z.array(z.object({
-    id: z.number(),
-    kind: z.enum(estimateLineKinds),
-    description: z.string(),
-    extra: z.enum(estimateExtras).nullable(),
-    minutesLow: z.number().nullable(),
-    minutesHigh: z.number().nullable(),
-    low: moneySchema,
-    high: moneySchema,
-  })),
+  lines: z.array(
+    z.object({
+      id: z.number(),
+      kind: z.enum(estimateLineKinds),
+      description: z.string(),
+      extra: z.enum(estimateExtras).nullable(),
+      minutesLow: z.number().nullable(),
+      minutesHigh: z.number().nullable(),
+      low: moneySchema,
+      high: moneySchema,
+    }),
+  ),
 });
 export type Estimate = z.infer<typeof estimateSchema>;

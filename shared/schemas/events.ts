@@ -1,12 +1,41 @@
 import { z } from 'zod';
 
 /** The history of a restoration: kinds of event (also the `event_kind` database enum), the timeline and the bench's activity. */
-export const timelineKinds = ['photo-added', 'finding-opened', 'finding-status', 'question-asked', 'question-resolved', 'part-fitted', 'stage-changed', 'measurement-out',
-  'safety-test', 'safety-override', 'soak-session', 'report-sent',
-  'intake-checked', 'pre-power-set', 'pre-power-signed', 'pre-power-voided', 'bringup-step',
-  'help-requested', 'help-link-made', 'help-link-withdrawn', 'cause-checked', 'reading-requested', 'reading-answered',
-  'estimate-sent', 'estimate-decided', 'labour-logged', 'invoice-issued', 'invoice-voided',
-  'payment-received', 'payment-refunded', 'sheet-added', 'reference-marked', 'mismatch-noted'] as const;
+export const timelineKinds = [
+  'photo-added',
+  'finding-opened',
+  'finding-status',
+  'question-asked',
+  'question-resolved',
+  'part-fitted',
+  'stage-changed',
+  'measurement-out',
+  'safety-test',
+  'safety-override',
+  'soak-session',
+  'report-sent',
+  'intake-checked',
+  'pre-power-set',
+  'pre-power-signed',
+  'pre-power-voided',
+  'bringup-step',
+  'help-requested',
+  'help-link-made',
+  'help-link-withdrawn',
+  'cause-checked',
+  'reading-requested',
+  'reading-answered',
+  'estimate-sent',
+  'estimate-decided',
+  'labour-logged',
+  'invoice-issued',
+  'invoice-voided',
+  'payment-received',
+  'payment-refunded',
+  'sheet-added',
+  'reference-marked',
+  'mismatch-noted',
+] as const;
 export const timelineQuerySchema = z.object({ kind: z.enum(timelineKinds).optional() });
 
 export const timelineEventSchema = z.object({

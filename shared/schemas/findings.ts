@@ -1,7 +1,19 @@
 import { z } from 'zod';
 
 export const shapes = ['pin', 'circle', 'rect', 'arrow', 'freehand'] as const;
-export const kinds = ['overheated', 'cracked', 'leaking', 'corroded', 'dry-joint', 'missing', 'modified', 'noisy-control', 'hazard', 'test-point', 'note'] as const;
+export const kinds = [
+  'overheated',
+  'cracked',
+  'leaking',
+  'corroded',
+  'dry-joint',
+  'missing',
+  'modified',
+  'noisy-control',
+  'hazard',
+  'test-point',
+  'note',
+] as const;
 export const severities = ['hazard', 'fault', 'wear', 'cosmetic', 'info'] as const;
 export const statuses = ['observed', 'suspected', 'confirmed', 'repaired', 'verified', 'dismissed'] as const;
 export type Shape = (typeof shapes)[number];
@@ -10,12 +22,32 @@ export type Severity = (typeof severities)[number];
 export type Status = (typeof statuses)[number];
 
 export const kindLabels: Record<Kind, string> = {
-  overheated: 'Overheated', cracked: 'Cracked or broken', leaking: 'Leaking or bulging', corroded: 'Corroded', 'dry-joint': 'Dry joint',
-  missing: 'Missing', modified: 'Modified', 'noisy-control': 'Noisy control', hazard: 'Safety hazard', 'test-point': 'Test point', note: 'Note',
+  overheated: 'Overheated',
+  cracked: 'Cracked or broken',
+  leaking: 'Leaking or bulging',
+  corroded: 'Corroded',
+  'dry-joint': 'Dry joint',
+  missing: 'Missing',
+  modified: 'Modified',
+  'noisy-control': 'Noisy control',
+  hazard: 'Safety hazard',
+  'test-point': 'Test point',
+  note: 'Note',
 };
-export const severityLabels: Record<Severity, string> = { hazard: 'Hazard', fault: 'Fault', wear: 'Wear', cosmetic: 'Cosmetic', info: 'Info' };
+export const severityLabels: Record<Severity, string> = {
+  hazard: 'Hazard',
+  fault: 'Fault',
+  wear: 'Wear',
+  cosmetic: 'Cosmetic',
+  info: 'Info',
+};
 export const statusLabels: Record<Status, string> = {
-  observed: 'Observed', suspected: 'Suspected', confirmed: 'Confirmed', repaired: 'Repaired', verified: 'Verified', dismissed: 'Dismissed',
+  observed: 'Observed',
+  suspected: 'Suspected',
+  confirmed: 'Confirmed',
+  repaired: 'Repaired',
+  verified: 'Verified',
+  dismissed: 'Dismissed',
 };
 
 /** A point in normalised image coordinates: 0..1 of the upright image's width and height. */
@@ -23,14 +55,24 @@ export const pointSchema = z.object({ x: z.number().min(0).max(1), y: z.number()
 export type NormalisedPoint = z.infer<typeof pointSchema>;
 
 /** How many points each shape takes: pin 1; circle centre + a point on the rim; rect and arrow 2; freehand 2..2000. */
-const pointCounts: Record<Shape, [number, number]> = { pin: [1, 1], circle: [2, 2], rect: [2, 2], arrow: [2, 2], freehand: [2, 2000] };
+const pointCounts: Record<Shape, [number, number]> = {
+  pin: [1, 1],
+  circle: [2, 2],
+  rect: [2, 2],
+  arrow: [2, 2],
+  freehand: [2, 2000],
+};
 
 export const geometrySchema = z
   .object({ shape: z.enum(shapes), points: z.array(pointSchema).min(1) })
   .superRefine((g, ctx) => {
     const [min, max] = pointCounts[g.shape];
     if (g.points.length < min || g.points.length > max)
-      ctx.addIssue({ code: 'custom', path: ['points'], message: `a ${g.shape} takes ${min === max ? min : `${min} to ${max}`} points, not ${g.points.length}` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['points'],
+        message: `a ${g.shape} takes ${min === max ? min : `${min} to ${max}`} points, not ${g.points.length}`,
+      });
   });
 
 /** Component reference as the schematic prints it: C27, R20, V5, T1, VR2, S1a… */

@@ -16,7 +16,10 @@ export const helpRequestPatchSchema = z.object({
   measurementIds: z.array(bodyIdSchema).max(500).optional(),
   photoIds: z.array(bodyIdSchema).max(100).optional(),
   /** Symptoms of the checklist whose causes and results go with the request. */
-  symptomIds: z.array(z.enum(symptomIds as [string, ...string[]])).max(50).optional(),
+  symptomIds: z
+    .array(z.enum(symptomIds as [string, ...string[]]))
+    .max(50)
+    .optional(),
 });
 export type HelpRequestPatch = z.infer<typeof helpRequestPatchSchema>;
 
@@ -36,24 +39,83 @@ export const helpReplyParamsSchema = z.object({ replyId: idSchema });
 /** A link's token: 32 random bytes in base64url are 43 characters; anything else is simply not found. */
 export const helpTokenParamsSchema = z.object({ token: z.string().min(1).max(200) });
 
-export interface HelpSet { make: string; model: string; year: number | null; chassis: string | null; mains: string | null; equipmentKind: string; liveChassis: boolean }
-export interface HelpValve { position: string; type: string }
-export interface HelpPart { id: number; componentRef: string; action: string; old: string; new: string; fittedAt: string | null }
+export interface HelpSet {
+  make: string;
+  model: string;
+  year: number | null;
+  chassis: string | null;
+  mains: string | null;
+  equipmentKind: string;
+  liveChassis: boolean;
+}
+export interface HelpValve {
+  position: string;
+  type: string;
+}
+export interface HelpPart {
+  id: number;
+  componentRef: string;
+  action: string;
+  old: string;
+  new: string;
+  fittedAt: string | null;
+}
 export interface HelpReading {
-  id: number; location: string; quantity: string; expected: string; tolerance: string; reading: string; conditions: string;
-  meter: string; chartMeter: string; verdict: 'within' | 'marginal' | 'out' | 'unknown'; verdictReason: string; measuredAt: string;
+  id: number;
+  location: string;
+  quantity: string;
+  expected: string;
+  tolerance: string;
+  reading: string;
+  conditions: string;
+  meter: string;
+  chartMeter: string;
+  verdict: 'within' | 'marginal' | 'out' | 'unknown';
+  verdictReason: string;
+  measuredAt: string;
 }
 export interface HelpPin {
-  id: number; number: number; shape: Shape; points: NormalisedPoint[]; title: string; componentRef: string; kind: string; severity: string; status: string;
+  id: number;
+  number: number;
+  shape: Shape;
+  points: NormalisedPoint[];
+  title: string;
+  componentRef: string;
+  kind: string;
+  severity: string;
+  status: string;
   /** A signed URL of the close-up of the marked spot; null when it could not be cut. */
   closeupUrl: string | null;
 }
 /** A symptom of the checklist with the results of its causes (causes, tests and sources come from shared/bench/symptoms). */
-export interface HelpChecklist { symptomId: string; checks: SymptomCheck[] }
-export interface HelpPhoto { id: number; caption: string; view: string; phase: string; width: number; height: number; url: string; thumbUrl: string; pins: HelpPin[] }
+export interface HelpChecklist {
+  symptomId: string;
+  checks: SymptomCheck[];
+}
+export interface HelpPhoto {
+  id: number;
+  caption: string;
+  view: string;
+  phase: string;
+  width: number;
+  height: number;
+  url: string;
+  thumbUrl: string;
+  pins: HelpPin[];
+}
 /** A part on the chassis that differs from the diagram, for a reference the request names. */
-export interface HelpMismatch { id: number; ref: string; line: string }
-export interface HelpReply { id: number; name: string; body: string; createdAt: string; approved: boolean }
+export interface HelpMismatch {
+  id: number;
+  ref: string;
+  line: string;
+}
+export interface HelpReply {
+  id: number;
+  name: string;
+  body: string;
+  createdAt: string;
+  approved: boolean;
+}
 
 /** The request as one reader may see it: the link's reader is judged like an owner (nothing unshared). */
 export interface HelpContent {
@@ -82,7 +144,22 @@ export interface HelpRequest extends HelpContent {
   symptomIds: string[];
   links: { id: number; expiresAt: string; revokedAt: string | null; createdAt: string }[];
 }
-export interface HelpRequestSummary { id: number; symptom: string; createdAt: string; pendingReplies: number }
-export interface HelpLinkCreated { url: string; token: string; expiresAt: string }
+export interface HelpRequestSummary {
+  id: number;
+  symptom: string;
+  createdAt: string;
+  pendingReplies: number;
+}
+export interface HelpLinkCreated {
+  url: string;
+  token: string;
+  expiresAt: string;
+}
 /** A request on the bench of a technician or mentor of its restoration. */
-export interface BenchHelpRequest { id: number; restorationId: number; set: string; symptom: string; createdAt: string }
+export interface BenchHelpRequest {
+  id: number;
+  restorationId: number;
+  set: string;
+  symptom: string;
+  createdAt: string;
+}

@@ -4,7 +4,11 @@ import { isTimeZone, moneySchema } from './estimates';
 import { idSchema } from './ids';
 
 export const invoiceKinds = ['deposit', 'final', 'credit-note'] as const;
-export const invoiceKindLabels: Record<(typeof invoiceKinds)[number], string> = { deposit: 'Deposit request', final: 'Invoice', 'credit-note': 'Credit note' };
+export const invoiceKindLabels: Record<(typeof invoiceKinds)[number], string> = {
+  deposit: 'Deposit request',
+  final: 'Invoice',
+  'credit-note': 'Credit note',
+};
 
 /** Body of POST /api/restorations/:id/deposits: an amount in minor units, or a share (basis points) of the latest approved estimate's high figure. */
 export const depositInputSchema = z.union([

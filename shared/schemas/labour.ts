@@ -9,16 +9,23 @@ const target = {
   note: z.string().trim().max(500).default(''),
   billable: z.boolean().default(true),
 };
-const oneTarget = (v: { findingId: number | null; stage: string | null }) => (v.findingId === null) !== (v.stage === null);
+const oneTarget = (v: { findingId: number | null; stage: string | null }) =>
+  (v.findingId === null) !== (v.stage === null);
 const oneTargetMessage = { message: 'tie the time to a finding or to a stage, not both', path: ['stage'] };
 
 /** Body of POST /api/restorations/:id/labour: typed hours, as whole minutes, on a day. */
-export const labourEntryInputSchema = z.object({
-  ...target,
-  minutes: z.number().int('must be whole minutes').min(1).max(24 * 60),
-  /** When the work was done (ISO instant); now when left out. */
-  workedAt: z.iso.datetime().optional(),
-}).refine(oneTarget, oneTargetMessage);
+export const labourEntryInputSchema = z
+  .object({
+    ...target,
+    minutes: z
+      .number()
+      .int('must be whole minutes')
+      .min(1)
+      .max(24 * 60),
+    /** When the work was done (ISO instant); now when left out. */
+    workedAt: z.iso.datetime().optional(),
+  })
+  .refine(oneTarget, oneTargetMessage);
 
 /** Body of POST /api/restorations/:id/labour/timer. */
 export const labourTimerInputSchema = z.object(target).refine(oneTarget, oneTargetMessage);

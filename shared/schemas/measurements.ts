@@ -77,7 +77,10 @@ export type Measurement = z.infer<typeof measurementSchema>;
 export const measurementListQuerySchema = z.object({ findingId: idSchema.optional() });
 
 export const valveSchema = z.object({
-  position: z.string().trim().regex(/^V\d{1,2}$/, 'Positions are V1, V2, …'),
+  position: z
+    .string()
+    .trim()
+    .regex(/^V\d{1,2}$/, 'Positions are V1, V2, …'),
   type: z.string().trim().min(1, 'Enter the type printed on the valve').max(20),
   notes: z.string().trim().max(200).default(''),
 });

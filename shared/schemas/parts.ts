@@ -7,11 +7,20 @@ export const partActions = ['replaced', 'restuffed', 'kept-original', 'removed']
 export const partStates = ['planned', 'ordered', 'fitted'] as const;
 export const mainsPositions = ['none', 'across-line', 'line-to-chassis'] as const;
 export const partActionLabels: Record<(typeof partActions)[number], string> = {
-  replaced: 'Replaced', restuffed: 'Restuffed into the original case', 'kept-original': 'Kept original', removed: 'Removed',
+  replaced: 'Replaced',
+  restuffed: 'Restuffed into the original case',
+  'kept-original': 'Kept original',
+  removed: 'Removed',
 };
-export const partStateLabels: Record<(typeof partStates)[number], string> = { planned: 'Planned', ordered: 'Ordered', fitted: 'Fitted' };
+export const partStateLabels: Record<(typeof partStates)[number], string> = {
+  planned: 'Planned',
+  ordered: 'Ordered',
+  fitted: 'Fitted',
+};
 export const mainsPositionLabels: Record<(typeof mainsPositions)[number], string> = {
-  none: 'Not on the mains', 'across-line': 'Across the mains (X)', 'line-to-chassis': 'Mains to chassis (Y)',
+  none: 'Not on the mains',
+  'across-line': 'Across the mains (X)',
+  'line-to-chassis': 'Mains to chassis (Y)',
 };
 
 const fields = {
@@ -80,8 +89,11 @@ export type Part = z.infer<typeof partSchema>;
  * dates are UTC.
  */
 export const partsCsvQuerySchema = z.object({
-  currency: z.string().regex(/^[A-Z]{3}$/).refine(isCurrencyCode, 'Not a known currency').optional(),
+  currency: z
+    .string()
+    .regex(/^[A-Z]{3}$/)
+    .refine(isCurrencyCode, 'Not a known currency')
+    .optional(),
   timeZone: z.string().max(64).refine(isKnownTimeZone, 'Not a known time zone').optional(),
 });
 export type PartsCsvQuery = z.infer<typeof partsCsvQuerySchema>;
-

@@ -9,10 +9,18 @@ export type PaymentMethod = (typeof paymentMethods)[number];
 export const paymentStatuses = ['pending', 'succeeded', 'failed'] as const;
 export const paymentKinds = ['payment', 'refund'] as const;
 
-export const paymentMethodLabels: Record<PaymentMethod, string> = { card: 'Card', transfer: 'Bank transfer', cash: 'Cash' };
+export const paymentMethodLabels: Record<PaymentMethod, string> = {
+  card: 'Card',
+  transfer: 'Bank transfer',
+  cash: 'Cash',
+};
 
 const positiveMoney = z.object({
-  amount: z.number().int('must be whole minor units (pence, cents)').min(1, 'must be more than nothing').max(100_000_000),
+  amount: z
+    .number()
+    .int('must be whole minor units (pence, cents)')
+    .min(1, 'must be more than nothing')
+    .max(100_000_000),
   currency: z.string().trim().toUpperCase().length(3, 'must be an ISO 4217 code such as GBP'),
 });
 

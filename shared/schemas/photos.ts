@@ -10,7 +10,13 @@ export type View = z.infer<typeof viewSchema>;
 export type Phase = z.infer<typeof phaseSchema>;
 
 export const viewLabels: Record<View, string> = {
-  top: 'Top', underside: 'Underside', rear: 'Rear', front: 'Front', detail: 'Detail', schematic: 'Schematic', other: 'Other',
+  top: 'Top',
+  underside: 'Underside',
+  rear: 'Rear',
+  front: 'Front',
+  detail: 'Detail',
+  schematic: 'Schematic',
+  other: 'Other',
 };
 export const phaseLabels: Record<Phase, string> = { before: 'Before', during: 'During', after: 'After' };
 

@@ -5,7 +5,11 @@ import type { SymptomCheckReading } from './symptom-checks';
 
 export const readingRequestKinds = ['reading', 'photo', 'note'] as const;
 export type ReadingRequestKind = (typeof readingRequestKinds)[number];
-export const readingRequestKindLabels: Record<ReadingRequestKind, string> = { reading: 'A reading', photo: 'A photo', note: 'A note' };
+export const readingRequestKindLabels: Record<ReadingRequestKind, string> = {
+  reading: 'A reading',
+  photo: 'A photo',
+  note: 'A note',
+};
 
 /** A mentor asks for something specific; it waits on the technician's bench until answered. */
 export const readingRequestInputSchema = z.object({
@@ -22,7 +26,10 @@ export const readingAnswerInputSchema = z
     photoId: bodyIdSchema.optional(),
     note: z.string().trim().max(2000).default(''),
   })
-  .refine((a) => a.reading || a.photoId || a.note, { message: 'answer with a reading, a photo or a note', path: ['note'] });
+  .refine((a) => a.reading || a.photoId || a.note, {
+    message: 'answer with a reading, a photo or a note',
+    path: ['note'],
+  });
 export type ReadingAnswerInput = z.input<typeof readingAnswerInputSchema>;
 
 export const readingRequestParamsSchema = z.object({ readingRequestId: idSchema });
@@ -42,4 +49,7 @@ export interface ReadingRequest {
   photo: { id: number; caption: string; thumbUrl: string } | null;
 }
 /** On a bench: the request with the set it is about. */
-export interface BenchReadingRequest extends ReadingRequest { set: string; mine: boolean }
+export interface BenchReadingRequest extends ReadingRequest {
+  set: string;
+  mine: boolean;
+}

@@ -15,7 +15,15 @@ export const stageLabels: Record<Stage, string> = {
   'on-hold': 'On hold',
 };
 
-export const equipmentKinds = ['radio', 'radiogram', 'amplifier', 'tape-recorder', 'television', 'test-gear', 'other'] as const;
+export const equipmentKinds = [
+  'radio',
+  'radiogram',
+  'amplifier',
+  'tape-recorder',
+  'television',
+  'test-gear',
+  'other',
+] as const;
 export const equipmentKindLabels: Record<(typeof equipmentKinds)[number], string> = {
   radio: 'Radio',
   radiogram: 'Radiogram',
@@ -49,15 +57,17 @@ const thisYear = new Date().getFullYear();
 const restorationFields = {
   make: z.string().trim().min(1, 'Enter the maker, as printed on the set').max(120),
   model: z.string().trim().min(1, 'Enter the model name or number').max(120),
-  year: z.preprocess(
-    (v) => (v === '' || v === undefined ? null : v),
-    z.coerce
-      .number('Enter a year, e.g. 1954')
-      .int('Enter a whole year, e.g. 1954')
-      .min(1900, 'Enter a year from 1900 on')
-      .max(thisYear, `Enter a year up to ${thisYear}`)
-      .nullable(),
-  ).optional(),
+  year: z
+    .preprocess(
+      (v) => (v === '' || v === undefined ? null : v),
+      z.coerce
+        .number('Enter a year, e.g. 1954')
+        .int('Enter a whole year, e.g. 1954')
+        .min(1900, 'Enter a year from 1900 on')
+        .max(thisYear, `Enter a year up to ${thisYear}`)
+        .nullable(),
+    )
+    .optional(),
   serial: optionalText(80),
   equipmentKind: z.enum(equipmentKinds),
   mainsSetting: optionalText(120),
@@ -68,30 +78,36 @@ const restorationFields = {
   hiddenPartsOriginal: z.boolean(),
   story: optionalText(8000),
   careNotes: optionalText(4000),
-  receivedOn: z.preprocess(
-    (v) => (v === '' ? null : v),
-    z.iso.date('Enter a date as YYYY-MM-DD').nullable(),
-  ).optional(),
+  receivedOn: z
+    .preprocess((v) => (v === '' ? null : v), z.iso.date('Enter a date as YYYY-MM-DD').nullable())
+    .optional(),
   stage: stageSchema,
   /** Who owns the set, as recorded at intake (they need no account). */
   ownerName: optionalText(120),
-  ownerEmail: z.preprocess(
-    (v) => (typeof v === 'string' && v.trim() === '' ? null : typeof v === 'string' ? v.trim() : v),
-    z.email('Enter an e-mail address, e.g. name@example.com').max(254).nullable(),
-  ).optional(),
+  ownerEmail: z
+    .preprocess(
+      (v) => (typeof v === 'string' && v.trim() === '' ? null : typeof v === 'string' ? v.trim() : v),
+      z.email('Enter an e-mail address, e.g. name@example.com').max(254).nullable(),
+    )
+    .optional(),
 };
 
 /** Body of POST /api/restorations: make and model are required, the rest can follow at intake. */
-export const restorationInputSchema = z.object({
-  ...restorationFields,
-  equipmentKind: restorationFields.equipmentKind.default('radio'),
-  liveChassis: restorationFields.liveChassis.default(false),
-  workLevel: restorationFields.workLevel.default('repair'),
-  hiddenPartsOriginal: restorationFields.hiddenPartsOriginal.default(false),
-  stage: restorationFields.stage.default('intake'),
-  /** Invite the owner (by `ownerEmail`) to follow the set, in the same step as the intake. */
-  inviteOwner: z.boolean().default(false),
-}).refine((v) => !v.inviteOwner || Boolean(v.ownerEmail), { path: ['ownerEmail'], message: "Enter the owner's e-mail to invite them" });
+export const restorationInputSchema = z
+  .object({
+    ...restorationFields,
+    equipmentKind: restorationFields.equipmentKind.default('radio'),
+    liveChassis: restorationFields.liveChassis.default(false),
+    workLevel: restorationFields.workLevel.default('repair'),
+    hiddenPartsOriginal: restorationFields.hiddenPartsOriginal.default(false),
+    stage: restorationFields.stage.default('intake'),
+    /** Invite the owner (by `ownerEmail`) to follow the set, in the same step as the intake. */
+    inviteOwner: z.boolean().default(false),
+  })
+  .refine((v) => !v.inviteOwner || Boolean(v.ownerEmail), {
+    path: ['ownerEmail'],
+    message: "Enter the owner's e-mail to invite them",
+  });
 export type RestorationInput = z.input<typeof restorationInputSchema>;
 
 /** Only what is sent changes: no defaults here, or a stage change would reset the other fields. */

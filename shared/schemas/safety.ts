@@ -80,7 +80,12 @@ export type SafetyTest = z.infer<typeof safetyTestSchema>;
 export const safetyOverrideInputSchema = z.object({
   reason: z.string().trim().min(10, 'Give the reason in a sentence (at least 10 characters).').max(2000),
 });
-export const safetyOverrideSchema = z.object({ id: z.number().int(), reason: z.string(), by: z.string().nullable(), at: z.string() });
+export const safetyOverrideSchema = z.object({
+  id: z.number().int(),
+  reason: z.string(),
+  by: z.string().nullable(),
+  at: z.string(),
+});
 export type SafetyOverride = z.infer<typeof safetyOverrideSchema>;
 
 /** GET /api/restorations/:id/safety-tests: every test (newest first) and whether the set may go to Returned. */
@@ -92,7 +97,10 @@ export const safetyStatusSchema = z.object({
 });
 export type SafetyStatus = z.infer<typeof safetyStatusSchema>;
 
-const celsius = z.preprocess((v) => (v === '' || v === undefined ? null : v), z.coerce.number().min(-40).max(200).nullable());
+const celsius = z.preprocess(
+  (v) => (v === '' || v === undefined ? null : v),
+  z.coerce.number().min(-40).max(200).nullable(),
+);
 /** Body of PATCH /api/restorations/:id/soak-sessions/running: stops the running session with what was seen. */
 export const soakStopSchema = z.object({
   ambientC: celsius.optional(),
@@ -122,11 +130,22 @@ export const soakSessionSchema = z.object({
   startedBy: z.string().nullable(),
 });
 export type SoakSession = z.infer<typeof soakSessionSchema>;
-export const soakLogSchema = z.object({ sessions: z.array(soakSessionSchema), totalHours: z.number(), running: soakSessionSchema.nullable() });
+export const soakLogSchema = z.object({
+  sessions: z.array(soakSessionSchema),
+  totalHours: z.number(),
+  running: soakSessionSchema.nullable(),
+});
 export type SoakLog = z.infer<typeof soakLogSchema>;
 
 export const handBackWarningSchema = z.object({
-  code: z.enum(['stage-before-testing', 'open-questions', 'no-passing-safety-test', 'safety-override', 'no-soak', 'no-owner']),
+  code: z.enum([
+    'stage-before-testing',
+    'open-questions',
+    'no-passing-safety-test',
+    'safety-override',
+    'no-soak',
+    'no-owner',
+  ]),
   message: z.string(),
 });
 export type HandBackWarning = z.infer<typeof handBackWarningSchema>;

@@ -6,8 +6,11 @@ import { componentRefSchema, pointSchema } from './findings';
 export const sheetKinds = ['circuit-diagram', 'layout', 'alignment-table', 'voltage-chart', 'parts-list'] as const;
 export type SheetKind = (typeof sheetKinds)[number];
 export const sheetKindLabels: Record<SheetKind, string> = {
-  'circuit-diagram': 'Circuit diagram', layout: 'Layout / component location', 'alignment-table': 'Alignment table',
-  'voltage-chart': 'Voltage chart', 'parts-list': 'Parts list',
+  'circuit-diagram': 'Circuit diagram',
+  layout: 'Layout / component location',
+  'alignment-table': 'Alignment table',
+  'voltage-chart': 'Voltage chart',
+  'parts-list': 'Parts list',
 };
 
 const formFlag = z
@@ -23,7 +26,11 @@ export const sheetUploadFieldsSchema = z.object({
 });
 
 export const sheetPagePatchSchema = z
-  .object({ kind: z.enum(sheetKinds), title: z.string().trim().max(200, 'Keep the title under 200 characters'), ownerVisible: z.boolean() })
+  .object({
+    kind: z.enum(sheetKinds),
+    title: z.string().trim().max(200, 'Keep the title under 200 characters'),
+    ownerVisible: z.boolean(),
+  })
   .partial();
 export type SheetPagePatch = z.infer<typeof sheetPagePatchSchema>;
 
@@ -45,14 +52,21 @@ export const sheetPageSchema = z.object({
 export type SheetPage = z.infer<typeof sheetPageSchema>;
 
 /** The answer to an upload: the sheet and its pages. */
-export const sheetSchema = z.object({ id: z.number().int(), restorationId: z.number().int(), contentType: z.string(), pages: z.array(sheetPageSchema) });
+export const sheetSchema = z.object({
+  id: z.number().int(),
+  restorationId: z.number().int(),
+  contentType: z.string(),
+  pages: z.array(sheetPageSchema),
+});
 export type Sheet = z.infer<typeof sheetSchema>;
 
 /**
  * A reference as the diagram prints it (the findings' own rule: C27, R20, V5, T1, VR2, S1a), required here and
  * upper-cased, so references link whatever case they were typed in.
  */
-export const markRefSchema = componentRefSchema.min(1, 'give the reference, e.g. R23').transform((ref) => ref.toUpperCase());
+export const markRefSchema = componentRefSchema
+  .min(1, 'give the reference, e.g. R23')
+  .transform((ref) => ref.toUpperCase());
 
 export const referenceShapes = ['pin', 'rect'] as const;
 
@@ -69,7 +83,11 @@ export const referenceMarkInputSchema = z
     if ((m.sheetPageId === undefined) === (m.photoId === undefined))
       ctx.addIssue({ code: 'custom', path: ['sheetPageId'], message: 'mark either a sheet page or a photo' });
     if (m.points.length !== (m.shape === 'pin' ? 1 : 2))
-      ctx.addIssue({ code: 'custom', path: ['points'], message: `a ${m.shape} takes ${m.shape === 'pin' ? 1 : 2} points` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['points'],
+        message: `a ${m.shape} takes ${m.shape === 'pin' ? 1 : 2} points`,
+      });
   });
 export type ReferenceMarkInput = z.input<typeof referenceMarkInputSchema>;
 
@@ -105,7 +123,10 @@ export const referenceMarkParamsSchema = z.object({ markId: idSchema });
 export const mismatchKinds = ['value-differs', 'unlisted-part', 'misprint', 'other'] as const;
 export type MismatchKind = (typeof mismatchKinds)[number];
 export const mismatchKindLabels: Record<MismatchKind, string> = {
-  'value-differs': 'Different value fitted', 'unlisted-part': 'Part not on the diagram', misprint: 'Misprint on the sheet', other: 'Other difference',
+  'value-differs': 'Different value fitted',
+  'unlisted-part': 'Part not on the diagram',
+  misprint: 'Misprint on the sheet',
+  other: 'Other difference',
 };
 
 const shortText = (max: number) => z.string().trim().max(max, `Keep it under ${max} characters`);
@@ -119,11 +140,20 @@ export const mismatchNoteInputSchema = z
     note: shortText(2000).default(''),
     ownerVisible: z.boolean().default(false),
   })
-  .refine((m) => m.diagramSays || m.chassisHas || m.note, { path: ['note'], message: 'say what differs: what the diagram says, what is fitted, or a note' });
+  .refine((m) => m.diagramSays || m.chassisHas || m.note, {
+    path: ['note'],
+    message: 'say what differs: what the diagram says, what is fitted, or a note',
+  });
 export type MismatchNoteInput = z.input<typeof mismatchNoteInputSchema>;
 /** A patch has no defaults (decision 15). */
 export const mismatchNotePatchSchema = z
-  .object({ kind: z.enum(mismatchKinds), diagramSays: shortText(200), chassisHas: shortText(200), note: shortText(2000), ownerVisible: z.boolean() })
+  .object({
+    kind: z.enum(mismatchKinds),
+    diagramSays: shortText(200),
+    chassisHas: shortText(200),
+    note: shortText(2000),
+    ownerVisible: z.boolean(),
+  })
   .partial();
 export type MismatchNotePatch = z.infer<typeof mismatchNotePatchSchema>;
 
@@ -148,4 +178,6 @@ export const mismatchLine = (m: Pick<MismatchNote, 'ref' | 'kind' | 'diagramSays
     m.diagramSays && `the diagram says ${m.diagramSays}`,
     m.chassisHas && `the chassis has ${m.chassisHas}`,
     m.note,
-  ].filter(Boolean).join('; ');
+  ]
+    .filter(Boolean)
+    .join('; ');

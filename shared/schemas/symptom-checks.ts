@@ -5,7 +5,11 @@ import { measurementInputSchema } from './measurements';
 
 export const causeResults = ['ruled-out', 'confirmed', 'inconclusive'] as const;
 export type CauseResult = (typeof causeResults)[number];
-export const causeResultLabels: Record<CauseResult, string> = { 'ruled-out': 'Ruled out', confirmed: 'Confirmed', inconclusive: 'Not settled' };
+export const causeResultLabels: Record<CauseResult, string> = {
+  'ruled-out': 'Ruled out',
+  confirmed: 'Confirmed',
+  inconclusive: 'Not settled',
+};
 
 export const symptomCheckParamsSchema = z.object({
   id: idSchema,
@@ -25,7 +29,14 @@ export const symptomCheckInputSchema = z.object({
 });
 export type SymptomCheckInput = z.input<typeof symptomCheckInputSchema>;
 
-export interface SymptomCheckReading { id: number; location: string; reading: string; expected: string; verdict: 'within' | 'marginal' | 'out' | 'unknown'; verdictReason: string }
+export interface SymptomCheckReading {
+  id: number;
+  location: string;
+  reading: string;
+  expected: string;
+  verdict: 'within' | 'marginal' | 'out' | 'unknown';
+  verdictReason: string;
+}
 export interface SymptomCheck {
   symptomId: string;
   causeId: string;

@@ -27,10 +27,16 @@ export function AppShell() {
   }
   return (
     <div className="flex min-h-dvh flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-panel focus:p-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:bg-panel focus:p-2"
+      >
         Skip to content
       </a>
-      <header className="border-b border-rule bg-panel/90 backdrop-blur print:hidden" onKeyDown={(e) => e.key === 'Escape' && closeMenu()}>
+      <header
+        className="border-b border-rule bg-panel/90 backdrop-blur print:hidden"
+        onKeyDown={(e) => e.key === 'Escape' && closeMenu()}
+      >
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-2 px-4 py-2">
           <NavLink to="/" className="mr-3 flex items-center gap-2" aria-label="Gridleak, the bench">
             <Logo />
@@ -52,7 +58,10 @@ export function AppShell() {
           >
             Menu
           </button>
-          <div id={menuId} className={`${menuOpen ? 'flex' : 'hidden'} w-full flex-col gap-2 pb-2 sm:flex sm:w-auto sm:flex-1 sm:flex-row sm:items-center sm:pb-0`}>
+          <div
+            id={menuId}
+            className={`${menuOpen ? 'flex' : 'hidden'} w-full flex-col gap-2 pb-2 sm:flex sm:w-auto sm:flex-1 sm:flex-row sm:items-center sm:pb-0`}
+          >
             <nav aria-label="Main" className="flex flex-col gap-1 sm:flex-1 sm:flex-row sm:items-center">
               {signedIn && (
                 <>
@@ -80,8 +89,8 @@ export function AppShell() {
       </main>
       <footer className="border-t border-rule px-4 py-4 text-center text-xs text-ink-soft print:hidden">
         <p>
-          Valve sets carry lethal voltages. Gridleak's figures are aids, not certification; follow local electrical codes and
-          licensed practice.
+          Valve sets carry lethal voltages. Gridleak's figures are aids, not certification; follow local electrical
+          codes and licensed practice.
         </p>
         {meta.data?.devMail && (
           <Link to="/dev/mail" className="mt-1 inline-block underline">

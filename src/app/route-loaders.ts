@@ -28,17 +28,22 @@ function start<T, K extends QueryKey>(options: EnsureQueryDataOptions<T, Error, 
  * refused. When this tab saw the session signed in lately, the data starts together with the sign-in check
  * instead of a round trip later (`probablySignedIn`).
  */
-const loader = (begin: Start) => ({ params }: LoaderFunctionArgs) => {
-  const id = Number(params.id);
-  if (!Number.isInteger(id) || id <= 0) return null;
-  if (probablySignedIn()) {
-    start(meQueryOptions());
-    begin(id, params);
-  } else {
-    void queryClient.ensureQueryData(meQueryOptions()).then((me) => me && begin(id, params), () => {});
-  }
-  return null;
-};
+const loader =
+  (begin: Start) =>
+  ({ params }: LoaderFunctionArgs) => {
+    const id = Number(params.id);
+    if (!Number.isInteger(id) || id <= 0) return null;
+    if (probablySignedIn()) {
+      start(meQueryOptions());
+      begin(id, params);
+    } else {
+      void queryClient.ensureQueryData(meQueryOptions()).then(
+        (me) => me && begin(id, params),
+        () => {},
+      );
+    }
+    return null;
+  };
 
 /** Asks the browser for an image now, so the markup canvas finds it in the cache. */
 function preloadImage(url: string) {
@@ -68,8 +73,11 @@ export const markupLoader = loader((id, params) => {
   start(meQueryOptions());
   start(membersQueryOptions(id));
   if (Number.isInteger(photoId) && photoId > 0) start(photoFindingsQueryOptions(photoId));
-  void queryClient.ensureQueryData(photosQueryOptions(id)).then((photos) => {
-    const photo = photos.find((p) => p.id === photoId);
-    if (photo) preloadImage(photo.urls.display);
-  }, () => {});
+  void queryClient.ensureQueryData(photosQueryOptions(id)).then(
+    (photos) => {
+      const photo = photos.find((p) => p.id === photoId);
+      if (photo) preloadImage(photo.urls.display);
+    },
+    () => {},
+  );
 });

@@ -2,7 +2,16 @@ import { createBrowserRouter } from 'react-router';
 import { Loading } from '../components/states';
 import { AppShell } from './app-shell';
 import { RequireSignIn } from './require-sign-in';
-import { findingsLoader, historyLoader, markupLoader, partsLoader, peopleLoader, photosLoader, readingsLoader, restorationLoader } from './route-loaders';
+import {
+  findingsLoader,
+  historyLoader,
+  markupLoader,
+  partsLoader,
+  peopleLoader,
+  photosLoader,
+  readingsLoader,
+  restorationLoader,
+} from './route-loaders';
 import { RouteError } from './routes/route-error';
 
 /** A lazily loaded route module's named component (keeps each page out of the main chunk). */
@@ -45,26 +54,55 @@ export const router = createBrowserRouter([
             lazy: page(() => import('./routes/restoration-layout'), 'RestorationLayout'),
             children: [
               { index: true, lazy: page(() => import('./routes/restoration'), 'RestorationRoute') },
-              { path: 'photos', handle: wideScreen, loader: photosLoader, lazy: page(() => import('./routes/photos'), 'PhotosRoute') },
-              { path: 'photos/:photoId', handle: wideScreen, loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
-              { path: 'photos/:photoId/findings/:findingId', handle: wideScreen, loader: markupLoader, lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute') },
-              { path: 'findings', loader: findingsLoader, lazy: page(() => import('./routes/findings'), 'FindingsRoute') },
+              {
+                path: 'photos',
+                handle: wideScreen,
+                loader: photosLoader,
+                lazy: page(() => import('./routes/photos'), 'PhotosRoute'),
+              },
+              {
+                path: 'photos/:photoId',
+                handle: wideScreen,
+                loader: markupLoader,
+                lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute'),
+              },
+              {
+                path: 'photos/:photoId/findings/:findingId',
+                handle: wideScreen,
+                loader: markupLoader,
+                lazy: page(() => import('./routes/photo-markup'), 'PhotoMarkupRoute'),
+              },
+              {
+                path: 'findings',
+                loader: findingsLoader,
+                lazy: page(() => import('./routes/findings'), 'FindingsRoute'),
+              },
               { path: 'bring-up', lazy: page(() => import('./routes/bringup'), 'BringupRoute') },
-              { path: 'readings', loader: readingsLoader, lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute') },
+              {
+                path: 'readings',
+                loader: readingsLoader,
+                lazy: page(() => import('./routes/measurements'), 'MeasurementsRoute'),
+              },
               { path: 'parts', loader: partsLoader, lazy: page(() => import('./routes/parts'), 'PartsRoute') },
               { path: 'safety', lazy: page(() => import('./routes/safety'), 'SafetyRoute') },
               { path: 'money', lazy: page(() => import('./routes/money'), 'MoneyRoute') },
               { path: 'history', loader: historyLoader, lazy: page(() => import('./routes/history'), 'HistoryRoute') },
               { path: 'sheets', lazy: page(() => import('./routes/sheets'), 'SheetsRoute') },
               { path: 'sheets/:pageId', lazy: page(() => import('./routes/sheet-page'), 'SheetPageRoute') },
-              { path: 'sheets/chassis/:photoId', lazy: page(() => import('./routes/sheet-page'), 'ChassisReferencesRoute') },
+              {
+                path: 'sheets/chassis/:photoId',
+                lazy: page(() => import('./routes/sheet-page'), 'ChassisReferencesRoute'),
+              },
               { path: 'references/:ref', lazy: page(() => import('./routes/reference'), 'ReferenceRoute') },
               { path: 'people', loader: peopleLoader, lazy: page(() => import('./routes/people'), 'PeopleRoute') },
               { path: 'help', lazy: page(() => import('./routes/help'), 'HelpRoute') },
             ],
           },
           { path: 'calculators', lazy: page(() => import('./routes/calculators'), 'CalculatorsRoute') },
-          { path: 'workshop/settings', lazy: page(() => import('./routes/workshop-settings'), 'WorkshopSettingsRoute') },
+          {
+            path: 'workshop/settings',
+            lazy: page(() => import('./routes/workshop-settings'), 'WorkshopSettingsRoute'),
+          },
         ],
       },
       { path: '*', lazy: page(() => import('./routes/not-found'), 'NotFoundRoute') },

@@ -11,7 +11,17 @@ function Asker({ onResult }: { onResult: (yes: boolean) => void }) {
   const { confirm, dialog } = useConfirm();
   return (
     <div>
-      <button type="button" onClick={() => void confirm({ title: 'Remove Ida Kettle?', consequence: 'She can no longer open this restoration.', confirmLabel: 'Remove member', danger: true }).then(onResult)}>
+      <button
+        type="button"
+        onClick={() =>
+          void confirm({
+            title: 'Remove Ida Kettle?',
+            consequence: 'She can no longer open this restoration.',
+            confirmLabel: 'Remove member',
+            danger: true,
+          }).then(onResult)
+        }
+      >
         Remove
       </button>
       <button type="button">Elsewhere on the page</button>

@@ -11,14 +11,21 @@ export interface ConfirmRequest {
   danger?: boolean;
 }
 
-const focusable = 'button:not([disabled]), [href], input:not([disabled]), select, textarea, [tabindex]:not([tabindex="-1"])';
+const focusable =
+  'button:not([disabled]), [href], input:not([disabled]), select, textarea, [tabindex]:not([tabindex="-1"])';
 
 /**
  * A modal confirmation on the native `<dialog>` (`showModal`: the page behind is inert). Focus starts on the
  * safe answer, Tab and Shift+Tab go round inside, Escape answers no, and focus goes back where it was.
  * Shown while `request` is set; keep the same `request` object while it is open.
  */
-export function ConfirmDialog({ request, onAnswer }: { request: ConfirmRequest | undefined; onAnswer: (yes: boolean) => void }) {
+export function ConfirmDialog({
+  request,
+  onAnswer,
+}: {
+  request: ConfirmRequest | undefined;
+  onAnswer: (yes: boolean) => void;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   const cancelRef = useRef<HTMLButtonElement>(null);
   const titleId = useId();
@@ -83,7 +90,11 @@ export function ConfirmDialog({ request, onAnswer }: { request: ConfirmRequest |
         <button ref={cancelRef} type="button" className={buttonClass('quiet')} onClick={() => onAnswer(false)}>
           {request.cancelLabel ?? 'Cancel'}
         </button>
-        <button type="button" className={buttonClass(request.danger ? 'danger' : 'primary')} onClick={() => onAnswer(true)}>
+        <button
+          type="button"
+          className={buttonClass(request.danger ? 'danger' : 'primary')}
+          onClick={() => onAnswer(true)}
+        >
           {request.confirmLabel}
         </button>
       </div>

@@ -9,7 +9,11 @@ import { findingPath, type Finding } from '../../shared/schemas/findings';
 export function ReferenceFindingNotice({ first, children }: { first: Finding; children?: ReactNode }) {
   const ref = first.componentRef.trim().toUpperCase();
   return (
-    <div role="group" aria-label={`${ref} already has a finding`} className="space-y-2 rounded-lg border border-glow bg-glow-soft px-3 py-2 text-sm">
+    <div
+      role="group"
+      aria-label={`${ref} already has a finding`}
+      className="space-y-2 rounded-lg border border-glow bg-glow-soft px-3 py-2 text-sm"
+    >
       <p role="status">
         {ref} already has finding #{first.number}, “{first.title}”.{' '}
         <Link to={findingPath(first)} className="font-semibold text-glow-strong underline">

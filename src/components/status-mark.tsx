@@ -38,14 +38,22 @@ export function SeverityShape({ severity, className = 'h-4 w-4' }: { severity: S
   const hollow = shape === 'ring';
   return (
     <svg viewBox="0 0 16 16" aria-hidden="true" className={`shrink-0 ${className}`}>
-      <path d={shapePaths[shape]} fill={hollow ? 'none' : 'currentColor'} stroke="currentColor" strokeWidth={hollow ? 2 : 1} strokeLinejoin="round" />
+      <path
+        d={shapePaths[shape]}
+        fill={hollow ? 'none' : 'currentColor'}
+        stroke="currentColor"
+        strokeWidth={hollow ? 2 : 1}
+        strokeLinejoin="round"
+      />
     </svg>
   );
 }
 
 export function SeverityMark({ severity }: { severity: Severity }) {
   return (
-    <span className={`inline-flex items-center gap-1.5 whitespace-nowrap ${severity === 'hazard' ? 'font-semibold text-danger' : ''}`}>
+    <span
+      className={`inline-flex items-center gap-1.5 whitespace-nowrap ${severity === 'hazard' ? 'font-semibold text-danger' : ''}`}
+    >
       <SeverityShape severity={severity} />
       {severityMarker(severity).label}
     </span>

@@ -7,7 +7,10 @@ import { ConfirmDialog, type ConfirmRequest } from './confirm-dialog';
  */
 export function useConfirm() {
   const [open, setOpen] = useState<{ request: ConfirmRequest; resolve: (yes: boolean) => void }>();
-  const confirm = useCallback((request: ConfirmRequest) => new Promise<boolean>((resolve) => setOpen({ request, resolve })), []);
+  const confirm = useCallback(
+    (request: ConfirmRequest) => new Promise<boolean>((resolve) => setOpen({ request, resolve })),
+    [],
+  );
   const answer = (yes: boolean) => {
     open?.resolve(yes);
     setOpen(undefined);

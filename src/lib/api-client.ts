@@ -37,7 +37,11 @@ export async function api<T>(path: string, init: Init<T> = {}): Promise<T> {
 }
 
 /** One page of a paged list (see shared/schemas/pagination.ts) and the cursor of the next, null on the last. */
-export async function apiPage<T>(path: string, cursor?: string | null, item?: z.ZodType<T>): Promise<{ items: T[]; next: string | null }> {
+export async function apiPage<T>(
+  path: string,
+  cursor?: string | null,
+  item?: z.ZodType<T>,
+): Promise<{ items: T[]; next: string | null }> {
   const url = cursor ? `${path}${path.includes('?') ? '&' : '?'}cursor=${encodeURIComponent(cursor)}` : path;
   const { body, headers } = await apiWithHeaders<T[]>(url);
   if (item) body.forEach((one) => checkAnswer(url, one, item));
@@ -71,7 +75,11 @@ async function apiWithHeaders<T>(path: string, init: Init<T> = {}): Promise<{ bo
     response = await fetch(`/api${path}`, {
       credentials: 'same-origin',
       ...rest,
-      headers: { Accept: 'application/json', ...(json !== undefined ? { 'Content-Type': 'application/json' } : {}), ...headers },
+      headers: {
+        Accept: 'application/json',
+        ...(json !== undefined ? { 'Content-Type': 'application/json' } : {}),
+        ...headers,
+      },
       body: json !== undefined ? JSON.stringify(json) : rest.body,
     });
   } catch {
@@ -81,7 +89,8 @@ async function apiWithHeaders<T>(path: string, init: Init<T> = {}): Promise<{ bo
   const body: unknown = await response.json().catch(() => undefined);
   if (!response.ok) {
     const parsed = apiErrorSchema.safeParse(body);
-    if (parsed.success) throw new ApiError(response.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.details);
+    if (parsed.success)
+      throw new ApiError(response.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.details);
     throw new ApiError(response.status, 'unknown', `The server answered ${response.status}.`);
   }
   return { body: checkAnswer(path, body, schema), headers: response.headers };

@@ -67,7 +67,8 @@ describe('statusStyle', () => {
   });
 
   it('when a glyph is drawn on its status colour, then the ink reaches a 4.5:1 WCAG contrast ratio', () => {
-    for (const [status, style] of styles) expect(contrastRatio(style.ink, style.colour), status).toBeGreaterThanOrEqual(4.5);
+    for (const [status, style] of styles)
+      expect(contrastRatio(style.ink, style.colour), status).toBeGreaterThanOrEqual(4.5);
   });
 
   it('when a status is shown, then its label is the product’s word for it', () => {

@@ -48,7 +48,13 @@ const statusPalette: Record<Status, { colour: string; glyph: string }> = {
  * `GREYSCALE_MARGIN`. Confirmed (vermillion) sits too near repaired and verified in luminance, so it is told
  * apart by its glyph — and by hue, vermillion against blue and bluish green being a pair the palette keeps apart.
  */
-export const GREYSCALE_DISTINCT_STATUSES: readonly Status[] = ['observed', 'suspected', 'repaired', 'verified', 'dismissed'];
+export const GREYSCALE_DISTINCT_STATUSES: readonly Status[] = [
+  'observed',
+  'suspected',
+  'repaired',
+  'verified',
+  'dismissed',
+];
 /** Minimum difference in relative luminance (0..1) claimed for the statuses above. */
 export const GREYSCALE_MARGIN = 0.1;
 
@@ -83,7 +89,8 @@ export function contrastRatio(a: string, b: string): number {
   return (light + 0.05) / (dark + 0.05);
 }
 
-const inkOn = (colour: string): string => (contrastRatio(colour, '#000000') >= contrastRatio(colour, '#FFFFFF') ? '#000000' : '#FFFFFF');
+const inkOn = (colour: string): string =>
+  contrastRatio(colour, '#000000') >= contrastRatio(colour, '#FFFFFF') ? '#000000' : '#FFFFFF';
 
 export function statusStyle(status: Status): StatusStyle {
   const { colour, glyph } = statusPalette[status];

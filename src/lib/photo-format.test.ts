@@ -17,7 +17,9 @@ describe('photo formatting', () => {
   });
 
   it('when a photo is named, then view, phase and caption are given in words', () => {
-    expect(photoLabel({ view: 'underside', phase: 'during', caption: 'C15 replaced' })).toBe('Underside, during: C15 replaced');
+    expect(photoLabel({ view: 'underside', phase: 'during', caption: 'C15 replaced' })).toBe(
+      'Underside, during: C15 replaced',
+    );
     expect(photoLabel({ view: 'rear', phase: 'after', caption: '' })).toBe('Rear, after');
   });
 

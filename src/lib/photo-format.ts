@@ -2,7 +2,14 @@ import { statuses, statusLabels, type Status } from '../../shared/schemas/findin
 import { phaseLabels, viewLabels, type Photo } from '../../shared/schemas/photos';
 
 /** What the server accepts (never SVG: it can carry script). HEIC/AVIF come from phones. */
-export const acceptedTypes = ['image/jpeg', 'image/png', 'image/webp', 'image/heic', 'image/heif', 'image/avif'] as const;
+export const acceptedTypes = [
+  'image/jpeg',
+  'image/png',
+  'image/webp',
+  'image/heic',
+  'image/heif',
+  'image/avif',
+] as const;
 const acceptedExtensions = /\.(jpe?g|png|webp|heic|heif|avif)$/i;
 
 /** Some systems give HEIC files no MIME type, so the file name decides when the type is blank. */
@@ -27,7 +34,9 @@ export function photoLabel(photo: Pick<Photo, 'view' | 'phase' | 'caption'>): st
 export function formatDateTime(iso: string | null): string | null {
   if (!iso) return null;
   const date = new Date(iso);
-  return Number.isNaN(date.getTime()) ? null : date.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+  return Number.isNaN(date.getTime())
+    ? null
+    : date.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 }
 
 /** Pixel size of the ~400 px thumbnail, kept to the photo's aspect so the grid does not jump as images arrive. */
@@ -38,7 +47,9 @@ export function thumbSize(photo: Pick<Photo, 'width' | 'height'>, longEdge = 400
 }
 
 /** A photo's findings by status, in the order work moves through them, leaving out statuses with none. */
-export function findingCountList(counts: Partial<Record<Status, number>> | undefined): { status: Status; count: number }[] {
+export function findingCountList(
+  counts: Partial<Record<Status, number>> | undefined,
+): { status: Status; count: number }[] {
   return statuses.flatMap((status) => {
     const count = counts?.[status] ?? 0;
     return count > 0 ? [{ status, count }] : [];

@@ -23,7 +23,11 @@ function parseBody(text: string): unknown {
 export function postForm<T>(
   path: string,
   form: FormData,
-  { onProgress, signal, fallback = {} }: { onProgress?: (p: FormProgress) => void; signal?: AbortSignal; fallback?: Record<number, string> } = {},
+  {
+    onProgress,
+    signal,
+    fallback = {},
+  }: { onProgress?: (p: FormProgress) => void; signal?: AbortSignal; fallback?: Record<number, string> } = {},
 ): Promise<T> {
   return new Promise((resolve, reject) => {
     const aborted = () => new ApiError(0, 'aborted', 'Upload cancelled.');
@@ -43,7 +47,14 @@ export function postForm<T>(
       }
       reject(new ApiError(xhr.status, 'unknown', fallback[xhr.status] ?? `The server answered ${xhr.status}.`));
     };
-    xhr.onerror = () => reject(new ApiError(0, 'network', 'The upload was cut off. Check the connection and retry; a very large file may be refused.'));
+    xhr.onerror = () =>
+      reject(
+        new ApiError(
+          0,
+          'network',
+          'The upload was cut off. Check the connection and retry; a very large file may be refused.',
+        ),
+      );
     xhr.onabort = () => reject(aborted());
     signal?.addEventListener('abort', () => xhr.abort(), { once: true });
     xhr.send(form);

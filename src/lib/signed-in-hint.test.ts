@@ -6,7 +6,11 @@ import { followSignedIn, probablySignedIn } from './signed-in-hint';
 beforeEach(() => {
   const items = new Map<string, string>();
   vi.stubGlobal('window', {
-    sessionStorage: { getItem: (k: string) => items.get(k) ?? null, setItem: (k: string, v: string) => items.set(k, v), removeItem: (k: string) => items.delete(k) },
+    sessionStorage: {
+      getItem: (k: string) => items.get(k) ?? null,
+      setItem: (k: string, v: string) => items.set(k, v),
+      removeItem: (k: string) => items.delete(k),
+    },
   });
 });
 afterEach(() => vi.unstubAllGlobals());

@@ -16,8 +16,17 @@ export type Reply = { status: number; body?: unknown; headers?: Record<string, s
 
 /** The code the server sends with each status when nothing more specific applies (see server/http/errors.ts). */
 const usualCode: Record<number, ApiErrorCode> = {
-  400: 'bad_request', 401: 'unauthorized', 403: 'forbidden', 404: 'not_found', 409: 'conflict', 410: 'gone',
-  413: 'too_large', 415: 'unsupported_type', 429: 'too_many_requests', 500: 'internal', 503: 'mail_unavailable',
+  400: 'bad_request',
+  401: 'unauthorized',
+  403: 'forbidden',
+  404: 'not_found',
+  409: 'conflict',
+  410: 'gone',
+  413: 'too_large',
+  415: 'unsupported_type',
+  429: 'too_many_requests',
+  500: 'internal',
+  503: 'mail_unavailable',
 };
 
 /** An error answer as the server writes it; throws when the code is not one the server sends. */
@@ -29,8 +38,12 @@ export const notFound = (): Reply => apiError(404, 'Not found.');
 
 /** A fetch Response for a reply (204 carries no body). */
 export function toResponse(reply: Reply): Response {
-  if (reply.status === 204 || reply.body === undefined) return new Response(null, { status: reply.status, headers: reply.headers });
-  return new Response(JSON.stringify(reply.body), { status: reply.status, headers: { 'Content-Type': 'application/json', ...reply.headers } });
+  if (reply.status === 204 || reply.body === undefined)
+    return new Response(null, { status: reply.status, headers: reply.headers });
+  return new Response(JSON.stringify(reply.body), {
+    status: reply.status,
+    headers: { 'Content-Type': 'application/json', ...reply.headers },
+  });
 }
 
 /**
@@ -44,7 +57,11 @@ export function fakeApi(answer: (call: Call) => Reply | Response | undefined | P
   /** The request headers of each call, in the same order as `calls`. */
   const headers: Record<string, string>[] = [];
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
-    const call = { method: init.method ?? 'GET', path: String(input).replace(/^\/api/, ''), body: typeof init.body === 'string' ? JSON.parse(init.body) as unknown : undefined };
+    const call = {
+      method: init.method ?? 'GET',
+      path: String(input).replace(/^\/api/, ''),
+      body: typeof init.body === 'string' ? (JSON.parse(init.body) as unknown) : undefined,
+    };
     calls.push(call);
     headers.push(Object.fromEntries([...new Headers(init.headers).entries()].map(([k, v]) => [k.toLowerCase(), v])));
     const reply = await answer(call);

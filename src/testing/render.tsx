@@ -5,13 +5,17 @@ import type { ReactNode } from 'react';
 import { MemoryRouter } from 'react-router';
 
 /** A fresh query cache for one test: nothing shared between tests, and no retries, so an error shows at once. */
-export const testQueryClient = () => new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+export const testQueryClient = () =>
+  new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
 
 /**
  * The one render helper for component tests: `ui` inside a fresh query cache and, unless `router: false`, a memory
  * router at `path` (links and navigation work). Returns the cache with Testing Library's result.
  */
-export function renderWithQueries(ui: ReactNode, { router = true, path = '/' }: { router?: boolean; path?: string } = {}) {
+export function renderWithQueries(
+  ui: ReactNode,
+  { router = true, path = '/' }: { router?: boolean; path?: string } = {},
+) {
   const client = testQueryClient();
   const tree = router ? <MemoryRouter initialEntries={[path]}>{ui}</MemoryRouter> : ui;
   return { client, ...render(<QueryClientProvider client={client}>{tree}</QueryClientProvider>) };

@@ -12,8 +12,10 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 const mails = async (): Promise<CapturedMail[]> => (await t.request().get('/api/dev/mail?limit=500')).body;
-const signUp = (email: string, password: string, name = 'Someone') => anonymous(t.app).post('/api/auth/sign-up').send({ name, email, password });
-const signIn = (email: string, password: string) => anonymous(t.app).post('/api/auth/sign-in').send({ email, password });
+const signUp = (email: string, password: string, name = 'Someone') =>
+  anonymous(t.app).post('/api/auth/sign-up').send({ name, email, password });
+const signIn = (email: string, password: string) =>
+  anonymous(t.app).post('/api/auth/sign-in').send({ email, password });
 
 /** Waits until `n` captured messages to the address match the subject; returns them oldest first. */
 async function mailsTo(address: string, subject: RegExp, n: number): Promise<CapturedMail[]> {
@@ -44,7 +46,13 @@ describe('when someone signs up with another person’s address first', () => {
     expect((await signIn(email, attacker)).status).toBe(401);
     expect((await signIn(email, owner)).status).toBe(200);
     // The first sign-up's link was spent by the confirmation.
-    expect((await anonymous(t.app).post('/api/auth/confirm-email').send({ token: tokenFrom(first!, 'confirm-email') })).status).toBe(410);
+    expect(
+      (
+        await anonymous(t.app)
+          .post('/api/auth/confirm-email')
+          .send({ token: tokenFrom(first!, 'confirm-email') })
+      ).status,
+    ).toBe(410);
   });
 
   it('then a link confirms the password chosen in its own sign-up, even after a later sign-up changed it', async () => {
@@ -54,13 +62,21 @@ describe('when someone signs up with another person’s address first', () => {
     await mailsTo(email, /Confirm/, 2);
     await signUp(email, later, 'Not the owner either');
     const [, ownersLink, latest] = await mailsTo(email, /Confirm/, 3);
-    const confirmed = await anonymous(t.app).post('/api/auth/confirm-email').send({ token: tokenFrom(ownersLink!, 'confirm-email') });
+    const confirmed = await anonymous(t.app)
+      .post('/api/auth/confirm-email')
+      .send({ token: tokenFrom(ownersLink!, 'confirm-email') });
     expect(confirmed.status).toBe(200);
     expect(confirmed.body.name).toBe('Real Owner');
     expect((await signIn(email, owner)).status).toBe(200);
     expect((await signIn(email, later)).status).toBe(401);
     expect((await signIn(email, attacker)).status).toBe(401);
-    expect((await anonymous(t.app).post('/api/auth/confirm-email').send({ token: tokenFrom(latest!, 'confirm-email') })).status).toBe(410);
+    expect(
+      (
+        await anonymous(t.app)
+          .post('/api/auth/confirm-email')
+          .send({ token: tokenFrom(latest!, 'confirm-email') })
+      ).status,
+    ).toBe(410);
   });
 });
 
@@ -72,7 +88,9 @@ describe('when someone signed up first with an address that is then invited', ()
     await signUp(email, attacker, 'Not the owner');
     const [squatterLink] = await mailsTo(email, /Confirm/, 1);
     const tech = await signedIn(t.app, techUser);
-    expect((await tech.post(`/api/restorations/${restorationId}/invitations`).send({ email, role: 'owner' })).status).toBe(201);
+    expect(
+      (await tech.post(`/api/restorations/${restorationId}/invitations`).send({ email, role: 'owner' })).status,
+    ).toBe(201);
     const [invitation] = await mailsTo(email, /invited you/, 1);
     const joined = await anonymous(t.app)
       .post('/api/auth/sign-up')
@@ -81,7 +99,13 @@ describe('when someone signed up first with an address that is then invited', ()
     expect(joined.body).toMatchObject({ status: 'signed-in', user: { name: 'Invited Owner' }, restorationId });
     expect((await signIn(email, attacker)).status).toBe(401);
     expect((await signIn(email, owner)).status).toBe(200);
-    expect((await anonymous(t.app).post('/api/auth/confirm-email').send({ token: tokenFrom(squatterLink!, 'confirm-email') })).status).toBe(410);
+    expect(
+      (
+        await anonymous(t.app)
+          .post('/api/auth/confirm-email')
+          .send({ token: tokenFrom(squatterLink!, 'confirm-email') })
+      ).status,
+    ).toBe(410);
   });
 });
 
@@ -93,10 +117,24 @@ describe('when one link of an account is used', () => {
     await anonymous(t.app).post('/api/auth/password-reset').send({ email });
     await anonymous(t.app).post('/api/auth/password-reset').send({ email });
     const [reset1, reset2] = await mailsTo(email, /Reset/, 2);
-    const done = await anonymous(t.app).post('/api/auth/password-reset/confirm').send({ token: tokenFrom(reset2!, 'reset-password'), password: owner });
+    const done = await anonymous(t.app)
+      .post('/api/auth/password-reset/confirm')
+      .send({ token: tokenFrom(reset2!, 'reset-password'), password: owner });
     expect(done.status).toBe(200);
-    expect((await anonymous(t.app).post('/api/auth/password-reset/confirm').send({ token: tokenFrom(reset1!, 'reset-password'), password: later })).status).toBe(410);
-    expect((await anonymous(t.app).post('/api/auth/confirm-email').send({ token: tokenFrom(confirmation!, 'confirm-email') })).status).toBe(410);
+    expect(
+      (
+        await anonymous(t.app)
+          .post('/api/auth/password-reset/confirm')
+          .send({ token: tokenFrom(reset1!, 'reset-password'), password: later })
+      ).status,
+    ).toBe(410);
+    expect(
+      (
+        await anonymous(t.app)
+          .post('/api/auth/confirm-email')
+          .send({ token: tokenFrom(confirmation!, 'confirm-email') })
+      ).status,
+    ).toBe(410);
     expect((await signIn(email, owner)).status).toBe(200);
     expect((await signIn(email, attacker)).status).toBe(401);
   });
@@ -107,8 +145,20 @@ describe('when one link of an account is used', () => {
     const [confirmation] = await mailsTo(email, /Confirm/, 1);
     await anonymous(t.app).post('/api/auth/password-reset').send({ email });
     const [reset] = await mailsTo(email, /Reset/, 1);
-    expect((await anonymous(t.app).post('/api/auth/confirm-email').send({ token: tokenFrom(confirmation!, 'confirm-email') })).status).toBe(200);
-    expect((await anonymous(t.app).post('/api/auth/password-reset/confirm').send({ token: tokenFrom(reset!, 'reset-password'), password: later })).status).toBe(410);
+    expect(
+      (
+        await anonymous(t.app)
+          .post('/api/auth/confirm-email')
+          .send({ token: tokenFrom(confirmation!, 'confirm-email') })
+      ).status,
+    ).toBe(200);
+    expect(
+      (
+        await anonymous(t.app)
+          .post('/api/auth/password-reset/confirm')
+          .send({ token: tokenFrom(reset!, 'reset-password'), password: later })
+      ).status,
+    ).toBe(410);
     expect((await signIn(email, owner)).status).toBe(200);
   });
 });
@@ -134,10 +184,26 @@ describe('passwords', () => {
 
 describe('throttling sign-up and sign-in', () => {
   it('when one address signs up too often, or one IP signs up too many addresses, then the next is 429', async () => {
-    const app = await startTestApp({ throttle: { signInPerAccount: 5, signInPerIp: 50, resetPerAccount: 5, resetPerIp: 50, signUpPerAccount: 2, signUpPerIp: 4, windowSeconds: 60 } }, { trustProxy: '1' });
+    const app = await startTestApp(
+      {
+        throttle: {
+          signInPerAccount: 5,
+          signInPerIp: 50,
+          resetPerAccount: 5,
+          resetPerIp: 50,
+          signUpPerAccount: 2,
+          signUpPerIp: 4,
+          windowSeconds: 60,
+        },
+      },
+      { trustProxy: '1' },
+    );
     try {
       const send = (ip: string, email: string) =>
-        anonymous(app.app).post('/api/auth/sign-up').set('X-Forwarded-For', ip).send({ name: 'N', email, password: owner });
+        anonymous(app.app)
+          .post('/api/auth/sign-up')
+          .set('X-Forwarded-For', ip)
+          .send({ name: 'N', email, password: owner });
       expect((await send('198.51.100.1', 'again@example.test')).status).toBe(202);
       expect((await send('198.51.100.2', 'again@example.test')).status).toBe(202);
       expect((await send('198.51.100.3', 'again@example.test')).status).toBe(429);
@@ -149,27 +215,39 @@ describe('throttling sign-up and sign-in', () => {
   });
 
   it('when 20 wrong passwords arrive at once, then at most 5 are checked and the rest are refused unchecked', async () => {
-    const app = await startTestApp({ throttle: { signInPerAccount: 5, signInPerIp: 100, resetPerAccount: 5, resetPerIp: 50, windowSeconds: 60 } });
+    const app = await startTestApp({
+      throttle: { signInPerAccount: 5, signInPerIp: 100, resetPerAccount: 5, resetPerIp: 50, windowSeconds: 60 },
+    });
     try {
       const user = await createUser(app.db);
       const answers = await Promise.all(
-        Array.from({ length: 20 }, (_, i) => anonymous(app.app).post('/api/auth/sign-in').send({ email: user.email, password: `wrong guess ${i}` })),
+        Array.from({ length: 20 }, (_, i) =>
+          anonymous(app.app)
+            .post('/api/auth/sign-in')
+            .send({ email: user.email, password: `wrong guess ${i}` }),
+        ),
       );
       const statuses = answers.map((r) => r.status);
       // 401 means the hash was checked; 429 means the attempt was counted first and refused.
       expect(statuses.filter((s) => s === 401).length).toBeLessThanOrEqual(5);
       expect(statuses.filter((s) => s !== 401 && s !== 429)).toEqual([]);
-      expect((await anonymous(app.app).post('/api/auth/sign-in').send({ email: user.email, password: user.password })).status).toBe(429);
+      expect(
+        (await anonymous(app.app).post('/api/auth/sign-in').send({ email: user.email, password: user.password }))
+          .status,
+      ).toBe(429);
     } finally {
       await app.stop();
     }
   });
 
   it('when the right password follows a few wrong ones, then its point is given back and the count starts again', async () => {
-    const app = await startTestApp({ throttle: { signInPerAccount: 3, signInPerIp: 100, resetPerAccount: 5, resetPerIp: 50, windowSeconds: 60 } });
+    const app = await startTestApp({
+      throttle: { signInPerAccount: 3, signInPerIp: 100, resetPerAccount: 5, resetPerIp: 50, windowSeconds: 60 },
+    });
     try {
       const user = await createUser(app.db);
-      const attempt = (password: string) => anonymous(app.app).post('/api/auth/sign-in').send({ email: user.email, password });
+      const attempt = (password: string) =>
+        anonymous(app.app).post('/api/auth/sign-in').send({ email: user.email, password });
       for (let i = 0; i < 2; i++) expect((await attempt(`wrong ${i}`)).status).toBe(401);
       expect((await attempt(user.password)).status).toBe(200);
       for (let i = 0; i < 3; i++) expect((await attempt(`wrong again ${i}`)).status).toBe(401);

@@ -24,12 +24,16 @@ afterAll(() => t.stop());
 
 const strong = 'grid leak resistor drifted high';
 const mails = async () => (await t.request().get('/api/dev/mail')).body;
-const newSet = () => createRestoration(t.db, [{ userId: techUser.id, role: 'technician' }], { make: 'Farrowby', model: 'Kestrel' });
+const newSet = () =>
+  createRestoration(t.db, [{ userId: techUser.id, role: 'technician' }], { make: 'Farrowby', model: 'Kestrel' });
 async function invite(restorationId: number, email: string) {
-  expect((await tech.post(`/api/restorations/${restorationId}/invitations`).send({ email, role: 'mentor' })).status).toBe(201);
+  expect(
+    (await tech.post(`/api/restorations/${restorationId}/invitations`).send({ email, role: 'mentor' })).status,
+  ).toBe(201);
   return tokenFrom(await waitForMail(mails, email, /invited you/), 'invitations');
 }
-const memberCount = async (restorationId: number) => (await t.db.select({ n: count() }).from(memberships).where(eq(memberships.restorationId, restorationId)))[0]!.n;
+const memberCount = async (restorationId: number) =>
+  (await t.db.select({ n: count() }).from(memberships).where(eq(memberships.restorationId, restorationId)))[0]!.n;
 
 describe('when joining fails, the invitation link is not spent', () => {
   it('then accepting answers 500, nobody joins, and the same link works afterwards', async () => {
@@ -37,21 +41,34 @@ describe('when joining fails, the invitation link is not spent', () => {
     const guest = await createUser(t.db, { email: 'guest.mentor@example.test' });
     const token = await invite(set.id, guest.email);
     const agent = await signedIn(t.app, guest);
-    const failed = await whileFailing(t.db, 'memberships', 'insert', () => agent.post(`/api/invitations/${token}/accept`));
+    const failed = await whileFailing(t.db, 'memberships', 'insert', () =>
+      agent.post(`/api/invitations/${token}/accept`),
+    );
     expect(failed.status).toBe(500);
     expect(await memberCount(set.id)).toBe(1);
     const [row] = await t.db.select().from(invitations).where(eq(invitations.restorationId, set.id));
     expect(row!.acceptedAt).toBeNull();
-    expect((await agent.post(`/api/invitations/${token}/accept`)).body).toMatchObject({ restorationId: set.id, role: 'mentor' });
+    expect((await agent.post(`/api/invitations/${token}/accept`)).body).toMatchObject({
+      restorationId: set.id,
+      role: 'mentor',
+    });
   });
 
   it('then signing up from the link leaves no account, and signing up again with the same link works', async () => {
     const set = await newSet();
     const email = 'new.mentor.retry@example.test';
     const token = await invite(set.id, email);
-    const signUp = () => anonymous(t.app).post('/api/auth/sign-up').send({ name: 'New Mentor', email, password: strong, invitationToken: token });
+    const signUp = () =>
+      anonymous(t.app)
+        .post('/api/auth/sign-up')
+        .send({ name: 'New Mentor', email, password: strong, invitationToken: token });
     expect((await whileFailing(t.db, 'memberships', 'insert', signUp)).status).toBe(500);
-    expect(await t.db.select().from(users).where(sql`lower(${users.email}) = ${email}`)).toEqual([]);
+    expect(
+      await t.db
+        .select()
+        .from(users)
+        .where(sql`lower(${users.email}) = ${email}`),
+    ).toEqual([]);
     const retried = await signUp();
     expect(retried.status).toBe(201);
     expect(retried.body).toMatchObject({ status: 'signed-in', restorationId: set.id });
@@ -65,9 +82,14 @@ describe('when a password reset cannot end the other sessions', () => {
     const token = tokenFrom(await waitForMail(mails, person.email, /Reset/), 'reset-password');
     const confirm = () => anonymous(t.app).post('/api/auth/password-reset/confirm').send({ token, password: strong });
     expect((await whileFailing(t.db, 'sessions', 'delete', confirm)).status).toBe(500);
-    expect((await anonymous(t.app).post('/api/auth/sign-in').send({ email: person.email, password: FACTORY_PASSWORD })).status).toBe(200);
+    expect(
+      (await anonymous(t.app).post('/api/auth/sign-in').send({ email: person.email, password: FACTORY_PASSWORD }))
+        .status,
+    ).toBe(200);
     expect((await confirm()).status).toBe(200);
-    expect((await anonymous(t.app).post('/api/auth/sign-in').send({ email: person.email, password: strong })).status).toBe(200);
+    expect(
+      (await anonymous(t.app).post('/api/auth/sign-in').send({ email: person.email, password: strong })).status,
+    ).toBe(200);
   });
 });
 
@@ -83,7 +105,10 @@ async function closedPort(): Promise<number> {
 describe('when the mail server is down', () => {
   let down: ReturnType<typeof createApp>;
   beforeAll(async () => {
-    down = createApp({ ...t.deps, mailer: createMailer(`smtp://127.0.0.1:${await closedPort()}`, 'Gridleak <no-reply@gridleak.test>') });
+    down = createApp({
+      ...t.deps,
+      mailer: createMailer(`smtp://127.0.0.1:${await closedPort()}`, 'Gridleak <no-reply@gridleak.test>'),
+    });
   });
 
   it('then an invitation answers 503 with a message, creates nothing and the pending one stays valid', async () => {
@@ -93,8 +118,14 @@ describe('when the mail server is down', () => {
     const agent = await signedIn(down, techUser);
     const res = await agent.post(`/api/restorations/${set.id}/invitations`).send({ email, role: 'owner' });
     expect(res.status).toBe(503);
-    expect(res.body.error).toMatchObject({ code: 'mail_unavailable', message: expect.stringMatching(/could not send the e-mail/) });
-    const pending = await t.db.select().from(invitations).where(and(eq(invitations.restorationId, set.id), isNull(invitations.revokedAt)));
+    expect(res.body.error).toMatchObject({
+      code: 'mail_unavailable',
+      message: expect.stringMatching(/could not send the e-mail/),
+    });
+    const pending = await t.db
+      .select()
+      .from(invitations)
+      .where(and(eq(invitations.restorationId, set.id), isNull(invitations.revokedAt)));
     expect(pending.map((i) => i.role)).toEqual(['mentor']);
     expect((await anonymous(t.app).get(`/api/invitations/${first}`)).status).toBe(200);
 
@@ -105,9 +136,17 @@ describe('when the mail server is down', () => {
 
   it('then a sign-up answers 503 with a message and creates no account', async () => {
     const email = 'newcomer.smtp@example.test';
-    const res = await supertest(down).post('/api/auth/sign-up').set('Origin', TEST_ORIGIN).send({ name: 'Newcomer', email, password: strong });
+    const res = await supertest(down)
+      .post('/api/auth/sign-up')
+      .set('Origin', TEST_ORIGIN)
+      .send({ name: 'Newcomer', email, password: strong });
     expect(res.status).toBe(503);
     expect(res.body.error.code).toBe('mail_unavailable');
-    expect(await t.db.select().from(users).where(sql`lower(${users.email}) = ${email}`)).toEqual([]);
+    expect(
+      await t.db
+        .select()
+        .from(users)
+        .where(sql`lower(${users.email}) = ${email}`),
+    ).toEqual([]);
   });
 });

@@ -26,17 +26,28 @@ let id: number, bareId: number, photoId: number, findingId: number;
 beforeAll(async () => {
   t = await startTestApp();
   const [a, b] = await Promise.all([createUser(t.db), createUser(t.db)]);
-  id = (await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: b.id, role: 'mentor' }])).id;
+  id = (
+    await createRestoration(t.db, [
+      { userId: a.id, role: 'technician' },
+      { userId: b.id, role: 'mentor' },
+    ])
+  ).id;
   // The report embeds its photos' images; the photo row here has no stored object, so the preview is read on a set without photos.
   bareId = (await createRestoration(t.db, [{ userId: a.id, role: 'technician' }])).id;
   [tech, mentor] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b)]);
   photoId = await createPhotoRow(t.db, id, true);
-  const finding = await tech.post(`/api/photos/${photoId}/findings`).send({ shape: 'pin', points: [{ x: 0.5, y: 0.5 }], title: 'C27 leaking', componentRef: 'C27' });
+  const finding = await tech
+    .post(`/api/photos/${photoId}/findings`)
+    .send({ shape: 'pin', points: [{ x: 0.5, y: 0.5 }], title: 'C27 leaking', componentRef: 'C27' });
   findingId = finding.body.id;
   await tech.patch(`/api/findings/${findingId}`).send({ status: 'suspected', questionOpen: true });
   await mentor.post(`/api/findings/${findingId}/comments`).send({ body: 'Check the HT first', internal: true });
-  await tech.post(`/api/restorations/${id}/parts`).send({ componentRef: 'C27', originalRating: '0.022µF 350V', replacementRating: '0.022µF 630V' });
-  await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'R23 cathode', quantity: 'resistance', expected: '150', reading: '212', findingId });
+  await tech
+    .post(`/api/restorations/${id}/parts`)
+    .send({ componentRef: 'C27', originalRating: '0.022µF 350V', replacementRating: '0.022µF 630V' });
+  await tech
+    .post(`/api/restorations/${id}/measurements`)
+    .send({ location: 'R23 cathode', quantity: 'resistance', expected: '150', reading: '212', findingId });
 });
 afterAll(() => t.stop());
 
@@ -64,11 +75,14 @@ const answers: [string, () => string, z.ZodType][] = [
 ];
 
 describe('answers follow the shared schemas', () => {
-  it.each(answers)('when the technician reads %s, then the answer parses with its schema', async (_name, path, schema) => {
-    const res = await tech.get(path());
-    expect(res.status).toBe(200);
-    expect(schema.safeParse(res.body).error).toBeUndefined();
-  });
+  it.each(answers)(
+    'when the technician reads %s, then the answer parses with its schema',
+    async (_name, path, schema) => {
+      const res = await tech.get(path());
+      expect(res.status).toBe(200);
+      expect(schema.safeParse(res.body).error).toBeUndefined();
+    },
+  );
 
   it('when the mentor reads notifications and open questions, then they parse with their schemas', async () => {
     const notifications = await mentor.get('/api/notifications');

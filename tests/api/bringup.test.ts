@@ -19,20 +19,29 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 const newSet = async () =>
-  (await createRestoration(t.db, [{ userId: techId, role: 'technician' }, { userId: ownerId, role: 'owner' }, { userId: mentorId, role: 'mentor' }])).id;
+  (
+    await createRestoration(t.db, [
+      { userId: techId, role: 'technician' },
+      { userId: ownerId, role: 'owner' },
+      { userId: mentorId, role: 'mentor' },
+    ])
+  ).id;
 
 /** Every pre-power item done, except the isolation transformer (not applicable) and the limiter (waived). */
 async function completeChecklist(id: number) {
   for (const item of prePowerItems) {
     const body =
-      item === 'isolation-transformer' ? { item, status: 'not-applicable', reason: 'Mains transformer, earthed chassis' }
-      : item === 'current-limiter' ? { item, status: 'waived', reason: 'Lamp holder broken; brought up on the variable transformer alone' }
-      : { item, status: 'done' };
+      item === 'isolation-transformer'
+        ? { item, status: 'not-applicable', reason: 'Mains transformer, earthed chassis' }
+        : item === 'current-limiter'
+          ? { item, status: 'waived', reason: 'Lamp holder broken; brought up on the variable transformer alone' }
+          : { item, status: 'done' };
     expect((await tech.put(`/api/restorations/${id}/bringup/pre-power`).send(body)).status).toBe(200);
   }
 }
 
-const history = async (agent: Agent, id: number) => (await agent.get(`/api/restorations/${id}/events`)).body as TimelineEvent[];
+const history = async (agent: Agent, id: number) =>
+  (await agent.get(`/api/restorations/${id}/events`)).body as TimelineEvent[];
 
 describe('the first-power gate', () => {
   it('when the pre-power checklist is not signed off, then moving to Testing is refused with 409 saying what to do, and the stage stays', async () => {
@@ -48,10 +57,14 @@ describe('the first-power gate', () => {
 
   it('when a reading taken with power on is recorded before the sign-off, then it is refused with 409; a cold reading is not', async () => {
     const id = await newSet();
-    const hot = await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'HT', quantity: 'dc-voltage', expected: '250', reading: '262', powerOn: true });
+    const hot = await tech
+      .post(`/api/restorations/${id}/measurements`)
+      .send({ location: 'HT', quantity: 'dc-voltage', expected: '250', reading: '262', powerOn: true });
     expect(hot.status).toBe(409);
     expect(hot.body.error.message).toMatch(/before recording a reading taken with the set powered/);
-    const cold = await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'R23', quantity: 'resistance', expected: '150', reading: '212' });
+    const cold = await tech
+      .post(`/api/restorations/${id}/measurements`)
+      .send({ location: 'R23', quantity: 'resistance', expected: '150', reading: '212' });
     expect(cold.status).toBe(201);
     expect(cold.body.powerOn).toBe(false);
     // Marking a cold reading as powered afterwards goes through the same gate.
@@ -70,7 +83,9 @@ describe('the first-power gate', () => {
 
   it('when "not applicable" or "waived" has no reason, then it is refused with 400', async () => {
     const id = await newSet();
-    const res = await tech.put(`/api/restorations/${id}/bringup/pre-power`).send({ item: 'isolation-transformer', status: 'waived', reason: '  ' });
+    const res = await tech
+      .put(`/api/restorations/${id}/bringup/pre-power`)
+      .send({ item: 'isolation-transformer', status: 'waived', reason: '  ' });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/reason/);
   });
@@ -84,14 +99,22 @@ describe('the first-power gate', () => {
     expect(signed.body.prePower.missing).toEqual([]);
 
     expect((await tech.patch(`/api/restorations/${id}`).send({ stage: 'testing' })).status).toBe(200);
-    expect((await tech.post(`/api/restorations/${id}/measurements`).send({ location: 'HT', quantity: 'dc-voltage', reading: '262', powerOn: true })).status).toBe(201);
+    expect(
+      (
+        await tech
+          .post(`/api/restorations/${id}/measurements`)
+          .send({ location: 'HT', quantity: 'dc-voltage', reading: '262', powerOn: true })
+      ).status,
+    ).toBe(201);
 
     for (const agent of [tech, owner]) {
       const events = await history(agent, id);
       const waived = events.filter((e) => e.caution);
       expect(waived.map((e) => e.kind).sort()).toEqual(['pre-power-set', 'pre-power-signed']);
       expect(waived.every((e) => /waived/.test(e.summary) && /Lamp holder broken/.test(e.summary))).toBe(true);
-      expect(events.find((e) => e.kind === 'pre-power-set' && /Isolation transformer/.test(e.summary))?.caution).toBe(false);
+      expect(events.find((e) => e.kind === 'pre-power-set' && /Isolation transformer/.test(e.summary))?.caution).toBe(
+        false,
+      );
     }
   });
 
@@ -99,7 +122,9 @@ describe('the first-power gate', () => {
     const id = await newSet();
     await completeChecklist(id);
     await tech.post(`/api/restorations/${id}/bringup/pre-power/sign-off`);
-    const changed = await tech.put(`/api/restorations/${id}/bringup/pre-power`).send({ item: 'mains-tap', status: null });
+    const changed = await tech
+      .put(`/api/restorations/${id}/bringup/pre-power`)
+      .send({ item: 'mains-tap', status: null });
     expect(changed.body.prePower.signedOff).toBeNull();
     expect((await tech.patch(`/api/restorations/${id}`).send({ stage: 'testing' })).status).toBe(409);
     expect((await history(tech, id)).some((e) => e.kind === 'pre-power-voided' && e.caution)).toBe(true);
@@ -109,25 +134,56 @@ describe('the first-power gate', () => {
 describe('the staged power-up log', () => {
   it('when steps are logged, then they are numbered, their readings are ordinary powered readings with verdicts, and a stop is red', async () => {
     const id = await newSet();
-    const refused = await tech.post(`/api/restorations/${id}/bringup/steps`).send({ supply: 'series-lamp', lampWatts: 60, lampVolts: 230, appliedVolts: 230, lampBehaviour: 'flash-then-dim', decision: 'go-on' });
+    const refused = await tech.post(`/api/restorations/${id}/bringup/steps`).send({
+      supply: 'series-lamp',
+      lampWatts: 60,
+      lampVolts: 230,
+      appliedVolts: 230,
+      lampBehaviour: 'flash-then-dim',
+      decision: 'go-on',
+    });
     expect(refused.status).toBe(409);
     await completeChecklist(id);
     await tech.post(`/api/restorations/${id}/bringup/pre-power/sign-off`);
 
     const first = await tech.post(`/api/restorations/${id}/bringup/steps`).send({
-      supply: 'series-lamp', lampWatts: 60, lampVolts: 230, appliedVolts: 230, lampBehaviour: 'bright-staying', decision: 'stop', notes: 'Reservoir warm',
+      supply: 'series-lamp',
+      lampWatts: 60,
+      lampVolts: 230,
+      appliedVolts: 230,
+      lampBehaviour: 'bright-staying',
+      decision: 'stop',
+      notes: 'Reservoir warm',
       readings: [{ location: 'HT', quantity: 'dc-voltage', expected: '250', tolerance: '10', reading: '95' }],
     });
     expect(first.status).toBe(201);
     const second = await tech.post(`/api/restorations/${id}/bringup/steps`).send({
-      supply: 'variable-transformer', appliedVolts: 230, lampBehaviour: 'no-lamp', decision: 'go-on',
-      readings: [{ location: 'HT', quantity: 'dc-voltage', expected: '250', tolerance: '10', reading: '255' }, { location: 'Mains input', quantity: 'current', reading: '0.21 A' }],
+      supply: 'variable-transformer',
+      appliedVolts: 230,
+      lampBehaviour: 'no-lamp',
+      decision: 'go-on',
+      readings: [
+        { location: 'HT', quantity: 'dc-voltage', expected: '250', tolerance: '10', reading: '255' },
+        { location: 'Mains input', quantity: 'current', reading: '0.21 A' },
+      ],
     });
-    expect(second.body.steps.map((s: { number: number; decision: string }) => [s.number, s.decision])).toEqual([[1, 'stop'], [2, 'go-on']]);
+    expect(second.body.steps.map((s: { number: number; decision: string }) => [s.number, s.decision])).toEqual([
+      [1, 'stop'],
+      [2, 'go-on'],
+    ]);
     expect(second.body.steps[1].readings.map((r: { verdict: string }) => r.verdict)).toEqual(['within', 'unknown']);
 
-    const readings = (await tech.get(`/api/restorations/${id}/measurements`)).body as { location: string; verdict: string; powerOn: boolean; conditions: string }[];
-    expect(readings.map((r) => [r.location, r.verdict, r.powerOn])).toEqual([['HT', 'out', true], ['HT', 'within', true], ['Mains input', 'unknown', true]]);
+    const readings = (await tech.get(`/api/restorations/${id}/measurements`)).body as {
+      location: string;
+      verdict: string;
+      powerOn: boolean;
+      conditions: string;
+    }[];
+    expect(readings.map((r) => [r.location, r.verdict, r.powerOn])).toEqual([
+      ['HT', 'out', true],
+      ['HT', 'within', true],
+      ['Mains input', 'unknown', true],
+    ]);
     expect(readings[0]!.conditions).toMatch(/Power-up step 1: series lamp, 60 W lamp, 230 V applied/);
 
     const events = await history(tech, id);
@@ -140,7 +196,9 @@ describe('the staged power-up log', () => {
     const id = await newSet();
     await completeChecklist(id);
     await tech.post(`/api/restorations/${id}/bringup/pre-power/sign-off`);
-    const res = await tech.post(`/api/restorations/${id}/bringup/steps`).send({ supply: 'series-lamp', lampBehaviour: 'flash-then-dim', decision: 'go-on' });
+    const res = await tech
+      .post(`/api/restorations/${id}/bringup/steps`)
+      .send({ supply: 'series-lamp', lampBehaviour: 'flash-then-dim', decision: 'go-on' });
     expect(res.status).toBe(400);
   });
 });
@@ -148,13 +206,23 @@ describe('the staged power-up log', () => {
 describe('who may do what', () => {
   it('when an owner reads the bring-up, then bench notes are withheld; owners and mentors may not record or sign off', async () => {
     const id = await newSet();
-    await tech.put(`/api/restorations/${id}/bringup/intake`).send({ item: 'mains-lead', done: true, note: 'Perished, replace' });
+    await tech
+      .put(`/api/restorations/${id}/bringup/intake`)
+      .send({ item: 'mains-lead', done: true, note: 'Perished, replace' });
     const mine = (await tech.get(`/api/restorations/${id}/bringup`)).body;
-    expect(mine.intake.find((i: { item: string }) => i.item === 'mains-lead')).toMatchObject({ done: true, note: 'Perished, replace' });
+    expect(mine.intake.find((i: { item: string }) => i.item === 'mains-lead')).toMatchObject({
+      done: true,
+      note: 'Perished, replace',
+    });
     const theirs = (await owner.get(`/api/restorations/${id}/bringup`)).body;
-    expect(theirs.intake.find((i: { item: string }) => i.item === 'mains-lead')).toMatchObject({ done: true, note: '' });
+    expect(theirs.intake.find((i: { item: string }) => i.item === 'mains-lead')).toMatchObject({
+      done: true,
+      note: '',
+    });
     for (const agent of [owner, mentor]) {
-      expect((await agent.put(`/api/restorations/${id}/bringup/intake`).send({ item: 'mains-lead', done: false })).status).toBe(403);
+      expect(
+        (await agent.put(`/api/restorations/${id}/bringup/intake`).send({ item: 'mains-lead', done: false })).status,
+      ).toBe(403);
       expect((await agent.post(`/api/restorations/${id}/bringup/pre-power/sign-off`)).status).toBe(403);
     }
   });
@@ -171,8 +239,17 @@ describe('on the report', () => {
     const id = await newSet();
     await completeChecklist(id);
     await tech.post(`/api/restorations/${id}/bringup/pre-power/sign-off`);
-    await tech.post(`/api/restorations/${id}/bringup/steps`).send({ supply: 'variable-transformer', appliedVolts: 120, lampBehaviour: 'no-lamp', decision: 'stop', notes: 'BENCH-ONLY-NOTE' });
-    const res = await owner.get(`/api/restorations/${id}/report.pdf`).buffer(true).parse(binary as never);
+    await tech.post(`/api/restorations/${id}/bringup/steps`).send({
+      supply: 'variable-transformer',
+      appliedVolts: 120,
+      lampBehaviour: 'no-lamp',
+      decision: 'stop',
+      notes: 'BENCH-ONLY-NOTE',
+    });
+    const res = await owner
+      .get(`/api/restorations/${id}/report.pdf`)
+      .buffer(true)
+      .parse(binary as never);
     expect(res.status).toBe(200);
     const text = (await pdfText(res.body as Buffer)).replace(/\s+/g, ' ');
     expect(text).toMatch(/Before the first switch-on/);

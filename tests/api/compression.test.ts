@@ -20,18 +20,25 @@ type Raw = { status: number; headers: http.IncomingHttpHeaders; body: Buffer };
 function rawGet(server: http.Server, urlPath: string, headers: Record<string, string>): Promise<Raw> {
   const { port } = server.address() as AddressInfo;
   return new Promise((resolve, reject) => {
-    http.get({ host: '127.0.0.1', port, path: urlPath, headers }, (res) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => resolve({ status: res.statusCode!, headers: res.headers, body: Buffer.concat(chunks) }));
-    }).on('error', reject);
+    http
+      .get({ host: '127.0.0.1', port, path: urlPath, headers }, (res) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => resolve({ status: res.statusCode!, headers: res.headers, body: Buffer.concat(chunks) }));
+      })
+      .on('error', reject);
   });
 }
-const listen = (app: express.Express) => new Promise<http.Server>((resolve) => {
-  const server = app.listen(0, '127.0.0.1', () => resolve(server));
-});
+const listen = (app: express.Express) =>
+  new Promise<http.Server>((resolve) => {
+    const server = app.listen(0, '127.0.0.1', () => resolve(server));
+  });
 const decode = (r: Raw) =>
-  r.headers['content-encoding'] === 'br' ? brotliDecompressSync(r.body) : r.headers['content-encoding'] === 'gzip' ? gunzipSync(r.body) : r.body;
+  r.headers['content-encoding'] === 'br'
+    ? brotliDecompressSync(r.body)
+    : r.headers['content-encoding'] === 'gzip'
+      ? gunzipSync(r.body)
+      : r.body;
 
 let t: Awaited<ReturnType<typeof startTestApp>>;
 let server: http.Server;
@@ -49,9 +56,24 @@ describe('compressed JSON answers', () => {
     const user = await createUser(t.db);
     const r = await createRestoration(t.db, [{ userId: user.id, role: 'technician' }]);
     const photoId = await createPhotoRow(t.db, r.id);
-    await t.db.insert(findings).values(Array.from({ length: 40 }, (_, i) => ({ restorationId: r.id, photoId, number: i + 1, shape: 'pin' as const,
-      points: [{ x: 0.1, y: 0.2 }], title: `Dry joint at tag strip ${i + 1}`, kind: 'note' as const, severity: 'info' as const, authorId: user.id })));
-    const signIn = await t.request().post('/api/auth/sign-in').set('Origin', TEST_ORIGIN).send({ email: user.email, password: user.password });
+    await t.db.insert(findings).values(
+      Array.from({ length: 40 }, (_, i) => ({
+        restorationId: r.id,
+        photoId,
+        number: i + 1,
+        shape: 'pin' as const,
+        points: [{ x: 0.1, y: 0.2 }],
+        title: `Dry joint at tag strip ${i + 1}`,
+        kind: 'note' as const,
+        severity: 'info' as const,
+        authorId: user.id,
+      })),
+    );
+    const signIn = await t
+      .request()
+      .post('/api/auth/sign-in')
+      .set('Origin', TEST_ORIGIN)
+      .send({ email: user.email, password: user.password });
     const cookie = String(signIn.headers['set-cookie']![0]).split(';')[0]!;
     const url = `/api/photos/${photoId}/findings`;
     const plain = await rawGet(server, url, { Cookie: cookie, 'Accept-Encoding': 'identity' });
@@ -77,7 +99,10 @@ describe('the built client', () => {
     mkdirSync(path.join(dist, 'assets'));
     writeFileSync(path.join(dist, 'assets', 'marks-abc123.js'), script);
     writeFileSync(path.join(dist, 'assets', 'marks-abc123.js.map'), '{"version":3,"sources":["secret.ts"]}');
-    writeFileSync(path.join(dist, 'index.html'), `<!doctype html><title>Gridleak</title>${'<!-- bench -->'.repeat(200)}`);
+    writeFileSync(
+      path.join(dist, 'index.html'),
+      `<!doctype html><title>Gridleak</title>${'<!-- bench -->'.repeat(200)}`,
+    );
     precompressDirectory(dist);
     const app = express();
     serveBuiltClient(app, dist);
@@ -89,7 +114,11 @@ describe('the built client', () => {
   });
 
   it('when a browser accepts brotli, gzip or neither, then an asset decodes to the file built, with its type and a year of caching', async () => {
-    for (const [accept, expected] of [['br, gzip', 'br'], ['gzip', 'gzip'], ['identity', undefined]] as const) {
+    for (const [accept, expected] of [
+      ['br, gzip', 'br'],
+      ['gzip', 'gzip'],
+      ['identity', undefined],
+    ] as const) {
       const res = await rawGet(client, '/assets/marks-abc123.js', { 'Accept-Encoding': accept });
       expect(res.status).toBe(200);
       expect(res.headers['content-encoding']).toBe(expected);

@@ -16,7 +16,12 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 const technicians = async (restorationId: number) =>
-  (await t.db.select({ n: count() }).from(memberships).where(and(eq(memberships.restorationId, restorationId), eq(memberships.role, 'technician'))))[0]!.n;
+  (
+    await t.db
+      .select({ n: count() })
+      .from(memberships)
+      .where(and(eq(memberships.restorationId, restorationId), eq(memberships.role, 'technician')))
+  )[0]!.n;
 
 describe('the last technician, under concurrency', () => {
   it('when two technicians demote each other at the same moment, then one change wins and one technician is left', async () => {
@@ -24,10 +29,15 @@ describe('the last technician, under concurrency', () => {
     const [agentA, agentB] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b)]);
     // Several rounds: a check-then-write race shows up in at least one of them when nothing serialises it.
     for (let round = 0; round < 6; round++) {
-      const set = await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: b.id, role: 'technician' }]);
+      const set = await createRestoration(t.db, [
+        { userId: a.id, role: 'technician' },
+        { userId: b.id, role: 'technician' },
+      ]);
       const results = await Promise.all([
         agentA.patch(`/api/restorations/${set.id}/members/${b.id}`).send({ role: 'mentor' }),
-        round % 2 ? agentB.delete(`/api/restorations/${set.id}/members/${a.id}`) : agentB.patch(`/api/restorations/${set.id}/members/${a.id}`).send({ role: 'mentor' }),
+        round % 2
+          ? agentB.delete(`/api/restorations/${set.id}/members/${a.id}`)
+          : agentB.patch(`/api/restorations/${set.id}/members/${a.id}`).send({ role: 'mentor' }),
       ]);
       // The loser is refused either by the rule (409) or, when the winner committed before its guard ran, because it
       // is no longer a technician allowed to manage people (403).
@@ -41,15 +51,31 @@ describe('the last technician, under concurrency', () => {
 describe('a finding changed twice at once', () => {
   it('when two requests ask the mentors together, then the question is recorded once and each mentor notified once', async () => {
     const [tech, mentor] = await Promise.all([createUser(t.db), createUser(t.db)]);
-    const set = await createRestoration(t.db, [{ userId: tech.id, role: 'technician' }, { userId: mentor.id, role: 'mentor' }]);
+    const set = await createRestoration(t.db, [
+      { userId: tech.id, role: 'technician' },
+      { userId: mentor.id, role: 'mentor' },
+    ]);
     const photoId = await createPhotoRow(t.db, set.id);
     const [a, b] = await Promise.all([signedIn(t.app, tech), signedIn(t.app, tech)]);
-    const f = (await a.post(`/api/photos/${photoId}/findings`).send({ shape: 'pin', points: [{ x: 0.6, y: 0.3 }], title: 'HT sags under load' })).body;
-    const results = await Promise.all([a.patch(`/api/findings/${f.id}`).send({ questionOpen: true }), b.patch(`/api/findings/${f.id}`).send({ questionOpen: true })]);
+    const f = (
+      await a
+        .post(`/api/photos/${photoId}/findings`)
+        .send({ shape: 'pin', points: [{ x: 0.6, y: 0.3 }], title: 'HT sags under load' })
+    ).body;
+    const results = await Promise.all([
+      a.patch(`/api/findings/${f.id}`).send({ questionOpen: true }),
+      b.patch(`/api/findings/${f.id}`).send({ questionOpen: true }),
+    ]);
     expect(results.map((r) => r.status)).toEqual([200, 200]);
-    const asked = await t.db.select({ n: count() }).from(events).where(and(eq(events.findingId, f.id), eq(events.kind, 'question-asked')));
+    const asked = await t.db
+      .select({ n: count() })
+      .from(events)
+      .where(and(eq(events.findingId, f.id), eq(events.kind, 'question-asked')));
     expect(asked[0]!.n).toBe(1);
-    const notes = await t.db.select({ n: count() }).from(notifications).where(and(eq(notifications.findingId, f.id), eq(notifications.userId, mentor.id)));
+    const notes = await t.db
+      .select({ n: count() })
+      .from(notifications)
+      .where(and(eq(notifications.findingId, f.id), eq(notifications.userId, mentor.id)));
     expect(notes[0]!.n).toBe(1);
   });
 });
@@ -57,12 +83,25 @@ describe('a finding changed twice at once', () => {
 describe('notification e-mail batches', () => {
   async function setWithPeople(n: number) {
     const people = await Promise.all(Array.from({ length: n + 1 }, () => createUser(t.db)));
-    const set = await createRestoration(t.db, people.map((p, i) => ({ userId: p.id, role: i ? 'mentor' : 'technician' }) as const));
+    const set = await createRestoration(
+      t.db,
+      people.map((p, i) => ({ userId: p.id, role: i ? 'mentor' : 'technician' }) as const),
+    );
     const photoId = await createPhotoRow(t.db, set.id);
     const tech = await signedIn(t.app, people[0]!);
-    const finding = await tech.post(`/api/photos/${photoId}/findings`).send({ shape: 'pin', points: [{ x: 0.2, y: 0.2 }], title: 'Leaky coupling capacitor' });
+    const finding = await tech
+      .post(`/api/photos/${photoId}/findings`)
+      .send({ shape: 'pin', points: [{ x: 0.2, y: 0.2 }], title: 'Leaky coupling capacitor' });
     const mentors = people.slice(1);
-    await t.db.insert(notifications).values(mentors.map((m) => ({ userId: m.id, restorationId: set.id, findingId: finding.body.id, kind: 'question' as const, summary: `Question for ${m.name}` })));
+    await t.db.insert(notifications).values(
+      mentors.map((m) => ({
+        userId: m.id,
+        restorationId: set.id,
+        findingId: finding.body.id,
+        kind: 'question' as const,
+        summary: `Question for ${m.name}`,
+      })),
+    );
     return mentors;
   }
   const recordingMailer = (failFor = new Set<string>()): Mailer & { sent: OutgoingMail[] } => ({
@@ -82,15 +121,25 @@ describe('notification e-mail batches', () => {
     await expect(flushNotificationMail(deps(mailer))).rejects.toThrow(/1 of \d+ notification e-mails failed/);
     await flushNotificationMail(deps(mailer));
     await flushNotificationMail(deps(mailer));
-    const to = mailer.sent.map((m) => m.to).filter((address) => mentors.some((p) => p.email === address)).sort();
+    const to = mailer.sent
+      .map((m) => m.to)
+      .filter((address) => mentors.some((p) => p.email === address))
+      .sort();
     expect(to).toEqual(mentors.map((m) => m.email).sort());
   });
 
   it('when two flushes run at once, then each person gets one e-mail', async () => {
     const mentors = await setWithPeople(4);
     const mailer = recordingMailer();
-    await Promise.all([flushNotificationMail(deps(mailer)), flushNotificationMail(deps(mailer)), flushNotificationMail(deps(mailer))]);
-    const to = mailer.sent.map((m) => m.to).filter((address) => mentors.some((p) => p.email === address)).sort();
+    await Promise.all([
+      flushNotificationMail(deps(mailer)),
+      flushNotificationMail(deps(mailer)),
+      flushNotificationMail(deps(mailer)),
+    ]);
+    const to = mailer.sent
+      .map((m) => m.to)
+      .filter((address) => mentors.some((p) => p.email === address))
+      .sort();
     expect(to).toEqual(mentors.map((m) => m.email).sort());
   });
 });
@@ -100,13 +149,21 @@ describe('a comment posted twice by a retry', () => {
   let findingId: number, otherFindingId: number;
   beforeAll(async () => {
     const [a, b] = await Promise.all([createUser(t.db), createUser(t.db)]);
-    const set = await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: b.id, role: 'mentor' }]);
+    const set = await createRestoration(t.db, [
+      { userId: a.id, role: 'technician' },
+      { userId: b.id, role: 'mentor' },
+    ]);
     const photoId = await createPhotoRow(t.db, set.id);
     [tech, mentor] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b)]);
-    const place = (title: string) => tech.post(`/api/photos/${photoId}/findings`).send({ shape: 'pin', points: [{ x: 0.4, y: 0.4 }], title });
-    [findingId, otherFindingId] = [(await place('Scorched dropper')).body.id, (await place('Noisy volume pot')).body.id];
+    const place = (title: string) =>
+      tech.post(`/api/photos/${photoId}/findings`).send({ shape: 'pin', points: [{ x: 0.4, y: 0.4 }], title });
+    [findingId, otherFindingId] = [
+      (await place('Scorched dropper')).body.id,
+      (await place('Noisy volume pot')).body.id,
+    ];
   });
-  const stored = async (id: number) => (await t.db.select({ n: count() }).from(comments).where(eq(comments.findingId, id)))[0]!.n;
+  const stored = async (id: number) =>
+    (await t.db.select({ n: count() }).from(comments).where(eq(comments.findingId, id)))[0]!.n;
   const post = (id: number, key: string | undefined, body = 'Check the dropper value against the circuit') => {
     const req = mentor.post(`/api/findings/${id}/comments`);
     if (key) req.set('Idempotency-Key', key);
@@ -120,7 +177,9 @@ describe('a comment posted twice by a retry', () => {
     expect(second.status).toBe(201);
     expect(second.body).toEqual(first.body);
     expect(await stored(findingId)).toBe(1);
-    expect((await t.db.select({ n: count() }).from(notifications).where(eq(notifications.commentId, first.body.id)))[0]!.n).toBe(1);
+    expect(
+      (await t.db.select({ n: count() }).from(notifications).where(eq(notifications.commentId, first.body.id)))[0]!.n,
+    ).toBe(1);
   });
 
   it('when two posts with one key arrive together, then both get the one stored comment', async () => {
@@ -133,7 +192,9 @@ describe('a comment posted twice by a retry', () => {
 
   it('when a key is reused for another finding or other words, then 409; without a key, each post is stored', async () => {
     expect((await post(otherFindingId, 'c0ffee00-0000-4000-8000-000000000001')).status).toBe(409);
-    expect((await post(findingId, 'c0ffee00-0000-4000-8000-000000000001', 'Different words under the same key')).status).toBe(409);
+    expect(
+      (await post(findingId, 'c0ffee00-0000-4000-8000-000000000001', 'Different words under the same key')).status,
+    ).toBe(409);
     expect(await stored(otherFindingId)).toBe(0);
     await post(otherFindingId, undefined);
     await post(otherFindingId, undefined);

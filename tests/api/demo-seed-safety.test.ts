@@ -13,7 +13,8 @@ beforeAll(async () => {
 });
 afterAll(() => t.stop());
 
-const counts = async () => Promise.all([safetyTests, soakSessions].map(async (table) => (await t.db.select({ n: count() }).from(table))[0]!.n));
+const counts = async () =>
+  Promise.all([safetyTests, soakSessions].map(async (table) => (await t.db.select({ n: count() }).from(table))[0]!.n));
 
 describe('demo safety records', () => {
   it('when a demo set is at Returned, then it has a passing safety test, so the demo keeps the Returned gate; seeding again changes nothing', async () => {
@@ -24,7 +25,10 @@ describe('demo safety records', () => {
     await seedDemoSafety(t.db);
     for (const set of await t.db.select().from(restorations).where(eq(restorations.stage, 'returned')))
       await expect(assertReturnedGate(t.db, set.id)).resolves.toBeUndefined();
-    const [tests] = await t.db.select({ verdict: safetyTests.verdict }).from(safetyTests).where(eq(safetyTests.restorationId, first!.id));
+    const [tests] = await t.db
+      .select({ verdict: safetyTests.verdict })
+      .from(safetyTests)
+      .where(eq(safetyTests.restorationId, first!.id));
     expect(tests!.verdict).toBe('pass');
     const before = await counts();
     await seedDemoSafety(t.db);

@@ -1,7 +1,20 @@
 import { count } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { and, eq } from 'drizzle-orm';
-import { bringupSteps, estimates, findings, invoices, measurements, parts, payments, photos, prePowerSignoffs, restorations, users, valves } from '../../server/db/schema';
+import {
+  bringupSteps,
+  estimates,
+  findings,
+  invoices,
+  measurements,
+  parts,
+  payments,
+  photos,
+  prePowerSignoffs,
+  restorations,
+  users,
+  valves,
+} from '../../server/db/schema';
 import { seedDemo } from '../../server/db/seed/seed-demo';
 import { seedDemoBringup } from '../../server/db/seed/seed-demo-bringup';
 import { chassisLandmarks } from '../../server/features/demo/chassis';
@@ -26,7 +39,22 @@ const seedAll = async () => {
   await seedDemoBringup(t.db);
 };
 const counts = async () =>
-  Promise.all([users, restorations, photos, findings, measurements, parts, valves, prePowerSignoffs, bringupSteps, estimates, invoices, payments].map(async (table) => (await t.db.select({ n: count() }).from(table))[0]!.n));
+  Promise.all(
+    [
+      users,
+      restorations,
+      photos,
+      findings,
+      measurements,
+      parts,
+      valves,
+      prePowerSignoffs,
+      bringupSteps,
+      estimates,
+      invoices,
+      payments,
+    ].map(async (table) => (await t.db.select({ n: count() }).from(table))[0]!.n),
+  );
 
 describe('demo seed', () => {
   it('when seeded twice, then the second run changes nothing', async () => {
@@ -38,14 +66,19 @@ describe('demo seed', () => {
   }, 120_000);
 
   it('when seeded, then the Meridian 54 has an approved estimate and a deposit paid by transfer (no card payment invented)', async () => {
-    const [set] = await t.db.select().from(restorations).where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
+    const [set] = await t.db
+      .select()
+      .from(restorations)
+      .where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
     const [estimate] = await t.db.select().from(estimates).where(eq(estimates.restorationId, set!.id));
     expect(estimate).toMatchObject({ sent: true, decision: 'approved', decidedByName: 'Imogen Tarrant', version: 1 });
     const [deposit] = await t.db.select().from(invoices).where(eq(invoices.restorationId, set!.id));
     expect(deposit).toMatchObject({ kind: 'deposit', currency: estimate!.currency, due: 2500, voidedAt: null });
     expect(deposit!.paid).toBe(deposit!.due);
     const lines = await t.db.select().from(payments).where(eq(payments.invoiceId, deposit!.id));
-    expect(lines.map((p) => [p.kind, p.method, p.status, p.amount, p.checkoutSessionId])).toEqual([['payment', 'transfer', 'succeeded', deposit!.due, null]]);
+    expect(lines.map((p) => [p.kind, p.method, p.status, p.amount, p.checkoutSessionId])).toEqual([
+      ['payment', 'transfer', 'succeeded', deposit!.due, null],
+    ]);
   });
 
   it('when seeded, then every demo set in Testing or later has a signed pre-power checklist (the first-power gate holds)', async () => {

@@ -40,20 +40,30 @@ describe('the demo service sheet', () => {
   });
 
   it('when the chassis mark for C27 is read, then it sits on the C27 capacitor of the underside picture', async () => {
-    const [underside] = await t.db.select().from(photos).where(and(eq(photos.restorationId, setId), eq(photos.view, 'underside'), eq(photos.phase, 'before')));
-    const [mark] = await t.db.select().from(referenceMarks).where(and(eq(referenceMarks.photoId, underside!.id), eq(referenceMarks.ref, 'C27')));
+    const [underside] = await t.db
+      .select()
+      .from(photos)
+      .where(and(eq(photos.restorationId, setId), eq(photos.view, 'underside'), eq(photos.phase, 'before')));
+    const [mark] = await t.db
+      .select()
+      .from(referenceMarks)
+      .where(and(eq(referenceMarks.photoId, underside!.id), eq(referenceMarks.ref, 'C27')));
     const spot = chassisLandmarks('underside').C27!;
     expect(Math.hypot(mark!.points[0]!.x - spot.x, mark!.points[0]!.y - spot.y)).toBeLessThan(spot.r);
   });
 
   it('when the demo is seeded, then R29 carries a workshop mismatch note: fitted 180Ω where the diagram prints 150Ω', async () => {
     const notes = await t.db.select().from(mismatchNotes).where(eq(mismatchNotes.restorationId, setId));
-    expect(notes.map((n) => [n.ref, n.kind, n.diagramSays, n.ownerVisible])).toEqual([['R29', 'value-differs', '150Ω 1W', false]]);
+    expect(notes.map((n) => [n.ref, n.kind, n.diagramSays, n.ownerVisible])).toEqual([
+      ['R29', 'value-differs', '150Ω 1W', false],
+    ]);
   });
 
   it('when the seed runs again, then nothing is added twice', async () => {
     const before = (await t.db.select().from(referenceMarks).where(eq(referenceMarks.restorationId, setId))).length;
     await seedDemoSheet(t.deps);
-    expect((await t.db.select().from(referenceMarks).where(eq(referenceMarks.restorationId, setId))).length).toBe(before);
+    expect((await t.db.select().from(referenceMarks).where(eq(referenceMarks.restorationId, setId))).length).toBe(
+      before,
+    );
   });
 });

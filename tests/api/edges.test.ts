@@ -43,31 +43,49 @@ const until = async (check: () => Promise<boolean>, ms = 10_000) => {
 
 describe('input the database cannot hold', () => {
   it('when an id is beyond the integer column, then 400, and the largest id is a plain 404', async () => {
-    for (const path of ['/api/restorations/99999999999', '/api/restorations/2147483648', '/api/photos/1e20', `/api/restorations/${restorationId}/measurements?findingId=4294967296`])
+    for (const path of [
+      '/api/restorations/99999999999',
+      '/api/restorations/2147483648',
+      '/api/photos/1e20',
+      `/api/restorations/${restorationId}/measurements?findingId=4294967296`,
+    ])
       expect((await tech.get(path)).status, path).toBe(400);
     expect((await tech.get('/api/restorations/2147483647')).status).toBe(404);
-    const part = await tech.post(`/api/restorations/${restorationId}/parts`).send({ componentRef: 'R1', findingId: 3_000_000_000 });
+    const part = await tech
+      .post(`/api/restorations/${restorationId}/parts`)
+      .send({ componentRef: 'R1', findingId: 3_000_000_000 });
     expect(part.status).toBe(400);
   });
 
   it('when a NUL character arrives in a body, a query or a path, then 400 in the error shape', async () => {
     const body = await tech.post('/api/restorations').send({ make: 'Fen\u0000wick', model: 'Lark 3' });
     expect(body.status).toBe(400);
-    expect(body.body.error).toMatchObject({ code: 'bad_request', details: [expect.objectContaining({ location: 'body', path: 'make' })] });
+    expect(body.body.error).toMatchObject({
+      code: 'bad_request',
+      details: [expect.objectContaining({ location: 'body', path: 'make' })],
+    });
     expect((await tech.get(`/api/restorations/${restorationId}/events?kind=%00`)).status).toBe(400);
     expect((await tech.get('/api/restorations/%00')).status).toBe(400);
-    const signUp = await anonymous(t.app).post('/api/auth/sign-up').send({ name: 'A\u0000B', email: 'nul@example.test', password: 'grid leak and a cathode bypass' });
+    const signUp = await anonymous(t.app)
+      .post('/api/auth/sign-up')
+      .send({ name: 'A\u0000B', email: 'nul@example.test', password: 'grid leak and a cathode bypass' });
     expect(signUp.status).toBe(400);
   });
 });
 
 describe('error logs', () => {
   it('when an insert fails, then the log says what failed and never carries the values (no password hash)', async () => {
-    await t.db.execute(sql`create function refuse_users() returns trigger language plpgsql as $$ begin raise exception 'users are closed'; end $$`);
-    await t.db.execute(sql`create trigger refuse_users before insert on users for each row execute function refuse_users()`);
+    await t.db.execute(
+      sql`create function refuse_users() returns trigger language plpgsql as $$ begin raise exception 'users are closed'; end $$`,
+    );
+    await t.db.execute(
+      sql`create trigger refuse_users before insert on users for each row execute function refuse_users()`,
+    );
     try {
       logLines.length = 0;
-      const res = await anonymous(t.app).post('/api/auth/sign-up').send({ name: 'Log Probe', email: 'log-probe@example.test', password: 'grid leak and a cathode bypass' });
+      const res = await anonymous(t.app)
+        .post('/api/auth/sign-up')
+        .send({ name: 'Log Probe', email: 'log-probe@example.test', password: 'grid leak and a cathode bypass' });
       expect(res.status).toBe(500);
       const log = logLines.join('\n');
       expect(log).toMatch(/unhandled error/);
@@ -88,10 +106,21 @@ describe('CSV export', () => {
     // OWASP, "CSV Injection": prefix such cells with a single quote so spreadsheets do not evaluate them.
     // (The API trims text, so a leading tab or carriage return arrives as the formula after it; the unit test
     // of neutraliseFormula covers those two characters.)
-    const risky = { notes: '=HYPERLINK("http://evil.test","open")', source: '+1 555 0100', originalPart: '@SUM(A1:A9)', replacementPart: '-2+3', testedAfter: '\t=1+1', originalRating: '\r=2' };
-    expect((await tech.post(`/api/restorations/${restorationId}/parts`).send({ componentRef: 'CSV1', ...risky })).status).toBe(201);
+    const risky = {
+      notes: '=HYPERLINK("http://evil.test","open")',
+      source: '+1 555 0100',
+      originalPart: '@SUM(A1:A9)',
+      replacementPart: '-2+3',
+      testedAfter: '\t=1+1',
+      originalRating: '\r=2',
+    };
+    expect(
+      (await tech.post(`/api/restorations/${restorationId}/parts`).send({ componentRef: 'CSV1', ...risky })).status,
+    ).toBe(201);
     const res = await tech.get(`/api/restorations/${restorationId}/parts.csv`);
-    const row = (parse(res.text, { bom: true, columns: true }) as Record<string, string>[]).find((r) => r.Reference === 'CSV1')!;
+    const row = (parse(res.text, { bom: true, columns: true }) as Record<string, string>[]).find(
+      (r) => r.Reference === 'CSV1',
+    )!;
     expect(row.Notes).toBe(`'${risky.notes}`);
     expect(row.Source).toBe(`'${risky.source}`);
     expect(row['Original part']).toBe(`'${risky.originalPart}`);
@@ -121,13 +150,23 @@ describe('uploads abandoned by the client', () => {
     try {
       const boundary = 'gridleakboundary';
       const body = Buffer.concat([
-        Buffer.from(`--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="a.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`),
+        Buffer.from(
+          `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="a.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`,
+        ),
         await twoToneJpeg(),
         Buffer.from(`\r\n--${boundary}--\r\n`),
       ]);
       const req = http.request({
-        host: '127.0.0.1', port: (server.address() as AddressInfo).port, method: 'POST', path: `/api/restorations/${id}/photos`,
-        headers: { Cookie: cookie, Origin: TEST_ORIGIN, 'Content-Type': `multipart/form-data; boundary=${boundary}`, 'Content-Length': body.length },
+        host: '127.0.0.1',
+        port: (server.address() as AddressInfo).port,
+        method: 'POST',
+        path: `/api/restorations/${id}/photos`,
+        headers: {
+          Cookie: cookie,
+          Origin: TEST_ORIGIN,
+          'Content-Type': `multipart/form-data; boundary=${boundary}`,
+          'Content-Length': body.length,
+        },
       });
       req.on('error', () => {});
       hangUp = () => req.destroy();
@@ -144,9 +183,18 @@ describe('uploads abandoned by the client', () => {
 });
 
 describe('close-ups', () => {
-  const mark = { shape: 'circle', points: [{ x: 0.4, y: 0.4 }, { x: 0.45, y: 0.4 }], title: 'Scorched tag strip' };
+  const mark = {
+    shape: 'circle',
+    points: [
+      { x: 0.4, y: 0.4 },
+      { x: 0.45, y: 0.4 },
+    ],
+    title: 'Scorched tag strip',
+  };
   async function uploadedPhoto() {
-    const res = await tech.post(`/api/restorations/${restorationId}/photos`).attach('file', await twoToneJpeg(), 'chassis.jpg');
+    const res = await tech
+      .post(`/api/restorations/${restorationId}/photos`)
+      .attach('file', await twoToneJpeg(), 'chassis.jpg');
     expect(res.status).toBe(201);
     return (await t.db.select().from(photos).where(eq(photos.id, res.body.id)))[0]!;
   }
@@ -155,7 +203,14 @@ describe('close-ups', () => {
     const photo = await uploadedPhoto();
     const created = (await tech.post(`/api/photos/${photo.id}/findings`).send(mark)).body;
     expect(await until(() => t.deps.storage.exists(closeupKey(photo, created)))).toBe(true);
-    const moved = (await tech.patch(`/api/findings/${created.id}`).send({ points: [{ x: 0.6, y: 0.6 }, { x: 0.65, y: 0.6 }] })).body;
+    const moved = (
+      await tech.patch(`/api/findings/${created.id}`).send({
+        points: [
+          { x: 0.6, y: 0.6 },
+          { x: 0.65, y: 0.6 },
+        ],
+      })
+    ).body;
     expect(closeupKey(photo, moved)).not.toBe(closeupKey(photo, created));
     expect(await until(() => t.deps.storage.exists(closeupKey(photo, moved)))).toBe(true);
   });
@@ -174,7 +229,11 @@ describe('close-ups', () => {
   it('when the original has more pixels than uploads may, then no close-up is cut from it', async () => {
     const photo = await uploadedPhoto();
     const finding = { id: 900_002, shape: 'circle' as const, points: mark.points };
-    const deps = { db: t.db, storage: t.deps.storage, config: { ...t.deps.config, uploads: { maxBytes: 1e6, maxPixels: 10_000 } } };
+    const deps = {
+      db: t.db,
+      storage: t.deps.storage,
+      config: { ...t.deps.config, uploads: { maxBytes: 1e6, maxPixels: 10_000 } },
+    };
     await expect(ensureCloseup(deps, photo, finding)).rejects.toThrow();
     expect(await t.deps.storage.exists(closeupKey(photo, finding))).toBe(false);
   });

@@ -13,14 +13,28 @@ let photoId: number;
 
 beforeAll(async () => {
   t = await startTestApp();
-  const people = { tech: await createUser(t.db, { name: 'Mara Bench' }), owner: await createUser(t.db, { name: 'Philippa Home' }) };
-  const restorationId = (await createRestoration(t.db, [{ userId: people.tech.id, role: 'technician' }, { userId: people.owner.id, role: 'owner' }])).id;
+  const people = {
+    tech: await createUser(t.db, { name: 'Mara Bench' }),
+    owner: await createUser(t.db, { name: 'Philippa Home' }),
+  };
+  const restorationId = (
+    await createRestoration(t.db, [
+      { userId: people.tech.id, role: 'technician' },
+      { userId: people.owner.id, role: 'owner' },
+    ])
+  ).id;
   photoId = await createPhotoRow(t.db, restorationId, true);
   [tech, owner] = await Promise.all([signedIn(t.app, people.tech), signedIn(t.app, people.owner)]);
 });
 afterAll(() => t.stop());
 
-const pin = (title: string, ownerVisible: boolean) => ({ shape: 'pin', points: [{ x: 0.42, y: 0.31 }], title, componentRef: 'C7', ownerVisible });
+const pin = (title: string, ownerVisible: boolean) => ({
+  shape: 'pin',
+  points: [{ x: 0.42, y: 0.31 }],
+  title,
+  componentRef: 'C7',
+  ownerVisible,
+});
 const titles = (body: { title: string }[]) => body.map((f) => f.title).sort();
 const list = (agent: Agent, etag?: string) => {
   const req = agent.get(`/api/photos/${photoId}/findings`);
@@ -38,11 +52,16 @@ describe('the findings list of a photo, cached per version', () => {
     expect((await list(tech, etag)).status).toBe(304);
     expect((await list(tech, etag)).status).toBe(304);
 
-    expect((await tech.post(`/api/findings/${created.body.id}/comments`).send({ body: 'Measured 2 µA leakage at 250 V.' })).status).toBe(201);
+    expect(
+      (await tech.post(`/api/findings/${created.body.id}/comments`).send({ body: 'Measured 2 µA leakage at 250 V.' }))
+        .status,
+    ).toBe(201);
     const after = await list(tech, etag);
     expect(after.status).toBe(200);
     expect(after.headers.etag).not.toBe(etag);
-    expect(after.body.find((f: { id: number }) => f.id === created.body.id).commentCount).toBe(first.body[0].commentCount + 1);
+    expect(after.body.find((f: { id: number }) => f.id === created.body.id).commentCount).toBe(
+      first.body[0].commentCount + 1,
+    );
   });
 
   it('when a finding is edited, deleted or its author renamed, then the next read shows it', async () => {
@@ -60,7 +79,9 @@ describe('the findings list of a photo, cached per version', () => {
     await tech.post(`/api/photos/${photoId}/findings`).send(pin('Shared: dial lamp replaced', true));
     await tech.post(`/api/photos/${photoId}/findings`).send(pin('Internal: suspect wiring', false));
     const staff = await list(tech);
-    expect(titles(staff.body)).toEqual(expect.arrayContaining(['Shared: dial lamp replaced', 'Internal: suspect wiring']));
+    expect(titles(staff.body)).toEqual(
+      expect.arrayContaining(['Shared: dial lamp replaced', 'Internal: suspect wiring']),
+    );
     // The owner presenting the staff ETag must not be told "unchanged": that list is not theirs.
     const ownerRead = await list(owner, staff.headers.etag as string);
     expect(ownerRead.status).toBe(200);
@@ -70,7 +91,10 @@ describe('the findings list of a photo, cached per version', () => {
 
     const internal = staff.body.find((f: { title: string }) => f.title === 'Internal: suspect wiring');
     await tech.patch(`/api/findings/${internal.id}`).send({ ownerVisible: true });
-    expect(titles((await list(owner, ownerRead.headers.etag as string)).body)).toEqual(['Internal: suspect wiring', 'Shared: dial lamp replaced']);
+    expect(titles((await list(owner, ownerRead.headers.etag as string)).body)).toEqual([
+      'Internal: suspect wiring',
+      'Shared: dial lamp replaced',
+    ]);
 
     await tech.patch(`/api/photos/${photoId}`).send({ ownerVisible: false });
     expect((await list(owner, ownerRead.headers.etag as string)).status).toBe(404);

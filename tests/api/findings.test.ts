@@ -23,27 +23,60 @@ beforeAll(async () => {
     mentor: await createUser(t.db, { name: 'Teodor Afar' }),
     owner: await createUser(t.db, { name: 'Imogen Home' }),
   };
-  restorationId = (await createRestoration(t.db, [
-    { userId: people.tech.id, role: 'technician' }, { userId: people.mentor.id, role: 'mentor' }, { userId: people.owner.id, role: 'owner' },
-  ])).id;
+  restorationId = (
+    await createRestoration(t.db, [
+      { userId: people.tech.id, role: 'technician' },
+      { userId: people.mentor.id, role: 'mentor' },
+      { userId: people.owner.id, role: 'owner' },
+    ])
+  ).id;
   sharedPhoto = await createPhotoRow(t.db, restorationId, true);
   privatePhoto = await createPhotoRow(t.db, restorationId, false);
-  [tech, mentor, owner] = await Promise.all([signedIn(t.app, people.tech), signedIn(t.app, people.mentor), signedIn(t.app, people.owner)]);
+  [tech, mentor, owner] = await Promise.all([
+    signedIn(t.app, people.tech),
+    signedIn(t.app, people.mentor),
+    signedIn(t.app, people.owner),
+  ]);
 });
 afterAll(() => t.stop());
 
-const pin = (title: string, extra: object = {}) => ({ shape: 'pin', points: [{ x: 0.5096, y: 0.4238 }], title, componentRef: 'R23', kind: 'overheated', severity: 'fault', ...extra });
+const pin = (title: string, extra: object = {}) => ({
+  shape: 'pin',
+  points: [{ x: 0.5096, y: 0.4238 }],
+  title,
+  componentRef: 'R23',
+  kind: 'overheated',
+  severity: 'fault',
+  ...extra,
+});
 const mails = async () => (await t.request().get('/api/dev/mail')).body as CapturedMail[];
 
 describe('findings', () => {
   it('when a technician pins a finding, then it is numbered, kept in image coordinates and listed on its photo', async () => {
     // A restoration of its own, so the numbers do not depend on what other tests placed.
-    const own = await createRestoration(t.db, [{ userId: people.tech.id, role: 'technician' }, { userId: people.mentor.id, role: 'mentor' }]);
+    const own = await createRestoration(t.db, [
+      { userId: people.tech.id, role: 'technician' },
+      { userId: people.mentor.id, role: 'mentor' },
+    ]);
     const sharedPhoto = await createPhotoRow(t.db, own.id, true);
     const a = await tech.post(`/api/photos/${sharedPhoto}/findings`).send(pin('Leaky coupling capacitor'));
     expect(a.status).toBe(201);
-    expect(a.body).toMatchObject({ number: 1, shape: 'pin', points: [{ x: 0.5096, y: 0.4238 }], status: 'observed', componentRef: 'R23', ownerVisible: false });
-    const b = await mentor.post(`/api/photos/${sharedPhoto}/findings`).send({ shape: 'circle', points: [{ x: 0.3, y: 0.7 }, { x: 0.35, y: 0.7 }], title: 'Check this joint' });
+    expect(a.body).toMatchObject({
+      number: 1,
+      shape: 'pin',
+      points: [{ x: 0.5096, y: 0.4238 }],
+      status: 'observed',
+      componentRef: 'R23',
+      ownerVisible: false,
+    });
+    const b = await mentor.post(`/api/photos/${sharedPhoto}/findings`).send({
+      shape: 'circle',
+      points: [
+        { x: 0.3, y: 0.7 },
+        { x: 0.35, y: 0.7 },
+      ],
+      title: 'Check this joint',
+    });
     expect(b.body.number).toBe(2);
     const list = (await mentor.get(`/api/photos/${sharedPhoto}/findings`)).body;
     expect(list.map((f: { number: number }) => f.number)).toEqual([1, 2]);
@@ -59,7 +92,8 @@ describe('findings', () => {
       { ...pin('x'), componentRef: 'the big one' },
       { ...pin(''), title: '' },
     ];
-    for (const body of bad) expect((await tech.post(`/api/photos/${sharedPhoto}/findings`).send(body)).status).toBe(400);
+    for (const body of bad)
+      expect((await tech.post(`/api/photos/${sharedPhoto}/findings`).send(body)).status).toBe(400);
   });
 
   it('when a mentor edits a finding they did not place, then it is refused; their own they may move', async () => {
@@ -75,9 +109,14 @@ describe('findings', () => {
     const f = (await tech.post(`/api/photos/${sharedPhoto}/findings`).send(pin('Maybe a dry joint'))).body;
     expect((await tech.patch(`/api/findings/${f.id}`).send({ status: 'dismissed' })).status).toBe(400);
     await tech.patch(`/api/findings/${f.id}`).send({ status: 'suspected' });
-    await tech.patch(`/api/findings/${f.id}`).send({ status: 'dismissed', dismissReason: 'Reflowed, it was flux residue' });
+    await tech
+      .patch(`/api/findings/${f.id}`)
+      .send({ status: 'dismissed', dismissReason: 'Reflowed, it was flux residue' });
     const history = (await mentor.get(`/api/findings/${f.id}/history`)).body;
-    expect(history[0]).toMatchObject({ actorName: 'Mara Bench', changes: { status: ['suspected', 'dismissed'], dismissReason: [null, 'Reflowed, it was flux residue'] } });
+    expect(history[0]).toMatchObject({
+      actorName: 'Mara Bench',
+      changes: { status: ['suspected', 'dismissed'], dismissReason: [null, 'Reflowed, it was flux residue'] },
+    });
     expect(history[1].changes.status).toEqual(['observed', 'suspected']);
   });
 });
@@ -90,8 +129,12 @@ describe('threads and what the owner sees', () => {
     expect((await owner.get(`/api/findings/${f.id}`)).status).toBe(200);
 
     const secret = 'INTERNAL-ONLY: quote was too low, do not mention @Imogen';
-    expect((await mentor.post(`/api/findings/${f.id}/comments`).send({ body: secret, internal: true })).status).toBe(201);
-    const shared = await tech.post(`/api/findings/${f.id}/comments`).send({ body: 'We will replace C30 with a modern part of the same rating, @Imogen.', internal: false });
+    expect((await mentor.post(`/api/findings/${f.id}/comments`).send({ body: secret, internal: true })).status).toBe(
+      201,
+    );
+    const shared = await tech
+      .post(`/api/findings/${f.id}/comments`)
+      .send({ body: 'We will replace C30 with a modern part of the same rating, @Imogen.', internal: false });
     expect(shared.status).toBe(201);
 
     const thread = (await owner.get(`/api/findings/${f.id}/comments`)).body;
@@ -109,7 +152,9 @@ describe('threads and what the owner sees', () => {
   });
 
   it('when the owner asks for an unshared finding or its thread, then it does not exist for them', async () => {
-    const hidden = (await tech.post(`/api/photos/${privatePhoto}/findings`).send(pin('Not for the owner', { ownerVisible: true }))).body;
+    const hidden = (
+      await tech.post(`/api/photos/${privatePhoto}/findings`).send(pin('Not for the owner', { ownerVisible: true }))
+    ).body;
     // Shared finding on an unshared photo: still hidden.
     expect((await owner.get(`/api/findings/${hidden.id}`)).status).toBe(404);
     expect((await owner.get(`/api/findings/${hidden.id}/comments`)).status).toBe(404);
@@ -121,7 +166,8 @@ describe('threads and what the owner sees', () => {
 
   it('when a comment is edited or deleted, then it is marked so; only its author edits it', async () => {
     const f = (await tech.post(`/api/photos/${sharedPhoto}/findings`).send(pin('Edit me'))).body;
-    const c = (await mentor.post(`/api/findings/${f.id}/comments`).send({ body: 'Line one\nhttps://example.org/data' })).body;
+    const c = (await mentor.post(`/api/findings/${f.id}/comments`).send({ body: 'Line one\nhttps://example.org/data' }))
+      .body;
     expect((await tech.patch(`/api/comments/${c.id}`).send({ body: 'hijack' })).status).toBe(403);
     const edited = (await mentor.patch(`/api/comments/${c.id}`).send({ body: 'Line one, corrected' })).body;
     expect(edited.editedAt).not.toBeNull();
@@ -142,15 +188,21 @@ describe('questions and e-mail batching', () => {
     expect((await owner.get('/api/questions')).body).toEqual([]);
     expect((await mentor.get('/api/notifications')).body[0]).toMatchObject({ kind: 'question', findingId: f.id });
     await mentor.patch(`/api/findings/${f.id}`).send({ questionOpen: false });
-    expect((await mentor.get('/api/questions')).body.map((q: { findingId: number }) => q.findingId)).not.toContain(f.id);
+    expect((await mentor.get('/api/questions')).body.map((q: { findingId: number }) => q.findingId)).not.toContain(
+      f.id,
+    );
   });
 
   it('when a burst of comments mentions someone, then they get one e-mail per window linking to the finding', async () => {
     const reader = await createUser(t.db, { name: 'Quentin Burst' });
-    const r = await createRestoration(t.db, [{ userId: people.tech.id, role: 'technician' }, { userId: reader.id, role: 'mentor' }]);
+    const r = await createRestoration(t.db, [
+      { userId: people.tech.id, role: 'technician' },
+      { userId: reader.id, role: 'mentor' },
+    ]);
     const photo = await createPhotoRow(t.db, r.id, false);
     const f = (await tech.post(`/api/photos/${photo}/findings`).send(pin('Burst'))).body;
-    for (let i = 0; i < 4; i++) await tech.post(`/api/findings/${f.id}/comments`).send({ body: `@Quentin reading ${i}: 2${i}0 V` });
+    for (let i = 0; i < 4; i++)
+      await tech.post(`/api/findings/${f.id}/comments`).send({ body: `@Quentin reading ${i}: 2${i}0 V` });
     await waitForMail(mails, reader.email, /Gridleak/);
     await flushNotificationMail(t.deps);
     const toReader = (await mails()).filter((m) => m.to === reader.email);

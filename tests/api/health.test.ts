@@ -66,7 +66,11 @@ describe('unknown API routes', () => {
 describe('GET /api/dev/mail', () => {
   it('when a message goes through the SMTP capture, then it is listed newest first', async () => {
     await t.deps.mailer.send({ to: 'first@example.test', subject: 'First', text: 'one' });
-    await t.deps.mailer.send({ to: 'second@example.test', subject: 'Second', text: 'two\nhttp://x.test/invitations/abc' });
+    await t.deps.mailer.send({
+      to: 'second@example.test',
+      subject: 'Second',
+      text: 'two\nhttp://x.test/invitations/abc',
+    });
     const res = await t.request().get('/api/dev/mail');
     expect(res.status).toBe(200);
     expect(res.body.map((m: { subject: string }) => m.subject).slice(0, 2)).toEqual(['Second', 'First']);

@@ -20,7 +20,20 @@ beforeAll(async () => {
   const user = await createUser(t.db, { name: 'Mara Counting' });
   restorationId = (await createRestoration(t.db, [{ userId: user.id, role: 'technician' }])).id;
   photoId = await createPhotoRow(t.db, restorationId);
-  const [f] = await t.db.insert(findings).values({ restorationId, photoId, number: 1, shape: 'pin', points: [{ x: 0.5, y: 0.5 }], title: 'Hum', kind: 'note', severity: 'info', authorId: user.id }).returning();
+  const [f] = await t.db
+    .insert(findings)
+    .values({
+      restorationId,
+      photoId,
+      number: 1,
+      shape: 'pin',
+      points: [{ x: 0.5, y: 0.5 }],
+      title: 'Hum',
+      kind: 'note',
+      severity: 'info',
+      authorId: user.id,
+    })
+    .returning();
   findingId = f!.id;
   await t.db.insert(comments).values({ findingId, authorId: user.id, body: 'Checked at 250 V, fine.' });
   tech = await signedIn(t.app, user);
@@ -29,7 +42,7 @@ beforeAll(async () => {
   const query = pool.query.bind(pool);
   pool.query = (...args: unknown[]) => {
     const first = args[0] as string | { text?: string };
-    if (recording) statements.push(typeof first === 'string' ? first : first.text ?? '');
+    if (recording) statements.push(typeof first === 'string' ? first : (first.text ?? ''));
     return query(...args);
   };
 });

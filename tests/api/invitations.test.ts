@@ -18,7 +18,8 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 const mails = async () => (await t.request().get('/api/dev/mail')).body;
-const newSet = () => createRestoration(t.db, [{ userId: techUser.id, role: 'technician' }], { make: 'Farrowby', model: 'Kestrel' });
+const newSet = () =>
+  createRestoration(t.db, [{ userId: techUser.id, role: 'technician' }], { make: 'Farrowby', model: 'Kestrel' });
 const strong = 'signal tracer on the detector';
 
 async function invite(restorationId: number, email: string, role: string) {
@@ -34,9 +35,15 @@ describe('invitations', () => {
     const set = await newSet();
     const token = await invite(set.id, 'new.mentor@example.test', 'mentor');
     const preview = await anonymous(t.app).get(`/api/invitations/${token}`);
-    expect(preview.body).toMatchObject({ restoration: { id: set.id, make: 'Farrowby' }, role: 'mentor', invitedBy: 'Mara Test' });
+    expect(preview.body).toMatchObject({
+      restoration: { id: set.id, make: 'Farrowby' },
+      role: 'mentor',
+      invitedBy: 'Mara Test',
+    });
     const mentor = anonymous(t.app);
-    const res = await mentor.post('/api/auth/sign-up').send({ name: 'New Mentor', email: 'New.Mentor@example.test', password: strong, invitationToken: token });
+    const res = await mentor
+      .post('/api/auth/sign-up')
+      .send({ name: 'New Mentor', email: 'New.Mentor@example.test', password: strong, invitationToken: token });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ status: 'signed-in', restorationId: set.id });
     expect((await mentor.get(`/api/restorations/${set.id}`)).body.role).toBe('mentor');
@@ -52,7 +59,9 @@ describe('invitations', () => {
     const res = await stranger.post(`/api/invitations/${token}/accept`);
     expect(res.status).toBe(403);
     expect((await stranger.get(`/api/restorations/${set.id}`)).status).toBe(404);
-    const signUpWrong = await anonymous(t.app).post('/api/auth/sign-up').send({ name: 'X', email: 'other@example.test', password: strong, invitationToken: token });
+    const signUpWrong = await anonymous(t.app)
+      .post('/api/auth/sign-up')
+      .send({ name: 'X', email: 'other@example.test', password: strong, invitationToken: token });
     expect(signUpWrong.status).toBe(403);
   });
 
@@ -69,7 +78,10 @@ describe('invitations', () => {
   it('when an invitation has expired or was revoked, then its link no longer works; a resend issues a new one', async () => {
     const set = await newSet();
     const expiredToken = await invite(set.id, 'late@example.test', 'mentor');
-    await t.db.update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.email, 'late@example.test'));
+    await t.db
+      .update(invitations)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(invitations.email, 'late@example.test'));
     expect((await anonymous(t.app).get(`/api/invitations/${expiredToken}`)).status).toBe(410);
 
     const token = await invite(set.id, 'maybe@example.test', 'mentor');
@@ -87,7 +99,9 @@ describe('invitations', () => {
 
   it('when someone already on the restoration is invited, then it is a conflict', async () => {
     const set = await newSet();
-    const res = await tech.post(`/api/restorations/${set.id}/invitations`).send({ email: techUser.email, role: 'mentor' });
+    const res = await tech
+      .post(`/api/restorations/${set.id}/invitations`)
+      .send({ email: techUser.email, role: 'mentor' });
     expect(res.status).toBe(409);
   });
 });
@@ -95,14 +109,18 @@ describe('invitations', () => {
 describe('roles', () => {
   it('when the last technician would be demoted or removed, then it is refused; with a second technician it is allowed', async () => {
     const set = await newSet();
-    expect((await tech.patch(`/api/restorations/${set.id}/members/${techUser.id}`).send({ role: 'mentor' })).status).toBe(409);
+    expect(
+      (await tech.patch(`/api/restorations/${set.id}/members/${techUser.id}`).send({ role: 'mentor' })).status,
+    ).toBe(409);
     expect((await tech.delete(`/api/restorations/${set.id}/members/${techUser.id}`)).status).toBe(409);
     const helper = await createUser(t.db);
     const token = await invite(set.id, helper.email, 'mentor');
     await (await signedIn(t.app, helper)).post(`/api/invitations/${token}/accept`);
     const promoted = await tech.patch(`/api/restorations/${set.id}/members/${helper.id}`).send({ role: 'technician' });
     expect(promoted.status).toBe(200);
-    expect((await tech.patch(`/api/restorations/${set.id}/members/${techUser.id}`).send({ role: 'mentor' })).status).toBe(200);
+    expect(
+      (await tech.patch(`/api/restorations/${set.id}/members/${techUser.id}`).send({ role: 'mentor' })).status,
+    ).toBe(200);
     const members = (await (await signedIn(t.app, helper)).get(`/api/restorations/${set.id}/members`)).body;
     expect(members.map((m: { role: string }) => m.role).sort()).toEqual(['mentor', 'technician']);
   });

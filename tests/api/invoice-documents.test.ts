@@ -16,8 +16,17 @@ let t: Awaited<ReturnType<typeof startTestApp>>;
 let tech: Agent, owner: Agent, mentor: Agent;
 let techId: number, ownerId: number, mentorId: number, ownerEmail: string;
 // £40 an hour, parts at cost plus 25%, VAT 20% on the invoice total rounded down (HMRC VAT Notice 700 §17.5, from memory).
-const gbp: WorkshopSettings = { currency: 'GBP', labourRate: 4000, partsMarkupBasisPoints: 2500, taxName: 'VAT', taxRateBasisPoints: 2000,
-  taxRounding: 'invoice-down', estimateApprovalRequired: false, invoicePrefix: 'CL-', timeZone: 'Europe/London' };
+const gbp: WorkshopSettings = {
+  currency: 'GBP',
+  labourRate: 4000,
+  partsMarkupBasisPoints: 2500,
+  taxName: 'VAT',
+  taxRateBasisPoints: 2000,
+  taxRounding: 'invoice-down',
+  estimateApprovalRequired: false,
+  invoicePrefix: 'CL-',
+  timeZone: 'Europe/London',
+};
 beforeAll(async () => {
   t = await startTestApp();
   const [a, b, c] = await Promise.all([createUser(t.db), createUser(t.db), createUser(t.db)]);
@@ -29,20 +38,32 @@ beforeAll(async () => {
 afterAll(() => t.stop());
 
 const newSet = async () =>
-  (await createRestoration(t.db, [{ userId: techId, role: 'technician' }, { userId: ownerId, role: 'owner' }, { userId: mentorId, role: 'mentor' }])).id;
+  (
+    await createRestoration(t.db, [
+      { userId: techId, role: 'technician' },
+      { userId: ownerId, role: 'owner' },
+      { userId: mentorId, role: 'mentor' },
+    ])
+  ).id;
 const mails = async () => (await tech.get('/api/dev/mail')).body as CapturedMail[];
 const markPaid = (id: number) => t.db.update(invoices).set({ paid: invoices.due }).where(eq(invoices.id, id));
-const list = async (agent: Agent, id: number) => (await agent.get(`/api/restorations/${id}/invoices`)).body as Invoice[];
+const list = async (agent: Agent, id: number) =>
+  (await agent.get(`/api/restorations/${id}/invoices`)).body as Invoice[];
 
 describe('workshop settings', () => {
   it('when people with each role ask, then only a technician of the workshop reads and changes the settings', async () => {
     const people = await Promise.all([createUser(t.db), createUser(t.db), createUser(t.db), createUser(t.db)]);
-    await createRestoration(t.db, [{ userId: people[0]!.id, role: 'technician' }, { userId: people[1]!.id, role: 'mentor' }, { userId: people[2]!.id, role: 'owner' }]);
+    await createRestoration(t.db, [
+      { userId: people[0]!.id, role: 'technician' },
+      { userId: people[1]!.id, role: 'mentor' },
+      { userId: people[2]!.id, role: 'owner' },
+    ]);
     const agents = [...(await Promise.all(people.map((p) => signedIn(t.app, p)))), anonymous(t.app)];
     const reads = await Promise.all(agents.map(async (a) => (await a.get('/api/workshop/settings')).status));
     expect(reads).toEqual([200, 403, 403, 403, 401]); // technician, mentor, owner, on no set, signed out
     const writes = [];
-    for (const a of agents) writes.push((await a.put('/api/workshop/settings').send({ ...gbp, labourRate: 9999 })).status);
+    for (const a of agents)
+      writes.push((await a.put('/api/workshop/settings').send({ ...gbp, labourRate: 9999 })).status);
     expect(writes).toEqual([200, 403, 403, 403, 401]);
     expect(((await tech.get('/api/workshop/settings')).body as WorkshopSettings).labourRate).toBe(9999);
     await tech.put('/api/workshop/settings').send(gbp);
@@ -74,15 +95,32 @@ describe('invoices at hand-back', () => {
     expect([deposit.reference, deposit.due]).toEqual([`CL-${deposit.number}`, { amount: 3600, currency: 'GBP' }]);
     await markPaid(deposit.id);
     await tech.post(`/api/restorations/${id}/labour`).send({ minutes: 150, stage: 'repair' });
-    const part = (await tech.post(`/api/restorations/${id}/parts`).send({ componentRef: 'C27', replacementRating: '22nF 630V', costMinor: 199 })).body as { id: number };
+    const part = (
+      await tech
+        .post(`/api/restorations/${id}/parts`)
+        .send({ componentRef: 'C27', replacementRating: '22nF 630V', costMinor: 199 })
+    ).body as { id: number };
     await tech.patch(`/api/parts/${part.id}`).send({ state: 'fitted' });
     const preview = (await tech.get(`/api/restorations/${id}/invoices/preview`)).body as InvoicePreview;
     const inv = (await tech.post(`/api/restorations/${id}/invoices`)).body as Invoice;
     // Worked by hand: 2.5 h × £40 = £100.00; £1.99 + 25% = 248.75 p → £2.49; net £102.49; VAT 2049.8 p → £20.49 (rounded
     // down, HMRC VAT Notice 700 §17.5, from memory); total £122.98; less the £36.00 deposit paid: £86.98 due.
-    expect([inv.net, inv.taxAmount, inv.gross, inv.deducted, inv.due].map((m) => m.amount)).toEqual([10249, 2049, 12298, 3600, 8698]);
-    expect(preview).toEqual({ tax: inv.tax, lines: inv.lines, net: inv.net, taxAmount: inv.taxAmount, gross: inv.gross, deducted: inv.deducted, due: inv.due });
-    expect((await list(owner, id)).map((i) => [i.reference, i.kind])).toEqual([[inv.reference, 'final'], [deposit.reference, 'deposit']]);
+    expect([inv.net, inv.taxAmount, inv.gross, inv.deducted, inv.due].map((m) => m.amount)).toEqual([
+      10249, 2049, 12298, 3600, 8698,
+    ]);
+    expect(preview).toEqual({
+      tax: inv.tax,
+      lines: inv.lines,
+      net: inv.net,
+      taxAmount: inv.taxAmount,
+      gross: inv.gross,
+      deducted: inv.deducted,
+      due: inv.due,
+    });
+    expect((await list(owner, id)).map((i) => [i.reference, i.kind])).toEqual([
+      [inv.reference, 'final'],
+      [deposit.reference, 'deposit'],
+    ]);
     const mail = await waitForMail(mails, ownerEmail, new RegExp(`Invoice ${inv.reference}`));
     expect(mail.text).toContain('£86.98 after £36.00 of deposits paid');
   });
@@ -100,7 +138,10 @@ describe('invoices at hand-back', () => {
   it('when the same set is invoiced twice at the same moment, then one is issued and the other refused without using a number', async () => {
     const id = await newSet();
     await tech.post(`/api/restorations/${id}/labour`).send({ minutes: 60, stage: 'repair' });
-    const [a, b] = await Promise.all([tech.post(`/api/restorations/${id}/invoices`), tech.post(`/api/restorations/${id}/invoices`)]);
+    const [a, b] = await Promise.all([
+      tech.post(`/api/restorations/${id}/invoices`),
+      tech.post(`/api/restorations/${id}/invoices`),
+    ]);
     expect([a.status, b.status].sort()).toEqual([201, 409]);
     const next = (await tech.post(`/api/restorations/${id}/deposits`).send({ amount: 100 })).body as Invoice;
     expect(next.number).toBe(((a.status === 201 ? a : b).body as Invoice).number + 1);
@@ -113,7 +154,9 @@ describe('invoices at hand-back', () => {
     const credit = (await tech.post(`/api/invoices/${inv.id}/void`).send({ reason: 'Wrong rate' })).body as Invoice;
     // 50 min × £40/h = 3333.3 p → £33.33; VAT 666.6 p → £6.66 (rounded down); total £39.99, credited −£39.99.
     expect([inv.gross.amount, credit.gross.amount, credit.reference]).toEqual([3999, -3999, `CL-${inv.number + 1}`]);
-    const text = await pdfText(Buffer.from((await owner.get(`/api/invoices/${credit.id}/invoice.pdf`).buffer(true)).body as Buffer));
+    const text = await pdfText(
+      Buffer.from((await owner.get(`/api/invoices/${credit.id}/invoice.pdf`).buffer(true)).body as Buffer),
+    );
     expect(text).toContain(`Credit note ${credit.reference}`);
     expect(text).toContain(`Corrects invoice ${inv.reference}`);
     expect(text).toContain('-£39.99');
@@ -148,7 +191,11 @@ describe('invoice mail that cannot go', () => {
       refused.mockRestore();
     }
     expect(await list(tech, id)).toEqual(before);
-    const [{ last }] = await t.db.select({ last: invoices.number }).from(invoices).orderBy(desc(invoices.number)).limit(1) as [{ last: number }];
+    const [{ last }] = (await t.db
+      .select({ last: invoices.number })
+      .from(invoices)
+      .orderBy(desc(invoices.number))
+      .limit(1)) as [{ last: number }];
     const next = (await tech.post(`/api/restorations/${id}/deposits`).send({ amount: 5000 })).body as Invoice;
     expect(next.number).toBe(last + 1);
   });
@@ -178,12 +225,17 @@ describe('invoice PDFs', () => {
     expect((await mentor.get(`/api/invoices/${dep.id}/invoice.pdf`)).status).toBe(403);
     expect((await stranger.get(`/api/invoices/${dep.id}/invoice.pdf`)).status).toBe(404);
     // The history says an invoice was issued to the technician and the owner, and nothing of it to the mentor.
-    const kinds = async (agent: Agent) => ((await agent.get(`/api/restorations/${id}/events`)).body as { kind: string }[]).map((e) => e.kind);
+    const kinds = async (agent: Agent) =>
+      ((await agent.get(`/api/restorations/${id}/events`)).body as { kind: string }[]).map((e) => e.kind);
     expect(await kinds(tech)).toContain('invoice-issued');
     expect(await kinds(owner)).toContain('invoice-issued');
     const mentorKinds = await kinds(mentor);
     expect(mentorKinds).not.toContain('invoice-issued');
-    expect(mentorKinds.length).toBe((await kinds(tech)).filter((k) => !['invoice-issued', 'invoice-voided', 'estimate-sent', 'estimate-decided'].includes(k)).length);
+    expect(mentorKinds.length).toBe(
+      (await kinds(tech)).filter(
+        (k) => !['invoice-issued', 'invoice-voided', 'estimate-sent', 'estimate-decided'].includes(k),
+      ).length,
+    );
   });
 });
 

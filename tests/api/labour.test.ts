@@ -20,15 +20,30 @@ beforeAll(async () => {
 });
 afterAll(() => t.stop());
 
-const newSet = async () => (await createRestoration(t.db, [{ userId: techId, role: 'technician' }, { userId: ownerId, role: 'owner' }])).id;
+const newSet = async () =>
+  (
+    await createRestoration(t.db, [
+      { userId: techId, role: 'technician' },
+      { userId: ownerId, role: 'owner' },
+    ])
+  ).id;
 
 describe('the labour log', () => {
   it('when hours are typed, then they count in the week, billable apart', async () => {
     const id = await newSet();
-    expect((await tech.post(`/api/restorations/${id}/labour`).send({ minutes: 90, stage: 'assessment' })).status).toBe(201);
-    const res = await tech.post(`/api/restorations/${id}/labour`).send({ minutes: 30, stage: 'repair', billable: false, note: 'Rework of my own joint' });
+    expect((await tech.post(`/api/restorations/${id}/labour`).send({ minutes: 90, stage: 'assessment' })).status).toBe(
+      201,
+    );
+    const res = await tech
+      .post(`/api/restorations/${id}/labour`)
+      .send({ minutes: 30, stage: 'repair', billable: false, note: 'Rework of my own joint' });
     const log = res.body as LabourLog;
-    expect(log.entries.map((e) => [e.minutes, e.billable])).toEqual(expect.arrayContaining([[90, true], [30, false]]));
+    expect(log.entries.map((e) => [e.minutes, e.billable])).toEqual(
+      expect.arrayContaining([
+        [90, true],
+        [30, false],
+      ]),
+    );
     expect(log.week).toEqual([{ technician: expect.any(String), minutes: 120, billableMinutes: 90 }]);
   });
 
@@ -39,7 +54,10 @@ describe('the labour log', () => {
     expect(reloaded.running).toMatchObject({ restorationId: id, stoppedAt: null, minutes: null });
     expect((await tech.post(`/api/restorations/${id}/labour/timer`).send({ stage: 'repair' })).status).toBe(409);
     // 25 minutes ago, as if the bench had been busy.
-    await t.db.update(labourEntries).set({ startedAt: new Date(Date.now() - 25 * 60_000) }).where(eq(labourEntries.id, reloaded.running!.id));
+    await t.db
+      .update(labourEntries)
+      .set({ startedAt: new Date(Date.now() - 25 * 60_000) })
+      .where(eq(labourEntries.id, reloaded.running!.id));
     const stopped = (await tech.post(`/api/restorations/${id}/labour/timer/stop`)).body as LabourLog;
     expect(stopped.running).toBeNull();
     expect(stopped.entries[0]!.minutes).toBe(25);
@@ -49,12 +67,16 @@ describe('the labour log', () => {
   it('when time names both a finding and a stage, or neither, then it is refused', async () => {
     const id = await newSet();
     expect((await tech.post(`/api/restorations/${id}/labour`).send({ minutes: 10 })).status).toBe(400);
-    expect((await tech.post(`/api/restorations/${id}/labour`).send({ minutes: 10, stage: 'repair', findingId: 1 })).status).toBe(400);
+    expect(
+      (await tech.post(`/api/restorations/${id}/labour`).send({ minutes: 10, stage: 'repair', findingId: 1 })).status,
+    ).toBe(400);
   });
 
   it('when the history line cannot be written, then no time is logged', async () => {
     const id = await newSet();
-    const res = await whileFailing(t.db, 'events', 'insert', () => tech.post(`/api/restorations/${id}/labour`).send({ minutes: 15, stage: 'repair' }));
+    const res = await whileFailing(t.db, 'events', 'insert', () =>
+      tech.post(`/api/restorations/${id}/labour`).send({ minutes: 15, stage: 'repair' }),
+    );
     expect(res.status).toBe(500);
     expect(await t.db.select().from(labourEntries).where(eq(labourEntries.restorationId, id))).toEqual([]);
   });

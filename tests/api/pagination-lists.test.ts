@@ -21,7 +21,20 @@ beforeAll(async () => {
   techId = user.id;
   restorationId = (await createRestoration(t.db, [{ userId: user.id, role: 'technician' }])).id;
   photoId = await createPhotoRow(t.db, restorationId);
-  const [f] = await t.db.insert(findings).values({ restorationId, photoId, number: 1, shape: 'pin', points: [{ x: 0.5, y: 0.5 }], title: 'Hum', kind: 'note', severity: 'info', authorId: techId }).returning();
+  const [f] = await t.db
+    .insert(findings)
+    .values({
+      restorationId,
+      photoId,
+      number: 1,
+      shape: 'pin',
+      points: [{ x: 0.5, y: 0.5 }],
+      title: 'Hum',
+      kind: 'note',
+      severity: 'info',
+      authorId: techId,
+    })
+    .returning();
   findingId = f!.id;
   tech = await signedIn(t.app, user);
 });
@@ -67,41 +80,80 @@ async function checkPaging(path: string, key: (item: Item) => number, add: () =>
 const sameInstant = new Date(Date.UTC(2026, 10, 20, 9, 30, 0, 0));
 
 describe('lists in pages (limit, cursor, stable order)', () => {
-  it('when photos are added while a restoration\'s photos are read page by page, then each earlier photo comes once, oldest first', async () => {
+  it("when photos are added while a restoration's photos are read page by page, then each earlier photo comes once, oldest first", async () => {
     const ids: number[] = [];
     for (let i = 0; i < 8; i++) ids.push(await createPhotoRow(t.db, restorationId));
-    await t.db.update(photos).set({ createdAt: sameInstant }).where(inArray(photos.id, ids.slice(0, 4)));
-    await checkPaging(`/api/restorations/${restorationId}/photos`, (p) => p.id as number, () => createPhotoRow(t.db, restorationId));
+    await t.db
+      .update(photos)
+      .set({ createdAt: sameInstant })
+      .where(inArray(photos.id, ids.slice(0, 4)));
+    await checkPaging(
+      `/api/restorations/${restorationId}/photos`,
+      (p) => p.id as number,
+      () => createPhotoRow(t.db, restorationId),
+    );
   });
 
   it('when restorations are added while the bench is read page by page, then each earlier one comes once, most recently changed first', async () => {
     const ids: number[] = [];
-    for (let i = 0; i < 8; i++) ids.push((await createRestoration(t.db, [{ userId: techId, role: 'technician' }], { make: 'Kestrel', model: `K-${i}` })).id);
-    await t.db.update(restorations).set({ updatedAt: sameInstant }).where(inArray(restorations.id, ids.slice(2, 6)));
-    await checkPaging('/api/restorations', (r) => r.id as number, () => createRestoration(t.db, [{ userId: techId, role: 'technician' }]));
+    for (let i = 0; i < 8; i++)
+      ids.push(
+        (await createRestoration(t.db, [{ userId: techId, role: 'technician' }], { make: 'Kestrel', model: `K-${i}` }))
+          .id,
+      );
+    await t.db
+      .update(restorations)
+      .set({ updatedAt: sameInstant })
+      .where(inArray(restorations.id, ids.slice(2, 6)));
+    await checkPaging(
+      '/api/restorations',
+      (r) => r.id as number,
+      () => createRestoration(t.db, [{ userId: techId, role: 'technician' }]),
+    );
   });
 
-  it('when findings are added while a restoration\'s findings are read page by page, then each earlier one comes once, by number', async () => {
+  it("when findings are added while a restoration's findings are read page by page, then each earlier one comes once, by number", async () => {
     let n = 100;
-    const add = () => t.db.insert(findings).values({ restorationId, photoId, number: n++, shape: 'pin', points: [{ x: 0.2, y: 0.2 }], title: `Joint ${n}`, kind: 'note', severity: 'info', authorId: techId });
+    const add = () =>
+      t.db.insert(findings).values({
+        restorationId,
+        photoId,
+        number: n++,
+        shape: 'pin',
+        points: [{ x: 0.2, y: 0.2 }],
+        title: `Joint ${n}`,
+        kind: 'note',
+        severity: 'info',
+        authorId: techId,
+      });
     for (let i = 0; i < 8; i++) await add();
     await checkPaging(`/api/restorations/${restorationId}/findings`, (f) => f.id as number, add);
   });
 
   it('when readings are recorded while the readings are read page by page, then each earlier one comes once, in the order taken', async () => {
-    const add = () => tech.post(`/api/restorations/${restorationId}/measurements`)
-      .send({ location: 'V3 pin 7', quantity: 'dc-voltage', expected: '250 V', tolerance: '±10%', reading: '243 V' }).expect(201);
+    const add = () =>
+      tech
+        .post(`/api/restorations/${restorationId}/measurements`)
+        .send({ location: 'V3 pin 7', quantity: 'dc-voltage', expected: '250 V', tolerance: '±10%', reading: '243 V' })
+        .expect(201);
     const ids: number[] = [];
     for (let i = 0; i < 8; i++) ids.push((await add()).body.id);
-    await t.db.update(measurements).set({ measuredAt: sameInstant }).where(inArray(measurements.id, ids.slice(1, 5)));
+    await t.db
+      .update(measurements)
+      .set({ measuredAt: sameInstant })
+      .where(inArray(measurements.id, ids.slice(1, 5)));
     await checkPaging(`/api/restorations/${restorationId}/measurements`, (m) => m.id as number, add);
   });
 
   it('when comments are posted while a thread is read page by page, then each earlier comment comes once, oldest first', async () => {
-    const add = () => tech.post(`/api/findings/${findingId}/comments`).send({ body: 'Re-measured the HT: 248 V.' }).expect(201);
+    const add = () =>
+      tech.post(`/api/findings/${findingId}/comments`).send({ body: 'Re-measured the HT: 248 V.' }).expect(201);
     const ids: number[] = [];
     for (let i = 0; i < 8; i++) ids.push((await add()).body.id);
-    await t.db.update(comments).set({ createdAt: sameInstant }).where(inArray(comments.id, ids.slice(3, 7)));
+    await t.db
+      .update(comments)
+      .set({ createdAt: sameInstant })
+      .where(inArray(comments.id, ids.slice(3, 7)));
     await checkPaging(`/api/findings/${findingId}/comments`, (c) => c.id as number, add);
   });
 
@@ -114,13 +166,24 @@ describe('lists in pages (limit, cursor, stable order)', () => {
     const ids: number[] = [];
     for (let i = 0; i < 8; i++) ids.push(await add());
     // People who joined at one instant are ordered by name, then id.
-    await t.db.update(memberships).set({ createdAt: sameInstant }).where(inArray(memberships.userId, ids.slice(0, 5)));
+    await t.db
+      .update(memberships)
+      .set({ createdAt: sameInstant })
+      .where(inArray(memberships.userId, ids.slice(0, 5)));
     await checkPaging(`/api/restorations/${restorationId}/members`, (m) => m.userId as number, add);
   });
 
   it('when no limit is given, then a page holds the default number of items and names the next', async () => {
     const rows = Array.from({ length: PAGE_DEFAULT + 1 - 2 }, (_, i) => ({
-      restorationId, photoId, number: 1000 + i, shape: 'pin' as const, points: [{ x: 0.1, y: 0.1 }], title: `Bulk ${i}`, kind: 'note' as const, severity: 'info' as const, authorId: techId,
+      restorationId,
+      photoId,
+      number: 1000 + i,
+      shape: 'pin' as const,
+      points: [{ x: 0.1, y: 0.1 }],
+      title: `Bulk ${i}`,
+      kind: 'note' as const,
+      severity: 'info' as const,
+      authorId: techId,
     }));
     await t.db.insert(findings).values(rows);
     const res = await tech.get(`/api/restorations/${restorationId}/findings`);

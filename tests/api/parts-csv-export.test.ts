@@ -14,7 +14,12 @@ let restorationId: number;
 beforeAll(async () => {
   t = await startTestApp();
   const [a, b] = await Promise.all([createUser(t.db), createUser(t.db)]);
-  restorationId = (await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: b.id, role: 'owner' }])).id;
+  restorationId = (
+    await createRestoration(t.db, [
+      { userId: a.id, role: 'technician' },
+      { userId: b.id, role: 'owner' },
+    ])
+  ).id;
   [tech, owner] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b)]);
 });
 afterAll(() => t.stop());
@@ -29,12 +34,26 @@ const rowsOf = (text: string) => parse(text, { bom: true, columns: true }) as Re
 describe('CSV export, ready for a spreadsheet', () => {
   it('when parsed by a CSV parser, then references come in parts-list order, dates are ISO 8601 dates, the finding has a column and costs are in the chosen currency', async () => {
     const hiddenPhoto = await createPhotoRow(t.db, restorationId, false);
-    const finding = (await tech.post(`/api/photos/${hiddenPhoto}/findings`).send({ shape: 'pin', points: [{ x: 0.2, y: 0.3 }], title: 'Leaky coupling capacitor', componentRef: 'C14' })).body as { id: number; number: number };
+    const finding = (
+      await tech
+        .post(`/api/photos/${hiddenPhoto}/findings`)
+        .send({ shape: 'pin', points: [{ x: 0.2, y: 0.3 }], title: 'Leaky coupling capacitor', componentRef: 'C14' })
+    ).body as { id: number; number: number };
     for (const componentRef of ['R1A', 'C14', 'R1', 'C2', 'C1', 'R10']) {
-      await addPart({ componentRef, originalPart: 'Wax paper', replacementPart: 'Film', state: 'fitted', costMinor: 250, ...(componentRef === 'C14' ? { findingId: finding.id } : {}) });
+      await addPart({
+        componentRef,
+        originalPart: 'Wax paper',
+        replacementPart: 'Film',
+        state: 'fitted',
+        costMinor: 250,
+        ...(componentRef === 'C14' ? { findingId: finding.id } : {}),
+      });
     }
     // 23:30 UTC on 8 March 2026 is already 9 March in Berlin (CET, UTC+1 until the last Sunday of March: IANA tz database).
-    await t.db.update(parts).set({ fittedAt: new Date('2026-03-08T23:30:00Z') }).where(eq(parts.restorationId, restorationId));
+    await t.db
+      .update(parts)
+      .set({ fittedAt: new Date('2026-03-08T23:30:00Z') })
+      .where(eq(parts.restorationId, restorationId));
 
     const inUtc = rowsOf((await tech.get(`/api/restorations/${restorationId}/parts.csv`)).text);
     // Parts lists number references in counting order, a lettered sub-part after its parent (common practice, no source).
@@ -49,7 +68,9 @@ describe('CSV export, ready for a spreadsheet', () => {
     expect(rows.map((r) => r.Fitted)).toEqual(Array(6).fill('2026-03-09'));
     // ISO 4217: the euro has two minor digits, the yen none.
     expect(rows[0]!['Cost (EUR)']).toBe('2.50');
-    expect(rowsOf((await tech.get(`/api/restorations/${restorationId}/parts.csv?currency=JPY`)).text)[0]!['Cost (JPY)']).toBe('250');
+    expect(
+      rowsOf((await tech.get(`/api/restorations/${restorationId}/parts.csv?currency=JPY`)).text)[0]!['Cost (JPY)'],
+    ).toBe('250');
   });
 
   it('when the currency or time zone is not a real one, then 400', async () => {

@@ -12,9 +12,17 @@ let restorationId: number;
 beforeAll(async () => {
   t = await startTestApp();
   const [a, b, c] = await Promise.all([createUser(t.db), createUser(t.db), createUser(t.db)]);
-  restorationId = (await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: b.id, role: 'mentor' }, { userId: c.id, role: 'owner' }])).id;
+  restorationId = (
+    await createRestoration(t.db, [
+      { userId: a.id, role: 'technician' },
+      { userId: b.id, role: 'mentor' },
+      { userId: c.id, role: 'owner' },
+    ])
+  ).id;
   [tech, mentor, owner] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b), signedIn(t.app, c)]);
-  const res = await tech.post(`/api/restorations/${restorationId}/parts`).send({ componentRef: 'C7', originalPart: 'Wax paper', replacementPart: 'Film', state: 'fitted', costMinor: 385 });
+  const res = await tech
+    .post(`/api/restorations/${restorationId}/parts`)
+    .send({ componentRef: 'C7', originalPart: 'Wax paper', replacementPart: 'Film', state: 'fitted', costMinor: 385 });
   expect(res.status).toBe(201);
 });
 afterAll(() => t.stop());
@@ -43,8 +51,14 @@ describe('mentors see no money in the parts ledger', () => {
     expect(rowsOf(mentorCsv.text).map((r) => r.Reference)).toEqual(['C7']);
     expect(mentorCsv.text).not.toContain('3.85');
     // Asking for a currency does not bring the column back.
-    expect(headerOf((await mentor.get(`/api/restorations/${restorationId}/parts.csv?currency=EUR`)).text).filter((h) => h.startsWith('Cost'))).toEqual([]);
-    expect(rowsOf((await tech.get(`/api/restorations/${restorationId}/parts.csv`)).text)[0]!['Cost (GBP)']).toBe('3.85');
+    expect(
+      headerOf((await mentor.get(`/api/restorations/${restorationId}/parts.csv?currency=EUR`)).text).filter((h) =>
+        h.startsWith('Cost'),
+      ),
+    ).toEqual([]);
+    expect(rowsOf((await tech.get(`/api/restorations/${restorationId}/parts.csv`)).text)[0]!['Cost (GBP)']).toBe(
+      '3.85',
+    );
     expect(rowsOf((await owner.get(`/api/restorations/${restorationId}/parts.csv`)).text)[0]!['Cost (GBP)']).toBe('');
   });
 });

@@ -23,7 +23,15 @@ beforeAll(async () => {
   const [a, b] = await Promise.all([createUser(t.db), createUser(t.db)]);
   [techId, ownerId] = [a.id, b.id];
   [tech, owner] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b)]);
-  await writeWorkshopSettings(t.db, { currency: 'GBP', labourRate: 4000, partsMarkupBasisPoints: 2500, taxName: 'VAT', taxRateBasisPoints: null, taxRounding: 'invoice-down', estimateApprovalRequired: false });
+  await writeWorkshopSettings(t.db, {
+    currency: 'GBP',
+    labourRate: 4000,
+    partsMarkupBasisPoints: 2500,
+    taxName: 'VAT',
+    taxRateBasisPoints: null,
+    taxRounding: 'invoice-down',
+    estimateApprovalRequired: false,
+  });
 });
 afterAll(async () => {
   server.closeAllConnections();
@@ -32,12 +40,18 @@ afterAll(async () => {
 });
 
 const newDeposit = async (amount: number) => {
-  const id = (await createRestoration(t.db, [{ userId: techId, role: 'technician' }, { userId: ownerId, role: 'owner' }])).id;
+  const id = (
+    await createRestoration(t.db, [
+      { userId: techId, role: 'technician' },
+      { userId: ownerId, role: 'owner' },
+    ])
+  ).id;
   return { id, deposit: (await tech.post(`/api/restorations/${id}/deposits`).send({ amount })).body as Invoice };
 };
 const invoiceOf = async (restorationId: number, invoiceId: number) =>
   ((await tech.get(`/api/restorations/${restorationId}/invoices`)).body as Invoice[]).find((i) => i.id === invoiceId)!;
-const paymentsOf = async (restorationId: number) => (await tech.get(`/api/restorations/${restorationId}/payments`)).body as Payment[];
+const paymentsOf = async (restorationId: number) =>
+  (await tech.get(`/api/restorations/${restorationId}/payments`)).body as Payment[];
 /** Opens a checkout page (nothing recorded yet) and returns a way to press Pay on it later. */
 async function openCheckout(invoiceId: number) {
   const res = await owner.post(`/api/invoices/${invoiceId}/checkout`);
@@ -53,20 +67,35 @@ describe('card payments that arrive when nothing is due', () => {
   it('when the deposit is voided while its checkout page is open and the owner pays, then the payment is recorded and flagged for refund in full', async () => {
     const { id, deposit } = await newDeposit(4000);
     const pay = await openCheckout(deposit.id);
-    expect((await tech.post(`/api/invoices/${deposit.id}/void`).send({ reason: 'Asked for the wrong amount' })).status).toBe(200);
+    expect(
+      (await tech.post(`/api/invoices/${deposit.id}/void`).send({ reason: 'Asked for the wrong amount' })).status,
+    ).toBe(200);
     // A void deposit offers no new checkout.
     expect((await owner.post(`/api/invoices/${deposit.id}/checkout`)).status).toBe(409);
     await pay();
     const [line] = await paymentsOf(id);
-    expect(line).toMatchObject({ kind: 'payment', status: 'succeeded', amount: { amount: 4000, currency: 'GBP' }, refundDue: { amount: 4000, currency: 'GBP' } });
+    expect(line).toMatchObject({
+      kind: 'payment',
+      status: 'succeeded',
+      amount: { amount: 4000, currency: 'GBP' },
+      refundDue: { amount: 4000, currency: 'GBP' },
+    });
     expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'void', left: { amount: 0, currency: 'GBP' } });
-    const [note] = await t.db.select().from(notifications).where(and(eq(notifications.restorationId, id), eq(notifications.kind, 'payment'), eq(notifications.userId, techId)));
+    const [note] = await t.db
+      .select()
+      .from(notifications)
+      .where(
+        and(eq(notifications.restorationId, id), eq(notifications.kind, 'payment'), eq(notifications.userId, techId)),
+      );
     expect(note!.summary).toContain('£40.00 of it was not due (the invoice is void) and is to be refunded');
     // The technician refunds it; the flag clears once the refund's event is in.
     expect((await tech.post(`/api/payments/${line!.id}/refund`).send({})).status).toBe(202);
     await t.paymentFake.settled();
     const after = (await paymentsOf(id)).find((p) => p.id === line!.id)!;
-    expect(after).toMatchObject({ refunded: { amount: 4000, currency: 'GBP' }, refundDue: { amount: 0, currency: 'GBP' } });
+    expect(after).toMatchObject({
+      refunded: { amount: 4000, currency: 'GBP' },
+      refundDue: { amount: 0, currency: 'GBP' },
+    });
   });
 
   it('when a transfer settles the deposit while its checkout page is open and the owner pays too, then only the excess is flagged for refund', async () => {
@@ -77,7 +106,10 @@ describe('card payments that arrive when nothing is due', () => {
     await pay();
     const card = (await paymentsOf(id)).find((p) => p.method === 'card')!;
     // The page asked for £50.00, but only £30.00 was still due: £20.00 is to go back.
-    expect(card).toMatchObject({ amount: { amount: 5000, currency: 'GBP' }, refundDue: { amount: 2000, currency: 'GBP' } });
+    expect(card).toMatchObject({
+      amount: { amount: 5000, currency: 'GBP' },
+      refundDue: { amount: 2000, currency: 'GBP' },
+    });
     expect(await invoiceOf(id, deposit.id)).toMatchObject({ status: 'paid', paid: { amount: 7000, currency: 'GBP' } });
   });
 });

@@ -12,10 +12,14 @@ let restorationId: number;
 let sharedPhoto: number, workshopPhoto: number, emptyPhoto: number;
 
 async function finding(photoId: number, status: string, ownerVisible: boolean) {
-  const res = await tech.post(`/api/photos/${photoId}/findings`).send({ title: `A ${status} joint`, shape: 'pin', points: [{ x: 0.5, y: 0.5 }], ownerVisible });
+  const res = await tech
+    .post(`/api/photos/${photoId}/findings`)
+    .send({ title: `A ${status} joint`, shape: 'pin', points: [{ x: 0.5, y: 0.5 }], ownerVisible });
   expect(res.status).toBe(201);
   if (status !== 'observed') {
-    const patch = await tech.patch(`/api/findings/${res.body.id}`).send(status === 'dismissed' ? { status, dismissReason: 'Not a fault' } : { status });
+    const patch = await tech
+      .patch(`/api/findings/${res.body.id}`)
+      .send(status === 'dismissed' ? { status, dismissReason: 'Not a fault' } : { status });
     expect(patch.status).toBe(200);
   }
 }
@@ -23,9 +27,18 @@ async function finding(photoId: number, status: string, ownerVisible: boolean) {
 beforeAll(async () => {
   t = await startTestApp();
   const [a, c] = await Promise.all([createUser(t.db), createUser(t.db)]);
-  restorationId = (await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: c.id, role: 'owner' }])).id;
+  restorationId = (
+    await createRestoration(t.db, [
+      { userId: a.id, role: 'technician' },
+      { userId: c.id, role: 'owner' },
+    ])
+  ).id;
   [tech, owner] = await Promise.all([signedIn(t.app, a), signedIn(t.app, c)]);
-  [sharedPhoto, workshopPhoto, emptyPhoto] = await Promise.all([createPhotoRow(t.db, restorationId, true), createPhotoRow(t.db, restorationId, false), createPhotoRow(t.db, restorationId, true)]);
+  [sharedPhoto, workshopPhoto, emptyPhoto] = await Promise.all([
+    createPhotoRow(t.db, restorationId, true),
+    createPhotoRow(t.db, restorationId, false),
+    createPhotoRow(t.db, restorationId, true),
+  ]);
   // On the shared photo: two observed (one shared), one confirmed (shared), one dismissed (not shared).
   await finding(sharedPhoto, 'observed', true);
   await finding(sharedPhoto, 'observed', false);
@@ -59,7 +72,8 @@ describe('finding counts on the photos list', () => {
     const listed = await owner.get(`/api/restorations/${restorationId}/findings`);
     expect(listed.status).toBe(200);
     const byStatus: Record<string, number> = {};
-    for (const f of listed.body as { photoId: number; status: string }[]) if (f.photoId === sharedPhoto) byStatus[f.status] = (byStatus[f.status] ?? 0) + 1;
+    for (const f of listed.body as { photoId: number; status: string }[])
+      if (f.photoId === sharedPhoto) byStatus[f.status] = (byStatus[f.status] ?? 0) + 1;
     expect(counts.get(sharedPhoto)).toEqual(byStatus);
   });
 });

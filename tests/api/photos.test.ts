@@ -20,9 +20,20 @@ const MAX_BYTES = 2 * 1024 * 1024;
 beforeAll(async () => {
   t = await startTestApp({ uploads: { maxBytes: MAX_BYTES, maxPixels: 100e6 } });
   const [a, b, c, d] = await Promise.all([createUser(t.db), createUser(t.db), createUser(t.db), createUser(t.db)]);
-  restorationId = (await createRestoration(t.db, [{ userId: a.id, role: 'technician' }, { userId: b.id, role: 'mentor' }, { userId: c.id, role: 'owner' }])).id;
+  restorationId = (
+    await createRestoration(t.db, [
+      { userId: a.id, role: 'technician' },
+      { userId: b.id, role: 'mentor' },
+      { userId: c.id, role: 'owner' },
+    ])
+  ).id;
   otherRestorationId = (await createRestoration(t.db, [{ userId: d.id, role: 'technician' }])).id;
-  [tech, mentor, owner, stranger] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b), signedIn(t.app, c), signedIn(t.app, d)]);
+  [tech, mentor, owner, stranger] = await Promise.all([
+    signedIn(t.app, a),
+    signedIn(t.app, b),
+    signedIn(t.app, c),
+    signedIn(t.app, d),
+  ]);
 });
 afterAll(() => t.stop());
 
@@ -40,9 +51,20 @@ const upload = (agent: Agent, id: number, file: Buffer, name: string, fields: Re
 
 describe('uploading photos', () => {
   it('when a JPEG carries GPS and orientation 6, then it comes back upright and no served variant carries GPS or EXIF', async () => {
-    const res = await upload(tech, restorationId, await jpegWithGpsAndOrientation6(), 'IMG_0001.jpg', { view: 'underside', phase: 'before', caption: 'As found' });
+    const res = await upload(tech, restorationId, await jpegWithGpsAndOrientation6(), 'IMG_0001.jpg', {
+      view: 'underside',
+      phase: 'before',
+      caption: 'As found',
+    });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ view: 'underside', phase: 'before', caption: 'As found', width: 400, height: 600, ownerVisible: false });
+    expect(res.body).toMatchObject({
+      view: 'underside',
+      phase: 'before',
+      caption: 'As found',
+      width: 400,
+      height: 600,
+      ownerVisible: false,
+    });
     expect(res.body.takenAt).toMatch(/^2026-11-20T14:05:09/);
     expect(res.body.urls.original).toBeDefined();
     const [row] = await t.db.select().from(photos).where(eq(photos.id, res.body.id));
@@ -54,7 +76,10 @@ describe('uploading photos', () => {
       expect(meta.exif).toBeUndefined();
       expect(meta.height).toBeGreaterThan(meta.width!);
       // Upright: the red half that was on the left is now on top.
-      const { data } = await sharp(stored).extract({ left: Math.floor(meta.width! / 2), top: 2, width: 1, height: 1 }).raw().toBuffer({ resolveWithObject: true });
+      const { data } = await sharp(stored)
+        .extract({ left: Math.floor(meta.width! / 2), top: 2, width: 1, height: 1 })
+        .raw()
+        .toBuffer({ resolveWithObject: true });
       expect(data[0]).toBeGreaterThan(150);
       expect(data[2]).toBeLessThan(90);
     }
@@ -65,7 +90,15 @@ describe('uploading photos', () => {
   const bad: [string, () => Promise<Buffer> | Buffer, string, number][] = [
     ['a truncated JPEG', async () => (await twoToneJpeg(1200, 800)).subarray(0, 3000), 'cut.jpg', 400],
     ['a text file named .jpg', () => Buffer.from('not a photo, just words\n'), 'notes.jpg', 415],
-    ['an SVG', () => Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><rect width="10" height="10"/></svg>'), 'chassis.svg', 415],
+    [
+      'an SVG',
+      () =>
+        Buffer.from(
+          '<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><rect width="10" height="10"/></svg>',
+        ),
+      'chassis.svg',
+      415,
+    ],
     ['a PNG declaring 50000×50000 pixels', () => pngClaiming(50000, 50000), 'bomb.png', 413],
     ['an empty file', () => Buffer.alloc(0), 'empty.jpg', 400],
     ['an oversize file', () => Buffer.alloc(MAX_BYTES + 1024, 0xff), 'huge.jpg', 413],
@@ -79,7 +112,7 @@ describe('uploading photos', () => {
       expect([await rowCount(), await objectCount()]).toEqual([rows, objects]);
     });
 
-  it('when the file field is missing, or the photo goes to someone else\'s restoration, then 400 and 404 and nothing changes', async () => {
+  it("when the file field is missing, or the photo goes to someone else's restoration, then 400 and 404 and nothing changes", async () => {
     const [rows, objects] = [await rowCount(), await objectCount()];
     const missing = await tech.post(`/api/restorations/${restorationId}/photos`).field('view', 'top');
     expect(missing.status).toBe(400);
@@ -95,7 +128,11 @@ describe('uploading photos', () => {
 describe('the orphan sweep', () => {
   it('when objects have no row, then the sweep removes them and leaves every photo that has one', async () => {
     const kept = (await upload(tech, restorationId, await twoToneJpeg(), 'kept.jpg')).body;
-    await t.deps.storage.putObject('photos/999/orphan-uuid/original', Buffer.from('left behind by a crash'), 'image/jpeg');
+    await t.deps.storage.putObject(
+      'photos/999/orphan-uuid/original',
+      Buffer.from('left behind by a crash'),
+      'image/jpeg',
+    );
     const before = await objectCount();
     // Everything counts as "older than a day" here, so only the row check protects the objects.
     expect(await sweepOrphanedObjects(t.db, t.deps.storage, -1000)).toBe(1);
@@ -108,7 +145,9 @@ describe('the orphan sweep', () => {
 
 describe('who sees which photo', () => {
   it('when a photo is not shared, then the owner and strangers never get a URL for it; once shared, the owner does', async () => {
-    const created = (await upload(tech, restorationId, await twoToneJpeg(), 'a.jpg', { view: 'top', caption: 'private' })).body;
+    const created = (
+      await upload(tech, restorationId, await twoToneJpeg(), 'a.jpg', { view: 'top', caption: 'private' })
+    ).body;
     const ownerList = (await owner.get(`/api/restorations/${restorationId}/photos`)).body;
     expect(ownerList.map((p: { id: number }) => p.id)).not.toContain(created.id);
     expect((await owner.get(`/api/photos/${created.id}`)).status).toBe(404);
@@ -118,7 +157,9 @@ describe('who sees which photo', () => {
     expect(mentorView.urls.display).toBeDefined();
     expect(mentorView.urls.original).toBeUndefined();
 
-    expect((await tech.patch(`/api/photos/${created.id}`).send({ ownerVisible: true, phase: 'after' })).status).toBe(200);
+    expect((await tech.patch(`/api/photos/${created.id}`).send({ ownerVisible: true, phase: 'after' })).status).toBe(
+      200,
+    );
     const shared = (await owner.get(`/api/photos/${created.id}`)).body;
     expect(shared).toMatchObject({ id: created.id, phase: 'after', ownerVisible: true });
     expect(shared.urls.original).toBeUndefined();

@@ -21,7 +21,14 @@ describe('restorations', () => {
   it('when a set is taken in with make and model, then its creator is its technician and sees it listed', async () => {
     const created = await tech.post('/api/restorations').send({ make: 'Farrowby', model: 'Lark 3', year: 1957 });
     expect(created.status).toBe(201);
-    expect(created.body).toMatchObject({ make: 'Farrowby', model: 'Lark 3', year: 1957, stage: 'intake', serial: null, role: 'technician' });
+    expect(created.body).toMatchObject({
+      make: 'Farrowby',
+      model: 'Lark 3',
+      year: 1957,
+      stage: 'intake',
+      serial: null,
+      role: 'technician',
+    });
     const list = await tech.get('/api/restorations');
     expect(list.body.map((r: { id: number }) => r.id)).toContain(created.body.id);
     const others = await other.get('/api/restorations');
@@ -54,10 +61,16 @@ describe('restorations', () => {
   });
 
   it('when a restoration moves to a new stage, then the change is kept, nothing else changes; an unknown stage is refused', async () => {
-    const { body } = await tech.post('/api/restorations').send({ make: 'Farrowby', model: 'Wren', liveChassis: true, workLevel: 'refurbish' });
+    const { body } = await tech
+      .post('/api/restorations')
+      .send({ make: 'Farrowby', model: 'Wren', liveChassis: true, workLevel: 'refurbish' });
     const res = await tech.patch(`/api/restorations/${body.id}`).send({ stage: 'assessment' });
     expect(res.status).toBe(200);
-    expect((await tech.get(`/api/restorations/${body.id}`)).body).toMatchObject({ stage: 'assessment', liveChassis: true, workLevel: 'refurbish' });
+    expect((await tech.get(`/api/restorations/${body.id}`)).body).toMatchObject({
+      stage: 'assessment',
+      liveChassis: true,
+      workLevel: 'refurbish',
+    });
     const bad = await tech.patch(`/api/restorations/${body.id}`).send({ stage: 'finished' });
     expect(bad.status).toBe(400);
   });
@@ -69,7 +82,8 @@ describe('restorations', () => {
 
   it('when a restoration is deleted, then its memberships go with it', async () => {
     const { body } = await tech.post('/api/restorations').send({ make: 'Farrowby', model: 'Gone' });
-    const membershipsOf = async () => (await t.db.select({ n: count() }).from(memberships).where(eq(memberships.restorationId, body.id)))[0]!.n;
+    const membershipsOf = async () =>
+      (await t.db.select({ n: count() }).from(memberships).where(eq(memberships.restorationId, body.id)))[0]!.n;
     expect(await membershipsOf()).toBe(1);
     expect((await tech.delete(`/api/restorations/${body.id}`)).status).toBe(204);
     expect((await tech.get(`/api/restorations/${body.id}`)).status).toBe(404);
@@ -78,7 +92,10 @@ describe('restorations', () => {
 
   it('when a cookie-carrying write comes from another origin, then it is refused and nothing changes', async () => {
     const before = await rowCount();
-    const res = await tech.post('/api/restorations').set('Origin', 'https://elsewhere.example').send({ make: 'A', model: 'B' });
+    const res = await tech
+      .post('/api/restorations')
+      .set('Origin', 'https://elsewhere.example')
+      .send({ make: 'A', model: 'B' });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('bad_origin');
     const noOrigin = await tech.post('/api/restorations').unset('Origin').send({ make: 'A', model: 'B' });

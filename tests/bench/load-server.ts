@@ -14,18 +14,51 @@ import { startTestApp, TEST_ORIGIN } from '../support/test-app';
 const t = await startTestApp();
 const people: { cookie: string; restorationId: number; photoId: number; findingId: number }[] = [];
 for (let s = 0; s < 10; s++) {
-  const users = await Promise.all(Array.from({ length: 5 }, (_, i) => createUser(t.db, { name: `Bench hand ${s}-${i}` })));
-  const r = await createRestoration(t.db, users.map((u) => ({ userId: u.id, role: 'technician' as const })), { make: 'Larkfield', model: `Model ${s}` });
+  const users = await Promise.all(
+    Array.from({ length: 5 }, (_, i) => createUser(t.db, { name: `Bench hand ${s}-${i}` })),
+  );
+  const r = await createRestoration(
+    t.db,
+    users.map((u) => ({ userId: u.id, role: 'technician' as const })),
+    { make: 'Larkfield', model: `Model ${s}` },
+  );
   const photoId = await createPhotoRow(t.db, r.id, true);
-  const ids = (await t.db.insert(findings).values(Array.from({ length: 60 }, (_, i) => ({
-    restorationId: r.id, photoId, number: i + 1, shape: 'pin' as const, points: [{ x: (i % 10) / 10 + 0.05, y: Math.floor(i / 10) / 6 + 0.05 }],
-    title: `Finding ${i + 1}`, componentRef: `C${i + 1}`, kind: 'note' as const, severity: 'info' as const, authorId: users[0]!.id,
-  }))).returning({ id: findings.id })).map((f) => f.id);
-  await t.db.insert(comments).values(ids.slice(0, 20).map((findingId) => ({ findingId, authorId: users[1]!.id, body: 'Checked at 250 V, fine.' })));
+  const ids = (
+    await t.db
+      .insert(findings)
+      .values(
+        Array.from({ length: 60 }, (_, i) => ({
+          restorationId: r.id,
+          photoId,
+          number: i + 1,
+          shape: 'pin' as const,
+          points: [{ x: (i % 10) / 10 + 0.05, y: Math.floor(i / 10) / 6 + 0.05 }],
+          title: `Finding ${i + 1}`,
+          componentRef: `C${i + 1}`,
+          kind: 'note' as const,
+          severity: 'info' as const,
+          authorId: users[0]!.id,
+        })),
+      )
+      .returning({ id: findings.id })
+  ).map((f) => f.id);
+  await t.db
+    .insert(comments)
+    .values(
+      ids.slice(0, 20).map((findingId) => ({ findingId, authorId: users[1]!.id, body: 'Checked at 250 V, fine.' })),
+    );
   for (const u of users) {
-    const res = await supertest(t.app).post('/api/auth/sign-in').set('Origin', TEST_ORIGIN).send({ email: u.email, password: u.password });
+    const res = await supertest(t.app)
+      .post('/api/auth/sign-in')
+      .set('Origin', TEST_ORIGIN)
+      .send({ email: u.email, password: u.password });
     if (res.status !== 200) throw new Error(`sign-in failed: ${res.status}`);
-    people.push({ cookie: String(res.headers['set-cookie']![0]).split(';')[0]!, restorationId: r.id, photoId, findingId: ids[0]! });
+    people.push({
+      cookie: String(res.headers['set-cookie']![0]).split(';')[0]!,
+      restorationId: r.id,
+      photoId,
+      findingId: ids[0]!,
+    });
   }
 }
 const server = t.app.listen(0, '127.0.0.1', () => {

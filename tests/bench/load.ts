@@ -20,8 +20,12 @@ const warmUpSeconds = Number(process.argv[3] ?? 15);
 const boundary = 'gridleak-load-boundary';
 const jpeg = await twoToneJpeg(1600, 1200);
 const uploadBody = Buffer.concat([
-  Buffer.from(`--${boundary}\r\nContent-Disposition: form-data; name="view"\r\n\r\nunderside\r\n--${boundary}\r\nContent-Disposition: form-data; name="phase"\r\n\r\nbefore\r\n`),
-  Buffer.from(`--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="chassis.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`),
+  Buffer.from(
+    `--${boundary}\r\nContent-Disposition: form-data; name="view"\r\n\r\nunderside\r\n--${boundary}\r\nContent-Disposition: form-data; name="phase"\r\n\r\nbefore\r\n`,
+  ),
+  Buffer.from(
+    `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="chassis.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`,
+  ),
   jpeg,
   Buffer.from(`\r\n--${boundary}--\r\n`),
 ]);
@@ -34,25 +38,50 @@ void _unset;
 const cluster = await startTestCluster();
 const child = fork('tests/bench/load-server.ts', [], {
   execArgv: ['--expose-gc', '--import', 'tsx'],
-  env: { ...inherited, ...(arenas ? { MALLOC_ARENA_MAX: arenas } : {}), GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl, AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' },
+  env: {
+    ...inherited,
+    ...(arenas ? { MALLOC_ARENA_MAX: arenas } : {}),
+    GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl,
+    AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
+  },
   stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
 });
-const memory = () => new Promise<NodeJS.MemoryUsage>((resolve) => {
-  child.once('message', (m) => resolve(m as NodeJS.MemoryUsage));
-  child.send('rss');
-});
+const memory = () =>
+  new Promise<NodeJS.MemoryUsage>((resolve) => {
+    child.once('message', (m) => resolve(m as NodeJS.MemoryUsage));
+    child.send('rss');
+  });
 try {
-  const info = await new Promise<{ port: number; people: Person[] }>((resolve) => child.stdout!.once('data', (d) => resolve(JSON.parse(String(d)))));
+  const info = await new Promise<{ port: number; people: Person[] }>((resolve) =>
+    child.stdout!.once('data', (d) => resolve(JSON.parse(String(d)))),
+  );
   let next = 0;
   let rounds = 0;
   // One step of the round: its route name for the figures, and how to make the request for this person.
-  const step = (route: string, make: (p: Person, c: Ctx) => { method?: string; path: string; body?: string | Buffer; headers?: Record<string, string> }) => ({
+  const step = (
+    route: string,
+    make: (
+      p: Person,
+      c: Ctx,
+    ) => { method?: string; path: string; body?: string | Buffer; headers?: Record<string, string> },
+  ) => ({
     setupRequest: (req: Record<string, unknown>, context: Ctx) => {
       context.person ??= info.people[next++ % info.people.length];
       context.route = route;
       const r = make(context.person!, context);
-      return { ...req, method: r.method ?? 'GET', path: r.path, body: r.body,
-        headers: { cookie: context.person!.cookie, origin: 'http://gridleak.test', 'accept-encoding': 'gzip, br', ...(r.body ? { 'content-type': 'application/json' } : {}), ...r.headers } };
+      return {
+        ...req,
+        method: r.method ?? 'GET',
+        path: r.path,
+        body: r.body,
+        headers: {
+          cookie: context.person!.cookie,
+          origin: 'http://gridleak.test',
+          'accept-encoding': 'gzip, br',
+          ...(r.body ? { 'content-type': 'application/json' } : {}),
+          ...r.headers,
+        },
+      };
     },
   });
   const requests = [
@@ -66,9 +95,22 @@ try {
     step('GET /restorations/:id/measurements', (p) => ({ path: `/api/restorations/${p.restorationId}/measurements` })),
     step('GET /restorations/:id/parts', (p) => ({ path: `/api/restorations/${p.restorationId}/parts` })),
     step('GET /restorations/:id/events', (p) => ({ path: `/api/restorations/${p.restorationId}/events` })),
-    step('POST /findings/:id/comments', (p) => ({ method: 'POST', path: `/api/findings/${p.findingId}/comments`, body: JSON.stringify({ body: 'Re-measured: 248 V at the anode.' }) })),
-    step('POST /restorations/:id/measurements', (p) => ({ method: 'POST', path: `/api/restorations/${p.restorationId}/measurements`,
-      body: JSON.stringify({ location: 'V3 pin 7', quantity: 'dc-voltage', expected: '250 V', tolerance: '±10%', reading: '243 V' }) })),
+    step('POST /findings/:id/comments', (p) => ({
+      method: 'POST',
+      path: `/api/findings/${p.findingId}/comments`,
+      body: JSON.stringify({ body: 'Re-measured: 248 V at the anode.' }),
+    })),
+    step('POST /restorations/:id/measurements', (p) => ({
+      method: 'POST',
+      path: `/api/restorations/${p.restorationId}/measurements`,
+      body: JSON.stringify({
+        location: 'V3 pin 7',
+        quantity: 'dc-voltage',
+        expected: '250 V',
+        tolerance: '±10%',
+        reading: '243 V',
+      }),
+    })),
     step('GET /photos/:id/findings', (p) => ({ path: `/api/photos/${p.photoId}/findings` })),
     // An upload every tenth round; the other rounds read the photo list again.
     step('upload or photos', (p, c) => {
@@ -76,23 +118,31 @@ try {
       rounds += 1;
       if (rounds % 10 !== 5) return { path: `/api/restorations/${p.restorationId}/photos` };
       c.route = 'POST /restorations/:id/photos (upload)';
-      return { method: 'POST', path: `/api/restorations/${p.restorationId}/photos`, body: uploadBody, headers: { 'content-type': `multipart/form-data; boundary=${boundary}` } };
+      return {
+        method: 'POST',
+        path: `/api/restorations/${p.restorationId}/photos`,
+        body: uploadBody,
+        headers: { 'content-type': `multipart/form-data; boundary=${boundary}` },
+      };
     }),
   ];
   const atStart = await memory();
   let byRoute = new Map<string, number[]>();
   let failures = new Map<string, number>();
-  const run = (duration: number) => new Promise<autocannon.Result>((resolve, reject) => {
-    const instance = autocannon({ url: `http://127.0.0.1:${info.port}`, connections: 50, duration, requests: requests as never, timeout: 30 },
-      (err, res) => (err ? reject(err) : resolve(res)));
-    instance.on('response', (client, status, _bytes, ms) => {
-      const ctx = (client as unknown as { requestIterator: { context: Ctx } }).requestIterator.context;
-      const route = ctx.route === 'upload or photos' ? 'GET /restorations/:id/photos' : ctx.route ?? '?';
-      if (!byRoute.has(route)) byRoute.set(route, []);
-      byRoute.get(route)!.push(ms);
-      if (status >= 400) failures.set(`${route} → ${status}`, (failures.get(`${route} → ${status}`) ?? 0) + 1);
+  const run = (duration: number) =>
+    new Promise<autocannon.Result>((resolve, reject) => {
+      const instance = autocannon(
+        { url: `http://127.0.0.1:${info.port}`, connections: 50, duration, requests: requests as never, timeout: 30 },
+        (err, res) => (err ? reject(err) : resolve(res)),
+      );
+      instance.on('response', (client, status, _bytes, ms) => {
+        const ctx = (client as unknown as { requestIterator: { context: Ctx } }).requestIterator.context;
+        const route = ctx.route === 'upload or photos' ? 'GET /restorations/:id/photos' : (ctx.route ?? '?');
+        if (!byRoute.has(route)) byRoute.set(route, []);
+        byRoute.get(route)!.push(ms);
+        if (status >= 400) failures.set(`${route} → ${status}`, (failures.get(`${route} → ${status}`) ?? 0) + 1);
+      });
     });
-  });
   if (warmUpSeconds > 0) await run(warmUpSeconds);
   const afterWarmUp = await memory();
   byRoute = new Map();
@@ -105,17 +155,25 @@ try {
   const mb = (n: number) => `${(n / 1024 / 1024).toFixed(0)} MB`;
   const line = (what: string, m: NodeJS.MemoryUsage) =>
     `    ${what}: RSS ${mb(m.rss)} (V8 heap used ${mb(m.heapUsed)} of ${mb(m.heapTotal)}, external ${mb(m.external)}, of which array buffers ${mb(m.arrayBuffers)})`;
-  console.log(`\nload: 50 signed-in users, ${seconds} s, a round of ${requests.length} requests each (an upload every tenth round)`);
-  console.log(`  requests: ${result.requests.total} (${(result.requests.total / seconds).toFixed(0)}/s); errors: ${result.errors} connection, ${result.non2xx} non-2xx; timeouts ${result.timeouts}`);
+  console.log(
+    `\nload: 50 signed-in users, ${seconds} s, a round of ${requests.length} requests each (an upload every tenth round)`,
+  );
+  console.log(
+    `  requests: ${result.requests.total} (${(result.requests.total / seconds).toFixed(0)}/s); errors: ${result.errors} connection, ${result.non2xx} non-2xx; timeouts ${result.timeouts}`,
+  );
   for (const [what, n] of failures) console.log(`    ${what}: ${n}`);
   console.log('  p95 per route:');
-  for (const [route, xs] of [...byRoute].sort((a, b) => p95(b[1]) - p95(a[1]))) console.log(`    ${p95(xs).toFixed(0).padStart(6)} ms  ${route} (${xs.length})`);
-  console.log(`  server memory (MALLOC_ARENA_MAX=${arenas || "glibc's default"}), each after a full garbage collection:`);
+  for (const [route, xs] of [...byRoute].sort((a, b) => p95(b[1]) - p95(a[1])))
+    console.log(`    ${p95(xs).toFixed(0).padStart(6)} ms  ${route} (${xs.length})`);
+  console.log(
+    `  server memory (MALLOC_ARENA_MAX=${arenas || "glibc's default"}), each after a full garbage collection:`,
+  );
   console.log(line('at start', atStart));
   console.log(line(`after a ${warmUpSeconds} s warm-up of the same mix`, afterWarmUp));
   console.log(line(`after the ${seconds} s run`, afterRun));
   console.log(line('after 10 s without requests', afterRest));
-  const growth = (m: NodeJS.MemoryUsage) => `${mb(afterWarmUp.rss)} → ${mb(m.rss)} (${(((m.rss - afterWarmUp.rss) / afterWarmUp.rss) * 100).toFixed(0)} %)`;
+  const growth = (m: NodeJS.MemoryUsage) =>
+    `${mb(afterWarmUp.rss)} → ${mb(m.rss)} (${(((m.rss - afterWarmUp.rss) / afterWarmUp.rss) * 100).toFixed(0)} %)`;
   console.log(`  server RSS growth over the run: ${growth(afterRun)}; after 10 s at rest: ${growth(afterRest)}`);
 } finally {
   child.kill('SIGTERM');

@@ -20,16 +20,20 @@ async function firstFrame(url: string) {
   await page.goto(`${product.origin}/api/meta`); // leave the app, so the markup page loads from scratch
   const started = Date.now();
   await page.goto(url);
-  await page.waitForFunction(() => (window as unknown as { __gridleakMarkup?: { view: { scale: number } } }).__gridleakMarkup?.view.scale, null, { timeout: 60_000 });
+  await page.waitForFunction(
+    () => (window as unknown as { __gridleakMarkup?: { view: { scale: number } } }).__gridleakMarkup?.view.scale,
+    null,
+    { timeout: 60_000 },
+  );
   // Two animation frames after the probe appears, the marks have been drawn.
   await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
   const ms = Date.now() - started;
   // When each part of the page had arrived, from the navigation's start (ms).
-  const parts = await page.evaluate(`(() => {
+  const parts = (await page.evaluate(`(() => {
     const at = (test) => Math.round(Math.max(0, ...performance.getEntriesByType('resource').filter((e) => test(e.name)).map((e) => e.responseEnd)));
     return { findings: at((n) => n.includes('/api/photos/') && n.includes('/findings')), photos: at((n) => n.includes('/api/') && n.split('?')[0].endsWith('/photos')),
       markupChunk: at((n) => n.includes('photo-markup')), image: at((n) => n.includes('display')) };
-  })()`) as Record<string, number>;
+  })()`)) as Record<string, number>;
   return { page, ms, parts };
 }
 
@@ -90,11 +94,22 @@ try {
   console.log(`\nmarkup canvas, 1,000 findings on one photo, headless Chromium (software rendering) on this machine:`);
   const said = (f: { ms: number; parts: Record<string, number> }) =>
     `${f.ms} ms (arrived: findings ${f.parts.findings} ms, photo list ${f.parts.photos} ms, markup chunk ${f.parts.markupChunk} ms, display image ${f.parts.image || 'after the frame'}${f.parts.image ? ' ms' : ''})`;
-  console.log(`  load average ${os.loadavg().map((l) => l.toFixed(1)).join(', ')} on ${os.cpus().length} cores`);
+  console.log(
+    `  load average ${os
+      .loadavg()
+      .map((l) => l.toFixed(1))
+      .join(', ')} on ${os.cpus().length} cores`,
+  );
   console.log(`  navigation to first drawn frame, the demo's few findings: ${said(few)}`);
-  console.log(`  navigation to first drawn frame, 1,000 findings: ${said(many)}; ratio ${(many.ms / few.ms).toFixed(2)}×`);
-  console.log(`  frame intervals while zooming and panning (${frames.length} frames, 60 Hz display = 16.7 ms): median ${at(0.5).toFixed(1)} ms, p95 ${at(0.95).toFixed(1)} ms`);
-  console.log(`  canvas drawing per layer redraw (${draws.length} redraws): median ${drawAt(0.5).toFixed(1)} ms, p95 ${drawAt(0.95).toFixed(1)} ms (goal: median < 16 ms)`);
+  console.log(
+    `  navigation to first drawn frame, 1,000 findings: ${said(many)}; ratio ${(many.ms / few.ms).toFixed(2)}×`,
+  );
+  console.log(
+    `  frame intervals while zooming and panning (${frames.length} frames, 60 Hz display = 16.7 ms): median ${at(0.5).toFixed(1)} ms, p95 ${at(0.95).toFixed(1)} ms`,
+  );
+  console.log(
+    `  canvas drawing per layer redraw (${draws.length} redraws): median ${drawAt(0.5).toFixed(1)} ms, p95 ${drawAt(0.95).toFixed(1)} ms (goal: median < 16 ms)`,
+  );
 } finally {
   await browser.close();
   await product.stop();

@@ -10,7 +10,10 @@ import { startTestApp, TEST_ORIGIN } from '../support/test-app';
 const t = await startTestApp({ uploads: { maxBytes: 80 * 1024 * 1024, maxPixels: 100e6 } });
 const user = await createUser(t.db);
 const r = await createRestoration(t.db, [{ userId: user.id, role: 'technician' }]);
-const signIn = await supertest(t.app).post('/api/auth/sign-in').set('Origin', TEST_ORIGIN).send({ email: user.email, password: user.password });
+const signIn = await supertest(t.app)
+  .post('/api/auth/sign-in')
+  .set('Origin', TEST_ORIGIN)
+  .send({ email: user.email, password: user.password });
 const cookie = String(signIn.headers['set-cookie']![0]).split(';')[0];
 const server = t.app.listen(0, '127.0.0.1', () => {
   const address = server.address();

@@ -23,35 +23,64 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.len
 /** A diagram-like scan: white paper with a light grain, thin lines, boxes and small print. */
 async function a3Scan(file: string) {
   const lines: string[] = [];
-  for (let i = 0; i < 60; i++) lines.push(`<path d="M${100 + i * 78} 200 V${H - 200}" stroke="#111" stroke-width="2"/>`);
-  for (let j = 0; j < 40; j++) lines.push(`<path d="M100 ${220 + j * 80} H${W - 100}" stroke="#111" stroke-width="2"/>`);
+  for (let i = 0; i < 60; i++)
+    lines.push(`<path d="M${100 + i * 78} 200 V${H - 200}" stroke="#111" stroke-width="2"/>`);
+  for (let j = 0; j < 40; j++)
+    lines.push(`<path d="M100 ${220 + j * 80} H${W - 100}" stroke="#111" stroke-width="2"/>`);
   for (let k = 0; k < 300; k++) {
     const x = 150 + ((k * 211) % (W - 400));
     const y = 260 + ((k * 157) % (H - 500));
-    lines.push(`<rect x="${x}" y="${y}" width="30" height="90" fill="white" stroke="#111" stroke-width="3"/><text x="${x + 40}" y="${y + 30}" font-size="25" font-family="sans-serif">R${k + 1} 47k</text>`);
+    lines.push(
+      `<rect x="${x}" y="${y}" width="30" height="90" fill="white" stroke="#111" stroke-width="3"/><text x="${x + 40}" y="${y + 30}" font-size="25" font-family="sans-serif">R${k + 1} 47k</text>`,
+    );
   }
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}"><rect width="${W}" height="${H}" fill="#fbfaf6"/>${lines.join('')}</svg>`;
-  const grain = await sharp({ create: { width: W, height: H, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 6 } } }).png().toBuffer();
-  const out = await sharp(Buffer.from(svg)).composite([{ input: grain, blend: 'soft-light' }]).png().toBuffer();
+  const grain = await sharp({
+    create: {
+      width: W,
+      height: H,
+      channels: 3,
+      background: '#808080',
+      noise: { type: 'gaussian', mean: 128, sigma: 6 },
+    },
+  })
+    .png()
+    .toBuffer();
+  const out = await sharp(Buffer.from(svg))
+    .composite([{ input: grain, blend: 'soft-light' }])
+    .png()
+    .toBuffer();
   writeFileSync(file, out);
   return out;
 }
 
 /** The variants the sheet pipeline keeps, made with nothing but sharp. */
 async function bareSharp(file: string) {
-  const large = await sharp(file).autoOrient().resize({ width: SHEET_LARGE_PX, height: SHEET_LARGE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 90 }).toBuffer();
-  const display = await sharp(large).resize({ width: DISPLAY_PX, height: DISPLAY_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 82 }).toBuffer();
+  const large = await sharp(file)
+    .autoOrient()
+    .resize({ width: SHEET_LARGE_PX, height: SHEET_LARGE_PX, fit: 'inside', withoutEnlargement: true })
+    .webp({ quality: 90 })
+    .toBuffer();
+  const display = await sharp(large)
+    .resize({ width: DISPLAY_PX, height: DISPLAY_PX, fit: 'inside', withoutEnlargement: true })
+    .webp({ quality: 82 })
+    .toBuffer();
   await sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer();
 }
 
 const cluster = await startTestCluster();
 const child = spawn('node_modules/.bin/tsx', ['tests/bench/photo-bench-server.ts'], {
-  env: { ...process.env, GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl, AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' },
+  env: {
+    ...process.env,
+    GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl,
+    AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
+  },
   stdio: ['ignore', 'pipe', 'inherit'],
 });
 try {
   const info = await new Promise<{ port: number; cookie: string; restorationId: number }>((resolve) =>
-    child.stdout!.once('data', (d) => resolve(JSON.parse(String(d)))));
+    child.stdout!.once('data', (d) => resolve(JSON.parse(String(d)))),
+  );
   const file = path.join(os.tmpdir(), 'gridleak-bench-a3-300dpi.png');
   const png = await a3Scan(file);
   const upload = async () => {
@@ -59,7 +88,9 @@ try {
     form.set('kind', 'circuit-diagram');
     form.set('file', new Blob([new Uint8Array(png)], { type: 'image/png' }), 'a3.png');
     const res = await fetch(`http://127.0.0.1:${info.port}/api/restorations/${info.restorationId}/sheets`, {
-      method: 'POST', body: form, headers: { Cookie: info.cookie, Origin: TEST_ORIGIN },
+      method: 'POST',
+      body: form,
+      headers: { Cookie: info.cookie, Origin: TEST_ORIGIN },
     });
     if (res.status !== 201) throw new Error(`upload answered ${res.status}: ${await res.text()}`);
     await res.arrayBuffer();
@@ -77,8 +108,12 @@ try {
     bare.push(await timed(() => bareSharp(file)));
     api.push(await timed(upload));
   }
-  console.log(`\nsheet pipeline, ${(png.length / 1024 / 1024).toFixed(1)} MB ${W}×${H} PNG (A3 at 300 dpi), medians of 5 on this machine (${os.cpus().length} cores, load average ${os.loadavg()[0]!.toFixed(1)}):`);
-  console.log(`  bare sharp (large ${SHEET_LARGE_PX} px + display ${DISPLAY_PX} px + thumb ${THUMB_PX} px WebP): ${median(bare).toFixed(0)} ms`);
+  console.log(
+    `\nsheet pipeline, ${(png.length / 1024 / 1024).toFixed(1)} MB ${W}×${H} PNG (A3 at 300 dpi), medians of 5 on this machine (${os.cpus().length} cores, load average ${os.loadavg()[0]!.toFixed(1)}):`,
+  );
+  console.log(
+    `  bare sharp (large ${SHEET_LARGE_PX} px + display ${DISPLAY_PX} px + thumb ${THUMB_PX} px WebP): ${median(bare).toFixed(0)} ms`,
+  );
   console.log(`  upload through the API until ready to view:                  ${median(api).toFixed(0)} ms`);
   console.log(`  ratio: ${(median(api) / median(bare)).toFixed(2)}× (goal < 1.3×)`);
 } finally {

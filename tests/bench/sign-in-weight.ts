@@ -25,20 +25,34 @@ const browser = await launchBrowser();
 try {
   const page = await newPage(browser, { width: 1280, height: 900 });
   const scripts: { url: string; transferred: number; decoded: number }[] = [];
-  page.on('requestfinished', (request) => void (async () => {
-    if (request.resourceType() !== 'script') return;
-    const sizes = await request.sizes();
-    const body = await (await request.response())!.body();
-    scripts.push({ url: request.url(), transferred: sizes.responseBodySize + sizes.responseHeadersSize, decoded: body.length });
-  })());
+  page.on(
+    'requestfinished',
+    (request) =>
+      void (async () => {
+        if (request.resourceType() !== 'script') return;
+        const sizes = await request.sizes();
+        const body = await (await request.response())!.body();
+        scripts.push({
+          url: request.url(),
+          transferred: sizes.responseBodySize + sizes.responseHeadersSize,
+          decoded: body.length,
+        });
+      })(),
+  );
   await page.goto(`http://127.0.0.1:${(server.address() as AddressInfo).port}/sign-in`, { waitUntil: 'networkidle' });
-  await page.getByRole('button', { name: /sign in/i }).first().waitFor();
+  await page
+    .getByRole('button', { name: /sign in/i })
+    .first()
+    .waitFor();
   const kb = (n: number) => `${(n / 1024).toFixed(1)} KB`;
   const transferred = scripts.reduce((s, x) => s + x.transferred, 0);
   const decoded = scripts.reduce((s, x) => s + x.decoded, 0);
   console.log(`\nsign-in page, cold cache: ${scripts.length} scripts`);
-  for (const s of scripts.sort((a, b) => b.transferred - a.transferred)) console.log(`  ${kb(s.transferred).padStart(9)}  ${new URL(s.url).pathname}`);
-  console.log(`  JavaScript transferred: ${kb(transferred)} (uncompressed ${kb(decoded)}; ratio ${(transferred / decoded).toFixed(2)})`);
+  for (const s of scripts.sort((a, b) => b.transferred - a.transferred))
+    console.log(`  ${kb(s.transferred).padStart(9)}  ${new URL(s.url).pathname}`);
+  console.log(
+    `  JavaScript transferred: ${kb(transferred)} (uncompressed ${kb(decoded)}; ratio ${(transferred / decoded).toFixed(2)})`,
+  );
 } finally {
   await browser.close();
   server.close();

@@ -13,14 +13,23 @@ afterAll(() => browser?.close());
 describe('the accessibility check used by the journeys', () => {
   it('when an image has no text alternative and a field no label, then it fails naming both rules', async () => {
     const page = await newPage(browser);
-    await page.setContent('<html lang="en"><head><title>Faulty</title></head><body><main><img src="data:image/gif;base64,R0lGODlhAQABAAAAACw="><input type="text"></main></body></html>');
-    const failure = (await expectAccessible(page, 'a faulty page').then(() => undefined, (err: { actual?: unknown }) => err)) as { actual?: string[] } | undefined;
-    expect(failure?.actual).toEqual(expect.arrayContaining([expect.stringMatching(/^image-alt /), expect.stringMatching(/^label /)]));
+    await page.setContent(
+      '<html lang="en"><head><title>Faulty</title></head><body><main><img src="data:image/gif;base64,R0lGODlhAQABAAAAACw="><input type="text"></main></body></html>',
+    );
+    const failure = (await expectAccessible(page, 'a faulty page').then(
+      () => undefined,
+      (err: { actual?: unknown }) => err,
+    )) as { actual?: string[] } | undefined;
+    expect(failure?.actual).toEqual(
+      expect.arrayContaining([expect.stringMatching(/^image-alt /), expect.stringMatching(/^label /)]),
+    );
   });
 
   it('when the same content is labelled, then it passes', async () => {
     const page = await newPage(browser);
-    await page.setContent('<html lang="en"><head><title>Fixed</title></head><body><main><h1>Bench</h1><img alt="Chassis underside" src="data:image/gif;base64,R0lGODlhAQABAAAAACw="><label>Serial <input type="text"></label></main></body></html>');
+    await page.setContent(
+      '<html lang="en"><head><title>Fixed</title></head><body><main><h1>Bench</h1><img alt="Chassis underside" src="data:image/gif;base64,R0lGODlhAQABAAAAACw="><label>Serial <input type="text"></label></main></body></html>',
+    );
     await expectAccessible(page, 'a labelled page');
   });
 });

@@ -39,7 +39,10 @@ describe('the bench', () => {
 
     // After saving, the new set opens, and its owner has an invitation in the mail.
     await page.waitForURL(/\/restorations\/\d+$/);
-    await page.getByRole('heading', { name: /Farrowby & Daughters Nightjar 6/ }).first().waitFor();
+    await page
+      .getByRole('heading', { name: /Farrowby & Daughters Nightjar 6/ })
+      .first()
+      .waitFor();
     expect((await mailTo(ctx.product.origin, 'wilhelmina.crane@example.test')).text).toContain('/invitations/');
 
     await page.goto(ctx.product.origin);
@@ -71,7 +74,9 @@ describe('the bench', () => {
     expect(page.url()).toContain('/restorations/new');
     await expectAccessible(page, 'the intake form showing an error');
     // Nothing reached the server: no restoration named "Orphan" exists for this technician.
-    const found = await page.evaluate(async () => (await (await fetch('/api/restorations?q=Orphan')).json()) as unknown[]);
+    const found = await page.evaluate(
+      async () => (await (await fetch('/api/restorations?q=Orphan')).json()) as unknown[],
+    );
     expect(found).toEqual([]);
     await page.screenshot({ path: artifactPath('intake-form-phone.png'), fullPage: true });
   });
@@ -93,9 +98,13 @@ describe('the bench', () => {
       { name: 'rear-1.jpg', mimeType: 'image/jpeg', buffer: jpeg },
       { name: 'notes.jpg', mimeType: 'image/jpeg', buffer: Buffer.from('not a photo at all') },
     ]);
-    for (const name of ['rear-1.jpg', 'notes.jpg']) await page.getByRole('progressbar', { name: `Upload of ${name}` }).waitFor();
+    for (const name of ['rear-1.jpg', 'notes.jpg'])
+      await page.getByRole('progressbar', { name: `Upload of ${name}` }).waitFor();
     await page.getByText(/not a photo Gridleak can read/).waitFor();
-    await page.getByRole('button', { name: /Rear, before/ }).first().waitFor({ timeout: 30_000 });
+    await page
+      .getByRole('button', { name: /Rear, before/ })
+      .first()
+      .waitFor({ timeout: 30_000 });
     expect(await page.getByRole('button', { name: /Rear, before/ }).count()).toBe(1);
     await page.screenshot({ path: artifactPath('photos-upload.png'), fullPage: true });
   });

@@ -10,7 +10,15 @@ import { useProductAndBrowser } from '../support/journey-setup';
 
 const ctx = useProductAndBrowser();
 
-type Step = { supply: string; lamp?: [watts: string, volts: string]; applied: string; behaviour?: string; ht: string; notes: string; decision: 'Go on' | 'Stop and find the fault' };
+type Step = {
+  supply: string;
+  lamp?: [watts: string, volts: string];
+  applied: string;
+  behaviour?: string;
+  ht: string;
+  notes: string;
+  decision: 'Go on' | 'Stop and find the fault';
+};
 
 async function logStep(page: Page, n: number, s: Step) {
   const form = page.getByRole('form', { name: 'Log a power-up step' });
@@ -51,7 +59,9 @@ describe('bring-up', () => {
       const row = page.getByRole('group', { name: label });
       if (item === 'rectifier-transformer') {
         await row.getByRole('radio', { name: 'Not applicable' }).check();
-        await row.getByLabel('Reason it does not apply').fill('AC/DC set: no mains transformer; rectifier checked out of circuit');
+        await row
+          .getByLabel('Reason it does not apply')
+          .fill('AC/DC set: no mains transformer; rectifier checked out of circuit');
       } else await row.getByRole('radio', { name: 'Done' }).check();
       await page.getByRole('button', { name: `Save: ${label.toLowerCase()}` }).click();
       await expect.poll(() => page.getByText(`${label}: mark it done`).count()).toBe(0);
@@ -59,17 +69,42 @@ describe('bring-up', () => {
     await page.getByRole('button', { name: 'Sign off the pre-power checklist' }).click();
     await page.getByText(/Signed off by Mara Ellingsworth/).waitFor();
 
-    await logStep(page, 1, { supply: 'Series lamp', lamp: ['40', '230'], applied: '230', behaviour: 'Brief flash, then dim', ht: '104', notes: 'Heaters glowing, no smell', decision: 'Go on' });
+    await logStep(page, 1, {
+      supply: 'Series lamp',
+      lamp: ['40', '230'],
+      applied: '230',
+      behaviour: 'Brief flash, then dim',
+      ht: '104',
+      notes: 'Heaters glowing, no smell',
+      decision: 'Go on',
+    });
     // The lamp limit from the bench library, inline: 60 W / 230 V = 0.26 A (P/V, worked by hand).
     const form = page.getByRole('form', { name: 'Log a power-up step' });
     await form.getByLabel('Lamp (W)').fill('60');
     await form.getByLabel('Lamp rated (V)').fill('230');
     await form.getByLabel('Volts applied').fill('230');
     await form.getByText(/passes at most 0\.26 A at 230 V/).waitFor();
-    await logStep(page, 2, { supply: 'Series lamp', lamp: ['60', '230'], applied: '230', behaviour: 'Bright and staying bright', ht: '22', notes: 'Lamp stayed bright; rectifier warm. Switched off; found the reservoir shorted and replaced it.', decision: 'Stop and find the fault' });
-    await logStep(page, 3, { supply: 'Variable transformer', applied: '230', ht: '112', notes: 'Raised slowly to 230 V; HT steady.', decision: 'Go on' });
+    await logStep(page, 2, {
+      supply: 'Series lamp',
+      lamp: ['60', '230'],
+      applied: '230',
+      behaviour: 'Bright and staying bright',
+      ht: '22',
+      notes: 'Lamp stayed bright; rectifier warm. Switched off; found the reservoir shorted and replaced it.',
+      decision: 'Stop and find the fault',
+    });
+    await logStep(page, 3, {
+      supply: 'Variable transformer',
+      applied: '230',
+      ht: '112',
+      notes: 'Raised slowly to 230 V; HT steady.',
+      decision: 'Go on',
+    });
 
-    const steps = page.getByRole('list', { name: 'Power-up steps' }).getByRole('listitem').filter({ hasText: /^Step \d/ });
+    const steps = page
+      .getByRole('list', { name: 'Power-up steps' })
+      .getByRole('listitem')
+      .filter({ hasText: /^Step \d/ });
     expect(await steps.count()).toBe(3);
     expect(await steps.nth(1).innerText()).toMatch(/Stop and find the fault/);
     expect(await steps.nth(1).innerText()).toMatch(/HT: 22.*out/s);
@@ -79,7 +114,10 @@ describe('bring-up', () => {
 
     // The step readings are ordinary readings with verdicts.
     await page.getByRole('link', { name: 'Readings' }).click();
-    const stepRows = page.getByRole('table', { name: 'All readings, newest first' }).getByRole('row').filter({ hasText: /Power-up step \d/ });
+    const stepRows = page
+      .getByRole('table', { name: 'All readings, newest first' })
+      .getByRole('row')
+      .filter({ hasText: /Power-up step \d/ });
     await expect.poll(() => stepRows.count(), { timeout: 15_000 }).toBe(3);
     expect(await stepRows.filter({ hasText: /Power-up step 2/ }).innerText()).toMatch(/\bout\b/i);
     // The latest HT reading is the voltage chart's point.
@@ -87,7 +125,9 @@ describe('bring-up', () => {
 
     // The stop is in red in the history.
     await page.getByRole('link', { name: 'History' }).click();
-    const stop = page.getByText(/Power-up step 2: series lamp 60 W, lamp: bright and staying bright — stop and find the fault/);
+    const stop = page.getByText(
+      /Power-up step 2: series lamp 60 W, lamp: bright and staying bright — stop and find the fault/,
+    );
     await stop.waitFor();
     expect(await stop.evaluate((el) => el.className)).toMatch(/text-danger/);
     expect(messages).toEqual([]);

@@ -23,7 +23,11 @@ describe('the console', () => {
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
     // Signed in, this tab starts a page's data together with the sign-in check; signed out, it must ask for nothing.
     await page.getByRole('button', { name: 'Sign out' }).click();
-    await page.getByRole('link', { name: 'Sign in' }).or(page.getByRole('button', { name: 'Sign in' })).first().waitFor();
+    await page
+      .getByRole('link', { name: 'Sign in' })
+      .or(page.getByRole('button', { name: 'Sign in' }))
+      .first()
+      .waitFor();
     const messages = watchConsole(page);
     await page.goto(`${ctx.product.origin}/restorations/1/photos/1`);
     await page.getByRole('button', { name: 'Sign in' }).waitFor();

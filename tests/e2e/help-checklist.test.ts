@@ -10,7 +10,12 @@ const ctx = useProductAndBrowser();
 // The causes, their order and their tests come from shared/bench/symptoms (the trade notes, TRADE.md §5); the
 // verdicts are the bench library's (decision 24); the sets and people are the demo workshop's.
 async function openHelpTab(page: Awaited<ReturnType<typeof newPage>>, model: string) {
-  const id = await page.evaluate(async (m) => ((await (await fetch('/api/restorations')).json()) as { id: number; model: string }[]).find((s) => s.model === m)!.id, model);
+  const id = await page.evaluate(
+    async (m) =>
+      ((await (await fetch('/api/restorations')).json()) as { id: number; model: string }[]).find((s) => s.model === m)!
+        .id,
+    model,
+  );
   await page.goto(`${ctx.product.origin}/restorations/${id}/help`);
   await page.getByRole('heading', { name: 'Symptom checklist' }).waitFor();
   return id;
@@ -53,7 +58,7 @@ describe('working through a symptom and asking for readings', () => {
     expect(messages).toEqual([]);
   });
 
-  it('when a mentor asks for a reading, then it waits on the technician\'s bench, is answered with a reading, and the mentor sees the answer', async () => {
+  it("when a mentor asks for a reading, then it waits on the technician's bench, is answered with a reading, and the mentor sees the answer", async () => {
     const mentor = await newPage(ctx.browser);
     const mentorMessages = watchConsole(mentor);
     await signInAs(mentor, ctx.product.origin, 'teodor@cobbold-lane.test');
@@ -69,7 +74,10 @@ describe('working through a symptom and asking for readings', () => {
     await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     await tech.getByRole('heading', { name: 'Readings asked for' }).waitFor();
     await expectAccessible(tech, 'bench with a reading asked for');
-    await tech.getByRole('region', { name: 'Readings asked for' }).getByRole('link', { name: /Measure V3 pin 6 with no signal/ }).click();
+    await tech
+      .getByRole('region', { name: 'Readings asked for' })
+      .getByRole('link', { name: /Measure V3 pin 6 with no signal/ })
+      .click();
     const task = tech.getByRole('listitem').filter({ hasText: 'Measure V3 pin 6 with no signal' });
     await task.getByLabel('Where measured').fill('V3 pin 6');
     await task.getByLabel('Expected (chart)').fill('100');
@@ -84,7 +92,10 @@ describe('working through a symptom and asking for readings', () => {
     await answered.getByText('No signal, volume at zero.').waitFor();
     expect(await answered.getByText('95').count()).toBeGreaterThan(0);
     await mentor.getByRole('button', { name: /^Notifications, \d+ unread/ }).click();
-    await mentor.getByRole('region', { name: 'Notifications' }).getByText(/Mara Ellingsworth answered .*Measure V3 pin 6/).waitFor();
+    await mentor
+      .getByRole('region', { name: 'Notifications' })
+      .getByText(/Mara Ellingsworth answered .*Measure V3 pin 6/)
+      .waitFor();
     expect(mentorMessages).toEqual([]);
     expect(techMessages).toEqual([]);
   });

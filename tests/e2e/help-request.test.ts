@@ -18,12 +18,21 @@ describe('asking for help outside the workshop', () => {
     const target = await page.evaluate(async () => {
       const sets = (await (await fetch('/api/restorations')).json()) as { id: number; model: string }[];
       const set = sets.find((s) => s.model === 'Meridian 54')!;
-      const list = (await (await fetch(`/api/restorations/${set.id}/findings`)).json()) as { id: number; title: string; points: { x: number; y: number }[] }[];
-      return { id: set.id, c27: list.find((f) => f.title === 'Leaky coupling capacitor to the output valve')!.points[0]! };
+      const list = (await (await fetch(`/api/restorations/${set.id}/findings`)).json()) as {
+        id: number;
+        title: string;
+        points: { x: number; y: number }[];
+      }[];
+      return {
+        id: set.id,
+        c27: list.find((f) => f.title === 'Leaky coupling capacitor to the output valve')!.points[0]!,
+      };
     });
 
     await page.goto(`${ctx.product.origin}/restorations/${target.id}/help`);
-    await page.getByLabel('The symptom, in your words').fill('Distorts and fades after a few minutes; the output valve glowed red before C27 was replaced.');
+    await page
+      .getByLabel('The symptom, in your words')
+      .fill('Distorts and fades after a few minutes; the output valve glowed red before C27 was replaced.');
     await page.getByRole('button', { name: 'Start a help request' }).click();
     await page.getByRole('heading', { name: 'Readings' }).waitFor();
     await page.getByText('HT at can section A').first().waitFor();
@@ -39,12 +48,18 @@ describe('asking for help outside the workshop', () => {
     await stranger.getByRole('heading', { name: /Meridian 54/ }).waitFor();
     await stranger.getByText('HT at can section A').waitFor();
     await stranger.getByTestId('help-pin').first().waitFor({ state: 'attached' });
-    const pins = await stranger.getByTestId('help-pin').evaluateAll((els) => els.map((e) => ({ x: Number(e.getAttribute('data-x')), y: Number(e.getAttribute('data-y')) })));
+    const pins = await stranger
+      .getByTestId('help-pin')
+      .evaluateAll((els) =>
+        els.map((e) => ({ x: Number(e.getAttribute('data-x')), y: Number(e.getAttribute('data-y')) })),
+      );
     expect(pins).toContainEqual(target.c27);
     // Each pinned spot comes with its close-up, cut from the original and signed for this reader.
     const closeup = stranger.getByTestId('help-closeup').first();
     await closeup.waitFor();
-    await expect.poll(async () => closeup.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth > 0)).toBe(true);
+    await expect
+      .poll(async () => closeup.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth > 0))
+      .toBe(true);
     expect(await stranger.locator('meta[name="robots"]').getAttribute('content')).toMatch(/noindex/);
     expect(await stranger.getByText('Positive grid with a red anode').count()).toBe(0);
     expect(await stranger.getByText('Perished rubber wiring').count()).toBe(0);
@@ -60,7 +75,9 @@ describe('asking for help outside the workshop', () => {
     await stranger.emulateMedia({ media: 'screen' });
 
     await stranger.getByLabel('Your name').fill('Club member');
-    await stranger.getByLabel('Your reply').fill('Check the new grid leak is really 470 kΩ and measure V5 pin 2 again warm.');
+    await stranger
+      .getByLabel('Your reply')
+      .fill('Check the new grid leak is really 470 kΩ and measure V5 pin 2 again warm.');
     await stranger.getByRole('button', { name: 'Send reply' }).click();
     await stranger.getByText('Your reply was sent to the technician').waitFor();
 

@@ -20,7 +20,10 @@ describe('inviting people to a restoration', () => {
     await tech.getByRole('link', { name: 'People' }).click();
     const restorationUrl = tech.url().replace(/\/people$/, '');
 
-    for (const [email, role] of [['orla.mentor@example.test', 'mentor'], ['bram.owner@example.test', 'owner']] as const) {
+    for (const [email, role] of [
+      ['orla.mentor@example.test', 'mentor'],
+      ['bram.owner@example.test', 'owner'],
+    ] as const) {
       await tech.getByLabel('E-mail', { exact: true }).fill(email);
       await tech.getByLabel('Role', { exact: true }).selectOption(role);
       await tech.getByRole('button', { name: 'Send invitation' }).click();
@@ -31,7 +34,10 @@ describe('inviting people to a restoration', () => {
     await expectAccessible(tech, 'the People tab');
     expect(techMessages).toEqual([]);
 
-    for (const [email, name] of [['orla.mentor@example.test', 'Orla Finch'], ['bram.owner@example.test', 'Bram Holt']]) {
+    for (const [email, name] of [
+      ['orla.mentor@example.test', 'Orla Finch'],
+      ['bram.owner@example.test', 'Bram Holt'],
+    ]) {
       const link = firstLink(await mailTo(ctx.product.origin, email!, /invited you/));
       expect(link).toMatch(/\/invitations\/[A-Za-z0-9_-]+$/);
       const page = await newPage(ctx.browser, { width: 390, height: 844 });

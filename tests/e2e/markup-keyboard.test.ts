@@ -8,9 +8,15 @@ import { signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 
 /** The canvas's read-only probe (see DEVELOPERS.md, "The markup canvas in journeys"). */
-type Probe = { view: { scale: number }; stage: { width: number; height: number }; imageToClient(x: number, y: number): { x: number; y: number } };
-const probe = (page: Page) => page.evaluate(() => (window as unknown as { __gridleakMarkup?: Probe }).__gridleakMarkup?.view.scale ?? 0);
-const focusedTestId = (page: Page) => page.evaluate(() => document.activeElement?.getAttribute('data-testid') ?? document.activeElement?.tagName ?? '');
+type Probe = {
+  view: { scale: number };
+  stage: { width: number; height: number };
+  imageToClient(x: number, y: number): { x: number; y: number };
+};
+const probe = (page: Page) =>
+  page.evaluate(() => (window as unknown as { __gridleakMarkup?: Probe }).__gridleakMarkup?.view.scale ?? 0);
+const focusedTestId = (page: Page) =>
+  page.evaluate(() => document.activeElement?.getAttribute('data-testid') ?? document.activeElement?.tagName ?? '');
 
 const ctx = useProductAndBrowser();
 
@@ -18,7 +24,10 @@ async function openUnderside(page: Page) {
   await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
   await page.getByRole('link', { name: /OV-54-20417/ }).click();
   await page.getByRole('link', { name: 'Photos' }).click();
-  await page.getByRole('button', { name: /Underside, before/ }).first().click();
+  await page
+    .getByRole('button', { name: /Underside, before/ })
+    .first()
+    .click();
   await page.getByRole('link', { name: 'Mark up this photo' }).click();
   await page.getByTestId('markup-stage').waitFor();
   await expect.poll(() => probe(page)).toBeGreaterThan(0);
@@ -54,7 +63,15 @@ describe('markup without a pointer', () => {
     await page.keyboard.press('Enter');
     await page.waitForURL(/\/findings\/\d+$/);
     const id = Number(page.url().split('/').pop());
-    const stored = await page.evaluate(async (fid) => (await (await fetch(`/api/findings/${fid}`)).json()) as { shape: string; componentRef: string; points: { x: number; y: number }[] }, id);
+    const stored = await page.evaluate(
+      async (fid) =>
+        (await (await fetch(`/api/findings/${fid}`)).json()) as {
+          shape: string;
+          componentRef: string;
+          points: { x: number; y: number }[];
+        },
+      id,
+    );
     expect(stored.shape).toBe('pin');
     expect(stored.componentRef).toBe('R31');
     // Where screen readers were told the crosshair was, to the per cent they heard.
@@ -69,7 +86,9 @@ describe('markup without a pointer', () => {
     const withPanel = (await page.getByTestId('markup-stage').boundingBox())!.width;
     expect(withPanel).toBeGreaterThan(1400 * 0.6);
     await page.getByRole('button', { name: 'Hide the finding panel' }).click();
-    await expect.poll(async () => (await page.getByTestId('markup-stage').boundingBox())!.width).toBeGreaterThan(1400 * 0.9);
+    await expect
+      .poll(async () => (await page.getByTestId('markup-stage').boundingBox())!.width)
+      .toBeGreaterThan(1400 * 0.9);
     expect(await page.getByRole('complementary', { name: 'Finding' }).isVisible()).toBe(false);
     await page.reload();
     await page.getByRole('button', { name: 'Show the finding panel' }).click();
@@ -89,7 +108,9 @@ describe('markup on a phone', () => {
     const scrolled = await page.evaluate(() => window.scrollY);
     await page.getByRole('button', { name: /^Pin/ }).click();
     // Low on the photo, where the sheet will open.
-    const target = await page.evaluate(() => (window as unknown as { __gridleakMarkup: Probe }).__gridleakMarkup.imageToClient(0.5, 0.93));
+    const target = await page.evaluate(() =>
+      (window as unknown as { __gridleakMarkup: Probe }).__gridleakMarkup.imageToClient(0.5, 0.93),
+    );
     expect(target.y).toBeGreaterThan(844 * 0.55);
     expect(target.y).toBeLessThan(844);
     await page.mouse.click(target.x, target.y);
@@ -120,7 +141,8 @@ describe('markup on a phone', () => {
 /** The waiting mark's place on screen, from the probe's `pending` point. */
 async function pendingClientPoint(page: Page) {
   return page.evaluate(() => {
-    const p = (window as unknown as { __gridleakMarkup: Probe & { pending?: { x: number; y: number } } }).__gridleakMarkup;
+    const p = (window as unknown as { __gridleakMarkup: Probe & { pending?: { x: number; y: number } } })
+      .__gridleakMarkup;
     if (!p.pending) throw new Error('no mark is waiting');
     return p.imageToClient(p.pending.x, p.pending.y);
   });

@@ -9,10 +9,18 @@ import { mailTo, signInAs } from '../support/journey';
 import { useProductAndBrowser } from '../support/journey-setup';
 
 /** The canvas's read-only probe (see DEVELOPERS.md, "The markup canvas in journeys"). */
-type Probe = { view: { scale: number }; image: { width: number; height: number }; imageToClient(x: number, y: number): { x: number; y: number } };
-const probe = (page: Page) => page.evaluate(() => (window as unknown as { __gridleakMarkup: Probe }).__gridleakMarkup.view.scale);
+type Probe = {
+  view: { scale: number };
+  image: { width: number; height: number };
+  imageToClient(x: number, y: number): { x: number; y: number };
+};
+const probe = (page: Page) =>
+  page.evaluate(() => (window as unknown as { __gridleakMarkup: Probe }).__gridleakMarkup.view.scale);
 const toClient = (page: Page, x: number, y: number) =>
-  page.evaluate(([px, py]) => (window as unknown as { __gridleakMarkup: Probe }).__gridleakMarkup.imageToClient(px!, py!), [x, y]);
+  page.evaluate(
+    ([px, py]) => (window as unknown as { __gridleakMarkup: Probe }).__gridleakMarkup.imageToClient(px!, py!),
+    [x, y],
+  );
 
 const ctx = useProductAndBrowser();
 
@@ -26,7 +34,10 @@ describe('marking a spot and talking about it', () => {
     await signInAs(tech, ctx.product.origin, 'mara@cobbold-lane.test');
     await tech.getByRole('link', { name: /OV-54-20417/ }).click();
     await tech.getByRole('link', { name: 'Photos' }).click();
-    await tech.getByRole('button', { name: /Underside, before/ }).first().click();
+    await tech
+      .getByRole('button', { name: /Underside, before/ })
+      .first()
+      .click();
     await tech.getByRole('link', { name: 'Mark up this photo' }).click();
     await tech.getByTestId('markup-stage').waitFor();
     await expect.poll(() => probe(tech)).toBeGreaterThan(0);
@@ -42,7 +53,10 @@ describe('marking a spot and talking about it', () => {
     await tech.waitForURL(/\/findings\/\d+$/);
     const findingUrl = tech.url();
     const findingId = Number(findingUrl.split('/').pop());
-    const stored = await tech.evaluate(async (id) => (await (await fetch(`/api/findings/${id}`)).json()) as { points: { x: number; y: number }[] }, findingId);
+    const stored = await tech.evaluate(
+      async (id) => (await (await fetch(`/api/findings/${id}`)).json()) as { points: { x: number; y: number }[] },
+      findingId,
+    );
     const fitScale = await probe(tech);
     const image = await tech.evaluate(() => (window as unknown as { __gridleakMarkup: Probe }).__gridleakMarkup.image);
     // Stored in image space: within 1 screen pixel of where it was clicked, at this zoom.
@@ -67,7 +81,9 @@ describe('marking a spot and talking about it', () => {
     await mentor.waitForURL(new RegExp(`/findings/${findingId}$`));
     await mentor.screenshot({ path: artifactPath('markup-mentor.png') });
 
-    await mentor.getByLabel('Add a comment').fill('@Mara reflow it and measure across R14 again. Looks like a dry joint from here.');
+    await mentor
+      .getByLabel('Add a comment')
+      .fill('@Mara reflow it and measure across R14 again. Looks like a dry joint from here.');
     await mentor.getByRole('button', { name: 'Send comment' }).click();
     await mentor.getByText('reflow it and measure across R14').waitFor();
     await expectAccessible(mentor, 'a finding with its thread');
@@ -80,7 +96,14 @@ describe('marking a spot and talking about it', () => {
     const onPart = await toClient(mentor, c27.x, c27.y);
     await mentor.mouse.click(onPart.x, onPart.y);
     await mentor.waitForURL(/\/findings\/\d+$/);
-    const picked = await mentor.evaluate(async () => ((await (await fetch(`/api/findings/${location.pathname.split('/').pop()}`)).json()) as { componentRef: string }).componentRef);
+    const picked = await mentor.evaluate(
+      async () =>
+        (
+          (await (await fetch(`/api/findings/${location.pathname.split('/').pop()}`)).json()) as {
+            componentRef: string;
+          }
+        ).componentRef,
+    );
     expect(picked).toBe('C27');
     await mentor.screenshot({ path: artifactPath('markup-demo-finding.png') });
 
@@ -88,15 +111,32 @@ describe('marking a spot and talking about it', () => {
     expect(mail.text).toContain(`/findings/${findingId}`);
 
     await tech.reload();
-    await tech.getByRole('group', { name: 'Status' }).getByRole('button', { name: /Confirmed/ }).click();
-    await expect.poll(() => tech.evaluate(async (id) => ((await (await fetch(`/api/findings/${id}`)).json()) as { status: string }).status, findingId)).toBe('confirmed');
+    await tech
+      .getByRole('group', { name: 'Status' })
+      .getByRole('button', { name: /Confirmed/ })
+      .click();
+    await expect
+      .poll(() =>
+        tech.evaluate(
+          async (id) => ((await (await fetch(`/api/findings/${id}`)).json()) as { status: string }).status,
+          findingId,
+        ),
+      )
+      .toBe('confirmed');
 
     const owner = await newPage(ctx.browser, { width: 390, height: 844 });
     await signInAs(owner, ctx.product.origin, 'imogen@example.test');
     await owner.goto(findingUrl);
     await owner.getByText('not shared with you').waitFor();
     await tech.getByRole('switch', { name: /Share with owner/ }).click();
-    await expect.poll(() => tech.evaluate(async (id) => ((await (await fetch(`/api/findings/${id}`)).json()) as { ownerVisible: boolean }).ownerVisible, findingId)).toBe(true);
+    await expect
+      .poll(() =>
+        tech.evaluate(
+          async (id) => ((await (await fetch(`/api/findings/${id}`)).json()) as { ownerVisible: boolean }).ownerVisible,
+          findingId,
+        ),
+      )
+      .toBe(true);
     await owner.reload();
     await owner.getByText('Dry joint on the V4 tag strip?').first().waitFor();
     // Only once the thread has loaded (its heading shows the count) does an absent reply mean it was withheld.

@@ -9,7 +9,15 @@ import { useProductAndBrowser } from '../support/journey-setup';
 
 const ctx = useProductAndBrowser();
 
-type InvoiceRow = { id: number; kind: string; status: string; reference: string; due: { amount: number; currency: string }; paid: { amount: number }; deducted: { amount: number } };
+type InvoiceRow = {
+  id: number;
+  kind: string;
+  status: string;
+  reference: string;
+  due: { amount: number; currency: string };
+  paid: { amount: number };
+  deducted: { amount: number };
+};
 const invoicesOf = (page: Page, setId: number) =>
   page.evaluate(async (id) => (await (await fetch(`/api/restorations/${id}/invoices`)).json()) as InvoiceRow[], setId);
 
@@ -33,7 +41,12 @@ describe('the money journey, from estimate to the last payment', () => {
     const bench = await newPage(ctx.browser);
     const benchConsole = watchConsole(bench);
     await signInAs(bench, ctx.product.origin, 'mara@cobbold-lane.test');
-    const setId = await bench.evaluate(async () => ((await (await fetch('/api/restorations')).json()) as { id: number; model: string }[]).find((s) => s.model === 'Meridian 54')!.id);
+    const setId = await bench.evaluate(
+      async () =>
+        ((await (await fetch('/api/restorations')).json()) as { id: number; model: string }[]).find(
+          (s) => s.model === 'Meridian 54',
+        )!.id,
+    );
 
     // The technician revises the estimate after checking the power supply and sends it.
     await bench.goto(`${ctx.product.origin}/restorations/${setId}/money`);
@@ -58,7 +71,10 @@ describe('the money journey, from estimate to the last payment', () => {
     await expectAccessible(owner, 'the owner reading the estimate');
     await owner.getByLabel('Your name').fill('Imogen Tarrant');
     await owner.getByRole('button', { name: 'Approve version 2' }).click();
-    await owner.getByText(/Approved by Imogen Tarrant/).first().waitFor();
+    await owner
+      .getByText(/Approved by Imogen Tarrant/)
+      .first()
+      .waitFor();
 
     await bench.reload();
     await bench.getByRole('button', { name: 'Request a deposit' }).click();
@@ -66,7 +82,10 @@ describe('the money journey, from estimate to the last payment', () => {
     await deposit.getByRole('radio', { name: 'A fixed amount' }).check();
     await deposit.getByRole('textbox', { name: 'Amount (GBP)' }).fill('30');
     await deposit.getByRole('button', { name: 'Issue the deposit request' }).click();
-    await bench.getByRole('heading', { name: /^Deposit request / }).first().waitFor();
+    await bench
+      .getByRole('heading', { name: /^Deposit request / })
+      .first()
+      .waitFor();
 
     await payByCard(owner, setId, '£30.00');
     const afterDeposit = await invoicesOf(owner, setId);

@@ -24,7 +24,8 @@ describe('money at the bench and at hand-back', () => {
     await expectAccessible(page, 'the workshop settings');
     await page.getByLabel('Labour rate per hour').fill('40');
     await page.getByLabel('Invoice number prefix').fill('CL-');
-    if (await page.getByLabel('Charge tax on estimates and invoices').isChecked()) await page.getByLabel('Charge tax on estimates and invoices').uncheck();
+    if (await page.getByLabel('Charge tax on estimates and invoices').isChecked())
+      await page.getByLabel('Charge tax on estimates and invoices').uncheck();
     await page.getByRole('button', { name: 'Save the settings' }).click();
     await page.getByRole('status').filter({ hasText: 'Saved.' }).waitFor();
 
@@ -60,14 +61,27 @@ describe('money at the bench and at hand-back', () => {
     await mailTo(ctx.product.origin, 'imogen@example.test', /Deposit request CL-/);
     const db = connectDatabase(ctx.product.databaseUrl);
     try {
-      await db.db.update(invoices).set({ paid: invoices.due }).where(and(eq(invoices.restorationId, setId), eq(invoices.kind, 'deposit')));
+      await db.db
+        .update(invoices)
+        .set({ paid: invoices.due })
+        .where(and(eq(invoices.restorationId, setId), eq(invoices.kind, 'deposit')));
     } finally {
       await db.pool.end();
     }
     await page.reload();
     // Every deposit paid on the set: this £40.00 and the demo's own deposit, paid by transfer when the set came in.
-    const depositsPaid = await page.evaluate(async (id) => ((await (await fetch(`/api/restorations/${id}/invoices`)).json()) as { kind: string; paid: { amount: number } }[])
-      .filter((i) => i.kind === 'deposit').reduce((a, i) => a + i.paid.amount, 0), setId);
+    const depositsPaid = await page.evaluate(
+      async (id) =>
+        (
+          (await (await fetch(`/api/restorations/${id}/invoices`)).json()) as {
+            kind: string;
+            paid: { amount: number };
+          }[]
+        )
+          .filter((i) => i.kind === 'deposit')
+          .reduce((a, i) => a + i.paid.amount, 0),
+      setId,
+    );
     expect(depositsPaid).toBeGreaterThanOrEqual(4000);
     const less = formatMoney({ amount: -depositsPaid, currency: 'GBP' }, 'en-GB');
 

@@ -54,12 +54,18 @@ describe('the owner at home, on a phone', () => {
     const target = await page.evaluate(async () => {
       const sets = (await (await fetch('/api/restorations')).json()) as { id: number; model: string; role: string }[];
       const set = sets.find((s) => s.model === 'Meridian 54' && s.role === 'owner')!;
-      const list = (await (await fetch(`/api/restorations/${set.id}/findings`)).json()) as { id: number; photoId: number; title: string }[];
+      const list = (await (await fetch(`/api/restorations/${set.id}/findings`)).json()) as {
+        id: number;
+        photoId: number;
+        title: string;
+      }[];
       const f = list.find((x) => x.title === 'Leaky coupling capacitor to the output valve')!;
       return { restorationId: set.id, photoId: f.photoId, findingId: f.id };
     });
 
-    await page.goto(`${ctx.product.origin}/restorations/${target.restorationId}/photos/${target.photoId}/findings/${target.findingId}`);
+    await page.goto(
+      `${ctx.product.origin}/restorations/${target.restorationId}/photos/${target.photoId}/findings/${target.findingId}`,
+    );
     await page.getByRole('heading', { name: 'Leaky coupling capacitor to the output valve' }).waitFor();
     // The thread has loaded (its shared reply is there) before the internal replies are looked for.
     await page.getByText(/The capacitor that passes the signal to the output valve was leaking/).waitFor();
@@ -73,7 +79,8 @@ describe('the owner at home, on a phone', () => {
     // At Fit the whole photo is on the stage and fills it along one side (the meaning of "fit to window").
     const probe = await page.evaluate(() => {
       type Size = { width: number; height: number };
-      const m = (window as unknown as { __gridleakMarkup: { view: { scale: number }; image: Size; stage: Size } }).__gridleakMarkup;
+      const m = (window as unknown as { __gridleakMarkup: { view: { scale: number }; image: Size; stage: Size } })
+        .__gridleakMarkup;
       return { scale: m.view.scale, image: m.image, stage: m.stage };
     });
     const shown = { width: probe.image.width * probe.scale, height: probe.image.height * probe.scale };
@@ -101,7 +108,11 @@ describe('the owner at home, on a phone', () => {
     const page = await newPage(ctx.browser, { width: 390, height: 844 });
     let imageBytes = 0;
     page.on('response', (res) => {
-      if (res.request().resourceType() === 'image') void res.body().then((b) => (imageBytes += b.length), () => {});
+      if (res.request().resourceType() === 'image')
+        void res.body().then(
+          (b) => (imageBytes += b.length),
+          () => {},
+        );
     });
     await signInAs(page, ctx.product.origin, 'imogen@example.test');
     imageBytes = 0; // count the home page only
@@ -121,15 +132,22 @@ describe('the owner at home, on a phone', () => {
           const [url, w] = c.trim().split(/\s+/);
           return { url: url!, width: Number.parseInt(w!, 10) };
         });
-        return { currentSrc: el.currentSrc, rendered: el.getBoundingClientRect().width * window.devicePixelRatio, complete: el.complete, candidates };
-      }));
+        return {
+          currentSrc: el.currentSrc,
+          rendered: el.getBoundingClientRect().width * window.devicePixelRatio,
+          complete: el.complete,
+          candidates,
+        };
+      }),
+    );
     const loaded = photos.filter((p) => p.currentSrc);
     expect(loaded.length).toBeGreaterThan(0);
     for (const p of loaded) {
       const chosen = p.candidates.find((c) => c.url === p.currentSrc);
       expect(chosen, `${p.currentSrc} is one of its srcset's candidates`).toBeDefined();
       // The smallest candidate that covers the rendered width is the widest the browser needed.
-      const needed = p.candidates.filter((c) => c.width >= p.rendered).sort((a, b) => a.width - b.width)[0] ?? p.candidates.at(-1)!;
+      const needed =
+        p.candidates.filter((c) => c.width >= p.rendered).sort((a, b) => a.width - b.width)[0] ?? p.candidates.at(-1)!;
       expect(chosen!.width).toBeLessThanOrEqual(needed.width);
     }
     await expect.poll(() => imageBytes).toBeGreaterThan(0);

@@ -21,11 +21,18 @@ describe('the ledger as a spreadsheet', () => {
     for (const componentRef of ['CX14', 'CX2', 'CX1', 'CX1a']) {
       const status = await page.evaluate(
         async ([id, ref]) =>
-          (await fetch(`/api/restorations/${id}/parts`, {
-            method: 'POST',
-            headers: { 'Content-Type': 'application/json' },
-            body: JSON.stringify({ componentRef: ref, originalPart: 'Wax paper', replacementPart: 'Film', state: 'fitted' }),
-          })).status,
+          (
+            await fetch(`/api/restorations/${id}/parts`, {
+              method: 'POST',
+              headers: { 'Content-Type': 'application/json' },
+              body: JSON.stringify({
+                componentRef: ref,
+                originalPart: 'Wax paper',
+                replacementPart: 'Film',
+                state: 'fitted',
+              }),
+            })
+          ).status,
         [restorationId, componentRef] as const,
       );
       expect(status).toBe(201);

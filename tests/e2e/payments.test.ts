@@ -17,7 +17,11 @@ describe('paying a deposit by card', () => {
     const setId = await bench.evaluate(async () => {
       const sets = (await (await fetch('/api/restorations')).json()) as { id: number; model: string }[];
       const set = sets.find((s) => s.model === 'Meridian 54')!;
-      const res = await fetch(`/api/restorations/${set.id}/deposits`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ amount: 4250 }) });
+      const res = await fetch(`/api/restorations/${set.id}/deposits`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ amount: 4250 }),
+      });
       if (res.status !== 201) throw new Error(`deposit: ${res.status}`);
       return set.id;
     });
@@ -47,9 +51,20 @@ describe('paying a deposit by card', () => {
     expect(await page.getByRole('button', { name: /^Pay .* by card$/ }).count()).toBe(0);
     await page.screenshot({ path: artifactPath('owner-deposit-paid.png'), fullPage: true });
     await expectAccessible(page, 'the owner set page after paying');
-    const invoices = await page.evaluate(async (id) => (await (await fetch(`/api/restorations/${id}/invoices`)).json()) as { kind: string; status: string; due: { amount: number }; paid: { amount: number } }[], setId);
+    const invoices = await page.evaluate(
+      async (id) =>
+        (await (await fetch(`/api/restorations/${id}/invoices`)).json()) as {
+          kind: string;
+          status: string;
+          due: { amount: number };
+          paid: { amount: number };
+        }[],
+      setId,
+    );
     // The demo's own deposit (paid by transfer when the set came in) stays as it was; this one is paid by card.
-    expect(invoices.filter((i) => i.kind === 'deposit' && i.due.amount === 4250).map((i) => [i.status, i.paid.amount])).toEqual([['paid', 4250]]);
+    expect(
+      invoices.filter((i) => i.kind === 'deposit' && i.due.amount === 4250).map((i) => [i.status, i.paid.amount]),
+    ).toEqual([['paid', 4250]]);
     expect(consoleMessages).toEqual([]);
 
     // The workshop sees the same line on the Money tab, with a refund offered.

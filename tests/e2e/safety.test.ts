@@ -19,7 +19,11 @@ async function recordTest(page: Page, earth: string) {
   await form.getByLabel('Insulation resistance (Ω)').fill('50M');
   await form.getByLabel('Fuse fitted (A)').fill('1');
   await form.getByLabel('Fuse recommended (A)').fill('1');
-  for (const box of ['Mains lead sound, strain relief fitted', 'Knobs, back cover and insulators refitted', 'Mains-side capacitors are X/Y safety class'])
+  for (const box of [
+    'Mains lead sound, strain relief fitted',
+    'Knobs, back cover and insulators refitted',
+    'Mains-side capacitors are X/Y safety class',
+  ])
     await form.getByLabel(box).check();
   await form.getByRole('button', { name: 'Record the test' }).click();
 }
@@ -29,7 +33,9 @@ describe('the final safety test, the soak and the hand-back', () => {
     const page = await newPage(ctx.browser);
     const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
-    const sets = (await (await page.request.get(`${ctx.product.origin}/api/restorations?q=Meridian`)).json()) as { id: number }[];
+    const sets = (await (await page.request.get(`${ctx.product.origin}/api/restorations?q=Meridian`)).json()) as {
+      id: number;
+    }[];
     const id = sets[0]!.id;
 
     await page.goto(`${ctx.product.origin}/restorations/${id}/safety`);
@@ -39,7 +45,9 @@ describe('the final safety test, the soak and the hand-back', () => {
     await recordTest(page, '0.6');
     const latest = page.getByRole('region', { name: 'Latest test' });
     await latest.getByText('Not passed').waitFor();
-    expect(await latest.getByRole('row', { name: /Protective earth continuity/ }).textContent()).toMatch(/Fail.*IET Code of Practice/);
+    expect(await latest.getByRole('row', { name: /Protective earth continuity/ }).textContent()).toMatch(
+      /Fail.*IET Code of Practice/,
+    );
 
     await recordTest(page, '0.07');
     await latest.getByText('Passed', { exact: true }).waitFor();
@@ -81,8 +89,12 @@ describe('the final safety test, the soak and the hand-back', () => {
     const text = (await pdfText(await res.body())).replace(/\s+/g, ' ');
     expect(text).toContain('Final safety test');
     expect(text).toContain('Result: passed on every line tested.');
-    expect(text).toContain('Protective earth continuity, chassis to plug earth pin: 70 mΩ — PASS (limit at most 0.15 Ω (0.1 Ω + lead 0.05 Ω); IET Code of Practice');
-    expect(text).toContain('Insulation, live and neutral joined to exposed metal, at 500 V DC: 50 MΩ — PASS (limit at least 1 MΩ at 500 V DC; IET Code of Practice');
+    expect(text).toContain(
+      'Protective earth continuity, chassis to plug earth pin: 70 mΩ — PASS (limit at most 0.15 Ω (0.1 Ω + lead 0.05 Ω); IET Code of Practice',
+    );
+    expect(text).toContain(
+      'Insulation, live and neutral joined to exposed metal, at 500 V DC: 50 MΩ — PASS (limit at least 1 MΩ at 500 V DC; IET Code of Practice',
+    );
     expect(text).toMatch(/Soak test \d+\.\d hours in 1 run/);
     expect(text).toContain('not a certificate of electrical safety');
     expect(ownerMessages).toEqual([]);

@@ -10,7 +10,9 @@ import { twoToneJpeg } from '../factories/images';
 
 /** The canvas's read-only probe (see DEVELOPERS.md, "The markup canvas in journeys"). */
 type Probe = {
-  view: { scale: number }; image: { width: number; height: number }; stage: { width: number; height: number };
+  view: { scale: number };
+  image: { width: number; height: number };
+  stage: { width: number; height: number };
   imageToClient(x: number, y: number): { x: number; y: number };
 };
 type Side = 'diagram' | 'chassis';
@@ -31,18 +33,28 @@ const ON_CHASSIS = { x: 0.62, y: 0.48 };
  */
 async function expectPaneZoomedOnto(page: Page, side: Side, at: { x: number; y: number }) {
   const state = () =>
-    page.evaluate(([name, px, py]) => {
-      const probe = (window as unknown as ProbeWindow).__gridleakMarkups?.[name as string];
-      const stage = document.querySelector(`[data-markup-probe="${name as string}"] [data-testid="markup-stage"]`)?.getBoundingClientRect();
-      if (!probe || !stage) return null;
-      const fit = Math.min(probe.stage.width / probe.image.width, probe.stage.height / probe.image.height);
-      const p = probe.imageToClient(px as number, py as number);
-      const off = Math.max(Math.abs(p.x - (stage.x + stage.width / 2)) / stage.width, Math.abs(p.y - (stage.y + stage.height / 2)) / stage.height);
-      return { zoom: probe.view.scale / fit, off };
-    }, [side, at.x, at.y] as const);
+    page.evaluate(
+      ([name, px, py]) => {
+        const probe = (window as unknown as ProbeWindow).__gridleakMarkups?.[name as string];
+        const stage = document
+          .querySelector(`[data-markup-probe="${name as string}"] [data-testid="markup-stage"]`)
+          ?.getBoundingClientRect();
+        if (!probe || !stage) return null;
+        const fit = Math.min(probe.stage.width / probe.image.width, probe.stage.height / probe.image.height);
+        const p = probe.imageToClient(px as number, py as number);
+        const off = Math.max(
+          Math.abs(p.x - (stage.x + stage.width / 2)) / stage.width,
+          Math.abs(p.y - (stage.y + stage.height / 2)) / stage.height,
+        );
+        return { zoom: probe.view.scale / fit, off };
+      },
+      [side, at.x, at.y] as const,
+    );
   // Generous waits, not timings: the page and both pictures load first on a busy machine.
   await expect.poll(async () => (await state())?.zoom ?? 0, { timeout: 30_000 }).toBeGreaterThan(1.5);
-  await expect.poll(async () => (await state())?.off ?? Number.POSITIVE_INFINITY, { timeout: 30_000 }).toBeLessThan(0.1);
+  await expect
+    .poll(async () => (await state())?.off ?? Number.POSITIVE_INFINITY, { timeout: 30_000 })
+    .toBeLessThan(0.1);
 }
 
 const paneBox = (page: Page, side: Side) => page.locator(`[data-markup-probe="${side}"]`).boundingBox();
@@ -63,7 +75,11 @@ describe('the service sheet beside the chassis', () => {
       await route.continue();
     });
     await tech.getByLabel('Title (optional)').fill('Meridian 54 sheet');
-    await tech.getByLabel('PDF or scan').setInputFiles({ name: 'meridian-54.pdf', mimeType: 'application/pdf', buffer: await servicePdf(['Circuit diagram', 'Layout']) });
+    await tech.getByLabel('PDF or scan').setInputFiles({
+      name: 'meridian-54.pdf',
+      mimeType: 'application/pdf',
+      buffer: await servicePdf(['Circuit diagram', 'Layout']),
+    });
     await tech.getByRole('button', { name: 'Add to the sheet' }).click();
     await tech.getByRole('progressbar').first().waitFor();
     await tech.getByText('Added 2 pages.').waitFor({ timeout: 60_000 });
@@ -71,7 +87,10 @@ describe('the service sheet beside the chassis', () => {
     await expectAccessible(tech, 'the service sheet');
 
     // R23 on the diagram (page 1).
-    await tech.getByRole('link', { name: /Meridian 54 sheet/ }).first().click();
+    await tech
+      .getByRole('link', { name: /Meridian 54 sheet/ })
+      .first()
+      .click();
     await tech.getByTestId('markup-stage').waitFor();
     await expect.poll(() => scale(tech)).toBeGreaterThan(0);
     await tech.getByLabel('Reference for the next mark').fill('R23');
@@ -86,8 +105,13 @@ describe('the service sheet beside the chassis', () => {
     // A chassis photo, and a finding on it that names R23.
     await tech.goto(`${notebook}/photos`);
     await tech.getByLabel('View').first().selectOption('rear');
-    await tech.locator('input[type=file][multiple]').setInputFiles([{ name: 'rear.jpg', mimeType: 'image/jpeg', buffer: await twoToneJpeg(1600, 1200) }]);
-    await tech.getByRole('button', { name: /Rear, before/ }).first().click({ timeout: 30_000 });
+    await tech
+      .locator('input[type=file][multiple]')
+      .setInputFiles([{ name: 'rear.jpg', mimeType: 'image/jpeg', buffer: await twoToneJpeg(1600, 1200) }]);
+    await tech
+      .getByRole('button', { name: /Rear, before/ })
+      .first()
+      .click({ timeout: 30_000 });
     await tech.getByRole('link', { name: 'Mark up this photo' }).click();
     await tech.getByTestId('markup-stage').waitFor();
     await expect.poll(() => scale(tech)).toBeGreaterThan(0);
@@ -99,7 +123,10 @@ describe('the service sheet beside the chassis', () => {
     await form.getByLabel('Component reference').fill('R23');
     await form.getByRole('button', { name: 'Save finding' }).click();
     await tech.waitForURL(/\/findings\/\d+$/);
-    const [, photoId, findingId] = tech.url().match(/\/photos\/(\d+)\/findings\/(\d+)$/)!.map(Number);
+    const [, photoId, findingId] = tech
+      .url()
+      .match(/\/photos\/(\d+)\/findings\/(\d+)$/)!
+      .map(Number);
 
     // From the finding: "on the diagram" opens both pictures, side by side, each zoomed onto R23.
     await tech.getByRole('link', { name: 'R23 on the diagram' }).click();
@@ -156,11 +183,22 @@ describe('the service sheet beside the chassis', () => {
     expect(await owner.locator('[data-markup-probe]').count()).toBe(0);
 
     const diagramPageId = Number(diagramPage.match(/\/sheets\/(\d+)/)![1]);
-    const shared = await tech.evaluate(async ({ pageId, photo, finding }) => {
-      const patch = (path: string) =>
-        fetch(path, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ ownerVisible: true }) }).then((r) => r.status);
-      return [await patch(`/api/sheet-pages/${pageId}`), await patch(`/api/photos/${photo}`), await patch(`/api/findings/${finding}`)];
-    }, { pageId: diagramPageId, photo: photoId!, finding: findingId! });
+    const shared = await tech.evaluate(
+      async ({ pageId, photo, finding }) => {
+        const patch = (path: string) =>
+          fetch(path, {
+            method: 'PATCH',
+            headers: { 'Content-Type': 'application/json' },
+            body: JSON.stringify({ ownerVisible: true }),
+          }).then((r) => r.status);
+        return [
+          await patch(`/api/sheet-pages/${pageId}`),
+          await patch(`/api/photos/${photo}`),
+          await patch(`/api/findings/${finding}`),
+        ];
+      },
+      { pageId: diagramPageId, photo: photoId!, finding: findingId! },
+    );
     expect(shared).toEqual([200, 200, 200]);
 
     // Once shared, the owner reads both pictures zoomed onto R23, without tools and without the unshared mismatch note.

@@ -32,7 +32,8 @@ describe('voltage chart', () => {
     await form.getByLabel('Location, row 1').waitFor();
     await expectAccessible(page, 'the voltage chart form');
     for (let i = 0; i < points.length; i++) {
-      if (i > 0 && (await form.getByLabel(`Location, row ${i + 1}`).count()) === 0) await form.getByRole('button', { name: 'Add row' }).click();
+      if (i > 0 && (await form.getByLabel(`Location, row ${i + 1}`).count()) === 0)
+        await form.getByRole('button', { name: 'Add row' }).click();
       const [location, expected, reading] = points[i]!;
       await form.getByLabel(`Location, row ${i + 1}`).fill(location);
       await form.getByLabel(`Expected, row ${i + 1}`).fill(expected);

@@ -15,7 +15,12 @@ export async function jpegWithGpsAndOrientation6(): Promise<Buffer> {
     .withExif({
       IFD0: { Make: 'Bench camera', DateTime: '2026:11:20 14:05:09' },
       IFD2: { DateTimeOriginal: '2026:11:20 14:05:09' },
-      IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 2600/100', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 3900/100' },
+      IFD3: {
+        GPSLatitudeRef: 'N',
+        GPSLatitude: '51/1 30/1 2600/100',
+        GPSLongitudeRef: 'W',
+        GPSLongitude: '0/1 7/1 3900/100',
+      },
     })
     .withMetadata({ orientation: 6 })
     .jpeg({ quality: 90 })
@@ -24,7 +29,11 @@ export async function jpegWithGpsAndOrientation6(): Promise<Buffer> {
 
 /** A valid 1×1 PNG whose header is rewritten to claim the given size (a decompression bomb's calling card). */
 export async function pngClaiming(width: number, height: number): Promise<Buffer> {
-  const png = Buffer.from(await sharp({ create: { width: 1, height: 1, channels: 3, background: '#888' } }).png().toBuffer());
+  const png = Buffer.from(
+    await sharp({ create: { width: 1, height: 1, channels: 3, background: '#888' } })
+      .png()
+      .toBuffer(),
+  );
   // IHDR data starts at byte 16 (8 signature + 4 length + 4 type); its CRC follows the 13 data bytes.
   png.writeUInt32BE(width, 16);
   png.writeUInt32BE(height, 20);

@@ -13,7 +13,10 @@ export function servicePdf(titles: string[] = ['Circuit diagram', 'Layout']): Pr
     doc.addPage();
     doc.fontSize(18).text(title, 50, 50);
     doc.lineWidth(0.5).moveTo(50, 200).lineTo(545, 200).stroke();
-    doc.moveTo(230 + i * 40, 150).lineTo(230 + i * 40, 600).stroke();
+    doc
+      .moveTo(230 + i * 40, 150)
+      .lineTo(230 + i * 40, 600)
+      .stroke();
     doc.rect(220 + i * 40, 280, 20, 60).stroke();
     doc.fontSize(6).text('R23  47k', 250 + i * 40, 300);
   });

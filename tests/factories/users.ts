@@ -15,8 +15,12 @@ export async function createUser(db: Database, overrides: { name?: string; email
   passwordHash ??= hashPassword(FACTORY_PASSWORD);
   const [row] = await db
     .insert(users)
-    .values({ name: overrides.name ?? `Tester ${tag}`, email: overrides.email ?? `tester-${tag}@example.test`,
-      passwordHash: await passwordHash, emailConfirmedAt: new Date() })
+    .values({
+      name: overrides.name ?? `Tester ${tag}`,
+      email: overrides.email ?? `tester-${tag}@example.test`,
+      passwordHash: await passwordHash,
+      emailConfirmedAt: new Date(),
+    })
     .returning();
   return { id: row!.id, name: row!.name, email: row!.email, password: FACTORY_PASSWORD };
 }

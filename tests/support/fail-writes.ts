@@ -9,8 +9,14 @@ import type { Database } from '../../server/db/client';
 export async function failWrites(db: Database, table: string, operation: 'insert' | 'update' | 'delete' = 'insert') {
   if (!/^[a-z_]+$/.test(table)) throw new Error(`not a table name: ${table}`);
   const name = `fail_${table}_${operation}_${randomBytes(4).toString('hex')}`;
-  await db.execute(sql.raw(`create function ${name}() returns trigger language plpgsql as $$ begin raise exception 'injected failure: ${operation} on ${table}'; end $$`));
-  await db.execute(sql.raw(`create trigger ${name} before ${operation} on ${table} for each statement execute function ${name}()`));
+  await db.execute(
+    sql.raw(
+      `create function ${name}() returns trigger language plpgsql as $$ begin raise exception 'injected failure: ${operation} on ${table}'; end $$`,
+    ),
+  );
+  await db.execute(
+    sql.raw(`create trigger ${name} before ${operation} on ${table} for each statement execute function ${name}()`),
+  );
   return async () => {
     await db.execute(sql.raw(`drop trigger ${name} on ${table}`));
     await db.execute(sql.raw(`drop function ${name}()`));
@@ -18,7 +24,12 @@ export async function failWrites(db: Database, table: string, operation: 'insert
 }
 
 /** Runs `body` while `table` refuses `operation`; the failure is removed even when `body` throws. */
-export async function whileFailing<T>(db: Database, table: string, operation: 'insert' | 'update' | 'delete', body: () => Promise<T>): Promise<T> {
+export async function whileFailing<T>(
+  db: Database,
+  table: string,
+  operation: 'insert' | 'update' | 'delete',
+  body: () => Promise<T>,
+): Promise<T> {
   const restore = await failWrites(db, table, operation);
   try {
     return await body();

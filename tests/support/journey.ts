@@ -13,12 +13,19 @@ export async function signInAs(page: Page, origin: string, email: string, passwo
   // The header follows the new session without a reload (on a phone its links and Sign out sit behind Menu).
   await page.getByRole('button', { name: /^Notifications/ }).waitFor();
   await page.getByRole('button', { name: 'Sign out', includeHidden: true }).waitFor({ state: 'attached' });
-  await page.getByRole('navigation', { name: 'Main', includeHidden: true }).getByRole('link', { name: 'Calculators', includeHidden: true }).waitFor({ state: 'attached' });
+  await page
+    .getByRole('navigation', { name: 'Main', includeHidden: true })
+    .getByRole('link', { name: 'Calculators', includeHidden: true })
+    .waitFor({ state: 'attached' });
 }
 
 /** Reads the product's mail capture for a message to `to`. */
 export function mailTo(origin: string, to: string, subject?: RegExp): Promise<CapturedMail> {
-  return waitForMail(async () => (await fetch(`${origin}/api/dev/mail`)).json() as Promise<CapturedMail[]>, to, subject);
+  return waitForMail(
+    async () => (await fetch(`${origin}/api/dev/mail`)).json() as Promise<CapturedMail[]>,
+    to,
+    subject,
+  );
 }
 
 /** The first link in a captured message. */

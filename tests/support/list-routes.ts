@@ -14,7 +14,8 @@ export function listApiRoutes(app: Express): string[] {
   const walk = (stack: Layer[], prefix: string) => {
     for (const layer of stack) {
       if (layer.route)
-        for (const method of Object.keys(layer.route.methods)) found.push(`${method.toUpperCase()} ${prefix}${layer.route.path}`);
+        for (const method of Object.keys(layer.route.methods))
+          found.push(`${method.toUpperCase()} ${prefix}${layer.route.path}`);
       else if (layer.handle?.stack) walk(layer.handle.stack, prefix || '/api');
     }
   };

@@ -16,8 +16,15 @@ export async function startProduct() {
   const port = portBase + 3;
   const origin = `http://localhost:${port}`;
   const child: ChildProcess = spawn('node_modules/.bin/tsx', ['server/main.ts'], {
-    env: { ...process.env, DATABASE_URL: database.url, PORT: String(port), PUBLIC_URL: origin, GRIDLEAK_DATA_DIR: dataDir,
-      GRIDLEAK_PORT_BASE: String(portBase), LOG_LEVEL: 'warn' },
+    env: {
+      ...process.env,
+      DATABASE_URL: database.url,
+      PORT: String(port),
+      PUBLIC_URL: origin,
+      GRIDLEAK_DATA_DIR: dataDir,
+      GRIDLEAK_PORT_BASE: String(portBase),
+      LOG_LEVEL: 'warn',
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';

@@ -1,5 +1,24 @@
-import { boolean, doublePrecision, index, integer, pgEnum, pgTable, primaryKey, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
-import { decisions, intakeItems, lampBehaviours, prePowerItems, prePowerStatuses, supplies } from '../../../shared/schemas/bringup';
+import {
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  pgEnum,
+  pgTable,
+  primaryKey,
+  serial,
+  text,
+  timestamp,
+  uniqueIndex,
+} from 'drizzle-orm/pg-core';
+import {
+  decisions,
+  intakeItems,
+  lampBehaviours,
+  prePowerItems,
+  prePowerStatuses,
+  supplies,
+} from '../../../shared/schemas/bringup';
 import { timestamps } from './columns';
 import { findings } from './findings';
 import { measurements } from './measurements';
@@ -19,7 +38,9 @@ export const intakeChecks = pgTable(
   'intake_checks',
   {
     id: serial().primaryKey(),
-    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    restorationId: integer()
+      .notNull()
+      .references(() => restorations.id, { onDelete: 'cascade' }),
     item: intakeItemEnum().notNull(),
     done: boolean().notNull().default(false),
     note: text().notNull().default(''),
@@ -42,14 +63,19 @@ export const prePowerChecks = pgTable(
   'pre_power_checks',
   {
     id: serial().primaryKey(),
-    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    restorationId: integer()
+      .notNull()
+      .references(() => restorations.id, { onDelete: 'cascade' }),
     item: prePowerItemEnum().notNull(),
     status: prePowerStatusEnum(),
     reason: text().notNull().default(''),
     checkedById: integer().references(() => users.id, { onDelete: 'set null' }),
     ...timestamps,
   },
-  (t) => [uniqueIndex('pre_power_checks_restoration_id_item_idx').on(t.restorationId, t.item), index('pre_power_checks_checked_by_id_idx').on(t.checkedById)],
+  (t) => [
+    uniqueIndex('pre_power_checks_restoration_id_item_idx').on(t.restorationId, t.item),
+    index('pre_power_checks_checked_by_id_idx').on(t.checkedById),
+  ],
 );
 
 /** A technician's sign-off of the whole pre-power checklist; changing any item afterwards removes it. */
@@ -57,12 +83,17 @@ export const prePowerSignoffs = pgTable(
   'pre_power_signoffs',
   {
     id: serial().primaryKey(),
-    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    restorationId: integer()
+      .notNull()
+      .references(() => restorations.id, { onDelete: 'cascade' }),
     signedById: integer().references(() => users.id, { onDelete: 'set null' }),
     signedAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
     ...timestamps,
   },
-  (t) => [uniqueIndex('pre_power_signoffs_restoration_id_idx').on(t.restorationId), index('pre_power_signoffs_signed_by_id_idx').on(t.signedById)],
+  (t) => [
+    uniqueIndex('pre_power_signoffs_restoration_id_idx').on(t.restorationId),
+    index('pre_power_signoffs_signed_by_id_idx').on(t.signedById),
+  ],
 );
 
 /** One step of the staged first power-up, numbered in the order taken. */
@@ -70,7 +101,9 @@ export const bringupSteps = pgTable(
   'bringup_steps',
   {
     id: serial().primaryKey(),
-    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    restorationId: integer()
+      .notNull()
+      .references(() => restorations.id, { onDelete: 'cascade' }),
     number: integer().notNull(),
     supply: supplyEnum().notNull(),
     /** Series lamp rating, W and V. */
@@ -97,8 +130,15 @@ export const bringupSteps = pgTable(
 export const bringupStepReadings = pgTable(
   'bringup_step_readings',
   {
-    stepId: integer().notNull().references(() => bringupSteps.id, { onDelete: 'cascade' }),
-    measurementId: integer().notNull().references(() => measurements.id, { onDelete: 'cascade' }),
+    stepId: integer()
+      .notNull()
+      .references(() => bringupSteps.id, { onDelete: 'cascade' }),
+    measurementId: integer()
+      .notNull()
+      .references(() => measurements.id, { onDelete: 'cascade' }),
   },
-  (t) => [primaryKey({ columns: [t.stepId, t.measurementId] }), index('bringup_step_readings_measurement_id_idx').on(t.measurementId)],
+  (t) => [
+    primaryKey({ columns: [t.stepId, t.measurementId] }),
+    index('bringup_step_readings_measurement_id_idx').on(t.measurementId),
+  ],
 );

@@ -22,14 +22,29 @@ export const helpRequests = pgTable(
     symptom: text().notNull(),
     includeSet: boolean().notNull().default(true),
     includeValves: boolean().notNull().default(true),
-    partIds: integer().array().notNull().default(sql`'{}'::integer[]`),
-    measurementIds: integer().array().notNull().default(sql`'{}'::integer[]`),
-    photoIds: integer().array().notNull().default(sql`'{}'::integer[]`),
+    partIds: integer()
+      .array()
+      .notNull()
+      .default(sql`'{}'::integer[]`),
+    measurementIds: integer()
+      .array()
+      .notNull()
+      .default(sql`'{}'::integer[]`),
+    photoIds: integer()
+      .array()
+      .notNull()
+      .default(sql`'{}'::integer[]`),
     /** Symptoms of the checklist whose causes and results go with the request (ids from shared/bench/symptoms). */
-    symptomIds: text().array().notNull().default(sql`'{}'::text[]`),
+    symptomIds: text()
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     ...timestamps,
   },
-  (t) => [index('help_requests_restoration_id_idx').on(t.restorationId), index('help_requests_author_id_idx').on(t.authorId)],
+  (t) => [
+    index('help_requests_restoration_id_idx').on(t.restorationId),
+    index('help_requests_author_id_idx').on(t.authorId),
+  ],
 );
 
 /** A read-only link to a help request for someone without an account; only the SHA-256 of its token is kept. */
@@ -46,7 +61,10 @@ export const helpLinks = pgTable(
     createdById: integer().references(() => users.id, { onDelete: 'set null' }),
     ...timestamps,
   },
-  (t) => [index('help_links_help_request_id_idx').on(t.helpRequestId), index('help_links_created_by_id_idx').on(t.createdById)],
+  (t) => [
+    index('help_links_help_request_id_idx').on(t.helpRequestId),
+    index('help_links_created_by_id_idx').on(t.createdById),
+  ],
 );
 
 /** A reply left through a link: held until a technician approves it, then shown in the request's thread. */

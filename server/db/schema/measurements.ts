@@ -1,4 +1,15 @@
-import { boolean, doublePrecision, index, integer, pgEnum, pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import {
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  pgEnum,
+  pgTable,
+  serial,
+  text,
+  timestamp,
+  uniqueIndex,
+} from 'drizzle-orm/pg-core';
 import { measuredQuantities } from '../../../shared/bench/reading-kinds';
 import { timestamps } from './columns';
 import { findings } from './findings';

@@ -1,5 +1,16 @@
 import { sql } from 'drizzle-orm';
-import { boolean, check, index, integer, pgEnum, pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import {
+  boolean,
+  check,
+  index,
+  integer,
+  pgEnum,
+  pgTable,
+  serial,
+  text,
+  timestamp,
+  uniqueIndex,
+} from 'drizzle-orm/pg-core';
 import { estimateDecisions, estimateExtras, estimateLineKinds } from '../../../shared/schemas/estimates';
 import { taxRoundings } from '../../../shared/money/tax';
 import { invoiceKinds } from '../../../shared/schemas/invoices';
@@ -49,7 +60,9 @@ export const estimates = pgTable(
   'estimates',
   {
     id: serial().primaryKey(),
-    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    restorationId: integer()
+      .notNull()
+      .references(() => restorations.id, { onDelete: 'cascade' }),
     version: integer().notNull(),
     note: text().notNull().default(''),
     currency: text().notNull(),
@@ -84,7 +97,9 @@ export const estimateLines = pgTable(
   'estimate_lines',
   {
     id: serial().primaryKey(),
-    estimateId: integer().notNull().references(() => estimates.id, { onDelete: 'cascade' }),
+    estimateId: integer()
+      .notNull()
+      .references(() => estimates.id, { onDelete: 'cascade' }),
     position: integer().notNull(),
     kind: estimateLineKindEnum().notNull(),
     description: text().notNull(),
@@ -108,7 +123,9 @@ export const labourEntries = pgTable(
   'labour_entries',
   {
     id: serial().primaryKey(),
-    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    restorationId: integer()
+      .notNull()
+      .references(() => restorations.id, { onDelete: 'cascade' }),
     technicianId: integer().references(() => users.id, { onDelete: 'set null' }),
     findingId: integer().references(() => findings.id, { onDelete: 'set null' }),
     stage: stageEnum(),
@@ -126,7 +143,9 @@ export const labourEntries = pgTable(
     index('labour_entries_technician_id_started_at_idx').on(t.technicianId, t.startedAt),
     index('labour_entries_finding_id_idx').on(t.findingId),
     // One running timer per technician.
-    uniqueIndex('labour_entries_running_idx').on(t.technicianId).where(sql`${t.stoppedAt} is null`),
+    uniqueIndex('labour_entries_running_idx')
+      .on(t.technicianId)
+      .where(sql`${t.stoppedAt} is null`),
   ],
 );
 
@@ -146,7 +165,9 @@ export const invoices = pgTable(
   {
     id: serial().primaryKey(),
     // Issued documents are kept: a restoration with invoices cannot be deleted (the service says why first).
-    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'restrict' }),
+    restorationId: integer()
+      .notNull()
+      .references(() => restorations.id, { onDelete: 'restrict' }),
     number: integer().notNull(),
     /** The workshop's prefix in force when it was issued. */
     numberPrefix: text().notNull().default(''),
@@ -183,7 +204,9 @@ export const invoiceLines = pgTable(
   'invoice_lines',
   {
     id: serial().primaryKey(),
-    invoiceId: integer().notNull().references(() => invoices.id, { onDelete: 'cascade' }),
+    invoiceId: integer()
+      .notNull()
+      .references(() => invoices.id, { onDelete: 'cascade' }),
     position: integer().notNull(),
     description: text().notNull(),
     net: integer().notNull(),

@@ -1,4 +1,16 @@
-import { check, date, index, integer, pgEnum, pgTable, serial, text, timestamp, uniqueIndex, type AnyPgColumn } from 'drizzle-orm/pg-core';
+import {
+  check,
+  date,
+  index,
+  integer,
+  pgEnum,
+  pgTable,
+  serial,
+  text,
+  timestamp,
+  uniqueIndex,
+  type AnyPgColumn,
+} from 'drizzle-orm/pg-core';
 import { sql } from 'drizzle-orm';
 import { paymentKinds, paymentMethods, paymentStatuses } from '../../../shared/schemas/payments';
 import { timestamps } from './columns';
@@ -19,8 +31,12 @@ export const payments = pgTable(
   'payments',
   {
     id: serial().primaryKey(),
-    invoiceId: integer().notNull().references(() => invoices.id, { onDelete: 'cascade' }),
-    restorationId: integer().notNull().references(() => restorations.id, { onDelete: 'cascade' }),
+    invoiceId: integer()
+      .notNull()
+      .references(() => invoices.id, { onDelete: 'cascade' }),
+    restorationId: integer()
+      .notNull()
+      .references(() => restorations.id, { onDelete: 'cascade' }),
     kind: paymentKindEnum().notNull(),
     method: paymentMethodEnum().notNull(),
     status: paymentStatusEnum().notNull(),

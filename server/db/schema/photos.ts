@@ -37,5 +37,8 @@ export const photos = pgTable(
     uploadedById: integer().references(() => users.id, { onDelete: 'set null' }),
     ...timestamps,
   },
-  (t) => [index('photos_restoration_id_idx').on(t.restorationId), index('photos_uploaded_by_id_idx').on(t.uploadedById)],
+  (t) => [
+    index('photos_restoration_id_idx').on(t.restorationId),
+    index('photos_uploaded_by_id_idx').on(t.uploadedById),
+  ],
 );

@@ -1,5 +1,16 @@
 import { sql } from 'drizzle-orm';
-import { doublePrecision, index, integer, jsonb, pgEnum, pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import {
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  serial,
+  text,
+  timestamp,
+  uniqueIndex,
+} from 'drizzle-orm/pg-core';
 import { equipmentClasses, type SafetyLine } from '../../../shared/bench/safety-test';
 import { safetyVerdicts, specifications } from '../../../shared/schemas/safety';
 import { findings } from './findings';
@@ -33,7 +44,10 @@ export const safetyTests = pgTable(
     testedById: integer().references(() => users.id, { onDelete: 'set null' }),
     testedAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('safety_tests_restoration_id_tested_at_idx').on(t.restorationId, t.testedAt), index('safety_tests_tested_by_id_idx').on(t.testedById)],
+  (t) => [
+    index('safety_tests_restoration_id_tested_at_idx').on(t.restorationId, t.testedAt),
+    index('safety_tests_tested_by_id_idx').on(t.testedById),
+  ],
 );
 
 /** A technician returning a set without a passing safety test, and why; shown in red in the history and report. */
@@ -48,7 +62,10 @@ export const safetyOverrides = pgTable(
     actorId: integer().references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('safety_overrides_restoration_id_idx').on(t.restorationId), index('safety_overrides_actor_id_idx').on(t.actorId)],
+  (t) => [
+    index('safety_overrides_restoration_id_idx').on(t.restorationId),
+    index('safety_overrides_actor_id_idx').on(t.actorId),
+  ],
 );
 
 /** One soak run: open while `endedAt` is null (at most one per restoration). */
@@ -75,7 +92,9 @@ export const soakSessions = pgTable(
     index('soak_sessions_restoration_id_idx').on(t.restorationId),
     index('soak_sessions_finding_id_idx').on(t.findingId),
     index('soak_sessions_started_by_id_idx').on(t.startedById),
-    uniqueIndex('soak_sessions_restoration_id_running_idx').on(t.restorationId).where(sql`${t.endedAt} is null`),
+    uniqueIndex('soak_sessions_restoration_id_running_idx')
+      .on(t.restorationId)
+      .where(sql`${t.endedAt} is null`),
   ],
 );
 
@@ -97,5 +116,8 @@ export const reportSends = pgTable(
     stage: text().notNull(),
     sentAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('report_sends_restoration_id_idx').on(t.restorationId), index('report_sends_sent_by_id_idx').on(t.sentById)],
+  (t) => [
+    index('report_sends_restoration_id_idx').on(t.restorationId),
+    index('report_sends_sent_by_id_idx').on(t.sentById),
+  ],
 );

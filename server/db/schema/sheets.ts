@@ -26,7 +26,10 @@ export const sheets = pgTable(
     uploadedById: integer().references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp({ withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
-  (t) => [index('sheets_restoration_id_idx').on(t.restorationId), index('sheets_uploaded_by_id_idx').on(t.uploadedById)],
+  (t) => [
+    index('sheets_restoration_id_idx').on(t.restorationId),
+    index('sheets_uploaded_by_id_idx').on(t.uploadedById),
+  ],
 );
 
 /** One page of a service sheet, stored as images under `sheets/<storageKey>/p<pageNumber>/…`. */
@@ -100,5 +103,8 @@ export const mismatchNotes = pgTable(
     createdById: integer().references(() => users.id, { onDelete: 'set null' }),
     ...timestamps,
   },
-  (t) => [index('mismatch_notes_restoration_id_ref_idx').on(t.restorationId, t.ref), index('mismatch_notes_created_by_id_idx').on(t.createdById)],
+  (t) => [
+    index('mismatch_notes_restoration_id_ref_idx').on(t.restorationId, t.ref),
+    index('mismatch_notes_created_by_id_idx').on(t.createdById),
+  ],
 );

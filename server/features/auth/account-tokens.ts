@@ -21,8 +21,12 @@ export function accountTokensRepo(db: Executor) {
     async issue(userId: number, purpose: Purpose, choice?: SignUpChoice): Promise<string> {
       const { token, hash } = newToken();
       await db.insert(accountTokens).values({
-        userId, purpose, tokenHash: hash, expiresAt: new Date(Date.now() + LIFETIME_MS[purpose]),
-        passwordHash: choice?.passwordHash ?? null, name: choice?.name ?? null,
+        userId,
+        purpose,
+        tokenHash: hash,
+        expiresAt: new Date(Date.now() + LIFETIME_MS[purpose]),
+        passwordHash: choice?.passwordHash ?? null,
+        name: choice?.name ?? null,
       });
       return token;
     },
@@ -39,13 +43,23 @@ export function accountTokensRepo(db: Executor) {
             gt(accountTokens.expiresAt, new Date()),
           ),
         )
-        .returning({ userId: accountTokens.userId, passwordHash: accountTokens.passwordHash, name: accountTokens.name });
+        .returning({
+          userId: accountTokens.userId,
+          passwordHash: accountTokens.passwordHash,
+          name: accountTokens.name,
+        });
       if (!row) return undefined;
-      return { userId: row.userId, choice: row.passwordHash && row.name ? { passwordHash: row.passwordHash, name: row.name } : undefined };
+      return {
+        userId: row.userId,
+        choice: row.passwordHash && row.name ? { passwordHash: row.passwordHash, name: row.name } : undefined,
+      };
     },
     /** Spends every outstanding reset and confirmation link of the account (after one of them was used). */
     async spendAll(userId: number): Promise<void> {
-      await db.update(accountTokens).set({ usedAt: new Date() }).where(and(eq(accountTokens.userId, userId), isNull(accountTokens.usedAt)));
+      await db
+        .update(accountTokens)
+        .set({ usedAt: new Date() })
+        .where(and(eq(accountTokens.userId, userId), isNull(accountTokens.usedAt)));
     },
   };
 }

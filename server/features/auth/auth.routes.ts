@@ -46,10 +46,17 @@ export function authRoutes(deps: AppDeps, passport: ReturnType<typeof createPass
     await throttles.signUpAttempt(req.ip ?? 'unknown', fields.email.toLowerCase());
     if (invitationToken) await invitations.assertInvitedAddress(invitationToken, fields.email);
     // From an invitation, the account and the membership are created together (or neither); sign-in follows the commit.
-    const created = await auth.signUp(fields, invitationToken ? (tx, user) => invitations.acceptIn(tx, invitationToken, user) : undefined);
+    const created = await auth.signUp(
+      fields,
+      invitationToken ? (tx, user) => invitations.acceptIn(tx, invitationToken, user) : undefined,
+    );
     if (!created) return void res.status(202).json({ status: 'check-email' } satisfies SignUpResult);
     await login(req, created.user);
-    res.status(201).json({ status: 'signed-in', user: created.user, restorationId: created.joined?.restorationId } satisfies SignUpResult);
+    res.status(201).json({
+      status: 'signed-in',
+      user: created.user,
+      restorationId: created.joined?.restorationId,
+    } satisfies SignUpResult);
   });
 
   router.post('/auth/confirm-email', validate(confirm), async (req, res) => {
@@ -64,12 +71,18 @@ export function authRoutes(deps: AppDeps, passport: ReturnType<typeof createPass
     const account = email.toLowerCase();
     await throttles.signInAttempt(ip, account);
     const user = await new Promise<User | false>((resolve, reject) =>
-      passport.authenticate('local', { session: false }, (err: unknown, u: User | false) => (err ? reject(err) : resolve(u)))(req, res, next),
+      passport.authenticate('local', { session: false }, (err: unknown, u: User | false) =>
+        err ? reject(err) : resolve(u),
+      )(req, res, next),
     );
     if (!user) throw new UnauthorizedError('That e-mail and password do not match an account.');
     await throttles.signInSucceeded(ip, account);
     if (!(await auth.isConfirmed(user.id)))
-      throw new HttpError(403, 'email_unconfirmed', 'Confirm your e-mail address first: follow the link we sent you. Sign up again with the same address to get a new link.');
+      throw new HttpError(
+        403,
+        'email_unconfirmed',
+        'Confirm your e-mail address first: follow the link we sent you. Sign up again with the same address to get a new link.',
+      );
     await login(req, user, remember);
     res.json(user);
   });

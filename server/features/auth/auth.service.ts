@@ -26,21 +26,38 @@ export function authService({ db, mailer, config }: AppDeps) {
      * restoration in the same transaction: if joining fails, no account stays and the link still works.
      * The e-mail is the transaction's last step: when the mail server is down, nothing is created (503).
      */
-    async signUp<J>(input: { name: string; email: string; password: string }, join?: (tx: Tx, user: ReturnType<typeof publicUser>) => Promise<J>) {
+    async signUp<J>(
+      input: { name: string; email: string; password: string },
+      join?: (tx: Tx, user: ReturnType<typeof publicUser>) => Promise<J>,
+    ) {
       assertStrongPassword(input.password, [input.email, input.name]);
       const passwordHash = await hashPassword(input.password);
       return db.transaction(async (tx) => {
         const tokens = accountTokensRepo(tx);
         const existing = await usersRepo(tx).byEmail(input.email);
         if (existing?.emailConfirmedAt) {
-          if (join) throw new HttpError(409, 'conflict', 'This address already has an account: sign in to accept the invitation.');
-          await sendOrRollBack(mailer, alreadyRegisteredMail(existing.email, link('/sign-in'), link('/reset-password')));
+          if (join)
+            throw new HttpError(
+              409,
+              'conflict',
+              'This address already has an account: sign in to accept the invitation.',
+            );
+          await sendOrRollBack(
+            mailer,
+            alreadyRegisteredMail(existing.email, link('/sign-in'), link('/reset-password')),
+          );
           return undefined;
         }
         const choice = { passwordHash, name: input.name };
         const emailConfirmedAt = join ? new Date() : null;
         const row = existing
-          ? (await tx.update(users).set({ ...choice, emailConfirmedAt }).where(eq(users.id, existing.id)).returning())[0]!
+          ? (
+              await tx
+                .update(users)
+                .set({ ...choice, emailConfirmedAt })
+                .where(eq(users.id, existing.id))
+                .returning()
+            )[0]!
           : await usersRepo(tx).insert({ ...input, passwordHash, emailConfirmedAt });
         if (join) {
           // Links sent to earlier, unconfirmed sign-ups with this address die with the invitation's proof.
@@ -102,7 +119,8 @@ export function authService({ db, mailer, config }: AppDeps) {
         await tx.delete(sessions).where(sql`(${sessions.sess}->'passport'->>'user')::int = ${spent.userId}`);
         return spent.userId;
       });
-      if (!userId) throw new HttpError(410, 'gone', 'This reset link has expired or was already used; ask for a new one.');
+      if (!userId)
+        throw new HttpError(410, 'gone', 'This reset link has expired or was already used; ask for a new one.');
       return publicUser((await repo.byId(userId))!);
     },
   };

@@ -33,17 +33,22 @@ export function createPassport(db: Database) {
     }),
   );
   instance.serializeUser((user, done) => done(null, user.id));
-  instance.deserializeUser(async (req: IncomingMessage, id: number, done: (err: unknown, user?: Express.User | false) => void) => {
-    // The session store read the account with the session (one query); fall back to a lookup otherwise.
-    const account = ((req as IncomingMessage & { session?: unknown }).session as unknown as Record<string, SessionAccount | undefined> | undefined)?.[ACCOUNT_KEY];
-    if (account !== undefined && (account === null || account.id === id)) return done(null, account ?? false);
-    try {
-      const user = await repo.byId(id);
-      // A deleted account simply ends the session.
-      done(null, user ? publicUser(user) : false);
-    } catch (err) {
-      done(err);
-    }
-  });
+  instance.deserializeUser(
+    async (req: IncomingMessage, id: number, done: (err: unknown, user?: Express.User | false) => void) => {
+      // The session store read the account with the session (one query); fall back to a lookup otherwise.
+      const account = (
+        (req as IncomingMessage & { session?: unknown }).session as unknown as
+          Record<string, SessionAccount | undefined> | undefined
+      )?.[ACCOUNT_KEY];
+      if (account !== undefined && (account === null || account.id === id)) return done(null, account ?? false);
+      try {
+        const user = await repo.byId(id);
+        // A deleted account simply ends the session.
+        done(null, user ? publicUser(user) : false);
+      } catch (err) {
+        done(err);
+      }
+    },
+  );
   return instance;
 }

@@ -8,13 +8,19 @@ const passwordSignUpSchemaCheck = (password: string) =>
 describe('password strength', () => {
   // The patterns below are the ones zxcvbn models explicitly: repeats, sequences and keyboard walks
   // (D. Wheeler, "zxcvbn: Low-Budget Password Strength Estimation", USENIX Security 2016, section 3).
-  it.each(['aaaaaaaaaaaa', 'zzzzzzzzzzzzzzzz', '1234567890', '0987654321', 'abcdefghijkl', 'abcabcabcabc', 'qwertyuiopas', 'asdfghjkl;'])(
-    'when the password is "%s", then it scores below the floor and is refused',
-    (password) => {
-      expect(passwordScore(password)).toBeLessThan(MIN_STRENGTH_SCORE);
-      expect(() => assertStrongPassword(password)).toThrow(/too easy to guess|most common/);
-    },
-  );
+  it.each([
+    'aaaaaaaaaaaa',
+    'zzzzzzzzzzzzzzzz',
+    '1234567890',
+    '0987654321',
+    'abcdefghijkl',
+    'abcabcabcabc',
+    'qwertyuiopas',
+    'asdfghjkl;',
+  ])('when the password is "%s", then it scores below the floor and is refused', (password) => {
+    expect(passwordScore(password)).toBeLessThan(MIN_STRENGTH_SCORE);
+    expect(() => assertStrongPassword(password)).toThrow(/too easy to guess|most common/);
+  });
 
   it('when the password is on the common list, then it is named as such', () => {
     expect(isCommonPassword('Password123')).toBe(true);
@@ -23,7 +29,11 @@ describe('password strength', () => {
 
   it('when the password is a few unrelated words, then it passes', () => {
     // A passphrase of several words is the usual advice (NIST SP 800-63B, appendix A, on length over complexity).
-    for (const password of ['solder-flux-and-patience', 'grid leak and a cathode bypass', 'a long evening with the dial cord'])
+    for (const password of [
+      'solder-flux-and-patience',
+      'grid leak and a cathode bypass',
+      'a long evening with the dial cord',
+    ])
       expect(() => assertStrongPassword(password)).not.toThrow();
   });
 

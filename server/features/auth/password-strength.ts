@@ -31,10 +31,21 @@ export function passwordScore(password: string, userInputs: string[] = []): numb
 export function assertStrongPassword(password: string, userInputs: string[] = []) {
   if (isCommonPassword(password))
     throw new BadRequestError('That password is among the most common ones; choose another.', [
-      { location: 'body', path: 'password', message: `That password is among the most common ones; use ${PASSWORD_MIN}+ characters of your own.` },
+      {
+        location: 'body',
+        path: 'password',
+        message: `That password is among the most common ones; use ${PASSWORD_MIN}+ characters of your own.`,
+      },
     ]);
   if (passwordScore(password, userInputs) < MIN_STRENGTH_SCORE)
-    throw new BadRequestError('That password is too easy to guess (a repeat, a sequence or a keyboard pattern); choose another.', [
-      { location: 'body', path: 'password', message: 'Too easy to guess: avoid repeats and sequences; a few unrelated words work well.' },
-    ]);
+    throw new BadRequestError(
+      'That password is too easy to guess (a repeat, a sequence or a keyboard pattern); choose another.',
+      [
+        {
+          location: 'body',
+          path: 'password',
+          message: 'Too easy to guess: avoid repeats and sequences; a few unrelated words work well.',
+        },
+      ],
+    );
 }

@@ -25,7 +25,9 @@ type StoreInternals = { query(sql: string, params: unknown[], fn: (err: unknown,
  * it read (an UPDATE of its expiry), and this store does that only when the expiry moves by an hour or
  * more, so a session used all day still never lapses while in use.
  */
-export function accountSessionStore(options: ConstructorParameters<ReturnType<typeof connectPgSimple>>[0] & { tableName: string }) {
+export function accountSessionStore(
+  options: ConstructorParameters<ReturnType<typeof connectPgSimple>>[0] & { tableName: string },
+) {
   const PgStore = connectPgSimple(session);
   class AccountSessionStore extends PgStore {
     override get(sid: string, fn: Callback) {
@@ -46,7 +48,11 @@ export function accountSessionStore(options: ConstructorParameters<ReturnType<ty
       );
     }
     override set(sid: string, sess: session.SessionData, fn?: (err?: unknown) => void) {
-      const { [ACCOUNT_KEY]: _dropped, [STORED_EXPIRY_KEY]: _expiry, ...rest } = sess as session.SessionData & Record<string, unknown>;
+      const {
+        [ACCOUNT_KEY]: _dropped,
+        [STORED_EXPIRY_KEY]: _expiry,
+        ...rest
+      } = sess as session.SessionData & Record<string, unknown>;
       void _dropped;
       void _expiry;
       super.set(sid, rest as session.SessionData, fn);

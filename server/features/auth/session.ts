@@ -10,7 +10,12 @@ export function sessionMiddleware(pool: pg.Pool, secret: string) {
   return session({
     name: SESSION_COOKIE,
     secret,
-    store: accountSessionStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+    store: accountSessionStore({
+      pool,
+      tableName: 'sessions',
+      createTableIfMissing: false,
+      pruneSessionInterval: 15 * 60,
+    }),
     resave: false,
     saveUninitialized: false,
     rolling: false,

@@ -8,14 +8,22 @@ export type UserRow = typeof users.$inferSelect;
 export function usersRepo(db: Executor) {
   return {
     async byEmail(email: string): Promise<UserRow | undefined> {
-      const [row] = await db.select().from(users).where(sql`lower(${users.email}) = lower(${email})`);
+      const [row] = await db
+        .select()
+        .from(users)
+        .where(sql`lower(${users.email}) = lower(${email})`);
       return row;
     },
     async byId(id: number): Promise<UserRow | undefined> {
       const [row] = await db.select().from(users).where(eq(users.id, id));
       return row;
     },
-    async insert(values: { name: string; email: string; passwordHash: string; emailConfirmedAt?: Date | null }): Promise<UserRow> {
+    async insert(values: {
+      name: string;
+      email: string;
+      passwordHash: string;
+      emailConfirmedAt?: Date | null;
+    }): Promise<UserRow> {
       const [row] = await db.insert(users).values(values).returning();
       return row!;
     },

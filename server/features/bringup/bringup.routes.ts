@@ -1,5 +1,9 @@
 import { Router } from 'express';
-import { bringupStepInputSchema, intakeCheckInputSchema, prePowerCheckInputSchema } from '../../../shared/schemas/bringup';
+import {
+  bringupStepInputSchema,
+  intakeCheckInputSchema,
+  prePowerCheckInputSchema,
+} from '../../../shared/schemas/bringup';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
@@ -21,20 +25,44 @@ export function bringupRoutes({ db }: AppDeps): Router {
   router.get('/restorations/:id/bringup', requireUser, validate(one), guard(db, 'bringup.view'), async (_req, res) => {
     res.json(await service.get(input(res, one).params.id, roleOf(res)));
   });
-  router.put('/restorations/:id/bringup/intake', requireUser, validate(intake), guard(db, 'bringup.record'), async (req, res) => {
-    const { params, body } = input(res, intake);
-    res.json(await service.setIntake(params.id, body, req.user!.id, roleOf(res)));
-  });
-  router.put('/restorations/:id/bringup/pre-power', requireUser, validate(check), guard(db, 'bringup.record'), async (req, res) => {
-    const { params, body } = input(res, check);
-    res.json(await service.setPrePower(params.id, body, req.user!.id, roleOf(res)));
-  });
-  router.post('/restorations/:id/bringup/pre-power/sign-off', requireUser, validate(one), guard(db, 'bringup.signoff'), async (req, res) => {
-    res.json(await service.signOff(input(res, one).params.id, req.user!.id, roleOf(res)));
-  });
-  router.post('/restorations/:id/bringup/steps', requireUser, validate(step), guard(db, 'bringup.record'), async (req, res) => {
-    const { params, body } = input(res, step);
-    res.status(201).json(await service.addStep(params.id, body, req.user!.id, roleOf(res)));
-  });
+  router.put(
+    '/restorations/:id/bringup/intake',
+    requireUser,
+    validate(intake),
+    guard(db, 'bringup.record'),
+    async (req, res) => {
+      const { params, body } = input(res, intake);
+      res.json(await service.setIntake(params.id, body, req.user!.id, roleOf(res)));
+    },
+  );
+  router.put(
+    '/restorations/:id/bringup/pre-power',
+    requireUser,
+    validate(check),
+    guard(db, 'bringup.record'),
+    async (req, res) => {
+      const { params, body } = input(res, check);
+      res.json(await service.setPrePower(params.id, body, req.user!.id, roleOf(res)));
+    },
+  );
+  router.post(
+    '/restorations/:id/bringup/pre-power/sign-off',
+    requireUser,
+    validate(one),
+    guard(db, 'bringup.signoff'),
+    async (req, res) => {
+      res.json(await service.signOff(input(res, one).params.id, req.user!.id, roleOf(res)));
+    },
+  );
+  router.post(
+    '/restorations/:id/bringup/steps',
+    requireUser,
+    validate(step),
+    guard(db, 'bringup.record'),
+    async (req, res) => {
+      const { params, body } = input(res, step);
+      res.status(201).json(await service.addStep(params.id, body, req.user!.id, roleOf(res)));
+    },
+  );
   return router;
 }

@@ -1,29 +1,53 @@
 import { and, eq, max } from 'drizzle-orm';
-import { prePowerMissing, supplyLabels, type BringupStepValues, type IntakeCheck, type PrePowerCheck } from '../../../shared/schemas/bringup';
+import {
+  prePowerMissing,
+  supplyLabels,
+  type BringupStepValues,
+  type IntakeCheck,
+  type PrePowerCheck,
+} from '../../../shared/schemas/bringup';
 import type { Role } from '../../../shared/permissions';
 import type { Database } from '../../db/client';
 import {
-  bringupStepReadings, bringupSteps, events, findings, intakeChecks, measurements, photos, prePowerChecks, prePowerSignoffs, restorations,
+  bringupStepReadings,
+  bringupSteps,
+  events,
+  findings,
+  intakeChecks,
+  measurements,
+  photos,
+  prePowerChecks,
+  prePowerSignoffs,
+  restorations,
 } from '../../db/schema';
 import { BadRequestError, ConflictError, NotFoundError } from '../../http/errors';
 import { judge } from '../measurements/measurements.service';
 import { readBringup } from './bringup.repo';
 import { assertPrePowerSignedOff, type Db } from './power-gate';
 
-
 /** Serialises bring-up writes on one restoration, so a sign-off never races an item change. */
 async function lock(tx: Db, restorationId: number) {
-  const [r] = await tx.select({ id: restorations.id }).from(restorations).where(eq(restorations.id, restorationId)).for('update');
+  const [r] = await tx
+    .select({ id: restorations.id })
+    .from(restorations)
+    .where(eq(restorations.id, restorationId))
+    .for('update');
   if (!r) throw new NotFoundError();
 }
 
 async function assertOwn(tx: Db, restorationId: number, findingId: number | null, photoId: number | null = null) {
   if (findingId) {
-    const [f] = await tx.select({ id: findings.id }).from(findings).where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
+    const [f] = await tx
+      .select({ id: findings.id })
+      .from(findings)
+      .where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
     if (!f) throw new BadRequestError('findingId: no such finding on this restoration.');
   }
   if (photoId) {
-    const [p] = await tx.select({ id: photos.id }).from(photos).where(and(eq(photos.id, photoId), eq(photos.restorationId, restorationId)));
+    const [p] = await tx
+      .select({ id: photos.id })
+      .from(photos)
+      .where(and(eq(photos.id, photoId), eq(photos.restorationId, restorationId)));
     if (!p) throw new BadRequestError('photoId: no such photo on this restoration.');
   }
 }
@@ -40,12 +64,28 @@ export function bringupService(db: Database) {
       await db.transaction(async (tx) => {
         await lock(tx, restorationId);
         await assertOwn(tx, restorationId, input.findingId, input.photoId);
-        const [before] = await tx.select().from(intakeChecks).where(and(eq(intakeChecks.restorationId, restorationId), eq(intakeChecks.item, input.item)));
-        const values = { done: input.done, note: input.note, findingId: input.findingId, photoId: input.photoId, checkedById: userId };
-        await tx.insert(intakeChecks).values({ restorationId, item: input.item, ...values })
+        const [before] = await tx
+          .select()
+          .from(intakeChecks)
+          .where(and(eq(intakeChecks.restorationId, restorationId), eq(intakeChecks.item, input.item)));
+        const values = {
+          done: input.done,
+          note: input.note,
+          findingId: input.findingId,
+          photoId: input.photoId,
+          checkedById: userId,
+        };
+        await tx
+          .insert(intakeChecks)
+          .values({ restorationId, item: input.item, ...values })
           .onConflictDoUpdate({ target: [intakeChecks.restorationId, intakeChecks.item], set: values });
         if ((before?.done ?? false) !== input.done)
-          await tx.insert(events).values({ restorationId, kind: 'intake-checked', actorId: userId, data: { item: input.item, done: input.done } });
+          await tx.insert(events).values({
+            restorationId,
+            kind: 'intake-checked',
+            actorId: userId,
+            data: { item: input.item, done: input.done },
+          });
       });
       return readBringup(db, restorationId, role);
     },
@@ -54,16 +94,32 @@ export function bringupService(db: Database) {
     async setPrePower(restorationId: number, input: PrePowerCheck, userId: number, role: Role) {
       await db.transaction(async (tx) => {
         await lock(tx, restorationId);
-        const [before] = await tx.select().from(prePowerChecks).where(and(eq(prePowerChecks.restorationId, restorationId), eq(prePowerChecks.item, input.item)));
+        const [before] = await tx
+          .select()
+          .from(prePowerChecks)
+          .where(and(eq(prePowerChecks.restorationId, restorationId), eq(prePowerChecks.item, input.item)));
         const reason = input.status === 'done' || input.status === null ? '' : input.reason;
         if (before && before.status === input.status && before.reason === reason) return;
         if (!before && input.status === null) return;
         const values = { status: input.status, reason, checkedById: userId };
-        await tx.insert(prePowerChecks).values({ restorationId, item: input.item, ...values })
+        await tx
+          .insert(prePowerChecks)
+          .values({ restorationId, item: input.item, ...values })
           .onConflictDoUpdate({ target: [prePowerChecks.restorationId, prePowerChecks.item], set: values });
-        await tx.insert(events).values({ restorationId, kind: 'pre-power-set', actorId: userId, data: { item: input.item, status: input.status, reason } });
-        const voided = await tx.delete(prePowerSignoffs).where(eq(prePowerSignoffs.restorationId, restorationId)).returning({ id: prePowerSignoffs.id });
-        if (voided.length) await tx.insert(events).values({ restorationId, kind: 'pre-power-voided', actorId: userId, data: { item: input.item } });
+        await tx.insert(events).values({
+          restorationId,
+          kind: 'pre-power-set',
+          actorId: userId,
+          data: { item: input.item, status: input.status, reason },
+        });
+        const voided = await tx
+          .delete(prePowerSignoffs)
+          .where(eq(prePowerSignoffs.restorationId, restorationId))
+          .returning({ id: prePowerSignoffs.id });
+        if (voided.length)
+          await tx
+            .insert(events)
+            .values({ restorationId, kind: 'pre-power-voided', actorId: userId, data: { item: input.item } });
       });
       return readBringup(db, restorationId, role);
     },
@@ -71,11 +127,18 @@ export function bringupService(db: Database) {
     async signOff(restorationId: number, userId: number, role: Role) {
       await db.transaction(async (tx) => {
         await lock(tx, restorationId);
-        const [already] = await tx.select({ id: prePowerSignoffs.id }).from(prePowerSignoffs).where(eq(prePowerSignoffs.restorationId, restorationId));
+        const [already] = await tx
+          .select({ id: prePowerSignoffs.id })
+          .from(prePowerSignoffs)
+          .where(eq(prePowerSignoffs.restorationId, restorationId));
         if (already) return;
         const items = await tx.select().from(prePowerChecks).where(eq(prePowerChecks.restorationId, restorationId));
         const missing = prePowerMissing(items);
-        if (missing.length) throw new ConflictError(`The pre-power checklist is not complete: ${missing.join('; ')}.`, { gate: 'pre-power', missing });
+        if (missing.length)
+          throw new ConflictError(`The pre-power checklist is not complete: ${missing.join('; ')}.`, {
+            gate: 'pre-power',
+            missing,
+          });
         await tx.insert(prePowerSignoffs).values({ restorationId, signedById: userId });
         const waived = items.filter((i) => i.status === 'waived').map((i) => ({ item: i.item, reason: i.reason }));
         await tx.insert(events).values({ restorationId, kind: 'pre-power-signed', actorId: userId, data: { waived } });
@@ -88,29 +151,69 @@ export function bringupService(db: Database) {
       const usesLamp = input.supply === 'series-lamp' || input.supply === 'lamp-and-variable-transformer';
       if (usesLamp && (input.lampWatts === null || input.lampVolts === null))
         throw new BadRequestError('lampWatts: give the series lamp\u2019s rating in watts and volts.');
-      if (!usesLamp && input.lampBehaviour !== 'no-lamp') throw new BadRequestError('lampBehaviour: no series lamp is in circuit at this step.');
+      if (!usesLamp && input.lampBehaviour !== 'no-lamp')
+        throw new BadRequestError('lampBehaviour: no series lamp is in circuit at this step.');
       await db.transaction(async (tx) => {
         await lock(tx, restorationId);
         await assertPrePowerSignedOff(tx, restorationId, 'logging a power-up step');
         await assertOwn(tx, restorationId, input.findingId);
-        const [last] = await tx.select({ n: max(bringupSteps.number) }).from(bringupSteps).where(eq(bringupSteps.restorationId, restorationId));
+        const [last] = await tx
+          .select({ n: max(bringupSteps.number) })
+          .from(bringupSteps)
+          .where(eq(bringupSteps.restorationId, restorationId));
         const number = (last?.n ?? 0) + 1;
         const { readings, ...fields } = input;
-        const [step] = await tx.insert(bringupSteps).values({ restorationId, number, ...fields, takenById: userId }).returning({ id: bringupSteps.id });
-        const conditions = [`Power-up step ${number}: ${supplyLabels[input.supply].toLowerCase()}`, usesLamp && `${unit(input.lampWatts, 'W')} lamp`, input.appliedVolts !== null && `${unit(input.appliedVolts, 'V')} applied`]
-          .filter(Boolean).join(', ');
+        const [step] = await tx
+          .insert(bringupSteps)
+          .values({ restorationId, number, ...fields, takenById: userId })
+          .returning({ id: bringupSteps.id });
+        const conditions = [
+          `Power-up step ${number}: ${supplyLabels[input.supply].toLowerCase()}`,
+          usesLamp && `${unit(input.lampWatts, 'W')} lamp`,
+          input.appliedVolts !== null && `${unit(input.appliedVolts, 'V')} applied`,
+        ]
+          .filter(Boolean)
+          .join(', ');
         for (const r of readings) {
           const verdict = judge({ ...r, rating: '' });
-          const [m] = await tx.insert(measurements).values({
-            restorationId, location: r.location, quantity: r.quantity, expectedText: r.expected, toleranceText: r.tolerance, readingText: r.reading,
-            conditions, method: '', findingId: input.findingId, powerOn: true, measuredById: userId, ...verdict,
-          }).returning({ id: measurements.id });
+          const [m] = await tx
+            .insert(measurements)
+            .values({
+              restorationId,
+              location: r.location,
+              quantity: r.quantity,
+              expectedText: r.expected,
+              toleranceText: r.tolerance,
+              readingText: r.reading,
+              conditions,
+              method: '',
+              findingId: input.findingId,
+              powerOn: true,
+              measuredById: userId,
+              ...verdict,
+            })
+            .returning({ id: measurements.id });
           await tx.insert(bringupStepReadings).values({ stepId: step!.id, measurementId: m!.id });
-          if (verdict.verdict === 'out') await tx.insert(events).values({ restorationId, kind: 'measurement-out', actorId: userId, measurementId: m!.id, findingId: input.findingId });
+          if (verdict.verdict === 'out')
+            await tx.insert(events).values({
+              restorationId,
+              kind: 'measurement-out',
+              actorId: userId,
+              measurementId: m!.id,
+              findingId: input.findingId,
+            });
         }
         await tx.insert(events).values({
-          restorationId, kind: 'bringup-step', actorId: userId,
-          data: { number, supply: input.supply, lampWatts: input.lampWatts, lampBehaviour: input.lampBehaviour, decision: input.decision },
+          restorationId,
+          kind: 'bringup-step',
+          actorId: userId,
+          data: {
+            number,
+            supply: input.supply,
+            lampWatts: input.lampWatts,
+            lampBehaviour: input.lampBehaviour,
+            decision: input.decision,
+          },
         });
       });
       return readBringup(db, restorationId, role);

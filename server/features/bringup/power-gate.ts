@@ -8,7 +8,10 @@ import { ConflictError } from '../../http/errors';
 export type Db = Database | Parameters<Parameters<Database['transaction']>[0]>[0];
 
 export async function prePowerSignedOff(db: Db, restorationId: number): Promise<boolean> {
-  const [row] = await db.select({ id: prePowerSignoffs.id }).from(prePowerSignoffs).where(eq(prePowerSignoffs.restorationId, restorationId));
+  const [row] = await db
+    .select({ id: prePowerSignoffs.id })
+    .from(prePowerSignoffs)
+    .where(eq(prePowerSignoffs.restorationId, restorationId));
   return row !== undefined;
 }
 
@@ -18,8 +21,10 @@ export async function prePowerSignedOff(db: Db, restorationId: number): Promise<
  */
 export async function assertPrePowerSignedOff(db: Db, restorationId: number, doing: string): Promise<void> {
   if (await prePowerSignedOff(db, restorationId)) return;
-  const items = await db.select({ item: prePowerChecks.item, status: prePowerChecks.status, reason: prePowerChecks.reason })
-    .from(prePowerChecks).where(eq(prePowerChecks.restorationId, restorationId));
+  const items = await db
+    .select({ item: prePowerChecks.item, status: prePowerChecks.status, reason: prePowerChecks.reason })
+    .from(prePowerChecks)
+    .where(eq(prePowerChecks.restorationId, restorationId));
   const missing = prePowerMissing(items);
   throw new ConflictError(
     `Sign off the pre-power checklist before ${doing}. On the Bring-up tab, a technician marks each item done, not applicable or waived (with a reason), then signs the checklist off.`,

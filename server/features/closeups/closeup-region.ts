@@ -4,9 +4,19 @@ import type { NormalisedPoint, Shape } from '../../../shared/schemas/findings';
  * The pixel region of an upright image that shows a finding with some context around it: the
  * shape's bounds (a circle's full disc; a pin gets a square) widened by half, at least `minPx` across.
  */
-export function closeupRegion(shape: Shape, points: NormalisedPoint[], image: { width: number; height: number }, minPx = 320) {
+export function closeupRegion(
+  shape: Shape,
+  points: NormalisedPoint[],
+  image: { width: number; height: number },
+  minPx = 320,
+) {
   const px = points.map((p) => ({ x: p.x * image.width, y: p.y * image.height }));
-  let [x0, y0, x1, y1] = [Math.min(...px.map((p) => p.x)), Math.min(...px.map((p) => p.y)), Math.max(...px.map((p) => p.x)), Math.max(...px.map((p) => p.y))];
+  let [x0, y0, x1, y1] = [
+    Math.min(...px.map((p) => p.x)),
+    Math.min(...px.map((p) => p.y)),
+    Math.max(...px.map((p) => p.x)),
+    Math.max(...px.map((p) => p.y)),
+  ];
   if (shape === 'circle') {
     const r = Math.hypot(px[1]!.x - px[0]!.x, px[1]!.y - px[0]!.y);
     [x0, y0, x1, y1] = [px[0]!.x - r, px[0]!.y - r, px[0]!.x + r, px[0]!.y + r];

@@ -22,7 +22,10 @@ export type CloseupDeps = Pick<AppDeps, 'db' | 'storage'> & { config: Pick<AppDe
 
 /** Cached per finding and geometry: moving the mark makes a new key, the old one is swept with its photo. */
 export function closeupKey(photo: PhotoLike, finding: FindingLike): string {
-  const hash = createHash('sha256').update(JSON.stringify([finding.shape, finding.points])).digest('hex').slice(0, 12);
+  const hash = createHash('sha256')
+    .update(JSON.stringify([finding.shape, finding.points]))
+    .digest('hex')
+    .slice(0, 12);
   return `photos/${photo.storageKey}/closeups/${finding.id}-${hash}.webp`;
 }
 
@@ -43,7 +46,12 @@ export function ensureCloseup(deps: CloseupDeps, photo: PhotoLike, finding: Find
   return job;
 }
 
-async function generate({ db, storage, config }: CloseupDeps, key: string, photo: PhotoLike, finding: FindingLike): Promise<string> {
+async function generate(
+  { db, storage, config }: CloseupDeps,
+  key: string,
+  photo: PhotoLike,
+  finding: FindingLike,
+): Promise<string> {
   if (await storage.exists(key)) return key;
   // The decode slot first, then the lock: at most two transactions per instance wait on storage and sharp,
   // so a report with many close-ups cannot hold the whole connection pool.
@@ -66,8 +74,14 @@ async function generate({ db, storage, config }: CloseupDeps, key: string, photo
 }
 
 /** Cuts the close-up in the background once a finding is placed or moved, so the first view does not wait. */
-export function scheduleCloseup(deps: CloseupDeps & Pick<AppDeps, 'logger'>, photo: PhotoLike, finding: FindingLike): void {
+export function scheduleCloseup(
+  deps: CloseupDeps & Pick<AppDeps, 'logger'>,
+  photo: PhotoLike,
+  finding: FindingLike,
+): void {
   setImmediate(() => {
-    ensureCloseup(deps, photo, finding).catch((err: unknown) => deps.logger.warn({ err: redactedError(err) }, `close-up for finding ${finding.id} failed`));
+    ensureCloseup(deps, photo, finding).catch((err: unknown) =>
+      deps.logger.warn({ err: redactedError(err) }, `close-up for finding ${finding.id} failed`),
+    );
   });
 }

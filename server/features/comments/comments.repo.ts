@@ -8,14 +8,22 @@ import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 export type CommentRow = typeof comments.$inferSelect & { authorName: string | null };
 
 /** A thread oldest first (then by id). */
-export const commentOrder = keyset('asc', [{ by: toMs(comments.createdAt), kind: 'instant' }, { by: comments.id, kind: 'number' }]);
+export const commentOrder = keyset('asc', [
+  { by: toMs(comments.createdAt), kind: 'instant' },
+  { by: comments.id, kind: 'number' },
+]);
 
 export function commentsRepo(db: Executor) {
-  const select = () => db.select({ c: comments, authorName: users.name }).from(comments).leftJoin(users, eq(users.id, comments.authorId));
+  const select = () =>
+    db.select({ c: comments, authorName: users.name }).from(comments).leftJoin(users, eq(users.id, comments.authorId));
   return {
     /** The thread as this role may read it (owners: the shared comments of a finding they may see). */
     async list(findingId: number, role: Role, window?: PageWindow): Promise<CommentRow[]> {
-      const visible = visibleSql(role, 'comment', { comment: columnsOf(comments), finding: columnsOf(findings), photo: columnsOf(photos) });
+      const visible = visibleSql(role, 'comment', {
+        comment: columnsOf(comments),
+        finding: columnsOf(findings),
+        photo: columnsOf(photos),
+      });
       const query = select()
         .innerJoin(findings, eq(findings.id, comments.findingId))
         .innerJoin(photos, eq(photos.id, findings.photoId))
@@ -39,10 +47,16 @@ export function commentsRepo(db: Executor) {
       return r && { ...r.c, authorName: r.authorName };
     },
     async update(id: number, values: Partial<typeof comments.$inferInsert>) {
-      await db.update(comments).set(values).where(and(eq(comments.id, id), isNull(comments.deletedAt)));
+      await db
+        .update(comments)
+        .set(values)
+        .where(and(eq(comments.id, id), isNull(comments.deletedAt)));
     },
     async participants(findingId: number): Promise<number[]> {
-      const rows = await db.selectDistinct({ id: comments.authorId }).from(comments).where(and(eq(comments.findingId, findingId), isNull(comments.deletedAt)));
+      const rows = await db
+        .selectDistinct({ id: comments.authorId })
+        .from(comments)
+        .where(and(eq(comments.findingId, findingId), isNull(comments.deletedAt)));
       return rows.map((r) => r.id).filter((id): id is number => id !== null);
     },
   };

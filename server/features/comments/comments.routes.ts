@@ -19,7 +19,8 @@ const create = { params: idParamsSchema, body: commentInputSchema };
 function idempotencyKey(req: Request): string | undefined {
   const key = req.get('Idempotency-Key');
   if (key === undefined) return undefined;
-  if (!/^[\x21-\x7e]{1,128}$/.test(key)) throw new BadRequestError('Idempotency-Key: use 1 to 128 printable characters, such as a UUID.');
+  if (!/^[\x21-\x7e]{1,128}$/.test(key))
+    throw new BadRequestError('Idempotency-Key: use 1 to 128 printable characters, such as a UUID.');
   return key;
 }
 const edit = { params: idParamsSchema, body: commentPatchSchema };
@@ -31,27 +32,63 @@ export function commentsRoutes(deps: AppDeps): Router {
   // The finding's restoration and the reader's role in one query.
   const ofFinding = (req: Request, res: Response) => findings.accessOf(input(res, one).params.id, req.user!.id);
   // The finding commented on: who may not see it gets a 404; owners comment only on what is shared with them.
-  const ofFindingToComment = (req: Request, res: Response) => findings.subjectOf(input(res, one).params.id, req.user!.id);
-  const ofComment = (denied: string) => (req: Request, res: Response) => service.subjectOf(input(res, one).params.id, req.user!.id, denied);
+  const ofFindingToComment = (req: Request, res: Response) =>
+    findings.subjectOf(input(res, one).params.id, req.user!.id);
+  const ofComment = (denied: string) => (req: Request, res: Response) =>
+    service.subjectOf(input(res, one).params.id, req.user!.id, denied);
   const router = Router();
 
   // Oldest first, in pages (see shared/schemas/pagination.ts).
-  router.get('/findings/:id/comments', requireUser, validate(paged), guard(db, 'restoration.view', ofFinding), async (req, res) => {
-    const { params, query } = input(res, paged);
-    const rows = await service.list(params.id, roleOf(res), { limit: query.limit + 1, cursor: decodeCursor(query.cursor, commentOrder.kinds) });
-    await sendPage(req, res, rows, query.limit, (c) => [c.createdAt, c.id], (page) => page);
-  });
-  router.post('/findings/:id/comments', requireUser, validate(create), guard(db, 'comments.create', ofFindingToComment), async (req, res) => {
-    const { params, body } = input(res, create);
-    res.status(201).json(await service.create(params.id, body, actorOf(req, res), idempotencyKey(req)));
-  });
-  router.patch('/comments/:id', requireUser, validate(edit), guard(db, 'comments.edit', ofComment('Only the author edits a comment.')), async (req, res) => {
-    const { params, body } = input(res, edit);
-    res.json(await service.edit(params.id, body.body, actorOf(req, res)));
-  });
-  router.delete('/comments/:id', requireUser, validate(one), guard(db, 'comments.delete', ofComment('Only the author or a technician deletes a comment.')), async (req, res) => {
-    await service.remove(input(res, one).params.id, actorOf(req, res));
-    res.status(204).end();
-  });
+  router.get(
+    '/findings/:id/comments',
+    requireUser,
+    validate(paged),
+    guard(db, 'restoration.view', ofFinding),
+    async (req, res) => {
+      const { params, query } = input(res, paged);
+      const rows = await service.list(params.id, roleOf(res), {
+        limit: query.limit + 1,
+        cursor: decodeCursor(query.cursor, commentOrder.kinds),
+      });
+      await sendPage(
+        req,
+        res,
+        rows,
+        query.limit,
+        (c) => [c.createdAt, c.id],
+        (page) => page,
+      );
+    },
+  );
+  router.post(
+    '/findings/:id/comments',
+    requireUser,
+    validate(create),
+    guard(db, 'comments.create', ofFindingToComment),
+    async (req, res) => {
+      const { params, body } = input(res, create);
+      res.status(201).json(await service.create(params.id, body, actorOf(req, res), idempotencyKey(req)));
+    },
+  );
+  router.patch(
+    '/comments/:id',
+    requireUser,
+    validate(edit),
+    guard(db, 'comments.edit', ofComment('Only the author edits a comment.')),
+    async (req, res) => {
+      const { params, body } = input(res, edit);
+      res.json(await service.edit(params.id, body.body, actorOf(req, res)));
+    },
+  );
+  router.delete(
+    '/comments/:id',
+    requireUser,
+    validate(one),
+    guard(db, 'comments.delete', ofComment('Only the author or a technician deletes a comment.')),
+    async (req, res) => {
+      await service.remove(input(res, one).params.id, actorOf(req, res));
+      res.status(204).end();
+    },
+  );
   return router;
 }

@@ -14,15 +14,24 @@ import { findMentions } from './mentions';
 type Actor = { id: number; name: string; role: Role };
 
 const toComment = (c: CommentRow): Comment => ({
-  id: c.id, findingId: c.findingId, body: c.deletedAt ? '' : c.body, internal: c.internal, authorId: c.authorId,
-  authorName: c.authorName, mentions: c.deletedAt ? [] : c.mentions, createdAt: c.createdAt.toISOString(),
-  editedAt: c.editedAt?.toISOString() ?? null, deletedAt: c.deletedAt?.toISOString() ?? null,
+  id: c.id,
+  findingId: c.findingId,
+  body: c.deletedAt ? '' : c.body,
+  internal: c.internal,
+  authorId: c.authorId,
+  authorName: c.authorName,
+  mentions: c.deletedAt ? [] : c.mentions,
+  createdAt: c.createdAt.toISOString(),
+  editedAt: c.editedAt?.toISOString() ?? null,
+  deletedAt: c.deletedAt?.toISOString() ?? null,
 });
 
 /** The comment stored under a reused idempotency key must be the one this request would have written. */
 function sameRequest(stored: CommentRow | undefined | '', findingId: number, body: string): CommentRow {
   if (!stored || stored.findingId !== findingId || stored.body !== body || stored.deletedAt)
-    throw new ConflictError('This Idempotency-Key was already used for another comment; send a new key for a new comment.');
+    throw new ConflictError(
+      'This Idempotency-Key was already used for another comment; send a new key for a new comment.',
+    );
   return stored;
 }
 
@@ -37,7 +46,8 @@ export function commentsService(deps: AppDeps) {
     const c = await repo.find(id);
     if (!c || c.deletedAt) throw new NotFoundError();
     const f = await findings.visible(c.findingId, actor.role);
-    if (!mayView(actor.role, 'comment', { comment: c, finding: f, photo: { ownerVisible: f.photoOwnerVisible } })) throw new NotFoundError();
+    if (!mayView(actor.role, 'comment', { comment: c, finding: f, photo: { ownerVisible: f.photoOwnerVisible } }))
+      throw new NotFoundError();
     return c;
   }
 
@@ -50,10 +60,14 @@ export function commentsService(deps: AppDeps) {
       const c = await repo.find(commentId);
       const restorationId = c && (await findings.restorationOf(c.findingId));
       if (!c || restorationId === undefined) return undefined;
-      const view = (role: Role) => own(commentId, { id: userId, name: '', role }).then(() => true, (err: unknown) => {
-        if (err instanceof NotFoundError) return false;
-        throw err;
-      });
+      const view = (role: Role) =>
+        own(commentId, { id: userId, name: '', role }).then(
+          () => true,
+          (err: unknown) => {
+            if (err instanceof NotFoundError) return false;
+            throw err;
+          },
+        );
       return { restorationId, subject: { view, context: { isAuthor: c.authorId === userId }, denied } };
     },
     /** One page of the thread this role may read (`limit + 1` comments read, for the page helper to cut). */
@@ -67,11 +81,21 @@ export function commentsService(deps: AppDeps) {
       // An owner's comment is always in the shared thread.
       const internal = input.internal && can(actor.role, 'comments.internal');
       const people = await members.list(f.restorationId);
-      const mentions = findMentions(input.body, people.map((p) => ({ userId: p.userId, name: p.name })));
+      const mentions = findMentions(
+        input.body,
+        people.map((p) => ({ userId: p.userId, name: p.name })),
+      );
       const created = await unitOfWork(deps.db, async (tx, afterCommit) => {
         const inTx = commentsRepo(tx);
         const participants = await inTx.participants(findingId);
-        const id = await inTx.insert({ findingId, authorId: actor.id, body: input.body, internal, mentions, idempotencyKey: key ?? null });
+        const id = await inTx.insert({
+          findingId,
+          authorId: actor.id,
+          body: input.body,
+          internal,
+          mentions,
+          idempotencyKey: key ?? null,
+        });
         // A retry of a post already stored: answer as the first time, notify nobody again.
         if (id === undefined) return sameRequest(key && (await inTx.findByKey(actor.id, key)), findingId, input.body);
         const row = (await inTx.find(id))!;

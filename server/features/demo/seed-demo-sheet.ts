@@ -25,16 +25,18 @@ const SYMBOLS: Symbol[] = [
 ];
 
 function symbolSvg(s: Symbol): string {
-  const body = s.kind === 'R'
-    ? `<rect x="${s.x - 18}" y="${s.y - 60}" width="36" height="120" fill="none" stroke="#111" stroke-width="3"/>`
-    : `<path d="M${s.x - 10} ${s.y - 45} V${s.y + 45} M${s.x + 10} ${s.y - 45} V${s.y + 45}" stroke="#111" stroke-width="4"/>`;
+  const body =
+    s.kind === 'R'
+      ? `<rect x="${s.x - 18}" y="${s.y - 60}" width="36" height="120" fill="none" stroke="#111" stroke-width="3"/>`
+      : `<path d="M${s.x - 10} ${s.y - 45} V${s.y + 45} M${s.x + 10} ${s.y - 45} V${s.y + 45}" stroke="#111" stroke-width="4"/>`;
   return `${body}<text x="${s.x + 40}" y="${s.y - 8}" font-family="sans-serif" font-size="30" fill="#111">${s.ref}</text>
     <text x="${s.x + 40}" y="${s.y + 26}" font-family="sans-serif" font-size="22" fill="#111">${s.value}</text>`;
 }
 
 /** A circuit diagram page drawn in code, thin lines and small print like a scanned sheet. */
 function diagramSvg(): string {
-  const wires = 'M300 600 H890 M910 600 H1450 M1200 600 V840 M1200 960 V1400 M1650 1000 V1090 M1650 1210 V1400 M200 1400 H2200';
+  const wires =
+    'M300 600 H890 M910 600 H1450 M1200 600 V840 M1200 960 V1400 M1650 1000 V1090 M1650 1210 V1400 M200 1400 H2200';
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}"><rect width="${W}" height="${H}" fill="#fbfaf5"/>
     <path d="${wires}" stroke="#111" stroke-width="3" fill="none"/>
     <circle cx="1600" cy="700" r="170" fill="none" stroke="#111" stroke-width="3"/>
@@ -60,9 +62,16 @@ function layoutSvg(): string {
 /** The demo set's service sheet (a diagram and a layout page) with C27, R28 and R29 marked on it and on the underside photo. Runs once. */
 export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
   const { db } = deps;
-  const [set] = await db.select().from(restorations).where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
+  const [set] = await db
+    .select()
+    .from(restorations)
+    .where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
   if (!set) return;
-  if ((await db.select({ id: sheetPages.id }).from(sheetPages).where(eq(sheetPages.restorationId, set.id)).limit(1)).length) return;
+  if (
+    (await db.select({ id: sheetPages.id }).from(sheetPages).where(eq(sheetPages.restorationId, set.id)).limit(1))
+      .length
+  )
+    return;
   const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
   if (!tech) return;
   const service = sheetsService(deps);
@@ -76,28 +85,69 @@ export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
     const file = path.join(os.tmpdir(), `gridleak-demo-sheet-${randomUUID()}.png`);
     await writeFile(file, bytes);
     try {
-      const sheet = await service.ingest(set.id, { path: file, size: bytes.length, mimeType: 'image/png' }, { kind, title }, tech.id, 'technician');
+      const sheet = await service.ingest(
+        set.id,
+        { path: file, size: bytes.length, mimeType: 'image/png' },
+        { kind, title },
+        tech.id,
+        'technician',
+      );
       ids.push(sheet.pages[0]!.id);
     } finally {
       await rm(file, { force: true });
     }
   }
-  const [underside] = await db.select({ id: photos.id }).from(photos)
+  const [underside] = await db
+    .select({ id: photos.id })
+    .from(photos)
     .where(and(eq(photos.restorationId, set.id), eq(photos.view, 'underside'), eq(photos.phase, 'before')));
   const spots = chassisLandmarks('underside');
   await db.transaction(async (tx) => {
     const repo = referencesRepo(tx);
     for (const s of SYMBOLS) {
-      await repo.insertMark({ restorationId: set.id, sheetPageId: ids[0]!, ref: s.ref, shape: 'pin', points: [{ x: s.x / W, y: s.y / H }], createdById: tech.id });
+      await repo.insertMark({
+        restorationId: set.id,
+        sheetPageId: ids[0]!,
+        ref: s.ref,
+        shape: 'pin',
+        points: [{ x: s.x / W, y: s.y / H }],
+        createdById: tech.id,
+      });
       const at = spots[s.ref]!;
-      await repo.insertMark({ restorationId: set.id, sheetPageId: ids[1]!, ref: s.ref, shape: 'pin', points: [{ x: at.x, y: at.y }], createdById: tech.id });
-      if (underside) await repo.insertMark({ restorationId: set.id, photoId: underside.id, ref: s.ref, shape: 'pin', points: [{ x: at.x, y: at.y }], createdById: tech.id });
+      await repo.insertMark({
+        restorationId: set.id,
+        sheetPageId: ids[1]!,
+        ref: s.ref,
+        shape: 'pin',
+        points: [{ x: at.x, y: at.y }],
+        createdById: tech.id,
+      });
+      if (underside)
+        await repo.insertMark({
+          restorationId: set.id,
+          photoId: underside.id,
+          ref: s.ref,
+          shape: 'pin',
+          points: [{ x: at.x, y: at.y }],
+          createdById: tech.id,
+        });
     }
     // The set as built differs from its sheet in one place, noted against the reference.
     const note = await mismatchesRepo(tx).insert({
-      restorationId: set.id, ref: 'R29', kind: 'value-differs', diagramSays: '150Ω 1W', chassisHas: '180Ω 1W, original factory joints',
-      note: 'Both Meridian 54 chassis on the Cobbold Lane bench carry 180Ω here; treat it as a production change, not a repair.', createdById: tech.id,
+      restorationId: set.id,
+      ref: 'R29',
+      kind: 'value-differs',
+      diagramSays: '150Ω 1W',
+      chassisHas: '180Ω 1W, original factory joints',
+      note: 'Both Meridian 54 chassis on the Cobbold Lane bench carry 180Ω here; treat it as a production change, not a repair.',
+      createdById: tech.id,
     });
-    await recordEvent(tx, { restorationId: set.id, kind: 'mismatch-noted', actorId: tech.id, mismatchNoteId: note.id, data: { ref: 'R29' } });
+    await recordEvent(tx, {
+      restorationId: set.id,
+      kind: 'mismatch-noted',
+      actorId: tech.id,
+      mismatchNoteId: note.id,
+      data: { ref: 'R29' },
+    });
   });
 }

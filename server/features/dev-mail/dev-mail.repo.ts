@@ -9,7 +9,14 @@ export function devMailRepo(db: Executor) {
     /** The newest `limit` messages first. */
     async newest(limit: number): Promise<CapturedMail[]> {
       const rows = await db.select().from(devMails).orderBy(desc(devMails.id)).limit(limit);
-      return rows.map((m) => ({ to: m.to, from: m.from, subject: m.subject, text: m.text, html: m.html, date: m.receivedAt.toISOString() }));
+      return rows.map((m) => ({
+        to: m.to,
+        from: m.from,
+        subject: m.subject,
+        text: m.text,
+        html: m.html,
+        date: m.receivedAt.toISOString(),
+      }));
     },
   };
 }

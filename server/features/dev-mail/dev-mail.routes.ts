@@ -14,11 +14,17 @@ const list = { query: devMailQuerySchema };
  */
 export function devMailRoutes(deps: AppDeps): Router {
   const router = Router();
-  router.get('/dev/mail', (req, _res, next) => {
-    if (!isLoopbackRequest(req)) throw new NotFoundError('Captured mail is readable only on the machine running Gridleak.');
-    next();
-  }, validate(list), async (_req, res) => {
-    res.json(await devMailRepo(deps.db).newest(input(res, list).query.limit));
-  });
+  router.get(
+    '/dev/mail',
+    (req, _res, next) => {
+      if (!isLoopbackRequest(req))
+        throw new NotFoundError('Captured mail is readable only on the machine running Gridleak.');
+      next();
+    },
+    validate(list),
+    async (_req, res) => {
+      res.json(await devMailRepo(deps.db).newest(input(res, list).query.limit));
+    },
+  );
   return router;
 }

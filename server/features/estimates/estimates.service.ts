@@ -13,14 +13,23 @@ import { listEstimates, pricedBounds } from './estimates.repo';
 type Deps = Pick<AppDeps, 'db' | 'mailer' | 'config'>;
 
 async function lockRestoration(tx: Tx, restorationId: number) {
-  const [r] = await tx.select({ id: restorations.id }).from(restorations).where(eq(restorations.id, restorationId)).for('update');
+  const [r] = await tx
+    .select({ id: restorations.id })
+    .from(restorations)
+    .where(eq(restorations.id, restorationId))
+    .for('update');
   if (!r) throw new NotFoundError();
 }
 
 /** Marks an estimate sent, records the history line and e-mails the owner, all in the caller's transaction. */
 async function sendIn(tx: Tx, deps: Deps, e: typeof estimates.$inferSelect, userId: number) {
   await tx.update(estimates).set({ sent: true, sentAt: new Date() }).where(eq(estimates.id, e.id));
-  await tx.insert(events).values({ restorationId: e.restorationId, kind: 'estimate-sent', actorId: userId, data: { estimateId: e.id, version: e.version } });
+  await tx.insert(events).values({
+    restorationId: e.restorationId,
+    kind: 'estimate-sent',
+    actorId: userId,
+    data: { estimateId: e.id, version: e.version },
+  });
   await mailEstimate(tx, deps.mailer, deps.config.publicOrigin, e);
 }
 
@@ -31,7 +40,10 @@ export function estimatesService(deps: Deps) {
     list: (restorationId: number, role: Role) => listEstimates(db, restorationId, role),
 
     async restorationOf(estimateId: number) {
-      const [row] = await db.select({ restorationId: estimates.restorationId }).from(estimates).where(eq(estimates.id, estimateId));
+      const [row] = await db
+        .select({ restorationId: estimates.restorationId })
+        .from(estimates)
+        .where(eq(estimates.id, estimateId));
       return row?.restorationId;
     },
 
@@ -40,19 +52,42 @@ export function estimatesService(deps: Deps) {
       const id = await db.transaction(async (tx) => {
         await lockRestoration(tx, restorationId);
         const settings = await readWorkshopSettings(tx);
-        const [{ latest } = { latest: 0 }] = await tx.select({ latest: max(estimates.version) }).from(estimates).where(eq(estimates.restorationId, restorationId));
+        const [{ latest } = { latest: 0 }] = await tx
+          .select({ latest: max(estimates.version) })
+          .from(estimates)
+          .where(eq(estimates.restorationId, restorationId));
         const prices = { labourRate: settings.labourRate, partsMarkupBasisPoints: settings.partsMarkupBasisPoints };
         const stored = input.lines.map((l, position) => ({
-          position, kind: l.kind, description: l.description, extra: l.kind === 'extra' ? l.extra : null,
-          minutesLow: l.kind === 'labour' ? l.low : null, minutesHigh: l.kind === 'labour' ? l.high : null,
-          amountLow: l.kind === 'labour' ? null : l.low, amountHigh: l.kind === 'labour' ? null : l.high,
+          position,
+          kind: l.kind,
+          description: l.description,
+          extra: l.kind === 'extra' ? l.extra : null,
+          minutesLow: l.kind === 'labour' ? l.low : null,
+          minutesHigh: l.kind === 'labour' ? l.high : null,
+          amountLow: l.kind === 'labour' ? null : l.low,
+          amountHigh: l.kind === 'labour' ? null : l.high,
         }));
-        const range = estimateRange(stored.map((l) => pricedBounds(l, prices)), settings.currency, taxRuleOf(settings));
-        const [row] = await tx.insert(estimates).values({
-          restorationId, version: (latest ?? 0) + 1, note: input.note, currency: settings.currency, ...prices,
-          taxName: settings.taxName, taxRateBasisPoints: settings.taxRateBasisPoints, taxRounding: settings.taxRounding,
-          lowAmount: range.low.amount, highAmount: range.high.amount, createdById: userId,
-        }).returning();
+        const range = estimateRange(
+          stored.map((l) => pricedBounds(l, prices)),
+          settings.currency,
+          taxRuleOf(settings),
+        );
+        const [row] = await tx
+          .insert(estimates)
+          .values({
+            restorationId,
+            version: (latest ?? 0) + 1,
+            note: input.note,
+            currency: settings.currency,
+            ...prices,
+            taxName: settings.taxName,
+            taxRateBasisPoints: settings.taxRateBasisPoints,
+            taxRounding: settings.taxRounding,
+            lowAmount: range.low.amount,
+            highAmount: range.high.amount,
+            createdById: userId,
+          })
+          .returning();
         await tx.insert(estimateLines).values(stored.map((l) => ({ ...l, estimateId: row!.id })));
         if (input.send) await sendIn(tx, deps, row!, userId);
         return row!.id;
@@ -76,18 +111,40 @@ export function estimatesService(deps: Deps) {
      * The owner's answer, recorded with the name they typed, when, and the version they read. Only the latest
      * sent version can be answered, once.
      */
-    async decide(estimateId: number, input: { decision: 'approved' | 'declined'; name: string; version: number }, userId: number, role: Role): Promise<Estimate> {
+    async decide(
+      estimateId: number,
+      input: { decision: 'approved' | 'declined'; name: string; version: number },
+      userId: number,
+      role: Role,
+    ): Promise<Estimate> {
       const restorationId = await db.transaction(async (tx) => {
         const [e] = await tx.select().from(estimates).where(eq(estimates.id, estimateId)).for('update');
         if (!e || !mayView(role, 'estimate', { estimate: e })) throw new NotFoundError();
-        if (e.version !== input.version) throw new ConflictError(`This is version ${e.version} of the estimate, not version ${input.version}: reload the page and read it again.`);
-        const [newest] = await tx.select({ version: estimates.version }).from(estimates)
-          .where(and(eq(estimates.restorationId, e.restorationId), eq(estimates.sent, true))).orderBy(desc(estimates.version)).limit(1);
-        if (newest && newest.version !== e.version) throw new ConflictError(`Version ${newest.version} of the estimate replaces this one: answer that version instead.`);
+        if (e.version !== input.version)
+          throw new ConflictError(
+            `This is version ${e.version} of the estimate, not version ${input.version}: reload the page and read it again.`,
+          );
+        const [newest] = await tx
+          .select({ version: estimates.version })
+          .from(estimates)
+          .where(and(eq(estimates.restorationId, e.restorationId), eq(estimates.sent, true)))
+          .orderBy(desc(estimates.version))
+          .limit(1);
+        if (newest && newest.version !== e.version)
+          throw new ConflictError(
+            `Version ${newest.version} of the estimate replaces this one: answer that version instead.`,
+          );
         if (e.decision) throw new ConflictError(`You already ${e.decision} version ${e.version} of the estimate.`);
-        await tx.update(estimates).set({ decision: input.decision, decidedByName: input.name, decidedById: userId, decidedAt: new Date() }).where(eq(estimates.id, e.id));
-        await tx.insert(events).values({ restorationId: e.restorationId, kind: 'estimate-decided', actorId: userId,
-          data: { estimateId: e.id, version: e.version, decision: input.decision, name: input.name } });
+        await tx
+          .update(estimates)
+          .set({ decision: input.decision, decidedByName: input.name, decidedById: userId, decidedAt: new Date() })
+          .where(eq(estimates.id, e.id));
+        await tx.insert(events).values({
+          restorationId: e.restorationId,
+          kind: 'estimate-decided',
+          actorId: userId,
+          data: { estimateId: e.id, version: e.version, decision: input.decision, name: input.name },
+        });
         return e.restorationId;
       });
       return (await listEstimates(db, restorationId, role, estimateId))[0]!;

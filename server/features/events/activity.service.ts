@@ -14,7 +14,11 @@ export function activityService(deps: Pick<AppDeps, 'db' | 'storage'>) {
   const repo = eventsRepo(deps.db);
   return {
     async recentFor(userId: number): Promise<ActivityItem[]> {
-      const rows = await timeline.rows(inArray(events.restorationId, repo.restorationIdsOf(userId)), { userId }, ACTIVITY_WINDOW);
+      const rows = await timeline.rows(
+        inArray(events.restorationId, repo.restorationIdsOf(userId)),
+        { userId },
+        ACTIVITY_WINDOW,
+      );
       const sets = new Map((await repo.setsOf(userId)).map((s) => [s.id, s]));
       const withSet = rows.filter((r) => sets.has(r.e.restorationId));
       const items = await timeline.present(withSet);

@@ -6,7 +6,12 @@ const brotli = promisify(brotliCompress);
 const gzipAsync = promisify(gzip);
 
 type Entry = {
-  version: number; body: Buffer; etag: string; bytes: number; br?: Promise<Buffer>; gzip?: Promise<Buffer>;
+  version: number;
+  body: Buffer;
+  etag: string;
+  bytes: number;
+  br?: Promise<Buffer>;
+  gzip?: Promise<Buffer>;
   /** Counts a compressed copy kept with the entry against the cache's byte cap. */
   account: (bytes: number) => void;
 };
@@ -45,7 +50,10 @@ export function findingsListCache(maxBytes = 32 * 1024 * 1024) {
       }
       const body = Buffer.from(await build());
       const entry: Entry = {
-        version, body, etag: `W/"f${photoId}.${version}.${variant}"`, bytes: body.length,
+        version,
+        body,
+        etag: `W/"f${photoId}.${version}.${variant}"`,
+        bytes: body.length,
         account: (bytes) => {
           if (entries.get(key) !== entry) return; // dropped meanwhile: nothing held
           entry.bytes += bytes;
@@ -85,10 +93,15 @@ export async function sendCachedList(req: Request, res: Response, entry: Entry):
   const encoding = entry.bytes >= 1024 ? req.acceptsEncodings('br', 'gzip', 'identity') : 'identity';
   if (encoding === 'br' || encoding === 'gzip') {
     const fresh = encoding === 'br' ? !entry.br : !entry.gzip;
-    const packed = encoding === 'br'
-      ? (entry.br ??= brotli(entry.body, { params: { [constants.BROTLI_PARAM_QUALITY]: 5 } }))
-      : (entry.gzip ??= gzipAsync(entry.body, { level: 6 }));
-    if (fresh) void packed.then((b) => entry.account(b.length), () => undefined);
+    const packed =
+      encoding === 'br'
+        ? (entry.br ??= brotli(entry.body, { params: { [constants.BROTLI_PARAM_QUALITY]: 5 } }))
+        : (entry.gzip ??= gzipAsync(entry.body, { level: 6 }));
+    if (fresh)
+      void packed.then(
+        (b) => entry.account(b.length),
+        () => undefined,
+      );
     res.setHeader('Content-Encoding', encoding);
     res.send(await packed);
     return;

@@ -14,9 +14,14 @@ const column = (alias: string, name: string) => sql.raw(`${alias}.${name}`);
 export async function photoFindingsJson(db: Database, photoId: number, role: Role): Promise<string> {
   // The rule's conditions over this query's aliases: the findings (f) on the photo (p), and each comment (c)
   // counted with its own finding (cf) and photo (cp).
-  const findingVisible = visibleSql(role, 'finding', { finding: { ownerVisible: column('f', 'owner_visible') }, photo: { ownerVisible: column('p', 'owner_visible') } });
+  const findingVisible = visibleSql(role, 'finding', {
+    finding: { ownerVisible: column('f', 'owner_visible') },
+    photo: { ownerVisible: column('p', 'owner_visible') },
+  });
   const commentVisible = visibleSql(role, 'comment', {
-    comment: { internal: column('c', 'internal') }, finding: { ownerVisible: column('cf', 'owner_visible') }, photo: { ownerVisible: column('cp', 'owner_visible') },
+    comment: { internal: column('c', 'internal') },
+    finding: { ownerVisible: column('cf', 'owner_visible') },
+    photo: { ownerVisible: column('cp', 'owner_visible') },
   });
   const iso = (column: string) => sql.raw(`to_char(f.${column} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`);
   const result = await db.execute<{ json: string }>(sql`

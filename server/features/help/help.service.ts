@@ -1,6 +1,13 @@
 import { and, eq, inArray, isNotNull, ne } from 'drizzle-orm';
 import type { Role } from '../../../shared/permissions';
-import { HELP_LINK_DAYS, type BenchHelpRequest, type HelpLinkCreated, type HelpRequest, type HelpRequestPatch, type HelpRequestSummary } from '../../../shared/schemas/help';
+import {
+  HELP_LINK_DAYS,
+  type BenchHelpRequest,
+  type HelpLinkCreated,
+  type HelpRequest,
+  type HelpRequestPatch,
+  type HelpRequestSummary,
+} from '../../../shared/schemas/help';
 import type { AppDeps } from '../../app-deps';
 import type { Executor } from '../../db/client';
 import { findings, measurements, parts, photos, restorations } from '../../db/schema';
@@ -13,14 +20,24 @@ import { recordEvent } from '../events/record-event';
 import { helpContent, type HelpRequestRow } from './help-content';
 import { helpRepo } from './help.repo';
 
-
 /** Everything a restoration offers a help request, pre-filled: fitted parts, every reading, photos with pins. */
 async function prefill(db: Executor, restorationId: number) {
-  const partIds = (await db.select({ id: parts.id }).from(parts)
-    .where(and(eq(parts.restorationId, restorationId), eq(parts.state, 'fitted'), ne(parts.action, 'kept-original')))).map((r) => r.id);
-  const measurementIds = (await db.select({ id: measurements.id }).from(measurements).where(eq(measurements.restorationId, restorationId))).map((r) => r.id);
-  const photoIds = (await db.selectDistinct({ id: photos.id }).from(photos).innerJoin(findings, eq(findings.photoId, photos.id))
-    .where(and(eq(photos.restorationId, restorationId), isNotNull(findings.id)))).map((r) => r.id);
+  const partIds = (
+    await db
+      .select({ id: parts.id })
+      .from(parts)
+      .where(and(eq(parts.restorationId, restorationId), eq(parts.state, 'fitted'), ne(parts.action, 'kept-original')))
+  ).map((r) => r.id);
+  const measurementIds = (
+    await db.select({ id: measurements.id }).from(measurements).where(eq(measurements.restorationId, restorationId))
+  ).map((r) => r.id);
+  const photoIds = (
+    await db
+      .selectDistinct({ id: photos.id })
+      .from(photos)
+      .innerJoin(findings, eq(findings.photoId, photos.id))
+      .where(and(eq(photos.restorationId, restorationId), isNotNull(findings.id)))
+  ).map((r) => r.id);
   const symptomIds = await symptomChecksRepo(db).symptomsChecked(restorationId);
   return { partIds, measurementIds, photoIds, symptomIds };
 }
@@ -34,8 +51,12 @@ async function assertOwnIds(db: Executor, restorationId: number, patch: HelpRequ
   ] as const;
   for (const [field, table, ids] of checks) {
     if (!ids?.length) continue;
-    const found = await db.select({ id: table.id }).from(table).where(and(eq(table.restorationId, restorationId), inArray(table.id, ids)));
-    if (found.length !== new Set(ids).size) throw new BadRequestError(`${field}: every item must belong to this restoration`);
+    const found = await db
+      .select({ id: table.id })
+      .from(table)
+      .where(and(eq(table.restorationId, restorationId), inArray(table.id, ids)));
+    if (found.length !== new Set(ids).size)
+      throw new BadRequestError(`${field}: every item must belong to this restoration`);
   }
 }
 
@@ -49,8 +70,18 @@ export function helpService(deps: AppDeps) {
     const links = await repo.links(row.id);
     return {
       ...content,
-      includeSet: row.includeSet, includeValves: row.includeValves, partIds: row.partIds, measurementIds: row.measurementIds, photoIds: row.photoIds, symptomIds: row.symptomIds,
-      links: links.map((l) => ({ id: l.id, expiresAt: l.expiresAt.toISOString(), revokedAt: l.revokedAt?.toISOString() ?? null, createdAt: l.createdAt.toISOString() })),
+      includeSet: row.includeSet,
+      includeValves: row.includeValves,
+      partIds: row.partIds,
+      measurementIds: row.measurementIds,
+      photoIds: row.photoIds,
+      symptomIds: row.symptomIds,
+      links: links.map((l) => ({
+        id: l.id,
+        expiresAt: l.expiresAt.toISOString(),
+        revokedAt: l.revokedAt?.toISOString() ?? null,
+        createdAt: l.createdAt.toISOString(),
+      })),
     };
   }
 
@@ -58,10 +89,27 @@ export function helpService(deps: AppDeps) {
     /** The request, its history line and the mentors' notifications (a question on their bench) commit together. */
     async create(restorationId: number, symptom: string, actor: { id: number; name: string }, role: Role) {
       const row = await unitOfWork(db, async (tx, afterCommit) => {
-        const created = await helpRepo(tx).insert({ restorationId, symptom, authorId: actor.id, ...(await prefill(tx, restorationId)) });
-        await recordEvent(tx, { restorationId, kind: 'help-requested', actorId: actor.id, data: { helpRequestId: created.id } });
-        const [set] = await tx.select({ make: restorations.make, model: restorations.model }).from(restorations).where(eq(restorations.id, restorationId));
-        await notifications.helpRequested(tx, { id: created.id, restorationId, symptom, set: `${set!.make} ${set!.model}` }, actor);
+        const created = await helpRepo(tx).insert({
+          restorationId,
+          symptom,
+          authorId: actor.id,
+          ...(await prefill(tx, restorationId)),
+        });
+        await recordEvent(tx, {
+          restorationId,
+          kind: 'help-requested',
+          actorId: actor.id,
+          data: { helpRequestId: created.id },
+        });
+        const [set] = await tx
+          .select({ make: restorations.make, model: restorations.model })
+          .from(restorations)
+          .where(eq(restorations.id, restorationId));
+        await notifications.helpRequested(
+          tx,
+          { id: created.id, restorationId, symptom, set: `${set!.make} ${set!.model}` },
+          actor,
+        );
         afterCommit(notifications.kick);
         return created;
       });
@@ -71,7 +119,13 @@ export function helpService(deps: AppDeps) {
       return (await repo.list(restorationId)).map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
     },
     async bench(userId: number): Promise<BenchHelpRequest[]> {
-      return (await repo.forPerson(userId, 20)).map((r) => ({ id: r.id, restorationId: r.restorationId, set: `${r.make} ${r.model}`, symptom: r.symptom, createdAt: r.createdAt.toISOString() }));
+      return (await repo.forPerson(userId, 20)).map((r) => ({
+        id: r.id,
+        restorationId: r.restorationId,
+        set: `${r.make} ${r.model}`,
+        symptom: r.symptom,
+        createdAt: r.createdAt.toISOString(),
+      }));
     },
     async restorationOf(helpRequestId: number) {
       return (await repo.find(helpRequestId))?.restorationId;
@@ -87,17 +141,32 @@ export function helpService(deps: AppDeps) {
         if (!current) throw new NotFoundError();
         await assertOwnIds(tx, current.restorationId, patch);
         const unique = (ids?: number[]) => (ids ? [...new Set(ids)] : undefined);
-        return helpRepo(tx).update(helpRequestId, { ...patch, partIds: unique(patch.partIds), measurementIds: unique(patch.measurementIds), photoIds: unique(patch.photoIds) });
+        return helpRepo(tx).update(helpRequestId, {
+          ...patch,
+          partIds: unique(patch.partIds),
+          measurementIds: unique(patch.measurementIds),
+          photoIds: unique(patch.photoIds),
+        });
       });
       return full(row, role);
     },
     /** A new read-only link; the token is returned once and only its SHA-256 is kept. */
-    async createLink(restorationId: number, helpRequestId: number, days: number | undefined, userId: number): Promise<HelpLinkCreated> {
+    async createLink(
+      restorationId: number,
+      helpRequestId: number,
+      days: number | undefined,
+      userId: number,
+    ): Promise<HelpLinkCreated> {
       const { token, hash } = newToken();
       const expiresAt = new Date(Date.now() + (days ?? HELP_LINK_DAYS) * 24 * 3600 * 1000);
       await db.transaction(async (tx) => {
         await helpRepo(tx).insertLink({ helpRequestId, tokenHash: hash, expiresAt, createdById: userId });
-        await recordEvent(tx, { restorationId, kind: 'help-link-made', actorId: userId, data: { helpRequestId, expiresAt: expiresAt.toISOString() } });
+        await recordEvent(tx, {
+          restorationId,
+          kind: 'help-link-made',
+          actorId: userId,
+          data: { helpRequestId, expiresAt: expiresAt.toISOString() },
+        });
       });
       return { url: `${deps.config.publicOrigin}/shared/help/${token}`, token, expiresAt: expiresAt.toISOString() };
     },
@@ -110,7 +179,12 @@ export function helpService(deps: AppDeps) {
         const found = await helpRepo(tx).linkByHash(hashToken(token));
         if (!found) throw new NotFoundError();
         if (await helpRepo(tx).revoke(found.link.id))
-          await recordEvent(tx, { restorationId: found.restorationId, kind: 'help-link-withdrawn', actorId: userId, data: { helpRequestId: found.link.helpRequestId } });
+          await recordEvent(tx, {
+            restorationId: found.restorationId,
+            kind: 'help-link-withdrawn',
+            actorId: userId,
+            data: { helpRequestId: found.link.helpRequestId },
+          });
       });
     },
     async restorationOfReply(replyId: number) {

@@ -16,8 +16,16 @@ export const helpReplyLimits = { perIp: 20, perLink: 30, windowSeconds: 3600 };
 export function sharedHelpService(deps: Pick<AppDeps, 'db' | 'pool' | 'storage' | 'logger' | 'config'>) {
   const repo = helpRepo(deps.db);
   const limiter = (keyPrefix: string, points: number) =>
-    new RateLimiterPostgres({ storeClient: deps.pool, storeType: 'pool', tableName: 'throttles', tableCreated: true, clearExpiredByTimeout: false,
-      keyPrefix, points, duration: helpReplyLimits.windowSeconds });
+    new RateLimiterPostgres({
+      storeClient: deps.pool,
+      storeType: 'pool',
+      tableName: 'throttles',
+      tableCreated: true,
+      clearExpiredByTimeout: false,
+      keyPrefix,
+      points,
+      duration: helpReplyLimits.windowSeconds,
+    });
   const perIp = limiter('help-reply-ip', helpReplyLimits.perIp);
   const perLink = limiter('help-reply-link', helpReplyLimits.perLink);
 
@@ -36,8 +44,14 @@ export function sharedHelpService(deps: Pick<AppDeps, 'db' | 'pool' | 'storage' 
       const { link, request } = await live(token);
       const results = await Promise.allSettled([perIp.consume(ip), perLink.consume(String(link.id))]);
       for (const r of results) if (r.status === 'rejected' && !(r.reason instanceof RateLimiterRes)) throw r.reason;
-      if (results.some((r) => r.status === 'rejected')) throw new TooManyRequestsError('Too many replies from here; wait an hour and try again.');
-      const row = await repo.insertReply({ helpRequestId: request.id, linkId: link.id, name: input.name, body: input.body });
+      if (results.some((r) => r.status === 'rejected'))
+        throw new TooManyRequestsError('Too many replies from here; wait an hour and try again.');
+      const row = await repo.insertReply({
+        helpRequestId: request.id,
+        linkId: link.id,
+        name: input.name,
+        body: input.body,
+      });
       return { id: row.id, held: true as const };
     },
   };

@@ -7,7 +7,13 @@ const what: Record<Role, string> = {
   owner: 'follow its restoration: the photos, findings and notes shared with you, and the hand-back report',
 };
 
-export function invitationMail(p: { to: string; inviter: string; set: string; role: Role; link: string }): OutgoingMail {
+export function invitationMail(p: {
+  to: string;
+  inviter: string;
+  set: string;
+  role: Role;
+  link: string;
+}): OutgoingMail {
   return {
     to: p.to,
     subject: `${p.inviter} invited you to the ${p.set} on Gridleak`,

@@ -6,14 +6,21 @@ import { hashToken, newToken } from '../auth/tokens';
 
 export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
-const pending = () => and(isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date()));
+const pending = () =>
+  and(isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date()));
 
 export function invitationsRepo(db: Executor) {
   return {
     listPending(restorationId: number) {
       return db
-        .select({ id: invitations.id, email: invitations.email, role: invitations.role, invitedBy: users.name,
-          expiresAt: invitations.expiresAt, createdAt: invitations.createdAt })
+        .select({
+          id: invitations.id,
+          email: invitations.email,
+          role: invitations.role,
+          invitedBy: users.name,
+          expiresAt: invitations.expiresAt,
+          createdAt: invitations.createdAt,
+        })
         .from(invitations)
         .leftJoin(users, eq(users.id, invitations.invitedById))
         .where(and(eq(invitations.restorationId, restorationId), pending()))
@@ -26,10 +33,23 @@ export function invitationsRepo(db: Executor) {
         await tx
           .update(invitations)
           .set({ revokedAt: new Date() })
-          .where(and(eq(invitations.restorationId, restorationId), sql`lower(${invitations.email}) = lower(${email})`, pending()));
+          .where(
+            and(
+              eq(invitations.restorationId, restorationId),
+              sql`lower(${invitations.email}) = lower(${email})`,
+              pending(),
+            ),
+          );
         const [inserted] = await tx
           .insert(invitations)
-          .values({ restorationId, email, role, invitedById, tokenHash: hash, expiresAt: new Date(Date.now() + INVITATION_LIFETIME_MS) })
+          .values({
+            restorationId,
+            email,
+            role,
+            invitedById,
+            tokenHash: hash,
+            expiresAt: new Date(Date.now() + INVITATION_LIFETIME_MS),
+          })
           .returning();
         return inserted!;
       });
@@ -41,7 +61,14 @@ export function invitationsRepo(db: Executor) {
       const [row] = await db
         .update(invitations)
         .set({ tokenHash: hash, expiresAt: new Date(Date.now() + INVITATION_LIFETIME_MS) })
-        .where(and(eq(invitations.id, id), eq(invitations.restorationId, restorationId), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
+        .where(
+          and(
+            eq(invitations.id, id),
+            eq(invitations.restorationId, restorationId),
+            isNull(invitations.acceptedAt),
+            isNull(invitations.revokedAt),
+          ),
+        )
         .returning();
       return row ? { invitation: row, token } : undefined;
     },

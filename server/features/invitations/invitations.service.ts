@@ -10,7 +10,8 @@ import { restorationsRepo } from '../restorations/restorations.repo';
 import { invitationMail } from './invitations.mail';
 import { invitationsRepo } from './invitations.repo';
 
-const gone = () => new HttpError(410, 'gone', 'This invitation has expired, was revoked or was already used. Ask for a new one.');
+const gone = () =>
+  new HttpError(410, 'gone', 'This invitation has expired, was revoked or was already used. Ask for a new one.');
 const sameEmail = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
 
 export function invitationsService({ db, mailer, config }: AppDeps) {
@@ -21,9 +22,15 @@ export function invitationsService({ db, mailer, config }: AppDeps) {
   /** The invitation e-mail, sent inside the invitation's transaction: no mail, no invitation (503). */
   async function send(tx: Executor, restorationId: number, to: string, role: Role, inviterId: number, token: string) {
     const [set, inviter] = await Promise.all([restorationsRepo(tx).find(restorationId), usersRepo(tx).byId(inviterId)]);
-    await sendOrRollBack(mailer,
-      invitationMail({ to, inviter: inviter?.name ?? 'A technician', set: `${set?.make} ${set?.model}`, role,
-        link: `${config.publicOrigin}/invitations/${token}` }),
+    await sendOrRollBack(
+      mailer,
+      invitationMail({
+        to,
+        inviter: inviter?.name ?? 'A technician',
+        set: `${set?.make} ${set?.model}`,
+        role,
+        link: `${config.publicOrigin}/invitations/${token}`,
+      }),
     );
   }
 
@@ -34,7 +41,9 @@ export function invitationsService({ db, mailer, config }: AppDeps) {
     if (!found) throw gone();
     const { invitation } = found;
     if (!sameEmail(invitation.email, user.email))
-      throw new ForbiddenError(`This invitation was sent to another address. Sign in with the account for ${invitation.email}.`);
+      throw new ForbiddenError(
+        `This invitation was sent to another address. Sign in with the account for ${invitation.email}.`,
+      );
     if (!(await inTx.markAccepted(invitation.id, user.id))) throw gone();
     await membersRepo(tx).add(invitation.restorationId, user.id, invitation.role);
     return { restorationId: invitation.restorationId, role: invitation.role };
@@ -43,7 +52,10 @@ export function invitationsService({ db, mailer, config }: AppDeps) {
   return {
     async listPending(restorationId: number): Promise<Invitation[]> {
       return (await repo.listPending(restorationId)).map((i) => ({
-        ...i, expiresAt: i.expiresAt.toISOString(), createdAt: i.createdAt.toISOString() }));
+        ...i,
+        expiresAt: i.expiresAt.toISOString(),
+        createdAt: i.createdAt.toISOString(),
+      }));
     },
     async invite(restorationId: number, email: string, role: Role, inviterId: number) {
       const existing = await users.byEmail(email);
@@ -76,7 +88,12 @@ export function invitationsService({ db, mailer, config }: AppDeps) {
       const found = await repo.findPendingByToken(token);
       if (!found) throw gone();
       const { invitation: i } = found;
-      return { restoration: { id: i.restorationId, make: found.make, model: found.model }, email: i.email, role: i.role, invitedBy: found.invitedBy };
+      return {
+        restoration: { id: i.restorationId, make: found.make, model: found.model },
+        email: i.email,
+        role: i.role,
+        invitedBy: found.invitedBy,
+      };
     },
     /** Joins the signed-in account with the invited role; only the invited address may accept. */
     async accept(token: string, user: { id: number; email: string }) {

@@ -15,20 +15,47 @@ export interface DraftLine {
  * What a final invoice would hold now: billable labour from the log at the workshop rate, fitted parts from the
  * ledger at cost plus the workshop's markup, and the deposits paid so far (deducted from what is due).
  */
-export async function finalLines(db: Executor, restorationId: number, settings: WorkshopSettings): Promise<{ lines: DraftLine[]; deducted: number }> {
-  const time = await db.select({ minutes: labourEntries.minutes }).from(labourEntries)
-    .where(and(eq(labourEntries.restorationId, restorationId), eq(labourEntries.billable, true), isNotNull(labourEntries.minutes)));
-  const fitted = await db.select().from(parts)
-    .where(and(eq(parts.restorationId, restorationId), eq(parts.state, 'fitted'), isNotNull(parts.costMinor))).orderBy(parts.id);
+export async function finalLines(
+  db: Executor,
+  restorationId: number,
+  settings: WorkshopSettings,
+): Promise<{ lines: DraftLine[]; deducted: number }> {
+  const time = await db
+    .select({ minutes: labourEntries.minutes })
+    .from(labourEntries)
+    .where(
+      and(
+        eq(labourEntries.restorationId, restorationId),
+        eq(labourEntries.billable, true),
+        isNotNull(labourEntries.minutes),
+      ),
+    );
+  const fitted = await db
+    .select()
+    .from(parts)
+    .where(and(eq(parts.restorationId, restorationId), eq(parts.state, 'fitted'), isNotNull(parts.costMinor)))
+    .orderBy(parts.id);
   const minutes = time.reduce((a, e) => a + (e.minutes ?? 0), 0);
   const lines: DraftLine[] = [
-    ...(minutes ? [{ description: `Labour, ${Number((minutes / 60).toFixed(2))} h`, priced: { kind: 'labour' as const, minutes, hourlyRate: settings.labourRate } }] : []),
+    ...(minutes
+      ? [
+          {
+            description: `Labour, ${Number((minutes / 60).toFixed(2))} h`,
+            priced: { kind: 'labour' as const, minutes, hourlyRate: settings.labourRate },
+          },
+        ]
+      : []),
     ...fitted.map((p) => ({
-      description: `${p.componentRef} ${p.replacementPart} ${p.replacementRating}${p.quantity > 1 ? ` × ${p.quantity}` : ''}`.replace(/\s+/g, ' ').trim(),
+      description:
+        `${p.componentRef} ${p.replacementPart} ${p.replacementRating}${p.quantity > 1 ? ` × ${p.quantity}` : ''}`
+          .replace(/\s+/g, ' ')
+          .trim(),
       priced: { kind: 'part' as const, cost: p.costMinor!, markupBasisPoints: settings.partsMarkupBasisPoints },
     })),
   ];
-  const deposits = await db.select({ paid: invoices.paid }).from(invoices)
+  const deposits = await db
+    .select({ paid: invoices.paid })
+    .from(invoices)
     .where(and(eq(invoices.restorationId, restorationId), eq(invoices.kind, 'deposit'), isNull(invoices.voidedAt)));
   return { lines, deducted: deposits.reduce((a, d) => a + d.paid, 0) };
 }
@@ -36,10 +63,19 @@ export async function finalLines(db: Executor, restorationId: number, settings: 
 /** The draft priced by the one totals function, every amount in the workshop's currency. */
 export function previewOf(draft: { lines: DraftLine[]; deducted: number }, settings: WorkshopSettings): InvoicePreview {
   const rule = taxRuleOf(settings);
-  const t = totals(draft.lines.map((l) => l.priced), settings.currency, rule, draft.deducted);
+  const t = totals(
+    draft.lines.map((l) => l.priced),
+    settings.currency,
+    rule,
+    draft.deducted,
+  );
   return {
     tax: rule && { name: rule.name, rateBasisPoints: rule.rateBasisPoints },
     lines: draft.lines.map((l, i) => ({ description: l.description, net: t.lines[i]!.net, tax: t.lines[i]!.tax })),
-    net: t.net, taxAmount: t.tax, gross: t.gross, deducted: t.paid, due: t.due,
+    net: t.net,
+    taxAmount: t.tax,
+    gross: t.gross,
+    deducted: t.paid,
+    due: t.due,
   };
 }

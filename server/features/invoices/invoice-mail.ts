@@ -20,8 +20,10 @@ export async function mailInvoice(tx: Executor, deps: Pick<AppDeps, 'mailer' | '
   const title = documentTitle(d, 'invoice');
   const pdf = await renderInvoice(d, 'invoice', timeZone);
   const i = d.invoice;
-  const what = i.kind === 'credit-note' ? `credits ${documentMoney(-i.due, i.currency)}${d.credits ? ` against invoice ${d.credits}` : ''}`
-    : `is for ${documentMoney(i.due, i.currency)}${i.deducted ? ` after ${documentMoney(i.deducted, i.currency)} of deposits paid` : ''}`;
+  const what =
+    i.kind === 'credit-note'
+      ? `credits ${documentMoney(-i.due, i.currency)}${d.credits ? ` against invoice ${d.credits}` : ''}`
+      : `is for ${documentMoney(i.due, i.currency)}${i.deducted ? ` after ${documentMoney(i.deducted, i.currency)} of deposits paid` : ''}`;
   for (const o of d.owners)
     await sendOrRollBack(deps.mailer, {
       to: o.email,

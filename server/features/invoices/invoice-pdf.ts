@@ -24,11 +24,17 @@ export async function renderInvoice(d: InvoiceDocument, kind: DocumentKind, time
   const w = createWriter(documentTitle(d, kind));
   const { doc } = w;
   w.text(documentTitle(d, kind), { bold: true, size: 22, gap: 0.2 });
-  w.text(`Issued ${documentDate(i.issuedAt, timeZone)}${d.issuedBy ? ` by ${d.issuedBy}` : ''} · dates in ${timeZone}`, { colour: SOFT });
+  w.text(
+    `Issued ${documentDate(i.issuedAt, timeZone)}${d.issuedBy ? ` by ${d.issuedBy}` : ''} · dates in ${timeZone}`,
+    { colour: SOFT },
+  );
   if (d.credits) w.text(`Corrects invoice ${d.credits}: it reverses that invoice's lines exactly.`);
-  if (i.voidedAt) w.text(`VOID since ${documentDate(i.voidedAt, timeZone)}: ${i.voidReason ?? ''}`, { bold: true, colour: DANGER });
+  if (i.voidedAt)
+    w.text(`VOID since ${documentDate(i.voidedAt, timeZone)}: ${i.voidReason ?? ''}`, { bold: true, colour: DANGER });
   w.label('For');
-  w.text(`${d.owners.map((o) => o.name).join(', ') || 'The owner'} · ${d.set.make} ${d.set.model}${d.set.serial ? `, serial ${d.set.serial}` : ''}`);
+  w.text(
+    `${d.owners.map((o) => o.name).join(', ') || 'The owner'} · ${d.set.make} ${d.set.model}${d.set.serial ? `, serial ${d.set.serial}` : ''}`,
+  );
 
   if (kind === 'invoice') {
     w.heading('Lines');
@@ -36,7 +42,10 @@ export async function renderInvoice(d: InvoiceDocument, kind: DocumentKind, time
     const row = (left: string, right: string, bold = false) => {
       w.ensureSpace(30);
       const y = doc.y;
-      doc.font(bold ? 'bold' : 'body').fontSize(11).fillColor('#221c15');
+      doc
+        .font(bold ? 'bold' : 'body')
+        .fontSize(11)
+        .fillColor('#221c15');
       doc.text(left, doc.page.margins.left, y, { width: w.width - 130 });
       const after = doc.y;
       doc.text(right, amountX, y, { width: 120, align: 'right' });
@@ -48,16 +57,34 @@ export async function renderInvoice(d: InvoiceDocument, kind: DocumentKind, time
     row('Net', m(i.net));
     if (i.taxRateBasisPoints !== null) row(`${i.taxName} at ${i.taxRateBasisPoints / 100}%`, m(i.tax));
     row('Total', m(i.gross), true);
-    if (i.deducted) row(i.kind === 'credit-note' ? 'Deposits deducted, reversed' : 'Less deposits paid', m(-i.deducted));
+    if (i.deducted)
+      row(i.kind === 'credit-note' ? 'Deposits deducted, reversed' : 'Less deposits paid', m(-i.deducted));
     row(i.kind === 'credit-note' ? 'Credited' : 'Amount due', m(i.due), true);
     doc.moveDown(0.4);
-    w.text(i.taxRateBasisPoints === null ? 'No tax is charged.' : `${i.taxName}: ${taxRoundingLabels[i.taxRounding].toLowerCase()}.`, { colour: SOFT, size: 9 });
+    w.text(
+      i.taxRateBasisPoints === null
+        ? 'No tax is charged.'
+        : `${i.taxName}: ${taxRoundingLabels[i.taxRounding].toLowerCase()}.`,
+      {
+        colour: SOFT,
+        size: 9,
+      },
+    );
   } else {
     w.heading('Received');
     w.text(`${m(i.paid)} received against ${d.reference} (total ${m(i.due)}).`, { size: 13 });
     if (i.refunded) w.text(`${m(i.refunded)} refunded.`, { size: 13 });
-    const left = amountLeft({ kind: i.kind, voided: i.voidedAt !== null, due: i.due, paid: i.paid, refunded: i.refunded });
-    w.text(left > 0 ? `Still to pay: ${m(left)}.` : i.paid > 0 ? 'Paid in full. Thank you.' : 'Nothing is left to pay.', { bold: true });
+    const left = amountLeft({
+      kind: i.kind,
+      voided: i.voidedAt !== null,
+      due: i.due,
+      paid: i.paid,
+      refunded: i.refunded,
+    });
+    w.text(
+      left > 0 ? `Still to pay: ${m(left)}.` : i.paid > 0 ? 'Paid in full. Thank you.' : 'Nothing is left to pay.',
+      { bold: true },
+    );
     w.text(`Receipt printed ${documentDate(new Date(), timeZone)}.`, { colour: SOFT, size: 9 });
   }
   w.text(`Amounts in ${i.currency}.`, { colour: SOFT, size: 9 });

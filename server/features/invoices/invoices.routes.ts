@@ -1,5 +1,10 @@
 import { Router, type Request, type Response } from 'express';
-import { depositInputSchema, documentQuerySchema, invoiceParamsSchema, voidInputSchema } from '../../../shared/schemas/invoices';
+import {
+  depositInputSchema,
+  documentQuerySchema,
+  invoiceParamsSchema,
+  voidInputSchema,
+} from '../../../shared/schemas/invoices';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { ConflictError, NotFoundError } from '../../http/errors';
@@ -24,31 +29,65 @@ export function invoicesRoutes(deps: AppDeps): Router {
   router.get('/restorations/:id/invoices', requireUser, validate(one), guard(db, 'money.view'), async (_req, res) => {
     res.json(await service.list(input(res, one).params.id));
   });
-  router.get('/restorations/:id/invoices/preview', requireUser, validate(one), guard(db, 'money.edit'), async (_req, res) => {
-    res.json(await service.preview(input(res, one).params.id));
-  });
-  router.post('/restorations/:id/deposits', requireUser, validate(deposit), guard(db, 'money.edit'), async (req, res) => {
-    const { params, body } = input(res, deposit);
-    res.status(201).json(await service.deposit(params.id, body, req.user!.id));
-  });
+  router.get(
+    '/restorations/:id/invoices/preview',
+    requireUser,
+    validate(one),
+    guard(db, 'money.edit'),
+    async (_req, res) => {
+      res.json(await service.preview(input(res, one).params.id));
+    },
+  );
+  router.post(
+    '/restorations/:id/deposits',
+    requireUser,
+    validate(deposit),
+    guard(db, 'money.edit'),
+    async (req, res) => {
+      const { params, body } = input(res, deposit);
+      res.status(201).json(await service.deposit(params.id, body, req.user!.id));
+    },
+  );
   router.post('/restorations/:id/invoices', requireUser, validate(one), guard(db, 'money.edit'), async (req, res) => {
     res.status(201).json(await service.final(input(res, one).params.id, req.user!.id));
   });
-  router.post('/invoices/:invoiceId/void', requireUser, validate(voiding), guard(db, 'money.edit', ofInvoice), async (req, res) => {
-    const { params, body } = input(res, voiding);
-    res.json(await service.void(params.invoiceId, body.reason, req.user!.id));
-  });
+  router.post(
+    '/invoices/:invoiceId/void',
+    requireUser,
+    validate(voiding),
+    guard(db, 'money.edit', ofInvoice),
+    async (req, res) => {
+      const { params, body } = input(res, voiding);
+      res.json(await service.void(params.invoiceId, body.reason, req.user!.id));
+    },
+  );
   // The PDFs: for the set's technicians and its owners (an owner reaches only their own sets); mentors see no money.
   const pdf = (kind: DocumentKind) => async (_req: Request, res: Response) => {
     const { params, query } = input(res, document);
     const d = await invoiceDocument(db, params.invoiceId);
     if (!d) throw new NotFoundError();
-    if (kind === 'receipt' && d.invoice.paid <= 0 && d.invoice.refunded <= 0) throw new ConflictError(`Nothing has been paid against ${d.reference} yet, so there is no receipt.`);
+    if (kind === 'receipt' && d.invoice.paid <= 0 && d.invoice.refunded <= 0)
+      throw new ConflictError(`Nothing has been paid against ${d.reference} yet, so there is no receipt.`);
     const timeZone = query.timeZone ?? (await readWorkshopSettings(db)).timeZone;
     const title = documentTitle(d, kind);
-    res.type('application/pdf').attachment(`${title.replace(/[^\w]+/g, '-').toLowerCase()}.pdf`).send(await renderInvoice(d, kind, timeZone));
+    res
+      .type('application/pdf')
+      .attachment(`${title.replace(/[^\w]+/g, '-').toLowerCase()}.pdf`)
+      .send(await renderInvoice(d, kind, timeZone));
   };
-  router.get('/invoices/:invoiceId/invoice.pdf', requireUser, validate(document), guard(db, 'money.view', ofInvoice), pdf('invoice'));
-  router.get('/invoices/:invoiceId/receipt.pdf', requireUser, validate(document), guard(db, 'money.view', ofInvoice), pdf('receipt'));
+  router.get(
+    '/invoices/:invoiceId/invoice.pdf',
+    requireUser,
+    validate(document),
+    guard(db, 'money.view', ofInvoice),
+    pdf('invoice'),
+  );
+  router.get(
+    '/invoices/:invoiceId/receipt.pdf',
+    requireUser,
+    validate(document),
+    guard(db, 'money.view', ofInvoice),
+    pdf('receipt'),
+  );
   return router;
 }

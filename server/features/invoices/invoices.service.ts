@@ -20,16 +20,33 @@ function present(i: Row, lines: (typeof invoiceLines.$inferSelect)[]): Invoice {
   const m = (amount: number) => ({ amount, currency: i.currency });
   const figures = { kind: i.kind, voided: i.voidedAt !== null, due: i.due, paid: i.paid, refunded: i.refunded };
   return {
-    id: i.id, number: i.number, reference: referenceOf(i), kind: i.kind, issuedAt: i.issuedAt.toISOString(),
+    id: i.id,
+    number: i.number,
+    reference: referenceOf(i),
+    kind: i.kind,
+    issuedAt: i.issuedAt.toISOString(),
     tax: i.taxRateBasisPoints === null ? null : { name: i.taxName, rateBasisPoints: i.taxRateBasisPoints },
-    net: m(i.net), taxAmount: m(i.tax), gross: m(i.gross), deducted: m(i.deducted), due: m(i.due), paid: m(i.paid),
-    refunded: m(i.refunded), left: m(amountLeft(figures)), status: invoiceStatus(figures), creditsInvoiceId: i.creditsInvoiceId, voidReason: i.voidReason,
+    net: m(i.net),
+    taxAmount: m(i.tax),
+    gross: m(i.gross),
+    deducted: m(i.deducted),
+    due: m(i.due),
+    paid: m(i.paid),
+    refunded: m(i.refunded),
+    left: m(amountLeft(figures)),
+    status: invoiceStatus(figures),
+    creditsInvoiceId: i.creditsInvoiceId,
+    voidReason: i.voidReason,
     lines: lines.map((l) => ({ description: l.description, net: m(l.net), tax: m(l.tax) })),
   };
 }
 
 async function lock(tx: Tx, restorationId: number) {
-  const [r] = await tx.select({ id: restorations.id }).from(restorations).where(eq(restorations.id, restorationId)).for('update');
+  const [r] = await tx
+    .select({ id: restorations.id })
+    .from(restorations)
+    .where(eq(restorations.id, restorationId))
+    .for('update');
   if (!r) throw new NotFoundError();
 }
 
@@ -40,17 +57,38 @@ async function lock(tx: Tx, restorationId: number) {
 export function invoicesService(deps: Deps) {
   const { db } = deps;
   async function list(restorationId: number): Promise<Invoice[]> {
-    const rows = await db.select().from(invoices).where(eq(invoices.restorationId, restorationId)).orderBy(desc(invoices.number));
+    const rows = await db
+      .select()
+      .from(invoices)
+      .where(eq(invoices.restorationId, restorationId))
+      .orderBy(desc(invoices.number));
     if (!rows.length) return [];
-    const lines = await db.select().from(invoiceLines).where(inArray(invoiceLines.invoiceId, rows.map((r) => r.id))).orderBy(asc(invoiceLines.position));
-    return rows.map((r) => present(r, lines.filter((l) => l.invoiceId === r.id)));
+    const lines = await db
+      .select()
+      .from(invoiceLines)
+      .where(
+        inArray(
+          invoiceLines.invoiceId,
+          rows.map((r) => r.id),
+        ),
+      )
+      .orderBy(asc(invoiceLines.position));
+    return rows.map((r) =>
+      present(
+        r,
+        lines.filter((l) => l.invoiceId === r.id),
+      ),
+    );
   }
   const one = async (restorationId: number, id: number) => (await list(restorationId)).find((i) => i.id === id)!;
 
   return {
     list,
     async restorationOf(invoiceId: number) {
-      const [row] = await db.select({ restorationId: invoices.restorationId }).from(invoices).where(eq(invoices.id, invoiceId));
+      const [row] = await db
+        .select({ restorationId: invoices.restorationId })
+        .from(invoices)
+        .where(eq(invoices.id, invoiceId));
       return row?.restorationId;
     },
 
@@ -63,14 +101,26 @@ export function invoicesService(deps: Deps) {
         let description = 'Deposit';
         if ('amount' in input) amount = input.amount;
         else {
-          const [approved] = await tx.select().from(estimates).where(and(eq(estimates.restorationId, restorationId), eq(estimates.decision, 'approved')))
-            .orderBy(desc(estimates.version)).limit(1);
-          if (!approved) throw new ConflictError('No approved estimate to take a share of: ask for a fixed amount, or send an estimate first.');
+          const [approved] = await tx
+            .select()
+            .from(estimates)
+            .where(and(eq(estimates.restorationId, restorationId), eq(estimates.decision, 'approved')))
+            .orderBy(desc(estimates.version))
+            .limit(1);
+          if (!approved)
+            throw new ConflictError(
+              'No approved estimate to take a share of: ask for a fixed amount, or send an estimate first.',
+            );
           amount = shareOf(approved.highAmount, input.shareBasisPoints);
           description = `Deposit: ${input.shareBasisPoints / 100}% of estimate version ${approved.version}`;
         }
-        const issued = await issueInvoice(tx, { restorationId, kind: 'deposit', lines: [{ description, priced: { kind: 'fixed', quantity: 1, unitAmount: amount } }],
-          prices: { ...settings, taxRateBasisPoints: null }, userId });
+        const issued = await issueInvoice(tx, {
+          restorationId,
+          kind: 'deposit',
+          lines: [{ description, priced: { kind: 'fixed', quantity: 1, unitAmount: amount } }],
+          prices: { ...settings, taxRateBasisPoints: null },
+          userId,
+        });
         await mailInvoice(tx, deps, issued.id);
         return issued;
       });
@@ -87,13 +137,26 @@ export function invoicesService(deps: Deps) {
     async final(restorationId: number, userId: number) {
       const row = await unitOfWork(db, async (tx) => {
         await lock(tx, restorationId);
-        const [existing] = await tx.select({ number: invoices.number, numberPrefix: invoices.numberPrefix }).from(invoices)
+        const [existing] = await tx
+          .select({ number: invoices.number, numberPrefix: invoices.numberPrefix })
+          .from(invoices)
           .where(and(eq(invoices.restorationId, restorationId), eq(invoices.kind, 'final'), isNull(invoices.voidedAt)));
-        if (existing) throw new ConflictError(`Invoice ${referenceOf(existing)} is already issued for this set: void it before issuing another.`);
+        if (existing)
+          throw new ConflictError(
+            `Invoice ${referenceOf(existing)} is already issued for this set: void it before issuing another.`,
+          );
         const settings = await readWorkshopSettings(tx);
         const { lines, deducted } = await finalLines(tx, restorationId, settings);
-        if (!lines.length) throw new ConflictError('Nothing to invoice yet: log billable time or mark parts fitted with their cost.');
-        const issued = await issueInvoice(tx, { restorationId, kind: 'final', lines, prices: settings, deducted, userId });
+        if (!lines.length)
+          throw new ConflictError('Nothing to invoice yet: log billable time or mark parts fitted with their cost.');
+        const issued = await issueInvoice(tx, {
+          restorationId,
+          kind: 'final',
+          lines,
+          prices: settings,
+          deducted,
+          userId,
+        });
         await mailInvoice(tx, deps, issued.id);
         return issued;
       });
@@ -103,17 +166,43 @@ export function invoicesService(deps: Deps) {
     /** Voids an issued invoice or deposit request: it stays as issued, marked void, and a credit note reverses it. */
     async void(invoiceId: number, reason: string, userId: number) {
       const { restorationId, creditId } = await unitOfWork(db, async (tx) => {
-        const [i] = await tx.select().from(invoices).where(and(eq(invoices.id, invoiceId), ne(invoices.kind, 'credit-note'))).for('update');
+        const [i] = await tx
+          .select()
+          .from(invoices)
+          .where(and(eq(invoices.id, invoiceId), ne(invoices.kind, 'credit-note')))
+          .for('update');
         if (!i) throw new NotFoundError();
         if (i.voidedAt) throw new ConflictError(`Invoice ${referenceOf(i)} is already void.`);
-        if (i.paid > 0) throw new ConflictError(`Invoice ${referenceOf(i)} has payments: refund them before voiding it.`);
-        const lines = await tx.select().from(invoiceLines).where(eq(invoiceLines.invoiceId, i.id)).orderBy(asc(invoiceLines.position));
+        if (i.paid > 0)
+          throw new ConflictError(`Invoice ${referenceOf(i)} has payments: refund them before voiding it.`);
+        const lines = await tx
+          .select()
+          .from(invoiceLines)
+          .where(eq(invoiceLines.invoiceId, i.id))
+          .orderBy(asc(invoiceLines.position));
         await tx.update(invoices).set({ voidedAt: new Date(), voidReason: reason }).where(eq(invoices.id, i.id));
-        await tx.insert(events).values({ restorationId: i.restorationId, kind: 'invoice-voided', actorId: userId, data: { invoiceId: i.id, number: i.number, reference: referenceOf(i) } });
+        await tx.insert(events).values({
+          restorationId: i.restorationId,
+          kind: 'invoice-voided',
+          actorId: userId,
+          data: { invoiceId: i.id, number: i.number, reference: referenceOf(i) },
+        });
         const credit = await issueInvoice(tx, {
-          restorationId: i.restorationId, kind: 'credit-note', creditsInvoiceId: i.id, userId, deducted: -i.deducted,
-          lines: lines.map((l) => ({ description: `Reverses: ${l.description}`, priced: { kind: 'fixed', quantity: -1, unitAmount: l.net } })),
-          prices: { currency: i.currency, taxName: i.taxName, taxRateBasisPoints: i.taxRateBasisPoints, taxRounding: i.taxRounding },
+          restorationId: i.restorationId,
+          kind: 'credit-note',
+          creditsInvoiceId: i.id,
+          userId,
+          deducted: -i.deducted,
+          lines: lines.map((l) => ({
+            description: `Reverses: ${l.description}`,
+            priced: { kind: 'fixed', quantity: -1, unitAmount: l.net },
+          })),
+          prices: {
+            currency: i.currency,
+            taxName: i.taxName,
+            taxRateBasisPoints: i.taxRateBasisPoints,
+            taxRounding: i.taxRounding,
+          },
         });
         await mailInvoice(tx, deps, credit.id);
         return { restorationId: i.restorationId, creditId: credit.id };

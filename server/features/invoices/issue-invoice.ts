@@ -12,7 +12,11 @@ import { readWorkshopSettings, taxRuleOf } from '../workshop/workshop-settings';
  */
 async function nextNumber(tx: Tx): Promise<number> {
   await tx.insert(invoiceCounters).values({ id: 1, last: 0 }).onConflictDoNothing();
-  const [row] = await tx.update(invoiceCounters).set({ last: sql`${invoiceCounters.last} + 1` }).where(eq(invoiceCounters.id, 1)).returning();
+  const [row] = await tx
+    .update(invoiceCounters)
+    .set({ last: sql`${invoiceCounters.last} + 1` })
+    .where(eq(invoiceCounters.id, 1))
+    .returning();
   return row!.last;
 }
 
@@ -28,18 +32,48 @@ export interface IssueInput {
 
 /** Issues an invoice, deposit request or credit note with its number, lines and history line, on the caller's transaction. */
 export async function issueInvoice(tx: Tx, input: IssueInput) {
-  const t = totals(input.lines.map((l) => l.priced), input.prices.currency, taxRuleOf(input.prices), input.deducted ?? 0);
+  const t = totals(
+    input.lines.map((l) => l.priced),
+    input.prices.currency,
+    taxRuleOf(input.prices),
+    input.deducted ?? 0,
+  );
   const { invoicePrefix } = await readWorkshopSettings(tx);
   const number = await nextNumber(tx);
-  const [row] = await tx.insert(invoices).values({
-    restorationId: input.restorationId, number, numberPrefix: invoicePrefix, kind: input.kind, currency: input.prices.currency,
-    taxName: input.prices.taxName, taxRateBasisPoints: input.prices.taxRateBasisPoints, taxRounding: input.prices.taxRounding,
-    net: t.net.amount, tax: t.tax.amount, gross: t.gross.amount, deducted: t.paid.amount, due: t.due.amount,
-    creditsInvoiceId: input.creditsInvoiceId ?? null, issuedById: input.userId,
-  }).returning();
-  await tx.insert(invoiceLines).values(input.lines.map((l, position) => ({
-    invoiceId: row!.id, position, description: l.description, net: t.lines[position]!.net.amount, tax: t.lines[position]!.tax.amount,
-  })));
-  await tx.insert(events).values({ restorationId: input.restorationId, kind: 'invoice-issued', actorId: input.userId, data: { invoiceId: row!.id, number, reference: `${invoicePrefix}${number}`, kind: input.kind } });
+  const [row] = await tx
+    .insert(invoices)
+    .values({
+      restorationId: input.restorationId,
+      number,
+      numberPrefix: invoicePrefix,
+      kind: input.kind,
+      currency: input.prices.currency,
+      taxName: input.prices.taxName,
+      taxRateBasisPoints: input.prices.taxRateBasisPoints,
+      taxRounding: input.prices.taxRounding,
+      net: t.net.amount,
+      tax: t.tax.amount,
+      gross: t.gross.amount,
+      deducted: t.paid.amount,
+      due: t.due.amount,
+      creditsInvoiceId: input.creditsInvoiceId ?? null,
+      issuedById: input.userId,
+    })
+    .returning();
+  await tx.insert(invoiceLines).values(
+    input.lines.map((l, position) => ({
+      invoiceId: row!.id,
+      position,
+      description: l.description,
+      net: t.lines[position]!.net.amount,
+      tax: t.lines[position]!.tax.amount,
+    })),
+  );
+  await tx.insert(events).values({
+    restorationId: input.restorationId,
+    kind: 'invoice-issued',
+    actorId: input.userId,
+    data: { invoiceId: row!.id, number, reference: `${invoicePrefix}${number}`, kind: input.kind },
+  });
   return row!;
 }

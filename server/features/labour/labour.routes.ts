@@ -17,16 +17,34 @@ export function labourRoutes({ db }: AppDeps): Router {
   router.get('/restorations/:id/labour', requireUser, validate(one), guard(db, 'labour.record'), async (req, res) => {
     res.json(await service.log(input(res, one).params.id, req.user!.id));
   });
-  router.post('/restorations/:id/labour', requireUser, validate(typed), guard(db, 'labour.record'), async (req, res) => {
-    const { params, body } = input(res, typed);
-    res.status(201).json(await service.add(params.id, body, req.user!.id));
-  });
-  router.post('/restorations/:id/labour/timer', requireUser, validate(timer), guard(db, 'labour.record'), async (req, res) => {
-    const { params, body } = input(res, timer);
-    res.status(201).json(await service.start(params.id, body, req.user!.id));
-  });
-  router.post('/restorations/:id/labour/timer/stop', requireUser, validate(one), guard(db, 'labour.record'), async (req, res) => {
-    res.json(await service.stop(input(res, one).params.id, req.user!.id));
-  });
+  router.post(
+    '/restorations/:id/labour',
+    requireUser,
+    validate(typed),
+    guard(db, 'labour.record'),
+    async (req, res) => {
+      const { params, body } = input(res, typed);
+      res.status(201).json(await service.add(params.id, body, req.user!.id));
+    },
+  );
+  router.post(
+    '/restorations/:id/labour/timer',
+    requireUser,
+    validate(timer),
+    guard(db, 'labour.record'),
+    async (req, res) => {
+      const { params, body } = input(res, timer);
+      res.status(201).json(await service.start(params.id, body, req.user!.id));
+    },
+  );
+  router.post(
+    '/restorations/:id/labour/timer/stop',
+    requireUser,
+    validate(one),
+    guard(db, 'labour.record'),
+    async (req, res) => {
+      res.json(await service.stop(input(res, one).params.id, req.user!.id));
+    },
+  );
   return router;
 }

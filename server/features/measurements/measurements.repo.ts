@@ -8,15 +8,25 @@ import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 export type MeasurementRow = typeof measurements.$inferSelect & { measuredBy: string | null };
 /** Readings in the order they were taken (then by id). */
-export const measurementOrder = keyset('asc', [{ by: toMs(measurements.measuredAt), kind: 'instant' }, { by: measurements.id, kind: 'number' }]);
+export const measurementOrder = keyset('asc', [
+  { by: toMs(measurements.measuredAt), kind: 'instant' },
+  { by: measurements.id, kind: 'number' },
+]);
 
-export type MeasurementValues = Omit<typeof measurements.$inferInsert, 'id' | 'restorationId' | 'measuredById' | 'measuredAt'>;
+export type MeasurementValues = Omit<
+  typeof measurements.$inferInsert,
+  'id' | 'restorationId' | 'measuredById' | 'measuredAt'
+>;
 
 /** Readings and the valve line-up in PostgreSQL; runs on the pool or on the action's transaction. */
 export function measurementsRepo(db: Executor) {
   return {
     async find(id: number): Promise<MeasurementRow | undefined> {
-      const [r] = await db.select({ m: measurements, measuredBy: users.name }).from(measurements).leftJoin(users, eq(users.id, measurements.measuredById)).where(eq(measurements.id, id));
+      const [r] = await db
+        .select({ m: measurements, measuredBy: users.name })
+        .from(measurements)
+        .leftJoin(users, eq(users.id, measurements.measuredById))
+        .where(eq(measurements.id, id));
       return r && { ...r.m, measuredBy: r.measuredBy };
     },
     /** Locks the reading's row until the transaction ends. */
@@ -39,14 +49,27 @@ export function measurementsRepo(db: Executor) {
         .leftJoin(users, eq(users.id, measurements.measuredById))
         .leftJoin(findings, eq(findings.id, measurements.findingId))
         .leftJoin(photos, eq(photos.id, findings.photoId))
-        .where(and(eq(measurements.restorationId, restorationId), findingId ? and(eq(measurements.findingId, findingId), findingVisible) : undefined,
-          visibleSql(role, 'reading', { reading: columnsOf(measurements) }), measurementOrder.after(window?.cursor)))
+        .where(
+          and(
+            eq(measurements.restorationId, restorationId),
+            findingId ? and(eq(measurements.findingId, findingId), findingVisible) : undefined,
+            visibleSql(role, 'reading', { reading: columnsOf(measurements) }),
+            measurementOrder.after(window?.cursor),
+          ),
+        )
         .orderBy(...measurementOrder.orderBy);
       const rows = window ? await query.limit(window.limit) : await query;
-      return rows.map((r) => ({ ...r.m, measuredBy: r.measuredBy, findingId: r.findingVisible ? r.m.findingId : null }));
+      return rows.map((r) => ({
+        ...r.m,
+        measuredBy: r.measuredBy,
+        findingId: r.findingVisible ? r.m.findingId : null,
+      }));
     },
     async insert(restorationId: number, values: MeasurementValues, measuredById: number) {
-      const [row] = await db.insert(measurements).values({ restorationId, ...values, measuredById }).returning({ id: measurements.id });
+      const [row] = await db
+        .insert(measurements)
+        .values({ restorationId, ...values, measuredById })
+        .returning({ id: measurements.id });
       return row!.id;
     },
     async update(id: number, values: MeasurementValues) {

@@ -13,20 +13,55 @@ import { measurementsRepo, type MeasurementRow } from './measurements.repo';
 type Fields = Required<Pick<MeasurementInput, 'location' | 'quantity' | 'reading'>> & Partial<MeasurementInput>;
 
 const toMeasurement = (m: MeasurementRow): Measurement => ({
-  id: m.id, restorationId: m.restorationId, findingId: m.findingId, location: m.location, quantity: m.quantity,
-  expectedText: m.expectedText, toleranceText: m.toleranceText, ratingText: m.ratingText, readingText: m.readingText,
-  conditions: m.conditions, method: m.method, chartMeterText: m.chartMeterText, meterText: m.meterText, sourceText: m.sourceText, expected: m.expected, reading: m.reading, rating: m.rating,
-  reference: m.reference, deviation: m.deviation, verdict: m.verdict, verdictReason: m.verdictReason,
-  ownerVisible: m.ownerVisible, powerOn: m.powerOn, measuredBy: m.measuredBy, measuredAt: m.measuredAt.toISOString(),
+  id: m.id,
+  restorationId: m.restorationId,
+  findingId: m.findingId,
+  location: m.location,
+  quantity: m.quantity,
+  expectedText: m.expectedText,
+  toleranceText: m.toleranceText,
+  ratingText: m.ratingText,
+  readingText: m.readingText,
+  conditions: m.conditions,
+  method: m.method,
+  chartMeterText: m.chartMeterText,
+  meterText: m.meterText,
+  sourceText: m.sourceText,
+  expected: m.expected,
+  reading: m.reading,
+  rating: m.rating,
+  reference: m.reference,
+  deviation: m.deviation,
+  verdict: m.verdict,
+  verdictReason: m.verdictReason,
+  ownerVisible: m.ownerVisible,
+  powerOn: m.powerOn,
+  measuredBy: m.measuredBy,
+  measuredAt: m.measuredAt.toISOString(),
 });
 
 /** The bench library judges every reading; a value it cannot read is a 400 naming the field. */
 export function judge(f: Fields) {
   try {
     const v = measurementVerdict({
-      quantity: f.quantity, expected: f.expected, tolerance: f.tolerance, rating: f.rating, reading: f.reading, chartMeter: f.chartMeter, meter: f.meter, source: f.source,
+      quantity: f.quantity,
+      expected: f.expected,
+      tolerance: f.tolerance,
+      rating: f.rating,
+      reading: f.reading,
+      chartMeter: f.chartMeter,
+      meter: f.meter,
+      source: f.source,
     });
-    return { expected: v.expected, reading: v.reading, rating: v.rating, reference: v.reference, deviation: v.deviation, verdict: v.verdict, verdictReason: v.reason };
+    return {
+      expected: v.expected,
+      reading: v.reading,
+      rating: v.rating,
+      reference: v.reference,
+      deviation: v.deviation,
+      verdict: v.verdict,
+      verdictReason: v.reason,
+    };
   } catch (err) {
     if (err instanceof BenchInputError) throw new BadRequestError(err.message);
     throw err;
@@ -40,12 +75,23 @@ export function measurementsService(db: Database) {
   const find = (id: number, on: Executor = db) => measurementsRepo(on).find(id);
   async function assertFinding(tx: Executor, restorationId: number, findingId: number | null | undefined) {
     if (!findingId) return;
-    if ((await findingsRepo(tx).restorationOf(findingId)) !== restorationId) throw new BadRequestError('findingId: no such finding on this restoration.');
+    if ((await findingsRepo(tx).restorationOf(findingId)) !== restorationId)
+      throw new BadRequestError('findingId: no such finding on this restoration.');
   }
   const columns = (f: Fields) => ({
-    location: f.location, quantity: f.quantity, expectedText: f.expected ?? '', toleranceText: f.tolerance ?? '', ratingText: f.rating ?? '',
-    readingText: f.reading, conditions: f.conditions ?? '', method: f.method ?? '',
-    chartMeterText: f.chartMeter ?? '', meterText: f.meter ?? '', sourceText: f.source ?? '', findingId: f.findingId ?? null, ownerVisible: f.ownerVisible ?? false,
+    location: f.location,
+    quantity: f.quantity,
+    expectedText: f.expected ?? '',
+    toleranceText: f.tolerance ?? '',
+    ratingText: f.rating ?? '',
+    readingText: f.reading,
+    conditions: f.conditions ?? '',
+    method: f.method ?? '',
+    chartMeterText: f.chartMeter ?? '',
+    meterText: f.meter ?? '',
+    sourceText: f.source ?? '',
+    findingId: f.findingId ?? null,
+    ownerVisible: f.ownerVisible ?? false,
     powerOn: f.powerOn ?? false,
   });
 
@@ -53,7 +99,12 @@ export function measurementsService(db: Database) {
     /** The reading as the guard's subject: who may not see it gets a 404 (owners, unshared readings), then the rule. */
     async subjectOf(id: number): Promise<RestorationAndRole | undefined> {
       const m = await find(id);
-      return m && { restorationId: m.restorationId, subject: { view: 'measurements.view', context: { ownerVisible: m.ownerVisible } } };
+      return (
+        m && {
+          restorationId: m.restorationId,
+          subject: { view: 'measurements.view', context: { ownerVisible: m.ownerVisible } },
+        }
+      );
     },
     /** The readings this role may see; a reading's finding is named only when the reader may see it. */
     /** The readings this role may see (of one finding, when asked), all of them or one page (`window`). */
@@ -70,9 +121,17 @@ export function measurementsService(db: Database) {
       const input = applicableTexts(typed);
       const verdict = judge(input);
       await assertFinding(tx, restorationId, input.findingId);
-      if (input.powerOn) await assertPrePowerSignedOff(tx, restorationId, 'recording a reading taken with the set powered');
+      if (input.powerOn)
+        await assertPrePowerSignedOff(tx, restorationId, 'recording a reading taken with the set powered');
       const id = await measurementsRepo(tx).insert(restorationId, { ...columns(input), ...verdict }, userId);
-      if (verdict.verdict === 'out') await recordEvent(tx, { restorationId, kind: 'measurement-out', actorId: userId, measurementId: id, findingId: input.findingId ?? null });
+      if (verdict.verdict === 'out')
+        await recordEvent(tx, {
+          restorationId,
+          kind: 'measurement-out',
+          actorId: userId,
+          measurementId: id,
+          findingId: input.findingId ?? null,
+        });
       return id;
     },
     /** Recomputes the verdict from the merged texts whenever anything changes. */
@@ -86,11 +145,19 @@ export function measurementsService(db: Database) {
       const current = await find(id, tx);
       if (!current) throw new NotFoundError();
       const merged: Fields = applicableTexts({
-        location: patch.location ?? current.location, quantity: patch.quantity ?? current.quantity, reading: patch.reading ?? current.readingText,
-        expected: patch.expected ?? current.expectedText, tolerance: patch.tolerance ?? current.toleranceText, rating: patch.rating ?? current.ratingText,
-        conditions: patch.conditions ?? current.conditions, method: patch.method ?? current.method,
-        chartMeter: patch.chartMeter ?? current.chartMeterText, meter: patch.meter ?? current.meterText, source: patch.source ?? current.sourceText,
-        findingId: patch.findingId === undefined ? current.findingId : patch.findingId, ownerVisible: patch.ownerVisible ?? current.ownerVisible,
+        location: patch.location ?? current.location,
+        quantity: patch.quantity ?? current.quantity,
+        reading: patch.reading ?? current.readingText,
+        expected: patch.expected ?? current.expectedText,
+        tolerance: patch.tolerance ?? current.toleranceText,
+        rating: patch.rating ?? current.ratingText,
+        conditions: patch.conditions ?? current.conditions,
+        method: patch.method ?? current.method,
+        chartMeter: patch.chartMeter ?? current.chartMeterText,
+        meter: patch.meter ?? current.meterText,
+        source: patch.source ?? current.sourceText,
+        findingId: patch.findingId === undefined ? current.findingId : patch.findingId,
+        ownerVisible: patch.ownerVisible ?? current.ownerVisible,
         powerOn: patch.powerOn ?? current.powerOn,
       });
       await assertFinding(tx, current.restorationId, merged.findingId);
@@ -99,7 +166,13 @@ export function measurementsService(db: Database) {
       const verdict = judge(merged);
       await measurementsRepo(tx).update(id, { ...columns(merged), ...verdict });
       if (verdict.verdict === 'out' && current.verdict !== 'out')
-        await recordEvent(tx, { restorationId: current.restorationId, kind: 'measurement-out', actorId: userId, measurementId: id, findingId: merged.findingId ?? null });
+        await recordEvent(tx, {
+          restorationId: current.restorationId,
+          kind: 'measurement-out',
+          actorId: userId,
+          measurementId: id,
+          findingId: merged.findingId ?? null,
+        });
     },
     remove: (id: number) => repo.remove(id),
     async lineUp(restorationId: number): Promise<LineUp> {
@@ -115,7 +188,8 @@ export function measurementsService(db: Database) {
       if (positions.size !== list.length) throw new BadRequestError('Each position (V1, V2, …) may appear once.');
       await db.transaction(async (tx) => {
         await measurementsRepo(tx).replaceValves(restorationId, list);
-        if (liveChassisLikely(list.map((v) => v.type)).likely) await measurementsRepo(tx).markLiveChassis(restorationId);
+        if (liveChassisLikely(list.map((v) => v.type)).likely)
+          await measurementsRepo(tx).markLiveChassis(restorationId);
       });
       return this.lineUp(restorationId);
     },

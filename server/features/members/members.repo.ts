@@ -7,7 +7,9 @@ import { memberships, users } from '../../db/schema';
 
 /** Members in the order they joined (people who joined together by name, then id). */
 export const memberOrder = keyset('asc', [
-  { by: toMs(memberships.createdAt), kind: 'instant' }, { by: users.name, kind: 'string' }, { by: memberships.userId, kind: 'number' },
+  { by: toMs(memberships.createdAt), kind: 'instant' },
+  { by: users.name, kind: 'string' },
+  { by: memberships.userId, kind: 'number' },
 ]);
 
 export function membersRepo(db: Executor) {
@@ -18,7 +20,13 @@ export function membersRepo(db: Executor) {
     /** The restoration's members, all of them or one page (`window`). */
     async list(restorationId: number, window?: PageWindow) {
       const query = db
-        .select({ userId: users.id, name: users.name, email: users.email, role: memberships.role, since: memberships.createdAt })
+        .select({
+          userId: users.id,
+          name: users.name,
+          email: users.email,
+          role: memberships.role,
+          since: memberships.createdAt,
+        })
         .from(memberships)
         .innerJoin(users, eq(users.id, memberships.userId))
         .where(and(eq(memberships.restorationId, restorationId), memberOrder.after(window?.cursor)))

@@ -1,5 +1,10 @@
 import { Router } from 'express';
-import { invitationInputSchema, invitationParamsSchema, memberParamsSchema, memberPatchSchema } from '../../../shared/schemas/members';
+import {
+  invitationInputSchema,
+  invitationParamsSchema,
+  memberParamsSchema,
+  memberPatchSchema,
+} from '../../../shared/schemas/members';
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
@@ -28,36 +33,72 @@ export function membersRoutes(deps: AppDeps): Router {
   // In the order people joined, in pages (see shared/schemas/pagination.ts).
   router.get(`${base}/members`, requireUser, validate(paged), guard(db, 'members.view'), async (req, res) => {
     const { params, query } = input(res, paged);
-    const rows = await members.list(params.id, { limit: query.limit + 1, cursor: decodeCursor(query.cursor, memberOrder.kinds) });
-    await sendPage(req, res, rows, query.limit, (m) => [m.since, m.name, m.userId], (page) => page);
+    const rows = await members.list(params.id, {
+      limit: query.limit + 1,
+      cursor: decodeCursor(query.cursor, memberOrder.kinds),
+    });
+    await sendPage(
+      req,
+      res,
+      rows,
+      query.limit,
+      (m) => [m.since, m.name, m.userId],
+      (page) => page,
+    );
   });
-  router.patch(`${base}/members/:userId`, requireUser, validate(rolePatch), guard(db, 'members.manage'), async (_req, res) => {
-    const { params, body } = input(res, rolePatch);
-    await members.changeRole(params.id, params.userId, body.role);
-    res.json(await members.list(params.id));
-  });
-  router.delete(`${base}/members/:userId`, requireUser, validate(member), guard(db, 'members.manage'), async (_req, res) => {
-    const { params } = input(res, member);
-    await members.remove(params.id, params.userId);
-    res.status(204).end();
-  });
+  router.patch(
+    `${base}/members/:userId`,
+    requireUser,
+    validate(rolePatch),
+    guard(db, 'members.manage'),
+    async (_req, res) => {
+      const { params, body } = input(res, rolePatch);
+      await members.changeRole(params.id, params.userId, body.role);
+      res.json(await members.list(params.id));
+    },
+  );
+  router.delete(
+    `${base}/members/:userId`,
+    requireUser,
+    validate(member),
+    guard(db, 'members.manage'),
+    async (_req, res) => {
+      const { params } = input(res, member);
+      await members.remove(params.id, params.userId);
+      res.status(204).end();
+    },
+  );
   router.get(`${base}/invitations`, requireUser, validate(one), guard(db, 'members.manage'), async (_req, res) => {
     res.json(await invitations.listPending(input(res, one).params.id));
   });
   router.post(`${base}/invitations`, requireUser, validate(invite), guard(db, 'members.manage'), async (req, res) => {
     const { params, body } = input(res, invite);
     const created = await invitations.invite(params.id, body.email, body.role, req.user!.id);
-    res.status(201).json({ id: created.id, email: created.email, role: created.role, expiresAt: created.expiresAt.toISOString() });
+    res
+      .status(201)
+      .json({ id: created.id, email: created.email, role: created.role, expiresAt: created.expiresAt.toISOString() });
   });
-  router.post(`${base}/invitations/:invitationId/resend`, requireUser, validate(invitation), guard(db, 'members.manage'), async (req, res) => {
-    const { params } = input(res, invitation);
-    await invitations.resend(params.id, params.invitationId, req.user!.id);
-    res.status(204).end();
-  });
-  router.delete(`${base}/invitations/:invitationId`, requireUser, validate(invitation), guard(db, 'members.manage'), async (_req, res) => {
-    const { params } = input(res, invitation);
-    await invitations.revoke(params.id, params.invitationId);
-    res.status(204).end();
-  });
+  router.post(
+    `${base}/invitations/:invitationId/resend`,
+    requireUser,
+    validate(invitation),
+    guard(db, 'members.manage'),
+    async (req, res) => {
+      const { params } = input(res, invitation);
+      await invitations.resend(params.id, params.invitationId, req.user!.id);
+      res.status(204).end();
+    },
+  );
+  router.delete(
+    `${base}/invitations/:invitationId`,
+    requireUser,
+    validate(invitation),
+    guard(db, 'members.manage'),
+    async (_req, res) => {
+      const { params } = input(res, invitation);
+      await invitations.revoke(params.id, params.invitationId);
+      res.status(204).end();
+    },
+  );
   return router;
 }

@@ -30,13 +30,15 @@ export function membersService(db: Database) {
     async changeRole(restorationId: number, userId: number, role: Role) {
       await db.transaction(async (tx) => {
         if (role !== 'technician') await assertNotLastTechnician(tx, restorationId, userId);
-        if (!(await membersRepo(tx).setRole(restorationId, userId, role))) throw new NotFoundError('That person is not a member.');
+        if (!(await membersRepo(tx).setRole(restorationId, userId, role)))
+          throw new NotFoundError('That person is not a member.');
       });
     },
     async remove(restorationId: number, userId: number) {
       await db.transaction(async (tx) => {
         await assertNotLastTechnician(tx, restorationId, userId);
-        if (!(await membersRepo(tx).remove(restorationId, userId))) throw new NotFoundError('That person is not a member.');
+        if (!(await membersRepo(tx).remove(restorationId, userId)))
+          throw new NotFoundError('That person is not a member.');
       });
     },
   };

@@ -14,7 +14,12 @@ export function metaRoutes(deps: AppDeps): Router {
       // The link to captured mail shows only where the mail can be read (this machine).
       devMail: deps.config.devMail && isLoopbackRequest(req),
       demoAccounts: deps.config.demo
-        ? Object.entries(demoPeople).map(([role, p]) => ({ role, name: p.name, email: p.email, password: DEMO_PASSWORD }))
+        ? Object.entries(demoPeople).map(([role, p]) => ({
+            role,
+            name: p.name,
+            email: p.email,
+            password: DEMO_PASSWORD,
+          }))
         : [],
       currency: (await readWorkshopSettings(deps.db)).currency,
     };

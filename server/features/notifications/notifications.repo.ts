@@ -28,7 +28,13 @@ export function notificationsRepo(db: Executor) {
         .leftJoin(photos, notificationJoins.photo)
         .innerJoin(memberships, notificationJoins.membership)
         .leftJoin(comments, notificationJoins.comment)
-        .where(and(eq(notifications.userId, userId), notificationVisible, beforeId ? lt(notifications.id, beforeId) : undefined))
+        .where(
+          and(
+            eq(notifications.userId, userId),
+            notificationVisible,
+            beforeId ? lt(notifications.id, beforeId) : undefined,
+          ),
+        )
         .orderBy(desc(notifications.id))
         .limit(limit);
     },
@@ -36,7 +42,13 @@ export function notificationsRepo(db: Executor) {
       await db
         .update(notifications)
         .set({ readAt: sql`now()` })
-        .where(and(eq(notifications.userId, userId), isNull(notifications.readAt), ids ? inArray(notifications.id, ids) : undefined));
+        .where(
+          and(
+            eq(notifications.userId, userId),
+            isNull(notifications.readAt),
+            ids ? inArray(notifications.id, ids) : undefined,
+          ),
+        );
     },
   };
 }

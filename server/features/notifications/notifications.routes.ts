@@ -20,7 +20,14 @@ export function notificationsRoutes(deps: AppDeps): Router {
     const { query } = input(res, paged);
     const cursor = decodeCursor(query.cursor, ['number']);
     const items = await service.listFor(req.user!.id, query.limit + 1, cursor?.[0] as number | undefined);
-    await sendPage(req, res, items, query.limit, (n) => [n.id], (page) => page);
+    await sendPage(
+      req,
+      res,
+      items,
+      query.limit,
+      (n) => [n.id],
+      (page) => page,
+    );
   });
   router.post('/notifications/read', requireUser, validate(read), async (req, res) => {
     await service.markRead(req.user!.id, input(res, read).body.ids);

@@ -13,11 +13,22 @@ export async function openQuestionsFor(db: Executor, userId: number): Promise<Op
     .from(findings)
     .innerJoin(restorations, eq(restorations.id, findings.restorationId))
     .innerJoin(memberships, and(eq(memberships.restorationId, findings.restorationId), eq(memberships.userId, userId)))
-    .where(and(eq(findings.questionOpen, true), inArray(memberships.role, ['technician', 'mentor']),
-      or(isNull(findings.questionAskedById), ne(findings.questionAskedById, userId))))
+    .where(
+      and(
+        eq(findings.questionOpen, true),
+        inArray(memberships.role, ['technician', 'mentor']),
+        or(isNull(findings.questionAskedById), ne(findings.questionAskedById, userId)),
+      ),
+    )
     .orderBy(asc(findings.questionAskedAt));
   return rows.map(({ f, make, model }) => ({
-    findingId: f.id, photoId: f.photoId, restorationId: f.restorationId, set: `${make} ${model}`, number: f.number,
-    title: f.title, componentRef: f.componentRef, askedAt: (f.questionAskedAt ?? f.updatedAt).toISOString(),
+    findingId: f.id,
+    photoId: f.photoId,
+    restorationId: f.restorationId,
+    set: `${make} ${model}`,
+    number: f.number,
+    title: f.title,
+    componentRef: f.componentRef,
+    askedAt: (f.questionAskedAt ?? f.updatedAt).toISOString(),
   }));
 }

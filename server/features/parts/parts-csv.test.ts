@@ -19,9 +19,24 @@ describe('CSV formula neutralising', () => {
 
   it('when the ledger is exported, then every cell goes through it and the file still parses', () => {
     const part = {
-      id: 1, restorationId: 1, findingId: null, componentRef: 'R1', action: 'replaced', state: 'fitted', originalPart: '=cmd|calc',
-      originalRating: '', replacementPart: '', replacementRating: '', mainsPosition: 'none', quantity: 1, costMinor: null,
-      source: '@evil', testedAfter: '', notes: '\tnote', fittedAt: null, warnings: [],
+      id: 1,
+      restorationId: 1,
+      findingId: null,
+      componentRef: 'R1',
+      action: 'replaced',
+      state: 'fitted',
+      originalPart: '=cmd|calc',
+      originalRating: '',
+      replacementPart: '',
+      replacementRating: '',
+      mainsPosition: 'none',
+      quantity: 1,
+      costMinor: null,
+      source: '@evil',
+      testedAfter: '',
+      notes: '\tnote',
+      fittedAt: null,
+      warnings: [],
     } as unknown as Part;
     const [row] = parse(partsCsv([{ part, finding: null }]), { bom: true, columns: true }) as Record<string, string>[];
     expect(row!['Original part']).toBe("'=cmd|calc");
@@ -33,9 +48,24 @@ describe('CSV formula neutralising', () => {
 describe('CSV cost column', () => {
   it('when the reader may not see money, then the file has no cost column; otherwise it has one in the currency', () => {
     const part = {
-      id: 1, restorationId: 1, findingId: null, componentRef: 'C7', action: 'replaced', state: 'fitted', originalPart: 'Wax paper',
-      originalRating: '', replacementPart: 'Film', replacementRating: '', mainsPosition: 'none', quantity: 1, costMinor: 385,
-      source: '', testedAfter: '', notes: '', fittedAt: null, warnings: [],
+      id: 1,
+      restorationId: 1,
+      findingId: null,
+      componentRef: 'C7',
+      action: 'replaced',
+      state: 'fitted',
+      originalPart: 'Wax paper',
+      originalRating: '',
+      replacementPart: 'Film',
+      replacementRating: '',
+      mainsPosition: 'none',
+      quantity: 1,
+      costMinor: 385,
+      source: '',
+      testedAfter: '',
+      notes: '',
+      fittedAt: null,
+      warnings: [],
     } as unknown as Part;
     const header = (text: string) => (parse(text, { bom: true, to: 1 }) as string[][])[0]!;
     expect(header(partsCsv([{ part, finding: null }], { currency: 'GBP' }))).toContain('Cost (GBP)');

@@ -1,14 +1,19 @@
 import { stringify } from 'csv-stringify/sync';
 import { isoDate } from '../../format';
 import { minorDigits } from '../../../shared/money';
-import { mainsPositionLabels, partActionLabels, partStateLabels, type Part, type PartsCsvQuery } from '../../../shared/schemas/parts';
+import {
+  mainsPositionLabels,
+  partActionLabels,
+  partStateLabels,
+  type Part,
+  type PartsCsvQuery,
+} from '../../../shared/schemas/parts';
 
 /** A ledger line for export, with the finding it answers when the reader may see that finding. */
 export interface CsvLine {
   part: Part;
   finding: { number: number; title: string } | null;
 }
-
 
 /** Who reads the export: without `costs` (mentors see no money) the cost column is left out altogether. */
 export interface CsvReader {
@@ -28,7 +33,10 @@ function columns({ currency, timeZone }: PartsCsvQuery, reader: CsvReader) {
     ['Replacement rating', ({ part }: CsvLine) => part.replacementRating],
     ['Mains position', ({ part }: CsvLine) => mainsPositionLabels[part.mainsPosition]],
     ['Quantity', ({ part }: CsvLine) => String(part.quantity)],
-    [currency ? `Cost (${currency})` : 'Cost', ({ part }: CsvLine) => (part.costMinor === null ? '' : (part.costMinor / 10 ** digits).toFixed(digits))],
+    [
+      currency ? `Cost (${currency})` : 'Cost',
+      ({ part }: CsvLine) => (part.costMinor === null ? '' : (part.costMinor / 10 ** digits).toFixed(digits)),
+    ],
     ['Source', ({ part }: CsvLine) => part.source],
     ['Tested after', ({ part }: CsvLine) => part.testedAfter],
     ['Notes', ({ part }: CsvLine) => part.notes],
@@ -53,5 +61,8 @@ export function neutraliseFormula(cell: string): string {
 export function partsCsv(lines: CsvLine[], options: PartsCsvQuery = {}, reader: CsvReader = { costs: true }): string {
   const cols = columns(options, reader);
   const rows = [cols.map(([h]) => h), ...lines.map((line) => cols.map(([, get]) => get(line)))];
-  return stringify(rows.map((row) => row.map(neutraliseFormula)), { bom: true, record_delimiter: 'windows', quoted_string: true });
+  return stringify(
+    rows.map((row) => row.map(neutraliseFormula)),
+    { bom: true, record_delimiter: 'windows', quoted_string: true },
+  );
 }

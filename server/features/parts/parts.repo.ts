@@ -15,7 +15,12 @@ export function partsRepo(db: Executor) {
       return (options.lock ? await query.for('update') : await query)[0];
     },
     /** Ledger lines as this role may see them (reference, then id), each with its finding's number and title when the reader may see it. */
-    async withFindings(restorationId: number, role: Role, limit?: number, after?: { componentRef: string; id: number }) {
+    async withFindings(
+      restorationId: number,
+      role: Role,
+      limit?: number,
+      after?: { componentRef: string; id: number },
+    ) {
       const query = db
         .select({
           part: parts,
@@ -26,8 +31,13 @@ export function partsRepo(db: Executor) {
         .from(parts)
         .leftJoin(findings, eq(findings.id, parts.findingId))
         .leftJoin(photos, eq(photos.id, findings.photoId))
-        .where(and(eq(parts.restorationId, restorationId), visibleSql(role, 'part', { part: columnsOf(parts) }),
-          after ? sql`(${parts.componentRef}, ${parts.id}) > (${after.componentRef}, ${after.id})` : undefined))
+        .where(
+          and(
+            eq(parts.restorationId, restorationId),
+            visibleSql(role, 'part', { part: columnsOf(parts) }),
+            after ? sql`(${parts.componentRef}, ${parts.id}) > (${after.componentRef}, ${after.id})` : undefined,
+          ),
+        )
         .orderBy(asc(parts.componentRef), asc(parts.id));
       const rows = limit ? await query.limit(limit) : await query;
       return rows.map(({ part, findingVisible, findingNumber, findingTitle }) => ({

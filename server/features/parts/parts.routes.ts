@@ -26,17 +26,35 @@ export function partsRoutes({ db }: AppDeps): Router {
   router.get('/restorations/:id/parts', requireUser, validate(paged), guard(db, 'parts.view'), async (req, res) => {
     const { params, query } = input(res, paged);
     const cursor = decodeCursor(query.cursor, ['string', 'number']);
-    const rows = await service.page(params.id, roleOf(res), query.limit + 1, cursor && { componentRef: cursor[0] as string, id: cursor[1] as number });
-    await sendPage(req, res, rows, query.limit, (p) => [p.componentRef, p.id], (page) => page.map((p) => toPart(p, roleOf(res))));
+    const rows = await service.page(
+      params.id,
+      roleOf(res),
+      query.limit + 1,
+      cursor && { componentRef: cursor[0] as string, id: cursor[1] as number },
+    );
+    await sendPage(
+      req,
+      res,
+      rows,
+      query.limit,
+      (p) => [p.componentRef, p.id],
+      (page) => page.map((p) => toPart(p, roleOf(res))),
+    );
   });
   router.get('/restorations/:id/parts.csv', requireUser, validate(csv), guard(db, 'parts.view'), async (_req, res) => {
     const { params, query } = input(res, csv);
-    const lines = (await service.forExport(params.id, roleOf(res))).map(({ row, finding }) => ({ part: toPart(row, roleOf(res)), finding }));
+    const lines = (await service.forExport(params.id, roleOf(res))).map(({ row, finding }) => ({
+      part: toPart(row, roleOf(res)),
+      finding,
+    }));
     // Costs in the workshop's currency; `?currency=` still overrides it for a reader who asks. Mentors see no money,
     // so their export has no cost column at all (owners keep it, blank, as the ledger they read has no costs).
     const currency = query.currency ?? (await readWorkshopSettings(db)).currency;
     const reader = { costs: can(roleOf(res), 'money.view') };
-    res.type('text/csv; charset=utf-8').attachment(`restoration-${params.id}-parts.csv`).send(partsCsv(lines, { ...query, currency }, reader));
+    res
+      .type('text/csv; charset=utf-8')
+      .attachment(`restoration-${params.id}-parts.csv`)
+      .send(partsCsv(lines, { ...query, currency }, reader));
   });
   router.post('/restorations/:id/parts', requireUser, validate(create), guard(db, 'parts.edit'), async (req, res) => {
     const { params, body } = input(res, create);

@@ -12,16 +12,32 @@ type Row = PartRow;
 
 /** A ledger line as the caller may see it, with the bench library's warnings on the replacement. */
 export function toPart(row: Row, role: Role): Part {
-  const warnings = partWarnings({ original: `${row.originalPart} ${row.originalRating}`, replacement: `${row.replacementPart} ${row.replacementRating}`, mainsPosition: row.mainsPosition });
+  const warnings = partWarnings({
+    original: `${row.originalPart} ${row.originalRating}`,
+    replacement: `${row.replacementPart} ${row.replacementRating}`,
+    mainsPosition: row.mainsPosition,
+  });
   const owner = role === 'owner';
   // Costs follow the one policy: technicians only (mentors see no money; owners read the ledger without costs).
   const costs = can(role, 'parts.costs');
   return {
-    id: row.id, restorationId: row.restorationId, findingId: row.findingId, componentRef: row.componentRef,
-    originalPart: row.originalPart, originalRating: row.originalRating, replacementPart: row.replacementPart,
-    replacementRating: row.replacementRating, action: row.action, state: row.state, mainsPosition: row.mainsPosition,
-    quantity: row.quantity, costMinor: costs ? row.costMinor : null, source: owner ? '' : row.source, testedAfter: row.testedAfter,
-    notes: owner ? '' : row.notes, fittedAt: row.fittedAt?.toISOString() ?? null,
+    id: row.id,
+    restorationId: row.restorationId,
+    findingId: row.findingId,
+    componentRef: row.componentRef,
+    originalPart: row.originalPart,
+    originalRating: row.originalRating,
+    replacementPart: row.replacementPart,
+    replacementRating: row.replacementRating,
+    action: row.action,
+    state: row.state,
+    mainsPosition: row.mainsPosition,
+    quantity: row.quantity,
+    costMinor: costs ? row.costMinor : null,
+    source: owner ? '' : row.source,
+    testedAfter: row.testedAfter,
+    notes: owner ? '' : row.notes,
+    fittedAt: row.fittedAt?.toISOString() ?? null,
     // The bench checks on a replacement are the technician's working notes, not the owner's.
     warnings: !owner && (row.action === 'replaced' || row.action === 'restuffed') ? warnings : [],
   };
@@ -30,14 +46,19 @@ export function toPart(row: Row, role: Role): Part {
 export function partsService(db: Database) {
   async function assertFinding(tx: Executor, restorationId: number, findingId: number | null | undefined) {
     if (!findingId) return;
-    if ((await findingsRepo(tx).restorationOf(findingId)) !== restorationId) throw new BadRequestError('findingId: no such finding on this restoration.');
+    if ((await findingsRepo(tx).restorationOf(findingId)) !== restorationId)
+      throw new BadRequestError('findingId: no such finding on this restoration.');
   }
   const repo = partsRepo(db);
   const find = (id: number) => repo.find(id);
   const withFindings = repo.withFindings;
   /** One page of the ledger as this role may see it, in its order (reference, then id), after the part `after` names. */
-  const page = async (restorationId: number, role: Role, limit?: number, after?: { componentRef: string; id: number }): Promise<Row[]> =>
-    (await withFindings(restorationId, role, limit, after)).map(({ row }) => row);
+  const page = async (
+    restorationId: number,
+    role: Role,
+    limit?: number,
+    after?: { componentRef: string; id: number },
+  ): Promise<Row[]> => (await withFindings(restorationId, role, limit, after)).map(({ row }) => row);
   return {
     async restorationOf(id: number) {
       return (await find(id))?.restorationId;
@@ -58,8 +79,20 @@ export function partsService(db: Database) {
       const fitted = fittedAt && input.action !== 'kept-original';
       return db.transaction(async (tx) => {
         await assertFinding(tx, restorationId, input.findingId);
-        const row = await partsRepo(tx).insert({ ...input, restorationId, findingId: input.findingId ?? null, fittedAt });
-        if (fitted) await recordEvent(tx, { restorationId, kind: 'part-fitted', actorId, partId: row.id, findingId: row.findingId });
+        const row = await partsRepo(tx).insert({
+          ...input,
+          restorationId,
+          findingId: input.findingId ?? null,
+          fittedAt,
+        });
+        if (fitted)
+          await recordEvent(tx, {
+            restorationId,
+            kind: 'part-fitted',
+            actorId,
+            partId: row.id,
+            findingId: row.findingId,
+          });
         return row;
       });
     },
@@ -70,9 +103,23 @@ export function partsService(db: Database) {
         if (!before) throw new NotFoundError();
         if (patch.findingId !== undefined) await assertFinding(tx, before.restorationId, patch.findingId);
         const becameFitted = patch.state === 'fitted' && before.state !== 'fitted';
-        const values = { ...patch, ...(becameFitted ? { fittedAt: new Date() } : patch.state && patch.state !== 'fitted' ? { fittedAt: null } : {}) };
+        const values = {
+          ...patch,
+          ...(becameFitted
+            ? { fittedAt: new Date() }
+            : patch.state && patch.state !== 'fitted'
+              ? { fittedAt: null }
+              : {}),
+        };
         const row = await partsRepo(tx).update(id, values);
-        if (becameFitted && row.action !== 'kept-original') await recordEvent(tx, { restorationId: before.restorationId, kind: 'part-fitted', actorId, partId: id, findingId: row.findingId });
+        if (becameFitted && row.action !== 'kept-original')
+          await recordEvent(tx, {
+            restorationId: before.restorationId,
+            kind: 'part-fitted',
+            actorId,
+            partId: id,
+            findingId: row.findingId,
+          });
         return row;
       });
     },

@@ -10,7 +10,8 @@ type Status = (typeof payments.$inferSelect)['status'];
 
 /** What a checkout session event says about its payment; null when it says nothing (an expired session never paid). */
 function sessionOutcome(type: string, s: Stripe.Checkout.Session): Status | null {
-  if (type === 'checkout.session.completed') return s.payment_status === 'paid' ? 'succeeded' : s.payment_status === 'unpaid' ? 'pending' : null;
+  if (type === 'checkout.session.completed')
+    return s.payment_status === 'paid' ? 'succeeded' : s.payment_status === 'unpaid' ? 'pending' : null;
   if (type === 'checkout.session.async_payment_succeeded') return 'succeeded';
   if (type === 'checkout.session.async_payment_failed' || type === 'checkout.session.expired') return 'failed';
   return null;
@@ -36,15 +37,34 @@ async function fromSession(tx: Tx, type: string, s: Stripe.Checkout.Session, at:
   if (!status || !Number.isInteger(invoiceId) || !s.amount_total || !s.currency) return null;
   const invoice = await lockInvoice(tx, invoiceId).catch(() => null);
   if (!invoice) return null;
-  if (s.currency.toUpperCase() !== invoice.currency) throw new ConflictError(`Checkout ${s.id} is in ${s.currency}, the invoice in ${invoice.currency}.`);
+  if (s.currency.toUpperCase() !== invoice.currency)
+    throw new ConflictError(`Checkout ${s.id} is in ${s.currency}, the invoice in ${invoice.currency}.`);
   const [existing] = await tx.select().from(payments).where(eq(payments.checkoutSessionId, s.id));
   // An expiry or failure of a checkout never recorded is nothing to show: only a completed checkout becomes a line.
   if (!existing && type === 'checkout.session.expired') return null;
-  const row = existing ?? (await tx.insert(payments).values({
-    invoiceId, restorationId: invoice.restorationId, kind: 'payment', method: 'card', status: 'pending', amount: s.amount_total,
-    currency: invoice.currency, checkoutSessionId: s.id, paymentIntentId: idOf(s.payment_intent),
-  }).returning())[0]!;
-  if (!row.paymentIntentId && s.payment_intent) await tx.update(payments).set({ paymentIntentId: idOf(s.payment_intent) }).where(eq(payments.id, row.id));
+  const row =
+    existing ??
+    (
+      await tx
+        .insert(payments)
+        .values({
+          invoiceId,
+          restorationId: invoice.restorationId,
+          kind: 'payment',
+          method: 'card',
+          status: 'pending',
+          amount: s.amount_total,
+          currency: invoice.currency,
+          checkoutSessionId: s.id,
+          paymentIntentId: idOf(s.payment_intent),
+        })
+        .returning()
+    )[0]!;
+  if (!row.paymentIntentId && s.payment_intent)
+    await tx
+      .update(payments)
+      .set({ paymentIntentId: idOf(s.payment_intent) })
+      .where(eq(payments.id, row.id));
   if (await advance(tx, row, status, at)) {
     // Money taken for an invoice voided (or paid another way) meanwhile is kept on record, never dropped, and
     // flagged with what was not due, for a technician to refund: the webhook itself never moves money.
@@ -59,14 +79,29 @@ async function fromSession(tx: Tx, type: string, s: Stripe.Checkout.Session, at:
 async function fromRefund(tx: Tx, r: Stripe.Refund, at: Date): Promise<number | null> {
   const intent = idOf(r.payment_intent);
   if (!intent) return null;
-  const [paid] = await tx.select().from(payments).where(and(eq(payments.paymentIntentId, intent), eq(payments.kind, 'payment')));
+  const [paid] = await tx
+    .select()
+    .from(payments)
+    .where(and(eq(payments.paymentIntentId, intent), eq(payments.kind, 'payment')));
   // Not known yet (its checkout event is still on its way): answer an error, so the service sends this one again later.
   if (!paid) throw new ConflictError(`No payment recorded yet for ${intent}; send the refund again later.`);
   const invoice = await lockInvoice(tx, paid.invoiceId);
-  await tx.insert(payments).values({
-    invoiceId: paid.invoiceId, restorationId: paid.restorationId, kind: 'refund', method: 'card', status: 'pending', amount: r.amount,
-    currency: paid.currency, paymentIntentId: intent, refundId: r.id, refundOfId: paid.id, recordedById: Number(r.metadata?.recordedById) || null,
-  }).onConflictDoNothing({ target: payments.refundId });
+  await tx
+    .insert(payments)
+    .values({
+      invoiceId: paid.invoiceId,
+      restorationId: paid.restorationId,
+      kind: 'refund',
+      method: 'card',
+      status: 'pending',
+      amount: r.amount,
+      currency: paid.currency,
+      paymentIntentId: intent,
+      refundId: r.id,
+      refundOfId: paid.id,
+      recordedById: Number(r.metadata?.recordedById) || null,
+    })
+    .onConflictDoNothing({ target: payments.refundId });
   const [row] = await tx.select().from(payments).where(eq(payments.refundId, r.id)).for('update');
   if (await advance(tx, row!, refundOutcome(r), at)) {
     await settleInvoice(tx, paid.invoiceId);
@@ -81,12 +116,18 @@ async function fromRefund(tx: Tx, r: Stripe.Refund, at: Date): Promise<number | 
  */
 export async function applyPaymentEvent(db: Database, event: Stripe.Event): Promise<boolean> {
   return db.transaction(async (tx) => {
-    const [fresh] = await tx.insert(paymentEvents).values({ id: event.id, type: event.type }).onConflictDoNothing().returning();
+    const [fresh] = await tx
+      .insert(paymentEvents)
+      .values({ id: event.id, type: event.type })
+      .onConflictDoNothing()
+      .returning();
     if (!fresh) return false;
     const at = new Date(event.created * 1000);
     let paymentId: number | null = null;
-    if (event.type.startsWith('checkout.session.')) paymentId = await fromSession(tx, event.type, event.data.object as Stripe.Checkout.Session, at);
-    else if (event.type === 'refund.created' || event.type === 'refund.updated') paymentId = await fromRefund(tx, event.data.object as Stripe.Refund, at);
+    if (event.type.startsWith('checkout.session.'))
+      paymentId = await fromSession(tx, event.type, event.data.object as Stripe.Checkout.Session, at);
+    else if (event.type === 'refund.created' || event.type === 'refund.updated')
+      paymentId = await fromRefund(tx, event.data.object as Stripe.Refund, at);
     else if (event.type === 'charge.refunded')
       for (const r of (event.data.object as Stripe.Charge).refunds?.data ?? []) paymentId = await fromRefund(tx, r, at);
     if (paymentId) await tx.update(paymentEvents).set({ paymentId }).where(eq(paymentEvents.id, event.id));

@@ -21,7 +21,8 @@ export async function lockInvoice(tx: Tx, invoiceId: number): Promise<InvoiceRow
 }
 
 /** What is still to pay on an invoice (`amountLeft`): nothing on a void one, a credit note, or one settled or refunded. */
-export const outstanding = (i: InvoiceRow) => amountLeft({ kind: i.kind, voided: i.voidedAt !== null, due: i.due, paid: i.paid, refunded: i.refunded });
+export const outstanding = (i: InvoiceRow) =>
+  amountLeft({ kind: i.kind, voided: i.voidedAt !== null, due: i.due, paid: i.paid, refunded: i.refunded });
 
 /**
  * Recomputes the invoice's `paid` (succeeded payments less succeeded refunds) and `refunded`, so settling twice
@@ -33,8 +34,12 @@ export async function settleInvoice(tx: Tx, invoiceId: number) {
       received: sql<number>`coalesce(sum(${payments.amount}) filter (where ${payments.kind} = 'payment'), 0)::int`,
       refunded: sql<number>`coalesce(sum(${payments.amount}) filter (where ${payments.kind} = 'refund'), 0)::int`,
     })
-    .from(payments).where(and(eq(payments.invoiceId, invoiceId), eq(payments.status, 'succeeded')));
-  await tx.update(invoices).set({ paid: received - refunded, refunded }).where(eq(invoices.id, invoiceId));
+    .from(payments)
+    .where(and(eq(payments.invoiceId, invoiceId), eq(payments.status, 'succeeded')));
+  await tx
+    .update(invoices)
+    .set({ paid: received - refunded, refunded })
+    .where(eq(invoices.id, invoiceId));
 }
 
 /**
@@ -43,33 +48,57 @@ export async function settleInvoice(tx: Tx, invoiceId: number) {
  */
 export async function recordPaymentEvent(tx: Tx, invoice: InvoiceRow, p: Row, actorId: number | null) {
   await tx.insert(events).values({
-    restorationId: invoice.restorationId, kind: p.kind === 'refund' ? 'payment-refunded' : 'payment-received', actorId,
+    restorationId: invoice.restorationId,
+    kind: p.kind === 'refund' ? 'payment-refunded' : 'payment-received',
+    actorId,
     data: { invoiceId: invoice.id, number: invoice.number, kind: invoice.kind, method: p.method, paymentId: p.id },
   });
   const what = `${invoiceKindLabels[invoice.kind].toLowerCase()} no. ${invoice.number}`;
   const amount = formatMoney({ amount: p.amount, currency: p.currency }, 'en-GB');
-  const summary = p.kind === 'refund' ? `Refund of ${amount} on ${what} (${paymentMethodLabels[p.method].toLowerCase()})`
-    : `Payment of ${amount} received for ${what} (${paymentMethodLabels[p.method].toLowerCase()})${p.refundDue
-      ? `; ${formatMoney({ amount: p.refundDue, currency: p.currency }, 'en-GB')} of it was not due (${invoice.voidedAt ? 'the invoice is void' : 'already paid'}) and is to be refunded` : ''}`;
+  const summary =
+    p.kind === 'refund'
+      ? `Refund of ${amount} on ${what} (${paymentMethodLabels[p.method].toLowerCase()})`
+      : `Payment of ${amount} received for ${what} (${paymentMethodLabels[p.method].toLowerCase()})${
+          p.refundDue
+            ? `; ${formatMoney({ amount: p.refundDue, currency: p.currency }, 'en-GB')} of it was not due (${invoice.voidedAt ? 'the invoice is void' : 'already paid'}) and is to be refunded`
+            : ''
+        }`;
   const people = await notificationsRepo(tx).membersWithRole(invoice.restorationId, ['technician', 'owner']);
-  await notificationsRepo(tx).insert(people.filter((m) => m.userId !== actorId && mayView(m.role, 'payment', {}))
-    .map((m) => ({ userId: m.userId, restorationId: invoice.restorationId, kind: 'payment' as const, summary })));
+  await notificationsRepo(tx).insert(
+    people
+      .filter((m) => m.userId !== actorId && mayView(m.role, 'payment', {}))
+      .map((m) => ({ userId: m.userId, restorationId: invoice.restorationId, kind: 'payment' as const, summary })),
+  );
 }
 
 function present(p: Row, invoice: { number: number; kind: InvoiceRow['kind'] }, all: Row[]): Payment {
-  const refunded = p.kind === 'payment'
-    ? all.filter((r) => r.refundOfId === p.id && r.status === 'succeeded').reduce((a, r) => a + r.amount, 0) : 0;
+  const refunded =
+    p.kind === 'payment'
+      ? all.filter((r) => r.refundOfId === p.id && r.status === 'succeeded').reduce((a, r) => a + r.amount, 0)
+      : 0;
   return {
-    id: p.id, invoiceId: p.invoiceId, invoiceNumber: invoice.number, invoiceKind: invoice.kind, kind: p.kind, method: p.method, status: p.status,
-    amount: { amount: p.amount, currency: p.currency }, refunded: { amount: refunded, currency: p.currency },
+    id: p.id,
+    invoiceId: p.invoiceId,
+    invoiceNumber: invoice.number,
+    invoiceKind: invoice.kind,
+    kind: p.kind,
+    method: p.method,
+    status: p.status,
+    amount: { amount: p.amount, currency: p.currency },
+    refunded: { amount: refunded, currency: p.currency },
     refundDue: { amount: Math.max(0, p.refundDue - refunded), currency: p.currency },
-    refundOfId: p.refundOfId, checkoutSessionId: p.checkoutSessionId, receivedOn: p.receivedOn, createdAt: p.createdAt.toISOString(),
+    refundOfId: p.refundOfId,
+    checkoutSessionId: p.checkoutSessionId,
+    receivedOn: p.receivedOn,
+    createdAt: p.createdAt.toISOString(),
   };
 }
 
 /** A restoration's payments and refunds, oldest first, as far as the role may see them (mentors: none). */
 export async function listPayments(db: Executor, restorationId: number, role: Role, only?: number): Promise<Payment[]> {
-  const rows = await db.select({ p: payments, number: invoices.number, kind: invoices.kind }).from(payments)
+  const rows = await db
+    .select({ p: payments, number: invoices.number, kind: invoices.kind })
+    .from(payments)
     .innerJoin(invoices, eq(invoices.id, payments.invoiceId))
     .where(and(eq(payments.restorationId, restorationId), visibleSql(role, 'payment', {})))
     .orderBy(asc(payments.createdAt), asc(payments.id));

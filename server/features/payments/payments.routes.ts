@@ -39,23 +39,42 @@ export function paymentWebhookRoute({ db, payments }: AppDeps): Router {
 export function paymentsRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const service = paymentsService(deps);
-  const ofInvoice = (_req: Request, res: Response) => service.restorationOfInvoice(input(res, ofInvoiceId).params.invoiceId);
+  const ofInvoice = (_req: Request, res: Response) =>
+    service.restorationOfInvoice(input(res, ofInvoiceId).params.invoiceId);
   const ofPayment = (_req: Request, res: Response) => service.restorationOfPayment(input(res, refund).params.paymentId);
   const router = Router();
   router.get('/restorations/:id/payments', requireUser, validate(one), guard(db, 'money.view'), async (_req, res) => {
     res.json(await service.list(input(res, one).params.id, roleOf(res)));
   });
-  router.post('/invoices/:invoiceId/checkout', requireUser, validate(ofInvoiceId), guard(db, 'payments.checkout', ofInvoice), async (_req, res) => {
-    res.json(await service.checkout(input(res, ofInvoiceId).params.invoiceId, roleOf(res)));
-  });
-  router.post('/invoices/:invoiceId/payments', requireUser, validate(manual), guard(db, 'payments.record', ofInvoice), async (req, res) => {
-    const { params, body } = input(res, manual);
-    res.status(201).json(await service.record(params.invoiceId, body, req.user!.id, roleOf(res)));
-  });
-  router.post('/payments/:paymentId/refund', requireUser, validate(refund), guard(db, 'payments.record', ofPayment), async (req, res) => {
-    const { params, body } = input(res, refund);
-    const answer = await service.refund(params.paymentId, body, req.user!.id, roleOf(res));
-    res.status(answer.status).json(answer.body);
-  });
+  router.post(
+    '/invoices/:invoiceId/checkout',
+    requireUser,
+    validate(ofInvoiceId),
+    guard(db, 'payments.checkout', ofInvoice),
+    async (_req, res) => {
+      res.json(await service.checkout(input(res, ofInvoiceId).params.invoiceId, roleOf(res)));
+    },
+  );
+  router.post(
+    '/invoices/:invoiceId/payments',
+    requireUser,
+    validate(manual),
+    guard(db, 'payments.record', ofInvoice),
+    async (req, res) => {
+      const { params, body } = input(res, manual);
+      res.status(201).json(await service.record(params.invoiceId, body, req.user!.id, roleOf(res)));
+    },
+  );
+  router.post(
+    '/payments/:paymentId/refund',
+    requireUser,
+    validate(refund),
+    guard(db, 'payments.record', ofPayment),
+    async (req, res) => {
+      const { params, body } = input(res, refund);
+      const answer = await service.refund(params.paymentId, body, req.user!.id, roleOf(res));
+      res.status(answer.status).json(answer.body);
+    },
+  );
   return router;
 }

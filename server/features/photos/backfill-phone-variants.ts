@@ -9,7 +9,11 @@ import { phoneVariant } from './photo-pipeline';
  * One-off backfill, safe to run at every start: photos stored before the phone variant existed get it,
  * cut from their display image. Photos that already have it are only checked (one HEAD each).
  */
-export async function backfillPhoneVariants(db: Database, storage: Storage, logger?: Pick<Logger, 'info' | 'warn'>): Promise<number> {
+export async function backfillPhoneVariants(
+  db: Database,
+  storage: Storage,
+  logger?: Pick<Logger, 'info' | 'warn'>,
+): Promise<number> {
   const rows = await db.select({ id: photos.id, storageKey: photos.storageKey }).from(photos);
   let made = 0;
   for (const row of rows) {

@@ -4,7 +4,12 @@ import sharp, { type Metadata } from 'sharp';
 import { HttpError } from '../../http/errors';
 
 /** Formats accepted, decided from the content (sharp's own sniffing), never from the file name. */
-const ACCEPTED: Record<string, string> = { jpeg: 'image/jpeg', png: 'image/png', webp: 'image/webp', heif: 'image/heif' };
+const ACCEPTED: Record<string, string> = {
+  jpeg: 'image/jpeg',
+  png: 'image/png',
+  webp: 'image/webp',
+  heif: 'image/heif',
+};
 export const DISPLAY_PX = 2560;
 export const THUMB_PX = 400;
 /** The phone variant: sharp on a phone screen (about 400 CSS px at 3×) at a fraction of the display's bytes. */
@@ -47,10 +52,19 @@ const decodeSlots = pLimit(2);
 export const withDecodeSlot = <T>(work: () => Promise<T>) => decodeSlots(work);
 
 const unsupported = (message?: string) =>
-  new HttpError(415, 'unsupported_type', message ?? 'That file is not a photo Gridleak can read: send JPEG, PNG, WebP or AVIF (HEIC may need exporting as JPEG).');
+  new HttpError(
+    415,
+    'unsupported_type',
+    message ??
+      'That file is not a photo Gridleak can read: send JPEG, PNG, WebP or AVIF (HEIC may need exporting as JPEG).',
+  );
 
 /** Checks, orients and resizes one uploaded image (a file or bytes); served variants carry no metadata (GPS above all). */
-export function processPhoto(path: string | Buffer, limits: PipelineLimits, options: PipelineOptions = {}): Promise<ProcessedPhoto> {
+export function processPhoto(
+  path: string | Buffer,
+  limits: PipelineLimits,
+  options: PipelineOptions = {},
+): Promise<ProcessedPhoto> {
   return decodeSlots(async () => {
     const open = () => sharp(path, { limitInputPixels: limits.maxPixels, failOn: 'error', sequentialRead: true });
     let meta: Metadata;
@@ -62,19 +76,30 @@ export function processPhoto(path: string | Buffer, limits: PipelineLimits, opti
     const contentType = { ...ACCEPTED, ...options.formats }[meta.format ?? ''];
     if (!contentType || !meta.width || !meta.height) throw unsupported(options.unsupportedMessage);
     if (meta.width * meta.height > limits.maxPixels)
-      throw new HttpError(413, 'too_large', `The image is ${meta.width}×${meta.height} pixels; the limit is ${Math.round(limits.maxPixels / 1e6)} megapixels.`);
+      throw new HttpError(
+        413,
+        'too_large',
+        `The image is ${meta.width}×${meta.height} pixels; the limit is ${Math.round(limits.maxPixels / 1e6)} megapixels.`,
+      );
     const rotated = (meta.orientation ?? 1) >= 5;
     try {
       // A large variant is read once from the original; the display image then comes from it.
       const large = options.largePx
-        ? await open().autoOrient().resize({ width: options.largePx, height: options.largePx, fit: 'inside', withoutEnlargement: true }).webp({ quality: 90 }).toBuffer()
+        ? await open()
+            .autoOrient()
+            .resize({ width: options.largePx, height: options.largePx, fit: 'inside', withoutEnlargement: true })
+            .webp({ quality: 90 })
+            .toBuffer()
         : undefined;
       const display = await (large ? sharp(large) : open().autoOrient())
         .resize({ width: DISPLAY_PX, height: DISPLAY_PX, fit: 'inside', withoutEnlargement: true })
         .webp({ quality: 82 })
         .toBuffer();
       // The smaller variants come from the display image: far less to decode than the original.
-      const [phone, thumb] = await Promise.all([options.phone === false ? Buffer.alloc(0) : phoneVariant(display), sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer()]);
+      const [phone, thumb] = await Promise.all([
+        options.phone === false ? Buffer.alloc(0) : phoneVariant(display),
+        sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer(),
+      ]);
       return {
         contentType: meta.format === 'heif' && meta.compression === 'av1' ? 'image/avif' : contentType,
         width: rotated ? meta.height : meta.width,
@@ -86,14 +111,21 @@ export function processPhoto(path: string | Buffer, limits: PipelineLimits, opti
         ...(large ? { large } : {}),
       };
     } catch {
-      throw new HttpError(400, 'damaged_image', 'The image is damaged or incomplete; try sending it again, or export it afresh.');
+      throw new HttpError(
+        400,
+        'damaged_image',
+        'The image is damaged or incomplete; try sending it again, or export it afresh.',
+      );
     }
   });
 }
 
 /** The phone-sized variant from a display image (also used to backfill photos stored before it existed). */
 export function phoneVariant(display: Buffer): Promise<Buffer> {
-  return sharp(display).resize({ width: PHONE_PX, height: PHONE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
+  return sharp(display)
+    .resize({ width: PHONE_PX, height: PHONE_PX, fit: 'inside', withoutEnlargement: true })
+    .webp({ quality: 78 })
+    .toBuffer();
 }
 
 function captureTime(exif: Buffer | undefined): Date | null {

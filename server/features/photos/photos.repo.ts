@@ -6,17 +6,26 @@ import { keyset, toMs, type PageWindow } from '../../db/keyset';
 import { findings, memberships, photos, users } from '../../db/schema';
 import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-sql';
 
-export type PhotoRow = typeof photos.$inferSelect & { uploadedBy: string | null; findingCounts?: Partial<Record<Status, number>> };
+export type PhotoRow = typeof photos.$inferSelect & {
+  uploadedBy: string | null;
+  findingCounts?: Partial<Record<Status, number>>;
+};
 type NewPhoto = typeof photos.$inferInsert;
 
 const columns = { photo: photos, uploadedBy: users.name };
 /** Oldest first (the order they were taken in at the bench), then by id. */
-export const photoOrder = keyset('asc', [{ by: toMs(photos.createdAt), kind: 'instant' }, { by: photos.id, kind: 'number' }]);
+export const photoOrder = keyset('asc', [
+  { by: toMs(photos.createdAt), kind: 'instant' },
+  { by: photos.id, kind: 'number' },
+]);
 export const photoCursor = (row: PhotoRow) => [row.createdAt.toISOString(), row.id];
 
 export function photosRepo(db: Executor) {
   const select = () => db.select(columns).from(photos).leftJoin(users, eq(users.id, photos.uploadedById));
-  const flat = (r: { photo: typeof photos.$inferSelect; uploadedBy: string | null }): PhotoRow => ({ ...r.photo, uploadedBy: r.uploadedBy });
+  const flat = (r: { photo: typeof photos.$inferSelect; uploadedBy: string | null }): PhotoRow => ({
+    ...r.photo,
+    uploadedBy: r.uploadedBy,
+  });
   return {
     /**
      * The restoration's photos this role may see, all of them or one page (`window`), each with its findings counted
@@ -32,9 +41,18 @@ export function photosRepo(db: Executor) {
         .select({ ...columns, findingCounts })
         .from(photos)
         .leftJoin(users, eq(users.id, photos.uploadedById))
-        .where(and(eq(photos.restorationId, restorationId), visibleSql(role, 'photo', { photo: columnsOf(photos) }), photoOrder.after(window?.cursor)))
+        .where(
+          and(
+            eq(photos.restorationId, restorationId),
+            visibleSql(role, 'photo', { photo: columnsOf(photos) }),
+            photoOrder.after(window?.cursor),
+          ),
+        )
         .orderBy(...photoOrder.orderBy);
-      return (window ? await query.limit(window.limit) : await query).map((r) => ({ ...flat(r), findingCounts: r.findingCounts }));
+      return (window ? await query.limit(window.limit) : await query).map((r) => ({
+        ...flat(r),
+        findingCounts: r.findingCounts,
+      }));
     },
     async find(id: number): Promise<PhotoRow | undefined> {
       const [row] = await select().where(eq(photos.id, id));
@@ -43,11 +61,17 @@ export function photosRepo(db: Executor) {
     /** The photo's restoration, the reader's role there (if a member) and its findings version, in one query. */
     async accessOf(id: number, userId: number) {
       const [row] = await db
-        .select({ restorationId: photos.restorationId, findingsVersion: photos.findingsVersion, role: memberships.role })
+        .select({
+          restorationId: photos.restorationId,
+          findingsVersion: photos.findingsVersion,
+          role: memberships.role,
+        })
         .from(photos)
         .leftJoin(memberships, and(eq(memberships.restorationId, photos.restorationId), eq(memberships.userId, userId)))
         .where(eq(photos.id, id));
-      return row && { restorationId: row.restorationId, findingsVersion: row.findingsVersion, role: row.role ?? undefined };
+      return (
+        row && { restorationId: row.restorationId, findingsVersion: row.findingsVersion, role: row.role ?? undefined }
+      );
     },
     async restorationOf(id: number): Promise<number | undefined> {
       const [row] = await db.select({ restorationId: photos.restorationId }).from(photos).where(eq(photos.id, id));

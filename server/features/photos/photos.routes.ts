@@ -22,11 +22,20 @@ export function photosRoutes(deps: AppDeps): Router {
   const router = Router();
 
   // Oldest first, in pages (see shared/schemas/pagination.ts).
-  router.get('/restorations/:id/photos', requireUser, validate(paged), guard(db, 'restoration.view'), async (req, res) => {
-    const { params, query } = input(res, paged);
-    const rows = await service.page(params.id, roleOf(res), { limit: query.limit + 1, cursor: decodeCursor(query.cursor, photoOrder.kinds) });
-    await sendPage(req, res, rows, query.limit, photoCursor, (page) => service.present(page, roleOf(res)));
-  });
+  router.get(
+    '/restorations/:id/photos',
+    requireUser,
+    validate(paged),
+    guard(db, 'restoration.view'),
+    async (req, res) => {
+      const { params, query } = input(res, paged);
+      const rows = await service.page(params.id, roleOf(res), {
+        limit: query.limit + 1,
+        cursor: decodeCursor(query.cursor, photoOrder.kinds),
+      });
+      await sendPage(req, res, rows, query.limit, photoCursor, (page) => service.present(page, roleOf(res)));
+    },
+  );
   // Permission is settled before a byte of the body is read.
   router.post('/restorations/:id/photos', requireUser, validate(one), guard(db, 'photos.upload'), async (req, res) => {
     const restorationId = input(res, one).params.id;

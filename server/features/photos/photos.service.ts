@@ -12,7 +12,13 @@ import { processPhoto } from './photo-pipeline';
 import type { PageWindow } from '../../db/keyset';
 import { photosRepo, type PhotoRow } from './photos.repo';
 
-const extension: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'image/heif': 'heic', 'image/avif': 'avif' };
+const extension: Record<string, string> = {
+  'image/jpeg': 'jpg',
+  'image/png': 'png',
+  'image/webp': 'webp',
+  'image/heif': 'heic',
+  'image/avif': 'avif',
+};
 
 export type PhotosDeps = Pick<AppDeps, 'db' | 'storage'> & { config: Pick<AppDeps['config'], 'uploads'> };
 
@@ -25,12 +31,26 @@ export function photosService({ db, storage, config }: PhotosDeps) {
       storage.getSignedUrl(keys.thumb),
       storage.getSignedUrl(keys.phone),
       storage.getSignedUrl(keys.display),
-      can(role, 'photos.original') ? storage.getSignedUrl(keys.original, { downloadName: `photo-${row.id}.${extension[row.contentType] ?? 'img'}` }) : undefined,
+      can(role, 'photos.original')
+        ? storage.getSignedUrl(keys.original, {
+            downloadName: `photo-${row.id}.${extension[row.contentType] ?? 'img'}`,
+          })
+        : undefined,
     ]);
     return {
-      id: row.id, restorationId: row.restorationId, view: row.view, phase: row.phase, caption: row.caption,
-      ownerVisible: row.ownerVisible, width: row.width, height: row.height, takenAt: row.takenAt?.toISOString() ?? null,
-      uploadedAt: row.createdAt.toISOString(), uploadedBy: row.uploadedBy, contentType: row.contentType, sizeBytes: row.sizeBytes,
+      id: row.id,
+      restorationId: row.restorationId,
+      view: row.view,
+      phase: row.phase,
+      caption: row.caption,
+      ownerVisible: row.ownerVisible,
+      width: row.width,
+      height: row.height,
+      takenAt: row.takenAt?.toISOString() ?? null,
+      uploadedAt: row.createdAt.toISOString(),
+      uploadedBy: row.uploadedBy,
+      contentType: row.contentType,
+      sizeBytes: row.sizeBytes,
       urls: original ? { thumb, phone, display, original } : { thumb, phone, display },
       ...(row.findingCounts ? { findingCounts: row.findingCounts } : {}),
     };
@@ -58,9 +78,16 @@ export function photosService({ db, storage, config }: PhotosDeps) {
      * Checks and stores one uploaded file. Objects go up first, the row last; on any failure the
      * objects already stored are deleted, so a failed upload leaves neither.
      */
-    async ingest(restorationId: number, file: { path: string; size: number }, rawFields: Record<string, unknown>, uploadedById: number | null, signal?: AbortSignal) {
+    async ingest(
+      restorationId: number,
+      file: { path: string; size: number },
+      rawFields: Record<string, unknown>,
+      uploadedById: number | null,
+      signal?: AbortSignal,
+    ) {
       const fields = photoUploadFieldsSchema.safeParse(rawFields);
-      if (!fields.success) throw new BadRequestError(fields.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
+      if (!fields.success)
+        throw new BadRequestError(fields.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
       const processed = await processPhoto(file.path, { maxPixels: config.uploads.maxPixels });
       const storageKey = `${restorationId}/${randomUUID()}`;
       const keys = photoKeys(storageKey);
@@ -70,7 +97,9 @@ export function photosService({ db, storage, config }: PhotosDeps) {
         // A stream cannot be replayed by the SDK's own retries: a failed attempt opens the file again (three in all, as for buffers).
         for (let attempt = 1; ; attempt++) {
           try {
-            await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size, { signal });
+            await storage.putObject(keys.original, createReadStream(file.path), processed.contentType, file.size, {
+              signal,
+            });
             break;
           } catch (err) {
             if (attempt >= 3 || signal?.aborted) throw err;
@@ -83,10 +112,23 @@ export function photosService({ db, storage, config }: PhotosDeps) {
         // The row and its history line together: if either fails, neither stays and the objects go below.
         return await db.transaction(async (tx) => {
           const id = await photosRepo(tx).insert({
-            restorationId, storageKey, ...fields.data, width: processed.width, height: processed.height,
-            takenAt: processed.takenAt, contentType: processed.contentType, sizeBytes: file.size, uploadedById,
+            restorationId,
+            storageKey,
+            ...fields.data,
+            width: processed.width,
+            height: processed.height,
+            takenAt: processed.takenAt,
+            contentType: processed.contentType,
+            sizeBytes: file.size,
+            uploadedById,
           });
-          await recordEvent(tx, { restorationId, kind: 'photo-added', actorId: uploadedById, photoId: id, data: { view: fields.data.view, phase: fields.data.phase } });
+          await recordEvent(tx, {
+            restorationId,
+            kind: 'photo-added',
+            actorId: uploadedById,
+            photoId: id,
+            data: { view: fields.data.view, phase: fields.data.phase },
+          });
           return id;
         });
       } catch (err) {
@@ -110,7 +152,12 @@ export function photosService({ db, storage, config }: PhotosDeps) {
     /** The photo as the guard's subject: who may not see it gets a 404, then the route's rule decides. */
     async subjectOf(id: number): Promise<RestorationAndRole | undefined> {
       const row = await repo.find(id);
-      return row && { restorationId: row.restorationId, subject: { view: 'photos.view', context: { ownerVisible: row.ownerVisible } } };
+      return (
+        row && {
+          restorationId: row.restorationId,
+          subject: { view: 'photos.view', context: { ownerVisible: row.ownerVisible } },
+        }
+      );
     },
   };
 }

@@ -21,7 +21,10 @@ export interface ReceivedUpload {
  * whatever the size; refuses files over `maxBytes` with 413 and leaves nothing behind.
  */
 export function receiveUpload(req: Request, maxBytes: number): Promise<ReceivedUpload> {
-  if (!req.is('multipart/form-data')) return Promise.reject(new BadRequestError('Send the photo as multipart/form-data with the image in the field "file".'));
+  if (!req.is('multipart/form-data'))
+    return Promise.reject(
+      new BadRequestError('Send the photo as multipart/form-data with the image in the field "file".'),
+    );
   const temp = uploadTempPath();
   const tmp = temp.path;
   const discard = () => rm(tmp, { force: true }).then(temp.release);
@@ -33,7 +36,10 @@ export function receiveUpload(req: Request, maxBytes: number): Promise<ReceivedU
     const fail = (err: HttpError) => {
       failed ??= err;
     };
-    const parser = busboy({ headers: req.headers, limits: { files: 1, fields: 20, fileSize: maxBytes, fieldSize: 4096 } });
+    const parser = busboy({
+      headers: req.headers,
+      limits: { files: 1, fields: 20, fileSize: maxBytes, fieldSize: 4096 },
+    });
     parser.on('field', (name, value) => (fields[name] = value));
     parser.on('file', (name, stream, info) => {
       if (name !== 'file' || file) {
@@ -43,7 +49,9 @@ export function receiveUpload(req: Request, maxBytes: number): Promise<ReceivedU
       mimeType = info.mimeType;
       let size = 0;
       stream.on('data', (chunk: Buffer) => (size += chunk.length));
-      stream.on('limit', () => fail(new HttpError(413, 'too_large', `The file is larger than ${Math.round(maxBytes / 1024 / 1024)} MB.`)));
+      stream.on('limit', () =>
+        fail(new HttpError(413, 'too_large', `The file is larger than ${Math.round(maxBytes / 1024 / 1024)} MB.`)),
+      );
       file = pipeline(stream, createWriteStream(tmp)).then(() => size);
     });
     parser.on('filesLimit', () => fail(new BadRequestError('Send one photo per request.')));
@@ -55,7 +63,10 @@ export function receiveUpload(req: Request, maxBytes: number): Promise<ReceivedU
       await discard();
       reject(err);
     };
-    parser.on('error', () => void abandon(new BadRequestError('The upload was cut off or is not valid multipart data.')));
+    parser.on(
+      'error',
+      () => void abandon(new BadRequestError('The upload was cut off or is not valid multipart data.')),
+    );
     req.on('aborted', () => void abandon(new BadRequestError('The upload was cancelled.')));
     parser.on('close', async () => {
       if (settled) return;

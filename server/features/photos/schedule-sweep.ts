@@ -11,7 +11,11 @@ const EVERY_MS = 6 * 60 * 60 * 1000;
 export function scheduleSweep(db: Database, storage: Storage, logger: Logger): void {
   const run = () =>
     Promise.all([sweepOrphanedObjects(db, storage), sweepOrphanedSheetObjects(db, storage)])
-      .then(([photos, sheets]) => photos + sheets > 0 && logger.info(`removed ${photos} orphaned photo objects and ${sheets} service sheet objects`))
+      .then(
+        ([photos, sheets]) =>
+          photos + sheets > 0 &&
+          logger.info(`removed ${photos} orphaned photo objects and ${sheets} service sheet objects`),
+      )
       .catch((err: unknown) => logger.warn({ err: redactedError(err) }, 'orphan sweep failed'));
   setTimeout(run, 30_000).unref();
   setInterval(run, EVERY_MS).unref();

@@ -9,7 +9,11 @@ export const ORPHAN_AGE_MS = 24 * 60 * 60 * 1000;
  * Deletes photo objects that no row refers to and that are older than a day (younger ones may belong to
  * an upload still in progress on another instance). Safe to run on several instances at once.
  */
-export async function sweepOrphanedObjects(db: Database, storage: Storage, olderThanMs = ORPHAN_AGE_MS): Promise<number> {
+export async function sweepOrphanedObjects(
+  db: Database,
+  storage: Storage,
+  olderThanMs = ORPHAN_AGE_MS,
+): Promise<number> {
   const cutoff = Date.now() - olderThanMs;
   const candidates = new Map<string, string[]>();
   for await (const o of storage.listObjects('photos/')) {

@@ -1,5 +1,9 @@
 import { Router } from 'express';
-import { readingAnswerInputSchema, readingRequestInputSchema, readingRequestParamsSchema } from '../../../shared/schemas/reading-requests';
+import {
+  readingAnswerInputSchema,
+  readingRequestInputSchema,
+  readingRequestParamsSchema,
+} from '../../../shared/schemas/reading-requests';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guard, requireUser, roleOf } from '../../http/guard';
@@ -14,23 +18,44 @@ const answer = { params: readingRequestParamsSchema, body: readingAnswerInputSch
 export function readingRequestsRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const requests = readingRequestsService(deps);
-  const actor = (req: { user?: { id: number; name: string } }, res: Parameters<typeof roleOf>[0]) => ({ id: req.user!.id, name: req.user!.name, role: roleOf(res) });
+  const actor = (req: { user?: { id: number; name: string } }, res: Parameters<typeof roleOf>[0]) => ({
+    id: req.user!.id,
+    name: req.user!.name,
+    role: roleOf(res),
+  });
   const router = Router();
-  router.get('/restorations/:id/reading-requests', requireUser, validate(list), guard(db, 'help.view'), async (_req, res) => {
-    res.json(await requests.list(input(res, list).params.id, roleOf(res)));
-  });
-  router.post('/restorations/:id/reading-requests', requireUser, validate(create), guard(db, 'help.view'), async (req, res) => {
-    const { params, body } = input(res, create);
-    res.status(201).json(await requests.create(params.id, body, actor(req, res)));
-  });
+  router.get(
+    '/restorations/:id/reading-requests',
+    requireUser,
+    validate(list),
+    guard(db, 'help.view'),
+    async (_req, res) => {
+      res.json(await requests.list(input(res, list).params.id, roleOf(res)));
+    },
+  );
+  router.post(
+    '/restorations/:id/reading-requests',
+    requireUser,
+    validate(create),
+    guard(db, 'help.view'),
+    async (req, res) => {
+      const { params, body } = input(res, create);
+      res.status(201).json(await requests.create(params.id, body, actor(req, res)));
+    },
+  );
   // The bench: open tasks and recent answers on every set where the person is a technician or mentor.
   router.get('/reading-requests', requireUser, async (req, res) => {
     res.json(await requests.bench(req.user!.id));
   });
-  router.post('/reading-requests/:readingRequestId/answer', requireUser, validate(answer),
-    guard(db, 'help.ask', (_req, res) => requests.restorationOf(input(res, answer).params.readingRequestId)), async (req, res) => {
+  router.post(
+    '/reading-requests/:readingRequestId/answer',
+    requireUser,
+    validate(answer),
+    guard(db, 'help.ask', (_req, res) => requests.restorationOf(input(res, answer).params.readingRequestId)),
+    async (req, res) => {
       const { params, body } = input(res, answer);
       res.json(await requests.answer(params.readingRequestId, body, actor(req, res)));
-    });
+    },
+  );
   return router;
 }

@@ -31,12 +31,29 @@ export function readingRequestsService(deps: AppDeps) {
     async create(restorationId: number, input: ReadingRequestInput, actor: Actor): Promise<ReadingRequest> {
       const id = await unitOfWork(db, async (tx, afterCommit) => {
         if (input.helpRequestId) {
-          const [h] = await tx.select({ id: helpRequests.id }).from(helpRequests).where(and(eq(helpRequests.id, input.helpRequestId), eq(helpRequests.restorationId, restorationId)));
+          const [h] = await tx
+            .select({ id: helpRequests.id })
+            .from(helpRequests)
+            .where(and(eq(helpRequests.id, input.helpRequestId), eq(helpRequests.restorationId, restorationId)));
           if (!h) throw new BadRequestError('helpRequestId: no such help request on this restoration.');
         }
-        const [set] = await tx.select({ make: restorations.make, model: restorations.model }).from(restorations).where(eq(restorations.id, restorationId));
-        const row = await readingRequestsRepo({ ...deps, db: tx }).insert({ restorationId, helpRequestId: input.helpRequestId ?? null, kind: input.kind, body: input.body, askedById: actor.id });
-        await recordEvent(tx, { restorationId, kind: 'reading-requested', actorId: actor.id, data: { readingRequestId: row.id, body: input.body } });
+        const [set] = await tx
+          .select({ make: restorations.make, model: restorations.model })
+          .from(restorations)
+          .where(eq(restorations.id, restorationId));
+        const row = await readingRequestsRepo({ ...deps, db: tx }).insert({
+          restorationId,
+          helpRequestId: input.helpRequestId ?? null,
+          kind: input.kind,
+          body: input.body,
+          askedById: actor.id,
+        });
+        await recordEvent(tx, {
+          restorationId,
+          kind: 'reading-requested',
+          actorId: actor.id,
+          data: { readingRequestId: row.id, body: input.body },
+        });
         await notifications.readingRequested(tx, { ...row, set: `${set!.make} ${set!.model}` }, actor);
         afterCommit(notifications.kick);
         return row.id;
@@ -50,16 +67,42 @@ export function readingRequestsService(deps: AppDeps) {
         if (!current) throw new NotFoundError();
         if (current.answeredAt) throw new ConflictError('This request was already answered.');
         if (input.photoId) {
-          const [p] = await tx.select({ id: photos.id }).from(photos).where(and(eq(photos.id, input.photoId), eq(photos.restorationId, current.restorationId)));
+          const [p] = await tx
+            .select({ id: photos.id })
+            .from(photos)
+            .where(and(eq(photos.id, input.photoId), eq(photos.restorationId, current.restorationId)));
           if (!p) throw new BadRequestError('photoId: no such photo on this restoration.');
         }
         const measurementId = input.reading
-          ? await readings.createIn(tx, current.restorationId, { ...input.reading, findingId: input.reading.findingId ?? null }, actor.id)
+          ? await readings.createIn(
+              tx,
+              current.restorationId,
+              { ...input.reading, findingId: input.reading.findingId ?? null },
+              actor.id,
+            )
           : null;
-        await inTx.answer(id, { answeredAt: new Date(), answeredById: actor.id, answerNote: input.note, measurementId, photoId: input.photoId ?? null });
-        await recordEvent(tx, { restorationId: current.restorationId, kind: 'reading-answered', actorId: actor.id, measurementId, photoId: input.photoId ?? null,
-          data: { readingRequestId: id, body: current.body } });
-        const said = [input.reading && `${input.reading.location} reads ${input.reading.reading}`, input.photoId && 'a photo', input.note].filter(Boolean).join('; ');
+        await inTx.answer(id, {
+          answeredAt: new Date(),
+          answeredById: actor.id,
+          answerNote: input.note,
+          measurementId,
+          photoId: input.photoId ?? null,
+        });
+        await recordEvent(tx, {
+          restorationId: current.restorationId,
+          kind: 'reading-answered',
+          actorId: actor.id,
+          measurementId,
+          photoId: input.photoId ?? null,
+          data: { readingRequestId: id, body: current.body },
+        });
+        const said = [
+          input.reading && `${input.reading.location} reads ${input.reading.reading}`,
+          input.photoId && 'a photo',
+          input.note,
+        ]
+          .filter(Boolean)
+          .join('; ');
         await notifications.readingAnswered(tx, current, said, actor);
         afterCommit(notifications.kick);
       });

@@ -7,20 +7,29 @@ import { columnsOf, findingFields, visibleSql } from '../visibility/visibility-s
 export type ReferenceMarkRow = typeof referenceMarks.$inferSelect;
 
 /** The reference a typed text names: its first word, upper-cased, when it reads like R23, VR2 or S1a ("V5 pin 3" → V5). */
-const refOf = (column: SQLWrapper): SQL => sql`nullif(substring(upper(btrim(${column})) from '^([A-Z]{1,4}[0-9]{1,5}[A-Z]?)(\\s|$)'), '')`;
+const refOf = (column: SQLWrapper): SQL =>
+  sql`nullif(substring(upper(btrim(${column})) from '^([A-Z]{1,4}[0-9]{1,5}[A-Z]?)(\\s|$)'), '')`;
 
 export function referencesRepo(db: Executor) {
   const markVisible = (role: Role) =>
     visibleSql(role, 'referenceMark', { sheetPage: columnsOf(sheetPages), photo: columnsOf(photos) });
   const marks = () =>
-    db.select({ mark: referenceMarks }).from(referenceMarks)
+    db
+      .select({ mark: referenceMarks })
+      .from(referenceMarks)
       .leftJoin(sheetPages, eq(sheetPages.id, referenceMarks.sheetPageId))
       .leftJoin(photos, eq(photos.id, referenceMarks.photoId));
   return {
     /** The restoration's reference marks this role may see (those on pages and photos they may see). */
     async listMarks(restorationId: number, role: Role, ref?: string): Promise<ReferenceMarkRow[]> {
       const rows = await marks()
-        .where(and(eq(referenceMarks.restorationId, restorationId), markVisible(role), ref ? eq(referenceMarks.ref, ref) : undefined))
+        .where(
+          and(
+            eq(referenceMarks.restorationId, restorationId),
+            markVisible(role),
+            ref ? eq(referenceMarks.ref, ref) : undefined,
+          ),
+        )
         .orderBy(asc(referenceMarks.ref), asc(referenceMarks.id));
       return rows.map((r) => r.mark);
     },
@@ -29,7 +38,10 @@ export function referencesRepo(db: Executor) {
       return row?.mark;
     },
     async restorationOfMark(id: number): Promise<number | undefined> {
-      const [row] = await db.select({ restorationId: referenceMarks.restorationId }).from(referenceMarks).where(eq(referenceMarks.id, id));
+      const [row] = await db
+        .select({ restorationId: referenceMarks.restorationId })
+        .from(referenceMarks)
+        .where(eq(referenceMarks.id, id));
       return row?.restorationId;
     },
     async insertMark(values: typeof referenceMarks.$inferInsert) {
@@ -46,7 +58,14 @@ export function referencesRepo(db: Executor) {
     async summary(restorationId: number, role: Role) {
       const r = restorationId;
       const markRef = sql`${referenceMarks.ref}`;
-      const result = await db.execute<{ ref: string; diagramMarks: number; chassisMarks: number; findings: number; parts: number; readings: number }>(sql`
+      const result = await db.execute<{
+        ref: string;
+        diagramMarks: number;
+        chassisMarks: number;
+        findings: number;
+        parts: number;
+        readings: number;
+      }>(sql`
         with known as (
           select ${markRef} as ref, (${referenceMarks.sheetPageId} is not null)::int as diagram, (${referenceMarks.photoId} is not null)::int as chassis, 0 as finding, 0 as part, 0 as reading
             from ${referenceMarks} left join ${sheetPages} on ${sheetPages.id} = ${referenceMarks.sheetPageId} left join ${photos} on ${photos.id} = ${referenceMarks.photoId}

@@ -4,7 +4,8 @@ import * as fontkit from 'fontkit';
 import { readFileSync } from 'node:fs';
 
 const require = createRequire(import.meta.url);
-const fontFile = (pkg: string, file: string) => path.join(path.dirname(require.resolve(`${pkg}/package.json`)), 'files', file);
+const fontFile = (pkg: string, file: string) =>
+  path.join(path.dirname(require.resolve(`${pkg}/package.json`)), 'files', file);
 
 /**
  * Fonts ship with the app: Atkinson Hyperlegible Next for the text (as on screen), with Noto Sans
@@ -35,7 +36,10 @@ export function fontRuns(text: string, primary: 'body' | 'bold' = 'body'): { fon
     const ch = SUBSTITUTES[raw] ?? raw;
     for (const c of ch) {
       const cp = c.codePointAt(0)!;
-      const font = c === '\n' || c === ' ' ? (runs.at(-1)?.font ?? primary) : (order.find((f) => load(f).hasGlyphForCodePoint(cp)) ?? primary);
+      const font =
+        c === '\n' || c === ' '
+          ? (runs.at(-1)?.font ?? primary)
+          : (order.find((f) => load(f).hasGlyphForCodePoint(cp)) ?? primary);
       const last = runs.at(-1);
       if (last && last.font === font) last.text += c;
       else runs.push({ font, text: c });

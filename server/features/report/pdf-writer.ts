@@ -8,7 +8,12 @@ const GLOW = '#b4530b';
 
 /** A thin layer over pdfkit: text that falls back across fonts, headings, and images from WebP. */
 export function createWriter(title = 'Hand-back report') {
-  const doc = new PDFDocument({ size: 'A4', margin: 56, info: { Title: title, Creator: 'Gridleak' }, bufferPages: true });
+  const doc = new PDFDocument({
+    size: 'A4',
+    margin: 56,
+    info: { Title: title, Creator: 'Gridleak' },
+    bufferPages: true,
+  });
   for (const [name, file] of Object.entries(FONTS)) doc.registerFont(name, file);
   const width = doc.page.width - 112;
 
@@ -38,7 +43,16 @@ export function createWriter(title = 'Hand-back report') {
     },
     /** Places a WebP or JPEG image, converted for the PDF, within the width and height given (points). */
     async image(bytes: Buffer, maxWidth: number, maxHeight: number, at?: { x: number; y: number }) {
-      const jpeg = await sharp(bytes).flatten({ background: '#ffffff' }).resize({ width: Math.round(maxWidth * 2), height: Math.round(maxHeight * 2), fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 82 }).toBuffer();
+      const jpeg = await sharp(bytes)
+        .flatten({ background: '#ffffff' })
+        .resize({
+          width: Math.round(maxWidth * 2),
+          height: Math.round(maxHeight * 2),
+          fit: 'inside',
+          withoutEnlargement: true,
+        })
+        .jpeg({ quality: 82 })
+        .toBuffer();
       const { width: w = 1, height: h = 1 } = await sharp(jpeg).metadata();
       const scale = Math.min(maxWidth / w, maxHeight / h);
       const x = at?.x ?? doc.page.margins.left;
@@ -57,7 +71,11 @@ export function createWriter(title = 'Hand-back report') {
         const bottom = doc.page.margins.bottom;
         doc.page.margins.bottom = 0;
         const y = doc.page.height - 40;
-        doc.font('body').fontSize(8).fillColor(SOFT).text(`${line} · page ${i + 1} of ${range.count}`, 56, y, { width, align: 'center', lineBreak: false });
+        doc
+          .font('body')
+          .fontSize(8)
+          .fillColor(SOFT)
+          .text(`${line} · page ${i + 1} of ${range.count}`, 56, y, { width, align: 'center', lineBreak: false });
         doc.page.margins.bottom = bottom;
       }
       return doc.bufferedPageRange().count;

@@ -7,7 +7,12 @@ import type { Writer } from './pdf-writer';
 const DANGER = '#a3261b';
 const OK = '#0b6e4f';
 const SOFT = '#5d5247';
-const verdictWords: Record<SafetyLineView['verdict'], string> = { pass: 'PASS', fail: 'FAIL', 'not-applicable': 'not applicable', 'not-measured': 'not measured' };
+const verdictWords: Record<SafetyLineView['verdict'], string> = {
+  pass: 'PASS',
+  fail: 'FAIL',
+  'not-applicable': 'not applicable',
+  'not-measured': 'not measured',
+};
 
 // The report's fonts have no ≤ or ≥, and words read better to an owner anyway.
 const limitWords = (text: string) => text.replace(/^≤ /, 'at most ').replace(/^≥ /, 'at least ');
@@ -24,14 +29,31 @@ export function writeSafetyTestSection(w: Writer, d: ReportData): void {
   w.heading('Final safety test');
   if (!latest) w.text('No final safety test is recorded for this set.', { bold: true, colour: DANGER });
   if (latest) {
-    w.text(`${when(latest.testedAt)}${latest.testedBy ? `, by ${latest.testedBy}` : ''} · ${equipmentClassLabels[latest.equipmentClass]}`, { colour: SOFT });
-    w.text(latest.verdict === 'pass' ? 'Result: passed on every line tested.' : 'Result: NOT PASSED.', { bold: true, colour: latest.verdict === 'pass' ? OK : DANGER });
-    for (const l of latest.lines) w.text(lineText(l), { size: 9.5, gap: 0.15, colour: l.verdict === 'fail' ? DANGER : undefined });
-    w.text(`${specificationLabels[latest.specification]}${latest.modifications ? `: ${latest.modifications}` : '.'}`, { size: 10 });
+    w.text(
+      `${when(latest.testedAt)}${latest.testedBy ? `, by ${latest.testedBy}` : ''} · ${equipmentClassLabels[latest.equipmentClass]}`,
+      {
+        colour: SOFT,
+      },
+    );
+    w.text(latest.verdict === 'pass' ? 'Result: passed on every line tested.' : 'Result: NOT PASSED.', {
+      bold: true,
+      colour: latest.verdict === 'pass' ? OK : DANGER,
+    });
+    for (const l of latest.lines)
+      w.text(lineText(l), { size: 9.5, gap: 0.15, colour: l.verdict === 'fail' ? DANGER : undefined });
+    w.text(`${specificationLabels[latest.specification]}${latest.modifications ? `: ${latest.modifications}` : '.'}`, {
+      size: 10,
+    });
   }
   if (override)
-    w.text(`Returned without a passing safety test, on the technician's override (${override.by ?? 'a technician'}, ${when(override.at)}): ${override.reason}`, { bold: true, colour: DANGER });
-  w.text('These are the workshop\u2019s own readings against the limits shown; they are a record of the test, not a certificate of electrical safety.', { size: 9, colour: SOFT });
+    w.text(
+      `Returned without a passing safety test, on the technician's override (${override.by ?? 'a technician'}, ${when(override.at)}): ${override.reason}`,
+      { bold: true, colour: DANGER },
+    );
+  w.text(
+    'These are the workshop\u2019s own readings against the limits shown; they are a record of the test, not a certificate of electrical safety.',
+    { size: 9, colour: SOFT },
+  );
 }
 
 /** Soak hours in total and each run, with what was seen. */
@@ -44,7 +66,16 @@ export function writeSoakSection(w: Writer, d: ReportData): void {
   }
   w.text(`${soakHours.toFixed(1)} hours in ${soakSessions.length} run${soakSessions.length === 1 ? '' : 's'}.`);
   for (const s of soakSessions) {
-    const temps = [s.ambientC !== null && `room ${s.ambientC} °C`, s.chassisC !== null && `chassis ${s.chassisC} °C`, s.mainsCurrentAmps !== null && `mains ${formatQuantity(s.mainsCurrentAmps, 'A')}`].filter(Boolean).join(', ');
-    w.text(`${when(s.startedAt)}: ${(s.hours ?? 0).toFixed(1)} h${temps ? ` (${temps})` : ''}${s.faults ? ` — fault: ${s.faults}${s.actionTaken ? `; ${s.actionTaken}` : ''}` : ' — no fault seen'}`, { size: 10, gap: 0.15 });
+    const temps = [
+      s.ambientC !== null && `room ${s.ambientC} °C`,
+      s.chassisC !== null && `chassis ${s.chassisC} °C`,
+      s.mainsCurrentAmps !== null && `mains ${formatQuantity(s.mainsCurrentAmps, 'A')}`,
+    ]
+      .filter(Boolean)
+      .join(', ');
+    w.text(
+      `${when(s.startedAt)}: ${(s.hours ?? 0).toFixed(1)} h${temps ? ` (${temps})` : ''}${s.faults ? ` — fault: ${s.faults}${s.actionTaken ? `; ${s.actionTaken}` : ''}` : ' — no fault seen'}`,
+      { size: 10, gap: 0.15 },
+    );
   }
 }

@@ -8,7 +8,8 @@ import { reportData } from './report.repo';
 import { renderReport } from './report-pdf';
 
 const one = { params: idParamsSchema };
-const fileName = (make: string, model: string) => `${`${make}-${model}`.replace(/[^\w]+/g, '-').toLowerCase()}-hand-back-report.pdf`;
+const fileName = (make: string, model: string) =>
+  `${`${make}-${model}`.replace(/[^\w]+/g, '-').toLowerCase()}-hand-back-report.pdf`;
 
 /** The owner's report as a PDF with its file name and page count. */
 export async function buildReport(deps: Pick<AppDeps, 'db' | 'storage' | 'config'>, id: number) {
@@ -21,9 +22,15 @@ export async function buildReport(deps: Pick<AppDeps, 'db' | 'storage' | 'config
 /** The hand-back report: the owner's document (only what is shared with them), for every member to download. Sending is in the safety feature. */
 export function reportRoutes(deps: AppDeps): Router {
   const router = Router();
-  router.get('/restorations/:id/report.pdf', requireUser, validate(one), guard(deps.db, 'report.download'), async (_req, res) => {
-    const { pdf, name } = await buildReport(deps, input(res, one).params.id);
-    res.type('application/pdf').attachment(name).send(pdf);
-  });
+  router.get(
+    '/restorations/:id/report.pdf',
+    requireUser,
+    validate(one),
+    guard(deps.db, 'report.download'),
+    async (_req, res) => {
+      const { pdf, name } = await buildReport(deps, input(res, one).params.id);
+      res.type('application/pdf').attachment(name).send(pdf);
+    },
+  );
   return router;
 }

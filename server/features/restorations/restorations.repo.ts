@@ -9,18 +9,27 @@ export type RestorationRow = typeof restorations.$inferSelect;
 type Values = Omit<typeof restorations.$inferInsert, 'id' | 'createdAt' | 'updatedAt'>;
 
 /** The bench: most recently changed first (then the newest id). */
-export const benchOrder = keyset('desc', [{ by: toMs(restorations.updatedAt), kind: 'instant' }, { by: restorations.id, kind: 'number' }]);
+export const benchOrder = keyset('desc', [
+  { by: toMs(restorations.updatedAt), kind: 'instant' },
+  { by: restorations.id, kind: 'number' },
+]);
 export const benchCursor = (row: RestorationRow) => [row.updatedAt.toISOString(), row.id];
 
 export function restorationsRepo(db: Executor) {
   return {
     /** The restorations a person is a member of, with their role, most recently changed first; one page (`window`). */
-    async listFor(userId: number, filter: { q?: string; stage?: Stage }, window: PageWindow): Promise<(RestorationRow & { role: Role })[]> {
+    async listFor(
+      userId: number,
+      filter: { q?: string; stage?: Stage },
+      window: PageWindow,
+    ): Promise<(RestorationRow & { role: Role })[]> {
       const where: (SQL | undefined)[] = [eq(memberships.userId, userId), benchOrder.after(window.cursor)];
       if (filter.stage) where.push(eq(restorations.stage, filter.stage));
       if (filter.q) {
         const like = `%${filter.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-        where.push(or(ilike(restorations.make, like), ilike(restorations.model, like), ilike(restorations.serial, like))!);
+        where.push(
+          or(ilike(restorations.make, like), ilike(restorations.model, like), ilike(restorations.serial, like))!,
+        );
       }
       const rows = await db
         .select({ restoration: restorations, role: memberships.role })

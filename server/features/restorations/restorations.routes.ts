@@ -23,14 +23,20 @@ const patch = { params: idParamsSchema, body: restorationPatchSchema };
 export function restorationsRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const removeObjects = async (keys: string[]) => {
-    for (const key of keys) await deleteSheetObjects(deps.storage, key).catch((err: unknown) => deps.logger.warn({ err }, 'sheet objects left for the sweep'));
+    for (const key of keys)
+      await deleteSheetObjects(deps.storage, key).catch((err: unknown) =>
+        deps.logger.warn({ err }, 'sheet objects left for the sweep'),
+      );
   };
   const service = restorationsService(db, invitationsService(deps).inviteIn, removeObjects);
   const router = Router();
   // The bench, most recently changed first, in pages (see shared/schemas/pagination.ts).
   router.get('/restorations', requireUser, validate(list), async (req, res) => {
     const { query } = input(res, list);
-    const rows = await service.pageFor(req.user!.id, query, { limit: query.limit + 1, cursor: decodeCursor(query.cursor, benchOrder.kinds) });
+    const rows = await service.pageFor(req.user!.id, query, {
+      limit: query.limit + 1,
+      cursor: decodeCursor(query.cursor, benchOrder.kinds),
+    });
     await sendPage(req, res, rows, query.limit, benchCursor, (page) => page.map((r) => toRestoration(r, r.role)));
   });
   router.post('/restorations', requireUser, validate(create), async (req, res) => {

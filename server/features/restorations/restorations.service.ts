@@ -28,7 +28,11 @@ export function restorationsService(db: Database, invite?: InviteIn, removeObjec
   const repo = restorationsRepo(db);
   return {
     /** One page of the bench (`limit + 1` rows read, for the page helper to cut). */
-    async pageFor(userId: number, filter: Parameters<typeof repo.listFor>[1], window: Parameters<typeof repo.listFor>[2]) {
+    async pageFor(
+      userId: number,
+      filter: Parameters<typeof repo.listFor>[1],
+      window: Parameters<typeof repo.listFor>[2],
+    ) {
       return repo.listFor(userId, filter, window);
     },
     async get(id: number, role: Role) {
@@ -38,8 +42,14 @@ export function restorationsService(db: Database, invite?: InviteIn, removeObjec
     },
     async create(input: CreateInput, userId: number) {
       // The stage gates would otherwise be skipped by a set created past them.
-      if (input.stage === 'returned') throw new ConflictError('A new restoration cannot start at Returned: create it at an earlier stage and record its final safety test.');
-      if (input.stage === 'testing') throw new ConflictError('A new restoration cannot start at Testing: create it at an earlier stage and sign off its pre-power checklist on the Bring-up tab first.');
+      if (input.stage === 'returned')
+        throw new ConflictError(
+          'A new restoration cannot start at Returned: create it at an earlier stage and record its final safety test.',
+        );
+      if (input.stage === 'testing')
+        throw new ConflictError(
+          'A new restoration cannot start at Testing: create it at an earlier stage and sign off its pre-power checklist on the Bring-up tab first.',
+        );
       const { inviteOwner, ...values } = input;
       // The set, its technician and the owner's invitation (with its e-mail, sent last) commit together or not at all.
       const row = await db.transaction(async (tx) => {
@@ -62,7 +72,12 @@ export function restorationsService(db: Database, invite?: InviteIn, removeObjec
         if (patch.stage) await stageGates(tx, id, before.stage, patch.stage);
         const updated = (await inTx.update(id, patch))!;
         if (patch.stage && patch.stage !== before.stage)
-          await recordEvent(tx, { restorationId: id, kind: 'stage-changed', actorId, data: { from: before.stage, to: patch.stage } });
+          await recordEvent(tx, {
+            restorationId: id,
+            kind: 'stage-changed',
+            actorId,
+            data: { from: before.stage, to: patch.stage },
+          });
         return updated;
       });
       return toRestoration(row, role);
@@ -74,12 +89,21 @@ export function restorationsService(db: Database, invite?: InviteIn, removeObjec
      */
     async remove(id: number) {
       await unitOfWork(db, async (tx, afterCommit) => {
-        const [r] = await tx.select({ id: restorations.id }).from(restorations).where(eq(restorations.id, id)).for('update');
+        const [r] = await tx
+          .select({ id: restorations.id })
+          .from(restorations)
+          .where(eq(restorations.id, id))
+          .for('update');
         if (!r) throw new NotFoundError();
         const [issued] = await tx.select({ n: count() }).from(invoices).where(eq(invoices.restorationId, id));
         if (issued!.n > 0)
-          throw new ConflictError(`This set has ${issued!.n === 1 ? 'an issued invoice' : `${issued!.n} issued invoices`} (deposit requests and credit notes count), which are kept for the workshop's accounts, so it cannot be deleted. Set its stage to Returned instead.`, { invoices: issued!.n });
-        const keys = (await tx.select({ key: sheets.storageKey }).from(sheets).where(eq(sheets.restorationId, id)).for('update')).map((s) => s.key);
+          throw new ConflictError(
+            `This set has ${issued!.n === 1 ? 'an issued invoice' : `${issued!.n} issued invoices`} (deposit requests and credit notes count), which are kept for the workshop's accounts, so it cannot be deleted. Set its stage to Returned instead.`,
+            { invoices: issued!.n },
+          );
+        const keys = (
+          await tx.select({ key: sheets.storageKey }).from(sheets).where(eq(sheets.restorationId, id)).for('update')
+        ).map((s) => s.key);
         if (!(await restorationsRepo(tx).remove(id))) throw new NotFoundError();
         if (keys.length && removeObjects) afterCommit(() => removeObjects(keys));
       });

@@ -9,10 +9,18 @@ import { returnedAllowed } from './safety-tests.service';
  * technician records an override with a reason. Called by the restorations service on a stage change.
  */
 export async function assertReturnedGate(db: Executor, restorationId: number): Promise<void> {
-  const [latest] = await db.select({ verdict: safetyTests.verdict, testedAt: safetyTests.testedAt }).from(safetyTests)
-    .where(eq(safetyTests.restorationId, restorationId)).orderBy(desc(safetyTests.testedAt), desc(safetyTests.id)).limit(1);
-  const [override] = await db.select({ createdAt: safetyOverrides.createdAt }).from(safetyOverrides)
-    .where(eq(safetyOverrides.restorationId, restorationId)).orderBy(desc(safetyOverrides.createdAt)).limit(1);
+  const [latest] = await db
+    .select({ verdict: safetyTests.verdict, testedAt: safetyTests.testedAt })
+    .from(safetyTests)
+    .where(eq(safetyTests.restorationId, restorationId))
+    .orderBy(desc(safetyTests.testedAt), desc(safetyTests.id))
+    .limit(1);
+  const [override] = await db
+    .select({ createdAt: safetyOverrides.createdAt })
+    .from(safetyOverrides)
+    .where(eq(safetyOverrides.restorationId, restorationId))
+    .orderBy(desc(safetyOverrides.createdAt))
+    .limit(1);
   if (returnedAllowed(latest, override)) return;
   const message = latest
     ? 'The latest final safety test failed, so the set cannot be marked Returned. Put right what failed and record a passing test on the Safety tab, or record an override with the reason there.'

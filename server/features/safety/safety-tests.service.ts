@@ -47,28 +47,53 @@ export function judgeSafetyTest(input: Input) {
 }
 
 const toTest = (r: TestRow, testedBy: string | null): SafetyTest => ({
-  id: r.id, restorationId: r.restorationId, equipmentClass: r.equipmentClass, specification: r.specification, modifications: r.modifications,
-  notes: r.notes, lines: r.lines, verdict: r.verdict, testedBy, testedAt: r.testedAt.toISOString(),
+  id: r.id,
+  restorationId: r.restorationId,
+  equipmentClass: r.equipmentClass,
+  specification: r.specification,
+  modifications: r.modifications,
+  notes: r.notes,
+  lines: r.lines,
+  verdict: r.verdict,
+  testedBy,
+  testedAt: r.testedAt.toISOString(),
 });
-const toOverride = (r: OverrideRow, by: string | null): SafetyOverride => ({ id: r.id, reason: r.reason, by, at: r.createdAt.toISOString() });
+const toOverride = (r: OverrideRow, by: string | null): SafetyOverride => ({
+  id: r.id,
+  reason: r.reason,
+  by,
+  at: r.createdAt.toISOString(),
+});
 
 /**
  * The set may go to Returned when its latest safety test passed, or when a technician recorded an override
  * after that test (a later failing test needs a new override).
  */
-export function returnedAllowed(latest: { verdict: string; testedAt: Date } | undefined, override: { createdAt: Date } | undefined): boolean {
+export function returnedAllowed(
+  latest: { verdict: string; testedAt: Date } | undefined,
+  override: { createdAt: Date } | undefined,
+): boolean {
   if (latest?.verdict === 'pass') return true;
   return !!override && (!latest || override.createdAt >= latest.testedAt);
 }
 
 export function safetyTestsService(db: Database) {
   async function testsOf(restorationId: number) {
-    return db.select({ t: safetyTests, by: users.name }).from(safetyTests).leftJoin(users, eq(users.id, safetyTests.testedById))
-      .where(eq(safetyTests.restorationId, restorationId)).orderBy(desc(safetyTests.testedAt), desc(safetyTests.id));
+    return db
+      .select({ t: safetyTests, by: users.name })
+      .from(safetyTests)
+      .leftJoin(users, eq(users.id, safetyTests.testedById))
+      .where(eq(safetyTests.restorationId, restorationId))
+      .orderBy(desc(safetyTests.testedAt), desc(safetyTests.id));
   }
   async function latestOverride(restorationId: number) {
-    const [o] = await db.select({ o: safetyOverrides, by: users.name }).from(safetyOverrides).leftJoin(users, eq(users.id, safetyOverrides.actorId))
-      .where(eq(safetyOverrides.restorationId, restorationId)).orderBy(desc(safetyOverrides.createdAt), desc(safetyOverrides.id)).limit(1);
+    const [o] = await db
+      .select({ o: safetyOverrides, by: users.name })
+      .from(safetyOverrides)
+      .leftJoin(users, eq(users.id, safetyOverrides.actorId))
+      .where(eq(safetyOverrides.restorationId, restorationId))
+      .orderBy(desc(safetyOverrides.createdAt), desc(safetyOverrides.id))
+      .limit(1);
     return o;
   }
   return {
@@ -76,17 +101,38 @@ export function safetyTestsService(db: Database) {
       const rows = await testsOf(restorationId);
       const o = await latestOverride(restorationId);
       const tests = rows.map((r) => toTest(r.t, r.by));
-      return { tests, latest: tests[0] ?? null, override: o ? toOverride(o.o, o.by) : null, returnedAllowed: returnedAllowed(rows[0]?.t, o?.o) };
+      return {
+        tests,
+        latest: tests[0] ?? null,
+        override: o ? toOverride(o.o, o.by) : null,
+        returnedAllowed: returnedAllowed(rows[0]?.t, o?.o),
+      };
     },
     /** Records the test and its history line together. */
     async record(restorationId: number, input: Input, actorId: number): Promise<SafetyTest> {
       const result = judgeSafetyTest(input);
       const { specification, modifications, notes, equipmentClass, ...readings } = input;
       const row = await db.transaction(async (tx) => {
-        const [t] = await tx.insert(safetyTests).values({
-          restorationId, equipmentClass, readings, lines: result.lines, verdict: result.verdict, specification, modifications, notes, testedById: actorId,
-        }).returning();
-        await tx.insert(events).values({ restorationId, kind: 'safety-test', actorId, data: { safetyTestId: t!.id, verdict: result.verdict } });
+        const [t] = await tx
+          .insert(safetyTests)
+          .values({
+            restorationId,
+            equipmentClass,
+            readings,
+            lines: result.lines,
+            verdict: result.verdict,
+            specification,
+            modifications,
+            notes,
+            testedById: actorId,
+          })
+          .returning();
+        await tx.insert(events).values({
+          restorationId,
+          kind: 'safety-test',
+          actorId,
+          data: { safetyTestId: t!.id, verdict: result.verdict },
+        });
         return t!;
       });
       const [by] = await db.select({ name: users.name }).from(users).where(eq(users.id, actorId));
@@ -96,7 +142,9 @@ export function safetyTestsService(db: Database) {
     async override(restorationId: number, reason: string, actorId: number): Promise<SafetyOverride> {
       const row = await db.transaction(async (tx) => {
         const [o] = await tx.insert(safetyOverrides).values({ restorationId, reason, actorId }).returning();
-        await tx.insert(events).values({ restorationId, kind: 'safety-override', actorId, data: { safetyOverrideId: o!.id, reason } });
+        await tx
+          .insert(events)
+          .values({ restorationId, kind: 'safety-override', actorId, data: { safetyOverrideId: o!.id, reason } });
         return o!;
       });
       const [by] = await db.select({ name: users.name }).from(users).where(eq(users.id, actorId));

@@ -11,10 +11,17 @@ type Row = typeof soakSessions.$inferSelect;
 const HOUR_MS = 3_600_000;
 
 const toSession = (r: Row, startedBy: string | null): SoakSession => ({
-  id: r.id, startedAt: r.startedAt.toISOString(), endedAt: r.endedAt?.toISOString() ?? null,
+  id: r.id,
+  startedAt: r.startedAt.toISOString(),
+  endedAt: r.endedAt?.toISOString() ?? null,
   hours: r.endedAt ? (r.endedAt.getTime() - r.startedAt.getTime()) / HOUR_MS : null,
-  ambientC: r.ambientC, chassisC: r.chassisC, mainsCurrentAmps: r.mainsCurrentAmps, faults: r.faults, actionTaken: r.actionTaken,
-  findingId: r.findingId, startedBy,
+  ambientC: r.ambientC,
+  chassisC: r.chassisC,
+  mainsCurrentAmps: r.mainsCurrentAmps,
+  faults: r.faults,
+  actionTaken: r.actionTaken,
+  findingId: r.findingId,
+  startedBy,
 });
 
 function amps(text: string): number | null {
@@ -31,23 +38,38 @@ function amps(text: string): number | null {
 export function soakService(db: Database) {
   return {
     async log(restorationId: number): Promise<SoakLog> {
-      const rows = await db.select({ s: soakSessions, by: users.name }).from(soakSessions).leftJoin(users, eq(users.id, soakSessions.startedById))
-        .where(eq(soakSessions.restorationId, restorationId)).orderBy(asc(soakSessions.startedAt), asc(soakSessions.id));
+      const rows = await db
+        .select({ s: soakSessions, by: users.name })
+        .from(soakSessions)
+        .leftJoin(users, eq(users.id, soakSessions.startedById))
+        .where(eq(soakSessions.restorationId, restorationId))
+        .orderBy(asc(soakSessions.startedAt), asc(soakSessions.id));
       const sessions = rows.map((r) => toSession(r.s, r.by));
       const totalHours = sessions.reduce((sum, s) => sum + (s.hours ?? 0), 0);
       return { sessions, totalHours, running: sessions.find((s) => s.endedAt === null) ?? null };
     },
     /** Starts a session; one at a time per set (a unique index holds even under two clicks at once). */
     async start(restorationId: number, actorId: number): Promise<SoakLog> {
-      const [running] = await db.select({ id: soakSessions.id }).from(soakSessions).where(and(eq(soakSessions.restorationId, restorationId), isNull(soakSessions.endedAt)));
+      const [running] = await db
+        .select({ id: soakSessions.id })
+        .from(soakSessions)
+        .where(and(eq(soakSessions.restorationId, restorationId), isNull(soakSessions.endedAt)));
       if (running) throw new ConflictError('A soak session is already running: stop it before starting another.');
       try {
         await db.transaction(async (tx) => {
-          const [s] = await tx.insert(soakSessions).values({ restorationId, startedById: actorId }).returning({ id: soakSessions.id });
-          await tx.insert(events).values({ restorationId, kind: 'soak-session', actorId, data: { soakSessionId: s!.id, started: true } });
+          const [s] = await tx
+            .insert(soakSessions)
+            .values({ restorationId, startedById: actorId })
+            .returning({ id: soakSessions.id });
+          await tx
+            .insert(events)
+            .values({ restorationId, kind: 'soak-session', actorId, data: { soakSessionId: s!.id, started: true } });
         });
       } catch (err) {
-        if ((err as { cause?: { code?: string }; code?: string }).cause?.code === '23505' || (err as { code?: string }).code === '23505')
+        if (
+          (err as { cause?: { code?: string }; code?: string }).cause?.code === '23505' ||
+          (err as { code?: string }).code === '23505'
+        )
           throw new ConflictError('A soak session is already running: stop it before starting another.');
         throw err;
       }
@@ -61,29 +83,69 @@ export function soakService(db: Database) {
       const mainsCurrentAmps = amps(input.mainsCurrent);
       await db.transaction(async (tx) => {
         await tx.execute(sql`select 1 from ${restorations} where ${restorations.id} = ${restorationId} for update`);
-        const [running] = await tx.select().from(soakSessions).where(and(eq(soakSessions.restorationId, restorationId), isNull(soakSessions.endedAt)));
+        const [running] = await tx
+          .select()
+          .from(soakSessions)
+          .where(and(eq(soakSessions.restorationId, restorationId), isNull(soakSessions.endedAt)));
         if (!running) throw new ConflictError('No soak session is running: start one first.');
         let findingId: number | null = null;
         if (input.faults) {
-          const [photo] = await tx.select({ id: photos.id }).from(photos)
-            .where(and(eq(photos.restorationId, restorationId), input.photoId ? eq(photos.id, input.photoId) : undefined))
-            .orderBy(desc(photos.createdAt)).limit(1);
-          if (!photo) throw new ConflictError('A fault opens a finding pinned on a chassis photo: upload a photo first, then stop the session.');
-          const [top] = await tx.select({ n: max(findings.number) }).from(findings).where(eq(findings.restorationId, restorationId));
-          const [f] = await tx.insert(findings).values({
-            restorationId, photoId: photo.id, number: (top?.n ?? 0) + 1, shape: 'pin', points: [{ x: 0.5, y: 0.5 }],
-            title: `Soak fault: ${input.faults}`.slice(0, 200), kind: 'hazard', severity: 'fault', authorId: actorId,
-          }).returning({ id: findings.id });
+          const [photo] = await tx
+            .select({ id: photos.id })
+            .from(photos)
+            .where(
+              and(eq(photos.restorationId, restorationId), input.photoId ? eq(photos.id, input.photoId) : undefined),
+            )
+            .orderBy(desc(photos.createdAt))
+            .limit(1);
+          if (!photo)
+            throw new ConflictError(
+              'A fault opens a finding pinned on a chassis photo: upload a photo first, then stop the session.',
+            );
+          const [top] = await tx
+            .select({ n: max(findings.number) })
+            .from(findings)
+            .where(eq(findings.restorationId, restorationId));
+          const [f] = await tx
+            .insert(findings)
+            .values({
+              restorationId,
+              photoId: photo.id,
+              number: (top?.n ?? 0) + 1,
+              shape: 'pin',
+              points: [{ x: 0.5, y: 0.5 }],
+              title: `Soak fault: ${input.faults}`.slice(0, 200),
+              kind: 'hazard',
+              severity: 'fault',
+              authorId: actorId,
+            })
+            .returning({ id: findings.id });
           findingId = f!.id;
-          await tx.insert(events).values({ restorationId, kind: 'finding-opened', actorId, findingId, photoId: photo.id });
+          await tx
+            .insert(events)
+            .values({ restorationId, kind: 'finding-opened', actorId, findingId, photoId: photo.id });
         }
         const endedAt = new Date();
-        await tx.update(soakSessions).set({
-          endedAt, ambientC: input.ambientC ?? null, chassisC: input.chassisC ?? null, mainsCurrentText: input.mainsCurrent, mainsCurrentAmps,
-          faults: input.faults, actionTaken: input.actionTaken, findingId,
-        }).where(eq(soakSessions.id, running.id));
+        await tx
+          .update(soakSessions)
+          .set({
+            endedAt,
+            ambientC: input.ambientC ?? null,
+            chassisC: input.chassisC ?? null,
+            mainsCurrentText: input.mainsCurrent,
+            mainsCurrentAmps,
+            faults: input.faults,
+            actionTaken: input.actionTaken,
+            findingId,
+          })
+          .where(eq(soakSessions.id, running.id));
         const hours = (endedAt.getTime() - running.startedAt.getTime()) / HOUR_MS;
-        await tx.insert(events).values({ restorationId, kind: 'soak-session', actorId, data: { soakSessionId: running.id, findingId, hours, fault: input.faults !== '' } });
+        await tx.insert(events).values({
+          restorationId,
+          kind: 'soak-session',
+          actorId,
+          data: { soakSessionId: running.id, findingId, hours, fault: input.faults !== '' },
+        });
       });
       return this.log(restorationId);
     },

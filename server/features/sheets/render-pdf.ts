@@ -15,7 +15,12 @@ const require = createRequire(import.meta.url);
 /** The 14 standard PDF fonts as pdfjs ships them, for sheets that name a font without embedding it. */
 const standardFontDataUrl = `${join(dirname(require.resolve('pdfjs-dist/package.json')), 'standard_fonts')}/`;
 
-const notReadable = (detail: string) => new HttpError(415, 'unsupported_type', `That PDF could not be read (${detail}). Export it again, or send each page as a PNG or TIFF scan.`);
+const notReadable = (detail: string) =>
+  new HttpError(
+    415,
+    'unsupported_type',
+    `That PDF could not be read (${detail}). Export it again, or send each page as a PNG or TIFF scan.`,
+  );
 
 /** A PDF starts with `%PDF-` within its first 1,024 bytes (ISO 32000-1, 7.5.2, as readers accept it). */
 export async function looksLikePdf(path: string): Promise<boolean> {
@@ -38,23 +43,47 @@ export interface PdfPageImage {
  * Draws every page of a PDF as a PNG, one page at a time (memory holds one page), with pdfjs-dist on
  * @napi-rs/canvas. Scripts in the PDF never run (`isEvalSupported: false`, no scripting).
  */
-export async function* renderPdfPages(data: Uint8Array, limits: { longSidePx: number; maxPixels: number }, signal?: AbortSignal): AsyncGenerator<PdfPageImage> {
-  const task = getDocument({ data, isEvalSupported: false, enableXfa: false, standardFontDataUrl, verbosity: 0, stopAtErrors: true });
+export async function* renderPdfPages(
+  data: Uint8Array,
+  limits: { longSidePx: number; maxPixels: number },
+  signal?: AbortSignal,
+): AsyncGenerator<PdfPageImage> {
+  const task = getDocument({
+    data,
+    isEvalSupported: false,
+    enableXfa: false,
+    standardFontDataUrl,
+    verbosity: 0,
+    stopAtErrors: true,
+  });
   let pdf: Awaited<typeof task.promise>;
   try {
     pdf = await task.promise;
   } catch (err) {
     await task.destroy().catch(() => {});
-    throw notReadable(err instanceof Error && err.name === 'PasswordException' ? 'it is protected by a password' : 'it is damaged or not a PDF');
+    throw notReadable(
+      err instanceof Error && err.name === 'PasswordException'
+        ? 'it is protected by a password'
+        : 'it is damaged or not a PDF',
+    );
   }
   try {
-    if (pdf.numPages > PDF_MAX_PAGES) throw new HttpError(413, 'too_large', `The PDF has ${pdf.numPages} pages; send at most ${PDF_MAX_PAGES} at a time.`);
+    if (pdf.numPages > PDF_MAX_PAGES)
+      throw new HttpError(
+        413,
+        'too_large',
+        `The PDF has ${pdf.numPages} pages; send at most ${PDF_MAX_PAGES} at a time.`,
+      );
     for (let n = 1; n <= pdf.numPages; n++) {
       signal?.throwIfAborted();
       const page = await pdf.getPage(n);
       const base = page.getViewport({ scale: 1 });
       const long = Math.max(base.width, base.height);
-      const scale = Math.min(PDF_RENDER_DPI / 72, limits.longSidePx / long, Math.sqrt(limits.maxPixels / (base.width * base.height)));
+      const scale = Math.min(
+        PDF_RENDER_DPI / 72,
+        limits.longSidePx / long,
+        Math.sqrt(limits.maxPixels / (base.width * base.height)),
+      );
       const viewport = page.getViewport({ scale });
       // Drawing takes one of the decode slots uploads use: a page at 300 dpi is as large as a big photo.
       const png = await withDecodeSlot(async () => {
@@ -64,7 +93,11 @@ export async function* renderPdfPages(data: Uint8Array, limits: { longSidePx: nu
         context.fillRect(0, 0, canvas.width, canvas.height);
         try {
           // @napi-rs/canvas implements the canvas API pdfjs draws with; its types differ from the DOM's.
-          await page.render({ canvas: canvas as unknown as HTMLCanvasElement, canvasContext: context as unknown as CanvasRenderingContext2D, viewport }).promise;
+          await page.render({
+            canvas: canvas as unknown as HTMLCanvasElement,
+            canvasContext: context as unknown as CanvasRenderingContext2D,
+            viewport,
+          }).promise;
         } catch {
           throw notReadable(`page ${n} could not be drawn`);
         }

@@ -14,7 +14,8 @@ import { looksLikePdf, renderPdfPages } from './render-pdf';
  */
 export const SHEET_LARGE_PX = 6000;
 const formats = { tiff: 'image/tiff' };
-const unsupportedMessage = 'That file is not a service sheet Gridleak can read: send a PDF, or a scan as JPEG, PNG or TIFF.';
+const unsupportedMessage =
+  'That file is not a service sheet Gridleak can read: send a PDF, or a scan as JPEG, PNG or TIFF.';
 
 export interface StoredSheet {
   storageKey: string;
@@ -29,8 +30,18 @@ interface IngestOptions {
 }
 
 /** A page image through the photo pipeline, its three variants stored under the sheet's key. */
-async function storePage(storage: Storage, storageKey: string, pageNumber: number, source: string | Buffer, options: IngestOptions) {
-  const processed = await processPhoto(source, { maxPixels: options.maxPixels }, { formats, largePx: SHEET_LARGE_PX, unsupportedMessage, phone: false });
+async function storePage(
+  storage: Storage,
+  storageKey: string,
+  pageNumber: number,
+  source: string | Buffer,
+  options: IngestOptions,
+) {
+  const processed = await processPhoto(
+    source,
+    { maxPixels: options.maxPixels },
+    { formats, largePx: SHEET_LARGE_PX, unsupportedMessage, phone: false },
+  );
   const keys = sheetKeys(storageKey).page(pageNumber);
   const { signal } = options;
   signal?.throwIfAborted();
@@ -47,7 +58,11 @@ async function storePage(storage: Storage, storageKey: string, pageNumber: numbe
  * its first bytes, never by its name) is drawn page by page; a scan is one page. On any failure the objects
  * already stored are deleted, so the caller writes its rows only once this has returned.
  */
-export async function storeSheetFile(storage: Storage, file: { path: string; size: number; mimeType: string }, options: IngestOptions): Promise<StoredSheet> {
+export async function storeSheetFile(
+  storage: Storage,
+  file: { path: string; size: number; mimeType: string },
+  options: IngestOptions,
+): Promise<StoredSheet> {
   const storageKey = `${options.restorationId}/${randomUUID()}`;
   const keys = sheetKeys(storageKey);
   const { signal } = options;
@@ -55,21 +70,35 @@ export async function storeSheetFile(storage: Storage, file: { path: string; siz
   try {
     const pdf = await looksLikePdf(file.path);
     if (!pdf && file.mimeType === 'application/pdf')
-      throw new HttpError(415, 'unsupported_type', 'That file is named as a PDF but is not one (a PDF starts with "%PDF-"). Export the service sheet as a PDF again, or send the pages as scans.');
+      throw new HttpError(
+        415,
+        'unsupported_type',
+        'That file is named as a PDF but is not one (a PDF starts with "%PDF-"). Export the service sheet as a PDF again, or send the pages as scans.',
+      );
     const pages: StoredSheet['pages'] = [];
     let contentType = 'application/pdf';
     // The original goes up while the pages are drawn; a scan's type is known once the pipeline has read it.
-    const storeOriginal = (type: string) => storage.putObject(keys.original, createReadStream(file.path), type, file.size, { signal });
+    const storeOriginal = (type: string) =>
+      storage.putObject(keys.original, createReadStream(file.path), type, file.size, { signal });
     if (pdf) {
       original = storeOriginal(contentType);
       original.catch(() => {});
       const data = new Uint8Array(await readFile(file.path));
-      for await (const page of renderPdfPages(data, { longSidePx: SHEET_LARGE_PX, maxPixels: options.maxPixels }, signal))
+      for await (const page of renderPdfPages(
+        data,
+        { longSidePx: SHEET_LARGE_PX, maxPixels: options.maxPixels },
+        signal,
+      ))
         pages.push(await storePage(storage, storageKey, page.pageNumber, page.png, options));
     } else {
       // The header tells a scan's type at once, so its original goes up while the variants are made.
-      const format = (await sharp(file.path).metadata().catch(() => undefined))?.format;
-      const known = format && { jpeg: 'image/jpeg', png: 'image/png', tiff: 'image/tiff', webp: 'image/webp' }[format as string];
+      const format = (
+        await sharp(file.path)
+          .metadata()
+          .catch(() => undefined)
+      )?.format;
+      const known =
+        format && { jpeg: 'image/jpeg', png: 'image/png', tiff: 'image/tiff', webp: 'image/webp' }[format as string];
       if (known) {
         original = storeOriginal(known);
         original.catch(() => {});
@@ -81,7 +110,11 @@ export async function storeSheetFile(storage: Storage, file: { path: string; siz
     if (!pages.length) throw new HttpError(415, 'unsupported_type', 'That PDF has no pages.');
     signal?.throwIfAborted();
     await (original ?? storeOriginal(contentType));
-    return { storageKey, contentType, pages: pages.map(({ pageNumber, width, height }) => ({ pageNumber, width, height })) };
+    return {
+      storageKey,
+      contentType,
+      pages: pages.map(({ pageNumber, width, height }) => ({ pageNumber, width, height })),
+    };
   } catch (err) {
     await original?.catch(() => {});
     await deleteSheetObjects(storage, storageKey).catch(() => {});

@@ -13,6 +13,9 @@ export const sheetKeys = (storageKey: string) => ({
 /** Deletes every object of a sheet (its original and every page's variants), or of one page only. */
 export async function deleteSheetObjects(storage: Storage, storageKey: string, pageNumber?: number): Promise<void> {
   const keys: string[] = [];
-  for await (const o of storage.listObjects(pageNumber ? `sheets/${storageKey}/p${pageNumber}/` : `sheets/${storageKey}/`)) keys.push(o.key);
+  for await (const o of storage.listObjects(
+    pageNumber ? `sheets/${storageKey}/p${pageNumber}/` : `sheets/${storageKey}/`,
+  ))
+    keys.push(o.key);
   await Promise.all(keys.map((k) => storage.deleteObject(k)));
 }

@@ -1,5 +1,10 @@
 import { can, type Role } from '../../../shared/permissions';
-import { sheetUploadFieldsSchema, type Sheet, type SheetPage, type SheetPagePatch } from '../../../shared/schemas/sheets';
+import {
+  sheetUploadFieldsSchema,
+  type Sheet,
+  type SheetPage,
+  type SheetPagePatch,
+} from '../../../shared/schemas/sheets';
 import type { PhotosDeps } from '../photos/photos.service';
 import { unitOfWork } from '../../db/unit-of-work';
 import { BadRequestError, NotFoundError } from '../../http/errors';
@@ -9,7 +14,15 @@ import { deleteSheetObjects, sheetKeys } from './sheet-objects';
 import { storeSheetFile, type StoredSheet } from './sheet-ingest';
 import { sheetsRepo, type SheetPageRow } from './sheets.repo';
 
-const extension: Record<string, string> = { 'application/pdf': 'pdf', 'image/jpeg': 'jpg', 'image/png': 'png', 'image/tiff': 'tif', 'image/webp': 'webp', 'image/heif': 'heic', 'image/avif': 'avif' };
+const extension: Record<string, string> = {
+  'application/pdf': 'pdf',
+  'image/jpeg': 'jpg',
+  'image/png': 'png',
+  'image/tiff': 'tif',
+  'image/webp': 'webp',
+  'image/heif': 'heic',
+  'image/avif': 'avif',
+};
 
 export function sheetsService({ db, storage, config }: PhotosDeps) {
   const repo = sheetsRepo(db);
@@ -21,11 +34,23 @@ export function sheetsService({ db, storage, config }: PhotosDeps) {
       storage.getSignedUrl(page.thumb),
       storage.getSignedUrl(page.display),
       storage.getSignedUrl(page.large),
-      can(role, 'sheets.upload') ? storage.getSignedUrl(keys.original, { downloadName: `sheet-${row.sheetId}.${extension[row.contentType] ?? 'bin'}` }) : undefined,
+      can(role, 'sheets.upload')
+        ? storage.getSignedUrl(keys.original, {
+            downloadName: `sheet-${row.sheetId}.${extension[row.contentType] ?? 'bin'}`,
+          })
+        : undefined,
     ]);
     return {
-      id: row.id, restorationId: row.restorationId, sheetId: row.sheetId, pageNumber: row.pageNumber, kind: row.kind, title: row.title,
-      ownerVisible: row.ownerVisible, width: row.width, height: row.height, uploadedAt: row.createdAt.toISOString(),
+      id: row.id,
+      restorationId: row.restorationId,
+      sheetId: row.sheetId,
+      pageNumber: row.pageNumber,
+      kind: row.kind,
+      title: row.title,
+      ownerVisible: row.ownerVisible,
+      width: row.width,
+      height: row.height,
+      uploadedAt: row.createdAt.toISOString(),
       urls: original ? { thumb, display, large, original } : { thumb, display, large },
     };
   }
@@ -48,19 +73,40 @@ export function sheetsService({ db, storage, config }: PhotosDeps) {
      * Stores an uploaded sheet (a PDF drawn page by page, or one scan): objects go up first, then the sheet,
      * its pages and the history line in one transaction; on any failure the objects stored are deleted.
      */
-    async ingest(restorationId: number, file: { path: string; size: number; mimeType: string }, rawFields: Record<string, unknown>, uploadedById: number, role: Role, signal?: AbortSignal): Promise<Sheet> {
+    async ingest(
+      restorationId: number,
+      file: { path: string; size: number; mimeType: string },
+      rawFields: Record<string, unknown>,
+      uploadedById: number,
+      role: Role,
+      signal?: AbortSignal,
+    ): Promise<Sheet> {
       const fields = sheetUploadFieldsSchema.safeParse(rawFields);
-      if (!fields.success) throw new BadRequestError(fields.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
+      if (!fields.success)
+        throw new BadRequestError(fields.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; '));
       let stored: StoredSheet | undefined;
       try {
         stored = await storeSheetFile(storage, file, { restorationId, maxPixels: config.uploads.maxPixels, signal });
         signal?.throwIfAborted();
         const { storageKey, contentType, pages } = stored;
         const sheetId = await unitOfWork(db, async (tx) => {
-          const id = await sheetsRepo(tx).insertSheet({ restorationId, storageKey, contentType, sizeBytes: file.size, uploadedById });
+          const id = await sheetsRepo(tx).insertSheet({
+            restorationId,
+            storageKey,
+            contentType,
+            sizeBytes: file.size,
+            uploadedById,
+          });
           const pageIds: number[] = [];
-          for (const p of pages) pageIds.push(await sheetsRepo(tx).insertPage({ sheetId: id, restorationId, ...fields.data, ...p }));
-          await recordEvent(tx, { restorationId, kind: 'sheet-added', actorId: uploadedById, sheetPageId: pageIds[0], data: { pages: pages.length, contentType } });
+          for (const p of pages)
+            pageIds.push(await sheetsRepo(tx).insertPage({ sheetId: id, restorationId, ...fields.data, ...p }));
+          await recordEvent(tx, {
+            restorationId,
+            kind: 'sheet-added',
+            actorId: uploadedById,
+            sheetPageId: pageIds[0],
+            data: { pages: pages.length, contentType },
+          });
           return id;
         });
         const rows = await Promise.all((await repo.pagesOf(sheetId)).map((r) => toPage(r, role)));
@@ -81,14 +127,22 @@ export function sheetsService({ db, storage, config }: PhotosDeps) {
       await visible(id, role);
       await unitOfWork(db, async (tx, afterCommit) => {
         const gone = await sheetsRepo(tx).removePage(id);
-        if (gone) afterCommit(() => deleteSheetObjects(storage, gone.storageKey, gone.sheetGone ? undefined : gone.pageNumber).catch(() => {}));
+        if (gone)
+          afterCommit(() =>
+            deleteSheetObjects(storage, gone.storageKey, gone.sheetGone ? undefined : gone.pageNumber).catch(() => {}),
+          );
       });
     },
     restorationOfPage: (id: number) => repo.restorationOfPage(id),
     /** The page as the guard's subject: who may not see it gets a 404, then the route's rule decides. */
     async subjectOfPage(id: number): Promise<RestorationAndRole | undefined> {
       const row = await repo.findPage(id);
-      return row && { restorationId: row.restorationId, subject: { view: 'sheets.view', context: { ownerVisible: row.ownerVisible } } };
+      return (
+        row && {
+          restorationId: row.restorationId,
+          subject: { view: 'sheets.view', context: { ownerVisible: row.ownerVisible } },
+        }
+      );
     },
   };
 }

@@ -17,16 +17,26 @@ function partsOf(objectKey: string): { sheetKey: string; page?: string } {
  * deleted from a longer sheet). Such objects are left by a crash between a commit and its object deletion, or
  * during an upload.
  */
-export async function sweepOrphanedSheetObjects(db: Database, storage: Storage, olderThanMs = ORPHAN_AGE_MS): Promise<number> {
+export async function sweepOrphanedSheetObjects(
+  db: Database,
+  storage: Storage,
+  olderThanMs = ORPHAN_AGE_MS,
+): Promise<number> {
   const cutoff = Date.now() - olderThanMs;
   const candidates: string[] = [];
   for await (const o of storage.listObjects('sheets/')) if (o.lastModified.getTime() <= cutoff) candidates.push(o.key);
   if (!candidates.length) return 0;
   const sheetKeys = [...new Set(candidates.map((k) => partsOf(k).sheetKey))];
-  const sheetRows = await db.select({ id: sheets.id, key: sheets.storageKey }).from(sheets).where(inArray(sheets.storageKey, sheetKeys));
+  const sheetRows = await db
+    .select({ id: sheets.id, key: sheets.storageKey })
+    .from(sheets)
+    .where(inArray(sheets.storageKey, sheetKeys));
   const keyOfSheet = new Map(sheetRows.map((r) => [r.id, r.key]));
   const pageRows = sheetRows.length
-    ? await db.select({ sheetId: sheetPages.sheetId, pageNumber: sheetPages.pageNumber }).from(sheetPages).where(inArray(sheetPages.sheetId, [...keyOfSheet.keys()]))
+    ? await db
+        .select({ sheetId: sheetPages.sheetId, pageNumber: sheetPages.pageNumber })
+        .from(sheetPages)
+        .where(inArray(sheetPages.sheetId, [...keyOfSheet.keys()]))
     : [];
   const existingSheets = new Set(keyOfSheet.values());
   const existingPages = new Set(pageRows.map((p) => `${keyOfSheet.get(p.sheetId)}/p${p.pageNumber}`));

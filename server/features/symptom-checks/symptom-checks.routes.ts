@@ -14,12 +14,24 @@ export function symptomChecksRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const checks = symptomChecksService(deps);
   const router = Router();
-  router.get('/restorations/:id/symptom-checks', requireUser, validate(list), guard(db, 'help.view'), async (_req, res) => {
-    res.json(await checks.list(input(res, list).params.id, roleOf(res)));
-  });
-  router.put('/restorations/:id/symptom-checks/:symptomId/:causeId', requireUser, validate(record), guard(db, 'help.ask'), async (req, res) => {
-    const { params, body } = input(res, record);
-    res.json(await checks.record(params.id, params.symptomId, params.causeId, body, req.user!.id, roleOf(res)));
-  });
+  router.get(
+    '/restorations/:id/symptom-checks',
+    requireUser,
+    validate(list),
+    guard(db, 'help.view'),
+    async (_req, res) => {
+      res.json(await checks.list(input(res, list).params.id, roleOf(res)));
+    },
+  );
+  router.put(
+    '/restorations/:id/symptom-checks/:symptomId/:causeId',
+    requireUser,
+    validate(record),
+    guard(db, 'help.ask'),
+    async (req, res) => {
+      const { params, body } = input(res, record);
+      res.json(await checks.record(params.id, params.symptomId, params.causeId, body, req.user!.id, roleOf(res)));
+    },
+  );
   return router;
 }

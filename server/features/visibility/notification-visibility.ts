@@ -11,7 +11,10 @@ export const notificationJoins = {
   finding: eq(findings.id, notifications.findingId),
   photo: eq(photos.id, findings.photoId),
   comment: eq(comments.id, notifications.commentId),
-  membership: and(eq(memberships.restorationId, notifications.restorationId), eq(memberships.userId, notifications.userId)),
+  membership: and(
+    eq(memberships.restorationId, notifications.restorationId),
+    eq(memberships.userId, notifications.userId),
+  ),
 };
 
 export const notificationVisible: SQL = visibleSqlByRole(memberships.role, 'notification', {

@@ -7,7 +7,9 @@ import { findingChanges, findings } from '../../db/schema';
 export type FieldSources = Partial<Record<VisibilityEntity, Record<string, SQLWrapper>>>;
 
 /** A table's (or an alias's) columns as field sources. */
-export const columnsOf = (table: Parameters<typeof getTableColumns>[0]): Record<string, SQLWrapper> => ({ ...getTableColumns(table) });
+export const columnsOf = (table: Parameters<typeof getTableColumns>[0]): Record<string, SQLWrapper> => ({
+  ...getTableColumns(table),
+});
 
 /**
  * When a finding was last shared with the owner: the latest change that set `ownerVisible` to true, or its
@@ -19,7 +21,10 @@ export function findingSharedAt(finding: typeof findings = findings): SQL {
 }
 
 /** The findings table's fields, with `sharedAt` derived from its change records. */
-export const findingFields = (finding: typeof findings = findings) => ({ ...columnsOf(finding), sharedAt: findingSharedAt(finding) });
+export const findingFields = (finding: typeof findings = findings) => ({
+  ...columnsOf(finding),
+  sharedAt: findingSharedAt(finding),
+});
 
 function source(sources: FieldSources, ref: FieldRef): SQLWrapper {
   const [entity, field] = ref.split('.') as [VisibilityEntity, string];
@@ -35,8 +40,20 @@ function source(sources: FieldSources, ref: FieldRef): SQLWrapper {
 export function conditionSql(condition: Condition, sources: FieldSources): SQL {
   if ('always' in condition) return sql`true`;
   if ('never' in condition) return sql`false`;
-  if ('all' in condition) return condition.all.length ? sql`(${sql.join(condition.all.map((c) => conditionSql(c, sources)), sql` and `)})` : sql`true`;
-  if ('any' in condition) return condition.any.length ? sql`(${sql.join(condition.any.map((c) => conditionSql(c, sources)), sql` or `)})` : sql`false`;
+  if ('all' in condition)
+    return condition.all.length
+      ? sql`(${sql.join(
+          condition.all.map((c) => conditionSql(c, sources)),
+          sql` and `,
+        )})`
+      : sql`true`;
+  if ('any' in condition)
+    return condition.any.length
+      ? sql`(${sql.join(
+          condition.any.map((c) => conditionSql(c, sources)),
+          sql` or `,
+        )})`
+      : sql`false`;
   if ('not' in condition) return sql`(not ${conditionSql(condition.not, sources)})`;
   const column = source(sources, condition.field);
   if ('is' in condition) {
@@ -45,7 +62,11 @@ export function conditionSql(condition: Condition, sources: FieldSources): SQL {
     if (condition.is === false) return sql`(${column} is false)`;
     return sql`coalesce(${column}::text = ${condition.is}, false)`;
   }
-  if ('in' in condition) return sql`coalesce(${column}::text in (${sql.join(condition.in.map((v) => sql`${v}`), sql`, `)}), false)`;
+  if ('in' in condition)
+    return sql`coalesce(${column}::text in (${sql.join(
+      condition.in.map((v) => sql`${v}`),
+      sql`, `,
+    )}), false)`;
   return sql`coalesce(${column} > ${source(sources, condition.after)}, false)`;
 }
 
@@ -63,4 +84,6 @@ export function visibleSqlByRole(role: SQLWrapper, subject: VisibilitySubject, s
 }
 
 /** Every field any role's rule for a subject reads (a query, or a test, must give a source for each). */
-export const fieldsRead = (subject: VisibilitySubject) => [...new Set(roles.flatMap((r) => fieldsOf(visibility[r][subject])))];
+export const fieldsRead = (subject: VisibilitySubject) => [
+  ...new Set(roles.flatMap((r) => fieldsOf(visibility[r][subject]))),
+];

@@ -8,19 +8,45 @@ import { workshopSettings } from '../../db/schema';
 export async function readWorkshopSettings(db: Executor): Promise<WorkshopSettings> {
   await db.insert(workshopSettings).values({ id: 1 }).onConflictDoNothing();
   const [row] = await db.select().from(workshopSettings).where(eq(workshopSettings.id, 1));
-  const { currency, labourRate, partsMarkupBasisPoints, taxName, taxRateBasisPoints, taxRounding, estimateApprovalRequired, invoicePrefix, timeZone } = row!;
-  return { currency, labourRate, partsMarkupBasisPoints, taxName, taxRateBasisPoints, taxRounding, estimateApprovalRequired, invoicePrefix, timeZone };
+  const {
+    currency,
+    labourRate,
+    partsMarkupBasisPoints,
+    taxName,
+    taxRateBasisPoints,
+    taxRounding,
+    estimateApprovalRequired,
+    invoicePrefix,
+    timeZone,
+  } = row!;
+  return {
+    currency,
+    labourRate,
+    partsMarkupBasisPoints,
+    taxName,
+    taxRateBasisPoints,
+    taxRounding,
+    estimateApprovalRequired,
+    invoicePrefix,
+    timeZone,
+  };
 }
 
 /** The settings a caller may leave out keep what is stored (or the defaults). */
-export type WorkshopSettingsWrite = Omit<WorkshopSettings, 'invoicePrefix' | 'timeZone'> & Partial<Pick<WorkshopSettings, 'invoicePrefix' | 'timeZone'>>;
+export type WorkshopSettingsWrite = Omit<WorkshopSettings, 'invoicePrefix' | 'timeZone'> &
+  Partial<Pick<WorkshopSettings, 'invoicePrefix' | 'timeZone'>>;
 
 export async function writeWorkshopSettings(db: Executor, values: WorkshopSettingsWrite): Promise<WorkshopSettings> {
-  await db.insert(workshopSettings).values({ id: 1, ...values }).onConflictDoUpdate({ target: workshopSettings.id, set: values });
+  await db
+    .insert(workshopSettings)
+    .values({ id: 1, ...values })
+    .onConflictDoUpdate({ target: workshopSettings.id, set: values });
   return readWorkshopSettings(db);
 }
 
 /** The tax a set of prices carries, or null when none is charged. */
 export function taxRuleOf(s: Pick<WorkshopSettings, 'taxName' | 'taxRateBasisPoints' | 'taxRounding'>): TaxRule | null {
-  return s.taxRateBasisPoints === null ? null : { name: s.taxName, rateBasisPoints: s.taxRateBasisPoints, rounding: s.taxRounding };
+  return s.taxRateBasisPoints === null
+    ? null
+    : { name: s.taxName, rateBasisPoints: s.taxRateBasisPoints, rounding: s.taxRounding };
 }

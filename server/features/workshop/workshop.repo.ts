@@ -5,6 +5,9 @@ import { memberships } from '../../db/schema';
 
 /** The roles a person holds on any restoration, from which their workshop role is judged. */
 export async function rolesHeld(db: Executor, userId: number): Promise<Role[]> {
-  const held = await db.selectDistinct({ role: memberships.role }).from(memberships).where(eq(memberships.userId, userId));
+  const held = await db
+    .selectDistinct({ role: memberships.role })
+    .from(memberships)
+    .where(eq(memberships.userId, userId));
   return held.map((h) => h.role);
 }

@@ -29,10 +29,17 @@ button:focus-visible{outline:3px solid #1d4ed8;outline-offset:2px}.hint{margin:.
 <h1>${escape(s.line_name)}</h1>
 <p class="amount">${escape(amountText(s))}</p>
 ${notice ? `<p role="status">${escape(notice)}</p>` : ''}
-${open
-    ? button('pay', 'Pay', 'The payment succeeds.', 'background:#a4481b;color:#fff;border:2px solid #7a3310')
-      + button('decline', 'Decline', 'The bank declines the payment after checkout; nothing is paid.', 'background:#fff;color:#2b211a;border:2px solid #2b211a')
-      + button('cancel', 'Cancel', 'Go back without paying.', 'background:#fff;color:#2b211a;border:2px solid #6b4b32')
-    : `<p>This checkout is ${s.status === 'complete' ? 'finished' : 'closed'}.</p>`}
+${
+  open
+    ? button('pay', 'Pay', 'The payment succeeds.', 'background:#a4481b;color:#fff;border:2px solid #7a3310') +
+      button(
+        'decline',
+        'Decline',
+        'The bank declines the payment after checkout; nothing is paid.',
+        'background:#fff;color:#2b211a;border:2px solid #2b211a',
+      ) +
+      button('cancel', 'Cancel', 'Go back without paying.', 'background:#fff;color:#2b211a;border:2px solid #6b4b32')
+    : `<p>This checkout is ${s.status === 'complete' ? 'finished' : 'closed'}.</p>`
+}
 </main></body></html>`;
 }

@@ -25,7 +25,11 @@ export function webhookSender(secret: string, apiVersion: string) {
   async function post(payload: string, header: string): Promise<number> {
     if (!url) return 0;
     try {
-      const res = await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json; charset=utf-8', 'stripe-signature': header }, body: payload });
+      const res = await fetch(url, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json; charset=utf-8', 'stripe-signature': header },
+        body: payload,
+      });
       await res.arrayBuffer();
       return res.status;
     } catch {
@@ -34,8 +38,17 @@ export function webhookSender(secret: string, apiVersion: string) {
   }
 
   async function deliver(type: string, object: object) {
-    const event = { id: fakeId('evt'), object: 'event', api_version: apiVersion, created: Math.floor(Date.now() / 1000),
-      type, livemode: false, pending_webhooks: 1, request: { id: null, idempotency_key: null }, data: { object } };
+    const event = {
+      id: fakeId('evt'),
+      object: 'event',
+      api_version: apiVersion,
+      created: Math.floor(Date.now() / 1000),
+      type,
+      livemode: false,
+      pending_webhooks: 1,
+      request: { id: null, idempotency_key: null },
+      data: { object },
+    };
     const payload = JSON.stringify(event, null, 2);
     let status = 0;
     for (let attempt = 0; attempt < 5; attempt++) {

@@ -32,15 +32,27 @@ export interface FakeRefund {
   created: number;
 }
 
-interface LineItem { quantity?: string; price_data?: { currency?: string; unit_amount?: string; product_data?: { name?: string } } }
+interface LineItem {
+  quantity?: string;
+  price_data?: { currency?: string; unit_amount?: string; product_data?: { name?: string } };
+}
 export interface SessionParams {
-  mode?: string; success_url?: string; cancel_url?: string; client_reference_id?: string;
-  metadata?: Record<string, string>; line_items?: LineItem[] | Record<string, LineItem>;
+  mode?: string;
+  success_url?: string;
+  cancel_url?: string;
+  client_reference_id?: string;
+  metadata?: Record<string, string>;
+  line_items?: LineItem[] | Record<string, LineItem>;
 }
 
 /** A request the real service would refuse, with its error type and the parameter at fault. */
 export class FakeApiError extends Error {
-  constructor(readonly status: number, message: string, readonly param?: string, readonly type = 'invalid_request_error') {
+  constructor(
+    readonly status: number,
+    message: string,
+    readonly param?: string,
+    readonly type = 'invalid_request_error',
+  ) {
     super(message);
   }
 }
@@ -56,7 +68,8 @@ export function fakeState(origin: () => string) {
   return {
     sessions,
     create(p: SessionParams): FakeSession {
-      if (p.mode !== 'payment') throw new FakeApiError(400, 'Only mode=payment is supported by the local fake.', 'mode');
+      if (p.mode !== 'payment')
+        throw new FakeApiError(400, 'Only mode=payment is supported by the local fake.', 'mode');
       if (!p.success_url) throw new FakeApiError(400, 'Missing required param: success_url.', 'success_url');
       const lines = Object.values(p.line_items ?? {});
       if (!lines.length) throw new FakeApiError(400, 'Missing required param: line_items.', 'line_items');
@@ -64,13 +77,26 @@ export function fakeState(origin: () => string) {
       if (!/^[a-z]{3}$/.test(currency) || lines.some((l) => l.price_data?.currency?.toLowerCase() !== currency))
         throw new FakeApiError(400, 'Every line needs price_data[currency], and the same one.', 'line_items');
       const amount = lines.reduce((a, l) => a + Number(l.price_data?.unit_amount ?? NaN) * Number(l.quantity ?? 1), 0);
-      if (!Number.isInteger(amount) || amount < 1) throw new FakeApiError(400, 'Invalid unit_amount or quantity.', 'line_items');
+      if (!Number.isInteger(amount) || amount < 1)
+        throw new FakeApiError(400, 'Invalid unit_amount or quantity.', 'line_items');
       const id = fakeId('cs');
       const session: FakeSession = {
-        id, object: 'checkout.session', mode: 'payment', status: 'open', payment_status: 'unpaid', amount_total: amount, currency,
+        id,
+        object: 'checkout.session',
+        mode: 'payment',
+        status: 'open',
+        payment_status: 'unpaid',
+        amount_total: amount,
+        currency,
         line_name: lines.map((l) => l.price_data?.product_data?.name ?? 'Payment').join(', '),
-        client_reference_id: p.client_reference_id ?? null, metadata: p.metadata ?? {}, payment_intent: null,
-        success_url: p.success_url, cancel_url: p.cancel_url ?? null, url: `${origin()}/checkout/${id}`, created: now(), livemode: false,
+        client_reference_id: p.client_reference_id ?? null,
+        metadata: p.metadata ?? {},
+        payment_intent: null,
+        success_url: p.success_url,
+        cancel_url: p.cancel_url ?? null,
+        url: `${origin()}/checkout/${id}`,
+        created: now(),
+        livemode: false,
       };
       sessions.set(id, session);
       return session;
@@ -90,20 +116,47 @@ export function fakeState(origin: () => string) {
     },
     refund(p: { payment_intent?: string; amount?: string; metadata?: Record<string, string> }) {
       const s = [...sessions.values()].find((x) => x.payment_intent && x.payment_intent === p.payment_intent);
-      if (!s || s.payment_status !== 'paid') throw new FakeApiError(400, `No succeeded payment for payment_intent '${p.payment_intent ?? ''}'.`, 'payment_intent');
+      if (!s || s.payment_status !== 'paid')
+        throw new FakeApiError(
+          400,
+          `No succeeded payment for payment_intent '${p.payment_intent ?? ''}'.`,
+          'payment_intent',
+        );
       const done = refunds.get(s.payment_intent!) ?? [];
       const left = s.amount_total - done.reduce((a, r) => a + r.amount, 0);
       const amount = p.amount === undefined ? left : Number(p.amount);
       if (!Number.isInteger(amount) || amount < 1 || amount > left)
-        throw new FakeApiError(400, `Refund amount (${amount}) is greater than unrefunded amount on charge (${left}).`, 'amount');
-      const refund: FakeRefund = { id: fakeId('re'), object: 'refund', amount, currency: s.currency, payment_intent: s.payment_intent!,
-        charge: charges.get(s.payment_intent!)!, status: 'succeeded', metadata: p.metadata ?? {}, created: now() };
+        throw new FakeApiError(
+          400,
+          `Refund amount (${amount}) is greater than unrefunded amount on charge (${left}).`,
+          'amount',
+        );
+      const refund: FakeRefund = {
+        id: fakeId('re'),
+        object: 'refund',
+        amount,
+        currency: s.currency,
+        payment_intent: s.payment_intent!,
+        charge: charges.get(s.payment_intent!)!,
+        status: 'succeeded',
+        metadata: p.metadata ?? {},
+        created: now(),
+      };
       refunds.set(s.payment_intent!, [...done, refund]);
       const all = [...done, refund];
       const refunded = all.reduce((a, r) => a + r.amount, 0);
-      const charge = { id: refund.charge, object: 'charge', amount: s.amount_total, amount_refunded: refunded, currency: s.currency,
-        payment_intent: s.payment_intent, paid: true, refunded: refunded === s.amount_total, status: 'succeeded',
-        refunds: { object: 'list', data: all, has_more: false } };
+      const charge = {
+        id: refund.charge,
+        object: 'charge',
+        amount: s.amount_total,
+        amount_refunded: refunded,
+        currency: s.currency,
+        payment_intent: s.payment_intent,
+        paid: true,
+        refunded: refunded === s.amount_total,
+        status: 'succeeded',
+        refunds: { object: 'list', data: all, has_more: false },
+      };
       return { refund, charge };
     },
   };

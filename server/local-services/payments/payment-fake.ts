@@ -37,40 +37,52 @@ export async function startPaymentFake(options: PaymentFakeOptions) {
 
   const api = express.Router();
   const auth: RequestHandler = (req, _res, next) => {
-    if (req.headers.authorization !== `Bearer ${secretKey}`) throw new FakeApiError(401, 'Invalid API Key provided.', undefined, 'authentication_error');
+    if (req.headers.authorization !== `Bearer ${secretKey}`)
+      throw new FakeApiError(401, 'Invalid API Key provided.', undefined, 'authentication_error');
     next();
   };
-  const once = (make: (body: Record<string, never>) => unknown): RequestHandler => (req, res) => {
-    const key = req.headers['idempotency-key'];
-    const cacheKey = typeof key === 'string' ? `${req.path} ${key}` : undefined;
-    const reply = cacheKey && replies.has(cacheKey) ? replies.get(cacheKey) : make(req.body ?? {});
-    if (cacheKey) replies.set(cacheKey, reply);
-    res.json(reply);
-  };
+  const once =
+    (make: (body: Record<string, never>) => unknown): RequestHandler =>
+    (req, res) => {
+      const key = req.headers['idempotency-key'];
+      const cacheKey = typeof key === 'string' ? `${req.path} ${key}` : undefined;
+      const reply = cacheKey && replies.has(cacheKey) ? replies.get(cacheKey) : make(req.body ?? {});
+      if (cacheKey) replies.set(cacheKey, reply);
+      res.json(reply);
+    };
   api.use(auth);
-  api.post('/checkout/sessions', once((body) => state.create(body)));
+  api.post(
+    '/checkout/sessions',
+    once((body) => state.create(body)),
+  );
   api.get('/checkout/sessions/:id', (req, res) => void res.json(state.get(req.params.id as string)));
-  api.post('/refunds', once((body) => {
-    const { refund, charge } = state.refund(body);
-    hooks.emit('refund.created', refund);
-    hooks.emit('charge.refunded', charge);
-    return refund;
-  }));
+  api.post(
+    '/refunds',
+    once((body) => {
+      const { refund, charge } = state.refund(body);
+      hooks.emit('refund.created', refund);
+      hooks.emit('charge.refunded', charge);
+      return refund;
+    }),
+  );
   app.use('/v1', api);
 
   // Browsers ask for an icon; an empty answer keeps their console quiet.
   app.get('/favicon.ico', (_req, res) => void res.status(204).end());
   const page = (s: FakeSession, notice = '') => checkoutPage(s, notice);
   app.get('/checkout/:id', (req, res) => void res.type('html').send(page(state.get(req.params.id))));
-  const outcome = (paid: boolean): RequestHandler => (req, res) => {
-    const s = state.get(req.params.id as string);
-    if (s.status !== 'open') return void res.status(409).type('html').send(page(s, 'This checkout is already finished.'));
-    state.complete(s, paid);
-    hooks.emit('checkout.session.completed', s);
-    // A decline arrives after checkout, as a delayed payment method's failure does.
-    if (!paid) hooks.emit('checkout.session.async_payment_failed', s);
-    res.redirect(303, s.success_url.replace('{CHECKOUT_SESSION_ID}', s.id));
-  };
+  const outcome =
+    (paid: boolean): RequestHandler =>
+    (req, res) => {
+      const s = state.get(req.params.id as string);
+      if (s.status !== 'open')
+        return void res.status(409).type('html').send(page(s, 'This checkout is already finished.'));
+      state.complete(s, paid);
+      hooks.emit('checkout.session.completed', s);
+      // A decline arrives after checkout, as a delayed payment method's failure does.
+      if (!paid) hooks.emit('checkout.session.async_payment_failed', s);
+      res.redirect(303, s.success_url.replace('{CHECKOUT_SESSION_ID}', s.id));
+    };
   app.post('/checkout/:id/pay', outcome(true));
   app.post('/checkout/:id/decline', outcome(false));
   app.post('/checkout/:id/cancel', (req, res) => {
@@ -78,8 +90,14 @@ export async function startPaymentFake(options: PaymentFakeOptions) {
     res.redirect(303, s.cancel_url ?? s.success_url);
   });
   const errors: ErrorRequestHandler = (err, req, res, _next) => {
-    const e = err instanceof FakeApiError ? err : new FakeApiError(500, 'The local payment fake failed.', undefined, 'api_error');
-    if (req.path.startsWith('/v1')) res.status(e.status).json({ error: { type: e.type, message: e.message, ...(e.param ? { param: e.param } : {}) } });
+    const e =
+      err instanceof FakeApiError
+        ? err
+        : new FakeApiError(500, 'The local payment fake failed.', undefined, 'api_error');
+    if (req.path.startsWith('/v1'))
+      res
+        .status(e.status)
+        .json({ error: { type: e.type, message: e.message, ...(e.param ? { param: e.param } : {}) } });
     else res.status(e.status).type('text').send(e.message);
   };
   app.use(errors);
@@ -101,6 +119,10 @@ export async function startPaymentFake(options: PaymentFakeOptions) {
     /** Resolves once every event so far has been delivered (or given up on). */
     settled: hooks.settled,
     post: hooks.post,
-    close: () => new Promise<void>((resolve) => { server.closeAllConnections(); server.close(() => resolve()); }),
+    close: () =>
+      new Promise<void>((resolve) => {
+        server.closeAllConnections();
+        server.close(() => resolve());
+      }),
   };
 }

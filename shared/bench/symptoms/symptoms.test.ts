@@ -42,13 +42,30 @@ describe('the symptom checklist data', () => {
 
   it('when the symptoms a restorer most often brings are looked for, then each is on the list', () => {
     const titles = symptoms.map((s) => s.id);
-    for (const id of ['silent-valves-light', 'hum', 'crackle-volume', 'fades-warm', 'one-band-dead', 'distortion-loud', 'dead-dial-dark', 'whistle-tuning',
-      'motorboating', 'lamp-bright-fuse', 'red-plating', 'charred-cathode', 'hiss-no-stations', 'weak-double-peaks', 'crackle-random', 'static-tuning',
-      'avc-distortion', 'microphonic'])
+    for (const id of [
+      'silent-valves-light',
+      'hum',
+      'crackle-volume',
+      'fades-warm',
+      'one-band-dead',
+      'distortion-loud',
+      'dead-dial-dark',
+      'whistle-tuning',
+      'motorboating',
+      'lamp-bright-fuse',
+      'red-plating',
+      'charred-cathode',
+      'hiss-no-stations',
+      'weak-double-peaks',
+      'crackle-random',
+      'static-tuning',
+      'avc-distortion',
+      'microphonic',
+    ])
       expect(titles).toContain(id);
   });
 
-  it('when the causes are listed, then they keep the trade notes\' order of likelihood (TRADE.md §5)', () => {
+  it("when the causes are listed, then they keep the trade notes' order of likelihood (TRADE.md §5)", () => {
     const order = (id: string) => symptoms.find((s) => s.id === id)!.causes.map((c) => c.id);
     // S60, S41: electrolytics, then earths, then heater-cathode leakage.
     expect(order('hum')).toEqual(['smoothing-caps', 'poor-earth', 'heater-cathode-leak']);

@@ -17,9 +17,27 @@ afterEach(() => {
 
 // Sets from the invented workshop.
 const set = (id: number, model: string): Restoration => ({
-  id, make: 'Kestrel Wireless Co.', model, year: 1952, serial: null, equipmentKind: 'radio', mainsSetting: null, liveChassis: false,
-  symptoms: null, conditionNotes: null, workLevel: 'repair', hiddenPartsOriginal: false, story: null, careNotes: null, receivedOn: null,
-  stage: 'repair', ownerName: null, ownerEmail: null, role: 'technician', createdAt: '2026-11-01T09:00:00Z', updatedAt: '2026-11-01T09:00:00Z',
+  id,
+  make: 'Kestrel Wireless Co.',
+  model,
+  year: 1952,
+  serial: null,
+  equipmentKind: 'radio',
+  mainsSetting: null,
+  liveChassis: false,
+  symptoms: null,
+  conditionNotes: null,
+  workLevel: 'repair',
+  hiddenPartsOriginal: false,
+  story: null,
+  careNotes: null,
+  receivedOn: null,
+  stage: 'repair',
+  ownerName: null,
+  ownerEmail: null,
+  role: 'technician',
+  createdAt: '2026-11-01T09:00:00Z',
+  updatedAt: '2026-11-01T09:00:00Z',
 });
 
 function showBench() {

@@ -50,7 +50,9 @@ export function BenchRoute() {
         <ErrorState error={list.error} onRetry={() => list.refetch()} />
       ) : !sets?.length ? (
         q ? (
-          <EmptyState title={`Nothing matches “${q}”`}>Try part of the maker's name, the model or the serial number.</EmptyState>
+          <EmptyState title={`Nothing matches “${q}”`}>
+            Try part of the maker's name, the model or the serial number.
+          </EmptyState>
         ) : (
           <EmptyState title="The bench is clear">
             Take in the first set: its make, model and the owner's account of the fault are enough to start.
@@ -61,7 +63,12 @@ export function BenchRoute() {
           <StageColumns restorations={sets} />
           {list.isFetchNextPageError && <ErrorState error={list.error} onRetry={() => list.fetchNextPage()} />}
           {list.hasNextPage && (
-            <button type="button" className={buttonClass('quiet')} disabled={list.isFetchingNextPage} onClick={() => list.fetchNextPage()}>
+            <button
+              type="button"
+              className={buttonClass('quiet')}
+              disabled={list.isFetchingNextPage}
+              onClick={() => list.fetchNextPage()}
+            >
               {list.isFetchingNextPage ? 'Fetching more sets…' : 'Show more sets'}
             </button>
           )}

@@ -16,7 +16,11 @@ export function BringupRoute() {
       role={r.role}
       liveChassis={r.liveChassis}
       findings={findings.data?.map((f) => ({ id: f.id, number: f.number, title: f.title }))}
-      photos={photos.data?.map((p) => ({ id: p.id, label: `${viewLabels[p.view]}${p.caption ? ` — ${p.caption}` : ''}`, thumbUrl: p.urls.thumb }))}
+      photos={photos.data?.map((p) => ({
+        id: p.id,
+        label: `${viewLabels[p.view]}${p.caption ? ` — ${p.caption}` : ''}`,
+        thumbUrl: p.urls.thumb,
+      }))}
     />
   );
 }

@@ -7,7 +7,9 @@ export function DevMailRoute() {
   return (
     <div className="space-y-4">
       <h1 className="text-2xl font-bold">Captured e-mail</h1>
-      <p className="text-ink-soft">In development and tests, Gridleak's e-mail lands here instead of being delivered.</p>
+      <p className="text-ink-soft">
+        In development and tests, Gridleak's e-mail lands here instead of being delivered.
+      </p>
       {mail.isPending ? (
         <Loading label="Fetching captured e-mail…" />
       ) : mail.isError ? (

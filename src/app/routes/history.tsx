@@ -23,9 +23,7 @@ export function HistoryRoute() {
         ) : photos.isError ? (
           <ErrorState error={photos.error} onRetry={() => photos.refetch()} />
         ) : pairs.length === 0 ? (
-          <p className="text-ink-soft">
-            A pair appears here once a view has both a “before” and an “after” photo.
-          </p>
+          <p className="text-ink-soft">A pair appears here once a view has both a “before” and an “after” photo.</p>
         ) : (
           <div className="grid gap-8 lg:grid-cols-2">
             {pairs.map((pair) => (

@@ -22,9 +22,15 @@ export function InvitationRoute() {
   const signOut = useSignOut();
   const [mode, setMode] = useState<'sign-up' | 'sign-in'>('sign-up');
   if (invitation.isPending || me.isPending) return <Loading label="Opening the invitation…" />;
-  if (invitation.isError) return <AuthPanel title="Invitation"><ErrorState error={invitation.error} /></AuthPanel>;
+  if (invitation.isError)
+    return (
+      <AuthPanel title="Invitation">
+        <ErrorState error={invitation.error} />
+      </AuthPanel>
+    );
   const inv = invitation.data;
-  const join = () => accept.mutate(token, { onSuccess: (r) => navigate(`/restorations/${r.restorationId}`, { replace: true }) });
+  const join = () =>
+    accept.mutate(token, { onSuccess: (r) => navigate(`/restorations/${r.restorationId}`, { replace: true }) });
   const intro = (
     <p>
       {inv.invitedBy ?? 'A technician'} invited <strong>{inv.email}</strong> to the{' '}
@@ -58,15 +64,26 @@ export function InvitationRoute() {
     <AuthPanel title="Join the restoration" intro={intro}>
       <div role="tablist" aria-label="How to join" className="mb-4 grid grid-cols-2 gap-1 rounded-lg bg-sunken p-1">
         {(['sign-up', 'sign-in'] as const).map((m) => (
-          <button key={m} type="button" role="tab" aria-selected={mode === m} onClick={() => setMode(m)}
-            className={`min-h-11 rounded-md font-semibold ${mode === m ? 'bg-panel shadow-sm' : 'text-ink-soft'}`}>
+          <button
+            key={m}
+            type="button"
+            role="tab"
+            aria-selected={mode === m}
+            onClick={() => setMode(m)}
+            className={`min-h-11 rounded-md font-semibold ${mode === m ? 'bg-panel shadow-sm' : 'text-ink-soft'}`}
+          >
             {m === 'sign-up' ? 'New to Gridleak' : 'I have an account'}
           </button>
         ))}
       </div>
       {mode === 'sign-up' ? (
-        <SignUpForm invitation={{ token, email: inv.email }}
-          onDone={(r) => r.status === 'signed-in' && navigate(`/restorations/${r.restorationId ?? inv.restoration.id}`, { replace: true })} />
+        <SignUpForm
+          invitation={{ token, email: inv.email }}
+          onDone={(r) =>
+            r.status === 'signed-in' &&
+            navigate(`/restorations/${r.restorationId ?? inv.restoration.id}`, { replace: true })
+          }
+        />
       ) : (
         <SignInForm preset={{ email: inv.email }} onSignedIn={join} />
       )}

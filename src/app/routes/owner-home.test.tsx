@@ -26,37 +26,111 @@ afterEach(() => {
 
 // An invented set and family.
 const set = (id: number, overrides: Partial<Restoration> = {}): Restoration => ({
-  id, make: 'Aldermoor', model: 'Cantata', year: 1954, serial: null, equipmentKind: 'radio', mainsSetting: null, liveChassis: false,
-  symptoms: null, conditionNotes: null, workLevel: 'repair', hiddenPartsOriginal: false, story: 'Bought by Grandad Ivo for the kitchen in 1955.',
-  careNotes: null, receivedOn: null, stage: 'repair', ownerName: null, ownerEmail: null, role: 'owner', createdAt: '2026-11-01T09:00:00Z', updatedAt: '2026-11-01T09:00:00Z', ...overrides,
+  id,
+  make: 'Aldermoor',
+  model: 'Cantata',
+  year: 1954,
+  serial: null,
+  equipmentKind: 'radio',
+  mainsSetting: null,
+  liveChassis: false,
+  symptoms: null,
+  conditionNotes: null,
+  workLevel: 'repair',
+  hiddenPartsOriginal: false,
+  story: 'Bought by Grandad Ivo for the kitchen in 1955.',
+  careNotes: null,
+  receivedOn: null,
+  stage: 'repair',
+  ownerName: null,
+  ownerEmail: null,
+  role: 'owner',
+  createdAt: '2026-11-01T09:00:00Z',
+  updatedAt: '2026-11-01T09:00:00Z',
+  ...overrides,
 });
 const photos = [
-  makePhoto(1, { view: 'front', phase: 'before', ownerVisible: true, caption: 'as it arrived', takenAt: '2026-11-02T10:00:00Z' }),
-  makePhoto(2, { view: 'front', phase: 'after', ownerVisible: true, caption: 'cabinet waxed', takenAt: '2026-11-30T10:00:00Z' }),
+  makePhoto(1, {
+    view: 'front',
+    phase: 'before',
+    ownerVisible: true,
+    caption: 'as it arrived',
+    takenAt: '2026-11-02T10:00:00Z',
+  }),
+  makePhoto(2, {
+    view: 'front',
+    phase: 'after',
+    ownerVisible: true,
+    caption: 'cabinet waxed',
+    takenAt: '2026-11-30T10:00:00Z',
+  }),
 ];
 const finding = (id: number, status: Finding['status']): Finding => ({
-  id, photoId: 2, restorationId: 7, number: id, shape: 'pin', points: [{ x: 0.5, y: 0.5 }], title: 'Bulging filter can', componentRef: 'C30',
-  kind: 'leaking', severity: 'fault', status, dismissReason: null, ownerVisible: true, authorId: 1, authorName: 'Tessa Bench',
-  questionOpen: false, commentCount: 0, createdAt: '2026-11-20T09:00:00Z', updatedAt: '2026-11-20T09:00:00Z',
+  id,
+  photoId: 2,
+  restorationId: 7,
+  number: id,
+  shape: 'pin',
+  points: [{ x: 0.5, y: 0.5 }],
+  title: 'Bulging filter can',
+  componentRef: 'C30',
+  kind: 'leaking',
+  severity: 'fault',
+  status,
+  dismissReason: null,
+  ownerVisible: true,
+  authorId: 1,
+  authorName: 'Tessa Bench',
+  questionOpen: false,
+  commentCount: 0,
+  createdAt: '2026-11-20T09:00:00Z',
+  updatedAt: '2026-11-20T09:00:00Z',
 });
 const findings = [finding(4, 'repaired'), finding(5, 'confirmed')];
-const event = { id: 1, kind: 'stage-changed', at: '2026-11-24T12:00:00Z', actorName: 'Tessa Bench', summary: 'Stage: Assessment → Repair', photoId: null, findingId: null, thumbUrl: null, caution: false } satisfies TimelineEvent;
+const event = {
+  id: 1,
+  kind: 'stage-changed',
+  at: '2026-11-24T12:00:00Z',
+  actorName: 'Tessa Bench',
+  summary: 'Stage: Assessment → Repair',
+  photoId: null,
+  findingId: null,
+  thumbUrl: null,
+  caution: false,
+} satisfies TimelineEvent;
 
 /** Composes the page the way the /home route does, with the photos and findings given and the timeline fetched. */
 function showHome(sets: Restoration[], path = '/home') {
-  vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify([event]), { status: 200, headers: { 'Content-Type': 'application/json' } })));
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(
+      async () =>
+        new Response(JSON.stringify([event]), { status: 200, headers: { 'Content-Type': 'application/json' } }),
+    ),
+  );
   const renderSet = (r: Restoration) => (
     <OwnerSet
       restoration={r}
       hero={heroPhoto(photos)}
-      comparisons={suggestPairs(photos).map((p) => <BeforeAfter key={p.view} before={p.before} after={p.after} />)}
+      comparisons={suggestPairs(photos).map((p) => (
+        <BeforeAfter key={p.view} before={p.before} after={p.after} />
+      ))}
       repairs={<RepairedFindings findings={repairedFindings(findings)} />}
       timeline={<Timeline restorationId={r.id} />}
     />
   );
   const Page = () => {
     const selectedId = Number(useSearchParams()[0].get('set')) || undefined;
-    return <OwnerHome name="Mara Lind" sets={sets} selectedId={selectedId} renderSet={renderSet} renderCard={(r, to) => <OwnerSetCard restoration={r} hero={photos[1]} to={to} />} now={new Date(2026, 10, 24, 9)} />;
+    return (
+      <OwnerHome
+        name="Mara Lind"
+        sets={sets}
+        selectedId={selectedId}
+        renderSet={renderSet}
+        renderCard={(r, to) => <OwnerSetCard restoration={r} hero={photos[1]} to={to} />}
+        now={new Date(2026, 10, 24, 9)}
+      />
+    );
   };
   const router = createMemoryRouter([{ path: '/home', Component: Page }], { initialEntries: [path] });
   const client = testQueryClient();
@@ -74,19 +148,34 @@ describe("owner's home", () => {
     expect(screen.getByRole('heading', { level: 2, name: 'Aldermoor Cantata 1954' })).toBeInTheDocument();
     expect(screen.getByText('With the workshop: repair')).toBeInTheDocument();
     expect(screen.getByText('Bought by Grandad Ivo for the kitchen in 1955.')).toBeInTheDocument();
-    expect(screen.getByRole('img', { name: 'Aldermoor Cantata: cabinet waxed' })).toHaveAttribute('srcset', expect.stringContaining('/d/2.webp '));
+    expect(screen.getByRole('img', { name: 'Aldermoor Cantata: cabinet waxed' })).toHaveAttribute(
+      'srcset',
+      expect.stringContaining('/d/2.webp '),
+    );
 
     const link = screen.getByRole('link', { name: 'Download the hand-back report (PDF)' });
     expect(link).toHaveAttribute('href', '/api/restorations/7/report.pdf');
 
     const pair = screen.getByRole('region', { name: 'Before and after' });
-    expect(within(pair).getByRole('slider', { name: 'Before and after comparison' })).toHaveAttribute('aria-valuenow', '50');
-    expect(within(pair).getByRole('img', { name: 'Before — Front, before: as it arrived' })).toHaveAttribute('srcset', expect.stringContaining('/d/1.webp '));
-    expect(within(pair).getByRole('img', { name: 'After — Front, after: cabinet waxed' })).toHaveAttribute('srcset', expect.stringContaining('/d/2.webp '));
+    expect(within(pair).getByRole('slider', { name: 'Before and after comparison' })).toHaveAttribute(
+      'aria-valuenow',
+      '50',
+    );
+    expect(within(pair).getByRole('img', { name: 'Before — Front, before: as it arrived' })).toHaveAttribute(
+      'srcset',
+      expect.stringContaining('/d/1.webp '),
+    );
+    expect(within(pair).getByRole('img', { name: 'After — Front, after: cabinet waxed' })).toHaveAttribute(
+      'srcset',
+      expect.stringContaining('/d/2.webp '),
+    );
 
     const repairs = screen.getByRole('region', { name: 'What was put right' });
     expect(within(repairs).getAllByRole('link')).toHaveLength(1);
-    expect(within(repairs).getByRole('link', { name: 'C30: Bulging filter can — repaired' })).toHaveAttribute('href', '/restorations/7/photos/2/findings/4');
+    expect(within(repairs).getByRole('link', { name: 'C30: Bulging filter can — repaired' })).toHaveAttribute(
+      'href',
+      '/restorations/7/photos/2/findings/4',
+    );
     expect(repairs.querySelector('img')).toHaveAttribute('src', '/api/findings/4/closeup');
 
     expect(await screen.findByText('Stage: Assessment → Repair')).toBeInTheDocument();
@@ -105,7 +194,10 @@ describe("owner's home", () => {
 
     await user.click(within(cards).getByRole('link', { name: /Brennet Lark/ }));
     expect(screen.getByRole('heading', { level: 2, name: 'Brennet Lark 1954' })).toBeInTheDocument();
-    expect(screen.getByRole('link', { name: 'Download the hand-back report (PDF)' })).toHaveAttribute('href', '/api/restorations/8/report.pdf');
+    expect(screen.getByRole('link', { name: 'Download the hand-back report (PDF)' })).toHaveAttribute(
+      'href',
+      '/api/restorations/8/report.pdf',
+    );
     await user.click(screen.getByRole('link', { name: /All your sets/ }));
     expect(screen.getByRole('list', { name: 'Your sets' })).toBeInTheDocument();
   });

@@ -19,7 +19,15 @@ import { useRestorations } from '../../features/restorations/api/get-restoration
 import { OWNER_COLUMN_SIZES } from '../../lib/photo-sources';
 
 /** A query's loading and error states, else what its data draws. */
-function Loaded<T>({ query, label, children }: { query: UseQueryResult<T>; label: string; children: (data: T) => ReactNode }) {
+function Loaded<T>({
+  query,
+  label,
+  children,
+}: {
+  query: UseQueryResult<T>;
+  label: string;
+  children: (data: T) => ReactNode;
+}) {
   if (query.isPending) return <Loading label={label} />;
   if (query.isError) return <ErrorState error={query.error} onRetry={() => query.refetch()} />;
   return children(query.data);
@@ -46,7 +54,12 @@ function SetPage({ set }: { set: Restoration }) {
             {() => (
               <div className="space-y-8">
                 {pairs.map((pair) => (
-                  <BeforeAfter key={`${pair.before.id}-${pair.after.id}`} before={pair.before} after={pair.after} sizes={OWNER_COLUMN_SIZES} />
+                  <BeforeAfter
+                    key={`${pair.before.id}-${pair.after.id}`}
+                    before={pair.before}
+                    after={pair.after}
+                    sizes={OWNER_COLUMN_SIZES}
+                  />
                 ))}
               </div>
             )}

@@ -43,10 +43,23 @@ export function PhotoMarkupRoute() {
   if (photos.isError) return <ErrorState error={photos.error} onRetry={() => photos.refetch()} />;
   const photo = photos.data.find((p) => p.id === photoId);
   if (!photo || (findings.error instanceof ApiError && findings.error.status === 404))
-    return <EmptyState title="Photo not found">It is not in this restoration, or it is not shared with you. {back}</EmptyState>;
+    return (
+      <EmptyState title="Photo not found">
+        It is not in this restoration, or it is not shared with you. {back}
+      </EmptyState>
+    );
   if (findings.isPending) return <Loading label="Fetching the findings…" />;
   if (findings.isError) return <ErrorState error={findings.error} onRetry={() => findings.refetch()} />;
-  return <PhotoMarkup key={photo.id} photo={photo} findings={findings.data} meId={me.data?.id ?? 0} onImageError={refreshUrls} back={back} />;
+  return (
+    <PhotoMarkup
+      key={photo.id}
+      photo={photo}
+      findings={findings.data}
+      meId={me.data?.id ?? 0}
+      onImageError={refreshUrls}
+      back={back}
+    />
+  );
 }
 
 function PhotoMarkup({
@@ -90,7 +103,10 @@ function PhotoMarkup({
     onDeleted: (id) => id === findingId && select(undefined),
   });
   const canCreate = can(r.role, 'findings.create');
-  const canEdit = useCallback((f: Finding) => can(r.role, 'findings.edit', { isAuthor: f.authorId === meId }), [r.role, meId]);
+  const canEdit = useCallback(
+    (f: Finding) => can(r.role, 'findings.edit', { isAuthor: f.authorId === meId }),
+    [r.role, meId],
+  );
   const selected = findings.find((f) => f.id === findingId);
   // The photo and its marks come first; the finding's thread, readings and close-up are fetched after that frame.
   const [drawn, setDrawn] = useState(false);
@@ -117,7 +133,10 @@ function PhotoMarkup({
         </button>
       </div>
       {actions.alert && (
-        <div role="alert" className="flex items-start justify-between gap-3 rounded-lg border border-danger/40 bg-danger-soft px-4 py-2">
+        <div
+          role="alert"
+          className="flex items-start justify-between gap-3 rounded-lg border border-danger/40 bg-danger-soft px-4 py-2"
+        >
           <p>{actions.alert}</p>
           <button type="button" className="font-semibold underline" onClick={actions.dismissAlert}>
             Dismiss
@@ -183,7 +202,15 @@ function PhotoMarkup({
                 error={actions.createError}
                 onSubmit={actions.submitCreate}
                 onCancel={actions.cancelCreate}
-                refNotice={(typed) => <DuplicateFindingOffer restorationId={r.id} photoId={photo.id} typed={typed} mark={actions.pending!} onAttached={actions.cancelCreate} />}
+                refNotice={(typed) => (
+                  <DuplicateFindingOffer
+                    restorationId={r.id}
+                    photoId={photo.id}
+                    typed={typed}
+                    mark={actions.pending!}
+                    onAttached={actions.cancelCreate}
+                  />
+                )}
                 referenceListId="known-references"
                 referenceHelp={() => <KnownReferences restorationId={r.id} id="known-references" />}
               />

@@ -16,7 +16,9 @@ export function PhotosRoute() {
   const r = useRestorationContext();
   const [uploading, setUploading] = useState(false);
   // Leaving the tab cancels uploads in flight, so ask first.
-  const blocker = useBlocker(({ currentLocation, nextLocation }) => uploading && currentLocation.pathname !== nextLocation.pathname);
+  const blocker = useBlocker(
+    ({ currentLocation, nextLocation }) => uploading && currentLocation.pathname !== nextLocation.pathname,
+  );
   return (
     <>
       <PhotoLibrary restorationId={r.id} role={r.role} liveChassis={r.liveChassis} onUploadBusyChange={setUploading} />

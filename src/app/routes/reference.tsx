@@ -21,7 +21,9 @@ export function ReferenceRoute() {
   const [search] = useSearchParams();
   const first = search.get('first');
   const view: ReferenceView = {
-    diagram: idOf(search.get('diagram')), chassis: idOf(search.get('chassis')), finding: idOf(search.get('finding')),
+    diagram: idOf(search.get('diagram')),
+    chassis: idOf(search.get('chassis')),
+    finding: idOf(search.get('finding')),
     first: first === 'chassis' || first === 'diagram' ? first : undefined,
   };
   const marks = useReferenceMarks(r.id);
@@ -34,9 +36,13 @@ export function ReferenceRoute() {
   return (
     <section className="space-y-4" aria-labelledby="reference-heading">
       <p>
-        <Link to={`/restorations/${r.id}/sheets`} className="font-semibold text-glow-strong underline">Back to the service sheet</Link>
+        <Link to={`/restorations/${r.id}/sheets`} className="font-semibold text-glow-strong underline">
+          Back to the service sheet
+        </Link>
       </p>
-      <h2 id="reference-heading" className="font-mono text-xl font-bold">{refName}</h2>
+      <h2 id="reference-heading" className="font-mono text-xl font-bold">
+        {refName}
+      </h2>
       {failed ? (
         <ErrorState error={failed.error} onRetry={() => queries.forEach((q) => void q.refetch())} />
       ) : !marks.data || !pages.data || !photos.data || !findings.data || !notes.data ? (
@@ -45,12 +51,24 @@ export function ReferenceRoute() {
         <>
           <WithMarkupCanvas>
             <ReferenceSideBySide
-              restorationId={r.id} refName={refName} view={view} marks={marks.data} pages={pages.data} photos={photos.data}
-              findings={findings.data} mismatches={notes.data.filter((n) => n.ref === refName)} canMark={can(r.role, 'references.mark')}
+              restorationId={r.id}
+              refName={refName}
+              view={view}
+              marks={marks.data}
+              pages={pages.data}
+              photos={photos.data}
+              findings={findings.data}
+              mismatches={notes.data.filter((n) => n.ref === refName)}
+              canMark={can(r.role, 'references.mark')}
               onImageError={() => void Promise.all([pages.refetch(), photos.refetch()])}
             />
           </WithMarkupCanvas>
-          <MismatchNotesPanel restorationId={r.id} refName={refName} notes={notes.data.filter((n) => n.ref === refName)} canEdit={can(r.role, 'references.mark')} />
+          <MismatchNotesPanel
+            restorationId={r.id}
+            refName={refName}
+            notes={notes.data.filter((n) => n.ref === refName)}
+            canEdit={can(r.role, 'references.mark')}
+          />
         </>
       )}
     </section>

@@ -44,12 +44,19 @@ export function RestorationLayout() {
         <StageBadge stage={r.stage} />
         <span className="text-sm text-ink-soft">You: {roleLabels[r.role]}</span>
       </header>
-      <nav aria-label="Restoration" className="-mx-4 flex print:hidden overflow-x-auto whitespace-nowrap border-b border-rule px-4">
-        {tabs.filter(([to]) => (to !== 'help' || can(r.role, 'help.view')) && (to !== 'money' || can(r.role, 'money.view'))).map(([to, label]) => (
-          <NavLink key={to} to={to} end={to === '.'} className={tabClass}>
-            {label}
-          </NavLink>
-        ))}
+      <nav
+        aria-label="Restoration"
+        className="-mx-4 flex overflow-x-auto border-b border-rule px-4 whitespace-nowrap print:hidden"
+      >
+        {tabs
+          .filter(
+            ([to]) => (to !== 'help' || can(r.role, 'help.view')) && (to !== 'money' || can(r.role, 'money.view')),
+          )
+          .map(([to, label]) => (
+            <NavLink key={to} to={to} end={to === '.'} className={tabClass}>
+              {label}
+            </NavLink>
+          ))}
       </nav>
       <Outlet context={r} />
     </article>

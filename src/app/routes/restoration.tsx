@@ -29,13 +29,20 @@ export function RestorationRoute() {
     <div className="space-y-4">
       {r.liveChassis && (
         <p role="note" className="rounded-lg border-l-4 border-danger bg-danger-soft px-4 py-3">
-          <strong>Live chassis.</strong> The chassis may sit at mains potential: work through an isolation transformer, keep one hand
-          away, and refit insulating knobs and covers before hand-back. Follow local electrical codes and licensed practice.
+          <strong>Live chassis.</strong> The chassis may sit at mains potential: work through an isolation transformer,
+          keep one hand away, and refit insulating knobs and covers before hand-back. Follow local electrical codes and
+          licensed practice.
         </p>
       )}
       <ReportPanel restorationId={r.id} role={r.role} />
-      {canEdit && <StagePicker stage={r.stage} disabled={update.isPending} onChange={(stage) => update.mutate({ stage })} />}
-      {update.error && !editing && <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 font-semibold text-danger">{update.error.message}</p>}
+      {canEdit && (
+        <StagePicker stage={r.stage} disabled={update.isPending} onChange={(stage) => update.mutate({ stage })} />
+      )}
+      {update.error && !editing && (
+        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 font-semibold text-danger">
+          {update.error.message}
+        </p>
+      )}
       {editing ? (
         <div className="rounded-xl border border-rule bg-panel p-5">
           <RestorationForm
@@ -72,7 +79,9 @@ export function RestorationRoute() {
               {update.error instanceof ApiError && update.error.status === 409 && (
                 <>
                   {' '}
-                  <Link to="bring-up" className="font-semibold underline">Open the Bring-up tab</Link>
+                  <Link to="bring-up" className="font-semibold underline">
+                    Open the Bring-up tab
+                  </Link>
                 </>
               )}
             </p>

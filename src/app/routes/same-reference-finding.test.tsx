@@ -5,7 +5,13 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { NewFindingForm } from '../../features/markup/components/new-finding-form';
 import { FindingPanel } from '../../features/findings/components/finding-panel';
-import { fakeApi, makeFinding, members, ok, renderWithApp } from '../../features/findings/components/findings-test-support';
+import {
+  fakeApi,
+  makeFinding,
+  members,
+  ok,
+  renderWithApp,
+} from '../../features/findings/components/findings-test-support';
 import { SameReferenceFinding } from '../../features/findings/components/same-reference-finding';
 
 afterEach(() => {
@@ -14,13 +20,23 @@ afterEach(() => {
 });
 
 const Form = () => (
-  <NewFindingForm shape="pin" busy={false} onSubmit={vi.fn()} onCancel={vi.fn()} refNotice={(ref) => <SameReferenceFinding restorationId={7} componentRef={ref} />} />
+  <NewFindingForm
+    shape="pin"
+    busy={false}
+    onSubmit={vi.fn()}
+    onCancel={vi.fn()}
+    refNotice={(ref) => <SameReferenceFinding restorationId={7} componentRef={ref} />}
+  />
 );
 
 describe('a second finding for the same reference', () => {
   it('when the reference typed for a new finding is already on one, then the form names the first and links to it', async () => {
     const first = makeFinding(40, { number: 3, componentRef: 'C27', title: 'Leaky coupling capacitor', photoId: 11 });
-    fakeApi(({ path }) => (path === '/restorations/7/findings' ? ok([makeFinding(52, { number: 9, componentRef: 'C27' }), first, makeFinding(41, { componentRef: 'R20' })]) : undefined));
+    fakeApi(({ path }) =>
+      path === '/restorations/7/findings'
+        ? ok([makeFinding(52, { number: 9, componentRef: 'C27' }), first, makeFinding(41, { componentRef: 'R20' })])
+        : undefined,
+    );
     renderWithApp(<Form />);
     const user = userEvent.setup();
     await user.type(screen.getByLabelText('Component reference'), 'c27');
@@ -47,14 +63,21 @@ describe('a second finding for the same reference', () => {
     await user.clear(field);
     await user.type(field, 'c27');
     const notice = await screen.findByRole('group', { name: 'C27 already has a finding' });
-    expect(within(notice).getByRole('status')).toHaveTextContent('C27 already has finding #3, “Leaky coupling capacitor”.');
-    expect(within(notice).getByRole('link', { name: 'Open #3' })).toHaveAttribute('href', '/restorations/7/photos/11/findings/40');
+    expect(within(notice).getByRole('status')).toHaveTextContent(
+      'C27 already has finding #3, “Leaky coupling capacitor”.',
+    );
+    expect(within(notice).getByRole('link', { name: 'Open #3' })).toHaveAttribute(
+      'href',
+      '/restorations/7/photos/11/findings/40',
+    );
     // A note, not a refusal: the reference is saved all the same.
     await user.keyboard('{Enter}');
     await vi.waitFor(() => expect(api.calls.find((c) => c.method === 'PATCH')?.body).toEqual({ componentRef: 'c27' }));
     // The finding's own reference is never pointed out as a duplicate of itself.
     await user.clear(field);
     await user.type(field, 'R20');
-    await vi.waitFor(() => expect(screen.queryByRole('group', { name: /already has a finding/ })).not.toBeInTheDocument());
+    await vi.waitFor(() =>
+      expect(screen.queryByRole('group', { name: /already has a finding/ })).not.toBeInTheDocument(),
+    );
   });
 });

@@ -21,17 +21,30 @@ export function SheetPageRoute() {
   const pageId = Number(useParams().pageId);
   const [search] = useSearchParams();
   const pages = useSheetPages(r.id);
-  const back = <Link to={`/restorations/${r.id}/sheets`} className="font-semibold text-glow-strong underline">Back to the service sheet</Link>;
+  const back = (
+    <Link to={`/restorations/${r.id}/sheets`} className="font-semibold text-glow-strong underline">
+      Back to the service sheet
+    </Link>
+  );
   if (pages.isPending) return <Loading label="Fetching the page…" />;
   if (pages.isError) return <ErrorState error={pages.error} onRetry={() => pages.refetch()} />;
   const page = pages.data.find((p) => p.id === pageId);
-  if (!page) return <EmptyState title="Page not found">It is not in this restoration, or it is not shared with you. {back}</EmptyState>;
+  if (!page)
+    return (
+      <EmptyState title="Page not found">
+        It is not in this restoration, or it is not shared with you. {back}
+      </EmptyState>
+    );
   const label = `${page.title || `Page ${page.pageNumber}`} (${sheetKindLabels[page.kind]})`;
   return (
     <section className="space-y-3" aria-label={label}>
       <p>{back}</p>
       <h2 className="text-xl font-bold">{label}</h2>
-      <SheetPageDetails key={`${page.id}-${page.kind}-${page.title}-${page.ownerVisible}`} page={page} canEdit={can(r.role, 'sheets.edit')} />
+      <SheetPageDetails
+        key={`${page.id}-${page.kind}-${page.title}-${page.ownerVisible}`}
+        page={page}
+        canEdit={can(r.role, 'sheets.edit')}
+      />
       <WithMarkupCanvas>
         <ReferenceViewer
           key={`${page.id}-${search.get('mark') ?? ''}`}
@@ -55,16 +68,28 @@ export function ChassisReferencesRoute() {
   const photoId = Number(useParams().photoId);
   const [search] = useSearchParams();
   const photos = usePhotos(r.id);
-  const back = <Link to={`/restorations/${r.id}/sheets`} className="font-semibold text-glow-strong underline">Back to the service sheet</Link>;
+  const back = (
+    <Link to={`/restorations/${r.id}/sheets`} className="font-semibold text-glow-strong underline">
+      Back to the service sheet
+    </Link>
+  );
   if (photos.isPending) return <Loading label="Fetching the photo…" />;
   if (photos.isError) return <ErrorState error={photos.error} onRetry={() => photos.refetch()} />;
   const photo = photos.data.find((p) => p.id === photoId);
-  if (!photo) return <EmptyState title="Photo not found">It is not in this restoration, or it is not shared with you. {back}</EmptyState>;
+  if (!photo)
+    return (
+      <EmptyState title="Photo not found">
+        It is not in this restoration, or it is not shared with you. {back}
+      </EmptyState>
+    );
   const label = `References on ${photoLabel(photo)}`;
   return (
     <section className="space-y-3" aria-label={label}>
       <p>
-        {back} · <Link to={`/restorations/${r.id}/photos/${photo.id}`} className="font-semibold text-glow-strong underline">Findings on this photo</Link>
+        {back} ·{' '}
+        <Link to={`/restorations/${r.id}/photos/${photo.id}`} className="font-semibold text-glow-strong underline">
+          Findings on this photo
+        </Link>
       </p>
       <h2 className="text-xl font-bold">{label}</h2>
       <WithMarkupCanvas>

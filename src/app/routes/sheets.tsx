@@ -23,7 +23,9 @@ export function SheetsRoute() {
         <ErrorState error={pages.error} onRetry={() => pages.refetch()} />
       ) : pages.data.length === 0 ? (
         <EmptyState title="No service sheet pages yet">
-          {can(r.role, 'sheets.upload') ? 'Add the circuit diagram and the layout page above.' : 'Nothing from the service sheet has been shared with you yet.'}
+          {can(r.role, 'sheets.upload')
+            ? 'Add the circuit diagram and the layout page above.'
+            : 'Nothing from the service sheet has been shared with you yet.'}
         </EmptyState>
       ) : (
         <SheetPageList restorationId={r.id} pages={pages.data} />

@@ -16,7 +16,10 @@ export function SignInRoute() {
   const [preset, setPreset] = useState<{ email: string; password?: string }>();
   if (me.data) return <Navigate to={next} replace />;
   return (
-    <AuthPanel title="Sign in to Gridleak" intro="Your restorations, their photos and findings are waiting on the bench.">
+    <AuthPanel
+      title="Sign in to Gridleak"
+      intro="Your restorations, their photos and findings are waiting on the bench."
+    >
       <SignInForm key={preset?.email} preset={preset} onSignedIn={() => navigate(next, { replace: true })} />
       <p className="mt-4 flex flex-wrap justify-between gap-2 text-sm">
         <Link to="/reset-password" className="underline">
@@ -26,7 +29,12 @@ export function SignInRoute() {
           New here? Create an account
         </Link>
       </p>
-      {meta.data?.demo && <DemoAccounts accounts={meta.data.demoAccounts} onPick={(a) => setPreset({ email: a.email, password: a.password })} />}
+      {meta.data?.demo && (
+        <DemoAccounts
+          accounts={meta.data.demoAccounts}
+          onPick={(a) => setPreset({ email: a.email, password: a.password })}
+        />
+      )}
     </AuthPanel>
   );
 }

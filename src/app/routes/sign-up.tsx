@@ -8,9 +8,15 @@ export function SignUpRoute() {
   const navigate = useNavigate();
   const [sent, setSent] = useState(false);
   return (
-    <AuthPanel title="Create your account" intro="For technicians, mentors and owners alike; your role is set per restoration.">
+    <AuthPanel
+      title="Create your account"
+      intro="For technicians, mentors and owners alike; your role is set per restoration."
+    >
       {sent ? (
-        <FormAlert tone="ok" message="Check your e-mail: follow the link we sent to confirm the address and finish signing up." />
+        <FormAlert
+          tone="ok"
+          message="Check your e-mail: follow the link we sent to confirm the address and finish signing up."
+        />
       ) : (
         <SignUpForm onDone={(r) => (r.status === 'signed-in' ? navigate('/') : setSent(true))} />
       )}

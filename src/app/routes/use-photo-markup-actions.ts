@@ -69,7 +69,10 @@ export function usePhotoMarkupActions({
       );
     },
     move: (id: number, points: { x: number; y: number }[]) =>
-      update.mutate({ id, patch: { points } }, { onError: (error) => setAlert(`The finding was not moved: ${error.message}`) }),
+      update.mutate(
+        { id, patch: { points } },
+        { onError: (error) => setAlert(`The finding was not moved: ${error.message}`) },
+      ),
     delete: (id: number) => {
       onDeleted(id);
       remove.mutate(id, { onError: (error) => setAlert(`The finding was not deleted: ${error.message}`) });
@@ -77,11 +80,30 @@ export function usePhotoMarkupActions({
     /** Undoing a delete: the mark and its words come back as a new finding (its thread does not). */
     undo: async (command: Command): Promise<number | undefined> => {
       if (command.type !== 'create' || !command.fields) return undefined;
-      const { title = 'Restored finding', componentRef, kind, severity, ownerVisible, status, dismissReason } = command.fields;
+      const {
+        title = 'Restored finding',
+        componentRef,
+        kind,
+        severity,
+        ownerVisible,
+        status,
+        dismissReason,
+      } = command.fields;
       try {
-        const finding = await create.mutateAsync({ title, componentRef, kind, severity, ownerVisible, shape: command.shape, points: command.points.map((p) => ({ x: p.x, y: p.y })) });
+        const finding = await create.mutateAsync({
+          title,
+          componentRef,
+          kind,
+          severity,
+          ownerVisible,
+          shape: command.shape,
+          points: command.points.map((p) => ({ x: p.x, y: p.y })),
+        });
         if (status && status !== 'observed')
-          update.mutate({ id: finding.id, patch: { status, ...(status === 'dismissed' ? { dismissReason: dismissReason ?? '' } : {}) } });
+          update.mutate({
+            id: finding.id,
+            patch: { status, ...(status === 'dismissed' ? { dismissReason: dismissReason ?? '' } : {}) },
+          });
         return finding.id;
       } catch (error) {
         setAlert(`The finding was not brought back: ${error instanceof Error ? error.message : 'unknown error'}`);

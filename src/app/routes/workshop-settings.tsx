@@ -9,11 +9,19 @@ export function WorkshopSettingsRoute() {
   return (
     <div className="space-y-4">
       <h1 className="text-2xl font-bold">Workshop settings</h1>
-      {query.isPending ? <Loading label="Fetching the workshop settings…" />
-        : query.isError ? (query.error instanceof ApiError && query.error.status === 403
-          ? <EmptyState title="For the workshop's technicians">Only a technician of the workshop changes its currency, prices, tax and invoice numbers.</EmptyState>
-          : <ErrorState error={query.error} onRetry={() => query.refetch()} />)
-        : <WorkshopSettingsForm settings={query.data} />}
+      {query.isPending ? (
+        <Loading label="Fetching the workshop settings…" />
+      ) : query.isError ? (
+        query.error instanceof ApiError && query.error.status === 403 ? (
+          <EmptyState title="For the workshop's technicians">
+            Only a technician of the workshop changes its currency, prices, tax and invoice numbers.
+          </EmptyState>
+        ) : (
+          <ErrorState error={query.error} onRetry={() => query.refetch()} />
+        )
+      ) : (
+        <WorkshopSettingsForm settings={query.data} />
+      )}
     </div>
   );
 }

@@ -6,4 +6,8 @@ export const referencesQueryKey = (restorationId: number) => ['restorations', re
 
 /** Every known reference with its counts. */
 export const useReferences = (restorationId: number, enabled = true) =>
-  useQuery({ queryKey: referencesQueryKey(restorationId), queryFn: () => api<ReferenceSummary[]>(`/restorations/${restorationId}/references`), enabled });
+  useQuery({
+    queryKey: referencesQueryKey(restorationId),
+    queryFn: () => api<ReferenceSummary[]>(`/restorations/${restorationId}/references`),
+    enabled,
+  });

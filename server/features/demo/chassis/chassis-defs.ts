@@ -46,23 +46,55 @@ export function sharedDefs(): string {
     linear('alu', stop(0, '#f4f5f3') + stop(0.35, '#c9ccce') + stop(0.7, '#9ea2a5') + stop(1, '#d8dadb'), 1, 1),
     linear('aluBar', stop(0, '#eef0f0') + stop(0.5, '#a8acae') + stop(1, '#6f7376')),
     radial('aluTop', stop(0, '#f2f3f2') + stop(0.55, '#c4c7c9') + stop(0.9, '#8f9396') + stop(1, '#5f6366'), 0.35, 0.3),
-    radial('getter', stop(0, '#ffffff') + stop(0.18, '#e6e8ea') + stop(0.45, '#7b8086') + stop(0.7, '#e1e3e5') + stop(0.9, '#575b60') + stop(1, '#34383c'), 0.34, 0.3),
-    radial('glass', stop(0, '#eef4f2', 0) + stop(0.78, '#9fb4b0', 0.08) + stop(0.9, '#51625f', 0.45) + stop(1, '#1e2625', 0.85), 0.45, 0.42),
+    radial(
+      'getter',
+      stop(0, '#ffffff') +
+        stop(0.18, '#e6e8ea') +
+        stop(0.45, '#7b8086') +
+        stop(0.7, '#e1e3e5') +
+        stop(0.9, '#575b60') +
+        stop(1, '#34383c'),
+      0.34,
+      0.3,
+    ),
+    radial(
+      'glass',
+      stop(0, '#eef4f2', 0) + stop(0.78, '#9fb4b0', 0.08) + stop(0.9, '#51625f', 0.45) + stop(1, '#1e2625', 0.85),
+      0.45,
+      0.42,
+    ),
     radial('bakelite', stop(0, '#5a3a26') + stop(0.7, '#3a2418') + stop(1, '#1f140d'), 0.35, 0.3),
     radial('blackDisc', stop(0, '#3a3a3a') + stop(0.8, '#1c1c1c') + stop(1, '#0c0c0c'), 0.35, 0.3),
     linear('lam', stop(0, '#3d3f42') + stop(0.5, '#26282a') + stop(1, '#17181a'), 1, 1),
     linear('coil', stop(0, '#c8a46a') + stop(0.5, '#a57e45') + stop(1, '#6f522a'), 1, 0),
     linear('phenolic', stop(0, '#b07a45') + stop(0.5, '#8c5a2e') + stop(1, '#5e3a1b')),
     linear('tinned', stop(0, '#f0f0ea') + stop(0.5, '#b7b9b4') + stop(1, '#7d807c')),
-    radial('freshSolder', stop(0, '#ffffff') + stop(0.45, '#e8ecee') + stop(0.85, '#b4babe') + stop(1, '#8c9296'), 0.35, 0.3),
+    radial(
+      'freshSolder',
+      stop(0, '#ffffff') + stop(0.45, '#e8ecee') + stop(0.85, '#b4babe') + stop(1, '#8c9296'),
+      0.35,
+      0.3,
+    ),
     linear('copper', stop(0, '#ffd1a1') + stop(0.45, '#d07a3c') + stop(1, '#7a3a14')),
     linear('brass', stop(0, '#f1dc97') + stop(0.5, '#c6a24e') + stop(1, '#7d6222')),
     // Cylinder shading laid over any tubular body drawn along x.
-    linear('cyl', stop(0, '#000', 0.35) + stop(0.18, '#fff', 0.45) + stop(0.32, '#fff', 0.1) + stop(0.75, '#000', 0.15) + stop(1, '#000', 0.55)),
+    linear(
+      'cyl',
+      stop(0, '#000', 0.35) +
+        stop(0.18, '#fff', 0.45) +
+        stop(0.32, '#fff', 0.1) +
+        stop(0.75, '#000', 0.15) +
+        stop(1, '#000', 0.55),
+    ),
     radial('rust', stop(0, '#7a3b12', 0.55) + stop(0.6, '#8f4a1a', 0.25) + stop(1, '#8f4a1a', 0)),
     noiseTextures(),
     `<radialGradient id="light" gradientUnits="userSpaceOnUse" cx="${WIDTH / 2}" cy="${HEIGHT / 2}" r="${WIDTH * 0.62}" fx="${WIDTH * 0.36}" fy="${HEIGHT * 0.3}">` +
-      stop(0, '#fff3dc', 0.2) + stop(0.3, '#fff3dc', 0.06) + stop(0.55, '#000', 0) + stop(0.8, '#000', 0.3) + stop(1, '#000', 0.62) + '</radialGradient>',
+      stop(0, '#fff3dc', 0.2) +
+      stop(0.3, '#fff3dc', 0.06) +
+      stop(0.55, '#000', 0) +
+      stop(0.8, '#000', 0.3) +
+      stop(1, '#000', 0.62) +
+      '</radialGradient>',
   ].join('');
 }
 
@@ -140,9 +172,11 @@ export function shadowLayer(shapes: readonly ShadowShape[], offset: Pt, strength
   const levels = PENUMBRA.map((grow) => {
     const g = grow * spread;
     const paths = shapes
-      .map((s) => (s.width === undefined
-        ? `<path d="${s.d}"/>`
-        : `<path d="${s.d}" fill="none" stroke-width="${f(s.width + g)}"/>`))
+      .map((s) =>
+        s.width === undefined
+          ? `<path d="${s.d}"/>`
+          : `<path d="${s.d}" fill="none" stroke-width="${f(s.width + g)}"/>`,
+      )
       .join('');
     return `<g opacity="${(strength / PENUMBRA.length).toFixed(3)}" stroke-width="${f(g)}">${paths}</g>`;
   }).join('');

@@ -40,16 +40,23 @@ function topLandmarks(): Record<string, Landmark> {
 
 function undersideLandmarks(): Record<string, Landmark> {
   const out: Record<string, Landmark> = {
-    crackedLead: mark(midpoint(...CRACKED_LEAD.gap), 40, 'Rubber-insulated lead, transformer to V7 anode, perished and split to the copper'),
+    crackedLead: mark(
+      midpoint(...CRACKED_LEAD.gap),
+      40,
+      'Rubber-insulated lead, transformer to V7 anode, perished and split to the copper',
+    ),
     volumeControl: mark(UNDER.volume.at, UNDER.volume.r + 30, 'Volume control R20 with mains switch'),
     mainsEntry: mark(UNDER.cordGrip.at, UNDER.cordGrip.width / 2 + 10, 'Mains lead entry and cord grip'),
     voltageSelector: mark(UNDER.voltageSelector.at, UNDER.voltageSelector.r, 'Mains voltage selector, wiring side'),
     canCapacitor: mark(UNDER.canCapacitor.at, UNDER.canCapacitor.r, 'Can electrolytic base and tags'),
   };
   for (const s of SOCKETS) out[`${s.ref}socket`] = mark(s.at, NOVAL.body + 16, `${s.ref} socket`);
-  for (const r of RESISTORS) out[r.ref] = mark(bodyCentre(r.a, r.b, r.lift), r.watts === 1 ? 62 : 52, `${r.ref} ${r.note ?? ''}`.trim());
-  for (const c of ELECTROLYTICS) out[c.ref] = mark(bodyCentre(c.a, c.b, c.lift), c.len / 2 + 14, `${c.ref} ${c.note ?? c.lines.join(' ')}`);
-  for (const c of WAX_CAPS) out[c.ref] = mark(bodyCentre(c.a, c.b, c.lift), (c.len ?? 150) / 2, `${c.ref} ${c.note ?? c.print}`);
+  for (const r of RESISTORS)
+    out[r.ref] = mark(bodyCentre(r.a, r.b, r.lift), r.watts === 1 ? 62 : 52, `${r.ref} ${r.note ?? ''}`.trim());
+  for (const c of ELECTROLYTICS)
+    out[c.ref] = mark(bodyCentre(c.a, c.b, c.lift), c.len / 2 + 14, `${c.ref} ${c.note ?? c.lines.join(' ')}`);
+  for (const c of WAX_CAPS)
+    out[c.ref] = mark(bodyCentre(c.a, c.b, c.lift), (c.len ?? 150) / 2, `${c.ref} ${c.note ?? c.print}`);
   return out;
 }
 

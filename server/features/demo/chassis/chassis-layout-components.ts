@@ -16,7 +16,12 @@ export const LUGS: Record<'E1' | 'E2' | 'E3' | 'E4', Pt> = {
 };
 
 /** Stator tags of the tuning gang, poking through the chassis. */
-export const GANG_TAGS: readonly Pt[] = [[1700, 915], [1820, 915], [1940, 915], [2030, 915]];
+export const GANG_TAGS: readonly Pt[] = [
+  [1700, 915],
+  [1820, 915],
+  [1940, 915],
+  [2030, 915],
+];
 
 export type Ref = { ref: string; note?: string };
 
@@ -35,7 +40,15 @@ export const RESISTORS: readonly (ResistorSpec & Ref)[] = [
 ];
 
 export const WAX_CAPS: readonly (WaxCapSpec & Ref)[] = [
-  { ref: 'C27', note: 'EABC80 anode to EL84 grid coupling, 0,022 µF 350 V, leaky', print: '0,022µ 350V', a: tag('TS1', 4), b: pin('V5', 2), len: 140, weeping: true },
+  {
+    ref: 'C27',
+    note: 'EABC80 anode to EL84 grid coupling, 0,022 µF 350 V, leaky',
+    print: '0,022µ 350V',
+    a: tag('TS1', 4),
+    b: pin('V5', 2),
+    len: 140,
+    weeping: true,
+  },
   { ref: 'C14', print: '0,05µF 500V', a: tag('TS1', 7), b: pin('V2', 1) },
   { ref: 'C12', print: '0,01µF 750V', a: LUGS.E1, b: tag('TS3', 0), colour: '#c9a15a' },
   { ref: 'C23', print: '0,1µF 350V', a: tag('TS4', 4), b: GANG_TAGS[3] ?? [0, 0], colour: '#b98e4e', len: 140 },
@@ -53,13 +66,43 @@ export const CERAMICS: readonly (Ref & { a: Pt; b: Pt; print: string; lift?: num
 
 /** C26, the EL84's cathode bypass, and C30, the HT filter: both test sound. */
 export const ELECTROLYTICS: readonly (ElectrolyticSpec & Ref)[] = [
-  { ref: 'C26', note: 'EL84 cathode bypass 25 µF 25 V', lines: ['25µF', '25V'], len: 84, dia: 32, a: tag('TS1', 0), b: tag('TS1', 3), lift: -135, sleeve: '#6b2a1e' },
-  { ref: 'C30', note: '32 µF 350 V HT filter', lines: ['32µF', '350V ~ +70°C'], len: 210, dia: 64, a: LUGS.E4, b: [990, 1250], clip: true },
+  {
+    ref: 'C26',
+    note: 'EL84 cathode bypass 25 µF 25 V',
+    lines: ['25µF', '25V'],
+    len: 84,
+    dia: 32,
+    a: tag('TS1', 0),
+    b: tag('TS1', 3),
+    lift: -135,
+    sleeve: '#6b2a1e',
+  },
+  {
+    ref: 'C30',
+    note: '32 µF 350 V HT filter',
+    lines: ['32µF', '350V ~ +70°C'],
+    len: 210,
+    dia: 64,
+    a: LUGS.E4,
+    b: [990, 1250],
+    clip: true,
+  },
 ];
 
 /** A rubber-insulated lead from the mains transformer to the rectifier, perished and split open. */
 export const CRACKED_LEAD = {
-  before: [[605, 740], [636, 690], [672, 630]] as Pt[],
-  gap: [[690, 598], [724, 541]] as [Pt, Pt],
-  after: [[744, 506], [800, 466], [888, 440]] as Pt[],
+  before: [
+    [605, 740],
+    [636, 690],
+    [672, 630],
+  ] as Pt[],
+  gap: [
+    [690, 598],
+    [724, 541],
+  ] as [Pt, Pt],
+  after: [
+    [744, 506],
+    [800, 466],
+    [888, 440],
+  ] as Pt[],
 };

@@ -6,7 +6,12 @@ import type { Pt } from './svg-kit';
  * Scale: about 5.3 px per millimetre; the rear apron is at the top of the picture.
  */
 
-export interface Box { x: number; y: number; w: number; h: number; }
+export interface Box {
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
 
 export const CHASSIS: Box = { x: 150, y: 190, w: 2100, h: 1200 };
 

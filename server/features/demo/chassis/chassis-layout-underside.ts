@@ -20,7 +20,13 @@ const SOCKET_TURN: Record<ValveRef, number> = { V1: 150, V2: 250, V3: 40, V4: 30
 
 /** Where the maker stamped each socket's reference, clear of the wiring. */
 const SOCKET_LABEL: Record<ValveRef, Pt> = {
-  V1: [2030, 735], V2: [1440, 960], V3: [975, 1005], V4: [680, 1190], V5: [1370, 420], V6: [1195, 1215], V7: [1075, 450],
+  V1: [2030, 735],
+  V2: [1440, 960],
+  V3: [975, 1005],
+  V4: [680, 1190],
+  V5: [1370, 420],
+  V6: [1195, 1215],
+  V7: [1075, 450],
 };
 
 export const SOCKETS = VALVES.map((v) => ({
@@ -66,7 +72,14 @@ export function ifTag(index: 0 | 1, n: 0 | 1 | 2 | 3): Pt {
   const can = TOP.ifCans[index];
   if (!can) throw new Error(`no IF can ${index}`);
   const [x, y] = flipX(can.at);
-  const d: Pt = ([[-26, -26], [26, -26], [26, 26], [-26, 26]] as const)[n];
+  const d: Pt = (
+    [
+      [-26, -26],
+      [26, -26],
+      [26, 26],
+      [-26, 26],
+    ] as const
+  )[n];
   return [x + d[0], y + d[1]];
 }
 
@@ -81,7 +94,10 @@ export const UNDER = {
   /** Aerial, earth and loudspeaker sockets on the rear wall. */
   rearPanel: { x: 1640, y: 226, w: 330, h: 62 },
   /** FM and AM oscillator coil formers beside the gang. */
-  coils: [[1760, 1062], [1960, 1080]] as Pt[],
+  coils: [
+    [1760, 1062],
+    [1960, 1080],
+  ] as Pt[],
   /** The mains flex comes in over the rear wall here and is clamped just inside. */
   mainsEntry: { at: [290, 205] as Pt },
   cordGrip: { at: [292, 268] as Pt, width: 110 },

@@ -5,7 +5,15 @@ import type { Pt } from './svg-kit';
 
 /** Modern parts a restorer fits in place of the old ones, drawn to sit in the same solder points. */
 
-export interface FilmCapSpec { a: Pt; b: Pt; lift?: number; print: readonly [string, string]; colour?: string; len?: number; dia?: number; }
+export interface FilmCapSpec {
+  a: Pt;
+  b: Pt;
+  lift?: number;
+  print: readonly [string, string];
+  colour?: string;
+  len?: number;
+  dia?: number;
+}
 
 /** A tape-wrapped polyester film capacitor, its ends filled with resin, value printed in nF. */
 export function filmCap(c: FilmCapSpec): Drawn {
@@ -16,18 +24,29 @@ export function filmCap(c: FilmCapSpec): Drawn {
     const resin = (x: number): string =>
       `<ellipse cx="${f(x)}" cy="0" rx="6" ry="${f(dia * 0.42)}" fill="${shade(tape, 0.62)}" stroke="${shade(tape, 0.4)}" stroke-width="1"/>`;
     return (
-      resin(-l / 2 + 1) + resin(l / 2 - 1) + tube(l, dia, tape, dia * 0.38) +
+      resin(-l / 2 + 1) +
+      resin(l / 2 - 1) +
+      tube(l, dia, tape, dia * 0.38) +
       // The wrap's overlap seam and a crisp sheen along the top: nothing has aged it yet.
       `<path d="M${f(-l / 2 + 6)} ${f(dia * 0.3)} H${f(l / 2 - 6)}" stroke="${shade(tape, 0.82)}" stroke-width="1.2"/>` +
       `<rect x="${f(-l * 0.42)}" y="${f(-dia * 0.38)}" width="${f(l * 0.84)}" height="${f(dia * 0.13)}" rx="2" fill="#fff" fill-opacity="0.6"/>` +
       text(0, -1, c.print[0], { size: dia * 0.38, fill: '#1c1a14', family: 'condensed', weight: 'bold' }) +
-      text(0, dia * 0.33, c.print[1], { size: dia * 0.28, fill: '#1c1a14', family: 'condensed' }) + CYL(l, dia, dia * 0.38)
+      text(0, dia * 0.33, c.print[1], { size: dia * 0.28, fill: '#1c1a14', family: 'condensed' }) +
+      CYL(l, dia, dia * 0.38)
     );
   };
   return axial(c.a, c.b, c.lift ?? 0, len, dia, draw, true);
 }
 
-export interface ModernElectrolyticSpec { a: Pt; b: Pt; lift?: number; lines: readonly [string, string]; len: number; dia: number; sleeve?: string; }
+export interface ModernElectrolyticSpec {
+  a: Pt;
+  b: Pt;
+  lift?: number;
+  lines: readonly [string, string];
+  len: number;
+  dia: number;
+  sleeve?: string;
+}
 
 /**
  * A small modern axial electrolytic: shrink sleeve crimped over the aluminium

@@ -37,7 +37,8 @@ export function novalSocket(centre: Pt, turn: number, ref: string, labelAt: Pt):
     `<g transform="rotate(${f(turn)})"><path d="M6 -5 L30 -4 Q33 0 30 4 L6 5 Z" fill="url(#tinned)" stroke="#5f625d" stroke-width="1"/><circle cx="24" r="2.4" fill="#2c2a26"/></g>` +
     `<circle r="12" fill="url(#tinned)" stroke="#5f625d" stroke-width="1.2"/><circle r="5.5" fill="#1c1915"/>` +
     `</g>` +
-    rivetPair(centre, turn) + stamp(labelAt[0], labelAt[1], ref, 28);
+    rivetPair(centre, turn) +
+    stamp(labelAt[0], labelAt[1], ref, 28);
   return { body, shadow: [{ d: circleD(centre[0], centre[1], NOVAL.body + 6) }] };
 }
 
@@ -47,7 +48,13 @@ function rivetPair(centre: Pt, turn: number): string {
   return [1, -1].map((s) => rivet(centre[0] + Math.cos(a) * d * s, centre[1] + Math.sin(a) * d * s, 9)).join('');
 }
 
-export interface TagStripSpec { start: Pt; horizontal: boolean; count: number; pitch: number; /** +1: tags point right/down. */ side: 1 | -1; }
+export interface TagStripSpec {
+  start: Pt;
+  horizontal: boolean;
+  count: number;
+  pitch: number;
+  /** +1: tags point right/down. */ side: 1 | -1;
+}
 
 export function stripTag(s: TagStripSpec, i: number): Pt {
   const along = i * s.pitch;
@@ -64,7 +71,8 @@ export function tagStrip(s: TagStripSpec): Drawn {
     const x = i * s.pitch;
     tags +=
       `<path d="M${f(x - 9)} ${f(side * 6)} L${f(x + 9)} ${f(side * 6)} L${f(x + 6)} ${f(side * 46)} L${f(x - 6)} ${f(side * 46)} Z" fill="url(#tinned)" stroke="#5f625d" stroke-width="1"/>` +
-      `<circle cx="${f(x)}" cy="${f(side * 40)}" r="2.6" fill="#2c2a26"/>` + rivet(x, side * 8, 4.5);
+      `<circle cx="${f(x)}" cy="${f(side * 40)}" r="2.6" fill="#2c2a26"/>` +
+      rivet(x, side * 8, 4.5);
   }
   const foot = ((s.count - 1) * s.pitch) / 2;
   const body =
@@ -72,7 +80,12 @@ export function tagStrip(s: TagStripSpec): Drawn {
     `<rect x="${f(foot - 22)}" y="${side > 0 ? -44 : 10}" width="44" height="34" rx="4" fill="url(#steel)" stroke="#4d4f4c" stroke-width="1.2"/>` +
     `<rect x="-20" y="-17" width="${f(len)}" height="34" rx="3" fill="url(#phenolic)" stroke="#3c2410" stroke-width="1.5"/>` +
     `<rect x="-16" y="-14" width="${f(len - 8)}" height="5" fill="#fff" fill-opacity="0.12"/>${tags}</g>` +
-    screwHead(s.horizontal ? s.start[0] + foot : s.start[0] - s.side * 27, s.horizontal ? s.start[1] - s.side * 27 : s.start[1] + foot, 9, 20);
+    screwHead(
+      s.horizontal ? s.start[0] + foot : s.start[0] - s.side * 27,
+      s.horizontal ? s.start[1] - s.side * 27 : s.start[1] + foot,
+      9,
+      20,
+    );
   const mid: Pt = s.horizontal ? [s.start[0] + len / 2 - 20, s.start[1]] : [s.start[0], s.start[1] + len / 2 - 20];
   return { body, shadow: [{ d: turnedRectD(mid, turn, len, 34) }] };
 }

@@ -13,11 +13,24 @@ function discSweep(c: Pt, r: number): ShadowShape[] {
 
 function boxSweep(x: number, y: number, w: number, h: number): ShadowShape[] {
   const [ox, oy] = TALL_OFFSET;
-  const p: Pt[] = [[x - ox, y - oy], [x + w - ox, y - oy], [x + w, y], [x + w, y + h], [x, y + h], [x - ox, y + h - oy]];
+  const p: Pt[] = [
+    [x - ox, y - oy],
+    [x + w - ox, y - oy],
+    [x + w, y],
+    [x + w, y + h],
+    [x, y + h],
+    [x - ox, y + h - oy],
+  ];
   return [{ d: polyD(p) }];
 }
 
-export interface ValveTopSpec { at: Pt; r: number; type: string; turn: number; plate?: number; }
+export interface ValveTopSpec {
+  at: Pt;
+  r: number;
+  type: string;
+  turn: number;
+  plate?: number;
+}
 
 /** A noval valve seen from straight above: getter-silvered dome, printed type, exhaust pip. */
 export function valveTop(v: ValveTopSpec): Drawn {
@@ -36,15 +49,27 @@ export function valveTop(v: ValveTopSpec): Drawn {
     `<path d="M${f(-g * 0.95)} ${f(g * 0.1)} Q0 ${f(-g * 0.25)} ${f(g * 0.95)} ${f(-g * 0.05)}" stroke="#ffffff" stroke-opacity="0.35" stroke-width="${f(r * 0.16)}" fill="none"/>` +
     `<circle r="${f(r)}" fill="url(#glass)" stroke="#141a19" stroke-width="2"/>` +
     `<g transform="rotate(${v.turn})">` +
-    text(0, -r * 0.14, v.type, { size: r * 0.33 * Math.min(1, 4.8 / v.type.length), fill: '#c8321c', weight: 'bold', opacity: 0.95 }) +
-    text(0, r * 0.44, '54·B', { size: r * 0.16, fill: '#c8321c', opacity: 0.9 }) + '</g>' +
+    text(0, -r * 0.14, v.type, {
+      size: r * 0.33 * Math.min(1, 4.8 / v.type.length),
+      fill: '#c8321c',
+      weight: 'bold',
+      opacity: 0.95,
+    }) +
+    text(0, r * 0.44, '54·B', { size: r * 0.16, fill: '#c8321c', opacity: 0.9 }) +
+    '</g>' +
     `<circle r="${f(r * 0.075)}" fill="#d7e0de" stroke="#394542" stroke-width="1.2"/>` +
     `<path d="M${f(-r * 0.8)} ${f(-r * 0.28)} A${f(r * 0.85)} ${f(r * 0.85)} 0 0 1 ${f(-r * 0.22)} ${f(-r * 0.8)}" stroke="#fff" stroke-opacity="0.85" stroke-width="${f(r * 0.08)}" stroke-linecap="round" fill="none"/>` +
     `<circle cx="${f(-r * 0.46)}" cy="${f(-r * 0.5)}" r="${f(r * 0.06)}" fill="#fff"/></g>`;
   return { body, shadow: discSweep(v.at, r), tall: true };
 }
 
-export interface TransformerSpec { cx: number; cy: number; w: number; h: number; plate: readonly string[]; }
+export interface TransformerSpec {
+  cx: number;
+  cy: number;
+  w: number;
+  h: number;
+  plate: readonly string[];
+}
 
 /** A frame transformer from above: lamination stack, clamp straps, coil ends, label plate. */
 export function transformerTop(t: TransformerSpec): Drawn {
@@ -60,31 +85,48 @@ export function transformerTop(t: TransformerSpec): Drawn {
   const coil = (cy0: number): string =>
     `<rect x="${f(cx - w * 0.3)}" y="${f(cy0)}" width="${f(w * 0.6)}" height="${f(h * 0.2 + 8)}" rx="14" fill="url(#coil)" stroke="#4e3a1c" stroke-width="2"/>` +
     `<rect x="${f(cx - w * 0.3 + 8)}" y="${f(cy0 + 6)}" width="${f(w * 0.6 - 16)}" height="${f(h * 0.2 - 4)}" rx="10" fill="none" stroke="#e3c993" stroke-width="1.5" stroke-opacity="0.6"/>` +
-    [0.3, 0.5, 0.7].map((k) => `<line x1="${f(cx - w * 0.3 + 4)}" y1="${f(cy0 + (h * 0.2 + 8) * k)}" x2="${f(cx + w * 0.3 - 4)}" y2="${f(cy0 + (h * 0.2 + 8) * k)}" stroke="#6f522a" stroke-opacity="0.35" stroke-width="1.5"/>`).join('');
+    [0.3, 0.5, 0.7]
+      .map(
+        (k) =>
+          `<line x1="${f(cx - w * 0.3 + 4)}" y1="${f(cy0 + (h * 0.2 + 8) * k)}" x2="${f(cx + w * 0.3 - 4)}" y2="${f(cy0 + (h * 0.2 + 8) * k)}" stroke="#6f522a" stroke-opacity="0.35" stroke-width="1.5"/>`,
+      )
+      .join('');
   const strap = (sy: number): string =>
     `<rect x="${f(x - 14)}" y="${f(sy)}" width="${f(w + 28)}" height="${f(h * 0.1)}" fill="url(#aluBar)" stroke="#3f4244" stroke-width="1.5"/>`;
   const pw = w * 0.6;
   const ph = coreH * 0.62;
   const lines = t.plate
-    .map((line, i) => text(cx, cy - ph / 2 + 24 + i * ((ph - 30) / Math.max(1, t.plate.length - 1)), line, {
-      size: i === 0 ? 16 : 13.5, fill: '#1d2430', weight: i === 0 ? 'bold' : 'normal', family: 'condensed',
-    }))
+    .map((line, i) =>
+      text(cx, cy - ph / 2 + 24 + i * ((ph - 30) / Math.max(1, t.plate.length - 1)), line, {
+        size: i === 0 ? 16 : 13.5,
+        fill: '#1d2430',
+        weight: i === 0 ? 'bold' : 'normal',
+        family: 'condensed',
+      }),
+    )
     .join('');
   const body =
-    coil(y - 4) + coil(cy + coreH / 2 - 4) +
+    coil(y - 4) +
+    coil(cy + coreH / 2 - 4) +
     `<rect x="${f(x)}" y="${f(coreY)}" width="${f(w)}" height="${f(coreH)}" fill="url(#lam)" stroke="#0d0e0f" stroke-width="2"/>${lams}` +
-    strap(coreY - 4) + strap(coreY + coreH - h * 0.1 + 4) +
-    nut(x + 6, coreY + h * 0.05 - 4, 12) + nut(x + w - 6, coreY + h * 0.05 - 4, 12) +
-    nut(x + 6, coreY + coreH - h * 0.05 + 4, 12) + nut(x + w - 6, coreY + coreH - h * 0.05 + 4, 12) +
+    strap(coreY - 4) +
+    strap(coreY + coreH - h * 0.1 + 4) +
+    nut(x + 6, coreY + h * 0.05 - 4, 12) +
+    nut(x + w - 6, coreY + h * 0.05 - 4, 12) +
+    nut(x + 6, coreY + coreH - h * 0.05 + 4, 12) +
+    nut(x + w - 6, coreY + coreH - h * 0.05 + 4, 12) +
     `<rect x="${f(cx - pw / 2)}" y="${f(cy - ph / 2)}" width="${f(pw)}" height="${f(ph)}" rx="4" fill="url(#alu)" stroke="#55595c" stroke-width="1.5"/>` +
-    rivet(cx - pw / 2 + 9, cy) + rivet(cx + pw / 2 - 9, cy) + lines;
+    rivet(cx - pw / 2 + 9, cy) +
+    rivet(cx + pw / 2 - 9, cy) +
+    lines;
   return { body, shadow: boxSweep(x - 14, y, w + 28, h), tall: true };
 }
 
 /** A multi-section can electrolytic from above, its value printed on the top. */
 export function canTop(at: Pt, r: number, lines: readonly [string, string, string]): Drawn {
   let rings = '';
-  for (let k = 0.3; k < 0.86; k += 0.07) rings += `<circle r="${f(r * k)}" fill="none" stroke="#fff" stroke-opacity="0.12" stroke-width="1.5"/>`;
+  for (let k = 0.3; k < 0.86; k += 0.07)
+    rings += `<circle r="${f(r * k)}" fill="none" stroke="#fff" stroke-opacity="0.12" stroke-width="1.5"/>`;
   const body =
     `<g transform="${place(at[0], at[1])}"><circle r="${f(r)}" fill="url(#aluTop)" stroke="#414547" stroke-width="2"/>` +
     `<circle r="${f(r * 0.92)}" fill="none" stroke="#f7f8f7" stroke-width="3" stroke-opacity="0.7"/>` +
@@ -106,7 +148,8 @@ export function ifCanTop(at: Pt, size: number, label: readonly [string, string])
     `<rect x="${f(-size * 0.1)}" y="-2" width="${f(size * 0.2)}" height="4" fill="#0b0b0b" transform="rotate(35)"/>` +
     `<ellipse cx="${f(size * 0.09)}" cy="${f(size * 0.07)}" rx="${f(size * 0.08)}" ry="${f(size * 0.06)}" fill="#a3241c" fill-opacity="0.9"/>` +
     text(0, -s + 30, label[0], { size: 16, fill: '#262a30', weight: 'bold' }) +
-    text(0, s - 17, label[1], { size: 13, fill: '#262a30', family: 'condensed' }) + '</g>';
+    text(0, s - 17, label[1], { size: 13, fill: '#262a30', family: 'condensed' }) +
+    '</g>';
   return { body, shadow: discSweep(at, s * 0.95), tall: true };
 }
 
@@ -123,9 +166,12 @@ export function gangTop(x: number, y: number, w: number, h: number): Drawn {
       const y1 = rotor ? y + h * 0.84 : y + h * 0.62;
       inner += `<line x1="${f(px)}" y1="${f(y0)}" x2="${f(px)}" y2="${f(y1)}" stroke="${rotor ? '#d8dcdd' : '#9ea3a6'}" stroke-width="3"/>`;
     }
-    if (i > 0) inner += `<rect x="${f(x + w * (sections[i] ?? 0) - 5)}" y="${f(y + 4)}" width="10" height="${f(h - 8)}" fill="url(#brass)" fill-opacity="0.85"/>`;
+    if (i > 0)
+      inner += `<rect x="${f(x + w * (sections[i] ?? 0) - 5)}" y="${f(y + 4)}" width="10" height="${f(h - 8)}" fill="url(#brass)" fill-opacity="0.85"/>`;
     const tx = (x0 + x1) / 2;
-    inner += `<rect x="${f(tx - 20)}" y="${f(y + h - 38)}" width="40" height="30" rx="3" fill="#ece6d6" stroke="#8d8676" stroke-width="1.5"/>` + screwHead(tx, y + h - 23, 8, 60 + i * 25);
+    inner +=
+      `<rect x="${f(tx - 20)}" y="${f(y + h - 38)}" width="40" height="30" rx="3" fill="#ece6d6" stroke="#8d8676" stroke-width="1.5"/>` +
+      screwHead(tx, y + h - 23, 8, 60 + i * 25);
   }
   const frame =
     `<rect x="${f(x - 6)}" y="${f(y - 6)}" width="${f(w + 12)}" height="16" fill="url(#brass)" stroke="#5e4d22" stroke-width="1.5"/>` +

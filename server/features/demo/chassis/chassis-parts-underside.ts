@@ -23,7 +23,15 @@ function lead(from: Pt, to: Pt, fresh: boolean): string {
  * An axial part: leads from a and b to the ends of a body of length `len` drawn by
  * `drawBody` along the local x axis, centred on the origin, never upside down.
  */
-export function axial(a: Pt, b: Pt, lift: number, len: number, dia: number, drawBody: (len: number) => string, fresh = false): Drawn {
+export function axial(
+  a: Pt,
+  b: Pt,
+  lift: number,
+  len: number,
+  dia: number,
+  drawBody: (len: number) => string,
+  fresh = false,
+): Drawn {
   const c = bodyCentre(a, b, lift);
   let turn = angleOf(a, b);
   if (turn > 95 || turn < -85) turn += 180;
@@ -31,7 +39,8 @@ export function axial(a: Pt, b: Pt, lift: number, len: number, dia: number, draw
   const endL: Pt = [c[0] - (Math.cos(rad) * len) / 2, c[1] - (Math.sin(rad) * len) / 2];
   const endR: Pt = [c[0] + (Math.cos(rad) * len) / 2, c[1] + (Math.sin(rad) * len) / 2];
   const [nearA, nearB] = distance(a, endL) < distance(a, endR) ? [endL, endR] : [endR, endL];
-  const body = lead(a, nearA, fresh) + lead(b, nearB, fresh) + `<g transform="${place(c[0], c[1], turn)}">${drawBody(len)}</g>`;
+  const body =
+    lead(a, nearA, fresh) + lead(b, nearB, fresh) + `<g transform="${place(c[0], c[1], turn)}">${drawBody(len)}</g>`;
   return { body, shadow: [{ d: turnedRectD(c, turn, len, dia) }] };
 }
 
@@ -43,9 +52,15 @@ export const CYL = (len: number, dia: number, rx = dia / 2): string =>
   `<rect x="${f(-len / 2)}" y="${f(-dia / 2)}" width="${f(len)}" height="${f(dia)}" rx="${f(rx)}" fill="url(#cyl)" stroke="#000" stroke-opacity="0.45" stroke-width="1.2"/>`;
 
 export interface ResistorSpec {
-  a: Pt; b: Pt; lift?: number; ohms: number; tolerance?: BandTolerance; watts?: 0.5 | 1 | 2;
+  a: Pt;
+  b: Pt;
+  lift?: number;
+  ohms: number;
+  tolerance?: BandTolerance;
+  watts?: 0.5 | 1 | 2;
   /** A newly fitted resistor: clean lacquer in `body` colour, bright leads, bands set towards one end. */
-  fresh?: boolean; body?: string;
+  fresh?: boolean;
+  body?: string;
 }
 
 /** Body length and diameter (px) by rating: a 2 W part is visibly stouter. */
@@ -62,19 +77,30 @@ export function resistor(r: ResistorSpec): Drawn {
     let s = tube(l, dia, bodyColour, dia * 0.42);
     if (r.fresh) {
       // Moulded end caps swell slightly past the body, as on a modern film resistor.
-      s += [-1, 1].map((k) => `<rect x="${f(k < 0 ? -l / 2 - 2 : l / 2 - l * 0.16 + 2)}" y="${f(-dia / 2 - 2)}" width="${f(l * 0.16)}" height="${f(dia + 4)}" rx="${f(dia * 0.45)}" fill="${bodyColour}"/>`).join('');
+      s += [-1, 1]
+        .map(
+          (k) =>
+            `<rect x="${f(k < 0 ? -l / 2 - 2 : l / 2 - l * 0.16 + 2)}" y="${f(-dia / 2 - 2)}" width="${f(l * 0.16)}" height="${f(dia + 4)}" rx="${f(dia * 0.45)}" fill="${bodyColour}"/>`,
+        )
+        .join('');
     }
     bands.forEach((band, i) => {
       s += `<rect x="${f(-l / 2 + l * (at[i] ?? 0) - bw / 2)}" y="${f(-dia / 2 + 0.5)}" width="${f(bw)}" height="${f(dia - 1)}" fill="${BAND_PAINT[band] ?? '#000'}"/>`;
     });
-    if (r.fresh) s += `<rect x="${f(-l * 0.4)}" y="${f(-dia * 0.36)}" width="${f(l * 0.8)}" height="${f(dia * 0.12)}" rx="2" fill="#fff" fill-opacity="0.55"/>`;
+    if (r.fresh)
+      s += `<rect x="${f(-l * 0.4)}" y="${f(-dia * 0.36)}" width="${f(l * 0.8)}" height="${f(dia * 0.12)}" rx="2" fill="#fff" fill-opacity="0.55"/>`;
     return s + CYL(l, dia, dia * 0.42);
   };
   return axial(r.a, r.b, r.lift ?? 0, len, dia, draw, r.fresh);
 }
 
 export interface WaxCapSpec {
-  a: Pt; b: Pt; lift?: number; print: string; colour?: string; len?: number;
+  a: Pt;
+  b: Pt;
+  lift?: number;
+  print: string;
+  colour?: string;
+  len?: number;
   /** Restuffed: a film capacitor inside, the ends sealed again with fresh wax of matching colour. */
   resealed?: boolean;
   /** Leaky and run warm: wax has softened, run from both ends and dripped, the paper split by the print. */
@@ -86,14 +112,19 @@ export function waxCap(c: WaxCapSpec): Drawn {
   const len = c.len ?? 150;
   const dia = 34;
   const wax = c.colour ?? '#d6b86a';
-  const end = (x: number): string => c.resealed
-    ? `<ellipse cx="${f(x)}" cy="0" rx="11" ry="${f(dia / 2 + 1)}" fill="${shade(wax, 1.12)}" stroke="${shade(wax, 0.75)}" stroke-width="1"/>` +
-      `<ellipse cx="${f(x - 2)}" cy="${f(-dia * 0.2)}" rx="5" ry="${f(dia * 0.16)}" fill="#fff" fill-opacity="0.6"/>`
-    : `<ellipse cx="${f(x)}" cy="0" rx="12" ry="${f(dia / 2 + 2)}" fill="${shade(wax, 0.8)}"/>`;
+  const end = (x: number): string =>
+    c.resealed
+      ? `<ellipse cx="${f(x)}" cy="0" rx="11" ry="${f(dia / 2 + 1)}" fill="${shade(wax, 1.12)}" stroke="${shade(wax, 0.75)}" stroke-width="1"/>` +
+        `<ellipse cx="${f(x - 2)}" cy="${f(-dia * 0.2)}" rx="5" ry="${f(dia * 0.16)}" fill="#fff" fill-opacity="0.6"/>`
+      : `<ellipse cx="${f(x)}" cy="0" rx="12" ry="${f(dia / 2 + 2)}" fill="${shade(wax, 0.8)}"/>`;
   const draw = (l: number): string =>
-    tube(l, dia, wax) + end(-l / 2 + 8) + end(l / 2 - 8) +
+    tube(l, dia, wax) +
+    end(-l / 2 + 8) +
+    end(l / 2 - 8) +
     `<rect x="${f(-l / 2 + 24)}" y="${f(-dia / 2)}" width="7" height="${dia}" fill="#1d1a16"/>` +
-    text(6, 5, c.print, { size: 15, fill: '#2a2218', family: 'condensed', weight: 'bold' }) + CYL(l, dia) + (c.weeping ? weep(l, dia, wax) : '');
+    text(6, 5, c.print, { size: 15, fill: '#2a2218', family: 'condensed', weight: 'bold' }) +
+    CYL(l, dia) +
+    (c.weeping ? weep(l, dia, wax) : '');
   return axial(c.a, c.b, c.lift ?? 0, len, dia, draw, c.resealed);
 }
 
@@ -105,14 +136,23 @@ function weep(l: number, dia: number, wax: string): string {
   return (
     `<ellipse cx="${f(-l / 2 + 2)}" cy="2" rx="17" ry="${f(dia / 2 + 6)}" fill="${shade(wax, 0.66)}" fill-opacity="0.9"/>` +
     `<ellipse cx="${f(l / 2 - 2)}" cy="2" rx="17" ry="${f(dia / 2 + 6)}" fill="${shade(wax, 0.66)}" fill-opacity="0.9"/>` +
-    drip(-l / 2 + 10, 14) + drip(l / 2 - 14, 22) + drip(l * 0.18, 9) +
+    drip(-l / 2 + 10, 14) +
+    drip(l / 2 - 14, 22) +
+    drip(l * 0.18, 9) +
     `<rect x="${f(-l / 2 + 32)}" y="${f(-dia / 2)}" width="${f(l * 0.34)}" height="${f(dia)}" fill="#3a2410" fill-opacity="0.35"/>` +
     `<path d="M${f(l * 0.4)} ${f(-dia / 2)} l5 8 l-6 9 l6 8 l-3 ${f(dia / 2 - 12)}" stroke="#2a1a0c" stroke-width="2" fill="none"/>`
   );
 }
 
 export interface ElectrolyticSpec {
-  a: Pt; b: Pt; lift?: number; lines: readonly [string, string]; len: number; dia: number; sleeve?: string; clip?: boolean;
+  a: Pt;
+  b: Pt;
+  lift?: number;
+  lines: readonly [string, string];
+  len: number;
+  dia: number;
+  sleeve?: string;
+  clip?: boolean;
   /** Emptied and refilled with a modern part: the old sleeve kept, both ends neatly resealed. */
   restuffed?: boolean;
 }
@@ -125,15 +165,24 @@ export function tubularElectrolytic(e: ElectrolyticSpec): Drawn {
     let s = '';
     if (e.restuffed) {
       // A neat bead of sealing compound closes each cut end round the new lead.
-      s += [-1, 1].map((k) => `<ellipse cx="${f(k * (l / 2 - 1))}" cy="0" rx="7" ry="${f(d * 0.3)}" fill="#4b4236" stroke="#2a241c" stroke-width="1"/>` +
-        `<ellipse cx="${f(k * (l / 2 - 1) - 1)}" cy="${f(-d * 0.1)}" rx="3" ry="${f(d * 0.1)}" fill="#fff" fill-opacity="0.45"/>`).join('');
+      s += [-1, 1]
+        .map(
+          (k) =>
+            `<ellipse cx="${f(k * (l / 2 - 1))}" cy="0" rx="7" ry="${f(d * 0.3)}" fill="#4b4236" stroke="#2a241c" stroke-width="1"/>` +
+            `<ellipse cx="${f(k * (l / 2 - 1) - 1)}" cy="${f(-d * 0.1)}" rx="3" ry="${f(d * 0.1)}" fill="#fff" fill-opacity="0.45"/>`,
+        )
+        .join('');
     }
-    s += tube(l, d, '#bfc3c5', 8) + `<rect x="${f(-l / 2 + 10)}" y="${f(-d / 2)}" width="${f(l - 20)}" height="${f(d)}" fill="${sleeve}"/>` +
+    s +=
+      tube(l, d, '#bfc3c5', 8) +
+      `<rect x="${f(-l / 2 + 10)}" y="${f(-d / 2)}" width="${f(l - 20)}" height="${f(d)}" fill="${sleeve}"/>` +
       text(-l * 0.08, -2, e.lines[0], { size: d * 0.3, fill: '#f3efe2', weight: 'bold', family: 'condensed' }) +
       text(-l * 0.08, d * 0.3, e.lines[1], { size: d * 0.22, fill: '#f3efe2', family: 'condensed' }) +
-      text(l / 2 - 26, 6, '+', { size: d * 0.4, fill: '#f3efe2', weight: 'bold' }) + CYL(l, d, 8);
+      text(l / 2 - 26, 6, '+', { size: d * 0.4, fill: '#f3efe2', weight: 'bold' }) +
+      CYL(l, d, 8);
     if (e.clip) {
-      s += `<rect x="${f(-l * 0.42)}" y="${f(-d / 2 - 14)}" width="22" height="${f(d + 28)}" rx="3" fill="url(#steel)" stroke="#3d3f41" stroke-width="1.2"/>` +
+      s +=
+        `<rect x="${f(-l * 0.42)}" y="${f(-d / 2 - 14)}" width="22" height="${f(d + 28)}" rx="3" fill="url(#steel)" stroke="#3d3f41" stroke-width="1.2"/>` +
         `<circle cx="${f(-l * 0.42 + 11)}" cy="${f(-d / 2 - 7)}" r="5" fill="#55585a"/><circle cx="${f(-l * 0.42 + 11)}" cy="${f(d / 2 + 7)}" r="5" fill="#55585a"/>`;
     }
     return s;

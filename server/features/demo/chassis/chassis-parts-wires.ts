@@ -57,7 +57,8 @@ export function crackedWire(before: readonly Pt[], gap: readonly [Pt, Pt], after
   const across = (p: Pt, k: number, half: number, tilt: number): string =>
     `M${f(p[0] + ux * k - uy * half + ux * tilt)} ${f(p[1] + uy * k + ux * half + uy * tilt)} L${f(p[0] + ux * k + uy * half - ux * tilt)} ${f(p[1] + uy * k - ux * half - uy * tilt)}`;
   // Local frame along the gap: u runs a→b, n across it.
-  const at = (p: Pt, k: number, side: number): string => `${f(p[0] + ux * k - uy * side)} ${f(p[1] + uy * k + ux * side)}`;
+  const at = (p: Pt, k: number, side: number): string =>
+    `${f(p[0] + ux * k - uy * side)} ${f(p[1] + uy * k + ux * side)}`;
   let strands = '';
   for (let i = -3; i <= 3; i++) {
     const o = i * w * 0.1;
@@ -70,21 +71,27 @@ export function crackedWire(before: readonly Pt[], gap: readonly [Pt, Pt], after
     const teeth = [h, h * 0.55, h * 0.1, -h * 0.4, -h].map((side, i) => at(p, dir * (i % 2 ? 11 : 3), side));
     return `<path d="M${at(p, -dir * 3, h)} L${teeth.join(' L')} L${at(p, -dir * 3, -h)} Z" fill="${s.colour}" stroke="${shade(s.colour, 0.45)}" stroke-width="1.2"/>`;
   };
-  const cracks = [-9, -19, -31, -44, -60, -78].map((k, i) => across(a, k, w * 0.62, i % 2 ? 3 : -2))
+  const cracks = [-9, -19, -31, -44, -60, -78]
+    .map((k, i) => across(a, k, w * 0.62, i % 2 ? 3 : -2))
     .concat([9, 20, 33, 49, 66].map((k, i) => across(b, k, w * 0.62, i % 2 ? -3 : 2)))
     .map((d) => `<path d="${d}" stroke="#1a0e0a" stroke-width="2.2" stroke-linecap="round"/>`)
     .join('');
-  const chalk = [-26, -52, 15, 40].map((k) => {
-    const p = k < 0 ? a : b;
-    return `<circle cx="${f(p[0] + ux * k)}" cy="${f(p[1] + uy * k)}" r="${f(w * 0.3)}" fill="#e8c8b0" fill-opacity="0.35"/>`;
-  }).join('');
+  const chalk = [-26, -52, 15, 40]
+    .map((k) => {
+      const p = k < 0 ? a : b;
+      return `<circle cx="${f(p[0] + ux * k)}" cy="${f(p[1] + uy * k)}" r="${f(w * 0.3)}" fill="#e8c8b0" fill-opacity="0.35"/>`;
+    })
+    .join('');
   const body =
     `<path d="M${at(a, 0, 0)} L${at(b, 0, 0)}" stroke="#3b1d0c" stroke-width="${f(w * 0.86)}"/>` +
     `<path d="M${at(a, 0, 0)} L${at(b, 0, 0)}" stroke="#c8743a" stroke-width="${f(w * 0.74)}"/>${strands}` +
     `<path d="M${at(a, len * 0.55, w * 0.3)} q6 -4 12 -12 M${at(a, len * 0.4, -w * 0.3)} q5 5 9 13" stroke="#e8a070" stroke-width="1.6" fill="none"/>` +
     insulation(smoothPath([...before, a]), s).replace(/stroke-linecap="round"/g, 'stroke-linecap="butt"') +
     insulation(smoothPath([b, ...after]), s).replace(/stroke-linecap="round"/g, 'stroke-linecap="butt"') +
-    lip(a, 1) + lip(b, -1) + chalk + cracks;
+    lip(a, 1) +
+    lip(b, -1) +
+    chalk +
+    cracks;
   const shadow = [{ d: smoothPath([...before, a, b, ...after]), width: w }];
   return { body, shadow };
 }
@@ -101,7 +108,8 @@ export function twistedPair(path: readonly Pt[], endA: Pt, endB: Pt, s: WireStyl
     const q = path[i + 1];
     if (!p || !q) continue;
     const steps = Math.max(1, Math.round(distance(p, q) / 6));
-    for (let k = 0; k < steps; k++) dense.push([p[0] + ((q[0] - p[0]) * k) / steps, p[1] + ((q[1] - p[1]) * k) / steps]);
+    for (let k = 0; k < steps; k++)
+      dense.push([p[0] + ((q[0] - p[0]) * k) / steps, p[1] + ((q[1] - p[1]) * k) / steps]);
   }
   const last = path[path.length - 1];
   if (last) dense.push(last);

@@ -32,14 +32,23 @@ export function polyD(points: readonly Pt[]): string {
 }
 
 export function rectD(x: number, y: number, w: number, h: number): string {
-  return polyD([[x, y], [x + w, y], [x + w, y + h], [x, y + h]]);
+  return polyD([
+    [x, y],
+    [x + w, y],
+    [x + w, y + h],
+    [x, y + h],
+  ]);
 }
 
 /** A len × dia box centred on c, turned by `turn` degrees. */
 export function turnedRectD(c: Pt, turn: number, len: number, dia: number): string {
   const a = (turn * Math.PI) / 180;
-  const ux = Math.cos(a), uy = Math.sin(a);
-  const corner = (s: number, t: number): Pt => [c[0] + ux * s * len / 2 - uy * t * dia / 2, c[1] + uy * s * len / 2 + ux * t * dia / 2];
+  const ux = Math.cos(a),
+    uy = Math.sin(a);
+  const corner = (s: number, t: number): Pt => [
+    c[0] + (ux * s * len) / 2 - (uy * t * dia) / 2,
+    c[1] + (uy * s * len) / 2 + (ux * t * dia) / 2,
+  ];
   return polyD([corner(-1, -1), corner(1, -1), corner(1, 1), corner(-1, 1)]);
 }
 

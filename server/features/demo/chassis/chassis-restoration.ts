@@ -30,7 +30,8 @@ const FILM_REFITS: Readonly<Record<string, Omit<FilmCapSpec, 'a' | 'b' | 'lift'>
 
 /** The electrolytics tested sound and stay as they are. */
 const ELECTROLYTIC_REFITS: Readonly<Record<string, Refit<ElectrolyticSpec>>> = {};
-const NEW_ELECTROLYTICS: Readonly<Record<string, Omit<ModernElectrolyticSpec, 'a' | 'b' | 'lift' | 'len' | 'dia'>>> = {};
+const NEW_ELECTROLYTICS: Readonly<Record<string, Omit<ModernElectrolyticSpec, 'a' | 'b' | 'lift' | 'len' | 'dia'>>> =
+  {};
 
 export interface UndersideParts {
   resistors: readonly (ResistorSpec & Ref)[];
@@ -40,7 +41,11 @@ export interface UndersideParts {
   newElectrolytics: readonly (ModernElectrolyticSpec & Ref)[];
 }
 
-interface Placed extends Ref { a: Pt; b: Pt; lift?: number }
+interface Placed extends Ref {
+  a: Pt;
+  b: Pt;
+  lift?: number;
+}
 
 /** The solder points of a part as laid out, with its reference. */
 function spot(p: Placed): Placed {
@@ -64,7 +69,11 @@ export function undersideParts(state: ChassisState): UndersideParts {
     resistors: RESISTORS.map((r) => ({ ...r, ...RESISTOR_REFITS[r.ref], ...spot(r) })),
     waxCaps: WAX_CAPS.filter((c) => !FILM_REFITS[c.ref]).map((c) => ({ ...c, resealed: true })),
     films,
-    electrolytics: ELECTROLYTICS.filter((e) => !NEW_ELECTROLYTICS[e.ref]).map((e) => ({ ...e, ...ELECTROLYTIC_REFITS[e.ref], ...spot(e) })),
+    electrolytics: ELECTROLYTICS.filter((e) => !NEW_ELECTROLYTICS[e.ref]).map((e) => ({
+      ...e,
+      ...ELECTROLYTIC_REFITS[e.ref],
+      ...spot(e),
+    })),
     newElectrolytics,
   };
 }
@@ -74,8 +83,11 @@ export function undersideParts(state: ChassisState): UndersideParts {
  * curve: through the middle of the old split (the landmark) and on to the same tag.
  */
 export const HT_LEAD_ROUTE: readonly Pt[] = [
-  CRACKED_LEAD.before[0] ?? [605, 740], CRACKED_LEAD.before[2] ?? [672, 630], midpoint(...CRACKED_LEAD.gap),
-  CRACKED_LEAD.after[1] ?? [800, 466], CRACKED_LEAD.after[2] ?? [888, 440],
+  CRACKED_LEAD.before[0] ?? [605, 740],
+  CRACKED_LEAD.before[2] ?? [672, 630],
+  midpoint(...CRACKED_LEAD.gap),
+  CRACKED_LEAD.after[1] ?? [800, 466],
+  CRACKED_LEAD.after[2] ?? [888, 440],
 ];
 
 /** Where the restorer's iron has been: every solder point of a refitted part, and the new lead's end. */
@@ -83,8 +95,11 @@ export function freshJoints(state: ChassisState): Pt[] {
   if (state === 'before') return [];
   const p = undersideParts('after');
   const refitted = [
-    ...p.resistors.filter((r) => r.fresh), ...p.waxCaps.filter((c) => c.resealed), ...p.films,
-    ...p.electrolytics.filter((e) => e.restuffed), ...p.newElectrolytics,
+    ...p.resistors.filter((r) => r.fresh),
+    ...p.waxCaps.filter((c) => c.resealed),
+    ...p.films,
+    ...p.electrolytics.filter((e) => e.restuffed),
+    ...p.newElectrolytics,
   ];
   const leadEnd = HT_LEAD_ROUTE[HT_LEAD_ROUTE.length - 1];
   return [...refitted.flatMap((x) => [x.a, x.b]), ...(leadEnd ? [leadEnd] : [])];

@@ -30,7 +30,10 @@ function volumeTag(i: 0 | 1 | 2): Pt {
 
 export function switchTags(): [Pt, Pt] {
   const [x, y] = UNDER.volume.at;
-  return [[x - 92, y - 22], [x - 92, y + 24]];
+  return [
+    [x - 92, y - 22],
+    [x - 92, y + 24],
+  ];
 }
 
 export function selectorTag(i: number): Pt {
@@ -50,7 +53,11 @@ function coilPin(i: 0 | 1, deg: number): Pt {
 /** The lead from the transformer to V7's anode: perished, split rubber as found, new PVC after the work. */
 function htLead(state: ChassisState): Drawn {
   return state === 'before'
-    ? crackedWire(CRACKED_LEAD.before, CRACKED_LEAD.gap, CRACKED_LEAD.after, { colour: PERISHED_RED, width: 12, matte: true })
+    ? crackedWire(CRACKED_LEAD.before, CRACKED_LEAD.gap, CRACKED_LEAD.after, {
+        colour: PERISHED_RED,
+        width: 12,
+        matte: true,
+      })
     : wire(HT_LEAD_ROUTE, { colour: NEW_PVC_ORANGE, width: 11 });
 }
 
@@ -59,8 +66,14 @@ export function undersideWiring(state: ChassisState = 'before'): Drawn[] {
   const [sw1, sw2] = switchTags();
   return [
     // Mains flex: in over the rear wall, under the cord grip, down to the selector.
-    wire([[280, 0], [280, 205], [283, 268], [296, 340], [322, 480], [330, 640], [322, 790], selectorTag(4)], { colour: BROWN, width: 12 }),
-    wire([[300, 0], [300, 205], [302, 268], [314, 340], [340, 480], [348, 640], [342, 790], selectorTag(5)], { colour: BROWN, width: 12 }),
+    wire([[280, 0], [280, 205], [283, 268], [296, 340], [322, 480], [330, 640], [322, 790], selectorTag(4)], {
+      colour: BROWN,
+      width: 12,
+    }),
+    wire([[300, 0], [300, 205], [302, 268], [314, 340], [340, 480], [348, 640], [342, 790], selectorTag(5)], {
+      colour: BROWN,
+      width: 12,
+    }),
     wire([sw1, [300, 1200], [262, 1030], [280, 930], selectorTag(2)], { colour: BROWN, width: 8 }),
     wire([sw2, [280, 1240], [236, 1040], [252, 930], selectorTag(3)], { colour: BLACK, width: 8 }),
     wire([g.primary, [300, 760], selectorTag(1)], { colour: BLACK, width: 8 }),
@@ -95,8 +108,29 @@ export function undersideWiring(state: ChassisState = 'before'): Drawn[] {
     wire([volumeTag(2), [540, 1190], pin('V4', 5)], { colour: '#8d8f8c', width: 11, braid: true }),
     // Heaters, twisted in pairs from socket to socket.
     ...twistedPair([g.heaters, [720, 310], [850, 300]], pin('V7', 4), pin('V7', 5), { colour: GREEN, width: 7 }),
-    ...twistedPair([[950, 320], [1080, 330], [1170, 410]], pin('V5', 5), pin('V5', 4), { colour: GREEN, width: 7 }),
-    ...twistedPair([[1215, 420], [1240, 330], [1400, 290], [1650, 300], [1850, 400], [1925, 520]], pin('V1', 4), pin('V1', 5), { colour: GREEN, width: 7 }),
+    ...twistedPair(
+      [
+        [950, 320],
+        [1080, 330],
+        [1170, 410],
+      ],
+      pin('V5', 5),
+      pin('V5', 4),
+      { colour: GREEN, width: 7 },
+    ),
+    ...twistedPair(
+      [
+        [1215, 420],
+        [1240, 330],
+        [1400, 290],
+        [1650, 300],
+        [1850, 400],
+        [1925, 520],
+      ],
+      pin('V1', 4),
+      pin('V1', 5),
+      { colour: GREEN, width: 7 },
+    ),
     // The earth bus along the front wall.
     bareWire([LUGS.E4, [720, 1335], [1400, 1342], LUGS.E2]),
     bareWire([tag('TS1', 0), [1090, 770], canTag('common')]),

@@ -88,5 +88,9 @@ export function streakTile(seed: number): string {
 /** Soft mottling, 64 px square, meant to be drawn several times larger. */
 export function mottleTile(seed: number): string {
   const n = 64;
-  return pngDataUri(n, n, toPixels(normalise(blur(blur(randomField(n, seed), n, 4, true, true), n, 3, true, true)), 200));
+  return pngDataUri(
+    n,
+    n,
+    toPixels(normalise(blur(blur(randomField(n, seed), n, 4, true, true), n, 3, true, true)), 200),
+  );
 }

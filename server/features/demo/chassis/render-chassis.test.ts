@@ -65,7 +65,25 @@ describe('demo chassis pictures', () => {
     const marks = chassisLandmarks('underside');
     const p = undersideParts(state);
     const parts = [...p.resistors, ...p.waxCaps, ...p.films, ...p.electrolytics, ...p.newElectrolytics];
-    expect(parts.map((x) => x.ref).sort()).toEqual(['C12', 'C14', 'C23', 'C26', 'C27', 'C30', 'R1', 'R12', 'R13', 'R15', 'R16', 'R18', 'R19', 'R28', 'R29', 'R6', 'R8']);
+    expect(parts.map((x) => x.ref).sort()).toEqual([
+      'C12',
+      'C14',
+      'C23',
+      'C26',
+      'C27',
+      'C30',
+      'R1',
+      'R12',
+      'R13',
+      'R15',
+      'R16',
+      'R18',
+      'R19',
+      'R28',
+      'R29',
+      'R6',
+      'R8',
+    ]);
     for (const part of parts) {
       const [x, y] = bodyCentre(part.a, part.b, part.lift);
       expect.soft(x / WIDTH, `${part.ref}.x`).toBeCloseTo(marks[part.ref]?.x ?? NaN, 9);
@@ -124,10 +142,13 @@ describe('demo chassis pictures', () => {
     expect(bands).toEqual(['yellow', 'violet', 'yellow', 'gold']);
   });
 
-  it.each(STATES)('when sampled at the bare-chassis spot of the top view (%s), then it is mid-grey steel', async (state) => {
-    const plain = plainChassisSpot('top');
-    const lum = await luminanceAt(jpeg('top', state), plain.x, plain.y);
-    expect(lum).toBeGreaterThan(100);
-    expect(lum).toBeLessThan(230);
-  });
+  it.each(STATES)(
+    'when sampled at the bare-chassis spot of the top view (%s), then it is mid-grey steel',
+    async (state) => {
+      const plain = plainChassisSpot('top');
+      const lum = await luminanceAt(jpeg('top', state), plain.x, plain.y);
+      expect(lum).toBeGreaterThan(100);
+      expect(lum).toBeLessThan(230);
+    },
+  );
 });

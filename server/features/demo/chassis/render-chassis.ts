@@ -14,5 +14,7 @@ export function chassisSvg(view: ChassisView, state: ChassisState = 'before'): s
 
 /** The chassis picture rendered to a JPEG, as a camera would hand it over. */
 export async function renderChassisJpeg(view: ChassisView, state: ChassisState = 'before'): Promise<Buffer> {
-  return sharp(Buffer.from(chassisSvg(view, state))).jpeg({ quality: 85 }).toBuffer();
+  return sharp(Buffer.from(chassisSvg(view, state)))
+    .jpeg({ quality: 85 })
+    .toBuffer();
 }

@@ -111,7 +111,9 @@ export function shade(hex: string, k: number): string {
   const n = parseInt(hex.slice(1), 16);
   const channel = (c: number): string => {
     const v = k <= 1 ? c * k : c + (255 - c) * (k - 1);
-    return Math.max(0, Math.min(255, Math.round(v))).toString(16).padStart(2, '0');
+    return Math.max(0, Math.min(255, Math.round(v)))
+      .toString(16)
+      .padStart(2, '0');
   };
   return `#${channel((n >> 16) & 255)}${channel((n >> 8) & 255)}${channel(n & 255)}`;
 }

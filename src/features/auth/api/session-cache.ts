@@ -9,6 +9,8 @@ import { ME_KEY } from '../../../lib/session-key';
  * preview: fetched again after the sign-up that accepted it, it would only meet 410 Gone).
  */
 export function switchPerson(client: QueryClient, user: User | null): void {
-  client.removeQueries({ predicate: (q) => q.queryKey[0] !== 'auth' && q.queryKey[0] !== 'meta' && q.meta?.anyPerson !== true });
+  client.removeQueries({
+    predicate: (q) => q.queryKey[0] !== 'auth' && q.queryKey[0] !== 'meta' && q.meta?.anyPerson !== true,
+  });
   client.setQueryData(ME_KEY, user);
 }

@@ -14,9 +14,19 @@ export function ResetConfirmForm({ token, onDone }: { token: string; onDone: (u:
   const confirm = useConfirmPasswordReset();
   const { register, handleSubmit, formState } = useForm<Values>({ resolver: zodResolver(schema) });
   return (
-    <form noValidate className="space-y-4" onSubmit={handleSubmit((v) => confirm.mutate({ token, password: v.password }, { onSuccess: onDone }))}>
-      <Field label="New password" hint={`At least ${PASSWORD_MIN} characters. Other devices will be signed out.`} error={formState.errors.password?.message}>
-        {(a) => <input {...a} {...register('password')} type="password" autoComplete="new-password" className={inputClass} />}
+    <form
+      noValidate
+      className="space-y-4"
+      onSubmit={handleSubmit((v) => confirm.mutate({ token, password: v.password }, { onSuccess: onDone }))}
+    >
+      <Field
+        label="New password"
+        hint={`At least ${PASSWORD_MIN} characters. Other devices will be signed out.`}
+        error={formState.errors.password?.message}
+      >
+        {(a) => (
+          <input {...a} {...register('password')} type="password" autoComplete="new-password" className={inputClass} />
+        )}
       </Field>
       <FormAlert message={confirm.error?.message} />
       <button type="submit" className={buttonClass('primary', 'w-full')} disabled={confirm.isPending}>

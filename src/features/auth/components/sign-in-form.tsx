@@ -11,7 +11,13 @@ type In = z.input<typeof signInSchema>;
 type Out = z.output<typeof signInSchema>;
 
 /** Re-key it with a new `preset` to fill it (the demo accounts do). */
-export function SignInForm({ onSignedIn, preset }: { onSignedIn: (user: User) => void; preset?: { email: string; password?: string } }) {
+export function SignInForm({
+  onSignedIn,
+  preset,
+}: {
+  onSignedIn: (user: User) => void;
+  preset?: { email: string; password?: string };
+}) {
   const signIn = useSignIn();
   const { register, handleSubmit, formState } = useForm<In, unknown, Out>({
     resolver: zodResolver(signInSchema),
@@ -24,7 +30,15 @@ export function SignInForm({ onSignedIn, preset }: { onSignedIn: (user: User) =>
         {(a) => <input {...a} {...register('email')} type="email" autoComplete="username" className={inputClass} />}
       </Field>
       <Field label="Password" error={e.password?.message}>
-        {(a) => <input {...a} {...register('password')} type="password" autoComplete="current-password" className={inputClass} />}
+        {(a) => (
+          <input
+            {...a}
+            {...register('password')}
+            type="password"
+            autoComplete="current-password"
+            className={inputClass}
+          />
+        )}
       </Field>
       <label className="flex min-h-11 items-center gap-3">
         <input type="checkbox" {...register('remember')} className="h-5 w-5 accent-[var(--color-glow)]" />

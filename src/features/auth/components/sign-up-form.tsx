@@ -11,7 +11,13 @@ type In = z.input<typeof signUpSchema>;
 type Out = z.output<typeof signUpSchema>;
 
 /** With an invitation, the address is the invited one and the account is ready at once. */
-export function SignUpForm({ onDone, invitation }: { onDone: (r: SignUpResult) => void; invitation?: { token: string; email: string } }) {
+export function SignUpForm({
+  onDone,
+  invitation,
+}: {
+  onDone: (r: SignUpResult) => void;
+  invitation?: { token: string; email: string };
+}) {
   const signUp = useSignUp();
   const { register, handleSubmit, formState } = useForm<In, unknown, Out>({
     resolver: zodResolver(signUpSchema),
@@ -24,10 +30,25 @@ export function SignUpForm({ onDone, invitation }: { onDone: (r: SignUpResult) =
         {(a) => <input {...a} {...register('name')} autoComplete="name" className={inputClass} />}
       </Field>
       <Field label="E-mail" error={e.email?.message}>
-        {(a) => <input {...a} {...register('email')} type="email" autoComplete="email" readOnly={Boolean(invitation)} className={inputClass} />}
+        {(a) => (
+          <input
+            {...a}
+            {...register('email')}
+            type="email"
+            autoComplete="email"
+            readOnly={Boolean(invitation)}
+            className={inputClass}
+          />
+        )}
       </Field>
-      <Field label="Password" hint={`At least ${PASSWORD_MIN} characters; a few unrelated words work well`} error={e.password?.message}>
-        {(a) => <input {...a} {...register('password')} type="password" autoComplete="new-password" className={inputClass} />}
+      <Field
+        label="Password"
+        hint={`At least ${PASSWORD_MIN} characters; a few unrelated words work well`}
+        error={e.password?.message}
+      >
+        {(a) => (
+          <input {...a} {...register('password')} type="password" autoComplete="new-password" className={inputClass} />
+        )}
       </Field>
       <FormAlert message={signUp.error?.message} />
       <button type="submit" className={buttonClass('primary', 'w-full')} disabled={signUp.isPending}>

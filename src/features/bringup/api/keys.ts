@@ -15,6 +15,8 @@ export function afterWrite(client: QueryClient, restorationId: number, data: Bri
   return Promise.all([
     client.invalidateQueries({ queryKey: bringupKeys.readings(restorationId) }),
     client.invalidateQueries({ queryKey: bringupKeys.history(restorationId) }),
-    client.invalidateQueries({ predicate: ({ queryKey }) => queryKey[0] === 'findings' && queryKey[2] === 'measurements' }),
+    client.invalidateQueries({
+      predicate: ({ queryKey }) => queryKey[0] === 'findings' && queryKey[2] === 'measurements',
+    }),
   ]);
 }

@@ -13,13 +13,26 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+const json = (status: number, body: unknown) =>
+  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
 function record(status: 'done' | null, signed = false): Bringup {
   const items = prePowerItems.map((item) => ({ item, status, reason: '', checkedBy: status ? 'Ada Bench' : null }));
   return {
-    intake: intakeItems.map((item) => ({ item, done: false, note: '', findingId: null, photoId: null, checkedBy: null, checkedAt: null })),
-    prePower: { items, signedOff: signed ? { by: 'Ada Bench', at: '2026-11-30T09:00:00.000Z' } : null, missing: prePowerMissing(items) },
+    intake: intakeItems.map((item) => ({
+      item,
+      done: false,
+      note: '',
+      findingId: null,
+      photoId: null,
+      checkedBy: null,
+      checkedAt: null,
+    })),
+    prePower: {
+      items,
+      signedOff: signed ? { by: 'Ada Bench', at: '2026-11-30T09:00:00.000Z' } : null,
+      missing: prePowerMissing(items),
+    },
     steps: [],
   };
 }
@@ -27,13 +40,20 @@ function record(status: 'done' | null, signed = false): Bringup {
 /** Stands in for the bring-up API; records every call. */
 function fakeApi(initial: Bringup | { status: number; message: string }) {
   const calls: { method: string; url: string; body: unknown }[] = [];
-  vi.stubGlobal('fetch', vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
-    const method = init.method ?? 'GET';
-    calls.push({ method, url: String(input), body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined });
-    if ('status' in initial) return json(initial.status, { error: { code: 'x', message: initial.message } });
-    if (method === 'POST' && String(input).endsWith('/sign-off')) return json(200, record('done', true));
-    return json(200, initial);
-  }));
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
+      const method = init.method ?? 'GET';
+      calls.push({
+        method,
+        url: String(input),
+        body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined,
+      });
+      if ('status' in initial) return json(initial.status, { error: { code: 'x', message: initial.message } });
+      if (method === 'POST' && String(input).endsWith('/sign-off')) return json(200, record('done', true));
+      return json(200, initial);
+    }),
+  );
   return calls;
 }
 
@@ -57,7 +77,9 @@ describe('BringupTab', () => {
     expect(screen.getByText('No power-up steps yet')).toBeInTheDocument();
     expect(screen.queryByRole('form', { name: 'Log a power-up step' })).toBeNull();
     expect(screen.getByRole('note', { name: 'Power-up caution' })).toHaveTextContent(/licensed practice/);
-    expect(screen.getByRole('note', { name: 'Discharging caution' })).toHaveTextContent(/Never rely on bleeder resistors/);
+    expect(screen.getByRole('note', { name: 'Discharging caution' })).toHaveTextContent(
+      /Never rely on bleeder resistors/,
+    );
   });
 
   it('when a technician marks an item waived, then the reason is asked for before it can be saved', async () => {
@@ -70,9 +92,12 @@ describe('BringupTab', () => {
     expect(save).toBeDisabled();
     await user.type(within(row).getByLabelText('Reason for waiving it'), 'Bench discharge tool lent out');
     await user.click(save);
-    await waitFor(() => expect(calls.find((c) => c.method === 'PUT')).toMatchObject({
-      url: '/api/restorations/7/bringup/pre-power', body: { item: 'discharge-method', status: 'waived', reason: 'Bench discharge tool lent out' },
-    }));
+    await waitFor(() =>
+      expect(calls.find((c) => c.method === 'PUT')).toMatchObject({
+        url: '/api/restorations/7/bringup/pre-power',
+        body: { item: 'discharge-method', status: 'waived', reason: 'Bench discharge tool lent out' },
+      }),
+    );
   });
 
   it('when every item is marked, then the technician signs off and the step form appears', async () => {

@@ -26,10 +26,25 @@ export function BringupTab({ restorationId, role, liveChassis, findings = [], ph
   const ownerWords = role === 'owner';
   return (
     <div className="space-y-8">
-      <IntakeChecklist restorationId={restorationId} intake={intake} canRecord={canRecord} ownerWords={ownerWords} findings={findings} photos={photos} />
-      <PrePowerChecklist restorationId={restorationId} prePower={prePower} canRecord={canRecord} canSignOff={can(role, 'bringup.signoff')} ownerWords={ownerWords} />
+      <IntakeChecklist
+        restorationId={restorationId}
+        intake={intake}
+        canRecord={canRecord}
+        ownerWords={ownerWords}
+        findings={findings}
+        photos={photos}
+      />
+      <PrePowerChecklist
+        restorationId={restorationId}
+        prePower={prePower}
+        canRecord={canRecord}
+        canSignOff={can(role, 'bringup.signoff')}
+        ownerWords={ownerWords}
+      />
       <section aria-labelledby="power-up-heading" className="space-y-3">
-        <h2 id="power-up-heading" className="text-xl font-bold">{ownerWords ? 'First switch-on, step by step' : 'Staged power-up'}</h2>
+        <h2 id="power-up-heading" className="text-xl font-bold">
+          {ownerWords ? 'First switch-on, step by step' : 'Staged power-up'}
+        </h2>
         {canRecord && <PowerUpCaution liveChassis={liveChassis} />}
         <PowerUpLog steps={steps} />
         {canRecord &&

@@ -13,14 +13,25 @@ export interface IntakeChecklistProps {
 }
 
 /** What is looked at before anything is plugged in: ticked, noted, linked to a finding and a photo. */
-export function IntakeChecklist({ restorationId, intake, canRecord, ownerWords, findings, photos }: IntakeChecklistProps) {
+export function IntakeChecklist({
+  restorationId,
+  intake,
+  canRecord,
+  ownerWords,
+  findings,
+  photos,
+}: IntakeChecklistProps) {
   const save = useSaveIntakeCheck(restorationId);
   const done = intake.filter((i) => i.done).length;
   return (
     <section aria-labelledby="intake-heading" className="space-y-3">
       <div>
-        <h2 id="intake-heading" className="text-xl font-bold">Intake checklist</h2>
-        <p className="text-sm text-ink-soft">{done} of {intake.length} checked. Never plug a set in to see if it works.</p>
+        <h2 id="intake-heading" className="text-xl font-bold">
+          Intake checklist
+        </h2>
+        <p className="text-sm text-ink-soft">
+          {done} of {intake.length} checked. Never plug a set in to see if it works.
+        </p>
       </div>
       {canRecord ? (
         <ul className="space-y-3">
@@ -40,7 +51,9 @@ export function IntakeChecklist({ restorationId, intake, canRecord, ownerWords, 
         <ul className="space-y-1">
           {intake.map((item) => (
             <li key={item.item} className="flex gap-2">
-              <span aria-hidden="true" className={item.done ? 'text-ok' : 'text-ink-soft'}>{item.done ? '✓' : '○'}</span>
+              <span aria-hidden="true" className={item.done ? 'text-ok' : 'text-ink-soft'}>
+                {item.done ? '✓' : '○'}
+              </span>
               <span>
                 {ownerWords ? intakeItemWords[item.item].ownerLabel : intakeItemWords[item.item].label}
                 <span className="sr-only">{item.done ? ': done' : ': not yet'}</span>

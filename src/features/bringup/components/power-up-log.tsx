@@ -3,11 +3,21 @@ import { EmptyState } from '../../../components/states';
 import { lampLimitWords } from '../lib/inline-limits';
 import { formatDateTime as when } from '../../../lib/format';
 
-const verdictClass = { within: 'text-ok', marginal: 'text-glow-strong', out: 'text-danger font-semibold', unknown: 'text-ink-soft' } as const;
+const verdictClass = {
+  within: 'text-ok',
+  marginal: 'text-glow-strong',
+  out: 'text-danger font-semibold',
+  unknown: 'text-ink-soft',
+} as const;
 
 /** The steps taken at first power, in order: supply, lamp, readings with their verdicts, and the decision. */
 export function PowerUpLog({ steps }: { steps: Bringup['steps'] }) {
-  if (steps.length === 0) return <EmptyState title="No power-up steps yet">Each step taken at first power is logged here, with its readings and the decision.</EmptyState>;
+  if (steps.length === 0)
+    return (
+      <EmptyState title="No power-up steps yet">
+        Each step taken at first power is logged here, with its readings and the decision.
+      </EmptyState>
+    );
   return (
     <ol aria-label="Power-up steps" className="space-y-3">
       {steps.map((s) => {
@@ -20,7 +30,12 @@ export function PowerUpLog({ steps }: { steps: Bringup['steps'] }) {
               {s.lampWatts !== null && `, ${s.lampWatts} W lamp`}
               {s.appliedVolts !== null && `, ${s.appliedVolts} V applied`}
             </p>
-            {s.lampBehaviour !== 'no-lamp' && <p>Lamp: {lampBehaviourLabels[s.lampBehaviour]}{limit && <span className="text-sm text-ink-soft"> — {limit.limit}</span>}</p>}
+            {s.lampBehaviour !== 'no-lamp' && (
+              <p>
+                Lamp: {lampBehaviourLabels[s.lampBehaviour]}
+                {limit && <span className="text-sm text-ink-soft"> — {limit.limit}</span>}
+              </p>
+            )}
             {s.readings.length > 0 && (
               <ul className="text-sm">
                 {s.readings.map((r) => (
@@ -32,9 +47,12 @@ export function PowerUpLog({ steps }: { steps: Bringup['steps'] }) {
                 ))}
               </ul>
             )}
-            {s.notes && <p className="whitespace-pre-line text-sm">{s.notes}</p>}
+            {s.notes && <p className="text-sm whitespace-pre-line">{s.notes}</p>}
             <p className={stop ? 'font-semibold text-danger' : 'font-semibold text-ok'}>{decisionLabels[s.decision]}</p>
-            <p className="text-sm text-ink-soft"><time dateTime={s.takenAt}>{when(s.takenAt)}</time>{s.takenBy && ` · ${s.takenBy}`}</p>
+            <p className="text-sm text-ink-soft">
+              <time dateTime={s.takenAt}>{when(s.takenAt)}</time>
+              {s.takenBy && ` · ${s.takenBy}`}
+            </p>
           </li>
         );
       })}

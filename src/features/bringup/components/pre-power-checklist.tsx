@@ -16,13 +16,21 @@ export interface PrePowerChecklistProps {
 }
 
 /** The checklist a technician signs off before the set first sees mains; until then Testing and powered readings are refused. */
-export function PrePowerChecklist({ restorationId, prePower, canRecord, canSignOff, ownerWords }: PrePowerChecklistProps) {
+export function PrePowerChecklist({
+  restorationId,
+  prePower,
+  canRecord,
+  canSignOff,
+  ownerWords,
+}: PrePowerChecklistProps) {
   const save = useSavePrePowerCheck(restorationId);
   const signOff = useSignOffPrePower(restorationId);
   const { items, signedOff, missing } = prePower;
   return (
     <section aria-labelledby="pre-power-heading" className="space-y-3">
-      <h2 id="pre-power-heading" className="text-xl font-bold">Pre-power checklist</h2>
+      <h2 id="pre-power-heading" className="text-xl font-bold">
+        Pre-power checklist
+      </h2>
       <p role="status" className={`rounded-lg px-3 py-2 font-semibold ${signedOff ? 'bg-glow-soft' : 'bg-sunken'}`}>
         {signedOff
           ? `Signed off by ${signedOff.by ?? 'a former member'} on ${when(signedOff.at)}.`
@@ -60,13 +68,21 @@ export function PrePowerChecklist({ restorationId, prePower, canRecord, canSignO
           {missing.length > 0 && (
             <div>
               <p className="font-semibold">Still to do before the sign-off:</p>
-              <ul className="list-disc pl-5 text-sm">{missing.map((m) => <li key={m}>{m}</li>)}</ul>
+              <ul className="list-disc pl-5 text-sm">
+                {missing.map((m) => (
+                  <li key={m}>{m}</li>
+                ))}
+              </ul>
             </div>
           )}
           <Button disabled={missing.length > 0 || signOff.isPending} onClick={() => signOff.mutate()}>
             {signOff.isPending ? 'Signing off…' : 'Sign off the pre-power checklist'}
           </Button>
-          {signOff.isError && <p role="alert" className="text-sm font-semibold text-danger">{signOff.error.message}</p>}
+          {signOff.isError && (
+            <p role="alert" className="text-sm font-semibold text-danger">
+              {signOff.error.message}
+            </p>
+          )}
         </div>
       )}
     </section>

@@ -1,5 +1,12 @@
 import { useState, type ReactNode } from 'react';
-import { prePowerItemWords, prePowerStatuses, prePowerStatusLabels, type Bringup, type PrePowerCheckInput, type PrePowerStatus } from '../../../../shared/schemas/bringup';
+import {
+  prePowerItemWords,
+  prePowerStatuses,
+  prePowerStatusLabels,
+  type Bringup,
+  type PrePowerCheckInput,
+  type PrePowerStatus,
+} from '../../../../shared/schemas/bringup';
 import { Button } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 
@@ -32,7 +39,14 @@ export function PrePowerItemRow({ value, signedOff, saving, error, onSave, child
         <div className="flex flex-wrap gap-x-5 gap-y-1">
           {prePowerStatuses.map((s) => (
             <label key={s} className="inline-flex min-h-11 items-center gap-2">
-              <input type="radio" name={`${base}-status`} value={s} checked={status === s} onChange={() => setStatus(s)} className="h-4 w-4 accent-glow" />
+              <input
+                type="radio"
+                name={`${base}-status`}
+                value={s}
+                checked={status === s}
+                onChange={() => setStatus(s)}
+                className="h-4 w-4 accent-glow"
+              />
               <span className={s === 'waived' ? 'text-danger' : ''}>{prePowerStatusLabels[s]}</span>
             </label>
           ))}
@@ -42,24 +56,44 @@ export function PrePowerItemRow({ value, signedOff, saving, error, onSave, child
             <label htmlFor={`${base}-reason`} className="text-sm font-semibold">
               Reason {status === 'waived' ? 'for waiving it' : 'it does not apply'}
             </label>
-            <input id={`${base}-reason`} value={reason} maxLength={300} onChange={(e) => setReason(e.target.value)} className={inputClass} aria-required="true" />
+            <input
+              id={`${base}-reason`}
+              value={reason}
+              maxLength={300}
+              onChange={(e) => setReason(e.target.value)}
+              className={inputClass}
+              aria-required="true"
+            />
           </div>
         )}
       </fieldset>
       {waived && (
-        <p className="text-sm font-semibold text-danger">Waived: {value.reason}. This shows in red in the history and on the report.</p>
+        <p className="text-sm font-semibold text-danger">
+          Waived: {value.reason}. This shows in red in the history and on the report.
+        </p>
       )}
       {children}
       <div className="flex flex-wrap items-center gap-3">
-        <Button variant={status === 'waived' ? 'danger' : 'quiet'} disabled={!changed || saving || (needsReason && !reason.trim())}
-          onClick={() => onSave({ item: value.item, status, reason: needsReason ? reason : '' })}>
+        <Button
+          variant={status === 'waived' ? 'danger' : 'quiet'}
+          disabled={!changed || saving || (needsReason && !reason.trim())}
+          onClick={() => onSave({ item: value.item, status, reason: needsReason ? reason : '' })}
+        >
           {saving ? 'Saving…' : `Save: ${words.label.toLowerCase()}`}
         </Button>
-        {changed && signedOff && <span className="text-sm font-semibold text-danger">Saving this withdraws the sign-off.</span>}
-        {changed && needsReason && !reason.trim() && <span className="text-sm text-ink-soft">Give the reason to save.</span>}
+        {changed && signedOff && (
+          <span className="text-sm font-semibold text-danger">Saving this withdraws the sign-off.</span>
+        )}
+        {changed && needsReason && !reason.trim() && (
+          <span className="text-sm text-ink-soft">Give the reason to save.</span>
+        )}
         {value.checkedBy && !changed && <span className="text-sm text-ink-soft">Marked by {value.checkedBy}</span>}
       </div>
-      {error && <p role="alert" className="text-sm font-semibold text-danger">{error}</p>}
+      {error && (
+        <p role="alert" className="text-sm font-semibold text-danger">
+          {error}
+        </p>
+      )}
     </li>
   );
 }

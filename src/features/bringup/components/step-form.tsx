@@ -1,5 +1,12 @@
 import { useState } from 'react';
-import { decisionLabels, decisions, lampBehaviourLabels, lampBehaviours, supplies, supplyLabels } from '../../../../shared/schemas/bringup';
+import {
+  decisionLabels,
+  decisions,
+  lampBehaviourLabels,
+  lampBehaviours,
+  supplies,
+  supplyLabels,
+} from '../../../../shared/schemas/bringup';
 import { buttonClass } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import { useAddBringupStep } from '../api/add-bringup-step';
@@ -11,13 +18,27 @@ import { StepReadings } from './step-readings';
 const toNumber = (text: string) => (text.trim() === '' ? null : Number(text.replace(',', '.')));
 
 /** Logs the step just taken; the draft stays on the page if the save fails. */
-export function StepForm({ restorationId, nextNumber, findings }: { restorationId: number; nextNumber: number; findings: FindingChoice[] }) {
+export function StepForm({
+  restorationId,
+  nextNumber,
+  findings,
+}: {
+  restorationId: number;
+  nextNumber: number;
+  findings: FindingChoice[];
+}) {
   const add = useAddBringupStep(restorationId);
   const [draft, setDraft] = useState<StepDraft>(emptyDraft());
   const [errors, setErrors] = useState<Record<string, string>>({});
   const set = (patch: Partial<StepDraft>) => setDraft((d) => ({ ...d, ...patch }));
   const lamp = usesLamp(draft.supply);
-  const limit = lamp ? lampLimitWords({ lampWatts: toNumber(draft.lampWatts), lampVolts: toNumber(draft.lampVolts), appliedVolts: toNumber(draft.appliedVolts) }) : null;
+  const limit = lamp
+    ? lampLimitWords({
+        lampWatts: toNumber(draft.lampWatts),
+        lampVolts: toNumber(draft.lampVolts),
+        appliedVolts: toNumber(draft.appliedVolts),
+      })
+    : null;
   const brightGoingOn = lamp && draft.lampBehaviour === 'bright-staying' && draft.decision === 'go-on';
   const submit = (e: React.FormEvent) => {
     e.preventDefault();
@@ -28,21 +49,45 @@ export function StepForm({ restorationId, nextNumber, findings }: { restorationI
   };
   const text = (key: 'lampWatts' | 'lampVolts' | 'appliedVolts', label: string, hint?: string) => (
     <div>
-      <label htmlFor={`step-${key}`} className="text-sm font-semibold">{label}</label>
+      <label htmlFor={`step-${key}`} className="text-sm font-semibold">
+        {label}
+      </label>
       {hint && <p className="text-xs text-ink-soft">{hint}</p>}
-      <input id={`step-${key}`} inputMode="decimal" value={draft[key]} onChange={(e) => set({ [key]: e.target.value })}
-        aria-invalid={Boolean(errors[key])} className={`${inputClass} font-mono`} />
+      <input
+        id={`step-${key}`}
+        inputMode="decimal"
+        value={draft[key]}
+        onChange={(e) => set({ [key]: e.target.value })}
+        aria-invalid={Boolean(errors[key])}
+        className={`${inputClass} font-mono`}
+      />
       {errors[key] && <p className="text-sm font-semibold text-danger">{errors[key]}</p>}
     </div>
   );
   return (
-    <form noValidate onSubmit={submit} aria-label="Log a power-up step" className="space-y-4 rounded-xl border border-rule bg-panel p-4">
+    <form
+      noValidate
+      onSubmit={submit}
+      aria-label="Log a power-up step"
+      className="space-y-4 rounded-xl border border-rule bg-panel p-4"
+    >
       <h3 className="text-lg font-bold">Log step {nextNumber}</h3>
       <div className="grid gap-3 sm:grid-cols-4">
         <div>
-          <label htmlFor="step-supply" className="text-sm font-semibold">Supply</label>
-          <select id="step-supply" value={draft.supply} onChange={(e) => set({ supply: e.target.value as StepDraft['supply'] })} className={inputClass}>
-            {supplies.map((s) => <option key={s} value={s}>{supplyLabels[s]}</option>)}
+          <label htmlFor="step-supply" className="text-sm font-semibold">
+            Supply
+          </label>
+          <select
+            id="step-supply"
+            value={draft.supply}
+            onChange={(e) => set({ supply: e.target.value as StepDraft['supply'] })}
+            className={inputClass}
+          >
+            {supplies.map((s) => (
+              <option key={s} value={s}>
+                {supplyLabels[s]}
+              </option>
+            ))}
           </select>
         </div>
         {lamp && text('lampWatts', 'Lamp (W)')}
@@ -56,23 +101,56 @@ export function StepForm({ restorationId, nextNumber, findings }: { restorationI
       )}
       {lamp && (
         <div>
-          <label htmlFor="step-lamp" className="text-sm font-semibold">What the lamp did</label>
-          <select id="step-lamp" value={draft.lampBehaviour} onChange={(e) => set({ lampBehaviour: e.target.value as StepDraft['lampBehaviour'] })} className={inputClass}>
-            {lampBehaviours.filter((b) => b !== 'no-lamp').map((b) => <option key={b} value={b}>{lampBehaviourLabels[b]}</option>)}
+          <label htmlFor="step-lamp" className="text-sm font-semibold">
+            What the lamp did
+          </label>
+          <select
+            id="step-lamp"
+            value={draft.lampBehaviour}
+            onChange={(e) => set({ lampBehaviour: e.target.value as StepDraft['lampBehaviour'] })}
+            className={inputClass}
+          >
+            {lampBehaviours
+              .filter((b) => b !== 'no-lamp')
+              .map((b) => (
+                <option key={b} value={b}>
+                  {lampBehaviourLabels[b]}
+                </option>
+              ))}
           </select>
         </div>
       )}
       <StepReadings rows={draft.readings} errors={errors} onChange={(readings) => set({ readings })} />
       <div>
-        <label htmlFor="step-notes" className="text-sm font-semibold">Smell, smoke, hum, heater glow</label>
-        <textarea id="step-notes" rows={2} value={draft.notes} maxLength={1000} onChange={(e) => set({ notes: e.target.value })} className={inputClass} />
+        <label htmlFor="step-notes" className="text-sm font-semibold">
+          Smell, smoke, hum, heater glow
+        </label>
+        <textarea
+          id="step-notes"
+          rows={2}
+          value={draft.notes}
+          maxLength={1000}
+          onChange={(e) => set({ notes: e.target.value })}
+          className={inputClass}
+        />
       </div>
       {findings.length > 0 && (
         <div>
-          <label htmlFor="step-finding" className="text-sm font-semibold">Finding (optional)</label>
-          <select id="step-finding" value={draft.findingId} onChange={(e) => set({ findingId: e.target.value })} className={inputClass}>
+          <label htmlFor="step-finding" className="text-sm font-semibold">
+            Finding (optional)
+          </label>
+          <select
+            id="step-finding"
+            value={draft.findingId}
+            onChange={(e) => set({ findingId: e.target.value })}
+            className={inputClass}
+          >
             <option value="">Not tied to a finding</option>
-            {findings.map((f) => <option key={f.id} value={String(f.id)}>#{f.number} {f.title}</option>)}
+            {findings.map((f) => (
+              <option key={f.id} value={String(f.id)}>
+                #{f.number} {f.title}
+              </option>
+            ))}
           </select>
         </div>
       )}
@@ -81,7 +159,14 @@ export function StepForm({ restorationId, nextNumber, findings }: { restorationI
         <div className="flex flex-wrap gap-x-5">
           {decisions.map((d) => (
             <label key={d} className="inline-flex min-h-11 items-center gap-2">
-              <input type="radio" name="step-decision" value={d} checked={draft.decision === d} onChange={() => set({ decision: d })} className="h-4 w-4 accent-glow" />
+              <input
+                type="radio"
+                name="step-decision"
+                value={d}
+                checked={draft.decision === d}
+                onChange={() => set({ decision: d })}
+                className="h-4 w-4 accent-glow"
+              />
               <span className={d === 'stop' ? 'text-danger' : ''}>{decisionLabels[d]}</span>
             </label>
           ))}
@@ -89,10 +174,19 @@ export function StepForm({ restorationId, nextNumber, findings }: { restorationI
         {errors.decision && <p className="text-sm font-semibold text-danger">{errors.decision}</p>}
       </fieldset>
       {brightGoingOn && (
-        <p role="alert" className="text-sm font-semibold text-danger">A lamp that stays bright means a fault (a short, a leaky reservoir, a shorted rectifier): stop and find it before going on.</p>
+        <p role="alert" className="text-sm font-semibold text-danger">
+          A lamp that stays bright means a fault (a short, a leaky reservoir, a shorted rectifier): stop and find it
+          before going on.
+        </p>
       )}
-      {add.isError && <p role="alert" className="text-sm font-semibold text-danger">{add.error.message}</p>}
-      <button type="submit" disabled={add.isPending} className={buttonClass()}>{add.isPending ? 'Saving…' : `Log step ${nextNumber}`}</button>
+      {add.isError && (
+        <p role="alert" className="text-sm font-semibold text-danger">
+          {add.error.message}
+        </p>
+      )}
+      <button type="submit" disabled={add.isPending} className={buttonClass()}>
+        {add.isPending ? 'Saving…' : `Log step ${nextNumber}`}
+      </button>
     </form>
   );
 }

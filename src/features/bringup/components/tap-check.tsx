@@ -13,8 +13,16 @@ export function TapCheck() {
   const words = tapWords({ ratedVolts: toNumber(rated), tapVolts: toNumber(tap), mainsVolts: toNumber(mains) });
   const box = (label: string, value: string, set: (v: string) => void, key: string) => (
     <div>
-      <label htmlFor={`${id}-${key}`} className="text-sm font-semibold">{label}</label>
-      <input id={`${id}-${key}`} inputMode="decimal" value={value} onChange={(e) => set(e.target.value)} className={`${inputClass} font-mono`} />
+      <label htmlFor={`${id}-${key}`} className="text-sm font-semibold">
+        {label}
+      </label>
+      <input
+        id={`${id}-${key}`}
+        inputMode="decimal"
+        value={value}
+        onChange={(e) => set(e.target.value)}
+        className={`${inputClass} font-mono`}
+      />
     </div>
   );
   return (
@@ -25,7 +33,10 @@ export function TapCheck() {
         {box('Tap set (V)', tap, setTap, 'tap')}
         {box('Local mains (V)', mains, setMains, 'mains')}
       </div>
-      <p aria-live="polite" className="mt-2 text-sm">{words ?? 'Enter the tap and the local mains to see what the winding gives (ideal transformer; real sets read a little lower under load).'}</p>
+      <p aria-live="polite" className="mt-2 text-sm">
+        {words ??
+          'Enter the tap and the local mains to see what the winding gives (ideal transformer; real sets read a little lower under load).'}
+      </p>
     </div>
   );
 }

@@ -4,7 +4,9 @@ import { lampLimitWords, tapWords } from './inline-limits';
 describe('lampLimitWords', () => {
   it('when a 60 W 230 V lamp is on 230 V, then it says at most 0.26 A', () => {
     // Worked by hand: I = P/V = 60 / 230 = 0.2609 A (lamp alone across the mains; PHYS, P = VI).
-    expect(lampLimitWords({ lampWatts: 60, lampVolts: 230, appliedVolts: 230 })?.limit).toMatch(/at most 0\.26 A at 230 V/);
+    expect(lampLimitWords({ lampWatts: 60, lampVolts: 230, appliedVolts: 230 })?.limit).toMatch(
+      /at most 0\.26 A at 230 V/,
+    );
   });
 
   it('when a 100 W 120 V lamp is on 120 V, then it says at most 0.83 A', () => {
@@ -26,7 +28,9 @@ describe('tapWords', () => {
   it('when a 6.3 V heater winding on the 220 V tap sees 240 V, then it gives about 6.87 V, +9.1 %', () => {
     // Ideal transformer, worked by hand: 6.3 × 240 / 220 = 6.873 V; a maker's bucking-transformer article
     // measured 6.85 V heaters in this case, which agrees within 0.4 %.
-    expect(tapWords({ ratedVolts: 6.3, tapVolts: 220, mainsVolts: 240 })).toBe('A 6.3 V winding gives about 6.87 V on the 220 V tap at 240 V mains (+9.1 %).');
+    expect(tapWords({ ratedVolts: 6.3, tapVolts: 220, mainsVolts: 240 })).toBe(
+      'A 6.3 V winding gives about 6.87 V on the 220 V tap at 240 V mains (+9.1 %).',
+    );
   });
 
   it('when the tap matches the mains, then the winding gives its rating', () => {

@@ -7,7 +7,11 @@ const round = (value: number, places: number) => value.toFixed(places);
  * The series lamp's most current at the volts applied (the fault case: the lamp alone across the supply),
  * in words for the step form; null until the lamp's rating and the volts are known.
  */
-export function lampLimitWords(lamp: { lampWatts: number | null; lampVolts: number | null; appliedVolts: number | null }): { limit: string; note: string } | null {
+export function lampLimitWords(lamp: {
+  lampWatts: number | null;
+  lampVolts: number | null;
+  appliedVolts: number | null;
+}): { limit: string; note: string } | null {
   const { lampWatts, lampVolts, appliedVolts } = lamp;
   if (!lampWatts || !lampVolts || !appliedVolts || lampWatts <= 0 || lampVolts <= 0 || appliedVolts <= 0) return null;
   const d = seriesLampLimitDetail({ lampWatts, lampVolts, mainsVolts: appliedVolts });
@@ -18,7 +22,11 @@ export function lampLimitWords(lamp: { lampWatts: number | null; lampVolts: numb
 }
 
 /** What a winding rated `ratedVolts` on the `tapVolts` tap gives on `mainsVolts` mains, in words; null until all three are known. */
-export function tapWords(t: { ratedVolts: number | null; tapVolts: number | null; mainsVolts: number | null }): string | null {
+export function tapWords(t: {
+  ratedVolts: number | null;
+  tapVolts: number | null;
+  mainsVolts: number | null;
+}): string | null {
   const { ratedVolts, tapVolts, mainsVolts } = t;
   if (!ratedVolts || !tapVolts || !mainsVolts || ratedVolts <= 0 || tapVolts <= 0 || mainsVolts <= 0) return null;
   const volts = tapScaled({ ratedVolts, tapVolts, mainsVolts });

@@ -1,5 +1,12 @@
 import { useId, useState } from 'react';
-import { BenchInputError, formatQuantity, frequencyOf, IF_PRESETS, parseQuantity, wavelengthOf } from '../../../../shared/bench';
+import {
+  BenchInputError,
+  formatQuantity,
+  frequencyOf,
+  IF_PRESETS,
+  parseQuantity,
+  wavelengthOf,
+} from '../../../../shared/bench';
 import { inputClass } from '../../../components/field';
 import { formatDifference } from '../../../lib/format';
 import { useQuantity } from '../hooks/use-quantity';
@@ -36,7 +43,11 @@ export function AlignmentCard() {
     const off = hertz - chosen.hertz;
     const size = Math.abs(off);
     const verdict = size <= chosen.toleranceHertz ? 'within' : size <= 1.5 * chosen.toleranceHertz ? 'marginal' : 'out';
-    return { verdict, off: formatDifference(off, 'Hz', '+'), tolerance: `±${formatQuantity(chosen.toleranceHertz, 'Hz')}` } as const;
+    return {
+      verdict,
+      off: formatDifference(off, 'Hz', '+'),
+      tolerance: `±${formatQuantity(chosen.toleranceHertz, 'Hz')}`,
+    } as const;
   });
   const dial = calculate([mark.trim() === '' ? undefined : mark], ([text]) => dialMark(text));
   return (
@@ -48,10 +59,14 @@ export function AlignmentCard() {
     >
       <CardFields>
         <div className="space-y-1">
-          <label htmlFor={presetId} className="block font-semibold">Set’s IF</label>
+          <label htmlFor={presetId} className="block font-semibold">
+            Set’s IF
+          </label>
           <select id={presetId} value={preset} onChange={(e) => setPreset(e.target.value)} className={inputClass}>
             {IF_PRESETS.map((p) => (
-              <option key={p.hertz} value={String(p.hertz)}>{p.label}</option>
+              <option key={p.hertz} value={String(p.hertz)}>
+                {p.label}
+              </option>
             ))}
           </select>
         </div>
@@ -68,7 +83,13 @@ export function AlignmentCard() {
           </>
         )}
       </ResultPanel>
-      <TextInput label="Dial mark" value={mark} onChange={setMark} placeholder="e.g. 1500 m, 200 kHz, 98.5 MHz" hint="In metres (end with m) or in hertz." />
+      <TextInput
+        label="Dial mark"
+        value={mark}
+        onChange={setMark}
+        placeholder="e.g. 1500 m, 200 kHz, 98.5 MHz"
+        hint="In metres (end with m) or in hertz."
+      />
       <ResultPanel outcome={dial} waiting="Type a dial mark in metres or kilohertz.">
         {(r) => (
           <>
@@ -76,12 +97,17 @@ export function AlignmentCard() {
             <ResultList>
               <ResultLine label="Wavelength">{r.wavelength}</ResultLine>
             </ResultList>
-            <ResultNote>Old dials marked in metres use the rounded speed of light; stations were listed either way.</ResultNote>
+            <ResultNote>
+              Old dials marked in metres use the rounded speed of light; stations were listed either way.
+            </ResultNote>
           </>
         )}
       </ResultPanel>
       <SafetyNote>
-        <p>Alignment is done on a powered set: use an insulated trimming tool and keep the other hand clear of the chassis.</p>
+        <p>
+          Alignment is done on a powered set: use an insulated trimming tool and keep the other hand clear of the
+          chassis.
+        </p>
       </SafetyNote>
     </CalculatorCard>
   );

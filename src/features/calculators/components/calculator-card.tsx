@@ -16,7 +16,10 @@ export function CalculatorCard({
 }) {
   const id = useId();
   return (
-    <section aria-labelledby={id} className="@container flex flex-col rounded-xl border border-rule bg-panel p-4 shadow-sm">
+    <section
+      aria-labelledby={id}
+      className="@container flex flex-col rounded-xl border border-rule bg-panel p-4 shadow-sm"
+    >
       <h3 id={id} className="text-lg font-bold">
         {title}
       </h3>

@@ -44,7 +44,11 @@ export const calculatorCatalogue: { title: string; entries: CatalogueEntry[] }[]
     entries: [
       { title: 'Expected ESR', keywords: 'electrolytic equivalent series resistance', card: <EsrCard /> },
       { title: 'Leakage limit', keywords: 'electrolytic leakage current reform', card: <LeakageCard /> },
-      { title: 'Stored energy and discharge time', keywords: 'discharge bleed resistor safe voltage energy joules', card: <DischargeCard /> },
+      {
+        title: 'Stored energy and discharge time',
+        keywords: 'discharge bleed resistor safe voltage energy joules',
+        card: <DischargeCard />,
+      },
     ],
   },
   {
@@ -57,19 +61,43 @@ export const calculatorCatalogue: { title: string; entries: CatalogueEntry[] }[]
   {
     title: 'Valves and bias',
     entries: [
-      { title: 'Cathode bias', keywords: 'cathode resistor bias voltage anode screen current', card: <CathodeBiasCard /> },
-      { title: 'Cathode current from a reading', keywords: 'cathode voltage resistor current', card: <CathodeCurrentCard /> },
-      { title: 'Cathode bypass corner', keywords: 'bypass capacitor cathode low frequency', card: <BypassCornerCard /> },
+      {
+        title: 'Cathode bias',
+        keywords: 'cathode resistor bias voltage anode screen current',
+        card: <CathodeBiasCard />,
+      },
+      {
+        title: 'Cathode current from a reading',
+        keywords: 'cathode voltage resistor current',
+        card: <CathodeCurrentCard />,
+      },
+      {
+        title: 'Cathode bypass corner',
+        keywords: 'bypass capacitor cathode low frequency',
+        card: <BypassCornerCard />,
+      },
       { title: 'Valve decoder', keywords: 'tube type designation heater base', card: <ValveDecoderCard /> },
       { title: 'Valve ratings', keywords: 'anode dissipation tube limits', card: <ValveRatingsCard /> },
-      { title: 'Resistor dissipation', keywords: 'watts power rating resistor heat', card: <ResistorDissipationCard /> },
+      {
+        title: 'Resistor dissipation',
+        keywords: 'watts power rating resistor heat',
+        card: <ResistorDissipationCard />,
+      },
     ],
   },
   {
     title: 'Mains and power-up',
     entries: [
-      { title: 'Live chassis check', keywords: 'AC/DC live chassis mains isolation transformer', card: <LiveChassisCard /> },
-      { title: 'Series heater string', keywords: 'heater chain dropper resistor ballast lamp', card: <HeaterChainCard /> },
+      {
+        title: 'Live chassis check',
+        keywords: 'AC/DC live chassis mains isolation transformer',
+        card: <LiveChassisCard />,
+      },
+      {
+        title: 'Series heater string',
+        keywords: 'heater chain dropper resistor ballast lamp',
+        card: <HeaterChainCard />,
+      },
       { title: 'Mains tap scaling', keywords: 'transformer tap mains voltage heater', card: <TapScalingCard /> },
       { title: 'Series lamp limit', keywords: 'lamp limiter bulb first power-up', card: <SeriesLampCard /> },
     ],
@@ -77,18 +105,34 @@ export const calculatorCatalogue: { title: string; entries: CatalogueEntry[] }[]
   {
     title: 'Readings',
     entries: [
-      { title: 'Reading against the manual', keywords: 'voltage chart tolerance verdict service data', card: <ReadingVerdictCard /> },
-      { title: 'Meter loading', keywords: 'ohms per volt meter sensitivity high impedance', card: <MeterLoadingCard /> },
+      {
+        title: 'Reading against the manual',
+        keywords: 'voltage chart tolerance verdict service data',
+        card: <ReadingVerdictCard />,
+      },
+      {
+        title: 'Meter loading',
+        keywords: 'ohms per volt meter sensitivity high impedance',
+        card: <MeterLoadingCard />,
+      },
       { title: 'Alignment aids', keywords: 'IF intermediate frequency alignment tuning', card: <AlignmentCard /> },
     ],
   },
 ];
 
 /** The anchor of a calculator on the page: "RC corner frequency" → "calc-rc-corner-frequency". */
-export const calculatorAnchor = (title: string) => `calc-${title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '')}`;
+export const calculatorAnchor = (title: string) =>
+  `calc-${title
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '')}`;
 
 /** Whether an entry answers a search: every word of it appears in the title or the keywords. */
 export function matchesSearch(entry: Pick<CatalogueEntry, 'title' | 'keywords'>, search: string): boolean {
   const haystack = `${entry.title} ${entry.keywords}`.toLowerCase();
-  return search.toLowerCase().split(/\s+/).filter(Boolean).every((word) => haystack.includes(word));
+  return search
+    .toLowerCase()
+    .split(/\s+/)
+    .filter(Boolean)
+    .every((word) => haystack.includes(word));
 }

@@ -33,7 +33,11 @@ export function CalculatorIndex({
           autoComplete="off"
         />
         <p id={countId} role="status" className="mt-1 text-sm text-ink-soft">
-          {search.trim() === '' ? '' : shown === 0 ? 'No calculator matches; try another word.' : `${shown} ${shown === 1 ? 'calculator matches' : 'calculators match'}.`}
+          {search.trim() === ''
+            ? ''
+            : shown === 0
+              ? 'No calculator matches; try another word.'
+              : `${shown} ${shown === 1 ? 'calculator matches' : 'calculators match'}.`}
         </p>
       </div>
       <div className="grid gap-x-6 gap-y-2 sm:grid-cols-2 lg:grid-cols-3">
@@ -43,7 +47,10 @@ export function CalculatorIndex({
             <ul className="text-sm">
               {group.entries.map((entry) => (
                 <li key={entry.title}>
-                  <a href={`#${calculatorAnchor(entry.title)}`} className="inline-block py-1 text-glow-strong underline-offset-2 hover:underline">
+                  <a
+                    href={`#${calculatorAnchor(entry.title)}`}
+                    className="inline-block py-1 text-glow-strong underline-offset-2 hover:underline"
+                  >
                     {entry.title}
                   </a>
                 </li>

@@ -29,7 +29,14 @@ export function CapacitorCodeCard() {
       }
       source="Three-digit capacitor code (EIA-style tables); tolerance letters per IEC 60062"
     >
-      <TextInput label="Code on the part" value={code} onChange={setCode} placeholder="e.g. 104, 473K" error={error} capitals />
+      <TextInput
+        label="Code on the part"
+        value={code}
+        onChange={setCode}
+        placeholder="e.g. 104, 473K"
+        error={error}
+        capitals
+      />
       <ResultPanel outcome={outcome} waiting="Type the code, for example 104." invalid={error !== undefined}>
         {(r) => (
           <>

@@ -26,11 +26,17 @@ export function CathodeCurrentCard() {
         <QuantityInput label="Measured cathode volts (V)" field={volts} placeholder="e.g. 8.2 V" />
         <QuantityInput label="Cathode resistor (Ω)" field={resistor} placeholder="e.g. 180" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Enter the cathode volts and the resistor." invalid={anyInvalid(volts, resistor)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Enter the cathode volts and the resistor."
+        invalid={anyInvalid(volts, resistor)}
+      >
         {(current) => (
           <>
             <MainResult label="Cathode current Ik" value={current} />
-            <ResultNote>For a pentode this is anode and screen current together; compare with Ia + Ig2 from the data.</ResultNote>
+            <ResultNote>
+              For a pentode this is anode and screen current together; compare with Ia + Ig2 from the data.
+            </ResultNote>
           </>
         )}
       </ResultPanel>

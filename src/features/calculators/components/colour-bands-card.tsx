@@ -43,7 +43,12 @@ export function ColourBandsCard() {
         <label htmlFor={countId} className="block font-semibold">
           Number of bands
         </label>
-        <select id={countId} value={count} onChange={(e) => setCount(Number(e.target.value) as BandCount)} className={inputClass}>
+        <select
+          id={countId}
+          value={count}
+          onChange={(e) => setCount(Number(e.target.value) as BandCount)}
+          className={inputClass}
+        >
           {BAND_COUNTS.map((n) => (
             <option key={n} value={n}>
               {n} bands

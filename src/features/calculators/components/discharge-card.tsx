@@ -15,13 +15,18 @@ export function DischargeCard() {
   const resistor = useQuantity('22k', 'Ω');
   const safe = useQuantity('30 V', 'V');
   // Stored energy needs only C and V, so a refused discharge target must not hide it.
-  const energy = calculate([capacitance.value, charged.value], ([farads, volts]) => formatQuantity(storedEnergy(farads, volts), 'J'));
-  const discharge = calculate([capacitance.value, charged.value, resistor.value, safe.value], ([farads, volts, ohms, target]) => ({
-    tau: formatQuantity(timeConstant(ohms, farads), 's'),
-    time: formatQuantity(dischargeTime(farads, ohms, volts, target), 's'),
-    from: formatQuantity(volts, 'V'),
-    to: formatQuantity(target, 'V'),
-  }));
+  const energy = calculate([capacitance.value, charged.value], ([farads, volts]) =>
+    formatQuantity(storedEnergy(farads, volts), 'J'),
+  );
+  const discharge = calculate(
+    [capacitance.value, charged.value, resistor.value, safe.value],
+    ([farads, volts, ohms, target]) => ({
+      tau: formatQuantity(timeConstant(ohms, farads), 's'),
+      time: formatQuantity(dischargeTime(farads, ohms, volts, target), 's'),
+      from: formatQuantity(volts, 'V'),
+      to: formatQuantity(target, 'V'),
+    }),
+  );
   return (
     <CalculatorCard
       title="Stored energy and discharge time"
@@ -47,7 +52,9 @@ export function DischargeCard() {
               <ResultNote>Correct the value marked above to see the discharge time.</ResultNote>
             ) : discharge.status === 'ready' ? (
               <ResultList>
-                <ResultLine label={`From ${discharge.value.from} to ${discharge.value.to}`}>{discharge.value.time}</ResultLine>
+                <ResultLine label={`From ${discharge.value.from} to ${discharge.value.to}`}>
+                  {discharge.value.time}
+                </ResultLine>
                 <ResultLine label="Time constant τ">{discharge.value.tau}</ResultLine>
               </ResultList>
             ) : discharge.status === 'refused' ? (
@@ -63,9 +70,9 @@ export function DischargeCard() {
       </ResultPanel>
       <SafetyNote>
         <p>
-          Discharge through a resistor of adequate rating on insulated leads, never by shorting the terminals. Then verify
-          with a meter that the voltage has gone before you touch anything. Never rely on bleeder resistors: they can fail
-          open, and a capacitor can recover some charge after it has been discharged.
+          Discharge through a resistor of adequate rating on insulated leads, never by shorting the terminals. Then
+          verify with a meter that the voltage has gone before you touch anything. Never rely on bleeder resistors: they
+          can fail open, and a capacitor can recover some charge after it has been discharged.
         </p>
       </SafetyNote>
     </CalculatorCard>

@@ -41,7 +41,11 @@ export function EsrCard() {
         placeholder="e.g. 1.1"
         hint="Measure with the set unplugged and its capacitors discharged."
       />
-      <ResultPanel outcome={outcome} waiting="Enter the capacitance and the rated voltage." invalid={anyInvalid(capacitance, rated)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Enter the capacitance and the rated voltage."
+        invalid={anyInvalid(capacitance, rated)}
+      >
         {(r) => {
           const verdict = reading.value === undefined ? undefined : esrVerdict(reading.value, r.ohms);
           return (

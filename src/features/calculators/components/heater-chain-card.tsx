@@ -19,7 +19,10 @@ export function HeaterChainCard() {
   const lampAmps = useQuantity('', 'A');
   const items = lineUpItems(lineUp);
   const outcome = calculate([items.length > 0 ? items : undefined, mains.value], ([valves, mainsVolts]) => {
-    const lamp = lampVolts.value !== undefined && lampAmps.value !== undefined ? { volts: lampVolts.value, amps: lampAmps.value } : undefined;
+    const lamp =
+      lampVolts.value !== undefined && lampAmps.value !== undefined
+        ? { volts: lampVolts.value, amps: lampAmps.value }
+        : undefined;
     const chain = heaterChain({ valves, mainsVolts, ...(lamp ? { dialLamp: lamp } : {}) });
     const rating = suggestedRating(chain.dropperWatts);
     return {
@@ -39,19 +42,31 @@ export function HeaterChainCard() {
       formula="ΣV_heater; R_dropper = (V_mains − ΣV_heater) ÷ I; P = (V_mains − ΣV_heater) · I; lamp shunt = V_lamp ÷ (I − I_lamp)"
       source="Ohm’s law; heater ratings from valve data handbooks (marked from memory where not checked)"
     >
-      <TextInput label="Valves in the string" value={lineUp} onChange={setLineUp} placeholder="e.g. UCH81 UF89 UABC80 UL84 UY85" hint="European or American names, separated by spaces." capitals />
+      <TextInput
+        label="Valves in the string"
+        value={lineUp}
+        onChange={setLineUp}
+        placeholder="e.g. UCH81 UF89 UABC80 UL84 UY85"
+        hint="European or American names, separated by spaces."
+        capitals
+      />
       <CardFields>
         <QuantityInput label="Mains (V)" field={mains} placeholder="e.g. 230 V" />
         <QuantityInput label="Dial lamp volts (V), optional" field={lampVolts} placeholder="e.g. 7 V" />
         <QuantityInput label="Dial lamp current (A), optional" field={lampAmps} placeholder="e.g. 50m" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Type the valves in the heater string and the mains." invalid={anyInvalid(mains, lampVolts, lampAmps)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Type the valves in the heater string and the mains."
+        invalid={anyInvalid(mains, lampVolts, lampAmps)}
+      >
         {(r) => (
           <>
             <MainResult label="Dropper" value={r.dropper} />
             {r.mixedCurrents && (
               <p className="text-sm font-semibold text-danger">
-                <span aria-hidden="true">✕ </span>Valves made for different heater currents are mixed: in one string some heaters run hot and others cold. This is an error.
+                <span aria-hidden="true">✕ </span>Valves made for different heater currents are mixed: in one string
+                some heaters run hot and others cold. This is an error.
               </p>
             )}
             <ResultList>
@@ -60,13 +75,20 @@ export function HeaterChainCard() {
               <ResultLine label="Dropper dissipates">{r.watts}</ResultLine>
               {r.shunt && <ResultLine label="Dial lamp shunt">{r.shunt}</ResultLine>}
             </ResultList>
-            {r.rating && <ResultNote>{`Choose a dropper rated at least twice its dissipation (a ${r.rating} part): common practice, not a published rule.`}</ResultNote>}
-            {r.unknown.length > 0 && <ResultNote>{`Not counted, check their heater data by hand: ${r.unknown.join(', ')}.`}</ResultNote>}
+            {r.rating && (
+              <ResultNote>{`Choose a dropper rated at least twice its dissipation (a ${r.rating} part): common practice, not a published rule.`}</ResultNote>
+            )}
+            {r.unknown.length > 0 && (
+              <ResultNote>{`Not counted, check their heater data by hand: ${r.unknown.join(', ')}.`}</ResultNote>
+            )}
           </>
         )}
       </ResultPanel>
       <SafetyNote>
-        <p>A series-heater set has one side of the mains on its chassis, and its dropper runs hot enough to burn. Work on it only through an isolation transformer.</p>
+        <p>
+          A series-heater set has one side of the mains on its chassis, and its dropper runs hot enough to burn. Work on
+          it only through an isolation transformer.
+        </p>
       </SafetyNote>
     </CalculatorCard>
   );

@@ -31,7 +31,11 @@ export function LeakageCard() {
         <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 16µ, 8 MF" />
         <QuantityInput label="Rated voltage (V)" field={rated} placeholder="e.g. 350 WVDC" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Enter the capacitance and the rated voltage." invalid={anyInvalid(capacitance, rated)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Enter the capacitance and the rated voltage."
+        invalid={anyInvalid(capacitance, rated)}
+      >
         {(r) => (
           <>
             <MainResult label="Leakage at most" value={r.limit} />
@@ -45,8 +49,8 @@ export function LeakageCard() {
       </ResultPanel>
       <SafetyNote>
         <p>
-          This test puts the full rated voltage on the capacitor: raise it slowly from a current-limited supply through a
-          series resistor, and discharge the capacitor through a resistor afterwards.
+          This test puts the full rated voltage on the capacitor: raise it slowly from a current-limited supply through
+          a series resistor, and discharge the capacitor through a resistor afterwards.
         </p>
       </SafetyNote>
     </CalculatorCard>

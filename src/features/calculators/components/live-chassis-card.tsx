@@ -40,10 +40,12 @@ export function LiveChassisCard() {
                   <li key={reason}>{reason}</li>
                 ))}
               </ul>
-              {r.unknown.length > 0 && <p className="text-sm">{`Not recognised, check their heater data by hand: ${r.unknown.join(', ')}.`}</p>}
+              {r.unknown.length > 0 && (
+                <p className="text-sm">{`Not recognised, check their heater data by hand: ${r.unknown.join(', ')}.`}</p>
+              )}
               <p className="text-sm">
-                Treat the chassis, and anything screwed to it, as connected to the mains. Work on it only through an isolation
-                transformer.
+                Treat the chassis, and anything screwed to it, as connected to the mains. Work on it only through an
+                isolation transformer.
               </p>
             </div>
           ) : (
@@ -51,7 +53,9 @@ export function LiveChassisCard() {
               <p className="font-semibold">
                 <span aria-hidden="true">○ </span>Nothing here points to series heaters.
               </p>
-              {r.unknown.length > 0 && <ResultNote>{`Not recognised, check their heater data by hand: ${r.unknown.join(', ')}.`}</ResultNote>}
+              {r.unknown.length > 0 && (
+                <ResultNote>{`Not recognised, check their heater data by hand: ${r.unknown.join(', ')}.`}</ResultNote>
+              )}
               <ResultNote>
                 That does not make it safe: treat any set with a two-wire mains lead as live until you have checked.
               </ResultNote>

@@ -27,7 +27,9 @@ describe('meter loading calculator', () => {
     await userEvent.setup().selectOptions(screen.getByLabelText('Your meter'), 'analogue');
     await typeInto('Your meter’s range (V)', '250');
     // by hand: 100 × 1.1 M / 1 M = 110 V open; 110 × 5 M / 5.1 M = 107.8 V
-    expect(screen.getByText("A 20 kΩ/V meter here reads about 8 % higher than the manual's 1 kΩ/V meter.")).toBeInTheDocument();
+    expect(
+      screen.getByText("A 20 kΩ/V meter here reads about 8 % higher than the manual's 1 kΩ/V meter."),
+    ).toBeInTheDocument();
   });
 
   it('when a reading is given, then it is judged against what your meter should read', async () => {

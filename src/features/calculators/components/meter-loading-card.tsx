@@ -25,14 +25,35 @@ export function MeterLoadingCard() {
   const yourRange = useQuantity('300 V', 'V');
   const reading = useQuantity('', 'V');
   const yourMeter: MeterSpec | undefined = digital
-    ? yourInput.value === undefined ? undefined : { inputOhms: yourInput.value }
-    : yourSensitivity.value === undefined || yourRange.value === undefined ? undefined : { ohmsPerVolt: yourSensitivity.value, rangeVolts: yourRange.value };
-  const outcome = calculate([chartVolts.value, source.value, chartSensitivity.value, chartRange.value, yourMeter], ([volts, ohms, perVolt, range, meter]) => {
-    const c = meterCorrection({ chartVolts: volts, sourceOhms: ohms, chartMeter: { ohmsPerVolt: perVolt, rangeVolts: range }, yourMeter: meter });
-    const verdict = reading.value === undefined ? undefined : readingVerdict({ expected: c.expectedOnYourMeter, reading: reading.value, tolerance: DEFAULT_TOLERANCE });
-    return { ...c, expected: formatQuantity(c.expectedOnYourMeter, 'V'), open: formatQuantity(c.openCircuitVolts, 'V'),
-      chartOhms: formatQuantity(c.chartMeterOhms, 'Ω'), yourOhms: formatQuantity(c.yourMeterOhms, 'Ω'), verdict: verdict?.verdict };
-  });
+    ? yourInput.value === undefined
+      ? undefined
+      : { inputOhms: yourInput.value }
+    : yourSensitivity.value === undefined || yourRange.value === undefined
+      ? undefined
+      : { ohmsPerVolt: yourSensitivity.value, rangeVolts: yourRange.value };
+  const outcome = calculate(
+    [chartVolts.value, source.value, chartSensitivity.value, chartRange.value, yourMeter],
+    ([volts, ohms, perVolt, range, meter]) => {
+      const c = meterCorrection({
+        chartVolts: volts,
+        sourceOhms: ohms,
+        chartMeter: { ohmsPerVolt: perVolt, rangeVolts: range },
+        yourMeter: meter,
+      });
+      const verdict =
+        reading.value === undefined
+          ? undefined
+          : readingVerdict({ expected: c.expectedOnYourMeter, reading: reading.value, tolerance: DEFAULT_TOLERANCE });
+      return {
+        ...c,
+        expected: formatQuantity(c.expectedOnYourMeter, 'V'),
+        open: formatQuantity(c.openCircuitVolts, 'V'),
+        chartOhms: formatQuantity(c.chartMeterOhms, 'Ω'),
+        yourOhms: formatQuantity(c.yourMeterOhms, 'Ω'),
+        verdict: verdict?.verdict,
+      };
+    },
+  );
   return (
     <CalculatorCard
       title="Meter loading"
@@ -47,8 +68,15 @@ export function MeterLoadingCard() {
         <QuantityInput label="Chart’s meter range (V)" field={chartRange} placeholder="e.g. 300 V" />
       </CardFields>
       <div className="space-y-1">
-        <label htmlFor={kindId} className="block font-semibold">Your meter</label>
-        <select id={kindId} value={digital ? 'digital' : 'analogue'} onChange={(e) => setDigital(e.target.value === 'digital')} className={inputClass}>
+        <label htmlFor={kindId} className="block font-semibold">
+          Your meter
+        </label>
+        <select
+          id={kindId}
+          value={digital ? 'digital' : 'analogue'}
+          onChange={(e) => setDigital(e.target.value === 'digital')}
+          className={inputClass}
+        >
           <option value="digital">Digital (fixed input resistance)</option>
           <option value="analogue">Analogue (ohms per volt)</option>
         </select>
@@ -64,7 +92,20 @@ export function MeterLoadingCard() {
         )}
         <QuantityInput label="Your reading (V), optional" field={reading} placeholder="e.g. 236 V" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Fill in the chart’s value and meter, the source resistance and your meter." invalid={anyInvalid(chartVolts, source, chartSensitivity, chartRange, yourInput, yourSensitivity, yourRange, reading)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Fill in the chart’s value and meter, the source resistance and your meter."
+        invalid={anyInvalid(
+          chartVolts,
+          source,
+          chartSensitivity,
+          chartRange,
+          yourInput,
+          yourSensitivity,
+          yourRange,
+          reading,
+        )}
+      >
         {(r) => (
           <>
             <MainResult label="Your meter should read" value={r.expected} />
@@ -75,12 +116,19 @@ export function MeterLoadingCard() {
               <ResultLine label="Chart’s meter">{r.chartOhms}</ResultLine>
               <ResultLine label="Your meter">{r.yourOhms}</ResultLine>
             </ResultList>
-            {r.verdict && <ResultNote>Your reading is judged against what your meter should read, ±20 % (common practice for service charts).</ResultNote>}
+            {r.verdict && (
+              <ResultNote>
+                Your reading is judged against what your meter should read, ±20 % (common practice for service charts).
+              </ResultNote>
+            )}
           </>
         )}
       </ResultPanel>
       <SafetyNote>
-        <p>Clip the meter on with the set off and its capacitors discharged, then power up; keep one hand away from the chassis.</p>
+        <p>
+          Clip the meter on with the set off and its capacitors discharged, then power up; keep one hand away from the
+          chassis.
+        </p>
       </SafetyNote>
     </CalculatorCard>
   );

@@ -38,7 +38,12 @@ export function PreferredValueCard() {
           <label htmlFor={seriesId} className="block font-semibold">
             Series
           </label>
-          <select id={seriesId} value={series} onChange={(e) => setSeries(e.target.value as ESeries)} className={inputClass}>
+          <select
+            id={seriesId}
+            value={series}
+            onChange={(e) => setSeries(e.target.value as ESeries)}
+            className={inputClass}
+          >
             {E_SERIES.map((s) => (
               <option key={s} value={s}>
                 {s}

@@ -25,7 +25,9 @@ export function QuantityInput({
         {(a) => (
           <input
             {...a}
-            aria-describedby={[a['aria-describedby'], showReading ? readsId : undefined].filter(Boolean).join(' ') || undefined}
+            aria-describedby={
+              [a['aria-describedby'], showReading ? readsId : undefined].filter(Boolean).join(' ') || undefined
+            }
             type="text"
             value={field.text}
             onChange={(event) => field.setText(event.target.value)}

@@ -47,6 +47,8 @@ describe('RC corner calculator', () => {
     expect(input).toHaveAccessibleDescription('A resistance cannot be negative here: enter it without the minus sign.');
     expect(screen.getByText('Correct the value marked above to see the result.')).toBeInTheDocument();
     const capacitance = await typeInto('Capacitance (F)', '-47n');
-    expect(capacitance).toHaveAccessibleDescription('A capacitance cannot be negative here: enter it without the minus sign.');
+    expect(capacitance).toHaveAccessibleDescription(
+      'A capacitance cannot be negative here: enter it without the minus sign.',
+    );
   });
 });

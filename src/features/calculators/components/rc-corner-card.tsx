@@ -26,7 +26,11 @@ export function RcCornerCard() {
         <QuantityInput label="Resistance (Ω)" field={resistance} placeholder="e.g. 220k, 68k" />
         <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 10n, 6n8" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Enter the resistance and the capacitance." invalid={anyInvalid(resistance, capacitance)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Enter the resistance and the capacitance."
+        invalid={anyInvalid(resistance, capacitance)}
+      >
         {(r) => (
           <>
             <MainResult label="Corner frequency" value={r.corner} />

@@ -74,8 +74,8 @@ export function ReadingVerdictCard() {
               <ResultNote>Marginal: read again and allow for the meter before condemning the part.</ResultNote>
             )}
             <ResultNote>
-              Check which meter the voltage chart was made with: a modern high-resistance meter can read anodes and screens
-              higher than the chart (see Meter loading).
+              Check which meter the voltage chart was made with: a modern high-resistance meter can read anodes and
+              screens higher than the chart (see Meter loading).
             </ResultNote>
           </>
         )}

@@ -19,11 +19,17 @@ export function ResistorDissipationCard() {
   const known = [ohms.value, volts.value, amps.value].filter((v) => v !== undefined).length >= 2 ? true : undefined;
   const outcome = calculate([known], () => {
     const check = resistorDissipation({
-      ...(ohms.value === undefined ? {} : { ohms: ohms.value }), ...(volts.value === undefined ? {} : { volts: volts.value }),
-      ...(amps.value === undefined ? {} : { amps: amps.value }), ...(rating.value === undefined ? {} : { ratingWatts: rating.value }),
+      ...(ohms.value === undefined ? {} : { ohms: ohms.value }),
+      ...(volts.value === undefined ? {} : { volts: volts.value }),
+      ...(amps.value === undefined ? {} : { amps: amps.value }),
+      ...(rating.value === undefined ? {} : { ratingWatts: rating.value }),
     });
     const suggested = suggestedRating(check.value);
-    return { ...check, watts: formatQuantity(check.value, 'W'), suggested: suggested === undefined ? undefined : formatQuantity(suggested, 'W') };
+    return {
+      ...check,
+      watts: formatQuantity(check.value, 'W'),
+      suggested: suggested === undefined ? undefined : formatQuantity(suggested, 'W'),
+    };
   });
   return (
     <CalculatorCard
@@ -38,7 +44,11 @@ export function ResistorDissipationCard() {
         <QuantityInput label="Current through it (A)" field={amps} placeholder="e.g. 3.6m" />
         <QuantityInput label="Its rating (W), optional" field={rating} placeholder="e.g. 0.5 W" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Fill in any two of resistance, volts and current." invalid={anyInvalid(ohms, volts, amps, rating)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Fill in any two of resistance, volts and current."
+        invalid={anyInvalid(ohms, volts, amps, rating)}
+      >
         {(r) => (
           <>
             <MainResult label="Dissipation" value={r.watts} />
@@ -48,7 +58,9 @@ export function ResistorDissipationCard() {
                 <ResultLine label="Of its rating">{formatPercent(r.fraction)}</ResultLine>
               </ResultList>
             )}
-            {r.suggested && <ResultNote>{`A replacement rated at least twice that (a ${r.suggested} part) runs cool: common practice, not a published rule.`}</ResultNote>}
+            {r.suggested && (
+              <ResultNote>{`A replacement rated at least twice that (a ${r.suggested} part) runs cool: common practice, not a published rule.`}</ResultNote>
+            )}
           </>
         )}
       </ResultPanel>

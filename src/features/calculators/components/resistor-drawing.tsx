@@ -12,7 +12,9 @@ export function ResistorDrawing({ colours, tolerance }: { colours: readonly stri
           <span key={index} className="w-2.5 border-x border-ink/40" style={{ backgroundColor: swatchOf(colour) }} />
         ))}
         <span className="flex-1" />
-        {last !== undefined && <span className="w-2.5 border-x border-ink/40" style={{ backgroundColor: swatchOf(last) }} />}
+        {last !== undefined && (
+          <span className="w-2.5 border-x border-ink/40" style={{ backgroundColor: swatchOf(last) }} />
+        )}
       </span>
       <span className="h-0.5 w-6 bg-ink-soft" />
     </div>

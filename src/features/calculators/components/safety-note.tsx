@@ -12,10 +12,10 @@ export function SafetyNote({ children }: { children?: ReactNode }) {
       </p>
       {children}
       <p>
-        Valve sets carry lethal voltages (HT 200–300 V DC; AC/DC sets may have a live chassis). Discharge filter capacitors
-        and verify with a meter; work through an isolation transformer; keep one hand away; use mains-rated X/Y safety
-        capacitors where the mains connects. Results are aids, not certification: follow local electrical codes and
-        licensed practice.
+        Valve sets carry lethal voltages (HT 200–300 V DC; AC/DC sets may have a live chassis). Discharge filter
+        capacitors and verify with a meter; work through an isolation transformer; keep one hand away; use mains-rated
+        X/Y safety capacitors where the mains connects. Results are aids, not certification: follow local electrical
+        codes and licensed practice.
       </p>
     </div>
   );

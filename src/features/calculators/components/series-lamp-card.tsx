@@ -34,7 +34,11 @@ export function SeriesLampCard() {
         <QuantityInput label="Lamp voltage (V)" field={lampVolts} placeholder="e.g. 230 V" />
         <QuantityInput label="Mains (V)" field={mains} placeholder="e.g. 230 V" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Fill in the lamp and the mains." invalid={anyInvalid(watts, lampVolts, mains)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Fill in the lamp and the mains."
+        invalid={anyInvalid(watts, lampVolts, mains)}
+      >
         {(r) => (
           <>
             <MainResult label="Current at most" value={r.amps} />
@@ -48,8 +52,8 @@ export function SeriesLampCard() {
       </ResultPanel>
       <SafetyNote>
         <p>
-          A brief flash that settles to a dim glow is usual; a lamp that stays fully bright points to a fault, so switch off
-          (common practice). The lamp limits current; it does not isolate: an AC/DC chassis is still live.
+          A brief flash that settles to a dim glow is usual; a lamp that stays fully bright points to a fault, so switch
+          off (common practice). The lamp limits current; it does not isolate: an AC/DC chassis is still live.
         </p>
       </SafetyNote>
     </CalculatorCard>

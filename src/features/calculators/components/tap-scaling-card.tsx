@@ -30,14 +30,20 @@ export function TapScalingCard() {
         <QuantityInput label="Primary tap (V)" field={tap} placeholder="e.g. 210 V" />
         <QuantityInput label="Mains on the bench (V)" field={mains} placeholder="e.g. 235 V" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Fill in the winding, the tap and the mains." invalid={anyInvalid(rated, tap, mains)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Fill in the winding, the tap and the mains."
+        invalid={anyInvalid(rated, tap, mains)}
+      >
         {(r) => (
           <>
             <MainResult label="The winding gives about" value={r.volts} />
             <ResultList>
               <ResultLine label="Against its rating">{r.off}</ResultLine>
             </ResultList>
-            <ResultNote>Compare with the heater or HT rating in the valve data before the set runs for long.</ResultNote>
+            <ResultNote>
+              Compare with the heater or HT rating in the valve data before the set runs for long.
+            </ResultNote>
           </>
         )}
       </ResultPanel>

@@ -26,7 +26,11 @@ export function TimeConstantCard() {
         <QuantityInput label="Resistance (Ω)" field={resistance} placeholder="e.g. 2M2" />
         <QuantityInput label="Capacitance (F)" field={capacitance} placeholder="e.g. 47n" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Enter the resistance and the capacitance." invalid={anyInvalid(resistance, capacitance)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Enter the resistance and the capacitance."
+        invalid={anyInvalid(resistance, capacitance)}
+      >
         {(r) => (
           <>
             <MainResult label="Time constant τ" value={r.tau} />

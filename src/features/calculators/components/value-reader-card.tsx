@@ -25,7 +25,11 @@ export function ValueReaderCard() {
   const kindId = useId();
   const [kind, setKind] = useState<ExpectedUnit | ''>('');
   const field = useQuantity('330R', kind === '' ? undefined : kind);
-  const outcome = calculate([field.value, field.unit, field.display], ([value, unit, display]) => ({ value, unit, display }));
+  const outcome = calculate([field.value, field.unit, field.display], ([value, unit, display]) => ({
+    value,
+    unit,
+    display,
+  }));
   return (
     <CalculatorCard
       title="Value reader"
@@ -39,7 +43,12 @@ export function ValueReaderCard() {
           <label htmlFor={kindId} className="block font-semibold">
             Read as
           </label>
-          <select id={kindId} value={kind} onChange={(e) => setKind(e.target.value as ExpectedUnit | '')} className={inputClass}>
+          <select
+            id={kindId}
+            value={kind}
+            onChange={(e) => setKind(e.target.value as ExpectedUnit | '')}
+            className={inputClass}
+          >
             {KINDS.map((k) => (
               <option key={k.unit} value={k.unit}>
                 {k.label}
@@ -48,7 +57,11 @@ export function ValueReaderCard() {
           </select>
         </div>
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Type a value, for example 330R or 0.02 µF." invalid={field.error !== undefined}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Type a value, for example 330R or 0.02 µF."
+        invalid={field.error !== undefined}
+      >
         {(r) => (
           <>
             <MainResult label="Value" value={r.display} />

@@ -36,32 +36,59 @@ export function ValveDecoderCard() {
       formula="European: heater letter + system letters + base digits, e.g. U·L·84 = 100 mA series heater, output pentode, noval. American: heater volts + letters + element count + suffix, e.g. 6·V·6·GT"
       source="European valve type code (heater letter, system letters, base digits) and American type numbers, per numbering-systems articles and valve data handbooks; typical data from makers’ published figures where marked"
     >
-      <TextInput label="Valve type" value={name} onChange={setName} placeholder="e.g. UL84, ECC82, E88CC, 6V6GT" error={error} capitals />
-      <ResultPanel outcome={outcome} waiting="Type a valve name, for example UL84 or 6V6GT." invalid={error !== undefined}>
+      <TextInput
+        label="Valve type"
+        value={name}
+        onChange={setName}
+        placeholder="e.g. UL84, ECC82, E88CC, 6V6GT"
+        error={error}
+        capitals
+      />
+      <ResultPanel
+        outcome={outcome}
+        waiting="Type a valve name, for example UL84 or 6V6GT."
+        invalid={error !== undefined}
+      >
         {({ valve, live }) => (
           <>
             <MainResult label={valve.data?.description ?? 'Not in Gridleak’s table'} value={valve.designation} />
             {valve.specialQuality && <ResultNote>{`Special-quality form of the ${valve.standardForm}.`}</ResultNote>}
             <ResultList>
-              <ResultLine label={valve.scheme === 'american' ? `Heater (leading ${valve.heater.letter})` : valve.heater.letter ? `Heater (${valve.heater.letter})` : 'Heater'}>
+              <ResultLine
+                label={
+                  valve.scheme === 'american'
+                    ? `Heater (leading ${valve.heater.letter})`
+                    : valve.heater.letter
+                      ? `Heater (${valve.heater.letter})`
+                      : 'Heater'
+                }
+              >
                 {heaterText(valve.heater)}
               </ResultLine>
               {valve.systems.length > 0 && <ResultLine label="Electrodes">{valve.systems.join('; ')}</ResultLine>}
-              {valve.suffixWords && valve.suffixWords.length > 0 && <ResultLine label="Suffix">{valve.suffixWords.join('; ')}</ResultLine>}
+              {valve.suffixWords && valve.suffixWords.length > 0 && (
+                <ResultLine label="Suffix">{valve.suffixWords.join('; ')}</ResultLine>
+              )}
               <ResultLine label="Base">{valve.base}</ResultLine>
-              <ResultLine label="Equivalents">{valve.equivalents.length > 0 ? valve.equivalents.join(', ') : 'none listed'}</ResultLine>
+              <ResultLine label="Equivalents">
+                {valve.equivalents.length > 0 ? valve.equivalents.join(', ') : 'none listed'}
+              </ResultLine>
             </ResultList>
-            {valve.heater.note && <ResultNote>{`${valve.scheme === 'european' ? `Heater letter ${valve.heater.letter}: ` : 'Heater: '}${valve.heater.note}.`}</ResultNote>}
+            {valve.heater.note && (
+              <ResultNote>{`${valve.scheme === 'european' ? `Heater letter ${valve.heater.letter}: ` : 'Heater: '}${valve.heater.note}.`}</ResultNote>
+            )}
             {live && (
               <p className="text-sm font-semibold text-danger">
-                <span aria-hidden="true">⚠ </span>A series-heater valve: sets built around it are usually AC/DC, with a live
-                chassis.
+                <span aria-hidden="true">⚠ </span>A series-heater valve: sets built around it are usually AC/DC, with a
+                live chassis.
               </p>
             )}
             {valve.data ? (
               <ValveTypicalData data={valve.data} />
             ) : (
-              <ResultNote>The name decodes, but this type is not in Gridleak’s table, so there is no typical data.</ResultNote>
+              <ResultNote>
+                The name decodes, but this type is not in Gridleak’s table, so there is no typical data.
+              </ResultNote>
             )}
           </>
         )}

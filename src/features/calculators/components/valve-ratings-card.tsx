@@ -18,8 +18,12 @@ function CheckLine({ label, check, unit }: { label: string; check: RatingCheck; 
     <div className="space-y-1">
       <ResultList>
         <ResultLine label={label}>{formatQuantity(check.value, unit)}</ResultLine>
-        <ResultLine label="Maximum">{check.rating === undefined ? 'not in Gridleak’s table' : formatQuantity(check.rating, unit)}</ResultLine>
-        {check.fraction !== undefined && <ResultLine label="Of the maximum">{formatPercent(check.fraction)}</ResultLine>}
+        <ResultLine label="Maximum">
+          {check.rating === undefined ? 'not in Gridleak’s table' : formatQuantity(check.rating, unit)}
+        </ResultLine>
+        {check.fraction !== undefined && (
+          <ResultLine label="Of the maximum">{formatPercent(check.fraction)}</ResultLine>
+        )}
       </ResultList>
       {check.verdict !== 'unknown' && <VerdictMark verdict={check.verdict} />}
     </div>
@@ -34,7 +38,10 @@ export function ValveRatingsCard() {
   const dcAmps = useQuantity('', 'A');
   const name = valve.trim() === '' ? undefined : valve;
   const outcome = calculate([name], ([type]) => ({
-    anode: anodeVolts.value !== undefined && anodeAmps.value !== undefined ? anodeDissipation({ valve: type, anodeVolts: anodeVolts.value, anodeAmps: anodeAmps.value }) : undefined,
+    anode:
+      anodeVolts.value !== undefined && anodeAmps.value !== undefined
+        ? anodeDissipation({ valve: type, anodeVolts: anodeVolts.value, anodeAmps: anodeAmps.value })
+        : undefined,
     rectifier: dcAmps.value !== undefined ? rectifierLoad({ valve: type, dcAmps: dcAmps.value }) : undefined,
   }));
   return (
@@ -50,14 +57,24 @@ export function ValveRatingsCard() {
         <QuantityInput label="Anode current (A)" field={anodeAmps} placeholder="e.g. 38m" />
         <QuantityInput label="Rectifier DC current (A), optional" field={dcAmps} placeholder="e.g. 75m" />
       </CardFields>
-      <ResultPanel outcome={outcome} waiting="Type the valve, then its anode volts and current or its DC load." invalid={anyInvalid(anodeVolts, anodeAmps, dcAmps)}>
+      <ResultPanel
+        outcome={outcome}
+        waiting="Type the valve, then its anode volts and current or its DC load."
+        invalid={anyInvalid(anodeVolts, anodeAmps, dcAmps)}
+      >
         {(r) => (
           <>
             {r.anode && <CheckLine label="Anode dissipation" check={r.anode} unit="W" />}
             {r.rectifier && <CheckLine label="Rectifier load" check={r.rectifier} unit="A" />}
-            {!r.anode && !r.rectifier && <ResultNote>Enter the anode volts and current, or the rectifier’s DC current.</ResultNote>}
-            {(r.anode?.source ?? r.rectifier?.source) && <ResultNote>{`Maximum from: ${r.anode?.source ?? r.rectifier?.source ?? ''}.`}</ResultNote>}
-            <ResultNote>Measure the anode volts from anode to cathode, not to chassis, when the valve has cathode bias.</ResultNote>
+            {!r.anode && !r.rectifier && (
+              <ResultNote>Enter the anode volts and current, or the rectifier’s DC current.</ResultNote>
+            )}
+            {(r.anode?.source ?? r.rectifier?.source) && (
+              <ResultNote>{`Maximum from: ${r.anode?.source ?? r.rectifier?.source ?? ''}.`}</ResultNote>
+            )}
+            <ResultNote>
+              Measure the anode volts from anode to cathode, not to chassis, when the valve has cathode bias.
+            </ResultNote>
           </>
         )}
       </ResultPanel>

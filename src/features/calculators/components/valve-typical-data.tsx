@@ -55,8 +55,8 @@ export function ValveTypicalData({ data }: { data: ValveData }) {
         </ResultList>
       )}
       <ResultNote>
-        <span className="font-semibold text-ink">{CONFIDENCE[data.confidence]}.</span> Source: {data.source}. Makers’ typical
-        values; real valves spread by up to about ±30 %.
+        <span className="font-semibold text-ink">{CONFIDENCE[data.confidence]}.</span> Source: {data.source}. Makers’
+        typical values; real valves spread by up to about ±30 %.
       </ResultNote>
     </div>
   );

@@ -10,7 +10,9 @@ const MARKS: Record<Verdict, { glyph: string; word: string; tone: string }> = {
 export function VerdictMark({ verdict }: { verdict: Verdict }) {
   const mark = MARKS[verdict];
   return (
-    <span className={`inline-flex items-center gap-1.5 rounded-full border-2 bg-panel px-3 py-0.5 text-lg font-bold ${mark.tone}`}>
+    <span
+      className={`inline-flex items-center gap-1.5 rounded-full border-2 bg-panel px-3 py-0.5 text-lg font-bold ${mark.tone}`}
+    >
       <span aria-hidden="true">{mark.glyph}</span>
       {mark.word}
     </span>

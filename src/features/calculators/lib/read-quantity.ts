@@ -22,7 +22,15 @@ export function messageOf(error: unknown): string {
 }
 
 const quantityNames: Record<QuantityUnit, string> = {
-  'Ω': 'A resistance', F: 'A capacitance', V: 'This voltage', A: 'This current', Hz: 'A frequency', W: 'A power', s: 'A time', J: 'An energy', '': 'This value',
+  Ω: 'A resistance',
+  F: 'A capacitance',
+  V: 'This voltage',
+  A: 'This current',
+  Hz: 'A frequency',
+  W: 'A power',
+  s: 'A time',
+  J: 'An energy',
+  '': 'This value',
 };
 
 /**
@@ -35,8 +43,16 @@ export function readQuantity(text: string, expectUnit?: ExpectedUnit, { allowNeg
   try {
     const quantity = parseQuantity(text, expectUnit === undefined ? {} : { expectUnit });
     if (quantity.value < 0 && !allowNegative)
-      return { text, error: `${quantityNames[quantity.unit] ?? 'This value'} cannot be negative here: enter it without the minus sign.` };
-    return { text, value: quantity.value, unit: quantity.unit, display: formatQuantity(quantity.value, quantity.unit, 6) };
+      return {
+        text,
+        error: `${quantityNames[quantity.unit] ?? 'This value'} cannot be negative here: enter it without the minus sign.`,
+      };
+    return {
+      text,
+      value: quantity.value,
+      unit: quantity.unit,
+      display: formatQuantity(quantity.value, quantity.unit, 6),
+    };
   } catch (error) {
     return { text, error: messageOf(error) };
   }

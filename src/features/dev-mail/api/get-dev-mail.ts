@@ -5,6 +5,7 @@ import { apiGet } from '../../../lib/api-client';
 
 export const getDevMail = () => apiGet('/dev/mail', z.array(capturedMailSchema));
 
-export const devMailQueryOptions = () => queryOptions({ queryKey: ['dev', 'mail'], queryFn: getDevMail, refetchInterval: 5000 });
+export const devMailQueryOptions = () =>
+  queryOptions({ queryKey: ['dev', 'mail'], queryFn: getDevMail, refetchInterval: 5000 });
 
 export const useDevMail = () => useQuery(devMailQueryOptions());

@@ -11,7 +11,7 @@ export function MailList({ mails }: { mails: CapturedMail[] }) {
             {formatDateTime(m.date)} · to <span className="font-mono">{m.to}</span>
           </p>
           <p className="mt-1 font-bold">{m.subject}</p>
-          <pre className="mt-2 whitespace-pre-wrap break-words font-sans text-sm">{linkify(m.text)}</pre>
+          <pre className="mt-2 font-sans text-sm break-words whitespace-pre-wrap">{linkify(m.text)}</pre>
         </li>
       ))}
     </ul>

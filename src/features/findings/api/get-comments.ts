@@ -6,6 +6,10 @@ import { findingKeys } from '../../../lib/queries/finding-keys';
 export const getComments = (findingId: number) => apiAllPages(`/findings/${findingId}/comments`, commentSchema);
 
 export const commentsQueryOptions = (findingId: number) =>
-  queryOptions({ queryKey: findingKeys.comments(findingId), queryFn: () => getComments(findingId), refetchInterval: 20_000 });
+  queryOptions({
+    queryKey: findingKeys.comments(findingId),
+    queryFn: () => getComments(findingId),
+    refetchInterval: 20_000,
+  });
 
 export const useComments = (findingId: number) => useQuery(commentsQueryOptions(findingId));

@@ -6,7 +6,8 @@ import { findingKeys } from '../../../lib/queries/finding-keys';
 
 /** The newest page only: the menu shows the latest items. */
 export const getNotifications = () => apiGet('/notifications?limit=50', z.array(notificationSchema));
-export const markNotificationsRead = (ids?: number[]) => api<void>('/notifications/read', { method: 'POST', json: { ids } });
+export const markNotificationsRead = (ids?: number[]) =>
+  api<void>('/notifications/read', { method: 'POST', json: { ids } });
 
 export const notificationsQueryOptions = () =>
   queryOptions({ queryKey: findingKeys.notifications, queryFn: getNotifications, refetchInterval: 30_000 });
@@ -15,5 +16,8 @@ export const useNotifications = () => useQuery(notificationsQueryOptions());
 
 export function useMarkNotificationsRead() {
   const client = useQueryClient();
-  return useMutation({ mutationFn: markNotificationsRead, onSuccess: () => client.invalidateQueries({ queryKey: findingKeys.notifications }) });
+  return useMutation({
+    mutationFn: markNotificationsRead,
+    onSuccess: () => client.invalidateQueries({ queryKey: findingKeys.notifications }),
+  });
 }

@@ -3,7 +3,8 @@ import type { Finding, FindingPatch } from '../../../../shared/schemas/findings'
 import { api } from '../../../lib/api-client';
 import { findingKeys } from '../../../lib/queries/finding-keys';
 
-export const updateFinding = (id: number, patch: FindingPatch) => api<Finding>(`/findings/${id}`, { method: 'PATCH', json: patch });
+export const updateFinding = (id: number, patch: FindingPatch) =>
+  api<Finding>(`/findings/${id}`, { method: 'PATCH', json: patch });
 
 /**
  * Moving a pin or changing a status shows at once (optimistic), and rolls back if the server refuses;
@@ -17,7 +18,9 @@ export function useUpdateFinding(photoId: number, restorationId: number) {
     onMutate: async ({ id, patch }) => {
       await client.cancelQueries({ queryKey: key });
       const previous = client.getQueryData<Finding[]>(key);
-      client.setQueryData<Finding[]>(key, (list) => list?.map((f) => (f.id === id ? ({ ...f, ...patch } as Finding) : f)));
+      client.setQueryData<Finding[]>(key, (list) =>
+        list?.map((f) => (f.id === id ? ({ ...f, ...patch } as Finding) : f)),
+      );
       return { previous };
     },
     onError: (_err, _vars, context) => {

@@ -7,12 +7,14 @@ import { findingKeys } from '../../../lib/queries/finding-keys';
 type CommentInput = { body: string; internal: boolean };
 
 /** 128 random bits as hex; works on plain-HTTP addresses too, where crypto.randomUUID is missing. */
-export const newIdempotencyKey = () => Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, '0')).join('');
+export const newIdempotencyKey = () =>
+  Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, '0')).join('');
 
 /** Posts a comment; the same `key` on a retry makes the server store it once and answer as the first time. */
 export const createComment = (findingId: number, input: CommentInput, key: string) =>
   api<Comment>(`/findings/${findingId}/comments`, { method: 'POST', json: input, headers: { 'Idempotency-Key': key } });
-export const editComment = (id: number, body: string) => api<Comment>(`/comments/${id}`, { method: 'PATCH', json: { body } });
+export const editComment = (id: number, body: string) =>
+  api<Comment>(`/comments/${id}`, { method: 'PATCH', json: { body } });
 export const deleteComment = (id: number) => api<void>(`/comments/${id}`, { method: 'DELETE' });
 
 /**
@@ -37,7 +39,10 @@ export function useThreadMutations(findingId: number) {
         return refresh();
       },
     }),
-    edit: useMutation({ mutationFn: ({ id, body }: { id: number; body: string }) => editComment(id, body), onSuccess: refresh }),
+    edit: useMutation({
+      mutationFn: ({ id, body }: { id: number; body: string }) => editComment(id, body),
+      onSuccess: refresh,
+    }),
     remove: useMutation({ mutationFn: deleteComment, onSuccess: refresh }),
   };
 }

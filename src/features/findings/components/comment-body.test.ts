@@ -47,6 +47,9 @@ describe('mention helpers', () => {
 
   it('when a member is picked, then the typed @query becomes the full name and a space', () => {
     expect(insertMention('ask @te', 4, 7, 'Teodor Brask')).toEqual({ text: 'ask @Teodor Brask ', caret: 18 });
-    expect(insertMention('ask @te please', 4, 7, 'Teodor Brask')).toEqual({ text: 'ask @Teodor Brask please', caret: 17 });
+    expect(insertMention('ask @te please', 4, 7, 'Teodor Brask')).toEqual({
+      text: 'ask @Teodor Brask please',
+      caret: 17,
+    });
   });
 });

@@ -1,5 +1,6 @@
 /** A piece of a comment's text as it is drawn: plain words, a link, or an @mention of a member. */
-export type CommentToken = { kind: 'text'; text: string } | { kind: 'link'; text: string; href: string } | { kind: 'mention'; text: string };
+export type CommentToken =
+  { kind: 'text'; text: string } | { kind: 'link'; text: string; href: string } | { kind: 'mention'; text: string };
 
 const urlPattern = /\bhttps?:\/\/[^\s<>"]+/gi;
 /** Punctuation that usually ends the sentence around a link rather than the link itself. */
@@ -72,7 +73,12 @@ export function matchMembers<M extends { name: string }>(members: readonly M[], 
 }
 
 /** Replaces the "@query" typed from `start` to `caret` with the member's full name, and a space unless one follows. */
-export function insertMention(text: string, start: number, caret: number, name: string): { text: string; caret: number } {
+export function insertMention(
+  text: string,
+  start: number,
+  caret: number,
+  name: string,
+): { text: string; caret: number } {
   const inserted = /^\s/.test(text.slice(caret)) ? `@${name}` : `@${name} `;
   return { text: text.slice(0, start) + inserted + text.slice(caret), caret: start + inserted.length };
 }

@@ -45,10 +45,14 @@ export function CommentCompose({
 
   const message = error ?? serverError;
   return (
-    <form noValidate className="space-y-2" onSubmit={(e) => {
+    <form
+      noValidate
+      className="space-y-2"
+      onSubmit={(e) => {
         e.preventDefault();
         send();
-      }}>
+      }}
+    >
       <label htmlFor={`${id}-body`} className="block font-semibold">
         Add a comment
       </label>
@@ -78,17 +82,37 @@ export function CommentCompose({
           }}
           className={inputClass}
         />
-        {picker.open && <MentionList id={picker.listId} options={picker.options} active={picker.active} optionId={picker.optionId} onPick={picker.pick} />}
+        {picker.open && (
+          <MentionList
+            id={picker.listId}
+            options={picker.options}
+            active={picker.active}
+            optionId={picker.optionId}
+            onPick={picker.pick}
+          />
+        )}
       </div>
       {canChoose && (
         <fieldset className="space-y-1">
           <legend className="font-semibold">Who sees it</legend>
           <label className="flex min-h-11 items-center gap-2">
-            <input type="radio" name={`${id}-visibility`} checked={internal} onChange={() => setInternal(true)} className="h-5 w-5 accent-glow" />
+            <input
+              type="radio"
+              name={`${id}-visibility`}
+              checked={internal}
+              onChange={() => setInternal(true)}
+              className="h-5 w-5 accent-glow"
+            />
             <span aria-hidden="true">◆</span> Internal (technicians and mentors only)
           </label>
           <label className="flex min-h-11 items-center gap-2">
-            <input type="radio" name={`${id}-visibility`} checked={!internal} onChange={() => setInternal(false)} className="h-5 w-5 accent-glow" />
+            <input
+              type="radio"
+              name={`${id}-visibility`}
+              checked={!internal}
+              onChange={() => setInternal(false)}
+              className="h-5 w-5 accent-glow"
+            />
             <span aria-hidden="true">◇</span> Shared with the owner
           </label>
           {!internal && !findingShared && (

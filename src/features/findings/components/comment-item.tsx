@@ -9,7 +9,17 @@ import { fullTime, relativeTime, type FindingMember } from './finding-format';
 
 const smallButton = 'min-h-11 rounded-lg px-3 text-sm hover:bg-sunken';
 
-function EditForm({ initial, busy, onSave, onCancel }: { initial: string; busy: boolean; onSave: (body: string) => void; onCancel: () => void }) {
+function EditForm({
+  initial,
+  busy,
+  onSave,
+  onCancel,
+}: {
+  initial: string;
+  busy: boolean;
+  onSave: (body: string) => void;
+  onCancel: () => void;
+}) {
   const id = useId();
   const [body, setBody] = useState(initial);
   const [error, setError] = useState<string>();
@@ -19,10 +29,14 @@ function EditForm({ initial, busy, onSave, onCancel }: { initial: string; busy: 
     onSave(parsed.data.body);
   };
   return (
-    <form noValidate className="space-y-2" onSubmit={(e) => {
+    <form
+      noValidate
+      className="space-y-2"
+      onSubmit={(e) => {
         e.preventDefault();
         save();
-      }}>
+      }}
+    >
       <label htmlFor={id} className="sr-only">
         Edit comment
       </label>
@@ -101,14 +115,24 @@ export function CommentItem({
       {deleted ? (
         <p className="text-ink-soft italic">Comment deleted</p>
       ) : editing ? (
-        <EditForm initial={comment.body} busy={busy} onCancel={() => setEditing(false)} onSave={(body) => onEdit(comment.id, body, () => setEditing(false))} />
+        <EditForm
+          initial={comment.body}
+          busy={busy}
+          onCancel={() => setEditing(false)}
+          onSave={(body) => onEdit(comment.id, body, () => setEditing(false))}
+        />
       ) : (
         <CommentText body={comment.body} members={members} />
       )}
       {!editing && (canEdit || canDelete) && (
         <div className="flex gap-1">
           {canEdit && (
-            <button type="button" className={smallButton} onClick={() => setEditing(true)} aria-label={`Edit comment by ${author}`}>
+            <button
+              type="button"
+              className={smallButton}
+              onClick={() => setEditing(true)}
+              aria-label={`Edit comment by ${author}`}
+            >
               Edit
             </button>
           )}

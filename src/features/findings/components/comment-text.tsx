@@ -6,7 +6,13 @@ export function CommentText({ body, members }: { body: string; members: readonly
     <p className="break-words whitespace-pre-wrap">
       {tokenizeComment(body, members).map((t, i) =>
         t.kind === 'link' ? (
-          <a key={i} href={t.href} target="_blank" rel="noopener noreferrer" className="font-semibold text-glow-strong underline break-all">
+          <a
+            key={i}
+            href={t.href}
+            target="_blank"
+            rel="noopener noreferrer"
+            className="font-semibold break-all text-glow-strong underline"
+          >
             {t.text}
           </a>
         ) : t.kind === 'mention' ? (

@@ -10,13 +10,13 @@ export function FindingCaution({ audience = 'workshop' }: { audience?: 'workshop
       </span>
       {audience === 'owner' ? (
         <>
-          <strong>Lethal voltages inside:</strong> keep the back on and let only a competent person open it. Follow local
-          electrical codes.
+          <strong>Lethal voltages inside:</strong> keep the back on and let only a competent person open it. Follow
+          local electrical codes.
         </>
       ) : (
         <>
-          <strong>Before touching the chassis:</strong> switch off, unplug, discharge the filter capacitors and verify with a
-          meter; AC/DC sets may have a live chassis. Follow local codes and licensed practice.
+          <strong>Before touching the chassis:</strong> switch off, unplug, discharge the filter capacitors and verify
+          with a meter; AC/DC sets may have a live chassis. Follow local codes and licensed practice.
         </>
       )}
     </div>

@@ -8,11 +8,21 @@ export type Checked = { ok: true; value: string } | { ok: false; message: string
 
 function check(schema: z.ZodType<string>, raw: string): Checked {
   const parsed = schema.safeParse(raw);
-  return parsed.success ? { ok: true, value: parsed.data } : { ok: false, message: parsed.error.issues[0]?.message ?? 'Not valid' };
+  return parsed.success
+    ? { ok: true, value: parsed.data }
+    : { ok: false, message: parsed.error.issues[0]?.message ?? 'Not valid' };
 }
 
-const titleSchema = z.string().trim().min(1, 'Give the finding a short title').max(140, 'Keep the title under 140 characters');
-const reasonSchema = z.string().trim().min(1, 'Say why the finding is dismissed').max(500, 'Keep the reason under 500 characters');
+const titleSchema = z
+  .string()
+  .trim()
+  .min(1, 'Give the finding a short title')
+  .max(140, 'Keep the title under 140 characters');
+const reasonSchema = z
+  .string()
+  .trim()
+  .min(1, 'Say why the finding is dismissed')
+  .max(500, 'Keep the reason under 500 characters');
 
 export const checkTitle = (raw: string) => check(titleSchema, raw);
 export const checkComponentRef = (raw: string) => check(componentRefSchema, raw);
@@ -23,4 +33,5 @@ export const needsCaution = (f: Pick<Finding, 'status' | 'severity'>) =>
   f.status === 'confirmed' || f.status === 'repaired' || f.severity === 'hazard';
 
 /** The finding with a change still on its way to the server laid over it. */
-export const withPatch = (f: Finding, patch: FindingPatch | undefined): Finding => (patch ? ({ ...f, ...patch } as Finding) : f);
+export const withPatch = (f: Finding, patch: FindingPatch | undefined): Finding =>
+  patch ? ({ ...f, ...patch } as Finding) : f;

@@ -1,5 +1,12 @@
 import { useState, type ReactNode } from 'react';
-import { kindLabels, kinds, severities, severityLabels, type Finding, type FindingPatch } from '../../../../shared/schemas/findings';
+import {
+  kindLabels,
+  kinds,
+  severities,
+  severityLabels,
+  type Finding,
+  type FindingPatch,
+} from '../../../../shared/schemas/findings';
 import { Field, inputClass } from '../../../components/field';
 import { checkComponentRef, checkTitle } from './finding-edit';
 import { InlineTextField } from './inline-text-field';
@@ -28,7 +35,12 @@ export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (
         />
         <Field label="Kind" hint="What was seen">
           {(a) => (
-            <select {...a} value={finding.kind} onChange={(e) => onSave({ kind: e.target.value as Finding['kind'] })} className={inputClass}>
+            <select
+              {...a}
+              value={finding.kind}
+              onChange={(e) => onSave({ kind: e.target.value as Finding['kind'] })}
+              className={inputClass}
+            >
               {kinds.map((k) => (
                 <option key={k} value={k}>
                   {kindLabels[k]}
@@ -39,11 +51,20 @@ export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (
         </Field>
       </div>
       {(typedRef ?? finding.componentRef).trim() !== '' && (
-        <SameReferenceFinding restorationId={finding.restorationId} componentRef={typedRef ?? finding.componentRef} exceptId={finding.id} />
+        <SameReferenceFinding
+          restorationId={finding.restorationId}
+          componentRef={typedRef ?? finding.componentRef}
+          exceptId={finding.id}
+        />
       )}
       <Field label="Severity">
         {(a) => (
-          <select {...a} value={finding.severity} onChange={(e) => onSave({ severity: e.target.value as Finding['severity'] })} className={inputClass}>
+          <select
+            {...a}
+            value={finding.severity}
+            onChange={(e) => onSave({ severity: e.target.value as Finding['severity'] })}
+            className={inputClass}
+          >
             {severities.map((s) => (
               <option key={s} value={s}>
                 {severityLabels[s]}
@@ -70,7 +91,13 @@ function Row({ term, children }: { term: string; children: ReactNode }) {
 export function FindingSummary({ finding }: { finding: Finding }) {
   return (
     <dl className="divide-y divide-rule">
-      <Row term="Component">{finding.componentRef ? <span className="font-mono">{finding.componentRef}</span> : <span className="text-ink-soft">none</span>}</Row>
+      <Row term="Component">
+        {finding.componentRef ? (
+          <span className="font-mono">{finding.componentRef}</span>
+        ) : (
+          <span className="text-ink-soft">none</span>
+        )}
+      </Row>
       <Row term="Kind">{kindLabels[finding.kind]}</Row>
       <Row term="Severity">
         <SeverityMark severity={finding.severity} />

@@ -28,9 +28,17 @@ describe('relativeTime', () => {
 });
 
 describe('photoLabels', () => {
-  const photo = (id: number, view: Photo['view'], phase: Photo['phase'], caption = '') => ({ id, view, phase, caption }) as Photo;
+  const photo = (id: number, view: Photo['view'], phase: Photo['phase'], caption = '') =>
+    ({ id, view, phase, caption }) as Photo;
   it('when photos are named, then view and phase are used, and the caption or a number tells twins apart', () => {
-    expect(photoLabels([photo(1, 'underside', 'before'), photo(2, 'top', 'before', 'dial end'), photo(3, 'top', 'before'), photo(4, 'top', 'before')])).toEqual([
+    expect(
+      photoLabels([
+        photo(1, 'underside', 'before'),
+        photo(2, 'top', 'before', 'dial end'),
+        photo(3, 'top', 'before'),
+        photo(4, 'top', 'before'),
+      ]),
+    ).toEqual([
       { id: 1, label: 'Underside · before' },
       { id: 2, label: 'Top · before · dial end' },
       { id: 3, label: 'Top · before 2' },

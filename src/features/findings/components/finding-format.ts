@@ -1,5 +1,13 @@
 import type { Role } from '../../../../shared/permissions';
-import { kindLabels, severityLabels, statusLabels, type Kind, type Severity, type Shape, type Status } from '../../../../shared/schemas/findings';
+import {
+  kindLabels,
+  severityLabels,
+  statusLabels,
+  type Kind,
+  type Severity,
+  type Shape,
+  type Status,
+} from '../../../../shared/schemas/findings';
 import { formatDateTime, relativeTime } from '../../../lib/format';
 
 /** A member of the restoration as the panel and the thread need them: to name authors and offer @mentions. */
@@ -22,7 +30,13 @@ const fieldNames: Record<string, string> = {
   shape: 'Shape',
 };
 
-const shapeLabels: Record<Shape, string> = { pin: 'Pin', circle: 'Circle', rect: 'Rectangle', arrow: 'Arrow', freehand: 'Freehand' };
+const shapeLabels: Record<Shape, string> = {
+  pin: 'Pin',
+  circle: 'Circle',
+  rect: 'Rectangle',
+  arrow: 'Arrow',
+  freehand: 'Freehand',
+};
 
 function inWords(field: string, value: unknown): string {
   if (value === null || value === undefined || value === '') return 'none';

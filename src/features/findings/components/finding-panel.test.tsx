@@ -15,7 +15,8 @@ afterEach(() => {
   vi.restoreAllMocks();
 });
 
-const caution = /Before touching the chassis: switch off, unplug, discharge the filter capacitors and verify with a meter/;
+const caution =
+  /Before touching the chassis: switch off, unplug, discharge the filter capacitors and verify with a meter/;
 
 /** The photo's list answers GET; PATCH waits for `release` and then gives `reply`. */
 function photoApi(finding: Finding, reply: (body: Partial<Finding>) => Reply) {
@@ -24,7 +25,14 @@ function photoApi(finding: Finding, reply: (body: Partial<Finding>) => Reply) {
   const api = fakeApi(async ({ method, path, body }) => {
     if (method === 'GET' && path === `/photos/${finding.photoId}/findings`) return ok([finding]);
     if (method === 'GET' && path === `/findings/${finding.id}/history`)
-      return ok([{ id: 1, actorName: 'Tessa Bench', changes: { status: ['observed', 'confirmed'], ownerVisible: [false, true] }, createdAt: finding.updatedAt }]);
+      return ok([
+        {
+          id: 1,
+          actorName: 'Tessa Bench',
+          changes: { status: ['observed', 'confirmed'], ownerVisible: [false, true] },
+          createdAt: finding.updatedAt,
+        },
+      ]);
     if (method === 'DELETE' && path === `/findings/${finding.id}`) return { status: 204 };
     if (method === 'GET' && path === `/findings/${finding.id}/comments`) return ok([]);
     if (method === 'PATCH' && path === `/findings/${finding.id}`) {
@@ -37,7 +45,9 @@ function photoApi(finding: Finding, reply: (body: Partial<Finding>) => Reply) {
 }
 
 async function renderPanel(finding: Finding, role: 'technician' | 'mentor' | 'owner', meId = 1) {
-  const view = renderWithApp(<FindingPanel finding={finding} role={role} meId={meId} restorationId={7} members={members} />);
+  const view = renderWithApp(
+    <FindingPanel finding={finding} role={role} meId={meId} restorationId={7} members={members} />,
+  );
   await waitFor(() => expect(view.client.getQueryData(findingKeys.photo(finding.photoId))).toBeDefined());
   return view;
 }
@@ -50,7 +60,11 @@ describe('finding panel', () => {
     const user = userEvent.setup();
 
     const status = screen.getByRole('group', { name: 'Status' });
-    expect(within(status).getAllByRole('button').map((b) => b.textContent)).toEqual(['•Observed', '?Suspected', '!Confirmed', '✓Repaired', '★Verified', '✕Dismiss…']);
+    expect(
+      within(status)
+        .getAllByRole('button')
+        .map((b) => b.textContent),
+    ).toEqual(['•Observed', '?Suspected', '!Confirmed', '✓Repaired', '★Verified', '✕Dismiss…']);
     expect(within(status).getByRole('button', { name: /Observed/ })).toHaveAttribute('aria-pressed', 'true');
     expect(screen.queryByRole('note')).not.toBeInTheDocument();
 
@@ -61,7 +75,9 @@ describe('finding panel', () => {
     expect(api.calls.at(-1)).toEqual({ method: 'PATCH', path: '/findings/4', body: { status: 'confirmed' } });
 
     api.release();
-    expect(await screen.findByRole('alert')).toHaveTextContent('Only a technician changes a finding someone else placed.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'Only a technician changes a finding someone else placed.',
+    );
     expect(within(status).getByRole('button', { name: /Observed/ })).toHaveAttribute('aria-pressed', 'true');
     expect(within(status).getByRole('button', { name: /Confirmed/ })).toHaveAttribute('aria-pressed', 'false');
     expect(screen.queryByRole('note')).not.toBeInTheDocument();
@@ -88,12 +104,17 @@ describe('finding panel', () => {
 
     await user.click(screen.getByRole('button', { name: /Dismiss…/ }));
     await user.click(screen.getByRole('button', { name: 'Dismiss finding' }));
-    expect(screen.getByLabelText('Why is this finding dismissed?')).toHaveAccessibleDescription(/Say why the finding is dismissed/);
+    expect(screen.getByLabelText('Why is this finding dismissed?')).toHaveAccessibleDescription(
+      /Say why the finding is dismissed/,
+    );
     expect(api.calls.some((c) => c.method === 'PATCH')).toBe(false);
 
     await user.type(screen.getByLabelText('Why is this finding dismissed?'), 'Tested 180 MΩ at 500 V: fine');
     await user.click(screen.getByRole('button', { name: 'Dismiss finding' }));
-    expect(api.calls.find((c) => c.method === 'PATCH')?.body).toEqual({ status: 'dismissed', dismissReason: 'Tested 180 MΩ at 500 V: fine' });
+    expect(api.calls.find((c) => c.method === 'PATCH')?.body).toEqual({
+      status: 'dismissed',
+      dismissReason: 'Tested 180 MΩ at 500 V: fine',
+    });
   });
 
   it('when a component reference is not written as the schematic prints it, then it is not sent and the field says why', async () => {
@@ -120,7 +141,9 @@ describe('finding panel', () => {
     const finding = makeFinding(4, { severity: 'hazard', kind: 'hazard' });
     photoApi(finding, () => ok(finding)).release();
     await renderPanel(finding, 'mentor', 2);
-    expect(screen.getByRole('note')).toHaveTextContent(/AC\/DC sets may have a live chassis\. Follow local codes and licensed practice\./);
+    expect(screen.getByRole('note')).toHaveTextContent(
+      /AC\/DC sets may have a live chassis\. Follow local codes and licensed practice\./,
+    );
   });
 
   it('when an owner opens a hazard, then the caution is in owner words, not the bench routine', async () => {
@@ -194,7 +217,16 @@ describe('finding panel', () => {
     const finding = makeFinding(4);
     const api = photoApi(finding, () => ok(finding));
     const onDeleted = vi.fn();
-    const view = renderWithApp(<FindingPanel finding={finding} role="technician" meId={1} restorationId={7} members={members} onDeleted={onDeleted} />);
+    const view = renderWithApp(
+      <FindingPanel
+        finding={finding}
+        role="technician"
+        meId={1}
+        restorationId={7}
+        members={members}
+        onDeleted={onDeleted}
+      />,
+    );
     await waitFor(() => expect(view.client.getQueryData(findingKeys.photo(3))).toBeDefined());
     const user = userEvent.setup();
     await user.click(screen.getByRole('button', { name: 'Delete finding' }));

@@ -66,7 +66,9 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
           <StatusMark status={shown.status} />
           <SeverityMark severity={shown.severity} />
           {shown.componentRef && <span className="font-mono font-semibold">{shown.componentRef}</span>}
-          {shown.componentRef && <OnTheDiagramLink restorationId={restorationId} text={shown.componentRef} from={{ finding: shown.id }} />}
+          {shown.componentRef && (
+            <OnTheDiagramLink restorationId={restorationId} text={shown.componentRef} from={{ finding: shown.id }} />
+          )}
           {workshop && shown.questionOpen && <OpenQuestionBadge />}
         </div>
         <h2 id={headingId} className="text-xl font-bold break-words">
@@ -102,9 +104,19 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
 
       {workshop && (
         <div className="flex flex-wrap gap-2">
-          <QuestionToggle open={shown.questionOpen} canAsk={can(role, 'findings.ask')} canResolve={can(role, 'findings.resolve')} onSave={save} />
+          <QuestionToggle
+            open={shown.questionOpen}
+            canAsk={can(role, 'findings.ask')}
+            canResolve={can(role, 'findings.resolve')}
+            onSave={save}
+          />
           {canDelete && (
-            <button type="button" className={buttonClass('quiet', 'text-danger')} disabled={remove.isPending} onClick={() => void confirmDelete()}>
+            <button
+              type="button"
+              className={buttonClass('quiet', 'text-danger')}
+              disabled={remove.isPending}
+              onClick={() => void confirmDelete()}
+            >
               Delete finding
             </button>
           )}

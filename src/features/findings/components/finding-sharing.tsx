@@ -42,5 +42,9 @@ export function QuestionToggle({
 }
 
 export function OpenQuestionBadge() {
-  return <span className="inline-flex items-center rounded-full border border-glow bg-glow-soft px-2.5 py-0.5 text-sm font-semibold text-glow-strong">Open question</span>;
+  return (
+    <span className="inline-flex items-center rounded-full border border-glow bg-glow-soft px-2.5 py-0.5 text-sm font-semibold text-glow-strong">
+      Open question
+    </span>
+  );
 }

@@ -30,7 +30,10 @@ refContainsFilter.autoRemove = (value) => blank(typeof value === 'string' ? valu
 /** The findings table's columns; `photoLabel` names a photo the way the route words it ("Underside · before"). */
 export function findingColumns(photoLabel: (photoId: number) => string) {
   return [
-    helper.accessor('number', { header: '#', cell: (c) => <span className="font-mono font-semibold">#{c.getValue()}</span> }),
+    helper.accessor('number', {
+      header: '#',
+      cell: (c) => <span className="font-mono font-semibold">#{c.getValue()}</span>,
+    }),
     helper.accessor('status', {
       header: 'Status',
       cell: (c) => <StatusMark status={c.getValue()} />,
@@ -43,7 +46,12 @@ export function findingColumns(photoLabel: (photoId: number) => string) {
       sortingFn: byOrder(severities),
       filterFn: equalsFilter,
     }),
-    helper.accessor('kind', { header: 'Kind', cell: (c) => kindLabels[c.getValue()], sortingFn: byText((f) => kindLabels[f.kind]), filterFn: equalsFilter }),
+    helper.accessor('kind', {
+      header: 'Kind',
+      cell: (c) => kindLabels[c.getValue()],
+      sortingFn: byText((f) => kindLabels[f.kind]),
+      filterFn: equalsFilter,
+    }),
     // Findings without a reference go last whichever way the column is sorted.
     helper.accessor((f) => f.componentRef || undefined, {
       id: 'componentRef',
@@ -69,7 +77,10 @@ export function findingColumns(photoLabel: (photoId: number) => string) {
       sortingFn: byText((f) => photoLabel(f.photoId)),
       filterFn: equalsFilter,
     }),
-    helper.accessor('commentCount', { header: 'Comments', cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
+    helper.accessor('commentCount', {
+      header: 'Comments',
+      cell: (c) => <span className="font-mono">{c.getValue()}</span>,
+    }),
     helper.accessor('updatedAt', {
       header: 'Updated',
       cell: (c) => (
@@ -84,8 +95,14 @@ export function findingColumns(photoLabel: (photoId: number) => string) {
       id: 'closeup',
       header: () => <span className="sr-only">Close-up</span>,
       cell: (c) => (
-        <img src={`/api/findings/${c.row.original.id}/closeup`} alt="" loading="lazy" width={48} height={48}
-          className="h-12 w-12 rounded-md border border-rule bg-sunken object-cover" />
+        <img
+          src={`/api/findings/${c.row.original.id}/closeup`}
+          alt=""
+          loading="lazy"
+          width={48}
+          height={48}
+          className="h-12 w-12 rounded-md border border-rule bg-sunken object-cover"
+        />
       ),
     }),
   ];

@@ -1,6 +1,14 @@
 import type { Table } from '@tanstack/react-table';
 import { useId } from 'react';
-import { kindLabels, kinds, severities, severityLabels, statuses, statusLabels, type Finding } from '../../../../shared/schemas/findings';
+import {
+  kindLabels,
+  kinds,
+  severities,
+  severityLabels,
+  statuses,
+  statusLabels,
+  type Finding,
+} from '../../../../shared/schemas/findings';
 import { inputClass } from '../../../components/field';
 
 const label = 'block text-sm font-semibold';
@@ -30,7 +38,9 @@ function SelectFilter({
       <select
         id={id}
         value={value === undefined ? '' : String(value)}
-        onChange={(e) => col.setFilterValue(e.target.value === '' ? undefined : numeric ? Number(e.target.value) : e.target.value)}
+        onChange={(e) =>
+          col.setFilterValue(e.target.value === '' ? undefined : numeric ? Number(e.target.value) : e.target.value)
+        }
         className={inputClass}
       >
         <option value="">All</option>
@@ -50,9 +60,24 @@ export function FindingsFilters({ table, photos }: { table: Table<Finding>; phot
   const ref = table.getColumn('componentRef');
   return (
     <div className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-5">
-      <SelectFilter table={table} column="status" name="Status" options={statuses.map((s) => ({ value: s, label: statusLabels[s] }))} />
-      <SelectFilter table={table} column="severity" name="Severity" options={severities.map((s) => ({ value: s, label: severityLabels[s] }))} />
-      <SelectFilter table={table} column="kind" name="Kind" options={kinds.map((k) => ({ value: k, label: kindLabels[k] }))} />
+      <SelectFilter
+        table={table}
+        column="status"
+        name="Status"
+        options={statuses.map((s) => ({ value: s, label: statusLabels[s] }))}
+      />
+      <SelectFilter
+        table={table}
+        column="severity"
+        name="Severity"
+        options={severities.map((s) => ({ value: s, label: severityLabels[s] }))}
+      />
+      <SelectFilter
+        table={table}
+        column="kind"
+        name="Kind"
+        options={kinds.map((k) => ({ value: k, label: kindLabels[k] }))}
+      />
       <div>
         <label htmlFor={refId} className={label}>
           Component
@@ -67,7 +92,13 @@ export function FindingsFilters({ table, photos }: { table: Table<Finding>; phot
           className={`${inputClass} font-mono`}
         />
       </div>
-      <SelectFilter table={table} column="photo" name="Photo" numeric options={photos.map((p) => ({ value: p.id, label: p.label }))} />
+      <SelectFilter
+        table={table}
+        column="photo"
+        name="Photo"
+        numeric
+        options={photos.map((p) => ({ value: p.id, label: p.label }))}
+      />
     </div>
   );
 }

@@ -18,30 +18,78 @@ const photos = [
 ];
 
 const findings = [
-  makeFinding(1, { number: 1, componentRef: 'R23', status: 'confirmed', severity: 'fault', kind: 'overheated', title: 'Charred anode load' }),
-  makeFinding(2, { number: 2, componentRef: 'C15b', status: 'observed', severity: 'hazard', kind: 'leaking', title: 'Wax capacitor weeping', photoId: 5 }),
-  makeFinding(3, { number: 3, componentRef: '', status: 'confirmed', severity: 'info', kind: 'note', title: 'Dial cord slipping', commentCount: 2 }),
-  makeFinding(4, { number: 4, componentRef: 'R3', status: 'repaired', severity: 'wear', kind: 'dry-joint', title: 'Dry joint on tag strip' }),
+  makeFinding(1, {
+    number: 1,
+    componentRef: 'R23',
+    status: 'confirmed',
+    severity: 'fault',
+    kind: 'overheated',
+    title: 'Charred anode load',
+  }),
+  makeFinding(2, {
+    number: 2,
+    componentRef: 'C15b',
+    status: 'observed',
+    severity: 'hazard',
+    kind: 'leaking',
+    title: 'Wax capacitor weeping',
+    photoId: 5,
+  }),
+  makeFinding(3, {
+    number: 3,
+    componentRef: '',
+    status: 'confirmed',
+    severity: 'info',
+    kind: 'note',
+    title: 'Dial cord slipping',
+    commentCount: 2,
+  }),
+  makeFinding(4, {
+    number: 4,
+    componentRef: 'R3',
+    status: 'repaired',
+    severity: 'wear',
+    kind: 'dry-joint',
+    title: 'Dry joint on tag strip',
+  }),
 ];
 
 function renderTable(list: Finding[] | 'fail' = findings) {
-  fakeApi(({ path }) => (path === '/restorations/7/findings' ? (list === 'fail' ? refuse(500, 'The notebook is not answering.') : ok(list)) : undefined));
+  fakeApi(({ path }) =>
+    path === '/restorations/7/findings'
+      ? list === 'fail'
+        ? refuse(500, 'The notebook is not answering.')
+        : ok(list)
+      : undefined,
+  );
   return renderWithApp(<FindingsTable restorationId={7} photos={photos} />);
 }
 
 const table = () => screen.getByRole('table');
-const titles = () => within(table()).getAllByRole('row').slice(1).map((r) => r.querySelectorAll('td')[5]?.textContent);
-const refs = () => within(table()).getAllByRole('row').slice(1).map((r) => r.querySelectorAll('td')[4]?.textContent);
+const titles = () =>
+  within(table())
+    .getAllByRole('row')
+    .slice(1)
+    .map((r) => r.querySelectorAll('td')[5]?.textContent);
+const refs = () =>
+  within(table())
+    .getAllByRole('row')
+    .slice(1)
+    .map((r) => r.querySelectorAll('td')[4]?.textContent);
 
 describe('findings table', () => {
   it('when findings arrive, then each row shows its number, status and severity in words with their marks, and the photo by name', async () => {
     renderTable();
     await screen.findByRole('table');
-    expect(within(table()).getAllByRole('columnheader').map((h) => h.textContent?.replace(/[▲▼↕]/g, ''))).toEqual([
-      '#', 'Status', 'Severity', 'Kind', 'Component', 'Title', 'Photo', 'Comments', 'Updated', 'Close-up',
-    ]);
+    expect(
+      within(table())
+        .getAllByRole('columnheader')
+        .map((h) => h.textContent?.replace(/[▲▼↕]/g, '')),
+    ).toEqual(['#', 'Status', 'Severity', 'Kind', 'Component', 'Title', 'Photo', 'Comments', 'Updated', 'Close-up']);
     const row = within(table()).getByRole('row', { name: /Wax capacitor weeping/ });
-    expect(row).toHaveTextContent(/#2•Observed\s*Hazard\s*Leaking or bulging\s*C15b\s*Wax capacitor weeping\s*Top · before\s*0/);
+    expect(row).toHaveTextContent(
+      /#2•Observed\s*Hazard\s*Leaking or bulging\s*C15b\s*Wax capacitor weeping\s*Top · before\s*0/,
+    );
     expect(screen.getByRole('status')).toHaveTextContent('4 findings');
   });
 
@@ -106,7 +154,11 @@ describe('findings table', () => {
   it('when shown on a phone, then the same findings are also laid out as a list of links', async () => {
     renderTable();
     const cards = await screen.findByRole('list', { name: 'Findings' });
-    expect(within(cards).getAllByRole('link').map((a) => a.getAttribute('href'))).toEqual([
+    expect(
+      within(cards)
+        .getAllByRole('link')
+        .map((a) => a.getAttribute('href')),
+    ).toEqual([
       '/restorations/7/photos/3/findings/1',
       '/restorations/7/photos/5/findings/2',
       '/restorations/7/photos/3/findings/3',

@@ -57,7 +57,8 @@ export function FindingsTable({ restorationId, photos }: FindingsTableProps) {
   if (query.data.length === 0)
     return (
       <EmptyState title="No findings yet">
-        Open a photo and mark the spot: a leaky wax capacitor, a perished lead, a dry joint. Each mark becomes a finding here.
+        Open a photo and mark the spot: a leaky wax capacitor, a perished lead, a dry joint. Each mark becomes a finding
+        here.
       </EmptyState>
     );
 
@@ -73,7 +74,9 @@ export function FindingsTable({ restorationId, photos }: FindingsTableProps) {
       <FindingsFilters table={table} photos={photos} />
       <div className="flex flex-wrap items-center justify-between gap-2">
         <p role="status" className="text-sm text-ink-soft">
-          {rows.length === query.data.length ? findingsCount(rows.length) : `Showing ${rows.length} of ${findingsCount(query.data.length)}`}
+          {rows.length === query.data.length
+            ? findingsCount(rows.length)
+            : `Showing ${rows.length} of ${findingsCount(query.data.length)}`}
         </p>
         {columnFilters.length > 0 && (
           <Button variant="quiet" onClick={() => table.resetColumnFilters()}>
@@ -87,14 +90,21 @@ export function FindingsTable({ restorationId, photos }: FindingsTableProps) {
         <>
           <div className="hidden overflow-x-auto rounded-xl border border-rule bg-panel md:block">
             <table className="w-full text-left text-sm">
-              <caption className="sr-only">Findings on this restoration. Column headers sort; a row opens the finding on its photo.</caption>
+              <caption className="sr-only">
+                Findings on this restoration. Column headers sort; a row opens the finding on its photo.
+              </caption>
               <thead className="border-b border-rule bg-sunken">
                 {table.getHeaderGroups().map((group) => (
                   <tr key={group.id}>
                     {group.headers.map((header) => {
                       const sorted = header.column.getIsSorted();
                       return (
-                        <th key={header.id} scope="col" aria-sort={sorted ? ariaSort[sorted] : 'none'} className="px-2 py-1 font-semibold">
+                        <th
+                          key={header.id}
+                          scope="col"
+                          aria-sort={sorted ? ariaSort[sorted] : 'none'}
+                          className="px-2 py-1 font-semibold"
+                        >
                           <button
                             type="button"
                             onClick={header.column.getToggleSortingHandler()}

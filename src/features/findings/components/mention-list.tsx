@@ -15,7 +15,12 @@ export function MentionList<M extends { userId: number; name: string; role: Role
   onPick: (m: M) => void;
 }) {
   return (
-    <ul id={id} role="listbox" aria-label="Members to mention" className="absolute z-10 mt-1 w-64 overflow-hidden rounded-lg border border-rule bg-panel shadow-lg">
+    <ul
+      id={id}
+      role="listbox"
+      aria-label="Members to mention"
+      className="absolute z-10 mt-1 w-64 overflow-hidden rounded-lg border border-rule bg-panel shadow-lg"
+    >
       {options.map((m, i) => (
         <li
           key={m.userId}

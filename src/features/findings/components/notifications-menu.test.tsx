@@ -15,14 +15,24 @@ afterEach(() => {
 });
 
 const note = (id: number, overrides: Partial<Notification> = {}): Notification => ({
-  id, kind: 'mention', summary: `Note ${id}`, restorationId: 7, findingId: 40 + id, photoId: 3, helpRequestId: null, readingRequestId: null, read: false,
-  createdAt: new Date(Date.now() - 5 * 60_000).toISOString(), ...overrides,
+  id,
+  kind: 'mention',
+  summary: `Note ${id}`,
+  restorationId: 7,
+  findingId: 40 + id,
+  photoId: 3,
+  helpRequestId: null,
+  readingRequestId: null,
+  read: false,
+  createdAt: new Date(Date.now() - 5 * 60_000).toISOString(),
+  ...overrides,
 });
 
 describe('notifications menu', () => {
   it('when there are unread items, then the button says how many, and an item marks itself read and opens its finding', async () => {
     const api = fakeApi(({ method, path }) => {
-      if (method === 'GET' && path === '/notifications?limit=50') return ok([note(1, { summary: 'Teodor Brask mentioned you on #4 C15b' }), note(2), note(3, { read: true })]);
+      if (method === 'GET' && path === '/notifications?limit=50')
+        return ok([note(1, { summary: 'Teodor Brask mentioned you on #4 C15b' }), note(2), note(3, { read: true })]);
       if (method === 'POST' && path === '/notifications/read') return { status: 204 };
       return undefined;
     });
@@ -72,7 +82,13 @@ describe('notifications menu', () => {
 });
 
 const question: OpenQuestion = {
-  findingId: 41, photoId: 3, restorationId: 7, set: 'Ostrander & Vale Consolette', number: 4, title: 'Is this can original?', componentRef: 'C15b',
+  findingId: 41,
+  photoId: 3,
+  restorationId: 7,
+  set: 'Ostrander & Vale Consolette',
+  number: 4,
+  title: 'Is this can original?',
+  componentRef: 'C15b',
   askedAt: new Date(Date.now() - 2 * 3600_000).toISOString(),
 };
 
@@ -83,7 +99,9 @@ describe('open questions', () => {
     expect(await screen.findByRole('heading', { name: 'Questions waiting for you' })).toBeInTheDocument();
     const link = screen.getByRole('link');
     expect(link).toHaveAttribute('href', '/restorations/7/photos/3/findings/41');
-    expect(link).toHaveTextContent(/Ostrander & Vale Consolette\s*#4\s*C15b\s*Is this can original\?\s*asked 2 hours ago/);
+    expect(link).toHaveTextContent(
+      /Ostrander & Vale Consolette\s*#4\s*C15b\s*Is this can original\?\s*asked 2 hours ago/,
+    );
   });
 
   it('when no question is open, then nothing is drawn', async () => {

@@ -4,7 +4,15 @@ import { notificationPath, type Notification } from '../../../../shared/schemas/
 import { useMarkNotificationsRead, useNotifications } from '../api/get-notifications';
 import { fullTime, relativeTime } from './finding-format';
 
-const kindGlyph: Record<Notification['kind'], string> = { mention: '@', question: '?', reply: '↩', 'help-request': '?', 'reading-requested': '⌁', 'reading-answered': '✓', payment: '£' };
+const kindGlyph: Record<Notification['kind'], string> = {
+  mention: '@',
+  question: '?',
+  reply: '↩',
+  'help-request': '?',
+  'reading-requested': '⌁',
+  'reading-answered': '✓',
+  payment: '£',
+};
 
 /** The header's bell: unread count on the button, the list in a popover; Escape or a click outside closes it. */
 export function NotificationsMenu() {
@@ -26,7 +34,9 @@ export function NotificationsMenu() {
 
   useEffect(() => {
     if (!open) return;
-    const first = panel.current?.querySelector<HTMLElement>('li button') ?? panel.current?.querySelector<HTMLElement>('button:not([disabled])');
+    const first =
+      panel.current?.querySelector<HTMLElement>('li button') ??
+      panel.current?.querySelector<HTMLElement>('button:not([disabled])');
     first?.focus();
     const outside = (e: PointerEvent) => {
       if (e.target instanceof Node && !root.current?.contains(e.target)) setOpen(false);
@@ -63,7 +73,10 @@ export function NotificationsMenu() {
       >
         Notifications
         {unread > 0 && (
-          <span aria-hidden="true" className="min-w-6 rounded-full bg-glow px-1.5 text-center font-mono text-xs leading-6 text-white dark:text-bakelite">
+          <span
+            aria-hidden="true"
+            className="min-w-6 rounded-full bg-glow px-1.5 text-center font-mono text-xs leading-6 text-white dark:text-bakelite"
+          >
             {unread > 99 ? '99+' : unread}
           </span>
         )}
@@ -78,35 +91,54 @@ export function NotificationsMenu() {
         >
           <div className="flex items-center justify-between gap-2 px-2 pb-1">
             <p className="font-bold">Notifications</p>
-            <button type="button" disabled={!unread || markRead.isPending} onClick={() => markRead.mutate(undefined)} className="min-h-11 rounded-lg px-2 text-sm hover:bg-sunken disabled:opacity-50">
+            <button
+              type="button"
+              disabled={!unread || markRead.isPending}
+              onClick={() => markRead.mutate(undefined)}
+              className="min-h-11 rounded-lg px-2 text-sm hover:bg-sunken disabled:opacity-50"
+            >
               Mark all read
             </button>
           </div>
           {notifications.isPending ? (
             <p className="px-2 py-3 text-sm text-ink-soft">Fetching…</p>
           ) : notifications.isError ? (
-            <p role="alert" className="px-2 py-3 text-sm text-danger">{notifications.error.message}</p>
+            <p role="alert" className="px-2 py-3 text-sm text-danger">
+              {notifications.error.message}
+            </p>
           ) : items.length === 0 ? (
             <p className="px-2 py-3 text-sm text-ink-soft">Nothing new.</p>
           ) : (
             <ul className="max-h-96 overflow-y-auto">
               {items.map((n) => (
                 <li key={n.id}>
-                  <button type="button" onClick={() => openItem(n)} className="flex w-full gap-2 rounded-lg px-2 py-2 text-left hover:bg-sunken">
-                    <span aria-hidden="true" className="w-5 shrink-0 text-center font-mono font-bold text-glow-strong">{kindGlyph[n.kind]}</span>
+                  <button
+                    type="button"
+                    onClick={() => openItem(n)}
+                    className="flex w-full gap-2 rounded-lg px-2 py-2 text-left hover:bg-sunken"
+                  >
+                    <span aria-hidden="true" className="w-5 shrink-0 text-center font-mono font-bold text-glow-strong">
+                      {kindGlyph[n.kind]}
+                    </span>
                     <span className="min-w-0 flex-1">
                       <span className={`block break-words ${n.read ? 'text-ink-soft' : 'font-semibold'}`}>
                         {!n.read && <span className="sr-only">Unread: </span>}
                         {n.summary}
                       </span>
-                      <time dateTime={n.createdAt} title={fullTime(n.createdAt)} className="text-xs text-ink-soft">{relativeTime(n.createdAt)}</time>
+                      <time dateTime={n.createdAt} title={fullTime(n.createdAt)} className="text-xs text-ink-soft">
+                        {relativeTime(n.createdAt)}
+                      </time>
                     </span>
                   </button>
                 </li>
               ))}
             </ul>
           )}
-          {markRead.isError && <p role="alert" className="px-2 pt-1 text-sm text-danger">{markRead.error.message}</p>}
+          {markRead.isError && (
+            <p role="alert" className="px-2 pt-1 text-sm text-danger">
+              {markRead.error.message}
+            </p>
+          )}
         </div>
       )}
     </div>

@@ -15,6 +15,9 @@ export function photoLabels(photos: Photo[]): { id: number; label: string }[] {
     const n = (seen.get(label) ?? 0) + 1;
     seen.set(label, n);
     const caption = p.caption.trim();
-    return { id: p.id, label: caption ? `${label} · ${caption.length > 32 ? `${caption.slice(0, 31)}…` : caption}` : `${label} ${n}` };
+    return {
+      id: p.id,
+      label: caption ? `${label} · ${caption.length > 32 ? `${caption.slice(0, 31)}…` : caption}` : `${label} ${n}`,
+    };
   });
 }

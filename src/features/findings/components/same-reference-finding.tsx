@@ -6,7 +6,15 @@ import { ReferenceFindingNotice } from '../../../components/reference-finding-no
  * Points out that another finding of this restoration already names the reference, with a link to the first
  * one (`exceptId`: the finding being edited). Says nothing until the list is here.
  */
-export function SameReferenceFinding({ restorationId, componentRef, exceptId }: { restorationId: number; componentRef: string; exceptId?: number }) {
+export function SameReferenceFinding({
+  restorationId,
+  componentRef,
+  exceptId,
+}: {
+  restorationId: number;
+  componentRef: string;
+  exceptId?: number;
+}) {
   const findings = useRestorationFindings(restorationId);
   const first = findings.data ? firstWithComponentRef(findings.data, componentRef, exceptId) : undefined;
   return first ? <ReferenceFindingNotice first={first} /> : null;

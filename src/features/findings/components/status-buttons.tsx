@@ -6,7 +6,8 @@ import { statusStyle } from '../../../lib/finding-legend';
 import { checkDismissReason, workflow } from './finding-edit';
 import { StatusGlyph } from '../../../components/status-mark';
 
-const chip = 'inline-flex min-h-11 items-center gap-1.5 rounded-lg border px-3 py-1.5 text-sm font-semibold transition-colors';
+const chip =
+  'inline-flex min-h-11 items-center gap-1.5 rounded-lg border px-3 py-1.5 text-sm font-semibold transition-colors';
 
 /** The status as a row of buttons in workflow order, and "Dismiss…" which asks why first. */
 export function StatusButtons({ status, onChange }: { status: Status; onChange: (patch: FindingPatch) => void }) {
@@ -67,8 +68,21 @@ export function StatusButtons({ status, onChange }: { status: Status; onChange: 
             dismiss();
           }}
         >
-          <Field label="Why is this finding dismissed?" hint="e.g. tested fine: 180 MΩ at 500 V, no leakage" error={error}>
-            {(a) => <textarea {...a} rows={2} value={reason} onChange={(e) => setReason(e.target.value)} className={inputClass} autoFocus />}
+          <Field
+            label="Why is this finding dismissed?"
+            hint="e.g. tested fine: 180 MΩ at 500 V, no leakage"
+            error={error}
+          >
+            {(a) => (
+              <textarea
+                {...a}
+                rows={2}
+                value={reason}
+                onChange={(e) => setReason(e.target.value)}
+                className={inputClass}
+                autoFocus
+              />
+            )}
           </Field>
           <div className="flex flex-wrap gap-2">
             <button type="submit" className={buttonClass('primary')}>

@@ -17,7 +17,8 @@ afterEach(() => {
 function postsAnswered(posts: (() => Reply)[]) {
   const api = fakeApi(({ method, path, body }) => {
     if (method === 'GET' && path === '/findings/1/comments') return ok([]);
-    if (method === 'POST' && path === '/findings/1/comments') return posts.shift()?.() ?? { status: 201, body: makeComment(99, body as Partial<Comment>) };
+    if (method === 'POST' && path === '/findings/1/comments')
+      return posts.shift()?.() ?? { status: 201, body: makeComment(99, body as Partial<Comment>) };
     return undefined;
   });
   const postKeys = () => api.calls.flatMap((c, i) => (c.method === 'POST' ? [api.headers[i]!['idempotency-key']] : []));
@@ -34,7 +35,11 @@ async function send(text: string) {
 
 describe('posting a comment again', () => {
   it('when the connection drops after sending, then the automatic retry carries the same Idempotency-Key', async () => {
-    const api = postsAnswered([() => { throw new TypeError('Failed to fetch'); }]);
+    const api = postsAnswered([
+      () => {
+        throw new TypeError('Failed to fetch');
+      },
+    ]);
     renderWithApp(<Thread finding={makeFinding(1)} role="technician" meId={1} members={members} />);
     await screen.findByText('No comments yet');
     await send('Reflowed the tag strip');

@@ -18,7 +18,8 @@ const finding = makeFinding(1, { ownerVisible: true });
 function threadApi(comments: Comment[]) {
   return fakeApi(({ method, path, body }) => {
     if (method === 'GET' && path === '/findings/1/comments') return ok(comments);
-    if (method === 'POST' && path === '/findings/1/comments') return { status: 201, body: makeComment(99, body as Partial<Comment>) };
+    if (method === 'POST' && path === '/findings/1/comments')
+      return { status: 201, body: makeComment(99, body as Partial<Comment>) };
     if (method === 'DELETE' && path.startsWith('/comments/')) return { status: 204 };
     return undefined;
   });
@@ -27,13 +28,23 @@ function threadApi(comments: Comment[]) {
 describe('thread', () => {
   it('when comments arrive, then they are oldest first, keep their line breaks, link their links and mark mentions, edits and deletions', async () => {
     threadApi([
-      makeComment(3, { body: '', deletedAt: '2026-11-20T14:00:00.000Z', createdAt: '2026-11-20T13:00:00.000Z', authorId: 2, authorName: 'Teodor Brask' }),
+      makeComment(3, {
+        body: '',
+        deletedAt: '2026-11-20T14:00:00.000Z',
+        createdAt: '2026-11-20T13:00:00.000Z',
+        authorId: 2,
+        authorName: 'Teodor Brask',
+      }),
       makeComment(1, {
         body: 'Readings at the can:\nHT 250 V\nsee https://example.org/notes/c15b.',
         createdAt: '2026-11-20T10:00:00.000Z',
         internal: false,
       }),
-      makeComment(2, { body: '@Teodor Brask is 250 V high for this set?', createdAt: '2026-11-20T11:00:00.000Z', editedAt: '2026-11-20T11:05:00.000Z' }),
+      makeComment(2, {
+        body: '@Teodor Brask is 250 V high for this set?',
+        createdAt: '2026-11-20T11:00:00.000Z',
+        editedAt: '2026-11-20T11:05:00.000Z',
+      }),
     ]);
     renderWithApp(<Thread finding={finding} role="technician" meId={1} members={members} />);
 
@@ -74,8 +85,12 @@ describe('thread', () => {
     threadApi([makeComment(1, { authorId: 1 }), makeComment(2, { authorId: 2, authorName: 'Teodor Brask' })]);
     renderWithApp(<Thread finding={finding} role="mentor" meId={2} members={members} />);
     await screen.findByText('Comment 1');
-    expect(screen.getAllByRole('button', { name: /^Edit comment/ }).map((b) => b.getAttribute('aria-label'))).toEqual(['Edit comment by Teodor Brask']);
-    expect(screen.getAllByRole('button', { name: /^Delete comment/ }).map((b) => b.getAttribute('aria-label'))).toEqual(['Delete comment by Teodor Brask']);
+    expect(screen.getAllByRole('button', { name: /^Edit comment/ }).map((b) => b.getAttribute('aria-label'))).toEqual([
+      'Edit comment by Teodor Brask',
+    ]);
+    expect(screen.getAllByRole('button', { name: /^Delete comment/ }).map((b) => b.getAttribute('aria-label'))).toEqual(
+      ['Delete comment by Teodor Brask'],
+    );
   });
 
   it('when a technician deletes someone else’s comment, then it is confirmed first and sent', async () => {
@@ -98,13 +113,22 @@ describe('thread', () => {
     await user.type(box, 'Could @t');
     const list = screen.getByRole('listbox', { name: 'Members to mention' });
     // Internal by default: the owner is not offered, and nor is the writer.
-    expect(within(list).getAllByRole('option').map((o) => o.textContent)).toEqual(['Teodor BraskMentor']);
+    expect(
+      within(list)
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(['Teodor BraskMentor']);
     await user.keyboard('{ArrowDown}{Enter}');
     expect(box).toHaveValue('Could @Teodor Brask ');
     expect(screen.queryByRole('listbox')).not.toBeInTheDocument();
 
     await user.type(box, 'check R23?{Control>}{Enter}{/Control}');
-    await waitFor(() => expect(api.calls.find((c) => c.method === 'POST')?.body).toEqual({ body: 'Could @Teodor Brask check R23?', internal: true }));
+    await waitFor(() =>
+      expect(api.calls.find((c) => c.method === 'POST')?.body).toEqual({
+        body: 'Could @Teodor Brask check R23?',
+        internal: true,
+      }),
+    );
     await waitFor(() => expect(box).toHaveValue(''));
   });
 
@@ -119,6 +143,8 @@ describe('thread', () => {
     await user.keyboard('{Escape}');
     expect(screen.queryByRole('listbox')).not.toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Send comment' }));
-    await waitFor(() => expect(api.calls.find((c) => c.method === 'POST')?.body).toEqual({ body: 'Hello @M', internal: false }));
+    await waitFor(() =>
+      expect(api.calls.find((c) => c.method === 'POST')?.body).toEqual({ body: 'Hello @M', internal: false }),
+    );
   });
 });

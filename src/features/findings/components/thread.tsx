@@ -26,7 +26,10 @@ export function Thread({ finding, role, meId, members }: ThreadProps) {
   return (
     <section aria-labelledby={headingId} className="space-y-3">
       <h3 id={headingId} className="text-lg font-bold">
-        Thread {comments.data && <span className="font-normal text-ink-soft">({ordered.filter((c) => !c.deletedAt).length})</span>}
+        Thread{' '}
+        {comments.data && (
+          <span className="font-normal text-ink-soft">({ordered.filter((c) => !c.deletedAt).length})</span>
+        )}
       </h3>
       {comments.isPending ? (
         <Loading label="Fetching comments…" />

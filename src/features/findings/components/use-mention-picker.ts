@@ -57,5 +57,16 @@ export function useMentionPicker<M extends { userId: number; name: string }>(
     'aria-controls': open ? listId : undefined,
     'aria-activedescendant': open ? optionId(current) : undefined,
   };
-  return { open, options, active: current, listId, optionId, track, pick, onKeyDown, close: () => setAt(null), inputProps };
+  return {
+    open,
+    options,
+    active: current,
+    listId,
+    optionId,
+    track,
+    pick,
+    onKeyDown,
+    close: () => setAt(null),
+    inputProps,
+  };
 }

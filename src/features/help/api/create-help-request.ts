@@ -13,7 +13,10 @@ export function useCreateHelpRequest(restorationId: number) {
     mutationFn: (symptom: string) => createHelpRequest(restorationId, symptom),
     onSuccess: (created) => {
       client.setQueryData(helpKeys.one(created.id), created);
-      return Promise.all([client.invalidateQueries({ queryKey: helpKeys.list(restorationId) }), client.invalidateQueries({ queryKey: ['help-requests'], exact: true })]);
+      return Promise.all([
+        client.invalidateQueries({ queryKey: helpKeys.list(restorationId) }),
+        client.invalidateQueries({ queryKey: ['help-requests'], exact: true }),
+      ]);
     },
   });
 }

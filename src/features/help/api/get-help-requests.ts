@@ -4,7 +4,8 @@ import { api } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
 /** The restoration's help requests, newest first, with how many replies wait for approval. */
-export const getHelpRequests = (restorationId: number) => api<HelpRequestSummary[]>(`/restorations/${restorationId}/help-requests`);
+export const getHelpRequests = (restorationId: number) =>
+  api<HelpRequestSummary[]>(`/restorations/${restorationId}/help-requests`);
 
 export const helpRequestsQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: helpKeys.list(restorationId), queryFn: () => getHelpRequests(restorationId) });

@@ -6,4 +6,5 @@ import { api } from '../../../lib/api-client';
 export const postSharedReply = (token: string, reply: HelpReplyInput) =>
   api<{ id: number; held: true }>(`/shared/help/${encodeURIComponent(token)}/replies`, { method: 'POST', json: reply });
 
-export const usePostSharedReply = (token: string) => useMutation({ mutationFn: (reply: HelpReplyInput) => postSharedReply(token, reply) });
+export const usePostSharedReply = (token: string) =>
+  useMutation({ mutationFn: (reply: HelpReplyInput) => postSharedReply(token, reply) });

@@ -1,29 +1,40 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { BenchReadingRequest, ReadingAnswerInput, ReadingRequest, ReadingRequestInput } from '../../../../shared/schemas/reading-requests';
+import type {
+  BenchReadingRequest,
+  ReadingAnswerInput,
+  ReadingRequest,
+  ReadingRequestInput,
+} from '../../../../shared/schemas/reading-requests';
 import { api } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
-export const getReadingRequests = (restorationId: number) => api<ReadingRequest[]>(`/restorations/${restorationId}/reading-requests`);
+export const getReadingRequests = (restorationId: number) =>
+  api<ReadingRequest[]>(`/restorations/${restorationId}/reading-requests`);
 export const readingRequestsQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: helpKeys.readingRequests(restorationId), queryFn: () => getReadingRequests(restorationId) });
 export const useReadingRequests = (restorationId: number) => useQuery(readingRequestsQueryOptions(restorationId));
 
 /** Open tasks and recent answers on every set where the person is a technician or mentor. */
 export const getBenchReadingRequests = () => api<BenchReadingRequest[]>('/reading-requests');
-export const useBenchReadingRequests = () => useQuery({ queryKey: helpKeys.benchReadingRequests, queryFn: getBenchReadingRequests });
+export const useBenchReadingRequests = () =>
+  useQuery({ queryKey: helpKeys.benchReadingRequests, queryFn: getBenchReadingRequests });
 
-const refresh = (client: ReturnType<typeof useQueryClient>, restorationId: number) => Promise.all([
-  client.invalidateQueries({ queryKey: helpKeys.readingRequests(restorationId) }),
-  client.invalidateQueries({ queryKey: helpKeys.benchReadingRequests }),
-  client.invalidateQueries({ queryKey: ['restorations', restorationId] }),
-]);
+const refresh = (client: ReturnType<typeof useQueryClient>, restorationId: number) =>
+  Promise.all([
+    client.invalidateQueries({ queryKey: helpKeys.readingRequests(restorationId) }),
+    client.invalidateQueries({ queryKey: helpKeys.benchReadingRequests }),
+    client.invalidateQueries({ queryKey: ['restorations', restorationId] }),
+  ]);
 
 export const askForReading = (restorationId: number, input: ReadingRequestInput) =>
   api<ReadingRequest>(`/restorations/${restorationId}/reading-requests`, { method: 'POST', json: input });
 
 export function useAskForReading(restorationId: number) {
   const client = useQueryClient();
-  return useMutation({ mutationFn: (input: ReadingRequestInput) => askForReading(restorationId, input), onSuccess: () => refresh(client, restorationId) });
+  return useMutation({
+    mutationFn: (input: ReadingRequestInput) => askForReading(restorationId, input),
+    onSuccess: () => refresh(client, restorationId),
+  });
 }
 
 export const answerReadingRequest = (readingRequestId: number, input: ReadingAnswerInput) =>

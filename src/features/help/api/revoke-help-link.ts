@@ -3,7 +3,8 @@ import { api } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
 /** Withdraws a link: from now on it answers "not found". */
-export const revokeHelpLink = (token: string) => api<void>(`/help-links/${encodeURIComponent(token)}`, { method: 'DELETE' });
+export const revokeHelpLink = (token: string) =>
+  api<void>(`/help-links/${encodeURIComponent(token)}`, { method: 'DELETE' });
 
 export function useRevokeHelpLink(helpRequestId: number) {
   const client = useQueryClient();

@@ -5,7 +5,13 @@ import { causeResultLabels } from '../../../../shared/schemas/symptom-checks';
 import { VerdictBadge } from '../../../components/verdict-badge';
 
 /** The checklist inside a help request: each symptom's causes in order, with their test and how each came out. */
-export function HelpChecklistView({ checklist, remove }: { checklist: HelpChecklist[]; remove?: (symptomId: string) => ReactNode }) {
+export function HelpChecklistView({
+  checklist,
+  remove,
+}: {
+  checklist: HelpChecklist[];
+  remove?: (symptomId: string) => ReactNode;
+}) {
   return (
     <>
       {checklist.map(({ symptomId, checks }) => {
@@ -22,10 +28,21 @@ export function HelpChecklistView({ checklist, remove }: { checklist: HelpCheckl
                 const done = checks.find((c) => c.causeId === cause.id);
                 return (
                   <li key={cause.id} className="border-b border-rule pb-1">
-                    <span className="font-semibold">{i + 1}. {cause.cause}</span>{' '}
-                    <span className={done ? 'font-semibold' : 'text-ink-soft'}>— {done ? causeResultLabels[done.result] : 'not checked yet'}</span>
-                    <span className="block text-ink-soft">Test: {cause.test.where}; expect {cause.test.expected}</span>
-                    {done?.reading && <span className="block">{done.reading.location} read <span className="font-mono">{done.reading.reading}</span> <VerdictBadge verdict={done.reading.verdict} reason={done.reading.verdictReason} /></span>}
+                    <span className="font-semibold">
+                      {i + 1}. {cause.cause}
+                    </span>{' '}
+                    <span className={done ? 'font-semibold' : 'text-ink-soft'}>
+                      — {done ? causeResultLabels[done.result] : 'not checked yet'}
+                    </span>
+                    <span className="block text-ink-soft">
+                      Test: {cause.test.where}; expect {cause.test.expected}
+                    </span>
+                    {done?.reading && (
+                      <span className="block">
+                        {done.reading.location} read <span className="font-mono">{done.reading.reading}</span>{' '}
+                        <VerdictBadge verdict={done.reading.verdict} reason={done.reading.verdictReason} />
+                      </span>
+                    )}
                     {done?.note && <span className="block whitespace-pre-wrap">{done.note}</span>}
                   </li>
                 );

@@ -9,14 +9,23 @@ export function HelpOnBench() {
   if (!list.data?.length) return null;
   return (
     <section aria-labelledby={headingId} className="space-y-2">
-      <h2 id={headingId} className="text-lg font-bold">Asking for help</h2>
+      <h2 id={headingId} className="text-lg font-bold">
+        Asking for help
+      </h2>
       <ul className="divide-y divide-rule rounded-xl border border-rule bg-panel">
         {list.data.map((h) => (
           <li key={h.id}>
-            <Link to={`/restorations/${h.restorationId}/help`} className="flex flex-wrap items-baseline gap-x-3 gap-y-1 px-4 py-3 hover:bg-sunken">
+            <Link
+              to={`/restorations/${h.restorationId}/help`}
+              className="flex flex-wrap items-baseline gap-x-3 gap-y-1 px-4 py-3 hover:bg-sunken"
+            >
               <span className="text-sm text-ink-soft">{h.set}</span>
-              <span className="min-w-0 flex-1 font-semibold">{h.symptom.length > 90 ? `${h.symptom.slice(0, 90)}…` : h.symptom}</span>
-              <time className="text-sm text-ink-soft" dateTime={h.createdAt}>{new Date(h.createdAt).toLocaleDateString()}</time>
+              <span className="min-w-0 flex-1 font-semibold">
+                {h.symptom.length > 90 ? `${h.symptom.slice(0, 90)}…` : h.symptom}
+              </span>
+              <time className="text-sm text-ink-soft" dateTime={h.createdAt}>
+                {new Date(h.createdAt).toLocaleDateString()}
+              </time>
             </Link>
           </li>
         ))}

@@ -1,7 +1,13 @@
 import type { HelpReply } from '../../../../shared/schemas/help';
 
 /** The thread of replies; `action` adds a control to a reply (the technician's approval). */
-export function HelpReplies({ replies, action }: { replies: HelpReply[]; action?: (reply: HelpReply) => React.ReactNode }) {
+export function HelpReplies({
+  replies,
+  action,
+}: {
+  replies: HelpReply[];
+  action?: (reply: HelpReply) => React.ReactNode;
+}) {
   return (
     <section className="break-inside-avoid space-y-2">
       <h2 className="text-lg font-bold">Replies</h2>
@@ -10,7 +16,10 @@ export function HelpReplies({ replies, action }: { replies: HelpReply[]; action?
       ) : (
         <ul className="space-y-3">
           {replies.map((r) => (
-            <li key={r.id} className={`rounded-lg border px-4 py-3 ${r.approved ? 'border-rule bg-panel' : 'border-dashed border-glow'}`}>
+            <li
+              key={r.id}
+              className={`rounded-lg border px-4 py-3 ${r.approved ? 'border-rule bg-panel' : 'border-dashed border-glow'}`}
+            >
               <p className="text-sm">
                 <span className="font-semibold">{r.name}</span>{' '}
                 <span className="text-ink-soft">{new Date(r.createdAt).toLocaleString()}</span>

@@ -20,20 +20,32 @@ export function HelpTab({ restorationId, role }: { restorationId: number; role: 
       <SymptomChecklist restorationId={restorationId} canEdit={canEdit} />
       {canEdit && <NewHelpRequestForm restorationId={restorationId} onCreated={setChosen} />}
       {list.data.length === 0 ? (
-        <EmptyState title="No help requests yet">{canEdit ? 'Describe the symptom above to gather everything a helper asks for.' : 'The technician has not asked for help on this set.'}</EmptyState>
+        <EmptyState title="No help requests yet">
+          {canEdit
+            ? 'Describe the symptom above to gather everything a helper asks for.'
+            : 'The technician has not asked for help on this set.'}
+        </EmptyState>
       ) : (
         <>
           {list.data.length > 1 && (
             <nav aria-label="Help requests" className="flex flex-wrap gap-2 print:hidden">
               {list.data.map((h) => (
-                <button key={h.id} type="button" aria-current={h.id === current ? 'true' : undefined} onClick={() => setChosen(h.id)}
-                  className={`min-h-11 rounded-lg border px-3 text-left text-sm ${h.id === current ? 'border-glow bg-panel font-semibold' : 'border-rule'}`}>
-                  {new Date(h.createdAt).toLocaleDateString()} · {h.symptom.slice(0, 40)}{h.pendingReplies > 0 && ` · ${h.pendingReplies} waiting`}
+                <button
+                  key={h.id}
+                  type="button"
+                  aria-current={h.id === current ? 'true' : undefined}
+                  onClick={() => setChosen(h.id)}
+                  className={`min-h-11 rounded-lg border px-3 text-left text-sm ${h.id === current ? 'border-glow bg-panel font-semibold' : 'border-rule'}`}
+                >
+                  {new Date(h.createdAt).toLocaleDateString()} · {h.symptom.slice(0, 40)}
+                  {h.pendingReplies > 0 && ` · ${h.pendingReplies} waiting`}
                 </button>
               ))}
             </nav>
           )}
-          {current && <HelpRequestPanel key={current} restorationId={restorationId} helpRequestId={current} canEdit={canEdit} />}
+          {current && (
+            <HelpRequestPanel key={current} restorationId={restorationId} helpRequestId={current} canEdit={canEdit} />
+          )}
         </>
       )}
       <ReadingRequestsPanel restorationId={restorationId} helpRequestId={current ?? undefined} canAnswer={canEdit} />

@@ -6,7 +6,8 @@ import { HelpContentView } from './help-content-view';
 import { HelpReplies } from './help-replies';
 import { SharedReplyForm } from './shared-reply-form';
 
-const dateOf = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'long', year: 'numeric' });
+const dateOf = (iso: string) =>
+  new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'long', year: 'numeric' });
 
 /** The help request behind a read-only link: no account, nothing but what was chosen and shared, printable. */
 export function SharedHelpPage({ token }: { token: string }) {
@@ -19,7 +20,9 @@ export function SharedHelpPage({ token }: { token: string }) {
       {query.isPending && <Loading label="Opening the request…" />}
       {query.isError &&
         (query.error instanceof ApiError && query.error.status === 404 ? (
-          <EmptyState title="This link does not work">It has expired, was withdrawn, or was copied incompletely. Ask the restorer for a new one.</EmptyState>
+          <EmptyState title="This link does not work">
+            It has expired, was withdrawn, or was copied incompletely. Ask the restorer for a new one.
+          </EmptyState>
         ) : (
           <ErrorState error={query.error} onRetry={() => query.refetch()} />
         ))}
@@ -33,11 +36,14 @@ export function SharedHelpPage({ token }: { token: string }) {
               </h1>
               <p className="text-sm text-ink-soft">Read-only. This link works until {dateOf(query.data.expiresAt)}.</p>
             </div>
-            <Button variant="quiet" className="print:hidden" onClick={() => window.print()}>Print</Button>
+            <Button variant="quiet" className="print:hidden" onClick={() => window.print()}>
+              Print
+            </Button>
           </header>
           <p className="rounded-lg border border-rule bg-panel px-4 py-3 text-sm">
-            Before measuring inside a mains set, disconnect it or power it through an isolating transformer and a lamp limiter,
-            discharge the HT capacitors, and keep one hand away from the chassis; follow your local codes and licensed practice.
+            Before measuring inside a mains set, disconnect it or power it through an isolating transformer and a lamp
+            limiter, discharge the HT capacitors, and keep one hand away from the chassis; follow your local codes and
+            licensed practice.
           </p>
           <HelpContentView content={query.data} />
           <HelpReplies replies={query.data.replies} />

@@ -8,7 +8,10 @@ import { usePostSharedReply } from '../api/post-shared-reply';
 /** A reply from someone without an account: it waits for the technician's approval before anyone sees it. */
 export function SharedReplyForm({ token }: { token: string }) {
   const post = usePostSharedReply(token);
-  const form = useForm<HelpReplyInput>({ resolver: zodResolver(helpReplyInputSchema), defaultValues: { name: '', body: '' } });
+  const form = useForm<HelpReplyInput>({
+    resolver: zodResolver(helpReplyInputSchema),
+    defaultValues: { name: '', body: '' },
+  });
   const { errors } = form.formState;
   if (post.isSuccess)
     return (
@@ -25,8 +28,14 @@ export function SharedReplyForm({ token }: { token: string }) {
       <Field label="Your reply" hint="What to check next, and what reading to expect." error={errors.body?.message}>
         {(p) => <textarea {...p} {...form.register('body')} rows={5} className={inputClass} />}
       </Field>
-      {post.isError && <p role="alert" className="font-semibold text-danger">{post.error.message} Your text is still here.</p>}
-      <Button type="submit" disabled={post.isPending}>{post.isPending ? 'Sending…' : 'Send reply'}</Button>
+      {post.isError && (
+        <p role="alert" className="font-semibold text-danger">
+          {post.error.message} Your text is still here.
+        </p>
+      )}
+      <Button type="submit" disabled={post.isPending}>
+        {post.isPending ? 'Sending…' : 'Send reply'}
+      </Button>
     </form>
   );
 }

@@ -26,7 +26,9 @@ describe('the symptom checklist', () => {
     fireEvent.change(await screen.findByLabelText('Symptom'), { target: { value: 'hum' } });
     const causes = await screen.findAllByRole('listitem');
     expect(causes.map((c) => c.getAttribute('aria-label'))).toEqual([
-      'Reservoir or smoothing electrolytics lost their capacitance', 'Poor earth at a rusted valve-socket rivet or tag', 'Heater-to-cathode leakage in an audio valve',
+      'Reservoir or smoothing electrolytics lost their capacitance',
+      'Poor earth at a rusted valve-socket rivet or tag',
+      'Heater-to-cathode leakage in an audio valve',
     ]);
     expect(causes[0]).toHaveTextContent(/Measured with the set switched on.*local codes and licensed practice/);
     expect(causes[1]).not.toHaveTextContent(/Measured with the set switched on/);
@@ -44,8 +46,19 @@ describe('the symptom checklist', () => {
     fireEvent.click(within(earth).getByRole('button', { name: 'Save result' }));
     await vi.waitFor(() => expect(api.calls.some((c) => c.method === 'PUT')).toBe(true));
     expect(api.calls.find((c) => c.method === 'PUT')).toEqual({
-      method: 'PUT', path: '/restorations/9/symptom-checks/hum/poor-earth',
-      body: { result: 'confirmed', note: '', reading: { location: 'Earth tag to chassis', quantity: 'resistance', expected: '0.5', reading: '4.7', powerOn: false } },
+      method: 'PUT',
+      path: '/restorations/9/symptom-checks/hum/poor-earth',
+      body: {
+        result: 'confirmed',
+        note: '',
+        reading: {
+          location: 'Earth tag to chassis',
+          quantity: 'resistance',
+          expected: '0.5',
+          reading: '4.7',
+          powerOn: false,
+        },
+      },
     });
   });
 });

@@ -5,6 +5,7 @@ import { apiGet } from '../../../lib/api-client';
 
 export const getActivity = () => apiGet('/activity', z.array(activityItemSchema));
 
-export const activityQueryOptions = () => queryOptions({ queryKey: ['activity'], queryFn: getActivity, staleTime: 30_000 });
+export const activityQueryOptions = () =>
+  queryOptions({ queryKey: ['activity'], queryFn: getActivity, staleTime: 30_000 });
 
 export const useActivity = () => useQuery(activityQueryOptions());

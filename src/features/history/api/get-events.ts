@@ -8,7 +8,9 @@ export const getEvents = (restorationId: number, kind?: EventKind) =>
   apiAllPages(`/restorations/${restorationId}/events${kind ? `?kind=${kind}` : ''}`, timelineEventSchema);
 
 export const eventsQueryKey = (restorationId: number, kind?: EventKind) =>
-  kind ? (['restorations', restorationId, 'events', kind] as const) : (['restorations', restorationId, 'events'] as const);
+  kind
+    ? (['restorations', restorationId, 'events', kind] as const)
+    : (['restorations', restorationId, 'events'] as const);
 
 /**
  * Photo events carry presigned thumbnail URLs that expire after about five minutes: the same freshness as the photo

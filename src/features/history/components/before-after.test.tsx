@@ -22,7 +22,9 @@ describe('before and after', () => {
     await user.keyboard('{ArrowRight}');
     expect(slider).toHaveAttribute('aria-valuenow', '55');
     expect(slider).toHaveAttribute('aria-valuetext', '55% before, 45% after');
-    expect(screen.getByRole('img', { name: 'After — Underside, after: recapped' }).style.clipPath).toBe('inset(0 0 0 55%)');
+    expect(screen.getByRole('img', { name: 'After — Underside, after: recapped' }).style.clipPath).toBe(
+      'inset(0 0 0 55%)',
+    );
 
     await user.keyboard('{ArrowLeft}{ArrowLeft}{ArrowLeft}');
     expect(slider).toHaveAttribute('aria-valuenow', '40');
@@ -36,7 +38,17 @@ describe('before and after', () => {
     render(<BeforeAfter before={before} after={after} />);
     const slider = screen.getByRole('slider', { name: 'Before and after comparison' });
     const picture = slider.parentElement as HTMLElement;
-    picture.getBoundingClientRect = () => ({ left: 100, top: 0, width: 400, height: 300, right: 500, bottom: 300, x: 100, y: 0, toJSON: () => ({}) });
+    picture.getBoundingClientRect = () => ({
+      left: 100,
+      top: 0,
+      width: 400,
+      height: 300,
+      right: 500,
+      bottom: 300,
+      x: 100,
+      y: 0,
+      toJSON: () => ({}),
+    });
 
     fireEvent.pointerDown(picture, { clientX: 400, pointerId: 1, pointerType: 'mouse', button: 0 });
     expect(slider).toHaveAttribute('aria-valuenow', '75');
@@ -60,7 +72,13 @@ describe('before and after', () => {
     await user.click(screen.getByRole('button', { name: 'Side by side' }));
     expect(screen.getByRole('button', { name: 'Side by side' })).toHaveAttribute('aria-pressed', 'true');
     expect(screen.queryByRole('slider')).not.toBeInTheDocument();
-    expect(screen.getByRole('img', { name: 'Before — Underside, before: wax capacitors' })).toHaveAttribute('srcset', expect.stringContaining('/d/1.webp '));
-    expect(screen.getByRole('img', { name: 'After — Underside, after: recapped' })).toHaveAttribute('srcset', expect.stringContaining('/d/2.webp '));
+    expect(screen.getByRole('img', { name: 'Before — Underside, before: wax capacitors' })).toHaveAttribute(
+      'srcset',
+      expect.stringContaining('/d/1.webp '),
+    );
+    expect(screen.getByRole('img', { name: 'After — Underside, after: recapped' })).toHaveAttribute(
+      'srcset',
+      expect.stringContaining('/d/2.webp '),
+    );
   });
 });

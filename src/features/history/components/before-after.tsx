@@ -35,7 +35,11 @@ export function BeforeAfter({ before, after, sizes = WIDE_SIZES }: { before: Pho
     <figure className="space-y-2">
       <figcaption className="flex flex-wrap items-center justify-between gap-2">
         <span className="min-w-0">
-          <span className="block font-bold">{sameView ? viewLabels[before.view] : `${viewLabels[before.view]} and ${viewLabels[after.view].toLowerCase()}`}</span>
+          <span className="block font-bold">
+            {sameView
+              ? viewLabels[before.view]
+              : `${viewLabels[before.view]} and ${viewLabels[after.view].toLowerCase()}`}
+          </span>
           <span className="block text-sm text-ink-soft">
             Before {photoDay(before)} · after {photoDay(after)}
           </span>
@@ -45,10 +49,19 @@ export function BeforeAfter({ before, after, sizes = WIDE_SIZES }: { before: Pho
           aria-pressed={sideBySide}
           onClick={() => setSideBySide((v) => !v)}
           className={`inline-flex min-h-11 items-center gap-2 rounded-lg border px-3 text-sm font-semibold ${
-            sideBySide ? 'border-glow bg-glow-soft text-glow-strong' : 'border-rule bg-panel text-ink-soft hover:bg-sunken'
+            sideBySide
+              ? 'border-glow bg-glow-soft text-glow-strong'
+              : 'border-rule bg-panel text-ink-soft hover:bg-sunken'
           }`}
         >
-          <svg viewBox="0 0 20 20" aria-hidden="true" className="h-4 w-4" fill="none" stroke="currentColor" strokeWidth={1.8}>
+          <svg
+            viewBox="0 0 20 20"
+            aria-hidden="true"
+            className="h-4 w-4"
+            fill="none"
+            stroke="currentColor"
+            strokeWidth={1.8}
+          >
             <rect x="2" y="4" width="7" height="12" rx="1" />
             <rect x="11" y="4" width="7" height="12" rx="1" />
           </svg>

@@ -14,7 +14,8 @@ const keySteps: Record<string, (v: number) => number> = {
   Home: () => 0,
   End: () => 100,
 };
-const tag = 'pointer-events-none absolute top-2 rounded-full bg-bakelite/75 px-2.5 py-0.5 text-xs font-semibold text-white';
+const tag =
+  'pointer-events-none absolute top-2 rounded-full bg-bakelite/75 px-2.5 py-0.5 text-xs font-semibold text-white';
 
 /**
  * The after photo laid over the before one and cut at the divider: before shows to its left, after to its right.
@@ -65,7 +66,14 @@ export function CompareSlider({ before, after, sizes }: { before: Photo; after: 
       onPointerCancel={stop}
       onLostPointerCapture={stop}
     >
-      <img loading="lazy" decoding="async" {...photoSources(before, sizes)} alt={`Before — ${photoWords(before)}`} draggable={false} className="absolute inset-0 h-full w-full object-cover" />
+      <img
+        loading="lazy"
+        decoding="async"
+        {...photoSources(before, sizes)}
+        alt={`Before — ${photoWords(before)}`}
+        draggable={false}
+        className="absolute inset-0 h-full w-full object-cover"
+      />
       <img
         loading="lazy"
         decoding="async"
@@ -95,12 +103,23 @@ export function CompareSlider({ before, after, sizes }: { before: Photo; after: 
         className="group absolute inset-y-0 flex w-11 -translate-x-1/2 cursor-ew-resize items-center justify-center focus-visible:outline-none"
         style={{ left: `${position}%` }}
       >
-        <span aria-hidden="true" className="absolute inset-y-0 left-1/2 w-0.5 -translate-x-1/2 bg-white shadow-[0_0_0_1px_rgb(0_0_0/0.35)]" />
+        <span
+          aria-hidden="true"
+          className="absolute inset-y-0 left-1/2 w-0.5 -translate-x-1/2 bg-white shadow-[0_0_0_1px_rgb(0_0_0/0.35)]"
+        />
         <span
           aria-hidden="true"
           className="relative flex h-11 w-11 items-center justify-center rounded-full border-2 border-white bg-bakelite/80 text-white shadow-md group-focus-visible:ring-4 group-focus-visible:ring-glow"
         >
-          <svg viewBox="0 0 20 20" className="h-5 w-5" fill="none" stroke="currentColor" strokeWidth={2} strokeLinecap="round" strokeLinejoin="round">
+          <svg
+            viewBox="0 0 20 20"
+            className="h-5 w-5"
+            fill="none"
+            stroke="currentColor"
+            strokeWidth={2}
+            strokeLinecap="round"
+            strokeLinejoin="round"
+          >
             <path d="m7.5 6-4 4 4 4M12.5 6l4 4-4 4" />
           </svg>
         </span>

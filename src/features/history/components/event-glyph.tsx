@@ -213,14 +213,30 @@ const drawings: Record<Kind, ReactNode> = {
   ),
 };
 
-export function EventGlyph({ kind, caution = false, className = '' }: { kind: Kind; caution?: boolean; className?: string }) {
+export function EventGlyph({
+  kind,
+  caution = false,
+  className = '',
+}: {
+  kind: Kind;
+  caution?: boolean;
+  className?: string;
+}) {
   const attention = kind === 'measurement-out' || caution;
   return (
     <span
       aria-hidden="true"
       className={`inline-flex h-9 w-9 shrink-0 items-center justify-center rounded-full border ${attention ? 'border-danger/50 bg-danger-soft text-danger' : 'border-rule bg-sunken text-ink-soft'} ${className}`}
     >
-      <svg viewBox="0 0 20 20" className="h-5 w-5" fill="none" stroke="currentColor" strokeWidth={1.6} strokeLinecap="round" strokeLinejoin="round">
+      <svg
+        viewBox="0 0 20 20"
+        className="h-5 w-5"
+        fill="none"
+        stroke="currentColor"
+        strokeWidth={1.6}
+        strokeLinecap="round"
+        strokeLinejoin="round"
+      >
         {drawings[kind]}
       </svg>
     </span>

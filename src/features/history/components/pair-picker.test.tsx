@@ -30,10 +30,16 @@ describe('pair picker', () => {
   it('when two photos of the view are chosen, then they are compared; the same photo twice is refused', async () => {
     const user = userEvent.setup();
     render(<PairPicker photos={photos} />);
-    await user.selectOptions(screen.getByRole('combobox', { name: 'Right of the divider' }), 'During · 10 Nov 2026 · half recapped');
+    await user.selectOptions(
+      screen.getByRole('combobox', { name: 'Right of the divider' }),
+      'During · 10 Nov 2026 · half recapped',
+    );
     expect(screen.getByRole('img', { name: 'After — Underside, during: half recapped' })).toBeInTheDocument();
 
-    await user.selectOptions(screen.getByRole('combobox', { name: 'Left of the divider' }), 'During · 10 Nov 2026 · half recapped');
+    await user.selectOptions(
+      screen.getByRole('combobox', { name: 'Left of the divider' }),
+      'During · 10 Nov 2026 · half recapped',
+    );
     expect(screen.getByText('Choose two different photos to compare them.')).toBeInTheDocument();
     expect(screen.queryByRole('slider')).not.toBeInTheDocument();
 

@@ -22,7 +22,11 @@ function comparableViews(photos: Photo[]): Map<View, Photo[]> {
 }
 
 /** For a view, the oldest photo against the newest. */
-const defaultsFor = (view: View, ofView: Photo[]): Choice => ({ view, beforeId: ofView[0]!.id, afterId: ofView[ofView.length - 1]!.id });
+const defaultsFor = (view: View, ofView: Photo[]): Choice => ({
+  view,
+  beforeId: ofView[0]!.id,
+  afterId: ofView[ofView.length - 1]!.id,
+});
 
 /**
  * For technicians and mentors: compare any two photos of one view (the first on the left of the divider), e.g.

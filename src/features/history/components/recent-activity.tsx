@@ -17,7 +17,11 @@ export function RecentActivity() {
         {activity.data.slice(0, 8).map((e) => (
           <li key={`${e.restorationId}-${e.id}`}>
             <Link
-              to={e.findingId && e.photoId ? findingPath({ restorationId: e.restorationId, photoId: e.photoId, id: e.findingId }) : `/restorations/${e.restorationId}/history`}
+              to={
+                e.findingId && e.photoId
+                  ? findingPath({ restorationId: e.restorationId, photoId: e.photoId, id: e.findingId })
+                  : `/restorations/${e.restorationId}/history`
+              }
               className="flex min-h-11 items-center gap-3 px-4 py-2 hover:bg-sunken"
             >
               <EventGlyph kind={e.kind} className="h-5 w-5 shrink-0 text-ink-soft" />

@@ -12,7 +12,9 @@ const pictureClass = 'block h-24 w-32 rounded-lg border border-rule bg-sunken ob
 function QuietImage({ src, alt }: { src: string; alt: string }) {
   const [failed, setFailed] = useState(false);
   if (failed) return null;
-  return <img src={src} alt={alt} loading="lazy" decoding="async" onError={() => setFailed(true)} className={pictureClass} />;
+  return (
+    <img src={src} alt={alt} loading="lazy" decoding="async" onError={() => setFailed(true)} className={pictureClass} />
+  );
 }
 
 export function TimelineItem({ event, restorationId }: { event: TimelineEvent; restorationId: number }) {
@@ -24,7 +26,7 @@ export function TimelineItem({ event, restorationId }: { event: TimelineEvent; r
       <div className="min-w-0 flex-1 space-y-2">
         <div>
           {event.caution ? (
-            <p className="break-words font-semibold text-danger">
+            <p className="font-semibold break-words text-danger">
               <span className="sr-only">Safety departure: </span>
               {event.summary}
             </p>
@@ -37,7 +39,11 @@ export function TimelineItem({ event, restorationId }: { event: TimelineEvent; r
           </p>
         </div>
         {kind === 'photo-added' && thumbUrl && photoId !== null && (
-          <Link to={`/restorations/${restorationId}/photos/${photoId}`} className="inline-block rounded-lg hover:opacity-90" aria-label="Open the photo">
+          <Link
+            to={`/restorations/${restorationId}/photos/${photoId}`}
+            className="inline-block rounded-lg hover:opacity-90"
+            aria-label="Open the photo"
+          >
             <QuietImage src={thumbUrl} alt="" />
           </Link>
         )}

@@ -14,11 +14,35 @@ afterEach(() => {
 
 // Midday UTC, so each event stays on its calendar day in any reader's time zone but the farthest east.
 const events = [
-  makeEvent(5, { kind: 'finding-status', at: '2026-11-25T12:30:00.000Z', summary: '#2 C27 Leaky coupling capacitor: Confirmed → Repaired', findingId: 12, photoId: 3 }),
+  makeEvent(5, {
+    kind: 'finding-status',
+    at: '2026-11-25T12:30:00.000Z',
+    summary: '#2 C27 Leaky coupling capacitor: Confirmed → Repaired',
+    findingId: 12,
+    photoId: 3,
+  }),
   makeEvent(4, { kind: 'part-fitted', at: '2026-11-25T11:00:00.000Z', summary: 'Part fitted: C27 22 nF 630 V' }),
-  makeEvent(3, { kind: 'photo-added', at: '2026-11-24T14:00:00.000Z', summary: 'Photo added: Underside, before', photoId: 3, thumbUrl: '/t/3.webp' }),
-  makeEvent(2, { kind: 'finding-opened', at: '2026-11-24T12:10:00.000Z', summary: 'Finding opened: #2 C27 Leaky coupling capacitor', findingId: 12, photoId: 3 }),
-  makeEvent(1, { kind: 'photo-added', at: '2026-11-24T11:00:00.000Z', summary: 'Photo added: Top, before', photoId: 1, thumbUrl: '/t/1.webp' }),
+  makeEvent(3, {
+    kind: 'photo-added',
+    at: '2026-11-24T14:00:00.000Z',
+    summary: 'Photo added: Underside, before',
+    photoId: 3,
+    thumbUrl: '/t/3.webp',
+  }),
+  makeEvent(2, {
+    kind: 'finding-opened',
+    at: '2026-11-24T12:10:00.000Z',
+    summary: 'Finding opened: #2 C27 Leaky coupling capacitor',
+    findingId: 12,
+    photoId: 3,
+  }),
+  makeEvent(1, {
+    kind: 'photo-added',
+    at: '2026-11-24T11:00:00.000Z',
+    summary: 'Photo added: Top, before',
+    photoId: 1,
+    thumbUrl: '/t/1.webp',
+  }),
 ];
 
 async function showTimeline(list = events) {
@@ -34,7 +58,10 @@ describe('timeline', () => {
   it('when events span two days, then they sit under one heading per day, newest day first', async () => {
     await showTimeline();
     const headings = screen.getAllByRole('heading', { level: 3 }).map((h) => h.textContent);
-    expect(headings).toEqual([expect.stringMatching(/^Wednesday 25 November/), expect.stringMatching(/^Tuesday 24 November/)]);
+    expect(headings).toEqual([
+      expect.stringMatching(/^Wednesday 25 November/),
+      expect.stringMatching(/^Tuesday 24 November/),
+    ]);
     expect(within(dayOf(/^Wednesday/)).getByText('Part fitted: C27 22 nF 630 V')).toBeInTheDocument();
     expect(within(dayOf(/^Tuesday/)).getAllByText(/^Photo added/)).toHaveLength(2);
     expect(within(dayOf(/^Tuesday/)).getAllByText(/Tessa Bench/)).toHaveLength(3);
@@ -47,7 +74,10 @@ describe('timeline', () => {
     const closeup = within(link).getByRole('img', { name: 'Close-up of the marked spot' });
     expect(closeup).toHaveAttribute('src', '/api/findings/12/closeup');
     expect(closeup).toHaveAttribute('loading', 'lazy');
-    expect(screen.getAllByRole('link', { name: 'Open the photo' })[0]).toHaveAttribute('href', '/restorations/7/photos/3');
+    expect(screen.getAllByRole('link', { name: 'Open the photo' })[0]).toHaveAttribute(
+      'href',
+      '/restorations/7/photos/3',
+    );
   });
 
   it('when kind chips are pressed, then only those kinds show, and pressing Everything brings all back', async () => {

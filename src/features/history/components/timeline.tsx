@@ -26,7 +26,11 @@ export function Timeline({ restorationId }: { restorationId: number }) {
   if (events.isPending) return <Loading label="Fetching the history…" />;
   if (events.isError) return <ErrorState error={events.error} onRetry={() => events.refetch()} />;
   if (events.data.length === 0)
-    return <EmptyState title="Nothing has happened yet">Photos, findings, parts and stages appear here as the work goes on.</EmptyState>;
+    return (
+      <EmptyState title="Nothing has happened yet">
+        Photos, findings, parts and stages appear here as the work goes on.
+      </EmptyState>
+    );
 
   const toggle = (kind: Kind) =>
     setShown((current) => {
@@ -39,9 +43,17 @@ export function Timeline({ restorationId }: { restorationId: number }) {
 
   return (
     <div className="space-y-4">
-      <KindFilter counts={counts} shown={shown} total={events.data.length} onToggle={toggle} onClear={() => setShown(new Set())} />
+      <KindFilter
+        counts={counts}
+        shown={shown}
+        total={events.data.length}
+        onToggle={toggle}
+        onClear={() => setShown(new Set())}
+      />
       <p aria-live="polite" className="text-sm text-ink-soft">
-        {shown.size === 0 ? `${showing} ${showing === 1 ? 'event' : 'events'}` : `Showing ${showing} of ${events.data.length} events`}
+        {shown.size === 0
+          ? `${showing} ${showing === 1 ? 'event' : 'events'}`
+          : `Showing ${showing} of ${events.data.length} events`}
       </p>
       <ol className="space-y-2">
         {groups.map((group) => (

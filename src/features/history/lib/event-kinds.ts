@@ -42,7 +42,12 @@ export const eventKindLabels: Record<Kind, string> = {
 export const eventKinds = timelineKinds;
 
 /** Events about one finding: they show its close-up and link to it. */
-export const findingKinds: ReadonlySet<Kind> = new Set<Kind>(['finding-opened', 'finding-status', 'question-asked', 'question-resolved']);
+export const findingKinds: ReadonlySet<Kind> = new Set<Kind>([
+  'finding-opened',
+  'finding-status',
+  'question-asked',
+  'question-resolved',
+]);
 
 /** How many events of each kind, for the chips' counts. */
 export function countByKind(events: Pick<TimelineEvent, 'kind'>[]): Record<Kind, number> {

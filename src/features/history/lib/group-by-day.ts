@@ -14,7 +14,10 @@ export { dayLabel, formatTimeOfDay as timeOfDay };
  * Groups events (already newest first) by the calendar day they happened on, in the reader's time zone unless one
  * is given. Events whose time cannot be read are left out rather than filed under a wrong day.
  */
-export function groupByDay<T extends { at: string }>(events: T[], options: { timeZone?: string; now?: Date } = {}): DayGroup<T>[] {
+export function groupByDay<T extends { at: string }>(
+  events: T[],
+  options: { timeZone?: string; now?: Date } = {},
+): DayGroup<T>[] {
   const groups: DayGroup<T>[] = [];
   const byDay = new Map<string, DayGroup<T>>();
   for (const event of events) {

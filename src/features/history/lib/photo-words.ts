@@ -1,7 +1,6 @@
 import { phaseLabels, viewLabels, type Photo } from '../../../../shared/schemas/photos';
 import { formatMediumDate } from '../../../lib/format';
 
-
 /** The day a photo was taken (or, failing the camera's word, uploaded): "24 Nov 2026". */
 export function photoDay(photo: Pick<Photo, 'takenAt' | 'uploadedAt'>): string {
   // Pickers name photos the same way in every locale (British English, the product's own words).

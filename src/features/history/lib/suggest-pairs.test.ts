@@ -3,12 +3,20 @@ import type { Photo } from '../../../../shared/schemas/photos';
 import { makePhoto } from '../../../testing/photo-fixtures';
 import { latest, suggestPairs } from './suggest-pairs';
 
-const at = (id: number, view: Photo['view'], phase: Photo['phase'], takenAt: string | null, uploadedAt = '2026-11-20T09:00:00.000Z') =>
-  makePhoto(id, { view, phase, takenAt, uploadedAt });
+const at = (
+  id: number,
+  view: Photo['view'],
+  phase: Photo['phase'],
+  takenAt: string | null,
+  uploadedAt = '2026-11-20T09:00:00.000Z',
+) => makePhoto(id, { view, phase, takenAt, uploadedAt });
 
 describe('suggestPairs', () => {
   it('when a view has a before and an after photo, then they are paired', () => {
-    const pairs = suggestPairs([at(1, 'top', 'before', '2026-11-02T10:00:00Z'), at(2, 'top', 'after', '2026-11-30T10:00:00Z')]);
+    const pairs = suggestPairs([
+      at(1, 'top', 'before', '2026-11-02T10:00:00Z'),
+      at(2, 'top', 'after', '2026-11-30T10:00:00Z'),
+    ]);
     expect(pairs.map((p) => [p.view, p.before.id, p.after.id])).toEqual([['top', 1, 2]]);
   });
 
@@ -49,6 +57,8 @@ describe('suggestPairs', () => {
   });
 
   it('when two photos share a time, then the later upload counts as the latest', () => {
-    expect(latest([at(8, 'top', 'after', '2026-12-01T10:00:00Z'), at(9, 'top', 'after', '2026-12-01T10:00:00Z')])?.id).toBe(9);
+    expect(
+      latest([at(8, 'top', 'after', '2026-12-01T10:00:00Z'), at(9, 'top', 'after', '2026-12-01T10:00:00Z')])?.id,
+    ).toBe(9);
   });
 });

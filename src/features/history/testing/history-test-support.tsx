@@ -4,8 +4,16 @@ import { fakeApi, ok } from '../../../testing/fake-api';
 /** An event as the API answers it; tests override what they care about. */
 export function makeEvent(id: number, overrides: Partial<TimelineEvent> = {}): TimelineEvent {
   return {
-    id, kind: 'stage-changed', at: '2026-11-24T12:00:00.000Z', actorName: 'Tessa Bench', summary: `Event ${id}`,
-    photoId: null, findingId: null, thumbUrl: null, caution: false, ...overrides,
+    id,
+    kind: 'stage-changed',
+    at: '2026-11-24T12:00:00.000Z',
+    actorName: 'Tessa Bench',
+    summary: `Event ${id}`,
+    photoId: null,
+    findingId: null,
+    thumbUrl: null,
+    caution: false,
+    ...overrides,
   };
 }
 

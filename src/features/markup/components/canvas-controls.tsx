@@ -45,12 +45,27 @@ export function CanvasControls({
       {!readOnly && (
         <>
           <MarkupToolbar tool={tool} canCreate={canCreate} onChange={onTool} />
-          <button type="button" onClick={onUndo} disabled={!canUndo} aria-keyshortcuts="Control+Z Meta+Z" title="Undo (Ctrl+Z)" className={controlClass}>
+          <button
+            type="button"
+            onClick={onUndo}
+            disabled={!canUndo}
+            aria-keyshortcuts="Control+Z Meta+Z"
+            title="Undo (Ctrl+Z)"
+            className={controlClass}
+          >
             Undo
           </button>
           {canCreate && onKeepTool && (
-            <label className="hidden min-h-11 items-center gap-1.5 text-sm text-ink-soft md:flex" title="After a finding is saved, stay on the tool instead of going back to Select">
-              <input type="checkbox" checked={keepTool} onChange={(e) => onKeepTool(e.target.checked)} className="size-4 accent-glow" />
+            <label
+              className="hidden min-h-11 items-center gap-1.5 text-sm text-ink-soft md:flex"
+              title="After a finding is saved, stay on the tool instead of going back to Select"
+            >
+              <input
+                type="checkbox"
+                checked={keepTool}
+                onChange={(e) => onKeepTool(e.target.checked)}
+                className="size-4 accent-glow"
+              />
               Keep tool
             </label>
           )}
@@ -58,12 +73,27 @@ export function CanvasControls({
       )}
       <ZoomControls scale={scale} onZoomIn={onZoomIn} onZoomOut={onZoomOut} onFit={onFit} onActualSize={onActualSize} />
       <div className="ml-auto flex items-center gap-1">
-        <button type="button" aria-expanded={panel === 'legend'} onClick={() => onPanel('legend')} className={controlClass}>
+        <button
+          type="button"
+          aria-expanded={panel === 'legend'}
+          onClick={() => onPanel('legend')}
+          className={controlClass}
+        >
           Legend
         </button>
         {!readOnly && (
-          <button type="button" aria-expanded={panel === 'help'} aria-keyshortcuts="?" title="Keys and gestures (?)" onClick={() => onPanel('help')} className={`${controlClass} max-md:hidden`}>
-            Keys <kbd aria-hidden="true" className="rounded border border-rule px-1 font-mono text-xs text-ink-soft">?</kbd>
+          <button
+            type="button"
+            aria-expanded={panel === 'help'}
+            aria-keyshortcuts="?"
+            title="Keys and gestures (?)"
+            onClick={() => onPanel('help')}
+            className={`${controlClass} max-md:hidden`}
+          >
+            Keys{' '}
+            <kbd aria-hidden="true" className="rounded border border-rule px-1 font-mono text-xs text-ink-soft">
+              ?
+            </kbd>
           </button>
         )}
       </div>

@@ -4,7 +4,15 @@ import { findingLabel } from '../lib/finding-label';
 import { MarkerGlyph } from './marker-glyph';
 
 /** The photo's findings as a list, in number order: the way to reach each one by keyboard or screen reader. */
-export function FindingsList({ items, selectedId, onPick }: { items: readonly Finding[]; selectedId?: number; onPick: (id: number) => void }) {
+export function FindingsList({
+  items,
+  selectedId,
+  onPick,
+}: {
+  items: readonly Finding[];
+  selectedId?: number;
+  onPick: (id: number) => void;
+}) {
   const ordered = [...items].sort((a, b) => a.number - b.number);
   return (
     <ol aria-label="Findings on this photo" className="divide-y divide-rule rounded-xl border border-rule bg-panel">

@@ -5,7 +5,17 @@ import { controlClass, floatingPanelClass } from '../lib/control-styles';
  * A non-modal panel over the stage with a heading and a Close button, which takes focus when it opens. Escape
  * (or the key that opened it) closes it without reaching the canvas.
  */
-export function FloatingPanel({ title, closeKeys = [], onClose, children }: { title: string; closeKeys?: string[]; onClose: () => void; children: ReactNode }) {
+export function FloatingPanel({
+  title,
+  closeKeys = [],
+  onClose,
+  children,
+}: {
+  title: string;
+  closeKeys?: string[];
+  onClose: () => void;
+  children: ReactNode;
+}) {
   const headingId = useId();
   const close = useRef<HTMLButtonElement>(null);
   useEffect(() => close.current?.focus(), []);

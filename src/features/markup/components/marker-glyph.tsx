@@ -36,11 +36,25 @@ export function MarkerGlyph({
           {shape === 'ring' && <circle r={R * RING_HOLE} fill={PAPER} />}
         </>
       ) : (
-        <path d={d} fill={shape === 'ring' ? 'none' : 'currentColor'} fillOpacity={0.18} stroke="currentColor" strokeWidth={2.5} strokeLinejoin="round" />
+        <path
+          d={d}
+          fill={shape === 'ring' ? 'none' : 'currentColor'}
+          fillOpacity={0.18}
+          stroke="currentColor"
+          strokeWidth={2.5}
+          strokeLinejoin="round"
+        />
       )}
       {shape === 'ring' && !fill && <circle r={R} fill="none" stroke="currentColor" strokeWidth={5} />}
       {text && (
-        <text y={labelDrop(shape, R)} fill={textFill} fontSize={text.length === 1 ? 13 : text.length === 2 ? 10 : 8} fontWeight={700} textAnchor="middle" dominantBaseline="central">
+        <text
+          y={labelDrop(shape, R)}
+          fill={textFill}
+          fontSize={text.length === 1 ? 13 : text.length === 2 ? 10 : 8}
+          fontWeight={700}
+          textAnchor="middle"
+          dominantBaseline="central"
+        >
           {text}
         </text>
       )}

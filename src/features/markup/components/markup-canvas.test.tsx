@@ -9,14 +9,25 @@ import { MarkupCanvas, type MarkupCanvasProps } from './markup-canvas';
 
 // The stage measures 800×600 at the viewport's top-left; the photo is 4000×3000, so "Fit" (16 px clear all round) is 568/3000 = 19 %.
 beforeEach(() => {
-  vi.spyOn(HTMLElement.prototype, 'getBoundingClientRect').mockReturnValue(DOMRect.fromRect({ x: 0, y: 0, width: 800, height: 600 }));
+  vi.spyOn(HTMLElement.prototype, 'getBoundingClientRect').mockReturnValue(
+    DOMRect.fromRect({ x: 0, y: 0, width: 800, height: 600 }),
+  );
 });
 afterEach(() => {
   cleanup();
   vi.restoreAllMocks();
 });
 
-const items = [makeFinding(1, { points: [{ x: 0.5, y: 0.5 }] }), makeFinding(2, { shape: 'rect', points: [{ x: 0.1, y: 0.1 }, { x: 0.2, y: 0.2 }] })];
+const items = [
+  makeFinding(1, { points: [{ x: 0.5, y: 0.5 }] }),
+  makeFinding(2, {
+    shape: 'rect',
+    points: [
+      { x: 0.1, y: 0.1 },
+      { x: 0.2, y: 0.2 },
+    ],
+  }),
+];
 
 function renderCanvas(overrides: Partial<MarkupCanvasProps> = {}) {
   const props: MarkupCanvasProps = {
@@ -32,7 +43,13 @@ function renderCanvas(overrides: Partial<MarkupCanvasProps> = {}) {
     ...overrides,
   };
   const utils = render(<MarkupCanvas {...props} />);
-  return { ...utils, props, user: userEvent.setup(), stage: screen.getByTestId('markup-stage'), zoom: () => screen.getByRole('status', { name: 'Zoom level' }) };
+  return {
+    ...utils,
+    props,
+    user: userEvent.setup(),
+    stage: screen.getByTestId('markup-stage'),
+    zoom: () => screen.getByRole('status', { name: 'Zoom level' }),
+  };
 }
 
 describe('MarkupCanvas toolbar', () => {
@@ -60,7 +77,9 @@ describe('MarkupCanvas toolbar', () => {
     expect(screen.getByRole('button', { name: 'Freehand' })).toHaveFocus();
     await user.tab();
     expect(screen.getByRole('button', { name: 'Circle' })).not.toHaveFocus();
-    expect(screen.getByRole('toolbar', { name: 'Markup tools' })).not.toContainElement(document.activeElement as HTMLElement);
+    expect(screen.getByRole('toolbar', { name: 'Markup tools' })).not.toContainElement(
+      document.activeElement as HTMLElement,
+    );
   });
 
   it('when the person may not create findings, then only Select is offered and drawing keys do nothing', async () => {
@@ -84,8 +103,14 @@ describe('MarkupCanvas read-only', () => {
     expect(zoom()).toHaveTextContent('19 %');
   });
 
-  it('when a reader\'s canvas is asked to zoom onto a part, then it zooms past Fit onto it, still without tools', async () => {
-    const { zoom } = renderCanvas({ canCreate: false, canEdit: () => false, focusId: 2, selectedId: 2, focusWhenReading: true });
+  it("when a reader's canvas is asked to zoom onto a part, then it zooms past Fit onto it, still without tools", async () => {
+    const { zoom } = renderCanvas({
+      canCreate: false,
+      canEdit: () => false,
+      focusId: 2,
+      selectedId: 2,
+      focusWhenReading: true,
+    });
     expect(screen.queryByRole('button', { name: 'Select' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Undo/ })).not.toBeInTheDocument();
     // Finding 2 is a box of 400 × 300 photo px; a focused box fills half the 800 × 600 stage, worked by hand:

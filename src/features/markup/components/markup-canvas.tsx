@@ -54,7 +54,10 @@ export interface MarkupCanvasProps extends CommandCallbacks {
 export function MarkupCanvas(props: MarkupCanvasProps) {
   const { items, selectedId, focusId, focusWhenReading, canCreate, canEdit, onSelect, pendingMark } = props;
   const { ref, size } = useContainerSize<HTMLDivElement>();
-  const imageSize = useMemo(() => ({ width: props.imageSize.width, height: props.imageSize.height }), [props.imageSize.width, props.imageSize.height]);
+  const imageSize = useMemo(
+    () => ({ width: props.imageSize.width, height: props.imageSize.height }),
+    [props.imageSize.width, props.imageSize.height],
+  );
   const photo = usePhotoImage(props.imageUrl, props.onImageError);
   const firstFrame = useRef(props.onFirstFrame);
   useEffect(() => {
@@ -100,7 +103,15 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     onResult,
     onClick: (id) => onSelect(id ?? undefined),
   });
-  const crosshair = useCrosshair({ tool, image: imageSize, stage: size, view, marks: commands.marks, run: commands.run, onSelect });
+  const crosshair = useCrosshair({
+    tool,
+    image: imageSize,
+    stage: size,
+    view,
+    marks: commands.marks,
+    run: commands.run,
+    onSelect,
+  });
   const closePanel = () => {
     setPanel(undefined);
     ref.current?.focus();
@@ -149,7 +160,11 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
   );
 
   return (
-    <div className="flex h-full min-h-0 flex-col overflow-hidden rounded-xl border border-rule bg-panel" onKeyDown={keys.onKeyDown} onKeyUp={keys.onKeyUp}>
+    <div
+      className="flex h-full min-h-0 flex-col overflow-hidden rounded-xl border border-rule bg-panel"
+      onKeyDown={keys.onKeyDown}
+      onKeyUp={keys.onKeyUp}
+    >
       <CanvasControls
         readOnly={readOnly}
         tool={tool}
@@ -188,14 +203,25 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
           {...pointer.handlers}
         >
           {size && view.view && (
-            <MarkupStage size={size} pixelRatio={pixelRatio} image={photo.image} imageSize={imageSize} view={view.view} marks={commands.marks} scene={scene} />
+            <MarkupStage
+              size={size}
+              pixelRatio={pixelRatio}
+              image={photo.image}
+              imageSize={imageSize}
+              view={view.view}
+              marks={commands.marks}
+              scene={scene}
+            />
           )}
           {crosshair.shown && crosshair.state && view.view && (
             <CrosshairMark at={crosshair.state.at} anchor={crosshair.state.anchor} view={view.view} image={imageSize} />
           )}
         </div>
         {photo.status !== 'loaded' && (
-          <p role="status" className="pointer-events-none absolute bottom-3 left-1/2 -translate-x-1/2 rounded-full bg-panel/90 px-3 py-1 text-sm">
+          <p
+            role="status"
+            className="pointer-events-none absolute bottom-3 left-1/2 -translate-x-1/2 rounded-full bg-panel/90 px-3 py-1 text-sm"
+          >
             {photo.status === 'error' ? 'The photo did not load. Reload the page to try again.' : 'Loading the photo…'}
           </p>
         )}

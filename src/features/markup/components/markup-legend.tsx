@@ -32,8 +32,9 @@ export function MarkupLegend({ onClose }: { onClose: () => void }) {
         })}
       </ul>
       <p className="mt-3 text-sm text-ink-soft">
-        Each finding&apos;s number is on its marker, with the status glyph beside it. A pin is the marker itself; a circle, rectangle,
-        arrow or freehand line is drawn in its status colour and carries the marker. Markers keep their size at every zoom.
+        Each finding&apos;s number is on its marker, with the status glyph beside it. A pin is the marker itself; a
+        circle, rectangle, arrow or freehand line is drawn in its status colour and carries the marker. Markers keep
+        their size at every zoom.
       </p>
     </FloatingPanel>
   );

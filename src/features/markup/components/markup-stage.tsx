@@ -31,7 +31,14 @@ export function MarkupStage({
   return (
     <Stage key={pixelRatio} width={size.width} height={size.height} listening={false}>
       <PhotoLayer image={image} imageSize={imageSize} view={view} />
-      <FindingsLayer marks={marks} view={view} imageSize={imageSize} stage={size} hiddenId={scene.draft?.id} pixelRatio={pixelRatio} />
+      <FindingsLayer
+        marks={marks}
+        view={view}
+        imageSize={imageSize}
+        stage={size}
+        hiddenId={scene.draft?.id}
+        pixelRatio={pixelRatio}
+      />
       <OverlayLayer scene={scene} view={view} imageSize={imageSize} />
     </Stage>
   );

@@ -18,7 +18,15 @@ const moves: Record<string, (i: number, n: number) => number> = {
  * buttons, Enter or Space picks one; each tool's letter works from anywhere on the canvas. People who may not
  * create findings see Select only.
  */
-export function MarkupToolbar({ tool, canCreate, onChange }: { tool: Tool; canCreate: boolean; onChange: (tool: Tool) => void }) {
+export function MarkupToolbar({
+  tool,
+  canCreate,
+  onChange,
+}: {
+  tool: Tool;
+  canCreate: boolean;
+  onChange: (tool: Tool) => void;
+}) {
   const shown = canCreate ? tools : tools.filter((t) => t === 'select');
   const buttons = useRef<(HTMLButtonElement | null)[]>([]);
   const onKeyDown = (e: KeyboardEvent) => {
@@ -49,7 +57,10 @@ export function MarkupToolbar({ tool, canCreate, onChange }: { tool: Tool; canCr
             <ToolIcon tool={t} />
             <span className="sr-only md:not-sr-only">{toolLabels[t]}</span>
             {key && (
-              <kbd aria-hidden="true" className="hidden rounded border border-rule px-1 font-mono text-xs text-ink-soft md:inline">
+              <kbd
+                aria-hidden="true"
+                className="hidden rounded border border-rule px-1 font-mono text-xs text-ink-soft md:inline"
+              >
                 {key}
               </kbd>
             )}

@@ -30,7 +30,10 @@ export function NewFindingForm({
   /** Shown under the reference as it is typed (the known references, an existing finding for the same part). */
   referenceHelp?: (typed: string) => ReactNode;
 }) {
-  const { register, handleSubmit, formState, watch } = useForm<NewFindingValues>({ resolver: zodResolver(newFindingSchema), defaultValues: newFindingDefaults });
+  const { register, handleSubmit, formState, watch } = useForm<NewFindingValues>({
+    resolver: zodResolver(newFindingSchema),
+    defaultValues: newFindingDefaults,
+  });
   const errors = formState.errors;
   return (
     <form
@@ -49,8 +52,21 @@ export function NewFindingForm({
       <Field label="Title" hint="What is wrong, or what to check" error={errors.title?.message}>
         {(a) => <input {...a} {...register('title')} autoFocus maxLength={140} className={inputClass} />}
       </Field>
-      <Field label="Component reference" hint="As the schematic prints it, e.g. C27, R20 or V5" error={errors.componentRef?.message}>
-        {(a) => <input {...a} {...register('componentRef')} list={referenceListId} maxLength={20} autoComplete="off" className={`${inputClass} font-mono`} />}
+      <Field
+        label="Component reference"
+        hint="As the schematic prints it, e.g. C27, R20 or V5"
+        error={errors.componentRef?.message}
+      >
+        {(a) => (
+          <input
+            {...a}
+            {...register('componentRef')}
+            list={referenceListId}
+            maxLength={20}
+            autoComplete="off"
+            className={`${inputClass} font-mono`}
+          />
+        )}
       </Field>
       {refNotice?.(watch('componentRef') ?? '')}
       {referenceHelp?.(watch('componentRef') ?? '')}

@@ -1,7 +1,16 @@
 import { useCallback, useEffect, useRef, type PointerEvent as ReactPointerEvent, type RefObject } from 'react';
 import { stagePoint, stageToImage, type ImageSize, type StagePoint, type TouchPair } from '../model/coordinates';
 import { grabAt, type Grab } from '../model/hit-test';
-import { DRAG_THRESHOLD_PX, idle, transition, type Draft, type Tool, type ToolEvent, type ToolResult, type ToolState } from '../model/tools';
+import {
+  DRAG_THRESHOLD_PX,
+  idle,
+  transition,
+  type Draft,
+  type Tool,
+  type ToolEvent,
+  type ToolResult,
+  type ToolState,
+} from '../model/tools';
 import type { Mark } from '../lib/marks';
 import { pressMode } from '../lib/press-mode';
 import { wheelZoomFactor } from '../lib/zoom';
@@ -86,7 +95,8 @@ export function useCanvasPointer(ref: RefObject<HTMLElement | null>, env: Pointe
       const e = latest.current;
       const view = e.view.latest();
       if (!view) return;
-      const grab = e.tool === 'select' && !e.spaceHeld ? grabAt(e.marks, e.selectedId ?? null, at, view, e.image) : null;
+      const grab =
+        e.tool === 'select' && !e.spaceHeld ? grabAt(e.marks, e.selectedId ?? null, at, view, e.image) : null;
       setCursor(cursorFor({ ...e, grab, insideImage: insideImage(stageToImage(at, view, e.image)) }));
     });
   };
@@ -133,7 +143,8 @@ export function useCanvasPointer(ref: RefObject<HTMLElement | null>, env: Pointe
       if (next) e.view.pinch(current.pair, next);
       if (next) current.pair = next;
     } else if (current.kind === 'pan') {
-      if (!current.moved && Math.hypot(at.x - current.start.x, at.y - current.start.y) >= DRAG_THRESHOLD_PX) current.moved = true;
+      if (!current.moved && Math.hypot(at.x - current.start.x, at.y - current.start.y) >= DRAG_THRESHOLD_PX)
+        current.moved = true;
       if (current.moved) {
         e.view.panBy(at.x - current.last.x, at.y - current.last.y);
         current.last = at;
@@ -171,7 +182,10 @@ export function useCanvasPointer(ref: RefObject<HTMLElement | null>, env: Pointe
     const onWheel = (ev: WheelEvent) => {
       ev.preventDefault();
       const rect = node.getBoundingClientRect();
-      latest.current.view.zoomBy(wheelZoomFactor(ev.deltaY, ev.deltaMode, ev.ctrlKey), stagePoint(ev.clientX - rect.left, ev.clientY - rect.top));
+      latest.current.view.zoomBy(
+        wheelZoomFactor(ev.deltaY, ev.deltaMode, ev.ctrlKey),
+        stagePoint(ev.clientX - rect.left, ev.clientY - rect.top),
+      );
     };
     node.addEventListener('wheel', onWheel, { passive: false });
     return () => {

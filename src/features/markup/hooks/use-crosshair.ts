@@ -2,7 +2,15 @@ import { useCallback, useEffect, useRef, useState } from 'react';
 import type { Mark } from '../lib/marks';
 import type { Command } from '../model/commands';
 import type { ImageSize, StageSize } from '../model/coordinates';
-import { crosshairDraft, crosshairEnter, describeCrosshair, followCrosshair, moveCrosshair, startCrosshair, type CrosshairState } from '../model/crosshair';
+import {
+  crosshairDraft,
+  crosshairEnter,
+  describeCrosshair,
+  followCrosshair,
+  moveCrosshair,
+  startCrosshair,
+  type CrosshairState,
+} from '../model/crosshair';
 import type { Tool } from '../model/tools';
 import type { ViewControls } from './use-view';
 
@@ -105,7 +113,8 @@ export function useCrosshair(env: CrosshairEnv): CrosshairControls {
       commit(result.state);
       if (result.kind === 'create') e.run(result.command);
       else if (result.kind === 'select') e.onSelect(result.id ?? undefined);
-      else if (result.kind === 'too-small') setDescription('Too small to see: move the crosshair further from where it started, then press Enter.');
+      else if (result.kind === 'too-small')
+        setDescription('Too small to see: move the crosshair further from where it started, then press Enter.');
     },
     cancel: () => {
       const at = stateRef.current;

@@ -33,7 +33,10 @@ interface Env extends CommandCallbacks {
  * the optimistic update, or back after a refusal). `onSaved` hears when a mark drawn here has become a finding.
  */
 export function useMarkupCommands(env: Env, onSaved?: (id: number) => void) {
-  const [pending, setPending] = useState<{ items: readonly Finding[]; points: ReadonlyMap<number, readonly ImagePoint[]> }>();
+  const [pending, setPending] = useState<{
+    items: readonly Finding[];
+    points: ReadonlyMap<number, readonly ImagePoint[]>;
+  }>();
   const shown = pending && pending.items === env.items ? pending.points : undefined;
   const base = useMemo(() => env.items.map(toMark), [env.items]);
   const marks = useMemo(() => {
@@ -75,7 +78,10 @@ export function useMarkupCommands(env: Env, onSaved?: (id: number) => void) {
         e.onDelete(effect.id);
         return undefined;
       case 'create':
-        if (!effect.command.fields) return Promise.resolve(e.onCreate({ shape: effect.command.shape, points: plainPoints(effect.command.points) }) ?? undefined);
+        if (!effect.command.fields)
+          return Promise.resolve(
+            e.onCreate({ shape: effect.command.shape, points: plainPoints(effect.command.points) }) ?? undefined,
+          );
         return e.onUndo ? Promise.resolve(e.onUndo(effect.command) ?? undefined) : undefined;
       case 'fields':
         void e.onUndo?.(effect.command);
@@ -114,7 +120,11 @@ export function useMarkupCommands(env: Env, onSaved?: (id: number) => void) {
     e.onDelete(id);
     if (e.onUndo) {
       const { title, componentRef, kind, severity, status, dismissReason, ownerVisible } = finding;
-      record({ type: 'deleted', ...toGeometry(finding), fields: { title, componentRef, kind, severity, status, dismissReason, ownerVisible } });
+      record({
+        type: 'deleted',
+        ...toGeometry(finding),
+        fields: { title, componentRef, kind, severity, status, dismissReason, ownerVisible },
+      });
       const inverse = history.current.inverses.at(-1);
       if (inverse) deletedIds.current.set(inverse, id);
     }

@@ -34,7 +34,8 @@ export interface KeyEnv {
   readonly crosshair: Pick<CrosshairControls, 'shown' | 'show' | 'move' | 'enter'>;
 }
 
-const typing = (target: EventTarget) => target instanceof HTMLElement && target.matches('input, textarea, select, [contenteditable="true"]');
+const typing = (target: EventTarget) =>
+  target instanceof HTMLElement && target.matches('input, textarea, select, [contenteditable="true"]');
 
 /**
  * The canvas's keys (`model/shortcuts.ts`), handled on the canvas's own element so they only act while focus is
@@ -62,7 +63,8 @@ export function useMarkupKeys(env: KeyEnv) {
     const action = actionForKey(e);
     const onStage = e.target === k.stage.current;
     // In the toolbar the arrow keys move between its buttons; Enter elsewhere presses what has focus.
-    if (!action || (action.type === 'nudge' && e.target instanceof Element && e.target.closest('[role="toolbar"]'))) return;
+    if (!action || (action.type === 'nudge' && e.target instanceof Element && e.target.closest('[role="toolbar"]')))
+      return;
     if (action.type === 'place' && !onStage) return;
     e.preventDefault();
     const id = k.selectedId;

@@ -1,6 +1,8 @@
 import { useEffect, useRef, useState } from 'react';
 
-export type PhotoImage = { readonly status: 'loading' | 'error'; readonly image?: HTMLImageElement } | { readonly status: 'loaded'; readonly image: HTMLImageElement };
+export type PhotoImage =
+  | { readonly status: 'loading' | 'error'; readonly image?: HTMLImageElement }
+  | { readonly status: 'loaded'; readonly image: HTMLImageElement };
 
 /**
  * Loads the display image for the canvas. No `crossOrigin`: the canvas only shows the photo and never reads its

@@ -11,7 +11,13 @@ const CLEARANCE_PX = 48;
  * lies over the mark, or the mark is above the window's top, pan the photo so the mark sits just clear of it. The
  * page scrolls only when the sheet would leave too little of the photo, and then it brings the photo up.
  */
-export function useRevealPending(stage: RefObject<HTMLElement | null>, cover: RefObject<HTMLElement | null> | undefined, pending: NewMark | undefined, view: ViewControls, image: ImageSize) {
+export function useRevealPending(
+  stage: RefObject<HTMLElement | null>,
+  cover: RefObject<HTMLElement | null> | undefined,
+  pending: NewMark | undefined,
+  view: ViewControls,
+  image: ImageSize,
+) {
   useEffect(() => {
     const node = stage.current;
     const point = pending?.points[pending.shape === 'pin' ? 0 : pending.points.length - 1];
@@ -22,12 +28,23 @@ export function useRevealPending(stage: RefObject<HTMLElement | null>, cover: Re
     const at = imageToStage(imagePoint(point.x, point.y), v, image);
     const clientX = rect.left + at.x;
     // Little of the photo above the sheet: bring the photo up to the window's top (towards the mark, never away).
-    if (sheet && sheet.height > 0 && clientX >= sheet.left && clientX <= sheet.right && rect.top > sheet.top - 3 * CLEARANCE_PX) {
+    if (
+      sheet &&
+      sheet.height > 0 &&
+      clientX >= sheet.left &&
+      clientX <= sheet.right &&
+      rect.top > sheet.top - 3 * CLEARANCE_PX
+    ) {
       window.scrollBy({ top: rect.top, behavior: 'instant' });
       rect = node.getBoundingClientRect();
     }
     const clientY = rect.top + at.y;
-    const covered = sheet && sheet.height > 0 && clientX >= sheet.left && clientX <= sheet.right && clientY > sheet.top - CLEARANCE_PX;
+    const covered =
+      sheet &&
+      sheet.height > 0 &&
+      clientX >= sheet.left &&
+      clientX <= sheet.right &&
+      clientY > sheet.top - CLEARANCE_PX;
     const bottom = Math.min(rect.bottom, covered ? sheet.top : rect.bottom);
     const top = Math.max(rect.top, 0);
     if (covered && bottom - top > 2 * CLEARANCE_PX) view.panBy(0, bottom - CLEARANCE_PX - clientY);

@@ -54,7 +54,10 @@ export function useView(image: ImageSize, stage: StageSize | undefined): ViewCon
     stageRef.current = stage;
     if (!stage) return;
     const current = viewRef.current;
-    commit(!current || fitted.current ? fitTransform(image, stage) : clampPan(current, image, stage), !current || fitted.current);
+    commit(
+      !current || fitted.current ? fitTransform(image, stage) : clampPan(current, image, stage),
+      !current || fitted.current,
+    );
   }, [stage, image, commit]);
 
   const apply = useCallback(

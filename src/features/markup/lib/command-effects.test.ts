@@ -9,7 +9,11 @@ const marks = [pin, circle];
 
 describe('effectOf', () => {
   it('when a finding is moved or resized, then the canvas sends its new points', () => {
-    expect(effectOf({ type: 'move', id: 2, dx: 0.1, dy: 0 }, marks)).toEqual({ kind: 'points', id: 2, points: [imagePoint(0.6, 0.5), imagePoint(0.7, 0.5)] });
+    expect(effectOf({ type: 'move', id: 2, dx: 0.1, dy: 0 }, marks)).toEqual({
+      kind: 'points',
+      id: 2,
+      points: [imagePoint(0.6, 0.5), imagePoint(0.7, 0.5)],
+    });
     expect(effectOf({ type: 'resize', id: 2, handle: 'rim', to: imagePoint(0.5, 0.7) }, marks)).toEqual({
       kind: 'points',
       id: 2,
@@ -22,7 +26,12 @@ describe('effectOf', () => {
   });
 
   it('when a create carries fields, or an edit carries no points, then it is left to the page', () => {
-    const create = { type: 'create' as const, shape: 'pin' as const, points: [imagePoint(0.1, 0.1)], fields: { title: 'R5 charred' } };
+    const create = {
+      type: 'create' as const,
+      shape: 'pin' as const,
+      points: [imagePoint(0.1, 0.1)],
+      fields: { title: 'R5 charred' },
+    };
     expect(effectOf(create, marks)).toEqual({ kind: 'create', command: create });
     expect(effectOf({ type: 'edit', id: 1, fields: { title: 'x' } }, marks).kind).toBe('fields');
   });
@@ -49,6 +58,8 @@ describe('changeOf then undo', () => {
   });
 
   it('when a move goes nowhere, then nothing is recorded', () => {
-    expect(changeOf({ type: 'move', id: 1, dx: 0.5, dy: 0 }, [{ ...pin, points: [imagePoint(1, 0.5)] }])).toBeUndefined();
+    expect(
+      changeOf({ type: 'move', id: 1, dx: 0.5, dy: 0 }, [{ ...pin, points: [imagePoint(1, 0.5)] }]),
+    ).toBeUndefined();
   });
 });

@@ -3,7 +3,14 @@ import { imagePoint } from '../model/coordinates';
 import { cursorFor } from './cursor';
 
 const rect = { id: 1, shape: 'rect' as const, points: [imagePoint(0.1, 0.1), imagePoint(0.3, 0.3)] };
-const base = { tool: 'select' as const, spaceHeld: false, canCreate: true, insideImage: true, grab: null, canEdit: () => true };
+const base = {
+  tool: 'select' as const,
+  spaceHeld: false,
+  canCreate: true,
+  insideImage: true,
+  grab: null,
+  canEdit: () => true,
+};
 
 describe('cursorFor', () => {
   it('when over what a press would act on, then the cursor says so', () => {

@@ -19,7 +19,13 @@ export const styleOf = (status: Status): StatusStyle => styles[status];
 /** A finding's marker: the severity gives the shape, the status the fill and the badge glyph. */
 export function findingLook(number: number, status: Status, severity: Severity): MarkerLook {
   const style = styles[status];
-  return { shape: severityMarker(severity).shape, fill: style.colour, ink: style.ink, text: String(number), glyph: style.glyph };
+  return {
+    shape: severityMarker(severity).shape,
+    fill: style.colour,
+    ink: style.ink,
+    text: String(number),
+    glyph: style.glyph,
+  };
 }
 
 /** Font size for the number: three digits need a smaller size to stay inside the marker. */
@@ -39,7 +45,13 @@ export function drawMarker(pen: Pen, x: number, y: number, r: number, look: Mark
 export const badgeOffset = (r: number) => r * 0.95;
 
 /** The marker's outline with its halo and fill (and a ring's paper hole): everything but its number and badge. */
-export function drawMarkerBody(pen: Pen, x: number, y: number, r: number, look: Pick<MarkerLook, 'shape' | 'fill'>): void {
+export function drawMarkerBody(
+  pen: Pen,
+  x: number,
+  y: number,
+  r: number,
+  look: Pick<MarkerLook, 'shape' | 'fill'>,
+): void {
   traceOutline(pen, markerOutline(look.shape, r), x, y);
   pen.lineJoin = 'round';
   pen.strokeStyle = HALO_DARK;

@@ -18,7 +18,8 @@ const pin = (id: number, x: number, y: number, extra: Partial<Mark> = {}): Mark 
   severity: 'fault',
   ...extra,
 });
-const texts = (calls: ReturnType<typeof recordingPen>['calls']) => calls.filter((c) => c.op === 'fillText').map((c) => c.args[0]);
+const texts = (calls: ReturnType<typeof recordingPen>['calls']) =>
+  calls.filter((c) => c.op === 'fillText').map((c) => c.args[0]);
 
 describe('drawMarks', () => {
   it('when a pin is drawn, then its number and status glyph are written at its stage position', () => {
@@ -35,7 +36,10 @@ describe('drawMarks', () => {
   it('when the zoom changes, then a pin marker keeps its screen size', () => {
     const radii = [0.1, 1, 8].map((scale) => {
       const pen = recordingPen();
-      drawMarks(pen, [pin(1, 0.5, 0.5, { severity: 'cosmetic' })], { scale, x: 0, y: 0 }, image, { width: 1e6, height: 1e6 });
+      drawMarks(pen, [pin(1, 0.5, 0.5, { severity: 'cosmetic' })], { scale, x: 0, y: 0 }, image, {
+        width: 1e6,
+        height: 1e6,
+      });
       return pen.calls.find((c) => c.op === 'arc')?.args[2];
     });
     expect(radii).toEqual([PIN_MARKER_RADIUS_PX, PIN_MARKER_RADIUS_PX, PIN_MARKER_RADIUS_PX]);
@@ -43,7 +47,13 @@ describe('drawMarks', () => {
 
   it('when a rect is drawn, then it is stroked from its stage corners in the status colour and labelled at its top-left', () => {
     const pen = recordingPen();
-    const rect: Mark = { ...pin(2, 0, 0), shape: 'rect', points: [imagePoint(0.1, 0.2), imagePoint(0.3, 0.4)], status: 'repaired', severity: 'cosmetic' };
+    const rect: Mark = {
+      ...pin(2, 0, 0),
+      shape: 'rect',
+      points: [imagePoint(0.1, 0.2), imagePoint(0.3, 0.4)],
+      status: 'repaired',
+      severity: 'cosmetic',
+    };
     drawMarks(pen, [rect], fit, image, stage);
     expect(pen.calls.find((c) => c.op === 'rect')?.args).toEqual([80, 120, 160, 120]);
     expect(pen.calls.some((c) => c.op === 'stroke' && c.strokeStyle === statusStyle('repaired').colour)).toBe(true);

@@ -1,5 +1,12 @@
 import type { Shape } from '../../../../shared/schemas/findings';
-import { imagePoint, imageToStage, type ImageSize, type StagePoint, type StageSize, type ViewTransform } from '../model/coordinates';
+import {
+  imagePoint,
+  imageToStage,
+  type ImageSize,
+  type StagePoint,
+  type StageSize,
+  type ViewTransform,
+} from '../model/coordinates';
 import { anchor, bounds, circleRadius, type Geometry } from '../model/geometry';
 import { PIN_MARKER_RADIUS_PX } from '../model/hit-test';
 import { drawMarker, findingLook, styleOf, type MarkerLook } from './draw-marker';
@@ -29,16 +36,24 @@ export function addStroke(pen: Pen, shape: Shape, pts: readonly StagePoint[], ra
     pen.lineTo(b.x, b.y);
     // The head at the second point, pointing away from the tail.
     const angle = Math.atan2(b.y - a.y, b.x - a.x);
-    pen.moveTo(b.x - ARROW_HEAD_PX * Math.cos(angle - ARROW_HEAD_ANGLE), b.y - ARROW_HEAD_PX * Math.sin(angle - ARROW_HEAD_ANGLE));
+    pen.moveTo(
+      b.x - ARROW_HEAD_PX * Math.cos(angle - ARROW_HEAD_ANGLE),
+      b.y - ARROW_HEAD_PX * Math.sin(angle - ARROW_HEAD_ANGLE),
+    );
     pen.lineTo(b.x, b.y);
-    pen.lineTo(b.x - ARROW_HEAD_PX * Math.cos(angle + ARROW_HEAD_ANGLE), b.y - ARROW_HEAD_PX * Math.sin(angle + ARROW_HEAD_ANGLE));
+    pen.lineTo(
+      b.x - ARROW_HEAD_PX * Math.cos(angle + ARROW_HEAD_ANGLE),
+      b.y - ARROW_HEAD_PX * Math.sin(angle + ARROW_HEAD_ANGLE),
+    );
   } else if (shape === 'freehand') {
     pts.forEach((p, i) => (i === 0 ? pen.moveTo(p.x, p.y) : pen.lineTo(p.x, p.y)));
   }
 }
 
-const stagePoints = (g: Geometry, view: ViewTransform, image: ImageSize) => g.points.map((p) => imageToStage(p, view, image));
-const radiusOf = (g: Geometry, view: ViewTransform, image: ImageSize) => (g.shape === 'circle' ? circleRadius(g, image) * view.scale : 0);
+const stagePoints = (g: Geometry, view: ViewTransform, image: ImageSize) =>
+  g.points.map((p) => imageToStage(p, view, image));
+const radiusOf = (g: Geometry, view: ViewTransform, image: ImageSize) =>
+  g.shape === 'circle' ? circleRadius(g, image) * view.scale : 0;
 
 /** Paints a marker; the findings layer passes one that stamps cached bitmaps (`marker-sprites.ts`). */
 export type MarkerPainter = (pen: Pen, x: number, y: number, r: number, look: MarkerLook) => void;
@@ -70,11 +85,21 @@ export function drawGeometry(
 /** A finding in its status colour, numbered, with its severity marker. */
 export function drawMark(pen: Pen, mark: Mark, view: ViewTransform, image: ImageSize, dashed = false): void {
   const style = styleOf(mark.status);
-  drawGeometry(pen, mark, view, image, findingLook(mark.number, mark.status, mark.severity), { strokeColour: style.colour, halo: style.ink, dashed });
+  drawGeometry(pen, mark, view, image, findingLook(mark.number, mark.status, mark.severity), {
+    strokeColour: style.colour,
+    halo: style.ink,
+    dashed,
+  });
 }
 
 /** Whether any part of the mark (or its marker) can show on a stage of this size. */
-export function onStage(g: Geometry, view: ViewTransform, image: ImageSize, stage: StageSize, margin = CULL_MARGIN_PX): boolean {
+export function onStage(
+  g: Geometry,
+  view: ViewTransform,
+  image: ImageSize,
+  stage: StageSize,
+  margin = CULL_MARGIN_PX,
+): boolean {
   const b = bounds(g, image);
   const min = imageToStage(imagePoint(b.minX, b.minY), view, image);
   const max = imageToStage(imagePoint(b.maxX, b.maxY), view, image);

@@ -7,8 +7,16 @@ import { recordingPen } from '../testing/recording-pen';
 
 const image = { width: 1000, height: 1000 };
 const view = { scale: 1, x: 0, y: 0 };
-const rect: Mark = { id: 4, number: 4, shape: 'rect', points: [imagePoint(0.1, 0.1), imagePoint(0.3, 0.2)], status: 'observed', severity: 'wear' };
-const handleRects = (calls: ReturnType<typeof recordingPen>['calls']) => calls.filter((c) => c.op === 'rect' && c.args[2] === HANDLE_PX);
+const rect: Mark = {
+  id: 4,
+  number: 4,
+  shape: 'rect',
+  points: [imagePoint(0.1, 0.1), imagePoint(0.3, 0.2)],
+  status: 'observed',
+  severity: 'wear',
+};
+const handleRects = (calls: ReturnType<typeof recordingPen>['calls']) =>
+  calls.filter((c) => c.op === 'rect' && c.args[2] === HANDLE_PX);
 
 describe('drawOverlay', () => {
   it('when the selected finding may be edited, then its four corner handles are drawn; otherwise only its outline', () => {
@@ -36,7 +44,12 @@ describe('drawOverlay', () => {
 
   it('when a new mark is being drawn or awaits its title, then it is dashed in the accent colour', () => {
     const pen = recordingPen();
-    drawOverlay(pen, { pending: { shape: 'arrow', points: [imagePoint(0.1, 0.1), imagePoint(0.2, 0.2)] }, editable: false }, view, image);
+    drawOverlay(
+      pen,
+      { pending: { shape: 'arrow', points: [imagePoint(0.1, 0.1), imagePoint(0.2, 0.2)] }, editable: false },
+      view,
+      image,
+    );
     const dashes = pen.calls.filter((c) => c.op === 'setLineDash' && (c.args[0] as number[]).length > 0);
     expect(dashes.length).toBeGreaterThan(0);
     expect(pen.calls.some((c) => c.op === 'fillText' && c.args[0] === '+')).toBe(true);

@@ -29,7 +29,14 @@ export interface OverlayScene {
 
 /** A mark that is not a finding yet: dashed amber, its marker a "+". */
 export function drawNewMark(pen: Pen, g: Geometry, view: ViewTransform, image: ImageSize): void {
-  drawGeometry(pen, g, view, image, { shape: 'circle', fill: DRAFT_COLOUR, ink: '#000000', text: '+' }, { strokeColour: DRAFT_COLOUR, halo: '#000000', dashed: true });
+  drawGeometry(
+    pen,
+    g,
+    view,
+    image,
+    { shape: 'circle', fill: DRAFT_COLOUR, ink: '#000000', text: '+' },
+    { strokeColour: DRAFT_COLOUR, halo: '#000000', dashed: true },
+  );
 }
 
 function drawSelection(pen: Pen, g: Geometry, view: ViewTransform, image: ImageSize, editable: boolean): void {
@@ -43,7 +50,12 @@ function drawSelection(pen: Pen, g: Geometry, view: ViewTransform, image: ImageS
     const min = imageToStage(imagePoint(b.minX, b.minY), view, image);
     const max = imageToStage(imagePoint(b.maxX, b.maxY), view, image);
     pen.beginPath();
-    pen.rect(min.x - SELECTION_GAP_PX, min.y - SELECTION_GAP_PX, max.x - min.x + 2 * SELECTION_GAP_PX, max.y - min.y + 2 * SELECTION_GAP_PX);
+    pen.rect(
+      min.x - SELECTION_GAP_PX,
+      min.y - SELECTION_GAP_PX,
+      max.x - min.x + 2 * SELECTION_GAP_PX,
+      max.y - min.y + 2 * SELECTION_GAP_PX,
+    );
   }
   haloStroke(pen, DRAFT_COLOUR, 2, '#000000', true);
   if (!editable) return;

@@ -7,4 +7,5 @@ export const findingName = (f: Pick<Finding, 'number' | 'title' | 'componentRef'
   `${f.number}. ${f.title}${f.componentRef ? ` (${f.componentRef})` : ''}`;
 
 /** The full spoken name, with what the marker shows in colour, glyph and shape put into words. */
-export const findingLabel = (f: Labelled): string => `${findingName(f)} — ${statusLabels[f.status]}, ${severityLabels[f.severity].toLowerCase()}`;
+export const findingLabel = (f: Labelled): string =>
+  `${findingName(f)} — ${statusLabels[f.status]}, ${severityLabels[f.severity].toLowerCase()}`;

@@ -29,7 +29,20 @@ describe('markerOutline', () => {
   });
 
   it('when turned into an SVG path, then it starts with a move, visits every corner and closes', () => {
-    expect(outlinePath({ kind: 'polygon', points: [[0, -1], [1, 1], [-1, 1]] }, 10, 10)).toBe('M 10 9 L 11 11 L 9 11 Z');
+    expect(
+      outlinePath(
+        {
+          kind: 'polygon',
+          points: [
+            [0, -1],
+            [1, 1],
+            [-1, 1],
+          ],
+        },
+        10,
+        10,
+      ),
+    ).toBe('M 10 9 L 11 11 L 9 11 Z');
     expect(outlinePath({ kind: 'circle', r: 2 }, 0, 0)).toBe('M -2 0 A 2 2 0 1 0 2 0 A 2 2 0 1 0 -2 0 Z');
   });
 });

@@ -5,7 +5,9 @@ import type { MarkerShape } from '../../../lib/finding-legend';
  * legend so both draw the same shapes. `r` is the marker's nominal radius: each shape is sized so it looks about
  * as big as a circle of that radius, and its number fits inside.
  */
-export type Outline = { readonly kind: 'circle'; readonly r: number } | { readonly kind: 'polygon'; readonly points: readonly (readonly [number, number])[] };
+export type Outline =
+  | { readonly kind: 'circle'; readonly r: number }
+  | { readonly kind: 'polygon'; readonly points: readonly (readonly [number, number])[] };
 
 const polygon = (radius: number, degrees: readonly number[]): Outline => ({
   kind: 'polygon',

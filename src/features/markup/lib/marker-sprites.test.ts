@@ -18,7 +18,16 @@ function stubCanvases() {
 /** The layer's pen, which can also stamp bitmaps. */
 const layerPen = () => {
   const pen = recordingPen();
-  return Object.assign(pen, { drawImage: (...args: unknown[]) => pen.calls.push({ op: 'drawImage', args, fillStyle: pen.fillStyle, strokeStyle: pen.strokeStyle, lineWidth: pen.lineWidth }) });
+  return Object.assign(pen, {
+    drawImage: (...args: unknown[]) =>
+      pen.calls.push({
+        op: 'drawImage',
+        args,
+        fillStyle: pen.fillStyle,
+        strokeStyle: pen.strokeStyle,
+        lineWidth: pen.lineWidth,
+      }),
+  });
 };
 
 afterEach(() => vi.unstubAllGlobals());
@@ -28,7 +37,8 @@ describe('createSpritePainter', () => {
     const made = stubCanvases();
     const paint = createSpritePainter(2);
     const pen = layerPen();
-    for (let n = 1; n <= 1000; n++) paint(pen, n, 2 * n, 12, findingLook(n, n % 2 ? 'confirmed' : 'observed', n % 3 ? 'fault' : 'cosmetic'));
+    for (let n = 1; n <= 1000; n++)
+      paint(pen, n, 2 * n, 12, findingLook(n, n % 2 ? 'confirmed' : 'observed', n % 3 ? 'fault' : 'cosmetic'));
     expect(made.length).toBeLessThan(10);
     const texts = pen.calls.filter((c) => c.op === 'fillText').map((c) => c.args[0]);
     for (let n = 1; n <= 1000; n++) expect(texts).toContain(String(n));

@@ -17,7 +17,11 @@ const MAX_SPRITES = 400;
  */
 export function createSpritePainter(pixelRatio: number): MarkerPainter {
   const sprites = new Map<string, HTMLCanvasElement | null>();
-  const sprite = (key: string, half: number, paint: (pen: CanvasRenderingContext2D) => void): HTMLCanvasElement | null => {
+  const sprite = (
+    key: string,
+    half: number,
+    paint: (pen: CanvasRenderingContext2D) => void,
+  ): HTMLCanvasElement | null => {
     const cached = sprites.get(key);
     if (cached !== undefined) return cached;
     const canvas = document.createElement('canvas');
@@ -36,7 +40,9 @@ export function createSpritePainter(pixelRatio: number): MarkerPainter {
   return (pen, x, y, r, look) => {
     const draw = (pen as Partial<CanvasRenderingContext2D>).drawImage?.bind(pen);
     const half = halfExtent(r);
-    const body = draw ? sprite(`${r}|${look.shape}|${look.fill}`, half, (c) => drawMarkerBody(c, half, half, r, look)) : null;
+    const body = draw
+      ? sprite(`${r}|${look.shape}|${look.fill}`, half, (c) => drawMarkerBody(c, half, half, r, look))
+      : null;
     if (!draw || !body) {
       drawMarkerBody(pen, x, y, r, look);
     } else {
@@ -46,7 +52,9 @@ export function createSpritePainter(pixelRatio: number): MarkerPainter {
     if (!look.glyph) return;
     const bx = x + badgeOffset(r);
     const by = y - badgeOffset(r);
-    const badge = draw ? sprite(`badge|${look.glyph}`, BADGE_HALF, (c) => drawBadge(c, BADGE_HALF, BADGE_HALF, look.glyph!)) : null;
+    const badge = draw
+      ? sprite(`badge|${look.glyph}`, BADGE_HALF, (c) => drawBadge(c, BADGE_HALF, BADGE_HALF, look.glyph!))
+      : null;
     if (!draw || !badge) drawBadge(pen, bx, by, look.glyph);
     else draw(badge, snap(bx - BADGE_HALF), snap(by - BADGE_HALF), badge.width / pixelRatio, badge.height / pixelRatio);
   };

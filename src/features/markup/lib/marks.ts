@@ -20,4 +20,5 @@ export const toMark = (f: Pick<Finding, 'id' | 'shape' | 'points' | 'number' | '
 export const withPoints = (mark: Mark, points: readonly ImagePoint[]): Mark => ({ ...mark, points });
 
 /** Points as the API takes them: plain `{ x, y }`, no brand. */
-export const plainPoints = (points: readonly ImagePoint[]): { x: number; y: number }[] => points.map((p) => ({ x: p.x, y: p.y }));
+export const plainPoints = (points: readonly ImagePoint[]): { x: number; y: number }[] =>
+  points.map((p) => ({ x: p.x, y: p.y }));

@@ -5,7 +5,15 @@ import { pressMode, type PressInput } from './press-mode';
 
 const pin = { id: 5, shape: 'pin' as const, points: [imagePoint(0.5, 0.5)] };
 const body: Grab = { kind: 'body', item: pin };
-const base: PressInput = { tool: 'select', button: 0, spaceHeld: false, canCreate: true, insideImage: true, grab: null, editable: () => true };
+const base: PressInput = {
+  tool: 'select',
+  button: 0,
+  spaceHeld: false,
+  canCreate: true,
+  insideImage: true,
+  grab: null,
+  editable: () => true,
+};
 
 describe('pressMode', () => {
   it('when the middle button or Space is used, then the press pans whatever the tool', () => {

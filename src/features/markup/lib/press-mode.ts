@@ -6,7 +6,8 @@ import type { Tool } from '../model/tools';
  * resizing a finding the person may edit). `pan`: dragging moves the view; a press released without dragging
  * selects `click` (a number), clears the selection (`null`), or does nothing (`undefined`).
  */
-export type PressMode = { readonly kind: 'tool'; readonly grab: Grab | null } | { readonly kind: 'pan'; readonly click?: number | null };
+export type PressMode =
+  { readonly kind: 'tool'; readonly grab: Grab | null } | { readonly kind: 'pan'; readonly click?: number | null };
 
 export interface PressInput {
   readonly tool: Tool;

@@ -23,7 +23,12 @@ describe('wheelZoomFactor', () => {
   });
 
   it('when five mouse notches turn up from Fit (19 %), then the zoom stays below 50 %, not 800 %', () => {
-    for (const [delta, mode] of [[-100, 0], [-120, 0], [-3, 1], [-1, 2]] as const) {
+    for (const [delta, mode] of [
+      [-100, 0],
+      [-120, 0],
+      [-3, 1],
+      [-1, 2],
+    ] as const) {
       let scale = 0.19;
       for (let i = 0; i < 5; i++) scale *= wheelZoomFactor(delta, mode, false);
       expect(scale).toBeLessThan(0.5);

@@ -18,8 +18,18 @@ export interface FieldValues {
  * create, move and resize; undo answers with their inverses, which also need delete and edit.
  */
 export type Command =
-  | { readonly type: 'create'; readonly shape: Shape; readonly points: readonly ImagePoint[]; readonly fields?: FieldValues }
+  | {
+      readonly type: 'create';
+      readonly shape: Shape;
+      readonly points: readonly ImagePoint[];
+      readonly fields?: FieldValues;
+    }
   | { readonly type: 'delete'; readonly id: number }
   | { readonly type: 'move'; readonly id: number; readonly dx: number; readonly dy: number }
   | { readonly type: 'resize'; readonly id: number; readonly handle: Handle; readonly to: ImagePoint }
-  | { readonly type: 'edit'; readonly id: number; readonly fields?: FieldValues; readonly points?: readonly ImagePoint[] };
+  | {
+      readonly type: 'edit';
+      readonly id: number;
+      readonly fields?: FieldValues;
+      readonly points?: readonly ImagePoint[];
+    };

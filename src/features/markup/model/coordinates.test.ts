@@ -1,7 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import {
-  actualSize, clampPan, fitTransform, focusOn, imagePoint, imageToStage, pan, pinchZoom, stagePoint, stageToImage, zoomAt, zoomLimits,
-  type ImageSize, type StagePoint, type ViewTransform,
+  actualSize,
+  clampPan,
+  fitTransform,
+  focusOn,
+  imagePoint,
+  imageToStage,
+  pan,
+  pinchZoom,
+  stagePoint,
+  stageToImage,
+  zoomAt,
+  zoomLimits,
+  type ImageSize,
+  type StagePoint,
+  type ViewTransform,
 } from './coordinates';
 
 const landscape: ImageSize = { width: 4000, height: 3000 };
@@ -25,7 +38,12 @@ describe('stageToImage and imageToStage', () => {
   it('when an image point goes to the stage and back, then it returns within 1e-9', () => {
     for (const view of views)
       for (const image of images)
-        for (const p of [imagePoint(0, 0), imagePoint(1, 1), imagePoint(0.123456789, 0.987654321), imagePoint(0.5, 0.25)]) {
+        for (const p of [
+          imagePoint(0, 0),
+          imagePoint(1, 1),
+          imagePoint(0.123456789, 0.987654321),
+          imagePoint(0.5, 0.25),
+        ]) {
           const back = stageToImage(imageToStage(p, view, image), view, image);
           expect(Math.abs(back.x - p.x)).toBeLessThan(1e-9);
           expect(Math.abs(back.y - p.y)).toBeLessThan(1e-9);
@@ -54,7 +72,12 @@ describe('fitTransform', () => {
   it.each([
     ['a landscape photo on a phone', landscape, phone, { scale: 358 / 4000, x: 16, y: (844 - 268.5) / 2 }],
     ['a portrait photo on a phone', portrait, phone, { scale: 358 / 3000, x: 16, y: (844 - 4000 * (358 / 3000)) / 2 }],
-    ['a landscape photo on a 4K screen', landscape, screen4k, { scale: 2128 / 3000, x: (3840 - 4000 * (2128 / 3000)) / 2, y: 16 }],
+    [
+      'a landscape photo on a 4K screen',
+      landscape,
+      screen4k,
+      { scale: 2128 / 3000, x: (3840 - 4000 * (2128 / 3000)) / 2, y: 16 },
+    ],
     ['a portrait photo on a 4K screen', portrait, screen4k, { scale: 2128 / 4000, x: (3840 - 1596) / 2, y: 16 }],
   ])('when fitting %s, then the whole photo shows, centred, inside the padding', (_name, image, stage, expected) => {
     const view = fitTransform(image, stage, 16);
@@ -117,12 +140,18 @@ describe('zoomAt and zoomLimits', () => {
 
 describe('pinchZoom', () => {
   const view: ViewTransform = { scale: 1, x: 0, y: 0 };
-  const pair = (a: [number, number], b: [number, number]): [StagePoint, StagePoint] => [stagePoint(...a), stagePoint(...b)];
+  const pair = (a: [number, number], b: [number, number]): [StagePoint, StagePoint] => [
+    stagePoint(...a),
+    stagePoint(...b),
+  ];
 
   it('when two fingers spread to twice their distance about a still midpoint, then the scale doubles around it', () => {
     const next = pinchZoom(view, pair([90, 100], [110, 100]), pair([80, 100], [120, 100]));
     expect(next.scale).toBeCloseTo(2, 12);
-    expectPoint(stageToImage(stagePoint(100, 100), next, landscape), stageToImage(stagePoint(100, 100), view, landscape));
+    expectPoint(
+      stageToImage(stagePoint(100, 100), next, landscape),
+      stageToImage(stagePoint(100, 100), view, landscape),
+    );
   });
 
   it('when two fingers move together without spreading, then the image pans with them', () => {
@@ -135,7 +164,10 @@ describe('pinchZoom', () => {
     const next = pair([300, 50], [600, 350]);
     const zoomed = pinchZoom(view, prev, next);
     expect(zoomed.scale).toBeCloseTo(3, 12);
-    expectPoint(imageToStage(stageToImage(stagePoint(150, 150), view, landscape), zoomed, landscape), { x: 450, y: 200 });
+    expectPoint(imageToStage(stageToImage(stagePoint(150, 150), view, landscape), zoomed, landscape), {
+      x: 450,
+      y: 200,
+    });
   });
 
   it('when limits are given, then the pinch stops at them', () => {

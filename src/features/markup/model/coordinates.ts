@@ -84,7 +84,11 @@ export function fitTransform(image: ImageSize, stage: StageSize, padding = FIT_P
 }
 
 /** 100 %: one image px per stage (CSS) px, centred on `focus` (the image centre by default). */
-export function actualSize(image: ImageSize, stage: StageSize, focus: ImagePoint = imagePoint(0.5, 0.5)): ViewTransform {
+export function actualSize(
+  image: ImageSize,
+  stage: StageSize,
+  focus: ImagePoint = imagePoint(0.5, 0.5),
+): ViewTransform {
   return centredOn(image, stage, 1, focus);
 }
 
@@ -104,15 +108,28 @@ export function zoomAt(view: ViewTransform, at: StagePoint, factor: number, limi
 }
 
 /** Move the image by `dx`, `dy` stage px; combine with `clampPan`. */
-export const pan = (view: ViewTransform, dx: number, dy: number): ViewTransform => ({ ...view, x: view.x + dx, y: view.y + dy });
+export const pan = (view: ViewTransform, dx: number, dy: number): ViewTransform => ({
+  ...view,
+  x: view.x + dx,
+  y: view.y + dy,
+});
 
 /** Keep at least `keepPx` stage px of the image (or all of it, when smaller) on the stage along each axis. */
-export function clampPan(view: ViewTransform, image: ImageSize, stage: StageSize, keepPx = KEEP_VISIBLE_PX): ViewTransform {
+export function clampPan(
+  view: ViewTransform,
+  image: ImageSize,
+  stage: StageSize,
+  keepPx = KEEP_VISIBLE_PX,
+): ViewTransform {
   const w = image.width * view.scale;
   const h = image.height * view.scale;
   const keepX = Math.min(keepPx, w);
   const keepY = Math.min(keepPx, h);
-  return { ...view, x: clamp(view.x, keepX - w, stage.width - keepX), y: clamp(view.y, keepY - h, stage.height - keepY) };
+  return {
+    ...view,
+    x: clamp(view.x, keepX - w, stage.width - keepX),
+    y: clamp(view.y, keepY - h, stage.height - keepY),
+  };
 }
 
 const isBounds = (target: ImagePoint | ImageBounds): target is ImageBounds => 'minX' in target;

@@ -1,6 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { imagePoint } from './coordinates';
-import { crosshairDraft, crosshairEnter, CROSSHAIR_SHIFT_STEP_PX, CROSSHAIR_STEP_PX, describeCrosshair, followCrosshair, moveCrosshair, startCrosshair, type MarkLike } from './crosshair';
+import {
+  crosshairDraft,
+  crosshairEnter,
+  CROSSHAIR_SHIFT_STEP_PX,
+  CROSSHAIR_STEP_PX,
+  describeCrosshair,
+  followCrosshair,
+  moveCrosshair,
+  startCrosshair,
+  type MarkLike,
+} from './crosshair';
 
 // A 4000×3000 photo shown at 0.2 stage px per image px from the stage's top-left: 800×600 stage px.
 const ctx = { view: { scale: 0.2, x: 0, y: 0 }, image: { width: 4000, height: 3000 } };
@@ -37,9 +47,19 @@ describe('the keyboard crosshair', () => {
     expect(started.kind).toBe('started');
     expect(started.state.anchor).toEqual({ x: 0.6, y: 0.7 });
     const moved = { ...started.state, at: imagePoint(0.4, 0.5) };
-    expect(crosshairDraft('rect', moved)?.points).toEqual([{ x: 0.4, y: 0.5 }, { x: 0.6, y: 0.7 }]);
+    expect(crosshairDraft('rect', moved)?.points).toEqual([
+      { x: 0.4, y: 0.5 },
+      { x: 0.6, y: 0.7 },
+    ]);
     const done = crosshairEnter('rect', moved, ctx, []);
-    expect(done.kind === 'create' && done.command).toEqual({ type: 'create', shape: 'rect', points: [{ x: 0.4, y: 0.5 }, { x: 0.6, y: 0.7 }] });
+    expect(done.kind === 'create' && done.command).toEqual({
+      type: 'create',
+      shape: 'rect',
+      points: [
+        { x: 0.4, y: 0.5 },
+        { x: 0.6, y: 0.7 },
+      ],
+    });
     expect(done.state.anchor).toBeUndefined();
   });
 
@@ -51,13 +71,21 @@ describe('the keyboard crosshair', () => {
   });
 
   it('when Enter is pressed with Select, then it picks the finding under the crosshair, or clears the selection', () => {
-    expect(crosshairEnter('select', { at: imagePoint(0.42, 0.61) }, ctx, [pin3])).toMatchObject({ kind: 'select', id: 30 });
-    expect(crosshairEnter('select', { at: imagePoint(0.9, 0.1) }, ctx, [pin3])).toMatchObject({ kind: 'select', id: null });
+    expect(crosshairEnter('select', { at: imagePoint(0.42, 0.61) }, ctx, [pin3])).toMatchObject({
+      kind: 'select',
+      id: 30,
+    });
+    expect(crosshairEnter('select', { at: imagePoint(0.9, 0.1) }, ctx, [pin3])).toMatchObject({
+      kind: 'select',
+      id: null,
+    });
   });
 
   it('when screen readers ask where it is, then they hear across and down in per cent, and the finding it is near', () => {
     // 0.43 × 800 = 344 px, 8 px from the pin at 336 px: within NEAR_PX.
-    expect(describeCrosshair('pin', { at: imagePoint(0.43, 0.61) }, ctx, [pin3])).toBe('43 % across, 61 % down, near #3');
+    expect(describeCrosshair('pin', { at: imagePoint(0.43, 0.61) }, ctx, [pin3])).toBe(
+      '43 % across, 61 % down, near #3',
+    );
     expect(describeCrosshair('pin', { at: imagePoint(0.9, 0.1) }, ctx, [pin3])).toBe('90 % across, 10 % down');
     expect(describeCrosshair('arrow', { at: imagePoint(0.9, 0.1), anchor: imagePoint(0.5, 0.25) }, ctx, [])).toBe(
       '90 % across, 10 % down. Started at 50 % across, 25 % down; Enter finishes it.',

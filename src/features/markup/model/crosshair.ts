@@ -3,7 +3,15 @@
  * keeps the state and draws it. Steps are in stage px, so a press moves the same distance on screen at any zoom.
  */
 import type { Command } from './commands';
-import { imageToStage, stagePoint, stageToImage, type ImagePoint, type ImageSize, type StageSize, type ViewTransform } from './coordinates';
+import {
+  imageToStage,
+  stagePoint,
+  stageToImage,
+  type ImagePoint,
+  type ImageSize,
+  type StageSize,
+  type ViewTransform,
+} from './coordinates';
 import { clampToImage, rectPoints, type Geometry } from './geometry';
 import { DRAG_THRESHOLD_PX } from './gesture';
 import { hitTest, HIT_TOLERANCE_PX } from './hit-test';
@@ -34,7 +42,13 @@ export function startCrosshair(view: ViewTransform, image: ImageSize, stage: Sta
 }
 
 /** One arrow press: `dx`, `dy` are −1, 0 or 1; `big` is Shift. The crosshair stops at the photo's edge. */
-export function moveCrosshair(state: CrosshairState, dx: number, dy: number, big: boolean, ctx: CrosshairContext): CrosshairState {
+export function moveCrosshair(
+  state: CrosshairState,
+  dx: number,
+  dy: number,
+  big: boolean,
+  ctx: CrosshairContext,
+): CrosshairState {
   const px = big ? CROSSHAIR_SHIFT_STEP_PX : CROSSHAIR_STEP_PX;
   const perX = px / (ctx.view.scale * ctx.image.width);
   const perY = px / (ctx.view.scale * ctx.image.height);
@@ -56,15 +70,25 @@ export type EnterResult =
  * Enter at the crosshair. A pin is placed at once; any other shape starts at the first Enter and is made at the
  * second (unless the two points are too close to see). With Select, Enter picks the finding under the crosshair.
  */
-export function crosshairEnter(tool: Tool, state: CrosshairState, ctx: CrosshairContext, marks: readonly MarkLike[]): EnterResult {
+export function crosshairEnter(
+  tool: Tool,
+  state: CrosshairState,
+  ctx: CrosshairContext,
+  marks: readonly MarkLike[],
+): EnterResult {
   if (tool === 'select') return { kind: 'select', id: markUnder(state.at, ctx, marks)?.id ?? null, state };
-  if (tool === 'pin') return { kind: 'create', command: { type: 'create', shape: 'pin', points: [state.at] }, state: { at: state.at } };
+  if (tool === 'pin')
+    return { kind: 'create', command: { type: 'create', shape: 'pin', points: [state.at] }, state: { at: state.at } };
   if (!state.anchor) return { kind: 'started', state: { at: state.at, anchor: state.at } };
   const a = imageToStage(state.anchor, ctx.view, ctx.image);
   const b = imageToStage(state.at, ctx.view, ctx.image);
   if (Math.hypot(a.x - b.x, a.y - b.y) < DRAG_THRESHOLD_PX) return { kind: 'too-small', state };
   const shape = shapeBetween(tool, state.anchor, state.at);
-  return { kind: 'create', command: { type: 'create', shape: shape.shape, points: shape.points }, state: { at: state.at } };
+  return {
+    kind: 'create',
+    command: { type: 'create', shape: shape.shape, points: shape.points },
+    state: { at: state.at },
+  };
 }
 
 /** The shape under way between the anchor and the crosshair, drawn dashed like a drag in progress. */
@@ -76,17 +100,28 @@ export function crosshairDraft(tool: Tool, state: CrosshairState): Geometry | un
 /** What the canvas needs of a finding to name it: its id, number and mark. */
 export type MarkLike = Geometry & { readonly id: number; readonly number: number };
 
-function markUnder(at: ImagePoint, ctx: CrosshairContext, marks: readonly MarkLike[], tolerance = HIT_TOLERANCE_PX): MarkLike | null {
+function markUnder(
+  at: ImagePoint,
+  ctx: CrosshairContext,
+  marks: readonly MarkLike[],
+  tolerance = HIT_TOLERANCE_PX,
+): MarkLike | null {
   return hitTest(marks, imageToStage(at, ctx.view, ctx.image), ctx.view, ctx.image, tolerance);
 }
 
 const percent = (v: number) => `${Math.round(v * 100)} %`;
 
 /** What screen readers hear: "42 % across, 61 % down, near #3", and how to finish a shape once it has begun. */
-export function describeCrosshair(tool: Tool, state: CrosshairState, ctx: CrosshairContext, marks: readonly MarkLike[]): string {
+export function describeCrosshair(
+  tool: Tool,
+  state: CrosshairState,
+  ctx: CrosshairContext,
+  marks: readonly MarkLike[],
+): string {
   const near = markUnder(state.at, ctx, marks, NEAR_PX);
   const where = `${percent(state.at.x)} across, ${percent(state.at.y)} down${near ? `, near #${near.number}` : ''}`;
-  if (state.anchor && tool !== 'select' && tool !== 'pin') return `${where}. Started at ${percent(state.anchor.x)} across, ${percent(state.anchor.y)} down; Enter finishes it.`;
+  if (state.anchor && tool !== 'select' && tool !== 'pin')
+    return `${where}. Started at ${percent(state.anchor.x)} across, ${percent(state.anchor.y)} down; Enter finishes it.`;
   return where;
 }
 

@@ -1,6 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { imagePoint as p, type ImagePoint } from './coordinates';
-import { anchor, bounds, circleRadius, handles, resize, simplifyFreehand, toGeometry, translate, type Geometry } from './geometry';
+import {
+  anchor,
+  bounds,
+  circleRadius,
+  handles,
+  resize,
+  simplifyFreehand,
+  toGeometry,
+  translate,
+  type Geometry,
+} from './geometry';
 import { MAX_FREEHAND_POINTS } from './simplify-freehand';
 
 const square = { width: 1000, height: 1000 };
@@ -73,15 +83,55 @@ describe('anchor', () => {
 
 describe('translate', () => {
   it('when moved within the photo, then every point moves by the delta', () => {
-    expectPoints(translate(arrow, -0.1, 0.05).points, [[0.7, 0.95], [0.5, 0.75]]);
+    expectPoints(translate(arrow, -0.1, 0.05).points, [
+      [0.7, 0.95],
+      [0.5, 0.75],
+    ]);
   });
 
   it.each([
     ['a pin pushed past the left edge', pin, -0.9, 0, [[0, 0.4]]],
-    ['a circle pushed past the right edge', circle, 0.9, 0, [[0.9, 0.5], [1, 0.5]]],
-    ['a rect pushed past the top and left', rect, -1, -1, [[0.3, 0], [0, 0.4]]],
-    ['an arrow pushed past the bottom', arrow, 0, 0.5, [[0.8, 1], [0.6, 0.8]]],
-    ['a freehand stroke pushed past the top-left', freehand, -0.5, -0.5, [[0.1, 0], [0, 0.1], [0.15, 0.15]]],
+    [
+      'a circle pushed past the right edge',
+      circle,
+      0.9,
+      0,
+      [
+        [0.9, 0.5],
+        [1, 0.5],
+      ],
+    ],
+    [
+      'a rect pushed past the top and left',
+      rect,
+      -1,
+      -1,
+      [
+        [0.3, 0],
+        [0, 0.4],
+      ],
+    ],
+    [
+      'an arrow pushed past the bottom',
+      arrow,
+      0,
+      0.5,
+      [
+        [0.8, 1],
+        [0.6, 0.8],
+      ],
+    ],
+    [
+      'a freehand stroke pushed past the top-left',
+      freehand,
+      -0.5,
+      -0.5,
+      [
+        [0.1, 0],
+        [0, 0.1],
+        [0.15, 0.15],
+      ],
+    ],
   ] as const)('when %s, then it stops at the edge with its shape intact', (_name, g, dx, dy, expected) => {
     expectPoints(translate(g, dx, dy).points, expected);
   });
@@ -89,29 +139,72 @@ describe('translate', () => {
 
 describe('resize', () => {
   it('when the circle’s rim is dragged, then the centre stays and the rim follows', () => {
-    expectPoints(resize(circle, 'rim', p(0.5, 0.9)).points, [[0.5, 0.5], [0.5, 0.9]]);
+    expectPoints(resize(circle, 'rim', p(0.5, 0.9)).points, [
+      [0.5, 0.5],
+      [0.5, 0.9],
+    ]);
   });
 
   it.each([
-    ['top-left', [0.3, 0.1], [[0.3, 0.1], [0.7, 0.6]]],
-    ['top-right', [0.9, 0.1], [[0.4, 0.1], [0.9, 0.6]]],
-    ['bottom-left', [0.3, 0.8], [[0.3, 0.2], [0.7, 0.8]]],
-    ['bottom-right', [0.9, 0.8], [[0.4, 0.2], [0.9, 0.8]]],
+    [
+      'top-left',
+      [0.3, 0.1],
+      [
+        [0.3, 0.1],
+        [0.7, 0.6],
+      ],
+    ],
+    [
+      'top-right',
+      [0.9, 0.1],
+      [
+        [0.4, 0.1],
+        [0.9, 0.6],
+      ],
+    ],
+    [
+      'bottom-left',
+      [0.3, 0.8],
+      [
+        [0.3, 0.2],
+        [0.7, 0.8],
+      ],
+    ],
+    [
+      'bottom-right',
+      [0.9, 0.8],
+      [
+        [0.4, 0.2],
+        [0.9, 0.8],
+      ],
+    ],
   ] as const)('when the rect’s %s corner is dragged, then the opposite corner stays', (handle, [x, y], expected) => {
     expectPoints(resize(rect, handle, p(x, y)).points, expected);
   });
 
   it('when a rect corner is dragged past the opposite corner, then the rect flips instead of inverting', () => {
-    expectPoints(resize(rect, 'top-left', p(0.9, 0.9)).points, [[0.7, 0.6], [0.9, 0.9]]);
+    expectPoints(resize(rect, 'top-left', p(0.9, 0.9)).points, [
+      [0.7, 0.6],
+      [0.9, 0.9],
+    ]);
   });
 
   it('when either end of an arrow is dragged, then only that end moves', () => {
-    expectPoints(resize(arrow, 'start', p(0.1, 0.1)).points, [[0.1, 0.1], [0.6, 0.7]]);
-    expectPoints(resize(arrow, 'end', p(0.2, 0.3)).points, [[0.8, 0.9], [0.2, 0.3]]);
+    expectPoints(resize(arrow, 'start', p(0.1, 0.1)).points, [
+      [0.1, 0.1],
+      [0.6, 0.7],
+    ]);
+    expectPoints(resize(arrow, 'end', p(0.2, 0.3)).points, [
+      [0.8, 0.9],
+      [0.2, 0.3],
+    ]);
   });
 
   it('when a handle is dragged off the photo, then it stops at the edge', () => {
-    expectPoints(resize(circle, 'rim', p(1.4, -0.2)).points, [[0.5, 0.5], [1, 0]]);
+    expectPoints(resize(circle, 'rim', p(1.4, -0.2)).points, [
+      [0.5, 0.5],
+      [1, 0],
+    ]);
   });
 
   it('when the shape has no such handle, then the mark is unchanged', () => {
@@ -146,7 +239,12 @@ describe('simplifyFreehand', () => {
   });
 
   it('when the same stroke is on a 20×20 px photo, then distances double (tolerance is image px): P2 at 3.58 px stays at 2 px', () => {
-    expect(simplifyFreehand(stroke, 2, { width: 20, height: 20 })).toEqual([stroke[0], stroke[2], stroke[3], stroke[4]]);
+    expect(simplifyFreehand(stroke, 2, { width: 20, height: 20 })).toEqual([
+      stroke[0],
+      stroke[2],
+      stroke[3],
+      stroke[4],
+    ]);
   });
 
   it('when the stroke has two points, then it is returned as it is', () => {
@@ -165,9 +263,20 @@ describe('simplifyFreehand', () => {
 
 describe('toGeometry', () => {
   it('when a finding comes from the API, then its shape and points are kept', () => {
-    expect(toGeometry({ shape: 'arrow', points: [{ x: 0.1, y: 0.2 }, { x: 0.3, y: 0.4 }] })).toEqual({
+    expect(
+      toGeometry({
+        shape: 'arrow',
+        points: [
+          { x: 0.1, y: 0.2 },
+          { x: 0.3, y: 0.4 },
+        ],
+      }),
+    ).toEqual({
       shape: 'arrow',
-      points: [{ x: 0.1, y: 0.2 }, { x: 0.3, y: 0.4 }],
+      points: [
+        { x: 0.1, y: 0.2 },
+        { x: 0.3, y: 0.4 },
+      ],
     });
   });
 });

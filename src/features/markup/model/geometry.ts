@@ -26,7 +26,11 @@ export const toGeometry = (g: { readonly shape: Shape; readonly points: readonly
   points: g.points.map((p) => imagePoint(p.x, p.y)),
 });
 
-export const toMarkupItem = (f: { readonly id: number; readonly shape: Shape; readonly points: readonly NormalisedPoint[] }): MarkupItem => ({
+export const toMarkupItem = (f: {
+  readonly id: number;
+  readonly shape: Shape;
+  readonly points: readonly NormalisedPoint[];
+}): MarkupItem => ({
   id: f.id,
   ...toGeometry(f),
 });
@@ -34,7 +38,8 @@ export const toMarkupItem = (f: { readonly id: number; readonly shape: Shape; re
 const clamp01 = (v: number): number => Math.min(1, Math.max(0, v));
 
 /** The pointer can leave the photo mid-drag; a stored point never does. */
-export const clampToImage = (p: { readonly x: number; readonly y: number }): ImagePoint => imagePoint(clamp01(p.x), clamp01(p.y));
+export const clampToImage = (p: { readonly x: number; readonly y: number }): ImagePoint =>
+  imagePoint(clamp01(p.x), clamp01(p.y));
 
 /** The i-th point; a mark with too few points breaks the finding contract, so it fails loudly. */
 function pointOf(g: Geometry, i: number): ImagePoint {
@@ -44,7 +49,10 @@ function pointOf(g: Geometry, i: number): ImagePoint {
 }
 
 function extent(points: readonly ImagePoint[]): ImageBounds {
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    minY = Infinity,
+    maxX = -Infinity,
+    maxY = -Infinity;
   for (const p of points) {
     if (p.x < minX) minX = p.x;
     if (p.x > maxX) maxX = p.x;
@@ -69,7 +77,12 @@ export function bounds(g: Geometry, image: ImageSize): ImageBounds {
   if (g.shape !== 'circle') return extent(g.points);
   const c = pointOf(g, 0);
   const r = circleRadius(g, image);
-  return { minX: c.x - r / image.width, minY: c.y - r / image.height, maxX: c.x + r / image.width, maxY: c.y + r / image.height };
+  return {
+    minX: c.x - r / image.width,
+    minY: c.y - r / image.height,
+    maxX: c.x + r / image.width,
+    maxY: c.y + r / image.height,
+  };
 }
 
 /** Where the finding's number label sits. */

@@ -5,7 +5,8 @@ import type { Geometry } from './geometry';
 import type { Grab } from './hit-test';
 
 /** Pointer events carry the pointer already in normalised image coordinates (it may lie outside 0..1). */
-export type ToolEvent = { readonly type: 'down' | 'move' | 'up'; readonly point: ImagePoint } | { readonly type: 'escape' };
+export type ToolEvent =
+  { readonly type: 'down' | 'move' | 'up'; readonly point: ImagePoint } | { readonly type: 'escape' };
 
 /** One gesture in progress. `trail` collects a freehand stroke; `grab` is what the select tool holds. */
 export interface Gesture {
@@ -59,7 +60,18 @@ export function follow(state: ToolState, point: ImagePoint, ctx: ToolContext, co
   const last = state.trail[state.trail.length - 1];
   const record = collect && (!last || stageDistance(last, point, ctx) >= FREEHAND_STEP_PX);
   const dragging = state.phase === 'dragging' || stageDistance(state.start, point, ctx) >= DRAG_THRESHOLD_PX;
-  return { ...state, phase: dragging ? 'dragging' : 'pointing', last: point, trail: record ? [...state.trail, point] : state.trail };
+  return {
+    ...state,
+    phase: dragging ? 'dragging' : 'pointing',
+    last: point,
+    trail: record ? [...state.trail, point] : state.trail,
+  };
 }
 
-export const press = (point: ImagePoint, grab: Grab | null = null): ToolState => ({ phase: 'pointing', start: point, last: point, trail: [point], grab });
+export const press = (point: ImagePoint, grab: Grab | null = null): ToolState => ({
+  phase: 'pointing',
+  start: point,
+  last: point,
+  trail: [point],
+  grab,
+});

@@ -8,7 +8,13 @@ describe('inverseOf', () => {
   });
 
   it('when a finding was deleted, then undoing creates it again with its mark and fields', () => {
-    const fields = { title: 'Leaking can', componentRef: 'C15b', kind: 'leaking', severity: 'fault', status: 'confirmed' } as const;
+    const fields = {
+      title: 'Leaking can',
+      componentRef: 'C15b',
+      kind: 'leaking',
+      severity: 'fault',
+      status: 'confirmed',
+    } as const;
     expect(inverseOf({ type: 'deleted', shape: 'circle', points: [p(0.5, 0.5), p(0.6, 0.5)], fields })).toEqual({
       type: 'create',
       shape: 'circle',
@@ -18,7 +24,12 @@ describe('inverseOf', () => {
   });
 
   it('when a finding was moved, then undoing moves it back by the same delta', () => {
-    expect(inverseOf({ type: 'moved', id: 4, dx: 0.1, dy: -0.25 })).toEqual({ type: 'move', id: 4, dx: -0.1, dy: 0.25 });
+    expect(inverseOf({ type: 'moved', id: 4, dx: 0.1, dy: -0.25 })).toEqual({
+      type: 'move',
+      id: 4,
+      dx: -0.1,
+      dy: 0.25,
+    });
   });
 
   it('when a finding was resized, then undoing puts its previous points back', () => {

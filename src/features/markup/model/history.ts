@@ -11,7 +11,12 @@ export const HISTORY_LIMIT = 50;
  */
 export type Change =
   | { readonly type: 'created'; readonly id: number }
-  | { readonly type: 'deleted'; readonly shape: Shape; readonly points: readonly ImagePoint[]; readonly fields: FieldValues }
+  | {
+      readonly type: 'deleted';
+      readonly shape: Shape;
+      readonly points: readonly ImagePoint[];
+      readonly fields: FieldValues;
+    }
   | { readonly type: 'moved'; readonly id: number; readonly dx: number; readonly dy: number }
   | { readonly type: 'resized'; readonly id: number; readonly before: readonly ImagePoint[] }
   | { readonly type: 'edited'; readonly id: number; readonly before: FieldValues };

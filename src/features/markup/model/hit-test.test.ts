@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { imagePoint as p, imageToStage, stagePoint, type ImagePoint, type StagePoint, type ViewTransform } from './coordinates';
+import {
+  imagePoint as p,
+  imageToStage,
+  stagePoint,
+  type ImagePoint,
+  type StagePoint,
+  type ViewTransform,
+} from './coordinates';
 import type { Geometry, MarkupItem } from './geometry';
 import { grabAt, hitHandle, hits, hitTest, PIN_MARKER_RADIUS_PX } from './hit-test';
 
@@ -50,8 +57,12 @@ describe.each(zooms)('hits, %s', (_zoom, view) => {
   });
 
   it('when the pointer is 8 px from an arrow’s shaft, then it is hit; 12 px, or inside its box far from the shaft, not', () => {
-    expect(hits(arrow, offSegment(arrow.points[0] ?? p(0, 0), arrow.points[1] ?? p(0, 0), view, 8), view, image)).toBe(true);
-    expect(hits(arrow, offSegment(arrow.points[0] ?? p(0, 0), arrow.points[1] ?? p(0, 0), view, -12), view, image)).toBe(false);
+    expect(hits(arrow, offSegment(arrow.points[0] ?? p(0, 0), arrow.points[1] ?? p(0, 0), view, 8), view, image)).toBe(
+      true,
+    );
+    expect(
+      hits(arrow, offSegment(arrow.points[0] ?? p(0, 0), arrow.points[1] ?? p(0, 0), view, -12), view, image),
+    ).toBe(false);
     expect(hits(arrow, imageToStage(p(0.28, 0.62), view, image), view, image)).toBe(false);
   });
 
@@ -97,7 +108,9 @@ describe('hitTest', () => {
       const x = random() * 0.9;
       const y = random() * 0.9;
       const count = shape === 'pin' ? 1 : shape === 'freehand' ? 200 : 2;
-      const points = Array.from({ length: count }, (_, i) => (i === 0 ? p(x, y) : p(x + random() * 0.1, y + random() * 0.1)));
+      const points = Array.from({ length: count }, (_, i) =>
+        i === 0 ? p(x, y) : p(x + random() * 0.1, y + random() * 0.1),
+      );
       return { id, shape, points };
     });
     const probes = Array.from({ length: 200 }, () => stagePoint(random() * 1000, random() * 800));

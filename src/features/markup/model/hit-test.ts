@@ -12,7 +12,9 @@ export const PIN_MARKER_RADIUS_PX = 14;
 export const HIT_TOLERANCE_PX = 10;
 
 /** What the select tool took hold of at pointer-down: a handle of the selected finding, or a finding's body. */
-export type Grab = { readonly kind: 'body'; readonly item: MarkupItem } | { readonly kind: 'handle'; readonly item: MarkupItem; readonly handle: Handle };
+export type Grab =
+  | { readonly kind: 'body'; readonly item: MarkupItem }
+  | { readonly kind: 'handle'; readonly item: MarkupItem; readonly handle: Handle };
 
 type Xy = { readonly x: number; readonly y: number };
 
@@ -42,7 +44,13 @@ function outsideReach(g: Geometry, at: StagePoint, view: ViewTransform, image: I
 }
 
 /** Whether the stage point `at` is on or near the mark. */
-export function hits(g: Geometry, at: StagePoint, view: ViewTransform, image: ImageSize, tolerancePx = HIT_TOLERANCE_PX): boolean {
+export function hits(
+  g: Geometry,
+  at: StagePoint,
+  view: ViewTransform,
+  image: ImageSize,
+  tolerancePx = HIT_TOLERANCE_PX,
+): boolean {
   const reach = g.shape === 'pin' ? Math.max(PIN_MARKER_RADIUS_PX, tolerancePx) : tolerancePx;
   if (outsideReach(g, at, view, image, reach)) return false;
   const stagePoints = g.points.map((p) => imageToStage(p, view, image));
@@ -81,7 +89,13 @@ export function hitTest<T extends MarkupItem>(
 }
 
 /** The handle of `g` nearest the pointer within tolerance, if any. */
-export function hitHandle(g: Geometry, at: StagePoint, view: ViewTransform, image: ImageSize, tolerancePx = HIT_TOLERANCE_PX): Handle | null {
+export function hitHandle(
+  g: Geometry,
+  at: StagePoint,
+  view: ViewTransform,
+  image: ImageSize,
+  tolerancePx = HIT_TOLERANCE_PX,
+): Handle | null {
   let best: Handle | null = null;
   let bestDistance = tolerancePx;
   for (const { handle, point } of handles(g)) {

@@ -1,7 +1,16 @@
 import type { Command } from './commands';
 import { clampToImage, resize, translate } from './geometry';
 import type { Grab } from './hit-test';
-import { follow, idle, press, type Draft, type ToolContext, type ToolEvent, type ToolResult, type ToolState } from './gesture';
+import {
+  follow,
+  idle,
+  press,
+  type Draft,
+  type ToolContext,
+  type ToolEvent,
+  type ToolResult,
+  type ToolState,
+} from './gesture';
 
 /** The held finding as it would be if the pointer were released now. */
 function dragged(grab: Grab, state: ToolState): Draft | undefined {

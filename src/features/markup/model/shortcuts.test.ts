@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { actionForKey, nudgeToNormalised, shortcutHelp, type KeyLike } from './shortcuts';
 
-const key = (k: string, mods: Partial<KeyLike> = {}): KeyLike => ({ key: k, ctrlKey: false, metaKey: false, shiftKey: false, ...mods });
+const key = (k: string, mods: Partial<KeyLike> = {}): KeyLike => ({
+  key: k,
+  ctrlKey: false,
+  metaKey: false,
+  shiftKey: false,
+  ...mods,
+});
 
 describe('actionForKey', () => {
   it.each([
@@ -60,7 +66,25 @@ describe('nudgeToNormalised', () => {
 describe('shortcutHelp', () => {
   it('when the help panel lists the shortcuts, then every tool key and every action is described', () => {
     const keys = shortcutHelp.flatMap((s) => s.keys);
-    for (const k of ['V', 'P', 'C', 'R', 'A', 'F', 'Esc', 'Delete', 'Backspace', 'Ctrl+Z', '⌘Z', '+', '−', '0', '1', '←', 'Shift+arrow'])
+    for (const k of [
+      'V',
+      'P',
+      'C',
+      'R',
+      'A',
+      'F',
+      'Esc',
+      'Delete',
+      'Backspace',
+      'Ctrl+Z',
+      '⌘Z',
+      '+',
+      '−',
+      '0',
+      '1',
+      '←',
+      'Shift+arrow',
+    ])
       expect(keys).toContain(k);
     expect(shortcutHelp.every((s) => s.description.length > 0)).toBe(true);
   });

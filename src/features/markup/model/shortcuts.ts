@@ -21,7 +21,12 @@ export const NUDGE_PX = 1;
 export const NUDGE_SHIFT_PX = 10;
 
 const toolKeys: Record<string, Tool> = { v: 'select', p: 'pin', c: 'circle', r: 'rect', a: 'arrow', f: 'freehand' };
-const arrows: Record<string, readonly [number, number]> = { ArrowLeft: [-1, 0], ArrowRight: [1, 0], ArrowUp: [0, -1], ArrowDown: [0, 1] };
+const arrows: Record<string, readonly [number, number]> = {
+  ArrowLeft: [-1, 0],
+  ArrowRight: [1, 0],
+  ArrowUp: [0, -1],
+  ArrowDown: [0, 1],
+};
 const plainKeys: Record<string, ShortcutAction> = {
   Escape: { type: 'cancel' },
   Enter: { type: 'place' },
@@ -43,7 +48,8 @@ const plainKeys: Record<string, ShortcutAction> = {
  */
 export function actionForKey(event: KeyLike): ShortcutAction | null {
   if (event.altKey) return null;
-  if (event.ctrlKey || event.metaKey) return event.key.toLowerCase() === 'z' && !event.shiftKey ? { type: 'undo' } : null;
+  if (event.ctrlKey || event.metaKey)
+    return event.key.toLowerCase() === 'z' && !event.shiftKey ? { type: 'undo' } : null;
   const tool = toolKeys[event.key.toLowerCase()];
   if (tool && event.key.length === 1) return { type: 'tool', tool };
   const arrow = arrows[event.key];
@@ -69,8 +75,14 @@ export const shortcutHelp: readonly { readonly keys: readonly string[]; readonly
   { keys: ['A'], description: 'Draw an arrow' },
   { keys: ['F'], description: 'Draw freehand' },
   { keys: ['Tab'], description: 'Focus the photo: a crosshair appears' },
-  { keys: ['←', '↑', '→', '↓'], description: 'Move the crosshair (with Shift: further); with a finding selected, nudge it by one photo pixel' },
-  { keys: ['Enter'], description: 'At the crosshair: place a pin, or start and then finish a shape; with Select, pick the finding there' },
+  {
+    keys: ['←', '↑', '→', '↓'],
+    description: 'Move the crosshair (with Shift: further); with a finding selected, nudge it by one photo pixel',
+  },
+  {
+    keys: ['Enter'],
+    description: 'At the crosshair: place a pin, or start and then finish a shape; with Select, pick the finding there',
+  },
   { keys: ['Esc'], description: 'Cancel the drawing, or clear the selection' },
   { keys: ['Delete', 'Backspace'], description: 'Delete the selected finding' },
   { keys: ['Ctrl+Z', '⌘Z'], description: 'Undo the last change' },

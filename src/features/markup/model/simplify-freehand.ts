@@ -5,9 +5,12 @@ export const MAX_FREEHAND_POINTS = 2000;
 
 /** Distance in image px from `p` to the segment a–b (to `a` itself when the segment has no length). */
 function distanceToSegmentPx(p: ImagePoint, a: ImagePoint, b: ImagePoint, image: ImageSize): number {
-  const px = p.x * image.width, py = p.y * image.height;
-  const ax = a.x * image.width, ay = a.y * image.height;
-  const dx = b.x * image.width - ax, dy = b.y * image.height - ay;
+  const px = p.x * image.width,
+    py = p.y * image.height;
+  const ax = a.x * image.width,
+    ay = a.y * image.height;
+  const dx = b.x * image.width - ax,
+    dy = b.y * image.height - ay;
   const lengthSq = dx * dx + dy * dy;
   const t = lengthSq === 0 ? 0 : Math.min(1, Math.max(0, ((px - ax) * dx + (py - ay) * dy) / lengthSq));
   return Math.hypot(px - (ax + t * dx), py - (ay + t * dy));

@@ -25,7 +25,8 @@ function run(tool: Tool, events: ToolEvent[], context: ToolContext = ctx, grab: 
 }
 const last = (results: ToolResult[]): ToolResult => results[results.length - 1] ?? { state: idle };
 /** Image px, rounded to a millionth, so float noise from adding deltas does not fail an exact comparison. */
-const px = (points: readonly { x: number; y: number }[] | undefined) => points?.map((q) => [Math.round(q.x * 1e9) / 1e6, Math.round(q.y * 1e9) / 1e6]);
+const px = (points: readonly { x: number; y: number }[] | undefined) =>
+  points?.map((q) => [Math.round(q.x * 1e9) / 1e6, Math.round(q.y * 1e9) / 1e6]);
 
 describe('pin tool', () => {
   it('when the photo is clicked, then a pin is created there and the tool is idle again', () => {
@@ -36,7 +37,9 @@ describe('pin tool', () => {
   });
 
   it('when the pointer is pressed and adjusted before release, then the pin lands where it is released', () => {
-    expect(last(run('pin', [down(100, 200), move(130, 210), up(140, 220)])).command).toMatchObject({ points: [at(140, 220)] });
+    expect(last(run('pin', [down(100, 200), move(130, 210), up(140, 220)])).command).toMatchObject({
+      points: [at(140, 220)],
+    });
   });
 
   it('when Escape is pressed before release, then the draft is dropped and nothing is created', () => {
@@ -46,7 +49,10 @@ describe('pin tool', () => {
   });
 
   it('when released off the photo, then the pin is placed on its edge', () => {
-    const results = run('pin', [{ type: 'down', point: imagePoint(1.2, -0.1) }, { type: 'up', point: imagePoint(1.2, -0.1) }]);
+    const results = run('pin', [
+      { type: 'down', point: imagePoint(1.2, -0.1) },
+      { type: 'up', point: imagePoint(1.2, -0.1) },
+    ]);
     expect(last(results).command).toMatchObject({ points: [{ x: 1, y: 0 }] });
   });
 
@@ -62,7 +68,10 @@ describe.each(['circle', 'arrow'] as const)('%s tool', (shape) => {
     expect(results[1]?.draft).toBeUndefined();
     expect(results[2]?.state.phase).toBe('dragging');
     expect(results[2]?.draft).toEqual({ shape, points: [at(100, 100), at(150, 180)] });
-    expect(last(results)).toEqual({ state: idle, command: { type: 'create', shape, points: [at(100, 100), at(160, 190)] } });
+    expect(last(results)).toEqual({
+      state: idle,
+      command: { type: 'create', shape, points: [at(100, 100), at(160, 190)] },
+    });
   });
 
   it('when clicked without a drag of 4 stage px, then nothing is created', () => {
@@ -103,7 +112,11 @@ describe('freehand tool', () => {
     const downward = Array.from({ length: 20 }, (_, i) => move(300, 110 + i * 10));
     const results = run('freehand', [down(100, 100), ...along, ...downward, up(300, 300)]);
     expect(results[5]?.draft?.points.length).toBe(6);
-    expect(last(results).command).toEqual({ type: 'create', shape: 'freehand', points: [at(100, 100), at(300, 100.4), at(300, 300)] });
+    expect(last(results).command).toEqual({
+      type: 'create',
+      shape: 'freehand',
+      points: [at(100, 100), at(300, 100.4), at(300, 300)],
+    });
   });
 
   it('when the pointer only wobbles in place, then nothing is created', () => {
@@ -133,7 +146,10 @@ describe('select tool', () => {
   it('when a finding is dragged, then a draft shows it moved and release sends a move and selects it', () => {
     const results = run('select', [down(200, 200), move(250, 220), up(250, 220)], ctx, body);
     expect(results[1]?.draft).toMatchObject({ id: 7, shape: 'rect' });
-    expect(px(results[1]?.draft?.points)).toEqual([[150, 120], [350, 320]]);
+    expect(px(results[1]?.draft?.points)).toEqual([
+      [150, 120],
+      [350, 320],
+    ]);
     const result = last(results);
     expect(result.selection).toBe(7);
     expect(result.command).toMatchObject({ type: 'move', id: 7 });
@@ -150,7 +166,11 @@ describe('select tool', () => {
   it('when a handle of the selected finding is dragged, then release sends a resize', () => {
     const results = run('select', [down(300, 300), move(500, 600), up(500, 600)], ctx, corner);
     expect(results[1]?.draft).toEqual({ id: 7, shape: 'rect', points: [at(100, 100), at(500, 600)] });
-    expect(last(results)).toEqual({ state: idle, selection: 7, command: { type: 'resize', id: 7, handle: 'bottom-right', to: at(500, 600) } });
+    expect(last(results)).toEqual({
+      state: idle,
+      selection: 7,
+      command: { type: 'resize', id: 7, handle: 'bottom-right', to: at(500, 600) },
+    });
   });
 
   it('when Escape is pressed mid-drag, then the finding snaps back: no draft and no command', () => {

@@ -1,10 +1,30 @@
 import type { Shape } from '../../../../shared/schemas/findings';
 import type { Command } from './commands';
 import { clampToImage, rectPoints, simplifyFreehand } from './geometry';
-import { follow, idle, press, stageDistance, DRAG_THRESHOLD_PX, type Draft, type ToolContext, type ToolEvent, type ToolResult, type ToolState } from './gesture';
+import {
+  follow,
+  idle,
+  press,
+  stageDistance,
+  DRAG_THRESHOLD_PX,
+  type Draft,
+  type ToolContext,
+  type ToolEvent,
+  type ToolResult,
+  type ToolState,
+} from './gesture';
 import { selectTransition } from './select-tool';
 
-export { DRAG_THRESHOLD_PX, idle, type Draft, type Gesture, type ToolContext, type ToolEvent, type ToolResult, type ToolState } from './gesture';
+export {
+  DRAG_THRESHOLD_PX,
+  idle,
+  type Draft,
+  type Gesture,
+  type ToolContext,
+  type ToolEvent,
+  type ToolResult,
+  type ToolState,
+} from './gesture';
 
 export type Tool = 'select' | Shape;
 export const tools: readonly Tool[] = ['select', 'pin', 'circle', 'rect', 'arrow', 'freehand'];
@@ -31,7 +51,11 @@ function createOf(shape: Shape, state: ToolState, ctx: ToolContext): Command | u
   }
   // A click, or a drag that came back to where it began, would make a mark too small to see or grab.
   if (stageDistance(state.start, state.last, ctx) < DRAG_THRESHOLD_PX) return undefined;
-  return { type: 'create', shape, points: shape === 'rect' ? rectPoints(state.start, state.last) : [state.start, state.last] };
+  return {
+    type: 'create',
+    shape,
+    points: shape === 'rect' ? rectPoints(state.start, state.last) : [state.start, state.last],
+  };
 }
 
 /** Pin, circle, rect, arrow and freehand: press, drag (or, for a pin, adjust), release to create. */

@@ -28,6 +28,21 @@ export function recordingPen(): Pen & { calls: PenCall[] } {
     (...args: unknown[]) => {
       calls.push({ op, args, fillStyle: pen.fillStyle, strokeStyle: pen.strokeStyle, lineWidth: pen.lineWidth });
     };
-  const ops = ['beginPath', 'moveTo', 'lineTo', 'arc', 'rect', 'closePath', 'fill', 'stroke', 'fillText', 'save', 'restore', 'setLineDash'];
-  return Object.assign(pen, Object.fromEntries(ops.map((op) => [op, record(op)]))) as unknown as Pen & { calls: PenCall[] };
+  const ops = [
+    'beginPath',
+    'moveTo',
+    'lineTo',
+    'arc',
+    'rect',
+    'closePath',
+    'fill',
+    'stroke',
+    'fillText',
+    'save',
+    'restore',
+    'setLineDash',
+  ];
+  return Object.assign(pen, Object.fromEntries(ops.map((op) => [op, record(op)]))) as unknown as Pen & {
+    calls: PenCall[];
+  };
 }

@@ -8,7 +8,10 @@ export const getFindingMeasurements = (restorationId: number, findingId: number)
   apiAllPages(`/restorations/${restorationId}/measurements?findingId=${findingId}`, measurementSchema);
 
 export const findingMeasurementsQueryOptions = (restorationId: number, findingId: number) =>
-  queryOptions({ queryKey: measurementKeys.finding(findingId), queryFn: () => getFindingMeasurements(restorationId, findingId) });
+  queryOptions({
+    queryKey: measurementKeys.finding(findingId),
+    queryFn: () => getFindingMeasurements(restorationId, findingId),
+  });
 
 export const useFindingMeasurements = (restorationId: number, findingId: number) =>
   useQuery(findingMeasurementsQueryOptions(restorationId, findingId));

@@ -16,6 +16,8 @@ export const measurementKeys = {
 export function invalidateReadings(client: QueryClient, restorationId: number) {
   return Promise.all([
     client.invalidateQueries({ queryKey: measurementKeys.restoration(restorationId) }),
-    client.invalidateQueries({ predicate: ({ queryKey }) => queryKey[0] === 'findings' && queryKey[2] === 'measurements' }),
+    client.invalidateQueries({
+      predicate: ({ queryKey }) => queryKey[0] === 'findings' && queryKey[2] === 'measurements',
+    }),
   ]);
 }

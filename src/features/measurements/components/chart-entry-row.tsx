@@ -22,7 +22,15 @@ export function ChartEntryHeader() {
 const typed = { autoComplete: 'off', autoCorrect: 'off', spellCheck: false } as const;
 
 /** One point of a voltage chart being entered: where, expected, tolerance, reading, and the verdict so far. */
-export function ChartEntryRow({ row, number, quantity, meters, onChange, onRemove, onEnter }: {
+export function ChartEntryRow({
+  row,
+  number,
+  quantity,
+  meters,
+  onChange,
+  onRemove,
+  onEnter,
+}: {
   row: EntryRow;
   number: number;
   quantity: EntryShared['quantity'];
@@ -41,11 +49,26 @@ export function ChartEntryRow({ row, number, quantity, meters, onChange, onRemov
   };
   const errorId = `chart-entry-error-${row.key}`;
   const message = row.error ?? (preview.status === 'refused' ? preview.message : undefined);
-  const input = (field: 'location' | 'expected' | 'tolerance' | 'reading' | 'source', label: string, placeholder: string, extra = '') => (
-    <input {...typed} id={field === 'location' ? `chart-entry-location-${row.key}` : undefined} aria-label={`${label}, row ${number}`}
-      value={row[field]} placeholder={placeholder} onChange={(e) => onChange({ [field]: e.target.value })} onKeyDown={enter}
-      aria-invalid={message !== undefined && (row.error !== undefined || (preview.status === 'refused' && preview.field === field))}
-      aria-describedby={message ? errorId : undefined} className={`${field === 'location' ? inputClass : cellInput} ${extra}`} />
+  const input = (
+    field: 'location' | 'expected' | 'tolerance' | 'reading' | 'source',
+    label: string,
+    placeholder: string,
+    extra = '',
+  ) => (
+    <input
+      {...typed}
+      id={field === 'location' ? `chart-entry-location-${row.key}` : undefined}
+      aria-label={`${label}, row ${number}`}
+      value={row[field]}
+      placeholder={placeholder}
+      onChange={(e) => onChange({ [field]: e.target.value })}
+      onKeyDown={enter}
+      aria-invalid={
+        message !== undefined && (row.error !== undefined || (preview.status === 'refused' && preview.field === field))
+      }
+      aria-describedby={message ? errorId : undefined}
+      className={`${field === 'location' ? inputClass : cellInput} ${extra}`}
+    />
   );
   return (
     <li className="space-y-1 border-t border-rule pt-2" aria-label={`Row ${number}`}>
@@ -63,13 +86,19 @@ export function ChartEntryRow({ row, number, quantity, meters, onChange, onRemov
             </span>
           )}
         </span>
-        <button type="button" onClick={onRemove} aria-label={`Remove row ${number}`}
-          className="min-h-11 rounded-lg px-3 text-ink-soft hover:bg-sunken">
+        <button
+          type="button"
+          onClick={onRemove}
+          aria-label={`Remove row ${number}`}
+          className="min-h-11 rounded-lg px-3 text-ink-soft hover:bg-sunken"
+        >
           <span aria-hidden="true">✕</span>
         </button>
       </div>
       {message && (
-        <p id={errorId} role={row.error ? 'alert' : undefined} className="text-sm font-semibold text-danger">{message}</p>
+        <p id={errorId} role={row.error ? 'alert' : undefined} className="text-sm font-semibold text-danger">
+          {message}
+        </p>
       )}
     </li>
   );

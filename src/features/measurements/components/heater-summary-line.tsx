@@ -14,10 +14,13 @@ export function HeaterSummaryLine({ types }: { types: readonly string[] }) {
       )}
       {summary.mixed && (
         <p className="font-semibold text-danger">
-          <span aria-hidden="true">✕ </span>Valves made for different heater currents share one series string: some heaters run hot, others cold.
+          <span aria-hidden="true">✕ </span>Valves made for different heater currents share one series string: some
+          heaters run hot, others cold.
         </p>
       )}
-      {summary.unknown.length > 0 && <p className="text-ink-soft">{`Not recognised, check their heater data by hand: ${summary.unknown.join(', ')}.`}</p>}
+      {summary.unknown.length > 0 && (
+        <p className="text-ink-soft">{`Not recognised, check their heater data by hand: ${summary.unknown.join(', ')}.`}</p>
+      )}
     </div>
   );
 }

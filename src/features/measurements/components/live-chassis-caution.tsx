@@ -2,7 +2,15 @@
  * Shown prominently whenever the line-up, or the restoration's own flag, says the chassis may be live.
  * `announce` makes it an alert, for when it appears while a line-up is being typed. An owner reads their own words.
  */
-export function LiveChassisCaution({ reasons = [], announce = false, audience = 'workshop' }: { reasons?: string[]; announce?: boolean; audience?: 'workshop' | 'owner' }) {
+export function LiveChassisCaution({
+  reasons = [],
+  announce = false,
+  audience = 'workshop',
+}: {
+  reasons?: string[];
+  announce?: boolean;
+  audience?: 'workshop' | 'owner';
+}) {
   if (audience === 'owner')
     return (
       <p role="note" className="rounded-xl border-2 border-danger bg-danger-soft px-4 py-3 text-ink">
@@ -14,7 +22,10 @@ export function LiveChassisCaution({ reasons = [], announce = false, audience = 
       </p>
     );
   return (
-    <div role={announce ? 'alert' : 'note'} className="space-y-1 rounded-xl border-2 border-danger bg-danger-soft px-4 py-3 text-ink">
+    <div
+      role={announce ? 'alert' : 'note'}
+      className="space-y-1 rounded-xl border-2 border-danger bg-danger-soft px-4 py-3 text-ink"
+    >
       <p>
         <strong className="text-lg text-danger">
           <span aria-hidden="true">⚠ </span>Live chassis likely:

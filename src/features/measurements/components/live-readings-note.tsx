@@ -6,8 +6,8 @@ export function LiveReadingsNote() {
         <strong className="text-danger">
           <span aria-hidden="true">⚠ </span>Live readings: HT can kill.
         </strong>{' '}
-        One hand away, insulated probes, meter rated for the voltage; discharge capacitors before touching; AC/DC sets may
-        have a live chassis — use an isolation transformer. Follow local codes and licensed practice.
+        One hand away, insulated probes, meter rated for the voltage; discharge capacitors before touching; AC/DC sets
+        may have a live chassis — use an isolation transformer. Follow local codes and licensed practice.
       </p>
     </div>
   );

@@ -31,7 +31,9 @@ describe('measurement form', () => {
     renderWithQueries(<MeasurementForm restorationId={7} />);
     await typeEsr(user);
     expect(within(preview()).getByText('within')).toBeInTheDocument();
-    expect(preview()).toHaveTextContent(/Reads 1\.1 Ω against an expected maximum of 2\.1 Ω for 22 µF 25 V .*: within\./);
+    expect(preview()).toHaveTextContent(
+      /Reads 1\.1 Ω against an expected maximum of 2\.1 Ω for 22 µF 25 V .*: within\./,
+    );
   });
 
   it('when an insulation tester shows OL, then the preview says over range, above the minimum, and passes', async () => {
@@ -96,7 +98,9 @@ describe('measurement form', () => {
     await user.selectOptions(screen.getByLabelText('Quantity'), 'esr');
     expect(screen.queryByText(/HT can kill/)).not.toBeInTheDocument();
     await user.selectOptions(screen.getByLabelText('Quantity'), 'dc-voltage');
-    expect(screen.getByRole('note')).toHaveTextContent(/Live readings: HT can kill\..*isolation transformer\. Follow local codes and licensed practice\./);
+    expect(screen.getByRole('note')).toHaveTextContent(
+      /Live readings: HT can kill\..*isolation transformer\. Follow local codes and licensed practice\./,
+    );
   });
 
   it('when the reading is in the wrong unit, then the library’s message shows beside the reading and nothing is sent', async () => {
@@ -108,7 +112,9 @@ describe('measurement form', () => {
     await user.type(screen.getByLabelText(/^Reading/), '250 Ω');
     const reading = screen.getByLabelText(/^Reading/);
     expect(reading).toHaveAttribute('aria-invalid', 'true');
-    expect(reading).toHaveAccessibleDescription(/Reading: '250 Ω' is not a value Gridleak can read: it is in Ω but V was expected here/);
+    expect(reading).toHaveAccessibleDescription(
+      /Reading: '250 Ω' is not a value Gridleak can read: it is in Ω but V was expected here/,
+    );
     await user.click(screen.getByRole('button', { name: 'Save reading' }));
     expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   });
@@ -116,7 +122,9 @@ describe('measurement form', () => {
   it('when saved, then the reading is sent as typed with the finding chosen, and the point is cleared for the next', async () => {
     const { calls } = fakeReadingsApi([]);
     const user = userEvent.setup();
-    renderWithQueries(<MeasurementForm restorationId={7} findings={[{ id: 12, number: 3, title: 'Leaky coupling capacitor' }]} />);
+    renderWithQueries(
+      <MeasurementForm restorationId={7} findings={[{ id: 12, number: 3, title: 'Leaky coupling capacitor' }]} />,
+    );
     await typeEsr(user);
     await user.selectOptions(screen.getByLabelText('Finding (optional)'), '12');
     await user.click(screen.getByLabelText('Share with the owner'));
@@ -124,7 +132,16 @@ describe('measurement form', () => {
     await waitFor(() => expect(calls.find((c) => c.method === 'POST')).toBeDefined());
     expect(calls.find((c) => c.method === 'POST')).toMatchObject({
       url: '/api/restorations/7/measurements',
-      body: { location: 'C26', quantity: 'esr', expected: '22µ', rating: '25 V', reading: '1.1 Ω', tolerance: '', findingId: 12, ownerVisible: true },
+      body: {
+        location: 'C26',
+        quantity: 'esr',
+        expected: '22µ',
+        rating: '25 V',
+        reading: '1.1 Ω',
+        tolerance: '',
+        findingId: 12,
+        ownerVisible: true,
+      },
     });
     expect(await screen.findByRole('status')).toHaveTextContent('Saved.');
     expect(screen.getByLabelText('Location')).toHaveValue('');
@@ -137,7 +154,9 @@ describe('measurement form', () => {
     renderWithQueries(<MeasurementForm restorationId={7} />);
     await typeEsr(user);
     await user.click(screen.getByRole('button', { name: 'Save reading' }));
-    expect(await screen.findByRole('alert')).toHaveTextContent('Not saved: Reading: the server would not take this one.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'Not saved: Reading: the server would not take this one.',
+    );
     expect(screen.getByLabelText(/^Reading/)).toHaveAttribute('aria-invalid', 'true');
   });
 });

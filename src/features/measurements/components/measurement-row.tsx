@@ -11,7 +11,12 @@ const cell = 'px-3 py-2 align-top';
 const small = `${buttonClass('quiet')} min-h-9 px-3 py-1 text-sm`;
 
 /** One reading in the table; technicians can change or delete it (delete asks once more, in place). */
-export function MeasurementRow({ restorationId, m, canRecord, onEdit }: {
+export function MeasurementRow({
+  restorationId,
+  m,
+  canRecord,
+  onEdit,
+}: {
   restorationId: number;
   m: Measurement;
   canRecord: boolean;
@@ -27,7 +32,7 @@ export function MeasurementRow({ restorationId, m, canRecord, onEdit }: {
       </th>
       <td className={cell}>{readingKinds[m.quantity].label}</td>
       <td className={`${cell} font-mono`}>{expectedSummary(m)}</td>
-      <td className={`${cell} whitespace-nowrap font-mono`}>{m.readingText}</td>
+      <td className={`${cell} font-mono whitespace-nowrap`}>{m.readingText}</td>
       <td className={`${cell} font-mono`}>{deviationWords(m)}</td>
       <td className={cell}>
         <VerdictBadge verdict={m.verdict} reason={m.verdictReason} />
@@ -52,19 +57,43 @@ export function MeasurementRow({ restorationId, m, canRecord, onEdit }: {
         <td className={cell}>
           {confirming ? (
             <div className="flex flex-col gap-1" role="group" aria-label={`Delete the reading at ${m.location}?`}>
-              <button type="button" className={`${buttonClass('danger')} min-h-9 px-3 py-1 text-sm`} disabled={remove.isPending}
-                onClick={() => remove.mutate(m.id, { onSuccess: () => setConfirming(false) })}>
+              <button
+                type="button"
+                className={`${buttonClass('danger')} min-h-9 px-3 py-1 text-sm`}
+                disabled={remove.isPending}
+                onClick={() => remove.mutate(m.id, { onSuccess: () => setConfirming(false) })}
+              >
                 {remove.isPending ? 'Deleting…' : 'Delete it'}
               </button>
-              <button type="button" className={small} onClick={() => setConfirming(false)}>Keep</button>
+              <button type="button" className={small} onClick={() => setConfirming(false)}>
+                Keep
+              </button>
             </div>
           ) : (
             <div className="flex flex-col gap-1">
-              <button type="button" className={small} onClick={onEdit} aria-label={`Change the reading at ${m.location}`}>Change</button>
-              <button type="button" className={small} onClick={() => setConfirming(true)} aria-label={`Delete the reading at ${m.location}`}>Delete</button>
+              <button
+                type="button"
+                className={small}
+                onClick={onEdit}
+                aria-label={`Change the reading at ${m.location}`}
+              >
+                Change
+              </button>
+              <button
+                type="button"
+                className={small}
+                onClick={() => setConfirming(true)}
+                aria-label={`Delete the reading at ${m.location}`}
+              >
+                Delete
+              </button>
             </div>
           )}
-          {remove.error && <p role="alert" className="mt-1 text-sm font-semibold text-danger">{remove.error.message}</p>}
+          {remove.error && (
+            <p role="alert" className="mt-1 text-sm font-semibold text-danger">
+              {remove.error.message}
+            </p>
+          )}
         </td>
       )}
     </tr>

@@ -14,7 +14,14 @@ afterEach(() => {
 
 describe('readings for a finding', () => {
   it('lists only the readings tied to the finding, each with glyph, word and reason', async () => {
-    const tied = makeMeasurement(1, { location: 'C30', quantity: 'leakage', expected: '32µ', rating: '350 V', reading: '2 mA', findingId: 12 });
+    const tied = makeMeasurement(1, {
+      location: 'C30',
+      quantity: 'leakage',
+      expected: '32µ',
+      rating: '350 V',
+      reading: '2 mA',
+      findingId: 12,
+    });
     const { calls } = fakeReadingsApi([tied, volts(2, 'V5 pin 7', '250 V', '255 V')]);
     renderWithQueries(<MeasurementsForFinding restorationId={7} findingId={12} role="mentor" />);
     const list = await screen.findByRole('list', { name: 'Readings for this finding' });

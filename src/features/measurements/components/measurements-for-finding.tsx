@@ -6,7 +6,15 @@ import { expectedSummary } from '../lib/measurement-format';
 import { VerdictBadge } from '../../../components/verdict-badge';
 
 /** The readings tied to one finding, compact, for the finding panel: what, where, the verdict and why. */
-export function MeasurementsForFinding({ restorationId, findingId, role }: { restorationId: number; findingId: number; role: Role }) {
+export function MeasurementsForFinding({
+  restorationId,
+  findingId,
+  role,
+}: {
+  restorationId: number;
+  findingId: number;
+  role: Role;
+}) {
   const query = useFindingMeasurements(restorationId, findingId);
   if (query.isPending) return <Loading label="Fetching readings…" />;
   if (query.isError) return <ErrorState error={query.error} onRetry={() => query.refetch()} />;

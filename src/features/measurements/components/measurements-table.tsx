@@ -5,10 +5,24 @@ import { EmptyState } from '../../../components/states';
 import { MeasurementForm, type FindingChoice } from './measurement-form';
 import { MeasurementRow } from './measurement-row';
 
-const heads = ['Location', 'Quantity', 'Expected', 'Reading', 'Deviation', 'Verdict', 'Conditions, method', 'Who, when'];
+const heads = [
+  'Location',
+  'Quantity',
+  'Expected',
+  'Reading',
+  'Deviation',
+  'Verdict',
+  'Conditions, method',
+  'Who, when',
+];
 
 /** Every reading the person may see (owners get only shared ones from the API), newest first; changes happen in place. */
-export function MeasurementsTable({ restorationId, role, measurements, findings }: {
+export function MeasurementsTable({
+  restorationId,
+  role,
+  measurements,
+  findings,
+}: {
   restorationId: number;
   role: Role;
   measurements: Measurement[];
@@ -34,9 +48,15 @@ export function MeasurementsTable({ restorationId, role, measurements, findings 
         <thead className="bg-sunken text-sm">
           <tr>
             {heads.map((h) => (
-              <th key={h} scope="col" className="px-3 py-2 font-semibold">{h}</th>
+              <th key={h} scope="col" className="px-3 py-2 font-semibold">
+                {h}
+              </th>
             ))}
-            {canRecord && <th scope="col" className="px-3 py-2"><span className="sr-only">Actions</span></th>}
+            {canRecord && (
+              <th scope="col" className="px-3 py-2">
+                <span className="sr-only">Actions</span>
+              </th>
+            )}
           </tr>
         </thead>
         <tbody>
@@ -44,12 +64,23 @@ export function MeasurementsTable({ restorationId, role, measurements, findings 
             editingId === m.id ? (
               <tr key={m.id} className="border-t border-rule">
                 <td colSpan={heads.length + 1} className="p-2">
-                  <MeasurementForm restorationId={restorationId} measurement={m} findings={findings}
-                    onDone={() => setEditingId(null)} onCancel={() => setEditingId(null)} />
+                  <MeasurementForm
+                    restorationId={restorationId}
+                    measurement={m}
+                    findings={findings}
+                    onDone={() => setEditingId(null)}
+                    onCancel={() => setEditingId(null)}
+                  />
                 </td>
               </tr>
             ) : (
-              <MeasurementRow key={m.id} restorationId={restorationId} m={m} canRecord={canRecord} onEdit={() => setEditingId(m.id)} />
+              <MeasurementRow
+                key={m.id}
+                restorationId={restorationId}
+                m={m}
+                canRecord={canRecord}
+                onEdit={() => setEditingId(m.id)}
+              />
             ),
           )}
         </tbody>

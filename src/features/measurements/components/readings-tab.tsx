@@ -10,7 +10,13 @@ import { VoltageChart } from './voltage-chart';
  * A restoration's readings: the valve line-up, the voltage chart, every reading, and (technicians only) the form to
  * record one. `findings` fills the form's finding picker; `plotWidth` fixes the plot's size.
  */
-export function ReadingsTab({ restorationId, role, liveChassis, findings, plotWidth }: {
+export function ReadingsTab({
+  restorationId,
+  role,
+  liveChassis,
+  findings,
+  plotWidth,
+}: {
   restorationId: number;
   role: Role;
   liveChassis: boolean;
@@ -22,7 +28,9 @@ export function ReadingsTab({ restorationId, role, liveChassis, findings, plotWi
   return (
     <div className="space-y-8">
       <section className="space-y-3" aria-labelledby="valves-heading">
-        <h2 id="valves-heading" className="text-lg font-bold">Valve line-up</h2>
+        <h2 id="valves-heading" className="text-lg font-bold">
+          Valve line-up
+        </h2>
         <ValveLineUp restorationId={restorationId} role={role} liveChassis={liveChassis} />
       </section>
       {measurements.isPending ? (
@@ -32,13 +40,27 @@ export function ReadingsTab({ restorationId, role, liveChassis, findings, plotWi
       ) : (
         <>
           <section className="space-y-3" aria-labelledby="voltage-chart-heading">
-            <h2 id="voltage-chart-heading" className="text-lg font-bold">Voltage chart</h2>
-            <VoltageChart restorationId={restorationId} role={role} measurements={measurements.data} plotWidth={plotWidth} />
+            <h2 id="voltage-chart-heading" className="text-lg font-bold">
+              Voltage chart
+            </h2>
+            <VoltageChart
+              restorationId={restorationId}
+              role={role}
+              measurements={measurements.data}
+              plotWidth={plotWidth}
+            />
           </section>
           <section className="space-y-3" aria-labelledby="readings-heading">
-            <h2 id="readings-heading" className="text-lg font-bold">All readings</h2>
+            <h2 id="readings-heading" className="text-lg font-bold">
+              All readings
+            </h2>
             {canRecord && <MeasurementForm restorationId={restorationId} findings={findings} />}
-            <MeasurementsTable restorationId={restorationId} role={role} measurements={measurements.data} findings={findings} />
+            <MeasurementsTable
+              restorationId={restorationId}
+              role={role}
+              measurements={measurements.data}
+              findings={findings}
+            />
           </section>
         </>
       )}

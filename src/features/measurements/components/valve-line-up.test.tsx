@@ -13,7 +13,8 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const caution = /Live chassis likely: series heaters mean the chassis may be connected to the mains\. Work only through an isolation transformer; treat every metal part as live; refit insulating knobs and covers\. Follow local codes and licensed practice\./;
+const caution =
+  /Live chassis likely: series heaters mean the chassis may be connected to the mains\. Work only through an isolation transformer; treat every metal part as live; refit insulating knobs and covers\. Follow local codes and licensed practice\./;
 
 describe('valve line-up', () => {
   it('when the line-up has series heaters, then each valve is decoded in words and the live-chassis caution stands out', async () => {
@@ -39,7 +40,9 @@ describe('valve line-up', () => {
   });
 
   it('when the restoration is already marked live, then the caution shows even for a parallel-heater line-up', async () => {
-    fakeReadingsApi([], { lineUp: { valves: [{ position: 'V1', type: 'EL84', notes: '' }], liveChassis: { likely: false, reasons: [] } } });
+    fakeReadingsApi([], {
+      lineUp: { valves: [{ position: 'V1', type: 'EL84', notes: '' }], liveChassis: { likely: false, reasons: [] } },
+    });
     renderWithQueries(<ValveLineUp restorationId={7} role="mentor" liveChassis />);
     expect(await screen.findByText('6.3 V parallel')).toBeInTheDocument();
     expect(screen.getByRole('note')).toHaveTextContent(caution);
@@ -65,7 +68,13 @@ describe('valve line-up', () => {
     await waitFor(() => expect(calls.find((c) => c.method === 'PUT')).toBeDefined());
     expect(calls.find((c) => c.method === 'PUT')).toMatchObject({
       url: '/api/restorations/7/valves',
-      body: { valves: [{ position: 'V1', type: 'EL84', notes: '' }, { position: 'V2', type: '6V6GT', notes: '' }, { position: 'V3', type: 'UY41', notes: '' }] },
+      body: {
+        valves: [
+          { position: 'V1', type: 'EL84', notes: '' },
+          { position: 'V2', type: '6V6GT', notes: '' },
+          { position: 'V3', type: 'UY41', notes: '' },
+        ],
+      },
     });
     expect(await screen.findByRole('list', { name: 'Valve line-up' })).toBeInTheDocument();
     expect(screen.getByRole('note')).toHaveTextContent(caution);
@@ -78,7 +87,9 @@ describe('valve line-up', () => {
     renderWithQueries(<ValveLineUp restorationId={7} role="technician" />);
     await user.click(await screen.findByRole('button', { name: 'List the valves' }));
     await user.click(screen.getByRole('button', { name: 'Save line-up' }));
-    expect(within(screen.getByRole('listitem', { name: 'Valve V1' })).getByRole('alert')).toHaveTextContent('Enter the type printed on the valve');
+    expect(within(screen.getByRole('listitem', { name: 'Valve V1' })).getByRole('alert')).toHaveTextContent(
+      'Enter the type printed on the valve',
+    );
     expect(calls.some((c) => c.method === 'PUT')).toBe(false);
   });
 });

@@ -12,7 +12,15 @@ import { ValveLineUpEditor } from './valve-line-up-editor';
  * The set's valves by position, each decoded in words. The live-chassis caution shows when the line-up points to
  * series heaters or the restoration is already marked live (`liveChassis`). Technicians change the list.
  */
-export function ValveLineUp({ restorationId, role, liveChassis = false }: { restorationId: number; role: Role; liveChassis?: boolean }) {
+export function ValveLineUp({
+  restorationId,
+  role,
+  liveChassis = false,
+}: {
+  restorationId: number;
+  role: Role;
+  liveChassis?: boolean;
+}) {
   const query = useValves(restorationId);
   const [editing, setEditing] = useState(false);
   const canEdit = can(role, 'measurements.record');
@@ -22,12 +30,24 @@ export function ValveLineUp({ restorationId, role, liveChassis = false }: { rest
   const live = assessed.likely || liveChassis;
   return (
     <div className="space-y-3">
-      {live && (can(role, 'workshop.view') ? <LiveChassisCaution reasons={assessed.reasons} /> : <LiveChassisCaution audience="owner" />)}
+      {live &&
+        (can(role, 'workshop.view') ? (
+          <LiveChassisCaution reasons={assessed.reasons} />
+        ) : (
+          <LiveChassisCaution audience="owner" />
+        ))}
       {editing ? (
-        <ValveLineUpEditor restorationId={restorationId} valves={valves} cautioned={live} onClose={() => setEditing(false)} />
+        <ValveLineUpEditor
+          restorationId={restorationId}
+          valves={valves}
+          cautioned={live}
+          onClose={() => setEditing(false)}
+        />
       ) : valves.length === 0 ? (
         <EmptyState title="No valves listed yet">
-          {canEdit ? 'List each valve by its position (V1, V2, …) and the type printed on it.' : 'The technician has not listed the valves yet.'}
+          {canEdit
+            ? 'List each valve by its position (V1, V2, …) and the type printed on it.'
+            : 'The technician has not listed the valves yet.'}
         </EmptyState>
       ) : (
         <ul className="grid gap-2 sm:grid-cols-2 xl:grid-cols-3" aria-label="Valve line-up">

@@ -4,12 +4,15 @@ import { VerdictBadge } from '../../../components/verdict-badge';
 /** The verdict the reading will get, worked out as it is typed; the server's verdict counts once saved. */
 export function VerdictPreviewPanel({ preview }: { preview: Preview }) {
   return (
-    <div aria-live="polite" aria-label="Verdict preview" role="region" className="rounded-lg border border-rule bg-sunken px-3 py-2">
+    <div
+      aria-live="polite"
+      aria-label="Verdict preview"
+      role="region"
+      className="rounded-lg border border-rule bg-sunken px-3 py-2"
+    >
       {preview.status === 'waiting' && <p className="text-ink-soft">Type the reading to see the verdict.</p>}
       {preview.status === 'refused' && (
-        <p className="text-ink-soft">
-          No verdict yet: {preview.field ? 'see the marked field.' : preview.message}
-        </p>
+        <p className="text-ink-soft">No verdict yet: {preview.field ? 'see the marked field.' : preview.message}</p>
       )}
       {preview.status === 'ready' && (
         <div className="flex flex-wrap items-center gap-x-3 gap-y-1">

@@ -19,9 +19,9 @@ function MeterLoadingNote() {
 function Legend() {
   return (
     <p className="text-sm text-ink-soft">
-      Each row: the green band is the tolerance, the lighter zone around it marginal, the upright tick the manual’s value;
-      the mark is the reading — <span className="text-ok">● ✓ within</span>, <span className="text-glow-strong">◆ ◐ marginal</span>,{' '}
-      <span className="text-danger">✕ out</span>.
+      Each row: the green band is the tolerance, the lighter zone around it marginal, the upright tick the manual’s
+      value; the mark is the reading — <span className="text-ok">● ✓ within</span>,{' '}
+      <span className="text-glow-strong">◆ ◐ marginal</span>, <span className="text-danger">✕ out</span>.
     </p>
   );
 }
@@ -30,7 +30,12 @@ function Legend() {
  * The DC and AC voltage readings against the manual's chart: a plot where a glance finds the odd one out, the same
  * in a table, and (for technicians) a way to enter a whole chart at once. `plotWidth` fixes the plot's size.
  */
-export function VoltageChart({ restorationId, role, measurements, plotWidth }: {
+export function VoltageChart({
+  restorationId,
+  role,
+  measurements,
+  plotWidth,
+}: {
   restorationId: number;
   role: Role;
   measurements: Measurement[];
@@ -44,7 +49,9 @@ export function VoltageChart({ restorationId, role, measurements, plotWidth }: {
       <MeterLoadingNote />
       {points.length === 0 ? (
         <EmptyState title="No voltage readings yet">
-          {canRecord ? 'Enter the points of the manual’s voltage chart below, or record DC and AC voltages one at a time.' : 'Voltage readings will be plotted here.'}
+          {canRecord
+            ? 'Enter the points of the manual’s voltage chart below, or record DC and AC voltages one at a time.'
+            : 'Voltage readings will be plotted here.'}
         </EmptyState>
       ) : (
         <div className="space-y-3">

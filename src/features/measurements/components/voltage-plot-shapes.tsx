@@ -13,7 +13,13 @@ export function BandShape({ x, y, width, height, payload }: BarShapeProps) {
   return (
     <g>
       <rect x={x} y={y} width={Math.max(0, width)} height={height} className="fill-glow-soft stroke-rule" />
-      <rect x={bandX} y={y} width={Math.max(0, at(row.band[1]) - bandX)} height={height} className="fill-ok/25 stroke-ok/60" />
+      <rect
+        x={bandX}
+        y={y}
+        width={Math.max(0, at(row.band[1]) - bandX)}
+        height={height}
+        className="fill-ok/25 stroke-ok/60"
+      />
       <line x1={at(0)} x2={at(0)} y1={y - 4} y2={y + height + 4} stroke="currentColor" strokeWidth={2} />
     </g>
   );
@@ -25,11 +31,21 @@ function Mark({ verdict, cx, cy }: { verdict: PlotRow['point']['verdict']; cx: n
     case 'within':
       return <circle cx={cx} cy={cy} r={6} className={svg} strokeWidth={1.5} />;
     case 'marginal':
-      return <path d={`M${cx} ${cy - 8}L${cx + 8} ${cy}L${cx} ${cy + 8}L${cx - 8} ${cy}Z`} className={svg} strokeWidth={1.5} />;
+      return (
+        <path
+          d={`M${cx} ${cy - 8}L${cx + 8} ${cy}L${cx} ${cy + 8}L${cx - 8} ${cy}Z`}
+          className={svg}
+          strokeWidth={1.5}
+        />
+      );
     case 'out':
       return (
-        <path d={`M${cx - 7} ${cy - 7}L${cx + 7} ${cy + 7}M${cx + 7} ${cy - 7}L${cx - 7} ${cy + 7}`} className={svg} strokeWidth={3.5}
-          strokeLinecap="round" />
+        <path
+          d={`M${cx - 7} ${cy - 7}L${cx + 7} ${cy + 7}M${cx + 7} ${cy - 7}L${cx - 7} ${cy + 7}`}
+          className={svg}
+          strokeWidth={3.5}
+          strokeLinecap="round"
+        />
       );
     case 'unknown':
       return null;
@@ -48,12 +64,12 @@ export function ReadingShape({ cx, cy, payload }: ScatterShapeProps) {
       ? `? ${value}, no expected value`
       : `${mark.glyph} ${value}${row.offScale === 'high' ? ' ▸ off scale' : row.offScale === 'low' ? ' ◂ off scale' : ''}`;
   // Held inside the plot: a label at an edge grows inwards.
-  const anchor = point.verdict === 'unknown' || row.offScale === 'low' ? 'start' : row.offScale === 'high' ? 'end' : 'middle';
+  const anchor =
+    point.verdict === 'unknown' || row.offScale === 'low' ? 'start' : row.offScale === 'high' ? 'end' : 'middle';
   return (
     <g>
       <Mark verdict={point.verdict} cx={cx} cy={cy} />
-      <text x={cx} y={cy - 12} textAnchor={anchor} fontSize={13} fontWeight={700}
-        className={mark.svg.split(' ')[0]}>
+      <text x={cx} y={cy - 12} textAnchor={anchor} fontSize={13} fontWeight={700} className={mark.svg.split(' ')[0]}>
         {text}
       </text>
     </g>

@@ -17,11 +17,35 @@ export function VoltagePlot({ points, width }: { points: VoltagePoint[]; width?:
   const size = width === undefined ? { responsive: true, style: { width: '100%', height } } : { width, height };
   return (
     <div role="img" aria-label={plotSummary(points)} className="text-ink">
-      <ComposedChart {...size} data={rows} layout="vertical" margin={{ top: 20, right: 48, bottom: 24, left: 8 }} accessibilityLayer={false}>
-        <XAxis type="number" domain={[-limit, limit]} ticks={plotTicks(limit)} tickFormatter={formatTick}
-          stroke="currentColor" tick={{ fill: 'currentColor', fontSize: 13 }}
-          label={{ value: 'Reading against the manual’s value', position: 'insideBottom', offset: -16, fill: 'currentColor', fontSize: 13 }} />
-        <YAxis type="category" dataKey="label" width={120} stroke="currentColor" tick={{ fill: 'currentColor', fontSize: 13 }} />
+      <ComposedChart
+        {...size}
+        data={rows}
+        layout="vertical"
+        margin={{ top: 20, right: 48, bottom: 24, left: 8 }}
+        accessibilityLayer={false}
+      >
+        <XAxis
+          type="number"
+          domain={[-limit, limit]}
+          ticks={plotTicks(limit)}
+          tickFormatter={formatTick}
+          stroke="currentColor"
+          tick={{ fill: 'currentColor', fontSize: 13 }}
+          label={{
+            value: 'Reading against the manual’s value',
+            position: 'insideBottom',
+            offset: -16,
+            fill: 'currentColor',
+            fontSize: 13,
+          }}
+        />
+        <YAxis
+          type="category"
+          dataKey="label"
+          width={120}
+          stroke="currentColor"
+          tick={{ fill: 'currentColor', fontSize: 13 }}
+        />
         <ReferenceLine x={0} stroke="currentColor" strokeDasharray="3 4" strokeOpacity={0.5} />
         <Bar dataKey="zone" barSize={16} shape={BandShape} isAnimationActive={false} />
         <Scatter dataKey="x" shape={ReadingShape} isAnimationActive={false} />

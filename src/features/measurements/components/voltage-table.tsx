@@ -14,7 +14,9 @@ export function VoltageTable({ points }: { points: VoltagePoint[] }) {
         <thead className="bg-sunken text-sm">
           <tr>
             {heads.map((h) => (
-              <th key={h} scope="col" className="px-3 py-2 font-semibold">{h}</th>
+              <th key={h} scope="col" className="px-3 py-2 font-semibold">
+                {h}
+              </th>
             ))}
           </tr>
         </thead>
@@ -22,15 +24,21 @@ export function VoltageTable({ points }: { points: VoltagePoint[] }) {
           <Fragment key={group}>
             <tbody>
               <tr className="border-t-2 border-rule bg-paper">
-                <th scope="rowgroup" colSpan={heads.length} className="px-3 py-1 text-sm font-bold">{group}</th>
+                <th scope="rowgroup" colSpan={heads.length} className="px-3 py-1 text-sm font-bold">
+                  {group}
+                </th>
               </tr>
               {list.map((p) => (
                 <tr key={p.id} className="border-t border-rule" data-verdict={p.verdict}>
-                  <th scope="row" className={`${cell} whitespace-nowrap font-semibold`}>{p.label}</th>
+                  <th scope="row" className={`${cell} font-semibold whitespace-nowrap`}>
+                    {p.label}
+                  </th>
                   <td className={`${cell} font-mono`}>{p.expected === null ? '—' : voltsText(p.expected)}</td>
                   <td className={`${cell} font-mono`}>{p.band || '—'}</td>
                   <td className={`${cell} font-mono`}>{voltsText(p.reading)}</td>
-                  <td className={`${cell} font-mono whitespace-nowrap`}>{formatDeviation(p.deviationPct === null ? null : p.deviationPct / 100)}</td>
+                  <td className={`${cell} font-mono whitespace-nowrap`}>
+                    {formatDeviation(p.deviationPct === null ? null : p.deviationPct / 100)}
+                  </td>
                   <td className={cell}>
                     <VerdictBadge verdict={p.verdict} reason={p.reason} />
                   </td>

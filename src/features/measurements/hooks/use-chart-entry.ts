@@ -1,6 +1,14 @@
 import { useEffect, useRef, useState } from 'react';
 import { useCreateMeasurements } from '../api/create-measurement';
-import { blankRow, blankShared, isBlankRow, rowInput, rowProblem, type EntryRow, type EntryShared } from '../lib/chart-entry';
+import {
+  blankRow,
+  blankShared,
+  isBlankRow,
+  rowInput,
+  rowProblem,
+  type EntryRow,
+  type EntryShared,
+} from '../lib/chart-entry';
 
 const START_ROWS = 3;
 
@@ -31,7 +39,8 @@ export function useChartEntry(restorationId: number) {
     if (focus) setFocusKey(key);
   };
 
-  const removeRow = (key: number) => setRows((list) => (list.length > 1 ? list.filter((r) => r.key !== key) : [blankRow(nextKey.current++)]));
+  const removeRow = (key: number) =>
+    setRows((list) => (list.length > 1 ? list.filter((r) => r.key !== key) : [blankRow(nextKey.current++)]));
 
   async function saveAll() {
     setSavedCount(null);
@@ -39,7 +48,9 @@ export function useChartEntry(restorationId: number) {
     const checked = filled.map((r) => ({ row: r, problem: rowProblem(r) }));
     const ready = checked.filter((c) => c.problem === undefined).map((c) => c.row);
     const results = ready.length ? await save.mutateAsync(ready.map((r) => rowInput(r, shared))) : [];
-    const errors = new Map<number, string>(checked.flatMap((c) => (c.problem ? [[c.row.key, c.problem] as const] : [])));
+    const errors = new Map<number, string>(
+      checked.flatMap((c) => (c.problem ? [[c.row.key, c.problem] as const] : [])),
+    );
     const saved = new Set<number>();
     results.forEach((result, i) => {
       const key = ready[i]!.key;
@@ -48,11 +59,24 @@ export function useChartEntry(restorationId: number) {
     });
     setSavedCount(saved.size);
     setRows((list) => {
-      const left = list.filter((r) => !saved.has(r.key) && !(isBlankRow(r) && saved.size > 0)).map((r) => ({ ...r, error: errors.get(r.key) }));
+      const left = list
+        .filter((r) => !saved.has(r.key) && !(isBlankRow(r) && saved.size > 0))
+        .map((r) => ({ ...r, error: errors.get(r.key) }));
       return left.length ? left : [blankRow(nextKey.current++)];
     });
   }
 
   const filledCount = rows.filter((r) => !isBlankRow(r)).length;
-  return { rows, shared, setShared, change, addRow, removeRow, saveAll, saving: save.isPending, savedCount, filledCount };
+  return {
+    rows,
+    shared,
+    setShared,
+    change,
+    addRow,
+    removeRow,
+    saveAll,
+    saving: save.isPending,
+    savedCount,
+    filledCount,
+  };
 }

@@ -21,7 +21,8 @@ export function useLineUpEditor(restorationId: number, initial: Valve[], onSaved
     setRows((list) => list.map((r) => (r.key === key ? { ...r, ...patch } : r)));
     setErrors((e) => (e.has(key) ? new Map([...e].filter(([k]) => k !== key)) : e));
   };
-  const add = () => setRows((list) => [...list, { key: nextKey.current++, position: nextPosition(list), type: '', notes: '' }]);
+  const add = () =>
+    setRows((list) => [...list, { key: nextKey.current++, position: nextPosition(list), type: '', notes: '' }]);
   const remove = (key: number) => setRows((list) => list.filter((r) => r.key !== key));
 
   function submit() {
@@ -41,5 +42,15 @@ export function useLineUpEditor(restorationId: number, initial: Valve[], onSaved
   }
 
   const live = liveChassisLikely(rows.map((r) => r.type).filter((t) => t.trim() !== ''));
-  return { rows, errors, change, add, remove, submit, live, saving: save.isPending, serverMessage: save.error?.message };
+  return {
+    rows,
+    errors,
+    change,
+    add,
+    remove,
+    submit,
+    live,
+    saving: save.isPending,
+    serverMessage: save.error?.message,
+  };
 }

@@ -15,21 +15,49 @@ export type ReadingFormValues = z.input<typeof formSchema>;
 type Output = z.output<typeof formSchema>;
 
 const blank: ReadingFormValues = {
-  location: '', quantity: 'esr', expected: '', tolerance: '', rating: '', reading: '',
-  conditions: '', method: '', chartMeter: '', meter: '', source: '', findingId: '', ownerVisible: false, powerOn: false,
+  location: '',
+  quantity: 'esr',
+  expected: '',
+  tolerance: '',
+  rating: '',
+  reading: '',
+  conditions: '',
+  method: '',
+  chartMeter: '',
+  meter: '',
+  source: '',
+  findingId: '',
+  ownerVisible: false,
+  powerOn: false,
 };
 
 const valuesOf = (m: Measurement): ReadingFormValues => ({
-  location: m.location, quantity: m.quantity, expected: m.expectedText, tolerance: m.toleranceText, rating: m.ratingText,
-  reading: m.readingText, conditions: m.conditions, method: m.method, chartMeter: m.chartMeterText, meter: m.meterText, source: m.sourceText, findingId: m.findingId === null ? '' : String(m.findingId),
-  ownerVisible: m.ownerVisible, powerOn: m.powerOn,
+  location: m.location,
+  quantity: m.quantity,
+  expected: m.expectedText,
+  tolerance: m.toleranceText,
+  rating: m.ratingText,
+  reading: m.readingText,
+  conditions: m.conditions,
+  method: m.method,
+  chartMeter: m.chartMeterText,
+  meter: m.meterText,
+  source: m.sourceText,
+  findingId: m.findingId === null ? '' : String(m.findingId),
+  ownerVisible: m.ownerVisible,
+  powerOn: m.powerOn,
 });
 
 /**
  * The reading form's state: the shared schema validates it, the bench library previews the verdict as it is typed,
  * and a save creates or (with `measurement`) changes the reading. Messages are found per field.
  */
-export function useReadingForm({ restorationId, measurement, findingId, onDone }: {
+export function useReadingForm({
+  restorationId,
+  measurement,
+  findingId,
+  onDone,
+}: {
   restorationId: number;
   measurement?: Measurement;
   findingId?: number;
@@ -39,7 +67,16 @@ export function useReadingForm({ restorationId, measurement, findingId, onDone }
     resolver: zodResolver(formSchema),
     defaultValues: measurement ? valuesOf(measurement) : { ...blank, findingId: findingId ? String(findingId) : '' },
   });
-  const [quantity = 'esr', expected = '', tolerance = '', rating = '', reading = '', chartMeter = '', meter = '', source = ''] = useWatch({
+  const [
+    quantity = 'esr',
+    expected = '',
+    tolerance = '',
+    rating = '',
+    reading = '',
+    chartMeter = '',
+    meter = '',
+    source = '',
+  ] = useWatch({
     control: form.control,
     name: ['quantity', 'expected', 'tolerance', 'rating', 'reading', 'chartMeter', 'meter', 'source'],
   });

@@ -25,18 +25,46 @@ export interface EntryShared {
   ownerVisible: boolean;
 }
 
-export const blankShared: EntryShared = { quantity: 'dc-voltage', conditions: '', method: '', chartMeter: '', meter: '', ownerVisible: false };
+export const blankShared: EntryShared = {
+  quantity: 'dc-voltage',
+  conditions: '',
+  method: '',
+  chartMeter: '',
+  meter: '',
+  ownerVisible: false,
+};
 
-export const blankRow = (key: number): EntryRow => ({ key, location: '', expected: '', tolerance: '', reading: '', source: '' });
+export const blankRow = (key: number): EntryRow => ({
+  key,
+  location: '',
+  expected: '',
+  tolerance: '',
+  reading: '',
+  source: '',
+});
 
-export const isBlankRow = (row: EntryRow) => [row.location, row.expected, row.tolerance, row.reading, row.source].every((t) => t.trim() === '');
+export const isBlankRow = (row: EntryRow) =>
+  [row.location, row.expected, row.tolerance, row.reading, row.source].every((t) => t.trim() === '');
 
 /**
  * The live verdict for a row, as the form shows it. With the chart's meter, yours and the row's source resistance,
  * the reading is judged against what your meter should read there (the bench library's meter loading).
  */
-export const rowPreview = (row: EntryRow, quantity: EntryShared['quantity'], meters: Pick<EntryShared, 'chartMeter' | 'meter'> = { chartMeter: '', meter: '' }): Preview =>
-  previewVerdict({ quantity, expected: row.expected, tolerance: row.tolerance, rating: '', reading: row.reading, chartMeter: meters.chartMeter, meter: meters.meter, source: row.source });
+export const rowPreview = (
+  row: EntryRow,
+  quantity: EntryShared['quantity'],
+  meters: Pick<EntryShared, 'chartMeter' | 'meter'> = { chartMeter: '', meter: '' },
+): Preview =>
+  previewVerdict({
+    quantity,
+    expected: row.expected,
+    tolerance: row.tolerance,
+    rating: '',
+    reading: row.reading,
+    chartMeter: meters.chartMeter,
+    meter: meters.meter,
+    source: row.source,
+  });
 
 /** What is missing before a row can be sent, in words; undefined when it can go. */
 export function rowProblem(row: EntryRow): string | undefined {

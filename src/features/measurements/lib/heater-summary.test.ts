@@ -6,7 +6,11 @@ import { heaterSummary } from './heater-summary';
 describe('heaterSummary', () => {
   it('when the line-up is a 100 mA series string, then its total and current are given', () => {
     // from memory: UCH81 19 + UF89 12.6 + UABC80 28 + UL84 45 + UY85 38 = 142.6 V at 100 mA
-    expect(heaterSummary(['UCH81', 'UF89', 'UABC80', 'UL84', 'UY85'])).toEqual({ line: '5 valves in series: 142.6 V at 100 mA', mixed: false, unknown: [] });
+    expect(heaterSummary(['UCH81', 'UF89', 'UABC80', 'UL84', 'UY85'])).toEqual({
+      line: '5 valves in series: 142.6 V at 100 mA',
+      mixed: false,
+      unknown: [],
+    });
   });
 
   it('when the line-up is a 6.3 V transformer set, then the winding’s load is given', () => {

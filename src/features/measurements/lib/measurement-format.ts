@@ -1,4 +1,12 @@
-import { absoluteTolerance, describeDeviation, formatQuantity, isOverRange, limitOf, parseTolerance, readingKinds } from '../../../../shared/bench';
+import {
+  absoluteTolerance,
+  describeDeviation,
+  formatQuantity,
+  isOverRange,
+  limitOf,
+  parseTolerance,
+  readingKinds,
+} from '../../../../shared/bench';
 import type { Measurement } from '../../../../shared/schemas/measurements';
 import { formatDateTime, formatDeviation, formatTolerance as formatToleranceBand } from '../../../lib/format';
 
@@ -18,21 +26,32 @@ export function formatTolerance(text: string): string {
  * A stored reading's deviation in words that fit its limit: "200 MΩ, above the 2 MΩ minimum" for insulation, "1.1 Ω, above
  * the 800 mΩ maximum" for ESR, "−75 kHz" for an IF, "+12.8 %" against a nominal value, "over range" when the meter overflowed.
  */
-export function deviationWords(m: Pick<Measurement, 'quantity' | 'toleranceText' | 'readingText' | 'reading' | 'reference' | 'deviation'>): string {
+export function deviationWords(
+  m: Pick<Measurement, 'quantity' | 'toleranceText' | 'readingText' | 'reading' | 'reference' | 'deviation'>,
+): string {
   const overRange = isOverRange(m.readingText);
   return describeDeviation({
-    limit: limitOf(m.quantity, m.toleranceText), reading: overRange && /^\s*(?:O\.?L|over|∞)/i.test(m.readingText) ? null : m.reading,
-    reference: m.reference, deviation: m.deviation, unit: readingKinds[m.quantity].unit, overRange, absolute: absoluteTolerance(m.quantity, m.toleranceText),
+    limit: limitOf(m.quantity, m.toleranceText),
+    reading: overRange && /^\s*(?:O\.?L|over|∞)/i.test(m.readingText) ? null : m.reading,
+    reference: m.reference,
+    deviation: m.deviation,
+    unit: readingKinds[m.quantity].unit,
+    overRange,
+    absolute: absoluteTolerance(m.quantity, m.toleranceText),
   });
 }
 
 /** The expected side of a reading as the manual gives it: value, tolerance and rating where its kind's rule uses them. */
-export function expectedSummary(m: Pick<Measurement, 'quantity' | 'expectedText' | 'toleranceText' | 'ratingText'> & { expected?: number | null }): string {
+export function expectedSummary(
+  m: Pick<Measurement, 'quantity' | 'expectedText' | 'toleranceText' | 'ratingText'> & { expected?: number | null },
+): string {
   const rule = readingKinds[m.quantity].rule;
-  if (rule.type === 'capacitor-limit') return [m.expectedText, m.ratingText].filter((t) => t.trim() !== '').join(' ') || '—';
+  if (rule.type === 'capacitor-limit')
+    return [m.expectedText, m.ratingText].filter((t) => t.trim() !== '').join(' ') || '—';
   const limit = limitOf(m.quantity, m.toleranceText);
   const word = limit === 'maximum' ? 'max' : 'min';
-  if (rule.type !== 'band' && rule.default && m.expectedText.trim() === '') return `${word} ${formatQuantity(rule.default.value, readingKinds[m.quantity].unit)}`;
+  if (rule.type !== 'band' && rule.default && m.expectedText.trim() === '')
+    return `${word} ${formatQuantity(rule.default.value, readingKinds[m.quantity].unit)}`;
   if (m.expectedText.trim() === '') return '—';
   if (limit !== 'nominal') return `${word} ${m.expectedText}`;
   if (rule.type !== 'band') return m.expectedText;

@@ -3,8 +3,16 @@ import { nextPosition, valveWords } from './valve-words';
 
 describe('valveWords', () => {
   it('decodes heater, systems and base in words', () => {
-    expect(valveWords('EL84')).toMatchObject({ ok: true, heater: '6.3 V parallel', base: expect.stringMatching(/noval/) });
-    expect(valveWords('UCH42')).toMatchObject({ ok: true, heater: '100 mA series (14 V)', systems: 'small-signal triode; hexode or heptode (hexode type)' });
+    expect(valveWords('EL84')).toMatchObject({
+      ok: true,
+      heater: '6.3 V parallel',
+      base: expect.stringMatching(/noval/),
+    });
+    expect(valveWords('UCH42')).toMatchObject({
+      ok: true,
+      heater: '100 mA series (14 V)',
+      systems: 'small-signal triode; hexode or heptode (hexode type)',
+    });
     expect(valveWords('DK92')).toMatchObject({ ok: true, heater: expect.stringMatching(/V battery$/) });
   });
 

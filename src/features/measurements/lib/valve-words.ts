@@ -4,8 +4,7 @@ import type { Valve } from '../../../../shared/schemas/measurements';
 
 /** A valve type decoded in words, or the library's reason it cannot be. */
 export type ValveWords =
-  | { ok: true; heater: string; systems: string; base: string; description?: string }
-  | { ok: false; message: string };
+  { ok: true; heater: string; systems: string; base: string; description?: string } | { ok: false; message: string };
 
 const mA = (amps: number) => `${Number((amps * 1000).toPrecision(3))} mA`;
 
@@ -13,7 +12,10 @@ const mA = (amps: number) => `${Number((amps * 1000).toPrecision(3))} mA`;
 export function heaterWords(heater: ValveHeater): string {
   switch (heater.supply) {
     case 'series':
-      return [heater.amps === undefined ? 'series' : `${mA(heater.amps)} series`, heater.volts === undefined ? '' : `(${formatQuantity(heater.volts, 'V')})`]
+      return [
+        heater.amps === undefined ? 'series' : `${mA(heater.amps)} series`,
+        heater.volts === undefined ? '' : `(${formatQuantity(heater.volts, 'V')})`,
+      ]
         .filter(Boolean)
         .join(' ');
     case 'parallel':

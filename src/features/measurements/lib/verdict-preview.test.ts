@@ -11,19 +11,36 @@ describe('previewVerdict', () => {
   // Worst-case ESR for new electrolytics at 100 kHz, 20 °C: 22 µF 25 V reads at most 2.1 Ω
   // (widely circulated technicians' table, reproduced at glodark.com/design/esrchart.htm).
   it('judges ESR 1.1 Ω on 22 µF 25 V within the limit, ignoring a tolerance left from another kind', () => {
-    const p = previewVerdict({ quantity: 'esr', expected: '22µ', tolerance: 'nonsense', rating: '25 V', reading: '1.1' });
+    const p = previewVerdict({
+      quantity: 'esr',
+      expected: '22µ',
+      tolerance: 'nonsense',
+      rating: '25 V',
+      reading: '1.1',
+    });
     expect(p).toMatchObject({ status: 'ready', verdict: { verdict: 'within' } });
   });
 
   it('ignores a rating for a voltage, where it does not apply', () => {
-    expect(previewVerdict({ ...texts, rating: 'xyz', reading: '262 V' })).toMatchObject({ status: 'ready', verdict: { verdict: 'within' } });
+    expect(previewVerdict({ ...texts, rating: 'xyz', reading: '262 V' })).toMatchObject({
+      status: 'ready',
+      verdict: { verdict: 'within' },
+    });
   });
 
   it('names the field the library refuses', () => {
     expect(previewVerdict({ ...texts, reading: '262 A' })).toMatchObject({ status: 'refused', field: 'reading' });
-    expect(previewVerdict({ ...texts, expected: '4k7', reading: '262 V' })).toMatchObject({ status: 'refused', field: 'expected' });
-    expect(previewVerdict({ ...texts, tolerance: 'ten', reading: '262 V' })).toMatchObject({ status: 'refused', field: 'tolerance' });
-    expect(previewVerdict({ quantity: 'leakage', expected: '32µ', tolerance: '', rating: '350 Ω', reading: '1 mA' })).toMatchObject({
+    expect(previewVerdict({ ...texts, expected: '4k7', reading: '262 V' })).toMatchObject({
+      status: 'refused',
+      field: 'expected',
+    });
+    expect(previewVerdict({ ...texts, tolerance: 'ten', reading: '262 V' })).toMatchObject({
+      status: 'refused',
+      field: 'tolerance',
+    });
+    expect(
+      previewVerdict({ quantity: 'leakage', expected: '32µ', tolerance: '', rating: '350 Ω', reading: '1 mA' }),
+    ).toMatchObject({
       status: 'refused',
       field: 'rating',
     });

@@ -3,7 +3,18 @@ import type { MeasuredQuantity, MeasurementVerdict } from '../../../../shared/be
 
 /** The form's fields a message can be about. */
 export type ReadingField =
-  | 'location' | 'quantity' | 'expected' | 'tolerance' | 'rating' | 'reading' | 'conditions' | 'method' | 'findingId' | 'chartMeter' | 'meter' | 'source';
+  | 'location'
+  | 'quantity'
+  | 'expected'
+  | 'tolerance'
+  | 'rating'
+  | 'reading'
+  | 'conditions'
+  | 'method'
+  | 'findingId'
+  | 'chartMeter'
+  | 'meter'
+  | 'source';
 
 export interface ReadingTexts {
   quantity: MeasuredQuantity;
@@ -24,10 +35,23 @@ export type Preview =
 
 // Bench-library messages start with the field's name in words; the API's validation messages with its key.
 const PREFIXES: Record<string, ReadingField> = {
-  reading: 'reading', 'expected value': 'expected', expected: 'expected', rating: 'rating', tolerance: 'tolerance',
-  location: 'location', quantity: 'quantity', conditions: 'conditions', method: 'method', findingid: 'findingId',
-  "chart's meter": 'chartMeter', 'chart’s meter': 'chartMeter', chartmeter: 'chartMeter', 'your meter': 'meter', meter: 'meter',
-  'source resistance': 'source', source: 'source',
+  reading: 'reading',
+  'expected value': 'expected',
+  expected: 'expected',
+  rating: 'rating',
+  tolerance: 'tolerance',
+  location: 'location',
+  quantity: 'quantity',
+  conditions: 'conditions',
+  method: 'method',
+  findingid: 'findingId',
+  "chart's meter": 'chartMeter',
+  'chart’s meter': 'chartMeter',
+  chartmeter: 'chartMeter',
+  'your meter': 'meter',
+  meter: 'meter',
+  'source resistance': 'source',
+  source: 'source',
 };
 
 /** Which field a message from the bench library or the API is about, if it says. */

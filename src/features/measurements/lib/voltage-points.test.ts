@@ -5,7 +5,13 @@ import { groupOf, groupPoints, plotLimit, plotSummary, voltagePoints } from './v
 
 describe('voltagePoints', () => {
   it('keeps only voltages, the latest at each location, in valve then pin order', () => {
-    const esr = makeMeasurement(9, { location: 'C26', quantity: 'esr', expected: '22µ', rating: '25 V', reading: '1.1' });
+    const esr = makeMeasurement(9, {
+      location: 'C26',
+      quantity: 'esr',
+      expected: '22µ',
+      rating: '25 V',
+      reading: '1.1',
+    });
     const older = { ...volts(10, 'V5 pin 7', '250 V', '100 V'), measuredAt: '2026-01-01T09:00:00.000Z' };
     const points = voltagePoints([older, ...fivePoints(), esr]);
     expect(points.map((p) => p.label)).toEqual(['V1 pin 6', 'V4 pin 1', 'V5 pin 3', 'V5 pin 7', 'V5 pin 9']);
@@ -13,8 +19,19 @@ describe('voltagePoints', () => {
   });
 
   it('keeps AC and DC at one pin apart, and uses the usual ±20 % when no tolerance is given', () => {
-    const ac = makeMeasurement(1, { location: 'V3 pin 4', quantity: 'ac-voltage', expected: '6.3 V', reading: '6.5 V' });
-    const dc = makeMeasurement(2, { location: 'V3 pin 4', quantity: 'dc-voltage', expected: '2 V', tolerance: '-10/+30', reading: '2.1 V' });
+    const ac = makeMeasurement(1, {
+      location: 'V3 pin 4',
+      quantity: 'ac-voltage',
+      expected: '6.3 V',
+      reading: '6.5 V',
+    });
+    const dc = makeMeasurement(2, {
+      location: 'V3 pin 4',
+      quantity: 'dc-voltage',
+      expected: '2 V',
+      tolerance: '-10/+30',
+      reading: '2.1 V',
+    });
     const [d, a] = voltagePoints([ac, dc]);
     expect(a).toMatchObject({ label: 'V3 pin 4 (AC)', band: '±20 % (usual)', bandPct: [-20, 20] });
     expect(d).toMatchObject({ label: 'V3 pin 4', band: '−10/+30 %', bandPct: [-10, 30] });
@@ -24,7 +41,11 @@ describe('voltagePoints', () => {
     expect(groupOf('V5 pin 7')).toBe('V5');
     expect(groupOf('v12 pin 1')).toBe('V12');
     expect(groupOf('HT line')).toBe('HT line');
-    expect(groupPoints(voltagePoints(fivePoints())).map((g) => [g.group, g.points.length])).toEqual([['V1', 1], ['V4', 1], ['V5', 3]]);
+    expect(groupPoints(voltagePoints(fivePoints())).map((g) => [g.group, g.points.length])).toEqual([
+      ['V1', 1],
+      ['V4', 1],
+      ['V5', 3],
+    ]);
   });
 });
 
@@ -46,6 +67,8 @@ describe('the plot', () => {
       'Voltage chart, 6 points: 4 within, 1 marginal, 1 out. Out of tolerance: V5 pin 7 reads 320 V against 250 V ±10 %. ' +
         'Marginal: V2 pin 1 reads 113 V against 100 V ±10 %.',
     );
-    expect(plotSummary(voltagePoints([volts(1, 'V1 pin 6', '90 V', '92 V')]))).toBe('Voltage chart, 1 point: 1 within. None out of tolerance.');
+    expect(plotSummary(voltagePoints([volts(1, 'V1 pin 6', '90 V', '92 V')]))).toBe(
+      'Voltage chart, 1 point: 1 within. None out of tolerance.',
+    );
   });
 });

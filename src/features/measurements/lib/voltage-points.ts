@@ -64,10 +64,19 @@ export function voltagePoints(measurements: readonly Measurement[]): VoltagePoin
   }
   return [...latest.values()]
     .map((m) => ({
-      id: m.id, location: m.location, group: groupOf(m.location), quantity: m.quantity,
+      id: m.id,
+      location: m.location,
+      group: groupOf(m.location),
+      quantity: m.quantity,
       label: m.quantity === 'ac-voltage' ? `${m.location} (AC)` : m.location,
-      expectedText: m.expectedText, readingText: m.readingText, expected: m.expected, reading: m.reading,
-      ...bandOf(m), deviationPct: m.deviation === null ? null : m.deviation * 100, verdict: m.verdict, reason: m.verdictReason,
+      expectedText: m.expectedText,
+      readingText: m.readingText,
+      expected: m.expected,
+      reading: m.reading,
+      ...bandOf(m),
+      deviationPct: m.deviation === null ? null : m.deviation * 100,
+      verdict: m.verdict,
+      reason: m.verdictReason,
     }))
     .sort(byLocation);
 }
@@ -108,7 +117,10 @@ export function plotSummary(points: readonly VoltagePoint[]): string {
   const head = `Voltage chart, ${points.length} ${points.length === 1 ? 'point' : 'points'}: ${counts}.`;
   const out = points.filter((p) => p.verdict === 'out');
   const marginal = points.filter((p) => p.verdict === 'marginal');
-  const parts = [head, out.length ? `Out of tolerance: ${out.map(describePoint).join('; ')}.` : 'None out of tolerance.'];
+  const parts = [
+    head,
+    out.length ? `Out of tolerance: ${out.map(describePoint).join('; ')}.` : 'None out of tolerance.',
+  ];
   if (marginal.length) parts.push(`Marginal: ${marginal.map(describePoint).join('; ')}.`);
   return parts.join(' ');
 }

@@ -14,17 +14,25 @@ function usePeopleMutation<T>(restorationId: number, fn: (input: T) => Promise<u
 
 export const useChangeRole = (restorationId: number) =>
   usePeopleMutation(restorationId, ({ userId, role }: { userId: number; role: Role }) =>
-    api(`/restorations/${restorationId}/members/${userId}`, { method: 'PATCH', json: { role } }));
+    api(`/restorations/${restorationId}/members/${userId}`, { method: 'PATCH', json: { role } }),
+  );
 
 export const useRemoveMember = (restorationId: number) =>
-  usePeopleMutation(restorationId, (userId: number) => api(`/restorations/${restorationId}/members/${userId}`, { method: 'DELETE' }));
+  usePeopleMutation(restorationId, (userId: number) =>
+    api(`/restorations/${restorationId}/members/${userId}`, { method: 'DELETE' }),
+  );
 
 export const useInvite = (restorationId: number) =>
   usePeopleMutation(restorationId, (input: InvitationInput) =>
-    api(`/restorations/${restorationId}/invitations`, { method: 'POST', json: input }));
+    api(`/restorations/${restorationId}/invitations`, { method: 'POST', json: input }),
+  );
 
 export const useResendInvitation = (restorationId: number) =>
-  usePeopleMutation(restorationId, (id: number) => api(`/restorations/${restorationId}/invitations/${id}/resend`, { method: 'POST' }));
+  usePeopleMutation(restorationId, (id: number) =>
+    api(`/restorations/${restorationId}/invitations/${id}/resend`, { method: 'POST' }),
+  );
 
 export const useRevokeInvitation = (restorationId: number) =>
-  usePeopleMutation(restorationId, (id: number) => api(`/restorations/${restorationId}/invitations/${id}`, { method: 'DELETE' }));
+  usePeopleMutation(restorationId, (id: number) =>
+    api(`/restorations/${restorationId}/invitations/${id}`, { method: 'DELETE' }),
+  );

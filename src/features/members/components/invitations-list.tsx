@@ -19,16 +19,30 @@ export function InvitationsList({ restorationId, invitations }: { restorationId:
                 {roleLabels[i.role]} · expires {formatMediumDate(i.expiresAt)}
               </p>
             </div>
-            <button type="button" className="min-h-11 rounded-lg px-3 text-sm hover:bg-sunken" disabled={resend.isPending} onClick={() => resend.mutate(i.id)}>
+            <button
+              type="button"
+              className="min-h-11 rounded-lg px-3 text-sm hover:bg-sunken"
+              disabled={resend.isPending}
+              onClick={() => resend.mutate(i.id)}
+            >
               Resend
             </button>
-            <button type="button" className="min-h-11 rounded-lg px-3 text-sm text-danger hover:bg-danger-soft" disabled={revoke.isPending} onClick={() => revoke.mutate(i.id)}>
+            <button
+              type="button"
+              className="min-h-11 rounded-lg px-3 text-sm text-danger hover:bg-danger-soft"
+              disabled={revoke.isPending}
+              onClick={() => revoke.mutate(i.id)}
+            >
               Revoke
             </button>
           </li>
         ))}
       </ul>
-      {resend.isSuccess && <p role="status" className="mt-2 text-sm">Sent again with a new link.</p>}
+      {resend.isSuccess && (
+        <p role="status" className="mt-2 text-sm">
+          Sent again with a new link.
+        </p>
+      )}
       <FormAlertInline message={(resend.error ?? revoke.error)?.message} />
     </div>
   );

@@ -20,12 +20,17 @@ export function InviteForm({ restorationId }: { restorationId: number }) {
     defaultValues: { email: '', role: 'mentor' },
   });
   return (
-    <form noValidate className="space-y-3 rounded-xl border border-rule bg-panel p-4"
-      onSubmit={handleSubmit((v) => invite.mutate(v, { onSuccess: () => reset({ email: '', role: v.role }) }))}>
+    <form
+      noValidate
+      className="space-y-3 rounded-xl border border-rule bg-panel p-4"
+      onSubmit={handleSubmit((v) => invite.mutate(v, { onSuccess: () => reset({ email: '', role: v.role }) }))}
+    >
       <h3 className="font-bold">Invite someone</h3>
       <div className="grid gap-3 sm:grid-cols-[1fr_14rem]">
         <Field label="E-mail" error={formState.errors.email?.message}>
-          {(a) => <input {...a} {...register('email')} type="email" className={inputClass} placeholder="name@example.org" />}
+          {(a) => (
+            <input {...a} {...register('email')} type="email" className={inputClass} placeholder="name@example.org" />
+          )}
         </Field>
         <Field label="Role" error={formState.errors.role?.message}>
           {(a) => (
@@ -40,7 +45,11 @@ export function InviteForm({ restorationId }: { restorationId: number }) {
         </Field>
       </div>
       <FormAlertInline message={invite.error?.message} />
-      {invite.isSuccess && <p role="status" className="text-sm">Invitation sent. The link works once, for seven days.</p>}
+      {invite.isSuccess && (
+        <p role="status" className="text-sm">
+          Invitation sent. The link works once, for seven days.
+        </p>
+      )}
       <button type="submit" className={buttonClass('primary')} disabled={invite.isPending}>
         {invite.isPending ? 'Sending…' : 'Send invitation'}
       </button>

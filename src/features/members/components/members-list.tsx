@@ -4,7 +4,17 @@ import { useConfirm } from '../../../components/use-confirm';
 import { FormAlertInline } from './form-alert-inline';
 import { useChangeRole, useRemoveMember } from '../api/manage-members';
 
-export function MembersList({ restorationId, members, canManage, meId }: { restorationId: number; members: Member[]; canManage: boolean; meId?: number }) {
+export function MembersList({
+  restorationId,
+  members,
+  canManage,
+  meId,
+}: {
+  restorationId: number;
+  members: Member[];
+  canManage: boolean;
+  meId?: number;
+}) {
   const changeRole = useChangeRole(restorationId);
   const remove = useRemoveMember(restorationId);
   const error = changeRole.error ?? remove.error;

@@ -18,17 +18,19 @@ export const useEstimates = (restorationId: number) => useQuery(estimatesQueryOp
 
 function useAfterWrite(restorationId: number) {
   const client = useQueryClient();
-  return () => Promise.all([
-    client.invalidateQueries({ queryKey: moneyKeys.estimates(restorationId) }),
-    client.invalidateQueries({ queryKey: moneyKeys.history(restorationId) }),
-  ]);
+  return () =>
+    Promise.all([
+      client.invalidateQueries({ queryKey: moneyKeys.estimates(restorationId) }),
+      client.invalidateQueries({ queryKey: moneyKeys.history(restorationId) }),
+    ]);
 }
 
 /** Writes a new version (sent to the owner now, or kept as a draft). */
 export function useCreateEstimate(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
-    mutationFn: (input: EstimateInput) => api<Estimate>(`/restorations/${restorationId}/estimates`, { method: 'POST', json: input }),
+    mutationFn: (input: EstimateInput) =>
+      api<Estimate>(`/restorations/${restorationId}/estimates`, { method: 'POST', json: input }),
     onSuccess: after,
   });
 }
@@ -46,11 +48,18 @@ export function useDecideEstimate(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
     mutationFn: (input: { estimateId: number; decision: 'approved' | 'declined'; name: string; version: number }) =>
-      api<Estimate>(`/estimates/${input.estimateId}/decision`, { method: 'POST', json: { decision: input.decision, name: input.name, version: input.version } }),
+      api<Estimate>(`/estimates/${input.estimateId}/decision`, {
+        method: 'POST',
+        json: { decision: input.decision, name: input.name, version: input.version },
+      }),
     onSuccess: after,
   });
 }
 
 /** The workshop's prices a new estimate will carry (technicians only). */
 export const useMoneySettings = (restorationId: number, enabled: boolean) =>
-  useQuery({ queryKey: ['restorations', restorationId, 'money-settings'], queryFn: () => api<WorkshopSettings>(`/restorations/${restorationId}/money-settings`), enabled });
+  useQuery({
+    queryKey: ['restorations', restorationId, 'money-settings'],
+    queryFn: () => api<WorkshopSettings>(`/restorations/${restorationId}/money-settings`),
+    enabled,
+  });

@@ -9,7 +9,10 @@ export const labourKey = (restorationId: number) => ['restorations', restoration
 
 /** The set's time entries, the reader's running timer (on any set) and this week's totals per technician. */
 export const useLabour = (restorationId: number) =>
-  useQuery({ queryKey: labourKey(restorationId), queryFn: () => api<LabourLog>(`/restorations/${restorationId}/labour`) });
+  useQuery({
+    queryKey: labourKey(restorationId),
+    queryFn: () => api<LabourLog>(`/restorations/${restorationId}/labour`),
+  });
 
 export interface LabourTarget {
   findingId: number | null;
@@ -34,10 +37,15 @@ function useLabourWrite<T>(restorationId: number, request: (input: T) => Promise
 
 export const useAddLabour = (restorationId: number) =>
   useLabourWrite(restorationId, (input: LabourTarget & { minutes: number; workedAt?: string }) =>
-    api<LabourLog>(`/restorations/${restorationId}/labour`, { method: 'POST', json: input }));
+    api<LabourLog>(`/restorations/${restorationId}/labour`, { method: 'POST', json: input }),
+  );
 
 export const useStartTimer = (restorationId: number) =>
-  useLabourWrite(restorationId, (input: LabourTarget) => api<LabourLog>(`/restorations/${restorationId}/labour/timer`, { method: 'POST', json: input }));
+  useLabourWrite(restorationId, (input: LabourTarget) =>
+    api<LabourLog>(`/restorations/${restorationId}/labour/timer`, { method: 'POST', json: input }),
+  );
 
 export const useStopTimer = (restorationId: number) =>
-  useLabourWrite(restorationId, () => api<LabourLog>(`/restorations/${restorationId}/labour/timer/stop`, { method: 'POST' }));
+  useLabourWrite(restorationId, () =>
+    api<LabourLog>(`/restorations/${restorationId}/labour/timer/stop`, { method: 'POST' }),
+  );

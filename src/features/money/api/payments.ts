@@ -15,12 +15,22 @@ export const paymentKeys = {
 const pollEvery = (polling: boolean) => (polling ? 2500 : false);
 
 export const invoicesQueryOptions = (restorationId: number, polling = false) =>
-  queryOptions({ queryKey: paymentKeys.invoices(restorationId), queryFn: () => api<Invoice[]>(`/restorations/${restorationId}/invoices`), refetchInterval: pollEvery(polling) });
-export const useRestorationInvoices = (restorationId: number, polling = false) => useQuery(invoicesQueryOptions(restorationId, polling));
+  queryOptions({
+    queryKey: paymentKeys.invoices(restorationId),
+    queryFn: () => api<Invoice[]>(`/restorations/${restorationId}/invoices`),
+    refetchInterval: pollEvery(polling),
+  });
+export const useRestorationInvoices = (restorationId: number, polling = false) =>
+  useQuery(invoicesQueryOptions(restorationId, polling));
 
 export const paymentsQueryOptions = (restorationId: number, polling = false) =>
-  queryOptions({ queryKey: paymentKeys.payments(restorationId), queryFn: () => api<Payment[]>(`/restorations/${restorationId}/payments`), refetchInterval: pollEvery(polling) });
-export const usePayments = (restorationId: number, polling = false) => useQuery(paymentsQueryOptions(restorationId, polling));
+  queryOptions({
+    queryKey: paymentKeys.payments(restorationId),
+    queryFn: () => api<Payment[]>(`/restorations/${restorationId}/payments`),
+    refetchInterval: pollEvery(polling),
+  });
+export const usePayments = (restorationId: number, polling = false) =>
+  useQuery(paymentsQueryOptions(restorationId, polling));
 
 /** Asks for a hosted checkout and goes there; the card is entered on the payment service's page, never here. */
 export function useCheckout() {
@@ -32,14 +42,16 @@ export function useCheckout() {
 
 function useAfterWrite(restorationId: number) {
   const client = useQueryClient();
-  return () => Promise.all(Object.values(paymentKeys).map((key) => client.invalidateQueries({ queryKey: key(restorationId) })));
+  return () =>
+    Promise.all(Object.values(paymentKeys).map((key) => client.invalidateQueries({ queryKey: key(restorationId) })));
 }
 
 /** A transfer or cash received, recorded by a technician. */
 export function useRecordPayment(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
-    mutationFn: ({ invoiceId, ...input }: ManualPaymentInput & { invoiceId: number }) => api<Payment>(`/invoices/${invoiceId}/payments`, { method: 'POST', json: input }),
+    mutationFn: ({ invoiceId, ...input }: ManualPaymentInput & { invoiceId: number }) =>
+      api<Payment>(`/invoices/${invoiceId}/payments`, { method: 'POST', json: input }),
     onSuccess: after,
   });
 }

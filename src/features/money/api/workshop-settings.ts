@@ -5,16 +5,20 @@ import { api } from '../../../lib/api-client';
 export const workshopSettingsKey = ['workshop', 'settings'] as const;
 
 /** The workshop's currency, prices, tax and invoice prefix (its technicians only). */
-export const useWorkshopSettings = () => useQuery({ queryKey: workshopSettingsKey, queryFn: () => api<WorkshopSettings>('/workshop/settings') });
+export const useWorkshopSettings = () =>
+  useQuery({ queryKey: workshopSettingsKey, queryFn: () => api<WorkshopSettings>('/workshop/settings') });
 
 export function useSaveWorkshopSettings() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: WorkshopSettings) => api<WorkshopSettings>('/workshop/settings', { method: 'PUT', json: input }),
+    mutationFn: (input: WorkshopSettings) =>
+      api<WorkshopSettings>('/workshop/settings', { method: 'PUT', json: input }),
     onSuccess: (saved) => {
       client.setQueryData(workshopSettingsKey, saved);
       // Every set's form reads the prices through its own money-settings query.
-      return client.invalidateQueries({ predicate: (q) => q.queryKey[0] === 'meta' || q.queryKey[2] === 'money-settings' || q.queryKey[3] === 'preview' });
+      return client.invalidateQueries({
+        predicate: (q) => q.queryKey[0] === 'meta' || q.queryKey[2] === 'money-settings' || q.queryKey[3] === 'preview',
+      });
     },
   });
 }

@@ -12,7 +12,15 @@ export const shareBasisPoints = (text: string) => {
 };
 
 /** A deposit request: a fixed amount in the workshop's currency, or a share of the approved estimate's high figure. */
-export function DepositForm({ restorationId, currency, onDone }: { restorationId: number; currency: string; onDone: () => void }) {
+export function DepositForm({
+  restorationId,
+  currency,
+  onDone,
+}: {
+  restorationId: number;
+  currency: string;
+  onDone: () => void;
+}) {
   const [mode, setMode] = useState<'amount' | 'share'>('share');
   const [text, setText] = useState('');
   const [error, setError] = useState('');
@@ -30,22 +38,74 @@ export function DepositForm({ restorationId, currency, onDone }: { restorationId
     }
   };
   return (
-    <form className="space-y-3 rounded-xl border border-rule bg-panel p-4" aria-label="Request a deposit" onSubmit={(e) => { e.preventDefault(); submit(); }}>
+    <form
+      className="space-y-3 rounded-xl border border-rule bg-panel p-4"
+      aria-label="Request a deposit"
+      onSubmit={(e) => {
+        e.preventDefault();
+        submit();
+      }}
+    >
       <fieldset className="flex flex-wrap gap-4">
         <legend className="font-semibold">Ask for</legend>
-        <label className="flex min-h-11 items-center gap-2"><input type="radio" name="deposit-mode" checked={mode === 'share'} onChange={() => { setMode('share'); setError(''); }} /> A share of the approved estimate</label>
-        <label className="flex min-h-11 items-center gap-2"><input type="radio" name="deposit-mode" checked={mode === 'amount'} onChange={() => { setMode('amount'); setError(''); }} /> A fixed amount</label>
+        <label className="flex min-h-11 items-center gap-2">
+          <input
+            type="radio"
+            name="deposit-mode"
+            checked={mode === 'share'}
+            onChange={() => {
+              setMode('share');
+              setError('');
+            }}
+          />{' '}
+          A share of the approved estimate
+        </label>
+        <label className="flex min-h-11 items-center gap-2">
+          <input
+            type="radio"
+            name="deposit-mode"
+            checked={mode === 'amount'}
+            onChange={() => {
+              setMode('amount');
+              setError('');
+            }}
+          />{' '}
+          A fixed amount
+        </label>
       </fieldset>
       <div className="max-w-xs space-y-1">
-        <label htmlFor={inputId} className="block font-semibold">{mode === 'share' ? 'Per cent of the high figure' : `Amount (${currency})`}</label>
-        <input id={inputId} inputMode="decimal" className={inputClass} value={text} placeholder={mode === 'share' ? '30' : '50.00'} aria-invalid={Boolean(error)}
-          onChange={(e) => { setText(e.target.value); setError(''); }} />
+        <label htmlFor={inputId} className="block font-semibold">
+          {mode === 'share' ? 'Per cent of the high figure' : `Amount (${currency})`}
+        </label>
+        <input
+          id={inputId}
+          inputMode="decimal"
+          className={inputClass}
+          value={text}
+          placeholder={mode === 'share' ? '30' : '50.00'}
+          aria-invalid={Boolean(error)}
+          onChange={(e) => {
+            setText(e.target.value);
+            setError('');
+          }}
+        />
       </div>
-      <p className="text-sm text-ink-soft">The request takes the next invoice number and is e-mailed to the owner with its PDF. It is deducted from the final invoice once paid.</p>
-      {(error || request.isError) && <p role="alert" className="font-semibold text-danger">{error || request.error?.message}</p>}
+      <p className="text-sm text-ink-soft">
+        The request takes the next invoice number and is e-mailed to the owner with its PDF. It is deducted from the
+        final invoice once paid.
+      </p>
+      {(error || request.isError) && (
+        <p role="alert" className="font-semibold text-danger">
+          {error || request.error?.message}
+        </p>
+      )}
       <div className="flex flex-wrap gap-2">
-        <Button type="submit" disabled={request.isPending}>{request.isPending ? 'Issuing…' : 'Issue the deposit request'}</Button>
-        <Button variant="quiet" onClick={onDone}>Cancel</Button>
+        <Button type="submit" disabled={request.isPending}>
+          {request.isPending ? 'Issuing…' : 'Issue the deposit request'}
+        </Button>
+        <Button variant="quiet" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

@@ -29,22 +29,90 @@ export function LabourEntryForm({ restorationId }: { restorationId: number }) {
     const minutes = typedMinutes(hours);
     if (minutes === null) return setInvalid(true);
     const workedAt = new Date(`${day}T12:00:00`).toISOString();
-    add.mutate({ ...targetOf(target), note: note.trim(), billable, minutes, workedAt }, { onSuccess: () => { setHours(''); setNote(''); } });
+    add.mutate(
+      { ...targetOf(target), note: note.trim(), billable, minutes, workedAt },
+      {
+        onSuccess: () => {
+          setHours('');
+          setNote('');
+        },
+      },
+    );
   };
   return (
-    <form className="grid gap-3 rounded-lg bg-sunken p-3 sm:grid-cols-[6rem_10rem_12rem_1fr] sm:items-end" aria-label="Add typed hours" onSubmit={(e) => { e.preventDefault(); submit(); }}>
+    <form
+      className="grid gap-3 rounded-lg bg-sunken p-3 sm:grid-cols-[6rem_10rem_12rem_1fr] sm:items-end"
+      aria-label="Add typed hours"
+      onSubmit={(e) => {
+        e.preventDefault();
+        submit();
+      }}
+    >
       <div className="space-y-1">
-        <label htmlFor={ids.hours} className="block font-semibold">Hours</label>
-        <input id={ids.hours} inputMode="decimal" className={inputClass} value={hours} placeholder="1.5" aria-invalid={invalid} aria-describedby={invalid ? `${ids.hours}-error` : undefined}
-          onChange={(e) => { setHours(e.target.value); setInvalid(false); }} />
+        <label htmlFor={ids.hours} className="block font-semibold">
+          Hours
+        </label>
+        <input
+          id={ids.hours}
+          inputMode="decimal"
+          className={inputClass}
+          value={hours}
+          placeholder="1.5"
+          aria-invalid={invalid}
+          aria-describedby={invalid ? `${ids.hours}-error` : undefined}
+          onChange={(e) => {
+            setHours(e.target.value);
+            setInvalid(false);
+          }}
+        />
       </div>
-      <div className="space-y-1"><label htmlFor={ids.day} className="block font-semibold">Day</label><input id={ids.day} type="date" className={inputClass} value={day} max={today()} onChange={(e) => setDay(e.target.value)} /></div>
-      <div className="space-y-1"><label htmlFor={ids.target} className="block font-semibold">For</label><LabourTargetSelect restorationId={restorationId} id={ids.target} value={target} onChange={setTarget} /></div>
-      <div className="space-y-1"><label htmlFor={ids.note} className="block font-semibold">Note</label><input id={ids.note} className={inputClass} value={note} maxLength={500} onChange={(e) => setNote(e.target.value)} /></div>
-      <label className="flex min-h-11 items-center gap-2"><input type="checkbox" checked={billable} onChange={(e) => setBillable(e.target.checked)} /> Billable</label>
-      <Button type="submit" disabled={add.isPending} className="sm:col-start-4 sm:justify-self-start">{add.isPending ? 'Adding…' : 'Add the hours'}</Button>
-      {invalid && <p id={`${ids.hours}-error`} role="alert" className="font-semibold text-danger sm:col-span-4">Type the hours as a number, e.g. 1.5 (up to 24).</p>}
-      {add.isError && <p role="alert" className="font-semibold text-danger sm:col-span-4">{add.error.message}</p>}
+      <div className="space-y-1">
+        <label htmlFor={ids.day} className="block font-semibold">
+          Day
+        </label>
+        <input
+          id={ids.day}
+          type="date"
+          className={inputClass}
+          value={day}
+          max={today()}
+          onChange={(e) => setDay(e.target.value)}
+        />
+      </div>
+      <div className="space-y-1">
+        <label htmlFor={ids.target} className="block font-semibold">
+          For
+        </label>
+        <LabourTargetSelect restorationId={restorationId} id={ids.target} value={target} onChange={setTarget} />
+      </div>
+      <div className="space-y-1">
+        <label htmlFor={ids.note} className="block font-semibold">
+          Note
+        </label>
+        <input
+          id={ids.note}
+          className={inputClass}
+          value={note}
+          maxLength={500}
+          onChange={(e) => setNote(e.target.value)}
+        />
+      </div>
+      <label className="flex min-h-11 items-center gap-2">
+        <input type="checkbox" checked={billable} onChange={(e) => setBillable(e.target.checked)} /> Billable
+      </label>
+      <Button type="submit" disabled={add.isPending} className="sm:col-start-4 sm:justify-self-start">
+        {add.isPending ? 'Adding…' : 'Add the hours'}
+      </Button>
+      {invalid && (
+        <p id={`${ids.hours}-error`} role="alert" className="font-semibold text-danger sm:col-span-4">
+          Type the hours as a number, e.g. 1.5 (up to 24).
+        </p>
+      )}
+      {add.isError && (
+        <p role="alert" className="font-semibold text-danger sm:col-span-4">
+          {add.error.message}
+        </p>
+      )}
     </form>
   );
 }

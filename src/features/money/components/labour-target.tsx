@@ -12,16 +12,34 @@ export function targetOf(value: TargetValue): Pick<LabourTarget, 'findingId' | '
 }
 
 /** Picks the stage or the finding the time is for; findings load in the background and join the list. */
-export function LabourTargetSelect({ restorationId, id, value, onChange }: { restorationId: number; id: string; value: TargetValue; onChange: (v: TargetValue) => void }) {
+export function LabourTargetSelect({
+  restorationId,
+  id,
+  value,
+  onChange,
+}: {
+  restorationId: number;
+  id: string;
+  value: TargetValue;
+  onChange: (v: TargetValue) => void;
+}) {
   const findings = useRestorationFindings(restorationId);
   return (
     <select id={id} className={inputClass} value={value} onChange={(e) => onChange(e.target.value as TargetValue)}>
       <optgroup label="Stage">
-        {stages.map((s) => <option key={s} value={`stage:${s}`}>{stageLabels[s]}</option>)}
+        {stages.map((s) => (
+          <option key={s} value={`stage:${s}`}>
+            {stageLabels[s]}
+          </option>
+        ))}
       </optgroup>
       {findings.data && findings.data.length > 0 && (
         <optgroup label="Finding">
-          {findings.data.map((f) => <option key={f.id} value={`finding:${f.id}`}>#{f.number} {f.title}</option>)}
+          {findings.data.map((f) => (
+            <option key={f.id} value={`finding:${f.id}`}>
+              #{f.number} {f.title}
+            </option>
+          ))}
         </optgroup>
       )}
     </select>

@@ -37,28 +37,71 @@ export function LabourTimer({ restorationId, running }: { restorationId: number;
     return (
       <p className="rounded-lg bg-sunken p-3">
         Your timer is running on another set since {formatTimeOfDay(running.startedAt)}.{' '}
-        <Link className="font-semibold underline" to={`/restorations/${running.restorationId}/money`}>Go to it to stop it</Link>.
+        <Link className="font-semibold underline" to={`/restorations/${running.restorationId}/money`}>
+          Go to it to stop it
+        </Link>
+        .
       </p>
     );
   if (running)
     return (
       <div className="flex flex-wrap items-center gap-3 rounded-lg border border-glow bg-sunken p-3">
-        <p role="timer" aria-label="Time on the running timer" className="font-mono text-2xl">{clockText(elapsed)}</p>
-        <p className="text-sm text-ink-soft">
-          Running since {formatTimeOfDay(running.startedAt)}{running.billable ? '' : ' (not billable)'}{running.note ? `: ${running.note}` : ''}
+        <p role="timer" aria-label="Time on the running timer" className="font-mono text-2xl">
+          {clockText(elapsed)}
         </p>
-        <Button onClick={() => stop.mutate(undefined)} disabled={stop.isPending}>{stop.isPending ? 'Stopping…' : 'Stop the timer'}</Button>
-        {error && <p role="alert" className="w-full font-semibold text-danger">{error.message}</p>}
+        <p className="text-sm text-ink-soft">
+          Running since {formatTimeOfDay(running.startedAt)}
+          {running.billable ? '' : ' (not billable)'}
+          {running.note ? `: ${running.note}` : ''}
+        </p>
+        <Button onClick={() => stop.mutate(undefined)} disabled={stop.isPending}>
+          {stop.isPending ? 'Stopping…' : 'Stop the timer'}
+        </Button>
+        {error && (
+          <p role="alert" className="w-full font-semibold text-danger">
+            {error.message}
+          </p>
+        )}
       </div>
     );
   return (
-    <form className="grid gap-3 rounded-lg bg-sunken p-3 sm:grid-cols-[12rem_1fr_auto_auto] sm:items-end" aria-label="Start a timer"
-      onSubmit={(e) => { e.preventDefault(); start.mutate({ ...targetOf(target), note: note.trim(), billable }); }}>
-      <div className="space-y-1"><label htmlFor={targetId} className="block font-semibold">For</label><LabourTargetSelect restorationId={restorationId} id={targetId} value={target} onChange={setTarget} /></div>
-      <div className="space-y-1"><label htmlFor={noteId} className="block font-semibold">Note</label><input id={noteId} className={inputClass} value={note} maxLength={500} onChange={(e) => setNote(e.target.value)} /></div>
-      <label className="flex min-h-11 items-center gap-2"><input type="checkbox" checked={billable} onChange={(e) => setBillable(e.target.checked)} /> Billable</label>
-      <Button type="submit" disabled={start.isPending}>{start.isPending ? 'Starting…' : 'Start the timer'}</Button>
-      {error && <p role="alert" className="font-semibold text-danger sm:col-span-4">{error.message}</p>}
+    <form
+      className="grid gap-3 rounded-lg bg-sunken p-3 sm:grid-cols-[12rem_1fr_auto_auto] sm:items-end"
+      aria-label="Start a timer"
+      onSubmit={(e) => {
+        e.preventDefault();
+        start.mutate({ ...targetOf(target), note: note.trim(), billable });
+      }}
+    >
+      <div className="space-y-1">
+        <label htmlFor={targetId} className="block font-semibold">
+          For
+        </label>
+        <LabourTargetSelect restorationId={restorationId} id={targetId} value={target} onChange={setTarget} />
+      </div>
+      <div className="space-y-1">
+        <label htmlFor={noteId} className="block font-semibold">
+          Note
+        </label>
+        <input
+          id={noteId}
+          className={inputClass}
+          value={note}
+          maxLength={500}
+          onChange={(e) => setNote(e.target.value)}
+        />
+      </div>
+      <label className="flex min-h-11 items-center gap-2">
+        <input type="checkbox" checked={billable} onChange={(e) => setBillable(e.target.checked)} /> Billable
+      </label>
+      <Button type="submit" disabled={start.isPending}>
+        {start.isPending ? 'Starting…' : 'Start the timer'}
+      </Button>
+      {error && (
+        <p role="alert" className="font-semibold text-danger sm:col-span-4">
+          {error.message}
+        </p>
+      )}
     </form>
   );
 }

@@ -21,8 +21,12 @@ export function MoneyTab({ restorationId, role }: { restorationId: number; role:
       {canEdit && (
         <p className="text-sm text-ink-soft">
           Prices, tax and invoice numbers come from the{' '}
-          <Link className="font-semibold underline" to="/workshop/settings">workshop settings</Link>
-          {settings.data && `: ${settings.data.currency}, labour at ${moneyText({ amount: settings.data.labourRate, currency: settings.data.currency })} an hour`}.
+          <Link className="font-semibold underline" to="/workshop/settings">
+            workshop settings
+          </Link>
+          {settings.data &&
+            `: ${settings.data.currency}, labour at ${moneyText({ amount: settings.data.labourRate, currency: settings.data.currency })} an hour`}
+          .
         </p>
       )}
     </div>

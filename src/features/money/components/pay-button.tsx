@@ -12,7 +12,11 @@ export function PayButton({ invoice }: { invoice: Invoice }) {
       <Button onClick={() => checkout.mutate(invoice.id)} disabled={checkout.isPending || checkout.isSuccess}>
         {checkout.isPending || checkout.isSuccess ? 'Opening the payment page…' : `Pay ${moneyText(left)} by card`}
       </Button>
-      {checkout.error && <p role="alert" className="font-semibold text-danger">{checkout.error.message}</p>}
+      {checkout.error && (
+        <p role="alert" className="font-semibold text-danger">
+          {checkout.error.message}
+        </p>
+      )}
     </div>
   );
 }

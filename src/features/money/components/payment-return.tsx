@@ -11,7 +11,13 @@ const PATIENCE_MS = 120_000;
  * Back from the checkout page: the redirect proves nothing, so the page says "processing" until the payment
  * service's event has been recorded (the invoice is paid, or the payment from this checkout failed).
  */
-export function returnState(outcome: string | null, invoice: Invoice | undefined, list: Payment[], session: string | null, waitedTooLong: boolean): ReturnState | null {
+export function returnState(
+  outcome: string | null,
+  invoice: Invoice | undefined,
+  list: Payment[],
+  session: string | null,
+  waitedTooLong: boolean,
+): ReturnState | null {
   if (outcome === 'cancelled') return 'cancelled';
   if (outcome !== 'processing') return null;
   const mine = session ? list.find((p) => p.checkoutSessionId === session) : undefined;
@@ -31,17 +37,31 @@ export function useWaitedTooLong(active: boolean) {
 }
 
 const words: Record<ReturnState, { text: string; tone: string; alert?: boolean }> = {
-  processing: { text: 'Payment processing: this page updates by itself once the payment service confirms it.', tone: 'border-glow bg-panel' },
-  slow: { text: 'The payment is still being confirmed. Nothing more to do here; look again later.', tone: 'border-glow bg-panel' },
+  processing: {
+    text: 'Payment processing: this page updates by itself once the payment service confirms it.',
+    tone: 'border-glow bg-panel',
+  },
+  slow: {
+    text: 'The payment is still being confirmed. Nothing more to do here; look again later.',
+    tone: 'border-glow bg-panel',
+  },
   received: { text: 'Payment received. Thank you.', tone: 'border-ok bg-panel' },
-  failed: { text: 'The payment did not go through and nothing was taken. You can try again.', tone: 'border-danger bg-danger-soft', alert: true },
+  failed: {
+    text: 'The payment did not go through and nothing was taken. You can try again.',
+    tone: 'border-danger bg-danger-soft',
+    alert: true,
+  },
   cancelled: { text: 'Payment cancelled: nothing was taken.', tone: 'border-rule bg-panel' },
 };
 
 export function PaymentReturnNote({ state }: { state: ReturnState }) {
   const w = words[state];
   return (
-    <p role={w.alert ? 'alert' : 'status'} aria-live="polite" className={`rounded-lg border-l-4 px-4 py-3 font-semibold ${w.tone}`}>
+    <p
+      role={w.alert ? 'alert' : 'status'}
+      aria-live="polite"
+      className={`rounded-lg border-l-4 px-4 py-3 font-semibold ${w.tone}`}
+    >
       {w.text}
     </p>
   );

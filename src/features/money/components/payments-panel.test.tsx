@@ -18,14 +18,47 @@ afterEach(() => {
 
 const gbp = (amount: number) => ({ amount, currency: 'GBP' });
 const deposit = (over: Partial<Invoice> = {}): Invoice => ({
-  id: 4, number: 12, reference: '12', kind: 'deposit', issuedAt: '2026-12-01T09:00:00.000Z', tax: null, net: gbp(5000), taxAmount: gbp(0), gross: gbp(5000),
-  deducted: gbp(0), due: gbp(5000), paid: gbp(0), refunded: gbp(0), left: gbp(5000), status: 'open', creditsInvoiceId: null, voidReason: null, lines: [{ description: 'Deposit', net: gbp(5000), tax: gbp(0) }], ...over,
+  id: 4,
+  number: 12,
+  reference: '12',
+  kind: 'deposit',
+  issuedAt: '2026-12-01T09:00:00.000Z',
+  tax: null,
+  net: gbp(5000),
+  taxAmount: gbp(0),
+  gross: gbp(5000),
+  deducted: gbp(0),
+  due: gbp(5000),
+  paid: gbp(0),
+  refunded: gbp(0),
+  left: gbp(5000),
+  status: 'open',
+  creditsInvoiceId: null,
+  voidReason: null,
+  lines: [{ description: 'Deposit', net: gbp(5000), tax: gbp(0) }],
+  ...over,
 });
-const cardPayment: Payment = { id: 9, invoiceId: 4, invoiceNumber: 12, invoiceKind: 'deposit', kind: 'payment', method: 'card', status: 'succeeded', amount: gbp(5000),
-  refunded: gbp(0), refundDue: gbp(0), refundOfId: null, checkoutSessionId: 'cs_test_a', receivedOn: null, createdAt: '2026-12-02T09:00:00.000Z' };
+const cardPayment: Payment = {
+  id: 9,
+  invoiceId: 4,
+  invoiceNumber: 12,
+  invoiceKind: 'deposit',
+  kind: 'payment',
+  method: 'card',
+  status: 'succeeded',
+  amount: gbp(5000),
+  refunded: gbp(0),
+  refundDue: gbp(0),
+  refundOfId: null,
+  checkoutSessionId: 'cs_test_a',
+  receivedOn: null,
+  createdAt: '2026-12-02T09:00:00.000Z',
+};
 
 const renderPanel = (role: Role, url = '/home?set=7') => {
-  const router = createMemoryRouter([{ path: '/home', element: <PaymentsPanel restorationId={7} role={role} /> }], { initialEntries: [url] });
+  const router = createMemoryRouter([{ path: '/home', element: <PaymentsPanel restorationId={7} role={role} /> }], {
+    initialEntries: [url],
+  });
   return render(
     <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
       <RouterProvider router={router} />
@@ -37,7 +70,13 @@ describe('PaymentsPanel', () => {
   it('when the owner has an open deposit, then Pay asks for a checkout and goes to the page it names', async () => {
     const assign = vi.fn();
     vi.stubGlobal('location', { ...window.location, assign });
-    const api = fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit()]) : c.path.endsWith('/payments') ? ok([]) : ok({ url: 'http://127.0.0.1:9/checkout/cs_test_a' })));
+    const api = fakeApi((c) =>
+      c.path.endsWith('/invoices')
+        ? ok([deposit()])
+        : c.path.endsWith('/payments')
+          ? ok([])
+          : ok({ url: 'http://127.0.0.1:9/checkout/cs_test_a' }),
+    );
     renderPanel('owner');
     expect(await screen.findByText('Deposit request no. 12')).toBeInTheDocument();
     await userEvent.click(screen.getByRole('button', { name: 'Pay £50.00 by card' }));
@@ -53,7 +92,11 @@ describe('PaymentsPanel', () => {
   });
 
   it('when a card payment was received, then the technician sees its line with a Refund button and the owner sees it without', async () => {
-    fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })]) : ok([cardPayment])));
+    fakeApi((c) =>
+      c.path.endsWith('/invoices')
+        ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })])
+        : ok([cardPayment]),
+    );
     renderPanel('technician');
     expect(await screen.findByText('Card payment received')).toBeInTheDocument();
     expect(screen.getByText(/for deposit request no\. 12/)).toBeInTheDocument();
@@ -66,7 +109,13 @@ describe('PaymentsPanel', () => {
   });
 
   it('when a technician records a transfer in pounds, then it is sent in pence with the day it arrived', async () => {
-    const api = fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit()]) : c.method === 'GET' ? ok([]) : { status: 201, body: { ...cardPayment, method: 'transfer' } }));
+    const api = fakeApi((c) =>
+      c.path.endsWith('/invoices')
+        ? ok([deposit()])
+        : c.method === 'GET'
+          ? ok([])
+          : { status: 201, body: { ...cardPayment, method: 'transfer' } },
+    );
     renderPanel('technician');
     await userEvent.type(await screen.findByLabelText('Amount (GBP)'), '20.50');
     const day = screen.getByLabelText('Received on');
@@ -74,13 +123,21 @@ describe('PaymentsPanel', () => {
     await userEvent.type(day, '2026-11-30');
     await userEvent.click(screen.getByRole('button', { name: 'Record payment' }));
     await waitFor(() => expect(api.calls.some((c) => c.method === 'POST')).toBe(true));
-    expect(api.calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: '/invoices/4/payments',
-      body: { amount: { amount: 2050, currency: 'GBP' }, method: 'transfer', receivedOn: '2026-11-30' } });
+    expect(api.calls.find((c) => c.method === 'POST')).toEqual({
+      method: 'POST',
+      path: '/invoices/4/payments',
+      body: { amount: { amount: 2050, currency: 'GBP' }, method: 'transfer', receivedOn: '2026-11-30' },
+    });
   });
 
   it('when a technician refunds part of a payment, then the amount defaults to the rest and the part typed is sent in pence', async () => {
-    const api = fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })])
-      : c.method === 'GET' ? ok([{ ...cardPayment, refunded: gbp(1000) }]) : { status: 202, body: { refundId: 're_1', amount: gbp(1500), status: 'pending' } }));
+    const api = fakeApi((c) =>
+      c.path.endsWith('/invoices')
+        ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })])
+        : c.method === 'GET'
+          ? ok([{ ...cardPayment, refunded: gbp(1000) }])
+          : { status: 202, body: { refundId: 're_1', amount: gbp(1500), status: 'pending' } },
+    );
     renderPanel('technician');
     await userEvent.click(await screen.findByRole('button', { name: 'Refund the card payment of £50.00' }));
     const amount = screen.getByLabelText('Amount to refund (GBP)');
@@ -89,13 +146,22 @@ describe('PaymentsPanel', () => {
     await userEvent.type(amount, '15');
     await userEvent.click(screen.getByRole('button', { name: 'Refund' }));
     await waitFor(() => expect(api.calls.some((c) => c.method === 'POST')).toBe(true));
-    expect(api.calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: '/payments/9/refund', body: { amount: { amount: 1500, currency: 'GBP' } } });
+    expect(api.calls.find((c) => c.method === 'POST')).toEqual({
+      method: 'POST',
+      path: '/payments/9/refund',
+      body: { amount: { amount: 1500, currency: 'GBP' } },
+    });
     expect(await screen.findByText(/Refund asked for/)).toBeInTheDocument();
   });
 
   it('when the amount to refund is more than is left, not a number, or refused by the server, then it says so clearly', async () => {
-    const api = fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })])
-      : c.method === 'GET' ? ok([{ ...cardPayment, method: 'cash', checkoutSessionId: null }]) : apiError(409, 'At most 2000 (minor units) of this payment can be refunded.')));
+    const api = fakeApi((c) =>
+      c.path.endsWith('/invoices')
+        ? ok([deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' })])
+        : c.method === 'GET'
+          ? ok([{ ...cardPayment, method: 'cash', checkoutSessionId: null }])
+          : apiError(409, 'At most 2000 (minor units) of this payment can be refunded.'),
+    );
     renderPanel('technician');
     await userEvent.click(await screen.findByRole('button', { name: 'Refund the cash payment of £50.00' }));
     const amount = screen.getByLabelText('Amount to refund (GBP)');
@@ -107,17 +173,24 @@ describe('PaymentsPanel', () => {
     await userEvent.clear(amount);
     await userEvent.type(amount, '12.345');
     await userEvent.click(screen.getByRole('button', { name: 'Refund' }));
-    expect(await screen.findByText(/Enter an amount in GBP, such as 50.00, with at most 2 decimals/)).toBeInTheDocument();
+    expect(
+      await screen.findByText(/Enter an amount in GBP, such as 50.00, with at most 2 decimals/),
+    ).toBeInTheDocument();
     expect(api.calls.filter((c) => c.method === 'POST')).toEqual([]);
     await userEvent.clear(amount);
     await userEvent.type(amount, '30');
     await userEvent.click(screen.getByRole('button', { name: 'Refund' }));
-    expect(await screen.findByRole('alert')).toHaveTextContent('At most 2000 (minor units) of this payment can be refunded.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'At most 2000 (minor units) of this payment can be refunded.',
+    );
   });
 
   it('when a deposit was refunded in full, then technician and owner see it as refunded, with no Pay button', async () => {
     const refundedDeposit = deposit({ paid: gbp(0), refunded: gbp(5000), left: gbp(0), status: 'refunded' });
-    const lines = [{ ...cardPayment, refunded: gbp(5000) }, { ...cardPayment, id: 10, kind: 'refund' as const, refundOfId: 9, checkoutSessionId: null }];
+    const lines = [
+      { ...cardPayment, refunded: gbp(5000) },
+      { ...cardPayment, id: 10, kind: 'refund' as const, refundOfId: 9, checkoutSessionId: null },
+    ];
     for (const role of ['owner', 'technician'] as const) {
       fakeApi((c) => (c.path.endsWith('/invoices') ? ok([refundedDeposit]) : ok(lines)));
       renderPanel(role);
@@ -130,7 +203,11 @@ describe('PaymentsPanel', () => {
   });
 
   it('when a card payment arrived after its deposit was voided, then the technician is told to refund it and the form offers what was not due', async () => {
-    fakeApi((c) => (c.path.endsWith('/invoices') ? ok([deposit({ status: 'void', left: gbp(0), paid: gbp(5000) })]) : ok([{ ...cardPayment, refundDue: gbp(5000) }])));
+    fakeApi((c) =>
+      c.path.endsWith('/invoices')
+        ? ok([deposit({ status: 'void', left: gbp(0), paid: gbp(5000) })])
+        : ok([{ ...cardPayment, refundDue: gbp(5000) }]),
+    );
     renderPanel('technician');
     expect(await screen.findByText(/£50.00 of it was not due .*: to be refunded\./)).toBeInTheDocument();
     await userEvent.click(screen.getByRole('button', { name: 'Refund the card payment of £50.00' }));

@@ -24,7 +24,13 @@ export function PaymentsPanel({ restorationId, role }: { restorationId: number; 
   if (invoices.isPending || payments.isPending) return <Loading label="Fetching what is owed and paid…" />;
   if (invoices.isError) return <ErrorState error={invoices.error} onRetry={() => invoices.refetch()} />;
   if (payments.isError) return <ErrorState error={payments.error} onRetry={() => payments.refetch()} />;
-  const state = returnState(outcome, invoices.data.find((i) => i.id === returnedFor), payments.data, params.get('session'), tooLong);
+  const state = returnState(
+    outcome,
+    invoices.data.find((i) => i.id === returnedFor),
+    payments.data,
+    params.get('session'),
+    tooLong,
+  );
   // Once confirmed, the lists stop being asked again (the query options above follow `waiting`).
   const open = invoices.data.filter((i) => i.status === 'open' && i.left.amount > 0);
   const refunded = invoices.data.filter((i) => i.status === 'refunded');
@@ -35,9 +41,14 @@ export function PaymentsPanel({ restorationId, role }: { restorationId: number; 
       {open.length > 0 && (
         <ul className="space-y-3">
           {open.map((i) => (
-            <li key={i.id} className="flex flex-wrap items-center justify-between gap-3 rounded-xl border border-rule bg-panel px-4 py-3">
+            <li
+              key={i.id}
+              className="flex flex-wrap items-center justify-between gap-3 rounded-xl border border-rule bg-panel px-4 py-3"
+            >
               <div>
-                <p className="font-semibold">{invoiceKindLabels[i.kind]} no. {i.reference}</p>
+                <p className="font-semibold">
+                  {invoiceKindLabels[i.kind]} no. {i.reference}
+                </p>
                 <p className="text-ink-soft">
                   {moneyText(i.left)} to pay{i.paid.amount > 0 && ` (${moneyText(i.paid)} paid so far)`}
                 </p>
@@ -51,7 +62,9 @@ export function PaymentsPanel({ restorationId, role }: { restorationId: number; 
         <ul className="space-y-2">
           {refunded.map((i) => (
             <li key={i.id} className="rounded-xl border border-rule bg-sunken px-4 py-3">
-              <p className="font-semibold">{invoiceKindLabels[i.kind]} no. {i.reference}: refunded</p>
+              <p className="font-semibold">
+                {invoiceKindLabels[i.kind]} no. {i.reference}: refunded
+              </p>
               <p className="text-ink-soft">{moneyText(i.refunded)} went back; nothing is left to pay.</p>
             </li>
           ))}
@@ -60,9 +73,17 @@ export function PaymentsPanel({ restorationId, role }: { restorationId: number; 
       {payments.data.length > 0 ? (
         <PaymentLines restorationId={restorationId} role={role} payments={payments.data} />
       ) : (
-        open.length === 0 && <EmptyState title="Nothing to pay">{role === 'owner' ? 'Deposit requests and invoices from the workshop appear here.' : 'No deposit request or invoice is open.'}</EmptyState>
+        open.length === 0 && (
+          <EmptyState title="Nothing to pay">
+            {role === 'owner'
+              ? 'Deposit requests and invoices from the workshop appear here.'
+              : 'No deposit request or invoice is open.'}
+          </EmptyState>
+        )
       )}
-      {can(role, 'payments.record') && open.length > 0 && <ManualPaymentForm restorationId={restorationId} invoices={open} />}
+      {can(role, 'payments.record') && open.length > 0 && (
+        <ManualPaymentForm restorationId={restorationId} invoices={open} />
+      )}
     </div>
   );
 }

@@ -12,7 +12,11 @@ export function HeroPhoto({ photo, name }: { photo: Photo | undefined; name: str
   return (
     <img
       {...photoSources(photo, OWNER_COLUMN_SIZES)}
-      alt={photo.caption ? `${name}: ${photo.caption}` : `${name}, ${photo.phase === 'after' ? 'after the work' : 'in the workshop'}`}
+      alt={
+        photo.caption
+          ? `${name}: ${photo.caption}`
+          : `${name}, ${photo.phase === 'after' ? 'after the work' : 'in the workshop'}`
+      }
       width={photo.width || undefined}
       height={photo.height || undefined}
       fetchPriority="high"

@@ -9,7 +9,14 @@ import { SafetyReminder } from './safety-reminder';
  * The owner's home: a greeting, then their one set directly, or a card per set (a card opens `?set=<id>`).
  * `renderSet` and `renderCard` draw a set with its data, which the route fetches.
  */
-export function OwnerHome({ name, sets, selectedId, renderSet, renderCard, now }: {
+export function OwnerHome({
+  name,
+  sets,
+  selectedId,
+  renderSet,
+  renderCard,
+  now,
+}: {
   name: string | null | undefined;
   /** The sets the person owns (role "owner"). */
   sets: Restoration[];
@@ -33,11 +40,16 @@ export function OwnerHome({ name, sets, selectedId, renderSet, renderCard, now }
         <p className="text-lg text-ink-soft">{intro}</p>
       </header>
       {sets.length === 0 ? (
-        <EmptyState title="No sets to follow yet">When a workshop invites you to follow your set, it appears here.</EmptyState>
+        <EmptyState title="No sets to follow yet">
+          When a workshop invites you to follow your set, it appears here.
+        </EmptyState>
       ) : selected ? (
         <>
           {sets.length > 1 && (
-            <Link to={{ search: '' }} className="inline-flex min-h-11 items-center gap-1 font-semibold text-glow-strong hover:underline">
+            <Link
+              to={{ search: '' }}
+              className="inline-flex min-h-11 items-center gap-1 font-semibold text-glow-strong hover:underline"
+            >
               <span aria-hidden="true">←</span> All your sets
             </Link>
           )}

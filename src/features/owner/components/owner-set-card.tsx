@@ -6,11 +6,25 @@ import { StageWords } from './stage-words';
 import { photoSources } from '../../../lib/photo-sources';
 
 /** One of several sets, as a card that opens its page (`to`); `hero` is its picture once known. */
-export function OwnerSetCard({ restoration: r, hero, to }: { restoration: Restoration; hero: Photo | undefined; to: string }) {
+export function OwnerSetCard({
+  restoration: r,
+  hero,
+  to,
+}: {
+  restoration: Restoration;
+  hero: Photo | undefined;
+  to: string;
+}) {
   return (
     <Link to={to} className="group block overflow-hidden rounded-2xl border border-rule bg-panel hover:border-glow">
       {hero ? (
-        <img alt="" loading="lazy" decoding="async" {...photoSources(hero, '(min-width: 640px) 320px, calc(100vw - 32px)')} className="aspect-[4/3] w-full bg-sunken object-cover" />
+        <img
+          alt=""
+          loading="lazy"
+          decoding="async"
+          {...photoSources(hero, '(min-width: 640px) 320px, calc(100vw - 32px)')}
+          className="aspect-[4/3] w-full bg-sunken object-cover"
+        />
       ) : (
         <span aria-hidden="true" className="block aspect-[4/3] w-full bg-sunken" />
       )}

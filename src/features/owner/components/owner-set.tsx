@@ -23,7 +23,14 @@ function Part({ id, title, children }: { id: string; title: string; children: Re
  * the care notes, the history and the report. The route fills the slots (comparisons, repairs, timeline) so this
  * page stays free of other features' components.
  */
-export function OwnerSet({ restoration: r, hero, comparisons, repairs, timeline, payments }: {
+export function OwnerSet({
+  restoration: r,
+  hero,
+  comparisons,
+  repairs,
+  timeline,
+  payments,
+}: {
   restoration: Restoration;
   /** The picture at the top; undefined while none is shared. */
   hero: Photo | undefined;

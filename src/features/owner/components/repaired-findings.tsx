@@ -20,7 +20,9 @@ function Closeup({ findingId }: { findingId: number }) {
 /** What the workshop put right, each with a close-up of the marked spot; pass the repaired findings only. */
 export function RepairedFindings({ findings }: { findings: Finding[] }) {
   if (findings.length === 0)
-    return <p className="text-ink-soft">Repairs appear here as the workshop completes them and shares them with you.</p>;
+    return (
+      <p className="text-ink-soft">Repairs appear here as the workshop completes them and shares them with you.</p>
+    );
   return (
     <ul className="grid gap-3 sm:grid-cols-2">
       {findings.map((f) => (

@@ -5,7 +5,16 @@ import { reportUrl } from '../lib/owner-words';
 export function ReportLink({ restorationId }: { restorationId: number }) {
   return (
     <a href={reportUrl(restorationId)} download className={buttonClass('primary', 'w-full sm:w-auto')}>
-      <svg viewBox="0 0 20 20" aria-hidden="true" className="h-5 w-5" fill="none" stroke="currentColor" strokeWidth={1.8} strokeLinecap="round" strokeLinejoin="round">
+      <svg
+        viewBox="0 0 20 20"
+        aria-hidden="true"
+        className="h-5 w-5"
+        fill="none"
+        stroke="currentColor"
+        strokeWidth={1.8}
+        strokeLinecap="round"
+        strokeLinejoin="round"
+      >
         <path d="M10 3v9m-4-4 4 4 4-4M4 15.5h12" />
       </svg>
       Download the hand-back report (PDF)

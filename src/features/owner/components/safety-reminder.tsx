@@ -2,13 +2,21 @@
 export function SafetyReminder() {
   return (
     <aside aria-label="Safety" className="flex gap-3 rounded-xl border border-rule bg-panel p-4 text-sm">
-      <svg viewBox="0 0 20 20" aria-hidden="true" className="mt-0.5 h-5 w-5 shrink-0 text-glow" fill="none" stroke="currentColor" strokeWidth={1.8} strokeLinejoin="round">
+      <svg
+        viewBox="0 0 20 20"
+        aria-hidden="true"
+        className="mt-0.5 h-5 w-5 shrink-0 text-glow"
+        fill="none"
+        stroke="currentColor"
+        strokeWidth={1.8}
+        strokeLinejoin="round"
+      >
         <path d="M10 2.5 18 17H2Z" />
         <path d="M10 8v4.2M10 14.4v.1" strokeLinecap="round" />
       </svg>
       <p>
-        Valve sets work at lethal voltages inside: keep the back on and let only a competent person open it. Follow local
-        electrical codes.
+        Valve sets work at lethal voltages inside: keep the back on and let only a competent person open it. Follow
+        local electrical codes.
       </p>
     </aside>
   );
@@ -18,9 +26,9 @@ export function SafetyReminder() {
 export function LiveChassisNote() {
   return (
     <p className="rounded-xl border border-danger/40 bg-danger-soft p-4 text-sm">
-      <strong className="text-danger">This set has a live chassis.</strong> Its metal frame can be connected to the mains,
-      so use it only with its back and every knob in place, and ask a competent repairer before connecting anything
-      else to it.
+      <strong className="text-danger">This set has a live chassis.</strong> Its metal frame can be connected to the
+      mains, so use it only with its back and every knob in place, and ask a competent repairer before connecting
+      anything else to it.
     </p>
   );
 }

@@ -37,12 +37,20 @@ describe('owner words', () => {
 
 describe('heroPhoto', () => {
   it('when there are shared after photos, then the latest of them is the hero', () => {
-    const hero = heroPhoto([photo(1, 'after', '2026-11-20T10:00:00Z'), photo(2, 'after', '2026-11-30T10:00:00Z'), photo(3, 'during', '2026-12-01T10:00:00Z')]);
+    const hero = heroPhoto([
+      photo(1, 'after', '2026-11-20T10:00:00Z'),
+      photo(2, 'after', '2026-11-30T10:00:00Z'),
+      photo(3, 'during', '2026-12-01T10:00:00Z'),
+    ]);
     expect(hero?.id).toBe(2);
   });
 
   it('when no after photo is shared, then the latest shared photo is the hero, never an unshared one', () => {
-    const hero = heroPhoto([photo(1, 'before', '2026-11-20T10:00:00Z'), photo(2, 'during', '2026-11-25T10:00:00Z'), photo(3, 'after', '2026-12-01T10:00:00Z', false)]);
+    const hero = heroPhoto([
+      photo(1, 'before', '2026-11-20T10:00:00Z'),
+      photo(2, 'during', '2026-11-25T10:00:00Z'),
+      photo(3, 'after', '2026-12-01T10:00:00Z', false),
+    ]);
     expect(hero?.id).toBe(2);
     expect(heroPhoto([])).toBeUndefined();
   });
@@ -50,7 +58,12 @@ describe('heroPhoto', () => {
 
 describe('repairedFindings', () => {
   it('when findings are at different statuses, then only repaired and verified ones remain, by number', () => {
-    const list = repairedFindings([finding(1, 3, 'verified'), finding(2, 1, 'repaired'), finding(3, 2, 'confirmed'), finding(4, 4, 'dismissed')]);
+    const list = repairedFindings([
+      finding(1, 3, 'verified'),
+      finding(2, 1, 'repaired'),
+      finding(3, 2, 'confirmed'),
+      finding(4, 4, 'dismissed'),
+    ]);
     expect(list.map((f) => f.id)).toEqual([2, 1]);
   });
 });

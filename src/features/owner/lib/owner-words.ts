@@ -23,7 +23,11 @@ const shotAt = (p: Photo) => {
   const t = Date.parse(p.takenAt ?? p.uploadedAt);
   return Number.isNaN(t) ? 0 : t;
 };
-const newest = (photos: Photo[]) => photos.reduce<Photo | undefined>((best, p) => (!best || shotAt(p) > shotAt(best) || (shotAt(p) === shotAt(best) && p.id > best.id) ? p : best), undefined);
+const newest = (photos: Photo[]) =>
+  photos.reduce<Photo | undefined>(
+    (best, p) => (!best || shotAt(p) > shotAt(best) || (shotAt(p) === shotAt(best) && p.id > best.id) ? p : best),
+    undefined,
+  );
 
 /**
  * The photo at the top of the set's page: the latest shared "after" photo, else the latest shared photo of any

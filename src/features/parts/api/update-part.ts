@@ -16,7 +16,8 @@ export const updatePart = (id: number, patch: PartPatch) => api<Part>(`/parts/${
 export function useUpdatePart(restorationId: number) {
   const client = useQueryClient();
   const key = partKeys.restoration(restorationId);
-  const putBack = (part: Part) => client.setQueryData<Part[]>(key, (list) => list?.map((p) => (p.id === part.id ? part : p)));
+  const putBack = (part: Part) =>
+    client.setQueryData<Part[]>(key, (list) => list?.map((p) => (p.id === part.id ? part : p)));
   return useMutation({
     mutationKey: partKeys.update,
     mutationFn: ({ id, patch }: { id: number; patch: PartPatch }) => updatePart(id, patch),
@@ -24,7 +25,8 @@ export function useUpdatePart(restorationId: number) {
       await client.cancelQueries({ queryKey: key });
       const before = client.getQueryData<Part[]>(key)?.find((p) => p.id === id);
       if (before) {
-        const fittedAt = patch.state === 'fitted' && before.state !== 'fitted' ? new Date().toISOString() : before.fittedAt;
+        const fittedAt =
+          patch.state === 'fitted' && before.state !== 'fitted' ? new Date().toISOString() : before.fittedAt;
         putBack({ ...before, ...patch, fittedAt } as Part);
       }
       return { before };
@@ -34,6 +36,9 @@ export function useUpdatePart(restorationId: number) {
     },
     onSuccess: (saved) => putBack(saved),
     // Refetch only when the last change has settled, so one answer does not overwrite another row's pending guess.
-    onSettled: () => (client.isMutating({ mutationKey: partKeys.update }) === 1 ? client.invalidateQueries({ queryKey: key }) : undefined),
+    onSettled: () =>
+      client.isMutating({ mutationKey: partKeys.update }) === 1
+        ? client.invalidateQueries({ queryKey: key })
+        : undefined,
   });
 }

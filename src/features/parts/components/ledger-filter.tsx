@@ -6,7 +6,15 @@ import { inputClass } from '../../../components/field';
 const count = (n: number) => (n === 1 ? '1 part' : `${n} parts`);
 
 /** Narrows the ledger to one state, and says how many lines show. */
-export function LedgerFilter({ column, shown, total }: { column: Column<Part> | undefined; shown: number; total: number }) {
+export function LedgerFilter({
+  column,
+  shown,
+  total,
+}: {
+  column: Column<Part> | undefined;
+  shown: number;
+  total: number;
+}) {
   const id = useId();
   const value = column?.getFilterValue();
   return (

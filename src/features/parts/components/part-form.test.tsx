@@ -36,7 +36,9 @@ describe('part form', () => {
     const user = userEvent.setup();
     renderWithQueries(<PartForm restorationId={7} />);
     await typeChange(user, 'C15', '32µF 450V', '33µF 350V');
-    expect(preview()).toHaveTextContent("⚠ Danger: Rated 350 V, below the original's 450 V: never lower the voltage rating.");
+    expect(preview()).toHaveTextContent(
+      "⚠ Danger: Rated 350 V, below the original's 450 V: never lower the voltage rating.",
+    );
   });
 
   it('when 33µF 500V replaces 32µF 350V, then the preview has no warning', async () => {
@@ -54,8 +56,12 @@ describe('part form', () => {
     renderWithQueries(<PartForm restorationId={7} />);
     await typeChange(user, 'C30', '0.01µF 1000V', '0.01µF 630V film');
     await user.selectOptions(screen.getByLabelText('Mains position'), 'across-line');
-    expect(preview()).toHaveTextContent('⚠ Danger: Across the mains this must be an X-class (or Y-class) safety capacitor; none is named.');
-    expect(screen.getByLabelText('Mains position')).toHaveAccessibleDescription(/Across the mains .* X-class .* to the chassis or earth needs a Y-class/);
+    expect(preview()).toHaveTextContent(
+      '⚠ Danger: Across the mains this must be an X-class (or Y-class) safety capacitor; none is named.',
+    );
+    expect(screen.getByLabelText('Mains position')).toHaveAccessibleDescription(
+      /Across the mains .* X-class .* to the chassis or earth needs a Y-class/,
+    );
   });
 
   it('when a capacitor is replaced, then the recap caution shows; for a part kept original it does not', async () => {
@@ -73,7 +79,9 @@ describe('part form', () => {
   it('when saved, then the line is sent with the cost in minor units and the finding chosen, and the form is ready for the next', async () => {
     const { calls } = fakePartsApi([]);
     const user = userEvent.setup();
-    renderWithQueries(<PartForm restorationId={7} findings={[{ id: 40, number: 3, title: 'Bulging reservoir can' }]} />);
+    renderWithQueries(
+      <PartForm restorationId={7} findings={[{ id: 40, number: 3, title: 'Bulging reservoir can' }]} />,
+    );
     await typeChange(user, 'C15', '32µF 450V', '33µF 500V');
     await user.clear(screen.getByLabelText('Quantity'));
     await user.type(screen.getByLabelText('Quantity'), '2');
@@ -83,9 +91,20 @@ describe('part form', () => {
     await user.click(screen.getByRole('button', { name: 'Add to the ledger' }));
     await waitFor(() => expect(calls.some((c) => c.method === 'POST')).toBe(true));
     expect(calls.find((c) => c.method === 'POST')?.body).toEqual({
-      componentRef: 'C15', action: 'replaced', state: 'planned', originalPart: '', originalRating: '32µF 450V', replacementPart: '',
-      replacementRating: '33µF 500V', mainsPosition: 'none', quantity: 2, costMinor: 185, source: 'new, supplier', testedAfter: '',
-      notes: '', findingId: 40,
+      componentRef: 'C15',
+      action: 'replaced',
+      state: 'planned',
+      originalPart: '',
+      originalRating: '32µF 450V',
+      replacementPart: '',
+      replacementRating: '33µF 500V',
+      mainsPosition: 'none',
+      quantity: 2,
+      costMinor: 185,
+      source: 'new, supplier',
+      testedAfter: '',
+      notes: '',
+      findingId: 40,
     });
     expect(await screen.findByRole('status')).toHaveTextContent('Saved.');
     expect(screen.getByLabelText('Component reference')).toHaveValue('');
@@ -99,12 +118,19 @@ describe('part form', () => {
     await user.type(screen.getByLabelText('Cost of the line (GBP)'), '1.855');
     await user.click(screen.getByRole('button', { name: 'Add to the ledger' }));
     expect(await screen.findByText('At most 2 decimal places')).toBeInTheDocument();
-    expect(screen.getByLabelText('Component reference')).toHaveAccessibleDescription(/Give the reference as the schematic prints it, e.g. C27/);
+    expect(screen.getByLabelText('Component reference')).toHaveAccessibleDescription(
+      /Give the reference as the schematic prints it, e.g. C27/,
+    );
     expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   });
 
   it('when a line is changed, then every field is sent to that part and the cost typed back in minor units', async () => {
-    const part = makePart(5, { componentRef: 'C15', originalRating: '32µF 450V', replacementRating: '33µF 500V', costMinor: 185 });
+    const part = makePart(5, {
+      componentRef: 'C15',
+      originalRating: '32µF 450V',
+      replacementRating: '33µF 500V',
+      costMinor: 185,
+    });
     const { calls } = fakePartsApi([part]);
     const onDone = vi.fn();
     const user = userEvent.setup();
@@ -116,13 +142,21 @@ describe('part form', () => {
     await waitFor(() => expect(onDone).toHaveBeenCalled());
     const patch = calls.find((c) => c.method === 'PATCH');
     expect(patch?.url).toBe('/api/parts/5');
-    expect(patch?.body).toMatchObject({ state: 'fitted', testedAfter: 'Cathode 8.3 V, no red glow', costMinor: 185, findingId: null });
+    expect(patch?.body).toMatchObject({
+      state: 'fitted',
+      testedAfter: 'Cathode 8.3 V, no red glow',
+      costMinor: 185,
+      findingId: null,
+    });
   });
 });
 
 describe('a second line for the same reference', () => {
   it('when the reference typed is already on the ledger, then the form says so and links to the first line; another reference says nothing', async () => {
-    fakePartsApi([makePart(12, { componentRef: 'C27', action: 'replaced' }), makePart(15, { componentRef: 'c27', action: 'replaced' })]);
+    fakePartsApi([
+      makePart(12, { componentRef: 'C27', action: 'replaced' }),
+      makePart(15, { componentRef: 'c27', action: 'replaced' }),
+    ]);
     const user = userEvent.setup();
     renderWithQueries(<PartForm restorationId={7} />);
     await fill(user, 'Component reference', 'C27');

@@ -17,7 +17,7 @@ function PartText({ part, rating }: { part: string; rating: string }) {
   if (!part && !rating) return <span className="text-ink-soft">—</span>;
   return (
     <span>
-      {part} {rating && <span className="whitespace-nowrap font-mono">{rating}</span>}
+      {part} {rating && <span className="font-mono whitespace-nowrap">{rating}</span>}
     </span>
   );
 }
@@ -36,7 +36,15 @@ export interface PartColumnsOptions {
 }
 
 /** The ledger's columns, keyed by component reference. */
-export function partColumns({ showPrivate, showCost, currency, findingOf, onAdvance, onEdit, busyIds }: PartColumnsOptions) {
+export function partColumns({
+  showPrivate,
+  showCost,
+  currency,
+  findingOf,
+  onAdvance,
+  onEdit,
+  busyIds,
+}: PartColumnsOptions) {
   const columns = [
     helper.accessor('componentRef', {
       header: 'Ref',
@@ -63,9 +71,15 @@ export function partColumns({ showPrivate, showCost, currency, findingOf, onAdva
           <PartText part={p.originalPart} rating={p.originalRating} />
           {p.action !== 'kept-original' && (
             <>
-              <span aria-hidden="true" className="px-1 text-ink-soft">→</span>
+              <span aria-hidden="true" className="px-1 text-ink-soft">
+                →
+              </span>
               <span className="sr-only"> replaced by </span>
-              {p.action === 'removed' ? <span className="text-ink-soft">nothing</span> : <PartText part={p.replacementPart} rating={p.replacementRating} />}
+              {p.action === 'removed' ? (
+                <span className="text-ink-soft">nothing</span>
+              ) : (
+                <PartText part={p.replacementPart} rating={p.replacementRating} />
+              )}
             </>
           )}
           <WarningList warnings={p.warnings} className="mt-1" />
@@ -74,7 +88,8 @@ export function partColumns({ showPrivate, showCost, currency, findingOf, onAdva
     }),
     helper.accessor('mainsPosition', {
       header: 'Mains',
-      cell: (c) => (c.getValue() === 'none' ? <span className="text-ink-soft">—</span> : mainsPositionLabels[c.getValue()]),
+      cell: (c) =>
+        c.getValue() === 'none' ? <span className="text-ink-soft">—</span> : mainsPositionLabels[c.getValue()],
       enableSorting: false,
     }),
     helper.accessor('quantity', { header: 'Qty', cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
@@ -85,7 +100,11 @@ export function partColumns({ showPrivate, showCost, currency, findingOf, onAdva
             header: 'Cost',
             cell: (c) => {
               const v = c.getValue();
-              return v === undefined ? <span className="text-ink-soft">—</span> : <span className="whitespace-nowrap font-mono">{formatMinor(v, currency)}</span>;
+              return v === undefined ? (
+                <span className="text-ink-soft">—</span>
+              ) : (
+                <span className="font-mono whitespace-nowrap">{formatMinor(v, currency)}</span>
+              );
             },
             sortUndefined: 'last',
           }),
@@ -117,7 +136,11 @@ export function partColumns({ showPrivate, showCost, currency, findingOf, onAdva
             id: 'edit',
             header: () => <span className="sr-only">Change</span>,
             cell: ({ row: { original: p } }) => (
-              <button type="button" onClick={() => onEdit(p)} className="min-h-11 rounded-md px-2 font-semibold underline-offset-2 hover:underline print:hidden">
+              <button
+                type="button"
+                onClick={() => onEdit(p)}
+                className="min-h-11 rounded-md px-2 font-semibold underline-offset-2 hover:underline print:hidden"
+              >
                 Edit<span className="sr-only"> {p.componentRef}</span>
               </button>
             ),

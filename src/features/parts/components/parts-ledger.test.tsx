@@ -15,11 +15,28 @@ afterEach(() => {
 });
 
 const reservoir = makePart(1, {
-  componentRef: 'C15', originalPart: 'Can electrolytic', originalRating: '32µF 450V', replacementPart: 'Radial electrolytic',
-  replacementRating: '33µF 350V', costMinor: 185, source: 'new, supplier', state: 'planned',
+  componentRef: 'C15',
+  originalPart: 'Can electrolytic',
+  originalRating: '32µF 450V',
+  replacementPart: 'Radial electrolytic',
+  replacementRating: '33µF 350V',
+  costMinor: 185,
+  source: 'new, supplier',
+  state: 'planned',
 });
-const coupling = makePart(2, { componentRef: 'C2', originalRating: '0.05µF 400V', replacementRating: '0.047µF 630V', state: 'fitted', findingId: 40 });
-const bias = makePart(3, { componentRef: 'C10', originalRating: '25µF 25V', action: 'kept-original', state: 'ordered' });
+const coupling = makePart(2, {
+  componentRef: 'C2',
+  originalRating: '0.05µF 400V',
+  replacementRating: '0.047µF 630V',
+  state: 'fitted',
+  findingId: 40,
+});
+const bias = makePart(3, {
+  componentRef: 'C10',
+  originalRating: '25µF 25V',
+  action: 'kept-original',
+  state: 'ordered',
+});
 const row = (ref: string) => screen.getByRole('row', { name: `Part ${ref}` });
 
 describe('parts ledger', () => {
@@ -27,7 +44,9 @@ describe('parts ledger', () => {
     fakePartsApi([reservoir]);
     renderWithQueries(<PartsLedger restorationId={7} role="technician" />);
     const item = within(await screen.findByRole('row', { name: 'Part C15' })).getByRole('listitem');
-    expect(item).toHaveTextContent("⚠ Danger: Rated 350 V, below the original's 450 V: never lower the voltage rating.");
+    expect(item).toHaveTextContent(
+      "⚠ Danger: Rated 350 V, below the original's 450 V: never lower the voltage rating.",
+    );
   });
 
   it('when a technician reads it, then costs show from minor units in the workshop currency', async () => {
@@ -63,7 +82,13 @@ describe('parts ledger', () => {
   it('when listed, then rows go by reference as a schematic numbers them, and the state filter narrows them', async () => {
     fakePartsApi([reservoir, coupling, bias]);
     const user = userEvent.setup();
-    renderWithQueries(<PartsLedger restorationId={7} role="technician" findings={[{ id: 40, number: 3, title: 'Leaky coupling cap' }]} />);
+    renderWithQueries(
+      <PartsLedger
+        restorationId={7}
+        role="technician"
+        findings={[{ id: 40, number: 3, title: 'Leaky coupling cap' }]}
+      />,
+    );
     await screen.findByRole('row', { name: 'Part C15' });
     const refs = () => screen.getAllByRole('row', { name: /^Part / }).map((r) => r.getAttribute('aria-label'));
     expect(refs()).toEqual(['Part C2', 'Part C10', 'Part C15']);
@@ -77,20 +102,33 @@ describe('parts ledger', () => {
     fakePartsApi([]);
     renderWithQueries(<PartsLedger restorationId={7} role="technician" />);
     expect(await screen.findByText('No parts yet.')).toBeInTheDocument();
-    expect(screen.getByText('Record each change as you make it: the reference, what came out, what went in, and how it tested after.')).toBeInTheDocument();
+    expect(
+      screen.getByText(
+        'Record each change as you make it: the reference, what came out, what went in, and how it tested after.',
+      ),
+    ).toBeInTheDocument();
   });
 
   it('when a state is moved on, then it shows at once; when the server refuses (403), then it goes back and says why', async () => {
     const held = gate();
-    const { calls } = fakePartsApi([reservoir], { holdChanges: held.promise, refuseChanges: { status: 403, message: 'Only technicians may change parts.' } });
+    const { calls } = fakePartsApi([reservoir], {
+      holdChanges: held.promise,
+      refuseChanges: { status: 403, message: 'Only technicians may change parts.' },
+    });
     const user = userEvent.setup();
     renderWithQueries(<PartsLedger restorationId={7} role="technician" />);
     await user.click(await screen.findByRole('button', { name: 'Mark C15 ordered' }));
     expect(within(row('C15')).getByText('Ordered')).toBeInTheDocument();
     expect(within(row('C15')).queryByText('Planned')).not.toBeInTheDocument();
-    expect(calls.find((c) => c.method === 'PATCH')).toEqual({ method: 'PATCH', url: '/api/parts/1', body: { state: 'ordered' } });
+    expect(calls.find((c) => c.method === 'PATCH')).toEqual({
+      method: 'PATCH',
+      url: '/api/parts/1',
+      body: { state: 'ordered' },
+    });
     held.open();
-    expect(await screen.findByRole('alert')).toHaveTextContent('C15 was not marked ordered and is back to planned: Only technicians may change parts.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'C15 was not marked ordered and is back to planned: Only technicians may change parts.',
+    );
     await waitFor(() => expect(within(row('C15')).getByText('Planned')).toBeInTheDocument());
     expect(within(row('C15')).getByRole('button', { name: 'Mark C15 ordered' })).toBeEnabled();
   });

@@ -48,7 +48,10 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
   const [sorting, setSorting] = useState<SortingState>([{ id: 'componentRef', desc: false }]);
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
   const canEdit = can(role, 'parts.edit');
-  const busy = useMutationState({ filters: { mutationKey: partKeys.update, status: 'pending' }, select: (m) => (m.state.variables as { id: number }).id });
+  const busy = useMutationState({
+    filters: { mutationKey: partKeys.update, status: 'pending' },
+    select: (m) => (m.state.variables as { id: number }).id,
+  });
   const busyIds = useMemo(() => new Set(busy), [busy]);
 
   const columns = useMemo(() => {
@@ -59,10 +62,20 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
       setRefused(undefined);
       const patch: PartPatch = { state: to };
       update({ id: part.id, patch }).catch((e: Error) =>
-        setRefused(`${part.componentRef} was not marked ${partStateLabels[to].toLowerCase()} and is back to ${partStateLabels[part.state].toLowerCase()}: ${e.message}`),
+        setRefused(
+          `${part.componentRef} was not marked ${partStateLabels[to].toLowerCase()} and is back to ${partStateLabels[part.state].toLowerCase()}: ${e.message}`,
+        ),
       );
     };
-    return partColumns({ showPrivate: canEdit, showCost: can(role, 'parts.costs'), currency, findingOf: (id) => byId.get(id), onAdvance: canEdit ? advance : undefined, onEdit: canEdit ? onEdit : undefined, busyIds });
+    return partColumns({
+      showPrivate: canEdit,
+      showCost: can(role, 'parts.costs'),
+      currency,
+      findingOf: (id) => byId.get(id),
+      onAdvance: canEdit ? advance : undefined,
+      onEdit: canEdit ? onEdit : undefined,
+      busyIds,
+    });
   }, [findings, canEdit, currency, onEdit, busyIds, update]);
 
   const table = useReactTable({
@@ -92,7 +105,10 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
     <div className="space-y-3">
       <LedgerFilter column={table.getColumn('state')} shown={rows.length} total={query.data.length} />
       {refused && (
-        <p role="alert" className="rounded-lg border border-danger/40 bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
+        <p
+          role="alert"
+          className="rounded-lg border border-danger/40 bg-danger-soft px-3 py-2 text-sm font-semibold text-danger"
+        >
           <span aria-hidden="true">⚠ </span>
           {refused}
         </p>
@@ -103,7 +119,9 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
         // Relative, so the screen-reader-only texts inside stay within the scrolling box on a narrow screen.
         <div className="relative overflow-x-auto rounded-xl border border-rule bg-panel">
           <table className="w-full text-left text-sm">
-            <caption className="sr-only">Parts ledger, by component reference. Column headers with a button sort.</caption>
+            <caption className="sr-only">
+              Parts ledger, by component reference. Column headers with a button sort.
+            </caption>
             <thead className="border-b border-rule bg-sunken">
               {table.getHeaderGroups().map((group) => (
                 <tr key={group.id}>
@@ -111,10 +129,18 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
                     const sorted = header.column.getIsSorted();
                     const label = flexRender(header.column.columnDef.header, header.getContext());
                     return (
-                      <th key={header.id} scope="col" aria-sort={header.column.getCanSort() ? (sorted ? ariaSort[sorted] : 'none') : undefined}
-                        className={`px-2 py-1 align-bottom font-semibold ${header.column.id === REF ? `${pinned} bg-sunken` : ''}`}>
+                      <th
+                        key={header.id}
+                        scope="col"
+                        aria-sort={header.column.getCanSort() ? (sorted ? ariaSort[sorted] : 'none') : undefined}
+                        className={`px-2 py-1 align-bottom font-semibold ${header.column.id === REF ? `${pinned} bg-sunken` : ''}`}
+                      >
                         {header.column.getCanSort() ? (
-                          <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-center gap-1 rounded px-1 hover:bg-panel">
+                          <button
+                            type="button"
+                            onClick={header.column.getToggleSortingHandler()}
+                            className="inline-flex min-h-11 items-center gap-1 rounded px-1 hover:bg-panel"
+                          >
                             {label}
                             <span aria-hidden="true" className={sorted ? 'text-glow-strong' : 'text-ink-soft/50'}>
                               {sorted ? arrow[sorted] : '↕'}
@@ -131,9 +157,17 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
             </thead>
             <tbody className="divide-y divide-rule">
               {rows.map((row) => (
-                <tr key={row.id} id={partRowId(row.original.id)} aria-label={`Part ${row.original.componentRef}`} className="target:bg-glow-soft">
+                <tr
+                  key={row.id}
+                  id={partRowId(row.original.id)}
+                  aria-label={`Part ${row.original.componentRef}`}
+                  className="target:bg-glow-soft"
+                >
                   {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className={`px-3 py-2 align-top ${cell.column.id === REF ? `${pinned} bg-panel` : ''}`}>
+                    <td
+                      key={cell.id}
+                      className={`px-3 py-2 align-top ${cell.column.id === REF ? `${pinned} bg-panel` : ''}`}
+                    >
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   ))}

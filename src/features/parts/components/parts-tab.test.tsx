@@ -14,9 +14,29 @@ afterEach(() => {
 });
 
 const parts = [
-  makePart(1, { componentRef: 'C15', originalRating: '32µF 450V', replacementPart: 'Radial', replacementRating: '33µF 500V', costMinor: 185, state: 'planned' }),
-  makePart(2, { componentRef: 'C16', originalRating: '32µF 450V', replacementPart: 'radial', replacementRating: '33 µF 500V', quantity: 2, state: 'planned' }),
-  makePart(3, { componentRef: 'C4', replacementPart: 'Film', replacementRating: '0.047µF 630V', state: 'ordered', source: 'new, supplier' }),
+  makePart(1, {
+    componentRef: 'C15',
+    originalRating: '32µF 450V',
+    replacementPart: 'Radial',
+    replacementRating: '33µF 500V',
+    costMinor: 185,
+    state: 'planned',
+  }),
+  makePart(2, {
+    componentRef: 'C16',
+    originalRating: '32µF 450V',
+    replacementPart: 'radial',
+    replacementRating: '33 µF 500V',
+    quantity: 2,
+    state: 'planned',
+  }),
+  makePart(3, {
+    componentRef: 'C4',
+    replacementPart: 'Film',
+    replacementRating: '0.047µF 630V',
+    state: 'ordered',
+    source: 'new, supplier',
+  }),
   makePart(4, { componentRef: 'C9', replacementPart: 'Film', replacementRating: '0.047µF 630V', state: 'fitted' }),
   makePart(5, { componentRef: 'R12', originalRating: '100k', action: 'kept-original', state: 'planned' }),
 ];
@@ -24,7 +44,9 @@ const parts = [
 describe('parts tab', () => {
   it('when an owner opens it, even asking for the shopping list, then they read the ledger: no costs, form, shopping list or CSV export', async () => {
     fakePartsApi(parts.map(asOwnerSees));
-    renderWithQueries(<PartsTab restorationId={7} role="owner" setName="Ardent 5" view="shopping" onViewChange={() => {}} />);
+    renderWithQueries(
+      <PartsTab restorationId={7} role="owner" setName="Ardent 5" view="shopping" onViewChange={() => {}} />,
+    );
     await screen.findByRole('row', { name: 'Part C15' });
     expect(screen.queryByRole('columnheader', { name: /Cost/ })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Record a part' })).not.toBeInTheDocument();
@@ -36,9 +58,14 @@ describe('parts tab', () => {
 
   it('when a technician opens it, then the shopping list and the CSV export are there', async () => {
     fakePartsApi(parts);
-    renderWithQueries(<PartsTab restorationId={7} role="technician" setName="Ardent 5" view="ledger" onViewChange={() => {}} />);
+    renderWithQueries(
+      <PartsTab restorationId={7} role="technician" setName="Ardent 5" view="ledger" onViewChange={() => {}} />,
+    );
     await screen.findByRole('row', { name: 'Part C15' });
-    const href = new URL(screen.getByRole('link', { name: 'Export CSV' }).getAttribute('href')!, 'http://gridleak.test');
+    const href = new URL(
+      screen.getByRole('link', { name: 'Export CSV' }).getAttribute('href')!,
+      'http://gridleak.test',
+    );
     expect(href.pathname).toBe('/api/restorations/7/parts.csv');
     // The workshop's currency (GBP until one is chosen) and the reader's time zone go with it.
     expect(href.searchParams.get('currency')).toBe('GBP');
@@ -49,7 +76,9 @@ describe('parts tab', () => {
   it('when a technician asks to record a part or edit one, then the form opens, with that part for an edit', async () => {
     fakePartsApi(parts);
     const user = userEvent.setup();
-    renderWithQueries(<PartsTab restorationId={7} role="technician" setName="Ardent 5" view="ledger" onViewChange={() => {}} />);
+    renderWithQueries(
+      <PartsTab restorationId={7} role="technician" setName="Ardent 5" view="ledger" onViewChange={() => {}} />,
+    );
     await user.click(await screen.findByRole('button', { name: 'Record a part' }));
     expect(screen.getByRole('form', { name: 'Record a part' })).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Edit C16' }));
@@ -62,7 +91,9 @@ describe('parts tab', () => {
     const print = vi.fn();
     vi.stubGlobal('print', print);
     const user = userEvent.setup();
-    renderWithQueries(<PartsTab restorationId={7} role="technician" setName="Ardent 5" view="shopping" onViewChange={() => {}} />);
+    renderWithQueries(
+      <PartsTab restorationId={7} role="technician" setName="Ardent 5" view="shopping" onViewChange={() => {}} />,
+    );
     const toOrder = await screen.findByRole('region', { name: 'To order' });
     const toOrderRows = within(toOrder).getAllByRole('row').slice(1);
     expect(toOrderRows).toHaveLength(1);
@@ -77,7 +108,9 @@ describe('parts tab', () => {
 
   it('when a part to buy carries a danger warning, then its line on the shopping list says so', async () => {
     fakePartsApi([makePart(1, { componentRef: 'C15', originalRating: '32µF 450V', replacementRating: '33µF 350V' })]);
-    renderWithQueries(<PartsTab restorationId={7} role="technician" setName="Ardent 5" view="shopping" onViewChange={() => {}} />);
+    renderWithQueries(
+      <PartsTab restorationId={7} role="technician" setName="Ardent 5" view="shopping" onViewChange={() => {}} />,
+    );
     const line = within(await screen.findByRole('region', { name: 'To order' })).getAllByRole('row')[1];
     expect(line).toHaveTextContent('⚠ Danger: check the ledger');
   });
@@ -86,7 +119,9 @@ describe('parts tab', () => {
     fakePartsApi(parts);
     const onViewChange = vi.fn();
     const user = userEvent.setup();
-    renderWithQueries(<PartsTab restorationId={7} role="mentor" setName="Ardent 5" view="ledger" onViewChange={onViewChange} />);
+    renderWithQueries(
+      <PartsTab restorationId={7} role="mentor" setName="Ardent 5" view="ledger" onViewChange={onViewChange} />,
+    );
     expect(screen.getByRole('button', { name: 'Ledger' })).toHaveAttribute('aria-pressed', 'true');
     await user.click(screen.getByRole('button', { name: 'Shopping list' }));
     expect(onViewChange).toHaveBeenCalledWith('shopping');

@@ -46,10 +46,20 @@ export function PartsTab({ restorationId, role, setName, findings, view: asked, 
       {workshop && (
         <div className="flex flex-wrap items-center justify-between gap-3 print:hidden">
           <div role="group" aria-label="Show" className="inline-flex gap-1 rounded-lg border border-rule bg-panel p-1">
-            <button type="button" aria-pressed={view === 'ledger'} className={viewButton(view === 'ledger')} onClick={() => onViewChange('ledger')}>
+            <button
+              type="button"
+              aria-pressed={view === 'ledger'}
+              className={viewButton(view === 'ledger')}
+              onClick={() => onViewChange('ledger')}
+            >
               Ledger
             </button>
-            <button type="button" aria-pressed={view === 'shopping'} className={viewButton(view === 'shopping')} onClick={() => onViewChange('shopping')}>
+            <button
+              type="button"
+              aria-pressed={view === 'shopping'}
+              className={viewButton(view === 'shopping')}
+              onClick={() => onViewChange('shopping')}
+            >
               Shopping list
             </button>
           </div>
@@ -72,12 +82,23 @@ export function PartsTab({ restorationId, role, setName, findings, view: asked, 
         <>
           {canEdit &&
             (form.open ? (
-              <PartForm key={form.part?.id ?? 'new'} restorationId={restorationId} part={form.part} findings={findings}
-                onDone={form.part ? close : undefined} onCancel={close} />
+              <PartForm
+                key={form.part?.id ?? 'new'}
+                restorationId={restorationId}
+                part={form.part}
+                findings={findings}
+                onDone={form.part ? close : undefined}
+                onCancel={close}
+              />
             ) : (
               <Button onClick={() => setForm({ open: true })}>Record a part</Button>
             ))}
-          <PartsLedger restorationId={restorationId} role={role} findings={findings} onEdit={canEdit ? (part) => setForm({ open: true, part }) : undefined} />
+          <PartsLedger
+            restorationId={restorationId}
+            role={role}
+            findings={findings}
+            onEdit={canEdit ? (part) => setForm({ open: true, part }) : undefined}
+          />
         </>
       )}
     </div>

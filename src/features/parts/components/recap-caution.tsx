@@ -5,8 +5,8 @@ export function RecapCaution() {
       <strong className="text-danger">
         <span aria-hidden="true">⚠ </span>Before you unsolder:
       </strong>{' '}
-      Discharge the filter capacitors and verify with a meter before unsoldering; never lower a voltage rating; use X/Y-class
-      safety capacitors where the mains connects. Follow local codes and licensed practice.
+      Discharge the filter capacitors and verify with a meter before unsoldering; never lower a voltage rating; use
+      X/Y-class safety capacitors where the mains connects. Follow local codes and licensed practice.
     </p>
   );
 }

@@ -17,25 +17,43 @@ function Lines({ heading, lines }: { heading: string; lines: ShoppingLine[] }) {
   if (lines.length === 0) return null;
   const showSources = lines.some((l) => l.sources.length > 0);
   return (
-    <section className="space-y-1 break-inside-avoid" aria-label={heading}>
+    <section className="break-inside-avoid space-y-1" aria-label={heading}>
       <h3 className="font-bold">{heading}</h3>
       <table className="w-full border-collapse text-left text-sm print:text-xs">
         <thead className="border-b-2 border-rule">
           <tr>
-            <th scope="col" className="w-8 py-1"><span className="sr-only">Got it</span></th>
-            <th scope="col" className="py-1 pr-3 text-right">Qty</th>
-            <th scope="col" className="py-1 pr-3">Part</th>
-            <th scope="col" className="py-1 pr-3">Rating</th>
-            <th scope="col" className="py-1 pr-3">For</th>
-            {showSources && <th scope="col" className="py-1">Source</th>}
+            <th scope="col" className="w-8 py-1">
+              <span className="sr-only">Got it</span>
+            </th>
+            <th scope="col" className="py-1 pr-3 text-right">
+              Qty
+            </th>
+            <th scope="col" className="py-1 pr-3">
+              Part
+            </th>
+            <th scope="col" className="py-1 pr-3">
+              Rating
+            </th>
+            <th scope="col" className="py-1 pr-3">
+              For
+            </th>
+            {showSources && (
+              <th scope="col" className="py-1">
+                Source
+              </th>
+            )}
           </tr>
         </thead>
         <tbody className="divide-y divide-rule">
           {lines.map((l) => (
             <tr key={`${l.part}|${l.rating}|${l.refs.join()}`}>
-              <td aria-hidden="true" className="py-1 text-lg leading-none">☐</td>
+              <td aria-hidden="true" className="py-1 text-lg leading-none">
+                ☐
+              </td>
               <td className="py-1 pr-3 text-right font-mono font-semibold">{l.quantity}</td>
-              <td className="py-1 pr-3">{l.part || (l.rating ? '' : <em className="text-ink-soft">not chosen yet</em>)}</td>
+              <td className="py-1 pr-3">
+                {l.part || (l.rating ? '' : <em className="text-ink-soft">not chosen yet</em>)}
+              </td>
               <td className="py-1 pr-3">
                 <span className="font-mono">{l.rating}</span>
                 {l.danger && (
@@ -65,23 +83,36 @@ export function ShoppingList({ parts, setName }: ShoppingListProps) {
   return (
     <div className={`space-y-4 ${printAlone}`}>
       <div className="flex flex-wrap items-center justify-between gap-3 print:hidden">
-        <p className="text-sm text-ink-soft">Parts planned or on order, grouped by what to buy. Parts kept or removed are left out.</p>
-        <Button onClick={() => window.print()} disabled={empty}>Print</Button>
+        <p className="text-sm text-ink-soft">
+          Parts planned or on order, grouped by what to buy. Parts kept or removed are left out.
+        </p>
+        <Button onClick={() => window.print()} disabled={empty}>
+          Print
+        </Button>
       </div>
-      <article aria-labelledby="shopping-heading" className="space-y-3 rounded-xl border border-rule bg-panel p-4 print:rounded-none print:border-0 print:p-0">
+      <article
+        aria-labelledby="shopping-heading"
+        className="space-y-3 rounded-xl border border-rule bg-panel p-4 print:rounded-none print:border-0 print:p-0"
+      >
         <header>
-          <h2 id="shopping-heading" className="text-lg font-bold">Shopping list</h2>
-          <p className="text-sm text-ink-soft">{setName} · {today()}</p>
+          <h2 id="shopping-heading" className="text-lg font-bold">
+            Shopping list
+          </h2>
+          <p className="text-sm text-ink-soft">
+            {setName} · {today()}
+          </p>
         </header>
         {empty ? (
-          <EmptyState title="Nothing to buy">No parts are planned or on order. Plan a replacement in the ledger and it shows here.</EmptyState>
+          <EmptyState title="Nothing to buy">
+            No parts are planned or on order. Plan a replacement in the ledger and it shows here.
+          </EmptyState>
         ) : (
           <>
             <Lines heading="To order" lines={toOrder} />
             <Lines heading="On order" lines={onOrder} />
             <p className="text-xs text-ink-soft">
-              Never a lower voltage rating than the part it replaces; where the mains connects, new X- or Y-class safety capacitors
-              only. Follow local codes and licensed practice.
+              Never a lower voltage rating than the part it replaces; where the mains connects, new X- or Y-class safety
+              capacitors only. Follow local codes and licensed practice.
             </p>
           </>
         )}

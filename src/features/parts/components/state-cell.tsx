@@ -2,9 +2,16 @@ import { partStateLabels, type Part } from '../../../../shared/schemas/parts';
 import { nextState, StateMark } from './state-mark';
 import { formatMediumDate as dateOnly } from '../../../lib/format';
 
-
 /** A part's state, when it was fitted, and (for technicians) one button to move it on a step. */
-export function StateCell({ part, onAdvance, busy = false }: { part: Part; onAdvance?: (part: Part) => void; busy?: boolean }) {
+export function StateCell({
+  part,
+  onAdvance,
+  busy = false,
+}: {
+  part: Part;
+  onAdvance?: (part: Part) => void;
+  busy?: boolean;
+}) {
   // A part kept original is neither ordered nor fitted: no step to offer.
   const next = part.action === 'kept-original' ? undefined : nextState(part.state);
   return (
@@ -21,7 +28,7 @@ export function StateCell({ part, onAdvance, busy = false }: { part: Part; onAdv
           onClick={() => onAdvance(part)}
           disabled={busy}
           aria-label={`Mark ${part.componentRef} ${partStateLabels[next].toLowerCase()}`}
-          className="min-h-11 whitespace-nowrap rounded-md border border-rule bg-panel px-2 text-sm font-semibold hover:bg-sunken disabled:opacity-60 print:hidden"
+          className="min-h-11 rounded-md border border-rule bg-panel px-2 text-sm font-semibold whitespace-nowrap hover:bg-sunken disabled:opacity-60 print:hidden"
         >
           {partStateLabels[next]} <span aria-hidden="true">›</span>
         </button>

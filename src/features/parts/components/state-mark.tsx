@@ -11,7 +11,7 @@ export const nextState = (state: State): State | undefined => partStates[partSta
 /** A part's state as glyph and word, never colour alone. */
 export function StateMark({ state }: { state: State }) {
   return (
-    <span className={`inline-flex items-center gap-1 whitespace-nowrap font-semibold ${tones[state]}`}>
+    <span className={`inline-flex items-center gap-1 font-semibold whitespace-nowrap ${tones[state]}`}>
       <span aria-hidden="true">{glyphs[state]}</span>
       {partStateLabels[state]}
     </span>

@@ -4,7 +4,16 @@ import { useForm, useWatch } from 'react-hook-form';
 import type { Part } from '../../../../shared/schemas/parts';
 import { useCreatePart } from '../api/create-part';
 import { useUpdatePart } from '../api/update-part';
-import { blankPart, nextBlank, partFormSchema, toInput, valuesOf, type PartDraft, type PartFormOutput, type PartFormValues } from '../lib/part-form-values';
+import {
+  blankPart,
+  nextBlank,
+  partFormSchema,
+  toInput,
+  valuesOf,
+  type PartDraft,
+  type PartFormOutput,
+  type PartFormValues,
+} from '../lib/part-form-values';
 import { isCapacitor, previewWarnings } from '../lib/part-preview';
 import { useCurrency } from './use-currency';
 
@@ -12,7 +21,15 @@ import { useCurrency } from './use-currency';
  * The part form's state: the shared schema checks it, the bench library previews the warnings as it is typed, and
  * a save adds the line or (with `part`) changes it. The server's message shows if it refuses.
  */
-export function usePartForm({ restorationId, part, onDone }: { restorationId: number; part?: Part; onDone?: () => void }) {
+export function usePartForm({
+  restorationId,
+  part,
+  onDone,
+}: {
+  restorationId: number;
+  part?: Part;
+  onDone?: () => void;
+}) {
   const [currency] = useCurrency();
   const schema = useMemo(() => partFormSchema(currency), [currency]);
   const form = useForm<PartFormValues, unknown, PartFormOutput>({
@@ -50,7 +67,9 @@ export function usePartForm({ restorationId, part, onDone }: { restorationId: nu
     currency,
     warnings,
     /** Whether both sides carry something to compare, so "no warnings" means something. */
-    compared: goesIn && Boolean((draft.originalPart || draft.originalRating) && (draft.replacementPart || draft.replacementRating)),
+    compared:
+      goesIn &&
+      Boolean((draft.originalPart || draft.originalRating) && (draft.replacementPart || draft.replacementRating)),
     capacitor: goesIn && isCapacitor(draft),
     onSubmit,
     saving: saving.isPending,

@@ -1,9 +1,16 @@
 import { partWarnings, type PartWarning } from '../../../../shared/bench';
 import type { Part } from '../../../../shared/schemas/parts';
 
-type Draft = Pick<Part, 'action' | 'originalPart' | 'originalRating' | 'replacementPart' | 'replacementRating' | 'mainsPosition'>;
+type Draft = Pick<
+  Part,
+  'action' | 'originalPart' | 'originalRating' | 'replacementPart' | 'replacementRating' | 'mainsPosition'
+>;
 
-const joined = (...texts: string[]) => texts.map((t) => t.trim()).filter(Boolean).join(' ');
+const joined = (...texts: string[]) =>
+  texts
+    .map((t) => t.trim())
+    .filter(Boolean)
+    .join(' ');
 
 /**
  * The warnings the server will compute for a line, worked out while it is typed (the server's are the truth once
@@ -19,7 +26,9 @@ export function previewWarnings(d: Draft): PartWarning[] {
 }
 
 /** Whether a line is about a capacitor: a C reference, a capacitance in a rating, or the word in a part's name. */
-export function isCapacitor(d: Pick<Part, 'componentRef' | 'originalPart' | 'originalRating' | 'replacementPart' | 'replacementRating'>): boolean {
+export function isCapacitor(
+  d: Pick<Part, 'componentRef' | 'originalPart' | 'originalRating' | 'replacementPart' | 'replacementRating'>,
+): boolean {
   if (/^C\d/i.test(d.componentRef.trim())) return true;
   const text = joined(d.originalPart, d.originalRating, d.replacementPart, d.replacementRating);
   // Capacitances as marked: 47µF, 47UF, 0.1 mfd, 8 MF (old American microfarads), 100 mmfd, 4n7.

@@ -29,7 +29,14 @@ export function shoppingLines(parts: Part[], state: 'planned' | 'ordered'): Shop
   for (const p of parts) {
     if (p.state !== state || !needsBuying(p)) continue;
     const key = keyOf(p);
-    const line = lines.get(key) ?? { part: p.replacementPart.trim(), rating: p.replacementRating.trim(), quantity: 0, refs: [], sources: [], danger: false };
+    const line = lines.get(key) ?? {
+      part: p.replacementPart.trim(),
+      rating: p.replacementRating.trim(),
+      quantity: 0,
+      refs: [],
+      sources: [],
+      danger: false,
+    };
     line.quantity += p.quantity;
     line.refs.push(p.componentRef);
     line.danger ||= p.warnings.some((w) => w.level === 'danger');

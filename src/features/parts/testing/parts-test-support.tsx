@@ -9,7 +9,10 @@ export interface Call {
 }
 
 const json = (status: number, body: unknown) =>
-  new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+  new Response(body === undefined ? null : JSON.stringify(body), {
+    status,
+    headers: { 'Content-Type': 'application/json' },
+  });
 
 /**
  * Stands in for the parts API behind `fetch`. `refuseChanges` answers every PATCH with that status and message;
@@ -17,7 +20,11 @@ const json = (status: number, body: unknown) =>
  */
 export function fakePartsApi(
   initial: Part[],
-  { refuseChanges, holdChanges, currency = 'GBP' }: { refuseChanges?: { status: number; message: string }; holdChanges?: Promise<void>; currency?: string } = {},
+  {
+    refuseChanges,
+    holdChanges,
+    currency = 'GBP',
+  }: { refuseChanges?: { status: number; message: string }; holdChanges?: Promise<void>; currency?: string } = {},
 ) {
   let list = [...initial];
   let nextId = 100;
@@ -38,7 +45,10 @@ export function fakePartsApi(
       await holdChanges;
       if (refuseChanges) return toResponse(apiError(refuseChanges.status, refuseChanges.message));
       list = list.map((p) => (p.id === id ? makePart(id, { ...p, ...(body as Partial<PartInput>) }) : p));
-      return json(200, list.find((p) => p.id === id));
+      return json(
+        200,
+        list.find((p) => p.id === id),
+      );
     }
     if (method === 'DELETE') {
       list = list.filter((p) => p.id !== id);
@@ -48,7 +58,6 @@ export function fakePartsApi(
   });
   return { calls, fetchMock };
 }
-
 
 /** A promise and the function that settles it. */
 export function gate() {

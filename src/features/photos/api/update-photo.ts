@@ -3,7 +3,8 @@ import type { Photo, PhotoPatch } from '../../../../shared/schemas/photos';
 import { api } from '../../../lib/api-client';
 import { photosQueryKey } from '../../../lib/queries/get-photos';
 
-export const updatePhoto = (id: number, patch: PhotoPatch) => api<Photo>(`/photos/${id}`, { method: 'PATCH', json: patch });
+export const updatePhoto = (id: number, patch: PhotoPatch) =>
+  api<Photo>(`/photos/${id}`, { method: 'PATCH', json: patch });
 
 /** Applies the change to the gallery at once and puts it back if the server refuses. */
 export function useUpdatePhoto(restorationId: number) {

@@ -62,7 +62,13 @@ export function uploadPhoto(
     };
     // A server that refuses a large body early often drops the connection, which looks like a network error.
     xhr.onerror = () =>
-      reject(new ApiError(0, 'network', 'The upload was cut off. Check the connection and retry; a very large photo may be refused.'));
+      reject(
+        new ApiError(
+          0,
+          'network',
+          'The upload was cut off. Check the connection and retry; a very large photo may be refused.',
+        ),
+      );
     xhr.onabort = () => reject(aborted());
     signal?.addEventListener('abort', () => xhr.abort(), { once: true });
 

@@ -7,7 +7,15 @@ import { Field, inputClass } from '../../../components/field';
 const captionSchema = photoPatchSchema.pick({ caption: true }).required();
 
 /** The caption is saved on Enter or with its button; the form forgets its edits when another photo is shown. */
-export function CaptionForm({ caption, onSave, pending }: { caption: string; onSave: (caption: string) => void; pending: boolean }) {
+export function CaptionForm({
+  caption,
+  onSave,
+  pending,
+}: {
+  caption: string;
+  onSave: (caption: string) => void;
+  pending: boolean;
+}) {
   const { register, handleSubmit, formState, reset } = useForm({
     resolver: zodResolver(captionSchema),
     values: { caption },

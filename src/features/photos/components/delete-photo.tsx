@@ -3,7 +3,15 @@ import { buttonClass } from '../../../components/button';
 import { useDeletePhoto } from '../api/delete-photo';
 
 /** Two steps, the safe choice focused: a deleted photo cannot be brought back. */
-export function DeletePhoto({ restorationId, photoId, onDeleted }: { restorationId: number; photoId: number; onDeleted: (id: number) => void }) {
+export function DeletePhoto({
+  restorationId,
+  photoId,
+  onDeleted,
+}: {
+  restorationId: number;
+  photoId: number;
+  onDeleted: (id: number) => void;
+}) {
   const remove = useDeletePhoto(restorationId);
   const [confirming, setConfirming] = useState(false);
   const keepRef = useRef<HTMLButtonElement>(null);
@@ -19,12 +27,21 @@ export function DeletePhoto({ restorationId, photoId, onDeleted }: { restoration
 
   if (!confirming)
     return (
-      <button ref={askRef} type="button" className="inline-flex min-h-11 w-full items-center justify-center rounded-lg border border-danger/50 px-4 py-2 font-semibold text-danger hover:bg-danger-soft" onClick={() => setConfirming(true)}>
+      <button
+        ref={askRef}
+        type="button"
+        className="inline-flex min-h-11 w-full items-center justify-center rounded-lg border border-danger/50 px-4 py-2 font-semibold text-danger hover:bg-danger-soft"
+        onClick={() => setConfirming(true)}
+      >
         Delete photo
       </button>
     );
   return (
-    <div role="group" aria-labelledby={questionId} className="space-y-3 rounded-lg border border-danger/40 bg-danger-soft p-3">
+    <div
+      role="group"
+      aria-labelledby={questionId}
+      className="space-y-3 rounded-lg border border-danger/40 bg-danger-soft p-3"
+    >
       <p id={questionId} className="font-semibold">
         Delete this photo for good? It cannot be brought back.
       </p>

@@ -54,7 +54,9 @@ export function DropZone({ onFiles }: { onFiles: (files: File[]) => void }) {
       }`}
     >
       {/* Nothing is dragged on a touch screen: there the buttons say it all. */}
-      <p className="font-semibold pointer-coarse:hidden">{dragging ? 'Let go to add these photos' : 'Drop photos here'}</p>
+      <p className="font-semibold pointer-coarse:hidden">
+        {dragging ? 'Let go to add these photos' : 'Drop photos here'}
+      </p>
       <div className="flex flex-wrap justify-center gap-2">
         <Button onClick={() => pickRef.current?.click()}>Choose photos</Button>
         <Button variant="quiet" className="pointer-fine:hidden" onClick={() => cameraRef.current?.click()}>
@@ -62,8 +64,24 @@ export function DropZone({ onFiles }: { onFiles: (files: File[]) => void }) {
         </Button>
       </div>
       <p className="text-sm text-ink-soft">JPEG, PNG, WebP, HEIC or AVIF, up to 40 MB each.</p>
-      <input ref={pickRef} type="file" multiple accept={acceptedTypes.join(',')} hidden onChange={picked} aria-label="Choose photos" />
-      <input ref={cameraRef} type="file" accept="image/*" capture="environment" hidden onChange={picked} aria-label="Take a photo" />
+      <input
+        ref={pickRef}
+        type="file"
+        multiple
+        accept={acceptedTypes.join(',')}
+        hidden
+        onChange={picked}
+        aria-label="Choose photos"
+      />
+      <input
+        ref={cameraRef}
+        type="file"
+        accept="image/*"
+        capture="environment"
+        hidden
+        onChange={picked}
+        aria-label="Take a photo"
+      />
     </div>
   );
 }

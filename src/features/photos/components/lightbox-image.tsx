@@ -12,7 +12,9 @@ export function LightboxImage({ photo, onError }: { photo: Photo; onError?: () =
   const fill = 'absolute inset-0 h-full w-full object-contain p-2 sm:p-6';
   return (
     <>
-      {!loaded && <img src={photo.urls.thumb} alt="" loading="lazy" aria-hidden="true" className={`${fill} opacity-70 blur-sm`} />}
+      {!loaded && (
+        <img src={photo.urls.thumb} alt="" loading="lazy" aria-hidden="true" className={`${fill} opacity-70 blur-sm`} />
+      )}
       <img
         {...photoSources(photo, '100vw')}
         alt={photoLabel(photo)}
@@ -24,7 +26,10 @@ export function LightboxImage({ photo, onError }: { photo: Photo; onError?: () =
         className={fill}
       />
       {!loaded && (
-        <p role="status" className="absolute bottom-3 left-1/2 -translate-x-1/2 rounded-full bg-panel/90 px-3 py-1 text-sm text-ink">
+        <p
+          role="status"
+          className="absolute bottom-3 left-1/2 -translate-x-1/2 rounded-full bg-panel/90 px-3 py-1 text-sm text-ink"
+        >
           Loading the full photo…
         </p>
       )}

@@ -12,7 +12,11 @@ export function PhotoDetails({ photo, position, showShared }: { photo: Photo; po
         {viewLabels[photo.view]} · {phaseLabels[photo.phase]}
         {showShared && photo.ownerVisible && <SharedBadge />}
       </h2>
-      {photo.caption ? <p className="whitespace-pre-line">{photo.caption}</p> : <p className="text-ink-soft">No caption.</p>}
+      {photo.caption ? (
+        <p className="whitespace-pre-line">{photo.caption}</p>
+      ) : (
+        <p className="text-ink-soft">No caption.</p>
+      )}
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 text-sm">
         <dt className="text-ink-soft">Taken</dt>
         <dd>{taken ?? 'not recorded by the camera'}</dd>

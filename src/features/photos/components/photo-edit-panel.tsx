@@ -1,5 +1,14 @@
 import { useId } from 'react';
-import { phaseLabels, phaseSchema, phases, viewLabels, viewSchema, views, type Photo, type PhotoPatch } from '../../../../shared/schemas/photos';
+import {
+  phaseLabels,
+  phaseSchema,
+  phases,
+  viewLabels,
+  viewSchema,
+  views,
+  type Photo,
+  type PhotoPatch,
+} from '../../../../shared/schemas/photos';
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useUpdatePhoto } from '../api/update-photo';
@@ -30,7 +39,12 @@ export function PhotoEditPanel({
       <div className="grid grid-cols-2 gap-3">
         <Field label="View">
           {(a) => (
-            <select {...a} value={photo.view} onChange={(e) => save({ view: viewSchema.parse(e.target.value) })} className={inputClass}>
+            <select
+              {...a}
+              value={photo.view}
+              onChange={(e) => save({ view: viewSchema.parse(e.target.value) })}
+              className={inputClass}
+            >
               {views.map((v) => (
                 <option key={v} value={v}>
                   {viewLabels[v]}
@@ -41,7 +55,12 @@ export function PhotoEditPanel({
         </Field>
         <Field label="Phase">
           {(a) => (
-            <select {...a} value={photo.phase} onChange={(e) => save({ phase: phaseSchema.parse(e.target.value) })} className={inputClass}>
+            <select
+              {...a}
+              value={photo.phase}
+              onChange={(e) => save({ phase: phaseSchema.parse(e.target.value) })}
+              className={inputClass}
+            >
               {phases.map((p) => (
                 <option key={p} value={p}>
                   {phaseLabels[p]}
@@ -66,7 +85,9 @@ export function PhotoEditPanel({
           <a href={photo.urls.original} download className={buttonClass('quiet', 'w-full')}>
             Download original
           </a>
-          <p className="text-sm text-ink-soft">The original keeps the camera's data, including where it was taken if recorded.</p>
+          <p className="text-sm text-ink-soft">
+            The original keeps the camera's data, including where it was taken if recorded.
+          </p>
         </div>
       )}
       {canDelete && <DeletePhoto restorationId={photo.restorationId} photoId={photo.id} onDeleted={onDeleted} />}

@@ -22,7 +22,10 @@ export function PhotoGallery({
     <div className="space-y-8">
       {groups.map((group) => (
         <section key={group.view} aria-labelledby={`${idPrefix}-${group.view}`} className="space-y-4">
-          <h3 id={`${idPrefix}-${group.view}`} className="flex items-baseline gap-2 border-b border-rule pb-1 text-lg font-bold">
+          <h3
+            id={`${idPrefix}-${group.view}`}
+            className="flex items-baseline gap-2 border-b border-rule pb-1 text-lg font-bold"
+          >
             {viewLabels[group.view]}
             <span className="text-sm font-normal text-ink-soft">{photos(group.count)}</span>
           </h3>

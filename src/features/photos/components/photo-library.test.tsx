@@ -30,12 +30,24 @@ describe('photo gallery', () => {
     renderWithQueries(<PhotoLibrary restorationId={7} role="mentor" />);
 
     expect(await screen.findByRole('heading', { level: 3, name: /^Top/ })).toBeInTheDocument();
-    expect(text(screen.getAllByRole('heading', { level: 3 }))).toEqual(['Top4 photos', 'Underside1 photo', 'Rear1 photo']);
+    expect(text(screen.getAllByRole('heading', { level: 3 }))).toEqual([
+      'Top4 photos',
+      'Underside1 photo',
+      'Rear1 photo',
+    ]);
 
     const top = screen.getByRole('region', { name: /^Top/ });
-    expect(text(within(top).getAllByRole('heading', { level: 4 }))).toEqual(['Before2 photos', 'During1 photo', 'After1 photo']);
+    expect(text(within(top).getAllByRole('heading', { level: 4 }))).toEqual([
+      'Before2 photos',
+      'During1 photo',
+      'After1 photo',
+    ]);
     // Oldest first inside a phase (photo 3 was taken before photo 6).
-    expect(within(top).getAllByRole('button').map((b) => b.getAttribute('aria-label'))).toEqual([
+    expect(
+      within(top)
+        .getAllByRole('button')
+        .map((b) => b.getAttribute('aria-label')),
+    ).toEqual([
       'Top, before: as received',
       'Top, before: dial cord',
       'Top, during: new can fitted',
@@ -56,16 +68,23 @@ describe('photo gallery', () => {
   });
 
   it('when the list carries finding counts, then each thumbnail shows them by status and says them in words', async () => {
-    fakePhotoApi([makePhoto(1, { caption: 'rectifier', findingCounts: { confirmed: 1, observed: 2 } }), makePhoto(2, { caption: 'dial', findingCounts: {} })]);
+    fakePhotoApi([
+      makePhoto(1, { caption: 'rectifier', findingCounts: { confirmed: 1, observed: 2 } }),
+      makePhoto(2, { caption: 'dial', findingCounts: {} }),
+    ]);
     renderWithQueries(<PhotoLibrary restorationId={7} role="technician" />);
-    const thumb = await screen.findByRole('button', { name: 'Top, before: rectifier; findings: 2 observed, 1 confirmed' });
+    const thumb = await screen.findByRole('button', {
+      name: 'Top, before: rectifier; findings: 2 observed, 1 confirmed',
+    });
     // Counts in the order work moves, each after its status glyph (• observed, ! confirmed).
     expect([...thumb.querySelectorAll('.tabular-nums')].map((n) => n.textContent)).toEqual(['•2', '!1']);
     expect(screen.getByRole('button', { name: 'Top, before: dial; findings: no findings' })).toBeInTheDocument();
   });
 
   it('when an owner opens a shared photo, then there is no uploader and no edit, download or delete control', async () => {
-    const { calls } = fakePhotoApi([makePhoto(1, { ownerVisible: true, urls: { thumb: '/t/1', phone: '/p/1', display: '/d/1' } })]);
+    const { calls } = fakePhotoApi([
+      makePhoto(1, { ownerVisible: true, urls: { thumb: '/t/1', phone: '/p/1', display: '/d/1' } }),
+    ]);
     renderWithQueries(<PhotoLibrary restorationId={7} role="owner" />);
 
     await userEvent.setup().click(await screen.findByRole('button', { name: 'Top, before' }));
@@ -88,7 +107,9 @@ describe('photo gallery', () => {
   it('when a technician has no photos yet, then the empty state says to photograph before power, under the uploader and its caution', async () => {
     fakePhotoApi([]);
     renderWithQueries(<PhotoLibrary restorationId={7} role="technician" />);
-    expect(await screen.findByText(/No photos yet — photograph everything before any power: top, underside, rear/)).toBeInTheDocument();
+    expect(
+      await screen.findByText(/No photos yet — photograph everything before any power: top, underside, rear/),
+    ).toBeInTheDocument();
     expect(screen.getByRole('heading', { name: 'Add photos' })).toBeInTheDocument();
     expect(screen.getByRole('note')).toHaveTextContent(/discharge the filter capacitors and verify with a meter/);
     expect(screen.getByRole('button', { name: 'Choose photos' })).toBeInTheDocument();

@@ -10,7 +10,11 @@ import { PhotoUploader } from './photo-uploader';
 
 function Empty({ role }: { role: Role }) {
   if (role === 'owner')
-    return <EmptyState title="Nothing shared with you yet">Photos of the work appear here once the technician shares them.</EmptyState>;
+    return (
+      <EmptyState title="Nothing shared with you yet">
+        Photos of the work appear here once the technician shares them.
+      </EmptyState>
+    );
   if (can(role, 'photos.upload'))
     return (
       <EmptyState title="No photos yet — photograph everything before any power: top, underside, rear…">

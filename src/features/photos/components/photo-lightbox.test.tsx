@@ -34,7 +34,10 @@ describe('photo lightbox', () => {
 
     const dialog = screen.getByRole('dialog', { name: 'Photo 2 of 3: Underside, before: wax capacitors' });
     expect(dialog).toHaveAttribute('aria-modal', 'true');
-    expect(within(dialog).getByRole('img', { name: 'Underside, before: wax capacitors' })).toHaveAttribute('srcset', expect.stringContaining('/d/2.webp '));
+    expect(within(dialog).getByRole('img', { name: 'Underside, before: wax capacitors' })).toHaveAttribute(
+      'srcset',
+      expect.stringContaining('/d/2.webp '),
+    );
     expect(within(dialog).getByRole('button', { name: 'Close' })).toHaveFocus();
 
     await user.keyboard('{ArrowRight}');
@@ -73,7 +76,9 @@ describe('photo lightbox', () => {
 
     await user.click(share);
     expect(share).toHaveAttribute('aria-checked', 'true');
-    await waitFor(() => expect(calls).toContainEqual({ method: 'PATCH', url: '/api/photos/1', body: { ownerVisible: true } }));
+    await waitFor(() =>
+      expect(calls).toContainEqual({ method: 'PATCH', url: '/api/photos/1', body: { ownerVisible: true } }),
+    );
     expect(await screen.findByText('Saved.')).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Download original' })).toHaveAttribute('href', '/o/1.jpg');
   });
@@ -83,7 +88,9 @@ describe('photo lightbox', () => {
     await user.click(screen.getByRole('button', { name: 'Top, before: as received' }));
     await user.selectOptions(within(screen.getByRole('dialog')).getByLabelText('View'), 'detail');
     expect(screen.getByRole('dialog')).toHaveAccessibleName('Photo 3 of 3: Detail, before: as received');
-    await waitFor(() => expect(calls).toContainEqual({ method: 'PATCH', url: '/api/photos/1', body: { view: 'detail' } }));
+    await waitFor(() =>
+      expect(calls).toContainEqual({ method: 'PATCH', url: '/api/photos/1', body: { view: 'detail' } }),
+    );
   });
 
   it('when a technician deletes a photo, then it asks first, deletes, closes and focuses the next thumbnail', async () => {
@@ -104,7 +111,10 @@ describe('photo lightbox', () => {
   it('when a photo is open, then a link leads to its markup page', async () => {
     const { user } = await openLibrary('mentor');
     await user.click(screen.getByRole('button', { name: 'Underside, before: wax capacitors' }));
-    expect(within(screen.getByRole('dialog')).getByRole('link', { name: 'Mark up this photo' })).toHaveAttribute('href', '/restorations/7/photos/2');
+    expect(within(screen.getByRole('dialog')).getByRole('link', { name: 'Mark up this photo' })).toHaveAttribute(
+      'href',
+      '/restorations/7/photos/2',
+    );
   });
 
   it('when a mentor opens a photo, then it can be viewed but not edited', async () => {

@@ -11,8 +11,12 @@ import { LightboxImage } from './lightbox-image';
 import { PhotoDetails } from './photo-details';
 import { PhotoEditPanel } from './photo-edit-panel';
 
-const typing = (target: EventTarget) => target instanceof HTMLElement && target.matches('input, textarea, select, [contenteditable="true"]');
-const stepButton = buttonClass('quiet', 'absolute top-1/2 -translate-y-1/2 bg-panel/90 px-3 aria-disabled:opacity-40 aria-disabled:cursor-not-allowed');
+const typing = (target: EventTarget) =>
+  target instanceof HTMLElement && target.matches('input, textarea, select, [contenteditable="true"]');
+const stepButton = buttonClass(
+  'quiet',
+  'absolute top-1/2 -translate-y-1/2 bg-panel/90 px-3 aria-disabled:opacity-40 aria-disabled:cursor-not-allowed',
+);
 
 /** One photo large, in gallery order: ← → (or swipe) to move, Escape to close. */
 export function PhotoLightbox({
@@ -83,7 +87,10 @@ export function PhotoLightbox({
             Close
           </button>
         </div>
-        <Link to={`/restorations/${photo.restorationId}/photos/${photo.id}`} className={buttonClass('primary', 'w-full')}>
+        <Link
+          to={`/restorations/${photo.restorationId}/photos/${photo.id}`}
+          className={buttonClass('primary', 'w-full')}
+        >
           {can(role, 'findings.create') ? 'Mark up this photo' : 'See the findings on this photo'}
         </Link>
         {can(role, 'photos.edit') && (

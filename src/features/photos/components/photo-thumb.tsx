@@ -5,7 +5,8 @@ import { SharedBadge } from './shared-badge';
 import { photoSources } from '../../../lib/photo-sources';
 
 /** The gallery's columns: 2 on a phone up to 10 on a wide screen (photo-gallery.tsx). */
-const GRID_SIZES = '(min-width: 1536px) 10vw, (min-width: 1280px) 12.5vw, (min-width: 1024px) 17vw, (min-width: 768px) 25vw, (min-width: 640px) 33vw, 50vw';
+const GRID_SIZES =
+  '(min-width: 1536px) 10vw, (min-width: 1280px) 12.5vw, (min-width: 1024px) 17vw, (min-width: 768px) 25vw, (min-width: 640px) 33vw, 50vw';
 
 export function PhotoThumb({
   photo,
@@ -45,7 +46,10 @@ export function PhotoThumb({
       {counts.length > 0 && (
         <span aria-hidden="true" className="absolute top-1.5 right-1.5 flex flex-wrap justify-end gap-1">
           {counts.map(({ status, count }) => (
-            <span key={status} className="inline-flex items-center gap-0.5 rounded-full bg-panel/90 py-0.5 pr-1.5 pl-0.5 text-xs font-semibold tabular-nums">
+            <span
+              key={status}
+              className="inline-flex items-center gap-0.5 rounded-full bg-panel/90 py-0.5 pr-1.5 pl-0.5 text-xs font-semibold tabular-nums"
+            >
               <StatusGlyph status={status} className="!h-4 !w-4 !text-[0.65rem]" />
               {count}
             </span>

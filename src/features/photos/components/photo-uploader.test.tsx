@@ -59,7 +59,10 @@ afterEach(() => {
 });
 
 const jpeg = (name: string) => new File([new Uint8Array(2048)], name, { type: 'image/jpeg' });
-const row = (name: string) => within(screen.getByRole('list', { name: 'Uploads' })).getByText(name).closest('li') as HTMLElement;
+const row = (name: string) =>
+  within(screen.getByRole('list', { name: 'Uploads' }))
+    .getByText(name)
+    .closest('li') as HTMLElement;
 
 async function startWith(files: File[]) {
   const api = fakePhotoApi([]);

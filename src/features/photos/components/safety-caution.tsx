@@ -6,12 +6,14 @@ export function SafetyCaution({ liveChassis = false }: { liveChassis?: boolean }
         <span aria-hidden="true" className="font-semibold text-glow-strong">
           ⚠{' '}
         </span>
-        <strong>Photograph before any power.</strong> If the set has been powered, discharge the filter capacitors and verify
-        with a meter before reaching in; on AC/DC sets the chassis may be live. Follow local electrical codes and licensed
-        practice.
+        <strong>Photograph before any power.</strong> If the set has been powered, discharge the filter capacitors and
+        verify with a meter before reaching in; on AC/DC sets the chassis may be live. Follow local electrical codes and
+        licensed practice.
       </p>
       {liveChassis && (
-        <p className="font-semibold">This set is marked live-chassis: work through an isolation transformer and keep one hand away.</p>
+        <p className="font-semibold">
+          This set is marked live-chassis: work through an isolation transformer and keep one hand away.
+        </p>
       )}
     </div>
   );

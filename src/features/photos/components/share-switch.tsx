@@ -1,7 +1,15 @@
 import { LabelledSwitch } from '../../../components/labelled-switch';
 
 /** Whether the owner sees this photo. */
-export function ShareSwitch({ checked, onChange, disabled }: { checked: boolean; onChange: (next: boolean) => void; disabled?: boolean }) {
+export function ShareSwitch({
+  checked,
+  onChange,
+  disabled,
+}: {
+  checked: boolean;
+  onChange: (next: boolean) => void;
+  disabled?: boolean;
+}) {
   return (
     <LabelledSwitch
       label="Share with owner"

@@ -36,7 +36,15 @@ export function UploadBatchFields({ form }: { form: BatchForm }) {
         </Field>
       </div>
       <Field label="Caption (optional)" error={formState.errors.caption?.message}>
-        {(a) => <input {...a} {...register('caption')} maxLength={500} className={inputClass} placeholder="e.g. mains dropper before any work" />}
+        {(a) => (
+          <input
+            {...a}
+            {...register('caption')}
+            maxLength={500}
+            className={inputClass}
+            placeholder="e.g. mains dropper before any work"
+          />
+        )}
       </Field>
       <label className="flex min-h-11 items-center gap-3">
         <input type="checkbox" {...register('ownerVisible')} className="h-5 w-5 accent-glow" />

@@ -83,12 +83,23 @@ export function UploadRow({
           </button>
         )}
         {((status === 'failed' && item.retryable) || status === 'cancelled') && (
-          <button ref={retryRef} type="button" className={smallButton} aria-label={`Retry ${file.name}`} onClick={() => onRetry(item.key)}>
+          <button
+            ref={retryRef}
+            type="button"
+            className={smallButton}
+            aria-label={`Retry ${file.name}`}
+            onClick={() => onRetry(item.key)}
+          >
             Retry
           </button>
         )}
         {(status === 'failed' || status === 'cancelled') && (
-          <button type="button" className={smallButton} aria-label={`Remove ${file.name} from the list`} onClick={() => onRemove(item.key)}>
+          <button
+            type="button"
+            className={smallButton}
+            aria-label={`Remove ${file.name} from the list`}
+            onClick={() => onRemove(item.key)}
+          >
             Remove
           </button>
         )}

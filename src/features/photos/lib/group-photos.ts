@@ -29,4 +29,5 @@ export function groupPhotos(photos: readonly Photo[]): ViewGroup[] {
 }
 
 /** The same photos in one line, for the lightbox's previous/next. */
-export const flattenGroups = (groups: readonly ViewGroup[]): Photo[] => groups.flatMap((v) => v.phases.flatMap((p) => p.photos));
+export const flattenGroups = (groups: readonly ViewGroup[]): Photo[] =>
+  groups.flatMap((v) => v.phases.flatMap((p) => p.photos));

@@ -69,4 +69,5 @@ export function nextToStart(items: readonly UploadItem[], limit: number): Upload
   return items.filter((i) => i.status === 'queued').slice(0, Math.max(0, limit - sending));
 }
 
-export const isBusy = (items: readonly UploadItem[]) => items.some((i) => i.status === 'queued' || i.status === 'uploading');
+export const isBusy = (items: readonly UploadItem[]) =>
+  items.some((i) => i.status === 'queued' || i.status === 'uploading');

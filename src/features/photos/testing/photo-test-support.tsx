@@ -20,7 +20,10 @@ export function fakePhotoApi(initial: Photo[], { failList = false } = {}) {
   let photos = [...initial];
   const calls: Call[] = [];
   const json = (status: number, body: unknown) =>
-    new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+    new Response(body === undefined ? null : JSON.stringify(body), {
+      status,
+      headers: { 'Content-Type': 'application/json' },
+    });
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
     const url = String(input);
     const method = init.method ?? 'GET';
@@ -32,7 +35,10 @@ export function fakePhotoApi(initial: Photo[], { failList = false } = {}) {
     const id = Number(url.match(/\/api\/photos\/(\d+)$/)?.[1]);
     if (method === 'PATCH') {
       photos = photos.map((p) => (p.id === id ? { ...p, ...(body as Partial<Photo>) } : p));
-      return json(200, photos.find((p) => p.id === id));
+      return json(
+        200,
+        photos.find((p) => p.id === id),
+      );
     }
     if (method === 'DELETE') {
       photos = photos.filter((p) => p.id !== id);

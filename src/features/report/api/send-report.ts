@@ -12,7 +12,8 @@ export interface SentReport {
 }
 
 /** E-mails the report to every owner on the restoration; a 409 (no owner yet) carries a message to show. */
-export const sendReport = (restorationId: number) => api<SentReport>(`/restorations/${restorationId}/report/send`, { method: 'POST' });
+export const sendReport = (restorationId: number) =>
+  api<SentReport>(`/restorations/${restorationId}/report/send`, { method: 'POST' });
 
 export function useSendReport(restorationId: number) {
   const client = useQueryClient();

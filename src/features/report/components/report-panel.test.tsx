@@ -13,11 +13,17 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+const json = (status: number, body: unknown) =>
+  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
 const preview = (warnings: { code: string; message: string }[] = []) => ({
-  recipients: [{ name: 'Oona Owner', email: 'owner@example.org' }], subject: 'Your Farrowby Lark 3: the hand-back report',
-  body: 'Hello Oona Owner,\n\nThe report is attached.', attachmentName: 'farrowby-lark-3-hand-back-report.pdf', pageCount: 4, warnings, sends: [],
+  recipients: [{ name: 'Oona Owner', email: 'owner@example.org' }],
+  subject: 'Your Farrowby Lark 3: the hand-back report',
+  body: 'Hello Oona Owner,\n\nThe report is attached.',
+  attachmentName: 'farrowby-lark-3-hand-back-report.pdf',
+  pageCount: 4,
+  warnings,
+  sends: [],
 });
 
 /** The preview and send endpoints behind `fetch`; the send answers with `answer`, held back until `release` is called. */
@@ -27,14 +33,15 @@ function fakeSend(answer: () => Response, warnings: { code: string; message: str
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
     if (String(input) === '/api/restorations/7/report/preview' && !init.method) return json(200, preview(warnings));
     await held;
-    return String(input) === '/api/restorations/7/report/send' && init.method === 'POST' ? answer() : toResponse(notFound());
+    return String(input) === '/api/restorations/7/report/send' && init.method === 'POST'
+      ? answer()
+      : toResponse(notFound());
   });
   vi.stubGlobal('fetch', fetchMock);
   return { fetchMock, release };
 }
 
-const renderPanel = (role: Role) =>
-  renderWithQueries(<ReportPanel restorationId={7} role={role} />, { router: false });
+const renderPanel = (role: Role) => renderWithQueries(<ReportPanel restorationId={7} role={role} />, { router: false });
 
 describe('report panel', () => {
   it('when a technician sends the report, then it shows it is sending, then who it was sent to', async () => {
@@ -48,24 +55,33 @@ describe('report panel', () => {
     expect(screen.getByRole('button', { name: 'Sending…' })).toBeDisabled();
     release();
     expect(await screen.findByText('Sent to owner@example.org.')).toBeInTheDocument();
-    expect(fetchMock.mock.calls.filter(([, init]) => (init as RequestInit | undefined)?.method === 'POST')).toHaveLength(1);
+    expect(
+      fetchMock.mock.calls.filter(([, init]) => (init as RequestInit | undefined)?.method === 'POST'),
+    ).toHaveLength(1);
   });
 
   it('when there is no owner to send to (409), then the server’s message shows', async () => {
-    const { release } = fakeSend(() => toResponse(apiError(409, 'No owner is on this restoration yet: invite them from the People tab first.')));
+    const { release } = fakeSend(() =>
+      toResponse(apiError(409, 'No owner is on this restoration yet: invite them from the People tab first.')),
+    );
     release();
     const user = userEvent.setup();
     renderPanel('technician');
     await user.click(screen.getByRole('button', { name: 'E-mail it to the owner' }));
     await user.click(await screen.findByRole('button', { name: 'Send to the owner' }));
-    expect(await screen.findByRole('alert')).toHaveTextContent('Not sent: No owner is on this restoration yet: invite them from the People tab first.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'Not sent: No owner is on this restoration yet: invite them from the People tab first.',
+    );
   });
 
   it('when sending would be premature, then the preview lists the warnings and nothing is sent until "Send anyway"', async () => {
-    const { fetchMock } = fakeSend(() => json(200, { sentTo: ['owner@example.org'] }), [
-      { code: 'no-passing-safety-test', message: 'No final safety test is recorded; the report says so.' },
-      { code: 'no-soak', message: 'No soak run is recorded.' },
-    ]);
+    const { fetchMock } = fakeSend(
+      () => json(200, { sentTo: ['owner@example.org'] }),
+      [
+        { code: 'no-passing-safety-test', message: 'No final safety test is recorded; the report says so.' },
+        { code: 'no-soak', message: 'No soak run is recorded.' },
+      ],
+    );
     const user = userEvent.setup();
     renderPanel('technician');
     await user.click(screen.getByRole('button', { name: 'E-mail it to the owner' }));
@@ -78,7 +94,10 @@ describe('report panel', () => {
   it('when an owner or a mentor opens it, then they may download the report but not send it', () => {
     for (const role of ['owner', 'mentor'] as const) {
       renderPanel(role);
-      expect(screen.getByRole('link', { name: 'Download the hand-back report (PDF)' })).toHaveAttribute('href', '/api/restorations/7/report.pdf');
+      expect(screen.getByRole('link', { name: 'Download the hand-back report (PDF)' })).toHaveAttribute(
+        'href',
+        '/api/restorations/7/report.pdf',
+      );
       expect(screen.queryByRole('button', { name: 'E-mail it to the owner' })).not.toBeInTheDocument();
       expect(screen.getByText(/only what is shared with them/)).toBeInTheDocument();
       cleanup();

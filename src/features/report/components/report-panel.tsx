@@ -24,12 +24,15 @@ export function ReportPanel({ restorationId, role }: ReportPanelProps) {
   const warned = (preview.data?.warnings.length ?? 0) > 0;
   return (
     <section aria-labelledby="report-heading" className="space-y-3 rounded-xl border border-rule bg-panel p-4">
-      <h2 id="report-heading" className="text-lg font-bold">Hand-back report</h2>
+      <h2 id="report-heading" className="text-lg font-bold">
+        Hand-back report
+      </h2>
       <p className="text-sm text-ink-soft">
-        Written for the owner, it holds only what is shared with them: the set and its story, shared before-and-after photos,
-        shared findings and close-ups of what was repaired, the parts fitted and the originals kept, shared readings, the final
-        safety test with its limits, the soak hours, then care and safety notes. Internal comments, costs, sources, notes and
-        unshared photos stay out. It records the work; it is not a certificate of electrical safety.
+        Written for the owner, it holds only what is shared with them: the set and its story, shared before-and-after
+        photos, shared findings and close-ups of what was repaired, the parts fitted and the originals kept, shared
+        readings, the final safety test with its limits, the soak hours, then care and safety notes. Internal comments,
+        costs, sources, notes and unshared photos stay out. It records the work; it is not a certificate of electrical
+        safety.
       </p>
       <div className="flex flex-wrap items-center gap-2">
         {can(role, 'report.download') && (
@@ -38,7 +41,14 @@ export function ReportPanel({ restorationId, role }: ReportPanelProps) {
           </a>
         )}
         {can(role, 'report.send') && !previewing && (
-          <Button onClick={() => { send.reset(); setPreviewing(true); }}>E-mail it to the owner</Button>
+          <Button
+            onClick={() => {
+              send.reset();
+              setPreviewing(true);
+            }}
+          >
+            E-mail it to the owner
+          </Button>
         )}
       </div>
       {previewing && (
@@ -49,17 +59,25 @@ export function ReportPanel({ restorationId, role }: ReportPanelProps) {
           {preview.data && <ReportPreview preview={preview.data} />}
           {!send.isSuccess && (
             <div className="flex flex-wrap gap-2">
-              <Button variant={warned ? 'danger' : 'primary'} onClick={() => send.mutate()} disabled={send.isPending || !preview.data}>
+              <Button
+                variant={warned ? 'danger' : 'primary'}
+                onClick={() => send.mutate()}
+                disabled={send.isPending || !preview.data}
+              >
                 {send.isPending ? 'Sending…' : warned ? 'Send anyway' : 'Send to the owner'}
               </Button>
-              <Button variant="quiet" onClick={() => setPreviewing(false)} disabled={send.isPending}>Cancel</Button>
+              <Button variant="quiet" onClick={() => setPreviewing(false)} disabled={send.isPending}>
+                Cancel
+              </Button>
             </div>
           )}
         </div>
       )}
       {send.isSuccess && (
         <p role="status" className="text-sm">
-          <span aria-hidden="true" className="text-ok">✓ </span>
+          <span aria-hidden="true" className="text-ok">
+            ✓{' '}
+          </span>
           Sent to {send.data.sentTo.join(', ')}.
         </p>
       )}

@@ -1,7 +1,6 @@
 import type { ReportPreview as Preview } from '../../../../shared/schemas/safety';
 import { formatDateTime as when } from '../../../lib/format';
 
-
 /** The e-mail as the owner will receive it, with the warnings first when sending now would be premature. */
 export function ReportPreview({ preview }: { preview: Preview }) {
   return (
@@ -10,26 +9,37 @@ export function ReportPreview({ preview }: { preview: Preview }) {
         <div role="note" className="rounded-lg border-l-4 border-danger bg-danger-soft px-3 py-2 text-sm">
           <p className="font-bold text-danger">Sending now may be premature:</p>
           <ul className="list-disc pl-5">
-            {preview.warnings.map((w) => <li key={w.code}>{w.message}</li>)}
+            {preview.warnings.map((w) => (
+              <li key={w.code}>{w.message}</li>
+            ))}
           </ul>
         </div>
       )}
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
         <dt className="font-semibold">To</dt>
-        <dd>{preview.recipients.length ? preview.recipients.map((r) => `${r.name} <${r.email}>`).join(', ') : 'Nobody yet'}</dd>
+        <dd>
+          {preview.recipients.length
+            ? preview.recipients.map((r) => `${r.name} <${r.email}>`).join(', ')
+            : 'Nobody yet'}
+        </dd>
         <dt className="font-semibold">Subject</dt>
         <dd>{preview.subject}</dd>
         <dt className="font-semibold">Attached</dt>
-        <dd>{preview.attachmentName} ({preview.pageCount} page{preview.pageCount === 1 ? '' : 's'})</dd>
+        <dd>
+          {preview.attachmentName} ({preview.pageCount} page{preview.pageCount === 1 ? '' : 's'})
+        </dd>
       </dl>
-      <pre className="whitespace-pre-wrap rounded-lg border border-rule bg-sunken p-3 font-sans text-sm">{preview.body}</pre>
+      <pre className="rounded-lg border border-rule bg-sunken p-3 font-sans text-sm whitespace-pre-wrap">
+        {preview.body}
+      </pre>
       {preview.sends.length > 0 && (
         <div className="text-sm">
           <p className="font-semibold">Sent before</p>
           <ul className="list-disc pl-5">
             {preview.sends.map((s) => (
               <li key={s.id}>
-                <time dateTime={s.sentAt}>{when(s.sentAt)}</time> by {s.sentBy ?? 'a former member'} to {s.recipients.join(', ')} ({s.pageCount} pages
+                <time dateTime={s.sentAt}>{when(s.sentAt)}</time> by {s.sentBy ?? 'a former member'} to{' '}
+                {s.recipients.join(', ')} ({s.pageCount} pages
                 {s.warnings.length ? `, ${s.warnings.length} warning${s.warnings.length === 1 ? '' : 's'} shown` : ''})
               </li>
             ))}

@@ -1,4 +1,10 @@
-import { infiniteQueryOptions, keepPreviousData, queryOptions, useInfiniteQuery, useQuery } from '@tanstack/react-query';
+import {
+  infiniteQueryOptions,
+  keepPreviousData,
+  queryOptions,
+  useInfiniteQuery,
+  useQuery,
+} from '@tanstack/react-query';
 import { restorationSchema, type Restoration, type Stage } from '../../../../shared/schemas/restorations';
 import { apiAllPages, apiPage } from '../../../lib/api-client';
 
@@ -16,11 +22,16 @@ const pathOf = (filter: RestorationFilter) => {
 };
 
 /** Every restoration the caller is on (the owner's home: a person's own sets are few). */
-export const getRestorations = (filter: RestorationFilter = {}): Promise<Restoration[]> => apiAllPages(pathOf(filter), restorationSchema);
+export const getRestorations = (filter: RestorationFilter = {}): Promise<Restoration[]> =>
+  apiAllPages(pathOf(filter), restorationSchema);
 
 export const restorationsQueryOptions = (filter: RestorationFilter = {}) =>
   // While a search is typed, the previous list stays on screen instead of flashing to a spinner.
-  queryOptions({ queryKey: ['restorations', filter], queryFn: () => getRestorations(filter), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: ['restorations', filter],
+    queryFn: () => getRestorations(filter),
+    placeholderData: keepPreviousData,
+  });
 
 export const useRestorations = (filter: RestorationFilter = {}) => useQuery(restorationsQueryOptions(filter));
 

@@ -5,7 +5,8 @@ import { api } from '../../../lib/api-client';
 
 type Patch = z.input<typeof restorationPatchSchema>;
 
-export const updateRestoration = (id: number, patch: Patch) => api<Restoration>(`/restorations/${id}`, { method: 'PATCH', json: patch });
+export const updateRestoration = (id: number, patch: Patch) =>
+  api<Restoration>(`/restorations/${id}`, { method: 'PATCH', json: patch });
 
 export function useUpdateRestoration(id: number) {
   const client = useQueryClient();

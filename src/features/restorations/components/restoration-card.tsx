@@ -9,7 +9,7 @@ export function RestorationCard({ restoration: r }: { restoration: Restoration }
         className="block rounded-xl border border-rule bg-panel p-4 shadow-sm transition hover:border-glow hover:shadow-md"
       >
         <div className="flex items-start justify-between gap-2">
-          <h3 className="text-lg font-bold leading-tight">
+          <h3 className="text-lg leading-tight font-bold">
             {r.make} <span className="font-semibold">{r.model}</span>
           </h3>
           {r.year && <span className="font-mono text-sm text-ink-soft">{r.year}</span>}

@@ -31,7 +31,11 @@ export function RestorationForm({
 }) {
   const { register, handleSubmit, formState } = useForm<FormInput, unknown, FormOutput>({
     resolver: zodResolver(restorationInputSchema),
-    defaultValues: initial ?? { equipmentKind: 'radio', workLevel: 'repair', receivedOn: new Date().toISOString().slice(0, 10) },
+    defaultValues: initial ?? {
+      equipmentKind: 'radio',
+      workLevel: 'repair',
+      receivedOn: new Date().toISOString().slice(0, 10),
+    },
   });
   const e = formState.errors;
   return (
@@ -44,7 +48,9 @@ export function RestorationForm({
           {(a) => <input {...a} {...register('model')} className={inputClass} autoComplete="off" />}
         </Field>
         <Field label="Year" error={e.year?.message}>
-          {(a) => <input {...a} {...register('year')} className={inputClass} inputMode="numeric" placeholder="e.g. 1954" />}
+          {(a) => (
+            <input {...a} {...register('year')} className={inputClass} inputMode="numeric" placeholder="e.g. 1954" />
+          )}
         </Field>
         <Field label="Serial number" error={e.serial?.message}>
           {(a) => <input {...a} {...register('serial')} className={`${inputClass} font-mono`} autoComplete="off" />}
@@ -63,7 +69,11 @@ export function RestorationForm({
         <Field label="Received on" error={e.receivedOn?.message}>
           {(a) => <input {...a} {...register('receivedOn')} type="date" className={inputClass} />}
         </Field>
-        <Field label="Mains setting as found" hint="Voltage tap, dropper setting, AC only or AC/DC" error={e.mainsSetting?.message}>
+        <Field
+          label="Mains setting as found"
+          hint="Voltage tap, dropper setting, AC only or AC/DC"
+          error={e.mainsSetting?.message}
+        >
           {(a) => <input {...a} {...register('mainsSetting')} className={inputClass} placeholder="e.g. 245 V tap" />}
         </Field>
         <Field label="Agreed level of work" error={e.workLevel?.message}>
@@ -91,14 +101,17 @@ export function RestorationForm({
         {!initial && (
           <label className="flex min-h-11 items-center gap-3">
             <input type="checkbox" {...register('inviteOwner')} className="h-5 w-5 accent-[var(--color-glow)]" />
-            <span>Invite them as the owner: they get an e-mail link to follow the work and read the hand-back report</span>
+            <span>
+              Invite them as the owner: they get an e-mail link to follow the work and read the hand-back report
+            </span>
           </label>
         )}
       </fieldset>
       <label className="flex min-h-11 items-center gap-3 rounded-lg border border-rule bg-panel px-3">
         <input type="checkbox" {...register('liveChassis')} className="h-5 w-5 accent-[var(--color-glow)]" />
         <span>
-          <strong>Live chassis</strong> (AC/DC set, or chassis tied to the mains): work only through an isolation transformer.
+          <strong>Live chassis</strong> (AC/DC set, or chassis tied to the mains): work only through an isolation
+          transformer.
         </span>
       </label>
       <label className="flex min-h-11 items-center gap-3 rounded-lg border border-rule bg-panel px-3">
@@ -106,15 +119,31 @@ export function RestorationForm({
         <span>Hidden parts must look original too (restuff cans and tubulars)</span>
       </label>
       <Field label="Symptoms, in the owner's words" error={e.symptoms?.message}>
-        {(a) => <textarea {...a} {...register('symptoms')} rows={3} className={inputClass} placeholder="“Plays for a few minutes, then fades away”" />}
+        {(a) => (
+          <textarea
+            {...a}
+            {...register('symptoms')}
+            rows={3}
+            className={inputClass}
+            placeholder="“Plays for a few minutes, then fades away”"
+          />
+        )}
       </Field>
-      <Field label="Condition at intake" hint="Cabinet, knobs, back, mains lead, anything missing" error={e.conditionNotes?.message}>
+      <Field
+        label="Condition at intake"
+        hint="Cabinet, knobs, back, mains lead, anything missing"
+        error={e.conditionNotes?.message}
+      >
         {(a) => <textarea {...a} {...register('conditionNotes')} rows={3} className={inputClass} />}
       </Field>
       <Field label="The set's story" hint="For the owner's hand-back report" error={e.story?.message}>
         {(a) => <textarea {...a} {...register('story')} rows={3} className={inputClass} />}
       </Field>
-      <Field label="Care notes for the owner" hint="For the hand-back report: warm-up, ventilation, aerial, play time" error={e.careNotes?.message}>
+      <Field
+        label="Care notes for the owner"
+        hint="For the hand-back report: warm-up, ventilation, aerial, play time"
+        error={e.careNotes?.message}
+      >
         {(a) => <textarea {...a} {...register('careNotes')} rows={3} className={inputClass} />}
       </Field>
       {serverError && (

@@ -4,7 +4,8 @@ import { api } from '../../../lib/api-client';
 import { safetyKeys } from './keys';
 
 /** Starts a soak session now; 409 when one is already running. */
-export const startSoak = (restorationId: number) => api<SoakLog>(`/restorations/${restorationId}/soak-sessions`, { method: 'POST' });
+export const startSoak = (restorationId: number) =>
+  api<SoakLog>(`/restorations/${restorationId}/soak-sessions`, { method: 'POST' });
 
 export function useStartSoak(restorationId: number) {
   const client = useQueryClient();

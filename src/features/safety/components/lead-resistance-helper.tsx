@@ -14,15 +14,29 @@ export function LeadResistanceHelper({ onUse }: { onUse: (ohms: string) => void 
     <div className="flex flex-wrap items-end gap-2 text-sm">
       <label htmlFor={`${id}-m`} className="space-y-1">
         <span className="block">Lead length (m)</span>
-        <input id={`${id}-m`} inputMode="decimal" className={`${inputClass} w-24`} value={metres} onChange={(e) => setMetres(e.target.value)} />
+        <input
+          id={`${id}-m`}
+          inputMode="decimal"
+          className={`${inputClass} w-24`}
+          value={metres}
+          onChange={(e) => setMetres(e.target.value)}
+        />
       </label>
       <label htmlFor={`${id}-s`} className="space-y-1">
         <span className="block">Core size (mm²)</span>
         <select id={`${id}-s`} className={`${inputClass} w-24`} value={size} onChange={(e) => setSize(e.target.value)}>
-          {flexSizes.map((s) => <option key={s} value={s}>{s}</option>)}
+          {flexSizes.map((s) => (
+            <option key={s} value={s}>
+              {s}
+            </option>
+          ))}
         </select>
       </label>
-      <Button variant="quiet" disabled={ohms === null} onClick={() => ohms !== null && onUse(String(Number(ohms.toPrecision(3))))}>
+      <Button
+        variant="quiet"
+        disabled={ohms === null}
+        onClick={() => ohms !== null && onUse(String(Number(ohms.toPrecision(3))))}
+      >
         {ohms === null ? 'Use the lead’s resistance' : `Use ${Number(ohms.toPrecision(3))} Ω`}
       </Button>
     </div>

@@ -22,11 +22,13 @@ export function SafetyOverrideForm({ restorationId }: { restorationId: number })
     >
       <h3 className="text-lg font-bold text-danger">Return without a passing test (override)</h3>
       <p className="text-sm">
-        Only when there is a good reason (a display piece that will never be plugged in, the owner’s own electrician will
-        test it…). The override and its reason are shown in red in the history and on the owner’s report.
+        Only when there is a good reason (a display piece that will never be plugged in, the owner’s own electrician
+        will test it…). The override and its reason are shown in red in the history and on the owner’s report.
       </p>
       <Field label="Reason" hint="At least a sentence" error={override.error?.message}>
-        {(a) => <textarea {...a} rows={2} className={inputClass} value={reason} onChange={(e) => setReason(e.target.value)} />}
+        {(a) => (
+          <textarea {...a} rows={2} className={inputClass} value={reason} onChange={(e) => setReason(e.target.value)} />
+        )}
       </Field>
       <button type="submit" className={buttonClass('danger')} disabled={tooShort || override.isPending}>
         {override.isPending ? 'Recording…' : 'Record the override'}

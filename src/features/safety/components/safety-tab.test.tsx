@@ -12,18 +12,55 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const json = (body: unknown) => new Response(JSON.stringify(body), { status: 200, headers: { 'Content-Type': 'application/json' } });
+const json = (body: unknown) =>
+  new Response(JSON.stringify(body), { status: 200, headers: { 'Content-Type': 'application/json' } });
 const failed: SafetyTest = {
-  id: 3, restorationId: 7, equipmentClass: 'class-1', specification: 'original', modifications: '', notes: '', verdict: 'fail',
-  testedBy: 'Ilse Bench', testedAt: '2026-12-01T10:00:00.000Z',
-  lines: [{ key: 'earth', label: 'Protective earth continuity, chassis to plug earth pin', value: 0.6, unit: 'Ω', limit: 0.15, sense: 'max',
-    limitText: '≤ 0.15 Ω (0.1 Ω + lead 0.05 Ω)', source: 'IET Code of Practice for In-service Inspection and Testing of Electrical Equipment', verdict: 'fail' }],
+  id: 3,
+  restorationId: 7,
+  equipmentClass: 'class-1',
+  specification: 'original',
+  modifications: '',
+  notes: '',
+  verdict: 'fail',
+  testedBy: 'Ilse Bench',
+  testedAt: '2026-12-01T10:00:00.000Z',
+  lines: [
+    {
+      key: 'earth',
+      label: 'Protective earth continuity, chassis to plug earth pin',
+      value: 0.6,
+      unit: 'Ω',
+      limit: 0.15,
+      sense: 'max',
+      limitText: '≤ 0.15 Ω (0.1 Ω + lead 0.05 Ω)',
+      source: 'IET Code of Practice for In-service Inspection and Testing of Electrical Equipment',
+      verdict: 'fail',
+    },
+  ],
 };
-const soak: SoakLog = { sessions: [], totalHours: 0, running: { id: 1, startedAt: new Date(Date.now() - 65_000).toISOString(), endedAt: null, hours: null,
-  ambientC: null, chassisC: null, mainsCurrentAmps: null, faults: '', actionTaken: '', findingId: null, startedBy: 'Ilse Bench' } };
+const soak: SoakLog = {
+  sessions: [],
+  totalHours: 0,
+  running: {
+    id: 1,
+    startedAt: new Date(Date.now() - 65_000).toISOString(),
+    endedAt: null,
+    hours: null,
+    ambientC: null,
+    chassisC: null,
+    mainsCurrentAmps: null,
+    faults: '',
+    actionTaken: '',
+    findingId: null,
+    startedBy: 'Ilse Bench',
+  },
+};
 
 function serve(status: SafetyStatus) {
-  vi.stubGlobal('fetch', vi.fn(async (input: RequestInfo | URL) => (String(input).endsWith('/soak-sessions') ? json(soak) : json(status))));
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (input: RequestInfo | URL) => (String(input).endsWith('/soak-sessions') ? json(soak) : json(status))),
+  );
 }
 const show = (role: Role) =>
   renderWithQueries(<SafetyTab restorationId={7} role={role} liveChassis={false} />, { router: false });
@@ -33,7 +70,9 @@ describe('safety tab', () => {
     serve({ tests: [failed], latest: failed, override: null, returnedAllowed: false });
     show('technician');
     expect(await screen.findByText('Not passed')).toBeInTheDocument();
-    expect(screen.getByRole('row', { name: /Protective earth continuity/ })).toHaveTextContent(/600 mΩ.*≤ 0.15 Ω.*Fail.*IET Code of Practice/);
+    expect(screen.getByRole('row', { name: /Protective earth continuity/ })).toHaveTextContent(
+      /600 mΩ.*≤ 0.15 Ω.*Fail.*IET Code of Practice/,
+    );
     expect(screen.getByRole('status')).toHaveTextContent('cannot be marked Returned');
     expect(screen.getByRole('form', { name: 'Return without a passing safety test' })).toBeInTheDocument();
     expect(screen.getByText('Safety test: HT can kill.')).toBeInTheDocument();
@@ -42,7 +81,12 @@ describe('safety tab', () => {
 
   it('when an owner or a mentor opens it, then they read the result but record nothing', async () => {
     for (const role of ['owner', 'mentor'] as const) {
-      serve({ tests: [failed], latest: failed, override: { id: 1, reason: 'Display piece only', by: 'Ilse Bench', at: '2026-12-01T11:00:00.000Z' }, returnedAllowed: true });
+      serve({
+        tests: [failed],
+        latest: failed,
+        override: { id: 1, reason: 'Display piece only', by: 'Ilse Bench', at: '2026-12-01T11:00:00.000Z' },
+        returnedAllowed: true,
+      });
       show(role);
       expect(await screen.findByText('Not passed')).toBeInTheDocument();
       expect(screen.getByText(/Display piece only/)).toBeInTheDocument();

@@ -6,10 +6,10 @@ export function SafetyTestCaution() {
         <strong className="text-danger">
           <span aria-hidden="true">⚠ </span>Safety test: HT can kill.
         </strong>{' '}
-        Unplug the set and discharge the filter capacitors through a resistor, then check with a meter, before you connect the
-        tester. The 500 V DC insulation test is itself a shock hazard: keep hands clear while it runs, and discharge again after.
-        AC/DC sets may have a live chassis — use an isolation transformer when powered. This records the workshop’s test; it is
-        not a certificate. Follow local electrical codes and licensed practice.
+        Unplug the set and discharge the filter capacitors through a resistor, then check with a meter, before you
+        connect the tester. The 500 V DC insulation test is itself a shock hazard: keep hands clear while it runs, and
+        discharge again after. AC/DC sets may have a live chassis — use an isolation transformer when powered. This
+        records the workshop’s test; it is not a certificate. Follow local electrical codes and licensed practice.
       </p>
     </div>
   );
@@ -23,8 +23,8 @@ export function SoakCaution() {
         <strong className="text-danger">
           <span aria-hidden="true">⚠ </span>Soak run: the set is live.
         </strong>{' '}
-        Stay within sight and smell of it, back fitted, clear of anything that burns, on a fused supply; switch off at once
-        on smoke, a burning smell or a glowing anode. Follow local codes and licensed practice.
+        Stay within sight and smell of it, back fitted, clear of anything that burns, on a fused supply; switch off at
+        once on smoke, a burning smell or a glowing anode. Follow local codes and licensed practice.
       </p>
     </div>
   );

@@ -13,32 +13,53 @@ const verdictStyle: Record<SafetyLineView['verdict'], { text: string; className:
 export function SafetyTestResult({ test, heading }: { test: SafetyTest; heading: string }) {
   const passed = test.verdict === 'pass';
   return (
-    <section aria-label={heading} className="space-y-2 rounded-xl border border-rule bg-panel p-4" data-testid="safety-test-result">
+    <section
+      aria-label={heading}
+      className="space-y-2 rounded-xl border border-rule bg-panel p-4"
+      data-testid="safety-test-result"
+    >
       <div className="flex flex-wrap items-baseline gap-2">
         <h3 className="text-lg font-bold">{heading}</h3>
-        <span className={`rounded-full px-3 py-0.5 text-sm font-bold ${passed ? 'bg-ok/15 text-ok' : 'bg-danger-soft text-danger'}`}>
+        <span
+          className={`rounded-full px-3 py-0.5 text-sm font-bold ${passed ? 'bg-ok/15 text-ok' : 'bg-danger-soft text-danger'}`}
+        >
           {passed ? 'Passed' : 'Not passed'}
         </span>
       </div>
       <p className="text-sm text-ink-soft">
-        <time dateTime={test.testedAt}>{when(test.testedAt)}</time>{test.testedBy && <> · {test.testedBy}</>} · {equipmentClassLabels[test.equipmentClass]}
+        <time dateTime={test.testedAt}>{when(test.testedAt)}</time>
+        {test.testedBy && <> · {test.testedBy}</>} · {equipmentClassLabels[test.equipmentClass]}
       </p>
       <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
           <thead>
             <tr className="border-b border-rule text-ink-soft">
-              <th scope="col" className="py-1 pr-3 font-semibold">Check</th>
-              <th scope="col" className="py-1 pr-3 font-semibold">Reading</th>
-              <th scope="col" className="py-1 pr-3 font-semibold">Limit</th>
-              <th scope="col" className="py-1 pr-3 font-semibold">Verdict</th>
-              <th scope="col" className="py-1 font-semibold">Source of the limit</th>
+              <th scope="col" className="py-1 pr-3 font-semibold">
+                Check
+              </th>
+              <th scope="col" className="py-1 pr-3 font-semibold">
+                Reading
+              </th>
+              <th scope="col" className="py-1 pr-3 font-semibold">
+                Limit
+              </th>
+              <th scope="col" className="py-1 pr-3 font-semibold">
+                Verdict
+              </th>
+              <th scope="col" className="py-1 font-semibold">
+                Source of the limit
+              </th>
             </tr>
           </thead>
           <tbody>
             {test.lines.map((l) => (
               <tr key={l.key} className="border-b border-rule/60 align-top">
-                <th scope="row" className="py-1 pr-3 font-normal">{l.label}</th>
-                <td className="py-1 pr-3 font-mono">{l.value === null || l.unit === '' ? '—' : formatQuantity(l.value, l.unit)}</td>
+                <th scope="row" className="py-1 pr-3 font-normal">
+                  {l.label}
+                </th>
+                <td className="py-1 pr-3 font-mono">
+                  {l.value === null || l.unit === '' ? '—' : formatQuantity(l.value, l.unit)}
+                </td>
                 <td className="py-1 pr-3 font-mono">{l.limitText}</td>
                 <td className={`py-1 pr-3 ${verdictStyle[l.verdict].className}`}>{verdictStyle[l.verdict].text}</td>
                 <td className="py-1 text-ink-soft">{l.source}</td>
@@ -47,7 +68,10 @@ export function SafetyTestResult({ test, heading }: { test: SafetyTest; heading:
           </tbody>
         </table>
       </div>
-      <p className="text-sm">{specificationLabels[test.specification]}{test.modifications && `: ${test.modifications}`}</p>
+      <p className="text-sm">
+        {specificationLabels[test.specification]}
+        {test.modifications && `: ${test.modifications}`}
+      </p>
       {test.notes && <p className="text-sm text-ink-soft">{test.notes}</p>}
     </section>
   );

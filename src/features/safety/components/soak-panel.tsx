@@ -19,43 +19,116 @@ export function SoakPanel({ restorationId, canRecord }: { restorationId: number;
   const start = useStartSoak(restorationId);
   const stop = useStopSoak(restorationId);
   const [values, setValues] = useState(blank);
-  const set = (k: keyof typeof blank) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [k]: e.target.value }));
+  const set = (k: keyof typeof blank) => (e: { target: { value: string } }) =>
+    setValues((v) => ({ ...v, [k]: e.target.value }));
   if (log.isPending) return <Loading label="Loading the soak log…" />;
   if (log.isError) return <ErrorState error={log.error} onRetry={() => log.refetch()} />;
   const { sessions, totalHours, running } = log.data;
   const finished = sessions.filter((s) => s.endedAt);
   return (
     <section aria-labelledby="soak-heading" className="space-y-3">
-      <h2 id="soak-heading" className="text-xl font-bold">Soak test</h2>
+      <h2 id="soak-heading" className="text-xl font-bold">
+        Soak test
+      </h2>
       {canRecord && <SoakCaution />}
-      <p><strong className="font-mono">{totalHours.toFixed(1)} h</strong> in {finished.length} finished run{finished.length === 1 ? '' : 's'}.</p>
+      <p>
+        <strong className="font-mono">{totalHours.toFixed(1)} h</strong> in {finished.length} finished run
+        {finished.length === 1 ? '' : 's'}.
+      </p>
       {running ? (
         <div className="space-y-3 rounded-xl border border-glow bg-panel p-4">
-          <p className="flex flex-wrap items-center gap-3">Running since {when(running.startedAt)}: <SoakTimer startedAt={running.startedAt} /></p>
+          <p className="flex flex-wrap items-center gap-3">
+            Running since {when(running.startedAt)}: <SoakTimer startedAt={running.startedAt} />
+          </p>
           {canRecord && (
-            <form aria-label="Stop the soak run" className="space-y-3" onSubmit={(e) => { e.preventDefault(); stop.mutate(values, { onSuccess: () => setValues(blank) }); }}>
+            <form
+              aria-label="Stop the soak run"
+              className="space-y-3"
+              onSubmit={(e) => {
+                e.preventDefault();
+                stop.mutate(values, { onSuccess: () => setValues(blank) });
+              }}
+            >
               <div className="grid gap-3 sm:grid-cols-3">
-                <Field label="Room (°C)">{(a) => <input {...a} inputMode="decimal" className={inputClass} value={values.ambientC} onChange={set('ambientC')} />}</Field>
-                <Field label="Chassis (°C)">{(a) => <input {...a} inputMode="decimal" className={inputClass} value={values.chassisC} onChange={set('chassisC')} />}</Field>
-                <Field label="Mains current (A)" hint="e.g. 0.25 or 250m">{(a) => <input {...a} className={`${inputClass} font-mono`} value={values.mainsCurrent} onChange={set('mainsCurrent')} />}</Field>
+                <Field label="Room (°C)">
+                  {(a) => (
+                    <input
+                      {...a}
+                      inputMode="decimal"
+                      className={inputClass}
+                      value={values.ambientC}
+                      onChange={set('ambientC')}
+                    />
+                  )}
+                </Field>
+                <Field label="Chassis (°C)">
+                  {(a) => (
+                    <input
+                      {...a}
+                      inputMode="decimal"
+                      className={inputClass}
+                      value={values.chassisC}
+                      onChange={set('chassisC')}
+                    />
+                  )}
+                </Field>
+                <Field label="Mains current (A)" hint="e.g. 0.25 or 250m">
+                  {(a) => (
+                    <input
+                      {...a}
+                      className={`${inputClass} font-mono`}
+                      value={values.mainsCurrent}
+                      onChange={set('mainsCurrent')}
+                    />
+                  )}
+                </Field>
               </div>
-              <Field label="Faults seen" hint="Leave blank if none. A fault opens a finding on the newest photo, to move to the spot.">
-                {(a) => <textarea {...a} rows={2} className={inputClass} value={values.faults} onChange={set('faults')} />}
+              <Field
+                label="Faults seen"
+                hint="Leave blank if none. A fault opens a finding on the newest photo, to move to the spot."
+              >
+                {(a) => (
+                  <textarea {...a} rows={2} className={inputClass} value={values.faults} onChange={set('faults')} />
+                )}
               </Field>
-              <Field label="What was done">{(a) => <textarea {...a} rows={2} className={inputClass} value={values.actionTaken} onChange={set('actionTaken')} />}</Field>
-              {stop.isError && <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">Not stopped: {stop.error.message}</p>}
-              <button type="submit" className={buttonClass()} disabled={stop.isPending}>{stop.isPending ? 'Stopping…' : 'Stop the run'}</button>
+              <Field label="What was done">
+                {(a) => (
+                  <textarea
+                    {...a}
+                    rows={2}
+                    className={inputClass}
+                    value={values.actionTaken}
+                    onChange={set('actionTaken')}
+                  />
+                )}
+              </Field>
+              {stop.isError && (
+                <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
+                  Not stopped: {stop.error.message}
+                </p>
+              )}
+              <button type="submit" className={buttonClass()} disabled={stop.isPending}>
+                {stop.isPending ? 'Stopping…' : 'Stop the run'}
+              </button>
             </form>
           )}
         </div>
       ) : canRecord ? (
         <div className="space-y-2">
-          <Button onClick={() => start.mutate()} disabled={start.isPending}>{start.isPending ? 'Starting…' : 'Start a soak run'}</Button>
-          {start.isError && <p role="alert" className="text-sm font-semibold text-danger">Not started: {start.error.message}</p>}
+          <Button onClick={() => start.mutate()} disabled={start.isPending}>
+            {start.isPending ? 'Starting…' : 'Start a soak run'}
+          </Button>
+          {start.isError && (
+            <p role="alert" className="text-sm font-semibold text-danger">
+              Not started: {start.error.message}
+            </p>
+          )}
         </div>
       ) : null}
       {finished.length === 0 && !running ? (
-        <EmptyState title="No soak run yet">New valves and old capacitors often fail in the first hours; a few hours’ run before hand-back shows it.</EmptyState>
+        <EmptyState title="No soak run yet">
+          New valves and old capacitors often fail in the first hours; a few hours’ run before hand-back shows it.
+        </EmptyState>
       ) : (
         <>
           <SoakPlot sessions={finished} />
@@ -63,7 +136,8 @@ export function SoakPanel({ restorationId, canRecord }: { restorationId: number;
             {finished.map((s, i) => (
               <li key={s.id} className={s.faults ? 'text-danger' : ''}>
                 Run {i + 1}, {when(s.startedAt)}: {(s.hours ?? 0).toFixed(2)} h
-                {s.ambientC !== null && `, room ${s.ambientC} °C`}{s.chassisC !== null && `, chassis ${s.chassisC} °C`}
+                {s.ambientC !== null && `, room ${s.ambientC} °C`}
+                {s.chassisC !== null && `, chassis ${s.chassisC} °C`}
                 {s.mainsCurrentAmps !== null && `, mains ${formatQuantity(s.mainsCurrentAmps, 'A')}`}
                 {s.faults ? ` — fault: ${s.faults}${s.actionTaken ? `; ${s.actionTaken}` : ''}` : ' — no fault seen'}
               </li>

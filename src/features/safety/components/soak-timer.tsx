@@ -12,7 +12,12 @@ export function SoakTimer({ startedAt }: { startedAt: string }) {
   const seconds = Math.max(0, Math.floor((now - Date.parse(startedAt)) / 1000));
   const text = `${Math.floor(seconds / 3600)}:${pad(Math.floor(seconds / 60) % 60)}:${pad(seconds % 60)}`;
   return (
-    <span className="font-mono text-2xl font-bold" role="timer" data-testid="soak-timer" aria-label={`Running for ${text}`}>
+    <span
+      className="font-mono text-2xl font-bold"
+      role="timer"
+      data-testid="soak-timer"
+      aria-label={`Running for ${text}`}
+    >
       {text}
     </span>
   );

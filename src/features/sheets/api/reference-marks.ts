@@ -3,7 +3,8 @@ import type { ReferenceMark, ReferenceMarkInput } from '../../../../shared/schem
 import { api } from '../../../lib/api-client';
 import { referencesQueryKey } from '../../../lib/queries/references';
 
-export const referenceMarksQueryKey = (restorationId: number) => ['restorations', restorationId, 'reference-marks'] as const;
+export const referenceMarksQueryKey = (restorationId: number) =>
+  ['restorations', restorationId, 'reference-marks'] as const;
 
 /** Every reference mark of the restoration the reader may see (diagram pages and chassis photos). */
 export const referenceMarksQueryOptions = (restorationId: number) =>
@@ -25,7 +26,8 @@ function useInvalidateReferences(restorationId: number) {
 export function useCreateReferenceMark(restorationId: number) {
   const invalidate = useInvalidateReferences(restorationId);
   return useMutation({
-    mutationFn: (input: ReferenceMarkInput) => api<ReferenceMark>(`/restorations/${restorationId}/reference-marks`, { method: 'POST', json: input }),
+    mutationFn: (input: ReferenceMarkInput) =>
+      api<ReferenceMark>(`/restorations/${restorationId}/reference-marks`, { method: 'POST', json: input }),
     onSettled: invalidate,
   });
 }

@@ -13,7 +13,12 @@ const fallback: Record<number, string> = {
 };
 
 /** POST a PDF or one scan as multipart/form-data (field `file`); answers the sheet with its pages. */
-export function uploadSheet(restorationId: number, file: File, fields: SheetUploadValues, onProgress?: (p: FormProgress) => void): Promise<Sheet> {
+export function uploadSheet(
+  restorationId: number,
+  file: File,
+  fields: SheetUploadValues,
+  onProgress?: (p: FormProgress) => void,
+): Promise<Sheet> {
   const form = new FormData();
   // Text fields before the file: a streaming parser then knows them when the file arrives.
   form.set('kind', fields.kind);
@@ -26,8 +31,15 @@ export function uploadSheet(restorationId: number, file: File, fields: SheetUplo
 export function useUploadSheet(restorationId: number) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: ({ file, fields, onProgress }: { file: File; fields: SheetUploadValues; onProgress?: (p: FormProgress) => void }) =>
-      uploadSheet(restorationId, file, fields, onProgress),
+    mutationFn: ({
+      file,
+      fields,
+      onProgress,
+    }: {
+      file: File;
+      fields: SheetUploadValues;
+      onProgress?: (p: FormProgress) => void;
+    }) => uploadSheet(restorationId, file, fields, onProgress),
     onSettled: () =>
       Promise.all([
         client.invalidateQueries({ queryKey: sheetPagesQueryKey(restorationId) }),

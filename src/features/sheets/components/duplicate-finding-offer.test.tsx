@@ -15,12 +15,35 @@ afterEach(() => {
 });
 
 // A whole finding as the API answers it: the client checks each answer against the shared schema.
-const existing = makeFinding(4, { restorationId: 3, photoId: 7, number: 2, title: 'Cathode resistor scorched', componentRef: 'R23' });
+const existing = makeFinding(4, {
+  restorationId: 3,
+  photoId: 7,
+  number: 2,
+  title: 'Cathode resistor scorched',
+  componentRef: 'R23',
+});
 
 function show(typed: string, onAttached = vi.fn()) {
   const router = createMemoryRouter(
     [
-      { path: '/new', element: <DuplicateFindingOffer restorationId={3} photoId={8} typed={typed} mark={{ shape: 'circle', points: [{ x: 0.4, y: 0.5 }, { x: 0.45, y: 0.5 }] }} onAttached={onAttached} /> },
+      {
+        path: '/new',
+        element: (
+          <DuplicateFindingOffer
+            restorationId={3}
+            photoId={8}
+            typed={typed}
+            mark={{
+              shape: 'circle',
+              points: [
+                { x: 0.4, y: 0.5 },
+                { x: 0.45, y: 0.5 },
+              ],
+            }}
+            onAttached={onAttached}
+          />
+        ),
+      },
       { path: '/restorations/:id/photos/:photoId/findings/:findingId', element: <p>the existing finding</p> },
     ],
     { initialEntries: ['/new'] },
@@ -36,17 +59,28 @@ function show(typed: string, onAttached = vi.fn()) {
 describe('a second finding for the same part', () => {
   it('when R23 already has a finding, then attaching posts a location mark on this photo and opens that finding', async () => {
     const api = fakeApi((call) =>
-      call.method === 'POST' ? { status: 201, body: { id: 11, ...(call.body as object) } } : call.path === '/restorations/3/findings' ? ok([existing]) : undefined,
+      call.method === 'POST'
+        ? { status: 201, body: { id: 11, ...(call.body as object) } }
+        : call.path === '/restorations/3/findings'
+          ? ok([existing])
+          : undefined,
     );
     const { router, onAttached } = show('r23');
     // One notice: it names the finding, links to it and offers to attach.
     const notice = await screen.findByRole('group', { name: 'R23 already has a finding' });
-    expect(within(notice).getByRole('status')).toHaveTextContent('R23 already has finding #2, “Cathode resistor scorched”.');
-    expect(within(notice).getByRole('link', { name: 'Open #2' })).toHaveAttribute('href', '/restorations/3/photos/7/findings/4');
+    expect(within(notice).getByRole('status')).toHaveTextContent(
+      'R23 already has finding #2, “Cathode resistor scorched”.',
+    );
+    expect(within(notice).getByRole('link', { name: 'Open #2' })).toHaveAttribute(
+      'href',
+      '/restorations/3/photos/7/findings/4',
+    );
     expect(screen.getAllByRole('status')).toHaveLength(1);
     await userEvent.click(within(notice).getByRole('button', { name: 'Attach to #2' }));
     expect(api.calls.find((c) => c.method === 'POST')).toEqual({
-      method: 'POST', path: '/restorations/3/reference-marks', body: { photoId: 8, ref: 'R23', shape: 'pin', points: [{ x: 0.4, y: 0.5 }] },
+      method: 'POST',
+      path: '/restorations/3/reference-marks',
+      body: { photoId: 8, ref: 'R23', shape: 'pin', points: [{ x: 0.4, y: 0.5 }] },
     });
     expect(await screen.findByText('the existing finding')).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/restorations/3/photos/7/findings/4');

@@ -22,7 +22,9 @@ interface Props {
 
 /** The drawn mark as a location mark: a box stays a box; any other shape becomes a pin at its first point. */
 const asLocation = (mark: NewMark) =>
-  mark.shape === 'rect' ? { shape: 'rect' as const, points: mark.points.slice(0, 2) } : { shape: 'pin' as const, points: mark.points.slice(0, 1) };
+  mark.shape === 'rect'
+    ? { shape: 'rect' as const, points: mark.points.slice(0, 2) }
+    : { shape: 'pin' as const, points: mark.points.slice(0, 1) };
 
 /**
  * The new finding's one notice when the reference typed already has a finding: a link to the first one and the
@@ -49,10 +51,19 @@ export function DuplicateFindingOffer({ restorationId, photoId, typed, mark, onA
   return (
     <ReferenceFindingNotice first={existing}>
       <p>Attach this view of {ref} to it as a location mark instead of opening a second finding?</p>
-      <button type="button" className={buttonClass('quiet')} onClick={() => void attach(existing, ref)} disabled={create.isPending}>
+      <button
+        type="button"
+        className={buttonClass('quiet')}
+        onClick={() => void attach(existing, ref)}
+        disabled={create.isPending}
+      >
         {create.isPending ? 'Attaching…' : `Attach to #${existing.number}`}
       </button>
-      {error && <p role="alert" className="text-danger">{error}</p>}
+      {error && (
+        <p role="alert" className="text-danger">
+          {error}
+        </p>
+      )}
     </ReferenceFindingNotice>
   );
 }

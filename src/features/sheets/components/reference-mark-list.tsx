@@ -1,5 +1,10 @@
 import { Link } from 'react-router';
-import { mismatchLine, type MismatchNote, type ReferenceMark, type ReferenceSummary } from '../../../../shared/schemas/sheets';
+import {
+  mismatchLine,
+  type MismatchNote,
+  type ReferenceMark,
+  type ReferenceSummary,
+} from '../../../../shared/schemas/sheets';
 import { referencePath } from '../../../lib/reference-path';
 
 interface Props {
@@ -19,7 +24,17 @@ interface Props {
 }
 
 /** The references on this picture; each links to the same reference on the diagram and on the chassis. */
-export function ReferenceMarkList({ restorationId, here, all, loading, mismatches, summary, selectedId, onSelect, onDelete }: Props) {
+export function ReferenceMarkList({
+  restorationId,
+  here,
+  all,
+  loading,
+  mismatches,
+  summary,
+  selectedId,
+  onSelect,
+  onDelete,
+}: Props) {
   if (loading) return <p className="text-sm text-ink-soft">Fetching the references…</p>;
   if (!here.length) return <p className="text-sm text-ink-soft">No references marked on this picture yet.</p>;
   return (
@@ -27,17 +42,35 @@ export function ReferenceMarkList({ restorationId, here, all, loading, mismatche
       {here.map((m, i) => {
         const onDiagram = m.sheetPageId !== null;
         const counts = summary.find((r) => r.ref === m.ref);
-        const others = onDiagram ? (counts ? counts.chassisMarks + counts.findings : 0) : all.filter((o) => o.ref === m.ref && o.sheetPageId !== null).length;
+        const others = onDiagram
+          ? counts
+            ? counts.chassisMarks + counts.findings
+            : 0
+          : all.filter((o) => o.ref === m.ref && o.sheetPageId !== null).length;
         const other = onDiagram ? 'on the chassis' : 'on the diagram';
-        const path = referencePath(restorationId, m.ref, onDiagram ? { diagram: m.id, first: 'chassis' } : { chassis: m.id, first: 'diagram' });
+        const path = referencePath(
+          restorationId,
+          m.ref,
+          onDiagram ? { diagram: m.id, first: 'chassis' } : { chassis: m.id, first: 'diagram' },
+        );
         return (
           <li key={m.id} className={`rounded-lg border p-2 ${m.id === selectedId ? 'border-glow' : 'border-rule'}`}>
             <div className="flex items-center gap-2">
-              <button type="button" onClick={() => onSelect(m.id)} className="min-h-11 flex-1 text-left font-mono font-semibold" aria-pressed={m.id === selectedId}>
+              <button
+                type="button"
+                onClick={() => onSelect(m.id)}
+                className="min-h-11 flex-1 text-left font-mono font-semibold"
+                aria-pressed={m.id === selectedId}
+              >
                 {i + 1}. {m.ref}
               </button>
               {onDelete && (
-                <button type="button" onClick={() => onDelete(m.id)} className="min-h-11 px-2 text-sm text-danger underline" aria-label={`Remove the ${m.ref} mark`}>
+                <button
+                  type="button"
+                  onClick={() => onDelete(m.id)}
+                  className="min-h-11 px-2 text-sm text-danger underline"
+                  aria-label={`Remove the ${m.ref} mark`}
+                >
                   Remove
                 </button>
               )}
@@ -48,9 +81,13 @@ export function ReferenceMarkList({ restorationId, here, all, loading, mismatche
               </Link>
               {!others && <span className="text-ink-soft"> (not marked there yet)</span>}
             </p>
-            {mismatches.filter((n) => n.ref === m.ref).map((n) => (
-              <p key={n.id} className="text-sm">Differs from the diagram: {mismatchLine(n)}</p>
-            ))}
+            {mismatches
+              .filter((n) => n.ref === m.ref)
+              .map((n) => (
+                <p key={n.id} className="text-sm">
+                  Differs from the diagram: {mismatchLine(n)}
+                </p>
+              ))}
           </li>
         );
       })}

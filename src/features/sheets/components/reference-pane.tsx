@@ -29,7 +29,21 @@ interface Props {
 }
 
 /** One picture of the side-by-side view, zoomed onto the part for every reader; a technician may mark the reference here too. */
-export function ReferencePane({ restorationId, refName, side, label, imageUrl, imageSize, target, marks, findings = [], focusId, mismatches, canMark, onImageError }: Props) {
+export function ReferencePane({
+  restorationId,
+  refName,
+  side,
+  label,
+  imageUrl,
+  imageSize,
+  target,
+  marks,
+  findings = [],
+  focusId,
+  mismatches,
+  canMark,
+  onImageError,
+}: Props) {
   const create = useCreateReferenceMark(restorationId);
   const [message, setMessage] = useState('');
   const [selectedId, setSelectedId] = useState(focusId);
@@ -43,7 +57,12 @@ export function ReferencePane({ restorationId, refName, side, label, imageUrl, i
       return undefined;
     }
     try {
-      const mark = await create.mutateAsync({ ...target, ref: refName, shape: geometry.shape, points: geometry.points });
+      const mark = await create.mutateAsync({
+        ...target,
+        ref: refName,
+        shape: geometry.shape,
+        points: geometry.points,
+      });
       setMessage(`${mark.ref} marked ${side === 'diagram' ? 'on the diagram' : 'on the chassis'}.`);
       return mark.id;
     } catch (err) {

@@ -23,13 +23,23 @@ interface Props {
   onImageError?: () => void;
 }
 
-const onThis = (m: ReferenceMark, target: MarkTarget) => (target.sheetPageId !== undefined ? m.sheetPageId === target.sheetPageId : m.photoId === target.photoId);
+const onThis = (m: ReferenceMark, target: MarkTarget) =>
+  target.sheetPageId !== undefined ? m.sheetPageId === target.sheetPageId : m.photoId === target.photoId;
 
 /**
  * A diagram page or a chassis photo on the markup canvas with its reference marks: a technician places a pin or
  * a box with a reference (R23); every mark links to the same reference on the other pictures.
  */
-export function ReferenceViewer({ restorationId, label, imageUrl, imageSize, target, canMark, focusMarkId, onImageError }: Props) {
+export function ReferenceViewer({
+  restorationId,
+  label,
+  imageUrl,
+  imageSize,
+  target,
+  canMark,
+  focusMarkId,
+  onImageError,
+}: Props) {
   const marks = useReferenceMarks(restorationId);
   const known = useReferences(restorationId);
   const mismatches = useMismatchNotes(restorationId);
@@ -52,7 +62,12 @@ export function ReferenceViewer({ restorationId, label, imageUrl, imageSize, tar
       return undefined;
     }
     try {
-      const mark = await create.mutateAsync({ ...target, ref: parsed.data, shape: geometry.shape, points: geometry.points });
+      const mark = await create.mutateAsync({
+        ...target,
+        ref: parsed.data,
+        shape: geometry.shape,
+        points: geometry.points,
+      });
       setMessage(`${mark.ref} marked.`);
       setSelectedId(mark.id);
       return mark.id;
@@ -86,7 +101,14 @@ export function ReferenceViewer({ restorationId, label, imageUrl, imageSize, tar
         {canMark && (
           <label className="block space-y-1">
             <span className="font-semibold">Reference for the next mark</span>
-            <input value={ref} onChange={(e) => setRef(e.target.value)} list="known-references" className={inputClass} placeholder="e.g. R23" autoComplete="off" />
+            <input
+              value={ref}
+              onChange={(e) => setRef(e.target.value)}
+              list="known-references"
+              className={inputClass}
+              placeholder="e.g. R23"
+              autoComplete="off"
+            />
             <datalist id="known-references">
               {(known.data ?? []).map((r) => (
                 <option key={r.ref} value={r.ref} />

@@ -7,7 +7,10 @@ export function SheetPageList({ restorationId, pages }: { restorationId: number;
     <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4" aria-label="Service sheet pages">
       {pages.map((p) => (
         <li key={p.id}>
-          <Link to={`/restorations/${restorationId}/sheets/${p.id}`} className="block overflow-hidden rounded-xl border border-rule bg-panel hover:border-glow">
+          <Link
+            to={`/restorations/${restorationId}/sheets/${p.id}`}
+            className="block overflow-hidden rounded-xl border border-rule bg-panel hover:border-glow"
+          >
             <img src={p.urls.thumb} alt="" className="aspect-[4/3] w-full bg-white object-contain" loading="lazy" />
             <span className="block px-3 py-2">
               <span className="block font-semibold">{p.title || `Page ${p.pageNumber}`}</span>

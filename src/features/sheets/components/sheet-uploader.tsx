@@ -37,9 +37,18 @@ export function SheetUploader({ restorationId }: { restorationId: number }) {
   };
 
   return (
-    <form onSubmit={submit} className="space-y-3 rounded-xl border border-rule bg-panel p-4" aria-labelledby="sheet-upload-heading">
-      <h2 id="sheet-upload-heading" className="text-lg font-semibold">Add a service sheet</h2>
-      <p className="text-sm text-ink-soft">A PDF (every page is kept, with the original to download) or a scan as JPEG, PNG or TIFF; 300 dpi keeps 6-point print legible.</p>
+    <form
+      onSubmit={submit}
+      className="space-y-3 rounded-xl border border-rule bg-panel p-4"
+      aria-labelledby="sheet-upload-heading"
+    >
+      <h2 id="sheet-upload-heading" className="text-lg font-semibold">
+        Add a service sheet
+      </h2>
+      <p className="text-sm text-ink-soft">
+        A PDF (every page is kept, with the original to download) or a scan as JPEG, PNG or TIFF; 300 dpi keeps 6-point
+        print legible.
+      </p>
       <div className="grid gap-3 sm:grid-cols-2">
         <label className="block space-y-1">
           <span className="font-semibold">Kind</span>
@@ -53,17 +62,36 @@ export function SheetUploader({ restorationId }: { restorationId: number }) {
         </label>
         <label className="block space-y-1">
           <span className="font-semibold">Title (optional)</span>
-          <input value={title} onChange={(e) => setTitle(e.target.value)} maxLength={200} className={inputClass} placeholder="e.g. Sheet 2, output stage" />
+          <input
+            value={title}
+            onChange={(e) => setTitle(e.target.value)}
+            maxLength={200}
+            className={inputClass}
+            placeholder="e.g. Sheet 2, output stage"
+          />
         </label>
       </div>
       <label className="block space-y-1">
         <span className="font-semibold">PDF or scan</span>
-        <input ref={fileInput} type="file" name="file" required accept="application/pdf,.pdf,image/jpeg,image/png,image/tiff" className="block w-full" />
+        <input
+          ref={fileInput}
+          type="file"
+          name="file"
+          required
+          accept="application/pdf,.pdf,image/jpeg,image/png,image/tiff"
+          className="block w-full"
+        />
       </label>
       <label className="flex min-h-11 items-center gap-3">
-        <input type="checkbox" checked={ownerVisible} onChange={(e) => setOwnerVisible(e.target.checked)} className="h-5 w-5 accent-glow" />
+        <input
+          type="checkbox"
+          checked={ownerVisible}
+          onChange={(e) => setOwnerVisible(e.target.checked)}
+          className="h-5 w-5 accent-glow"
+        />
         <span>
-          Share with owner <span className="text-sm text-ink-soft">— service sheets stay in the workshop unless shared</span>
+          Share with owner{' '}
+          <span className="text-sm text-ink-soft">— service sheets stay in the workshop unless shared</span>
         </span>
       </label>
       {progress && <UploadProgressBar {...progress} />}

@@ -4,7 +4,11 @@
  */
 export function UploadProgressBar({ loaded, total, pdf }: { loaded: number; total: number; pdf: boolean }) {
   const sent = total > 0 && loaded >= total;
-  const label = sent ? (pdf ? 'Drawing the PDF’s pages…' : 'Preparing the page…') : `Uploading… ${total ? Math.round((loaded / total) * 100) : 0} %`;
+  const label = sent
+    ? pdf
+      ? 'Drawing the PDF’s pages…'
+      : 'Preparing the page…'
+    : `Uploading… ${total ? Math.round((loaded / total) * 100) : 0} %`;
   return (
     <div className="space-y-1">
       <progress

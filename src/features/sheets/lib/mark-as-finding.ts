@@ -7,9 +7,25 @@ import type { ReferenceMark } from '../../../../shared/schemas/sheets';
  */
 export function markAsFinding(mark: ReferenceMark, number: number): Finding {
   return {
-    id: mark.id, photoId: mark.photoId ?? 0, restorationId: mark.restorationId, number, shape: mark.shape, points: mark.points,
-    title: mark.ref, componentRef: mark.ref, kind: 'note', severity: 'info', status: 'observed', dismissReason: null,
-    ownerVisible: false, authorId: null, authorName: null, questionOpen: false, commentCount: 0, createdAt: mark.createdAt, updatedAt: mark.createdAt,
+    id: mark.id,
+    photoId: mark.photoId ?? 0,
+    restorationId: mark.restorationId,
+    number,
+    shape: mark.shape,
+    points: mark.points,
+    title: mark.ref,
+    componentRef: mark.ref,
+    kind: 'note',
+    severity: 'info',
+    status: 'observed',
+    dismissReason: null,
+    ownerVisible: false,
+    authorId: null,
+    authorName: null,
+    questionOpen: false,
+    commentCount: 0,
+    createdAt: mark.createdAt,
+    updatedAt: mark.createdAt,
   };
 }
 

@@ -3,7 +3,9 @@ import type { ReferenceMark, SheetPage } from '../../../../shared/schemas/sheets
 import { refOf, type ReferenceView } from '../../../lib/reference-path';
 
 /** Where a reference sits on the chassis: a location mark, or a finding that names it. */
-export type ChassisLocation = { kind: 'mark'; id: number; photoId: number; mark: ReferenceMark } | { kind: 'finding'; id: number; photoId: number; finding: Finding };
+export type ChassisLocation =
+  | { kind: 'mark'; id: number; photoId: number; mark: ReferenceMark }
+  | { kind: 'finding'; id: number; photoId: number; finding: Finding };
 
 /** The canvas id of a chassis location: a mark's own id, a finding's id negated (they share one canvas). */
 export const canvasId = (l: ChassisLocation) => (l.kind === 'mark' ? l.id : -l.id);
@@ -12,13 +14,22 @@ export const canvasId = (l: ChassisLocation) => (l.kind === 'mark' ? l.id : -l.i
 export function diagramMarksOf(ref: string, marks: ReferenceMark[], pages: SheetPage[]): ReferenceMark[] {
   const rank = (m: ReferenceMark) => {
     const page = pages.find((p) => p.id === m.sheetPageId);
-    return page ? (page.kind === 'circuit-diagram' ? 0 : 1) * 1e9 + page.id * 1e3 + page.pageNumber : Number.MAX_SAFE_INTEGER;
+    return page
+      ? (page.kind === 'circuit-diagram' ? 0 : 1) * 1e9 + page.id * 1e3 + page.pageNumber
+      : Number.MAX_SAFE_INTEGER;
   };
-  return marks.filter((m) => m.ref === ref && m.sheetPageId !== null && pages.some((p) => p.id === m.sheetPageId)).sort((a, b) => rank(a) - rank(b));
+  return marks
+    .filter((m) => m.ref === ref && m.sheetPageId !== null && pages.some((p) => p.id === m.sheetPageId))
+    .sort((a, b) => rank(a) - rank(b));
 }
 
 /** Every place the reference is shown on a chassis photo the reader may see: location marks first, then findings. */
-export function chassisLocationsOf(ref: string, marks: ReferenceMark[], findings: Finding[], photoIds: Set<number>): ChassisLocation[] {
+export function chassisLocationsOf(
+  ref: string,
+  marks: ReferenceMark[],
+  findings: Finding[],
+  photoIds: Set<number>,
+): ChassisLocation[] {
   const fromMarks = marks
     .filter((m) => m.ref === ref && m.photoId !== null && photoIds.has(m.photoId))
     .map((m): ChassisLocation => ({ kind: 'mark', id: m.id, photoId: m.photoId!, mark: m }));
