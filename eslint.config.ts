@@ -72,19 +72,7 @@ export default tseslint.config(
   {
     // Formatting for people goes through shared/format (src/lib/format.ts, server/format.ts), in the person's locale and zone.
     files: ['src/**/*.{ts,tsx}', 'server/**/*.ts', 'shared/**/*.ts'],
-    ignores: [
-      'shared/format/**',
-      'shared/money/**',
-      '**/*.test.{ts,tsx}',
-      // TODO: dates still formatted in place; route them through src/lib/format.ts.
-      'src/features/money/components/estimate-card.tsx',
-      'src/features/help/components/help-on-bench.tsx',
-      'src/features/help/components/help-tab.tsx',
-      'src/features/help/components/help-link-panel.tsx',
-      'src/features/help/components/help-replies.tsx',
-      'src/features/help/components/shared-help-page.tsx',
-      'src/lib/photo-format.ts',
-    ],
+    ignores: ['shared/format/**', 'shared/money/**', '**/*.test.{ts,tsx}'],
     rules: {
       'no-restricted-syntax': [
         'error',

@@ -1,5 +1,6 @@
 import { statuses, statusLabels, type Status } from '../../shared/schemas/findings';
 import { phaseLabels, viewLabels, type Photo } from '../../shared/schemas/photos';
+import { formatDateTime } from './format';
 
 /** What the server accepts (never SVG: it can carry script). HEIC/AVIF come from phones. */
 export const acceptedTypes = [
@@ -31,12 +32,9 @@ export function photoLabel(photo: Pick<Photo, 'view' | 'phase' | 'caption'>): st
   return photo.caption ? `${base}: ${photo.caption}` : base;
 }
 
-export function formatDateTime(iso: string | null): string | null {
-  if (!iso) return null;
-  const date = new Date(iso);
-  return Number.isNaN(date.getTime())
-    ? null
-    : date.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+/** When a photo was taken, in the person's locale and zone; null when unknown or unreadable. */
+export function takenAt(iso: string | null): string | null {
+  return iso ? formatDateTime(iso) || null : null;
 }
 
 /** Pixel size of the ~400 px thumbnail, kept to the photo's aspect so the grid does not jump as images arrive. */

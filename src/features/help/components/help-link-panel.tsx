@@ -3,8 +3,7 @@ import type { HelpLinkCreated, HelpRequest } from '../../../../shared/schemas/he
 import { Button } from '../../../components/button';
 import { useCreateHelpLink } from '../api/create-help-link';
 import { useRevokeHelpLink } from '../api/revoke-help-link';
-
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '../../../lib/format';
 
 /** Makes a read-only link (shown once: only its hash is kept), and withdraws it. */
 export function HelpLinkPanel({ request }: { request: HelpRequest }) {
@@ -32,7 +31,7 @@ export function HelpLinkPanel({ request }: { request: HelpRequest }) {
             className="w-full rounded-lg border border-rule bg-sunken px-3 py-2 font-mono text-sm"
             onFocus={(e) => e.currentTarget.select()}
           />
-          <p className="text-sm">Works until {when(made.expiresAt)}.</p>
+          <p className="text-sm">Works until {formatDateTime(made.expiresAt)}.</p>
           <div className="flex flex-wrap gap-2">
             <Button variant="quiet" onClick={() => void navigator.clipboard?.writeText(made.url)}>
               Copy
@@ -59,7 +58,7 @@ export function HelpLinkPanel({ request }: { request: HelpRequest }) {
       <p className="text-sm text-ink-soft">
         {live.length === 0
           ? 'No link works now.'
-          : `${live.length} link${live.length > 1 ? 's' : ''} working now; the last ends ${when(live[0]!.expiresAt)}.`}
+          : `${live.length} link${live.length > 1 ? 's' : ''} working now; the last ends ${formatDateTime(live[0]!.expiresAt)}.`}
       </p>
     </section>
   );

@@ -1,6 +1,7 @@
 import { useId } from 'react';
 import { Link } from 'react-router';
 import { useBenchHelpRequests } from '../api/get-bench-help-requests';
+import { formatMediumDate } from '../../../lib/format';
 
 /** For the bench: restorers asking for help on sets you work on. Nothing at all when there are none. */
 export function HelpOnBench() {
@@ -24,7 +25,7 @@ export function HelpOnBench() {
                 {h.symptom.length > 90 ? `${h.symptom.slice(0, 90)}…` : h.symptom}
               </span>
               <time className="text-sm text-ink-soft" dateTime={h.createdAt}>
-                {new Date(h.createdAt).toLocaleDateString()}
+                {formatMediumDate(h.createdAt)}
               </time>
             </Link>
           </li>

@@ -1,4 +1,5 @@
 import type { HelpReply } from '../../../../shared/schemas/help';
+import { formatDateTime } from '../../../lib/format';
 
 /** The thread of replies; `action` adds a control to a reply (the technician's approval). */
 export function HelpReplies({
@@ -22,7 +23,7 @@ export function HelpReplies({
             >
               <p className="text-sm">
                 <span className="font-semibold">{r.name}</span>{' '}
-                <span className="text-ink-soft">{new Date(r.createdAt).toLocaleString()}</span>
+                <span className="text-ink-soft">{formatDateTime(r.createdAt)}</span>
                 {!r.approved && <span className="ml-2 font-semibold text-glow-strong">waiting for approval</span>}
               </p>
               <p className="mt-1 whitespace-pre-wrap">{r.body}</p>

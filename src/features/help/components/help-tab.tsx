@@ -6,6 +6,7 @@ import { HelpRequestPanel } from './help-request-panel';
 import { NewHelpRequestForm } from './new-help-request-form';
 import { ReadingRequestsPanel } from './reading-requests-panel';
 import { SymptomChecklist } from './symptom-checklist';
+import { formatMediumDate } from '../../../lib/format';
 
 /** The Help tab: the restoration's help requests; technicians start and share them, mentors read them. */
 export function HelpTab({ restorationId, role }: { restorationId: number; role: Role }) {
@@ -37,7 +38,7 @@ export function HelpTab({ restorationId, role }: { restorationId: number; role: 
                   onClick={() => setChosen(h.id)}
                   className={`min-h-11 rounded-lg border px-3 text-left text-sm ${h.id === current ? 'border-glow bg-panel font-semibold' : 'border-rule'}`}
                 >
-                  {new Date(h.createdAt).toLocaleDateString()} · {h.symptom.slice(0, 40)}
+                  {formatMediumDate(h.createdAt)} · {h.symptom.slice(0, 40)}
                   {h.pendingReplies > 0 && ` · ${h.pendingReplies} waiting`}
                 </button>
               ))}

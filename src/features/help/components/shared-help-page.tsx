@@ -1,13 +1,11 @@
 import { Button } from '../../../components/button';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
 import { ApiError } from '../../../lib/api-client';
+import { formatLongDate } from '../../../lib/format';
 import { useSharedHelp } from '../api/get-shared-help';
 import { HelpContentView } from './help-content-view';
 import { HelpReplies } from './help-replies';
 import { SharedReplyForm } from './shared-reply-form';
-
-const dateOf = (iso: string) =>
-  new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'long', year: 'numeric' });
 
 /** The help request behind a read-only link: no account, nothing but what was chosen and shared, printable. */
 export function SharedHelpPage({ token }: { token: string }) {
@@ -34,7 +32,9 @@ export function SharedHelpPage({ token }: { token: string }) {
               <h1 className="text-2xl font-bold">
                 {query.data.set ? `${query.data.set.make} ${query.data.set.model}` : 'Help request'}
               </h1>
-              <p className="text-sm text-ink-soft">Read-only. This link works until {dateOf(query.data.expiresAt)}.</p>
+              <p className="text-sm text-ink-soft">
+                Read-only. This link works until {formatLongDate(query.data.expiresAt)}.
+              </p>
             </div>
             <Button variant="quiet" className="print:hidden" onClick={() => window.print()}>
               Print

@@ -2,6 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { DepositInput, Invoice, InvoicePreview } from '../../../../shared/schemas/invoices';
 import { api } from '../../../lib/api-client';
 import { moneyKeys } from './estimates';
+import { personTimeZone } from '../../../lib/format';
 
 export const invoiceKeys = {
   list: (restorationId: number) => ['restorations', restorationId, 'invoices'] as const,
@@ -60,6 +61,6 @@ export function useVoidInvoice(restorationId: number) {
 
 /** Where the PDF of an invoice (or its receipt) downloads, with the reader's time zone for its dates. */
 export function documentUrl(invoiceId: number, kind: 'invoice' | 'receipt'): string {
-  const zone = Intl.DateTimeFormat().resolvedOptions().timeZone;
+  const zone = personTimeZone();
   return `/api/invoices/${invoiceId}/${kind}.pdf${zone ? `?timeZone=${encodeURIComponent(zone)}` : ''}`;
 }

@@ -5,8 +5,7 @@ import { Button } from '../../../components/button';
 import { useSendEstimate } from '../api/estimates';
 import { EstimateDecision } from './estimate-decision';
 import { hoursText, moneyText, rangeText } from './money-text';
-
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '../../../lib/format';
 
 /** One version of an estimate: its range, its lines, and where it stands (draft, sent, approved, declined). */
 export function EstimateCard({
@@ -75,8 +74,8 @@ export function EstimateCard({
         {!e.sent
           ? 'Draft: not yet sent to the owner.'
           : e.decision
-            ? `${e.decision === 'approved' ? 'Approved' : 'Declined'} by ${e.decidedByName} on ${when(e.decidedAt!)}.`
-            : `Sent ${e.sentAt ? when(e.sentAt) : ''}; waiting for the owner's answer.`}
+            ? `${e.decision === 'approved' ? 'Approved' : 'Declined'} by ${e.decidedByName} on ${formatDateTime(e.decidedAt!)}.`
+            : `Sent ${e.sentAt ? formatDateTime(e.sentAt) : ''}; waiting for the owner's answer.`}
       </p>
       {canEdit && !e.sent && (
         <div className="space-y-1">

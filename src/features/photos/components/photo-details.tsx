@@ -1,10 +1,10 @@
 import { phaseLabels, viewLabels, type Photo } from '../../../../shared/schemas/photos';
-import { formatDateTime } from '../../../lib/photo-format';
+import { takenAt } from '../../../lib/photo-format';
 import { SharedBadge } from './shared-badge';
 
 /** What is known about the photo on screen; announced politely as the person moves through the set. */
 export function PhotoDetails({ photo, position, showShared }: { photo: Photo; position: string; showShared: boolean }) {
-  const taken = formatDateTime(photo.takenAt);
+  const taken = takenAt(photo.takenAt);
   return (
     <div aria-live="polite" className="space-y-2">
       <p className="text-sm text-ink-soft">{position}</p>
@@ -21,7 +21,7 @@ export function PhotoDetails({ photo, position, showShared }: { photo: Photo; po
         <dt className="text-ink-soft">Taken</dt>
         <dd>{taken ?? 'not recorded by the camera'}</dd>
         <dt className="text-ink-soft">Added</dt>
-        <dd>{formatDateTime(photo.uploadedAt) ?? '—'}</dd>
+        <dd>{takenAt(photo.uploadedAt) ?? '—'}</dd>
       </dl>
     </div>
   );
