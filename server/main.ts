@@ -15,6 +15,7 @@ import { seedDemoFindings } from './features/demo/seed-demo-findings';
 import { seedDemoPhotos } from './features/demo/seed-demo-photos';
 import { seedDemoSheet } from './features/demo/seed-demo-sheet';
 import { seedDemoSafety } from './features/demo/seed-demo-safety';
+import { seedDemoHelp } from './features/demo/seed-demo-help';
 import { seedDemoMoney } from './features/demo/seed-demo-money';
 import { seedDemoWorkshop } from './features/demo/seed-demo-workshop';
 import { backfillPhoneVariants } from './features/photos/backfill-phone-variants';
@@ -69,6 +70,7 @@ async function main() {
     await seedDemoMoney(handle.db);
     await seedDemoSafety(handle.db);
     await seedDemoBringup(handle.db);
+    await seedDemoHelp(handle.db);
   }
   await backfillPhoneVariants(handle.db, storage, logger);
   scheduleSweep(handle.db, storage, logger);

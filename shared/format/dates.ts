@@ -18,8 +18,8 @@ const toDate = (instant: Instant): Date | null => {
 const styles = {
   /** "2 Dec 2026, 14:05" (en-GB): a moment something was done. */
   dateTime: { dateStyle: 'medium', timeStyle: 'short' },
-  /** "2 Dec, 14:05": a recent moment in a list. */
-  dayAndTime: { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' },
+  /** "2 Dec, 14:05" (en-GB), "Dec 2, 2:05 PM" (en-US): a recent moment in a list; see `formatInstant`. */
+  dayAndTime: { day: 'numeric', month: 'short' },
   /** "2 December 2026": a document's date. */
   longDate: { day: 'numeric', month: 'long', year: 'numeric' },
   /** "2 Dec 2026": a date in a table or picker. */
@@ -32,7 +32,12 @@ export type DateStyle = keyof typeof styles;
 /** An instant in one of the product's styles, on the reader's calendar. */
 export function formatInstant(instant: Instant, style: DateStyle, place: FormatPlace = {}): string {
   const date = toDate(instant);
-  return date ? new Intl.DateTimeFormat(place.locale, { ...styles[style], timeZone: place.timeZone }).format(date) : '';
+  if (!date) return '';
+  const format = (options: Intl.DateTimeFormatOptions) =>
+    new Intl.DateTimeFormat(place.locale, { ...options, timeZone: place.timeZone }).format(date);
+  // The day without the year, then the locale's own short time: fixed two-digit hours read "02:05 PM" in en-US.
+  if (style === 'dayAndTime') return `${format(styles.dayAndTime)}, ${format({ timeStyle: 'short' })}`;
+  return format(styles[style]);
 }
 
 /** An instant as an ISO 8601 calendar date (2026-03-09) on the wall calendar of `timeZone` (UTC unless given). */

@@ -52,6 +52,20 @@ describe('dates', () => {
     expect(isoDate(instant, 'Europe/Berlin')).toBe('2026-03-09');
   });
 
+  it("when a recent moment is listed, then it reads the locale's own way, without a padded hour", () => {
+    // Expected strings from the CLDR patterns Node's Intl ships (en-GB 24-hour, en-US 12-hour clock).
+    expect(formatInstant('2026-12-02T14:05:00Z', 'dayAndTime', { locale: 'en-GB', timeZone: 'UTC' })).toBe(
+      '2 Dec, 14:05',
+    );
+    // The space before PM is U+0020 or U+202F depending on the ICU version; \s matches both.
+    expect(formatInstant('2026-12-02T14:05:00Z', 'dayAndTime', { locale: 'en-US', timeZone: 'UTC' })).toMatch(
+      /^Dec 2, 2:05\sPM$/,
+    );
+    expect(formatInstant('2026-12-02T04:05:00Z', 'dayAndTime', { locale: 'en-GB', timeZone: 'UTC' })).toBe(
+      '2 Dec, 04:05',
+    );
+  });
+
   it('when a document date is asked in British English, then it reads "8 March 2026"', () => {
     expect(formatInstant(instant, 'longDate', { locale: 'en-GB', timeZone: 'UTC' })).toBe('8 March 2026');
     expect(formatInstant(instant, 'mediumDate', { locale: 'en-GB', timeZone: 'UTC' })).toBe('8 Mar 2026');

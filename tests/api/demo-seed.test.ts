@@ -5,20 +5,25 @@ import {
   bringupSteps,
   estimates,
   findings,
+  helpRequests,
   invoices,
   measurements,
   parts,
   payments,
   photos,
   prePowerSignoffs,
+  readingRequests,
   restorations,
+  symptomChecks,
   users,
   valves,
 } from '../../server/db/schema';
 import { seedDemo } from '../../server/db/seed/seed-demo';
 import { seedDemoBringup } from '../../server/db/seed/seed-demo-bringup';
 import { chassisLandmarks } from '../../server/features/demo/chassis';
+import { seedDemoHelp } from '../../server/features/demo/seed-demo-help';
 import { seedDemoMoney } from '../../server/features/demo/seed-demo-money';
+import { readingRequestsRepo } from '../../server/features/reading-requests/reading-requests.repo';
 import { seedDemoFindings } from '../../server/features/demo/seed-demo-findings';
 import { seedDemoPhotos } from '../../server/features/demo/seed-demo-photos';
 import { seedDemoWorkshop } from '../../server/features/demo/seed-demo-workshop';
@@ -37,6 +42,7 @@ const seedAll = async () => {
   await seedDemoWorkshop(t.db);
   await seedDemoMoney(t.db);
   await seedDemoBringup(t.db);
+  await seedDemoHelp(t.db);
 };
 const counts = async () =>
   Promise.all(
@@ -53,6 +59,9 @@ const counts = async () =>
       estimates,
       invoices,
       payments,
+      helpRequests,
+      symptomChecks,
+      readingRequests,
     ].map(async (table) => (await t.db.select({ n: count() }).from(table))[0]!.n),
   );
 
@@ -60,7 +69,7 @@ describe('demo seed', () => {
   it('when seeded twice, then the second run changes nothing', async () => {
     await seedAll();
     const first = await counts();
-    expect(first).toEqual([3, 3, 5, 3, expect.any(Number), 10, 17, 2, 3, 1, 1, 1]);
+    expect(first).toEqual([3, 3, 5, 3, expect.any(Number), 10, 17, 2, 3, 1, 1, 1, 1, 2, 1]);
     await seedAll();
     expect(await counts()).toEqual(first);
   }, 120_000);
@@ -79,6 +88,20 @@ describe('demo seed', () => {
     expect(lines.map((p) => [p.kind, p.method, p.status, p.amount, p.checkoutSessionId])).toEqual([
       ['payment', 'transfer', 'succeeded', deposit!.due, null],
     ]);
+  });
+
+  it("when seeded, then the Wren AC/DC asks for help with its checklist, and the mentor's reading request waits on the technician's bench", async () => {
+    const [set] = await t.db.select().from(restorations).where(eq(restorations.serial, 'KW-3381'));
+    const [help] = await t.db.select().from(helpRequests).where(eq(helpRequests.restorationId, set!.id));
+    expect(help!.symptomIds).toEqual(['dead-dial-dark']);
+    const checks = await t.db.select().from(symptomChecks).where(eq(symptomChecks.restorationId, set!.id));
+    expect(checks.map((c) => [c.causeId, c.result]).sort()).toEqual([
+      ['heater-chain-open', 'confirmed'],
+      ['mains-lead-fuse', 'ruled-out'],
+    ]);
+    const [mara] = await t.db.select().from(users).where(eq(users.email, 'mara@cobbold-lane.test'));
+    const waiting = await readingRequestsRepo(t.deps).bench(mara!.id);
+    expect(waiting.map((r) => [r.restorationId, r.helpRequestId])).toEqual([[set!.id, help!.id]]);
   });
 
   it('when seeded, then every demo set in Testing or later has a signed pre-power checklist (the first-power gate holds)', async () => {
