@@ -61,4 +61,22 @@ describe('the symptom checklist', () => {
       },
     });
   });
+
+  it('when results are already recorded, then the checklist opens on their symptom and the choice says how many were checked', async () => {
+    const check = {
+      symptomId: 'hum',
+      causeId: 'poor-earth',
+      result: 'ruled-out',
+      note: 'Tags tight and clean.',
+      reading: null,
+      finding: null,
+      checkedBy: 'A technician',
+      updatedAt: '2026-12-01T10:00:00Z',
+    };
+    fakeApi(() => ok([check]));
+    show(false);
+    const earth = await screen.findByRole('listitem', { name: 'Poor earth at a rusted valve-socket rivet or tag' });
+    expect(within(earth).getByRole('status')).toHaveTextContent('Ruled out');
+    expect(screen.getByLabelText('Symptom')).toHaveDisplayValue('Loud hum (1 checked)');
+  });
 });

@@ -14,8 +14,11 @@ export function SymptomChecklist({ restorationId, canEdit }: { restorationId: nu
   const checks = useSymptomChecks(restorationId);
   const photos = usePhotos(restorationId);
   const record = useRecordSymptomCheck(restorationId);
-  const [symptomId, setSymptomId] = useState('');
+  // Until the person picks one, the checklist opens on a symptom already worked on (the first with results).
+  const [chosen, setSymptomId] = useState<string | null>(null);
+  const symptomId = chosen ?? checks.data?.[0]?.symptomId ?? '';
   const symptom = findSymptom(symptomId);
+  const checkedCount = (id: string) => checks.data?.filter((c) => c.symptomId === id).length ?? 0;
   return (
     <section
       aria-labelledby={`${selectId}-h`}
@@ -37,6 +40,7 @@ export function SymptomChecklist({ restorationId, canEdit }: { restorationId: nu
         {symptoms.map((s) => (
           <option key={s.id} value={s.id}>
             {s.title}
+            {checkedCount(s.id) > 0 ? ` (${checkedCount(s.id)} checked)` : ''}
           </option>
         ))}
       </select>
