@@ -1,12 +1,12 @@
-import { and, eq } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import { findCause, findSymptom } from '../../../shared/bench/symptoms';
 import { causeResultLabels, type CauseResult } from '../../../shared/schemas/symptom-checks';
 import type { Database } from '../../db/client';
-import { helpRequests, readingRequests, restorations, users } from '../../db/schema';
-import { demoPeople } from '../../db/seed/demo-scenario';
+import { helpRequests, readingRequests } from '../../db/schema';
 import { recordEvent } from '../events/record-event';
 import { helpRepo } from '../help/help.repo';
 import { symptomChecksRepo } from '../symptom-checks/symptom-checks.repo';
+import { demoSet, demoUserId, WREN_AC_DC } from './demo-lookup';
 
 const SYMPTOM = 'dead-dial-dark';
 const checks: { causeId: string; result: CauseResult; note: string }[] = [
@@ -29,13 +29,9 @@ const checks: { causeId: string; result: CauseResult; note: string }[] = [
  * in one transaction; nothing is notified or mailed. Runs once: a set that already has a help request is left alone.
  */
 export async function seedDemoHelp(db: Database): Promise<void> {
-  const people = await db.select({ id: users.id, email: users.email }).from(users);
-  const techId = people.find((p) => p.email === demoPeople.technician.email)?.id;
-  const mentorId = people.find((p) => p.email === demoPeople.mentor.email)?.id;
-  const [set] = await db
-    .select({ id: restorations.id })
-    .from(restorations)
-    .where(and(eq(restorations.make, 'Kestrel Wireless Co.'), eq(restorations.serial, 'KW-3381')));
+  const techId = await demoUserId(db, 'technician');
+  const mentorId = await demoUserId(db, 'mentor');
+  const set = await demoSet(db, WREN_AC_DC);
   if (!techId || !mentorId || !set) return;
   const [existing] = await db
     .select({ id: helpRequests.id })

@@ -1,11 +1,12 @@
-import { and, eq } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import type { Database } from '../../db/client';
-import { estimates, events, payments, restorations, users } from '../../db/schema';
+import { estimates, events, payments } from '../../db/schema';
 import { demoPeople } from '../../db/seed/demo-scenario';
 import { estimatesService } from '../estimates/estimates.service';
 import { issueInvoice } from '../invoices/issue-invoice';
 import { settleInvoice } from '../payments/payments.repo';
 import { readWorkshopSettings } from '../workshop/workshop-settings';
+import { demoSet, demoUserId, MERIDIAN_54 } from './demo-lookup';
 
 /** A modest fixed deposit, in minor units of the workshop's currency: the final invoice still has plenty left to pay. */
 const DEPOSIT = 2500;
@@ -16,13 +17,9 @@ const DEPOSIT = 2500;
  * Runs once: a set that already has an estimate is left alone.
  */
 export async function seedDemoMoney(db: Database): Promise<void> {
-  const people = await db.select({ id: users.id, email: users.email }).from(users);
-  const techId = people.find((p) => p.email === demoPeople.technician.email)?.id;
-  const ownerId = people.find((p) => p.email === demoPeople.owner.email)?.id;
-  const [set] = await db
-    .select({ id: restorations.id })
-    .from(restorations)
-    .where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
+  const techId = await demoUserId(db, 'technician');
+  const ownerId = await demoUserId(db, 'owner');
+  const set = await demoSet(db, MERIDIAN_54);
   if (!techId || !ownerId || !set) return;
   const [existing] = await db
     .select({ id: estimates.id })

@@ -2,28 +2,25 @@ import { randomUUID } from 'node:crypto';
 import { rm, writeFile } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import { and, eq } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import type { PhotoUploadFields } from '../../../shared/schemas/photos';
-import { photos, restorations, users } from '../../db/schema';
-import { demoPeople } from '../../db/seed/demo-scenario';
+import { photos } from '../../db/schema';
 import { photosService, type PhotosDeps } from '../photos/photos.service';
 import { chassisLandmarks, renderChassisJpeg } from './chassis';
+import { demoSet, demoUserId, MERIDIAN_54 } from './demo-lookup';
 
 /** The demo set's chassis pictures, loaded through the same pipeline as any upload. Runs once per set. */
 export async function seedDemoPhotos(deps: PhotosDeps): Promise<void> {
   const { db } = deps;
-  const [set] = await db
-    .select()
-    .from(restorations)
-    .where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
+  const set = await demoSet(db, MERIDIAN_54);
   if (!set) return;
   const have = new Set(
     (await db.select({ caption: photos.caption }).from(photos).where(eq(photos.restorationId, set.id))).map(
       (p) => p.caption,
     ),
   );
-  const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
+  const techId = await demoUserId(db, 'technician');
   const service = photosService(deps);
   const shots: [() => Promise<Buffer>, PhotoUploadFields & { caption: string }][] = [
     [
@@ -79,7 +76,7 @@ export async function seedDemoPhotos(deps: PhotosDeps): Promise<void> {
     const file = path.join(os.tmpdir(), `gridleak-demo-${randomUUID()}.jpg`);
     await writeFile(file, bytes);
     try {
-      await service.ingest(set.id, { path: file, size: bytes.length }, fields, tech?.id ?? null);
+      await service.ingest(set.id, { path: file, size: bytes.length }, fields, techId ?? null);
     } finally {
       await rm(file, { force: true });
     }

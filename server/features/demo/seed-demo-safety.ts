@@ -1,8 +1,9 @@
 import { and, count, eq } from 'drizzle-orm';
 import type { Database } from '../../db/client';
-import { memberships, restorations, safetyTests, soakSessions } from '../../db/schema';
+import { memberships, safetyTests, soakSessions } from '../../db/schema';
 import { demoRestorations } from '../../db/seed/demo-scenario';
 import { safetyTestsService } from '../safety/safety-tests.service';
+import { demoSet } from './demo-lookup';
 
 const HOUR_MS = 3_600_000;
 
@@ -13,10 +14,7 @@ const HOUR_MS = 3_600_000;
  */
 export async function seedDemoSafety(db: Database): Promise<void> {
   for (const demo of demoRestorations) {
-    const [set] = await db
-      .select()
-      .from(restorations)
-      .where(and(eq(restorations.make, demo.make), eq(restorations.serial, demo.serial)));
+    const set = await demoSet(db, demo);
     if (!set || (set.stage !== 'returned' && set.stage !== 'testing')) continue;
     const [tech] = await db
       .select({ id: memberships.userId })

@@ -6,12 +6,12 @@ import os from 'node:os';
 import path from 'node:path';
 import { and, eq } from 'drizzle-orm';
 import sharp from 'sharp';
-import { photos, restorations, sheetPages, users } from '../../db/schema';
-import { demoPeople } from '../../db/seed/demo-scenario';
+import { photos, sheetPages } from '../../db/schema';
 import type { PhotosDeps } from '../photos/photos.service';
 import { referencesRepo } from '../references/references.repo';
 import { sheetsService } from '../sheets/sheets.service';
 import { chassisLandmarks } from './chassis';
+import { demoSet, demoUserId, MERIDIAN_54 } from './demo-lookup';
 
 const W = 2400;
 const H = 1700;
@@ -62,18 +62,15 @@ function layoutSvg(): string {
 /** The demo set's service sheet (a diagram and a layout page) with C27, R28 and R29 marked on it and on the underside photo. Runs once. */
 export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
   const { db } = deps;
-  const [set] = await db
-    .select()
-    .from(restorations)
-    .where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
+  const set = await demoSet(db, MERIDIAN_54);
   if (!set) return;
   if (
     (await db.select({ id: sheetPages.id }).from(sheetPages).where(eq(sheetPages.restorationId, set.id)).limit(1))
       .length
   )
     return;
-  const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
-  if (!tech) return;
+  const techId = await demoUserId(db, 'technician');
+  if (!techId) return;
   const service = sheetsService(deps);
   const pages: [string, 'circuit-diagram' | 'layout', string][] = [
     [diagramSvg(), 'circuit-diagram', 'Output stage'],
@@ -89,7 +86,7 @@ export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
         set.id,
         { path: file, size: bytes.length, mimeType: 'image/png' },
         { kind, title },
-        tech.id,
+        techId,
         'technician',
       );
       ids.push(sheet.pages[0]!.id);
@@ -111,7 +108,7 @@ export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
         ref: s.ref,
         shape: 'pin',
         points: [{ x: s.x / W, y: s.y / H }],
-        createdById: tech.id,
+        createdById: techId,
       });
       const at = spots[s.ref]!;
       await repo.insertMark({
@@ -120,7 +117,7 @@ export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
         ref: s.ref,
         shape: 'pin',
         points: [{ x: at.x, y: at.y }],
-        createdById: tech.id,
+        createdById: techId,
       });
       if (underside)
         await repo.insertMark({
@@ -129,7 +126,7 @@ export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
           ref: s.ref,
           shape: 'pin',
           points: [{ x: at.x, y: at.y }],
-          createdById: tech.id,
+          createdById: techId,
         });
     }
     // The set as built differs from its sheet in one place, noted against the reference.
@@ -140,12 +137,12 @@ export async function seedDemoSheet(deps: PhotosDeps): Promise<void> {
       diagramSays: '150Ω 1W',
       chassisHas: '180Ω 1W, original factory joints',
       note: 'Both Meridian 54 chassis on the Cobbold Lane bench carry 180Ω here; treat it as a production change, not a repair.',
-      createdById: tech.id,
+      createdById: techId,
     });
     await recordEvent(tx, {
       restorationId: set.id,
       kind: 'mismatch-noted',
-      actorId: tech.id,
+      actorId: techId,
       mismatchNoteId: note.id,
       data: { ref: 'R29' },
     });

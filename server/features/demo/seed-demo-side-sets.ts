@@ -1,8 +1,9 @@
-import { and, eq } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import type { Database } from '../../db/client';
-import { restorations, valves } from '../../db/schema';
+import { valves } from '../../db/schema';
 import { measurementsService } from '../measurements/measurements.service';
 import { partsService } from '../parts/parts.service';
+import { demoSet } from './demo-lookup';
 
 type Reading = Parameters<ReturnType<typeof measurementsService>['create']>[1];
 type Line = Parameters<ReturnType<typeof partsService>['create']>[1];
@@ -125,10 +126,7 @@ export async function seedDemoSideSets(db: Database, techId: number): Promise<vo
   const m = measurementsService(db);
   const ledger = partsService(db);
   for (const s of sideSets) {
-    const [set] = await db
-      .select({ id: restorations.id })
-      .from(restorations)
-      .where(and(eq(restorations.make, s.make), eq(restorations.serial, s.serial)));
+    const set = await demoSet(db, s);
     if (!set) continue;
     const [existing] = await db.select({ id: valves.id }).from(valves).where(eq(valves.restorationId, set.id)).limit(1);
     if (existing) continue;

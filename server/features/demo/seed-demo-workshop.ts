@@ -1,21 +1,17 @@
 import { and, eq } from 'drizzle-orm';
 import type { Database } from '../../db/client';
-import { findings, parts, restorations, users } from '../../db/schema';
-import { demoPeople } from '../../db/seed/demo-scenario';
+import { findings, parts, restorations } from '../../db/schema';
 import { measurementsService } from '../measurements/measurements.service';
 import { partsService } from '../parts/parts.service';
 import { seedDemoSideSets } from './seed-demo-side-sets';
+import { demoSet, demoUserId, MERIDIAN_54 } from './demo-lookup';
 
 /** The Meridian 54 radiogram's bench record: valve line-up, readings, parts ledger and care notes; then the other sets'. Runs once. */
 export async function seedDemoWorkshop(db: Database): Promise<void> {
-  const [tech] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoPeople.technician.email));
-  if (!tech) return;
-  const techId = tech.id;
+  const techId = await demoUserId(db, 'technician');
+  if (!techId) return;
   await seedDemoSideSets(db, techId);
-  const [set] = await db
-    .select()
-    .from(restorations)
-    .where(and(eq(restorations.make, 'Ostrander & Vale'), eq(restorations.serial, 'OV-54-20417')));
+  const set = await demoSet(db, MERIDIAN_54);
   if (!set) return;
   const [existing] = await db.select({ id: parts.id }).from(parts).where(eq(parts.restorationId, set.id)).limit(1);
   if (existing) return;
