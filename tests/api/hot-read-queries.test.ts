@@ -1,6 +1,6 @@
 import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { comments, findings } from '../../server/db/schema';
+import { comments, events, findings } from '../../server/db/schema';
 import { createPhotoRow } from '../factories/photos';
 import { createRestoration } from '../factories/restorations';
 import { createUser, signedIn } from '../factories/users';
@@ -11,6 +11,7 @@ let tech: Agent;
 let restorationId: number;
 let photoId: number;
 let findingId: number;
+let userId: number;
 /** The SQL text of every statement sent through the pool while `recording` is on. */
 const statements: string[] = [];
 let recording = false;
@@ -35,6 +36,7 @@ beforeAll(async () => {
     })
     .returning();
   findingId = f!.id;
+  userId = user.id;
   await t.db.insert(comments).values({ findingId, authorId: user.id, body: 'Checked at 250 V, fine.' });
   tech = await signedIn(t.app, user);
   // Every statement of the app (Drizzle and the session store) goes through this pool's `query`.
@@ -85,5 +87,43 @@ describe('hot read routes', () => {
       expect(touching('sessions', sent)[0], path).toMatch(/^\s*select/i);
       expect(membershipLookups(sent).length, path).toBeLessThanOrEqual(1);
     }
+  });
+});
+
+describe("the bench's recent activity", () => {
+  it('when a person is on several sets in different roles, then their activity is one query besides the session, each event judged by their role there', async () => {
+    // Mara is the technician of the set above and the owner of a second; a third is not hers.
+    const owned = await createRestoration(t.db, [{ userId, role: 'owner' }], { make: 'Hollin', model: 'Wren 5' });
+    const other = await createRestoration(t.db, [], { make: 'Hollin', model: 'Finch 2' });
+    const stage = { kind: 'stage-changed' as const, data: { from: 'intake', to: 'repair' } };
+    const labour = { kind: 'labour-logged' as const, data: { minutes: 25, billable: true } };
+    await t.db.insert(events).values([
+      { restorationId, ...stage },
+      { restorationId, ...labour },
+      { restorationId: owned.id, ...stage },
+      { restorationId: owned.id, ...labour }, // the labour log is the workshop's own record: not for the owner
+      { restorationId: other.id, ...stage },
+    ]);
+    await statementsOf('/api/activity'); // a first read may move the session's expiry once
+    statements.length = 0;
+    recording = true;
+    const res = await tech.get('/api/activity');
+    await new Promise((r) => setTimeout(r, 100));
+    recording = false;
+    expect(res.status).toBe(200);
+    const notSession = statements.filter((s) => !touching('sessions', [s]).length);
+    expect(notSession).toHaveLength(1);
+    const seen = (res.body as { restorationId: number; kind: string; set: string }[]).map(
+      (e) => `${e.restorationId} ${e.set}: ${e.kind}`,
+    );
+    expect(seen).toEqual(
+      expect.arrayContaining([
+        `${restorationId} Farrowby Lark 3: stage-changed`,
+        `${restorationId} Farrowby Lark 3: labour-logged`,
+        `${owned.id} Hollin Wren 5: stage-changed`,
+      ]),
+    );
+    expect(seen).not.toContain(`${owned.id} Hollin Wren 5: labour-logged`);
+    expect(seen.filter((line) => line.startsWith(`${other.id} `))).toEqual([]);
   });
 });

@@ -2,7 +2,7 @@
  * Child process for the load test: the real app on a fresh test database with 10 restorations, each with
  * five technicians, a photo carrying 60 findings and a few comments. Prints one JSON line with the port,
  * a session cookie per person and the ids to use; answers `rss` messages with its memory use
- * (resident set, V8 heap, external and array buffers) after a full garbage collection.
+ * (resident set, V8 heap, external and array buffers) once no request is in flight, after a full garbage collection.
  */
 import supertest from 'supertest';
 import { comments, findings } from '../../server/db/schema';
@@ -64,9 +64,21 @@ for (let s = 0; s < 10; s++) {
 const server = t.app.listen(0, '127.0.0.1', () => {
   console.log(JSON.stringify({ port: (server.address() as { port: number }).port, people }));
 });
+// Requests still being answered: memory is read once none is, so work in flight (a queued upload's image buffers)
+// is not counted as growth.
+let inFlight = 0;
+server.on('request', (_req, res) => {
+  inFlight += 1;
+  res.once('close', () => (inFlight -= 1));
+});
 process.on('message', (m) => {
   if (m !== 'rss') return;
-  (globalThis as { gc?: () => void }).gc?.();
-  process.send!(process.memoryUsage());
+  void (async () => {
+    const asked = Date.now();
+    while (inFlight > 0 && Date.now() - asked < 30_000) await new Promise((r) => setTimeout(r, 50));
+    const waitedMs = Date.now() - asked;
+    (globalThis as { gc?: () => void }).gc?.();
+    process.send!({ ...process.memoryUsage(), waitedMs, inFlight });
+  })();
 });
 process.on('SIGTERM', () => void t.stop().then(() => process.exit(0)));

@@ -3,9 +3,10 @@
  * Profile (prints what the browser did, measured in one run; no assertions): the markup page with 1,000 findings,
  * cold cache, from navigation to the first drawn frame, recorded with Chromium's performance trace. Prints when each
  * request finished and the renderer's main-thread work in that time: by kind of task, by script, and its longest tasks.
- * Run: npx tsx tests/bench/markup-profile.ts   (MARKUP_PROFILE_FEW=1 profiles the page with the demo's few findings)
+ * Run: npx tsx tests/bench/markup-profile.ts   (MARKUP_PROFILE_FEW=1 profiles the page with the demo's few findings;
+ *   MARKUP_PROFILE_OUT=<file>.cpuprofile keeps the JavaScript samples)
  */
-import { rmSync } from 'node:fs';
+import { rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import { launchBrowser, newPage } from '../support/browser';
 import { signInAs } from '../support/journey';
@@ -78,10 +79,12 @@ try {
   await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
   const ms = Date.now() - started;
   const { profile } = await cdp.send('Profiler.stop');
+  // MARKUP_PROFILE_OUT=file.cpuprofile keeps the JavaScript samples (opens in Chromium's DevTools; map with dist/assets/*.map).
+  if (process.env.MARKUP_PROFILE_OUT) writeFileSync(process.env.MARKUP_PROFILE_OUT, JSON.stringify(profile));
   const trace = JSON.parse((await browser.stopTracing()).toString()) as { traceEvents: TraceEvent[] };
   const resources = (await page.evaluate(
-    `performance.getEntriesByType('resource').map((e) => ({ name: e.name.replace(location.origin, '').split('?')[0].slice(0, 70), start: Math.round(e.startTime), end: Math.round(e.responseEnd), kB: Math.round(e.encodedBodySize / 1024) }))`,
-  )) as { name: string; start: number; end: number; kB: number }[];
+    `performance.getEntriesByType('resource').map((e) => ({ name: e.name.replace(location.origin, '').split('?')[0].slice(0, 70), start: Math.round(e.startTime), sent: Math.round(e.requestStart), first: Math.round(e.responseStart), end: Math.round(e.responseEnd), kB: Math.round(e.encodedBodySize / 1024) }))`,
+  )) as { name: string; start: number; sent: number; first: number; end: number; kB: number }[];
 
   const events = trace.traceEvents;
   const navStart =
@@ -157,10 +160,12 @@ try {
   console.log(
     `main thread busy ${msOf(tasks.reduce((s, t) => s + (t.dur ?? 0), 0))} of ${ms} ms in ${tasks.length} tasks`,
   );
-  console.log('\nrequests (start → end, ms from navigation):');
+  console.log(
+    '\nrequests (asked → sent → first byte → end, ms from navigation; asked to sent is time queued for a connection):',
+  );
   for (const r of resources.sort((a, b) => a.end - b.end))
     console.log(
-      `  ${String(r.start).padStart(5)} → ${String(r.end).padStart(5)}  ${String(r.kB).padStart(4)} kB  ${r.name}`,
+      `  ${String(r.start).padStart(5)} → ${String(r.sent).padStart(5)} → ${String(r.first).padStart(5)} → ${String(r.end).padStart(5)}  ${String(r.kB).padStart(4)} kB  ${r.name}`,
     );
   console.log('\nmain-thread time by kind (nested kinds overlap):');
   for (const [k, v] of [...totals.entries()].sort((a, b) => b[1] - a[1])) console.log(`  ${msOf(v)}  ${k}`);

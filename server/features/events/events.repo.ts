@@ -1,21 +1,16 @@
-import { eq } from 'drizzle-orm';
+import { eq, inArray } from 'drizzle-orm';
 import type { Executor } from '../../db/client';
-import { memberships, restorations } from '../../db/schema';
+import { events, memberships } from '../../db/schema';
 
-/** The queries the history needs beyond the timeline builder: which sets a person is on, and what they are called. */
+/** What the history needs beyond the timeline builder: which sets' events a person's activity reads. */
 export function eventsRepo(db: Executor) {
   return {
-    /** A subquery of the restorations the person is a member of, for `inArray(events.restorationId, …)`. */
-    restorationIdsOf(userId: number) {
-      return db.select({ id: memberships.restorationId }).from(memberships).where(eq(memberships.userId, userId));
-    },
-    /** The person's sets with their make, model and the person's role on each. */
-    setsOf(userId: number) {
-      return db
-        .select({ id: restorations.id, make: restorations.make, model: restorations.model, role: memberships.role })
-        .from(memberships)
-        .innerJoin(restorations, eq(restorations.id, memberships.restorationId))
-        .where(eq(memberships.userId, userId));
+    /** Events on the restorations the person is a member of (a subquery of the same statement). */
+    onSetsOf(userId: number) {
+      return inArray(
+        events.restorationId,
+        db.select({ id: memberships.restorationId }).from(memberships).where(eq(memberships.userId, userId)),
+      );
     },
   };
 }

@@ -14,6 +14,7 @@ import {
   mismatchNotes,
   parts,
   photos,
+  restorations,
   sheetPages,
   users,
 } from '../../db/schema';
@@ -71,6 +72,9 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
         m: measurements,
         findingVisible: rule(role, 'finding', findingSources),
         photoVisible: rule(role, 'photo', photoSources),
+        // The set's name, read with the event for a person across their sets (the bench's activity); null otherwise.
+        setMake: restorations.make,
+        setModel: restorations.model,
       })
       .from(events)
       .leftJoin(users, eq(users.id, events.actorId))
@@ -87,6 +91,7 @@ export function timelineService({ db, storage }: Pick<AppDeps, 'db' | 'storage'>
           ? and(eq(memberships.restorationId, events.restorationId), eq(memberships.userId, reader.userId))
           : sql`false`,
       )
+      .leftJoin(restorations, 'userId' in reader ? eq(restorations.id, events.restorationId) : sql`false`)
       .where(
         and(
           where,

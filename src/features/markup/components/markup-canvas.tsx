@@ -59,16 +59,19 @@ export function MarkupCanvas(props: MarkupCanvasProps) {
     [props.imageSize.width, props.imageSize.height],
   );
   const photo = usePhotoImage(props.imageUrl, props.onImageError);
+  const pixelRatio = usePixelRatio();
+  const view = useView(imageSize, size);
+  // The stage is drawn once it has a size and a view; a photo that arrives before that must not count as the frame
+  // (the page holds work such as a thousand list rows until then).
+  const staged = size !== undefined && view.view !== undefined;
   const firstFrame = useRef(props.onFirstFrame);
   useEffect(() => {
-    if (photo.status === 'loading' || !firstFrame.current) return;
+    if (photo.status === 'loading' || !staged || !firstFrame.current) return;
     const notify = firstFrame.current;
     firstFrame.current = undefined;
     // Two animation frames: the stage has drawn the photo and its marks by then.
     requestAnimationFrame(() => requestAnimationFrame(() => notify()));
-  }, [photo.status]);
-  const pixelRatio = usePixelRatio();
-  const view = useView(imageSize, size);
+  }, [photo.status, staged]);
   const [tool, setTool] = useState<Tool>('select');
   const [keepTool, setKeepTool] = useStoredFlag('gridleak.markup.keep-tool');
   // Once a mark drawn here is saved as a finding: back to Select unless the person keeps the tool, and a finding
