@@ -31,3 +31,31 @@ export function SheetCanvas(props: SheetCanvasProps) {
   if (!Canvas) throw new Error('No canvas for the reference view: wrap it in SheetCanvasProvider (src/app).');
   return <Canvas {...props} />;
 }
+
+/** What a reference view decides about its canvas; the rest is the same for every reference view. */
+export type ReferenceCanvasProps = Pick<
+  SheetCanvasProps,
+  'imageUrl' | 'imageSize' | 'items' | 'selectedId' | 'focusId' | 'onSelect' | 'onCreate' | 'onImageError' | 'label'
+> & {
+  /** May place new marks (a technician). */
+  canMark: boolean;
+  /** Removes a mark; without it, marks stay. */
+  onDelete?: (id: number) => void;
+};
+
+/**
+ * A picture with reference marks: zoomed onto `focusId` for every reader; marks are placed or removed, never moved
+ * or edited (a mark that is wrong is removed and placed again).
+ */
+export function ReferenceCanvas({ canMark, onDelete = () => {}, ...props }: ReferenceCanvasProps) {
+  return (
+    <SheetCanvas
+      {...props}
+      focusWhenReading
+      canCreate={canMark}
+      canEdit={() => false}
+      onMove={() => {}}
+      onDelete={onDelete}
+    />
+  );
+}
