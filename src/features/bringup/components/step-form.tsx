@@ -12,7 +12,7 @@ import { inputClass } from '../../../components/field';
 import { useAddBringupStep } from '../api/add-bringup-step';
 import { lampLimitWords } from '../lib/inline-limits';
 import { emptyDraft, readDraft, usesLamp, type StepDraft } from '../lib/step-draft';
-import type { FindingChoice } from '../lib/choices';
+import { FindingOptions, type FindingChoice } from '../../../components/finding-options';
 import { StepReadings } from './step-readings';
 
 const toNumber = (text: string) => (text.trim() === '' ? null : Number(text.replace(',', '.')));
@@ -145,12 +145,7 @@ export function StepForm({
             onChange={(e) => set({ findingId: e.target.value })}
             className={inputClass}
           >
-            <option value="">Not tied to a finding</option>
-            {findings.map((f) => (
-              <option key={f.id} value={String(f.id)}>
-                #{f.number} {f.title}
-              </option>
-            ))}
+            <FindingOptions findings={findings} />
           </select>
         </div>
       )}

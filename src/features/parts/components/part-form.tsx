@@ -12,7 +12,7 @@ import {
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { usePartForm } from '../hooks/use-part-form';
-import type { FindingChoice } from '../lib/finding-choice';
+import { FindingOptions, type FindingChoice } from '../../../components/finding-options';
 import { DeletePart } from './delete-part';
 import { RecapCaution } from './recap-caution';
 import { SameReferencePart } from './same-reference-part';
@@ -174,12 +174,7 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
         <Field label="Finding (optional)" error={errors.findingId?.message}>
           {(a) => (
             <select {...a} {...register('findingId')} className={inputClass}>
-              <option value="">Not tied to a finding</option>
-              {findings.map((f) => (
-                <option key={f.id} value={String(f.id)}>
-                  #{f.number} {f.title}
-                </option>
-              ))}
+              <FindingOptions findings={findings} />
             </select>
           )}
         </Field>

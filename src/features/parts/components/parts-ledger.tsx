@@ -16,7 +16,7 @@ import { partKeys } from '../api/keys';
 import { useParts } from '../api/get-parts';
 import { useUpdatePart, type PartPatch } from '../api/update-part';
 import { useCurrency } from '../hooks/use-currency';
-import type { FindingChoice } from '../lib/finding-choice';
+import type { FindingChoice } from '../../../components/finding-options';
 import { LedgerFilter } from './ledger-filter';
 import { partColumns } from './parts-columns';
 import { nextState } from './state-mark';
