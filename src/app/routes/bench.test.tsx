@@ -1,13 +1,12 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen } from '@testing-library/react';
+import { cleanup, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { NEXT_CURSOR_HEADER } from '../../../shared/schemas/pagination';
 import type { Restoration } from '../../../shared/schemas/restorations';
 import { fakeApi, ok } from '../../testing/fake-api';
+import { renderWithQueries } from '../../testing/render';
 import { BenchRoute } from './bench';
 
 afterEach(() => {
@@ -41,13 +40,7 @@ const set = (id: number, model: string): Restoration => ({
 });
 
 function showBench() {
-  const router = createMemoryRouter([{ path: '/', element: <BenchRoute /> }], { initialEntries: ['/'] });
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  render(
-    <QueryClientProvider client={client}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
+  renderWithQueries(<BenchRoute />);
 }
 
 describe('the bench in pages', () => {
