@@ -4,9 +4,9 @@ import { cleanup, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { NEXT_CURSOR_HEADER } from '../../../shared/schemas/pagination';
-import type { Restoration } from '../../../shared/schemas/restorations';
 import { fakeApi, ok } from '../../testing/fake-api';
 import { renderWithQueries } from '../../testing/render';
+import { makeRestoration } from '../../testing/restoration-fixtures';
 import { BenchRoute } from './bench';
 
 afterEach(() => {
@@ -15,29 +15,7 @@ afterEach(() => {
 });
 
 // Sets from the invented workshop.
-const set = (id: number, model: string): Restoration => ({
-  id,
-  make: 'Kestrel Wireless Co.',
-  model,
-  year: 1952,
-  serial: null,
-  equipmentKind: 'radio',
-  mainsSetting: null,
-  liveChassis: false,
-  symptoms: null,
-  conditionNotes: null,
-  workLevel: 'repair',
-  hiddenPartsOriginal: false,
-  story: null,
-  careNotes: null,
-  receivedOn: null,
-  stage: 'repair',
-  ownerName: null,
-  ownerEmail: null,
-  role: 'technician',
-  createdAt: '2026-11-01T09:00:00Z',
-  updatedAt: '2026-11-01T09:00:00Z',
-});
+const set = (id: number, model: string) => makeRestoration(id, { model });
 
 function showBench() {
   renderWithQueries(<BenchRoute />);

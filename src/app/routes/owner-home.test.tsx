@@ -18,6 +18,7 @@ import { RepairedFindings } from '../../features/owner/components/repaired-findi
 import type { TimelineEvent } from '../../../shared/schemas/events';
 import { fakeApi, ok } from '../../testing/fake-api';
 import { renderWithQueries } from '../../testing/render';
+import { makeRestoration } from '../../testing/restoration-fixtures';
 
 afterEach(() => {
   cleanup();
@@ -25,30 +26,15 @@ afterEach(() => {
 });
 
 // An invented set and family.
-const set = (id: number, overrides: Partial<Restoration> = {}): Restoration => ({
-  id,
-  make: 'Aldermoor',
-  model: 'Cantata',
-  year: 1954,
-  serial: null,
-  equipmentKind: 'radio',
-  mainsSetting: null,
-  liveChassis: false,
-  symptoms: null,
-  conditionNotes: null,
-  workLevel: 'repair',
-  hiddenPartsOriginal: false,
-  story: 'Bought by Grandad Ivo for the kitchen in 1955.',
-  careNotes: null,
-  receivedOn: null,
-  stage: 'repair',
-  ownerName: null,
-  ownerEmail: null,
-  role: 'owner',
-  createdAt: '2026-11-01T09:00:00Z',
-  updatedAt: '2026-11-01T09:00:00Z',
-  ...overrides,
-});
+const set = (id: number, overrides: Partial<Restoration> = {}) =>
+  makeRestoration(id, {
+    make: 'Aldermoor',
+    model: 'Cantata',
+    year: 1954,
+    story: 'Bought by Grandad Ivo for the kitchen in 1955.',
+    role: 'owner',
+    ...overrides,
+  });
 const photos = [
   makePhoto(1, {
     view: 'front',
