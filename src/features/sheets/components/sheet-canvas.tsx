@@ -1,24 +1,12 @@
 import { createContext, useContext, type ComponentType } from 'react';
-import type { Finding } from '../../../../shared/schemas/findings';
 import type { NewMark } from '../../../lib/new-mark';
+import type { PictureCanvasProps } from '../../../lib/picture-canvas';
 
 /** What the reference views ask of a picture canvas: the picture, its marks drawn as findings, and the callbacks. */
-export interface SheetCanvasProps {
-  imageUrl: string;
-  imageSize: { width: number; height: number };
-  items: readonly Finding[];
-  selectedId?: number;
-  focusId?: number;
-  /** A reader's canvas (no tools) zooms onto `focusId` too; otherwise it stays at Fit. */
-  focusWhenReading?: boolean;
-  canCreate: boolean;
-  canEdit: (finding: Finding) => boolean;
-  onSelect: (id: number | undefined) => void;
+export interface SheetCanvasProps extends PictureCanvasProps {
   onCreate(geometry: NewMark): Promise<number | undefined>;
   onMove(id: number, points: { x: number; y: number }[]): void;
   onDelete(id: number): void;
-  onImageError?: () => void;
-  label?: string;
 }
 
 const SheetCanvasContext = createContext<ComponentType<SheetCanvasProps> | undefined>(undefined);
