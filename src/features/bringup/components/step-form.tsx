@@ -14,6 +14,7 @@ import { lampLimitWords } from '../lib/inline-limits';
 import { emptyDraft, readDraft, usesLamp, type StepDraft } from '../lib/step-draft';
 import { FindingOptions, type FindingChoice } from '../../../components/finding-options';
 import { StepReadings } from './step-readings';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 const toNumber = (text: string) => (text.trim() === '' ? null : Number(text.replace(',', '.')));
 
@@ -83,11 +84,7 @@ export function StepForm({
             onChange={(e) => set({ supply: e.target.value as StepDraft['supply'] })}
             className={inputClass}
           >
-            {supplies.map((s) => (
-              <option key={s} value={s}>
-                {supplyLabels[s]}
-              </option>
-            ))}
+            <LabelledOptions values={supplies} labels={supplyLabels} />
           </select>
         </div>
         {lamp && text('lampWatts', 'Lamp (W)')}

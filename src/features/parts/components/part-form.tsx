@@ -17,6 +17,7 @@ import { DeletePart } from './delete-part';
 import { RecapCaution } from './recap-caution';
 import { SameReferencePart } from './same-reference-part';
 import { WarningsPreview } from './warnings-preview';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 export interface PartFormProps {
   restorationId: number;
@@ -66,22 +67,14 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
         <Field label="Action" error={errors.action?.message}>
           {(a) => (
             <select {...a} {...register('action')} className={inputClass}>
-              {partActions.map((v) => (
-                <option key={v} value={v}>
-                  {partActionLabels[v]}
-                </option>
-              ))}
+              <LabelledOptions values={partActions} labels={partActionLabels} />
             </select>
           )}
         </Field>
         <Field label="State" error={errors.state?.message}>
           {(a) => (
             <select {...a} {...register('state')} className={inputClass}>
-              {partStates.map((v) => (
-                <option key={v} value={v}>
-                  {partStateLabels[v]}
-                </option>
-              ))}
+              <LabelledOptions values={partStates} labels={partStateLabels} />
             </select>
           )}
         </Field>
@@ -125,11 +118,7 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
       >
         {(a) => (
           <select {...a} {...register('mainsPosition')} className={inputClass}>
-            {mainsPositions.map((v) => (
-              <option key={v} value={v}>
-                {mainsPositionLabels[v]}
-              </option>
-            ))}
+            <LabelledOptions values={mainsPositions} labels={mainsPositionLabels} />
           </select>
         )}
       </Field>
