@@ -23,15 +23,9 @@ export {
   hourIn,
   relativeTime,
 } from '../../shared/format';
-export type { FormatPlace } from '../../shared/format';
 
 /** The person's locale and time zone: the browser's own until the account carries its own. */
-let place: FormatPlace = {};
-
-/** Sets the locale and time zone dates are shown in (tests pin them; a future account setting would call it). */
-export function setPersonPlace(next: FormatPlace): void {
-  place = { ...next };
-}
+const place: FormatPlace = {};
 
 /** The person's time zone by name, as the server needs it for CSV dates ("Europe/London"). */
 export const personTimeZone = (): string => place.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone;

@@ -11,6 +11,12 @@ export interface Call {
   path: string;
   body: unknown;
 }
+/** A call with the URL the client asked for, `/api` included: for tests that name the request as it was sent. */
+export interface UrlCall {
+  method: string;
+  url: string;
+  body: unknown;
+}
 /** `headers`: response headers beyond the content type, such as a page's `X-Next-Cursor`. */
 export type Reply = { status: number; body?: unknown; headers?: Record<string, string> };
 
@@ -34,6 +40,8 @@ export function apiError(status: number, message: string, code: ApiErrorCode | u
   return { status, body: knownApiErrorSchema.parse({ error: { code, message } }) };
 }
 export const ok = (body: unknown): Reply => ({ status: 200, body });
+export const created = (body: unknown): Reply => ({ status: 201, body });
+export const noContent = (): Reply => ({ status: 204 });
 export const notFound = (): Reply => apiError(404, 'Not found.');
 
 /** A fetch Response for a reply (204 carries no body). */
@@ -49,11 +57,12 @@ export function toResponse(reply: Reply): Response {
 /**
  * Stands in for the API behind `fetch`: `answer` gets each call (path without /api) and returns the reply (or a
  * ready Response), or nothing for the server's 404. Every call and its headers are recorded so tests can check what
- * was sent. Successful answers meet the client's schema check (src/lib/api-client.ts), so a fake cannot drift from
+ * was sent (`calls` by path, `urlCalls` by the URL requested). Successful answers meet the client's schema check (src/lib/api-client.ts), so a fake cannot drift from
  * the contract.
  */
 export function fakeApi(answer: (call: Call) => Reply | Response | undefined | Promise<Reply | Response | undefined>) {
   const calls: Call[] = [];
+  const urlCalls: UrlCall[] = [];
   /** The request headers of each call, in the same order as `calls`. */
   const headers: Record<string, string>[] = [];
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
@@ -63,10 +72,11 @@ export function fakeApi(answer: (call: Call) => Reply | Response | undefined | P
       body: typeof init.body === 'string' ? (JSON.parse(init.body) as unknown) : undefined,
     };
     calls.push(call);
+    urlCalls.push({ method: call.method, url: String(input), body: call.body });
     headers.push(Object.fromEntries([...new Headers(init.headers).entries()].map(([k, v]) => [k.toLowerCase(), v])));
     const reply = await answer(call);
     return reply instanceof Response ? reply : toResponse(reply ?? notFound());
   });
   vi.stubGlobal('fetch', fetchMock);
-  return { calls, headers, fetchMock };
+  return { calls, urlCalls, headers, fetchMock };
 }

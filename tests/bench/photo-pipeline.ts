@@ -5,16 +5,13 @@
  * 2. the server's peak RSS during 8 concurrent uploads (goal < 600 MB).
  * Run: npx tsx tests/bench/photo-pipeline.ts
  */
-import { spawn } from 'node:child_process';
 import { readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
 import { DISPLAY_PX, PHONE_PX, THUMB_PX } from '../../server/features/photos/photo-pipeline';
-import { TEST_ORIGIN } from '../support/test-app';
-import { startTestCluster } from '../support/test-cluster';
+import { againstBareSharp, median, startBenchServer, timed } from './upload-bench';
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 const peakRssMb = (pid: number) =>
   Number(/VmHWM:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'))![1]) / 1024;
 
@@ -53,49 +50,17 @@ async function bareSharp(file: string) {
   ]);
 }
 
-const cluster = await startTestCluster();
-const child = spawn('node_modules/.bin/tsx', ['tests/bench/photo-bench-server.ts'], {
-  env: {
-    ...process.env,
-    GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl,
-    AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
-  },
-  stdio: ['ignore', 'pipe', 'inherit'],
-});
+const server = await startBenchServer();
 try {
-  const info = await new Promise<{ port: number; cookie: string; restorationId: number }>((resolve) =>
-    child.stdout!.once('data', (d) => resolve(JSON.parse(String(d)))),
-  );
+  const child = server.child;
   const serverPid = Number(
     readFileSync(`/proc/${child.pid}/task/${child.pid}/children`, 'utf8').trim().split(/\s+/)[0] || child.pid,
   );
   const file = path.join(os.tmpdir(), 'gridleak-bench-6000x4000.jpg');
   const jpeg = await photoLikeJpeg(file);
-  const upload = async () => {
-    const form = new FormData();
-    form.set('view', 'underside');
-    form.set('file', new Blob([new Uint8Array(jpeg)], { type: 'image/jpeg' }), 'bench.jpg');
-    const res = await fetch(`http://127.0.0.1:${info.port}/api/restorations/${info.restorationId}/photos`, {
-      method: 'POST',
-      body: form,
-      headers: { Cookie: info.cookie, Origin: TEST_ORIGIN },
-    });
-    if (res.status !== 201) throw new Error(`upload answered ${res.status}: ${await res.text()}`);
-    await res.arrayBuffer();
-  };
-  const timed = async (fn: () => Promise<void>) => {
-    const start = performance.now();
-    await fn();
-    return performance.now() - start;
-  };
-  await upload(); // warm-up: first-use costs (module loading, connections)
-  await bareSharp(file);
-  const api: number[] = [];
-  const bare: number[] = [];
-  for (let i = 0; i < 5; i++) {
-    bare.push(await timed(() => bareSharp(file)));
-    api.push(await timed(upload));
-  }
+  const photo = new Blob([new Uint8Array(jpeg)], { type: 'image/jpeg' });
+  const upload = () => server.upload('photos', { view: 'underside' }, photo, 'bench.jpg');
+  const { api, bare } = await againstBareSharp(upload, () => bareSharp(file));
   const before = peakRssMb(serverPid);
   const burst = await timed(() => Promise.all(Array.from({ length: 8 }, upload)).then(() => undefined));
   const peak = peakRssMb(serverPid);
@@ -111,7 +76,5 @@ try {
     `  8 concurrent uploads: ${(burst / 1000).toFixed(1)} s; server peak RSS ${peak.toFixed(0)} MB (${before.toFixed(0)} MB before; goal < 600 MB)`,
   );
 } finally {
-  child.kill('SIGTERM');
-  await new Promise((r) => child.once('exit', r));
-  cluster.stop();
+  await server.stop();
 }

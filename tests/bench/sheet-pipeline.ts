@@ -5,20 +5,17 @@
  * same run. Goal < 1.3×.
  * Run: npx tsx tests/bench/sheet-pipeline.ts
  */
-import { spawn } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
 import { DISPLAY_PX, THUMB_PX } from '../../server/features/photos/photo-pipeline';
 import { SHEET_LARGE_PX } from '../../server/features/sheets/sheet-ingest';
-import { TEST_ORIGIN } from '../support/test-app';
-import { startTestCluster } from '../support/test-cluster';
+import { againstBareSharp, median, startBenchServer } from './upload-bench';
 
 // A3 is 420 × 297 mm (ISO 216); at 300 dpi (25.4 mm to the inch) that is 4,961 × 3,508 px.
 const W = 4961;
 const H = 3508;
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 
 /** A diagram-like scan: white paper with a light grain, thin lines, boxes and small print. */
 async function a3Scan(file: string) {
@@ -68,46 +65,15 @@ async function bareSharp(file: string) {
   await sharp(display).resize({ width: THUMB_PX, height: THUMB_PX, fit: 'inside' }).webp({ quality: 75 }).toBuffer();
 }
 
-const cluster = await startTestCluster();
-const child = spawn('node_modules/.bin/tsx', ['tests/bench/photo-bench-server.ts'], {
-  env: {
-    ...process.env,
-    GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl,
-    AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
-  },
-  stdio: ['ignore', 'pipe', 'inherit'],
-});
+const server = await startBenchServer();
 try {
-  const info = await new Promise<{ port: number; cookie: string; restorationId: number }>((resolve) =>
-    child.stdout!.once('data', (d) => resolve(JSON.parse(String(d)))),
-  );
   const file = path.join(os.tmpdir(), 'gridleak-bench-a3-300dpi.png');
   const png = await a3Scan(file);
-  const upload = async () => {
-    const form = new FormData();
-    form.set('kind', 'circuit-diagram');
-    form.set('file', new Blob([new Uint8Array(png)], { type: 'image/png' }), 'a3.png');
-    const res = await fetch(`http://127.0.0.1:${info.port}/api/restorations/${info.restorationId}/sheets`, {
-      method: 'POST',
-      body: form,
-      headers: { Cookie: info.cookie, Origin: TEST_ORIGIN },
-    });
-    if (res.status !== 201) throw new Error(`upload answered ${res.status}: ${await res.text()}`);
-    await res.arrayBuffer();
-  };
-  const timed = async (fn: () => Promise<void>) => {
-    const start = performance.now();
-    await fn();
-    return performance.now() - start;
-  };
-  await upload(); // warm-up: first-use costs (module loading, connections)
-  await bareSharp(file);
-  const api: number[] = [];
-  const bare: number[] = [];
-  for (let i = 0; i < 5; i++) {
-    bare.push(await timed(() => bareSharp(file)));
-    api.push(await timed(upload));
-  }
+  const scan = new Blob([new Uint8Array(png)], { type: 'image/png' });
+  const { api, bare } = await againstBareSharp(
+    () => server.upload('sheets', { kind: 'circuit-diagram' }, scan, 'a3.png'),
+    () => bareSharp(file),
+  );
   console.log(
     `\nsheet pipeline, ${(png.length / 1024 / 1024).toFixed(1)} MB ${W}×${H} PNG (A3 at 300 dpi), medians of 5 on this machine (${os.cpus().length} cores, load average ${os.loadavg()[0]!.toFixed(1)}):`,
   );
@@ -117,7 +83,5 @@ try {
   console.log(`  upload through the API until ready to view:                  ${median(api).toFixed(0)} ms`);
   console.log(`  ratio: ${(median(api) / median(bare)).toFixed(2)}× (goal < 1.3×)`);
 } finally {
-  child.kill('SIGTERM');
-  await new Promise((r) => child.once('exit', r));
-  cluster.stop();
+  await server.stop();
 }

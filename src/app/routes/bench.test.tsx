@@ -1,13 +1,12 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen } from '@testing-library/react';
+import { cleanup, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { NEXT_CURSOR_HEADER } from '../../../shared/schemas/pagination';
-import type { Restoration } from '../../../shared/schemas/restorations';
 import { fakeApi, ok } from '../../testing/fake-api';
+import { renderWithQueries } from '../../testing/render';
+import { makeRestoration } from '../../testing/restoration-fixtures';
 import { BenchRoute } from './bench';
 
 afterEach(() => {
@@ -16,38 +15,10 @@ afterEach(() => {
 });
 
 // Sets from the invented workshop.
-const set = (id: number, model: string): Restoration => ({
-  id,
-  make: 'Kestrel Wireless Co.',
-  model,
-  year: 1952,
-  serial: null,
-  equipmentKind: 'radio',
-  mainsSetting: null,
-  liveChassis: false,
-  symptoms: null,
-  conditionNotes: null,
-  workLevel: 'repair',
-  hiddenPartsOriginal: false,
-  story: null,
-  careNotes: null,
-  receivedOn: null,
-  stage: 'repair',
-  ownerName: null,
-  ownerEmail: null,
-  role: 'technician',
-  createdAt: '2026-11-01T09:00:00Z',
-  updatedAt: '2026-11-01T09:00:00Z',
-});
+const set = (id: number, model: string) => makeRestoration(id, { model });
 
 function showBench() {
-  const router = createMemoryRouter([{ path: '/', element: <BenchRoute /> }], { initialEntries: ['/'] });
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  render(
-    <QueryClientProvider client={client}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
+  renderWithQueries(<BenchRoute />);
 }
 
 describe('the bench in pages', () => {

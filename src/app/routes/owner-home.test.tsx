@@ -1,9 +1,8 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen, within } from '@testing-library/react';
+import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, RouterProvider, useSearchParams } from 'react-router';
+import { useSearchParams } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Finding } from '../../../shared/schemas/findings';
 import type { Restoration } from '../../../shared/schemas/restorations';
@@ -17,7 +16,9 @@ import { OwnerSet } from '../../features/owner/components/owner-set';
 import { OwnerSetCard } from '../../features/owner/components/owner-set-card';
 import { RepairedFindings } from '../../features/owner/components/repaired-findings';
 import type { TimelineEvent } from '../../../shared/schemas/events';
-import { testQueryClient } from '../../testing/render';
+import { fakeApi, ok } from '../../testing/fake-api';
+import { renderWithQueries } from '../../testing/render';
+import { makeRestoration } from '../../testing/restoration-fixtures';
 
 afterEach(() => {
   cleanup();
@@ -25,30 +26,15 @@ afterEach(() => {
 });
 
 // An invented set and family.
-const set = (id: number, overrides: Partial<Restoration> = {}): Restoration => ({
-  id,
-  make: 'Aldermoor',
-  model: 'Cantata',
-  year: 1954,
-  serial: null,
-  equipmentKind: 'radio',
-  mainsSetting: null,
-  liveChassis: false,
-  symptoms: null,
-  conditionNotes: null,
-  workLevel: 'repair',
-  hiddenPartsOriginal: false,
-  story: 'Bought by Grandad Ivo for the kitchen in 1955.',
-  careNotes: null,
-  receivedOn: null,
-  stage: 'repair',
-  ownerName: null,
-  ownerEmail: null,
-  role: 'owner',
-  createdAt: '2026-11-01T09:00:00Z',
-  updatedAt: '2026-11-01T09:00:00Z',
-  ...overrides,
-});
+const set = (id: number, overrides: Partial<Restoration> = {}) =>
+  makeRestoration(id, {
+    make: 'Aldermoor',
+    model: 'Cantata',
+    year: 1954,
+    story: 'Bought by Grandad Ivo for the kitchen in 1955.',
+    role: 'owner',
+    ...overrides,
+  });
 const photos = [
   makePhoto(1, {
     view: 'front',
@@ -101,13 +87,7 @@ const event = {
 
 /** Composes the page the way the /home route does, with the photos and findings given and the timeline fetched. */
 function showHome(sets: Restoration[], path = '/home') {
-  vi.stubGlobal(
-    'fetch',
-    vi.fn(
-      async () =>
-        new Response(JSON.stringify([event]), { status: 200, headers: { 'Content-Type': 'application/json' } }),
-    ),
-  );
+  fakeApi(() => ok([event]));
   const renderSet = (r: Restoration) => (
     <OwnerSet
       restoration={r}
@@ -132,13 +112,7 @@ function showHome(sets: Restoration[], path = '/home') {
       />
     );
   };
-  const router = createMemoryRouter([{ path: '/home', Component: Page }], { initialEntries: [path] });
-  const client = testQueryClient();
-  render(
-    <QueryClientProvider client={client}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
+  renderWithQueries(<Page />, { path });
 }
 
 describe("owner's home", () => {

@@ -5,13 +5,9 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { NewFindingForm } from '../../features/markup/components/new-finding-form';
 import { FindingPanel } from '../../features/findings/components/finding-panel';
-import {
-  fakeApi,
-  makeFinding,
-  members,
-  ok,
-  renderWithApp,
-} from '../../features/findings/components/findings-test-support';
+import { fakeApi, ok } from '../../testing/fake-api';
+import { makeFinding, members } from '../../testing/finding-fixtures';
+import { renderWithQueries } from '../../testing/render';
 import { SameReferenceFinding } from '../../features/findings/components/same-reference-finding';
 
 afterEach(() => {
@@ -37,7 +33,7 @@ describe('a second finding for the same reference', () => {
         ? ok([makeFinding(52, { number: 9, componentRef: 'C27' }), first, makeFinding(41, { componentRef: 'R20' })])
         : undefined,
     );
-    renderWithApp(<Form />);
+    renderWithQueries(<Form />);
     const user = userEvent.setup();
     await user.type(screen.getByLabelText('Component reference'), 'c27');
     const link = await screen.findByRole('link', { name: 'Open #3' });
@@ -57,7 +53,7 @@ describe('a second finding for the same reference', () => {
       if (method === 'PATCH' && path === `/findings/${edited.id}`) return ok({ ...edited, ...(body as object) });
       return undefined;
     });
-    renderWithApp(<FindingPanel finding={edited} role="technician" meId={1} restorationId={7} members={members} />);
+    renderWithQueries(<FindingPanel finding={edited} role="technician" meId={1} restorationId={7} members={members} />);
     const user = userEvent.setup();
     const field = screen.getByLabelText('Component');
     await user.clear(field);

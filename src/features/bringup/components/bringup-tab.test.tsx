@@ -6,15 +6,13 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { intakeItems, prePowerItems, prePowerMissing, type Bringup } from '../../../../shared/schemas/bringup';
 import type { Role } from '../../../../shared/permissions';
 import { BringupTab } from './bringup-tab';
+import { apiError, fakeApi, ok } from '../../../testing/fake-api';
 import { renderWithQueries } from '../../../testing/render';
 
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
 });
-
-const json = (status: number, body: unknown) =>
-  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
 function record(status: 'done' | null, signed = false): Bringup {
   const items = prePowerItems.map((item) => ({ item, status, reason: '', checkedBy: status ? 'Ada Bench' : null }));
@@ -38,23 +36,12 @@ function record(status: 'done' | null, signed = false): Bringup {
 }
 
 /** Stands in for the bring-up API; records every call. */
-function fakeApi(initial: Bringup | { status: number; message: string }) {
-  const calls: { method: string; url: string; body: unknown }[] = [];
-  vi.stubGlobal(
-    'fetch',
-    vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
-      const method = init.method ?? 'GET';
-      calls.push({
-        method,
-        url: String(input),
-        body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined,
-      });
-      if ('status' in initial) return json(initial.status, { error: { code: 'x', message: initial.message } });
-      if (method === 'POST' && String(input).endsWith('/sign-off')) return json(200, record('done', true));
-      return json(200, initial);
-    }),
-  );
-  return calls;
+function fakeBringupApi(initial: Bringup | { status: number; message: string }) {
+  return fakeApi(({ method, path }) => {
+    if ('status' in initial) return apiError(initial.status, initial.message);
+    if (method === 'POST' && path.endsWith('/sign-off')) return ok(record('done', true));
+    return ok(initial);
+  }).urlCalls;
 }
 
 const renderTab = (role: Role) =>
@@ -62,7 +49,7 @@ const renderTab = (role: Role) =>
 
 describe('BringupTab', () => {
   it('when it loads, then it says so; when loading fails, then the error shows with a way to try again', async () => {
-    fakeApi({ status: 500, message: 'The database is asleep.' });
+    fakeBringupApi({ status: 500, message: 'The database is asleep.' });
     renderTab('technician');
     expect(screen.getByRole('status')).toHaveTextContent(/Fetching the bring-up record/);
     expect(await screen.findByRole('alert')).toHaveTextContent('The database is asleep.');
@@ -70,7 +57,7 @@ describe('BringupTab', () => {
   });
 
   it('when nothing is marked, then the sign-off waits, no step can be logged, and the empty log says what goes there', async () => {
-    fakeApi(record(null));
+    fakeBringupApi(record(null));
     renderTab('technician');
     expect(await screen.findByRole('button', { name: 'Sign off the pre-power checklist' })).toBeDisabled();
     expect(screen.getByText(/Not signed off/)).toBeInTheDocument();
@@ -83,7 +70,7 @@ describe('BringupTab', () => {
   });
 
   it('when a technician marks an item waived, then the reason is asked for before it can be saved', async () => {
-    const calls = fakeApi(record(null));
+    const calls = fakeBringupApi(record(null));
     const user = userEvent.setup();
     renderTab('technician');
     const row = await screen.findByRole('group', { name: 'Discharge method at hand' });
@@ -101,7 +88,7 @@ describe('BringupTab', () => {
   });
 
   it('when every item is marked, then the technician signs off and the step form appears', async () => {
-    fakeApi(record('done'));
+    fakeBringupApi(record('done'));
     const user = userEvent.setup();
     renderTab('technician');
     await user.click(await screen.findByRole('button', { name: 'Sign off the pre-power checklist' }));
@@ -110,12 +97,12 @@ describe('BringupTab', () => {
   });
 
   it('when an owner or a mentor reads it, then nothing can be changed or signed; the owner reads it in plain words', async () => {
-    fakeApi(record('done', true));
+    fakeBringupApi(record('done', true));
     renderTab('owner');
     expect(await screen.findByText(/The mains voltage setting matches the local supply: done/)).toBeInTheDocument();
     expect(screen.queryByRole('button')).toBeNull();
     cleanup();
-    fakeApi(record(null));
+    fakeBringupApi(record(null));
     renderTab('mentor');
     expect(await screen.findByText(/Mains tap matched to the local mains: not yet/)).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Sign off/ })).toBeNull();

@@ -1,7 +1,8 @@
 import { can, type Role } from '../../../../shared/permissions';
 import { ErrorState, Loading } from '../../../components/states';
 import { useBringup } from '../api/get-bringup';
-import type { FindingChoice, PhotoChoice } from '../lib/choices';
+import type { PhotoChoice } from '../lib/choices';
+import type { FindingChoice } from '../../../components/finding-options';
 import { IntakeChecklist } from './intake-checklist';
 import { PowerUpCaution } from './power-cautions';
 import { PowerUpLog } from './power-up-log';

@@ -1,6 +1,7 @@
 import { intakeItemWords, type Bringup } from '../../../../shared/schemas/bringup';
 import { useSaveIntakeCheck } from '../api/save-intake-check';
-import type { FindingChoice, PhotoChoice } from '../lib/choices';
+import type { PhotoChoice } from '../lib/choices';
+import type { FindingChoice } from '../../../components/finding-options';
 import { IntakeItemRow } from './intake-item-row';
 
 export interface IntakeChecklistProps {

@@ -2,7 +2,8 @@ import { useState } from 'react';
 import { intakeItemWords, type Bringup, type IntakeCheckInput } from '../../../../shared/schemas/bringup';
 import { Button } from '../../../components/button';
 import { inputClass } from '../../../components/field';
-import type { FindingChoice, PhotoChoice } from '../lib/choices';
+import type { PhotoChoice } from '../lib/choices';
+import { FindingOptions, type FindingChoice } from '../../../components/finding-options';
 
 type Item = Bringup['intake'][number];
 
@@ -70,12 +71,7 @@ export function IntakeItemRow({ value, findings, photos, saving, error, onSave }
             onChange={(e) => setFindingId(e.target.value ? Number(e.target.value) : null)}
             className={inputClass}
           >
-            <option value="">None</option>
-            {findings.map((f) => (
-              <option key={f.id} value={f.id}>
-                #{f.number} {f.title}
-              </option>
-            ))}
+            <FindingOptions findings={findings} none="None" />
           </select>
         </div>
         <div>

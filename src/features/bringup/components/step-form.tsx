@@ -12,8 +12,9 @@ import { inputClass } from '../../../components/field';
 import { useAddBringupStep } from '../api/add-bringup-step';
 import { lampLimitWords } from '../lib/inline-limits';
 import { emptyDraft, readDraft, usesLamp, type StepDraft } from '../lib/step-draft';
-import type { FindingChoice } from '../lib/choices';
+import { FindingOptions, type FindingChoice } from '../../../components/finding-options';
 import { StepReadings } from './step-readings';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 const toNumber = (text: string) => (text.trim() === '' ? null : Number(text.replace(',', '.')));
 
@@ -83,11 +84,7 @@ export function StepForm({
             onChange={(e) => set({ supply: e.target.value as StepDraft['supply'] })}
             className={inputClass}
           >
-            {supplies.map((s) => (
-              <option key={s} value={s}>
-                {supplyLabels[s]}
-              </option>
-            ))}
+            <LabelledOptions values={supplies} labels={supplyLabels} />
           </select>
         </div>
         {lamp && text('lampWatts', 'Lamp (W)')}
@@ -145,12 +142,7 @@ export function StepForm({
             onChange={(e) => set({ findingId: e.target.value })}
             className={inputClass}
           >
-            <option value="">Not tied to a finding</option>
-            {findings.map((f) => (
-              <option key={f.id} value={String(f.id)}>
-                #{f.number} {f.title}
-              </option>
-            ))}
+            <FindingOptions findings={findings} />
           </select>
         </div>
       )}

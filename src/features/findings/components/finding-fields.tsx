@@ -13,6 +13,7 @@ import { InlineTextField } from './inline-text-field';
 import { SameReferenceFinding } from './same-reference-finding';
 import { SeverityMark, StatusMark } from '../../../components/status-mark';
 import { StatusButtons } from './status-buttons';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 /**
  * What a person who may change the finding edits: each field saves on its own. A reference another finding
@@ -41,11 +42,7 @@ export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (
               onChange={(e) => onSave({ kind: e.target.value as Finding['kind'] })}
               className={inputClass}
             >
-              {kinds.map((k) => (
-                <option key={k} value={k}>
-                  {kindLabels[k]}
-                </option>
-              ))}
+              <LabelledOptions values={kinds} labels={kindLabels} />
             </select>
           )}
         </Field>
@@ -65,11 +62,7 @@ export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (
             onChange={(e) => onSave({ severity: e.target.value as Finding['severity'] })}
             className={inputClass}
           >
-            {severities.map((s) => (
-              <option key={s} value={s}>
-                {severityLabels[s]}
-              </option>
-            ))}
+            <LabelledOptions values={severities} labels={severityLabels} />
           </select>
         )}
       </Field>

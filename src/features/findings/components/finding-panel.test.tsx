@@ -6,7 +6,9 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Finding } from '../../../../shared/schemas/findings';
 import { findingKeys } from '../../../lib/queries/finding-keys';
 import { FindingPanel } from './finding-panel';
-import { fakeApi, makeFinding, members, ok, refuse, renderWithApp, type Reply } from './findings-test-support';
+import { fakeApi, ok, type Reply, apiError } from '../../../testing/fake-api';
+import { makeFinding, members } from '../../../testing/finding-fixtures';
+import { renderWithQueries } from '../../../testing/render';
 import { Thread } from './thread';
 
 afterEach(() => {
@@ -45,7 +47,7 @@ function photoApi(finding: Finding, reply: (body: Partial<Finding>) => Reply) {
 }
 
 async function renderPanel(finding: Finding, role: 'technician' | 'mentor' | 'owner', meId = 1) {
-  const view = renderWithApp(
+  const view = renderWithQueries(
     <FindingPanel finding={finding} role={role} meId={meId} restorationId={7} members={members} />,
   );
   await waitFor(() => expect(view.client.getQueryData(findingKeys.photo(finding.photoId))).toBeDefined());
@@ -55,7 +57,7 @@ async function renderPanel(finding: Finding, role: 'technician' | 'mentor' | 'ow
 describe('finding panel', () => {
   it('when a technician picks a status the server refuses, then it shows at once, then rolls back with the server’s words', async () => {
     const finding = makeFinding(4, { title: 'Wax capacitor by the output valve', componentRef: 'C15b' });
-    const api = photoApi(finding, () => refuse(403, 'Only a technician changes a finding someone else placed.'));
+    const api = photoApi(finding, () => apiError(403, 'Only a technician changes a finding someone else placed.'));
     await renderPanel(finding, 'technician');
     const user = userEvent.setup();
 
@@ -157,7 +159,7 @@ describe('finding panel', () => {
   it('when an owner opens a shared finding, then there are no edit controls, and the thread offers no internal choice', async () => {
     const finding = makeFinding(4, { ownerVisible: true, componentRef: 'V3', kind: 'overheated', severity: 'fault' });
     const api = photoApi(finding, () => ok(finding));
-    renderWithApp(
+    renderWithQueries(
       <>
         <FindingPanel finding={finding} role="owner" meId={3} restorationId={7} members={members} />
         <Thread finding={finding} role="owner" meId={3} members={members} />
@@ -217,7 +219,7 @@ describe('finding panel', () => {
     const finding = makeFinding(4);
     const api = photoApi(finding, () => ok(finding));
     const onDeleted = vi.fn();
-    const view = renderWithApp(
+    const view = renderWithQueries(
       <FindingPanel
         finding={finding}
         role="technician"

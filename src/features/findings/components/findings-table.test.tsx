@@ -5,7 +5,9 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Finding } from '../../../../shared/schemas/findings';
 import { FindingsTable } from './findings-table';
-import { fakeApi, makeFinding, ok, refuse, renderWithApp } from './findings-test-support';
+import { fakeApi, ok, apiError } from '../../../testing/fake-api';
+import { makeFinding } from '../../../testing/finding-fixtures';
+import { renderWithQueries } from '../../../testing/render';
 
 afterEach(() => {
   cleanup();
@@ -58,11 +60,14 @@ function renderTable(list: Finding[] | 'fail' = findings) {
   fakeApi(({ path }) =>
     path === '/restorations/7/findings'
       ? list === 'fail'
-        ? refuse(500, 'The notebook is not answering.')
+        ? apiError(500, 'The notebook is not answering.')
         : ok(list)
       : undefined,
   );
-  return renderWithApp(<FindingsTable restorationId={7} photos={photos} />);
+  return renderWithQueries(<FindingsTable restorationId={7} photos={photos} />, {
+    path: '/restorations/7/findings',
+    showLocation: true,
+  });
 }
 
 const table = () => screen.getByRole('table');

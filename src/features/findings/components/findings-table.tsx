@@ -11,6 +11,7 @@ import { useMemo, useState, type MouseEvent } from 'react';
 import { useNavigate } from 'react-router';
 import { findingPath, type Finding } from '../../../../shared/schemas/findings';
 import { Button } from '../../../components/button';
+import { ariaSortOf, SortButton } from '../../../components/sort-button';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
 import { useRestorationFindings } from '../../../lib/queries/get-restoration-findings';
 import { FindingCards } from './finding-cards';
@@ -24,8 +25,6 @@ export interface FindingsTableProps {
 
 const none: Finding[] = [];
 const findingsCount = (n: number) => (n === 1 ? '1 finding' : `${n} findings`);
-const ariaSort = { asc: 'ascending', desc: 'descending' } as const;
-const arrow = { asc: '▲', desc: '▼' } as const;
 
 /** Every finding on a restoration: sortable, filterable, each row opening the finding on its photo. */
 export function FindingsTable({ restorationId, photos }: FindingsTableProps) {
@@ -96,28 +95,16 @@ export function FindingsTable({ restorationId, photos }: FindingsTableProps) {
               <thead className="border-b border-rule bg-sunken">
                 {table.getHeaderGroups().map((group) => (
                   <tr key={group.id}>
-                    {group.headers.map((header) => {
-                      const sorted = header.column.getIsSorted();
-                      return (
-                        <th
-                          key={header.id}
-                          scope="col"
-                          aria-sort={sorted ? ariaSort[sorted] : 'none'}
-                          className="px-2 py-1 font-semibold"
-                        >
-                          <button
-                            type="button"
-                            onClick={header.column.getToggleSortingHandler()}
-                            className="inline-flex min-h-11 items-center gap-1 rounded px-1 hover:bg-panel"
-                          >
-                            {flexRender(header.column.columnDef.header, header.getContext())}
-                            <span aria-hidden="true" className={sorted ? 'text-glow-strong' : 'text-ink-soft/50'}>
-                              {sorted ? arrow[sorted] : '↕'}
-                            </span>
-                          </button>
-                        </th>
-                      );
-                    })}
+                    {group.headers.map((header) => (
+                      <th
+                        key={header.id}
+                        scope="col"
+                        aria-sort={ariaSortOf(header.column)}
+                        className="px-2 py-1 font-semibold"
+                      >
+                        <SortButton header={header} />
+                      </th>
+                    ))}
                   </tr>
                 ))}
               </thead>

@@ -5,7 +5,8 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { OpenQuestion } from '../../../../shared/schemas/findings';
 import type { Notification } from '../../../../shared/schemas/notifications';
-import { fakeApi, ok, renderWithApp } from './findings-test-support';
+import { fakeApi, ok } from '../../../testing/fake-api';
+import { renderWithQueries } from '../../../testing/render';
 import { NotificationsMenu } from './notifications-menu';
 import { OpenQuestions } from './open-questions';
 
@@ -36,7 +37,7 @@ describe('notifications menu', () => {
       if (method === 'POST' && path === '/notifications/read') return { status: 204 };
       return undefined;
     });
-    renderWithApp(<NotificationsMenu />, '/');
+    renderWithQueries(<NotificationsMenu />, { showLocation: true });
     const user = userEvent.setup();
     const button = await screen.findByRole('button', { name: 'Notifications, 2 unread' });
     expect(button).toHaveAttribute('aria-expanded', 'false');
@@ -59,7 +60,7 @@ describe('notifications menu', () => {
       if (method === 'POST') return { status: 204 };
       return undefined;
     });
-    renderWithApp(<NotificationsMenu />, '/');
+    renderWithQueries(<NotificationsMenu />, { showLocation: true });
     const user = userEvent.setup();
     const button = await screen.findByRole('button', { name: 'Notifications, 1 unread' });
     await user.click(button);
@@ -74,7 +75,7 @@ describe('notifications menu', () => {
 
   it('when nothing is unread, then the button is simply "Notifications" and the list says nothing is new', async () => {
     fakeApi(({ path }) => (path === '/notifications?limit=50' ? ok([]) : undefined));
-    renderWithApp(<NotificationsMenu />, '/');
+    renderWithQueries(<NotificationsMenu />, { showLocation: true });
     await userEvent.setup().click(await screen.findByRole('button', { name: 'Notifications' }));
     expect(await screen.findByText('Nothing new.')).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Mark all read' })).toBeDisabled();
@@ -95,7 +96,7 @@ const question: OpenQuestion = {
 describe('open questions', () => {
   it('when questions are open, then each links to its finding with the set, number, reference and when it was asked', async () => {
     fakeApi(({ path }) => (path === '/questions' ? ok([question]) : undefined));
-    renderWithApp(<OpenQuestions />, '/');
+    renderWithQueries(<OpenQuestions />);
     expect(await screen.findByRole('heading', { name: 'Questions waiting for you' })).toBeInTheDocument();
     const link = screen.getByRole('link');
     expect(link).toHaveAttribute('href', '/restorations/7/photos/3/findings/41');
@@ -106,7 +107,7 @@ describe('open questions', () => {
 
   it('when no question is open, then nothing is drawn', async () => {
     const api = fakeApi(({ path }) => (path === '/questions' ? ok([]) : undefined));
-    const { container } = renderWithApp(<OpenQuestions />, '/');
+    const { container } = renderWithQueries(<OpenQuestions />);
     await waitFor(() => expect(api.fetchMock).toHaveBeenCalled());
     expect(screen.queryByRole('heading')).not.toBeInTheDocument();
     expect(container.querySelector('section')).toBeNull();

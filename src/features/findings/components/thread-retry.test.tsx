@@ -4,8 +4,9 @@ import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Comment } from '../../../../shared/schemas/comments';
-import { apiError } from '../../../testing/fake-api';
-import { fakeApi, makeComment, makeFinding, members, ok, renderWithApp, type Reply } from './findings-test-support';
+import { type Reply, apiError, fakeApi, ok } from '../../../testing/fake-api';
+import { makeComment, makeFinding, members } from '../../../testing/finding-fixtures';
+import { renderWithQueries } from '../../../testing/render';
 import { Thread } from './thread';
 
 afterEach(() => {
@@ -40,7 +41,7 @@ describe('posting a comment again', () => {
         throw new TypeError('Failed to fetch');
       },
     ]);
-    renderWithApp(<Thread finding={makeFinding(1)} role="technician" meId={1} members={members} />);
+    renderWithQueries(<Thread finding={makeFinding(1)} role="technician" meId={1} members={members} />);
     await screen.findByText('No comments yet');
     await send('Reflowed the tag strip');
     await waitFor(() => expect(api.postKeys()).toHaveLength(2), { timeout: 4000 });
@@ -51,7 +52,7 @@ describe('posting a comment again', () => {
 
   it('when the same text is sent again after an error, then the key is reused; a new comment gets a new key', async () => {
     const api = postsAnswered([() => apiError(503, 'We could not send the e-mail just now, so nothing was saved.')]);
-    renderWithApp(<Thread finding={makeFinding(1)} role="technician" meId={1} members={members} />);
+    renderWithQueries(<Thread finding={makeFinding(1)} role="technician" meId={1} members={members} />);
     await screen.findByText('No comments yet');
     await send('HT is 262 V at C30');
     await screen.findByText(/nothing was saved/);

@@ -4,7 +4,9 @@ import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Comment } from '../../../../shared/schemas/comments';
-import { fakeApi, makeComment, makeFinding, members, ok, renderWithApp } from './findings-test-support';
+import { fakeApi, ok } from '../../../testing/fake-api';
+import { makeComment, makeFinding, members } from '../../../testing/finding-fixtures';
+import { renderWithQueries } from '../../../testing/render';
 import { Thread } from './thread';
 
 afterEach(() => {
@@ -46,7 +48,7 @@ describe('thread', () => {
         editedAt: '2026-11-20T11:05:00.000Z',
       }),
     ]);
-    renderWithApp(<Thread finding={finding} role="technician" meId={1} members={members} />);
+    renderWithQueries(<Thread finding={finding} role="technician" meId={1} members={members} />);
 
     const items = within(await screen.findByRole('list')).getAllByRole('listitem');
     expect(items).toHaveLength(3);
@@ -70,20 +72,20 @@ describe('thread', () => {
 
   it('when there are no comments, then it says so', async () => {
     threadApi([]);
-    renderWithApp(<Thread finding={finding} role="mentor" meId={2} members={members} />);
+    renderWithQueries(<Thread finding={finding} role="mentor" meId={2} members={members} />);
     expect(await screen.findByText('No comments yet')).toBeInTheDocument();
   });
 
   it('when a comment carries a script link, then it stays plain text', async () => {
     threadApi([makeComment(1, { body: 'javascript:alert(1) and <b>bold</b>' })]);
-    renderWithApp(<Thread finding={finding} role="technician" meId={1} members={members} />);
+    renderWithQueries(<Thread finding={finding} role="technician" meId={1} members={members} />);
     expect(await screen.findByText('javascript:alert(1) and <b>bold</b>')).toBeInTheDocument();
     expect(screen.queryByRole('link')).not.toBeInTheDocument();
   });
 
   it('when a mentor reads the thread, then they edit only their own comments and delete none of the others', async () => {
     threadApi([makeComment(1, { authorId: 1 }), makeComment(2, { authorId: 2, authorName: 'Teodor Brask' })]);
-    renderWithApp(<Thread finding={finding} role="mentor" meId={2} members={members} />);
+    renderWithQueries(<Thread finding={finding} role="mentor" meId={2} members={members} />);
     await screen.findByText('Comment 1');
     expect(screen.getAllByRole('button', { name: /^Edit comment/ }).map((b) => b.getAttribute('aria-label'))).toEqual([
       'Edit comment by Teodor Brask',
@@ -95,7 +97,7 @@ describe('thread', () => {
 
   it('when a technician deletes someone else’s comment, then it is confirmed first and sent', async () => {
     const api = threadApi([makeComment(2, { authorId: 2, authorName: 'Teodor Brask' })]);
-    renderWithApp(<Thread finding={finding} role="technician" meId={1} members={members} />);
+    renderWithQueries(<Thread finding={finding} role="technician" meId={1} members={members} />);
     const user = userEvent.setup();
     await user.click(await screen.findByRole('button', { name: 'Delete comment by Teodor Brask' }));
     const asked = await screen.findByRole('dialog', { name: 'Delete this comment?' });
@@ -105,7 +107,7 @@ describe('thread', () => {
 
   it('when a technician types @ and picks a member with the keyboard, then Ctrl+Enter sends an internal comment by default', async () => {
     const api = threadApi([]);
-    renderWithApp(<Thread finding={finding} role="technician" meId={1} members={members} />);
+    renderWithQueries(<Thread finding={finding} role="technician" meId={1} members={members} />);
     const user = userEvent.setup();
     const box = await screen.findByRole('textbox', { name: 'Add a comment' });
     expect(screen.getByRole('radio', { name: /Internal \(technicians and mentors only\)/ })).toBeChecked();
@@ -134,7 +136,7 @@ describe('thread', () => {
 
   it('when a technician chooses to share and Escape closes the mention list, then the comment goes out shared', async () => {
     const api = threadApi([]);
-    renderWithApp(<Thread finding={finding} role="technician" meId={1} members={members} />);
+    renderWithQueries(<Thread finding={finding} role="technician" meId={1} members={members} />);
     const user = userEvent.setup();
     await user.click(await screen.findByRole('radio', { name: 'Shared with the owner' }));
     const box = screen.getByRole('textbox', { name: 'Add a comment' });

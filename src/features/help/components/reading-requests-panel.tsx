@@ -11,6 +11,7 @@ import { usePhotos } from '../../../lib/queries/get-photos';
 import { useAnswerReadingRequest, useAskForReading, useReadingRequests } from '../api/reading-requests';
 import { AnswerForm } from './answer-form';
 import { ReadingRequestItem } from './reading-request-item';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 /** Requests for readings: a mentor asks for something specific; the technician answers on the set. */
 export function ReadingRequestsPanel({
@@ -45,11 +46,7 @@ export function ReadingRequestsPanel({
           <label className="text-sm">
             Ask for
             <select className={inputClass} value={kind} onChange={(e) => setKind(e.target.value as ReadingRequestKind)}>
-              {readingRequestKinds.map((k) => (
-                <option key={k} value={k}>
-                  {readingRequestKindLabels[k]}
-                </option>
-              ))}
+              <LabelledOptions values={readingRequestKinds} labels={readingRequestKindLabels} />
             </select>
           </label>
           <label className="text-sm">

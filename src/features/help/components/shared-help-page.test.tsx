@@ -1,9 +1,9 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen } from '@testing-library/react';
+import { cleanup, fireEvent, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fakeApi, notFound, ok } from '../../../testing/fake-api';
+import { renderWithQueries } from '../../../testing/render';
 import type { SharedHelp } from '../api/get-shared-help';
 import { SharedHelpPage } from './shared-help-page';
 
@@ -100,12 +100,7 @@ const help: SharedHelp = {
   mismatches: [{ id: 6, ref: 'C27', line: 'C27: different value fitted; the diagram says 22nF; the chassis has 47nF' }],
   replies: [],
 };
-const show = () =>
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <SharedHelpPage token="abc" />
-    </QueryClientProvider>,
-  );
+const show = () => renderWithQueries(<SharedHelpPage token="abc" />, { router: false });
 
 describe('the shared help page', () => {
   it('when the link works, then it shows the chart with its verdict and meter, and the pin at its spot', async () => {

@@ -1,9 +1,9 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
+import { cleanup, fireEvent, screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fakeApi, ok } from '../../../testing/fake-api';
+import { renderWithQueries } from '../../../testing/render';
 import { SymptomChecklist } from './symptom-checklist';
 
 // The causes and their order are the checklist data's (shared/bench/symptoms, from TRADE.md §5).
@@ -13,11 +13,7 @@ afterEach(() => {
 });
 
 const show = (canEdit: boolean) =>
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <SymptomChecklist restorationId={9} canEdit={canEdit} />
-    </QueryClientProvider>,
-  );
+  renderWithQueries(<SymptomChecklist restorationId={9} canEdit={canEdit} />, { router: false });
 
 describe('the symptom checklist', () => {
   it('when a symptom is chosen, then its causes are listed in order with their tests, and a powered test carries the cautions', async () => {

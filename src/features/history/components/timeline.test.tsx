@@ -104,6 +104,28 @@ describe('timeline', () => {
     expect(screen.getByText(/^Finding opened/)).toBeInTheDocument();
   });
 
+  it('when readings were judged out against a tolerance and against a limit, then one chip names both', async () => {
+    const user = userEvent.setup();
+    const outs = [
+      makeEvent(7, {
+        kind: 'measurement-out',
+        at: '2026-11-25T12:00:00.000Z',
+        summary: 'Over its limit: ESR at C26, over the 800 mΩ maximum',
+      }),
+      makeEvent(6, {
+        kind: 'measurement-out',
+        at: '2026-11-25T11:00:00.000Z',
+        summary: 'Out of tolerance: DC voltage at V5 pin 7, 28 % over',
+      }),
+    ];
+    await showTimeline([...outs, ...events]);
+    const chips = screen.getByRole('group', { name: 'Show events of these kinds' });
+    await user.click(within(chips).getByRole('button', { name: 'Readings outside tolerance or limit 2' }));
+    expect(screen.getByText('Showing 2 of 7 events')).toBeInTheDocument();
+    expect(screen.getByText(/^Over its limit: ESR at C26/)).toBeInTheDocument();
+    expect(screen.queryByText(/^Photo added/)).not.toBeInTheDocument();
+  });
+
   it('when nothing has happened, then it says so', async () => {
     fakeJsonApi({ '/restorations/7/events': [] });
     renderWithQueries(<Timeline restorationId={7} />);

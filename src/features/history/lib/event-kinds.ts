@@ -1,6 +1,14 @@
+import { readingKinds } from '../../../../shared/bench';
 import { timelineKinds, type TimelineEvent } from '../../../../shared/schemas/events';
 
 type Kind = TimelineEvent['kind'];
+
+/**
+ * What a reading judged out broke, from the kinds of reading: a band's tolerance, or a limit (an ESR's maximum, an
+ * insulation's minimum, or a band's when "max"/"min" is typed as its tolerance).
+ */
+const rules = Object.values(readingKinds).map((k) => k.rule.type);
+const judgedAgainst = [...(rules.includes('band') ? ['tolerance'] : []), 'limit'];
 
 /** The chip's words for each kind of event, in the order the chips are shown. */
 export const eventKindLabels: Record<Kind, string> = {
@@ -11,7 +19,7 @@ export const eventKindLabels: Record<Kind, string> = {
   'question-resolved': 'Answers',
   'part-fitted': 'Parts fitted',
   'stage-changed': 'Stages',
-  'measurement-out': 'Readings out of tolerance',
+  'measurement-out': `Readings outside ${judgedAgainst.join(' or ')}`,
   'safety-test': 'Safety tests',
   'safety-override': 'Safety overrides',
   'soak-session': 'Soak runs',

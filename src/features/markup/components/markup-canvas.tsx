@@ -1,5 +1,4 @@
 import { useEffect, useMemo, useRef, useState, type RefObject } from 'react';
-import type { Finding } from '../../../../shared/schemas/findings';
 import { useCanvasPointer } from '../hooks/use-canvas-pointer';
 import { useContainerSize } from '../hooks/use-container-size';
 import { useCrosshair } from '../hooks/use-crosshair';
@@ -11,6 +10,7 @@ import { usePixelRatio } from '../hooks/use-pixel-ratio';
 import { useRevealPending } from '../hooks/use-reveal-pending';
 import { useView } from '../hooks/use-view';
 import type { NewMark } from '../../../lib/new-mark';
+import type { PictureCanvasProps } from '../../../lib/picture-canvas';
 import { ZOOM_STEP } from '../lib/zoom';
 import { imagePoint } from '../model/coordinates';
 import { bounds, toGeometry } from '../model/geometry';
@@ -22,27 +22,11 @@ import { MarkupLegend } from './markup-legend';
 import { MarkupStage } from './markup-stage';
 import { ShortcutHelp } from './shortcut-help';
 
-export interface MarkupCanvasProps extends CommandCallbacks {
-  imageUrl: string;
-  /** The upright photo's size in px: image space. */
-  imageSize: { width: number; height: number };
-  items: readonly Finding[];
-  selectedId?: number;
-  /** Zoom onto this finding when it is set (opening a finding's URL, picking it from a list). */
-  focusId?: number;
-  /** A reader's canvas (no tools) zooms onto `focusId` too, as the reference view does; otherwise it stays at Fit. */
-  focusWhenReading?: boolean;
-  canCreate: boolean;
-  canEdit: (finding: Finding) => boolean;
-  onSelect: (id: number | undefined) => void;
+export interface MarkupCanvasProps extends PictureCanvasProps, CommandCallbacks {
   /** A new mark waiting for its title, drawn dashed until the page creates or drops it. */
   pendingMark?: NewMark;
-  /** The display image failed to load (its presigned URL may have expired). */
-  onImageError?: () => void;
   /** The photo has loaded (or failed) and the frame with it and the marks is on screen. */
   onFirstFrame?: () => void;
-  /** Names the photo for screen readers. */
-  label?: string;
   /** What may cover the photo while a new mark waits (the phone's bottom sheet): the mark is panned clear of it. */
   pendingCover?: RefObject<HTMLElement | null>;
 }

@@ -6,6 +6,7 @@ import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { newFindingDefaults, newFindingSchema, type NewFindingValues } from '../lib/new-finding';
 import { toolLabels } from '../lib/tool-labels';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 /** Asks for the words of a mark just drawn; the mark waits on the photo, dashed, until it is saved or cancelled. */
 export function NewFindingForm({
@@ -74,22 +75,14 @@ export function NewFindingForm({
         <Field label="Kind">
           {(a) => (
             <select {...a} {...register('kind')} className={inputClass}>
-              {kinds.map((k) => (
-                <option key={k} value={k}>
-                  {kindLabels[k]}
-                </option>
-              ))}
+              <LabelledOptions values={kinds} labels={kindLabels} />
             </select>
           )}
         </Field>
         <Field label="Severity">
           {(a) => (
             <select {...a} {...register('severity')} className={inputClass}>
-              {severities.map((s) => (
-                <option key={s} value={s}>
-                  {severityLabels[s]}
-                </option>
-              ))}
+              <LabelledOptions values={severities} labels={severityLabels} />
             </select>
           )}
         </Field>

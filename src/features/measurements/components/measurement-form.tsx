@@ -8,12 +8,7 @@ import { useReadingForm } from '../hooks/use-reading-form';
 import { LiveReadingsNote } from './live-readings-note';
 import { MeterLoadingFields } from './meter-loading-fields';
 import { VerdictPreviewPanel } from './verdict-preview-panel';
-
-export interface FindingChoice {
-  id: number;
-  number: number;
-  title: string;
-}
+import { FindingOptions, type FindingChoice } from '../../../components/finding-options';
 
 const valueInput = `${inputClass} font-mono`;
 const typed = { autoComplete: 'off', autoCorrect: 'off', spellCheck: false } as const;
@@ -141,12 +136,7 @@ export function MeasurementForm({
           <Field label="Finding (optional)" error={errorOf('findingId')}>
             {(a) => (
               <select {...a} {...register('findingId')} className={inputClass}>
-                <option value="">Not tied to a finding</option>
-                {findings.map((f) => (
-                  <option key={f.id} value={String(f.id)}>
-                    #{f.number} {f.title}
-                  </option>
-                ))}
+                <FindingOptions findings={findings} />
               </select>
             )}
           </Field>

@@ -2,7 +2,8 @@ import { useState } from 'react';
 import { can, type Role } from '../../../../shared/permissions';
 import type { Measurement } from '../../../../shared/schemas/measurements';
 import { EmptyState } from '../../../components/states';
-import { MeasurementForm, type FindingChoice } from './measurement-form';
+import { MeasurementForm } from './measurement-form';
+import type { FindingChoice } from '../../../components/finding-options';
 import { MeasurementRow } from './measurement-row';
 
 const heads = [

@@ -1,7 +1,8 @@
 import { can, type Role } from '../../../../shared/permissions';
 import { ErrorState, Loading } from '../../../components/states';
 import { useMeasurements } from '../api/get-measurements';
-import { MeasurementForm, type FindingChoice } from './measurement-form';
+import { MeasurementForm } from './measurement-form';
+import type { FindingChoice } from '../../../components/finding-options';
 import { MeasurementsTable } from './measurements-table';
 import { ValveLineUp } from './valve-line-up';
 import { VoltageChart } from './voltage-chart';

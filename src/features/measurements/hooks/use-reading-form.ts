@@ -6,6 +6,7 @@ import { useCreateMeasurement } from '../api/create-measurement';
 import { useUpdateMeasurement } from '../api/update-measurement';
 import { applicableFields, applicableTexts, readingKinds } from '../../../../shared/bench';
 import { fieldOfMessage, previewVerdict, type ReadingField } from '../lib/verdict-preview';
+import { inputOf } from '../lib/measurement-input';
 
 // The API's own rules, with the finding link as a select gives it (a string; '' for none).
 const formSchema = measurementInputSchema.extend({
@@ -32,20 +33,8 @@ const blank: ReadingFormValues = {
 };
 
 const valuesOf = (m: Measurement): ReadingFormValues => ({
-  location: m.location,
-  quantity: m.quantity,
-  expected: m.expectedText,
-  tolerance: m.toleranceText,
-  rating: m.ratingText,
-  reading: m.readingText,
-  conditions: m.conditions,
-  method: m.method,
-  chartMeter: m.chartMeterText,
-  meter: m.meterText,
-  source: m.sourceText,
+  ...inputOf(m),
   findingId: m.findingId === null ? '' : String(m.findingId),
-  ownerVisible: m.ownerVisible,
-  powerOn: m.powerOn,
 });
 
 /**

@@ -71,4 +71,29 @@ describe('the plot', () => {
       'Voltage chart, 1 point: 1 within. None out of tolerance.',
     );
   });
+
+  it('names a point judged against a limit ("max" or "min" typed as its tolerance) as over or under it, not out of tolerance', () => {
+    // A rectifier's HT typed as a maximum: 320 V against at most 250 V is over the limit (common practice, no source).
+    const overMax = makeMeasurement(7, {
+      location: 'HT line',
+      quantity: 'dc-voltage',
+      expected: '250 V',
+      tolerance: 'max',
+      reading: '320 V',
+    });
+    expect(plotSummary(voltagePoints([...fivePoints(), overMax]))).toBe(
+      'Voltage chart, 6 points: 4 within, 2 out. Out of tolerance: V5 pin 7 reads 320 V against 250 V ±10 %. ' +
+        'Over its limit: HT line reads 320 V against 250 V max.',
+    );
+    const underMin = makeMeasurement(8, {
+      location: 'V1 pin 6',
+      quantity: 'dc-voltage',
+      expected: '80 V',
+      tolerance: 'min',
+      reading: '92 V',
+    });
+    expect(plotSummary(voltagePoints([volts(1, 'V5 pin 9', '250 V', '255 V'), underMin]))).toBe(
+      'Voltage chart, 2 points: 2 within. None out of tolerance or under its minimum.',
+    );
+  });
 });

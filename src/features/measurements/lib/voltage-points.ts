@@ -1,4 +1,4 @@
-import { DEFAULT_TOLERANCE, parseTolerance } from '../../../../shared/bench';
+import { DEFAULT_TOLERANCE, limitOf, outHeadings, parseTolerance, type LimitKind } from '../../../../shared/bench';
 import type { Measurement } from '../../../../shared/schemas/measurements';
 import { formatTolerance } from './measurement-format';
 import { formatSignedQuantity } from '../../../lib/format';
@@ -28,6 +28,8 @@ export interface VoltagePoint {
   deviationPct: number | null;
   verdict: Verdict;
   reason: string;
+  /** What the point is judged against: a band about the expected value, or a limit ("max"/"min" typed as the tolerance). */
+  limit: LimitKind;
 }
 
 const isVoltage = (m: Measurement): m is Measurement & { quantity: VoltagePoint['quantity'] } =>
@@ -77,6 +79,7 @@ export function voltagePoints(measurements: readonly Measurement[]): VoltagePoin
       deviationPct: m.deviation === null ? null : m.deviation * 100,
       verdict: m.verdict,
       reason: m.verdictReason,
+      limit: limitOf(m.quantity, m.toleranceText),
     }))
     .sort(byLocation);
 }
@@ -117,9 +120,17 @@ export function plotSummary(points: readonly VoltagePoint[]): string {
   const head = `Voltage chart, ${points.length} ${points.length === 1 ? 'point' : 'points'}: ${counts}.`;
   const out = points.filter((p) => p.verdict === 'out');
   const marginal = points.filter((p) => p.verdict === 'marginal');
+  // Each point out is named under what it broke, in the history's words: out of tolerance, over or under its limit.
+  const limits = (Object.keys(outHeadings) as LimitKind[]).filter((l) => points.some((p) => p.limit === l));
+  const outUnder = limits
+    .map((l) => ({ heading: outHeadings[l], list: out.filter((p) => p.limit === l) }))
+    .filter(({ list }) => list.length > 0);
+  const none = limits.map((l) => outHeadings[l].toLowerCase()).join(' or ') || 'out of tolerance';
   const parts = [
     head,
-    out.length ? `Out of tolerance: ${out.map(describePoint).join('; ')}.` : 'None out of tolerance.',
+    ...(out.length
+      ? outUnder.map(({ heading, list }) => `${heading}: ${list.map(describePoint).join('; ')}.`)
+      : [`None ${none}.`]),
   ];
   if (marginal.length) parts.push(`Marginal: ${marginal.map(describePoint).join('; ')}.`);
   return parts.join(' ');

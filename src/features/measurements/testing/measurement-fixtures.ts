@@ -1,37 +1,37 @@
 import { measurementVerdict } from '../../../../shared/bench';
-import type { LineUp, Measurement, MeasurementInput } from '../../../../shared/schemas/measurements';
+import {
+  measurementInputSchema,
+  type LineUp,
+  type Measurement,
+  type MeasurementInput,
+} from '../../../../shared/schemas/measurements';
 
-/** A stored reading as the API answers it, judged by the same bench library the server uses. */
+/**
+ * A stored reading as the API answers it: what was sent, with the API's own defaults for what was not (the shared
+ * input schema), judged by the same bench library the server uses.
+ */
 export function makeMeasurement(
   id: number,
-  input: MeasurementInput & { findingId?: number | null },
+  sent: MeasurementInput & { findingId?: number | null },
   extra: Partial<Measurement> = {},
 ): Measurement {
-  const v = measurementVerdict({
-    quantity: input.quantity,
-    expected: input.expected,
-    tolerance: input.tolerance,
-    rating: input.rating,
-    reading: input.reading,
-    chartMeter: input.chartMeter,
-    meter: input.meter,
-    source: input.source,
-  });
+  const input = measurementInputSchema.parse(sent);
+  const v = measurementVerdict(input);
   return {
     id,
     restorationId: 7,
     findingId: input.findingId ?? null,
     location: input.location,
     quantity: input.quantity,
-    expectedText: input.expected ?? '',
-    toleranceText: input.tolerance ?? '',
-    ratingText: input.rating ?? '',
+    expectedText: input.expected,
+    toleranceText: input.tolerance,
+    ratingText: input.rating,
     readingText: input.reading,
-    conditions: input.conditions ?? '',
-    method: input.method ?? '',
-    chartMeterText: input.chartMeter ?? '',
-    meterText: input.meter ?? '',
-    sourceText: input.source ?? '',
+    conditions: input.conditions,
+    method: input.method,
+    chartMeterText: input.chartMeter,
+    meterText: input.meter,
+    sourceText: input.source,
     expected: v.expected,
     reading: v.reading,
     rating: v.rating,
@@ -39,8 +39,8 @@ export function makeMeasurement(
     deviation: v.deviation,
     verdict: v.verdict,
     verdictReason: v.reason,
-    ownerVisible: input.ownerVisible ?? false,
-    powerOn: input.powerOn ?? false,
+    ownerVisible: input.ownerVisible,
+    powerOn: input.powerOn,
     measuredBy: 'Ada Bench',
     measuredAt: new Date(Date.UTC(2026, 2, 1, 10, id)).toISOString(),
     ...extra,

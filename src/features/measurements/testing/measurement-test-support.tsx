@@ -1,20 +1,11 @@
 import { BenchInputError } from '../../../../shared/bench';
 import type { LineUp, Measurement, MeasurementInput } from '../../../../shared/schemas/measurements';
 import { makeMeasurement } from './measurement-fixtures';
-import { apiError, fakeApi, notFound, toResponse } from '../../../testing/fake-api';
+import { inputOf } from '../lib/measurement-input';
+import { apiError, fakeApi, ok } from '../../../testing/fake-api';
+import { fakeRows, idAtEnd } from '../../../testing/fake-rows';
 
-export interface Call {
-  method: string;
-  url: string;
-  body: unknown;
-}
-
-const json = (status: number, body: unknown) =>
-  new Response(body === undefined ? null : JSON.stringify(body), {
-    status,
-    headers: { 'Content-Type': 'application/json' },
-  });
-const refuse = (message: string) => toResponse(apiError(400, message));
+const refuse = (message: string) => apiError(400, message);
 
 /**
  * Stands in for the API behind `fetch`: readings are judged by the bench library as the server does (a value it
@@ -24,66 +15,38 @@ export function fakeReadingsApi(
   initial: Measurement[],
   { lineUp, refuseLocations = [] }: { lineUp?: LineUp; refuseLocations?: string[] } = {},
 ) {
-  let list = [...initial];
+  const readings = fakeRows<Measurement, MeasurementInput & { findingId?: number | null }>(initial, {
+    make: makeMeasurement,
+    remake: (m, change) => makeMeasurement(m.id, { ...inputOf(m), ...change }),
+  });
   let valves: LineUp = lineUp ?? { valves: [], liveChassis: { likely: false, reasons: [] } };
-  let nextId = 100;
-  const calls: Call[] = [];
-  const { fetchMock } = fakeApi(async ({ method, path, body }) => {
-    const url = `/api${path}`;
-    calls.push({ method, url, body });
-    const findingId = Number(/findingId=(\d+)/.exec(url)?.[1]);
-    if (/\/measurements(\?|$)/.test(url) && method === 'GET')
-      return json(200, findingId ? list.filter((m) => m.findingId === findingId) : list);
-    if (url.endsWith('/measurements') && method === 'POST') {
+  const api = fakeApi(({ method, path, body }) => {
+    const findingId = Number(/findingId=(\d+)/.exec(path)?.[1]);
+    if (/\/measurements(\?|$)/.test(path) && method === 'GET')
+      return ok(findingId ? readings.list().filter((m) => m.findingId === findingId) : readings.list());
+    if (path.endsWith('/measurements') && method === 'POST') {
       const input = body as MeasurementInput;
       if (refuseLocations.includes(input.location)) return refuse('Reading: the server would not take this one.');
       try {
-        const made = makeMeasurement(nextId++, input);
-        list = [...list, made];
-        return json(201, made);
+        return readings.add(input);
       } catch (error) {
         if (error instanceof BenchInputError) return refuse(error.message);
         throw error;
       }
     }
-    const id = Number(/\/api\/measurements\/(\d+)$/.exec(url)?.[1]);
-    if (method === 'PATCH') {
-      list = list.map((m) =>
-        m.id === id
-          ? makeMeasurement(id, {
-              location: m.location,
-              quantity: m.quantity,
-              expected: m.expectedText,
-              tolerance: m.toleranceText,
-              rating: m.ratingText,
-              reading: m.readingText,
-              conditions: m.conditions,
-              method: m.method,
-              findingId: m.findingId,
-              ownerVisible: m.ownerVisible,
-              ...(body as Partial<MeasurementInput>),
-            })
-          : m,
-      );
-      return json(
-        200,
-        list.find((m) => m.id === id),
-      );
-    }
-    if (method === 'DELETE') {
-      list = list.filter((m) => m.id !== id);
-      return new Response(null, { status: 204 });
-    }
-    if (url.endsWith('/valves') && method === 'GET') return json(200, valves);
-    if (url.endsWith('/valves') && method === 'PUT') {
+    if (/^\/measurements\/\d+$/.test(path) && method === 'PATCH')
+      return readings.change(idAtEnd(path), body as Partial<MeasurementInput>);
+    if (/^\/measurements\/\d+$/.test(path) && method === 'DELETE') return readings.remove(idAtEnd(path));
+    if (path.endsWith('/valves') && method === 'GET') return ok(valves);
+    if (path.endsWith('/valves') && method === 'PUT') {
       const series = (body as LineUp).valves.filter((v) => /^U/i.test(v.type));
       valves = {
         valves: (body as LineUp).valves,
         liveChassis: { likely: series.length > 0, reasons: series.map((v) => `${v.type}: series heater`) },
       };
-      return json(200, valves);
+      return ok(valves);
     }
-    return toResponse(notFound());
+    return undefined;
   });
-  return { calls, fetchMock };
+  return { calls: api.urlCalls, fetchMock: api.fetchMock };
 }

@@ -3,6 +3,7 @@ import type { Member } from '../../../../shared/schemas/members';
 import { useConfirm } from '../../../components/use-confirm';
 import { FormAlertInline } from './form-alert-inline';
 import { useChangeRole, useRemoveMember } from '../api/manage-members';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 export function MembersList({
   restorationId,
@@ -42,11 +43,7 @@ export function MembersList({
                   onChange={(e) => changeRole.mutate({ userId: m.userId, role: e.target.value as Role })}
                   className="min-h-11 rounded-lg border border-rule bg-panel px-2"
                 >
-                  {roles.map((r) => (
-                    <option key={r} value={r}>
-                      {roleLabels[r]}
-                    </option>
-                  ))}
+                  <LabelledOptions values={roles} labels={roleLabels} />
                 </select>
                 <button
                   type="button"

@@ -10,6 +10,7 @@ import { Button } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import { useCreateEstimate } from '../api/estimates';
 import { moneyText } from './money-text';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 type Kind = EstimateLineInput['kind'];
 interface Draft {
@@ -111,11 +112,7 @@ export function EstimateForm({
                 value={d.extra}
                 onChange={(ev) => set(i, { extra: ev.target.value as Draft['extra'] })}
               >
-                {estimateExtras.map((x) => (
-                  <option key={x} value={x}>
-                    {estimateExtraLabels[x]}
-                  </option>
-                ))}
+                <LabelledOptions values={estimateExtras} labels={estimateExtraLabels} />
               </select>
             )}
           </div>

@@ -1,11 +1,11 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen, waitFor, within } from '@testing-library/react';
+import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Invoice, InvoicePreview } from '../../../../shared/schemas/invoices';
 import { apiError, fakeApi, ok } from '../../../testing/fake-api';
+import { renderWithQueries } from '../../../testing/render';
 import { InvoicePanel } from './invoice-panel';
 
 afterEach(() => {
@@ -62,11 +62,7 @@ const final: Invoice = {
 };
 
 const renderPanel = (canEdit: boolean) =>
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <InvoicePanel restorationId={7} canEdit={canEdit} currency="GBP" />
-    </QueryClientProvider>,
-  );
+  renderWithQueries(<InvoicePanel restorationId={7} canEdit={canEdit} currency="GBP" />, { router: false });
 
 describe('InvoicePanel', () => {
   it('when the technician builds the final invoice, then it shows the lines, VAT and the deposit deducted, and issues after confirming', async () => {

@@ -4,6 +4,7 @@ import { inputClass } from '../../../components/field';
 import { useAddLabour } from '../api/labour';
 import { LabourTargetSelect, targetOf, type TargetValue } from './labour-target';
 import { calendarDay } from '../../../lib/format';
+import { LabourNoteFields } from './labour-note-fields';
 
 /** Hours as typed ("1.5", "0.25", "2") to whole minutes; null when it is no number of hours in a day. */
 export const typedMinutes = (text: string) => {
@@ -85,21 +86,7 @@ export function LabourEntryForm({ restorationId }: { restorationId: number }) {
         </label>
         <LabourTargetSelect restorationId={restorationId} id={ids.target} value={target} onChange={setTarget} />
       </div>
-      <div className="space-y-1">
-        <label htmlFor={ids.note} className="block font-semibold">
-          Note
-        </label>
-        <input
-          id={ids.note}
-          className={inputClass}
-          value={note}
-          maxLength={500}
-          onChange={(e) => setNote(e.target.value)}
-        />
-      </div>
-      <label className="flex min-h-11 items-center gap-2">
-        <input type="checkbox" checked={billable} onChange={(e) => setBillable(e.target.checked)} /> Billable
-      </label>
+      <LabourNoteFields noteId={ids.note} note={note} onNote={setNote} billable={billable} onBillable={setBillable} />
       <Button type="submit" disabled={add.isPending} className="sm:col-start-4 sm:justify-self-start">
         {add.isPending ? 'Adding…' : 'Add the hours'}
       </Button>

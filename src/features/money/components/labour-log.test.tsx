@@ -1,12 +1,11 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen, waitFor } from '@testing-library/react';
+import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { MemoryRouter } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { LabourLog as Log } from '../../../../shared/schemas/labour';
 import { apiError, fakeApi, ok } from '../../../testing/fake-api';
+import { renderWithQueries } from '../../../testing/render';
 import { LabourLog } from './labour-log';
 
 afterEach(() => {
@@ -32,14 +31,7 @@ const idle: Log = {
   week: [{ technician: 'Mara', minutes: 90, billableMinutes: 90 }],
 };
 
-const renderLog = () =>
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <MemoryRouter>
-        <LabourLog restorationId={7} />
-      </MemoryRouter>
-    </QueryClientProvider>,
-  );
+const renderLog = () => renderWithQueries(<LabourLog restorationId={7} />);
 
 describe('LabourLog', () => {
   it('when a timer is already running on the server, then a reload shows it running from its stored start, and stopping it posts the stop', async () => {

@@ -2,10 +2,10 @@ import { useEffect, useId, useState } from 'react';
 import { Link } from 'react-router';
 import type { LabourLog } from '../../../../shared/schemas/labour';
 import { Button } from '../../../components/button';
-import { inputClass } from '../../../components/field';
 import { useStartTimer, useStopTimer } from '../api/labour';
 import { clockText, LabourTargetSelect, targetOf, type TargetValue } from './labour-target';
 import { formatTimeOfDay } from '../../../lib/format';
+import { LabourNoteFields } from './labour-note-fields';
 
 /** Seconds since an instant, ticking once a second while shown. */
 function useElapsed(since: string | null): number {
@@ -79,21 +79,7 @@ export function LabourTimer({ restorationId, running }: { restorationId: number;
         </label>
         <LabourTargetSelect restorationId={restorationId} id={targetId} value={target} onChange={setTarget} />
       </div>
-      <div className="space-y-1">
-        <label htmlFor={noteId} className="block font-semibold">
-          Note
-        </label>
-        <input
-          id={noteId}
-          className={inputClass}
-          value={note}
-          maxLength={500}
-          onChange={(e) => setNote(e.target.value)}
-        />
-      </div>
-      <label className="flex min-h-11 items-center gap-2">
-        <input type="checkbox" checked={billable} onChange={(e) => setBillable(e.target.checked)} /> Billable
-      </label>
+      <LabourNoteFields noteId={noteId} note={note} onNote={setNote} billable={billable} onBillable={setBillable} />
       <Button type="submit" disabled={start.isPending}>
         {start.isPending ? 'Starting…' : 'Start the timer'}
       </Button>

@@ -1,13 +1,12 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen, waitFor } from '@testing-library/react';
+import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../shared/permissions';
 import type { Estimate, WorkshopSettings } from '../../../../shared/schemas/estimates';
-import { MemoryRouter } from 'react-router';
 import { apiError, fakeApi, ok, type Call, type Reply } from '../../../testing/fake-api';
+import { renderWithQueries } from '../../../testing/render';
 import { MoneyTab } from './money-tab';
 
 afterEach(() => {
@@ -67,14 +66,7 @@ const withEmptySections =
         ? ok({ entries: [], running: null, week: [] })
         : answer(c);
 
-const renderTab = (role: Role) =>
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <MemoryRouter>
-        <MoneyTab restorationId={7} role={role} />
-      </MemoryRouter>
-    </QueryClientProvider>,
-  );
+const renderTab = (role: Role) => renderWithQueries(<MoneyTab restorationId={7} role={role} />);
 
 describe('MoneyTab', () => {
   it('when the owner reads the latest estimate, then they approve it with their name and the version they read', async () => {

@@ -1,14 +1,13 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen, waitFor } from '@testing-library/react';
+import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../shared/permissions';
 import type { Invoice } from '../../../../shared/schemas/invoices';
 import type { Payment } from '../../../../shared/schemas/payments';
 import { apiError, fakeApi, ok } from '../../../testing/fake-api';
+import { renderWithQueries } from '../../../testing/render';
 import { PaymentsPanel } from './payments-panel';
 
 afterEach(() => {
@@ -55,16 +54,8 @@ const cardPayment: Payment = {
   createdAt: '2026-12-02T09:00:00.000Z',
 };
 
-const renderPanel = (role: Role, url = '/home?set=7') => {
-  const router = createMemoryRouter([{ path: '/home', element: <PaymentsPanel restorationId={7} role={role} /> }], {
-    initialEntries: [url],
-  });
-  return render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
-};
+const renderPanel = (role: Role, url = '/home?set=7') =>
+  renderWithQueries(<PaymentsPanel restorationId={7} role={role} />, { path: url });
 
 describe('PaymentsPanel', () => {
   it('when the owner has an open deposit, then Pay asks for a checkout and goes to the page it names', async () => {

@@ -7,6 +7,7 @@ import { Field, inputClass } from '../../../components/field';
 import { useSaveWorkshopSettings } from '../api/workshop-settings';
 import { moneyText } from './money-text';
 import { settingsFormSchema, toFormValues, toSettings, type SettingsFormValues } from './settings-form-values';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 /** Where each rounding rule comes from, stated beside the choice. */
 const roundingSources: Record<(typeof taxRoundings)[number], string> = {
@@ -79,11 +80,7 @@ export function WorkshopSettingsForm({ settings }: { settings: WorkshopSettings 
             <Field label="Rounding rule" hint={roundingSources[rounding]} error={errors.taxRounding?.message}>
               {(a) => (
                 <select {...a} {...register('taxRounding')} className={inputClass}>
-                  {taxRoundings.map((r) => (
-                    <option key={r} value={r}>
-                      {taxRoundingLabels[r]}
-                    </option>
-                  ))}
+                  <LabelledOptions values={taxRoundings} labels={taxRoundingLabels} />
                 </select>
               )}
             </Field>

@@ -2,6 +2,7 @@ import type { Column } from '@tanstack/react-table';
 import { useId } from 'react';
 import { partStateLabels, partStates, type Part } from '../../../../shared/schemas/parts';
 import { inputClass } from '../../../components/field';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 const count = (n: number) => (n === 1 ? '1 part' : `${n} parts`);
 
@@ -30,11 +31,7 @@ export function LedgerFilter({
           className={`${inputClass} w-auto`}
         >
           <option value="">All states</option>
-          {partStates.map((s) => (
-            <option key={s} value={s}>
-              {partStateLabels[s]}
-            </option>
-          ))}
+          <LabelledOptions values={partStates} labels={partStateLabels} />
         </select>
       </div>
       <p role="status" className="text-sm text-ink-soft">

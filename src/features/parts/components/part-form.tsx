@@ -12,11 +12,12 @@ import {
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { usePartForm } from '../hooks/use-part-form';
-import type { FindingChoice } from '../lib/finding-choice';
+import { FindingOptions, type FindingChoice } from '../../../components/finding-options';
 import { DeletePart } from './delete-part';
 import { RecapCaution } from './recap-caution';
 import { SameReferencePart } from './same-reference-part';
 import { WarningsPreview } from './warnings-preview';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 export interface PartFormProps {
   restorationId: number;
@@ -66,22 +67,14 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
         <Field label="Action" error={errors.action?.message}>
           {(a) => (
             <select {...a} {...register('action')} className={inputClass}>
-              {partActions.map((v) => (
-                <option key={v} value={v}>
-                  {partActionLabels[v]}
-                </option>
-              ))}
+              <LabelledOptions values={partActions} labels={partActionLabels} />
             </select>
           )}
         </Field>
         <Field label="State" error={errors.state?.message}>
           {(a) => (
             <select {...a} {...register('state')} className={inputClass}>
-              {partStates.map((v) => (
-                <option key={v} value={v}>
-                  {partStateLabels[v]}
-                </option>
-              ))}
+              <LabelledOptions values={partStates} labels={partStateLabels} />
             </select>
           )}
         </Field>
@@ -125,11 +118,7 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
       >
         {(a) => (
           <select {...a} {...register('mainsPosition')} className={inputClass}>
-            {mainsPositions.map((v) => (
-              <option key={v} value={v}>
-                {mainsPositionLabels[v]}
-              </option>
-            ))}
+            <LabelledOptions values={mainsPositions} labels={mainsPositionLabels} />
           </select>
         )}
       </Field>
@@ -174,12 +163,7 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
         <Field label="Finding (optional)" error={errors.findingId?.message}>
           {(a) => (
             <select {...a} {...register('findingId')} className={inputClass}>
-              <option value="">Not tied to a finding</option>
-              {findings.map((f) => (
-                <option key={f.id} value={String(f.id)}>
-                  #{f.number} {f.title}
-                </option>
-              ))}
+              <FindingOptions findings={findings} />
             </select>
           )}
         </Field>

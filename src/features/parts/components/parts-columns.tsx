@@ -1,6 +1,6 @@
 import { createColumnHelper, type FilterFn } from '@tanstack/react-table';
 import { mainsPositionLabels, partActionLabels, partStates, type Part } from '../../../../shared/schemas/parts';
-import type { FindingChoice } from '../lib/finding-choice';
+import type { FindingChoice } from '../../../components/finding-options';
 import { formatMinor, type Currency } from '../lib/money';
 import { byComponentRef } from '../../../lib/table-sorting';
 import { OnTheDiagramLink } from '../../../components/on-the-diagram-link';

@@ -12,11 +12,12 @@ import { useMemo, useState } from 'react';
 import { can, type Role } from '../../../../shared/permissions';
 import { partStateLabels, type Part } from '../../../../shared/schemas/parts';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
+import { ariaSortOf, SortButton } from '../../../components/sort-button';
 import { partKeys } from '../api/keys';
 import { useParts } from '../api/get-parts';
 import { useUpdatePart, type PartPatch } from '../api/update-part';
 import { useCurrency } from '../hooks/use-currency';
-import type { FindingChoice } from '../lib/finding-choice';
+import type { FindingChoice } from '../../../components/finding-options';
 import { LedgerFilter } from './ledger-filter';
 import { partColumns } from './parts-columns';
 import { nextState } from './state-mark';
@@ -32,8 +33,6 @@ export interface PartsLedgerProps {
 }
 
 const none: Part[] = [];
-const ariaSort = { asc: 'ascending', desc: 'descending' } as const;
-const arrow = { asc: '▲', desc: '▼' } as const;
 /** The reference stays in view while a narrow screen scrolls the rest of the row. */
 const REF = 'componentRef';
 const pinned = 'sticky left-0 z-10';
@@ -125,33 +124,22 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
             <thead className="border-b border-rule bg-sunken">
               {table.getHeaderGroups().map((group) => (
                 <tr key={group.id}>
-                  {group.headers.map((header) => {
-                    const sorted = header.column.getIsSorted();
-                    const label = flexRender(header.column.columnDef.header, header.getContext());
-                    return (
-                      <th
-                        key={header.id}
-                        scope="col"
-                        aria-sort={header.column.getCanSort() ? (sorted ? ariaSort[sorted] : 'none') : undefined}
-                        className={`px-2 py-1 align-bottom font-semibold ${header.column.id === REF ? `${pinned} bg-sunken` : ''}`}
-                      >
-                        {header.column.getCanSort() ? (
-                          <button
-                            type="button"
-                            onClick={header.column.getToggleSortingHandler()}
-                            className="inline-flex min-h-11 items-center gap-1 rounded px-1 hover:bg-panel"
-                          >
-                            {label}
-                            <span aria-hidden="true" className={sorted ? 'text-glow-strong' : 'text-ink-soft/50'}>
-                              {sorted ? arrow[sorted] : '↕'}
-                            </span>
-                          </button>
-                        ) : (
-                          <span className="inline-flex min-h-11 items-center px-1">{label}</span>
-                        )}
-                      </th>
-                    );
-                  })}
+                  {group.headers.map((header) => (
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={header.column.getCanSort() ? ariaSortOf(header.column) : undefined}
+                      className={`px-2 py-1 align-bottom font-semibold ${header.column.id === REF ? `${pinned} bg-sunken` : ''}`}
+                    >
+                      {header.column.getCanSort() ? (
+                        <SortButton header={header} />
+                      ) : (
+                        <span className="inline-flex min-h-11 items-center px-1">
+                          {flexRender(header.column.columnDef.header, header.getContext())}
+                        </span>
+                      )}
+                    </th>
+                  ))}
                 </tr>
               ))}
             </thead>

@@ -5,7 +5,7 @@ import { Button, buttonClass } from '../../../components/button';
 import { ErrorState, Loading } from '../../../components/states';
 import { partsCsvHref } from '../api/get-parts-csv';
 import { useParts } from '../api/get-parts';
-import type { FindingChoice } from '../lib/finding-choice';
+import type { FindingChoice } from '../../../components/finding-options';
 import { useCurrency } from '../hooks/use-currency';
 import { PartForm } from './part-form';
 import { PartsLedger } from './parts-ledger';

@@ -1,29 +1,22 @@
 import { partWarnings } from '../../../../shared/bench';
-import type { Part, PartInput } from '../../../../shared/schemas/parts';
+import { partInputSchema, type Part, type PartInput } from '../../../../shared/schemas/parts';
 
-/** A ledger line as the server answers it, warnings worked out by the bench library as the server does. */
+/**
+ * A ledger line as the server answers it: what was sent, with the API's own defaults for what was not (the shared
+ * input schema), warnings worked out by the bench library as the server does.
+ */
 export function makePart(
   id: number,
-  input: Partial<PartInput> & { componentRef: string },
+  sent: Partial<PartInput> & { componentRef: string },
   extra: Partial<Part> = {},
 ): Part {
+  const input = partInputSchema.parse(sent);
   const p = {
     id,
     restorationId: 7,
+    ...input,
     findingId: input.findingId ?? null,
-    componentRef: input.componentRef,
-    originalPart: input.originalPart ?? '',
-    originalRating: input.originalRating ?? '',
-    replacementPart: input.replacementPart ?? '',
-    replacementRating: input.replacementRating ?? '',
-    action: input.action ?? 'replaced',
-    state: input.state ?? 'planned',
-    mainsPosition: input.mainsPosition ?? 'none',
-    quantity: input.quantity ?? 1,
     costMinor: input.costMinor ?? null,
-    source: input.source ?? '',
-    testedAfter: input.testedAfter ?? '',
-    notes: input.notes ?? '',
     fittedAt: input.state === 'fitted' ? '2025-03-01T10:00:00.000Z' : null,
   };
   const goesIn = p.action === 'replaced' || p.action === 'restuffed';

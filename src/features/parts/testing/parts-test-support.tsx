@@ -1,18 +1,7 @@
 import type { Part, PartInput } from '../../../../shared/schemas/parts';
 import { makePart } from './part-fixtures';
-import { apiError, fakeApi, notFound, toResponse } from '../../../testing/fake-api';
-
-export interface Call {
-  method: string;
-  url: string;
-  body: unknown;
-}
-
-const json = (status: number, body: unknown) =>
-  new Response(body === undefined ? null : JSON.stringify(body), {
-    status,
-    headers: { 'Content-Type': 'application/json' },
-  });
+import { apiError, fakeApi, ok } from '../../../testing/fake-api';
+import { fakeRows, idAtEnd } from '../../../testing/fake-rows';
 
 /**
  * Stands in for the parts API behind `fetch`. `refuseChanges` answers every PATCH with that status and message;
@@ -26,37 +15,25 @@ export function fakePartsApi(
     currency = 'GBP',
   }: { refuseChanges?: { status: number; message: string }; holdChanges?: Promise<void>; currency?: string } = {},
 ) {
-  let list = [...initial];
-  let nextId = 100;
-  const calls: Call[] = [];
-  const { fetchMock } = fakeApi(async ({ method, path, body }) => {
-    const url = `/api${path}`;
-    calls.push({ method, url, body });
-    if (url.endsWith('/parts') && method === 'GET') return json(200, list);
+  const parts = fakeRows<Part, PartInput & { componentRef: string }>(initial, {
+    make: makePart,
+    remake: (part, change) => makePart(part.id, { ...part, ...change }),
+  });
+  const api = fakeApi(async ({ method, path, body }) => {
+    if (path.endsWith('/parts') && method === 'GET') return ok(parts.list());
     // The workshop's currency comes with the deployment's meta.
-    if (url.endsWith('/api/meta')) return json(200, { demo: false, devMail: false, demoAccounts: [], currency });
-    if (url.endsWith('/parts') && method === 'POST') {
-      const made = makePart(nextId++, body as PartInput & { componentRef: string });
-      list = [...list, made];
-      return json(201, made);
-    }
-    const id = Number(/\/api\/parts\/(\d+)$/.exec(url)?.[1]);
+    if (path === '/meta') return ok({ demo: false, devMail: false, demoAccounts: [], currency });
+    if (path.endsWith('/parts') && method === 'POST') return parts.add(body as PartInput & { componentRef: string });
+    if (!/^\/parts\/\d+$/.test(path)) return undefined;
     if (method === 'PATCH') {
       await holdChanges;
-      if (refuseChanges) return toResponse(apiError(refuseChanges.status, refuseChanges.message));
-      list = list.map((p) => (p.id === id ? makePart(id, { ...p, ...(body as Partial<PartInput>) }) : p));
-      return json(
-        200,
-        list.find((p) => p.id === id),
-      );
+      if (refuseChanges) return apiError(refuseChanges.status, refuseChanges.message);
+      return parts.change(idAtEnd(path), body as Partial<PartInput>);
     }
-    if (method === 'DELETE') {
-      list = list.filter((p) => p.id !== id);
-      return new Response(null, { status: 204 });
-    }
-    return toResponse(notFound());
+    if (method === 'DELETE') return parts.remove(idAtEnd(path));
+    return undefined;
   });
-  return { calls, fetchMock };
+  return { calls: api.urlCalls, fetchMock: api.fetchMock };
 }
 
 /** A promise and the function that settles it. */

@@ -15,6 +15,7 @@ import { useUpdatePhoto } from '../api/update-photo';
 import { CaptionForm } from './caption-form';
 import { DeletePhoto } from './delete-photo';
 import { ShareSwitch } from './share-switch';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 /** A technician's controls for one photo. Changes show at once and are put back if the server refuses them. */
 export function PhotoEditPanel({
@@ -45,11 +46,7 @@ export function PhotoEditPanel({
               onChange={(e) => save({ view: viewSchema.parse(e.target.value) })}
               className={inputClass}
             >
-              {views.map((v) => (
-                <option key={v} value={v}>
-                  {viewLabels[v]}
-                </option>
-              ))}
+              <LabelledOptions values={views} labels={viewLabels} />
             </select>
           )}
         </Field>
@@ -61,11 +58,7 @@ export function PhotoEditPanel({
               onChange={(e) => save({ phase: phaseSchema.parse(e.target.value) })}
               className={inputClass}
             >
-              {phases.map((p) => (
-                <option key={p} value={p}>
-                  {phaseLabels[p]}
-                </option>
-              ))}
+              <LabelledOptions values={phases} labels={phaseLabels} />
             </select>
           )}
         </Field>

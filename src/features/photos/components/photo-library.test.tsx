@@ -4,7 +4,8 @@ import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { makePhoto } from '../../../testing/photo-fixtures';
-import { fakePhotoApi, renderWithQueries } from '../testing/photo-test-support';
+import { fakePhotoApi } from '../testing/photo-test-support';
+import { renderWithQueries } from '../../../testing/render';
 import { PhotoLibrary } from './photo-library';
 
 afterEach(() => {

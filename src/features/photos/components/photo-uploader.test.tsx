@@ -4,7 +4,8 @@ import { act, cleanup, fireEvent, screen, waitFor, within } from '@testing-libra
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { makePhoto } from '../../../testing/photo-fixtures';
-import { fakePhotoApi, renderWithQueries } from '../testing/photo-test-support';
+import { fakePhotoApi } from '../testing/photo-test-support';
+import { renderWithQueries } from '../../../testing/render';
 import { PhotoLibrary } from './photo-library';
 import { apiError } from '../../../testing/fake-api';
 

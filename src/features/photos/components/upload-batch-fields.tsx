@@ -2,6 +2,7 @@ import type { UseFormReturn } from 'react-hook-form';
 import { phaseLabels, phases, viewLabels, views, type PhotoUploadFields } from '../../../../shared/schemas/photos';
 import { Field, inputClass } from '../../../components/field';
 import type { UploadFields } from '../api/upload-photo';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 export type BatchForm = UseFormReturn<PhotoUploadFields, unknown, UploadFields>;
 
@@ -15,22 +16,14 @@ export function UploadBatchFields({ form }: { form: BatchForm }) {
         <Field label="View">
           {(a) => (
             <select {...a} {...register('view')} className={inputClass}>
-              {views.map((v) => (
-                <option key={v} value={v}>
-                  {viewLabels[v]}
-                </option>
-              ))}
+              <LabelledOptions values={views} labels={viewLabels} />
             </select>
           )}
         </Field>
         <Field label="Phase">
           {(a) => (
             <select {...a} {...register('phase')} className={inputClass}>
-              {phases.map((p) => (
-                <option key={p} value={p}>
-                  {phaseLabels[p]}
-                </option>
-              ))}
+              <LabelledOptions values={phases} labels={phaseLabels} />
             </select>
           )}
         </Field>

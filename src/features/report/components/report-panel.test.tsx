@@ -5,16 +5,13 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../shared/permissions';
 import { ReportPanel } from './report-panel';
-import { apiError, notFound, toResponse } from '../../../testing/fake-api';
+import { apiError, fakeApi, ok, type Reply } from '../../../testing/fake-api';
 import { renderWithQueries } from '../../../testing/render';
 
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
 });
-
-const json = (status: number, body: unknown) =>
-  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
 const preview = (warnings: { code: string; message: string }[] = []) => ({
   recipients: [{ name: 'Oona Owner', email: 'owner@example.org' }],
@@ -27,17 +24,14 @@ const preview = (warnings: { code: string; message: string }[] = []) => ({
 });
 
 /** The preview and send endpoints behind `fetch`; the send answers with `answer`, held back until `release` is called. */
-function fakeSend(answer: () => Response, warnings: { code: string; message: string }[] = []) {
+function fakeSend(answer: () => Reply, warnings: { code: string; message: string }[] = []) {
   let release = () => {};
   const held = new Promise<void>((resolve) => (release = resolve));
-  const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
-    if (String(input) === '/api/restorations/7/report/preview' && !init.method) return json(200, preview(warnings));
+  const { fetchMock } = fakeApi(async ({ method, path }) => {
+    if (path === '/restorations/7/report/preview' && method === 'GET') return ok(preview(warnings));
     await held;
-    return String(input) === '/api/restorations/7/report/send' && init.method === 'POST'
-      ? answer()
-      : toResponse(notFound());
+    return path === '/restorations/7/report/send' && method === 'POST' ? answer() : undefined;
   });
-  vi.stubGlobal('fetch', fetchMock);
   return { fetchMock, release };
 }
 
@@ -45,7 +39,7 @@ const renderPanel = (role: Role) => renderWithQueries(<ReportPanel restorationId
 
 describe('report panel', () => {
   it('when a technician sends the report, then it shows it is sending, then who it was sent to', async () => {
-    const { fetchMock, release } = fakeSend(() => json(200, { sentTo: ['owner@example.org'] }));
+    const { fetchMock, release } = fakeSend(() => ok({ sentTo: ['owner@example.org'] }));
     const user = userEvent.setup();
     renderPanel('technician');
     await user.click(screen.getByRole('button', { name: 'E-mail it to the owner' }));
@@ -62,7 +56,7 @@ describe('report panel', () => {
 
   it('when there is no owner to send to (409), then the server’s message shows', async () => {
     const { release } = fakeSend(() =>
-      toResponse(apiError(409, 'No owner is on this restoration yet: invite them from the People tab first.')),
+      apiError(409, 'No owner is on this restoration yet: invite them from the People tab first.'),
     );
     release();
     const user = userEvent.setup();
@@ -76,7 +70,7 @@ describe('report panel', () => {
 
   it('when sending would be premature, then the preview lists the warnings and nothing is sent until "Send anyway"', async () => {
     const { fetchMock } = fakeSend(
-      () => json(200, { sentTo: ['owner@example.org'] }),
+      () => ok({ sentTo: ['owner@example.org'] }),
       [
         { code: 'no-passing-safety-test', message: 'No final safety test is recorded; the report says so.' },
         { code: 'no-soak', message: 'No soak run is recorded.' },

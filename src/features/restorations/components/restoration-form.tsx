@@ -10,6 +10,7 @@ import {
 } from '../../../../shared/schemas/restorations';
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 type FormInput = z.input<typeof restorationInputSchema>;
 type FormOutput = z.output<typeof restorationInputSchema>;
@@ -58,11 +59,7 @@ export function RestorationForm({
         <Field label="Kind of equipment" error={e.equipmentKind?.message}>
           {(a) => (
             <select {...a} {...register('equipmentKind')} className={inputClass}>
-              {equipmentKinds.map((k) => (
-                <option key={k} value={k}>
-                  {equipmentKindLabels[k]}
-                </option>
-              ))}
+              <LabelledOptions values={equipmentKinds} labels={equipmentKindLabels} />
             </select>
           )}
         </Field>
@@ -79,11 +76,7 @@ export function RestorationForm({
         <Field label="Agreed level of work" error={e.workLevel?.message}>
           {(a) => (
             <select {...a} {...register('workLevel')} className={inputClass}>
-              {workLevels.map((k) => (
-                <option key={k} value={k}>
-                  {workLevelLabels[k]}
-                </option>
-              ))}
+              <LabelledOptions values={workLevels} labels={workLevelLabels} />
             </select>
           )}
         </Field>

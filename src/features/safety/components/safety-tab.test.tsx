@@ -5,6 +5,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Role } from '../../../../shared/permissions';
 import type { SafetyStatus, SafetyTest, SoakLog } from '../../../../shared/schemas/safety';
 import { SafetyTab } from './safety-tab';
+import { fakeApi, ok } from '../../../testing/fake-api';
 import { renderWithQueries } from '../../../testing/render';
 
 afterEach(() => {
@@ -12,8 +13,6 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const json = (body: unknown) =>
-  new Response(JSON.stringify(body), { status: 200, headers: { 'Content-Type': 'application/json' } });
 const failed: SafetyTest = {
   id: 3,
   restorationId: 7,
@@ -57,10 +56,7 @@ const soak: SoakLog = {
 };
 
 function serve(status: SafetyStatus) {
-  vi.stubGlobal(
-    'fetch',
-    vi.fn(async (input: RequestInfo | URL) => (String(input).endsWith('/soak-sessions') ? json(soak) : json(status))),
-  );
+  fakeApi(({ path }) => (path.endsWith('/soak-sessions') ? ok(soak) : ok(status)));
 }
 const show = (role: Role) =>
   renderWithQueries(<SafetyTab restorationId={7} role={role} liveChassis={false} />, { router: false });

@@ -7,6 +7,7 @@ import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useRecordSafetyTest } from '../api/record-safety-test';
 import { LeadResistanceHelper } from './lead-resistance-helper';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 type Values = z.input<typeof safetyTestInputSchema>;
 type Output = z.output<typeof safetyTestInputSchema>;
@@ -141,11 +142,7 @@ export function SafetyTestForm({
       <Field label="Class of the set" error={errorOf('equipmentClass')}>
         {(a) => (
           <select {...a} {...register('equipmentClass')} className={inputClass}>
-            {equipmentClasses.map((c) => (
-              <option key={c} value={c}>
-                {equipmentClassLabels[c]}
-              </option>
-            ))}
+            <LabelledOptions values={equipmentClasses} labels={equipmentClassLabels} />
           </select>
         )}
       </Field>

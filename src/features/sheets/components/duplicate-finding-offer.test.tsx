@@ -1,12 +1,11 @@
 // @vitest-environment happy-dom
 import '@testing-library/jest-dom/vitest';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, render, screen, within } from '@testing-library/react';
+import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fakeApi, ok } from '../../../testing/fake-api';
 import { makeFinding } from '../../../testing/finding-fixtures';
+import { renderWithQueries } from '../../../testing/render';
 import { DuplicateFindingOffer } from './duplicate-finding-offer';
 
 afterEach(() => {
@@ -24,36 +23,26 @@ const existing = makeFinding(4, {
 });
 
 function show(typed: string, onAttached = vi.fn()) {
-  const router = createMemoryRouter(
-    [
-      {
-        path: '/new',
-        element: (
-          <DuplicateFindingOffer
-            restorationId={3}
-            photoId={8}
-            typed={typed}
-            mark={{
-              shape: 'circle',
-              points: [
-                { x: 0.4, y: 0.5 },
-                { x: 0.45, y: 0.5 },
-              ],
-            }}
-            onAttached={onAttached}
-          />
-        ),
-      },
-      { path: '/restorations/:id/photos/:photoId/findings/:findingId', element: <p>the existing finding</p> },
-    ],
-    { initialEntries: ['/new'] },
+  const view = renderWithQueries(
+    <DuplicateFindingOffer
+      restorationId={3}
+      photoId={8}
+      typed={typed}
+      mark={{
+        shape: 'circle',
+        points: [
+          { x: 0.4, y: 0.5 },
+          { x: 0.45, y: 0.5 },
+        ],
+      }}
+      onAttached={onAttached}
+    />,
+    {
+      path: '/new',
+      routes: [{ path: '/restorations/:id/photos/:photoId/findings/:findingId', element: <p>the existing finding</p> }],
+    },
   );
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
-  return { router, onAttached };
+  return { router: view.router!, onAttached };
 }
 
 describe('a second finding for the same part', () => {

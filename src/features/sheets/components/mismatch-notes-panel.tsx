@@ -9,6 +9,7 @@ import {
 import { Button } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import { useCreateMismatchNote, useDeleteMismatchNote, useUpdateMismatchNote } from '../api/mismatch-notes';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 interface Props {
   restorationId: number;
@@ -88,11 +89,7 @@ export function MismatchNotesPanel({ restorationId, refName, notes, canEdit }: P
           <label className="block space-y-1">
             <span className="text-sm font-semibold">What differs</span>
             <select value={kind} onChange={(e) => setKind(e.target.value as MismatchKind)} className={inputClass}>
-              {mismatchKinds.map((k) => (
-                <option key={k} value={k}>
-                  {mismatchKindLabels[k]}
-                </option>
-              ))}
+              <LabelledOptions values={mismatchKinds} labels={mismatchKindLabels} />
             </select>
           </label>
           <label className="block space-y-1">

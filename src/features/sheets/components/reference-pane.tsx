@@ -5,7 +5,7 @@ import { mismatchLine } from '../../../../shared/schemas/sheets';
 import type { NewMark } from '../../../lib/new-mark';
 import { useCreateReferenceMark } from '../api/reference-marks';
 import { markAsFinding } from '../lib/mark-as-finding';
-import { SheetCanvas } from './sheet-canvas';
+import { ReferenceCanvas } from './sheet-canvas';
 import type { MarkTarget } from './reference-viewer';
 
 interface Props {
@@ -81,19 +81,15 @@ export function ReferencePane({
         ))}
       </figcaption>
       <div className="h-[60vh] min-h-72" data-markup-probe={side}>
-        <SheetCanvas
+        <ReferenceCanvas
           imageUrl={imageUrl}
           imageSize={imageSize}
           items={items}
           selectedId={selectedId}
           focusId={focusId}
-          focusWhenReading
-          canCreate={canMark}
-          canEdit={() => false}
+          canMark={canMark}
           onSelect={setSelectedId}
           onCreate={onCreate}
-          onMove={() => {}}
-          onDelete={() => {}}
           onImageError={onImageError}
           label={label}
         />

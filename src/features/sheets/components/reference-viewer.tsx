@@ -6,7 +6,7 @@ import { useReferences } from '../../../lib/queries/references';
 import { useCreateReferenceMark, useDeleteReferenceMark, useReferenceMarks } from '../api/reference-marks';
 import { useMismatchNotes } from '../api/mismatch-notes';
 import { markAsFinding } from '../lib/mark-as-finding';
-import { SheetCanvas } from './sheet-canvas';
+import { ReferenceCanvas } from './sheet-canvas';
 import { ReferenceMarkList } from './reference-mark-list';
 
 export type MarkTarget = { sheetPageId: number; photoId?: undefined } | { photoId: number; sheetPageId?: undefined };
@@ -80,18 +80,15 @@ export function ReferenceViewer({
   return (
     <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
       <div className="h-[70vh] min-h-80" data-markup-probe={target.sheetPageId !== undefined ? 'diagram' : 'chassis'}>
-        <SheetCanvas
+        <ReferenceCanvas
           imageUrl={imageUrl}
           imageSize={imageSize}
           items={items}
           selectedId={selectedId}
           focusId={focusMarkId}
-          focusWhenReading
-          canCreate={canMark}
-          canEdit={() => false}
+          canMark={canMark}
           onSelect={setSelectedId}
           onCreate={onCreate}
-          onMove={() => {}}
           onDelete={(id) => remove.mutate(id)}
           onImageError={onImageError}
           label={label}

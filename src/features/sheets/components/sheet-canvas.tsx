@@ -1,24 +1,12 @@
 import { createContext, useContext, type ComponentType } from 'react';
-import type { Finding } from '../../../../shared/schemas/findings';
 import type { NewMark } from '../../../lib/new-mark';
+import type { PictureCanvasProps } from '../../../lib/picture-canvas';
 
 /** What the reference views ask of a picture canvas: the picture, its marks drawn as findings, and the callbacks. */
-export interface SheetCanvasProps {
-  imageUrl: string;
-  imageSize: { width: number; height: number };
-  items: readonly Finding[];
-  selectedId?: number;
-  focusId?: number;
-  /** A reader's canvas (no tools) zooms onto `focusId` too; otherwise it stays at Fit. */
-  focusWhenReading?: boolean;
-  canCreate: boolean;
-  canEdit: (finding: Finding) => boolean;
-  onSelect: (id: number | undefined) => void;
+export interface SheetCanvasProps extends PictureCanvasProps {
   onCreate(geometry: NewMark): Promise<number | undefined>;
   onMove(id: number, points: { x: number; y: number }[]): void;
   onDelete(id: number): void;
-  onImageError?: () => void;
-  label?: string;
 }
 
 const SheetCanvasContext = createContext<ComponentType<SheetCanvasProps> | undefined>(undefined);
@@ -30,4 +18,32 @@ export function SheetCanvas(props: SheetCanvasProps) {
   const Canvas = useContext(SheetCanvasContext);
   if (!Canvas) throw new Error('No canvas for the reference view: wrap it in SheetCanvasProvider (src/app).');
   return <Canvas {...props} />;
+}
+
+/** What a reference view decides about its canvas; the rest is the same for every reference view. */
+export type ReferenceCanvasProps = Pick<
+  SheetCanvasProps,
+  'imageUrl' | 'imageSize' | 'items' | 'selectedId' | 'focusId' | 'onSelect' | 'onCreate' | 'onImageError' | 'label'
+> & {
+  /** May place new marks (a technician). */
+  canMark: boolean;
+  /** Removes a mark; without it, marks stay. */
+  onDelete?: (id: number) => void;
+};
+
+/**
+ * A picture with reference marks: zoomed onto `focusId` for every reader; marks are placed or removed, never moved
+ * or edited (a mark that is wrong is removed and placed again).
+ */
+export function ReferenceCanvas({ canMark, onDelete = () => {}, ...props }: ReferenceCanvasProps) {
+  return (
+    <SheetCanvas
+      {...props}
+      focusWhenReading
+      canCreate={canMark}
+      canEdit={() => false}
+      onMove={() => {}}
+      onDelete={onDelete}
+    />
+  );
 }

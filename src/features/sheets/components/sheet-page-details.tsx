@@ -3,6 +3,7 @@ import { sheetKindLabels, sheetKinds, type SheetKind, type SheetPage } from '../
 import { Button } from '../../../components/button';
 import { inputClass } from '../../../components/field';
 import { useUpdateSheetPage } from '../api/update-sheet-page';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 /** A page's kind, title and sharing, editable by a technician; the original file to download. */
 export function SheetPageDetails({ page, canEdit }: { page: SheetPage; canEdit: boolean }) {
@@ -31,11 +32,7 @@ export function SheetPageDetails({ page, canEdit }: { page: SheetPage; canEdit: 
           <label className="block space-y-1">
             <span className="text-sm font-semibold">Kind of page</span>
             <select value={kind} onChange={(e) => setKind(e.target.value as SheetKind)} className={inputClass}>
-              {sheetKinds.map((k) => (
-                <option key={k} value={k}>
-                  {sheetKindLabels[k]}
-                </option>
-              ))}
+              <LabelledOptions values={sheetKinds} labels={sheetKindLabels} />
             </select>
           </label>
           <label className="block space-y-1">

@@ -5,6 +5,7 @@ import { inputClass } from '../../../components/field';
 import type { FormProgress } from '../../../lib/post-form';
 import { useUploadSheet } from '../api/upload-sheet';
 import { UploadProgressBar } from './upload-progress-bar';
+import { LabelledOptions } from '../../../components/labelled-options';
 
 /** Adds a service sheet (a PDF, drawn page by page on the server, or one JPEG, PNG or TIFF scan) with its kind, title and sharing. */
 export function SheetUploader({ restorationId }: { restorationId: number }) {
@@ -53,11 +54,7 @@ export function SheetUploader({ restorationId }: { restorationId: number }) {
         <label className="block space-y-1">
           <span className="font-semibold">Kind</span>
           <select value={kind} onChange={(e) => setKind(e.target.value as SheetKind)} className={inputClass}>
-            {sheetKinds.map((k) => (
-              <option key={k} value={k}>
-                {sheetKindLabels[k]}
-              </option>
-            ))}
+            <LabelledOptions values={sheetKinds} labels={sheetKindLabels} />
           </select>
         </label>
         <label className="block space-y-1">
