@@ -1,8 +1,9 @@
 import { and, desc, eq, gte, isNull, sql } from 'drizzle-orm';
 import type { LabourLog } from '../../../shared/schemas/labour';
 import type { Database, Tx } from '../../db/client';
-import { events, findings, labourEntries, restorations, users } from '../../db/schema';
-import { BadRequestError, ConflictError, NotFoundError } from '../../http/errors';
+import { events, findings, labourEntries, users } from '../../db/schema';
+import { BadRequestError, ConflictError } from '../../http/errors';
+import { lockRestoration } from '../restorations/lock-restoration';
 
 type Row = typeof labourEntries.$inferSelect;
 type Target = {
@@ -31,12 +32,7 @@ export function weekStart(now: Date): Date {
 }
 
 async function assertTarget(tx: Tx, restorationId: number, findingId: number | null) {
-  const [r] = await tx
-    .select({ id: restorations.id })
-    .from(restorations)
-    .where(eq(restorations.id, restorationId))
-    .for('update');
-  if (!r) throw new NotFoundError();
+  await lockRestoration(tx, restorationId);
   if (findingId === null) return;
   const [f] = await tx
     .select({ id: findings.id })
