@@ -4,7 +4,7 @@ import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError } from '../../http/errors';
-import { guard, requireUser, roleOf } from '../../http/guard';
+import { guard, guarded, requireUser, roleOf } from '../../http/guard';
 import { decodeCursor, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { actorOf } from '../findings/findings.routes';
@@ -39,32 +39,24 @@ export function commentsRoutes(deps: AppDeps): Router {
   const router = Router();
 
   // Oldest first, in pages (see shared/schemas/pagination.ts).
-  router.get(
-    '/findings/:id/comments',
-    requireUser,
-    validate(paged),
-    guard(db, 'restoration.view', ofFinding),
-    async (req, res) => {
-      const { params, query } = input(res, paged);
-      const rows = await service.list(params.id, roleOf(res), {
-        limit: query.limit + 1,
-        cursor: decodeCursor(query.cursor, commentOrder.kinds),
-      });
-      await sendPage(
-        req,
-        res,
-        rows,
-        query.limit,
-        (c) => [c.createdAt, c.id],
-        (page) => page,
-      );
-    },
-  );
+  router.get('/findings/:id/comments', ...guarded(db, paged, 'restoration.view', ofFinding), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const rows = await service.list(params.id, roleOf(res), {
+      limit: query.limit + 1,
+      cursor: decodeCursor(query.cursor, commentOrder.kinds),
+    });
+    await sendPage(
+      req,
+      res,
+      rows,
+      query.limit,
+      (c) => [c.createdAt, c.id],
+      (page) => page,
+    );
+  });
   router.post(
     '/findings/:id/comments',
-    requireUser,
-    validate(create),
-    guard(db, 'comments.create', ofFindingToComment),
+    ...guarded(db, create, 'comments.create', ofFindingToComment),
     async (req, res) => {
       const { params, body } = input(res, create);
       res.status(201).json(await service.create(params.id, body, actorOf(req, res), idempotencyKey(req)));

@@ -9,7 +9,7 @@ import {
 } from '../../../shared/schemas/help';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
+import { guard, guarded, requireUser, roleOf } from '../../http/guard';
 import { input, validate } from '../../http/validate';
 import { helpService } from './help.service';
 
@@ -28,62 +28,32 @@ export function helpRoutes(deps: AppDeps): Router {
   const ofRequest = (_req: unknown, res: { locals: Record<string, unknown> }) =>
     help.restorationOf(input(res, one).params.helpRequestId);
   const router = Router();
-  router.post(
-    '/restorations/:id/help-requests',
-    requireUser,
-    validate(create),
-    guard(db, 'help.ask'),
-    async (req, res) => {
-      const { params, body } = input(res, create);
-      res
-        .status(201)
-        .json(await help.create(params.id, body.symptom, { id: req.user!.id, name: req.user!.name }, roleOf(res)));
-    },
-  );
-  router.get(
-    '/restorations/:id/help-requests',
-    requireUser,
-    validate(list),
-    guard(db, 'help.view'),
-    async (_req, res) => {
-      res.json(await help.list(input(res, list).params.id));
-    },
-  );
+  router.post('/restorations/:id/help-requests', ...guarded(db, create, 'help.ask'), async (req, res) => {
+    const { params, body } = input(res, create);
+    res
+      .status(201)
+      .json(await help.create(params.id, body.symptom, { id: req.user!.id, name: req.user!.name }, roleOf(res)));
+  });
+  router.get('/restorations/:id/help-requests', ...guarded(db, list, 'help.view'), async (_req, res) => {
+    res.json(await help.list(input(res, list).params.id));
+  });
   // The bench: requests on every set where the person is a technician or mentor (roles owners never hold there).
   router.get('/help-requests', requireUser, async (req, res) => {
     res.json(await help.bench(req.user!.id));
   });
-  router.get(
-    '/help-requests/:helpRequestId',
-    requireUser,
-    validate(one),
-    guard(db, 'help.view', ofRequest),
-    async (_req, res) => {
-      res.json(await help.get(input(res, one).params.helpRequestId, roleOf(res)));
-    },
-  );
-  router.patch(
-    '/help-requests/:helpRequestId',
-    requireUser,
-    validate(patch),
-    guard(db, 'help.ask', ofRequest),
-    async (_req, res) => {
-      const { params, body } = input(res, patch);
-      res.json(await help.update(params.helpRequestId, body, roleOf(res)));
-    },
-  );
-  router.post(
-    '/help-requests/:helpRequestId/links',
-    requireUser,
-    validate(link),
-    guard(db, 'help.ask', ofRequest),
-    async (req, res) => {
-      const { params, body } = input(res, link);
-      res
-        .status(201)
-        .json(await help.createLink(res.locals.restorationId as number, params.helpRequestId, body.days, req.user!.id));
-    },
-  );
+  router.get('/help-requests/:helpRequestId', ...guarded(db, one, 'help.view', ofRequest), async (_req, res) => {
+    res.json(await help.get(input(res, one).params.helpRequestId, roleOf(res)));
+  });
+  router.patch('/help-requests/:helpRequestId', ...guarded(db, patch, 'help.ask', ofRequest), async (_req, res) => {
+    const { params, body } = input(res, patch);
+    res.json(await help.update(params.helpRequestId, body, roleOf(res)));
+  });
+  router.post('/help-requests/:helpRequestId/links', ...guarded(db, link, 'help.ask', ofRequest), async (req, res) => {
+    const { params, body } = input(res, link);
+    res
+      .status(201)
+      .json(await help.createLink(res.locals.restorationId as number, params.helpRequestId, body.days, req.user!.id));
+  });
   router.delete(
     '/help-links/:token',
     requireUser,
