@@ -50,6 +50,16 @@ const logged = (tx: Tx, e: Row, actorId: number) =>
     data: { labourEntryId: e.id, minutes: e.minutes, billable: e.billable },
   });
 
+/** An entry's own fields, whether typed or timed. */
+const entryOf = (restorationId: number, input: Target, userId: number) => ({
+  restorationId,
+  technicianId: userId,
+  findingId: input.findingId,
+  stage: input.stage,
+  note: input.note,
+  billable: input.billable,
+});
+
 /** The labour log: typed hours or a server-side timer; each finished entry writes its history line in the same transaction. */
 export function labourService(db: Database) {
   async function log(restorationId: number, userId: number, now = new Date()): Promise<LabourLog> {
@@ -92,12 +102,7 @@ export function labourService(db: Database) {
         const [e] = await tx
           .insert(labourEntries)
           .values({
-            restorationId,
-            technicianId: userId,
-            findingId: input.findingId,
-            stage: input.stage,
-            note: input.note,
-            billable: input.billable,
+            ...entryOf(restorationId, input, userId),
             startedAt: at,
             stoppedAt: at,
             minutes: input.minutes,
@@ -118,14 +123,7 @@ export function labourService(db: Database) {
           .where(and(eq(labourEntries.technicianId, userId), isNull(labourEntries.stoppedAt)))
           .for('update');
         if (already) throw new ConflictError('Your timer is already running: stop it before starting another.');
-        await tx.insert(labourEntries).values({
-          restorationId,
-          technicianId: userId,
-          findingId: input.findingId,
-          stage: input.stage,
-          note: input.note,
-          billable: input.billable,
-        });
+        await tx.insert(labourEntries).values(entryOf(restorationId, input, userId));
       });
       return log(restorationId, userId);
     },
