@@ -4,9 +4,9 @@ import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError } from '../../http/errors';
-import { guard, guarded, requireUser, roleOf } from '../../http/guard';
+import { guarded, roleOf } from '../../http/guard';
 import { decodeCursor, sendPage } from '../../http/pagination';
-import { input, validate } from '../../http/validate';
+import { input } from '../../http/validate';
 import { actorOf } from '../findings/findings.routes';
 import { findingsService } from '../findings/findings.service';
 import { commentOrder } from './comments.repo';
@@ -64,9 +64,7 @@ export function commentsRoutes(deps: AppDeps): Router {
   );
   router.patch(
     '/comments/:id',
-    requireUser,
-    validate(edit),
-    guard(db, 'comments.edit', ofComment('Only the author edits a comment.')),
+    ...guarded(db, edit, 'comments.edit', ofComment('Only the author edits a comment.')),
     async (req, res) => {
       const { params, body } = input(res, edit);
       res.json(await service.edit(params.id, body.body, actorOf(req, res)));
@@ -74,9 +72,7 @@ export function commentsRoutes(deps: AppDeps): Router {
   );
   router.delete(
     '/comments/:id',
-    requireUser,
-    validate(one),
-    guard(db, 'comments.delete', ofComment('Only the author or a technician deletes a comment.')),
+    ...guarded(db, one, 'comments.delete', ofComment('Only the author or a technician deletes a comment.')),
     async (req, res) => {
       await service.remove(input(res, one).params.id, actorOf(req, res));
       res.status(204).end();

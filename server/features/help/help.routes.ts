@@ -9,8 +9,8 @@ import {
 } from '../../../shared/schemas/help';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, guarded, requireUser, roleOf } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded, requireUser, roleOf } from '../../http/guard';
+import { input } from '../../http/validate';
 import { helpService } from './help.service';
 
 const create = { params: idParamsSchema, body: helpRequestInputSchema };
@@ -56,9 +56,7 @@ export function helpRoutes(deps: AppDeps): Router {
   });
   router.delete(
     '/help-links/:token',
-    requireUser,
-    validate(revoke),
-    guard(db, 'help.ask', (_req, res) => help.restorationOfToken(input(res, revoke).params.token)),
+    ...guarded(db, revoke, 'help.ask', (_req, res) => help.restorationOfToken(input(res, revoke).params.token)),
     async (req, res) => {
       await help.revoke(input(res, revoke).params.token, req.user!.id);
       res.status(204).end();
@@ -66,9 +64,7 @@ export function helpRoutes(deps: AppDeps): Router {
   );
   router.post(
     '/help-replies/:replyId/approve',
-    requireUser,
-    validate(approve),
-    guard(db, 'help.ask', (_req, res) => help.restorationOfReply(input(res, approve).params.replyId)),
+    ...guarded(db, approve, 'help.ask', (_req, res) => help.restorationOfReply(input(res, approve).params.replyId)),
     async (req, res) => {
       res.json(await help.approve(input(res, approve).params.replyId, req.user!.id));
     },

@@ -6,8 +6,8 @@ import {
 } from '../../../shared/schemas/reading-requests';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, guarded, requireUser, roleOf } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded, requireUser, roleOf } from '../../http/guard';
+import { input } from '../../http/validate';
 import { readingRequestsService } from './reading-requests.service';
 
 const list = { params: idParamsSchema };
@@ -37,9 +37,9 @@ export function readingRequestsRoutes(deps: AppDeps): Router {
   });
   router.post(
     '/reading-requests/:readingRequestId/answer',
-    requireUser,
-    validate(answer),
-    guard(db, 'help.ask', (_req, res) => requests.restorationOf(input(res, answer).params.readingRequestId)),
+    ...guarded(db, answer, 'help.ask', (_req, res) =>
+      requests.restorationOf(input(res, answer).params.readingRequestId),
+    ),
     async (req, res) => {
       const { params, body } = input(res, answer);
       res.json(await requests.answer(params.readingRequestId, body, actor(req, res)));
