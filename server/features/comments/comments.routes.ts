@@ -5,7 +5,7 @@ import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError } from '../../http/errors';
 import { guarded, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
+import { pageWindow, sendPage } from '../../http/pagination';
 import { input } from '../../http/validate';
 import { actorOf } from '../findings/findings.routes';
 import { findingsService } from '../findings/findings.service';
@@ -41,10 +41,7 @@ export function commentsRoutes(deps: AppDeps): Router {
   // Oldest first, in pages (see shared/schemas/pagination.ts).
   router.get('/findings/:id/comments', ...guarded(db, paged, 'restoration.view', ofFinding), async (req, res) => {
     const { params, query } = input(res, paged);
-    const rows = await service.list(params.id, roleOf(res), {
-      limit: query.limit + 1,
-      cursor: decodeCursor(query.cursor, commentOrder.kinds),
-    });
+    const rows = await service.list(params.id, roleOf(res), pageWindow(query, commentOrder.kinds));
     await sendPage(
       req,
       res,

@@ -4,7 +4,7 @@ import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guarded, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
+import { pageWindow, sendPage } from '../../http/pagination';
 import { input } from '../../http/validate';
 import { photosRepo } from '../photos/photos.repo';
 import { findingsListCache, sendCachedList } from './findings-cache';
@@ -66,10 +66,7 @@ export function findingsRoutes(deps: AppDeps): Router {
   // By number, in pages (see shared/schemas/pagination.ts).
   router.get('/restorations/:id/findings', ...guarded(db, paged, 'restoration.view'), async (req, res) => {
     const { params, query } = input(res, paged);
-    const rows = await service.pageByRestoration(params.id, roleOf(res), {
-      limit: query.limit + 1,
-      cursor: decodeCursor(query.cursor, findingOrder.kinds),
-    });
+    const rows = await service.pageByRestoration(params.id, roleOf(res), pageWindow(query, findingOrder.kinds));
     await sendPage(req, res, rows, query.limit, findingCursor, (page) => page.map((f) => toFinding(f, roleOf(res))));
   });
   router.get('/findings/:id', ...guarded(db, one, 'restoration.view', ofFinding), async (_req, res) => {

@@ -9,7 +9,7 @@ import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guarded, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
+import { pageWindow, sendPage } from '../../http/pagination';
 import { input } from '../../http/validate';
 import { measurementOrder, measurementsService } from './measurements.service';
 
@@ -27,7 +27,7 @@ export function measurementsRoutes({ db }: AppDeps): Router {
   // In the order they were taken, in pages (see shared/schemas/pagination.ts).
   router.get('/restorations/:id/measurements', ...guarded(db, list, 'restoration.view'), async (req, res) => {
     const { params, query } = input(res, list);
-    const window = { limit: query.limit + 1, cursor: decodeCursor(query.cursor, measurementOrder.kinds) };
+    const window = pageWindow(query, measurementOrder.kinds);
     const rows = await service.list(params.id, roleOf(res), query.findingId, window);
     await sendPage(
       req,

@@ -9,7 +9,7 @@ import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guarded } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
+import { pageWindow, sendPage } from '../../http/pagination';
 import { input } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
 import { memberOrder } from './members.repo';
@@ -33,10 +33,7 @@ export function membersRoutes(deps: AppDeps): Router {
   // In the order people joined, in pages (see shared/schemas/pagination.ts).
   router.get(`${base}/members`, ...guarded(db, paged, 'members.view'), async (req, res) => {
     const { params, query } = input(res, paged);
-    const rows = await members.list(params.id, {
-      limit: query.limit + 1,
-      cursor: decodeCursor(query.cursor, memberOrder.kinds),
-    });
+    const rows = await members.list(params.id, pageWindow(query, memberOrder.kinds));
     await sendPage(
       req,
       res,

@@ -4,7 +4,7 @@ import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { guarded, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
+import { pageWindow, sendPage } from '../../http/pagination';
 import { input } from '../../http/validate';
 import { photoCursor, photoOrder } from './photos.repo';
 import { photosService } from './photos.service';
@@ -24,10 +24,7 @@ export function photosRoutes(deps: AppDeps): Router {
   // Oldest first, in pages (see shared/schemas/pagination.ts).
   router.get('/restorations/:id/photos', ...guarded(db, paged, 'restoration.view'), async (req, res) => {
     const { params, query } = input(res, paged);
-    const rows = await service.page(params.id, roleOf(res), {
-      limit: query.limit + 1,
-      cursor: decodeCursor(query.cursor, photoOrder.kinds),
-    });
+    const rows = await service.page(params.id, roleOf(res), pageWindow(query, photoOrder.kinds));
     await sendPage(req, res, rows, query.limit, photoCursor, (page) => service.present(page, roleOf(res)));
   });
   // Permission is settled before a byte of the body is read.

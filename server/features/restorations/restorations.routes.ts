@@ -8,7 +8,7 @@ import {
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import type { AppDeps } from '../../app-deps';
 import { guarded, requireUser, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
+import { pageWindow, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
 import { deleteSheetObjects } from '../sheets/sheet-objects';
@@ -33,10 +33,7 @@ export function restorationsRoutes(deps: AppDeps): Router {
   // The bench, most recently changed first, in pages (see shared/schemas/pagination.ts).
   router.get('/restorations', requireUser, validate(list), async (req, res) => {
     const { query } = input(res, list);
-    const rows = await service.pageFor(req.user!.id, query, {
-      limit: query.limit + 1,
-      cursor: decodeCursor(query.cursor, benchOrder.kinds),
-    });
+    const rows = await service.pageFor(req.user!.id, query, pageWindow(query, benchOrder.kinds));
     await sendPage(req, res, rows, query.limit, benchCursor, (page) => page.map((r) => toRestoration(r, r.role)));
   });
   router.post('/restorations', requireUser, validate(create), async (req, res) => {
