@@ -33,6 +33,7 @@ const table: Record<(typeof actions)[number], Record<(typeof roles)[number], boo
   'report.download': { technician: true, mentor: true, owner: true },
   'report.send': { technician: true, mentor: false, owner: false },
   'workshop.view': { technician: true, mentor: true, owner: false },
+  'workshop.notes': { technician: true, mentor: true, owner: false },
   'safety.view': { technician: true, mentor: true, owner: true },
   'safety.record': { technician: true, mentor: false, owner: false },
   'safety.override': { technician: true, mentor: false, owner: false },

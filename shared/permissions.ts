@@ -2,12 +2,18 @@
  * The one policy (PRODUCT.md, "Who uses it"). Server routes ask it through one guard; the client asks it
  * only to hide what a person cannot do. Roles are held per restoration.
  */
-import { holds, type Condition, type VisibilityFacts } from './visibility-rule';
+import { roles, type Role } from './roles';
+import { mayView } from './visibility-policy';
 
-export const roles = ['technician', 'mentor', 'owner'] as const;
-export type Role = (typeof roles)[number];
-
-export const roleLabels: Record<Role, string> = { technician: 'Technician', mentor: 'Mentor', owner: 'Owner' };
+// Roles and what each may see live beside this file; they are exported here too, as they always were.
+export { roleLabels, roles, workshopRole, type Role } from './roles';
+export {
+  hiddenChangeFields,
+  mayView,
+  visibility,
+  visibilitySubjects,
+  type VisibilitySubject,
+} from './visibility-policy';
 
 export const actions = [
   'restoration.view',
@@ -39,6 +45,7 @@ export const actions = [
   'report.download',
   'report.send',
   'workshop.view',
+  'workshop.notes',
   'safety.view',
   'safety.record',
   'safety.override',
@@ -109,6 +116,10 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   // The workshop's own working views: planned parts, the shopping list, CSV export, bench warnings, the
   // technician's cautions, the markup tools and questions to the mentors. Owners get their own pages instead.
   'workshop.view': (role) => role !== 'owner',
+  // The workshop's working notes on what owners otherwise read: bench notes, a part's source and notes, the bench's
+  // warnings on a replacement, who ticked a checklist cause, a power-up step's finding, the chassis serial in a help
+  // request. Owners (and a help link's reader, judged as one) read the rest without them.
+  'workshop.notes': (role) => role !== 'owner',
   // The final safety test, its override and the soak log: owners read them, mentors comment on findings but never
   // sign off; only a technician records a test, starts or stops a soak, or returns a set on an override.
   'safety.view': () => true,
@@ -147,191 +158,11 @@ const rules: Record<Action, (role: Role, context: PolicyContext) => boolean> = {
   'payments.record': (role) => role === 'technician',
 };
 
-/**
- * A person's role in the workshop as a whole, from the roles they hold on restorations: a technician anywhere is
- * the workshop's technician; otherwise a mentor anywhere is a mentor; otherwise an owner. Null with no restoration.
- */
-export function workshopRole(held: readonly Role[]): Role | null {
-  return roles.find((r) => held.includes(r)) ?? null;
-}
-
 export function can(role: Role | null | undefined, action: Action, context: PolicyContext = {}): boolean {
   return role ? rules[action](role, context) : false;
 }
 
-/**
- * What each role may see, as data (the language is in visibility-rule.ts). The server turns each rule into
- * the SQL condition of every query that lists or counts (server/features/visibility/), and checks single
- * rows with `mayView`, so lists, counts, notifications, mail, history, the report and the CSV all follow
- * one rule. Technicians and mentors see everything on their restorations; owners see what is shared.
- *
- * Fields are the rows' columns, plus `finding.sharedAt`: when the finding was last shared with the owner
- * (its creation when it was created shared), so an owner never reads what changed while it was internal.
- */
-const sharedPhoto: Condition = { field: 'photo.ownerVisible', is: true };
-/** A finding and the photo it is on are both shared. */
-const sharedFinding: Condition = { all: [{ field: 'finding.ownerVisible', is: true }, sharedPhoto] };
-const sharedComment: Condition = { all: [{ field: 'comment.internal', is: false }, sharedFinding] };
-const sharedSheetPage: Condition = { field: 'sheetPage.ownerVisible', is: true };
-/** A reference mark follows what it is placed on: a sheet page or a chassis photo. */
-const sharedReferenceMark: Condition = { any: [sharedSheetPage, sharedPhoto] };
-/** A mismatch note (the chassis differs from the diagram) is workshop material unless shared. */
-const sharedMismatch: Condition = { field: 'mismatch.ownerVisible', is: true };
-const sharedReading: Condition = { field: 'reading.ownerVisible', is: true };
-/** Planned and ordered lines are the workshop's business; the owner sees what was fitted or kept. */
-const ownerPart: Condition = {
-  any: [
-    { field: 'part.state', is: 'fitted' },
-    { field: 'part.action', is: 'kept-original' },
-  ],
-};
-const sinceShared = (entity: 'event' | 'change'): Condition => ({
-  field: `${entity}.createdAt`,
-  after: 'finding.sharedAt',
-});
-const eventOf = (kind: string, ...conditions: Condition[]): Condition => ({
-  all: [{ field: 'event.kind', is: kind }, ...conditions],
-});
-
-export const visibilitySubjects = [
-  'photo',
-  'finding',
-  'comment',
-  'reading',
-  'part',
-  'event',
-  'change',
-  'notification',
-  'sheetPage',
-  'referenceMark',
-  'estimate',
-  'readingRequest',
-  'symptomCheck',
-  'payment',
-  'mismatchNote',
-] as const;
-export type VisibilitySubject = (typeof visibilitySubjects)[number];
-
-const all: Condition = { always: true };
-const everything: Record<VisibilitySubject, Condition> = {
-  photo: all,
-  finding: all,
-  comment: all,
-  reading: all,
-  part: all,
-  event: all,
-  change: all,
-  notification: all,
-  sheetPage: all,
-  referenceMark: all,
-  estimate: all,
-  readingRequest: all,
-  symptomCheck: all,
-  payment: all,
-  mismatchNote: all,
-};
-/** Mentors help with the work and see none of its money. */
-const noMoney: Condition = { never: true };
-/** History lines about money (estimates sent and answered, invoices issued and voided); they carry no amounts, but still. */
-const moneyEvent: Condition = {
-  field: 'event.kind',
-  in: ['estimate-sent', 'estimate-decided', 'invoice-issued', 'invoice-voided', 'payment-received', 'payment-refunded'],
-};
-
-export const visibility: Record<Role, Record<VisibilitySubject, Condition>> = {
-  technician: everything,
-  mentor: {
-    ...everything,
-    estimate: noMoney,
-    payment: noMoney,
-    event: { not: moneyEvent },
-    notification: { not: { field: 'notification.kind', is: 'payment' } },
-  },
-  owner: {
-    photo: sharedPhoto,
-    finding: sharedFinding,
-    /** A shared comment on a finding the owner may see. */
-    comment: sharedComment,
-    reading: sharedReading,
-    part: ownerPart,
-    /** A line of the history: each kind follows its subject; questions to the mentors never reach the owner. */
-    event: {
-      any: [
-        eventOf('photo-added', sharedPhoto),
-        eventOf('finding-opened', sharedFinding),
-        eventOf('finding-status', sharedFinding, sinceShared('event')),
-        eventOf('measurement-out', sharedReading),
-        eventOf('part-fitted', ownerPart),
-        eventOf('stage-changed'),
-        // The safety record is the owner's business too: the test as judged, an override in red, soak runs, sends.
-        eventOf('safety-test'),
-        eventOf('safety-override'),
-        eventOf('soak-session'),
-        eventOf('report-sent'),
-        // The checks before first power and the power-up steps, in the owner's words (a waiver or a stop in red).
-        eventOf('intake-checked'),
-        eventOf('pre-power-set'),
-        eventOf('pre-power-signed'),
-        eventOf('pre-power-voided'),
-        eventOf('bringup-step'),
-        // An estimate sent to the owner and their answer (the history lines carry the version, never amounts).
-        eventOf('estimate-sent'),
-        eventOf('estimate-decided'),
-        eventOf('invoice-issued'),
-        eventOf('invoice-voided'),
-        eventOf('payment-received'),
-        eventOf('payment-refunded'),
-        // The service sheet: a page added, a reference marked, a mismatch noted, each as its subject is shared.
-        eventOf('sheet-added', sharedSheetPage),
-        eventOf('reference-marked', sharedReferenceMark),
-        eventOf('mismatch-noted', sharedMismatch),
-      ],
-    },
-    /** A finding's change record, only from after it was shared. */
-    change: { all: [sharedFinding, sinceShared('change')] },
-    sheetPage: sharedSheetPage,
-    referenceMark: sharedReferenceMark,
-    mismatchNote: sharedMismatch,
-    /** An in-app notification or its e-mail, judged when read or sent, not when written. */
-    /** An estimate once sent to them; drafts stay in the workshop. */
-    estimate: { field: 'estimate.sent', is: true },
-    /** A mentor's request for a reading is the workshop's business. */
-    readingRequest: { never: true },
-    /**
-     * A cause of the symptom checklist and how it came out, as a help link's reader reads it (owners have no route
-     * to the checklist itself): its note is never sent, its reading and finding follow their own rules.
-     */
-    symptomCheck: all,
-    /** Payments and refunds on their own sets' invoices (membership is checked by the guard), card or by hand. */
-    payment: all,
-    notification: {
-      any: [
-        {
-          all: [
-            sharedFinding,
-            {
-              any: [
-                { field: 'notification.commentId', is: null },
-                { field: 'comment.internal', is: false },
-              ],
-            },
-          ],
-        },
-        // Money received or refunded on their own set.
-        { field: 'notification.kind', is: 'payment' },
-      ],
-    },
-  },
-};
-
-/** Fields of a finding's change record a role never reads (questions to the mentors and sharing are internal). */
-export const hiddenChangeFields: Record<Role, readonly string[]> = {
-  technician: [],
-  mentor: [],
-  owner: ['questionOpen', 'ownerVisible'],
-};
-
-/** The in-memory twin of the SQL condition: may this role see the row these facts describe? */
-export function mayView(role: Role | null | undefined, subject: VisibilitySubject, facts: VisibilityFacts): boolean {
-  return role ? holds(visibility[role][subject], facts) : false;
+/** The roles allowed an action without context, for queries that pick a person's sets by the role held there. */
+export function rolesAllowed(action: Action): Role[] {
+  return roles.filter((role) => can(role, action));
 }

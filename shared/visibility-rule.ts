@@ -4,8 +4,8 @@
  * and a test checks that the two agree (tests/api/visibility-rule.test.ts).
  */
 
-/** The kinds of thing a rule may look at; each names a row (or a joined row) by what it is. */
-export const visibilityEntities = [
+/** Rows that a rule both reads and judges (the subjects in visibility-policy.ts start with these). */
+export const rowEntities = [
   'photo',
   'finding',
   'comment',
@@ -16,8 +16,10 @@ export const visibilityEntities = [
   'notification',
   'sheetPage',
   'estimate',
-  'mismatch',
 ] as const;
+
+/** The kinds of thing a rule may look at; each names a row (or a joined row) by what it is. */
+export const visibilityEntities = [...rowEntities, 'mismatch'] as const;
 export type VisibilityEntity = (typeof visibilityEntities)[number];
 
 /** `entity.field`, e.g. `photo.ownerVisible`; fields are the camelCase names of the row's columns. */

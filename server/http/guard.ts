@@ -3,6 +3,7 @@ import { can, type Action, type PolicyContext, type Role } from '../../shared/pe
 import type { Database } from '../db/client';
 import { membershipRole } from '../db/membership-role';
 import { ForbiddenError, NotFoundError, UnauthorizedError } from './errors';
+import { validate, type Schemas } from './validate';
 
 /** 401 unless signed in. */
 export const requireUser: RequestHandler = (req, _res, next) => {
@@ -64,3 +65,14 @@ export function guard(db: Database, action: Action, restorationOf: RestorationOf
 }
 
 export const roleOf = (res: Response) => res.locals.role as Role;
+
+/**
+ * What a restoration route runs before its handler, in this order: signed in (401), its input validated (400), then
+ * the guard for its action (404 for a stranger or a row they may not see, 403 when the policy says no).
+ */
+export const guarded = (
+  db: Database,
+  schemas: Schemas,
+  action: Action,
+  restorationOf?: RestorationOf,
+): RequestHandler[] => [requireUser, validate(schemas), guard(db, action, restorationOf)];

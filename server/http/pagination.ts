@@ -20,6 +20,12 @@ export function decodeCursor(cursor: string | undefined, kinds: ('string' | 'num
   throw new BadRequestError('That page cursor is not valid; start again from the first page.');
 }
 
+/** What to read for one page: one row more than the page (so `sendPage` knows there is a next), after the cursor. */
+export const pageWindow = (query: { limit: number; cursor?: string | undefined }, kinds: ('string' | 'number')[]) => ({
+  limit: query.limit + 1,
+  cursor: decodeCursor(query.cursor, kinds),
+});
+
 /**
  * Cuts `limit + 1` rows read in order to one page and sends it: the body is the plain array (the shape the
  * route always had), and the next page's cursor goes in `X-Next-Cursor` and a `Link` header.

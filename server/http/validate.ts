@@ -2,7 +2,7 @@ import type { RequestHandler } from 'express';
 import type { z } from 'zod';
 import { BadRequestError } from './errors';
 
-interface Schemas {
+export interface Schemas {
   params?: z.ZodType;
   query?: z.ZodType;
   body?: z.ZodType;

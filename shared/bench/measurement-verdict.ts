@@ -82,6 +82,15 @@ type Context = {
 };
 type Rule<T extends ReadingKind['rule']['type']> = Extract<ReadingKind['rule'], { type: T }>;
 
+/** Over the meter's range against a reference: out, the reading taken as the reference when none was typed. */
+const overRange = (c: Context, reference: number, reason: string): Judged => ({
+  verdict: 'out',
+  deviation: null,
+  reference,
+  reading: c.reading ?? reference,
+  reason,
+});
+
 function againstCapacitorLimit(rule: Rule<'capacitor-limit'>, c: Context): Judged {
   if (c.expected === null || c.rating === null)
     return {
@@ -93,13 +102,11 @@ function againstCapacitorLimit(rule: Rule<'capacitor-limit'>, c: Context): Judge
   const { value: max, source } = rule.limit(c.expected, c.rating);
   const part = `${c.show(c.expected, 'F')} ${c.show(c.rating, 'V')}`;
   if (c.overRange)
-    return {
-      verdict: 'out',
-      deviation: null,
-      reference: max,
-      reading: c.reading ?? max,
-      reason: `Over range against an expected maximum of ${c.show(max)} for ${part} (${source}): out; an open or dried-out part reads so.`,
-    };
+    return overRange(
+      c,
+      max,
+      `Over range against an expected maximum of ${c.show(max)} for ${part} (${source}): out; an open or dried-out part reads so.`,
+    );
   const reading = c.reading ?? 0;
   // Up to twice the limit is "look again" rather than "condemn" (the ESR table's own advice; common practice for leakage).
   const verdict = reading <= max ? 'within' : reading <= 2 * max ? 'marginal' : 'out';
@@ -129,14 +136,7 @@ function againstMinimum(min: number, source: string, c: Context): Judged {
 }
 
 function againstMaximum(max: number, source: string, c: Context): Judged {
-  if (c.overRange)
-    return {
-      verdict: 'out',
-      deviation: null,
-      reference: max,
-      reading: c.reading ?? max,
-      reason: `Over range, above the ${c.show(max)} maximum${source}: fails.`,
-    };
+  if (c.overRange) return overRange(c, max, `Over range, above the ${c.show(max)} maximum${source}: fails.`);
   const reading = c.reading ?? 0;
   const passes = reading <= max;
   return {
@@ -149,13 +149,11 @@ function againstMaximum(max: number, source: string, c: Context): Judged {
 
 function againstBand(rule: Rule<'band'>, input: MeasurementInput, c: Context, expected: number): Judged {
   if (c.overRange)
-    return {
-      verdict: 'out',
-      deviation: null,
-      reference: expected,
-      reading: c.reading ?? expected,
-      reason: `Over range against ${c.show(expected)}: out; an open circuit or a value far above the expected one reads so.`,
-    };
+    return overRange(
+      c,
+      expected,
+      `Over range against ${c.show(expected)}: out; an open circuit or a value far above the expected one reads so.`,
+    );
   const typed = input.tolerance?.trim() ?? '';
   const reading = c.reading ?? 0;
   const usual = typed === '' ? rule.usual(expected) : undefined;

@@ -96,7 +96,29 @@ const toleranceForms = 'Per cent, a letter (J, K, M, Z), -20/+50, or max/min';
 const usualHint = `${toleranceForms}; blank for the usual ±20 %`;
 const positive: SignRule = { reading: 'not-negative', expected: 'above-zero' };
 const manual = 'Expected (manual)';
-const voltsMethod = 'Meter and its Ω/V, e.g. DMM 10 MΩ or 20 kΩ/V';
+
+/** A voltage read on a powered set against a service chart, allowing for the meter's loading. */
+const chartVoltage = (
+  label: string,
+  noun: string,
+  expected: SignRule['expected'],
+  placeholders: { expected: string; reading: string },
+): ReadingKind => ({
+  label,
+  noun,
+  unit: 'V',
+  sign: { reading: 'any', expected },
+  report: 'readings',
+  rule: { type: 'band', meterLoading: true, usual: chartBand },
+  form: {
+    expectedLabel: manual,
+    expectedPlaceholder: placeholders.expected,
+    readingPlaceholder: placeholders.reading,
+    toleranceHint: usualHint,
+    methodHint: 'Meter and its Ω/V, e.g. DMM 10 MΩ or 20 kΩ/V',
+    live: true,
+  },
+});
 
 export const readingKinds: Record<MeasuredQuantity, ReadingKind> = {
   esr: {
@@ -184,38 +206,11 @@ export const readingKinds: Record<MeasuredQuantity, ReadingKind> = {
       live: false,
     },
   },
-  'dc-voltage': {
-    label: 'DC voltage',
-    noun: 'a DC voltage',
-    unit: 'V',
-    sign: { reading: 'any', expected: 'any' },
-    report: 'readings',
-    rule: { type: 'band', meterLoading: true, usual: chartBand },
-    form: {
-      expectedLabel: manual,
-      expectedPlaceholder: 'e.g. 255 V',
-      readingPlaceholder: 'e.g. 263 V',
-      toleranceHint: usualHint,
-      methodHint: voltsMethod,
-      live: true,
-    },
-  },
-  'ac-voltage': {
-    label: 'AC voltage',
-    noun: 'an AC voltage',
-    unit: 'V',
-    sign: { reading: 'any', expected: 'above-zero' },
-    report: 'readings',
-    rule: { type: 'band', meterLoading: true, usual: chartBand },
-    form: {
-      expectedLabel: manual,
-      expectedPlaceholder: 'e.g. 6.3 V',
-      readingPlaceholder: 'e.g. 6.2 V',
-      toleranceHint: usualHint,
-      methodHint: voltsMethod,
-      live: true,
-    },
-  },
+  'dc-voltage': chartVoltage('DC voltage', 'a DC voltage', 'any', { expected: 'e.g. 255 V', reading: 'e.g. 263 V' }),
+  'ac-voltage': chartVoltage('AC voltage', 'an AC voltage', 'above-zero', {
+    expected: 'e.g. 6.3 V',
+    reading: 'e.g. 6.2 V',
+  }),
   current: {
     label: 'Current',
     noun: 'a current',

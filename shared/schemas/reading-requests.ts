@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { bodyIdSchema, idSchema } from './ids';
 import { measurementInputSchema } from './measurements';
-import type { SymptomCheckReading } from './symptom-checks';
+import { symptomCheckReadingSchema } from './symptom-checks';
 
 export const readingRequestKinds = ['reading', 'photo', 'note'] as const;
 export type ReadingRequestKind = (typeof readingRequestKinds)[number];
@@ -34,22 +34,22 @@ export type ReadingAnswerInput = z.input<typeof readingAnswerInputSchema>;
 
 export const readingRequestParamsSchema = z.object({ readingRequestId: idSchema });
 
-export interface ReadingRequest {
-  id: number;
-  restorationId: number;
-  helpRequestId: number | null;
-  kind: ReadingRequestKind;
-  body: string;
-  askedBy: string | null;
-  createdAt: string;
-  answeredAt: string | null;
-  answeredBy: string | null;
-  answerNote: string;
-  reading: SymptomCheckReading | null;
-  photo: { id: number; caption: string; thumbUrl: string } | null;
-}
+export const readingRequestSchema = z.object({
+  id: z.number(),
+  restorationId: z.number(),
+  helpRequestId: z.number().nullable(),
+  kind: z.enum(readingRequestKinds),
+  body: z.string(),
+  askedBy: z.string().nullable(),
+  createdAt: z.string(),
+  answeredAt: z.string().nullable(),
+  answeredBy: z.string().nullable(),
+  answerNote: z.string(),
+  reading: symptomCheckReadingSchema.nullable(),
+  photo: z.object({ id: z.number(), caption: z.string(), thumbUrl: z.string() }).nullable(),
+});
+export type ReadingRequest = z.infer<typeof readingRequestSchema>;
+
 /** On a bench: the request with the set it is about. */
-export interface BenchReadingRequest extends ReadingRequest {
-  set: string;
-  mine: boolean;
-}
+export const benchReadingRequestSchema = readingRequestSchema.extend({ set: z.string(), mine: z.boolean() });
+export type BenchReadingRequest = z.infer<typeof benchReadingRequestSchema>;

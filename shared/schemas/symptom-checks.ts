@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { symptomIds } from '../bench/symptoms';
 import { bodyIdSchema, idSchema } from './ids';
-import { measurementInputSchema } from './measurements';
+import { measurementInputSchema, verdicts } from './measurements';
 
 export const causeResults = ['ruled-out', 'confirmed', 'inconclusive'] as const;
 export type CauseResult = (typeof causeResults)[number];
@@ -29,23 +29,26 @@ export const symptomCheckInputSchema = z.object({
 });
 export type SymptomCheckInput = z.input<typeof symptomCheckInputSchema>;
 
-export interface SymptomCheckReading {
-  id: number;
-  location: string;
-  reading: string;
-  expected: string;
-  verdict: 'within' | 'marginal' | 'out' | 'unknown';
-  verdictReason: string;
-}
-export interface SymptomCheck {
-  symptomId: string;
-  causeId: string;
-  result: CauseResult;
+export const symptomCheckReadingSchema = z.object({
+  id: z.number(),
+  location: z.string(),
+  reading: z.string(),
+  expected: z.string(),
+  verdict: z.enum(verdicts),
+  verdictReason: z.string(),
+});
+export type SymptomCheckReading = z.infer<typeof symptomCheckReadingSchema>;
+
+export const symptomCheckSchema = z.object({
+  symptomId: z.string(),
+  causeId: z.string(),
+  result: z.enum(causeResults),
   /** Empty on a help link: notes stay in the workshop. */
-  note: string;
+  note: z.string(),
   /** Null when there is none, or the reader may not see it. */
-  reading: SymptomCheckReading | null;
-  finding: { id: number; photoId: number; number: number } | null;
-  checkedBy: string | null;
-  updatedAt: string;
-}
+  reading: symptomCheckReadingSchema.nullable(),
+  finding: z.object({ id: z.number(), photoId: z.number(), number: z.number() }).nullable(),
+  checkedBy: z.string().nullable(),
+  updatedAt: z.string(),
+});
+export type SymptomCheck = z.infer<typeof symptomCheckSchema>;

@@ -5,24 +5,32 @@ import { sessionSchema } from '../../shared/schemas/auth';
 import { bringupSchema } from '../../shared/schemas/bringup';
 import { commentSchema } from '../../shared/schemas/comments';
 import { activityItemSchema, timelineEventSchema } from '../../shared/schemas/events';
+import {
+  benchHelpRequestSchema,
+  helpRequestSchema,
+  helpRequestSummarySchema,
+  sharedHelpSchema,
+} from '../../shared/schemas/help';
 import { findingChangeSchema, findingSchema, openQuestionSchema } from '../../shared/schemas/findings';
 import { lineUpResultSchema, measurementSchema } from '../../shared/schemas/measurements';
 import { invitationSchema, memberSchema } from '../../shared/schemas/members';
 import { metaSchema } from '../../shared/schemas/meta';
 import { notificationSchema } from '../../shared/schemas/notifications';
 import { partSchema } from '../../shared/schemas/parts';
+import { benchReadingRequestSchema, readingRequestSchema } from '../../shared/schemas/reading-requests';
 import { restorationSchema } from '../../shared/schemas/restorations';
 import { reportPreviewSchema, safetyStatusSchema, soakLogSchema } from '../../shared/schemas/safety';
+import { symptomCheckSchema } from '../../shared/schemas/symptom-checks';
 import { createPhotoRow } from '../factories/photos';
 import { createRestoration } from '../factories/restorations';
-import { createUser, signedIn } from '../factories/users';
+import { anonymous, createUser, signedIn } from '../factories/users';
 import { startTestApp } from '../support/test-app';
 
 // The client checks each answer against these schemas in development and tests (src/lib/api-client.ts); this holds the
 // server to the same contract, so a development build never refuses a real answer.
 let t: Awaited<ReturnType<typeof startTestApp>>;
 let tech: Agent, mentor: Agent;
-let id: number, bareId: number, photoId: number, findingId: number;
+let id: number, bareId: number, photoId: number, findingId: number, helpId: number, helpToken: string;
 beforeAll(async () => {
   t = await startTestApp();
   const [a, b] = await Promise.all([createUser(t.db), createUser(t.db)]);
@@ -48,6 +56,11 @@ beforeAll(async () => {
   await tech
     .post(`/api/restorations/${id}/measurements`)
     .send({ location: 'R23 cathode', quantity: 'resistance', expected: '150', reading: '212', findingId });
+  await tech.put(`/api/restorations/${id}/symptom-checks/hum/smoothing-caps`).send({ result: 'ruled-out' });
+  await mentor.post(`/api/restorations/${id}/reading-requests`).send({ kind: 'reading', body: 'HT at C27' });
+  helpId = (await tech.post(`/api/restorations/${id}/help-requests`).send({ symptom: 'Hum' })).body.id;
+  await tech.patch(`/api/help-requests/${helpId}`).send({ photoIds: [photoId], symptomIds: ['hum'] });
+  helpToken = (await tech.post(`/api/help-requests/${helpId}/links`).send({})).body.token;
 });
 afterAll(() => t.stop());
 
@@ -72,6 +85,12 @@ const answers: [string, () => string, z.ZodType][] = [
   ['the safety tests', () => `/api/restorations/${id}/safety-tests`, safetyStatusSchema],
   ['the soak log', () => `/api/restorations/${id}/soak-sessions`, soakLogSchema],
   ['the report preview', () => `/api/restorations/${bareId}/report/preview`, reportPreviewSchema],
+  ['the checklist results', () => `/api/restorations/${id}/symptom-checks`, z.array(symptomCheckSchema)],
+  ['the requests for readings', () => `/api/restorations/${id}/reading-requests`, z.array(readingRequestSchema)],
+  ['the bench’s requests for readings', () => '/api/reading-requests', z.array(benchReadingRequestSchema)],
+  ['the help requests', () => `/api/restorations/${id}/help-requests`, z.array(helpRequestSummarySchema)],
+  ['a help request', () => `/api/help-requests/${helpId}`, helpRequestSchema],
+  ['the bench’s help requests', () => '/api/help-requests', z.array(benchHelpRequestSchema)],
 ];
 
 describe('answers follow the shared schemas', () => {
@@ -83,6 +102,13 @@ describe('answers follow the shared schemas', () => {
       expect(schema.safeParse(res.body).error).toBeUndefined();
     },
   );
+
+  it('when someone reads a help request through its link, then the answer parses with its schema', async () => {
+    const res = await anonymous(t.app).get(`/api/shared/help/${helpToken}`);
+    expect(res.status).toBe(200);
+    expect(res.body.photos).toHaveLength(1);
+    expect(sharedHelpSchema.safeParse(res.body).error).toBeUndefined();
+  });
 
   it('when the mentor reads notifications and open questions, then they parse with their schemas', async () => {
     const notifications = await mentor.get('/api/notifications');

@@ -25,32 +25,36 @@ export const defaultThrottle: ThrottleConfig = {
   windowSeconds: 15 * 60,
 };
 
-/** Counters in PostgreSQL (table `throttles`), shared by every instance. */
+/** A counter in PostgreSQL (table `throttles`), shared by every instance: `points` per key in `windowSeconds`. */
+export const throttleCounter = (pool: pg.Pool, keyPrefix: string, points: number, windowSeconds: number) =>
+  new RateLimiterPostgres({
+    storeClient: pool,
+    storeType: 'pool',
+    tableName: 'throttles',
+    tableCreated: true,
+    clearExpiredByTimeout: false,
+    keyPrefix,
+    points,
+    duration: windowSeconds,
+  });
+
+/** Takes a point from each counter (one atomic upsert each); 429 (with `message`, if given) when any is spent. */
+export async function takePoints(counters: [RateLimiterPostgres, string][], message?: string): Promise<void> {
+  const results = await Promise.allSettled(counters.map(([l, key]) => l.consume(key)));
+  for (const r of results) if (r.status === 'rejected' && !(r.reason instanceof RateLimiterRes)) throw r.reason;
+  if (results.some((r) => r.status === 'rejected')) throw new TooManyRequestsError(message);
+}
+
+/** The sign-in, sign-up and reset counters. */
 export function createThrottles(pool: pg.Pool, config: ThrottleConfig) {
-  const limiter = (keyPrefix: string, points: number) =>
-    new RateLimiterPostgres({
-      storeClient: pool,
-      storeType: 'pool',
-      tableName: 'throttles',
-      tableCreated: true,
-      clearExpiredByTimeout: false,
-      keyPrefix,
-      points,
-      duration: config.windowSeconds,
-    });
+  const limiter = (keyPrefix: string, points: number) => throttleCounter(pool, keyPrefix, points, config.windowSeconds);
   const signInAccount = limiter('sign-in-account', config.signInPerAccount);
   const signInIp = limiter('sign-in-ip', config.signInPerIp);
   const resetAccount = limiter('reset-account', config.resetPerAccount);
   const resetIp = limiter('reset-ip', config.resetPerIp);
   const signUpAccount = limiter('sign-up-account', config.signUpPerAccount ?? defaultThrottle.signUpPerAccount!);
   const signUpIp = limiter('sign-up-ip', config.signUpPerIp ?? defaultThrottle.signUpPerIp!);
-
-  /** Takes a point from each counter (one atomic upsert each); 429 when any is spent. */
-  const take = async (...counters: [RateLimiterPostgres, string][]) => {
-    const results = await Promise.allSettled(counters.map(([l, key]) => l.consume(key)));
-    for (const r of results) if (r.status === 'rejected' && !(r.reason instanceof RateLimiterRes)) throw r.reason;
-    if (results.some((r) => r.status === 'rejected')) throw new TooManyRequestsError();
-  };
+  const take = (...counters: [RateLimiterPostgres, string][]) => takePoints(counters);
 
   return {
     /**

@@ -18,7 +18,7 @@ type StepQuantity = Bringup['steps'][number]['readings'][number]['quantity'];
 
 /** Reads a restoration's bring-up record; owners get it without bench notes, unshared readings or links. */
 export async function readBringup(db: Db, restorationId: number, role: Role): Promise<Bringup> {
-  const owner = role === 'owner';
+  const notes = can(role, 'workshop.notes');
   const intakeRows = await db
     .select({ c: intakeChecks, by: users.name, findingShared: findings.ownerVisible, photoShared: photos.ownerVisible })
     .from(intakeChecks)
@@ -31,9 +31,9 @@ export async function readBringup(db: Db, restorationId: number, role: Role): Pr
     return {
       item,
       done: r?.c.done ?? false,
-      note: owner ? '' : (r?.c.note ?? ''),
-      findingId: r && (!owner || r.findingShared) ? r.c.findingId : null,
-      photoId: r && (!owner || r.photoShared) ? r.c.photoId : null,
+      note: notes ? (r?.c.note ?? '') : '',
+      findingId: r && can(role, 'findings.view', { ownerVisible: r.findingShared ?? false }) ? r.c.findingId : null,
+      photoId: r && can(role, 'photos.view', { ownerVisible: r.photoShared ?? false }) ? r.c.photoId : null,
       checkedBy: r ? r.by : null,
       checkedAt: r ? r.c.updatedAt.toISOString() : null,
     };
@@ -81,9 +81,9 @@ export async function readBringup(db: Db, restorationId: number, role: Role): Pr
     lampVolts: s.lampVolts,
     appliedVolts: s.appliedVolts,
     lampBehaviour: s.lampBehaviour,
-    notes: owner ? '' : s.notes,
+    notes: notes ? s.notes : '',
     decision: s.decision,
-    findingId: owner ? null : s.findingId,
+    findingId: notes ? s.findingId : null,
     takenBy: by,
     takenAt: s.takenAt.toISOString(),
     readings: readingRows

@@ -18,22 +18,12 @@ import {
   photos,
   prePowerChecks,
   prePowerSignoffs,
-  restorations,
 } from '../../db/schema';
-import { BadRequestError, ConflictError, NotFoundError } from '../../http/errors';
+import { BadRequestError, ConflictError } from '../../http/errors';
 import { judge } from '../measurements/measurements.service';
+import { lockRestoration } from '../restorations/lock-restoration';
 import { readBringup } from './bringup.repo';
 import { assertPrePowerSignedOff, type Db } from './power-gate';
-
-/** Serialises bring-up writes on one restoration, so a sign-off never races an item change. */
-async function lock(tx: Db, restorationId: number) {
-  const [r] = await tx
-    .select({ id: restorations.id })
-    .from(restorations)
-    .where(eq(restorations.id, restorationId))
-    .for('update');
-  if (!r) throw new NotFoundError();
-}
 
 async function assertOwn(tx: Db, restorationId: number, findingId: number | null, photoId: number | null = null) {
   if (findingId) {
@@ -62,7 +52,7 @@ export function bringupService(db: Database) {
 
     async setIntake(restorationId: number, input: IntakeCheck, userId: number, role: Role) {
       await db.transaction(async (tx) => {
-        await lock(tx, restorationId);
+        await lockRestoration(tx, restorationId);
         await assertOwn(tx, restorationId, input.findingId, input.photoId);
         const [before] = await tx
           .select()
@@ -93,7 +83,7 @@ export function bringupService(db: Database) {
     /** Changing an item after the sign-off withdraws the sign-off: the checklist must be signed again. */
     async setPrePower(restorationId: number, input: PrePowerCheck, userId: number, role: Role) {
       await db.transaction(async (tx) => {
-        await lock(tx, restorationId);
+        await lockRestoration(tx, restorationId);
         const [before] = await tx
           .select()
           .from(prePowerChecks)
@@ -126,7 +116,7 @@ export function bringupService(db: Database) {
 
     async signOff(restorationId: number, userId: number, role: Role) {
       await db.transaction(async (tx) => {
-        await lock(tx, restorationId);
+        await lockRestoration(tx, restorationId);
         const [already] = await tx
           .select({ id: prePowerSignoffs.id })
           .from(prePowerSignoffs)
@@ -154,7 +144,7 @@ export function bringupService(db: Database) {
       if (!usesLamp && input.lampBehaviour !== 'no-lamp')
         throw new BadRequestError('lampBehaviour: no series lamp is in circuit at this step.');
       await db.transaction(async (tx) => {
-        await lock(tx, restorationId);
+        await lockRestoration(tx, restorationId);
         await assertPrePowerSignedOff(tx, restorationId, 'logging a power-up step');
         await assertOwn(tx, restorationId, input.findingId);
         const [last] = await tx

@@ -1,11 +1,11 @@
 import { eq } from 'drizzle-orm';
 import { prePowerMissing } from '../../../shared/schemas/bringup';
-import type { Database } from '../../db/client';
+import type { Executor } from '../../db/client';
 import { prePowerChecks, prePowerSignoffs } from '../../db/schema';
 import { ConflictError } from '../../http/errors';
 
 /** A database or an open transaction: the gate is read inside the write it protects. */
-export type Db = Database | Parameters<Parameters<Database['transaction']>[0]>[0];
+export type Db = Executor;
 
 export async function prePowerSignedOff(db: Db, restorationId: number): Promise<boolean> {
   const [row] = await db

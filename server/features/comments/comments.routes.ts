@@ -4,9 +4,9 @@ import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError } from '../../http/errors';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { pageWindow, sendPage } from '../../http/pagination';
+import { input } from '../../http/validate';
 import { actorOf } from '../findings/findings.routes';
 import { findingsService } from '../findings/findings.service';
 import { commentOrder } from './comments.repo';
@@ -39,32 +39,21 @@ export function commentsRoutes(deps: AppDeps): Router {
   const router = Router();
 
   // Oldest first, in pages (see shared/schemas/pagination.ts).
-  router.get(
-    '/findings/:id/comments',
-    requireUser,
-    validate(paged),
-    guard(db, 'restoration.view', ofFinding),
-    async (req, res) => {
-      const { params, query } = input(res, paged);
-      const rows = await service.list(params.id, roleOf(res), {
-        limit: query.limit + 1,
-        cursor: decodeCursor(query.cursor, commentOrder.kinds),
-      });
-      await sendPage(
-        req,
-        res,
-        rows,
-        query.limit,
-        (c) => [c.createdAt, c.id],
-        (page) => page,
-      );
-    },
-  );
+  router.get('/findings/:id/comments', ...guarded(db, paged, 'restoration.view', ofFinding), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const rows = await service.list(params.id, roleOf(res), pageWindow(query, commentOrder.kinds));
+    await sendPage(
+      req,
+      res,
+      rows,
+      query.limit,
+      (c) => [c.createdAt, c.id],
+      (page) => page,
+    );
+  });
   router.post(
     '/findings/:id/comments',
-    requireUser,
-    validate(create),
-    guard(db, 'comments.create', ofFindingToComment),
+    ...guarded(db, create, 'comments.create', ofFindingToComment),
     async (req, res) => {
       const { params, body } = input(res, create);
       res.status(201).json(await service.create(params.id, body, actorOf(req, res), idempotencyKey(req)));
@@ -72,9 +61,7 @@ export function commentsRoutes(deps: AppDeps): Router {
   );
   router.patch(
     '/comments/:id',
-    requireUser,
-    validate(edit),
-    guard(db, 'comments.edit', ofComment('Only the author edits a comment.')),
+    ...guarded(db, edit, 'comments.edit', ofComment('Only the author edits a comment.')),
     async (req, res) => {
       const { params, body } = input(res, edit);
       res.json(await service.edit(params.id, body.body, actorOf(req, res)));
@@ -82,9 +69,7 @@ export function commentsRoutes(deps: AppDeps): Router {
   );
   router.delete(
     '/comments/:id',
-    requireUser,
-    validate(one),
-    guard(db, 'comments.delete', ofComment('Only the author or a technician deletes a comment.')),
+    ...guarded(db, one, 'comments.delete', ofComment('Only the author or a technician deletes a comment.')),
     async (req, res) => {
       await service.remove(input(res, one).params.id, actorOf(req, res));
       res.status(204).end();

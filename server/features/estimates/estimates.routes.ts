@@ -6,8 +6,8 @@ import {
 } from '../../../shared/schemas/estimates';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { input } from '../../http/validate';
 import { readWorkshopSettings } from '../workshop/workshop-settings';
 import { estimatesService } from './estimates.service';
 
@@ -23,42 +23,22 @@ export function estimatesRoutes(deps: AppDeps): Router {
   const ofEstimate = (_req: Request, res: Response) => service.restorationOf(input(res, byId).params.estimateId);
   const router = Router();
   // The prices a new estimate on this set will carry (currency, labour rate, markup, tax), for the technician's form.
-  router.get(
-    '/restorations/:id/money-settings',
-    requireUser,
-    validate(one),
-    guard(db, 'money.edit'),
-    async (_req, res) => {
-      res.json(await readWorkshopSettings(db));
-    },
-  );
-  router.get('/restorations/:id/estimates', requireUser, validate(one), guard(db, 'money.view'), async (_req, res) => {
+  router.get('/restorations/:id/money-settings', ...guarded(db, one, 'money.edit'), async (_req, res) => {
+    res.json(await readWorkshopSettings(db));
+  });
+  router.get('/restorations/:id/estimates', ...guarded(db, one, 'money.view'), async (_req, res) => {
     res.json(await service.list(input(res, one).params.id, roleOf(res)));
   });
-  router.post(
-    '/restorations/:id/estimates',
-    requireUser,
-    validate(create),
-    guard(db, 'money.edit'),
-    async (req, res) => {
-      const { params, body } = input(res, create);
-      res.status(201).json(await service.create(params.id, body, req.user!.id, roleOf(res)));
-    },
-  );
-  router.post(
-    '/estimates/:estimateId/send',
-    requireUser,
-    validate(byId),
-    guard(db, 'money.edit', ofEstimate),
-    async (req, res) => {
-      res.json(await service.send(input(res, byId).params.estimateId, req.user!.id, roleOf(res)));
-    },
-  );
+  router.post('/restorations/:id/estimates', ...guarded(db, create, 'money.edit'), async (req, res) => {
+    const { params, body } = input(res, create);
+    res.status(201).json(await service.create(params.id, body, req.user!.id, roleOf(res)));
+  });
+  router.post('/estimates/:estimateId/send', ...guarded(db, byId, 'money.edit', ofEstimate), async (req, res) => {
+    res.json(await service.send(input(res, byId).params.estimateId, req.user!.id, roleOf(res)));
+  });
   router.post(
     '/estimates/:estimateId/decision',
-    requireUser,
-    validate(decide),
-    guard(db, 'estimates.decide', ofEstimate),
+    ...guarded(db, decide, 'estimates.decide', ofEstimate),
     async (req, res) => {
       const { params, body } = input(res, decide);
       res.json(await service.decide(params.estimateId, body, req.user!.id, roleOf(res)));

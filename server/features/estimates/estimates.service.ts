@@ -4,22 +4,14 @@ import type { Estimate, EstimateInput } from '../../../shared/schemas/estimates'
 import { estimateRange } from '../../../shared/money/estimate-range';
 import type { AppDeps } from '../../app-deps';
 import type { Tx } from '../../db/client';
-import { estimateLines, estimates, events, restorations } from '../../db/schema';
+import { estimateLines, estimates, events } from '../../db/schema';
 import { ConflictError, NotFoundError } from '../../http/errors';
+import { lockRestoration } from '../restorations/lock-restoration';
 import { taxRuleOf, readWorkshopSettings } from '../workshop/workshop-settings';
 import { mailEstimate } from './estimate-mail';
 import { listEstimates, pricedBounds } from './estimates.repo';
 
 type Deps = Pick<AppDeps, 'db' | 'mailer' | 'config'>;
-
-async function lockRestoration(tx: Tx, restorationId: number) {
-  const [r] = await tx
-    .select({ id: restorations.id })
-    .from(restorations)
-    .where(eq(restorations.id, restorationId))
-    .for('update');
-  if (!r) throw new NotFoundError();
-}
 
 /** Marks an estimate sent, records the history line and e-mails the owner, all in the caller's transaction. */
 async function sendIn(tx: Tx, deps: Deps, e: typeof estimates.$inferSelect, userId: number) {

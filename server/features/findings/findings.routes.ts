@@ -3,9 +3,9 @@ import { findingInputSchema, findingPatchSchema } from '../../../shared/schemas/
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { pageWindow, sendPage } from '../../http/pagination';
+import { input } from '../../http/validate';
 import { photosRepo } from '../photos/photos.repo';
 import { findingsListCache, sendCachedList } from './findings-cache';
 import { findingCursor, findingOrder } from './findings.repo';
@@ -49,100 +49,49 @@ export function findingsRoutes(deps: AppDeps): Router {
     if (access) res.locals.findingsVersion = access.findingsVersion;
     return access;
   };
-  router.get(
-    '/photos/:id/findings',
-    requireUser,
-    validate(one),
-    guard(db, 'restoration.view', photoAccess),
-    async (req, res) => {
-      const photoId = input(res, one).params.id;
-      const role = roleOf(res);
-      const entry = await lists.read(photoId, role, res.locals.findingsVersion as number, () =>
-        service.listByPhotoJson(photoId, role),
-      );
-      await sendCachedList(req, res, entry);
-    },
-  );
-  router.post(
-    '/photos/:id/findings',
-    requireUser,
-    validate(create),
-    guard(db, 'findings.create', ofPhoto),
-    async (req, res) => {
-      const { params, body } = input(res, create);
-      res
-        .status(201)
-        .json(await service.create(params.id, body as typeof body & { ownerVisible: boolean }, actorOf(req, res)));
-    },
-  );
+  router.get('/photos/:id/findings', ...guarded(db, one, 'restoration.view', photoAccess), async (req, res) => {
+    const photoId = input(res, one).params.id;
+    const role = roleOf(res);
+    const entry = await lists.read(photoId, role, res.locals.findingsVersion as number, () =>
+      service.listByPhotoJson(photoId, role),
+    );
+    await sendCachedList(req, res, entry);
+  });
+  router.post('/photos/:id/findings', ...guarded(db, create, 'findings.create', ofPhoto), async (req, res) => {
+    const { params, body } = input(res, create);
+    res
+      .status(201)
+      .json(await service.create(params.id, body as typeof body & { ownerVisible: boolean }, actorOf(req, res)));
+  });
   // By number, in pages (see shared/schemas/pagination.ts).
-  router.get(
-    '/restorations/:id/findings',
-    requireUser,
-    validate(paged),
-    guard(db, 'restoration.view'),
-    async (req, res) => {
-      const { params, query } = input(res, paged);
-      const rows = await service.pageByRestoration(params.id, roleOf(res), {
-        limit: query.limit + 1,
-        cursor: decodeCursor(query.cursor, findingOrder.kinds),
-      });
-      await sendPage(req, res, rows, query.limit, findingCursor, (page) => page.map((f) => toFinding(f, roleOf(res))));
-    },
-  );
-  router.get(
-    '/findings/:id',
-    requireUser,
-    validate(one),
-    guard(db, 'restoration.view', ofFinding),
-    async (_req, res) => {
-      res.json(await service.get(input(res, one).params.id, roleOf(res)));
-    },
-  );
-  router.patch(
-    '/findings/:id',
-    requireUser,
-    validate(patch),
-    guard(db, 'restoration.view', ofFinding),
-    async (req, res) => {
-      const { params, body } = input(res, patch);
-      res.json(await service.update(params.id, body, actorOf(req, res)));
-    },
-  );
+  router.get('/restorations/:id/findings', ...guarded(db, paged, 'restoration.view'), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const rows = await service.pageByRestoration(params.id, roleOf(res), pageWindow(query, findingOrder.kinds));
+    await sendPage(req, res, rows, query.limit, findingCursor, (page) => page.map((f) => toFinding(f, roleOf(res))));
+  });
+  router.get('/findings/:id', ...guarded(db, one, 'restoration.view', ofFinding), async (_req, res) => {
+    res.json(await service.get(input(res, one).params.id, roleOf(res)));
+  });
+  router.patch('/findings/:id', ...guarded(db, patch, 'restoration.view', ofFinding), async (req, res) => {
+    const { params, body } = input(res, patch);
+    res.json(await service.update(params.id, body, actorOf(req, res)));
+  });
   const ofFindingToDelete = (req: Request, res: Response) =>
     service.subjectOf(
       input(res, one).params.id,
       req.user!.id,
       'Only a technician deletes a finding someone else placed.',
     );
-  router.delete(
-    '/findings/:id',
-    requireUser,
-    validate(one),
-    guard(db, 'findings.delete', ofFindingToDelete),
-    async (req, res) => {
-      await service.remove(input(res, one).params.id, actorOf(req, res));
-      res.status(204).end();
-    },
-  );
-  router.get(
-    '/findings/:id/history',
-    requireUser,
-    validate(one),
-    guard(db, 'restoration.view', ofFinding),
-    async (_req, res) => {
-      res.json(await service.history(input(res, one).params.id, roleOf(res)));
-    },
-  );
+  router.delete('/findings/:id', ...guarded(db, one, 'findings.delete', ofFindingToDelete), async (req, res) => {
+    await service.remove(input(res, one).params.id, actorOf(req, res));
+    res.status(204).end();
+  });
+  router.get('/findings/:id/history', ...guarded(db, one, 'restoration.view', ofFinding), async (_req, res) => {
+    res.json(await service.history(input(res, one).params.id, roleOf(res)));
+  });
   // A crop of the marked spot; redirects to a short-lived URL so it can be used as an image source.
-  router.get(
-    '/findings/:id/closeup',
-    requireUser,
-    validate(one),
-    guard(db, 'restoration.view', ofFinding),
-    async (_req, res) => {
-      res.redirect(302, await service.closeupUrl(input(res, one).params.id, roleOf(res)));
-    },
-  );
+  router.get('/findings/:id/closeup', ...guarded(db, one, 'restoration.view', ofFinding), async (_req, res) => {
+    res.redirect(302, await service.closeupUrl(input(res, one).params.id, roleOf(res)));
+  });
   return router;
 }

@@ -15,6 +15,7 @@ import { recordEvent } from '../events/record-event';
 import { ensureCloseup, scheduleCloseup } from '../closeups/closeups';
 import { notificationsService } from '../notifications/notifications.service';
 import { photosRepo } from '../photos/photos.repo';
+import { findingMark } from './finding-mark';
 import { photoFindingsJson } from './findings-json';
 import { findingsRepo, type FindingWithContext, type NewFinding } from './findings.repo';
 import type { Executor } from '../../db/client';
@@ -39,17 +40,9 @@ export async function openFindingIn(tx: Executor, values: NewFinding, actorId: n
 
 /** A finding as the API sends it; a question to the mentors is the workshop's business, so others read it as closed. */
 export const toFinding = (f: FindingWithContext, reader?: Role): Finding => ({
-  id: f.id,
+  ...findingMark(f),
   photoId: f.photoId,
   restorationId: f.restorationId,
-  number: f.number,
-  shape: f.shape,
-  points: f.points,
-  title: f.title,
-  componentRef: f.componentRef,
-  kind: f.kind,
-  severity: f.severity,
-  status: f.status,
   dismissReason: f.dismissReason,
   ownerVisible: f.ownerVisible,
   authorId: f.authorId,

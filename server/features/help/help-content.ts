@@ -1,5 +1,5 @@
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
-import type { Role } from '../../../shared/permissions';
+import { can, type Role } from '../../../shared/permissions';
 import type { HelpContent, HelpPhoto, HelpReply } from '../../../shared/schemas/help';
 import type { AppDeps } from '../../app-deps';
 import { redactedError } from '../../http/redact-error';
@@ -16,6 +16,7 @@ import {
   valves,
 } from '../../db/schema';
 import { ensureCloseup } from '../closeups/closeups';
+import { findingMark } from '../findings/finding-mark';
 import { mismatchVisible } from '../mismatches/mismatches.repo';
 import { photoKeys } from '../photos/photo-objects';
 import { listSymptomChecks } from '../symptom-checks/symptom-checks.repo';
@@ -156,15 +157,7 @@ export async function helpContent(
           pinRows
             .filter((f) => f.photoId === p.id)
             .map(async (f) => ({
-              id: f.id,
-              number: f.number,
-              shape: f.shape,
-              points: f.points,
-              title: f.title,
-              componentRef: f.componentRef,
-              kind: f.kind,
-              severity: f.severity,
-              status: f.status,
+              ...findingMark(f),
               closeupUrl: await closeup(p, f),
             })),
         ),
@@ -183,7 +176,7 @@ export async function helpContent(
           make: set.make,
           model: set.model,
           year: set.year,
-          chassis: role === 'owner' ? null : set.serial,
+          chassis: can(role, 'workshop.notes') ? set.serial : null,
           mains: set.mainsSetting,
           equipmentKind: set.equipmentKind,
           liveChassis: set.liveChassis,

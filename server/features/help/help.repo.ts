@@ -1,4 +1,5 @@
 import { and, desc, eq, gt, inArray, isNull, sql } from 'drizzle-orm';
+import { rolesAllowed } from '../../../shared/permissions';
 import type { Executor } from '../../db/client';
 import { helpLinks, helpReplies, helpRequests, memberships, restorations } from '../../db/schema';
 
@@ -51,7 +52,7 @@ export function helpRepo(db: Executor) {
           memberships,
           and(eq(memberships.restorationId, helpRequests.restorationId), eq(memberships.userId, userId)),
         )
-        .where(inArray(memberships.role, ['technician', 'mentor']))
+        .where(inArray(memberships.role, rolesAllowed('help.view')))
         .orderBy(desc(helpRequests.createdAt), desc(helpRequests.id))
         .limit(limit);
     },

@@ -1,7 +1,7 @@
-import { RateLimiterPostgres, RateLimiterRes } from 'rate-limiter-flexible';
-import type { HelpContent, HelpReplyInput } from '../../../shared/schemas/help';
+import type { HelpReplyInput, SharedHelp } from '../../../shared/schemas/help';
 import type { AppDeps } from '../../app-deps';
-import { NotFoundError, TooManyRequestsError } from '../../http/errors';
+import { NotFoundError } from '../../http/errors';
+import { takePoints, throttleCounter } from '../auth/throttle';
 import { hashToken } from '../auth/tokens';
 import { helpContent } from './help-content';
 import { helpRepo } from './help.repo';
@@ -16,16 +16,7 @@ export const helpReplyLimits = { perIp: 20, perLink: 30, windowSeconds: 3600 };
 export function sharedHelpService(deps: Pick<AppDeps, 'db' | 'pool' | 'storage' | 'logger' | 'config'>) {
   const repo = helpRepo(deps.db);
   const limiter = (keyPrefix: string, points: number) =>
-    new RateLimiterPostgres({
-      storeClient: deps.pool,
-      storeType: 'pool',
-      tableName: 'throttles',
-      tableCreated: true,
-      clearExpiredByTimeout: false,
-      keyPrefix,
-      points,
-      duration: helpReplyLimits.windowSeconds,
-    });
+    throttleCounter(deps.pool, keyPrefix, points, helpReplyLimits.windowSeconds);
   const perIp = limiter('help-reply-ip', helpReplyLimits.perIp);
   const perLink = limiter('help-reply-link', helpReplyLimits.perLink);
 
@@ -36,16 +27,19 @@ export function sharedHelpService(deps: Pick<AppDeps, 'db' | 'pool' | 'storage' 
   };
 
   return {
-    async read(token: string): Promise<HelpContent & { expiresAt: string }> {
+    async read(token: string): Promise<SharedHelp> {
       const { link, request } = await live(token);
       return { ...(await helpContent(deps, request, 'owner', 'approved')), expiresAt: link.expiresAt.toISOString() };
     },
     async reply(token: string, input: HelpReplyInput, ip: string) {
       const { link, request } = await live(token);
-      const results = await Promise.allSettled([perIp.consume(ip), perLink.consume(String(link.id))]);
-      for (const r of results) if (r.status === 'rejected' && !(r.reason instanceof RateLimiterRes)) throw r.reason;
-      if (results.some((r) => r.status === 'rejected'))
-        throw new TooManyRequestsError('Too many replies from here; wait an hour and try again.');
+      await takePoints(
+        [
+          [perIp, ip],
+          [perLink, String(link.id)],
+        ],
+        'Too many replies from here; wait an hour and try again.',
+      );
       const row = await repo.insertReply({
         helpRequestId: request.id,
         linkId: link.id,

@@ -8,8 +8,8 @@ import {
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { ConflictError, NotFoundError } from '../../http/errors';
-import { guard, requireUser } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded } from '../../http/guard';
+import { input } from '../../http/validate';
 import { readWorkshopSettings } from '../workshop/workshop-settings';
 import { invoiceDocument } from './invoice-document';
 import { documentTitle, renderInvoice, type DocumentKind } from './invoice-pdf';
@@ -26,41 +26,23 @@ export function invoicesRoutes(deps: AppDeps): Router {
   const service = invoicesService(deps);
   const ofInvoice = (_req: Request, res: Response) => service.restorationOf(input(res, voiding).params.invoiceId);
   const router = Router();
-  router.get('/restorations/:id/invoices', requireUser, validate(one), guard(db, 'money.view'), async (_req, res) => {
+  router.get('/restorations/:id/invoices', ...guarded(db, one, 'money.view'), async (_req, res) => {
     res.json(await service.list(input(res, one).params.id));
   });
-  router.get(
-    '/restorations/:id/invoices/preview',
-    requireUser,
-    validate(one),
-    guard(db, 'money.edit'),
-    async (_req, res) => {
-      res.json(await service.preview(input(res, one).params.id));
-    },
-  );
-  router.post(
-    '/restorations/:id/deposits',
-    requireUser,
-    validate(deposit),
-    guard(db, 'money.edit'),
-    async (req, res) => {
-      const { params, body } = input(res, deposit);
-      res.status(201).json(await service.deposit(params.id, body, req.user!.id));
-    },
-  );
-  router.post('/restorations/:id/invoices', requireUser, validate(one), guard(db, 'money.edit'), async (req, res) => {
+  router.get('/restorations/:id/invoices/preview', ...guarded(db, one, 'money.edit'), async (_req, res) => {
+    res.json(await service.preview(input(res, one).params.id));
+  });
+  router.post('/restorations/:id/deposits', ...guarded(db, deposit, 'money.edit'), async (req, res) => {
+    const { params, body } = input(res, deposit);
+    res.status(201).json(await service.deposit(params.id, body, req.user!.id));
+  });
+  router.post('/restorations/:id/invoices', ...guarded(db, one, 'money.edit'), async (req, res) => {
     res.status(201).json(await service.final(input(res, one).params.id, req.user!.id));
   });
-  router.post(
-    '/invoices/:invoiceId/void',
-    requireUser,
-    validate(voiding),
-    guard(db, 'money.edit', ofInvoice),
-    async (req, res) => {
-      const { params, body } = input(res, voiding);
-      res.json(await service.void(params.invoiceId, body.reason, req.user!.id));
-    },
-  );
+  router.post('/invoices/:invoiceId/void', ...guarded(db, voiding, 'money.edit', ofInvoice), async (req, res) => {
+    const { params, body } = input(res, voiding);
+    res.json(await service.void(params.invoiceId, body.reason, req.user!.id));
+  });
   // The PDFs: for the set's technicians and its owners (an owner reaches only their own sets); mentors see no money.
   const pdf = (kind: DocumentKind) => async (_req: Request, res: Response) => {
     const { params, query } = input(res, document);
@@ -75,19 +57,7 @@ export function invoicesRoutes(deps: AppDeps): Router {
       .attachment(`${title.replace(/[^\w]+/g, '-').toLowerCase()}.pdf`)
       .send(await renderInvoice(d, kind, timeZone));
   };
-  router.get(
-    '/invoices/:invoiceId/invoice.pdf',
-    requireUser,
-    validate(document),
-    guard(db, 'money.view', ofInvoice),
-    pdf('invoice'),
-  );
-  router.get(
-    '/invoices/:invoiceId/receipt.pdf',
-    requireUser,
-    validate(document),
-    guard(db, 'money.view', ofInvoice),
-    pdf('receipt'),
-  );
+  router.get('/invoices/:invoiceId/invoice.pdf', ...guarded(db, document, 'money.view', ofInvoice), pdf('invoice'));
+  router.get('/invoices/:invoiceId/receipt.pdf', ...guarded(db, document, 'money.view', ofInvoice), pdf('receipt'));
   return router;
 }

@@ -3,10 +3,10 @@ import type { DepositInput, Invoice, InvoicePreview } from '../../../shared/sche
 import { amountLeft, invoiceStatus } from '../../../shared/money/invoice-status';
 import { shareOf } from '../../../shared/money/totals';
 import type { AppDeps } from '../../app-deps';
-import type { Tx } from '../../db/client';
 import { unitOfWork } from '../../db/unit-of-work';
-import { estimates, events, invoiceLines, invoices, restorations } from '../../db/schema';
+import { estimates, events, invoiceLines, invoices } from '../../db/schema';
 import { ConflictError, NotFoundError } from '../../http/errors';
+import { lockRestoration } from '../restorations/lock-restoration';
 import { readWorkshopSettings } from '../workshop/workshop-settings';
 import { finalLines, previewOf } from './final-lines';
 import { referenceOf } from './invoice-document';
@@ -39,15 +39,6 @@ function present(i: Row, lines: (typeof invoiceLines.$inferSelect)[]): Invoice {
     voidReason: i.voidReason,
     lines: lines.map((l) => ({ description: l.description, net: m(l.net), tax: m(l.tax) })),
   };
-}
-
-async function lock(tx: Tx, restorationId: number) {
-  const [r] = await tx
-    .select({ id: restorations.id })
-    .from(restorations)
-    .where(eq(restorations.id, restorationId))
-    .for('update');
-  if (!r) throw new NotFoundError();
 }
 
 /**
@@ -95,7 +86,7 @@ export function invoicesService(deps: Deps) {
     /** A deposit request: an amount, or a share of the latest approved estimate's high figure (tax included, so no tax is added). */
     async deposit(restorationId: number, input: DepositInput, userId: number) {
       const row = await unitOfWork(db, async (tx) => {
-        await lock(tx, restorationId);
+        await lockRestoration(tx, restorationId);
         const settings = await readWorkshopSettings(tx);
         let amount: number;
         let description = 'Deposit';
@@ -136,7 +127,7 @@ export function invoicesService(deps: Deps) {
     /** The final invoice: billable labour at the workshop rate, fitted parts at cost plus markup, less deposits paid. */
     async final(restorationId: number, userId: number) {
       const row = await unitOfWork(db, async (tx) => {
-        await lock(tx, restorationId);
+        await lockRestoration(tx, restorationId);
         const [existing] = await tx
           .select({ number: invoices.number, numberPrefix: invoices.numberPrefix })
           .from(invoices)

@@ -1,8 +1,9 @@
 import { and, desc, eq, gte, isNull, sql } from 'drizzle-orm';
 import type { LabourLog } from '../../../shared/schemas/labour';
 import type { Database, Tx } from '../../db/client';
-import { events, findings, labourEntries, restorations, users } from '../../db/schema';
-import { BadRequestError, ConflictError, NotFoundError } from '../../http/errors';
+import { events, findings, labourEntries, users } from '../../db/schema';
+import { BadRequestError, ConflictError } from '../../http/errors';
+import { lockRestoration } from '../restorations/lock-restoration';
 
 type Row = typeof labourEntries.$inferSelect;
 type Target = {
@@ -31,12 +32,7 @@ export function weekStart(now: Date): Date {
 }
 
 async function assertTarget(tx: Tx, restorationId: number, findingId: number | null) {
-  const [r] = await tx
-    .select({ id: restorations.id })
-    .from(restorations)
-    .where(eq(restorations.id, restorationId))
-    .for('update');
-  if (!r) throw new NotFoundError();
+  await lockRestoration(tx, restorationId);
   if (findingId === null) return;
   const [f] = await tx
     .select({ id: findings.id })
@@ -53,6 +49,16 @@ const logged = (tx: Tx, e: Row, actorId: number) =>
     findingId: e.findingId,
     data: { labourEntryId: e.id, minutes: e.minutes, billable: e.billable },
   });
+
+/** An entry's own fields, whether typed or timed. */
+const entryOf = (restorationId: number, input: Target, userId: number) => ({
+  restorationId,
+  technicianId: userId,
+  findingId: input.findingId,
+  stage: input.stage,
+  note: input.note,
+  billable: input.billable,
+});
 
 /** The labour log: typed hours or a server-side timer; each finished entry writes its history line in the same transaction. */
 export function labourService(db: Database) {
@@ -96,12 +102,7 @@ export function labourService(db: Database) {
         const [e] = await tx
           .insert(labourEntries)
           .values({
-            restorationId,
-            technicianId: userId,
-            findingId: input.findingId,
-            stage: input.stage,
-            note: input.note,
-            billable: input.billable,
+            ...entryOf(restorationId, input, userId),
             startedAt: at,
             stoppedAt: at,
             minutes: input.minutes,
@@ -122,14 +123,7 @@ export function labourService(db: Database) {
           .where(and(eq(labourEntries.technicianId, userId), isNull(labourEntries.stoppedAt)))
           .for('update');
         if (already) throw new ConflictError('Your timer is already running: stop it before starting another.');
-        await tx.insert(labourEntries).values({
-          restorationId,
-          technicianId: userId,
-          findingId: input.findingId,
-          stage: input.stage,
-          note: input.note,
-          billable: input.billable,
-        });
+        await tx.insert(labourEntries).values(entryOf(restorationId, input, userId));
       });
       return log(restorationId, userId);
     },

@@ -8,9 +8,9 @@ import {
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { pageWindow, sendPage } from '../../http/pagination';
+import { input } from '../../http/validate';
 import { measurementOrder, measurementsService } from './measurements.service';
 
 const list = { params: idParamsSchema, query: measurementListQuerySchema.extend(pageQuerySchema.shape) };
@@ -25,73 +25,37 @@ export function measurementsRoutes({ db }: AppDeps): Router {
   const ofMeasurement = (_req: Request, res: Response) => service.subjectOf(input(res, one).params.id);
   const router = Router();
   // In the order they were taken, in pages (see shared/schemas/pagination.ts).
-  router.get(
-    '/restorations/:id/measurements',
-    requireUser,
-    validate(list),
-    guard(db, 'restoration.view'),
-    async (req, res) => {
-      const { params, query } = input(res, list);
-      const window = { limit: query.limit + 1, cursor: decodeCursor(query.cursor, measurementOrder.kinds) };
-      const rows = await service.list(params.id, roleOf(res), query.findingId, window);
-      await sendPage(
-        req,
-        res,
-        rows,
-        query.limit,
-        (m) => [m.measuredAt, m.id],
-        (page) => page,
-      );
-    },
-  );
-  router.post(
-    '/restorations/:id/measurements',
-    requireUser,
-    validate(create),
-    guard(db, 'measurements.record'),
-    async (req, res) => {
-      const { params, body } = input(res, create);
-      res.status(201).json(await service.create(params.id, body, req.user!.id));
-    },
-  );
-  router.patch(
-    '/measurements/:id',
-    requireUser,
-    validate(patch),
-    guard(db, 'measurements.record', ofMeasurement),
-    async (req, res) => {
-      const { params, body } = input(res, patch);
-      res.json(await service.update(params.id, body, req.user!.id));
-    },
-  );
-  router.delete(
-    '/measurements/:id',
-    requireUser,
-    validate(one),
-    guard(db, 'measurements.record', ofMeasurement),
-    async (_req, res) => {
-      await service.remove(input(res, one).params.id);
-      res.status(204).end();
-    },
-  );
-  router.get(
-    '/restorations/:id/valves',
-    requireUser,
-    validate(one),
-    guard(db, 'restoration.view'),
-    async (_req, res) => {
-      res.json(await service.lineUp(input(res, one).params.id));
-    },
-  );
-  router.put(
-    '/restorations/:id/valves',
-    requireUser,
-    validate(lineUp),
-    guard(db, 'measurements.record'),
-    async (_req, res) => {
-      const { params, body } = input(res, lineUp);
-      res.json(await service.setLineUp(params.id, body.valves));
-    },
-  );
+  router.get('/restorations/:id/measurements', ...guarded(db, list, 'restoration.view'), async (req, res) => {
+    const { params, query } = input(res, list);
+    const window = pageWindow(query, measurementOrder.kinds);
+    const rows = await service.list(params.id, roleOf(res), query.findingId, window);
+    await sendPage(
+      req,
+      res,
+      rows,
+      query.limit,
+      (m) => [m.measuredAt, m.id],
+      (page) => page,
+    );
+  });
+  router.post('/restorations/:id/measurements', ...guarded(db, create, 'measurements.record'), async (req, res) => {
+    const { params, body } = input(res, create);
+    res.status(201).json(await service.create(params.id, body, req.user!.id));
+  });
+  router.patch('/measurements/:id', ...guarded(db, patch, 'measurements.record', ofMeasurement), async (req, res) => {
+    const { params, body } = input(res, patch);
+    res.json(await service.update(params.id, body, req.user!.id));
+  });
+  router.delete('/measurements/:id', ...guarded(db, one, 'measurements.record', ofMeasurement), async (_req, res) => {
+    await service.remove(input(res, one).params.id);
+    res.status(204).end();
+  });
+  router.get('/restorations/:id/valves', ...guarded(db, one, 'restoration.view'), async (_req, res) => {
+    res.json(await service.lineUp(input(res, one).params.id));
+  });
+  router.put('/restorations/:id/valves', ...guarded(db, lineUp, 'measurements.record'), async (_req, res) => {
+    const { params, body } = input(res, lineUp);
+    res.json(await service.setLineUp(params.id, body.valves));
+  });
   return router;
 }

@@ -8,9 +8,9 @@ import {
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
-import { input, validate } from '../../http/validate';
+import { guarded } from '../../http/guard';
+import { pageWindow, sendPage } from '../../http/pagination';
+import { input } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
 import { memberOrder } from './members.repo';
 import { membersService } from './members.service';
@@ -31,12 +31,9 @@ export function membersRoutes(deps: AppDeps): Router {
   const base = '/restorations/:id';
 
   // In the order people joined, in pages (see shared/schemas/pagination.ts).
-  router.get(`${base}/members`, requireUser, validate(paged), guard(db, 'members.view'), async (req, res) => {
+  router.get(`${base}/members`, ...guarded(db, paged, 'members.view'), async (req, res) => {
     const { params, query } = input(res, paged);
-    const rows = await members.list(params.id, {
-      limit: query.limit + 1,
-      cursor: decodeCursor(query.cursor, memberOrder.kinds),
-    });
+    const rows = await members.list(params.id, pageWindow(query, memberOrder.kinds));
     await sendPage(
       req,
       res,
@@ -46,32 +43,20 @@ export function membersRoutes(deps: AppDeps): Router {
       (page) => page,
     );
   });
-  router.patch(
-    `${base}/members/:userId`,
-    requireUser,
-    validate(rolePatch),
-    guard(db, 'members.manage'),
-    async (_req, res) => {
-      const { params, body } = input(res, rolePatch);
-      await members.changeRole(params.id, params.userId, body.role);
-      res.json(await members.list(params.id));
-    },
-  );
-  router.delete(
-    `${base}/members/:userId`,
-    requireUser,
-    validate(member),
-    guard(db, 'members.manage'),
-    async (_req, res) => {
-      const { params } = input(res, member);
-      await members.remove(params.id, params.userId);
-      res.status(204).end();
-    },
-  );
-  router.get(`${base}/invitations`, requireUser, validate(one), guard(db, 'members.manage'), async (_req, res) => {
+  router.patch(`${base}/members/:userId`, ...guarded(db, rolePatch, 'members.manage'), async (_req, res) => {
+    const { params, body } = input(res, rolePatch);
+    await members.changeRole(params.id, params.userId, body.role);
+    res.json(await members.list(params.id));
+  });
+  router.delete(`${base}/members/:userId`, ...guarded(db, member, 'members.manage'), async (_req, res) => {
+    const { params } = input(res, member);
+    await members.remove(params.id, params.userId);
+    res.status(204).end();
+  });
+  router.get(`${base}/invitations`, ...guarded(db, one, 'members.manage'), async (_req, res) => {
     res.json(await invitations.listPending(input(res, one).params.id));
   });
-  router.post(`${base}/invitations`, requireUser, validate(invite), guard(db, 'members.manage'), async (req, res) => {
+  router.post(`${base}/invitations`, ...guarded(db, invite, 'members.manage'), async (req, res) => {
     const { params, body } = input(res, invite);
     const created = await invitations.invite(params.id, body.email, body.role, req.user!.id);
     res
@@ -80,9 +65,7 @@ export function membersRoutes(deps: AppDeps): Router {
   });
   router.post(
     `${base}/invitations/:invitationId/resend`,
-    requireUser,
-    validate(invitation),
-    guard(db, 'members.manage'),
+    ...guarded(db, invitation, 'members.manage'),
     async (req, res) => {
       const { params } = input(res, invitation);
       await invitations.resend(params.id, params.invitationId, req.user!.id);
@@ -91,9 +74,7 @@ export function membersRoutes(deps: AppDeps): Router {
   );
   router.delete(
     `${base}/invitations/:invitationId`,
-    requireUser,
-    validate(invitation),
-    guard(db, 'members.manage'),
+    ...guarded(db, invitation, 'members.manage'),
     async (_req, res) => {
       const { params } = input(res, invitation);
       await invitations.revoke(params.id, params.invitationId);

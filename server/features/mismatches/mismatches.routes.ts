@@ -7,8 +7,8 @@ import {
   referenceMarksQuerySchema,
 } from '../../../shared/schemas/sheets';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { input } from '../../http/validate';
 import { mismatchesService } from './mismatches.service';
 
 const list = { params: idParamsSchema, query: referenceMarksQuerySchema };
@@ -22,45 +22,21 @@ export function mismatchesRoutes(deps: AppDeps): Router {
   const ofNote = (_req: Request, res: Response) => service.subjectOf(input(res, one).params.noteId);
   const router = Router();
 
-  router.get(
-    '/restorations/:id/mismatch-notes',
-    requireUser,
-    validate(list),
-    guard(db, 'restoration.view'),
-    async (_req, res) => {
-      const { params, query } = input(res, list);
-      res.json(await service.list(params.id, roleOf(res), query.ref));
-    },
-  );
-  router.post(
-    '/restorations/:id/mismatch-notes',
-    requireUser,
-    validate(create),
-    guard(db, 'references.mark'),
-    async (req, res) => {
-      const { params, body } = input(res, create);
-      res.status(201).json(await service.create(params.id, body, req.user!.id));
-    },
-  );
-  router.patch(
-    '/mismatch-notes/:noteId',
-    requireUser,
-    validate(patch),
-    guard(db, 'references.mark', ofNote),
-    async (_req, res) => {
-      const { params, body } = input(res, patch);
-      res.json(await service.update(params.noteId, body, roleOf(res)));
-    },
-  );
-  router.delete(
-    '/mismatch-notes/:noteId',
-    requireUser,
-    validate(one),
-    guard(db, 'references.mark', ofNote),
-    async (_req, res) => {
-      await service.remove(input(res, one).params.noteId, roleOf(res));
-      res.status(204).end();
-    },
-  );
+  router.get('/restorations/:id/mismatch-notes', ...guarded(db, list, 'restoration.view'), async (_req, res) => {
+    const { params, query } = input(res, list);
+    res.json(await service.list(params.id, roleOf(res), query.ref));
+  });
+  router.post('/restorations/:id/mismatch-notes', ...guarded(db, create, 'references.mark'), async (req, res) => {
+    const { params, body } = input(res, create);
+    res.status(201).json(await service.create(params.id, body, req.user!.id));
+  });
+  router.patch('/mismatch-notes/:noteId', ...guarded(db, patch, 'references.mark', ofNote), async (_req, res) => {
+    const { params, body } = input(res, patch);
+    res.json(await service.update(params.noteId, body, roleOf(res)));
+  });
+  router.delete('/mismatch-notes/:noteId', ...guarded(db, one, 'references.mark', ofNote), async (_req, res) => {
+    await service.remove(input(res, one).params.noteId, roleOf(res));
+    res.status(204).end();
+  });
   return router;
 }

@@ -1,4 +1,5 @@
 import { and, asc, eq, inArray, isNull, ne, or } from 'drizzle-orm';
+import { rolesAllowed } from '../../../shared/permissions';
 import type { OpenQuestion } from '../../../shared/schemas/findings';
 import type { Executor } from '../../db/client';
 import { findings, memberships, restorations } from '../../db/schema';
@@ -16,7 +17,7 @@ export async function openQuestionsFor(db: Executor, userId: number): Promise<Op
     .where(
       and(
         eq(findings.questionOpen, true),
-        inArray(memberships.role, ['technician', 'mentor']),
+        inArray(memberships.role, rolesAllowed('workshop.view')),
         or(isNull(findings.questionAskedById), ne(findings.questionAskedById, userId)),
       ),
     )

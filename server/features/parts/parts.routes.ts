@@ -4,9 +4,9 @@ import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { partInputSchema, partPatchSchema, partsCsvQuerySchema } from '../../../shared/schemas/parts';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
+import { guarded, roleOf } from '../../http/guard';
 import { decodeCursor, sendPage } from '../../http/pagination';
-import { input, validate } from '../../http/validate';
+import { input } from '../../http/validate';
 import { readWorkshopSettings } from '../workshop/workshop-settings';
 import { partsCsv } from './parts-csv';
 import { partsService, toPart } from './parts.service';
@@ -23,7 +23,7 @@ export function partsRoutes({ db }: AppDeps): Router {
   const ofPart = (_req: Request, res: Response) => service.restorationOf(input(res, one).params.id);
   const router = Router();
   // The ledger in pages (see shared/schemas/pagination.ts), as this role may see it; the CSV below stays whole.
-  router.get('/restorations/:id/parts', requireUser, validate(paged), guard(db, 'parts.view'), async (req, res) => {
+  router.get('/restorations/:id/parts', ...guarded(db, paged, 'parts.view'), async (req, res) => {
     const { params, query } = input(res, paged);
     const cursor = decodeCursor(query.cursor, ['string', 'number']);
     const rows = await service.page(
@@ -41,7 +41,7 @@ export function partsRoutes({ db }: AppDeps): Router {
       (page) => page.map((p) => toPart(p, roleOf(res))),
     );
   });
-  router.get('/restorations/:id/parts.csv', requireUser, validate(csv), guard(db, 'parts.view'), async (_req, res) => {
+  router.get('/restorations/:id/parts.csv', ...guarded(db, csv, 'parts.view'), async (_req, res) => {
     const { params, query } = input(res, csv);
     const lines = (await service.forExport(params.id, roleOf(res))).map(({ row, finding }) => ({
       part: toPart(row, roleOf(res)),
@@ -56,15 +56,15 @@ export function partsRoutes({ db }: AppDeps): Router {
       .attachment(`restoration-${params.id}-parts.csv`)
       .send(partsCsv(lines, { ...query, currency }, reader));
   });
-  router.post('/restorations/:id/parts', requireUser, validate(create), guard(db, 'parts.edit'), async (req, res) => {
+  router.post('/restorations/:id/parts', ...guarded(db, create, 'parts.edit'), async (req, res) => {
     const { params, body } = input(res, create);
     res.status(201).json(toPart(await service.create(params.id, body, req.user!.id), roleOf(res)));
   });
-  router.patch('/parts/:id', requireUser, validate(patch), guard(db, 'parts.edit', ofPart), async (req, res) => {
+  router.patch('/parts/:id', ...guarded(db, patch, 'parts.edit', ofPart), async (req, res) => {
     const { params, body } = input(res, patch);
     res.json(toPart(await service.update(params.id, body, req.user!.id), roleOf(res)));
   });
-  router.delete('/parts/:id', requireUser, validate(one), guard(db, 'parts.edit', ofPart), async (_req, res) => {
+  router.delete('/parts/:id', ...guarded(db, one, 'parts.edit', ofPart), async (_req, res) => {
     await service.remove(input(res, one).params.id);
     res.status(204).end();
   });

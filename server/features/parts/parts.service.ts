@@ -17,9 +17,10 @@ export function toPart(row: Row, role: Role): Part {
     replacement: `${row.replacementPart} ${row.replacementRating}`,
     mainsPosition: row.mainsPosition,
   });
-  const owner = role === 'owner';
-  // Costs follow the one policy: technicians only (mentors see no money; owners read the ledger without costs).
+  // Costs and notes follow the one policy: costs for technicians only (mentors see no money); owners read the
+  // ledger without costs, sources, notes and the bench's warnings.
   const costs = can(role, 'parts.costs');
+  const notes = can(role, 'workshop.notes');
   return {
     id: row.id,
     restorationId: row.restorationId,
@@ -34,12 +35,12 @@ export function toPart(row: Row, role: Role): Part {
     mainsPosition: row.mainsPosition,
     quantity: row.quantity,
     costMinor: costs ? row.costMinor : null,
-    source: owner ? '' : row.source,
+    source: notes ? row.source : '',
     testedAfter: row.testedAfter,
-    notes: owner ? '' : row.notes,
+    notes: notes ? row.notes : '',
     fittedAt: row.fittedAt?.toISOString() ?? null,
-    // The bench checks on a replacement are the technician's working notes, not the owner's.
-    warnings: !owner && (row.action === 'replaced' || row.action === 'restuffed') ? warnings : [],
+    // The bench checks on a replacement are the workshop's working notes.
+    warnings: notes && (row.action === 'replaced' || row.action === 'restuffed') ? warnings : [],
   };
 }
 

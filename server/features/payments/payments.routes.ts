@@ -4,8 +4,8 @@ import { manualPaymentInputSchema, paymentParamsSchema, refundInputSchema } from
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { BadRequestError } from '../../http/errors';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { input } from '../../http/validate';
 import { applyPaymentEvent } from './payment-webhook';
 import { paymentsService } from './payments.service';
 
@@ -43,38 +43,28 @@ export function paymentsRoutes(deps: AppDeps): Router {
     service.restorationOfInvoice(input(res, ofInvoiceId).params.invoiceId);
   const ofPayment = (_req: Request, res: Response) => service.restorationOfPayment(input(res, refund).params.paymentId);
   const router = Router();
-  router.get('/restorations/:id/payments', requireUser, validate(one), guard(db, 'money.view'), async (_req, res) => {
+  router.get('/restorations/:id/payments', ...guarded(db, one, 'money.view'), async (_req, res) => {
     res.json(await service.list(input(res, one).params.id, roleOf(res)));
   });
   router.post(
     '/invoices/:invoiceId/checkout',
-    requireUser,
-    validate(ofInvoiceId),
-    guard(db, 'payments.checkout', ofInvoice),
+    ...guarded(db, ofInvoiceId, 'payments.checkout', ofInvoice),
     async (_req, res) => {
       res.json(await service.checkout(input(res, ofInvoiceId).params.invoiceId, roleOf(res)));
     },
   );
   router.post(
     '/invoices/:invoiceId/payments',
-    requireUser,
-    validate(manual),
-    guard(db, 'payments.record', ofInvoice),
+    ...guarded(db, manual, 'payments.record', ofInvoice),
     async (req, res) => {
       const { params, body } = input(res, manual);
       res.status(201).json(await service.record(params.invoiceId, body, req.user!.id, roleOf(res)));
     },
   );
-  router.post(
-    '/payments/:paymentId/refund',
-    requireUser,
-    validate(refund),
-    guard(db, 'payments.record', ofPayment),
-    async (req, res) => {
-      const { params, body } = input(res, refund);
-      const answer = await service.refund(params.paymentId, body, req.user!.id, roleOf(res));
-      res.status(answer.status).json(answer.body);
-    },
-  );
+  router.post('/payments/:paymentId/refund', ...guarded(db, refund, 'payments.record', ofPayment), async (req, res) => {
+    const { params, body } = input(res, refund);
+    const answer = await service.refund(params.paymentId, body, req.user!.id, roleOf(res));
+    res.status(answer.status).json(answer.body);
+  });
   return router;
 }

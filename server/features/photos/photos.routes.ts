@@ -3,9 +3,9 @@ import { photoParamsSchema, photoPatchSchema } from '../../../shared/schemas/pho
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { pageWindow, sendPage } from '../../http/pagination';
+import { input } from '../../http/validate';
 import { photoCursor, photoOrder } from './photos.repo';
 import { photosService } from './photos.service';
 import { receiveUpload } from './receive-upload';
@@ -22,22 +22,13 @@ export function photosRoutes(deps: AppDeps): Router {
   const router = Router();
 
   // Oldest first, in pages (see shared/schemas/pagination.ts).
-  router.get(
-    '/restorations/:id/photos',
-    requireUser,
-    validate(paged),
-    guard(db, 'restoration.view'),
-    async (req, res) => {
-      const { params, query } = input(res, paged);
-      const rows = await service.page(params.id, roleOf(res), {
-        limit: query.limit + 1,
-        cursor: decodeCursor(query.cursor, photoOrder.kinds),
-      });
-      await sendPage(req, res, rows, query.limit, photoCursor, (page) => service.present(page, roleOf(res)));
-    },
-  );
+  router.get('/restorations/:id/photos', ...guarded(db, paged, 'restoration.view'), async (req, res) => {
+    const { params, query } = input(res, paged);
+    const rows = await service.page(params.id, roleOf(res), pageWindow(query, photoOrder.kinds));
+    await sendPage(req, res, rows, query.limit, photoCursor, (page) => service.present(page, roleOf(res)));
+  });
   // Permission is settled before a byte of the body is read.
-  router.post('/restorations/:id/photos', requireUser, validate(one), guard(db, 'photos.upload'), async (req, res) => {
+  router.post('/restorations/:id/photos', ...guarded(db, one, 'photos.upload'), async (req, res) => {
     const restorationId = input(res, one).params.id;
     // The client hanging up before the answer cancels the work: an abandoned upload is not stored.
     const abandoned = new AbortController();
@@ -51,14 +42,14 @@ export function photosRoutes(deps: AppDeps): Router {
     }
   });
   // One photo: the guard settles visibility (404) before the action (403).
-  router.get('/photos/:id', requireUser, validate(photo), guard(db, 'photos.view', ofPhoto), async (_req, res) => {
+  router.get('/photos/:id', ...guarded(db, photo, 'photos.view', ofPhoto), async (_req, res) => {
     res.json(await service.get(input(res, photo).params.id, roleOf(res)));
   });
-  router.patch('/photos/:id', requireUser, validate(patch), guard(db, 'photos.edit', ofPhoto), async (_req, res) => {
+  router.patch('/photos/:id', ...guarded(db, patch, 'photos.edit', ofPhoto), async (_req, res) => {
     const { params, body } = input(res, patch);
     res.json(await service.update(params.id, body, roleOf(res)));
   });
-  router.delete('/photos/:id', requireUser, validate(photo), guard(db, 'photos.delete', ofPhoto), async (_req, res) => {
+  router.delete('/photos/:id', ...guarded(db, photo, 'photos.delete', ofPhoto), async (_req, res) => {
     await service.remove(input(res, photo).params.id, roleOf(res));
     res.status(204).end();
   });

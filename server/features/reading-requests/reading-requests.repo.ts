@@ -1,14 +1,17 @@
 import { aliasedTable, and, desc, eq, gt, inArray, isNull, or, sql, type SQL } from 'drizzle-orm';
-import type { Role } from '../../../shared/permissions';
+import { rolesAllowed, type Role } from '../../../shared/permissions';
 import type { BenchReadingRequest, ReadingRequest } from '../../../shared/schemas/reading-requests';
 import type { AppDeps } from '../../app-deps';
 import type { Executor } from '../../db/client';
 import { measurements, memberships, photos, readingRequests, restorations, users } from '../../db/schema';
+import { readingSummary } from '../measurements/reading-summary';
 import { photoKeys } from '../photos/photo-objects';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 const asker = aliasedTable(users, 'asker');
 const answerer = aliasedTable(users, 'answerer');
+/** The roles that read requests for readings (the routes' `help.view`). */
+const readers = rolesAllowed('help.view');
 
 /** Requests for readings with their answer, as `role` may see them (owners: none, by the one rule). */
 async function select(
@@ -56,16 +59,7 @@ async function select(
         answeredAt: r.answeredAt?.toISOString() ?? null,
         answeredBy,
         answerNote: r.answerNote,
-        reading: m
-          ? {
-              id: m.id,
-              location: m.location,
-              reading: m.readingText,
-              expected: m.expectedText,
-              verdict: m.verdict,
-              verdictReason: m.verdictReason,
-            }
-          : null,
+        reading: m ? readingSummary(m) : null,
         photo: p
           ? { id: p.id, caption: p.caption, thumbUrl: await deps.storage.getSignedUrl(photoKeys(p.storageKey).thumb) }
           : null,
@@ -110,16 +104,16 @@ export function readingRequestsRepo(deps: Pick<AppDeps, 'storage'> & { db: Execu
       return (await select(deps, role, eq(readingRequests.restorationId, restorationId))).map((r) => r.request);
     },
     /**
-     * For a bench: on every set where the person is a technician or mentor, the open requests and those answered in
+     * For a bench: on every set where the person's role reads them (technician or mentor), the open requests and those answered in
      * the last fortnight. Each set is judged by the person's own role there.
      */
     async bench(userId: number): Promise<BenchReadingRequest[]> {
       const mine = await db
         .select({ restorationId: memberships.restorationId, role: memberships.role })
         .from(memberships)
-        .where(and(eq(memberships.userId, userId), inArray(memberships.role, ['technician', 'mentor'])));
+        .where(and(eq(memberships.userId, userId), inArray(memberships.role, readers)));
       const out: BenchReadingRequest[] = [];
-      for (const role of ['technician', 'mentor'] as const) {
+      for (const role of readers) {
         const ids = mine.filter((m) => m.role === role).map((m) => m.restorationId);
         if (!ids.length) continue;
         const recent = or(

@@ -6,8 +6,8 @@ import {
 } from '../../../shared/schemas/reading-requests';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded, requireUser, roleOf } from '../../http/guard';
+import { input } from '../../http/validate';
 import { readingRequestsService } from './reading-requests.service';
 
 const list = { params: idParamsSchema };
@@ -24,34 +24,22 @@ export function readingRequestsRoutes(deps: AppDeps): Router {
     role: roleOf(res),
   });
   const router = Router();
-  router.get(
-    '/restorations/:id/reading-requests',
-    requireUser,
-    validate(list),
-    guard(db, 'help.view'),
-    async (_req, res) => {
-      res.json(await requests.list(input(res, list).params.id, roleOf(res)));
-    },
-  );
-  router.post(
-    '/restorations/:id/reading-requests',
-    requireUser,
-    validate(create),
-    guard(db, 'help.view'),
-    async (req, res) => {
-      const { params, body } = input(res, create);
-      res.status(201).json(await requests.create(params.id, body, actor(req, res)));
-    },
-  );
+  router.get('/restorations/:id/reading-requests', ...guarded(db, list, 'help.view'), async (_req, res) => {
+    res.json(await requests.list(input(res, list).params.id, roleOf(res)));
+  });
+  router.post('/restorations/:id/reading-requests', ...guarded(db, create, 'help.view'), async (req, res) => {
+    const { params, body } = input(res, create);
+    res.status(201).json(await requests.create(params.id, body, actor(req, res)));
+  });
   // The bench: open tasks and recent answers on every set where the person is a technician or mentor.
   router.get('/reading-requests', requireUser, async (req, res) => {
     res.json(await requests.bench(req.user!.id));
   });
   router.post(
     '/reading-requests/:readingRequestId/answer',
-    requireUser,
-    validate(answer),
-    guard(db, 'help.ask', (_req, res) => requests.restorationOf(input(res, answer).params.readingRequestId)),
+    ...guarded(db, answer, 'help.ask', (_req, res) =>
+      requests.restorationOf(input(res, answer).params.readingRequestId),
+    ),
     async (req, res) => {
       const { params, body } = input(res, answer);
       res.json(await requests.answer(params.readingRequestId, body, actor(req, res)));

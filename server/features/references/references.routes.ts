@@ -6,8 +6,8 @@ import {
   referenceMarksQuerySchema,
 } from '../../../shared/schemas/sheets';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { input } from '../../http/validate';
 import { referencesService } from './references.service';
 
 const one = { params: idParamsSchema };
@@ -21,44 +21,20 @@ export function referencesRoutes(deps: AppDeps): Router {
   const ofMark = (_req: Request, res: Response) => service.subjectOfMark(input(res, mark).params.markId);
   const router = Router();
 
-  router.get(
-    '/restorations/:id/references',
-    requireUser,
-    validate(one),
-    guard(db, 'restoration.view'),
-    async (_req, res) => {
-      res.json(await service.summary(input(res, one).params.id, roleOf(res)));
-    },
-  );
-  router.get(
-    '/restorations/:id/reference-marks',
-    requireUser,
-    validate(listMarks),
-    guard(db, 'restoration.view'),
-    async (_req, res) => {
-      const { params, query } = input(res, listMarks);
-      res.json(await service.listMarks(params.id, roleOf(res), query.ref));
-    },
-  );
-  router.post(
-    '/restorations/:id/reference-marks',
-    requireUser,
-    validate(create),
-    guard(db, 'references.mark'),
-    async (req, res) => {
-      const { params, body } = input(res, create);
-      res.status(201).json(await service.mark(params.id, body, req.user!.id));
-    },
-  );
-  router.delete(
-    '/reference-marks/:markId',
-    requireUser,
-    validate(mark),
-    guard(db, 'references.mark', ofMark),
-    async (_req, res) => {
-      await service.remove(input(res, mark).params.markId, roleOf(res));
-      res.status(204).end();
-    },
-  );
+  router.get('/restorations/:id/references', ...guarded(db, one, 'restoration.view'), async (_req, res) => {
+    res.json(await service.summary(input(res, one).params.id, roleOf(res)));
+  });
+  router.get('/restorations/:id/reference-marks', ...guarded(db, listMarks, 'restoration.view'), async (_req, res) => {
+    const { params, query } = input(res, listMarks);
+    res.json(await service.listMarks(params.id, roleOf(res), query.ref));
+  });
+  router.post('/restorations/:id/reference-marks', ...guarded(db, create, 'references.mark'), async (req, res) => {
+    const { params, body } = input(res, create);
+    res.status(201).json(await service.mark(params.id, body, req.user!.id));
+  });
+  router.delete('/reference-marks/:markId', ...guarded(db, mark, 'references.mark', ofMark), async (_req, res) => {
+    await service.remove(input(res, mark).params.markId, roleOf(res));
+    res.status(204).end();
+  });
   return router;
 }

@@ -2,8 +2,8 @@ import { Router } from 'express';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { NotFoundError } from '../../http/errors';
-import { guard, requireUser } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded } from '../../http/guard';
+import { input } from '../../http/validate';
 import { reportData } from './report.repo';
 import { renderReport } from './report-pdf';
 
@@ -22,15 +22,9 @@ export async function buildReport(deps: Pick<AppDeps, 'db' | 'storage' | 'config
 /** The hand-back report: the owner's document (only what is shared with them), for every member to download. Sending is in the safety feature. */
 export function reportRoutes(deps: AppDeps): Router {
   const router = Router();
-  router.get(
-    '/restorations/:id/report.pdf',
-    requireUser,
-    validate(one),
-    guard(deps.db, 'report.download'),
-    async (_req, res) => {
-      const { pdf, name } = await buildReport(deps, input(res, one).params.id);
-      res.type('application/pdf').attachment(name).send(pdf);
-    },
-  );
+  router.get('/restorations/:id/report.pdf', ...guarded(deps.db, one, 'report.download'), async (_req, res) => {
+    const { pdf, name } = await buildReport(deps, input(res, one).params.id);
+    res.type('application/pdf').attachment(name).send(pdf);
+  });
   return router;
 }

@@ -7,8 +7,8 @@ import {
 } from '../../../shared/schemas/restorations';
 import { pageQuerySchema } from '../../../shared/schemas/pagination';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { decodeCursor, sendPage } from '../../http/pagination';
+import { guarded, requireUser, roleOf } from '../../http/guard';
+import { pageWindow, sendPage } from '../../http/pagination';
 import { input, validate } from '../../http/validate';
 import { invitationsService } from '../invitations/invitations.service';
 import { deleteSheetObjects } from '../sheets/sheet-objects';
@@ -33,23 +33,20 @@ export function restorationsRoutes(deps: AppDeps): Router {
   // The bench, most recently changed first, in pages (see shared/schemas/pagination.ts).
   router.get('/restorations', requireUser, validate(list), async (req, res) => {
     const { query } = input(res, list);
-    const rows = await service.pageFor(req.user!.id, query, {
-      limit: query.limit + 1,
-      cursor: decodeCursor(query.cursor, benchOrder.kinds),
-    });
+    const rows = await service.pageFor(req.user!.id, query, pageWindow(query, benchOrder.kinds));
     await sendPage(req, res, rows, query.limit, benchCursor, (page) => page.map((r) => toRestoration(r, r.role)));
   });
   router.post('/restorations', requireUser, validate(create), async (req, res) => {
     res.status(201).json(await service.create(input(res, create).body, req.user!.id));
   });
-  router.get('/restorations/:id', requireUser, validate(one), guard(db, 'restoration.view'), async (_req, res) => {
+  router.get('/restorations/:id', ...guarded(db, one, 'restoration.view'), async (_req, res) => {
     res.json(await service.get(input(res, one).params.id, roleOf(res)));
   });
-  router.patch('/restorations/:id', requireUser, validate(patch), guard(db, 'restoration.edit'), async (req, res) => {
+  router.patch('/restorations/:id', ...guarded(db, patch, 'restoration.edit'), async (req, res) => {
     const { params, body } = input(res, patch);
     res.json(await service.update(params.id, body, roleOf(res), req.user!.id));
   });
-  router.delete('/restorations/:id', requireUser, validate(one), guard(db, 'restoration.delete'), async (_req, res) => {
+  router.delete('/restorations/:id', ...guarded(db, one, 'restoration.delete'), async (_req, res) => {
     await service.remove(input(res, one).params.id);
     res.status(204).end();
   });

@@ -3,10 +3,11 @@ import type { Role } from '../../../shared/permissions';
 import type { Restoration, restorationInputSchema, restorationPatchSchema } from '../../../shared/schemas/restorations';
 import { count, eq } from 'drizzle-orm';
 import type { Database, Tx } from '../../db/client';
-import { invoices, restorations, sheets } from '../../db/schema';
+import { invoices, sheets } from '../../db/schema';
 import { ConflictError, NotFoundError } from '../../http/errors';
 import { unitOfWork } from '../../db/unit-of-work';
 import { recordEvent } from '../events/record-event';
+import { lockRestoration } from './lock-restoration';
 import { restorationsRepo, type RestorationRow } from './restorations.repo';
 import { stageGates } from './stage-gates';
 
@@ -89,12 +90,7 @@ export function restorationsService(db: Database, invite?: InviteIn, removeObjec
      */
     async remove(id: number) {
       await unitOfWork(db, async (tx, afterCommit) => {
-        const [r] = await tx
-          .select({ id: restorations.id })
-          .from(restorations)
-          .where(eq(restorations.id, id))
-          .for('update');
-        if (!r) throw new NotFoundError();
+        await lockRestoration(tx, id);
         const [issued] = await tx.select({ n: count() }).from(invoices).where(eq(invoices.restorationId, id));
         if (issued!.n > 0)
           throw new ConflictError(

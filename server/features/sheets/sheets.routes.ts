@@ -2,8 +2,8 @@ import { Router, type Request, type Response } from 'express';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import { sheetPageParamsSchema, sheetPagePatchSchema } from '../../../shared/schemas/sheets';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { input } from '../../http/validate';
 import { receiveUpload } from '../photos/receive-upload';
 import { sheetsService } from './sheets.service';
 
@@ -17,17 +17,11 @@ export function sheetsRoutes(deps: AppDeps): Router {
   const ofPage = (_req: Request, res: Response) => service.subjectOfPage(input(res, page).params.pageId);
   const router = Router();
 
-  router.get(
-    '/restorations/:id/sheets',
-    requireUser,
-    validate(one),
-    guard(db, 'restoration.view'),
-    async (_req, res) => {
-      res.json(await service.list(input(res, one).params.id, roleOf(res)));
-    },
-  );
+  router.get('/restorations/:id/sheets', ...guarded(db, one, 'restoration.view'), async (_req, res) => {
+    res.json(await service.list(input(res, one).params.id, roleOf(res)));
+  });
   // Permission is settled before a byte of the body is read.
-  router.post('/restorations/:id/sheets', requireUser, validate(one), guard(db, 'sheets.upload'), async (req, res) => {
+  router.post('/restorations/:id/sheets', ...guarded(db, one, 'sheets.upload'), async (req, res) => {
     const abandoned = new AbortController();
     res.once('close', () => !res.writableFinished && abandoned.abort());
     const upload = await receiveUpload(req, deps.config.uploads.maxBytes);
@@ -49,34 +43,16 @@ export function sheetsRoutes(deps: AppDeps): Router {
     }
   });
   // One page: the guard settles visibility (404) before the action (403).
-  router.get(
-    '/sheet-pages/:pageId',
-    requireUser,
-    validate(page),
-    guard(db, 'sheets.view', ofPage),
-    async (_req, res) => {
-      res.json(await service.get(input(res, page).params.pageId, roleOf(res)));
-    },
-  );
-  router.patch(
-    '/sheet-pages/:pageId',
-    requireUser,
-    validate(patch),
-    guard(db, 'sheets.edit', ofPage),
-    async (_req, res) => {
-      const { params, body } = input(res, patch);
-      res.json(await service.update(params.pageId, body, roleOf(res)));
-    },
-  );
-  router.delete(
-    '/sheet-pages/:pageId',
-    requireUser,
-    validate(page),
-    guard(db, 'sheets.edit', ofPage),
-    async (_req, res) => {
-      await service.remove(input(res, page).params.pageId, roleOf(res));
-      res.status(204).end();
-    },
-  );
+  router.get('/sheet-pages/:pageId', ...guarded(db, page, 'sheets.view', ofPage), async (_req, res) => {
+    res.json(await service.get(input(res, page).params.pageId, roleOf(res)));
+  });
+  router.patch('/sheet-pages/:pageId', ...guarded(db, patch, 'sheets.edit', ofPage), async (_req, res) => {
+    const { params, body } = input(res, patch);
+    res.json(await service.update(params.pageId, body, roleOf(res)));
+  });
+  router.delete('/sheet-pages/:pageId', ...guarded(db, page, 'sheets.edit', ofPage), async (_req, res) => {
+    await service.remove(input(res, page).params.pageId, roleOf(res));
+    res.status(204).end();
+  });
   return router;
 }

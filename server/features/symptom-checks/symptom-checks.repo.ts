@@ -1,8 +1,9 @@
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
-import type { Role } from '../../../shared/permissions';
+import { can, type Role } from '../../../shared/permissions';
 import type { SymptomCheck } from '../../../shared/schemas/symptom-checks';
 import type { Executor } from '../../db/client';
 import { findings, measurements, photos, symptomChecks, users } from '../../db/schema';
+import { readingSummary } from '../measurements/reading-summary';
 import { columnsOf, visibleSql } from '../visibility/visibility-sql';
 
 /**
@@ -39,23 +40,13 @@ export async function listSymptomChecks(
       ),
     )
     .orderBy(asc(symptomChecks.symptomId), asc(symptomChecks.id));
-  const workshop = role !== 'owner';
+  const workshop = can(role, 'workshop.notes');
   return rows.map(({ c, checkedBy, m, readingVisible: seesReading, f, findingVisible: seesFinding }) => ({
     symptomId: c.symptomId,
     causeId: c.causeId,
     result: c.result,
     note: workshop ? c.note : '',
-    reading:
-      m && seesReading
-        ? {
-            id: m.id,
-            location: m.location,
-            reading: m.readingText,
-            expected: m.expectedText,
-            verdict: m.verdict,
-            verdictReason: m.verdictReason,
-          }
-        : null,
+    reading: m && seesReading ? readingSummary(m) : null,
     finding: f?.id && seesFinding ? { id: f.id, photoId: f.photoId, number: f.number } : null,
     checkedBy: workshop ? checkedBy : null,
     updatedAt: c.updatedAt.toISOString(),

@@ -2,8 +2,8 @@ import { Router } from 'express';
 import { idParamsSchema } from '../../../shared/schemas/restorations';
 import { symptomCheckInputSchema, symptomCheckParamsSchema } from '../../../shared/schemas/symptom-checks';
 import type { AppDeps } from '../../app-deps';
-import { guard, requireUser, roleOf } from '../../http/guard';
-import { input, validate } from '../../http/validate';
+import { guarded, roleOf } from '../../http/guard';
+import { input } from '../../http/validate';
 import { symptomChecksService } from './symptom-checks.service';
 
 const list = { params: idParamsSchema };
@@ -14,20 +14,12 @@ export function symptomChecksRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const checks = symptomChecksService(deps);
   const router = Router();
-  router.get(
-    '/restorations/:id/symptom-checks',
-    requireUser,
-    validate(list),
-    guard(db, 'help.view'),
-    async (_req, res) => {
-      res.json(await checks.list(input(res, list).params.id, roleOf(res)));
-    },
-  );
+  router.get('/restorations/:id/symptom-checks', ...guarded(db, list, 'help.view'), async (_req, res) => {
+    res.json(await checks.list(input(res, list).params.id, roleOf(res)));
+  });
   router.put(
     '/restorations/:id/symptom-checks/:symptomId/:causeId',
-    requireUser,
-    validate(record),
-    guard(db, 'help.ask'),
+    ...guarded(db, record, 'help.ask'),
     async (req, res) => {
       const { params, body } = input(res, record);
       res.json(await checks.record(params.id, params.symptomId, params.causeId, body, req.user!.id, roleOf(res)));

@@ -1,11 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { HelpRequestSummary } from '../../../../shared/schemas/help';
-import { api } from '../../../lib/api-client';
+import { z } from 'zod';
+import { helpRequestSummarySchema } from '../../../../shared/schemas/help';
+import { apiGet } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
 /** The restoration's help requests, newest first, with how many replies wait for approval. */
 export const getHelpRequests = (restorationId: number) =>
-  api<HelpRequestSummary[]>(`/restorations/${restorationId}/help-requests`);
+  apiGet(`/restorations/${restorationId}/help-requests`, z.array(helpRequestSummarySchema));
 
 export const helpRequestsQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: helpKeys.list(restorationId), queryFn: () => getHelpRequests(restorationId) });

@@ -1,12 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { HelpContent } from '../../../../shared/schemas/help';
-import { ApiError, api } from '../../../lib/api-client';
+import { sharedHelpSchema } from '../../../../shared/schemas/help';
+import { ApiError, apiGet } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
-export type SharedHelp = HelpContent & { expiresAt: string };
+export type { SharedHelp } from '../../../../shared/schemas/help';
 
 /** A help request through its link, with no account. */
-export const getSharedHelp = (token: string) => api<SharedHelp>(`/shared/help/${encodeURIComponent(token)}`);
+export const getSharedHelp = (token: string) => apiGet(`/shared/help/${encodeURIComponent(token)}`, sharedHelpSchema);
 
 export const sharedHelpQueryOptions = (token: string) =>
   queryOptions({

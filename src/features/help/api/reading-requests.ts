@@ -1,21 +1,23 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type {
-  BenchReadingRequest,
-  ReadingAnswerInput,
-  ReadingRequest,
-  ReadingRequestInput,
+import { z } from 'zod';
+import {
+  benchReadingRequestSchema,
+  readingRequestSchema,
+  type ReadingAnswerInput,
+  type ReadingRequest,
+  type ReadingRequestInput,
 } from '../../../../shared/schemas/reading-requests';
-import { api } from '../../../lib/api-client';
+import { api, apiGet } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
 export const getReadingRequests = (restorationId: number) =>
-  api<ReadingRequest[]>(`/restorations/${restorationId}/reading-requests`);
+  apiGet(`/restorations/${restorationId}/reading-requests`, z.array(readingRequestSchema));
 export const readingRequestsQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: helpKeys.readingRequests(restorationId), queryFn: () => getReadingRequests(restorationId) });
 export const useReadingRequests = (restorationId: number) => useQuery(readingRequestsQueryOptions(restorationId));
 
 /** Open tasks and recent answers on every set where the person is a technician or mentor. */
-export const getBenchReadingRequests = () => api<BenchReadingRequest[]>('/reading-requests');
+export const getBenchReadingRequests = () => apiGet('/reading-requests', z.array(benchReadingRequestSchema));
 export const useBenchReadingRequests = () =>
   useQuery({ queryKey: helpKeys.benchReadingRequests, queryFn: getBenchReadingRequests });
 

@@ -1,11 +1,16 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { SymptomCheck, SymptomCheckInput } from '../../../../shared/schemas/symptom-checks';
-import { api } from '../../../lib/api-client';
+import { z } from 'zod';
+import {
+  symptomCheckSchema,
+  type SymptomCheck,
+  type SymptomCheckInput,
+} from '../../../../shared/schemas/symptom-checks';
+import { api, apiGet } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
 /** The checklist's results on one restoration. */
 export const getSymptomChecks = (restorationId: number) =>
-  api<SymptomCheck[]>(`/restorations/${restorationId}/symptom-checks`);
+  apiGet(`/restorations/${restorationId}/symptom-checks`, z.array(symptomCheckSchema));
 
 export const symptomChecksQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: helpKeys.checks(restorationId), queryFn: () => getSymptomChecks(restorationId) });
