@@ -34,11 +34,18 @@ export const passwordResetConfirmSchema = z.object({ token: z.string().min(20).m
 
 export const confirmEmailSchema = z.object({ token: z.string().min(20).max(200) });
 
-/** Sign-up answers either with the signed-in user (from an invitation) or "check your e-mail". */
-export type SignUpResult = { status: 'signed-in'; user: User; restorationId?: number } | { status: 'check-email' };
-
 export const userSchema = z.object({ id: z.number().int(), name: z.string(), email: z.string() });
 export type User = z.infer<typeof userSchema>;
+
+/** Sign-up answers either with the signed-in user (from an invitation) or "check your e-mail". */
+export const signUpResultSchema = z.discriminatedUnion('status', [
+  z.object({ status: z.literal('signed-in'), user: userSchema, restorationId: z.number().int().optional() }),
+  z.object({ status: z.literal('check-email') }),
+]);
+export type SignUpResult = z.infer<typeof signUpResultSchema>;
+
+/** Answer of POST /api/auth/password-reset: the same words whether or not the address has an account. */
+export const passwordResetRequestedSchema = z.object({ message: z.string() });
 
 /** `GET /api/auth/session`: the signed-in person, or null when nobody is. */
 export const sessionSchema = z.object({ user: userSchema.nullable() });
