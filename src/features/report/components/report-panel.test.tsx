@@ -45,7 +45,9 @@ const renderPanel = (role: Role) => renderWithQueries(<ReportPanel restorationId
 
 describe('report panel', () => {
   it('when a technician sends the report, then it shows it is sending, then who it was sent to', async () => {
-    const { fetchMock, release } = fakeSend(() => json(200, { sentTo: ['owner@example.org'] }));
+    const { fetchMock, release } = fakeSend(() =>
+      json(200, { sentTo: ['owner@example.org'], sendId: 1, warnings: [] }),
+    );
     const user = userEvent.setup();
     renderPanel('technician');
     await user.click(screen.getByRole('button', { name: 'E-mail it to the owner' }));
@@ -76,7 +78,12 @@ describe('report panel', () => {
 
   it('when sending would be premature, then the preview lists the warnings and nothing is sent until "Send anyway"', async () => {
     const { fetchMock } = fakeSend(
-      () => json(200, { sentTo: ['owner@example.org'] }),
+      () =>
+        json(200, {
+          sentTo: ['owner@example.org'],
+          sendId: 1,
+          warnings: ['No final safety test is recorded; the report says so.', 'No soak run is recorded.'],
+        }),
       [
         { code: 'no-passing-safety-test', message: 'No final safety test is recorded; the report says so.' },
         { code: 'no-soak', message: 'No soak run is recorded.' },
