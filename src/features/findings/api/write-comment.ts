@@ -1,10 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRef } from 'react';
-import { commentSchema } from '../../../../shared/schemas/comments';
+import type { z } from 'zod';
+import { commentSchema, type commentInputSchema } from '../../../../shared/schemas/comments';
 import { api, ApiError } from '../../../lib/api-client';
 import { findingKeys } from '../../../lib/queries/finding-keys';
 
-type CommentInput = { body: string; internal: boolean };
+type CommentInput = z.output<typeof commentInputSchema>;
 
 /** 128 random bits as hex; works on plain-HTTP addresses too, where crypto.randomUUID is missing. */
 export const newIdempotencyKey = () =>

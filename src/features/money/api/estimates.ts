@@ -1,6 +1,11 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { estimateSchema, workshopSettingsSchema, type EstimateInput } from '../../../../shared/schemas/estimates';
+import {
+  estimateSchema,
+  workshopSettingsSchema,
+  type estimateDecisionInputSchema,
+  type EstimateInput,
+} from '../../../../shared/schemas/estimates';
 import { api, apiGet } from '../../../lib/api-client';
 
 /** Query keys follow the resource paths. */
@@ -50,7 +55,7 @@ export function useSendEstimate(restorationId: number) {
 export function useDecideEstimate(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
-    mutationFn: (input: { estimateId: number; decision: 'approved' | 'declined'; name: string; version: number }) =>
+    mutationFn: (input: z.input<typeof estimateDecisionInputSchema> & { estimateId: number }) =>
       api(`/estimates/${input.estimateId}/decision`, {
         method: 'POST',
         schema: estimateSchema,

@@ -1,6 +1,11 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { invoicePreviewSchema, invoiceSchema, type DepositInput } from '../../../../shared/schemas/invoices';
+import {
+  invoicePreviewSchema,
+  invoiceSchema,
+  type DepositInput,
+  type voidInputSchema,
+} from '../../../../shared/schemas/invoices';
 import { api, apiGet } from '../../../lib/api-client';
 import { moneyKeys } from './estimates';
 import { personTimeZone } from '../../../lib/format';
@@ -54,7 +59,7 @@ export function useIssueInvoice(restorationId: number) {
 export function useVoidInvoice(restorationId: number) {
   const after = useAfterIssue(restorationId);
   return useMutation({
-    mutationFn: (input: { invoiceId: number; reason: string }) =>
+    mutationFn: (input: z.input<typeof voidInputSchema> & { invoiceId: number }) =>
       api(`/invoices/${input.invoiceId}/void`, {
         method: 'POST',
         json: { reason: input.reason },

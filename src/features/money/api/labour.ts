@@ -1,6 +1,11 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { labourLogSchema, type LabourLog } from '../../../../shared/schemas/labour';
-import type { Stage } from '../../../../shared/schemas/restorations';
+import type { z } from 'zod';
+import {
+  labourLogSchema,
+  type labourEntryInputSchema,
+  type LabourLog,
+  type labourTimerInputSchema,
+} from '../../../../shared/schemas/labour';
 import { api, apiGet } from '../../../lib/api-client';
 import { invoiceKeys } from './invoices';
 import { moneyKeys } from './estimates';
@@ -14,12 +19,8 @@ export const useLabour = (restorationId: number) =>
     queryFn: () => apiGet(`/restorations/${restorationId}/labour`, labourLogSchema),
   });
 
-export interface LabourTarget {
-  findingId: number | null;
-  stage: Stage | null;
-  note: string;
-  billable: boolean;
-}
+/** What a time entry is for: a finding or a stage, with its note and whether it is billed. */
+export type LabourTarget = z.output<typeof labourTimerInputSchema>;
 
 function useLabourWrite<T>(restorationId: number, request: (input: T) => Promise<LabourLog>) {
   const client = useQueryClient();
@@ -36,7 +37,7 @@ function useLabourWrite<T>(restorationId: number, request: (input: T) => Promise
 }
 
 export const useAddLabour = (restorationId: number) =>
-  useLabourWrite(restorationId, (input: LabourTarget & { minutes: number; workedAt?: string }) =>
+  useLabourWrite(restorationId, (input: z.input<typeof labourEntryInputSchema>) =>
     api(`/restorations/${restorationId}/labour`, { method: 'POST', json: input, schema: labourLogSchema }),
   );
 
