@@ -16,6 +16,31 @@ const featureZones = clientFeatures.map((name) => ({
     'A feature does not import another feature: move the shared piece to src/components or src/lib, or compose them in src/app.',
 }));
 
+const formattingSyntax = [
+  {
+    selector: 'CallExpression[callee.property.name=/^toLocale(Date|Time)?String$/]',
+    message: 'Format dates with src/lib/format.ts (client) or server/format.ts (server).',
+  },
+  {
+    selector:
+      "NewExpression[callee.object.name='Intl'][callee.property.name=/^(DateTimeFormat|NumberFormat|RelativeTimeFormat)$/]",
+    message: 'Format with shared/format (src/lib/format.ts, server/format.ts) or shared/money.',
+  },
+];
+
+/** `api()` with a type named by hand, or without `schema`/`noBody`: its answer would be checked against nothing. */
+const apiWithoutSchema =
+  "Name the answer's shared schema: api(path, { schema }) or apiGet(path, schema); { noBody: true } for a 204.";
+const contractSyntax = [
+  { selector: "CallExpression[callee.name='api'][typeArguments]", message: apiWithoutSchema },
+  { selector: "CallExpression[callee.name='api'][arguments.length<2]", message: apiWithoutSchema },
+  {
+    selector:
+      "CallExpression[callee.name='api'] > ObjectExpression:not(:has(> Property[key.name=/^(schema|noBody)$/]))",
+    message: apiWithoutSchema,
+  },
+];
+
 export default tseslint.config(
   { ignores: ['dist', 'node_modules', 'uploads-dev', '.data', 'tests/.artifacts', 'server/db/migrations'] },
   js.configs.recommended,
@@ -73,20 +98,13 @@ export default tseslint.config(
     // Formatting for people goes through shared/format (src/lib/format.ts, server/format.ts), in the person's locale and zone.
     files: ['src/**/*.{ts,tsx}', 'server/**/*.ts', 'shared/**/*.ts'],
     ignores: ['shared/format/**', 'shared/money/**', '**/*.test.{ts,tsx}'],
-    rules: {
-      'no-restricted-syntax': [
-        'error',
-        {
-          selector: 'CallExpression[callee.property.name=/^toLocale(Date|Time)?String$/]',
-          message: 'Format dates with src/lib/format.ts (client) or server/format.ts (server).',
-        },
-        {
-          selector:
-            "NewExpression[callee.object.name='Intl'][callee.property.name=/^(DateTimeFormat|NumberFormat|RelativeTimeFormat)$/]",
-          message: 'Format with shared/format (src/lib/format.ts, server/format.ts) or shared/money.',
-        },
-      ],
-    },
+    rules: { 'no-restricted-syntax': ['error', ...formattingSyntax] },
+  },
+  {
+    // The contract: every client request names the shared schema of its answer, or says it has none (decision 45).
+    files: ['src/**/*.{ts,tsx}'],
+    ignores: ['**/*.test.{ts,tsx}'],
+    rules: { 'no-restricted-syntax': ['error', ...formattingSyntax, ...contractSyntax] },
   },
   {
     // Layers on the server: routes → service → repo. A route handler validates, guards and answers; queries live in repos.

@@ -39,10 +39,13 @@ export type User = z.infer<typeof userSchema>;
 
 /** Sign-up answers either with the signed-in user (from an invitation) or "check your e-mail". */
 export const signUpResultSchema = z.discriminatedUnion('status', [
-  z.object({ status: z.literal('signed-in'), user: userSchema, restorationId: z.number().optional() }),
+  z.object({ status: z.literal('signed-in'), user: userSchema, restorationId: z.number().int().optional() }),
   z.object({ status: z.literal('check-email') }),
 ]);
 export type SignUpResult = z.infer<typeof signUpResultSchema>;
+
+/** Answer of POST /api/auth/password-reset: the same words whether or not the address has an account. */
+export const passwordResetRequestedSchema = z.object({ message: z.string() });
 
 /** `GET /api/auth/session`: the signed-in person, or null when nobody is. */
 export const sessionSchema = z.object({ user: userSchema.nullable() });

@@ -170,6 +170,9 @@ export const helpRequestSummarySchema = z.object({
 });
 export type HelpRequestSummary = z.infer<typeof helpRequestSummarySchema>;
 
+/** Answer of a reply left through a link (202): it is held until the technician approves it. */
+export const heldReplySchema = z.object({ id: z.number(), held: z.literal(true) });
+
 export const helpLinkCreatedSchema = z.object({ url: z.string(), token: z.string(), expiresAt: z.string() });
 export type HelpLinkCreated = z.infer<typeof helpLinkCreatedSchema>;
 

@@ -29,6 +29,9 @@ export const invitationSchema = z.object({
 });
 export type Invitation = z.infer<typeof invitationSchema>;
 
+/** Answer of POST /api/restorations/:id/invitations: the invitation just sent. */
+export const invitationSentSchema = invitationSchema.pick({ id: true, email: true, role: true, expiresAt: true });
+
 /** What the invitation link shows before it is accepted. */
 export const invitationPreviewSchema = z.object({
   restoration: z.object({ id: z.number().int(), make: z.string(), model: z.string() }),
@@ -37,6 +40,9 @@ export const invitationPreviewSchema = z.object({
   invitedBy: z.string().nullable(),
 });
 export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
+
+/** Answer of POST /api/invitations/:token/accept: the restoration joined and the role taken there. */
+export const invitationAcceptedSchema = z.object({ restorationId: z.number().int(), role: roleSchema });
 
 export const memberParamsSchema = z.object({
   id: idSchema,

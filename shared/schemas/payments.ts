@@ -63,3 +63,13 @@ export const paymentSchema = z.object({
   createdAt: z.string(),
 });
 export type Payment = z.infer<typeof paymentSchema>;
+
+/**
+ * Answer of POST /api/payments/:paymentId/refund: a transfer or cash refund is recorded at once (201, the refund line);
+ * a card refund is asked of the payment service and shows once its event arrives (202, pending).
+ */
+export const refundAnswerSchema = z.union([
+  paymentSchema,
+  z.object({ refundId: z.string(), amount: moneySchema, status: z.literal('pending') }),
+]);
+export type RefundAnswer = z.infer<typeof refundAnswerSchema>;

@@ -163,6 +163,14 @@ export const reportSendSchema = z.object({
 });
 export type ReportSend = z.infer<typeof reportSendSchema>;
 
+/** Answer of POST /api/restorations/:id/report/send: who it went to, the record of the send and its warnings. */
+export const reportSentSchema = z.object({
+  sentTo: z.array(z.string()),
+  sendId: z.number().int(),
+  warnings: z.array(z.string()),
+});
+export type ReportSent = z.infer<typeof reportSentSchema>;
+
 /** GET /api/restorations/:id/report/preview: the e-mail the owner will receive, and why it may be premature. */
 export const reportPreviewSchema = z.object({
   recipients: z.array(z.object({ name: z.string(), email: z.string() })),

@@ -1,5 +1,6 @@
+import type { z } from 'zod';
 import { apiErrorSchema } from '../../shared/schemas/errors';
-import { ApiError } from './api-client';
+import { ApiError, checkAnswer } from './api-client';
 
 export interface FormProgress {
   /** Bytes of the request body sent so far. */
@@ -16,19 +17,26 @@ function parseBody(text: string): unknown {
   }
 }
 
+interface FormOptions<S extends z.ZodType> {
+  /** The shared schema of the answer: its type is returned, and development and tests check it (as `api` does). */
+  schema: S;
+  onProgress?: (p: FormProgress) => void;
+  /** The size to report as `total` when the browser cannot measure the body; without it such progress is not reported. */
+  size?: number;
+  signal?: AbortSignal;
+  /** Words for an error answer that carries none, by status (0: the connection was cut). */
+  fallback?: Record<number, string>;
+}
+
 /**
  * POSTs multipart/form-data to the API with XMLHttpRequest, which (unlike fetch) reports upload progress.
  * Rejects with ApiError carrying the server's message; a cancel rejects with code 'aborted'.
  */
-export function postForm<T>(
+export function postForm<S extends z.ZodType>(
   path: string,
   form: FormData,
-  {
-    onProgress,
-    signal,
-    fallback = {},
-  }: { onProgress?: (p: FormProgress) => void; signal?: AbortSignal; fallback?: Record<number, string> } = {},
-): Promise<T> {
+  { schema, onProgress, size, signal, fallback = {} }: FormOptions<S>,
+): Promise<z.output<S>> {
   return new Promise((resolve, reject) => {
     const aborted = () => new ApiError(0, 'aborted', 'Upload cancelled.');
     if (signal?.aborted) return reject(aborted());
@@ -36,10 +44,19 @@ export function postForm<T>(
     xhr.open('POST', `/api${path}`);
     xhr.withCredentials = true;
     xhr.setRequestHeader('Accept', 'application/json');
-    xhr.upload.onprogress = (e) => e.lengthComputable && onProgress?.({ loaded: e.loaded, total: e.total });
+    xhr.upload.onprogress = (e) => {
+      const total = e.lengthComputable ? e.total : size;
+      if (total !== undefined) onProgress?.({ loaded: e.loaded, total });
+    };
     xhr.onload = () => {
       const body = parseBody(xhr.responseText);
-      if (xhr.status >= 200 && xhr.status < 300) return resolve(body as T);
+      if (xhr.status >= 200 && xhr.status < 300) {
+        try {
+          return resolve(checkAnswer(path, body, schema));
+        } catch (mismatch) {
+          return reject(mismatch as Error);
+        }
+      }
       const parsed = apiErrorSchema.safeParse(body);
       if (parsed.success) {
         const { code, message, details } = parsed.data.error;
@@ -52,7 +69,7 @@ export function postForm<T>(
         new ApiError(
           0,
           'network',
-          'The upload was cut off. Check the connection and retry; a very large file may be refused.',
+          fallback[0] ?? 'The upload was cut off. Check the connection and retry; a very large file may be refused.',
         ),
       );
     xhr.onabort = () => reject(aborted());

@@ -2,7 +2,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import Stripe from 'stripe';
 import type { Role } from '../../../shared/permissions';
 import { invoiceKindLabels } from '../../../shared/schemas/invoices';
-import type { ManualPaymentInput, RefundInput } from '../../../shared/schemas/payments';
+import type { ManualPaymentInput, RefundAnswer, RefundInput } from '../../../shared/schemas/payments';
 import type { AppDeps } from '../../app-deps';
 import type { Executor } from '../../db/client';
 import { invoices, payments } from '../../db/schema';
@@ -132,7 +132,7 @@ export function paymentsService({ db, payments: service, config }: Deps) {
       input: RefundInput,
       userId: number,
       role: Role,
-    ): Promise<{ status: 201 | 202; body: unknown }> {
+    ): Promise<{ status: 201 | 202; body: RefundAnswer }> {
       const [p] = await db
         .select()
         .from(payments)

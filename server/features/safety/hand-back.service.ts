@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { and, desc, eq } from 'drizzle-orm';
-import type { HandBackWarning, ReportPreview, ReportSend } from '../../../shared/schemas/safety';
+import type { HandBackWarning, ReportPreview, ReportSend, ReportSent } from '../../../shared/schemas/safety';
 import { stageLabels, stages, type Stage } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
 import { events, findings, memberships, reportSends, restorations, users } from '../../db/schema';
@@ -112,7 +112,7 @@ export function handBackService(deps: Deps) {
       };
     },
     /** Sends to every owner, then records the send (with the warnings shown) and its history line in one transaction. */
-    async send(id: number, sender: { id: number; name: string }) {
+    async send(id: number, sender: { id: number; name: string }): Promise<ReportSent> {
       const recipients = await owners(id);
       if (!recipients.length)
         throw new ConflictError('No owner is on this restoration yet: invite them from the People tab first.');

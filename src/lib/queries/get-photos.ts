@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Photo } from '../../../shared/schemas/photos';
+import { photoSchema } from '../../../shared/schemas/photos';
 import { apiAllPages } from '../api-client';
 
-export const getPhotos = (restorationId: number) => apiAllPages<Photo>(`/restorations/${restorationId}/photos`);
+export const getPhotos = (restorationId: number) => apiAllPages(`/restorations/${restorationId}/photos`, photoSchema);
 
 export const photosQueryKey = (restorationId: number) => ['restorations', restorationId, 'photos'] as const;
 

@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
-import type { ReferenceSummary } from '../../../shared/schemas/sheets';
-import { api } from '../api-client';
+import { z } from 'zod';
+import { referenceSummarySchema } from '../../../shared/schemas/sheets';
+import { apiGet } from '../api-client';
 
 export const referencesQueryKey = (restorationId: number) => ['restorations', restorationId, 'references'] as const;
 
@@ -8,6 +9,6 @@ export const referencesQueryKey = (restorationId: number) => ['restorations', re
 export const useReferences = (restorationId: number, enabled = true) =>
   useQuery({
     queryKey: referencesQueryKey(restorationId),
-    queryFn: () => api<ReferenceSummary[]>(`/restorations/${restorationId}/references`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/references`, z.array(referenceSummarySchema)),
     enabled,
   });

@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { User } from '../../../../shared/schemas/auth';
+import { userSchema } from '../../../../shared/schemas/auth';
 import { api } from '../../../lib/api-client';
 import { switchPerson } from './session-cache';
 
-export const confirmEmail = (token: string) => api<User>('/auth/confirm-email', { method: 'POST', json: { token } });
+export const confirmEmail = (token: string) =>
+  api('/auth/confirm-email', { method: 'POST', json: { token }, schema: userSchema });
 
 export function useConfirmEmail() {
   const client = useQueryClient();

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SignInInput, User } from '../../../../shared/schemas/auth';
+import { userSchema, type SignInInput } from '../../../../shared/schemas/auth';
 import { api } from '../../../lib/api-client';
 import { switchPerson } from './session-cache';
 
-export const signIn = (input: SignInInput) => api<User>('/auth/sign-in', { method: 'POST', json: input });
+export const signIn = (input: SignInInput) => api('/auth/sign-in', { method: 'POST', json: input, schema: userSchema });
 
 export function useSignIn() {
   const client = useQueryClient();

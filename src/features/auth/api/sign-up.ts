@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SignUpInput, SignUpResult } from '../../../../shared/schemas/auth';
+import { signUpResultSchema, type SignUpInput } from '../../../../shared/schemas/auth';
 import { api } from '../../../lib/api-client';
 import { switchPerson } from './session-cache';
 
-export const signUp = (input: SignUpInput) => api<SignUpResult>('/auth/sign-up', { method: 'POST', json: input });
+export const signUp = (input: SignUpInput) =>
+  api('/auth/sign-up', { method: 'POST', json: input, schema: signUpResultSchema });
 
 export function useSignUp() {
   const client = useQueryClient();

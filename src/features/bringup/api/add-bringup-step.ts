@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Bringup, BringupStepInput } from '../../../../shared/schemas/bringup';
+import { bringupSchema, type BringupStepInput } from '../../../../shared/schemas/bringup';
 import { api } from '../../../lib/api-client';
 import { afterWrite } from './keys';
 
 /** Logs one power-up step with its readings; refused (409) until the pre-power checklist is signed off. */
 export const addBringupStep = (restorationId: number, input: BringupStepInput) =>
-  api<Bringup>(`/restorations/${restorationId}/bringup/steps`, { method: 'POST', json: input });
+  api(`/restorations/${restorationId}/bringup/steps`, { method: 'POST', json: input, schema: bringupSchema });
 
 export function useAddBringupStep(restorationId: number) {
   const client = useQueryClient();

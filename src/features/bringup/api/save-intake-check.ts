@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Bringup, IntakeCheckInput } from '../../../../shared/schemas/bringup';
+import { bringupSchema, type IntakeCheckInput } from '../../../../shared/schemas/bringup';
 import { api } from '../../../lib/api-client';
 import { afterWrite } from './keys';
 
 /** Ticks, notes or links one intake item. */
 export const saveIntakeCheck = (restorationId: number, input: IntakeCheckInput) =>
-  api<Bringup>(`/restorations/${restorationId}/bringup/intake`, { method: 'PUT', json: input });
+  api(`/restorations/${restorationId}/bringup/intake`, { method: 'PUT', json: input, schema: bringupSchema });
 
 export function useSaveIntakeCheck(restorationId: number) {
   const client = useQueryClient();

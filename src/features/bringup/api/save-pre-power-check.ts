@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Bringup, PrePowerCheckInput } from '../../../../shared/schemas/bringup';
+import { bringupSchema, type PrePowerCheckInput } from '../../../../shared/schemas/bringup';
 import { api } from '../../../lib/api-client';
 import { afterWrite } from './keys';
 
 /** Marks one pre-power item done, not applicable or waived; after a sign-off this withdraws it. */
 export const savePrePowerCheck = (restorationId: number, input: PrePowerCheckInput) =>
-  api<Bringup>(`/restorations/${restorationId}/bringup/pre-power`, { method: 'PUT', json: input });
+  api(`/restorations/${restorationId}/bringup/pre-power`, { method: 'PUT', json: input, schema: bringupSchema });
 
 export function useSavePrePowerCheck(restorationId: number) {
   const client = useQueryClient();

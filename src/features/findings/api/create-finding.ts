@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Finding, FindingInput } from '../../../../shared/schemas/findings';
+import { findingSchema, type Finding, type FindingInput } from '../../../../shared/schemas/findings';
 import { api } from '../../../lib/api-client';
 import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const createFinding = (photoId: number, input: FindingInput) =>
-  api<Finding>(`/photos/${photoId}/findings`, { method: 'POST', json: input });
+  api(`/photos/${photoId}/findings`, { method: 'POST', json: input, schema: findingSchema });
 
 export function useCreateFinding(photoId: number, restorationId: number) {
   const client = useQueryClient();

@@ -3,7 +3,7 @@ import type { Finding } from '../../../../shared/schemas/findings';
 import { api } from '../../../lib/api-client';
 import { findingKeys } from '../../../lib/queries/finding-keys';
 
-export const deleteFinding = (id: number) => api<void>(`/findings/${id}`, { method: 'DELETE' });
+export const deleteFinding = (id: number) => api(`/findings/${id}`, { method: 'DELETE', noBody: true });
 
 export function useDeleteFinding(photoId: number, restorationId: number) {
   const client = useQueryClient();

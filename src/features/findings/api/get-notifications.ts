@@ -7,7 +7,7 @@ import { findingKeys } from '../../../lib/queries/finding-keys';
 /** The newest page only: the menu shows the latest items. */
 export const getNotifications = () => apiGet('/notifications?limit=50', z.array(notificationSchema));
 export const markNotificationsRead = (ids?: number[]) =>
-  api<void>('/notifications/read', { method: 'POST', json: { ids } });
+  api('/notifications/read', { method: 'POST', json: { ids }, noBody: true });
 
 export const notificationsQueryOptions = () =>
   queryOptions({ queryKey: findingKeys.notifications, queryFn: getNotifications, refetchInterval: 30_000 });

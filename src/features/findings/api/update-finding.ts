@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Finding, FindingPatch } from '../../../../shared/schemas/findings';
+import { findingSchema, type Finding, type FindingPatch } from '../../../../shared/schemas/findings';
 import { api } from '../../../lib/api-client';
 import { findingKeys } from '../../../lib/queries/finding-keys';
 
 export const updateFinding = (id: number, patch: FindingPatch) =>
-  api<Finding>(`/findings/${id}`, { method: 'PATCH', json: patch });
+  api(`/findings/${id}`, { method: 'PATCH', json: patch, schema: findingSchema });
 
 /**
  * Moving a pin or changing a status shows at once (optimistic), and rolls back if the server refuses;

@@ -1,10 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRef } from 'react';
-import type { Comment } from '../../../../shared/schemas/comments';
+import type { z } from 'zod';
+import { commentSchema, type commentInputSchema } from '../../../../shared/schemas/comments';
 import { api, ApiError } from '../../../lib/api-client';
 import { findingKeys } from '../../../lib/queries/finding-keys';
 
-type CommentInput = { body: string; internal: boolean };
+type CommentInput = z.output<typeof commentInputSchema>;
 
 /** 128 random bits as hex; works on plain-HTTP addresses too, where crypto.randomUUID is missing. */
 export const newIdempotencyKey = () =>
@@ -12,10 +13,15 @@ export const newIdempotencyKey = () =>
 
 /** Posts a comment; the same `key` on a retry makes the server store it once and answer as the first time. */
 export const createComment = (findingId: number, input: CommentInput, key: string) =>
-  api<Comment>(`/findings/${findingId}/comments`, { method: 'POST', json: input, headers: { 'Idempotency-Key': key } });
+  api(`/findings/${findingId}/comments`, {
+    method: 'POST',
+    json: input,
+    headers: { 'Idempotency-Key': key },
+    schema: commentSchema,
+  });
 export const editComment = (id: number, body: string) =>
-  api<Comment>(`/comments/${id}`, { method: 'PATCH', json: { body } });
-export const deleteComment = (id: number) => api<void>(`/comments/${id}`, { method: 'DELETE' });
+  api(`/comments/${id}`, { method: 'PATCH', json: { body }, schema: commentSchema });
+export const deleteComment = (id: number) => api(`/comments/${id}`, { method: 'DELETE', noBody: true });
 
 /**
  * Writing, editing and deleting comments in one finding's thread. A post keeps its idempotency key until it

@@ -1,11 +1,15 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { HelpLinkCreated } from '../../../../shared/schemas/help';
 import { api } from '../../../lib/api-client';
 import { helpKeys } from './keys';
+import { helpLinkCreatedSchema } from '../../../../shared/schemas/help';
 
 /** A read-only link for someone without an account; its token is shown once, here. */
 export const createHelpLink = (helpRequestId: number, days?: number) =>
-  api<HelpLinkCreated>(`/help-requests/${helpRequestId}/links`, { method: 'POST', json: days ? { days } : {} });
+  api(`/help-requests/${helpRequestId}/links`, {
+    method: 'POST',
+    json: days ? { days } : {},
+    schema: helpLinkCreatedSchema,
+  });
 
 export function useCreateHelpLink(helpRequestId: number) {
   const client = useQueryClient();

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { HelpRequest } from '../../../../shared/schemas/help';
+import { helpRequestSchema } from '../../../../shared/schemas/help';
 import { api } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
 /** Starts a help request pre-filled from the restoration. */
 export const createHelpRequest = (restorationId: number, symptom: string) =>
-  api<HelpRequest>(`/restorations/${restorationId}/help-requests`, { method: 'POST', json: { symptom } });
+  api(`/restorations/${restorationId}/help-requests`, { method: 'POST', json: { symptom }, schema: helpRequestSchema });
 
 export function useCreateHelpRequest(restorationId: number) {
   const client = useQueryClient();

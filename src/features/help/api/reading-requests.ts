@@ -4,7 +4,6 @@ import {
   benchReadingRequestSchema,
   readingRequestSchema,
   type ReadingAnswerInput,
-  type ReadingRequest,
   type ReadingRequestInput,
 } from '../../../../shared/schemas/reading-requests';
 import { api, apiGet } from '../../../lib/api-client';
@@ -29,7 +28,7 @@ const refresh = (client: ReturnType<typeof useQueryClient>, restorationId: numbe
   ]);
 
 export const askForReading = (restorationId: number, input: ReadingRequestInput) =>
-  api<ReadingRequest>(`/restorations/${restorationId}/reading-requests`, { method: 'POST', json: input });
+  api(`/restorations/${restorationId}/reading-requests`, { method: 'POST', json: input, schema: readingRequestSchema });
 
 export function useAskForReading(restorationId: number) {
   const client = useQueryClient();
@@ -40,7 +39,7 @@ export function useAskForReading(restorationId: number) {
 }
 
 export const answerReadingRequest = (readingRequestId: number, input: ReadingAnswerInput) =>
-  api<ReadingRequest>(`/reading-requests/${readingRequestId}/answer`, { method: 'POST', json: input });
+  api(`/reading-requests/${readingRequestId}/answer`, { method: 'POST', json: input, schema: readingRequestSchema });
 
 export function useAnswerReadingRequest(restorationId: number) {
   const client = useQueryClient();

@@ -4,7 +4,7 @@ import { helpKeys } from './keys';
 
 /** Withdraws a link: from now on it answers "not found". */
 export const revokeHelpLink = (token: string) =>
-  api<void>(`/help-links/${encodeURIComponent(token)}`, { method: 'DELETE' });
+  api(`/help-links/${encodeURIComponent(token)}`, { method: 'DELETE', noBody: true });
 
 export function useRevokeHelpLink(helpRequestId: number) {
   const client = useQueryClient();

@@ -1,10 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import {
-  symptomCheckSchema,
-  type SymptomCheck,
-  type SymptomCheckInput,
-} from '../../../../shared/schemas/symptom-checks';
+import { symptomCheckSchema, type SymptomCheckInput } from '../../../../shared/schemas/symptom-checks';
 import { api, apiGet } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
@@ -24,9 +20,10 @@ export const recordSymptomCheck = (
   causeId: string,
   input: SymptomCheckInput,
 ) =>
-  api<SymptomCheck>(`/restorations/${restorationId}/symptom-checks/${symptomId}/${causeId}`, {
+  api(`/restorations/${restorationId}/symptom-checks/${symptomId}/${causeId}`, {
     method: 'PUT',
     json: input,
+    schema: symptomCheckSchema,
   });
 
 export function useRecordSymptomCheck(restorationId: number) {

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { HelpRequest, HelpRequestPatch } from '../../../../shared/schemas/help';
+import { helpRequestSchema, type HelpRequestPatch } from '../../../../shared/schemas/help';
 import { api } from '../../../lib/api-client';
 import { helpKeys } from './keys';
 
 /** Changes the symptom or removes what is not relevant. */
 export const updateHelpRequest = (helpRequestId: number, patch: HelpRequestPatch) =>
-  api<HelpRequest>(`/help-requests/${helpRequestId}`, { method: 'PATCH', json: patch });
+  api(`/help-requests/${helpRequestId}`, { method: 'PATCH', json: patch, schema: helpRequestSchema });
 
 export function useUpdateHelpRequest(restorationId: number, helpRequestId: number) {
   const client = useQueryClient();

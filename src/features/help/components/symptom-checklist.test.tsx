@@ -32,7 +32,17 @@ describe('the symptom checklist', () => {
   });
 
   it('when the technician confirms a cause with a reading, then it is sent as the result, the reading and no finding', async () => {
-    const api = fakeApi((call) => (call.method === 'PUT' ? ok({}) : ok([])));
+    const saved = {
+      symptomId: 'hum',
+      causeId: 'poor-earth',
+      result: 'confirmed',
+      note: '',
+      reading: null,
+      finding: null,
+      checkedBy: 'A technician',
+      updatedAt: '2026-12-01T10:00:00Z',
+    };
+    const api = fakeApi((call) => (call.method === 'PUT' ? ok(saved) : ok([])));
     show(true);
     fireEvent.change(await screen.findByLabelText('Symptom'), { target: { value: 'hum' } });
     const earth = await screen.findByRole('listitem', { name: 'Poor earth at a rusted valve-socket rivet or tag' });

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Role } from '../../../../shared/permissions';
+import { invitationAcceptedSchema } from '../../../../shared/schemas/members';
 import { api } from '../../../lib/api-client';
 
 export const acceptInvitation = (token: string) =>
-  api<{ restorationId: number; role: Role }>(`/invitations/${token}/accept`, { method: 'POST' });
+  api(`/invitations/${token}/accept`, { method: 'POST', schema: invitationAcceptedSchema });
 
 export function useAcceptInvitation() {
   const client = useQueryClient();

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Measurement, MeasurementInput } from '../../../../shared/schemas/measurements';
+import { measurementSchema, type Measurement, type MeasurementInput } from '../../../../shared/schemas/measurements';
 import { api } from '../../../lib/api-client';
 import { invalidateReadings } from './keys';
 
 /** Records one reading; the server parses the texts and stores its verdict. A 400 names the field it could not read. */
 export const createMeasurement = (restorationId: number, input: MeasurementInput) =>
-  api<Measurement>(`/restorations/${restorationId}/measurements`, { method: 'POST', json: input });
+  api(`/restorations/${restorationId}/measurements`, { method: 'POST', json: input, schema: measurementSchema });
 
 export function useCreateMeasurement(restorationId: number) {
   const client = useQueryClient();

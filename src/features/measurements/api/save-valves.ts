@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { LineUp, LineUpInput } from '../../../../shared/schemas/measurements';
+import { lineUpResultSchema, type LineUpInput } from '../../../../shared/schemas/measurements';
 import { api } from '../../../lib/api-client';
 import { measurementKeys } from './keys';
 
 /** Replaces the whole line-up; series heaters mark the restoration live-chassis on the server. */
 export const saveValves = (restorationId: number, lineUp: LineUpInput) =>
-  api<LineUp>(`/restorations/${restorationId}/valves`, { method: 'PUT', json: lineUp });
+  api(`/restorations/${restorationId}/valves`, { method: 'PUT', json: lineUp, schema: lineUpResultSchema });
 
 export function useSaveValves(restorationId: number) {
   const client = useQueryClient();

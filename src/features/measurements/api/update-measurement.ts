@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import type { Measurement, measurementPatchSchema } from '../../../../shared/schemas/measurements';
+import { measurementSchema, type measurementPatchSchema } from '../../../../shared/schemas/measurements';
 import { api } from '../../../lib/api-client';
 import { invalidateReadings } from './keys';
 
@@ -8,7 +8,7 @@ export type MeasurementPatch = z.input<typeof measurementPatchSchema>;
 
 /** Changes a reading; the server recomputes its verdict from the merged texts. */
 export const updateMeasurement = (id: number, patch: MeasurementPatch) =>
-  api<Measurement>(`/measurements/${id}`, { method: 'PATCH', json: patch });
+  api(`/measurements/${id}`, { method: 'PATCH', json: patch, schema: measurementSchema });
 
 export function useUpdateMeasurement(restorationId: number) {
   const client = useQueryClient();

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Role } from '../../../../shared/permissions';
-import type { InvitationInput } from '../../../../shared/schemas/members';
+import { z } from 'zod';
+import { invitationSentSchema, memberSchema, type InvitationInput } from '../../../../shared/schemas/members';
 import { api } from '../../../lib/api-client';
 
 /** Every change to the people on a restoration refreshes its members and invitations. */
@@ -14,25 +15,29 @@ function usePeopleMutation<T>(restorationId: number, fn: (input: T) => Promise<u
 
 export const useChangeRole = (restorationId: number) =>
   usePeopleMutation(restorationId, ({ userId, role }: { userId: number; role: Role }) =>
-    api(`/restorations/${restorationId}/members/${userId}`, { method: 'PATCH', json: { role } }),
+    api(`/restorations/${restorationId}/members/${userId}`, {
+      method: 'PATCH',
+      json: { role },
+      schema: z.array(memberSchema),
+    }),
   );
 
 export const useRemoveMember = (restorationId: number) =>
   usePeopleMutation(restorationId, (userId: number) =>
-    api(`/restorations/${restorationId}/members/${userId}`, { method: 'DELETE' }),
+    api(`/restorations/${restorationId}/members/${userId}`, { method: 'DELETE', noBody: true }),
   );
 
 export const useInvite = (restorationId: number) =>
   usePeopleMutation(restorationId, (input: InvitationInput) =>
-    api(`/restorations/${restorationId}/invitations`, { method: 'POST', json: input }),
+    api(`/restorations/${restorationId}/invitations`, { method: 'POST', json: input, schema: invitationSentSchema }),
   );
 
 export const useResendInvitation = (restorationId: number) =>
   usePeopleMutation(restorationId, (id: number) =>
-    api(`/restorations/${restorationId}/invitations/${id}/resend`, { method: 'POST' }),
+    api(`/restorations/${restorationId}/invitations/${id}/resend`, { method: 'POST', noBody: true }),
   );
 
 export const useRevokeInvitation = (restorationId: number) =>
   usePeopleMutation(restorationId, (id: number) =>
-    api(`/restorations/${restorationId}/invitations/${id}`, { method: 'DELETE' }),
+    api(`/restorations/${restorationId}/invitations/${id}`, { method: 'DELETE', noBody: true }),
   );

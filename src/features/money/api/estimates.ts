@@ -1,6 +1,12 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Estimate, EstimateInput, WorkshopSettings } from '../../../../shared/schemas/estimates';
-import { api } from '../../../lib/api-client';
+import { z } from 'zod';
+import {
+  estimateSchema,
+  workshopSettingsSchema,
+  type estimateDecisionInputSchema,
+  type EstimateInput,
+} from '../../../../shared/schemas/estimates';
+import { api, apiGet } from '../../../lib/api-client';
 
 /** Query keys follow the resource paths. */
 export const moneyKeys = {
@@ -9,7 +15,8 @@ export const moneyKeys = {
 };
 
 /** A restoration's estimates the reader may see, newest version first. */
-export const getEstimates = (restorationId: number) => api<Estimate[]>(`/restorations/${restorationId}/estimates`);
+export const getEstimates = (restorationId: number) =>
+  apiGet(`/restorations/${restorationId}/estimates`, z.array(estimateSchema));
 
 export const estimatesQueryOptions = (restorationId: number) =>
   queryOptions({ queryKey: moneyKeys.estimates(restorationId), queryFn: () => getEstimates(restorationId) });
@@ -30,7 +37,7 @@ export function useCreateEstimate(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
     mutationFn: (input: EstimateInput) =>
-      api<Estimate>(`/restorations/${restorationId}/estimates`, { method: 'POST', json: input }),
+      api(`/restorations/${restorationId}/estimates`, { method: 'POST', json: input, schema: estimateSchema }),
     onSuccess: after,
   });
 }
@@ -38,7 +45,8 @@ export function useCreateEstimate(restorationId: number) {
 export function useSendEstimate(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
-    mutationFn: (estimateId: number) => api<Estimate>(`/estimates/${estimateId}/send`, { method: 'POST' }),
+    mutationFn: (estimateId: number) =>
+      api(`/estimates/${estimateId}/send`, { method: 'POST', schema: estimateSchema }),
     onSuccess: after,
   });
 }
@@ -47,9 +55,10 @@ export function useSendEstimate(restorationId: number) {
 export function useDecideEstimate(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
-    mutationFn: (input: { estimateId: number; decision: 'approved' | 'declined'; name: string; version: number }) =>
-      api<Estimate>(`/estimates/${input.estimateId}/decision`, {
+    mutationFn: (input: z.input<typeof estimateDecisionInputSchema> & { estimateId: number }) =>
+      api(`/estimates/${input.estimateId}/decision`, {
         method: 'POST',
+        schema: estimateSchema,
         json: { decision: input.decision, name: input.name, version: input.version },
       }),
     onSuccess: after,
@@ -60,6 +69,6 @@ export function useDecideEstimate(restorationId: number) {
 export const useMoneySettings = (restorationId: number, enabled: boolean) =>
   useQuery({
     queryKey: ['restorations', restorationId, 'money-settings'],
-    queryFn: () => api<WorkshopSettings>(`/restorations/${restorationId}/money-settings`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/money-settings`, workshopSettingsSchema),
     enabled,
   });

@@ -1,6 +1,12 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { DepositInput, Invoice, InvoicePreview } from '../../../../shared/schemas/invoices';
-import { api } from '../../../lib/api-client';
+import { z } from 'zod';
+import {
+  invoicePreviewSchema,
+  invoiceSchema,
+  type DepositInput,
+  type voidInputSchema,
+} from '../../../../shared/schemas/invoices';
+import { api, apiGet } from '../../../lib/api-client';
 import { moneyKeys } from './estimates';
 import { personTimeZone } from '../../../lib/format';
 
@@ -13,14 +19,14 @@ export const invoiceKeys = {
 export const useInvoices = (restorationId: number) =>
   useQuery({
     queryKey: invoiceKeys.list(restorationId),
-    queryFn: () => api<Invoice[]>(`/restorations/${restorationId}/invoices`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/invoices`, z.array(invoiceSchema)),
   });
 
 /** The final invoice as it would be issued now (technicians only). */
 export const useInvoicePreview = (restorationId: number, enabled: boolean) =>
   useQuery({
     queryKey: invoiceKeys.preview(restorationId),
-    queryFn: () => api<InvoicePreview>(`/restorations/${restorationId}/invoices/preview`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/invoices/preview`, invoicePreviewSchema),
     enabled,
   });
 
@@ -37,7 +43,7 @@ export function useRequestDeposit(restorationId: number) {
   const after = useAfterIssue(restorationId);
   return useMutation({
     mutationFn: (input: DepositInput) =>
-      api<Invoice>(`/restorations/${restorationId}/deposits`, { method: 'POST', json: input }),
+      api(`/restorations/${restorationId}/deposits`, { method: 'POST', json: input, schema: invoiceSchema }),
     onSuccess: after,
   });
 }
@@ -45,7 +51,7 @@ export function useRequestDeposit(restorationId: number) {
 export function useIssueInvoice(restorationId: number) {
   const after = useAfterIssue(restorationId);
   return useMutation({
-    mutationFn: () => api<Invoice>(`/restorations/${restorationId}/invoices`, { method: 'POST' }),
+    mutationFn: () => api(`/restorations/${restorationId}/invoices`, { method: 'POST', schema: invoiceSchema }),
     onSuccess: after,
   });
 }
@@ -53,8 +59,12 @@ export function useIssueInvoice(restorationId: number) {
 export function useVoidInvoice(restorationId: number) {
   const after = useAfterIssue(restorationId);
   return useMutation({
-    mutationFn: (input: { invoiceId: number; reason: string }) =>
-      api<Invoice>(`/invoices/${input.invoiceId}/void`, { method: 'POST', json: { reason: input.reason } }),
+    mutationFn: (input: z.input<typeof voidInputSchema> & { invoiceId: number }) =>
+      api(`/invoices/${input.invoiceId}/void`, {
+        method: 'POST',
+        json: { reason: input.reason },
+        schema: invoiceSchema,
+      }),
     onSuccess: after,
   });
 }

@@ -1,7 +1,12 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { LabourLog } from '../../../../shared/schemas/labour';
-import type { Stage } from '../../../../shared/schemas/restorations';
-import { api } from '../../../lib/api-client';
+import type { z } from 'zod';
+import {
+  labourLogSchema,
+  type labourEntryInputSchema,
+  type LabourLog,
+  type labourTimerInputSchema,
+} from '../../../../shared/schemas/labour';
+import { api, apiGet } from '../../../lib/api-client';
 import { invoiceKeys } from './invoices';
 import { moneyKeys } from './estimates';
 
@@ -11,15 +16,11 @@ export const labourKey = (restorationId: number) => ['restorations', restoration
 export const useLabour = (restorationId: number) =>
   useQuery({
     queryKey: labourKey(restorationId),
-    queryFn: () => api<LabourLog>(`/restorations/${restorationId}/labour`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/labour`, labourLogSchema),
   });
 
-export interface LabourTarget {
-  findingId: number | null;
-  stage: Stage | null;
-  note: string;
-  billable: boolean;
-}
+/** What a time entry is for: a finding or a stage, with its note and whether it is billed. */
+export type LabourTarget = z.output<typeof labourTimerInputSchema>;
 
 function useLabourWrite<T>(restorationId: number, request: (input: T) => Promise<LabourLog>) {
   const client = useQueryClient();
@@ -36,16 +37,16 @@ function useLabourWrite<T>(restorationId: number, request: (input: T) => Promise
 }
 
 export const useAddLabour = (restorationId: number) =>
-  useLabourWrite(restorationId, (input: LabourTarget & { minutes: number; workedAt?: string }) =>
-    api<LabourLog>(`/restorations/${restorationId}/labour`, { method: 'POST', json: input }),
+  useLabourWrite(restorationId, (input: z.input<typeof labourEntryInputSchema>) =>
+    api(`/restorations/${restorationId}/labour`, { method: 'POST', json: input, schema: labourLogSchema }),
   );
 
 export const useStartTimer = (restorationId: number) =>
   useLabourWrite(restorationId, (input: LabourTarget) =>
-    api<LabourLog>(`/restorations/${restorationId}/labour/timer`, { method: 'POST', json: input }),
+    api(`/restorations/${restorationId}/labour/timer`, { method: 'POST', json: input, schema: labourLogSchema }),
   );
 
 export const useStopTimer = (restorationId: number) =>
   useLabourWrite(restorationId, () =>
-    api<LabourLog>(`/restorations/${restorationId}/labour/timer/stop`, { method: 'POST' }),
+    api(`/restorations/${restorationId}/labour/timer/stop`, { method: 'POST', schema: labourLogSchema }),
   );

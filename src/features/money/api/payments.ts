@@ -1,8 +1,14 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Money } from '../../../../shared/money/currency';
-import type { Invoice } from '../../../../shared/schemas/invoices';
-import type { ManualPaymentInput, Payment } from '../../../../shared/schemas/payments';
-import { api } from '../../../lib/api-client';
+import { z } from 'zod';
+import { invoiceSchema } from '../../../../shared/schemas/invoices';
+import {
+  checkoutSchema,
+  paymentSchema,
+  refundAnswerSchema,
+  type ManualPaymentInput,
+} from '../../../../shared/schemas/payments';
+import { api, apiGet } from '../../../lib/api-client';
 
 /** Query keys follow the resource paths. */
 export const paymentKeys = {
@@ -17,7 +23,7 @@ const pollEvery = (polling: boolean) => (polling ? 2500 : false);
 export const invoicesQueryOptions = (restorationId: number, polling = false) =>
   queryOptions({
     queryKey: paymentKeys.invoices(restorationId),
-    queryFn: () => api<Invoice[]>(`/restorations/${restorationId}/invoices`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/invoices`, z.array(invoiceSchema)),
     refetchInterval: pollEvery(polling),
   });
 export const useRestorationInvoices = (restorationId: number, polling = false) =>
@@ -26,7 +32,7 @@ export const useRestorationInvoices = (restorationId: number, polling = false) =
 export const paymentsQueryOptions = (restorationId: number, polling = false) =>
   queryOptions({
     queryKey: paymentKeys.payments(restorationId),
-    queryFn: () => api<Payment[]>(`/restorations/${restorationId}/payments`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/payments`, z.array(paymentSchema)),
     refetchInterval: pollEvery(polling),
   });
 export const usePayments = (restorationId: number, polling = false) =>
@@ -35,7 +41,8 @@ export const usePayments = (restorationId: number, polling = false) =>
 /** Asks for a hosted checkout and goes there; the card is entered on the payment service's page, never here. */
 export function useCheckout() {
   return useMutation({
-    mutationFn: (invoiceId: number) => api<{ url: string }>(`/invoices/${invoiceId}/checkout`, { method: 'POST' }),
+    mutationFn: (invoiceId: number) =>
+      api(`/invoices/${invoiceId}/checkout`, { method: 'POST', schema: checkoutSchema }),
     onSuccess: ({ url }) => window.location.assign(url),
   });
 }
@@ -51,7 +58,7 @@ export function useRecordPayment(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
     mutationFn: ({ invoiceId, ...input }: ManualPaymentInput & { invoiceId: number }) =>
-      api<Payment>(`/invoices/${invoiceId}/payments`, { method: 'POST', json: input }),
+      api(`/invoices/${invoiceId}/payments`, { method: 'POST', json: input, schema: paymentSchema }),
     onSuccess: after,
   });
 }
@@ -61,7 +68,11 @@ export function useRefund(restorationId: number) {
   const after = useAfterWrite(restorationId);
   return useMutation({
     mutationFn: ({ paymentId, amount }: { paymentId: number; amount?: Money }) =>
-      api<unknown>(`/payments/${paymentId}/refund`, { method: 'POST', json: amount ? { amount } : {} }),
+      api(`/payments/${paymentId}/refund`, {
+        method: 'POST',
+        json: amount ? { amount } : {},
+        schema: refundAnswerSchema,
+      }),
     onSuccess: after,
   });
 }

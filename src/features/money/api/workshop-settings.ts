@@ -1,18 +1,18 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { WorkshopSettings } from '../../../../shared/schemas/estimates';
-import { api } from '../../../lib/api-client';
+import { workshopSettingsSchema, type WorkshopSettings } from '../../../../shared/schemas/estimates';
+import { api, apiGet } from '../../../lib/api-client';
 
 export const workshopSettingsKey = ['workshop', 'settings'] as const;
 
 /** The workshop's currency, prices, tax and invoice prefix (its technicians only). */
 export const useWorkshopSettings = () =>
-  useQuery({ queryKey: workshopSettingsKey, queryFn: () => api<WorkshopSettings>('/workshop/settings') });
+  useQuery({ queryKey: workshopSettingsKey, queryFn: () => apiGet('/workshop/settings', workshopSettingsSchema) });
 
 export function useSaveWorkshopSettings() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (input: WorkshopSettings) =>
-      api<WorkshopSettings>('/workshop/settings', { method: 'PUT', json: input }),
+      api('/workshop/settings', { method: 'PUT', json: input, schema: workshopSettingsSchema }),
     onSuccess: (saved) => {
       client.setQueryData(workshopSettingsKey, saved);
       // Every set's form reads the prices through its own money-settings query.

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Part, PartInput } from '../../../../shared/schemas/parts';
+import { partSchema, type Part, type PartInput } from '../../../../shared/schemas/parts';
 import { api } from '../../../lib/api-client';
 import { partKeys } from './keys';
 
 /** Adds a line to the ledger; the answer carries the server's warnings for it. */
 export const createPart = (restorationId: number, input: PartInput) =>
-  api<Part>(`/restorations/${restorationId}/parts`, { method: 'POST', json: input });
+  api(`/restorations/${restorationId}/parts`, { method: 'POST', json: input, schema: partSchema });
 
 export function useCreatePart(restorationId: number) {
   const client = useQueryClient();

@@ -3,7 +3,7 @@ import type { Part } from '../../../../shared/schemas/parts';
 import { api } from '../../../lib/api-client';
 import { partKeys } from './keys';
 
-export const deletePart = (id: number) => api<void>(`/parts/${id}`, { method: 'DELETE' });
+export const deletePart = (id: number) => api(`/parts/${id}`, { method: 'DELETE', noBody: true });
 
 export function useDeletePart(restorationId: number) {
   const client = useQueryClient();

@@ -1,12 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import type { Part, partPatchSchema } from '../../../../shared/schemas/parts';
+import { partSchema, type Part, type partPatchSchema } from '../../../../shared/schemas/parts';
 import { api } from '../../../lib/api-client';
 import { partKeys } from './keys';
 
 export type PartPatch = z.input<typeof partPatchSchema>;
 
-export const updatePart = (id: number, patch: PartPatch) => api<Part>(`/parts/${id}`, { method: 'PATCH', json: patch });
+export const updatePart = (id: number, patch: PartPatch) =>
+  api(`/parts/${id}`, { method: 'PATCH', json: patch, schema: partSchema });
 
 /**
  * Changes a part. The change shows at once (planned → ordered → fitted should not wait for the network) and only

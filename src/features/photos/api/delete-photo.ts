@@ -3,7 +3,7 @@ import type { Photo } from '../../../../shared/schemas/photos';
 import { api } from '../../../lib/api-client';
 import { photosQueryKey } from '../../../lib/queries/get-photos';
 
-export const deletePhoto = (id: number) => api<void>(`/photos/${id}`, { method: 'DELETE' });
+export const deletePhoto = (id: number) => api(`/photos/${id}`, { method: 'DELETE', noBody: true });
 
 export function useDeletePhoto(restorationId: number) {
   const client = useQueryClient();

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Photo, PhotoPatch } from '../../../../shared/schemas/photos';
+import { photoSchema, type Photo, type PhotoPatch } from '../../../../shared/schemas/photos';
 import { api } from '../../../lib/api-client';
 import { photosQueryKey } from '../../../lib/queries/get-photos';
 
 export const updatePhoto = (id: number, patch: PhotoPatch) =>
-  api<Photo>(`/photos/${id}`, { method: 'PATCH', json: patch });
+  api(`/photos/${id}`, { method: 'PATCH', json: patch, schema: photoSchema });
 
 /** Applies the change to the gallery at once and puts it back if the server refuses. */
 export function useUpdatePhoto(restorationId: number) {

@@ -1,17 +1,12 @@
 import type { z } from 'zod';
-import { apiErrorSchema } from '../../../../shared/schemas/errors';
-import type { Photo, photoUploadFieldsSchema } from '../../../../shared/schemas/photos';
-import { ApiError } from '../../../lib/api-client';
+import { photoSchema, type Photo, type photoUploadFieldsSchema } from '../../../../shared/schemas/photos';
+import { postForm, type FormProgress } from '../../../lib/post-form';
 
 /** The batch fields after the form has checked them. */
 export type UploadFields = z.output<typeof photoUploadFieldsSchema>;
 
-export interface UploadProgress {
-  /** Bytes of the request body sent so far. */
-  loaded: number;
-  /** Bytes of the whole request body (a little more than the file: the form's boundaries and fields). */
-  total: number;
-}
+/** Bytes sent so far of the whole request body (a little more than the file: the form's boundaries and fields). */
+export type UploadProgress = FormProgress;
 
 const fallbackMessages: Record<number, string> = {
   400: 'The server could not read that file as a photo.',
@@ -20,19 +15,12 @@ const fallbackMessages: Record<number, string> = {
   404: 'This restoration was not found.',
   413: 'That photo is larger than Gridleak accepts.',
   415: 'That file type is not accepted. Use JPEG, PNG, WebP, HEIC or AVIF.',
+  0: 'The upload was cut off. Check the connection and retry; a very large photo may be refused.',
 };
 
-function parseBody(text: string): unknown {
-  try {
-    return text ? JSON.parse(text) : undefined;
-  } catch {
-    return undefined;
-  }
-}
-
 /**
- * POST one image as multipart/form-data. XMLHttpRequest rather than fetch, because only XHR reports upload
- * progress. Rejects with ApiError carrying the server's message; a cancel rejects with code 'aborted'.
+ * POST one image as multipart/form-data (with upload progress, see postForm); answers the stored photo. A server that
+ * refuses a large body early often drops the connection, which looks like a network error.
  */
 export function uploadPhoto(
   restorationId: number,
@@ -40,45 +28,18 @@ export function uploadPhoto(
   fields: UploadFields,
   { onProgress, signal }: { onProgress?: (progress: UploadProgress) => void; signal?: AbortSignal } = {},
 ): Promise<Photo> {
-  return new Promise((resolve, reject) => {
-    const aborted = () => new ApiError(0, 'aborted', 'Upload cancelled.');
-    if (signal?.aborted) return reject(aborted());
-
-    const xhr = new XMLHttpRequest();
-    xhr.open('POST', `/api/restorations/${restorationId}/photos`);
-    xhr.withCredentials = true;
-    xhr.setRequestHeader('Accept', 'application/json');
-    xhr.upload.onprogress = (e) => onProgress?.({ loaded: e.loaded, total: e.lengthComputable ? e.total : file.size });
-
-    xhr.onload = () => {
-      const body = parseBody(xhr.responseText);
-      if (xhr.status >= 200 && xhr.status < 300) return resolve(body as Photo);
-      const parsed = apiErrorSchema.safeParse(body);
-      if (parsed.success) {
-        const { code, message, details } = parsed.data.error;
-        return reject(new ApiError(xhr.status, code, message, details));
-      }
-      reject(new ApiError(xhr.status, 'unknown', fallbackMessages[xhr.status] ?? `The server answered ${xhr.status}.`));
-    };
-    // A server that refuses a large body early often drops the connection, which looks like a network error.
-    xhr.onerror = () =>
-      reject(
-        new ApiError(
-          0,
-          'network',
-          'The upload was cut off. Check the connection and retry; a very large photo may be refused.',
-        ),
-      );
-    xhr.onabort = () => reject(aborted());
-    signal?.addEventListener('abort', () => xhr.abort(), { once: true });
-
-    const form = new FormData();
-    // Text fields before the file: a streaming parser then knows them when the image arrives.
-    form.append('view', fields.view);
-    form.append('phase', fields.phase);
-    form.append('caption', fields.caption);
-    form.append('ownerVisible', String(fields.ownerVisible));
-    form.append('file', file, file.name);
-    xhr.send(form);
+  const form = new FormData();
+  // Text fields before the file: a streaming parser then knows them when the image arrives.
+  form.append('view', fields.view);
+  form.append('phase', fields.phase);
+  form.append('caption', fields.caption);
+  form.append('ownerVisible', String(fields.ownerVisible));
+  form.append('file', file, file.name);
+  return postForm(`/restorations/${restorationId}/photos`, form, {
+    schema: photoSchema,
+    onProgress,
+    size: file.size,
+    signal,
+    fallback: fallbackMessages,
   });
 }

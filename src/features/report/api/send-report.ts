@@ -1,19 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { reportSentSchema } from '../../../../shared/schemas/safety';
 import { api } from '../../../lib/api-client';
 import { reportPreviewKey } from './get-report-preview';
 
-export interface SentReport {
-  /** The owners' addresses the report went to. */
-  sentTo: string[];
-  /** The record of this send. */
-  sendId?: number;
-  /** The warnings shown when it was sent, kept with the record. */
-  warnings?: string[];
-}
-
 /** E-mails the report to every owner on the restoration; a 409 (no owner yet) carries a message to show. */
 export const sendReport = (restorationId: number) =>
-  api<SentReport>(`/restorations/${restorationId}/report/send`, { method: 'POST' });
+  api(`/restorations/${restorationId}/report/send`, { method: 'POST', schema: reportSentSchema });
 
 export function useSendReport(restorationId: number) {
   const client = useQueryClient();

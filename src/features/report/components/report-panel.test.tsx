@@ -39,7 +39,7 @@ const renderPanel = (role: Role) => renderWithQueries(<ReportPanel restorationId
 
 describe('report panel', () => {
   it('when a technician sends the report, then it shows it is sending, then who it was sent to', async () => {
-    const { fetchMock, release } = fakeSend(() => ok({ sentTo: ['owner@example.org'] }));
+    const { fetchMock, release } = fakeSend(() => ok({ sentTo: ['owner@example.org'], sendId: 1, warnings: [] }));
     const user = userEvent.setup();
     renderPanel('technician');
     await user.click(screen.getByRole('button', { name: 'E-mail it to the owner' }));
@@ -70,7 +70,12 @@ describe('report panel', () => {
 
   it('when sending would be premature, then the preview lists the warnings and nothing is sent until "Send anyway"', async () => {
     const { fetchMock } = fakeSend(
-      () => ok({ sentTo: ['owner@example.org'] }),
+      () =>
+        ok({
+          sentTo: ['owner@example.org'],
+          sendId: 1,
+          warnings: ['No final safety test is recorded; the report says so.', 'No soak run is recorded.'],
+        }),
       [
         { code: 'no-passing-safety-test', message: 'No final safety test is recorded; the report says so.' },
         { code: 'no-soak', message: 'No soak run is recorded.' },

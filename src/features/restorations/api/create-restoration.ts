@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Restoration, RestorationInput } from '../../../../shared/schemas/restorations';
+import { restorationSchema, type RestorationInput } from '../../../../shared/schemas/restorations';
 import { api } from '../../../lib/api-client';
 
 export const createRestoration = (input: RestorationInput) =>
-  api<Restoration>('/restorations', { method: 'POST', json: input });
+  api('/restorations', { method: 'POST', json: input, schema: restorationSchema });
 
 export function useCreateRestoration() {
   const client = useQueryClient();

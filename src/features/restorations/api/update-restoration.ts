@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import type { Restoration, restorationPatchSchema } from '../../../../shared/schemas/restorations';
+import { restorationSchema, type restorationPatchSchema } from '../../../../shared/schemas/restorations';
 import { api } from '../../../lib/api-client';
 
 type Patch = z.input<typeof restorationPatchSchema>;
 
 export const updateRestoration = (id: number, patch: Patch) =>
-  api<Restoration>(`/restorations/${id}`, { method: 'PATCH', json: patch });
+  api(`/restorations/${id}`, { method: 'PATCH', json: patch, schema: restorationSchema });
 
 export function useUpdateRestoration(id: number) {
   const client = useQueryClient();

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SafetyTest, SafetyTestInput } from '../../../../shared/schemas/safety';
+import { safetyTestSchema, type SafetyTestInput } from '../../../../shared/schemas/safety';
 import { api } from '../../../lib/api-client';
 import { invalidateSafety } from './keys';
 
 /** Records a final safety test; the server judges each line. A 400 names the reading it could not read. */
 export const recordSafetyTest = (restorationId: number, input: SafetyTestInput) =>
-  api<SafetyTest>(`/restorations/${restorationId}/safety-tests`, { method: 'POST', json: input });
+  api(`/restorations/${restorationId}/safety-tests`, { method: 'POST', json: input, schema: safetyTestSchema });
 
 export function useRecordSafetyTest(restorationId: number) {
   const client = useQueryClient();

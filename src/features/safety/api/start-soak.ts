@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SoakLog } from '../../../../shared/schemas/safety';
+import { soakLogSchema } from '../../../../shared/schemas/safety';
 import { api } from '../../../lib/api-client';
 import { safetyKeys } from './keys';
 
 /** Starts a soak session now; 409 when one is already running. */
 export const startSoak = (restorationId: number) =>
-  api<SoakLog>(`/restorations/${restorationId}/soak-sessions`, { method: 'POST' });
+  api(`/restorations/${restorationId}/soak-sessions`, { method: 'POST', schema: soakLogSchema });
 
 export function useStartSoak(restorationId: number) {
   const client = useQueryClient();

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { SheetPage } from '../../../../shared/schemas/sheets';
-import { api } from '../../../lib/api-client';
+import { z } from 'zod';
+import { sheetPageSchema } from '../../../../shared/schemas/sheets';
+import { apiGet } from '../../../lib/api-client';
 
 export const sheetPagesQueryKey = (restorationId: number) => ['restorations', restorationId, 'sheets'] as const;
 
@@ -8,7 +9,7 @@ export const sheetPagesQueryKey = (restorationId: number) => ['restorations', re
 export const sheetPagesQueryOptions = (restorationId: number) =>
   queryOptions({
     queryKey: sheetPagesQueryKey(restorationId),
-    queryFn: () => api<SheetPage[]>(`/restorations/${restorationId}/sheets`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/sheets`, z.array(sheetPageSchema)),
     staleTime: 2 * 60_000,
     refetchOnWindowFocus: true,
   });

@@ -1,6 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { MismatchNote, MismatchNoteInput, MismatchNotePatch } from '../../../../shared/schemas/sheets';
-import { api } from '../../../lib/api-client';
+import { z } from 'zod';
+import { mismatchNoteSchema, type MismatchNoteInput, type MismatchNotePatch } from '../../../../shared/schemas/sheets';
+import { api, apiGet } from '../../../lib/api-client';
 
 export const mismatchNotesQueryKey = (restorationId: number) =>
   ['restorations', restorationId, 'mismatch-notes'] as const;
@@ -9,7 +10,7 @@ export const mismatchNotesQueryKey = (restorationId: number) =>
 export const useMismatchNotes = (restorationId: number) =>
   useQuery({
     queryKey: mismatchNotesQueryKey(restorationId),
-    queryFn: () => api<MismatchNote[]>(`/restorations/${restorationId}/mismatch-notes`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/mismatch-notes`, z.array(mismatchNoteSchema)),
   });
 
 function useInvalidate(restorationId: number) {
@@ -21,7 +22,7 @@ export function useCreateMismatchNote(restorationId: number) {
   const invalidate = useInvalidate(restorationId);
   return useMutation({
     mutationFn: (input: MismatchNoteInput) =>
-      api<MismatchNote>(`/restorations/${restorationId}/mismatch-notes`, { method: 'POST', json: input }),
+      api(`/restorations/${restorationId}/mismatch-notes`, { method: 'POST', json: input, schema: mismatchNoteSchema }),
     onSettled: invalidate,
   });
 }
@@ -30,7 +31,7 @@ export function useUpdateMismatchNote(restorationId: number) {
   const invalidate = useInvalidate(restorationId);
   return useMutation({
     mutationFn: ({ id, patch }: { id: number; patch: MismatchNotePatch }) =>
-      api<MismatchNote>(`/mismatch-notes/${id}`, { method: 'PATCH', json: patch }),
+      api(`/mismatch-notes/${id}`, { method: 'PATCH', json: patch, schema: mismatchNoteSchema }),
     onSettled: invalidate,
   });
 }
@@ -38,7 +39,7 @@ export function useUpdateMismatchNote(restorationId: number) {
 export function useDeleteMismatchNote(restorationId: number) {
   const invalidate = useInvalidate(restorationId);
   return useMutation({
-    mutationFn: (id: number) => api<void>(`/mismatch-notes/${id}`, { method: 'DELETE' }),
+    mutationFn: (id: number) => api(`/mismatch-notes/${id}`, { method: 'DELETE', noBody: true }),
     onSettled: invalidate,
   });
 }

@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ReferenceMark, ReferenceMarkInput } from '../../../../shared/schemas/sheets';
-import { api } from '../../../lib/api-client';
+import { z } from 'zod';
+import { referenceMarkSchema, type ReferenceMarkInput } from '../../../../shared/schemas/sheets';
+import { api, apiGet } from '../../../lib/api-client';
 import { referencesQueryKey } from '../../../lib/queries/references';
 
 export const referenceMarksQueryKey = (restorationId: number) =>
@@ -10,7 +11,7 @@ export const referenceMarksQueryKey = (restorationId: number) =>
 export const referenceMarksQueryOptions = (restorationId: number) =>
   queryOptions({
     queryKey: referenceMarksQueryKey(restorationId),
-    queryFn: () => api<ReferenceMark[]>(`/restorations/${restorationId}/reference-marks`),
+    queryFn: () => apiGet(`/restorations/${restorationId}/reference-marks`, z.array(referenceMarkSchema)),
   });
 export const useReferenceMarks = (restorationId: number) => useQuery(referenceMarksQueryOptions(restorationId));
 
@@ -27,7 +28,11 @@ export function useCreateReferenceMark(restorationId: number) {
   const invalidate = useInvalidateReferences(restorationId);
   return useMutation({
     mutationFn: (input: ReferenceMarkInput) =>
-      api<ReferenceMark>(`/restorations/${restorationId}/reference-marks`, { method: 'POST', json: input }),
+      api(`/restorations/${restorationId}/reference-marks`, {
+        method: 'POST',
+        json: input,
+        schema: referenceMarkSchema,
+      }),
     onSettled: invalidate,
   });
 }
@@ -35,7 +40,7 @@ export function useCreateReferenceMark(restorationId: number) {
 export function useDeleteReferenceMark(restorationId: number) {
   const invalidate = useInvalidateReferences(restorationId);
   return useMutation({
-    mutationFn: (id: number) => api<void>(`/reference-marks/${id}`, { method: 'DELETE' }),
+    mutationFn: (id: number) => api(`/reference-marks/${id}`, { method: 'DELETE', noBody: true }),
     onSettled: invalidate,
   });
 }

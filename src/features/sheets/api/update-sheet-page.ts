@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SheetPage, SheetPagePatch } from '../../../../shared/schemas/sheets';
+import { sheetPageSchema, type SheetPagePatch } from '../../../../shared/schemas/sheets';
 import { api } from '../../../lib/api-client';
 import { sheetPagesQueryKey } from './get-sheet-pages';
 
@@ -7,7 +7,8 @@ import { sheetPagesQueryKey } from './get-sheet-pages';
 export function useUpdateSheetPage(restorationId: number, pageId: number) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (patch: SheetPagePatch) => api<SheetPage>(`/sheet-pages/${pageId}`, { method: 'PATCH', json: patch }),
+    mutationFn: (patch: SheetPagePatch) =>
+      api(`/sheet-pages/${pageId}`, { method: 'PATCH', json: patch, schema: sheetPageSchema }),
     onSettled: () => client.invalidateQueries({ queryKey: sheetPagesQueryKey(restorationId) }),
   });
 }

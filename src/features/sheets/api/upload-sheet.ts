@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import type { Sheet, sheetUploadFieldsSchema } from '../../../../shared/schemas/sheets';
+import { sheetSchema, type Sheet, type sheetUploadFieldsSchema } from '../../../../shared/schemas/sheets';
 import { postForm, type FormProgress } from '../../../lib/post-form';
 import { sheetPagesQueryKey } from './get-sheet-pages';
 import { referencesQueryKey } from '../../../lib/queries/references';
@@ -25,7 +25,7 @@ export function uploadSheet(
   form.set('title', fields.title);
   form.set('ownerVisible', String(fields.ownerVisible));
   form.set('file', file, file.name);
-  return postForm<Sheet>(`/restorations/${restorationId}/sheets`, form, { onProgress, fallback });
+  return postForm(`/restorations/${restorationId}/sheets`, form, { schema: sheetSchema, onProgress, fallback });
 }
 
 export function useUploadSheet(restorationId: number) {

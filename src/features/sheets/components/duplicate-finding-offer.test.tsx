@@ -49,7 +49,16 @@ describe('a second finding for the same part', () => {
   it('when R23 already has a finding, then attaching posts a location mark on this photo and opens that finding', async () => {
     const api = fakeApi((call) =>
       call.method === 'POST'
-        ? { status: 201, body: { id: 11, ...(call.body as object) } }
+        ? {
+            status: 201,
+            body: {
+              id: 11,
+              restorationId: 3,
+              sheetPageId: null,
+              createdAt: '2026-12-01T10:00:00.000Z',
+              ...(call.body as object),
+            },
+          }
         : call.path === '/restorations/3/findings'
           ? ok([existing])
           : undefined,
