@@ -81,11 +81,12 @@ describe('the money journey, from estimate to the last payment', () => {
     const deposit = bench.getByRole('form', { name: 'Request a deposit' });
     await deposit.getByRole('radio', { name: 'A fixed amount' }).check();
     await deposit.getByRole('textbox', { name: 'Amount (GBP)' }).fill('30');
+    // The demo already has a deposit request: wait for this one's card, not any, before the owner looks.
+    const depositCards = bench.getByRole('heading', { name: /^Deposit request / });
+    await depositCards.first().waitFor();
+    const before = await depositCards.count();
     await deposit.getByRole('button', { name: 'Issue the deposit request' }).click();
-    await bench
-      .getByRole('heading', { name: /^Deposit request / })
-      .first()
-      .waitFor();
+    await expect.poll(() => depositCards.count(), { timeout: 30_000 }).toBe(before + 1);
 
     await payByCard(owner, setId, '£30.00');
     const afterDeposit = await invoicesOf(owner, setId);
