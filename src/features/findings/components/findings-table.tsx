@@ -1,19 +1,12 @@
-import {
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type ColumnFiltersState,
-  type SortingState,
-} from '@tanstack/react-table';
-import { useMemo, useState, type MouseEvent } from 'react';
+import { flexRender } from '@tanstack/react-table';
+import { useMemo, type MouseEvent } from 'react';
 import { useNavigate } from 'react-router';
 import { findingPath, type Finding } from '../../../../shared/schemas/findings';
 import { Button } from '../../../components/button';
 import { ariaSortOf, SortButton } from '../../../components/sort-button';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
 import { useRestorationFindings } from '../../../lib/queries/get-restoration-findings';
+import { useSortedTable } from '../../../lib/table-sorting';
 import { FindingCards } from './finding-cards';
 import { findingColumns } from './findings-columns';
 import { FindingsFilters } from './findings-filters';
@@ -30,26 +23,12 @@ const findingsCount = (n: number) => (n === 1 ? '1 finding' : `${n} findings`);
 export function FindingsTable({ restorationId, photos }: FindingsTableProps) {
   const query = useRestorationFindings(restorationId);
   const navigate = useNavigate();
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'number', desc: false }]);
-  const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
   const photoLabel = useMemo(() => {
     const labels = new Map(photos.map((p) => [p.id, p.label]));
     return (id: number) => labels.get(id) ?? `Photo ${id}`;
   }, [photos]);
   const columns = useMemo(() => findingColumns(photoLabel), [photoLabel]);
-  const table = useReactTable({
-    data: query.data ?? none,
-    columns,
-    state: { sorting, columnFilters },
-    onSortingChange: setSorting,
-    onColumnFiltersChange: setColumnFilters,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getRowId: (f) => String(f.id),
-    sortDescFirst: false,
-    enableSortingRemoval: false,
-  });
+  const table = useSortedTable(query.data ?? none, columns, 'number', { sortDescFirst: false });
 
   if (query.isPending) return <Loading label="Fetching findings…" />;
   if (query.isError) return <ErrorState error={query.error} onRetry={() => query.refetch()} />;
@@ -77,7 +56,7 @@ export function FindingsTable({ restorationId, photos }: FindingsTableProps) {
             ? findingsCount(rows.length)
             : `Showing ${rows.length} of ${findingsCount(query.data.length)}`}
         </p>
-        {columnFilters.length > 0 && (
+        {table.getState().columnFilters.length > 0 && (
           <Button variant="quiet" onClick={() => table.resetColumnFilters()}>
             Clear filters
           </Button>

@@ -1,17 +1,10 @@
 import { useMutationState } from '@tanstack/react-query';
-import {
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type ColumnFiltersState,
-  type SortingState,
-} from '@tanstack/react-table';
+import { flexRender } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { can, type Role } from '../../../../shared/permissions';
 import { partStateLabels, type Part } from '../../../../shared/schemas/parts';
 import { EmptyState, ErrorState, Loading } from '../../../components/states';
+import { useSortedTable } from '../../../lib/table-sorting';
 import { ariaSortOf, SortButton } from '../../../components/sort-button';
 import { partKeys } from '../api/keys';
 import { useParts } from '../api/get-parts';
@@ -44,8 +37,6 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
   const { mutateAsync: update } = useUpdatePart(restorationId);
   const [currency] = useCurrency();
   const [refused, setRefused] = useState<string>();
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'componentRef', desc: false }]);
-  const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
   const canEdit = can(role, 'parts.edit');
   const busy = useMutationState({
     filters: { mutationKey: partKeys.update, status: 'pending' },
@@ -77,18 +68,7 @@ export function PartsLedger({ restorationId, role, findings, onEdit }: PartsLedg
     });
   }, [findings, canEdit, currency, onEdit, busyIds, update]);
 
-  const table = useReactTable({
-    data: query.data ?? none,
-    columns,
-    state: { sorting, columnFilters },
-    onSortingChange: setSorting,
-    onColumnFiltersChange: setColumnFilters,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getRowId: (p) => String(p.id),
-    enableSortingRemoval: false,
-  });
+  const table = useSortedTable(query.data ?? none, columns, REF);
 
   if (query.isPending) return <Loading label="Fetching the parts ledger…" />;
   if (query.isError) return <ErrorState error={query.error} onRetry={() => query.refetch()} />;
