@@ -1,11 +1,11 @@
-import { and, desc, eq, gte, isNull, sql } from 'drizzle-orm';
 import type { LabourLog } from '../../../shared/schemas/labour';
 import type { Database, Tx } from '../../db/client';
-import { events, findings, labourEntries, users } from '../../db/schema';
+import { unitOfWork } from '../../db/unit-of-work';
 import { BadRequestError, ConflictError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
 import { lockRestoration } from '../restorations/lock-restoration';
+import { labourRepo, type LabourRow as Row } from './labour.repo';
 
-type Row = typeof labourEntries.$inferSelect;
 type Target = {
   findingId: number | null;
   stage: LabourLog['entries'][number]['stage'];
@@ -34,15 +34,12 @@ export function weekStart(now: Date): Date {
 async function assertTarget(tx: Tx, restorationId: number, findingId: number | null) {
   await lockRestoration(tx, restorationId);
   if (findingId === null) return;
-  const [f] = await tx
-    .select({ id: findings.id })
-    .from(findings)
-    .where(and(eq(findings.id, findingId), eq(findings.restorationId, restorationId)));
-  if (!f) throw new BadRequestError('findingId: no such finding on this restoration.');
+  if (!(await labourRepo(tx).findingOn(restorationId, findingId)))
+    throw new BadRequestError('findingId: no such finding on this restoration.');
 }
 
 const logged = (tx: Tx, e: Row, actorId: number) =>
-  tx.insert(events).values({
+  recordEvent(tx, {
     restorationId: e.restorationId,
     kind: 'labour-logged',
     actorId,
@@ -62,29 +59,11 @@ const entryOf = (restorationId: number, input: Target, userId: number) => ({
 
 /** The labour log: typed hours or a server-side timer; each finished entry writes its history line in the same transaction. */
 export function labourService(db: Database) {
+  const repo = labourRepo(db);
   async function log(restorationId: number, userId: number, now = new Date()): Promise<LabourLog> {
-    const rows = await db
-      .select({ e: labourEntries, by: users.name })
-      .from(labourEntries)
-      .leftJoin(users, eq(users.id, labourEntries.technicianId))
-      .where(eq(labourEntries.restorationId, restorationId))
-      .orderBy(desc(labourEntries.startedAt), desc(labourEntries.id));
-    const [running] = await db
-      .select({ e: labourEntries, by: users.name })
-      .from(labourEntries)
-      .leftJoin(users, eq(users.id, labourEntries.technicianId))
-      .where(and(eq(labourEntries.technicianId, userId), isNull(labourEntries.stoppedAt)));
-    const week = await db
-      .select({
-        technician: users.name,
-        minutes: sql<number>`coalesce(sum(${labourEntries.minutes}), 0)::int`,
-        billableMinutes: sql<number>`coalesce(sum(${labourEntries.minutes}) filter (where ${labourEntries.billable}), 0)::int`,
-      })
-      .from(labourEntries)
-      .leftJoin(users, eq(users.id, labourEntries.technicianId))
-      .where(and(eq(labourEntries.restorationId, restorationId), gte(labourEntries.startedAt, weekStart(now))))
-      .groupBy(users.id, users.name)
-      .orderBy(users.name);
+    const rows = await repo.entries(restorationId);
+    const running = await repo.runningOf(userId);
+    const week = await repo.week(restorationId, weekStart(now));
     return {
       entries: rows.map(({ e, by }) => present(e, by)),
       running: running ? { ...present(running.e, running.by), restorationId: running.e.restorationId } : null,
@@ -96,61 +75,43 @@ export function labourService(db: Database) {
     log,
 
     async add(restorationId: number, input: Target & { minutes: number; workedAt?: string }, userId: number) {
-      await db.transaction(async (tx) => {
+      await unitOfWork(db, async (tx) => {
         await assertTarget(tx, restorationId, input.findingId);
         const at = input.workedAt ? new Date(input.workedAt) : new Date();
-        const [e] = await tx
-          .insert(labourEntries)
-          .values({
-            ...entryOf(restorationId, input, userId),
-            startedAt: at,
-            stoppedAt: at,
-            minutes: input.minutes,
-          })
-          .returning();
-        await logged(tx, e!, userId);
+        const entries = labourRepo(tx);
+        const e = await entries.insert({
+          ...entryOf(restorationId, input, userId),
+          startedAt: at,
+          stoppedAt: at,
+          minutes: input.minutes,
+        });
+        await logged(tx, e, userId);
       });
       return log(restorationId, userId);
     },
 
     /** Starts the reader's timer; the start time is the server's, so a reload or another device shows it running. */
     async start(restorationId: number, input: Target, userId: number) {
-      await db.transaction(async (tx) => {
+      await unitOfWork(db, async (tx) => {
         await assertTarget(tx, restorationId, input.findingId);
-        const [already] = await tx
-          .select({ id: labourEntries.id })
-          .from(labourEntries)
-          .where(and(eq(labourEntries.technicianId, userId), isNull(labourEntries.stoppedAt)))
-          .for('update');
-        if (already) throw new ConflictError('Your timer is already running: stop it before starting another.');
-        await tx.insert(labourEntries).values(entryOf(restorationId, input, userId));
+        const entries = labourRepo(tx);
+        if (await entries.lockRunningId(userId))
+          throw new ConflictError('Your timer is already running: stop it before starting another.');
+        await entries.insert(entryOf(restorationId, input, userId));
       });
       return log(restorationId, userId);
     },
 
     /** Stops the reader's timer on this restoration and writes its minutes (at least one). */
     async stop(restorationId: number, userId: number) {
-      await db.transaction(async (tx) => {
-        const [running] = await tx
-          .select()
-          .from(labourEntries)
-          .where(
-            and(
-              eq(labourEntries.technicianId, userId),
-              eq(labourEntries.restorationId, restorationId),
-              isNull(labourEntries.stoppedAt),
-            ),
-          )
-          .for('update');
+      await unitOfWork(db, async (tx) => {
+        const entries = labourRepo(tx);
+        const running = await entries.lockRunningOn(userId, restorationId);
         if (!running) throw new ConflictError('No timer of yours is running on this restoration.');
         const stoppedAt = new Date();
         const minutes = Math.max(1, Math.round((stoppedAt.getTime() - running.startedAt.getTime()) / 60_000));
-        const [e] = await tx
-          .update(labourEntries)
-          .set({ stoppedAt, minutes })
-          .where(eq(labourEntries.id, running.id))
-          .returning();
-        await logged(tx, e!, userId);
+        const e = await entries.stop(running.id, { stoppedAt, minutes });
+        await logged(tx, e, userId);
       });
       return log(restorationId, userId);
     },

@@ -1,34 +1,30 @@
 import { createHash } from 'node:crypto';
-import { and, desc, eq } from 'drizzle-orm';
 import type { HandBackWarning, ReportPreview, ReportSend, ReportSent } from '../../../shared/schemas/safety';
 import { stageLabels, stages, type Stage } from '../../../shared/schemas/restorations';
 import type { AppDeps } from '../../app-deps';
-import { events, findings, memberships, reportSends, restorations, users } from '../../db/schema';
+import { unitOfWork } from '../../db/unit-of-work';
 import { ConflictError, NotFoundError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
 import { buildReport } from '../report/report.routes';
 import { safetyTestsService } from './safety-tests.service';
 import { soakService } from './soak.service';
+import { safetyRepo } from './safety.repo';
 
 type Deps = Pick<AppDeps, 'db' | 'storage' | 'mailer' | 'config'>;
 const beforeTesting = new Set<Stage>(stages.slice(0, stages.indexOf('testing')).concat('on-hold'));
 
 /** Why sending now may be premature, in words the technician can act on. */
 export async function handBackWarnings(db: Deps['db'], restorationId: number): Promise<HandBackWarning[]> {
-  const [set] = await db
-    .select({ stage: restorations.stage })
-    .from(restorations)
-    .where(eq(restorations.id, restorationId));
-  if (!set) throw new NotFoundError();
+  const repo = safetyRepo(db);
+  const stage = await repo.stage(restorationId);
+  if (!stage) throw new NotFoundError();
   const warnings: HandBackWarning[] = [];
-  if (beforeTesting.has(set.stage))
+  if (beforeTesting.has(stage))
     warnings.push({
       code: 'stage-before-testing',
-      message: `The set is still at ${stageLabels[set.stage]}: the report is meant for the end of Testing or later.`,
+      message: `The set is still at ${stageLabels[stage]}: the report is meant for the end of Testing or later.`,
     });
-  const open = await db
-    .select({ number: findings.number })
-    .from(findings)
-    .where(and(eq(findings.restorationId, restorationId), eq(findings.questionOpen, true)));
+  const open = await repo.openQuestions(restorationId);
   if (open.length)
     warnings.push({
       code: 'open-questions',
@@ -60,23 +56,14 @@ export async function handBackWarnings(db: Deps['db'], restorationId: number): P
 /** The hand-back e-mail: preview what the owner receives, then send it and record who sent what, when. */
 export function handBackService(deps: Deps) {
   const { db } = deps;
-  const owners = (id: number) =>
-    db
-      .select({ email: users.email, name: users.name })
-      .from(memberships)
-      .innerJoin(users, eq(users.id, memberships.userId))
-      .where(and(eq(memberships.restorationId, id), eq(memberships.role, 'owner')));
+  const repo = safetyRepo(db);
+  const owners = (id: number) => repo.owners(id);
   const letter = (id: number, owner: string, sender: string, set: { make: string; model: string }) => ({
     subject: `Your ${set.make} ${set.model}: the hand-back report`,
     body: `Hello ${owner},\n\n${sender} has finished the report on your ${set.make} ${set.model}; it is attached.\nYou can also read its history at ${deps.config.publicOrigin}/restorations/${id}.\n\nPlease read the safety notes at the end before using the set. The report records the work and the workshop's final safety test; it is not a certificate of electrical safety.\n\n— Gridleak, the restoration notebook`,
   });
   async function sends(id: number): Promise<ReportSend[]> {
-    const rows = await db
-      .select({ s: reportSends, by: users.name })
-      .from(reportSends)
-      .leftJoin(users, eq(users.id, reportSends.sentById))
-      .where(eq(reportSends.restorationId, id))
-      .orderBy(desc(reportSends.sentAt), desc(reportSends.id));
+    const rows = await repo.sends(id);
     return rows.map(({ s, by }) => ({
       id: s.id,
       sentAt: s.sentAt.toISOString(),
@@ -128,27 +115,24 @@ export function handBackService(deps: Deps) {
       }
       const sha256 = createHash('sha256').update(report.pdf).digest('hex');
       const sentTo = recipients.map((o) => o.email);
-      const send = await db.transaction(async (tx) => {
-        const [row] = await tx
-          .insert(reportSends)
-          .values({
-            restorationId: id,
-            sentById: sender.id,
-            recipients: sentTo,
-            attachmentName: report.name,
-            pageCount: report.pageCount,
-            sha256,
-            warnings: warnings.map((w) => w.message),
-            stage: report.set.stage,
-          })
-          .returning();
-        await tx.insert(events).values({
+      const send = await unitOfWork(db, async (tx) => {
+        const row = await safetyRepo(tx).insertSend({
+          restorationId: id,
+          sentById: sender.id,
+          recipients: sentTo,
+          attachmentName: report.name,
+          pageCount: report.pageCount,
+          sha256,
+          warnings: warnings.map((w) => w.message),
+          stage: report.set.stage,
+        });
+        await recordEvent(tx, {
           restorationId: id,
           kind: 'report-sent',
           actorId: sender.id,
-          data: { reportSendId: row!.id, warnings: warnings.length },
+          data: { reportSendId: row.id, warnings: warnings.length },
         });
-        return row!;
+        return row;
       });
       return { sentTo, sendId: send.id, warnings: warnings.map((w) => w.message) };
     },

@@ -1,26 +1,14 @@
-import { desc, eq } from 'drizzle-orm';
 import type { Executor } from '../../db/client';
-import { safetyOverrides, safetyTests } from '../../db/schema';
 import { ConflictError } from '../../http/errors';
 import { returnedAllowed } from './safety-tests.service';
+import { safetyRepo } from './safety.repo';
 
 /**
  * The Returned gate: a set goes back to its owner only after its final safety test passes, or after a
  * technician records an override with a reason. Called by the restorations service on a stage change.
  */
 export async function assertReturnedGate(db: Executor, restorationId: number): Promise<void> {
-  const [latest] = await db
-    .select({ verdict: safetyTests.verdict, testedAt: safetyTests.testedAt })
-    .from(safetyTests)
-    .where(eq(safetyTests.restorationId, restorationId))
-    .orderBy(desc(safetyTests.testedAt), desc(safetyTests.id))
-    .limit(1);
-  const [override] = await db
-    .select({ createdAt: safetyOverrides.createdAt })
-    .from(safetyOverrides)
-    .where(eq(safetyOverrides.restorationId, restorationId))
-    .orderBy(desc(safetyOverrides.createdAt))
-    .limit(1);
+  const { latest, override } = await safetyRepo(db).gate(restorationId);
   if (returnedAllowed(latest, override)) return;
   const message = latest
     ? 'The latest final safety test failed, so the set cannot be marked Returned. Put right what failed and record a passing test on the Safety tab, or record an override with the reason there.'

@@ -1,14 +1,13 @@
-import { desc, eq } from 'drizzle-orm';
 import { BenchInputError, parseQuantity, safetyTest, type QuantityUnit } from '../../../shared/bench';
 import type { SafetyOverride, SafetyStatus, SafetyTest, safetyTestInputSchema } from '../../../shared/schemas/safety';
 import type { z } from 'zod';
 import type { Database } from '../../db/client';
-import { events, safetyOverrides, safetyTests, users } from '../../db/schema';
+import { unitOfWork } from '../../db/unit-of-work';
 import { BadRequestError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
+import { safetyRepo, type SafetyOverrideRow as OverrideRow, type SafetyTestRow as TestRow } from './safety.repo';
 
 type Input = z.output<typeof safetyTestInputSchema>;
-type TestRow = typeof safetyTests.$inferSelect;
-type OverrideRow = typeof safetyOverrides.$inferSelect;
 
 /** Reads one typed reading in its unit; '' is "not measured". A value the bench library cannot read is a 400 naming the field. */
 function read(field: string, text: string, unit: Exclude<QuantityUnit, ''>): number | null {
@@ -78,28 +77,11 @@ export function returnedAllowed(
 }
 
 export function safetyTestsService(db: Database) {
-  async function testsOf(restorationId: number) {
-    return db
-      .select({ t: safetyTests, by: users.name })
-      .from(safetyTests)
-      .leftJoin(users, eq(users.id, safetyTests.testedById))
-      .where(eq(safetyTests.restorationId, restorationId))
-      .orderBy(desc(safetyTests.testedAt), desc(safetyTests.id));
-  }
-  async function latestOverride(restorationId: number) {
-    const [o] = await db
-      .select({ o: safetyOverrides, by: users.name })
-      .from(safetyOverrides)
-      .leftJoin(users, eq(users.id, safetyOverrides.actorId))
-      .where(eq(safetyOverrides.restorationId, restorationId))
-      .orderBy(desc(safetyOverrides.createdAt), desc(safetyOverrides.id))
-      .limit(1);
-    return o;
-  }
+  const repo = safetyRepo(db);
   return {
     async status(restorationId: number): Promise<SafetyStatus> {
-      const rows = await testsOf(restorationId);
-      const o = await latestOverride(restorationId);
+      const rows = await repo.tests(restorationId);
+      const o = await repo.latestOverride(restorationId);
       const tests = rows.map((r) => toTest(r.t, r.by));
       return {
         tests,
@@ -112,43 +94,41 @@ export function safetyTestsService(db: Database) {
     async record(restorationId: number, input: Input, actorId: number): Promise<SafetyTest> {
       const result = judgeSafetyTest(input);
       const { specification, modifications, notes, equipmentClass, ...readings } = input;
-      const row = await db.transaction(async (tx) => {
-        const [t] = await tx
-          .insert(safetyTests)
-          .values({
-            restorationId,
-            equipmentClass,
-            readings,
-            lines: result.lines,
-            verdict: result.verdict,
-            specification,
-            modifications,
-            notes,
-            testedById: actorId,
-          })
-          .returning();
-        await tx.insert(events).values({
+      const row = await unitOfWork(db, async (tx) => {
+        const t = await safetyRepo(tx).insertTest({
+          restorationId,
+          equipmentClass,
+          readings,
+          lines: result.lines,
+          verdict: result.verdict,
+          specification,
+          modifications,
+          notes,
+          testedById: actorId,
+        });
+        await recordEvent(tx, {
           restorationId,
           kind: 'safety-test',
           actorId,
-          data: { safetyTestId: t!.id, verdict: result.verdict },
+          data: { safetyTestId: t.id, verdict: result.verdict },
         });
-        return t!;
+        return t;
       });
-      const [by] = await db.select({ name: users.name }).from(users).where(eq(users.id, actorId));
-      return toTest(row, by?.name ?? null);
+      return toTest(row, await repo.userName(actorId));
     },
     /** A technician's decision to return the set without a passing test, with the reason, recorded with its history line. */
     async override(restorationId: number, reason: string, actorId: number): Promise<SafetyOverride> {
-      const row = await db.transaction(async (tx) => {
-        const [o] = await tx.insert(safetyOverrides).values({ restorationId, reason, actorId }).returning();
-        await tx
-          .insert(events)
-          .values({ restorationId, kind: 'safety-override', actorId, data: { safetyOverrideId: o!.id, reason } });
-        return o!;
+      const row = await unitOfWork(db, async (tx) => {
+        const o = await safetyRepo(tx).insertOverride({ restorationId, reason, actorId });
+        await recordEvent(tx, {
+          restorationId,
+          kind: 'safety-override',
+          actorId,
+          data: { safetyOverrideId: o.id, reason },
+        });
+        return o;
       });
-      const [by] = await db.select({ name: users.name }).from(users).where(eq(users.id, actorId));
-      return toOverride(row, by?.name ?? null);
+      return toOverride(row, await repo.userName(actorId));
     },
   };
 }

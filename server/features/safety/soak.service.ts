@@ -1,13 +1,13 @@
-import { and, asc, desc, eq, isNull, max, sql } from 'drizzle-orm';
 import type { z } from 'zod';
 import { BenchInputError, parseQuantity } from '../../../shared/bench';
 import type { SoakLog, SoakSession, soakStopSchema } from '../../../shared/schemas/safety';
 import type { Database } from '../../db/client';
-import { events, findings, photos, restorations, soakSessions, users } from '../../db/schema';
+import { unitOfWork } from '../../db/unit-of-work';
 import { BadRequestError, ConflictError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
+import { safetyRepo, type SoakRow as Row } from './safety.repo';
 
 type Stop = z.output<typeof soakStopSchema>;
-type Row = typeof soakSessions.$inferSelect;
 const HOUR_MS = 3_600_000;
 
 const toSession = (r: Row, startedBy: string | null): SoakSession => ({
@@ -36,34 +36,27 @@ function amps(text: string): number | null {
 
 /** Soak runs: the clock is the server's, so a running session survives a reload or another device. */
 export function soakService(db: Database) {
+  const repo = safetyRepo(db);
   return {
     async log(restorationId: number): Promise<SoakLog> {
-      const rows = await db
-        .select({ s: soakSessions, by: users.name })
-        .from(soakSessions)
-        .leftJoin(users, eq(users.id, soakSessions.startedById))
-        .where(eq(soakSessions.restorationId, restorationId))
-        .orderBy(asc(soakSessions.startedAt), asc(soakSessions.id));
+      const rows = await repo.soakSessions(restorationId);
       const sessions = rows.map((r) => toSession(r.s, r.by));
       const totalHours = sessions.reduce((sum, s) => sum + (s.hours ?? 0), 0);
       return { sessions, totalHours, running: sessions.find((s) => s.endedAt === null) ?? null };
     },
     /** Starts a session; one at a time per set (a unique index holds even under two clicks at once). */
     async start(restorationId: number, actorId: number): Promise<SoakLog> {
-      const [running] = await db
-        .select({ id: soakSessions.id })
-        .from(soakSessions)
-        .where(and(eq(soakSessions.restorationId, restorationId), isNull(soakSessions.endedAt)));
-      if (running) throw new ConflictError('A soak session is already running: stop it before starting another.');
+      if (await repo.runningSoak(restorationId))
+        throw new ConflictError('A soak session is already running: stop it before starting another.');
       try {
-        await db.transaction(async (tx) => {
-          const [s] = await tx
-            .insert(soakSessions)
-            .values({ restorationId, startedById: actorId })
-            .returning({ id: soakSessions.id });
-          await tx
-            .insert(events)
-            .values({ restorationId, kind: 'soak-session', actorId, data: { soakSessionId: s!.id, started: true } });
+        await unitOfWork(db, async (tx) => {
+          const s = await safetyRepo(tx).startSoak(restorationId, actorId);
+          await recordEvent(tx, {
+            restorationId,
+            kind: 'soak-session',
+            actorId,
+            data: { soakSessionId: s.id, started: true },
+          });
         });
       } catch (err) {
         if (
@@ -81,66 +74,45 @@ export function soakService(db: Database) {
      */
     async stop(restorationId: number, input: Stop, actorId: number): Promise<SoakLog> {
       const mainsCurrentAmps = amps(input.mainsCurrent);
-      await db.transaction(async (tx) => {
-        await tx.execute(sql`select 1 from ${restorations} where ${restorations.id} = ${restorationId} for update`);
-        const [running] = await tx
-          .select()
-          .from(soakSessions)
-          .where(and(eq(soakSessions.restorationId, restorationId), isNull(soakSessions.endedAt)));
+      await unitOfWork(db, async (tx) => {
+        const soak = safetyRepo(tx);
+        await soak.lockSet(restorationId);
+        const running = await soak.runningSoak(restorationId);
         if (!running) throw new ConflictError('No soak session is running: start one first.');
         let findingId: number | null = null;
         if (input.faults) {
-          const [photo] = await tx
-            .select({ id: photos.id })
-            .from(photos)
-            .where(
-              and(eq(photos.restorationId, restorationId), input.photoId ? eq(photos.id, input.photoId) : undefined),
-            )
-            .orderBy(desc(photos.createdAt))
-            .limit(1);
+          const photo = await soak.photoFor(restorationId, input.photoId);
           if (!photo)
             throw new ConflictError(
               'A fault opens a finding pinned on a chassis photo: upload a photo first, then stop the session.',
             );
-          const [top] = await tx
-            .select({ n: max(findings.number) })
-            .from(findings)
-            .where(eq(findings.restorationId, restorationId));
-          const [f] = await tx
-            .insert(findings)
-            .values({
-              restorationId,
-              photoId: photo.id,
-              number: (top?.n ?? 0) + 1,
-              shape: 'pin',
-              points: [{ x: 0.5, y: 0.5 }],
-              title: `Soak fault: ${input.faults}`.slice(0, 200),
-              kind: 'hazard',
-              severity: 'fault',
-              authorId: actorId,
-            })
-            .returning({ id: findings.id });
-          findingId = f!.id;
-          await tx
-            .insert(events)
-            .values({ restorationId, kind: 'finding-opened', actorId, findingId, photoId: photo.id });
+          const f = await soak.insertFinding({
+            restorationId,
+            photoId: photo.id,
+            number: (await soak.topFindingNumber(restorationId)) + 1,
+            shape: 'pin',
+            points: [{ x: 0.5, y: 0.5 }],
+            title: `Soak fault: ${input.faults}`.slice(0, 200),
+            kind: 'hazard',
+            severity: 'fault',
+            authorId: actorId,
+          });
+          findingId = f.id;
+          await recordEvent(tx, { restorationId, kind: 'finding-opened', actorId, findingId, photoId: photo.id });
         }
         const endedAt = new Date();
-        await tx
-          .update(soakSessions)
-          .set({
-            endedAt,
-            ambientC: input.ambientC ?? null,
-            chassisC: input.chassisC ?? null,
-            mainsCurrentText: input.mainsCurrent,
-            mainsCurrentAmps,
-            faults: input.faults,
-            actionTaken: input.actionTaken,
-            findingId,
-          })
-          .where(eq(soakSessions.id, running.id));
+        await soak.endSoak(running.id, {
+          endedAt,
+          ambientC: input.ambientC ?? null,
+          chassisC: input.chassisC ?? null,
+          mainsCurrentText: input.mainsCurrent,
+          mainsCurrentAmps,
+          faults: input.faults,
+          actionTaken: input.actionTaken,
+          findingId,
+        });
         const hours = (endedAt.getTime() - running.startedAt.getTime()) / HOUR_MS;
-        await tx.insert(events).values({
+        await recordEvent(tx, {
           restorationId,
           kind: 'soak-session',
           actorId,
