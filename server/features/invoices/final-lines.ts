@@ -1,10 +1,9 @@
-import { and, eq, isNotNull, isNull } from 'drizzle-orm';
 import type { WorkshopSettings } from '../../../shared/schemas/estimates';
 import type { InvoicePreview } from '../../../shared/schemas/invoices';
 import { totals, type PricedLine } from '../../../shared/money/totals';
 import type { Executor } from '../../db/client';
-import { invoices, labourEntries, parts } from '../../db/schema';
 import { taxRuleOf } from '../workshop/workshop-settings';
+import { invoicesRepo } from './invoices.repo';
 
 export interface DraftLine {
   description: string;
@@ -20,21 +19,9 @@ export async function finalLines(
   restorationId: number,
   settings: WorkshopSettings,
 ): Promise<{ lines: DraftLine[]; deducted: number }> {
-  const time = await db
-    .select({ minutes: labourEntries.minutes })
-    .from(labourEntries)
-    .where(
-      and(
-        eq(labourEntries.restorationId, restorationId),
-        eq(labourEntries.billable, true),
-        isNotNull(labourEntries.minutes),
-      ),
-    );
-  const fitted = await db
-    .select()
-    .from(parts)
-    .where(and(eq(parts.restorationId, restorationId), eq(parts.state, 'fitted'), isNotNull(parts.costMinor)))
-    .orderBy(parts.id);
+  const repo = invoicesRepo(db);
+  const time = await repo.billableMinutes(restorationId);
+  const fitted = await repo.fittedParts(restorationId);
   const minutes = time.reduce((a, e) => a + (e.minutes ?? 0), 0);
   const lines: DraftLine[] = [
     ...(minutes
@@ -53,10 +40,7 @@ export async function finalLines(
       priced: { kind: 'part' as const, cost: p.costMinor!, markupBasisPoints: settings.partsMarkupBasisPoints },
     })),
   ];
-  const deposits = await db
-    .select({ paid: invoices.paid })
-    .from(invoices)
-    .where(and(eq(invoices.restorationId, restorationId), eq(invoices.kind, 'deposit'), isNull(invoices.voidedAt)));
+  const deposits = await repo.depositsPaid(restorationId);
   return { lines, deducted: deposits.reduce((a, d) => a + d.paid, 0) };
 }
 

@@ -1,8 +1,7 @@
-import { and, asc, eq } from 'drizzle-orm';
 import type { Executor } from '../../db/client';
-import { invoiceLines, invoices, memberships, restorations, users } from '../../db/schema';
+import { invoicesRepo, type InvoiceRow } from './invoices.repo';
 
-export type InvoiceRow = typeof invoices.$inferSelect;
+export type { InvoiceRow };
 
 /** Everything an invoice or receipt PDF prints, read in one place for the download and the e-mail. */
 export interface InvoiceDocument {
@@ -19,34 +18,14 @@ export interface InvoiceDocument {
 export const referenceOf = (i: Pick<InvoiceRow, 'numberPrefix' | 'number'>) => `${i.numberPrefix}${i.number}`;
 
 export async function invoiceDocument(db: Executor, invoiceId: number): Promise<InvoiceDocument | null> {
-  const [row] = await db
-    .select({ i: invoices, by: users.name })
-    .from(invoices)
-    .leftJoin(users, eq(users.id, invoices.issuedById))
-    .where(eq(invoices.id, invoiceId));
+  const repo = invoicesRepo(db);
+  const row = await repo.withIssuer(invoiceId);
   if (!row) return null;
   const { i, by } = row;
-  const lines = await db
-    .select({ description: invoiceLines.description, net: invoiceLines.net, tax: invoiceLines.tax })
-    .from(invoiceLines)
-    .where(eq(invoiceLines.invoiceId, i.id))
-    .orderBy(asc(invoiceLines.position));
-  const [set] = await db
-    .select({ make: restorations.make, model: restorations.model, serial: restorations.serial })
-    .from(restorations)
-    .where(eq(restorations.id, i.restorationId));
-  const owners = await db
-    .select({ name: users.name, email: users.email })
-    .from(memberships)
-    .innerJoin(users, eq(users.id, memberships.userId))
-    .where(and(eq(memberships.restorationId, i.restorationId), eq(memberships.role, 'owner')))
-    .orderBy(users.name);
-  const [credited] = i.creditsInvoiceId
-    ? await db
-        .select({ numberPrefix: invoices.numberPrefix, number: invoices.number })
-        .from(invoices)
-        .where(eq(invoices.id, i.creditsInvoiceId))
-    : [];
+  const lines = await repo.printedLines(i.id);
+  const set = await repo.set(i.restorationId);
+  const owners = await repo.owners(i.restorationId);
+  const credited = i.creditsInvoiceId ? await repo.numberOf(i.creditsInvoiceId) : undefined;
   return {
     invoice: i,
     reference: referenceOf(i),

@@ -1,22 +1,21 @@
-import { and, asc, desc, eq, inArray, isNull, ne } from 'drizzle-orm';
 import type { DepositInput, Invoice, InvoicePreview } from '../../../shared/schemas/invoices';
 import { amountLeft, invoiceStatus } from '../../../shared/money/invoice-status';
 import { shareOf } from '../../../shared/money/totals';
 import type { AppDeps } from '../../app-deps';
 import { unitOfWork } from '../../db/unit-of-work';
-import { estimates, events, invoiceLines, invoices } from '../../db/schema';
 import { ConflictError, NotFoundError } from '../../http/errors';
+import { recordEvent } from '../events/record-event';
 import { lockRestoration } from '../restorations/lock-restoration';
 import { readWorkshopSettings } from '../workshop/workshop-settings';
 import { finalLines, previewOf } from './final-lines';
 import { referenceOf } from './invoice-document';
 import { mailInvoice } from './invoice-mail';
+import { invoicesRepo, type InvoiceLineRow, type InvoiceRow as Row } from './invoices.repo';
 import { issueInvoice } from './issue-invoice';
 
-type Row = typeof invoices.$inferSelect;
 type Deps = Pick<AppDeps, 'db' | 'mailer' | 'config'>;
 
-function present(i: Row, lines: (typeof invoiceLines.$inferSelect)[]): Invoice {
+function present(i: Row, lines: InvoiceLineRow[]): Invoice {
   const m = (amount: number) => ({ amount, currency: i.currency });
   const figures = { kind: i.kind, voided: i.voidedAt !== null, due: i.due, paid: i.paid, refunded: i.refunded };
   return {
@@ -47,23 +46,11 @@ function present(i: Row, lines: (typeof invoiceLines.$inferSelect)[]): Invoice {
  */
 export function invoicesService(deps: Deps) {
   const { db } = deps;
+  const repo = invoicesRepo(db);
   async function list(restorationId: number): Promise<Invoice[]> {
-    const rows = await db
-      .select()
-      .from(invoices)
-      .where(eq(invoices.restorationId, restorationId))
-      .orderBy(desc(invoices.number));
+    const rows = await repo.list(restorationId);
     if (!rows.length) return [];
-    const lines = await db
-      .select()
-      .from(invoiceLines)
-      .where(
-        inArray(
-          invoiceLines.invoiceId,
-          rows.map((r) => r.id),
-        ),
-      )
-      .orderBy(asc(invoiceLines.position));
+    const lines = await repo.linesOf(rows.map((r) => r.id));
     return rows.map((r) =>
       present(
         r,
@@ -76,11 +63,7 @@ export function invoicesService(deps: Deps) {
   return {
     list,
     async restorationOf(invoiceId: number) {
-      const [row] = await db
-        .select({ restorationId: invoices.restorationId })
-        .from(invoices)
-        .where(eq(invoices.id, invoiceId));
-      return row?.restorationId;
+      return repo.restorationOf(invoiceId);
     },
 
     /** A deposit request: an amount, or a share of the latest approved estimate's high figure (tax included, so no tax is added). */
@@ -92,12 +75,7 @@ export function invoicesService(deps: Deps) {
         let description = 'Deposit';
         if ('amount' in input) amount = input.amount;
         else {
-          const [approved] = await tx
-            .select()
-            .from(estimates)
-            .where(and(eq(estimates.restorationId, restorationId), eq(estimates.decision, 'approved')))
-            .orderBy(desc(estimates.version))
-            .limit(1);
+          const approved = await invoicesRepo(tx).latestApprovedEstimate(restorationId);
           if (!approved)
             throw new ConflictError(
               'No approved estimate to take a share of: ask for a fixed amount, or send an estimate first.',
@@ -128,10 +106,7 @@ export function invoicesService(deps: Deps) {
     async final(restorationId: number, userId: number) {
       const row = await unitOfWork(db, async (tx) => {
         await lockRestoration(tx, restorationId);
-        const [existing] = await tx
-          .select({ number: invoices.number, numberPrefix: invoices.numberPrefix })
-          .from(invoices)
-          .where(and(eq(invoices.restorationId, restorationId), eq(invoices.kind, 'final'), isNull(invoices.voidedAt)));
+        const existing = await invoicesRepo(tx).liveFinal(restorationId);
         if (existing)
           throw new ConflictError(
             `Invoice ${referenceOf(existing)} is already issued for this set: void it before issuing another.`,
@@ -157,22 +132,15 @@ export function invoicesService(deps: Deps) {
     /** Voids an issued invoice or deposit request: it stays as issued, marked void, and a credit note reverses it. */
     async void(invoiceId: number, reason: string, userId: number) {
       const { restorationId, creditId } = await unitOfWork(db, async (tx) => {
-        const [i] = await tx
-          .select()
-          .from(invoices)
-          .where(and(eq(invoices.id, invoiceId), ne(invoices.kind, 'credit-note')))
-          .for('update');
+        const rows = invoicesRepo(tx);
+        const i = await rows.lockVoidable(invoiceId);
         if (!i) throw new NotFoundError();
         if (i.voidedAt) throw new ConflictError(`Invoice ${referenceOf(i)} is already void.`);
         if (i.paid > 0)
           throw new ConflictError(`Invoice ${referenceOf(i)} has payments: refund them before voiding it.`);
-        const lines = await tx
-          .select()
-          .from(invoiceLines)
-          .where(eq(invoiceLines.invoiceId, i.id))
-          .orderBy(asc(invoiceLines.position));
-        await tx.update(invoices).set({ voidedAt: new Date(), voidReason: reason }).where(eq(invoices.id, i.id));
-        await tx.insert(events).values({
+        const lines = await rows.linesOf([i.id]);
+        await rows.markVoid(i.id, reason);
+        await recordEvent(tx, {
           restorationId: i.restorationId,
           kind: 'invoice-voided',
           actorId: userId,
