@@ -45,7 +45,7 @@ describe('bring-up', () => {
     const page = await newPage(ctx.browser, { width: 1280, height: 1000 });
     const messages = watchConsole(page);
     await signInAs(page, ctx.product.origin, 'mara@cobbold-lane.test');
-    await page.getByRole('link', { name: /Kestrel Wireless Co\. Wren AC\/DC/ }).click();
+    await page.getByRole('link', { name: /KW-3381/ }).click();
     await page.getByRole('link', { name: 'Bring-up' }).click();
     await page.getByRole('heading', { name: 'Pre-power checklist' }).waitFor();
     expect(await page.getByText(/Not signed off/).isVisible()).toBe(true);
