@@ -22,6 +22,8 @@ export async function startBenchServer() {
       ...process.env,
       GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl,
       AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
+      // As `npm start` runs the server (package.json): glibc's default arenas hold on to freed image buffers.
+      MALLOC_ARENA_MAX: process.env.MALLOC_ARENA_MAX ?? '2',
     },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
