@@ -168,6 +168,18 @@ describe('measurementVerdict refuses what cannot be', () => {
     );
   });
 
+  it('when an AC voltage is typed with a minus, then it is refused: an AC meter reads a magnitude', () => {
+    // An AC meter reads RMS, a magnitude with no sign (common practice, no source).
+    expect(() => measurementVerdict({ quantity: 'ac-voltage', expected: '6.3', reading: '-6.2 V' })).toThrow(
+      /^Reading: an AC voltage cannot be negative \(-6.2 V typed\)\. An AC meter shows the size/,
+    ); // Gridleak's own message
+    expect(() => measurementVerdict({ quantity: 'ac-voltage', expected: '-6.3', reading: '6.2 V' })).toThrow(
+      /^Expected value: must be above zero/,
+    );
+    // A DC voltage keeps its sign: a grid bias is negative (common practice, no source).
+    expect(measurementVerdict({ quantity: 'dc-voltage', expected: '-7', reading: '-7.2 V' }).verdict).toBe('within');
+  });
+
   it('when a bare OL has nothing to be judged against, then it asks for the range’s top', () => {
     expect(() => measurementVerdict({ quantity: 'resistance', reading: 'OL' })).toThrow(/^Reading: 'OL' is over range/); // Gridleak's own message
     expect(measurementVerdict({ quantity: 'resistance', reading: '> 20 M' })).toMatchObject({

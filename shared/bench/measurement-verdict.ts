@@ -244,7 +244,7 @@ export function measurementVerdict(typed: MeasurementInput): MeasurementVerdict 
   const rating = input.rating?.trim() ? read(input.rating, 'V', 'Rating') : null;
   if (kind.sign.reading === 'not-negative' && meter.value !== null && meter.value < 0)
     throw new BenchInputError(
-      `Reading: ${kind.noun} cannot be negative (${input.reading.trim()} typed). A meter shows a minus when its leads are reversed or not zeroed, or the part still holds a charge.`,
+      `Reading: ${kind.noun} cannot be negative (${input.reading.trim()} typed). ${kind.sign.minusCause ?? 'A meter shows a minus when its leads are reversed or not zeroed, or the part still holds a charge.'}`,
     );
   if (expected !== null && expected <= 0 && kind.sign.expected === 'above-zero')
     throw new BenchInputError('Expected value: must be above zero.');

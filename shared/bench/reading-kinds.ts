@@ -51,6 +51,8 @@ export type ReadingRule =
 export interface SignRule {
   reading: 'not-negative' | 'any';
   expected: 'above-zero' | 'any';
+  /** Why a minus was typed, when a reading may not have one; the usual causes when absent. */
+  minusCause?: string;
 }
 
 /** How the reading form reads for a kind: labels, examples from the Cobbold Lane bench, and the caution it needs. */
@@ -101,13 +103,13 @@ const manual = 'Expected (manual)';
 const chartVoltage = (
   label: string,
   noun: string,
-  expected: SignRule['expected'],
+  sign: SignRule,
   placeholders: { expected: string; reading: string },
 ): ReadingKind => ({
   label,
   noun,
   unit: 'V',
-  sign: { reading: 'any', expected },
+  sign,
   report: 'readings',
   rule: { type: 'band', meterLoading: true, usual: chartBand },
   form: {
@@ -206,11 +208,22 @@ export const readingKinds: Record<MeasuredQuantity, ReadingKind> = {
       live: false,
     },
   },
-  'dc-voltage': chartVoltage('DC voltage', 'a DC voltage', 'any', { expected: 'e.g. 255 V', reading: 'e.g. 263 V' }),
-  'ac-voltage': chartVoltage('AC voltage', 'an AC voltage', 'above-zero', {
-    expected: 'e.g. 6.3 V',
-    reading: 'e.g. 6.2 V',
-  }),
+  'dc-voltage': chartVoltage(
+    'DC voltage',
+    'a DC voltage',
+    { reading: 'any', expected: 'any' },
+    { expected: 'e.g. 255 V', reading: 'e.g. 263 V' },
+  ),
+  // An AC meter reads a magnitude (RMS): a minus sign is a slip of the keyboard.
+  'ac-voltage': chartVoltage(
+    'AC voltage',
+    'an AC voltage',
+    { ...positive, minusCause: 'An AC meter shows the size of the voltage (RMS), never a sign.' },
+    {
+      expected: 'e.g. 6.3 V',
+      reading: 'e.g. 6.2 V',
+    },
+  ),
   current: {
     label: 'Current',
     noun: 'a current',
