@@ -4,7 +4,7 @@ import type { VoltagePoint } from './voltage-points';
 /** One row of the voltage plot, in per cent of the expected value. */
 export interface PlotRow {
   label: string;
-  /** The marginal zone (1.5 × the band), which the bar spans; the band is drawn inside it. */
+  /** The marginal zone (1.5 × the band), which the bar spans; the band is drawn inside it. A limit's is its band. */
   zone: [number, number] | null;
   band: [number, number] | null;
   /** Where the reading's mark goes, held inside the axis; at the left edge when there is nothing to compare with. */
@@ -20,10 +20,19 @@ export function plotRows(points: readonly VoltagePoint[], limit: number): PlotRo
   return points.map((point) => {
     const d = point.deviationPct;
     const offScale = d === null ? null : d > limit ? 'high' : d < -limit ? 'low' : null;
+    // A limit passes everything on its side of the expected value, out to the axis's edge, with no marginal zone.
+    const side: [number, number] | null =
+      point.expected === null
+        ? null
+        : point.limit === 'maximum'
+          ? [-limit, 0]
+          : point.limit === 'minimum'
+            ? [0, limit]
+            : null;
     return {
       label: point.label,
-      band: point.bandPct,
-      zone: point.bandPct ? [point.bandPct[0] * MARGINAL_FACTOR, point.bandPct[1] * MARGINAL_FACTOR] : null,
+      band: side ?? point.bandPct,
+      zone: side ?? (point.bandPct ? [point.bandPct[0] * MARGINAL_FACTOR, point.bandPct[1] * MARGINAL_FACTOR] : null),
       x: d === null ? -limit : Math.max(-limit, Math.min(limit, d)),
       offScale,
       point,

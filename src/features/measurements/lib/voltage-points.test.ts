@@ -83,7 +83,7 @@ describe('the plot', () => {
     });
     expect(plotSummary(voltagePoints([...fivePoints(), overMax]))).toBe(
       'Voltage chart, 6 points: 4 within, 2 out. Out of tolerance: V5 pin 7 reads 320 V against 250 V ±10 %. ' +
-        'Over its limit: HT line reads 320 V against 250 V max.',
+        'Over its limit: HT line reads 320 V against a maximum of 250 V.',
     );
     const underMin = makeMeasurement(8, {
       location: 'V1 pin 6',
@@ -95,5 +95,33 @@ describe('the plot', () => {
     expect(plotSummary(voltagePoints([volts(1, 'V5 pin 9', '250 V', '255 V'), underMin]))).toBe(
       'Voltage chart, 2 points: 2 within. None out of tolerance or under its minimum.',
     );
+  });
+
+  it('draws a limit as everything on its side of the expected value, with no band or marginal zone about it', () => {
+    // A maximum passes any reading at or below it, a minimum any at or above it (common practice, no source).
+    const max = makeMeasurement(7, {
+      location: 'HT line',
+      quantity: 'dc-voltage',
+      expected: '250 V',
+      tolerance: 'max',
+      reading: '240 V',
+    });
+    const min = makeMeasurement(8, {
+      location: 'V1 pin 6',
+      quantity: 'dc-voltage',
+      expected: '80 V',
+      tolerance: 'min',
+      reading: '92 V',
+    });
+    const points = voltagePoints([max, min]);
+    expect(points.map((p) => [p.band, p.bandPct])).toEqual([
+      ['maximum', null],
+      ['minimum', null],
+    ]);
+    // Only the readings size the axis: 15 % above the minimum and 4 % below the maximum, so the ±10 % floor, widened.
+    expect(plotLimit(points)).toBe(20);
+    const [maxRow, minRow] = plotRows(points, 20);
+    expect(maxRow).toMatchObject({ band: [-20, 0], zone: [-20, 0] });
+    expect(minRow).toMatchObject({ band: [0, 20], zone: [0, 20] });
   });
 });

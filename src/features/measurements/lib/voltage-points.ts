@@ -40,8 +40,11 @@ export function groupOf(location: string): string {
   return /^([A-Za-z]{1,3}\d+[a-z]?)\b/.exec(location.trim())?.[1]?.toUpperCase() ?? location.trim();
 }
 
-function bandOf(m: Measurement): Pick<VoltagePoint, 'band' | 'bandPct'> {
+function bandOf(m: Measurement, limit: LimitKind): Pick<VoltagePoint, 'band' | 'bandPct'> {
   if (m.expected === null) return { band: '', bandPct: null };
+  // "max"/"min" typed as the tolerance: a limit, passed or failed, with no band about the expected value.
+  if (limit === 'maximum') return { band: 'maximum', bandPct: null };
+  if (limit === 'minimum') return { band: 'minimum', bandPct: null };
   let t: ReturnType<typeof parseTolerance> = DEFAULT_TOLERANCE;
   try {
     if (m.toleranceText.trim()) t = parseTolerance(m.toleranceText);
@@ -65,7 +68,8 @@ export function voltagePoints(measurements: readonly Measurement[]): VoltagePoin
     if (!seen || m.measuredAt >= seen.measuredAt) latest.set(key, m);
   }
   return [...latest.values()]
-    .map((m) => ({
+    .map((m) => ({ m, limit: limitOf(m.quantity, m.toleranceText) }))
+    .map(({ m, limit }) => ({
       id: m.id,
       location: m.location,
       group: groupOf(m.location),
@@ -75,11 +79,11 @@ export function voltagePoints(measurements: readonly Measurement[]): VoltagePoin
       readingText: m.readingText,
       expected: m.expected,
       reading: m.reading,
-      ...bandOf(m),
+      ...bandOf(m, limit),
       deviationPct: m.deviation === null ? null : m.deviation * 100,
       verdict: m.verdict,
       reason: m.verdictReason,
-      limit: limitOf(m.quantity, m.toleranceText),
+      limit,
     }))
     .sort(byLocation);
 }
@@ -107,6 +111,8 @@ export const voltsText = (v: number | null) => (v === null ? '—' : formatSigne
 /** One point in words, e.g. "V5 pin 7 reads 310 V against 255 V ±10 %". */
 export function describePoint(p: VoltagePoint): string {
   if (p.expected === null) return `${p.label} reads ${voltsText(p.reading)}, no expected value`;
+  if (p.limit === 'maximum' || p.limit === 'minimum')
+    return `${p.label} reads ${voltsText(p.reading)} against a ${p.limit} of ${voltsText(p.expected)}`;
   return `${p.label} reads ${voltsText(p.reading)} against ${voltsText(p.expected)} ${p.band}`;
 }
 
