@@ -17,25 +17,25 @@ export const paymentKeys = {
   history: (restorationId: number) => ['restorations', restorationId, 'events'] as const,
 };
 
-/** While a payment is being processed the lists are asked again every few seconds, until its event has arrived. */
-const pollEvery = (polling: boolean) => (polling ? 2500 : false);
+/** How often the lists are asked again while a payment is being processed (ms), or `false` when not waiting. */
+export type Polling = number | false;
 
-export const invoicesQueryOptions = (restorationId: number, polling = false) =>
+export const invoicesQueryOptions = (restorationId: number, polling: Polling = false) =>
   queryOptions({
     queryKey: paymentKeys.invoices(restorationId),
     queryFn: () => apiGet(`/restorations/${restorationId}/invoices`, z.array(invoiceSchema)),
-    refetchInterval: pollEvery(polling),
+    refetchInterval: polling,
   });
-export const useRestorationInvoices = (restorationId: number, polling = false) =>
+export const useRestorationInvoices = (restorationId: number, polling: Polling = false) =>
   useQuery(invoicesQueryOptions(restorationId, polling));
 
-export const paymentsQueryOptions = (restorationId: number, polling = false) =>
+export const paymentsQueryOptions = (restorationId: number, polling: Polling = false) =>
   queryOptions({
     queryKey: paymentKeys.payments(restorationId),
     queryFn: () => apiGet(`/restorations/${restorationId}/payments`, z.array(paymentSchema)),
-    refetchInterval: pollEvery(polling),
+    refetchInterval: polling,
   });
-export const usePayments = (restorationId: number, polling = false) =>
+export const usePayments = (restorationId: number, polling: Polling = false) =>
   useQuery(paymentsQueryOptions(restorationId, polling));
 
 /** Asks for a hosted checkout and goes there; the card is entered on the payment service's page, never here. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Invoice } from '../../../../shared/schemas/invoices';
 import type { Payment } from '../../../../shared/schemas/payments';
-import { returnState } from './payment-return';
+import { POLL_MS, pollingFor, returnState } from './payment-return';
 
 const gbp = (amount: number) => ({ amount, currency: 'GBP' });
 const invoice = (status: Invoice['status']) => ({ id: 4, status }) as Invoice;
@@ -41,5 +41,15 @@ describe('the way back from the checkout page', () => {
   it('when the owner cancelled, or came with no outcome, then it says cancelled, or nothing', () => {
     expect(returnState('cancelled', invoice('open'), [], null, false)).toBe('cancelled');
     expect(returnState(null, invoice('paid'), [], null, false)).toBeNull();
+  });
+});
+
+describe('asking again while a payment is processed', () => {
+  it('when back from the checkout page, then every few seconds, every half minute after the patience runs out, never once settled', () => {
+    expect(pollingFor(false, false, false)).toBe(false);
+    expect(pollingFor(true, false, false)).toBe(POLL_MS.eager);
+    expect(pollingFor(true, false, true)).toBe(POLL_MS.patient);
+    expect(pollingFor(true, true, false)).toBe(false);
+    expect(pollingFor(true, true, true)).toBe(false);
   });
 });

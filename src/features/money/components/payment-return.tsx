@@ -4,8 +4,10 @@ import type { Payment } from '../../../../shared/schemas/payments';
 
 export type ReturnState = 'processing' | 'received' | 'failed' | 'cancelled' | 'slow';
 
-/** How long the page keeps asking before it says the confirmation is taking a while. */
+/** How long the page asks every few seconds before it says the confirmation is taking a while. */
 const PATIENCE_MS = 120_000;
+/** How often the lists are asked again: every few seconds at first, then every half minute until the answer comes. */
+export const POLL_MS = { eager: 2_500, patient: 30_000 };
 
 /**
  * Back from the checkout page: the redirect proves nothing, so the page says "processing" until the payment
@@ -26,6 +28,17 @@ export function returnState(
   return waitedTooLong ? 'slow' : 'processing';
 }
 
+/**
+ * How often to ask again: not at all unless the owner is back from the checkout page, and never again once the
+ * payment is settled (received or failed), so a page left open does not poll for ever.
+ */
+export function pollingFor(waiting: boolean, settled: boolean, waitedTooLong: boolean): number | false {
+  if (!waiting || settled) return false;
+  return waitedTooLong ? POLL_MS.patient : POLL_MS.eager;
+}
+
+export const isSettled = (state: ReturnState | null) => state === 'received' || state === 'failed';
+
 export function useWaitedTooLong(active: boolean) {
   const [tooLong, setTooLong] = useState(false);
   useEffect(() => {
@@ -42,7 +55,7 @@ const words: Record<ReturnState, { text: string; tone: string; alert?: boolean }
     tone: 'border-glow bg-panel',
   },
   slow: {
-    text: 'The payment is still being confirmed. Nothing more to do here; look again later.',
+    text: 'The payment is still being confirmed. Nothing more to do here: this page keeps checking every half minute.',
     tone: 'border-glow bg-panel',
   },
   received: { text: 'Payment received. Thank you.', tone: 'border-ok bg-panel' },

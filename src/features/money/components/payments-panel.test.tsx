@@ -82,6 +82,22 @@ describe('PaymentsPanel', () => {
     expect(screen.queryByRole('button', { name: /^Pay/ })).not.toBeInTheDocument();
   });
 
+  it('when the payment is confirmed while the owner waits, then it says received and the lists are not asked again', async () => {
+    let confirmed = false;
+    const api = fakeApi((c) => {
+      if (c.path.endsWith('/invoices'))
+        return ok([confirmed ? deposit({ paid: gbp(5000), left: gbp(0), status: 'paid' }) : deposit()]);
+      return ok(confirmed ? [cardPayment] : []);
+    });
+    renderPanel('owner', '/home?set=7&payment=processing&invoice=4&session=cs_test_a');
+    expect(await screen.findByText(/Payment processing/)).toBeInTheDocument();
+    confirmed = true; // the payment service's event arrives; the next poll (2.5 s) finds it
+    expect(await screen.findByText('Payment received. Thank you.', undefined, { timeout: 5_000 })).toBeInTheDocument();
+    const asked = api.calls.length;
+    await new Promise((r) => setTimeout(r, 3_000)); // longer than a poll's interval
+    expect(api.calls.length).toBe(asked);
+  }, 15_000);
+
   it('when a card payment was received, then the technician sees its line with a Refund button and the owner sees it without', async () => {
     fakeApi((c) =>
       c.path.endsWith('/invoices')

@@ -1,3 +1,4 @@
+import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router';
 import { can, type Role } from '../../../../shared/permissions';
 import { invoiceKindLabels } from '../../../../shared/schemas/invoices';
@@ -7,11 +8,12 @@ import { ManualPaymentForm } from './manual-payment-form';
 import { moneyText } from './money-text';
 import { PayButton } from './pay-button';
 import { PaymentLines } from './payment-lines';
-import { PaymentReturnNote, returnState, useWaitedTooLong } from './payment-return';
+import { isSettled, PaymentReturnNote, pollingFor, returnState, useWaitedTooLong } from './payment-return';
 
 /**
  * What is owed and what was paid on one set: open deposit requests and invoices with a Pay button, and the
- * payment lines. Back from the checkout page it says "processing" and asks again until the payment is confirmed.
+ * payment lines. Back from the checkout page it says "processing" and asks again until the payment is confirmed
+ * (every few seconds, then every half minute), and not after.
  */
 export function PaymentsPanel({ restorationId, role }: { restorationId: number; role: Role }) {
   const [params] = useSearchParams();
@@ -19,19 +21,27 @@ export function PaymentsPanel({ restorationId, role }: { restorationId: number; 
   const returnedFor = Number(params.get('invoice')) || undefined;
   const waiting = outcome === 'processing';
   const tooLong = useWaitedTooLong(waiting);
-  const invoices = useRestorationInvoices(restorationId, waiting && !tooLong);
-  const payments = usePayments(restorationId, waiting && !tooLong);
+  // Settled once this checkout's payment is recorded: from then on the lists are not asked again.
+  const [settled, setSettled] = useState(false);
+  const polling = pollingFor(waiting, settled, tooLong);
+  const invoices = useRestorationInvoices(restorationId, polling);
+  const payments = usePayments(restorationId, polling);
+  const state =
+    invoices.data && payments.data
+      ? returnState(
+          outcome,
+          invoices.data.find((i) => i.id === returnedFor),
+          payments.data,
+          params.get('session'),
+          tooLong,
+        )
+      : null;
+  useEffect(() => {
+    if (isSettled(state)) setSettled(true);
+  }, [state]);
   if (invoices.isPending || payments.isPending) return <Loading label="Fetching what is owed and paid…" />;
   if (invoices.isError) return <ErrorState error={invoices.error} onRetry={() => invoices.refetch()} />;
   if (payments.isError) return <ErrorState error={payments.error} onRetry={() => payments.refetch()} />;
-  const state = returnState(
-    outcome,
-    invoices.data.find((i) => i.id === returnedFor),
-    payments.data,
-    params.get('session'),
-    tooLong,
-  );
-  // Once confirmed, the lists stop being asked again (the query options above follow `waiting`).
   const open = invoices.data.filter((i) => i.status === 'open' && i.left.amount > 0);
   const refunded = invoices.data.filter((i) => i.status === 'refunded');
   const paying = state === 'processing' || state === 'slow';
