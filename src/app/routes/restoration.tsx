@@ -9,6 +9,7 @@ import { useUpdateRestoration } from '../../features/restorations/api/update-res
 import { RestorationForm } from '../../features/restorations/components/restoration-form';
 import { StagePicker } from '../../features/restorations/components/stage-picker';
 import { useRestorationContext } from '../restoration-context';
+import { Caution, CautionLead } from '../../components/caution';
 
 export function RestorationRoute() {
   const r = useRestorationContext();
@@ -28,11 +29,13 @@ export function RestorationRoute() {
   return (
     <div className="space-y-4">
       {r.liveChassis && (
-        <p role="note" className="rounded-lg border-l-4 border-danger bg-danger-soft px-4 py-3">
-          <strong>Live chassis.</strong> The chassis may sit at mains potential: work through an isolation transformer,
-          keep one hand away, and refit insulating knobs and covers before hand-back. Follow local electrical codes and
-          licensed practice.
-        </p>
+        <Caution className="px-4 py-3">
+          <p>
+            <CautionLead>Live chassis.</CautionLead> The chassis may sit at mains potential: work through an isolation
+            transformer, keep one hand away, and refit insulating knobs and covers before hand-back. Follow local
+            electrical codes and licensed practice.
+          </p>
+        </Caution>
       )}
       <ReportPanel restorationId={r.id} role={r.role} />
       {canEdit && (

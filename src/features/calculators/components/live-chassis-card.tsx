@@ -7,6 +7,7 @@ import { ResultPanel } from './result-panel';
 import { ResultNote } from './result-line';
 import { SafetyNote } from './safety-note';
 import { TextInput } from './text-input';
+import { Caution, CautionLead } from '../../../components/caution';
 
 /** liveChassisLikely: whether a set's valve line-up points to series heaters across the mains. */
 export function LiveChassisCard() {
@@ -31,9 +32,9 @@ export function LiveChassisCard() {
       <ResultPanel outcome={outcome} waiting="Type the set’s valves, for example UCH81 UF89 UABC80 UL84 UY85.">
         {(r) =>
           r.likely ? (
-            <div className="space-y-1 rounded-md border-2 border-danger bg-danger-soft px-3 py-2">
-              <p className="text-lg font-bold text-danger">
-                <span aria-hidden="true">⚠ </span>Live chassis likely
+            <Caution look="box" className="space-y-1">
+              <p>
+                <CautionLead className="text-lg">Live chassis likely</CautionLead>
               </p>
               <ul className="list-disc space-y-0.5 pl-5 text-sm">
                 {r.reasons.map((reason) => (
@@ -47,7 +48,7 @@ export function LiveChassisCard() {
                 Treat the chassis, and anything screwed to it, as connected to the mains. Work on it only through an
                 isolation transformer.
               </p>
-            </div>
+            </Caution>
           ) : (
             <>
               <p className="font-semibold">

@@ -1,3 +1,4 @@
+import { Caution, CautionLead } from '../../../components/caution';
 /** The standing reminder on the owner's page; a live-chassis set gets its own note beside it (`LiveChassisNote`). */
 export function SafetyReminder() {
   return (
@@ -25,10 +26,11 @@ export function SafetyReminder() {
 /** For sets whose chassis can be connected straight to the mains (many AC/DC sets). */
 export function LiveChassisNote() {
   return (
-    <p className="rounded-xl border border-danger/40 bg-danger-soft p-4 text-sm">
-      <strong className="text-danger">This set has a live chassis.</strong> Its metal frame can be connected to the
-      mains, so use it only with its back and every knob in place, and ask a competent repairer before connecting
-      anything else to it.
-    </p>
+    <Caution look="box" className="text-sm">
+      <p>
+        <CautionLead>This set has a live chassis.</CautionLead> Its metal frame can be connected to the mains, so use it
+        only with its back and every knob in place, and ask a competent repairer before connecting anything else to it.
+      </p>
+    </Caution>
   );
 }

@@ -1,19 +1,22 @@
 import type { ReportPreview as Preview } from '../../../../shared/schemas/safety';
 import { formatDateTime as when } from '../../../lib/format';
+import { Caution, CautionLead } from '../../../components/caution';
 
 /** The e-mail as the owner will receive it, with the warnings first when sending now would be premature. */
 export function ReportPreview({ preview }: { preview: Preview }) {
   return (
     <div className="space-y-3" data-testid="report-preview">
       {preview.warnings.length > 0 && (
-        <div role="note" className="rounded-lg border-l-4 border-danger bg-danger-soft px-3 py-2 text-sm">
-          <p className="font-bold text-danger">Sending now may be premature:</p>
+        <Caution className="text-sm">
+          <p>
+            <CautionLead>Sending now may be premature:</CautionLead>
+          </p>
           <ul className="list-disc pl-5">
             {preview.warnings.map((w) => (
               <li key={w.code}>{w.message}</li>
             ))}
           </ul>
-        </div>
+        </Caution>
       )}
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
         <dt className="font-semibold">To</dt>
