@@ -2,7 +2,7 @@ import { useEffect, useRef } from 'react';
 import { Link, useNavigate, useParams } from 'react-router';
 import { useConfirmEmail } from '../../features/auth/api/confirm-email';
 import { AuthPanel } from '../../features/auth/components/auth-panel';
-import { FormAlert } from '../../features/auth/components/form-alert';
+import { FormAlert } from '../../components/form-alert';
 
 export function ConfirmEmailRoute() {
   const { token = '' } = useParams();

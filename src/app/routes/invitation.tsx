@@ -6,11 +6,11 @@ import { ErrorState, Loading } from '../../components/states';
 import { useMe } from '../../features/auth/api/get-me';
 import { useSignOut } from '../../features/auth/api/sign-out';
 import { AuthPanel } from '../../features/auth/components/auth-panel';
-import { FormAlert } from '../../features/auth/components/form-alert';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { SignUpForm } from '../../features/auth/components/sign-up-form';
 import { useAcceptInvitation } from '../../features/invitations/api/accept-invitation';
 import { useInvitation } from '../../features/invitations/api/get-invitation';
+import { FormAlert } from '../../components/form-alert';
 
 /** The link from an invitation e-mail: create an account or sign in, then join. */
 export function InvitationRoute() {

@@ -10,6 +10,7 @@ import { RestorationForm } from '../../features/restorations/components/restorat
 import { StagePicker } from '../../features/restorations/components/stage-picker';
 import { useRestorationContext } from '../restoration-context';
 import { Caution, CautionLead } from '../../components/caution';
+import { FormAlert } from '../../components/form-alert';
 
 export function RestorationRoute() {
   const r = useRestorationContext();
@@ -41,11 +42,7 @@ export function RestorationRoute() {
       {canEdit && (
         <StagePicker stage={r.stage} disabled={update.isPending} onChange={(stage) => update.mutate({ stage })} />
       )}
-      {update.error && !editing && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 font-semibold text-danger">
-          {update.error.message}
-        </p>
-      )}
+      {update.error && !editing && <FormAlert message={update.error.message} />}
       {editing ? (
         <div className="rounded-xl border border-rule bg-panel p-5">
           <RestorationForm

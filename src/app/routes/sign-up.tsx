@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { Link, useNavigate } from 'react-router';
 import { AuthPanel } from '../../features/auth/components/auth-panel';
-import { FormAlert } from '../../features/auth/components/form-alert';
 import { SignUpForm } from '../../features/auth/components/sign-up-form';
+import { FormAlert } from '../../components/form-alert';
 
 export function SignUpRoute() {
   const navigate = useNavigate();

@@ -5,7 +5,7 @@ import { PASSWORD_MIN, passwordResetConfirmSchema, type User } from '../../../..
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useConfirmPasswordReset } from '../api/password-reset';
-import { FormAlert } from './form-alert';
+import { FormAlert } from '../../../components/form-alert';
 
 const schema = passwordResetConfirmSchema.pick({ password: true });
 type Values = z.input<typeof schema>;

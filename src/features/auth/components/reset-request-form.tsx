@@ -5,7 +5,7 @@ import { passwordResetRequestSchema } from '../../../../shared/schemas/auth';
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useRequestPasswordReset } from '../api/password-reset';
-import { FormAlert } from './form-alert';
+import { FormAlert } from '../../../components/form-alert';
 
 type Values = z.input<typeof passwordResetRequestSchema>;
 

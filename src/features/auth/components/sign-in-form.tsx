@@ -5,7 +5,7 @@ import { signInSchema, type User } from '../../../../shared/schemas/auth';
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useSignIn } from '../api/sign-in';
-import { FormAlert } from './form-alert';
+import { FormAlert } from '../../../components/form-alert';
 
 type In = z.input<typeof signInSchema>;
 type Out = z.output<typeof signInSchema>;

@@ -5,7 +5,7 @@ import { PASSWORD_MIN, signUpSchema, type SignUpResult } from '../../../../share
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useSignUp } from '../api/sign-up';
-import { FormAlert } from './form-alert';
+import { FormAlert } from '../../../components/form-alert';
 
 type In = z.input<typeof signUpSchema>;
 type Out = z.output<typeof signUpSchema>;

@@ -14,6 +14,7 @@ import { FindingHistory } from './finding-history';
 import { OpenQuestionBadge, QuestionToggle, ShareWithOwner } from './finding-sharing';
 import { SeverityMark, StatusMark } from '../../../components/status-mark';
 import { OnTheDiagramLink } from '../../../components/on-the-diagram-link';
+import { FormAlert } from '../../../components/form-alert';
 
 export interface FindingPanelProps {
   finding: Finding;
@@ -94,11 +95,7 @@ export function FindingPanel({ finding, role, meId, restorationId, members, onDe
 
       {needsCaution(shown) && <FindingCaution audience={workshop ? 'workshop' : 'owner'} />}
 
-      {error && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
-          {error.message}
-        </p>
-      )}
+      {error && <FormAlert small message={error.message} />}
 
       {can(role, 'findings.share') && <ShareWithOwner checked={shown.ownerVisible} onSave={save} />}
 

@@ -7,6 +7,7 @@ import { useThreadMutations } from '../api/write-comment';
 import { CommentCompose } from './comment-compose';
 import { CommentItem } from './comment-item';
 import type { FindingMember } from './finding-format';
+import { FormAlert } from '../../../components/form-alert';
 
 export interface ThreadProps {
   finding: Finding;
@@ -53,11 +54,7 @@ export function Thread({ finding, role, meId, members }: ThreadProps) {
           ))}
         </ol>
       )}
-      {actionError && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
-          {actionError.message}
-        </p>
-      )}
+      {actionError && <FormAlert small message={actionError.message} />}
       {can(role, 'comments.create', { ownerVisible: finding.ownerVisible }) && (
         <CommentCompose
           role={role}

@@ -7,6 +7,7 @@ import { Field, inputClass } from '../../../components/field';
 import { newFindingDefaults, newFindingSchema, type NewFindingValues } from '../lib/new-finding';
 import { toolLabels } from '../lib/tool-labels';
 import { LabelledOptions } from '../../../components/labelled-options';
+import { FormAlert } from '../../../components/form-alert';
 
 /** Asks for the words of a mark just drawn; the mark waits on the photo, dashed, until it is saved or cancelled. */
 export function NewFindingForm({
@@ -87,11 +88,7 @@ export function NewFindingForm({
           )}
         </Field>
       </div>
-      {error && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 font-semibold text-danger">
-          {error}
-        </p>
-      )}
+      {error && <FormAlert message={error} />}
       {/* In the phone's bottom sheet the buttons stay in reach while the fields scroll under them. */}
       <div className="flex flex-wrap gap-2 max-lg:sticky max-lg:-bottom-4 max-lg:-mx-4 max-lg:border-t max-lg:border-rule max-lg:bg-panel max-lg:px-4 max-lg:py-2">
         <button type="submit" className={buttonClass('primary')} disabled={busy}>

@@ -9,6 +9,7 @@ import { LiveReadingsNote } from './live-readings-note';
 import { MeterLoadingFields } from './meter-loading-fields';
 import { VerdictPreviewPanel } from './verdict-preview-panel';
 import { FindingOptions, type FindingChoice } from '../../../components/finding-options';
+import { FormAlert } from '../../../components/form-alert';
 
 const valueInput = `${inputClass} font-mono`;
 const typed = { autoComplete: 'off', autoCorrect: 'off', spellCheck: false } as const;
@@ -159,11 +160,7 @@ export function MeasurementForm({
         </p>
       </div>
       {hints.live && <LiveReadingsNote />}
-      {serverMessage && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
-          Not saved: {serverMessage}
-        </p>
-      )}
+      {serverMessage && <FormAlert small message={`Not saved: ${serverMessage}`} />}
       {saved && (
         <p role="status" className="text-sm">
           Saved. The verdict shown in the list is the one stored.

@@ -5,6 +5,7 @@ import { useLineUpEditor } from '../hooks/use-line-up-editor';
 import { HeaterSummaryLine } from './heater-summary-line';
 import { LiveChassisCaution } from './live-chassis-caution';
 import { ValveDecoded } from './valve-decoded';
+import { FormAlert } from '../../../components/form-alert';
 
 const typed = { autoComplete: 'off', autoCorrect: 'off', spellCheck: false } as const;
 
@@ -88,11 +89,7 @@ export function ValveLineUpEditor({
         })}
       </ol>
       <HeaterSummaryLine types={editor.rows.map((r) => r.type)} />
-      {editor.serverMessage && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
-          Not saved: {editor.serverMessage}
-        </p>
-      )}
+      {editor.serverMessage && <FormAlert small message={`Not saved: ${editor.serverMessage}`} />}
       <div className="flex flex-wrap gap-2">
         <button type="button" className={buttonClass('quiet')} onClick={editor.add}>
           Add valve

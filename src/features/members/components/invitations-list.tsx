@@ -1,8 +1,8 @@
 import { roleLabels } from '../../../../shared/permissions';
 import type { Invitation } from '../../../../shared/schemas/members';
 import { useResendInvitation, useRevokeInvitation } from '../api/manage-members';
-import { FormAlertInline } from './form-alert-inline';
 import { formatMediumDate } from '../../../lib/format';
+import { FormAlert } from '../../../components/form-alert';
 
 export function InvitationsList({ restorationId, invitations }: { restorationId: number; invitations: Invitation[] }) {
   const resend = useResendInvitation(restorationId);
@@ -43,7 +43,7 @@ export function InvitationsList({ restorationId, invitations }: { restorationId:
           Sent again with a new link.
         </p>
       )}
-      <FormAlertInline message={(resend.error ?? revoke.error)?.message} />
+      <FormAlert small className="mt-2" message={(resend.error ?? revoke.error)?.message} />
     </div>
   );
 }

@@ -5,7 +5,7 @@ import { invitationInputSchema, type InvitationInput } from '../../../../shared/
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { useInvite } from '../api/manage-members';
-import { FormAlertInline } from './form-alert-inline';
+import { FormAlert } from '../../../components/form-alert';
 
 const roleHints = {
   technician: 'does the work; full access',
@@ -44,7 +44,7 @@ export function InviteForm({ restorationId }: { restorationId: number }) {
           )}
         </Field>
       </div>
-      <FormAlertInline message={invite.error?.message} />
+      <FormAlert small className="mt-2" message={invite.error?.message} />
       {invite.isSuccess && (
         <p role="status" className="text-sm">
           Invitation sent. The link works once, for seven days.

@@ -1,9 +1,9 @@
 import { roleLabels, roles, type Role } from '../../../../shared/permissions';
 import type { Member } from '../../../../shared/schemas/members';
 import { useConfirm } from '../../../components/use-confirm';
-import { FormAlertInline } from './form-alert-inline';
 import { useChangeRole, useRemoveMember } from '../api/manage-members';
 import { LabelledOptions } from '../../../components/labelled-options';
+import { FormAlert } from '../../../components/form-alert';
 
 export function MembersList({
   restorationId,
@@ -67,7 +67,7 @@ export function MembersList({
           </li>
         ))}
       </ul>
-      <FormAlertInline message={error?.message} />
+      <FormAlert small className="mt-2" message={error?.message} />
       {dialog}
     </div>
   );

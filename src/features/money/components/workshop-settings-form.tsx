@@ -8,6 +8,7 @@ import { useSaveWorkshopSettings } from '../api/workshop-settings';
 import { moneyText } from './money-text';
 import { settingsFormSchema, toFormValues, toSettings, type SettingsFormValues } from './settings-form-values';
 import { LabelledOptions } from '../../../components/labelled-options';
+import { FormAlert } from '../../../components/form-alert';
 
 /** Where each rounding rule comes from, stated beside the choice. */
 const roundingSources: Record<(typeof taxRoundings)[number], string> = {
@@ -111,11 +112,7 @@ export function WorkshopSettingsForm({ settings }: { settings: WorkshopSettings 
           owner has approved the estimate
         </label>
       </fieldset>
-      {save.isError && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 font-semibold text-danger">
-          {save.error.message}
-        </p>
-      )}
+      {save.isError && <FormAlert message={save.error.message} />}
       {save.isSuccess && !isDirty && (
         <p role="status">Saved. New estimates and invoices use these settings; those already written keep theirs.</p>
       )}

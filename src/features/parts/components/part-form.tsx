@@ -18,6 +18,7 @@ import { RecapCaution } from './recap-caution';
 import { SameReferencePart } from './same-reference-part';
 import { WarningsPreview } from './warnings-preview';
 import { LabelledOptions } from '../../../components/labelled-options';
+import { FormAlert } from '../../../components/form-alert';
 
 export interface PartFormProps {
   restorationId: number;
@@ -168,11 +169,7 @@ export function PartForm({ restorationId, part, findings, onDone, onCancel }: Pa
           )}
         </Field>
       )}
-      {serverMessage && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
-          Not saved: {serverMessage}
-        </p>
-      )}
+      {serverMessage && <FormAlert small message={`Not saved: ${serverMessage}`} />}
       {saved && (
         <p role="status" className="text-sm">
           Saved. The ledger shows the line with the checks stored for it.

@@ -16,6 +16,7 @@ import { CaptionForm } from './caption-form';
 import { DeletePhoto } from './delete-photo';
 import { ShareSwitch } from './share-switch';
 import { LabelledOptions } from '../../../components/labelled-options';
+import { FormAlert } from '../../../components/form-alert';
 
 /** A technician's controls for one photo. Changes show at once and are put back if the server refuses them. */
 export function PhotoEditPanel({
@@ -68,11 +69,7 @@ export function PhotoEditPanel({
       <p role="status" className="min-h-6 text-sm text-ink-soft">
         {update.isPending ? 'Saving…' : update.isSuccess ? 'Saved.' : ''}
       </p>
-      {update.isError && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
-          That change was not saved: {update.error.message}
-        </p>
-      )}
+      {update.isError && <FormAlert small message={`That change was not saved: ${update.error.message}`} />}
       {canDownload && photo.urls.original && (
         <div className="space-y-1">
           <a href={photo.urls.original} download className={buttonClass('quiet', 'w-full')}>

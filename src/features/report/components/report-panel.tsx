@@ -6,6 +6,7 @@ import { reportPdfHref } from '../api/get-report-pdf';
 import { useReportPreview } from '../api/get-report-preview';
 import { useSendReport } from '../api/send-report';
 import { ReportPreview } from './report-preview';
+import { FormAlert } from '../../../components/form-alert';
 
 export interface ReportPanelProps {
   restorationId: number;
@@ -81,11 +82,7 @@ export function ReportPanel({ restorationId, role }: ReportPanelProps) {
           Sent to {send.data.sentTo.join(', ')}.
         </p>
       )}
-      {send.isError && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
-          Not sent: {send.error.message}
-        </p>
-      )}
+      {send.isError && <FormAlert small message={`Not sent: ${send.error.message}`} />}
     </section>
   );
 }

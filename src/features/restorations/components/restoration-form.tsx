@@ -11,6 +11,7 @@ import {
 import { buttonClass } from '../../../components/button';
 import { Field, inputClass } from '../../../components/field';
 import { LabelledOptions } from '../../../components/labelled-options';
+import { FormAlert } from '../../../components/form-alert';
 
 type FormInput = z.input<typeof restorationInputSchema>;
 type FormOutput = z.output<typeof restorationInputSchema>;
@@ -139,11 +140,7 @@ export function RestorationForm({
       >
         {(a) => <textarea {...a} {...register('careNotes')} rows={3} className={inputClass} />}
       </Field>
-      {serverError && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 font-semibold text-danger">
-          {serverError}
-        </p>
-      )}
+      {serverError && <FormAlert message={serverError} />}
       <button type="submit" className={buttonClass('primary')} disabled={submitting}>
         {submitting ? 'Saving…' : submitLabel}
       </button>

@@ -8,6 +8,7 @@ import { Field, inputClass } from '../../../components/field';
 import { useRecordSafetyTest } from '../api/record-safety-test';
 import { LeadResistanceHelper } from './lead-resistance-helper';
 import { LabelledOptions } from '../../../components/labelled-options';
+import { FormAlert } from '../../../components/form-alert';
 
 type Values = z.input<typeof safetyTestInputSchema>;
 type Output = z.output<typeof safetyTestInputSchema>;
@@ -200,11 +201,7 @@ export function SafetyTestForm({
       <Field label="Notes (optional)" error={errorOf('notes')}>
         {(a) => <textarea {...a} {...register('notes')} rows={2} className={inputClass} />}
       </Field>
-      {serverMessage && !serverField && (
-        <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
-          Not saved: {serverMessage}
-        </p>
-      )}
+      {serverMessage && !serverField && <FormAlert small message={`Not saved: ${serverMessage}`} />}
       <button type="submit" className={buttonClass()} disabled={record.isPending}>
         {record.isPending ? 'Judging…' : 'Record the test'}
       </button>

@@ -10,6 +10,7 @@ import { SoakCaution } from './safety-test-caution';
 import { SoakPlot } from './soak-plot';
 import { SoakTimer } from './soak-timer';
 import { formatDateTime as when } from '../../../lib/format';
+import { FormAlert } from '../../../components/form-alert';
 
 const blank = { ambientC: '', chassisC: '', mainsCurrent: '', faults: '', actionTaken: '' };
 
@@ -102,11 +103,7 @@ export function SoakPanel({ restorationId, canRecord }: { restorationId: number;
                   />
                 )}
               </Field>
-              {stop.isError && (
-                <p role="alert" className="rounded-lg bg-danger-soft px-3 py-2 text-sm font-semibold text-danger">
-                  Not stopped: {stop.error.message}
-                </p>
-              )}
+              {stop.isError && <FormAlert small message={`Not stopped: ${stop.error.message}`} />}
               <button type="submit" className={buttonClass()} disabled={stop.isPending}>
                 {stop.isPending ? 'Stopping…' : 'Stop the run'}
               </button>
