@@ -11,8 +11,27 @@ import { createTestDatabase } from './test-database';
 export async function startProduct() {
   const database = await createTestDatabase();
   await database.pool.end();
+  // A port taken by something else (Node's EADDRINUSE, PostgreSQL's "Address already in use") means another draw of
+  // ports, not a failed run.
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await startOn(database);
+    } catch (err) {
+      if (attempt >= 3 || !/EADDRINUSE|address already in use/i.test(String(err))) {
+        await database.drop();
+        throw err;
+      }
+    }
+  }
+}
+
+/**
+ * The stand-ins and the app on five ports from a random base (base + 0 … + 4: database, storage, mail, app,
+ * payments), drawn below Linux's ephemeral range (32768 and up), where outgoing connections take their local ports.
+ */
+async function startOn(database: Awaited<ReturnType<typeof createTestDatabase>>) {
   const dataDir = mkdtempSync(path.join(os.tmpdir(), 'gridleak-e2e-'));
-  const portBase = 41000 + Math.floor(Math.random() * 8000);
+  const portBase = 20000 + Math.floor(Math.random() * 12000);
   const port = portBase + 3;
   const origin = `http://localhost:${port}`;
   const child: ChildProcess = spawn('node_modules/.bin/tsx', ['server/main.ts'], {
@@ -32,7 +51,11 @@ export async function startProduct() {
   child.stderr?.on('data', (d) => (output += d));
   await new Promise<void>((resolve, reject) => {
     const timer = setTimeout(() => reject(new Error(`The product did not start in time:\n${output}`)), 150_000);
-    child.once('exit', (code) => reject(new Error(`The product exited (${code}):\n${output}`)));
+    child.once('exit', (code) => {
+      clearTimeout(timer);
+      rmSync(dataDir, { recursive: true, force: true });
+      reject(new Error(`The product exited (${code}):\n${output}`));
+    });
     child.stdout?.on('data', () => {
       if (output.includes('Gridleak is running')) {
         clearTimeout(timer);
