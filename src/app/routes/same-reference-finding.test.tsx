@@ -69,11 +69,29 @@ describe('a second finding for the same reference', () => {
     // A note, not a refusal: the reference is saved all the same.
     await user.keyboard('{Enter}');
     await vi.waitFor(() => expect(api.calls.find((c) => c.method === 'PATCH')?.body).toEqual({ componentRef: 'c27' }));
+    // Saved on purpose (a part with two faults): the notice gives way to a quiet line that still links to the other.
+    const quiet = await screen.findByRole('link', { name: 'finding #3, “Leaky coupling capacitor”' });
+    expect(quiet.closest('p')).toHaveTextContent('Also on C27: finding #3, “Leaky coupling capacitor”');
+    expect(screen.queryByRole('group', { name: /already has a finding/ })).not.toBeInTheDocument();
     // The finding's own reference is never pointed out as a duplicate of itself.
     await user.clear(field);
     await user.type(field, 'R20');
     await vi.waitFor(() =>
       expect(screen.queryByRole('group', { name: /already has a finding/ })).not.toBeInTheDocument(),
     );
+  });
+
+  it('when a finding is opened whose reference another finding shares, then it names the other quietly, with no notice', async () => {
+    const first = makeFinding(40, { number: 3, componentRef: 'C27', title: 'Leaky coupling capacitor', photoId: 11 });
+    const second = makeFinding(52, { number: 9, componentRef: 'c27', title: 'Cracked body' });
+    fakeApi(({ path }) => {
+      if (path === '/restorations/7/findings') return ok([first, second]);
+      if (path === `/photos/${second.photoId}/findings`) return ok([second]);
+      return undefined;
+    });
+    renderWithQueries(<FindingPanel finding={second} role="technician" meId={1} restorationId={7} members={members} />);
+    const link = await screen.findByRole('link', { name: 'finding #3, “Leaky coupling capacitor”' });
+    expect(link).toHaveAttribute('href', '/restorations/7/photos/11/findings/40');
+    expect(screen.queryByRole('group', { name: /already has a finding/ })).not.toBeInTheDocument();
   });
 });

@@ -15,9 +15,11 @@ import { SeverityMark, StatusMark } from '../../../components/status-mark';
 import { StatusButtons } from './status-buttons';
 import { LabelledOptions } from '../../../components/labelled-options';
 
+const sameRef = (a: string, b: string) => a.trim().toUpperCase() === b.trim().toUpperCase();
+
 /**
  * What a person who may change the finding edits: each field saves on its own. A reference another finding
- * already names is pointed out with a link to that one, as it is typed and once saved; it is never refused.
+ * already names is pointed out with a link to that one as it is typed, and named quietly once saved; it is never refused.
  */
 export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (patch: FindingPatch) => void }) {
   const [typedRef, setTypedRef] = useState<string | null>(null);
@@ -52,6 +54,7 @@ export function FindingFields({ finding, onSave }: { finding: Finding; onSave: (
           restorationId={finding.restorationId}
           componentRef={typedRef ?? finding.componentRef}
           exceptId={finding.id}
+          settled={typedRef === null || sameRef(typedRef, finding.componentRef)}
         />
       )}
       <Field label="Severity">
