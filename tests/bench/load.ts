@@ -8,18 +8,24 @@
  * upload's image buffers are not counted) and after a full garbage collection, so garbage not yet collected is not
  * counted as growth. Growth is judged against the warm-up figure; "at rest" shows what V8 and malloc give back.
  * Run: npx tsx tests/bench/load.ts [seconds] [warm-up seconds]
- * The server runs with MALLOC_ARENA_MAX=2 as `npm start` does; `MALLOC_ARENA_MAX= npx tsx …` runs it with glibc's default.
+ * The server runs with glibc's malloc set as `npm start` sets it (malloc-env.ts); `MALLOC_MMAP_THRESHOLD_= npx tsx …` leaves one setting at glibc's default.
  */
 import { fork } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import autocannon from 'autocannon';
 import { twoToneJpeg } from '../factories/images';
+import { mallocEnv } from './malloc-env';
 import { startTestCluster } from '../support/test-cluster';
 
 type Person = { cookie: string; restorationId: number; photoId: number; findingId: number };
 type Ctx = { person?: Person; route?: string };
 const seconds = Number(process.argv[2] ?? 60);
-/** The same mix run first, so that what any server holds once it has served (pools, compiled code, libvips' threads) is not counted as growth. */
-const warmUpSeconds = Number(process.argv[3] ?? 15);
+/**
+ * The same mix run first, so that what any server holds once it has served (pools, compiled code, libvips' threads,
+ * V8's and malloc's working sizes) is not counted as growth. 15 s proved too short: the resident set was still rising
+ * to its working size; after 60 s it had reached it (a second 60 s added nothing).
+ */
+const warmUpSeconds = Number(process.argv[3] ?? 60);
 const boundary = 'gridleak-load-boundary';
 const jpeg = await twoToneJpeg(1600, 1200);
 const uploadBody = Buffer.concat([
@@ -34,16 +40,12 @@ const uploadBody = Buffer.concat([
 ]);
 
 const p95 = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length * 0.95)] ?? NaN;
-/** glibc's malloc arenas for the server, as `npm start` sets them (2); an empty value leaves glibc's default (8 per core). */
-const arenas = process.env.MALLOC_ARENA_MAX ?? '2';
-const { MALLOC_ARENA_MAX: _unset, ...inherited } = process.env;
-void _unset;
+const malloc = mallocEnv();
 const cluster = await startTestCluster();
 const child = fork('tests/bench/load-server.ts', [], {
   execArgv: ['--expose-gc', '--import', 'tsx'],
   env: {
-    ...inherited,
-    ...(arenas ? { MALLOC_ARENA_MAX: arenas } : {}),
+    ...malloc.env,
     GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl,
     AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
   },
@@ -151,7 +153,13 @@ try {
   const afterWarmUp = await memory();
   byRoute = new Map();
   failures = new Map();
-  const result = await run(seconds);
+  // The resident set under load, read from /proc every tenth of the run: a plateau is a working set, a steady rise a leak.
+  const underLoad: number[] = [];
+  const sampler = setInterval(
+    () => underLoad.push(Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${child.pid}/status`, 'utf8'))![1]) * 1024),
+    (seconds * 1000) / 10,
+  );
+  const result = await run(seconds).finally(() => clearInterval(sampler));
   const afterRun = await memory();
   // Ten quiet seconds later: memory V8 and glibc give back once the load stops, versus memory still held.
   await new Promise((r) => setTimeout(r, 10_000));
@@ -170,10 +178,13 @@ try {
   for (const [route, xs] of [...byRoute].sort((a, b) => p95(b[1]) - p95(a[1])))
     console.log(`    ${p95(xs).toFixed(0).padStart(6)} ms  ${route} (${xs.length})`);
   console.log(
-    `  server memory (MALLOC_ARENA_MAX=${arenas || "glibc's default"}), each once no request was in flight and after a full garbage collection:`,
+    `  server memory (${malloc.words}), each once no request was in flight and after a full garbage collection:`,
   );
   console.log(line('at start', atStart));
   console.log(line(`after a ${warmUpSeconds} s warm-up of the same mix`, afterWarmUp));
+  console.log(
+    `    under load, every ${seconds / 10} s (requests in flight, garbage not collected): ${underLoad.map(mb).join(', ')}`,
+  );
   console.log(line(`after the ${seconds} s run`, afterRun));
   console.log(line('after 10 s without requests', afterRest));
   const growth = (m: Memory) =>

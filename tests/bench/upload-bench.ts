@@ -5,6 +5,7 @@
 import { spawn } from 'node:child_process';
 import { TEST_ORIGIN } from '../support/test-app';
 import { startTestCluster } from '../support/test-cluster';
+import { mallocEnv } from './malloc-env';
 
 export const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 
@@ -19,11 +20,9 @@ export async function startBenchServer() {
   const cluster = await startTestCluster();
   const child = spawn('node_modules/.bin/tsx', ['tests/bench/photo-bench-server.ts'], {
     env: {
-      ...process.env,
+      ...mallocEnv().env,
       GRIDLEAK_TEST_TEMPLATE_URL: cluster.templateUrl,
       AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
-      // As `npm start` runs the server (package.json): glibc's default arenas hold on to freed image buffers.
-      MALLOC_ARENA_MAX: process.env.MALLOC_ARENA_MAX ?? '2',
     },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
