@@ -353,6 +353,11 @@ const matrix: Row[] = [
     }),
     'fresh people',
   ],
+  // The fresh technician is one of the workshop's administrators; an address with no account, and a person who is
+  // not an administrator, are 404s (tests/api/workshop-admins.test.ts covers technicians who are not).
+  ['GET', '/api/workshop/admins', [200, 403, 403, 403, 401], undefined, 'fresh people'],
+  ['POST', '/api/workshop/admins', [404, 403, 403, 403, 401], () => ({ email: unique() }), 'fresh people'],
+  ['DELETE', '/api/workshop/admins/:userId', [404, 403, 403, 403, 401], undefined, 'fresh people'],
 ];
 
 let jpeg: Buffer;
@@ -534,7 +539,7 @@ async function fixture(): Promise<Fixture> {
 /** New people who each hold one role on one new set, and one who holds none. */
 async function freshPeople() {
   const [technician, mentor, owner, nonMember] = await Promise.all([
-    createUser(t.db),
+    createUser(t.db, { workshopAdmin: true }),
     createUser(t.db),
     createUser(t.db),
     createUser(t.db),

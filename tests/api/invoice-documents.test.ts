@@ -29,7 +29,7 @@ const gbp: WorkshopSettings = {
 };
 beforeAll(async () => {
   t = await startTestApp();
-  const [a, b, c] = await Promise.all([createUser(t.db), createUser(t.db), createUser(t.db)]);
+  const [a, b, c] = await Promise.all([createUser(t.db, { workshopAdmin: true }), createUser(t.db), createUser(t.db)]);
   [techId, ownerId, mentorId, ownerEmail] = [a.id, b.id, c.id, b.email];
   [tech, owner, mentor] = await Promise.all([signedIn(t.app, a), signedIn(t.app, b), signedIn(t.app, c)]);
   await createRestoration(t.db, [{ userId: techId, role: 'technician' }]);
@@ -51,8 +51,13 @@ const list = async (agent: Agent, id: number) =>
   (await agent.get(`/api/restorations/${id}/invoices`)).body as Invoice[];
 
 describe('workshop settings', () => {
-  it('when people with each role ask, then only a technician of the workshop reads and changes the settings', async () => {
-    const people = await Promise.all([createUser(t.db), createUser(t.db), createUser(t.db), createUser(t.db)]);
+  it('when people with each role ask, then only a technician of the workshop reads and an administrator changes the settings', async () => {
+    const people = await Promise.all([
+      createUser(t.db, { workshopAdmin: true }),
+      createUser(t.db),
+      createUser(t.db),
+      createUser(t.db),
+    ]);
     await createRestoration(t.db, [
       { userId: people[0]!.id, role: 'technician' },
       { userId: people[1]!.id, role: 'mentor' },

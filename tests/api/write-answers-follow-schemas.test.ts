@@ -27,6 +27,7 @@ import { twoToneJpeg } from '../factories/images';
 import { anonymous, createUser, signedIn } from '../factories/users';
 import { tokenFrom, waitForMail } from '../support/mail';
 import { startTestApp } from '../support/test-app';
+import { workshopAdminsSchema } from '../../shared/schemas/workshop';
 
 // The client names the schema of every answer, writes included, and checks it in development and tests
 // (src/lib/api-client.ts); this holds the server's answers to writes and to the money and sheet lists to the same schemas.
@@ -47,7 +48,7 @@ const settings = {
 beforeAll(async () => {
   t = await startTestApp();
   await writeWorkshopSettings(t.db, settings);
-  tech = await signedIn(t.app, await createUser(t.db));
+  tech = await signedIn(t.app, await createUser(t.db, { workshopAdmin: true }));
 });
 afterAll(() => t.stop());
 
@@ -170,6 +171,7 @@ describe('answers to writes follow the shared schemas', () => {
     follows(await tech.get(`/api/restorations/${id}/money-settings`), 200, workshopSettingsSchema);
     follows(await tech.put('/api/workshop/settings').send(settings), 200, workshopSettingsSchema);
     follows(await tech.get('/api/workshop/settings'), 200, workshopSettingsSchema);
+    follows(await tech.get('/api/workshop/admins'), 200, workshopAdminsSchema);
     const time = { minutes: 45, stage: 'repair' };
     follows(await tech.post(`/api/restorations/${id}/labour`).send(time), 201, labourLogSchema);
     follows(await tech.post(`/api/restorations/${id}/labour/timer`).send({ stage: 'repair' }), 201, labourLogSchema);

@@ -9,8 +9,11 @@ import { TEST_ORIGIN } from '../support/test-app';
 export const FACTORY_PASSWORD = 'solder-flux-and-patience';
 let passwordHash: Promise<string> | undefined;
 
-/** A confirmed account with a known password, straight into the database. */
-export async function createUser(db: Database, overrides: { name?: string; email?: string } = {}) {
+/** A confirmed account with a known password, straight into the database; `workshopAdmin` makes it one (decision 46). */
+export async function createUser(
+  db: Database,
+  overrides: { name?: string; email?: string; workshopAdmin?: boolean } = {},
+) {
   const tag = randomBytes(4).toString('hex');
   passwordHash ??= hashPassword(FACTORY_PASSWORD);
   const [row] = await db
@@ -20,6 +23,7 @@ export async function createUser(db: Database, overrides: { name?: string; email
       email: overrides.email ?? `tester-${tag}@example.test`,
       passwordHash: await passwordHash,
       emailConfirmedAt: new Date(),
+      workshopAdmin: overrides.workshopAdmin ?? false,
     })
     .returning();
   return { id: row!.id, name: row!.name, email: row!.email, password: FACTORY_PASSWORD };

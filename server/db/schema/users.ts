@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { boolean, pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
 import { timestamps } from './columns';
 
 export const users = pgTable(
@@ -13,6 +13,11 @@ export const users = pgTable(
     passwordHash: text(),
     /** Set when the person proved they read this address (a confirmation link or an invitation). */
     emailConfirmedAt: timestamp({ withTimezone: true, mode: 'date' }),
+    /**
+     * One of the people who change the workshop's own settings (prices, tax, invoice prefix). Holding a role on a
+     * restoration does not make one: anyone may sign up and take in a set (DEVELOPERS.md, decision 46).
+     */
+    workshopAdmin: boolean().notNull().default(false),
     ...timestamps,
   },
   (t) => [uniqueIndex('users_email_lower_idx').on(sql`lower(${t.email})`)],

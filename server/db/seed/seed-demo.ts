@@ -31,6 +31,8 @@ export async function seedDemo(db: Database): Promise<void> {
         )})`,
       ),
     );
+  // The demo's technician runs the workshop: she changes its settings and names who else may.
+  await db.update(users).set({ workshopAdmin: true }).where(eq(users.id, ids.technician!));
   for (const demo of demoRestorations) {
     const { members, ...fields } = demo;
     const [found] = await db

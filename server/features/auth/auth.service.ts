@@ -9,6 +9,7 @@ import { alreadyRegisteredMail, confirmEmailMail, passwordResetMail } from './au
 import { assertStrongPassword } from './password-strength';
 import { hashPassword } from './password';
 import { publicUser, usersRepo } from './users.repo';
+import { workshopAdminsRepo } from '../workshop/workshop.repo';
 
 export { assertStrongPassword };
 
@@ -62,6 +63,7 @@ export function authService({ db, mailer, config }: AppDeps) {
         if (join) {
           // Links sent to earlier, unconfirmed sign-ups with this address die with the invitation's proof.
           await tokens.spendAll(row.id);
+          await workshopAdminsRepo(tx).claimIfNone(row.id);
           const joined = await join(tx, publicUser(row));
           return { user: publicUser(row), joined };
         }
@@ -84,6 +86,8 @@ export function authService({ db, mailer, config }: AppDeps) {
           .returning({ id: users.id });
         if (!row) return undefined; // already confirmed another way: this link no longer speaks for the account
         await tokens.spendAll(spent.userId);
+        // A new workshop's first confirmed account runs it (decision 46).
+        await workshopAdminsRepo(tx).claimIfNone(spent.userId);
         return spent.userId;
       });
       if (!userId) throw new HttpError(410, 'gone', 'This confirmation link has expired or was already used.');
