@@ -3,44 +3,10 @@
 // the type's published data. Each record names its source: a valve data
 // handbook or a maker's data sheet as reproduced on a reference page, or 'from memory'.
 
-/** How far a record can be trusted: 'published' (a maker's data via a reference page), 'from memory', or 'mixed'. */
-export type DataConfidence = 'published' | 'from memory' | 'mixed';
+import { SERIES_HEATER_VALVES } from './series-heater-valves';
+import { MEMORY, type ValveData } from './valve-record';
 
-/** Typical operating point, all SI: volts, amperes, ohms, siemens, watts. Per section for multiple valves. */
-export interface TypicalOperation {
-  anodeVolts?: number;
-  screenVolts?: number;
-  gridVolts?: number;
-  anodeAmps?: number;
-  screenAmps?: number;
-  cathodeOhms?: number;
-  /** Mutual conductance gm, siemens (1 mA/V = 1e-3 S). */
-  transconductanceSiemens?: number;
-  /** Amplification factor µ (dimensionless). */
-  mu?: number;
-  /** Anode resistance ra, ohms. */
-  anodeOhms?: number;
-  loadOhms?: number;
-  outputWatts?: number;
-  maxAnodeWatts?: number;
-  /** Rectifiers: maximum rms voltage per anode, volts. */
-  maxRmsVolts?: number;
-  /** Rectifiers: maximum DC output current, amperes. */
-  maxDcAmps?: number;
-}
-
-export interface ValveData {
-  description: string;
-  heaterVolts: number;
-  heaterAmps: number;
-  typical?: TypicalOperation;
-  equivalents: string[];
-  confidence: DataConfidence;
-  /** Where the figures come from, and where sources disagree. */
-  source: string;
-}
-
-const MEMORY = 'recalled, not checked against published data';
+export type { DataConfidence, TypicalOperation, ValveData } from './valve-record';
 
 export const VALVE_DATA: Readonly<Record<string, ValveData>> = {
   ECC83: {
@@ -216,100 +182,5 @@ export const VALVE_DATA: Readonly<Record<string, ValveData>> = {
     confidence: 'from memory',
     source: MEMORY,
   },
-  UCH42: {
-    description: 'triode-hexode frequency changer (Rimlock)',
-    heaterVolts: 14,
-    heaterAmps: 0.1,
-    equivalents: [],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  UF89: {
-    description: 'variable-µ IF pentode, 100 mA version of the EF89',
-    heaterVolts: 12.6,
-    heaterAmps: 0.1,
-    equivalents: ['12DA6'],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  UAF42: {
-    description: 'diode and variable-µ pentode (Rimlock)',
-    heaterVolts: 12.6,
-    heaterAmps: 0.1,
-    equivalents: [],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  UBC41: {
-    description: 'double diode and triode (Rimlock)',
-    heaterVolts: 14,
-    heaterAmps: 0.1,
-    equivalents: [],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  UL41: {
-    description: 'output pentode (Rimlock); operating point not found',
-    heaterVolts: 45,
-    heaterAmps: 0.1,
-    equivalents: [],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  UY41: {
-    description: 'half-wave rectifier (Rimlock)',
-    heaterVolts: 31,
-    heaterAmps: 0.1,
-    equivalents: [],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  UCH81: {
-    description: 'triode-heptode frequency changer, 100 mA version of the ECH81',
-    heaterVolts: 19,
-    heaterAmps: 0.1,
-    equivalents: ['19AJ8'],
-    confidence: 'mixed',
-    source: 'heater from a valve data site (HCH81 note); equivalent from memory',
-  },
-  UCC85: {
-    description: 'VHF double triode, 100 mA version of the ECC85',
-    heaterVolts: 26,
-    heaterAmps: 0.1,
-    equivalents: ['26AQ8'],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  UABC80: {
-    description: 'triple diode and triode, 100 mA version of the EABC80',
-    heaterVolts: 28,
-    heaterAmps: 0.1,
-    equivalents: ['28AK8'],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  UL84: {
-    description: 'output pentode (differs from the EL84)',
-    heaterVolts: 45,
-    heaterAmps: 0.1,
-    equivalents: ['45B5'],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  UY85: {
-    description: 'half-wave rectifier',
-    heaterVolts: 38,
-    heaterAmps: 0.1,
-    equivalents: ['38A3'],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
-  PL504: {
-    description: 'line-output pentode (television), magnoval',
-    heaterVolts: 27,
-    heaterAmps: 0.3,
-    equivalents: [],
-    confidence: 'from memory',
-    source: MEMORY,
-  },
+  ...SERIES_HEATER_VALVES,
 };
